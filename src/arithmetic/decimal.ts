@@ -1,0 +1,171 @@
+/**
+ * The decimal arithmetic: big.js values rounded to a stated number of significant digits.
+ *
+ * @module arithmetic
+ */
+import BigJs from 'big.js';
+import type { Big, BigConstructor } from 'big.js';
+import { QuadspreadError, show } from '../errors.js';
+import type { Arithmetic, Numeric } from './types.js';
+import { isqrt, ratioToPrecision, readInput } from './exact.js';
+import { decimalElementary } from './elementary.js';
+
+/** A value of a {@link decimal} arithmetic: a big.js `Big`. */
+export type Decimal = Big;
+
+/** The type of a {@link decimal} arithmetic (inexact: `E = false`). */
+export interface DecimalArithmetic extends Arithmetic<Decimal, false> {
+  /** Significant digits every result is rounded to. */
+  readonly digits: number;
+}
+
+/** Most significant digits a decimal arithmetic may keep. */
+export const MAX_DECIMAL_DIGITS = 1000;
+
+const HALF_EVEN = 2;
+
+/** Coefficient and exponent of a Big: value = coef · 10^exp. */
+function parts(x: Big): { coef: bigint; exp: number } {
+  const digits = x.c.join('');
+  const coef = BigInt(digits);
+  return { coef: x.s < 0 ? -coef : coef, exp: x.e - (digits.length - 1) };
+}
+
+/** A Big made by another big.js constructor (another decimal instance). */
+function isForeignBig(x: unknown): x is Big {
+  if (x === null || typeof x !== 'object') return false;
+  const b = x as { c?: unknown; e?: unknown; s?: unknown };
+  return Array.isArray(b.c) && typeof b.e === 'number' && (b.s === 1 || b.s === -1);
+}
+
+function pow10(k: number): bigint {
+  return 10n ** BigInt(k);
+}
+
+function digitCount(a: bigint): number {
+  return (a < 0n ? -a : a).toString().length;
+}
+
+/**
+ * A decimal arithmetic that rounds every result to `digits` significant digits, ties
+ * to even (IEEE 754 roundTiesToEven). + − × are computed exactly and rounded once; ÷ and
+ * √ are correctly rounded (computed with bigints, with a sticky digit). Each instance has
+ * its own big.js constructor: no setting is shared between instances, and none is global.
+ *
+ * Transcendental functions (`pi`, `sin`, `cos`, `atan2`) are rounded to `digits`
+ * significant digits (see the elementary module for their accuracy).
+ *
+ * @param digits significant digits, an integer in 1..{@link MAX_DECIMAL_DIGITS}; default 34
+ *   (IEEE 754 decimal128).
+ * @throws {QuadspreadError} `INVALID_ARGUMENT` when `digits` is not such an integer.
+ * @example
+ * ```ts
+ * import { decimal } from 'quadspread';
+ * const D = decimal(30);
+ * D.toString(D.div(D.one, D.from(3)));
+ * //=> '0.333333333333333333333333333333'
+ * ```
+ */
+export function decimal(digits = 34): DecimalArithmetic {
+  if (!Number.isInteger(digits) || digits < 1 || digits > MAX_DECIMAL_DIGITS) {
+    throw new QuadspreadError('INVALID_ARGUMENT', 'decimal(digits)', `digits ${show(digits)} is not an integer in 1..${MAX_DECIMAL_DIGITS}`);
+  }
+  const D: BigConstructor = BigJs();
+  D.DP = 0;
+  D.RM = HALF_EVEN;
+  D.NE = -7;
+  D.PE = 21;
+  D.strict = false;
+  const name = `decimal(${digits})`;
+
+  const round = (x: Big): Big => (x.c.length > digits ? x.prec(digits, HALF_EVEN) : x);
+  const make = (coef: bigint, exp: number): Big => round(new D(`${coef}e${exp}`));
+  /** Rounds coef · 10^exp, whose coef has at least digits + 2 digits, with a sticky flag. */
+  const withSticky = (coef: bigint, exp: number, inexact: boolean): Big => {
+    if (!inexact) return make(coef, exp);
+    const c = coef * 10n + (coef < 0n ? -1n : 1n);
+    return make(c, exp - 1);
+  };
+  const isOwn = (x: unknown): x is Big => x instanceof D;
+  const elementary = decimalElementary(digits);
+  const fromText = (s: string): Big => round(new D(s));
+
+  const A: DecimalArithmetic = {
+    name,
+    exact: false,
+    digits,
+    zero: new D(0),
+    one: new D(1),
+    from(x: Numeric<Big>): Big {
+      if (isOwn(x)) return round(x);
+      if (isForeignBig(x)) {
+        // A Big from another decimal instance: read it exactly, then round to these digits.
+        const p = parts(x as Big);
+        return make(p.coef, p.exp);
+      }
+      const r = readInput(x, `${name}.from(x)`);
+      if (r.d === 1n) return make(r.n, 0);
+      // Correctly rounded n/d.
+      return divide(r.n, 0, r.d, 0);
+    },
+    is: isOwn,
+    add: (a, b) => round(a.plus(b)),
+    sub: (a, b) => round(a.minus(b)),
+    mul: (a, b) => round(a.times(b)),
+    div(a, b) {
+      if (b.c[0] === 0) throw new QuadspreadError('DIVISION_BY_ZERO', `${name}.div(a, b)`, `b is zero (a = ${a.toString()})`);
+      const pa = parts(a);
+      const pb = parts(b);
+      return divide(pa.coef, pa.exp, pb.coef, pb.exp);
+    },
+    neg: (a) => a.neg(),
+    abs: (a) => a.abs(),
+    cmp: (a, b) => a.cmp(b) as -1 | 0 | 1,
+    eq: (a, b) => a.eq(b),
+    isZero: (a) => a.c[0] === 0,
+    sign: (a) => (a.c[0] === 0 ? 0 : (a.s as -1 | 1)),
+    sqrt(a) {
+      if (a.c[0] === 0) return A.zero;
+      if (a.s < 0) throw new QuadspreadError('NO_REAL_SOLUTION', `${name}.sqrt(a)`, `a = ${a.toString()} is negative`);
+      let { coef, exp } = parts(a);
+      // Make exp even and coef large enough for digits + 2 digits of root.
+      let shift = Math.max(0, 2 * (digits + 2) - digitCount(coef));
+      if ((exp - shift) % 2 !== 0) shift += 1;
+      coef *= pow10(shift);
+      exp -= shift;
+      const r = isqrt(coef);
+      return withSticky(r, exp / 2, r * r !== coef);
+    },
+    toNumber(a) {
+      const v = Number(a.toString());
+      if (!Number.isFinite(v)) throw new QuadspreadError('NOT_FINITE', `${name}.toNumber(a)`, `${a.toString()} is beyond the range of a JS number`);
+      return v;
+    },
+    toString: (a) => a.toString(),
+    toPrecision(a, d) {
+      const p = parts(a);
+      return p.exp >= 0 ? ratioToPrecision(p.coef * pow10(p.exp), 1n, d) : ratioToPrecision(p.coef, pow10(-p.exp), d);
+    },
+    get pi() {
+      return fromText(elementary.pi);
+    },
+    sin: (x) => fromText(elementary.sin(x.toString())),
+    cos: (x) => fromText(elementary.cos(x.toString())),
+    atan2(y, x) {
+      if (y.c[0] === 0 && x.c[0] === 0) throw new QuadspreadError('INVALID_ARGUMENT', `${name}.atan2(y, x)`, 'the angle of the zero vector is undefined');
+      return fromText(elementary.atan2(y.toString(), x.toString()));
+    },
+  };
+
+  /** (an·10^ae) / (bn·10^be), correctly rounded to `digits`. */
+  function divide(an: bigint, ae: number, bn: bigint, be: number): Big {
+    if (an === 0n) return A.zero;
+    // Scale the numerator so that the quotient has at least digits + 2 digits.
+    const k = Math.max(0, digits + 2 - (digitCount(an) - digitCount(bn)) + 1);
+    const num = an * pow10(k);
+    const q = num / bn;
+    return withSticky(q, ae - be - k, num % bn !== 0n);
+  }
+
+  return Object.freeze(A);
+}

@@ -1,0 +1,196 @@
+/**
+ * Exact helpers shared by the arithmetics: reading numeric text into an exact ratio of
+ * bigints, integer square roots, and correctly rounded conversion of a ratio to a JS
+ * number or to decimal text.
+ *
+ * @module arithmetic
+ */
+import { MAX_INPUT_LENGTH, QuadspreadError, show } from '../errors.js';
+
+/** Largest decimal exponent accepted in numeric text (`1e1000` is read, `1e1001` refused). */
+export const MAX_EXPONENT = 1000;
+
+/** An exact ratio n/d of bigints with d > 0 (not necessarily in lowest terms). */
+export interface Ratio {
+  readonly n: bigint;
+  readonly d: bigint;
+}
+
+const DECIMAL = /^([+-]?)(\d+)?(?:\.(\d*))?(?:[eE]([+-]?\d+))?$/;
+
+function pow10(k: number): bigint {
+  return 10n ** BigInt(k);
+}
+
+function readDecimal(text: string, where: string, original: string, allowSign: boolean): Ratio {
+  const m = DECIMAL.exec(text);
+  if (!m || (m[2] === undefined && (m[3] === undefined || m[3] === '')) || (!allowSign && m[1] !== '')) {
+    throw new QuadspreadError('INVALID_NUMBER', where, `${show(original)} is not a number`);
+  }
+  const sign = m[1] === '-' ? -1n : 1n;
+  const whole = m[2] ?? '';
+  const frac = m[3] ?? '';
+  const exp = m[4] === undefined ? 0 : Number(m[4]);
+  if (!Number.isSafeInteger(exp) || Math.abs(exp) > MAX_EXPONENT) {
+    throw new QuadspreadError('INPUT_TOO_LONG', where, `${show(original)} has an exponent beyond ±${MAX_EXPONENT}`);
+  }
+  const digits = BigInt((whole + frac) || '0');
+  const scale = exp - frac.length;
+  return scale >= 0 ? { n: sign * digits * pow10(scale), d: 1n } : { n: sign * digits, d: pow10(-scale) };
+}
+
+/**
+ * Reads numeric text exactly: an integer, a decimal, an exponent form (`1.5e-3`) or a
+ * ratio `a/b` of two such (the denominator unsigned). Surrounding white space is ignored.
+ *
+ * @param text the text to read
+ * @param where the function and argument to name in an error, e.g. `rational.from(x)`
+ * @returns the exact value as n/d with d > 0
+ * @throws {QuadspreadError} `INPUT_TOO_LONG` when longer than {@link MAX_INPUT_LENGTH}
+ * characters or the exponent exceeds {@link MAX_EXPONENT}; `INVALID_NUMBER` when it is not
+ * a number; `DIVISION_BY_ZERO` for `a/0`.
+ * @example
+ * ```ts
+ * readRatio('1.5e-3', 'from(x)');
+ * //=> { n: 15n, d: 10000n }
+ * ```
+ */
+export function readRatio(text: string, where: string): Ratio {
+  if (text.length > MAX_INPUT_LENGTH) {
+    throw new QuadspreadError('INPUT_TOO_LONG', where, `text of ${text.length} characters is longer than the limit of ${MAX_INPUT_LENGTH}`);
+  }
+  const t = text.trim();
+  const slash = t.indexOf('/');
+  if (slash < 0) return readDecimal(t, where, text, true);
+  const num = readDecimal(t.slice(0, slash).trim(), where, text, true);
+  const den = readDecimal(t.slice(slash + 1).trim(), where, text, false);
+  if (den.n === 0n) throw new QuadspreadError('DIVISION_BY_ZERO', where, `${show(text)} divides by zero`);
+  return { n: num.n * den.d, d: num.d * den.n };
+}
+
+/**
+ * Reads any accepted non-arithmetic input (number, bigint, text) exactly.
+ * A JS number is read through its shortest round-trip decimal (`String(x)`).
+ * @throws {QuadspreadError} `INVALID_NUMBER` for NaN, ±Infinity, null, objects and bad text.
+ * @internal
+ */
+export function readInput(x: unknown, where: string): Ratio {
+  if (typeof x === 'bigint') return { n: x, d: 1n };
+  if (typeof x === 'number') {
+    if (!Number.isFinite(x)) throw new QuadspreadError('INVALID_NUMBER', where, `${show(x)} is not a finite number`);
+    if (Number.isSafeInteger(x)) return { n: BigInt(x), d: 1n };
+    return readRatio(String(x), where);
+  }
+  if (typeof x === 'string') return readRatio(x, where);
+  throw new QuadspreadError('INVALID_NUMBER', where, `${show(x)} is not a number, numeric text or bigint`);
+}
+
+/** Greatest common divisor of |a| and |b|. @internal */
+export function gcd(a: bigint, b: bigint): bigint {
+  if (a < 0n) a = -a;
+  if (b < 0n) b = -b;
+  while (b !== 0n) {
+    const t = a % b;
+    a = b;
+    b = t;
+  }
+  return a;
+}
+
+/** Number of bits of a positive bigint. @internal */
+export function bitLength(a: bigint): number {
+  // toString(16) is linear; fine for the sizes met here.
+  const h = a.toString(16);
+  return (h.length - 1) * 4 + (32 - Math.clz32(parseInt(h[0]!, 16)));
+}
+
+/**
+ * ⌊√a⌋ for a ≥ 0, by Newton's iteration from an upper bound.
+ * @internal
+ */
+export function isqrt(a: bigint): bigint {
+  if (a < 0n) throw new RangeError('isqrt of a negative number');
+  if (a < 2n) return a;
+  if (a < 4503599627370496n) return BigInt(Math.floor(Math.sqrt(Number(a))));
+  let x = 1n << BigInt(Math.ceil(bitLength(a) / 2));
+  for (;;) {
+    const y = (x + a / x) >> 1n;
+    if (y >= x) return x;
+    x = y;
+  }
+}
+
+/**
+ * The JS number nearest to n/d (ties to even), computed exactly with bigints.
+ * @internal
+ */
+export function ratioToNumber(n: bigint, d: bigint): number {
+  if (n === 0n) return 0;
+  const neg = n < 0n !== d < 0n;
+  if (n < 0n) n = -n;
+  if (d < 0n) d = -d;
+  // Scale so that the integer quotient has 55 or 56 bits; keep a sticky bit.
+  const shift = 55 - (bitLength(n) - bitLength(d));
+  const num = shift >= 0 ? n << BigInt(shift) : n;
+  const den = shift >= 0 ? d : d << BigInt(-shift);
+  let q = num / den;
+  const sticky = num % den !== 0n;
+  let e = -shift; // value = q · 2^e
+  // Reduce q to 53 bits with round-half-even, honouring the sticky bit.
+  let extra = bitLength(q) - 53;
+  // Subnormal range: the least exponent of a double is −1074.
+  if (e + extra < -1074) extra = -1074 - e;
+  if (extra > 0) {
+    const b = BigInt(extra);
+    const rem = q & ((1n << b) - 1n);
+    const half = 1n << (b - 1n);
+    q >>= b;
+    e += extra;
+    if (rem > half || (rem === half && (sticky || (q & 1n) === 1n))) q += 1n;
+  }
+  // q < 2^54 and e ≥ −1074, so this product is exact (or overflows to ±Infinity).
+  const v = e > 1000 ? Number(q) * 2 ** 1000 * 2 ** (e - 1000) : Number(q) * 2 ** e;
+  return neg ? -v : v;
+}
+
+/**
+ * n/d (d > 0) as decimal text rounded to `digits` significant digits, half away from
+ * zero. Plain notation when the decimal exponent is within [−7, 21), else `d.ddde±x`.
+ * @internal
+ */
+export function ratioToPrecision(n: bigint, d: bigint, digits: number): string {
+  if (!Number.isInteger(digits) || digits < 1 || digits > 1000) {
+    throw new QuadspreadError('INVALID_ARGUMENT', 'toPrecision(a, digits)', `digits ${show(digits)} is not an integer in 1..1000`);
+  }
+  if (n === 0n) return digits > 1 ? `0.${'0'.repeat(digits - 1)}` : '0';
+  const neg = n < 0n;
+  if (neg) n = -n;
+  // Estimate the decimal exponent of n/d, then fix it.
+  let e = n.toString().length - d.toString().length; // value in [10^(e-1), 10^(e+1))
+  const ge = (k: number) => (k >= 0 ? n >= d * pow10(k) : n * pow10(-k) >= d); // n/d >= 10^k
+  if (!ge(e)) e -= 1;
+  // now 10^e <= n/d < 10^(e+1)
+  const k = digits - 1 - e; // scale so the quotient has `digits` digits
+  const num = k >= 0 ? n * pow10(k) : n;
+  const den = k >= 0 ? d : d * pow10(-k);
+  let q = num / den;
+  const r = num % den;
+  if (2n * r >= den) q += 1n;
+  let s = q.toString();
+  if (s.length > digits) {
+    // rounding carried into a new digit (9.99 → 10.0)
+    s = s.slice(0, digits);
+    e += 1;
+  }
+  let out: string;
+  if (e >= 21 || e < -7) {
+    out = s.length > 1 ? `${s[0]}.${s.slice(1)}e${e >= 0 ? '+' : ''}${e}` : `${s}e${e >= 0 ? '+' : ''}${e}`;
+  } else if (e >= digits - 1) {
+    out = s + '0'.repeat(e - digits + 1);
+  } else if (e >= 0) {
+    out = `${s.slice(0, e + 1)}.${s.slice(e + 1)}`;
+  } else {
+    out = `0.${'0'.repeat(-e - 1)}${s}`;
+  }
+  return neg ? `-${out}` : out;
+}

@@ -1,0 +1,94 @@
+/**
+ * The float arithmetic: JS numbers (IEEE 754 binary64).
+ *
+ * @module arithmetic
+ */
+import { QuadspreadError, show } from '../errors.js';
+import type { Arithmetic, Numeric } from './types.js';
+import { ratioToNumber, ratioToPrecision, readInput, readRatio } from './exact.js';
+
+/** The type of the {@link float} arithmetic (inexact: `E = false`). */
+export type FloatArithmetic = Arithmetic<number, false>;
+
+function finite(v: number, where: string): number {
+  if (!Number.isFinite(v)) throw new QuadspreadError('NOT_FINITE', where, `the result ${show(v)} is not finite`);
+  return v;
+}
+
+/**
+ * The float arithmetic: fast, rounding every operation to the nearest JS number.
+ * NaN and ±Infinity are refused where values enter (`from`) and where they leave
+ * (`toNumber`, `toString`, `toPrecision`); `div` refuses a zero divisor and `sqrt` a
+ * negative argument, so neither can make one. Text is read correctly rounded (`'1/3'`
+ * gives the double nearest to 1/3).
+ *
+ * @example
+ * ```ts
+ * import { float } from 'quadspread';
+ * float.add(float.from('0.1'), float.from(0.2));
+ * //=> 0.30000000000000004
+ * ```
+ */
+export const float: FloatArithmetic = {
+  name: 'float',
+  exact: false,
+  zero: 0,
+  one: 1,
+  from(x: Numeric<number>): number {
+    if (typeof x === 'number') {
+      if (x - x !== 0) throw new QuadspreadError('INVALID_NUMBER', 'float.from(x)', `${show(x)} is not a finite number`);
+      return x;
+    }
+    if (typeof x === 'string') {
+      const r = readRatio(x, 'float.from(x)');
+      return finite(x.includes('/') ? ratioToNumber(r.n, r.d) : Number(x.trim()), 'float.from(x)');
+    }
+    const r = readInput(x, 'float.from(x)');
+    return finite(ratioToNumber(r.n, r.d), 'float.from(x)');
+  },
+  is: (x: unknown): x is number => typeof x === 'number' && x - x === 0,
+  add: (a, b) => a + b,
+  sub: (a, b) => a - b,
+  mul: (a, b) => a * b,
+  div(a, b) {
+    if (b === 0) throw new QuadspreadError('DIVISION_BY_ZERO', 'float.div(a, b)', `b is zero (a = ${show(a)})`);
+    return a / b;
+  },
+  neg: (a) => -a,
+  abs: (a) => Math.abs(a),
+  cmp: (a, b) => (a < b ? -1 : a > b ? 1 : 0),
+  eq: (a, b) => a === b,
+  isZero: (a) => a === 0,
+  sign: (a) => (a < 0 ? -1 : a > 0 ? 1 : 0),
+  sqrt(a) {
+    if (a < 0) throw new QuadspreadError('NO_REAL_SOLUTION', 'float.sqrt(a)', `a = ${show(a)} is negative`);
+    return Math.sqrt(a);
+  },
+  toNumber: (a) => finite(a, 'float.toNumber(a)'),
+  toString: (a) => String(finite(a, 'float.toString(a)') + 0),
+  toPrecision(a, digits) {
+    finite(a, 'float.toPrecision(a, digits)');
+    // Exact decimal expansion of the double, then rounded half away from zero.
+    const r = readRatio(exactText(a), 'float.toPrecision(a, digits)');
+    return ratioToPrecision(r.n, r.d, digits);
+  },
+  pi: Math.PI,
+  sin: (x) => Math.sin(x),
+  cos: (x) => Math.cos(x),
+  atan2(y, x) {
+    if (y === 0 && x === 0) throw new QuadspreadError('INVALID_ARGUMENT', 'float.atan2(y, x)', 'the angle of the zero vector is undefined');
+    return Math.atan2(y, x);
+  },
+};
+
+/** The exact value of a finite double as text (a/2^k). */
+function exactText(a: number): string {
+  if (Number.isInteger(a)) return BigInt(a).toString();
+  let k = 0;
+  let m = a;
+  while (!Number.isInteger(m)) {
+    m *= 2;
+    k++;
+  }
+  return `${BigInt(m)}/${1n << BigInt(k)}`;
+}

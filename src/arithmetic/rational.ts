@@ -1,0 +1,115 @@
+/**
+ * The exact arithmetic: values are fraction.js fractions (bigint numerator and
+ * denominator, always in lowest terms).
+ *
+ * @module arithmetic
+ */
+import Fraction from 'fraction.js';
+import { QuadspreadError, show } from '../errors.js';
+import type { Arithmetic, Numeric } from './types.js';
+import { isqrt, ratioToNumber, ratioToPrecision, readInput } from './exact.js';
+import { decimalElementary } from './elementary.js';
+
+/** A value of the {@link rational} arithmetic: a fraction.js `Fraction`. */
+export type Rational = Fraction;
+
+/** The type of the {@link rational} arithmetic: exact (`E = true`). */
+export type RationalArithmetic = Arithmetic<Rational, true>;
+
+/**
+ * Significant digits of the decimal computation behind `rational`'s transcendental
+ * functions (`pi`, `sin`, `cos`, `atan2`): results are rationals within 1e-40 relative
+ * (and 1e-40 absolute near zero) of the true value.
+ */
+export const RATIONAL_TRANSCENDENTAL_DIGITS = 42;
+
+const ZERO = new Fraction(0);
+const ONE = new Fraction(1);
+
+function frac(n: bigint, d: bigint): Rational {
+  return new Fraction(n, d);
+}
+
+function signed(a: Rational): bigint {
+  return a.s * a.n;
+}
+
+const elementary = decimalElementary(RATIONAL_TRANSCENDENTAL_DIGITS);
+
+function fromElementary(text: string): Rational {
+  const r = readInput(text, 'rational (transcendental)');
+  return frac(r.n, r.d);
+}
+
+function toElementary(a: Rational): string {
+  return ratioToPrecision(signed(a), a.d, RATIONAL_TRANSCENDENTAL_DIGITS + 8);
+}
+
+/**
+ * The exact arithmetic. + − × ÷ never round; `sqrt` is exact or `undefined`; a JS
+ * number is read through its shortest round-trip decimal, so `0.1` is exactly 1/10.
+ * Transcendental functions (`pi`, `sin`, `cos`, `atan2`) cannot be exact: they return
+ * rationals within 1e-40 relative of the true value ({@link RATIONAL_TRANSCENDENTAL_DIGITS}).
+ *
+ * @example
+ * ```ts
+ * import { rational } from 'quadspread';
+ * rational.toString(rational.add(rational.from('0.1'), rational.from(0.2)));
+ * //=> '3/10'
+ * ```
+ */
+export const rational: RationalArithmetic = {
+  name: 'rational',
+  exact: true,
+  zero: ZERO,
+  one: ONE,
+  from(x: Numeric<Rational>): Rational {
+    if (x instanceof Fraction) return x;
+    const r = readInput(x, 'rational.from(x)');
+    return frac(r.n, r.d);
+  },
+  is(x: unknown): x is Rational {
+    return x instanceof Fraction;
+  },
+  add: (a, b) => a.add(b),
+  sub: (a, b) => a.sub(b),
+  mul: (a, b) => a.mul(b),
+  div(a, b) {
+    if (b.n === 0n) throw new QuadspreadError('DIVISION_BY_ZERO', 'rational.div(a, b)', `b is zero (a = ${a.toFraction()})`);
+    return a.div(b);
+  },
+  neg: (a) => a.neg(),
+  abs: (a) => a.abs(),
+  cmp(a, b) {
+    const c = a.compare(b);
+    return c < 0 ? -1 : c > 0 ? 1 : 0;
+  },
+  eq: (a, b) => a.s === b.s && a.n === b.n && a.d === b.d,
+  isZero: (a) => a.n === 0n,
+  sign: (a) => (a.n === 0n ? 0 : a.s < 0n ? -1 : 1),
+  sqrt(a) {
+    if (a.n === 0n) return ZERO;
+    if (a.s < 0n) throw new QuadspreadError('NO_REAL_SOLUTION', 'rational.sqrt(a)', `a = ${a.toFraction()} is negative`);
+    const rn = isqrt(a.n);
+    if (rn * rn !== a.n) return undefined;
+    const rd = isqrt(a.d);
+    if (rd * rd !== a.d) return undefined;
+    return frac(rn, rd);
+  },
+  toNumber(a) {
+    const v = ratioToNumber(signed(a), a.d);
+    if (!Number.isFinite(v)) throw new QuadspreadError('NOT_FINITE', 'rational.toNumber(a)', `${show(a.toFraction())} is beyond the range of a JS number`);
+    return v;
+  },
+  toString: (a) => a.toFraction(),
+  toPrecision: (a, digits) => ratioToPrecision(signed(a), a.d, digits),
+  get pi() {
+    return fromElementary(elementary.pi);
+  },
+  sin: (x) => fromElementary(elementary.sin(toElementary(x))),
+  cos: (x) => fromElementary(elementary.cos(toElementary(x))),
+  atan2(y, x) {
+    if (y.n === 0n && x.n === 0n) throw new QuadspreadError('INVALID_ARGUMENT', 'rational.atan2(y, x)', 'the angle of the zero vector is undefined');
+    return fromElementary(elementary.atan2(toElementary(y), toElementary(x)));
+  },
+};

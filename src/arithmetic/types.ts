@@ -1,0 +1,101 @@
+/**
+ * The arithmetic contract: every solver is written once against {@link Arithmetic}
+ * and runs exactly (rational), correctly rounded (decimal), fast (float) or with
+ * uncertainty (uncertain) depending on the object passed first.
+ *
+ * @module arithmetic
+ */
+
+/**
+ * What a function accepts where it wants a number of arithmetic `T`: a value of that
+ * arithmetic, or a JS number, numeric text or bigint that {@link Arithmetic.from} reads.
+ */
+export type Numeric<T> = T | number | string | bigint;
+
+/**
+ * A plain object of operations over an opaque value type `T`.
+ *
+ * `E` records in the type whether the arithmetic is exact (`true` for `rational`):
+ * functions whose results may need a square root return quadratic surds when `E` is
+ * `true` and plain values otherwise.
+ *
+ * Implementations must never return NaN or ±Infinity, and must throw a
+ * {@link QuadspreadError} for bad input. They hold no mutable state that one call can
+ * change for another.
+ */
+export interface Arithmetic<T, E extends boolean = boolean> {
+  /** A short name: `'rational'`, `'decimal(30)'`, `'float'`, `'uncertain(float)'`. */
+  readonly name: string;
+  /** `true` when + − × ÷ never round. */
+  readonly exact: E;
+  /** 0 in this arithmetic. */
+  readonly zero: T;
+  /** 1 in this arithmetic. */
+  readonly one: T;
+  /**
+   * Reads a value: a value of this arithmetic (returned as is), a finite JS number
+   * (read through its shortest round-trip decimal, so `0.1` is 1/10), a bigint, or text:
+   * an integer, a decimal, an exponent form (`1.5e-3`) or a ratio `a/b`.
+   * @throws {QuadspreadError} `INVALID_NUMBER` for anything else; `INPUT_TOO_LONG` for text
+   * over {@link MAX_INPUT_LENGTH} characters or with an exponent over {@link MAX_EXPONENT}.
+   */
+  from(x: Numeric<T>): T;
+  /** Whether `x` is a value of this arithmetic. */
+  is(x: unknown): x is T;
+  /** a + b */
+  add(a: T, b: T): T;
+  /** a − b */
+  sub(a: T, b: T): T;
+  /** a × b */
+  mul(a: T, b: T): T;
+  /**
+   * a ÷ b
+   * @throws {QuadspreadError} `DIVISION_BY_ZERO` when b is zero.
+   */
+  div(a: T, b: T): T;
+  /** −a */
+  neg(a: T): T;
+  /** |a| */
+  abs(a: T): T;
+  /** −1, 0 or 1 as a is less than, equal to or greater than b. */
+  cmp(a: T, b: T): -1 | 0 | 1;
+  /** a = b */
+  eq(a: T, b: T): boolean;
+  /** a = 0 */
+  isZero(a: T): boolean;
+  /** −1, 0 or 1: the sign of a. */
+  sign(a: T): -1 | 0 | 1;
+  /**
+   * √a: exact, or `undefined` where the arithmetic cannot represent the root (in
+   * `rational`, when a is not the square of a rational); correctly rounded in `decimal`;
+   * IEEE in `float`.
+   * @throws {QuadspreadError} `NO_REAL_SOLUTION` when a < 0.
+   */
+  sqrt(a: T): T | undefined;
+  /** The nearest JS number. */
+  toNumber(a: T): number;
+  /** Text: `3/10` or `25` in rational; plain decimal text in decimal; shortest round trip in float. */
+  toString(a: T): string;
+  /**
+   * Decimal text rounded to `digits` significant digits (half away from zero), without an
+   * exponent where practical. For display; exact arithmetic rounds only here.
+   */
+  toPrecision(a: T, digits: number): string;
+  /**
+   * π in this arithmetic: exact is impossible, so `rational` gives a rational within its
+   * stated tolerance and `decimal` rounds to its digits.
+   */
+  readonly pi: T;
+  /** sin x (x in radians). Transcendental: see {@link Arithmetic.pi} for how each kind rounds. */
+  sin(x: T): T;
+  /** cos x (x in radians). */
+  cos(x: T): T;
+  /**
+   * The angle of the vector (x, y) in radians, in (−π, π].
+   * @throws {QuadspreadError} `INVALID_ARGUMENT` when x = y = 0.
+   */
+  atan2(y: T, x: T): T;
+}
+
+/** The value type of an arithmetic. */
+export type ValueOf<A> = A extends Arithmetic<infer T, boolean> ? T : never;

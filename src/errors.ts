@@ -1,0 +1,129 @@
+/**
+ * The one error class of quadspread, and its stable codes.
+ *
+ * @module errors
+ */
+
+/**
+ * Every stable error code, with what it means. Codes never change meaning once
+ * published; new codes may be added. The table in `docs/errors.md` lists them.
+ */
+export const ERROR_CODES = {
+  // Numbers and arithmetic
+  INVALID_NUMBER: 'A value is not a number this arithmetic can read (bad text, NaN, ±Infinity, null, an object, a value of another arithmetic).',
+  INPUT_TOO_LONG: 'An input string is longer than the documented limit, or its exponent is too large.',
+  NOT_FINITE: 'A float result overflowed to ±Infinity or became NaN.',
+  DIVISION_BY_ZERO: 'A division by zero.',
+  NO_REAL_SOLUTION: 'A square root of a negative number, or readings with no real solution.',
+  INVALID_ARGUMENT: 'An option or argument is outside its allowed set or range.',
+  UNSUPPORTED_OPERATION: 'The arithmetic cannot perform this operation.',
+  // Geometry
+  COINCIDENT_POINTS: 'Two points that must differ coincide (a line or a spread is undefined).',
+  COLLINEAR_POINTS: 'Three points that must form a proper triangle are collinear.',
+  DEGENERATE_TRIANGLE: 'Measures that do not form a proper triangle.',
+  DEGENERATE_LINE: 'A line ⟨a : b : c⟩ with a = b = 0.',
+  PARALLEL_LINES: 'Lines that must meet are parallel.',
+  SPREAD_OUT_OF_RANGE: 'A spread outside [0, 1].',
+  NEGATIVE_QUADRANCE: 'A quadrance below zero.',
+  NEEDS_A_QUADRANCE: 'Spreads alone fix a triangle only up to scale: give a quadrance.',
+  DIFFERENT_RADICANDS: 'Quadratic surds with different radicands cannot be combined exactly.',
+  // Readings
+  INVALID_ANGLE: 'An angle reading that cannot be read or is outside its range.',
+  INVALID_UNIT: 'An unknown unit.',
+  INVALID_SLOPE: 'A slope reading (grade, ratio, 1 in n) that cannot be read.',
+  VERTICAL_SIGHT: 'A vertical spread of 1 (a plumb sight) where a horizontal quadrance is given.',
+  // Elevation
+  TOO_FEW_STATIONS: 'Fewer stations than the solver needs.',
+  REPEATED_CHAINAGE: 'Two stations at the same chainage.',
+  GRADE_STEEPER_THAN_SLOPE: 'A path grade steeper than the slope it lies on.',
+  INCONSISTENT_READINGS: 'Readings that contradict each other beyond what the solver accepts.',
+  // Coordinates
+  TOO_FEW_POINTS: 'Fewer points than the computation needs.',
+  DANGER_CIRCLE: 'A resection station on or near the circle through the control points.',
+  INVALID_BEARING: 'A bearing that cannot be read.',
+  NO_COURSES: 'A traverse with no courses.',
+  // Uncertainty
+  UNKNOWN_INPUT: 'A named uncertain input that is not known.',
+  DUPLICATE_INPUT: 'Two uncertain inputs with the same name.',
+  INVALID_SIGMA: 'A standard uncertainty that is negative or not a number.',
+  INVALID_COVARIANCE: 'A covariance that cannot belong to the inputs (for example |r| > 1).',
+  // Geodesy
+  LATITUDE_OUT_OF_RANGE: 'A latitude beyond ±90°.',
+  HEIGHT_OUT_OF_RANGE: 'A height that cannot belong to a point of the ellipsoid (for example below −a).',
+  UNKNOWN_ELLIPSOID: 'An ellipsoid that is not known.',
+  INVALID_ELLIPSOID: 'Ellipsoid parameters that do not define an oblate ellipsoid.',
+  NOT_CONVERGED: 'An iteration did not converge within its limit.',
+  // Job runner
+  INVALID_JOB: 'A job file that is not valid JSON or breaks the job schema.',
+} as const;
+
+/** A stable error code: one of the keys of {@link ERROR_CODES}. */
+export type ErrorCode = keyof typeof ERROR_CODES;
+
+const BRAND: unique symbol = Symbol.for('quadspread.error') as never;
+
+/**
+ * The one error class of quadspread. Every bad input, impossible configuration and
+ * unsupported operation throws it, with a stable {@link ErrorCode} in `code` and a
+ * message that names the function, the input and its value.
+ *
+ * The message has the form `quadspread CODE: where: what`. `instanceof QuadspreadError`
+ * works across the package's entries (generic and bound builds share one brand).
+ *
+ * @example
+ * ```ts
+ * import { rational, QuadspreadError } from 'quadspread';
+ * try { rational.from('abc'); } catch (e) {
+ *   (e as QuadspreadError).code;
+ *   //=> 'INVALID_NUMBER'
+ * }
+ * ```
+ */
+export class QuadspreadError extends Error {
+  /** The stable code; see {@link ERROR_CODES}. */
+  readonly code: ErrorCode;
+  /** Where it happened: the function (and argument) that refused the input. */
+  readonly where: string;
+
+  /**
+   * @param code a stable code from {@link ERROR_CODES}
+   * @param where the function and argument, e.g. `rational.from(x)`
+   * @param what what is wrong, naming the value, e.g. `"abc" is not a number`
+   */
+  constructor(code: ErrorCode, where: string, what: string) {
+    super(`quadspread ${code}: ${where}: ${what}`);
+    this.name = 'QuadspreadError';
+    this.code = code;
+    this.where = where;
+    Object.defineProperty(this, BRAND, { value: true });
+  }
+
+  /** `instanceof` by brand, so that errors from any entry of the package match. */
+  static override [Symbol.hasInstance](x: unknown): boolean {
+    return typeof x === 'object' && x !== null && (x as Record<symbol, unknown>)[BRAND] === true;
+  }
+}
+
+/** Longest input text any parser accepts, in characters. Longer text is refused at once. */
+export const MAX_INPUT_LENGTH = 1000;
+
+/**
+ * Shows a value briefly for an error message: strings quoted and cut to 60 characters.
+ * @internal
+ */
+export function show(x: unknown): string {
+  if (typeof x === 'string') {
+    const s = x.length > 60 ? `${x.slice(0, 57)}...` : x;
+    return JSON.stringify(s) + (x.length > 60 ? ` (${x.length} characters)` : '');
+  }
+  if (typeof x === 'bigint') return `${x}n`;
+  if (typeof x === 'number') return Object.is(x, -0) ? '-0' : String(x);
+  if (x === null) return 'null';
+  if (x === undefined) return 'undefined';
+  if (Array.isArray(x)) return `an array of ${x.length}`;
+  if (typeof x === 'object') {
+    const text = String(x);
+    return text === '[object Object]' ? 'an object' : text.length > 60 ? `${text.slice(0, 57)}...` : text;
+  }
+  return typeof x;
+}
