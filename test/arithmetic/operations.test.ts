@@ -84,7 +84,7 @@ describe('decimal(digits)', () => {
   });
 
   it('agrees with mathjs BigNumber (an independent decimal library) on √2 and 22/7 to 50 digits', () => {
-    const m = create(all, { number: 'BigNumber', precision: 80 });
+    const m = create(all!, { number: 'BigNumber', precision: 80 });
     const D = decimal(50);
     const sqrt2 = m.bignumber(2).sqrt().toSignificantDigits(50).toString();
     expect(D.toString(D.sqrt(D.from(2)) as Decimal)).toBe(sqrt2);

@@ -118,7 +118,7 @@ describe.each(arithmetics)('%s.from(x)', (_name, A) => {
     } else {
       // Correct rounding: the error is within half a unit in the last place. For decimal(d)
       // that is 5·10^-d relative to the value; for float, 2^-53 relative.
-      const rel = A === float ? new Fraction(1n, 2n ** 53n) : new Fraction(5n, 10n ** BigInt((A as { digits: number }).digits));
+      const rel = A === float ? new Fraction(1n, 2n ** 53n) : new Fraction(5n, 10n ** BigInt((A as unknown as { digits: number }).digits));
       const err = got.sub(want).abs();
       expect(err.compare(want.abs().mul(rel))).toBeLessThanOrEqual(0);
     }
