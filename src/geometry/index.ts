@@ -1,2 +1,7 @@
 // Public exports of src/geometry/ (one line per file as files land).
-export {};
+export { point } from './point.js';
+export type { Point } from './point.js';
+export { quadrance, vectorQuadrance } from './quadrance.js';
+export { spread, cross, spreadOfVectors } from './spread.js';
+export { surd, sqrtOf, asRoot, isSurd, rootToNumber, rootToString, rootToPrecision } from './surd.js';
+export type { Surd, Root } from './surd.js';

@@ -1,0 +1,39 @@
+/**
+ * Points of the plane.
+ *
+ * @module geometry
+ */
+import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+
+/**
+ * A point (or a vector) of the plane in arithmetic `T`: `x` east, `y` north.
+ * Every geometry function reads points of this shape; any object with `x` and `y`
+ * values of the arithmetic will do.
+ */
+export interface Point<T> {
+  /** East coordinate (or the first component of a vector). */
+  readonly x: T;
+  /** North coordinate (or the second component of a vector). */
+  readonly y: T;
+}
+
+/**
+ * Makes a point `{ x, y }` (x = east, y = north), reading each coordinate with `A.from`.
+ * The same shape serves as a vector.
+ *
+ * @param A the arithmetic
+ * @param x east coordinate (any unit; quadrances come out in its square)
+ * @param y north coordinate
+ * @returns the point `{ x, y }` with values of the arithmetic
+ * @throws {QuadspreadError} `INVALID_NUMBER` (from `A.from`) when a coordinate is not a number.
+ * @example
+ * ```ts
+ * import { rational, point } from 'quadspread';
+ * const P = point(rational, '0.1', 3);
+ * [rational.toString(P.x), rational.toString(P.y)];
+ * //=> ['1/10', '3']
+ * ```
+ */
+export function point<T>(A: Arithmetic<T>, x: Numeric<T>, y: Numeric<T>): Point<T> {
+  return { x: A.from(x), y: A.from(y) };
+}

@@ -1,0 +1,47 @@
+/**
+ * Quadrance: the square of the distance between two points.
+ *
+ * @module geometry
+ */
+import type { Arithmetic } from '../arithmetic/types.js';
+import type { Point } from './point.js';
+
+/**
+ * The quadrance Q(P, Q) = (x₂ − x₁)² + (y₂ − y₁)²: the squared distance between two
+ * points, in the square of the coordinates' unit. A polynomial in the coordinates, so it
+ * is exact in `rational` and rounded once per operation in `decimal` and `float`.
+ *
+ * @param A the arithmetic
+ * @param P the first point
+ * @param Q the second point
+ * @returns the quadrance (≥ 0), in square units
+ * @example
+ * ```ts
+ * import { rational, point, quadrance } from 'quadspread';
+ * rational.toString(quadrance(rational, point(rational, 0, 0), point(rational, 3, 4)));
+ * //=> '25'
+ * ```
+ */
+export function quadrance<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): T {
+  // Quadrance of two points: Wildberger, Divine Proportions (2005), ch. 1 (square of the Euclidean distance).
+  const dx = A.sub(Q.x, P.x);
+  const dy = A.sub(Q.y, P.y);
+  return A.add(A.mul(dx, dx), A.mul(dy, dy));
+}
+
+/**
+ * The quadrance of a vector v = (x, y): x² + y² (its squared length).
+ *
+ * @param A the arithmetic
+ * @param v the vector
+ * @returns x² + y², in square units
+ * @example
+ * ```ts
+ * import { float, point, vectorQuadrance } from 'quadspread';
+ * vectorQuadrance(float, point(float, 1, 2));
+ * //=> 5
+ * ```
+ */
+export function vectorQuadrance<T>(A: Arithmetic<T>, v: Point<T>): T {
+  return A.add(A.mul(v.x, v.x), A.mul(v.y, v.y));
+}
