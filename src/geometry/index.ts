@@ -3,5 +3,7 @@ export { point } from './point.js';
 export type { Point } from './point.js';
 export { quadrance, vectorQuadrance } from './quadrance.js';
 export { spread, cross, spreadOfVectors } from './spread.js';
+export { line, lineThrough, isOnLine, isParallel, isPerpendicular, footOfPerpendicular, quadranceToLine, spreadOfLines } from './line.js';
+export type { Line } from './line.js';
 export { surd, sqrtOf, asRoot, isSurd, rootToNumber, rootToString, rootToPrecision } from './surd.js';
 export type { Surd, Root } from './surd.js';

@@ -1,0 +1,206 @@
+/**
+ * Lines of the plane as proportions ⟨a : b : c⟩, the line ax + by + c = 0.
+ *
+ * @module geometry
+ */
+import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+import { QuadspreadError, show } from '../errors.js';
+import type { Point } from './point.js';
+
+/**
+ * The line ⟨a : b : c⟩: the points with a·x + b·y + c = 0 (x east, y north), a and b
+ * not both zero. Proportional triples are the same line; functions here never assume a
+ * particular scaling.
+ */
+export interface Line<T> {
+  /** Coefficient of x. */
+  readonly a: T;
+  /** Coefficient of y. */
+  readonly b: T;
+  /** Constant term. */
+  readonly c: T;
+}
+
+/**
+ * Makes the line ⟨a : b : c⟩, a·x + b·y + c = 0.
+ *
+ * @param A the arithmetic
+ * @param a coefficient of x
+ * @param b coefficient of y
+ * @param c constant term
+ * @returns the line `{ a, b, c }`
+ * @throws {QuadspreadError} `DEGENERATE_LINE` when a = b = 0; `INVALID_NUMBER` for unreadable input.
+ * @example
+ * ```ts
+ * import { rational, line } from 'quadspread';
+ * const l = line(rational, 1, -1, '1/2');
+ * [rational.toString(l.a), rational.toString(l.b), rational.toString(l.c)];
+ * //=> ['1', '-1', '1/2']
+ * ```
+ */
+export function line<T>(A: Arithmetic<T>, a: Numeric<T>, b: Numeric<T>, c: Numeric<T>): Line<T> {
+  const l = { a: A.from(a), b: A.from(b), c: A.from(c) };
+  if (A.isZero(l.a) && A.isZero(l.b)) {
+    throw new QuadspreadError('DEGENERATE_LINE', 'line(A, a, b, c)', `a and b are both zero (c = ${show(A.toString(l.c))}), which is no line`);
+  }
+  return l;
+}
+
+/**
+ * The line through two distinct points P and Q:
+ * ⟨y_P − y_Q : x_Q − x_P : x_P·y_Q − x_Q·y_P⟩.
+ *
+ * @param A the arithmetic
+ * @param P a point
+ * @param Q another point
+ * @returns the line PQ
+ * @throws {QuadspreadError} `COINCIDENT_POINTS` when P = Q.
+ * @example
+ * ```ts
+ * import { rational, point, lineThrough } from 'quadspread';
+ * const l = lineThrough(rational, point(rational, 0, 1), point(rational, 2, 3));
+ * [rational.toString(l.a), rational.toString(l.b), rational.toString(l.c)];
+ * //=> ['-2', '2', '-2']
+ * ```
+ */
+export function lineThrough<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): Line<T> {
+  // Line through two points (the cross product of their projective coordinates): Wildberger, Divine Proportions (2005), ch. 3.
+  const a = A.sub(P.y, Q.y);
+  const b = A.sub(Q.x, P.x);
+  if (A.isZero(a) && A.isZero(b)) {
+    throw new QuadspreadError('COINCIDENT_POINTS', 'lineThrough(A, P, Q)', `P and Q coincide at (${show(A.toString(P.x))}, ${show(A.toString(P.y))})`);
+  }
+  return { a, b, c: A.sub(A.mul(P.x, Q.y), A.mul(Q.x, P.y)) };
+}
+
+/**
+ * Whether the point P lies on the line l (exactly in `rational`; in `float` and
+ * `decimal` only when the rounded a·x + b·y + c is exactly zero).
+ *
+ * @param A the arithmetic
+ * @param P the point
+ * @param l the line
+ * @returns a·x + b·y + c = 0
+ * @example
+ * ```ts
+ * import { rational, point, line, isOnLine } from 'quadspread';
+ * isOnLine(rational, point(rational, 1, 2), line(rational, 2, -1, 0));
+ * //=> true
+ * ```
+ */
+export function isOnLine<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>): boolean {
+  return A.isZero(A.add(A.add(A.mul(l.a, P.x), A.mul(l.b, P.y)), l.c));
+}
+
+/**
+ * Whether two lines are parallel (or equal): a₁b₂ − a₂b₁ = 0.
+ *
+ * @param A the arithmetic
+ * @param l1 the first line
+ * @param l2 the second line
+ * @returns true when they are parallel
+ * @example
+ * ```ts
+ * import { rational, line, isParallel } from 'quadspread';
+ * isParallel(rational, line(rational, 1, 2, 3), line(rational, 2, 4, -1));
+ * //=> true
+ * ```
+ */
+export function isParallel<T>(A: Arithmetic<T>, l1: Line<T>, l2: Line<T>): boolean {
+  // Parallel lines: a1 b2 − a2 b1 = 0, Wildberger, Divine Proportions (2005), ch. 3.
+  return A.isZero(A.sub(A.mul(l1.a, l2.b), A.mul(l2.a, l1.b)));
+}
+
+/**
+ * Whether two lines are perpendicular: a₁a₂ + b₁b₂ = 0.
+ *
+ * @param A the arithmetic
+ * @param l1 the first line
+ * @param l2 the second line
+ * @returns true when they are perpendicular
+ * @example
+ * ```ts
+ * import { rational, line, isPerpendicular } from 'quadspread';
+ * isPerpendicular(rational, line(rational, 1, 2, 3), line(rational, 2, -1, 7));
+ * //=> true
+ * ```
+ */
+export function isPerpendicular<T>(A: Arithmetic<T>, l1: Line<T>, l2: Line<T>): boolean {
+  // Perpendicular lines: a1 a2 + b1 b2 = 0, Wildberger, Divine Proportions (2005), ch. 3.
+  return A.isZero(A.add(A.mul(l1.a, l2.a), A.mul(l1.b, l2.b)));
+}
+
+/**
+ * The foot of the perpendicular from P to the line l:
+ * F = P − ((a·x + b·y + c)/(a² + b²))·(a, b). Exact in `rational`.
+ *
+ * @param A the arithmetic
+ * @param P the point
+ * @param l the line
+ * @returns the point F of l nearest P (F = P when P is on l)
+ * @throws {QuadspreadError} `DEGENERATE_LINE` when a = b = 0.
+ * @example
+ * ```ts
+ * import { rational, point, line, footOfPerpendicular } from 'quadspread';
+ * const F = footOfPerpendicular(rational, point(rational, 0, 0), line(rational, 1, 1, -2));
+ * [rational.toString(F.x), rational.toString(F.y)];
+ * //=> ['1', '1']
+ * ```
+ */
+export function footOfPerpendicular<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>): Point<T> {
+  const n = A.add(A.mul(l.a, l.a), A.mul(l.b, l.b));
+  if (A.isZero(n)) throw new QuadspreadError('DEGENERATE_LINE', 'footOfPerpendicular(A, P, l)', 'l has a = b = 0, which is no line');
+  // Orthogonal projection onto a·x + b·y + c = 0 (common practice; derived from the normal vector (a, b)).
+  const k = A.div(A.add(A.add(A.mul(l.a, P.x), A.mul(l.b, P.y)), l.c), n);
+  return { x: A.sub(P.x, A.mul(k, l.a)), y: A.sub(P.y, A.mul(k, l.b)) };
+}
+
+/**
+ * The quadrance from the point P to the line l (the squared perpendicular distance):
+ * (a·x + b·y + c)² / (a² + b²).
+ *
+ * @param A the arithmetic
+ * @param P the point
+ * @param l the line
+ * @returns the quadrance, in square units
+ * @throws {QuadspreadError} `DEGENERATE_LINE` when a = b = 0.
+ * @example
+ * ```ts
+ * import { rational, point, line, quadranceToLine } from 'quadspread';
+ * rational.toString(quadranceToLine(rational, point(rational, 0, 0), line(rational, 3, 4, -10)));
+ * //=> '4'
+ * ```
+ */
+export function quadranceToLine<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>): T {
+  const n = A.add(A.mul(l.a, l.a), A.mul(l.b, l.b));
+  if (A.isZero(n)) throw new QuadspreadError('DEGENERATE_LINE', 'quadranceToLine(A, P, l)', 'l has a = b = 0, which is no line');
+  // Quadrance from a point to a line: Wildberger, Divine Proportions (2005), ch. 7 (altitude theorem).
+  const v = A.add(A.add(A.mul(l.a, P.x), A.mul(l.b, P.y)), l.c);
+  return A.div(A.mul(v, v), n);
+}
+
+/**
+ * The spread of two lines: (a₁b₂ − a₂b₁)² / ((a₁² + b₁²)(a₂² + b₂²)); 0 for parallel
+ * lines, 1 for perpendicular ones.
+ *
+ * @param A the arithmetic
+ * @param l1 the first line
+ * @param l2 the second line
+ * @returns the spread, in [0, 1]
+ * @throws {QuadspreadError} `DEGENERATE_LINE` when a line has a = b = 0.
+ * @example
+ * ```ts
+ * import { rational, line, spreadOfLines } from 'quadspread';
+ * rational.toString(spreadOfLines(rational, line(rational, 0, 1, 0), line(rational, 3, -4, 1)));
+ * //=> '9/25'
+ * ```
+ */
+export function spreadOfLines<T>(A: Arithmetic<T>, l1: Line<T>, l2: Line<T>): T {
+  const n1 = A.add(A.mul(l1.a, l1.a), A.mul(l1.b, l1.b));
+  const n2 = A.add(A.mul(l2.a, l2.a), A.mul(l2.b, l2.b));
+  if (A.isZero(n1)) throw new QuadspreadError('DEGENERATE_LINE', 'spreadOfLines(A, l1, l2)', 'l1 has a = b = 0, which is no line');
+  if (A.isZero(n2)) throw new QuadspreadError('DEGENERATE_LINE', 'spreadOfLines(A, l1, l2)', 'l2 has a = b = 0, which is no line');
+  // Spread of two lines: Wildberger, Divine Proportions (2005), ch. 5.
+  const c = A.sub(A.mul(l1.a, l2.b), A.mul(l2.a, l1.b));
+  return A.div(A.mul(c, c), A.mul(n1, n2));
+}
