@@ -7,3 +7,4 @@ export { float } from './float.js';
 export type { FloatArithmetic } from './float.js';
 export { MAX_EXPONENT, readRatio } from './exact.js';
 export type { Ratio } from './exact.js';
+export * from './uncertain.js';

@@ -1,2 +1,5 @@
 // Public exports of src/uncertainty/ (one line per file as files land).
-export {};
+export * from './measured.js';
+export * from './budget.js';
+export * from './random.js';
+export * from './monte-carlo.js';

@@ -1,0 +1,174 @@
+/**
+ * The uncertainty budget of a result: its combined standard uncertainty and each
+ * input's share (GUM, JCGM 100:2008 §5.1.2 and §5.2.2).
+ *
+ * @module uncertainty
+ */
+import { QuadspreadError, show } from '../errors.js';
+import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+import type { Uncertain, UncertainArithmetic, UncertainInput } from '../arithmetic/uncertain.js';
+import { approxSqrt } from '../readings/numeric.js';
+
+/** One input's line in a {@link Budget}. */
+export interface Contribution<T> {
+  /** The input's name. */
+  readonly name: string;
+  /** Its measured value xᵢ. */
+  readonly value: T;
+  /** Its standard uncertainty u(xᵢ). */
+  readonly sigma: T;
+  /** The sensitivity coefficient cᵢ = ∂f/∂xᵢ at the measured values (GUM eq. (11a)). */
+  readonly sensitivity: T;
+  /** Its share of the variance, cᵢ²·u²(xᵢ), in the result's units squared. */
+  readonly contribution: T;
+}
+
+/** The share of the variance that a correlation between two inputs adds (GUM eq. (13)). */
+export interface CorrelationTerm<T> {
+  /** The two inputs, as given in `options.covariance`. */
+  readonly names: readonly [string, string];
+  /** Their covariance u(xᵢ, xⱼ). */
+  readonly covariance: T;
+  /** 2·cᵢ·cⱼ·u(xᵢ, xⱼ): may be negative. */
+  readonly contribution: T;
+}
+
+/** The uncertainty budget of one result. */
+export interface Budget<T> {
+  /** The result's value y. */
+  readonly value: T;
+  /**
+   * The combined variance u_c²(y) = Σ contributions + Σ correlation terms, computed in the
+   * base arithmetic: exact in `rational`.
+   */
+  readonly variance: T;
+  /**
+   * The combined standard uncertainty u_c(y) = √variance: rounded by the base in `float`
+   * and `decimal`; in an exact base exact where the root is rational (then
+   * `sigmaExact` is `true`), otherwise a rational within 1e-48 relative.
+   */
+  readonly sigma: T;
+  /** Whether `sigma` is exactly √variance. */
+  readonly sigmaExact: boolean;
+  /**
+   * One line per input the result depends on, largest contribution first (ties by name):
+   * the uncertainty budget. Inputs that cancel out appear with sensitivity 0.
+   */
+  readonly contributions: readonly Contribution<T>[];
+  /** One line per correlated pair of `options.covariance` (empty without it). */
+  readonly correlations: readonly CorrelationTerm<T>[];
+}
+
+/** Options of {@link budget}. */
+export interface BudgetOptions<T> {
+  /**
+   * Covariances of correlated inputs: `[nameA, nameB, u(a, b)]` triples, in the inputs'
+   * units multiplied (GUM §5.2.2). Pairs not listed are uncorrelated. A correlation
+   * coefficient r gives u(a, b) = r·u(a)·u(b) (GUM eq. (14)).
+   */
+  readonly covariance?: readonly (readonly [string, string, Numeric<T>])[];
+}
+
+/**
+ * The uncertainty budget of `result`: the law of propagation of uncertainty (GUM,
+ * JCGM 100:2008 §5.1.2, eq. (10)), u_c²(y) = Σ cᵢ²·u²(xᵢ) with cᵢ = ∂f/∂xᵢ, and with
+ * correlated inputs eq. (13), + 2·Σᵢ<ⱼ cᵢ·cⱼ·u(xᵢ, xⱼ). The sensitivities come from the
+ * gradient that the uncertain arithmetic carried through the computation.
+ *
+ * This is first order: it is the exact variance of the linearised model. Where the model
+ * is strongly non-linear on the scale of the input uncertainties (spreads near 0 or 1,
+ * near-degenerate triangles, a result near a square root's zero) check it with
+ * {@link monteCarlo} (JCGM 101:2008).
+ *
+ * @param U the uncertain arithmetic the result was computed in
+ * @param result the result (a constant gives a zero budget)
+ * @param options `covariance` triples for correlated inputs
+ * @returns `{ value, variance, sigma, sigmaExact, contributions, correlations }`
+ * @throws {QuadspreadError} `DUPLICATE_INPUT` when two different inputs share a name;
+ *   `UNKNOWN_INPUT` when a covariance names an input the result does not depend on;
+ *   `INVALID_COVARIANCE` for a pair of one input with itself, a pair listed twice,
+ *   |u(a, b)| > u(a)·u(b), or covariances that make the variance negative.
+ * @example
+ * ```ts
+ * import { uncertain, rational, measured, budget } from 'quadspread';
+ * const U = uncertain(rational);
+ * const a = measured(U, '12.5', '0.02', 'a');
+ * const b = measured(U, '4', '0.01', 'b');
+ * const B = budget(U, U.mul(a, b)); // area = a·b
+ * [rational.toString(B.variance), B.contributions.map((c) => c.name)];
+ * //=> ['881/40000', ['b', 'a']]
+ * ```
+ */
+export function budget<T>(U: UncertainArithmetic<T>, result: Uncertain<T> | Numeric<T>, options: BudgetOptions<T> = {}): Budget<T> {
+  const B: Arithmetic<T> = U.base;
+  const y = U.is(result) ? result : U.from(result as Numeric<Uncertain<T>>);
+  const where = 'budget(U, result, options)';
+  const byName = new Map<string, { input: UncertainInput<T>; c: T }>();
+  const lines: Contribution<T>[] = [];
+  let variance = B.zero;
+  for (const [input, c] of y.gradient) {
+    const other = byName.get(input.name);
+    if (other !== undefined) {
+      throw new QuadspreadError('DUPLICATE_INPUT', where, `two different inputs are named ${show(input.name)} (values ${B.toString(other.input.value)} and ${B.toString(input.value)})`);
+    }
+    byName.set(input.name, { input, c });
+    const cu = B.mul(c, input.sigma);
+    const contribution = B.mul(cu, cu); // (cᵢ·u(xᵢ))²: GUM eq. (10) term
+    variance = B.add(variance, contribution);
+    lines.push(Object.freeze({ name: input.name, value: input.value, sigma: input.sigma, sensitivity: c, contribution }));
+  }
+  lines.sort((p, q) => B.cmp(q.contribution, p.contribution) || (p.name < q.name ? -1 : p.name > q.name ? 1 : 0));
+
+  const correlations: CorrelationTerm<T>[] = [];
+  const seen = new Set<string>();
+  for (const triple of options.covariance ?? []) {
+    if (!Array.isArray(triple) || triple.length !== 3) {
+      throw new QuadspreadError('INVALID_COVARIANCE', `${where}.covariance`, `${show(triple)} is not a [nameA, nameB, covariance] triple`);
+    }
+    const [na, nb, cov] = triple;
+    const a = byName.get(na);
+    const b = byName.get(nb);
+    if (a === undefined || b === undefined) {
+      const missing = a === undefined ? na : nb;
+      throw new QuadspreadError('UNKNOWN_INPUT', `${where}.covariance`, `the result does not depend on an input named ${show(missing)}`);
+    }
+    if (na === nb) throw new QuadspreadError('INVALID_COVARIANCE', `${where}.covariance`, `${show(na)} is paired with itself (its variance is its sigma squared)`);
+    const key = na < nb ? `${na}\u0000${nb}` : `${nb}\u0000${na}`;
+    if (seen.has(key)) throw new QuadspreadError('INVALID_COVARIANCE', `${where}.covariance`, `the pair ${show(na)}, ${show(nb)} is listed twice`);
+    seen.add(key);
+    let v: T;
+    try {
+      v = B.from(cov);
+    } catch {
+      throw new QuadspreadError('INVALID_COVARIANCE', `${where}.covariance`, `${show(cov)} is not a number`);
+    }
+    // |u(a, b)| ≤ u(a)·u(b), i.e. |r| ≤ 1 (GUM §C.3.6): compared squared, exact in rational.
+    const bound = B.mul(a.input.sigma, b.input.sigma);
+    if (B.cmp(B.mul(v, v), B.mul(bound, bound)) > 0) {
+      throw new QuadspreadError('INVALID_COVARIANCE', `${where}.covariance`, `|${show(cov)}| exceeds u(${na})·u(${nb}) = ${B.toString(bound)}`);
+    }
+    const contribution = B.mul(B.from(2), B.mul(B.mul(a.c, b.c), v)); // 2·cᵢ·cⱼ·u(xᵢ, xⱼ): GUM eq. (13)
+    variance = B.add(variance, contribution);
+    correlations.push(Object.freeze({ names: Object.freeze([na, nb] as const), covariance: v, contribution }));
+  }
+  // A negative total means covariances no joint distribution can have; in an inexact base
+  // a negative total within 1e-12 of the terms is round-off (perfect anti-correlation): 0.
+  if (B.sign(variance) < 0) {
+    let scale = B.zero;
+    for (const l of lines) scale = B.add(scale, l.contribution);
+    for (const c of correlations) scale = B.add(scale, B.abs(c.contribution));
+    const noise = B.exact || B.cmp(B.abs(variance), B.mul(scale, B.from('1e-12'))) > 0;
+    if (noise) throw new QuadspreadError('INVALID_COVARIANCE', where, `the covariances make the variance ${B.toString(variance)} negative (they cannot belong to real inputs)`);
+    variance = B.zero;
+  }
+  const root = B.sqrt(variance);
+  const sigma = root ?? approxSqrt(B, variance);
+  return Object.freeze({
+    value: y.value,
+    variance,
+    sigma,
+    sigmaExact: B.exact && root !== undefined,
+    contributions: Object.freeze(lines),
+    correlations: Object.freeze(correlations),
+  });
+}
