@@ -7,7 +7,8 @@
 import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Uncertain, UncertainArithmetic, UncertainInput } from '../arithmetic/uncertain.js';
-import { approxSqrt } from '../readings/numeric.js';
+import { sqrtOf } from '../geometry/surd.js';
+import type { Root } from '../geometry/surd.js';
 
 /** One input's line in a {@link Budget}. */
 export interface Contribution<T> {
@@ -34,7 +35,7 @@ export interface CorrelationTerm<T> {
 }
 
 /** The uncertainty budget of one result. */
-export interface Budget<T> {
+export interface Budget<T, E extends boolean = boolean> {
   /** The result's value y. */
   readonly value: T;
   /**
@@ -43,13 +44,11 @@ export interface Budget<T> {
    */
   readonly variance: T;
   /**
-   * The combined standard uncertainty u_c(y) = √variance: rounded by the base in `float`
-   * and `decimal`; in an exact base exact where the root is rational (then
-   * `sigmaExact` is `true`), otherwise a rational within 1e-48 relative.
+   * The combined standard uncertainty u_c(y) = √variance: over an exact base the exact
+   * quadratic surd (`sqrtOf`, e.g. `3√2/100`; `rootToNumber` gives its number), over
+   * `float` and `decimal` the base's rounded square root.
    */
-  readonly sigma: T;
-  /** Whether `sigma` is exactly √variance. */
-  readonly sigmaExact: boolean;
+  readonly sigma: Root<T, E>;
   /**
    * One line per input the result depends on, largest contribution first (ties by name):
    * the uncertainty budget. Inputs that cancel out appear with sensitivity 0.
@@ -83,7 +82,7 @@ export interface BudgetOptions<T> {
  * @param U the uncertain arithmetic the result was computed in
  * @param result the result (a constant gives a zero budget)
  * @param options `covariance` triples for correlated inputs
- * @returns `{ value, variance, sigma, sigmaExact, contributions, correlations }`
+ * @returns `{ value, variance, sigma, contributions, correlations }`
  * @throws {QuadspreadError} `DUPLICATE_INPUT` when two different inputs share a name;
  *   `UNKNOWN_INPUT` when a covariance names an input the result does not depend on;
  *   `INVALID_COVARIANCE` for a pair of one input with itself, a pair listed twice,
@@ -95,12 +94,16 @@ export interface BudgetOptions<T> {
  * const a = measured(U, '12.5', '0.02', 'a');
  * const b = measured(U, '4', '0.01', 'b');
  * const B = budget(U, U.mul(a, b)); // area = a·b
- * [rational.toString(B.variance), B.contributions.map((c) => c.name)];
- * //=> ['881/40000', ['b', 'a']]
+ * [rational.toString(B.variance), B.sigma.toString(), B.contributions.map((c) => c.name)];
+ * //=> ['881/40000', '√881/200', ['b', 'a']]
  * ```
  */
-export function budget<T>(U: UncertainArithmetic<T>, result: Uncertain<T> | Numeric<T>, options: BudgetOptions<T> = {}): Budget<T> {
-  const B: Arithmetic<T> = U.base;
+export function budget<T, E extends boolean>(
+  U: UncertainArithmetic<T, E>,
+  result: Uncertain<T> | Numeric<T>,
+  options: BudgetOptions<T> = {},
+): Budget<T, E> {
+  const B: Arithmetic<T, E> = U.base;
   const y = U.is(result) ? result : U.from(result as Numeric<Uncertain<T>>);
   const where = 'budget(U, result, options)';
   const byName = new Map<string, { input: UncertainInput<T>; c: T }>();
@@ -161,13 +164,10 @@ export function budget<T>(U: UncertainArithmetic<T>, result: Uncertain<T> | Nume
     if (noise) throw new QuadspreadError('INVALID_COVARIANCE', where, `the covariances make the variance ${B.toString(variance)} negative (they cannot belong to real inputs)`);
     variance = B.zero;
   }
-  const root = B.sqrt(variance);
-  const sigma = root ?? approxSqrt(B, variance);
   return Object.freeze({
     value: y.value,
     variance,
-    sigma,
-    sigmaExact: B.exact && root !== undefined,
+    sigma: sqrtOf(B, variance),
     contributions: Object.freeze(lines),
     correlations: Object.freeze(correlations),
   });
