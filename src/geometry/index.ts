@@ -7,3 +7,7 @@ export { line, lineThrough, isOnLine, isParallel, isPerpendicular, footOfPerpend
 export type { Line } from './line.js';
 export { surd, sqrtOf, asRoot, isSurd, rootToNumber, rootToString, rootToPrecision } from './surd.js';
 export type { Surd, Root } from './surd.js';
+export { solveQuadratic } from './quadratic.js';
+export { pythagorasResidual, quadrea, tripleQuadResidual, archimedesResidual, spreadLawResidual, crossLawResidual, tripleSpreadResidual } from './laws.js';
+export { stewartResidual, stewartQuadranceResidual, solveStewart, solveStewartQuadrances } from './stewart.js';
+export type { StewartChainages, StewartQuadrances } from './stewart.js';
