@@ -1,2 +1,11 @@
 // Public exports of src/readings/ (one line per file as files land).
-export {};
+export { angleToDegrees, degreesToUnit, ANGLE_UNITS } from './angle.js';
+export type { AngleUnit } from './angle.js';
+export { formatDms } from './dms.js';
+export { sinCosDegrees } from './trig.js';
+export { spreadFromDegrees, degreesFromSpread } from './spread.js';
+export { spreadFromRatio, spreadFromGrade, spreadFromPerMille, spreadFromOneIn, gradeSquaredFromSpread } from './slope.js';
+export { vertical, verticalFromAngle, verticalFromRatio, verticalFromSlope, elevationFromVertical, zenithFromVertical, zenithToElevation } from './vertical.js';
+export type { VerticalReading, VerticalInput, VerticalKind } from './vertical.js';
+export { lengthToMetres, metresToLength, convertLength, convertQuadrance, METRES_PER_UNIT } from './length.js';
+export type { LengthUnit } from './length.js';

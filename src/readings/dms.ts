@@ -1,0 +1,56 @@
+/**
+ * Degrees written as degrees, minutes and seconds.
+ *
+ * @module readings
+ */
+import { QuadspreadError, show } from '../errors.js';
+import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+
+/**
+ * Writes an angle in degrees as DMS text, `12°34'56.7"`: seconds rounded half away from
+ * zero to `secondsDecimals` places (exactly, from the value of the arithmetic), minutes
+ * and seconds written with two integer digits, a leading `-` below zero. A carry from
+ * rounding is propagated (59.96″ to one place gives the next minute).
+ *
+ * @param A the arithmetic
+ * @param degrees the angle in degrees, |degrees| < 10⁸
+ * @param secondsDecimals decimals of the seconds, an integer 0..6 (default 1)
+ * @returns the DMS text
+ * @throws {QuadspreadError} `INVALID_ARGUMENT` for decimals outside 0..6 or an angle too
+ *   large to write; `INVALID_NUMBER` for a bad value.
+ * @example
+ * ```ts
+ * import { rational, formatDms } from 'quadspread';
+ * formatDms(rational, '12.582416666666666');
+ * //=> `12°34'56.7"`
+ * formatDms(rational, '-0.5', 0);
+ * //=> `-0°30'00"`
+ * ```
+ */
+export function formatDms<T>(A: Arithmetic<T>, degrees: Numeric<T>, secondsDecimals = 1): string {
+  if (!Number.isInteger(secondsDecimals) || secondsDecimals < 0 || secondsDecimals > 6) {
+    throw new QuadspreadError('INVALID_ARGUMENT', 'formatDms(secondsDecimals)', `${show(secondsDecimals)} is not an integer in 0..6`);
+  }
+  const d = A.from(degrees);
+  if (A.cmp(A.abs(d), A.from('1e8')) >= 0) {
+    throw new QuadspreadError('INVALID_ARGUMENT', 'formatDms(degrees)', `${A.toString(d)} is too large to write as DMS`);
+  }
+  const negative = A.sign(d) < 0;
+  const scale = 10 ** secondsDecimals;
+  const x = A.mul(A.abs(d), A.from(3600 * scale)); // units of 10^-k seconds
+  let n = Math.floor(A.toNumber(x));
+  while (n > 0 && A.cmp(A.from(n), x) > 0) n--;
+  while (A.cmp(A.from(n + 1), x) <= 0) n++;
+  // Round half away from zero, decided exactly.
+  if (A.cmp(A.sub(x, A.from(n)), A.from('0.5')) >= 0) n++;
+  const unitsPerDegree = 3600 * scale;
+  const deg = Math.floor(n / unitsPerDegree);
+  let rest = n - deg * unitsPerDegree;
+  const min = Math.floor(rest / (60 * scale));
+  rest -= min * 60 * scale;
+  const secInt = Math.floor(rest / scale);
+  const secFrac = rest - secInt * scale;
+  const sec = String(secInt).padStart(2, '0') + (secondsDecimals > 0 ? `.${String(secFrac).padStart(secondsDecimals, '0')}` : '');
+  const sign = negative && n > 0 ? '-' : '';
+  return `${sign}${deg}°${String(min).padStart(2, '0')}'${sec}"`;
+}

@@ -1,0 +1,124 @@
+/**
+ * Distance units with exact rational factors to the metre.
+ *
+ * @module readings
+ */
+import { QuadspreadError, show } from '../errors.js';
+import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+
+/**
+ * Length units: `'m'` metre, `'km'`, `'ft'` international foot (0.3048 m exactly),
+ * `'us-ft'` U.S. survey foot (1200/3937 m), `'ch'` Gunter's chain of 66 international
+ * feet (= 100 links), `'lk'` link, `'us-ch'` and `'us-lk'` the same in survey feet,
+ * `'mi'` international mile (1609.344 m).
+ */
+export type LengthUnit = 'm' | 'km' | 'ft' | 'us-ft' | 'ch' | 'lk' | 'us-ch' | 'us-lk' | 'mi';
+
+/**
+ * Metres in one of each {@link LengthUnit}, as exact rational text.
+ * Sources: international foot 0.3048 m and U.S. survey foot 1200/3937 m — NIST/NGS,
+ * "Deprecation of the U.S. Survey Foot", Federal Register 85(193) 62698–62708, 2020;
+ * Gunter's chain = 66 ft = 100 links, mile = 5280 ft = 1609.344 m (same units, derived).
+ */
+export const METRES_PER_UNIT: Readonly<Record<LengthUnit, string>> = {
+  m: '1',
+  km: '1000',
+  ft: '0.3048', // Federal Register 85(193), 2020: international foot
+  'us-ft': '1200/3937', // Federal Register 85(193), 2020: U.S. survey foot
+  ch: '20.1168', // 66 international feet
+  lk: '0.201168', // 1/100 chain
+  'us-ch': '79200/3937', // 66 U.S. survey feet
+  'us-lk': '792/3937', // 1/100 U.S. survey chain
+  mi: '1609.344', // 5280 international feet
+};
+
+/** @internal checks a length unit. */
+export function checkLengthUnit(unit: unknown, where: string): LengthUnit {
+  if (typeof unit === 'string' && Object.prototype.hasOwnProperty.call(METRES_PER_UNIT, unit)) return unit as LengthUnit;
+  throw new QuadspreadError('INVALID_UNIT', where, `${show(unit)} is not a length unit (use ${Object.keys(METRES_PER_UNIT).map((u) => `'${u}'`).join(', ')})`);
+}
+
+/**
+ * Converts a length to metres, exactly in `rational`.
+ *
+ * @param A the arithmetic
+ * @param value the length in `unit`
+ * @param unit its unit (see {@link LengthUnit})
+ * @returns the length in metres
+ * @throws {QuadspreadError} `INVALID_UNIT` for an unknown unit; `INVALID_NUMBER` for a bad value.
+ * @example
+ * ```ts
+ * import { rational, lengthToMetres } from 'quadspread';
+ * rational.toString(lengthToMetres(rational, 1, 'ch'));
+ * //=> '12573/625'
+ * ```
+ */
+export function lengthToMetres<T>(A: Arithmetic<T>, value: Numeric<T>, unit: LengthUnit): T {
+  const u = checkLengthUnit(unit, 'lengthToMetres(unit)');
+  return A.mul(A.from(value), A.from(METRES_PER_UNIT[u]));
+}
+
+/**
+ * Converts metres to another length unit, exactly in `rational`.
+ *
+ * @param A the arithmetic
+ * @param metres the length in metres
+ * @param unit the unit wanted
+ * @returns the length in `unit`
+ * @throws {QuadspreadError} `INVALID_UNIT` for an unknown unit; `INVALID_NUMBER` for a bad value.
+ * @example
+ * ```ts
+ * import { rational, metresToLength } from 'quadspread';
+ * rational.toString(metresToLength(rational, '0.3048', 'us-ft'));
+ * //=> '499999/500000'
+ * ```
+ */
+export function metresToLength<T>(A: Arithmetic<T>, metres: Numeric<T>, unit: LengthUnit): T {
+  const u = checkLengthUnit(unit, 'metresToLength(unit)');
+  return A.div(A.from(metres), A.from(METRES_PER_UNIT[u]));
+}
+
+/**
+ * Converts a length from one unit to another, exactly in `rational`.
+ *
+ * @param A the arithmetic
+ * @param value the length in `from`
+ * @param from its unit
+ * @param to the unit wanted
+ * @returns the length in `to`
+ * @throws {QuadspreadError} `INVALID_UNIT` for an unknown unit.
+ * @example
+ * ```ts
+ * import { rational, convertLength } from 'quadspread';
+ * rational.toString(convertLength(rational, 1, 'us-ft', 'ft'));
+ * //=> '500000/499999'
+ * ```
+ */
+export function convertLength<T>(A: Arithmetic<T>, value: Numeric<T>, from: LengthUnit, to: LengthUnit): T {
+  const f = checkLengthUnit(from, 'convertLength(from)');
+  const t = checkLengthUnit(to, 'convertLength(to)');
+  return A.div(A.mul(A.from(value), A.from(METRES_PER_UNIT[f])), A.from(METRES_PER_UNIT[t]));
+}
+
+/**
+ * Converts a quadrance (a squared length) from one unit to another: the factor squared.
+ *
+ * @param A the arithmetic
+ * @param quadrance the quadrance in `from`²
+ * @param from the unit of the length squared
+ * @param to the unit wanted
+ * @returns the quadrance in `to`²
+ * @throws {QuadspreadError} `INVALID_UNIT` for an unknown unit; `NEGATIVE_QUADRANCE` below zero.
+ * @example
+ * ```ts
+ * import { rational, convertQuadrance } from 'quadspread';
+ * rational.toString(convertQuadrance(rational, 100, 'ft', 'm'));
+ * //=> '145161/15625'
+ * ```
+ */
+export function convertQuadrance<T>(A: Arithmetic<T>, quadrance: Numeric<T>, from: LengthUnit, to: LengthUnit): T {
+  const q = A.from(quadrance);
+  if (A.sign(q) < 0) throw new QuadspreadError('NEGATIVE_QUADRANCE', 'convertQuadrance(quadrance)', `${show(typeof quadrance === 'object' ? A.toString(q) : quadrance)} is below zero`);
+  const r = convertLength(A, A.one, from, to);
+  return A.mul(q, A.mul(r, r));
+}

@@ -1,0 +1,40 @@
+/**
+ * Internal numeric helpers for the readings: a square root that is exact where it can be
+ * and otherwise close, for the places where a reading must become a number (an angle).
+ *
+ * @module readings
+ * @internal
+ */
+import type { Arithmetic } from '../arithmetic/types.js';
+
+/** Significant digits kept by {@link approxSqrt} in an exact arithmetic. */
+export const APPROX_DIGITS = 50;
+
+/**
+ * √x as a value of the arithmetic: `A.sqrt(x)` where it exists; in an exact arithmetic
+ * where the root is irrational, a rational within 1e-48 relative (Newton's iteration from
+ * the float root, rounded to {@link APPROX_DIGITS} significant digits). For x ≥ 0 only.
+ * @internal
+ */
+export function approxSqrt<T>(A: Arithmetic<T>, x: T): T {
+  const r = A.sqrt(x);
+  if (r !== undefined) return r;
+  // Newton's iteration for √x (Heron's method): y ← (y + x/y)/2, quadratic convergence.
+  let y = A.from(Math.sqrt(A.toNumber(x)));
+  if (A.isZero(y)) y = A.from('1e-300');
+  const two = A.from(2);
+  for (let i = 0; i < 3; i++) {
+    y = A.div(A.add(y, A.div(x, y)), two);
+    y = A.from(A.toPrecision(y, APPROX_DIGITS + 5));
+  }
+  return A.from(A.toPrecision(y, APPROX_DIGITS));
+}
+
+/**
+ * Rounds a value of an exact arithmetic to `digits` significant digits so that chains of
+ * transcendental steps keep small denominators; other arithmetics are returned as is.
+ * @internal
+ */
+export function trim<T>(A: Arithmetic<T>, x: T, digits = APPROX_DIGITS): T {
+  return A.exact && !A.isZero(x) ? A.from(A.toPrecision(x, digits)) : x;
+}

@@ -1,0 +1,83 @@
+/**
+ * Angles to spreads and back: the spread of an angle θ is sin²θ.
+ *
+ * @module readings
+ */
+import { QuadspreadError, show } from '../errors.js';
+import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+import { angleToDegrees, type AngleUnit } from './angle.js';
+import { modulo, sinCosDegrees } from './trig.js';
+import { approxSqrt, trim } from './numeric.js';
+
+/** @internal reads a spread and checks 0 ≤ s ≤ 1. */
+export function checkSpread<T>(A: Arithmetic<T>, s: Numeric<T>, where: string): T {
+  const v = A.from(s);
+  if (A.sign(v) < 0 || A.cmp(v, A.one) > 0) {
+    throw new QuadspreadError('SPREAD_OUT_OF_RANGE', where, `${show(typeof s === 'object' ? A.toString(v) : s)} is outside [0, 1]`);
+  }
+  return v;
+}
+
+/**
+ * The spread of an angle: s = sin²θ (Wildberger, *Divine Proportions*, 2005, ch. 5: the
+ * spread of two lines is the square of the sine of the angle between them).
+ *
+ * Exact in `rational` when θ is a multiple of 30° or 45° (spreads 0, 1/4, 1/2, 3/4, 1);
+ * otherwise the square of {@link sinCosDegrees}' sine, within the arithmetic's stated
+ * transcendental tolerance (1e-40 relative in `rational`, so well inside the library's
+ * 1e-20 promise for angle readings).
+ *
+ * @param A the arithmetic
+ * @param angle the angle: degrees, DMS text, or a number in `unit`
+ * @param unit `'deg'` (default), `'gon'`, `'mil'` or `'rad'`
+ * @returns the spread, in [0, 1]
+ * @throws {QuadspreadError} as {@link angleToDegrees}.
+ * @example
+ * ```ts
+ * import { rational, spreadFromDegrees } from 'quadspread';
+ * rational.toString(spreadFromDegrees(rational, 60));
+ * //=> '3/4'
+ * rational.toString(spreadFromDegrees(rational, 50, 'gon'));
+ * //=> '1/2'
+ * ```
+ */
+export function spreadFromDegrees<T>(A: Arithmetic<T>, angle: Numeric<T>, unit: AngleUnit = 'deg'): T {
+  const deg = angleToDegrees(A, angle, unit);
+  // 45°-type angles: sin² = cos² = 1/2 exactly (the isosceles right triangle).
+  if (A.eq(modulo(A, deg, A.from(90)), A.from(45))) return A.div(A.one, A.from(2));
+  const { sin, cos } = sinCosDegrees(A, deg);
+  const s2 = A.mul(sin, sin);
+  // 30°-type angles: sin or cos is exactly ±1/2, so the spread is 1/4 or 3/4 exactly.
+  const quarter = A.div(A.one, A.from(4));
+  if (A.eq(A.mul(cos, cos), quarter)) return A.sub(A.one, quarter);
+  return trim(A, s2);
+}
+
+/**
+ * The angle in [0°, 90°] whose spread is s: θ = atan2(√s, √(1 − s)) in degrees.
+ *
+ * Exact for the spreads 0, 1/4, 1/2, 3/4 and 1 (0°, 30°, 45°, 60°, 90°); otherwise
+ * through `A.atan2` and `A.pi`, so in `rational` a rational within 1e-40 relative. A
+ * spread says nothing of a sign or of which of θ and 180° − θ: see
+ * {@link VerticalReading} for readings that keep their sign.
+ *
+ * @param A the arithmetic
+ * @param s the spread, in [0, 1]
+ * @returns the acute angle in degrees
+ * @throws {QuadspreadError} `SPREAD_OUT_OF_RANGE` when s is outside [0, 1].
+ * @example
+ * ```ts
+ * import { rational, degreesFromSpread } from 'quadspread';
+ * rational.toString(degreesFromSpread(rational, '1/4'));
+ * //=> '30'
+ * ```
+ */
+export function degreesFromSpread<T>(A: Arithmetic<T>, s: Numeric<T>): T {
+  const v = checkSpread(A, s, 'degreesFromSpread(s)');
+  const exact: [string, number][] = [['0', 0], ['1/4', 30], ['1/2', 45], ['3/4', 60], ['1', 90]];
+  for (const [spread, deg] of exact) if (A.eq(v, A.from(spread))) return A.from(deg);
+  const sin = approxSqrt(A, v);
+  const cos = approxSqrt(A, A.sub(A.one, v));
+  const rad = A.atan2(sin, cos);
+  return trim(A, A.div(A.mul(rad, A.from(180)), A.pi)); // 180° = π rad
+}

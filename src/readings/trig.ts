@@ -1,0 +1,73 @@
+/**
+ * Sine and cosine of an angle in degrees, exact where the value is rational.
+ *
+ * @module readings
+ */
+import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+
+/** @internal x mod m in [0, m), exact for exact arithmetics. */
+export function modulo<T>(A: Arithmetic<T>, x: T, m: T): T {
+  const q = Math.floor(A.toNumber(A.div(x, m)));
+  let r = A.sub(x, A.mul(A.from(q), m));
+  // Correct the float floor by at most a step either way (exact comparisons).
+  while (A.sign(r) < 0) r = A.add(r, m);
+  while (A.cmp(r, m) >= 0) r = A.sub(r, m);
+  return r;
+}
+
+/**
+ * sin and cos of θ ∈ [0°, 90°] (already reduced). Exact where rational: 0°, 30° (sin),
+ * 60° (cos), 90°; otherwise from `A.sin` / `A.cos` of the smaller of θ and 90° − θ in
+ * radians, so that the relative accuracy holds near both ends.
+ */
+function firstQuadrant<T>(A: Arithmetic<T>, t: T): { sin: T; cos: T } {
+  const half = A.div(A.one, A.from(2));
+  if (A.isZero(t)) return { sin: A.zero, cos: A.one };
+  const ninety = A.from(90);
+  if (A.eq(t, ninety)) return { sin: A.one, cos: A.zero };
+  const rad = (d: T): T => A.div(A.mul(d, A.pi), A.from(180)); // π rad = 180°
+  const small = A.cmp(t, A.from(45)) <= 0;
+  const u = small ? t : A.sub(ninety, t);
+  // sin 30° = 1/2 exactly (the 30-60-90 triangle); its cosine √3/2 is irrational.
+  const sinU = A.eq(u, A.from(30)) ? half : A.sin(rad(u));
+  const cosU = A.cos(rad(u));
+  return small ? { sin: sinU, cos: cosU } : { sin: cosU, cos: sinU };
+}
+
+/**
+ * sin θ and cos θ of an angle θ in degrees.
+ *
+ * Exact at every multiple of 90° and wherever the value is rational (sin at 30°, 150°,
+ * 210°, 330°; cos at 60°, 120°, 240°, 300°; angles are reduced mod 360° exactly). Elsewhere
+ * from `A.sin` / `A.cos` of the angle reduced to [0°, 45°] in radians (θ·π/180), so in
+ * `rational` within its stated transcendental tolerance (1e-40 relative), correctly
+ * rounded to the arithmetic's digits in `decimal` (as its `sin` is), IEEE-close in `float`.
+ *
+ * @param A the arithmetic
+ * @param degrees the angle in degrees
+ * @returns `{ sin, cos }`
+ * @throws {QuadspreadError} `INVALID_NUMBER` when `degrees` is not a number.
+ * @example
+ * ```ts
+ * import { rational, sinCosDegrees } from 'quadspread';
+ * const { sin, cos } = sinCosDegrees(rational, -150);
+ * [rational.toString(sin), rational.toNumber(cos).toFixed(12)];
+ * //=> ['-1/2', '-0.866025403784']
+ * ```
+ */
+export function sinCosDegrees<T>(A: Arithmetic<T>, degrees: Numeric<T>): { sin: T; cos: T } {
+  const d = modulo(A, A.from(degrees), A.from(360));
+  const quadrant = Math.min(3, Math.floor(A.toNumber(A.div(d, A.from(90)))));
+  let q = quadrant;
+  let t = A.sub(d, A.from(90 * q));
+  if (A.sign(t) < 0) { q -= 1; t = A.add(t, A.from(90)); }
+  if (A.cmp(t, A.from(90)) > 0) { q += 1; t = A.sub(t, A.from(90)); }
+  const { sin, cos } = firstQuadrant(A, t);
+  // sin(θ + 90°) = cos θ, cos(θ + 90°) = −sin θ (the quadrant rotations)
+  switch (((q % 4) + 4) % 4) {
+    case 0: return { sin, cos };
+    case 1: return { sin: cos, cos: A.neg(sin) };
+    case 2: return { sin: A.neg(sin), cos: A.neg(cos) };
+    default: return { sin: A.neg(cos), cos: sin };
+  }
+}
