@@ -1,2 +1,7 @@
 // Public exports of src/cogo/ (one line per file as files land).
-export {};
+export { area, perimeter, convertArea, polygonArea, AREA_UNITS } from './area.js';
+export type { AreaUnit, PolygonArea } from './area.js';
+export { intersectLines } from './intersect-lines.js';
+export { bearingToAzimuth } from './bearing.js';
+export { traverse, angularMisclosure } from './traverse.js';
+export type { TraverseCourse, TraverseInput, TraverseClosure, Traverse, TraverseLeg, AngularMisclosure } from './traverse.js';

@@ -1,0 +1,49 @@
+/**
+ * Reading bearings for coordinate geometry: azimuths clockwise from north.
+ *
+ * @module cogo
+ */
+import { QuadspreadError, show } from '../errors.js';
+import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+import { angleToDegrees } from '../readings/angle.js';
+
+/**
+ * Reads a bearing as an azimuth in degrees, clockwise from north (x = east, y = north),
+ * in [0°, 360°).
+ *
+ * Accepts decimal degrees (a value, number or numeric text), DMS text (`226°54'23"`,
+ * `226 54 23`) and quadrant bearings (`S 68°05'35" W` = 248°05′35″: N θ E = θ,
+ * S θ E = 180° − θ, S θ W = 180° + θ, N θ W = 360° − θ), as the readings'
+ * `angleToDegrees` reads them. An azimuth of exactly 360° is read as 0°. Exact in
+ * `rational`.
+ *
+ * @param A the arithmetic
+ * @param bearing the bearing: an azimuth clockwise from north, or a quadrant bearing
+ * @returns the azimuth in degrees, clockwise from north, in [0, 360)
+ * @throws {QuadspreadError} `INVALID_BEARING` for text that is not a bearing, a quadrant
+ * angle over 90°, or an azimuth outside [0°, 360°].
+ * @example
+ * ```ts
+ * import { rational, bearingToAzimuth } from 'quadspread';
+ * rational.toString(bearingToAzimuth(rational, `S 68°05'35" W`));
+ * //=> '178627/720'
+ * rational.toString(bearingToAzimuth(rational, `N 45° W`));
+ * //=> '315'
+ * ```
+ */
+export function bearingToAzimuth<T>(A: Arithmetic<T, boolean>, bearing: Numeric<T>, where = 'bearingToAzimuth(bearing)'): T {
+  let deg: T;
+  try {
+    deg = angleToDegrees(A, bearing);
+  } catch (e) {
+    if (e instanceof QuadspreadError && e.code !== 'INPUT_TOO_LONG') {
+      throw new QuadspreadError('INVALID_BEARING', where, `${show(bearing)} is not a bearing (${e.message.replace(/^quadspread \w+: [^:]*: /, '')})`);
+    }
+    throw e;
+  }
+  const full = A.from(360);
+  if (A.sign(deg) < 0 || A.cmp(deg, full) > 0) {
+    throw new QuadspreadError('INVALID_BEARING', where, `${show(bearing)} is not an azimuth in [0°, 360°] (clockwise from north)`);
+  }
+  return A.eq(deg, full) ? A.zero : deg;
+}

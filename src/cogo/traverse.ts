@@ -1,0 +1,298 @@
+/**
+ * Traverse computation: latitudes and departures, closure, precision, and adjustment by
+ * the compass (Bowditch) or transit rule.
+ *
+ * @module cogo
+ */
+import { QuadspreadError, show } from '../errors.js';
+import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+import type { Point } from '../geometry/point.js';
+import { sqrtOf } from '../geometry/surd.js';
+import type { Root } from '../geometry/surd.js';
+import { sinCosDegrees } from '../readings/trig.js';
+import { angleToDegrees } from '../readings/angle.js';
+import { bearingToAzimuth } from './bearing.js';
+import { readArray, readPoint, sqrtValue } from './internal.js';
+import type { PointInput } from './internal.js';
+
+/**
+ * One traverse course: either a bearing and a distance, or a latitude and a departure.
+ *
+ * - `{ bearing, distance }`: the bearing is an azimuth clockwise from north (decimal
+ *   degrees or DMS text) or a quadrant bearing such as `S 68°05'35" W`; the distance is
+ *   horizontal, in the coordinate unit.
+ * - `{ latitude, departure }`: the north and east components (x = east, y = north), with
+ *   an optional `distance` (the course length used by the compass rule; by default
+ *   √(latitude² + departure²)).
+ */
+export type TraverseCourse<T> =
+  | { readonly bearing: Numeric<T>; readonly distance: Numeric<T> }
+  | { readonly latitude: Numeric<T>; readonly departure: Numeric<T>; readonly distance?: Numeric<T> };
+
+/** Input of {@link traverse}. */
+export interface TraverseInput<T> {
+  /** The known starting point `{ x: east, y: north }`. */
+  readonly start: PointInput<T>;
+  /** The courses in order from the start. At least one. */
+  readonly courses: readonly TraverseCourse<T>[];
+  /** The known point the traverse closes on; default: the start (a closed loop). */
+  readonly close?: PointInput<T>;
+  /** How the misclosure is distributed: `'compass'` (Bowditch, default) or `'transit'`. */
+  readonly rule?: 'compass' | 'transit';
+  /**
+   * The measured interior angles of a closed loop (degrees or DMS text), for the angular
+   * misclosure: their sum less (n − 2)·180°.
+   */
+  readonly interiorAngles?: readonly Numeric<T>[];
+}
+
+/** The misclosure of a traverse: computed end point less the known closing point. */
+export interface TraverseClosure<T, E extends boolean> {
+  /** Misclosure in departure (east), coordinate units. */
+  readonly east: T;
+  /** Misclosure in latitude (north), coordinate units. */
+  readonly north: T;
+  /** Linear misclosure √(east² + north²): a surd in an exact arithmetic, a value otherwise. */
+  readonly linear: Root<T, E>;
+  /**
+   * N of the precision ratio 1 : N, the traverse length over the linear misclosure;
+   * `undefined` when the traverse closes exactly. In an exact arithmetic it is within
+   * 1e-40 relative (it involves square roots).
+   */
+  readonly ratio: T | undefined;
+}
+
+/** Angular misclosure of a closed loop from its interior angles, in degrees. */
+export interface AngularMisclosure<T> {
+  /** Sum of the measured interior angles. */
+  readonly sum: T;
+  /** (n − 2)·180° for n angles. */
+  readonly expected: T;
+  /** sum − expected. */
+  readonly misclosure: T;
+}
+
+/** One course as computed and adjusted. */
+export interface TraverseLeg<T> {
+  /** Unadjusted latitude (north component). */
+  readonly latitude: T;
+  /** Unadjusted departure (east component). */
+  readonly departure: T;
+  /** Course length (the given distance, or √(lat² + dep²)). */
+  readonly length: T;
+  /** Adjusted latitude. */
+  readonly adjustedLatitude: T;
+  /** Adjusted departure. */
+  readonly adjustedDeparture: T;
+}
+
+/** What {@link traverse} returns. */
+export interface Traverse<T, E extends boolean> {
+  /** The misclosure and precision. */
+  readonly closure: TraverseClosure<T, E>;
+  /** Total length of the courses. */
+  readonly length: T;
+  /** Unadjusted points, from the start (index 0) to the computed end (index n). */
+  readonly points: Point<T>[];
+  /** Adjusted points, from the start to the closing point (index n equals `close`). */
+  readonly adjusted: Point<T>[];
+  /** Each course with its latitude, departure, length and adjusted components. */
+  readonly courses: TraverseLeg<T>[];
+  /** The rule used. */
+  readonly rule: 'compass' | 'transit';
+  /** Angular misclosure, when `interiorAngles` were given. */
+  readonly angular?: AngularMisclosure<T>;
+}
+
+/**
+ * Angular misclosure of a closed loop traverse: the sum of its n measured interior
+ * angles less (n − 2)·180° (the angle sum of a simple polygon). Exact in `rational` for
+ * degrees and DMS text.
+ *
+ * @param A the arithmetic
+ * @param angles the interior angles, degrees or DMS text, at least three
+ * @returns `{ sum, expected, misclosure }` in degrees
+ * @throws {QuadspreadError} `TOO_FEW_POINTS` for fewer than three angles; `INVALID_ANGLE` for an angle that does not parse.
+ * @example
+ * ```ts
+ * import { rational, angularMisclosure } from 'quadspread';
+ * const m = angularMisclosure(rational, [`90°00'10"`, '90', '90', `89°59'56"`]);
+ * rational.toString(m.misclosure);
+ * //=> '1/1800'
+ * ```
+ */
+export function angularMisclosure<T>(A: Arithmetic<T, boolean>, angles: readonly Numeric<T>[]): AngularMisclosure<T> {
+  const where = 'angularMisclosure(A, angles)';
+  const list = readArray<Numeric<T>>(angles, where);
+  if (list.length < 3) throw new QuadspreadError('TOO_FEW_POINTS', where, `a closed loop has at least 3 angles, got ${list.length}`);
+  let sum = A.zero;
+  for (const a of list) sum = A.add(sum, angleToDegrees(A, a));
+  // Interior angles of a simple n-gon sum to (n − 2)·180° (Euclid I.32, corollary).
+  const expected = A.from((list.length - 2) * 180);
+  return { sum, expected, misclosure: A.sub(sum, expected) };
+}
+
+/**
+ * Computes a traverse from a known start through its courses to a known closing point,
+ * with its misclosure, precision ratio and adjustment.
+ *
+ * Coordinates are x = east, y = north; bearings are azimuths clockwise from north (or
+ * quadrant bearings). Each course gives latitude = d·cos(azimuth) (north) and
+ * departure = d·sin(azimuth) (east). The misclosure is the computed end point less the
+ * closing point (default: the start, for a closed loop). The compass (Bowditch) rule
+ * corrects each course in proportion to its length; the transit rule corrects latitudes in
+ * proportion to |latitude| and departures to |departure|.
+ *
+ * Exactness: with latitude/departure courses in `rational`, the misclosure, the transit
+ * adjustment and (when every length is given or is a perfect square) the compass
+ * adjustment are exact, and the adjusted end equals the closing point exactly. Courses
+ * with bearings go through sin/cos, so in `rational` they are within the arithmetic's
+ * transcendental tolerance (1e-40 relative).
+ *
+ * A computational aid: check independently; setting out follows local codes and licensed practice.
+ *
+ * @param A the arithmetic
+ * @param input `{ start, courses, close?, rule?, interiorAngles? }`, see {@link TraverseInput}
+ * @returns `{ closure: { east, north, linear, ratio }, length, points, adjusted, courses, rule, angular? }`
+ * @throws {QuadspreadError} `NO_COURSES` for an empty course list; `INVALID_BEARING` for a
+ * bearing that does not parse; `INVALID_ARGUMENT` for a course that is neither form, a
+ * negative distance, an unknown rule, a zero-length traverse under the compass rule, or a
+ * transit adjustment with nothing to distribute over; `INVALID_NUMBER` for bad numbers.
+ * @example
+ * ```ts
+ * import { rational, traverse } from 'quadspread';
+ * const t = traverse(rational, {
+ *   start: { x: 0, y: 0 },
+ *   courses: [
+ *     { latitude: 0, departure: 3 },
+ *     { latitude: 4, departure: 0 },
+ *     { latitude: '-4.01', departure: '-3' },
+ *   ],
+ * });
+ * [rational.toString(t.closure.north), rational.toString(t.closure.east), rational.toString(t.adjusted[3]!.y)];
+ * //=> ['-1/100', '0', '0']
+ * ```
+ */
+export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: TraverseInput<T>): Traverse<T, E> {
+  const where = 'traverse(A, input)';
+  if (input === null || typeof input !== 'object') {
+    throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(input)} is not { start, courses, close? }`);
+  }
+  const start = readPoint(A, input.start, `${where} start`);
+  const end = input.close === undefined ? start : readPoint(A, input.close, `${where} close`);
+  const rule = input.rule ?? 'compass';
+  if (rule !== 'compass' && rule !== 'transit') {
+    throw new QuadspreadError('INVALID_ARGUMENT', `${where} rule`, `${show(rule)} is not 'compass' or 'transit'`);
+  }
+  if (input.courses === undefined) throw new QuadspreadError('NO_COURSES', `${where} courses`, 'no courses were given');
+  const list = readArray<TraverseCourse<T>>(input.courses, `${where} courses`);
+  const n = list.length;
+  if (n === 0) throw new QuadspreadError('NO_COURSES', `${where} courses`, 'the traverse has no courses');
+
+  const lat = new Array<T>(n);
+  const dep = new Array<T>(n);
+  const len = new Array<T>(n);
+  const points = new Array<Point<T>>(n + 1);
+  points[0] = start;
+  let x = start.x;
+  let y = start.y;
+  let total = A.zero;
+  let sumAbsLat = A.zero;
+  let sumAbsDep = A.zero;
+  for (let i = 0; i < n; i++) {
+    const c = list[i] as Record<string, Numeric<T> | undefined> | null | undefined;
+    const at = `${where} courses[${i}]`;
+    if (c === null || typeof c !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', at, `${show(c)} is not a course`);
+    let la: T;
+    let de: T;
+    let d: T;
+    if (c.bearing !== undefined) {
+      if (c.distance === undefined) throw new QuadspreadError('INVALID_ARGUMENT', at, 'a course with a bearing needs a distance');
+      d = A.from(c.distance);
+      const az = bearingToAzimuth(A, c.bearing, `${at}.bearing`);
+      // Latitude = d·cos(azimuth), departure = d·sin(azimuth) (azimuth clockwise from north),
+      // e.g. Ghilani & Wolf, Elementary Surveying, ch. 10 (from memory).
+      const sc = sinCosDegrees(A, az);
+      la = A.mul(d, sc.cos);
+      de = A.mul(d, sc.sin);
+    } else if (c.latitude !== undefined && c.departure !== undefined) {
+      la = A.from(c.latitude);
+      de = A.from(c.departure);
+      // Course length by Pythagoras unless given.
+      d = c.distance !== undefined ? A.from(c.distance) : sqrtValue(A, A.add(A.mul(la, la), A.mul(de, de)), at);
+    } else {
+      throw new QuadspreadError('INVALID_ARGUMENT', at, 'a course is { bearing, distance } or { latitude, departure }');
+    }
+    if (A.sign(d) < 0) throw new QuadspreadError('INVALID_ARGUMENT', `${at}.distance`, `${A.toString(d)} is negative`);
+    lat[i] = la;
+    dep[i] = de;
+    len[i] = d;
+    total = A.add(total, d);
+    if (rule === 'transit') {
+      sumAbsLat = A.add(sumAbsLat, A.abs(la));
+      sumAbsDep = A.add(sumAbsDep, A.abs(de));
+    }
+    x = A.add(x, de);
+    y = A.add(y, la);
+    points[i + 1] = { x, y };
+  }
+
+  const east = A.sub(x, end.x);
+  const north = A.sub(y, end.y);
+  const q = A.add(A.mul(east, east), A.mul(north, north));
+  const linear = sqrtOf(A, q);
+  // Precision ratio 1 : N with N = traverse length / linear misclosure.
+  const ratio = A.isZero(q) ? undefined : A.div(total, sqrtValue(A, q, where));
+
+  // Per-unit corrections: compass (Bowditch) rule, correction = −misclosure·(course length /
+  // total length); transit rule, correction = −misclosure·|component| / Σ|component|.
+  // Both as in Ghilani & Wolf, Elementary Surveying, ch. 10 (from memory).
+  let kLat: T;
+  let kDep: T;
+  if (rule === 'compass') {
+    if (A.isZero(total)) {
+      if (!A.isZero(q)) throw new QuadspreadError('INVALID_ARGUMENT', where, 'the courses have zero total length: the compass rule cannot distribute a misclosure');
+      kLat = A.zero;
+      kDep = A.zero;
+    } else {
+      kLat = A.div(A.neg(north), total);
+      kDep = A.div(A.neg(east), total);
+    }
+  } else {
+    if (A.isZero(sumAbsLat) && !A.isZero(north)) throw new QuadspreadError('INVALID_ARGUMENT', where, 'every latitude is zero: the transit rule cannot distribute the north misclosure');
+    if (A.isZero(sumAbsDep) && !A.isZero(east)) throw new QuadspreadError('INVALID_ARGUMENT', where, 'every departure is zero: the transit rule cannot distribute the east misclosure');
+    kLat = A.isZero(sumAbsLat) ? A.zero : A.div(A.neg(north), sumAbsLat);
+    kDep = A.isZero(sumAbsDep) ? A.zero : A.div(A.neg(east), sumAbsDep);
+  }
+
+  const adjusted = new Array<Point<T>>(n + 1);
+  const legs = new Array<TraverseLeg<T>>(n);
+  adjusted[0] = start;
+  let ax = start.x;
+  let ay = start.y;
+  for (let i = 0; i < n; i++) {
+    const la = lat[i]!;
+    const de = dep[i]!;
+    const wLat = rule === 'compass' ? len[i]! : A.abs(la);
+    const wDep = rule === 'compass' ? len[i]! : A.abs(de);
+    const adjLat = A.add(la, A.mul(kLat, wLat));
+    const adjDep = A.add(de, A.mul(kDep, wDep));
+    ax = A.add(ax, adjDep);
+    ay = A.add(ay, adjLat);
+    adjusted[i + 1] = { x: ax, y: ay };
+    legs[i] = { latitude: la, departure: de, length: len[i]!, adjustedLatitude: adjLat, adjustedDeparture: adjDep };
+  }
+
+  const result: Traverse<T, E> = {
+    closure: { east, north, linear, ratio },
+    length: total,
+    points,
+    adjusted,
+    courses: legs,
+    rule,
+  };
+  if (input.interiorAngles !== undefined) {
+    return { ...result, angular: angularMisclosure(A, input.interiorAngles) };
+  }
+  return result;
+}
