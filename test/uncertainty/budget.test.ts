@@ -1,0 +1,127 @@
+import { describe, it, expect } from 'vitest';
+import fc from 'fast-check';
+import { rational, decimal, float, uncertain } from '../../src/arithmetic/index.js';
+import { measured, sensitivities } from '../../src/uncertainty/measured.js';
+import { budget } from '../../src/uncertainty/budget.js';
+
+const R = uncertain(rational);
+const F = uncertain(float);
+const D = uncertain(decimal(40));
+const r = rational;
+
+describe('budget(U, result) is the law of propagation of uncertainty (GUM, JCGM 100:2008 §5.1.2)', () => {
+  it('budget of a product a·b has u² = b²u²(a) + a²u²(b) (eq. (10), derived by hand), exactly over rational', () => {
+    const a = measured(R, '12.5', '0.02', 'a');
+    const b = measured(R, '4', '0.01', 'b');
+    const B = budget(R, R.mul(a, b));
+    // 4²·0.02² + 12.5²·0.01² = 0.0064 + 0.015625 = 0.022025
+    expect(r.toString(B.variance)).toBe('881/40000');
+    expect(B.sigma.toString()).toBe('√881/200');
+    expect(B.contributions.map((c) => [c.name, r.toString(c.sensitivity), r.toString(c.contribution)])).toEqual([
+      ['b', '25/2', '1/64'],
+      ['a', '4', '4/625'],
+    ]);
+  });
+
+  it('budget of a quotient a/b has (u/y)² = (u(a)/a)² + (u(b)/b)² (GUM §5.1.6, derived by hand), over every base', () => {
+    for (const U of [R, D, F] as const) {
+      const B0 = U.base;
+      const a = measured(U as typeof F, 30, 0.3, 'a');
+      const b = measured(U as typeof F, 8, 0.04, 'b');
+      const Bq = budget(U as typeof F, (U as typeof F).div(a, b));
+      // y = 3.75; (u/y)² = 1e-4 + 2.5e-5 = 1.25e-4; u² = 3.75²·1.25e-4 = 0.0017578125
+      expect(B0.toNumber(Bq.variance as never)).toBeCloseTo(0.0017578125, 15);
+    }
+    const Bx = budget(R, R.div(measured(R, 30, '0.3', 'a'), measured(R, 8, '0.04', 'b')));
+    expect(r.toString(Bx.variance)).toBe('9/5120'); // 0.0017578125 exactly
+  });
+
+  it('the contributions add up to the variance exactly over rational', () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.tuple(fc.integer({ min: 1, max: 500 }), fc.integer({ min: 0, max: 50 })), { minLength: 1, maxLength: 5 }),
+        fc.integer({ min: 1, max: 9 }),
+        (specs, k) => {
+          const xs = specs.map(([v, s], i) => measured(R, v, r.div(r.from(s), r.from(100)), `x${i}`));
+          // y = (Σ k·xᵢ²) / (1 + x₀) — non-linear, several inputs
+          let num = R.zero;
+          for (const x of xs) num = R.add(num, R.mul(R.from(k), R.mul(x, x)));
+          const y = R.div(num, R.add(R.one, xs[0]!));
+          const B = budget(R, y);
+          let sum = r.zero;
+          for (const c of B.contributions) sum = r.add(sum, c.contribution);
+          expect(r.eq(sum, B.variance)).toBe(true);
+          expect(B.contributions.length).toBe(xs.length);
+        },
+      ),
+      { numRuns: 100 },
+    );
+  });
+
+  it('budget lists contributions largest first, ties by name', () => {
+    const U = F;
+    const y = U.add(U.add(measured(U, 1, 0.5, 'c'), measured(U, 1, 2, 'big')), U.add(measured(U, 1, 0.5, 'a'), measured(U, 1, 1, 'mid')));
+    expect(budget(U, y).contributions.map((c) => c.name)).toEqual(['big', 'mid', 'a', 'c']);
+  });
+
+  it('budget of a constant is zero, and of x − x lists x with sensitivity 0', () => {
+    expect(budget(F, F.from(3))).toMatchObject({ value: 3, variance: 0, sigma: 0, contributions: [] });
+    const x = measured(R, 5, 1, 'x');
+    const B = budget(R, R.sub(x, x));
+    expect(r.isZero(B.variance)).toBe(true);
+    expect(B.contributions.map((c) => [c.name, r.toString(c.sensitivity)])).toEqual([['x', '0']]);
+  });
+
+  it('budget with covariance r = +1 gives u(a + b) = u(a) + u(b), and r = −1 gives |u(a) − u(b)| (GUM eq. (13), (14))', () => {
+    const a = measured(R, 10, '0.3', 'a');
+    const b = measured(R, 20, '0.1', 'b');
+    const s = R.add(a, b);
+    const plus = budget(R, s, { covariance: [['a', 'b', '0.03']] });
+    expect(plus.sigma.toString()).toBe('2/5');
+    expect(plus.correlations.map((c) => [c.names, r.toString(c.contribution)])).toEqual([[['a', 'b'], '3/50']]);
+    const minus = budget(R, s, { covariance: [['b', 'a', '-0.03']] });
+    expect(minus.sigma.toString()).toBe('1/5');
+    // a − b with r = +1: |0.3 − 0.1|
+    expect(budget(R, R.sub(a, b), { covariance: [['a', 'b', '0.03']] }).sigma.toString()).toBe('1/5');
+  });
+
+  it('budget refuses two different inputs with one name', () => {
+    const y = F.add(measured(F, 1, 0.1, 'a'), measured(F, 2, 0.1, 'a'));
+    expect(() => budget(F, y)).toThrow(expect.objectContaining({ code: 'DUPLICATE_INPUT' }));
+  });
+
+  it('budget refuses covariances of unknown inputs, of an input with itself, listed twice, or with |r| > 1', () => {
+    const a = measured(R, 1, '0.1', 'a');
+    const b = measured(R, 1, '0.2', 'b');
+    const y = R.add(a, b);
+    expect(() => budget(R, y, { covariance: [['a', 'z', 0]] })).toThrow(expect.objectContaining({ code: 'UNKNOWN_INPUT' }));
+    expect(() => budget(R, y, { covariance: [['a', 'a', '0.01']] })).toThrow(expect.objectContaining({ code: 'INVALID_COVARIANCE' }));
+    expect(() => budget(R, y, { covariance: [['a', 'b', 0], ['b', 'a', 0]] })).toThrow(expect.objectContaining({ code: 'INVALID_COVARIANCE' }));
+    expect(() => budget(R, y, { covariance: [['a', 'b', '0.0201']] })).toThrow(expect.objectContaining({ code: 'INVALID_COVARIANCE' }));
+    expect(() => budget(R, y, { covariance: [['a', 'b', 'x']] })).toThrow(expect.objectContaining({ code: 'INVALID_COVARIANCE' }));
+    expect(() => budget(R, y, { covariance: [['a', 'b', '0.02']] })).not.toThrow();
+  });
+
+  it('budget refuses covariances that make the variance negative (not positive semi-definite)', () => {
+    const x = [0, 1, 2].map((i) => measured(R, 1, 1, `x${i}`));
+    const y = R.add(R.add(x[0]!, x[1]!), x[2]!);
+    expect(() => budget(R, y, { covariance: [['x0', 'x1', -1], ['x0', 'x2', -1], ['x1', 'x2', -1]] })).toThrow(expect.objectContaining({ code: 'INVALID_COVARIANCE' }));
+  });
+
+  it('measured refuses negative or unreadable sigmas and empty names', () => {
+    expect(() => measured(F, 1, -0.1, 'x')).toThrow(expect.objectContaining({ code: 'INVALID_SIGMA' }));
+    expect(() => measured(R, 1, 'abc', 'x')).toThrow(expect.objectContaining({ code: 'INVALID_SIGMA' }));
+    expect(() => measured(F, 1, Number.NaN, 'x')).toThrow(expect.objectContaining({ code: 'INVALID_SIGMA' }));
+    expect(() => measured(F, 1, 0.1, '')).toThrow(expect.objectContaining({ code: 'INVALID_ARGUMENT' }));
+    expect(() => measured(F, 'abc', 0.1, 'x')).toThrow(expect.objectContaining({ code: 'INVALID_NUMBER' }));
+  });
+
+  it('sensitivities lists each input with ∂y/∂x', () => {
+    const a = measured(R, 2, '0.1', 'a');
+    const b = measured(R, 5, '0.2', 'b');
+    expect(sensitivities(R, R.div(a, b)).map((s) => [s.name, r.toString(s.sensitivity)])).toEqual([
+      ['a', '1/5'],
+      ['b', '-2/25'],
+    ]);
+  });
+});
