@@ -11,3 +11,7 @@ export { solveQuadratic } from './quadratic.js';
 export { pythagorasResidual, quadrea, tripleQuadResidual, archimedesResidual, spreadLawResidual, crossLawResidual, tripleSpreadResidual } from './laws.js';
 export { stewartResidual, stewartQuadranceResidual, solveStewart, solveStewartQuadrances } from './stewart.js';
 export type { StewartChainages, StewartQuadrances } from './stewart.js';
+export { triangle } from './triangle.js';
+export type { Triangle } from './triangle.js';
+export { solveTriangle } from './solve-triangle.js';
+export type { TriangleMeasures } from './solve-triangle.js';

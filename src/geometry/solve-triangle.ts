@@ -1,0 +1,221 @@
+/**
+ * Solving a triangle from three of its six measures.
+ *
+ * @module geometry
+ */
+import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+import { QuadspreadError, show } from '../errors.js';
+import { type Root, type Surd, surd } from './surd.js';
+import type { Triangle } from './triangle.js';
+import { readQuadrance, readSpread } from './validate.js';
+
+/** Three of the six measures of a triangle (see {@link Triangle} for which is which). */
+export type TriangleMeasures<V> = Partial<Record<'Q1' | 'Q2' | 'Q3' | 's1' | 's2' | 's3', V>>;
+
+/** The operations the solver needs, over plain values (inexact) or surds (exact). */
+interface Field<T, R> {
+  lift(x: T): R;
+  /** p + q√d, d ≥ 0 */
+  root(p: T, q: T, d: T): R;
+  add(x: R, y: R): R;
+  sub(x: R, y: R): R;
+  mul(x: R, y: R): R;
+  div(x: R, y: R): R;
+  sign(x: R): -1 | 0 | 1;
+}
+
+function surdField<T>(A: Arithmetic<T>): Field<T, Surd<T>> {
+  return {
+    lift: (x) => surd(A, x),
+    root: (p, q, d) => surd(A, p, q, d),
+    add: (x, y) => x.add(y),
+    sub: (x, y) => x.sub(y),
+    mul: (x, y) => x.mul(y),
+    div: (x, y) => x.div(y),
+    sign: (x) => x.sign(),
+  };
+}
+
+function valueField<T>(A: Arithmetic<T>): Field<T, T> {
+  return {
+    lift: (x) => x,
+    root(p, q, d) {
+      const r = A.sqrt(d);
+      if (r === undefined) throw new QuadspreadError('UNSUPPORTED_OPERATION', 'solveTriangle(A, known)', `${A.name} has no square root of ${show(A.toString(d))}`);
+      return A.add(p, A.mul(q, r));
+    },
+    add: A.add,
+    sub: A.sub,
+    mul: A.mul,
+    div: A.div,
+    sign: A.sign,
+  };
+}
+
+const KEYS = ['Q1', 'Q2', 'Q3', 's1', 's2', 's3'] as const;
+
+/**
+ * Every triangle with the three given measures, each with all six measures and the
+ * quadrea. Any three of Q1, Q2, Q3, s1, s2, s3 that include a quadrance:
+ *
+ * - three quadrances: one triangle (spreads by the cross law);
+ * - two quadrances and the spread between them (e.g. Q1, Q2, s3): two triangles in
+ *   general, since a spread does not tell an angle from its supplement
+ *   (Q3 = Q1 + Q2 ± 2√(Q1·Q2·(1 − s3))); one when s3 = 1;
+ * - two quadrances and a spread opposite one of them (e.g. Q1, Q2, s1): the ambiguous
+ *   case, 0, 1 or 2 triangles (Q3 from the cross law, a quadratic);
+ * - one quadrance and two spreads in any position: the third spread from the triple
+ *   spread formula (two roots in general), then the quadrances by the spread law.
+ *
+ * **Exactness**: in an exact arithmetic every measure is a {@link Surd} (one radicand per
+ * triangle), exact; elsewhere values rounded by the arithmetic.
+ * **Order**: solutions come in increasing order of the measure that needed a root
+ * (the minus sign first).
+ * **No solution**: data that no proper triangle has — a zero quadrance or spread,
+ * quadrances breaking the triangle inequality (quadrea ≤ 0), an opposite spread too large
+ * for its sides, spreads that cannot meet — give an empty list, never NaN. In `float` and
+ * `decimal` a discriminant that rounds below zero also gives no solution, so a tangent
+ * (single-solution) case may come back empty.
+ *
+ * @param A the arithmetic
+ * @param known exactly three of `Q1, Q2, Q3` (≥ 0, square units) and `s1, s2, s3` (in [0, 1])
+ * @returns 0, 1 or 2 triangles
+ * @throws {QuadspreadError} `NEEDS_A_QUADRANCE` for three spreads; `INVALID_ARGUMENT` unless
+ * exactly three known measures are given (and no other keys); `NEGATIVE_QUADRANCE`,
+ * `SPREAD_OUT_OF_RANGE`, `INVALID_NUMBER` for bad values.
+ * @example
+ * ```ts
+ * import { rational, solveTriangle } from 'quadspread';
+ * solveTriangle(rational, { Q1: 25, Q2: 16, s3: '1/2' }).map((t) => t.Q3.toString());
+ * //=> ['41 - 20√2', '41 + 20√2']
+ * ```
+ */
+export function solveTriangle<T, E extends boolean>(A: Arithmetic<T, E>, known: TriangleMeasures<Numeric<T>>): Triangle<Root<T, E>>[] {
+  const w = 'solveTriangle(A, known)';
+  if (typeof known !== 'object' || known === null) throw new QuadspreadError('INVALID_ARGUMENT', w, `known = ${show(known)} is not an object`);
+  for (const k of Object.keys(known)) {
+    if (!(KEYS as readonly string[]).includes(k)) throw new QuadspreadError('INVALID_ARGUMENT', w, `unknown measure ${show(k)}; use Q1, Q2, Q3, s1, s2, s3`);
+  }
+  const Q: (T | undefined)[] = [];
+  const s: (T | undefined)[] = [];
+  let count = 0;
+  for (let i = 0; i < 3; i++) {
+    const q = known[KEYS[i]!];
+    const p = known[KEYS[i + 3]!];
+    Q.push(q === undefined ? undefined : readQuadrance(A, q, w, KEYS[i]!));
+    s.push(p === undefined ? undefined : readSpread(A, p, w, KEYS[i + 3]!));
+    count += (q === undefined ? 0 : 1) + (p === undefined ? 0 : 1);
+  }
+  if (count !== 3) throw new QuadspreadError('INVALID_ARGUMENT', w, `give exactly three measures; ${count} given`);
+  const nq = Q.filter((x) => x !== undefined).length;
+  if (nq === 0) throw new QuadspreadError('NEEDS_A_QUADRANCE', w, 'three spreads fix a triangle only up to scale: give a quadrance');
+  // A proper triangle has no zero quadrance or spread.
+  for (let i = 0; i < 3; i++) if ((Q[i] !== undefined && A.isZero(Q[i]!)) || (s[i] !== undefined && A.isZero(s[i]!))) return [];
+  const F = (A.exact ? surdField(A) : valueField(A)) as unknown as Field<T, Root<T, E>>;
+  return solve(A, F, Q, s, nq);
+}
+
+function solve<T, R>(A: Arithmetic<T>, F: Field<T, R>, Q: (T | undefined)[], s: (T | undefined)[], nq: number): Triangle<R>[] {
+  const two = A.from(2);
+  const four = A.from(4);
+  const make = (q: R[], p: R[], quadrea: R): Triangle<R> => ({ Q1: q[0]!, Q2: q[1]!, Q3: q[2]!, s1: p[0]!, s2: p[1]!, s3: p[2]!, quadrea });
+
+  if (nq === 3) {
+    const [a, b, c] = Q as T[];
+    // Archimedes' function = quadrea: Wildberger, Divine Proportions (2005), ch. 4.
+    const sum = A.add(A.add(a!, b!), c!);
+    const sq = A.add(A.add(A.mul(a!, a!), A.mul(b!, b!)), A.mul(c!, c!));
+    const qd = A.sub(A.mul(sum, sum), A.add(sq, sq));
+    if (A.sign(qd) <= 0) return [];
+    // quadrea = 4·Qj·Qk·si (cross law with the spread at Ai between sides Qj, Qk; derived).
+    const sp = (x: T, y: T) => F.lift(A.div(qd, A.mul(four, A.mul(x, y))));
+    return [make([F.lift(a!), F.lift(b!), F.lift(c!)], [sp(b!, c!), sp(a!, c!), sp(a!, b!)], F.lift(qd))];
+  }
+
+  if (nq === 2) {
+    const k = Q.findIndex((x) => x === undefined); // the missing quadrance
+    const i = (k + 1) % 3;
+    const j = (k + 2) % 3;
+    const Qi = Q[i]!;
+    const Qj = Q[j]!;
+    const out: Triangle<R>[] = [];
+    if (s[k] !== undefined) {
+      // Two sides and the spread between them. Cross law: (Qi + Qj − Qk)² = 4 Qi Qj (1 − sk),
+      // Wildberger, Divine Proportions (2005), ch. 6, solved for Qk.
+      const sk = s[k]!;
+      const d = A.mul(A.mul(Qi, Qj), A.sub(A.one, sk));
+      const base = A.add(Qi, Qj);
+      const quadrea = F.lift(A.mul(four, A.mul(A.mul(Qi, Qj), sk)));
+      const signs = A.isZero(d) ? [A.zero] : [A.neg(two), two];
+      for (const m of signs) {
+        const Qk = F.root(base, m, d);
+        if (F.sign(Qk) <= 0) continue;
+        // Spread law si/Qi = sk/Qk: Wildberger, Divine Proportions (2005), ch. 6.
+        const skR = F.lift(sk);
+        const q: R[] = [];
+        const p: R[] = [];
+        q[i] = F.lift(Qi); q[j] = F.lift(Qj); q[k] = Qk;
+        p[k] = skR;
+        p[i] = F.div(F.mul(skR, F.lift(Qi)), Qk);
+        p[j] = F.div(F.mul(skR, F.lift(Qj)), Qk);
+        out.push(make(q, p, quadrea));
+      }
+      return out;
+    }
+    // Two sides and a spread opposite one of them: the ambiguous case. Name the side with the
+    // spread `a` (opposite the given spread) and the other `b`.
+    const [ia, ib] = s[i] !== undefined ? [i, j] : [j, i];
+    const Qa = Q[ia]!;
+    const Qb = Q[ib]!;
+    const sa = s[ia]!;
+    // Cross law at A_a: (Qb + Qk − Qa)² = 4 Qb Qk (1 − sa) (Wildberger 2005, ch. 6), a quadratic in Qk:
+    // Qk = Qa + Qb − 2 Qb sa ± 2√(Qb (1 − sa)(Qa − Qb sa)) (derived).
+    const e = A.sub(Qa, A.mul(Qb, sa));
+    const d = A.mul(A.mul(Qb, A.sub(A.one, sa)), e);
+    if (A.sign(d) < 0) return [];
+    const base = A.sub(A.add(Qa, Qb), A.mul(two, A.mul(Qb, sa)));
+    const sb = A.div(A.mul(sa, Qb), Qa); // spread law
+    const signs = A.isZero(d) ? [A.zero] : [A.neg(two), two];
+    for (const m of signs) {
+      const Qk = F.root(base, m, d);
+      if (F.sign(Qk) <= 0) continue;
+      const saR = F.lift(sa);
+      const sk = F.div(F.mul(saR, Qk), F.lift(Qa)); // spread law sk/Qk = sa/Qa
+      const q: R[] = [];
+      const p: R[] = [];
+      q[ia] = F.lift(Qa); q[ib] = F.lift(Qb); q[k] = Qk;
+      p[ia] = saR; p[ib] = F.lift(sb); p[k] = sk;
+      // quadrea = 4·Qa·Qb·sk (the vertex A_k lies between the sides Qa and Qb).
+      out.push(make(q, p, F.mul(F.lift(A.mul(four, A.mul(Qa, Qb))), sk)));
+    }
+    return out;
+  }
+
+  // One quadrance and two spreads.
+  const i = Q.findIndex((x) => x !== undefined);
+  const c = s.findIndex((x) => x === undefined); // the missing spread
+  const a = (c + 1) % 3;
+  const b = (c + 2) % 3;
+  const sa = s[a]!;
+  const sb = s[b]!;
+  // Triple spread formula solved for sc: sc = sa + sb − 2 sa sb ± 2√(sa sb (1 − sa)(1 − sb)),
+  // Wildberger, Divine Proportions (2005), ch. 6 (solution derived).
+  const d = A.mul(A.mul(sa, sb), A.mul(A.sub(A.one, sa), A.sub(A.one, sb)));
+  const base = A.sub(A.add(sa, sb), A.mul(two, A.mul(sa, sb)));
+  const signs = A.isZero(d) ? [A.zero] : [A.neg(two), two];
+  const Qi = F.lift(Q[i]!);
+  const out: Triangle<R>[] = [];
+  for (const m of signs) {
+    const sc = F.root(base, m, d);
+    if (F.sign(sc) <= 0) continue;
+    const p: R[] = [];
+    p[a] = F.lift(sa); p[b] = F.lift(sb); p[c] = sc;
+    // Spread law Qj = Qi·sj/si: Wildberger, Divine Proportions (2005), ch. 6.
+    const ratio = F.div(Qi, p[i]!);
+    const q: R[] = [];
+    for (let j = 0; j < 3; j++) q[j] = j === i ? Qi : F.mul(ratio, p[j]!);
+    // quadrea = 4·Q1·Q2·s3 (derived from the cross law).
+    out.push(make(q, p, F.mul(F.mul(F.lift(four), F.mul(q[0]!, q[1]!)), p[2]!)));
+  }
+  return out;
+}

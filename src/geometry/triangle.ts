@@ -1,0 +1,86 @@
+/**
+ * The six measures of a triangle from its vertices.
+ *
+ * @module geometry
+ */
+import type { Arithmetic } from '../arithmetic/types.js';
+import { QuadspreadError, show } from '../errors.js';
+import type { Point } from './point.js';
+
+/**
+ * The measures of a triangle A1 A2 A3: `Q1 = Q(A2, A3)` is the quadrance opposite A1,
+ * `s1` the spread at A1 (likewise for 2 and 3), and `quadrea` = 16·area²
+ * = (Q1 + Q2 + Q3)² − 2(Q1² + Q2² + Q3²). `V` is the value type: `T` from
+ * {@link triangle}, `Root<T, E>` from {@link solveTriangle}.
+ */
+export interface Triangle<V> {
+  /** Quadrance opposite A1: Q(A2, A3), square units. */
+  Q1: V;
+  /** Quadrance opposite A2: Q(A1, A3), square units. */
+  Q2: V;
+  /** Quadrance opposite A3: Q(A1, A2), square units. */
+  Q3: V;
+  /** Spread at A1, in (0, 1]. */
+  s1: V;
+  /** Spread at A2, in (0, 1]. */
+  s2: V;
+  /** Spread at A3, in (0, 1]. */
+  s3: V;
+  /** 16·area², square units squared. */
+  quadrea: V;
+}
+
+/**
+ * The quadrances, spreads and quadrea of the triangle with vertices A1, A2, A3.
+ * Rational functions of the coordinates: exact in `rational`. With D = (A2 − A1) × (A3 − A1)
+ * (twice the signed area), s1 = D²/(Q2·Q3), s2 = D²/(Q1·Q3), s3 = D²/(Q1·Q2) and
+ * quadrea = 4·D².
+ *
+ * @param A the arithmetic
+ * @param A1 first vertex
+ * @param A2 second vertex
+ * @param A3 third vertex
+ * @returns `{ Q1, Q2, Q3, s1, s2, s3, quadrea }`
+ * @throws {QuadspreadError} `COINCIDENT_POINTS` when two vertices coincide;
+ * `COLLINEAR_POINTS` when the three are collinear (no proper triangle).
+ * @example
+ * ```ts
+ * import { rational, point, triangle } from 'quadspread';
+ * const t = triangle(rational, point(rational, 0, 0), point(rational, 4, 0), point(rational, 0, 3));
+ * [t.Q1, t.s1, t.s2, t.s3, t.quadrea].map((v) => rational.toString(v));
+ * //=> ['25', '1', '9/25', '16/25', '576']
+ * ```
+ */
+export function triangle<T>(A: Arithmetic<T>, A1: Point<T>, A2: Point<T>, A3: Point<T>): Triangle<T> {
+  const ux = A.sub(A2.x, A1.x); // A1 → A2
+  const uy = A.sub(A2.y, A1.y);
+  const vx = A.sub(A3.x, A1.x); // A1 → A3
+  const vy = A.sub(A3.y, A1.y);
+  const wx = A.sub(A3.x, A2.x); // A2 → A3
+  const wy = A.sub(A3.y, A2.y);
+  const Q1 = A.add(A.mul(wx, wx), A.mul(wy, wy));
+  const Q2 = A.add(A.mul(vx, vx), A.mul(vy, vy));
+  const Q3 = A.add(A.mul(ux, ux), A.mul(uy, uy));
+  if (A.isZero(Q1) || A.isZero(Q2) || A.isZero(Q3)) coincident(A, A1, A2, A3, Q1, Q2);
+  // Spread from the cross product, s = (u × v)²/(Q(u) Q(v)): Wildberger, Divine Proportions (2005), ch. 5;
+  // quadrea = 16·area² = 4·(u × v)² since |u × v| = 2·area (common practice).
+  const D = A.sub(A.mul(ux, vy), A.mul(uy, vx));
+  const D2 = A.mul(D, D);
+  if (A.isZero(D2)) {
+    throw new QuadspreadError('COLLINEAR_POINTS', 'triangle(A, A1, A2, A3)', `A1 (${show(A.toString(A1.x))}, ${show(A.toString(A1.y))}), A2 and A3 are collinear`);
+  }
+  return {
+    Q1,
+    Q2,
+    Q3,
+    s1: A.div(D2, A.mul(Q2, Q3)),
+    s2: A.div(D2, A.mul(Q1, Q3)),
+    s3: A.div(D2, A.mul(Q1, Q2)),
+    quadrea: A.mul(A.from(4), D2),
+  };
+}
+
+function coincident<T>(A: Arithmetic<T>, A1: Point<T>, A2: Point<T>, A3: Point<T>, Q1: T, Q2: T): never {
+  const [n1, n2, P] = A.isZero(Q1) ? ['A2', 'A3', A2] : A.isZero(Q2) ? ['A1', 'A3', A1] : ['A1', 'A2', A1];
+  throw new QuadspreadError('COINCIDENT_POINTS', 'triangle(A, A1, A2, A3)', `${n1} and ${n2} coincide at (${show(A.toString(P.x))}, ${show(A.toString(P.y))})`);
+}
