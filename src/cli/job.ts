@@ -1,0 +1,203 @@
+/**
+ * Running a job: check it against the schema, read every task (exit 2 on a bad value),
+ * compute each in the chosen arithmetic and again in `uncertain(float)` for the budgets
+ * (exit 3 when a computation has no solution), and build the report.
+ *
+ * @module cli
+ */
+import { QuadspreadError, budget, decimal, float, isSurd, measured, rational, uncertain } from '../index.js';
+import type { Arithmetic, LengthUnit } from '../index.js';
+import { show } from '../errors.js';
+import { JobInvalid, JobInvalidMany, JobUnsolvable } from './failure.js';
+import { CAUTION } from './report.js';
+import type { BudgetTerm, Quantity, Report, TaskReport } from './report.js';
+import { jobSchema } from './schema.js';
+import type { Env, JobContext, JobPoint, Outcome, TaskKind, Value } from './task.js';
+import { validate } from './validate.js';
+import { LENGTH_UNIT_NAMES, readLength } from './values.js';
+import type { Input } from './values.js';
+
+/** The arithmetics a job can run in. */
+export type ArithmeticName = 'rational' | 'decimal' | 'float';
+
+/** How to run a job. */
+export interface RunOptions {
+  arithmetic: ArithmeticName;
+  /** Significant digits shown (decimal works with digits + 10). */
+  digits: number;
+  /** Where the job came from, for the report header. */
+  source: string;
+}
+
+/** The arithmetic object for a name and a number of digits. */
+export function arithmeticFor(name: ArithmeticName, digits: number): Arithmetic<unknown, boolean> {
+  switch (name) {
+    case 'rational':
+      return rational as Arithmetic<unknown, boolean>;
+    case 'decimal':
+      return decimal(digits + 10) as Arithmetic<unknown, boolean>;
+    case 'float':
+      return float as Arithmetic<unknown, boolean>;
+  }
+}
+
+/** Parses job text as JSON, failing with exit 2 and the line and column of the fault. */
+export function parseJob(text: string): unknown {
+  try {
+    return JSON.parse(text) as unknown;
+  } catch (e) {
+    const msg = (e as Error).message;
+    const pos = /position (\d+)/.exec(msg);
+    let where = '';
+    if (pos) {
+      const at = Number(pos[1]);
+      const before = text.slice(0, at).split('\n');
+      where = `line ${before.length}, column ${before[before.length - 1]!.length + 1}`;
+    }
+    throw new JobInvalid(where, `the job file is not valid JSON (${msg.replace(/^JSON\.parse: /, '')})`);
+  }
+}
+
+function taskLabel(task: Record<string, unknown>, index: number): string {
+  const name = typeof task.name === 'string' ? ` "${task.name}"` : '';
+  return `tasks[${index}] (${String(task.kind)}${name})`;
+}
+
+function reasonOf(e: QuadspreadError): string {
+  return e.message.replace(/^quadspread /, '');
+}
+
+const SIGMA_DIGITS = 2;
+
+function formatQuantity<V>(A: Arithmetic<V, boolean>, q: { name: string; label: string; unit: string; value: Value<V>; approx?: boolean }, digits: number, approx0: boolean): Quantity {
+  const approx = approx0 || q.approx === true;
+  const out: Quantity = { name: q.name, label: q.label, unit: q.unit, value: '' };
+  if (isSurd(q.value)) {
+    out.value = q.value.toPrecision(digits);
+    if (A.exact && !approx) out.exact = q.value.toString();
+  } else {
+    out.value = A.toPrecision(q.value as V, digits);
+    if (A.exact && !approx) out.exact = A.toString(q.value as V);
+  }
+  return out;
+}
+
+function precision(x: number, digits: number): string {
+  if (x === 0) return '0';
+  return float.toPrecision(x, digits);
+}
+
+/** Runs a job that has been parsed from JSON, returning its report. */
+export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOptions): Report {
+  const schema = jobSchema(kinds);
+  const problems = validate(job, schema);
+  if (problems.length > 0) throw new JobInvalidMany(problems);
+  const j = job as { title?: string; units?: { length?: LengthUnit }; points?: Record<string, Record<string, unknown>>; tasks: Record<string, unknown>[] };
+  const unit: LengthUnit = j.units?.length ?? 'm';
+  const unitName = LENGTH_UNIT_NAMES[unit];
+  const points = new Map<string, JobPoint>();
+  for (const [name, p] of Object.entries(j.points ?? {})) {
+    const path = `points[${JSON.stringify(name)}]`;
+    const pt: JobPoint = {
+      name,
+      east: readLength(p.east, `${path}.east`, unit, `${name} east`, 'coordinate'),
+      north: readLength(p.north, `${path}.north`, unit, `${name} north`, 'coordinate'),
+    };
+    if (p.height !== undefined) pt.height = readLength(p.height, `${path}.height`, unit, `${name} height`, 'height');
+    points.set(name, pt);
+  }
+  const ctx: JobContext = {
+    unit,
+    unitName,
+    points,
+    point(name, path) {
+      const p = typeof name === 'string' ? points.get(name) : undefined;
+      if (!p) {
+        const known = [...points.keys()];
+        throw new JobInvalid(path, `${show(name)} is not a point of this job${known.length ? ` (points: ${known.slice(0, 12).join(', ')}${known.length > 12 ? ', …' : ''})` : ' (the job has no "points")'}`);
+      }
+      return p;
+    },
+  };
+  const byKind = new Map(kinds.map((k) => [k.kind, k]));
+  const prepared = j.tasks.map((t, i) => byKind.get(t.kind as string)!.prepare(t, `tasks[${i}]`, ctx));
+
+  const A = arithmeticFor(options.arithmetic, options.digits);
+  const U = uncertain(float);
+  const tasks: TaskReport[] = [];
+  prepared.forEach((p, i) => {
+    const task = j.tasks[i]!;
+    const approx = p.inputs.some((x) => x.angle);
+    const baseEnv: Env<unknown> = {
+      A,
+      get: (x: Input) => A.from(x.value),
+      num: (x) => (isSurd(x) ? x.toNumber() : A.toNumber(x)),
+      drawing: true,
+    };
+    let base: Outcome<unknown>;
+    try {
+      base = p.compute(baseEnv);
+    } catch (e) {
+      if (e instanceof QuadspreadError) throw new JobUnsolvable(taskLabel(task, i), reasonOf(e));
+      throw e;
+    }
+    const report: TaskReport = {
+      index: i,
+      kind: String(task.kind),
+      name: typeof task.name === 'string' ? task.name : `${String(task.kind)} ${i + 1}`,
+      summary: p.summary,
+      results: base.results.map((q) => formatQuantity(A, q, options.digits, approx)),
+      checks: base.checks.map((c) => {
+        const f = formatQuantity(A, c, Math.min(options.digits, 6), true);
+        return { name: c.name, label: c.label, value: f.value, tolerance: c.tolerance, unit: c.unit, pass: c.pass };
+      }),
+      notes: [...base.notes],
+      ...(base.sketch ? { sketch: base.sketch } : {}),
+    };
+    if (approx && A.exact) report.notes.push('Angle readings are transcendental: their spreads are rationals within a stated tolerance, so no exact form is shown.');
+    if (p.inputs.some((x) => x.sigma !== undefined)) {
+      try {
+        const uEnv: Env<unknown> = {
+          A: U as Arithmetic<unknown, boolean>,
+          get: (x: Input) => (x.sigma !== undefined ? measured(U, float.from(x.value), float.from(x.sigma), x.name) : U.from(float.from(x.value))),
+          num: () => 0,
+          drawing: false,
+        };
+        const u = p.compute(uEnv);
+        for (const q of u.results) {
+          const target = report.results.find((r) => r.name === q.name);
+          if (!target || isSurd(q.value)) continue;
+          const b = budget(U, q.value as never);
+          if (b.contributions.length === 0) continue;
+          target.sigma = precision(b.sigma, SIGMA_DIGITS);
+          target.budget = b.contributions.map(
+            (c): BudgetTerm => ({
+              input: c.name,
+              sensitivity: precision(c.sensitivity, 4),
+              part: precision(Math.sqrt(c.contribution), SIGMA_DIGITS),
+              share: b.variance > 0 ? (Math.round((1000 * c.contribution) / b.variance) / 10).toFixed(1) : '0.0',
+            }),
+          );
+        }
+      } catch (e) {
+        if (!(e instanceof QuadspreadError)) throw e;
+        report.notes.push(`Uncertainties could not be propagated to first order: ${reasonOf(e)}.`);
+      }
+    }
+    tasks.push(report);
+  });
+  const all = tasks.flatMap((t) => t.checks);
+  const passed = all.filter((c) => c.pass).length;
+  return {
+    format: 'quadspread-report',
+    version: 1,
+    title: j.title ?? 'quadspread job',
+    source: options.source,
+    arithmetic: A.name,
+    digits: options.digits,
+    lengthUnit: unitName,
+    tasks,
+    summary: { checks: all.length, passed, failed: all.length - passed },
+    caution: CAUTION,
+  };
+}

@@ -1,0 +1,142 @@
+/**
+ * The command line: `quadspread demo`, `quadspread run <job.json>`,
+ * `quadspread batch <kind> <file.csv>`, `quadspread schema <job|report>`.
+ *
+ * @module cli
+ */
+import { readFileSync } from 'node:fs';
+import { Argument, Command, CommanderError, InvalidArgumentError, Option } from 'commander';
+import { writeFilesAtomic } from './atomic.js';
+import { BATCH_KINDS, runBatch } from './batch.js';
+import { DEMO_JOB } from './demo-job.js';
+import { EXIT, JobInvalid, JobUnsolvable } from './failure.js';
+import { parseJob, runJob } from './job.js';
+import type { ArithmeticName } from './job.js';
+import { renderJson } from './render-json.js';
+import { renderMarkdown } from './render-markdown.js';
+import { renderText } from './render-text.js';
+import { REPORT_SCHEMA } from './report-schema.js';
+import { jobSchema } from './schema.js';
+import { renderSketch } from './sketch.js';
+import { TASK_KINDS } from './tasks/index.js';
+
+/** Where the program writes, so tests and embedders can capture it. */
+export interface Io {
+  stdout: (text: string) => void;
+  stderr: (text: string) => void;
+  /** Whether stderr is a terminal (the batch progress indicator shows only then). */
+  stderrIsTTY: boolean;
+}
+
+/** The version printed by `--version`. */
+export const VERSION = '0.1.0';
+
+interface ReportOptions {
+  arithmetic: ArithmeticName;
+  digits: number;
+  format: 'text' | 'markdown' | 'json';
+  sketch?: string;
+  out?: string;
+}
+
+function digitsOption(value: string): number {
+  const n = Number(value);
+  if (!/^\d+$/.test(value) || n < 1 || n > 100) throw new InvalidArgumentError(`${JSON.stringify(value)} is not a whole number from 1 to 100`);
+  return n;
+}
+
+function addReportOptions(cmd: Command): Command {
+  return cmd
+    .addOption(new Option('-a, --arithmetic <kind>', 'the arithmetic: exact fractions, big decimals or JS floats').choices(['rational', 'decimal', 'float']).default('rational'))
+    .addOption(new Option('-d, --digits <n>', 'significant digits shown (decimal works with n + 10)').argParser(digitsOption).default(10))
+    .addOption(new Option('-f, --format <format>', 'report format').choices(['text', 'markdown', 'json']).default('text'))
+    .option('-s, --sketch <file.svg>', 'also write an SVG sketch of the configuration to this file')
+    .option('-o, --out <file>', 'write the report to this file instead of the standard output');
+}
+
+function report(job: unknown, source: string, o: ReportOptions, io: Io): void {
+  const r = runJob(job, TASK_KINDS, { arithmetic: o.arithmetic, digits: o.digits, source });
+  const text = o.format === 'json' ? renderJson(r) : o.format === 'markdown' ? renderMarkdown(r) : renderText(r);
+  const files: { target: string; text: string }[] = [];
+  if (o.out !== undefined) files.push({ target: o.out, text });
+  if (o.sketch !== undefined) files.push({ target: o.sketch, text: renderSketch(r) });
+  writeFilesAtomic(files);
+  if (o.out === undefined) io.stdout(text);
+  else io.stderr(`report written to ${o.out}\n`);
+  if (o.sketch !== undefined) io.stderr(`sketch written to ${o.sketch}\n`);
+}
+
+function readText(file: string, what: string): string {
+  try {
+    return readFileSync(file, 'utf8');
+  } catch (e) {
+    throw new JobInvalid('', `cannot read the ${what} ${JSON.stringify(file)}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`);
+  }
+}
+
+/** Builds the commander program. */
+export function program(io: Io): Command {
+  const p = new Command('quadspread');
+  p.description('Runs survey computation jobs in rational trigonometry (quadrance and spread) and reports results, uncertainties and checks.')
+    .version(VERSION)
+    .configureOutput({ writeOut: io.stdout, writeErr: io.stderr })
+    .exitOverride()
+    .showHelpAfterError('(add --help for usage)');
+
+  addReportOptions(
+    p.command('demo')
+      .description('run the bundled demonstration job (invented places) and print its report')
+      .option('--job', 'print the demonstration job file instead of running it'),
+  ).action((o: ReportOptions & { job?: boolean }) => {
+    if (o.job) {
+      io.stdout(JSON.stringify(DEMO_JOB, null, 2) + '\n');
+      return;
+    }
+    report(DEMO_JOB, 'demo', o, io);
+  });
+
+  addReportOptions(p.command('run').description('run a job file (JSON; see docs/job-schema.json) and print its report').argument('<job.json>', 'the job file')).action(
+    (file: string, o: ReportOptions) => {
+      report(parseJob(readText(file, 'job file')), file, o, io);
+    },
+  );
+
+  p.command('batch')
+    .description('stream a CSV of many cases through one computation, writing a CSV of results')
+    .argument('<kind>', `what each row is: ${Object.keys(BATCH_KINDS).join(', ')}`)
+    .argument('<file.csv>', 'the input CSV (first line: column names); - for the standard input')
+    .addOption(new Option('-a, --arithmetic <kind>', 'the arithmetic').choices(['rational', 'decimal', 'float']).default('float'))
+    .addOption(new Option('-d, --digits <n>', 'significant digits written').argParser(digitsOption).default(10))
+    .option('-o, --out <file>', 'write the results to this file (atomically) instead of the standard output')
+    .action(async (kind: string, file: string, o: { arithmetic: ArithmeticName; digits: number; out?: string }) => {
+      await runBatch(kind, file, o, io);
+    });
+
+  p.command('schema')
+    .description('print the JSON Schema of job files or of JSON reports')
+    .addArgument(new Argument('<which>', 'job or report').choices(['job', 'report']))
+    .action((which: string) => {
+      io.stdout(JSON.stringify(which === 'job' ? jobSchema(TASK_KINDS) : REPORT_SCHEMA, null, 2) + '\n');
+    });
+  return p;
+}
+
+/** Runs the command line with `argv` (without `node` and the script), returning the exit code. */
+export async function main(argv: string[], io: Io): Promise<number> {
+  const p = program(io);
+  try {
+    await p.parseAsync(argv, { from: 'user' });
+    return EXIT.OK;
+  } catch (e) {
+    if (e instanceof CommanderError) {
+      // --help and --version end with exit code 0; usage errors are bad input (2).
+      return e.exitCode === 0 ? EXIT.OK : EXIT.INVALID;
+    }
+    if (e instanceof JobInvalid || e instanceof JobUnsolvable) {
+      io.stderr(`quadspread: ${e.message}\n`);
+      return e.exitCode;
+    }
+    io.stderr(`quadspread: internal error (please report it): ${(e as Error).stack ?? String(e)}\n`);
+    return EXIT.INTERNAL;
+  }
+}

@@ -1,0 +1,12 @@
+/**
+ * Renders a report as JSON for machines (the shape is `docs/report-schema.json`).
+ *
+ * @module cli
+ */
+import type { Report } from './report.js';
+
+/** The report as JSON text (sketch data left out: it goes to `--sketch`). */
+export function renderJson(report: Report): string {
+  const clean = { ...report, tasks: report.tasks.map(({ sketch: _sketch, ...t }) => t) };
+  return JSON.stringify(clean, null, 2) + '\n';
+}

@@ -1,0 +1,60 @@
+/**
+ * Renders a report as Markdown, for a file to keep with the job.
+ *
+ * @module cli
+ */
+import type { Report } from './report.js';
+import { BUDGET_SHOWN, shortExact } from './render-text.js';
+
+/** Escapes text for a Markdown table cell. */
+function cell(text: string): string {
+  return text.replace(/\\/g, '\\\\').replace(/\|/g, '\\|').replace(/\n/g, ' ');
+}
+
+function withUnit(value: string, unit: string): string {
+  return unit === '' ? value : `${value} ${unit}`;
+}
+
+/** The report as Markdown: a heading per task, a table of results, a table of checks. */
+export function renderMarkdown(report: Report): string {
+  const out: string[] = [];
+  out.push(`# ${report.title}`);
+  out.push('');
+  out.push(`Source: \`${report.source}\` · arithmetic: \`${report.arithmetic}\` · ${report.digits} significant digits · lengths in ${report.lengthUnit}`);
+  for (const t of report.tasks) {
+    out.push('');
+    out.push(`## ${t.index + 1}. ${cell(t.name)} (${t.kind})`);
+    out.push('');
+    out.push(t.summary);
+    if (t.results.length > 0) {
+      out.push('');
+      out.push('| quantity | value | ± σ | exact form | budget (share of variance) |');
+      out.push('|---|---|---|---|---|');
+      for (const q of t.results) {
+        const all = q.budget ?? [];
+        const rest = all.slice(BUDGET_SHOWN);
+        const budget = [...all.slice(0, BUDGET_SHOWN).map((b) => `${b.input} ${b.share} %`), ...(rest.length ? [`${rest.length} more ${rest.reduce((s, b) => s + Number(b.share), 0).toFixed(1)} %`] : [])].join(', ');
+        const exact = q.exact !== undefined && q.exact !== q.value ? `\`${shortExact(q.exact)}\`` : '';
+        out.push(`| ${cell(q.label)} (\`${q.name}\`) | ${cell(withUnit(q.value, q.unit))} | ${q.sigma !== undefined ? cell(withUnit(q.sigma, q.unit)) : ''} | ${cell(exact)} | ${cell(budget)} |`);
+      }
+    }
+    if (t.checks.length > 0) {
+      out.push('');
+      out.push('| check | value | tolerance | result |');
+      out.push('|---|---|---|---|');
+      for (const c of t.checks) {
+        out.push(`| ${cell(c.label)} | ${cell(withUnit(c.value, c.unit))} | ${cell(withUnit(c.tolerance, c.unit))} | ${c.pass ? '**pass**' : '**FAIL**'} |`);
+      }
+    }
+    if (t.notes.length > 0) {
+      out.push('');
+      for (const n of t.notes) out.push(`- ${n}`);
+    }
+  }
+  out.push('');
+  const s = report.summary;
+  out.push(`**Checks: ${s.passed} passed, ${s.failed} failed (of ${s.checks}).**`);
+  out.push('');
+  out.push(`> **Caution.** ${report.caution}`);
+  return out.join('\n') + '\n';
+}

@@ -1,0 +1,56 @@
+/**
+ * Renders a report as plain text for a terminal.
+ *
+ * @module cli
+ */
+import type { Quantity, Report } from './report.js';
+
+const EXACT_SHOWN = 72;
+/** Budget lines shown per quantity in text and Markdown (JSON has them all). */
+export const BUDGET_SHOWN = 3;
+
+/** The exact form as shown in text and Markdown: long forms are cut, with their length said. */
+export function shortExact(exact: string): string {
+  if (exact.length <= EXACT_SHOWN) return exact;
+  return `${exact.slice(0, EXACT_SHOWN - 12)}… (${exact.length} characters; full form in --format json)`;
+}
+
+function withUnit(value: string, unit: string): string {
+  return unit === '' ? value : `${value} ${unit}`;
+}
+
+function quantityLines(q: Quantity): string[] {
+  const sigma = q.sigma !== undefined ? `  ± ${withUnit(q.sigma, q.unit)}` : '';
+  const lines = [`  ${q.label} [${q.name}]: ${withUnit(q.value, q.unit)}${sigma}`];
+  if (q.exact !== undefined && q.exact !== q.value) lines.push(`      exact: ${shortExact(q.exact)}`);
+  if (q.budget && q.budget.length > 0) {
+    const top = q.budget.slice(0, BUDGET_SHOWN).map((b) => `${b.input} ${b.share} % (${withUnit(b.part, q.unit)})`);
+    const rest = q.budget.slice(BUDGET_SHOWN);
+    if (rest.length > 0) top.push(`${rest.length} other input${rest.length === 1 ? '' : 's'} ${rest.reduce((s, b) => s + Number(b.share), 0).toFixed(1)} %`);
+    lines.push(`      budget: ${top.join('; ')}`);
+  }
+  return lines;
+}
+
+/** The report as text: a header, each task's results and checks, the tally, the caution. */
+export function renderText(report: Report): string {
+  const out: string[] = [];
+  out.push(`quadspread report: ${report.title}`);
+  out.push(`source: ${report.source}; arithmetic: ${report.arithmetic}; ${report.digits} significant digits; lengths in ${report.lengthUnit}`);
+  for (const t of report.tasks) {
+    out.push('');
+    out.push(`[${t.index + 1}] ${t.name} (${t.kind})`);
+    out.push(`  ${t.summary}`);
+    for (const q of t.results) out.push(...quantityLines(q));
+    for (const c of t.checks) {
+      out.push(`  check ${c.pass ? 'PASS' : 'FAIL'}: ${c.label}: ${withUnit(c.value, c.unit)} (tolerance ${withUnit(c.tolerance, c.unit)})`);
+    }
+    for (const n of t.notes) out.push(`  note: ${n}`);
+  }
+  out.push('');
+  const s = report.summary;
+  out.push(`checks: ${s.passed} passed, ${s.failed} failed (of ${s.checks})${s.failed > 0 ? ' -- SEE FAILED CHECKS ABOVE' : ''}`);
+  out.push('');
+  out.push(report.caution);
+  return out.join('\n') + '\n';
+}

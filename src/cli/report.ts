@@ -1,0 +1,110 @@
+/**
+ * The report model: what a job run produces, before it is rendered as text, Markdown or
+ * JSON. `docs/report-schema.json` describes the JSON form.
+ *
+ * @module cli
+ */
+
+/** The caution every report ends with. */
+export const CAUTION =
+  'A computational aid: check every result independently before relying on it. ' +
+  'Design and setting-out follow local codes and licensed practice.';
+
+/** One term of an uncertainty budget (GUM, JCGM 100:2008 §5.1.2, eq. (10)). */
+export interface BudgetTerm {
+  /** The input, as named in the job (e.g. `S2.vertical`). */
+  input: string;
+  /** ∂result/∂input, in result units per input unit. */
+  sensitivity: string;
+  /** |sensitivity| · u(input): this input's part of the standard uncertainty, in result units. */
+  part: string;
+  /** This input's share of the variance, in percent. */
+  share: string;
+}
+
+/** A computed quantity. */
+export interface Quantity {
+  /** A short name, unique within the task (e.g. `height`, `Q3`). */
+  name: string;
+  /** What it is, in words. */
+  label: string;
+  /** The unit of `value` (`m`, `m²`, `%`, `°`, or `` for pure numbers such as spreads). */
+  unit: string;
+  /** The decimal value rounded to the report's significant digits. */
+  value: string;
+  /** The exact form (a fraction, or a surd a + b√d), when the arithmetic is exact and the inputs were exact. */
+  exact?: string;
+  /** Standard uncertainty, in `unit`, when the inputs carry uncertainties. */
+  sigma?: string;
+  /** The uncertainty budget, largest share first. */
+  budget?: BudgetTerm[];
+}
+
+/** A pass/fail check against a stated tolerance. */
+export interface Check {
+  /** A short name (e.g. `misclosure`). */
+  name: string;
+  /** What is compared, in words. */
+  label: string;
+  /** The measured discrepancy or figure, rounded. */
+  value: string;
+  /** The tolerance, as stated (e.g. `≤ 0.050`, `≥ 5000`). */
+  tolerance: string;
+  /** Unit of value and tolerance. */
+  unit: string;
+  /** Whether the check passed. */
+  pass: boolean;
+}
+
+/** Drawing primitives for the sketch, in world units (plan: east/north; elevation: distance/height). */
+export interface SketchView {
+  /** Panel title. */
+  title: string;
+  /** `plan` (x east, y north) or `elevation` (x horizontal distance, y height). */
+  view: 'plan' | 'elevation';
+  points: { name: string; x: number; y: number; role: 'station' | 'control' | 'target' | 'foot' | 'computed' }[];
+  lines: { x1: number; y1: number; x2: number; y2: number; role: 'sight' | 'course' | 'boundary' | 'base' | 'path' | 'adjusted' | 'ground'; label?: string }[];
+  /** Free labels (e.g. a computed value written near a point). */
+  notes: { x: number; y: number; text: string }[];
+}
+
+/** The report of one task. */
+export interface TaskReport {
+  /** Position in the job's task list. */
+  index: number;
+  /** The task kind (`height`, `traverse`, …). */
+  kind: string;
+  /** The task's name from the job, or a default. */
+  name: string;
+  /** One line saying what was computed. */
+  summary: string;
+  results: Quantity[];
+  checks: Check[];
+  /** Notes: assumptions, which root was taken, what the sketch cannot show. */
+  notes: string[];
+  /** Drawing data for `--sketch` (not part of the JSON report). */
+  sketch?: SketchView[];
+}
+
+/** A whole report. */
+export interface Report {
+  /** Always `quadspread-report`. */
+  format: 'quadspread-report';
+  /** Version of the report format. */
+  version: 1;
+  /** The job's title. */
+  title: string;
+  /** Where the job came from (a file name, or `demo`). */
+  source: string;
+  /** The arithmetic used (`rational`, `decimal(30)`, `float`). */
+  arithmetic: string;
+  /** Significant digits of the decimal values shown. */
+  digits: number;
+  /** Length unit of the job. */
+  lengthUnit: string;
+  tasks: TaskReport[];
+  /** How many checks passed and failed. */
+  summary: { checks: number; passed: number; failed: number };
+  /** The closing caution. */
+  caution: string;
+}

@@ -1,0 +1,10 @@
+/**
+ * The task kinds the runner knows, in the order the schema and the docs list them.
+ *
+ * @module cli
+ */
+import type { TaskKind } from '../task.js';
+import { areaTask } from './area.js';
+import { traverseTask } from './traverse.js';
+
+export const TASK_KINDS: readonly TaskKind[] = [traverseTask, areaTask];

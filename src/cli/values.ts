@@ -1,0 +1,219 @@
+/**
+ * Reading the values of a job file: lengths with units, angles, vertical readings, and
+ * the `{ "value": …, "sigma": … }` form that gives any of them a standard uncertainty.
+ *
+ * Values are read exactly (in `rational`, through the library's readings) into canonical
+ * text — degrees for angles, the job's length unit for lengths — so that each run of a
+ * task can bring them into its own arithmetic with `A.from`. Every error names the place
+ * in the job and the value.
+ *
+ * @module cli
+ */
+import {
+  QuadspreadError,
+  angleToDegrees,
+  convertLength,
+  rational,
+  verticalFromAngle,
+  verticalFromSlope,
+  vertical,
+} from '../index.js';
+import type { AngleUnit, Arithmetic, LengthUnit, VerticalReading } from '../index.js';
+import { show } from '../errors.js';
+import { JobInvalid } from './failure.js';
+
+const R = rational;
+
+/** A scalar input of a task: canonical text of its value (and sigma), and a name for budgets. */
+export interface Input {
+  /** The name shown in uncertainty budgets (e.g. `S2 elevation`). */
+  name: string;
+  /** The value as exact text (`1251/100`), in degrees or the job's length unit. */
+  value: string;
+  /** Its standard uncertainty as exact text, same unit as `value`; absent when none was given. */
+  sigma?: string;
+  /** Whether the value is an angle (its spread is transcendental: no exact form follows). */
+  angle: boolean;
+}
+
+/** The length units a job may use. */
+export const LENGTH_UNITS: readonly LengthUnit[] = ['m', 'km', 'ft', 'us-ft', 'ch', 'lk', 'us-ch', 'us-lk', 'mi'];
+
+/** Words for the length units, for reports (`m`, `ft`, `US survey ft`, …). */
+export const LENGTH_UNIT_NAMES: Record<LengthUnit, string> = {
+  m: 'm', km: 'km', ft: 'ft', 'us-ft': 'US survey ft', ch: 'ch', lk: 'lk', 'us-ch': 'US survey ch', 'us-lk': 'US survey lk', mi: 'mi',
+};
+
+const LENGTH_TEXT = /^\s*([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?(?:\s*\/\s*\d+)?)\s*([A-Za-z-]+)?\s*$/;
+
+function reason(e: unknown): string {
+  if (e instanceof QuadspreadError) {
+    const m = /^quadspread [A-Z_]+: [^:]*: (.*)$/s.exec(e.message);
+    return m ? m[1]! : e.message;
+  }
+  throw e;
+}
+
+/** The `{ value, sigma }` form: returns the parts, or the value alone. */
+function splitMeasured(x: unknown): { value: unknown; sigma?: unknown; measuredForm: boolean } {
+  if (typeof x === 'object' && x !== null && !Array.isArray(x) && 'value' in x) {
+    const o = x as { value: unknown; sigma?: unknown };
+    return { value: o.value, ...(o.sigma !== undefined ? { sigma: o.sigma } : {}), measuredForm: true };
+  }
+  return { value: x, measuredForm: false };
+}
+
+/** Reads a length (number in the job's unit, or text such as `120.5 m`, `395 ft`, `5 mm`) into the job's unit, exactly. */
+export function lengthText(x: unknown, path: string, unit: LengthUnit, what = 'length'): string {
+  if (typeof x === 'number') {
+    try {
+      return R.toString(R.from(x));
+    } catch (e) {
+      throw new JobInvalid(path, `${show(x)} is not a valid ${what}: ${reason(e)}`);
+    }
+  }
+  if (typeof x !== 'string') throw new JobInvalid(path, `${show(x)} is not a valid ${what} (give a number or text such as "120.5 m")`);
+  const m = LENGTH_TEXT.exec(x);
+  if (!m) throw new JobInvalid(path, `${show(x)} is not a valid ${what} (write a number with an optional unit, such as "120.5 m" or "395.2 ft")`);
+  const given = m[2];
+  try {
+    const v = R.from(m[1]!.replace(/\s+/g, ''));
+    if (given === undefined) return R.toString(v);
+    if (given === 'mm') return R.toString(convertLength(R, R.div(v, R.from(1000)), 'm', unit));
+    if (!(LENGTH_UNITS as readonly string[]).includes(given)) {
+      throw new JobInvalid(path, `${show(x)} is not a valid ${what}: unknown unit "${given}" (use ${['mm', ...LENGTH_UNITS].join(', ')})`);
+    }
+    return R.toString(convertLength(R, v, given as LengthUnit, unit));
+  } catch (e) {
+    if (e instanceof JobInvalid) throw e;
+    throw new JobInvalid(path, `${show(x)} is not a valid ${what}: ${reason(e)}`);
+  }
+}
+
+/** Reads a length input, with its sigma when given as `{ value, sigma }`. */
+export function readLength(x: unknown, path: string, unit: LengthUnit, name: string, what = 'length'): Input {
+  const m = splitMeasured(x);
+  const valuePath = m.measuredForm ? `${path}.value` : path;
+  const value = lengthText(m.value, valuePath, unit, what);
+  const input: Input = { name, value, angle: false };
+  if (m.sigma !== undefined) input.sigma = readSigma(() => lengthText(m.sigma, `${path}.sigma`, unit, 'standard uncertainty'), `${path}.sigma`, m.sigma);
+  return input;
+}
+
+/** Requires a length to be positive. */
+export function positive(input: Input, path: string, what: string): Input {
+  if (R.sign(R.from(input.value)) <= 0) throw new JobInvalid(path, `${input.value} is not a valid ${what}: it must be greater than zero`);
+  return input;
+}
+
+function readSigma(read: () => string, path: string, raw: unknown): string {
+  const s = read();
+  if (R.sign(R.from(s)) < 0) throw new JobInvalid(path, `${show(raw)} is not a valid standard uncertainty: it is negative`);
+  return s;
+}
+
+const ANGLE_SUFFIX = /^\s*(.*?)\s*(gon|mil|rad|deg)\s*$/;
+
+/** Reads an angle (decimal degrees, DMS text, or a number with `gon`, `mil`, `rad`) into exact degrees text. */
+export function angleText(x: unknown, path: string, what = 'angle'): string {
+  if (typeof x !== 'number' && typeof x !== 'string') throw new JobInvalid(path, `${show(x)} is not a valid ${what}`);
+  try {
+    if (typeof x === 'string') {
+      const m = ANGLE_SUFFIX.exec(x);
+      if (m) return R.toString(angleToDegrees(R, m[1]!, m[2] as AngleUnit));
+    }
+    return R.toString(angleToDegrees(R, x));
+  } catch (e) {
+    throw new JobInvalid(path, `${show(x)} is not a valid ${what}: ${reason(e)}`);
+  }
+}
+
+/** Reads an angle input in degrees, with its sigma (an angle too, e.g. `5"`) when given as `{ value, sigma }`. */
+export function readAngle(x: unknown, path: string, name: string, what = 'angle'): Input {
+  const m = splitMeasured(x);
+  const value = angleText(m.value, m.measuredForm ? `${path}.value` : path, what);
+  const input: Input = { name, value, angle: true };
+  if (m.sigma !== undefined) input.sigma = readSigma(() => angleText(m.sigma, `${path}.sigma`, 'standard uncertainty'), `${path}.sigma`, m.sigma);
+  return input;
+}
+
+/** A plain number (a spread, a ratio) with an optional sigma. */
+export function readNumber(x: unknown, path: string, name: string, what = 'number'): Input {
+  const m = splitMeasured(x);
+  const read = (v: unknown, p: string, w: string): string => {
+    try {
+      if (typeof v !== 'number' && typeof v !== 'string') throw new JobInvalid(p, `${show(v)} is not a valid ${w}`);
+      return R.toString(R.from(v));
+    } catch (e) {
+      if (e instanceof JobInvalid) throw e;
+      throw new JobInvalid(p, `${show(v)} is not a valid ${w}: ${reason(e)}`);
+    }
+  };
+  const input: Input = { name, value: read(m.value, m.measuredForm ? `${path}.value` : path, what), angle: false };
+  if (m.sigma !== undefined) input.sigma = readSigma(() => read(m.sigma, `${path}.sigma`, 'standard uncertainty'), `${path}.sigma`, m.sigma);
+  return input;
+}
+
+/** How a vertical reading was given. */
+export type VerticalSpec =
+  | { form: 'elevation' | 'zenith'; input: Input; text: string }
+  | { form: 'slope'; text: string }
+  | { form: 'spread'; input: Input; sign: 1 | -1; text: string };
+
+/**
+ * Reads a vertical reading: text or a number is an elevation angle (above the horizon
+ * positive); `{ "zenith": … }`, `{ "elevation": … }`, `{ "slope": "8%" }` or
+ * `{ "spread": "1/10", "below": true }` say which it is; `sigma` beside an angle is its
+ * standard uncertainty (an angle, e.g. `5"`).
+ */
+export function readVertical(x: unknown, path: string, name: string): VerticalSpec {
+  let spec: VerticalSpec;
+  if (typeof x === 'string' || typeof x === 'number') {
+    spec = { form: 'elevation', input: readAngle(x, path, `${name} elevation`, 'elevation angle'), text: String(x) };
+  } else if (typeof x === 'object' && x !== null) {
+    const o = x as Record<string, unknown>;
+    const sigma = o.sigma;
+    const withSigma = (v: unknown): unknown => (sigma === undefined ? v : { value: v, sigma });
+    if ('elevation' in o) spec = { form: 'elevation', input: readAngle(withSigma(o.elevation), `${path}.elevation`, `${name} elevation`, 'elevation angle'), text: String(o.elevation) };
+    else if ('zenith' in o) spec = { form: 'zenith', input: readAngle(withSigma(o.zenith), `${path}.zenith`, `${name} zenith`, 'zenith angle'), text: String(o.zenith) };
+    else if ('slope' in o) {
+      if (sigma !== undefined) throw new JobInvalid(`${path}.sigma`, 'a slope reading takes no sigma here (give the reading as an angle to carry an uncertainty)');
+      spec = { form: 'slope', text: String(o.slope) };
+    } else if ('spread' in o) {
+      spec = { form: 'spread', input: readNumber(withSigma(o.spread), `${path}.spread`, `${name} spread`, 'spread'), sign: o.below === true ? -1 : 1, text: String(o.spread) };
+    } else throw new JobInvalid(path, 'a vertical reading needs one of "elevation", "zenith", "slope" or "spread"');
+  } else throw new JobInvalid(path, `${show(x)} is not a valid vertical reading`);
+  // Check it now, exactly, so that a bad reading is a bad job (exit 2), not a failed computation.
+  const where = spec.form === 'elevation' || spec.form === 'zenith' ? `${path}${typeof x === 'object' ? `.${spec.form}` : ''}` : `${path}.${spec.form}`;
+  try {
+    verticalOf(R, spec, (i) => R.from(i.value));
+  } catch (e) {
+    const label = spec.form === 'elevation' ? 'elevation angle' : spec.form === 'zenith' ? 'zenith angle' : spec.form;
+    throw new JobInvalid(where, `${show(spec.text)} is not a valid ${label}: ${reason(e)}`);
+  }
+  return spec;
+}
+
+/** The signed vertical reading of a spec in an arithmetic, through the library's readings. */
+export function verticalOf<V>(A: Arithmetic<V>, spec: VerticalSpec, get: (i: Input) => V): VerticalReading<V> {
+  switch (spec.form) {
+    case 'elevation':
+    case 'zenith':
+      return verticalFromAngle(A, get(spec.input), { kind: spec.form });
+    case 'slope':
+      return verticalFromSlope(A, spec.text);
+    case 'spread':
+      return vertical(A, get(spec.input), spec.sign);
+  }
+}
+
+/** The inputs a vertical spec depends on. */
+export function verticalInputs(spec: VerticalSpec): Input[] {
+  return spec.form === 'slope' ? [] : [spec.input];
+}
+
+/** Exact text (`1/20`, `0.05`) as short decimal text for tolerances: up to 12 significant digits, trailing zeros dropped. */
+export function plain(text: string): string {
+  const t = R.toPrecision(R.from(text), 12);
+  return t.includes('.') && !/e/i.test(t) ? t.replace(/0+$/, '').replace(/\.$/, '') : t;
+}
