@@ -4,6 +4,7 @@ export type { AngleUnit } from './angle.js';
 export { formatDms } from './dms.js';
 export { sinCosDegrees } from './trig.js';
 export { spreadFromDegrees, degreesFromSpread } from './spread.js';
+export { gradeFromSpread } from './grade.js';
 export { spreadFromRatio, spreadFromGrade, spreadFromPerMille, spreadFromOneIn, gradeSquaredFromSpread } from './slope.js';
 export { vertical, verticalFromAngle, verticalFromRatio, verticalFromSlope, elevationFromVertical, zenithFromVertical, zenithToElevation } from './vertical.js';
 export type { VerticalReading, VerticalInput, VerticalKind } from './vertical.js';
