@@ -4,7 +4,7 @@
  * @module cli
  */
 import type { Report } from './report.js';
-import { BUDGET_SHOWN, shortExact } from './render-text.js';
+import { BUDGET_SHOWN, shortExact, showExact } from './render-text.js';
 
 /** Escapes text for a Markdown table cell. */
 function cell(text: string): string {
@@ -34,7 +34,7 @@ export function renderMarkdown(report: Report): string {
         const all = q.budget ?? [];
         const rest = all.slice(BUDGET_SHOWN);
         const budget = [...all.slice(0, BUDGET_SHOWN).map((b) => `${b.input} ${b.share} %`), ...(rest.length ? [`${rest.length} more ${rest.reduce((s, b) => s + Number(b.share), 0).toFixed(1)} %`] : [])].join(', ');
-        const exact = q.exact !== undefined && q.exact !== q.value ? `\`${shortExact(q.exact)}\`` : '';
+        const exact = showExact(q) ? `\`${shortExact(q.exact)}\`` : '';
         out.push(`| ${cell(q.label)} (\`${q.name}\`) | ${cell(withUnit(q.value, q.unit))} | ${q.sigma !== undefined ? cell(withUnit(q.sigma, q.unit)) : ''} | ${cell(exact)} | ${cell(budget)} |`);
       }
     }

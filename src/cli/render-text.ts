@@ -15,6 +15,11 @@ export function shortExact(exact: string): string {
   return `${exact.slice(0, EXACT_SHOWN - 12)}… (${exact.length} characters; full form in --format json)`;
 }
 
+/** Whether text and Markdown show the exact form: not for integers, which the value already shows. */
+export function showExact(q: Quantity): q is Quantity & { exact: string } {
+  return q.exact !== undefined && !/^-?\d+$/.test(q.exact);
+}
+
 function withUnit(value: string, unit: string): string {
   return unit === '' ? value : `${value} ${unit}`;
 }
@@ -22,7 +27,7 @@ function withUnit(value: string, unit: string): string {
 function quantityLines(q: Quantity): string[] {
   const sigma = q.sigma !== undefined ? `  ± ${withUnit(q.sigma, q.unit)}` : '';
   const lines = [`  ${q.label} [${q.name}]: ${withUnit(q.value, q.unit)}${sigma}`];
-  if (q.exact !== undefined && q.exact !== q.value) lines.push(`      exact: ${shortExact(q.exact)}`);
+  if (showExact(q)) lines.push(`      exact: ${shortExact(q.exact)}`);
   if (q.budget && q.budget.length > 0) {
     const top = q.budget.slice(0, BUDGET_SHOWN).map((b) => `${b.input} ${b.share} % (${withUnit(b.part, q.unit)})`);
     const rest = q.budget.slice(BUDGET_SHOWN);

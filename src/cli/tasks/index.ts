@@ -6,5 +6,6 @@
 import type { TaskKind } from '../task.js';
 import { areaTask } from './area.js';
 import { traverseTask } from './traverse.js';
+import { triangleTask } from './triangle.js';
 
-export const TASK_KINDS: readonly TaskKind[] = [traverseTask, areaTask];
+export const TASK_KINDS: readonly TaskKind[] = [triangleTask, traverseTask, areaTask];
