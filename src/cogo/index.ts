@@ -5,3 +5,5 @@ export { intersectLines } from './intersect-lines.js';
 export { bearingToAzimuth } from './bearing.js';
 export { traverse, angularMisclosure } from './traverse.js';
 export type { TraverseCourse, TraverseInput, TraverseClosure, Traverse, TraverseLeg, AngularMisclosure } from './traverse.js';
+export { levelRun, allowableMisclosure, LEVELLING_ORDERS } from './levelling.js';
+export type { LevellingOrder, AllowableMisclosure, LevelSight, LevelRunInput, LevelRow, LevelCheck, LevelRun } from './levelling.js';

@@ -88,7 +88,7 @@ describe('area(rational, points) properties (fast-check, exact)', () => {
 
 describe('perimeter(rational, points)', () => {
   it('is within 1e-40 relative of √2 + √5 + 3 for the triangle (0,0), (1,1), (3,0) (mathjs BigNumber, 60 digits)', () => {
-    const M = create(all, { number: 'BigNumber', precision: 60 });
+    const M = create(all!, { number: 'BigNumber', precision: 60 });
     const want = M.bignumber(2).sqrt().add(M.bignumber(5).sqrt()).add(3);
     const got = M.bignumber(rational.toPrecision(perimeter(rational, [{ x: 0, y: 0 }, { x: 1, y: 1 }, { x: 3, y: 0 }]), 60));
     expect(got.sub(want).abs().div(want).lt(M.bignumber('1e-40'))).toBe(true);
