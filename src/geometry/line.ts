@@ -202,5 +202,6 @@ export function spreadOfLines<T>(A: Arithmetic<T>, l1: Line<T>, l2: Line<T>): T 
   if (A.isZero(n2)) throw new QuadspreadError('DEGENERATE_LINE', 'spreadOfLines(A, l1, l2)', 'l2 has a = b = 0, which is no line');
   // Spread of two lines: Wildberger, Divine Proportions (2005), ch. 5.
   const c = A.sub(A.mul(l1.a, l2.b), A.mul(l2.a, l1.b));
-  return A.div(A.mul(c, c), A.mul(n1, n2));
+  const s = A.div(A.mul(c, c), A.mul(n1, n2));
+  return A.cmp(s, A.one) > 0 ? A.one : s; // rounding can exceed 1 in float and decimal
 }

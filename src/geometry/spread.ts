@@ -11,6 +11,11 @@ function coincident<T>(A: Arithmetic<T>, where: string, arg: string, P: Point<T>
   throw new QuadspreadError('COINCIDENT_POINTS', where, `${arg} = (${show(A.toString(P.x))}, ${show(A.toString(P.y))}) coincides with the vertex V, so the line is undefined`);
 }
 
+/** Rounding (float, decimal) can push a spread or cross just above 1: clamp it. Never acts in `rational`. */
+function atMostOne<T>(A: Arithmetic<T>, s: T): T {
+  return A.cmp(s, A.one) > 0 ? A.one : s;
+}
+
 /**
  * The spread at V between the lines VP and VQ: s = (u × v)² / (|u|²·|v|²) with u = P − V,
  * v = Q − V. It equals sin² of the angle between the lines (0 for parallel lines, 1 for
@@ -20,7 +25,7 @@ function coincident<T>(A: Arithmetic<T>, where: string, arg: string, P: Point<T>
  * @param V the vertex
  * @param P a point on the first line (≠ V)
  * @param Q a point on the second line (≠ V)
- * @returns the spread, in [0, 1]
+ * @returns the spread, in [0, 1] (a rounded value above 1 is returned as 1)
  * @throws {QuadspreadError} `COINCIDENT_POINTS` when P or Q coincides with V.
  * @example
  * ```ts
@@ -41,7 +46,7 @@ export function spread<T>(A: Arithmetic<T>, V: Point<T>, P: Point<T>, Q: Point<T
   if (A.isZero(qv)) coincident(A, 'spread(A, V, P, Q)', 'Q', Q);
   // Spread of two vectors, s = (u1 v2 − u2 v1)² / ((u1² + u2²)(v1² + v2²)): Wildberger, Divine Proportions (2005), ch. 5.
   const c = A.sub(A.mul(ux, vy), A.mul(uy, vx));
-  return A.div(A.mul(c, c), A.mul(qu, qv));
+  return atMostOne(A, A.div(A.mul(c, c), A.mul(qu, qv)));
 }
 
 /**
@@ -53,7 +58,7 @@ export function spread<T>(A: Arithmetic<T>, V: Point<T>, P: Point<T>, Q: Point<T
  * @param V the vertex
  * @param P a point on the first line (≠ V)
  * @param Q a point on the second line (≠ V)
- * @returns the cross, in [0, 1]
+ * @returns the cross, in [0, 1] (a rounded value above 1 is returned as 1)
  * @throws {QuadspreadError} `COINCIDENT_POINTS` when P or Q coincides with V.
  * @example
  * ```ts
@@ -74,7 +79,7 @@ export function cross<T>(A: Arithmetic<T>, V: Point<T>, P: Point<T>, Q: Point<T>
   if (A.isZero(qv)) coincident(A, 'cross(A, V, P, Q)', 'Q', Q);
   // Cross of two vectors, c = (u1 v1 + u2 v2)² / ((u1² + u2²)(v1² + v2²)) = 1 − s: Wildberger, Divine Proportions (2005), ch. 5.
   const d = A.add(A.mul(ux, vx), A.mul(uy, vy));
-  return A.div(A.mul(d, d), A.mul(qu, qv));
+  return atMostOne(A, A.div(A.mul(d, d), A.mul(qu, qv)));
 }
 
 /**
@@ -100,5 +105,5 @@ export function spreadOfVectors<T>(A: Arithmetic<T>, u: Point<T>, v: Point<T>): 
   if (A.isZero(qv)) throw new QuadspreadError('COINCIDENT_POINTS', 'spreadOfVectors(A, u, v)', 'v is the zero vector, so it has no direction');
   // Spread of two vectors: Wildberger, Divine Proportions (2005), ch. 5.
   const c = A.sub(A.mul(u.x, v.y), A.mul(u.y, v.x));
-  return A.div(A.mul(c, c), A.mul(qu, qv));
+  return atMostOne(A, A.div(A.mul(c, c), A.mul(qu, qv)));
 }

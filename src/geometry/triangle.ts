@@ -34,7 +34,7 @@ export interface Triangle<V> {
  * The quadrances, spreads and quadrea of the triangle with vertices A1, A2, A3.
  * Rational functions of the coordinates: exact in `rational`. With D = (A2 − A1) × (A3 − A1)
  * (twice the signed area), s1 = D²/(Q2·Q3), s2 = D²/(Q1·Q3), s3 = D²/(Q1·Q2) and
- * quadrea = 4·D².
+ * quadrea = 4·D². In `float` and `decimal` a spread that rounds above 1 is returned as 1.
  *
  * @param A the arithmetic
  * @param A1 first vertex
@@ -52,6 +52,11 @@ export interface Triangle<V> {
  * ```
  */
 export function triangle<T>(A: Arithmetic<T>, A1: Point<T>, A2: Point<T>, A3: Point<T>): Triangle<T> {
+  // Performance (docs/performance.md): an arithmetic's fused kernel, where it has one, computes
+  // the same measures at once (exactly equal in rational; rounded once in decimal) and returns
+  // undefined for degenerate input, which the generic code below reports.
+  const fused = A.kernels?.triangle?.(A1.x, A1.y, A2.x, A2.y, A3.x, A3.y);
+  if (fused !== undefined) return fused;
   const ux = A.sub(A2.x, A1.x); // A1 → A2
   const uy = A.sub(A2.y, A1.y);
   const vx = A.sub(A3.x, A1.x); // A1 → A3
@@ -69,15 +74,15 @@ export function triangle<T>(A: Arithmetic<T>, A1: Point<T>, A2: Point<T>, A3: Po
   if (A.isZero(D2)) {
     throw new QuadspreadError('COLLINEAR_POINTS', 'triangle(A, A1, A2, A3)', `A1 (${show(A.toString(A1.x))}, ${show(A.toString(A1.y))}), A2 and A3 are collinear`);
   }
-  return {
-    Q1,
-    Q2,
-    Q3,
-    s1: A.div(D2, A.mul(Q2, Q3)),
-    s2: A.div(D2, A.mul(Q1, Q3)),
-    s3: A.div(D2, A.mul(Q1, Q2)),
-    quadrea: A.mul(A.from(4), D2),
-  };
+  // Rounding (float, decimal) can push a spread of a right angle just above 1: clamp it.
+  const one = A.one;
+  let s1 = A.div(D2, A.mul(Q2, Q3));
+  let s2 = A.div(D2, A.mul(Q1, Q3));
+  let s3 = A.div(D2, A.mul(Q1, Q2));
+  if (A.cmp(s1, one) > 0) s1 = one;
+  if (A.cmp(s2, one) > 0) s2 = one;
+  if (A.cmp(s3, one) > 0) s3 = one;
+  return { Q1, Q2, Q3, s1, s2, s3, quadrea: A.mul(A.from(4), D2) };
 }
 
 function coincident<T>(A: Arithmetic<T>, A1: Point<T>, A2: Point<T>, A3: Point<T>, Q1: T, Q2: T): never {
