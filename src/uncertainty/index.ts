@@ -3,3 +3,4 @@ export * from './measured.js';
 export * from './budget.js';
 export * from './random.js';
 export * from './monte-carlo.js';
+export * from './readings.js';

@@ -83,9 +83,9 @@ function checkInput(name: string, d: InputDistribution): void {
  * //=> [true, true]
  * ```
  */
-export function monteCarlo(
-  f: (x: Readonly<Record<string, number>>) => number,
-  inputs: Readonly<Record<string, InputDistribution>>,
+export function monteCarlo<K extends string>(
+  f: (x: Readonly<Record<K, number>>) => number,
+  inputs: Readonly<Record<K, InputDistribution>>,
   options: MonteCarloOptions,
 ): MonteCarloResult {
   const where = 'monteCarlo(f, inputs, options)';
@@ -97,20 +97,20 @@ export function monteCarlo(
     throw new QuadspreadError('INVALID_ARGUMENT', `${where}.n`, `${show(n)} is not an integer in [100, ${MAX_TRIALS}]`);
   }
   if (typeof p !== 'number' || !(p > 0 && p < 1)) throw new QuadspreadError('INVALID_ARGUMENT', `${where}.coverage`, `${show(p)} is not in (0, 1)`);
-  const names = Object.keys(inputs);
+  const names = Object.keys(inputs) as K[];
   const dists = names.map((name) => {
     const d = inputs[name] as InputDistribution;
     checkInput(name, d);
     return d;
   });
   const rng = randomStream(seed);
-  const x: Record<string, number> = {};
+  const x = {} as Record<K, number>;
   const y = new Float64Array(n);
   for (let r = 0; r < n; r++) {
     for (let i = 0; i < names.length; i++) {
       const d = dists[i] as InputDistribution;
       // JCGM 101 §6.4.7 (normal: μ + σz) and §6.4.2.4 (rectangular: a + (b − a)·u)
-      x[names[i] as string] = d.distribution === 'normal' ? d.mean + d.sigma * rng.normal() : d.low + (d.high - d.low) * rng.uniform();
+      x[names[i] as K] = d.distribution === 'normal' ? d.mean + d.sigma * rng.normal() : d.low + (d.high - d.low) * rng.uniform();
     }
     const v = f(x);
     if (typeof v !== 'number' || !Number.isFinite(v)) {

@@ -97,7 +97,7 @@ describe('monteCarlo(f, inputs, { n, seed }) propagates distributions (JCGM 101:
   });
 
   it('monteCarlo is deterministic for one seed', () => {
-    const f = (x: Readonly<Record<string, number>>) => Math.hypot(x.a, x.b);
+    const f = (x: Readonly<Record<"a" | "b", number>>) => Math.hypot(x.a, x.b);
     const inputs = { a: { distribution: 'normal', mean: 3, sigma: 0.1 }, b: { distribution: 'rectangular', low: 3.9, high: 4.1 } } as const;
     expect(monteCarlo(f, inputs, { n: 1000, seed: 42 })).toEqual(monteCarlo(f, inputs, { n: 1000, seed: 42 }));
     expect(monteCarlo(f, inputs, { n: 1000, seed: 43 }).mean).not.toBe(monteCarlo(f, inputs, { n: 1000, seed: 42 }).mean);
@@ -105,7 +105,7 @@ describe('monteCarlo(f, inputs, { n, seed }) propagates distributions (JCGM 101:
 
   it('monteCarlo refuses bad options and inputs, and model values that are not finite', () => {
     const ok = { a: { distribution: 'normal', mean: 0, sigma: 1 } } as const;
-    const f = (x: Readonly<Record<string, number>>) => x.a;
+    const f = (x: Readonly<Record<"a", number>>) => x.a;
     for (const n of [0, 99, 1.5, 1e8, Number.NaN]) expect(() => monteCarlo(f, ok, { n, seed: 1 })).toThrow(expect.objectContaining({ code: 'INVALID_ARGUMENT' }));
     expect(() => monteCarlo(f, ok, { n: 100, seed: 1, coverage: 1 })).toThrow(expect.objectContaining({ code: 'INVALID_ARGUMENT' }));
     expect(() => monteCarlo(f, ok, { n: 100, seed: -1 })).toThrow(expect.objectContaining({ code: 'INVALID_ARGUMENT' }));

@@ -1,0 +1,270 @@
+/**
+ * Uncertain instrument readings: sigmas given in the reading's own units (arc-seconds for
+ * angles, millimetres for distances, percent for grades) carried into degrees, metres,
+ * quadrances and spreads through the derivatives of the conversions.
+ *
+ * The values come from the readings module (so they agree with it exactly, including its
+ * exact spreads at 0°, 30°, 45°, 60°, 90°); the derivatives are written here from the
+ * conversion formulas, so the gradient survives those exact special cases.
+ *
+ * @module uncertainty
+ */
+import type { Numeric } from '../arithmetic/types.js';
+import { Uncertain } from '../arithmetic/uncertain.js';
+import type { Gradient, UncertainArithmetic, UncertainInput } from '../arithmetic/uncertain.js';
+import { angleToDegrees, type AngleUnit } from '../readings/angle.js';
+import { sinCosDegrees } from '../readings/trig.js';
+import { spreadFromDegrees } from '../readings/spread.js';
+import { spreadFromGrade } from '../readings/slope.js';
+import { verticalFromAngle, type VerticalKind, type VerticalReading } from '../readings/vertical.js';
+import { lengthToMetres, type LengthUnit } from '../readings/length.js';
+import { measured, readName, readSigma } from './measured.js';
+
+/**
+ * A value y = g(x) of an uncertain `x`, given y and dy/dx: its gradient is dy/dx times
+ * x's (the chain rule). For functions whose derivative is known in closed form.
+ *
+ * @param U the uncertain arithmetic
+ * @param x the argument
+ * @param value g(x), in the base arithmetic
+ * @param derivative g′(x), in the base arithmetic
+ * @returns g(x) with gradient g′(x)·∇x
+ * @example
+ * ```ts
+ * import { uncertain, float, measured, withDerivative, budget } from 'quadspread';
+ * const U = uncertain(float);
+ * const x = measured(U, 2, 0.25, 'x');
+ * const cube = withDerivative(U, x, 8, 12); // x³ and 3x²
+ * budget(U, cube).sigma;
+ * //=> 3
+ * ```
+ */
+export function withDerivative<T>(U: UncertainArithmetic<T>, x: Uncertain<T>, value: Numeric<T>, derivative: Numeric<T>): Uncertain<T> {
+  const B = U.base;
+  const v = U.from(x);
+  const d = B.from(derivative);
+  const g = new Map<UncertainInput<T>, T>();
+  for (const [k, c] of v.gradient) g.set(k, B.mul(d, c));
+  return U.make(value, g as Gradient<T>);
+}
+
+/**
+ * A measured angle in degrees: the reading (degrees, DMS text, or a number in `unit`) read
+ * by `angleToDegrees`, with a standard uncertainty in arc-seconds (1″ = 1/3600°). For a
+ * gon instrument, 1 mgon = 3.24″.
+ *
+ * @param U the uncertain arithmetic
+ * @param reading the angle reading
+ * @param sigmaArcSeconds its standard uncertainty in arc-seconds, ≥ 0
+ * @param name the input's name
+ * @param unit the unit of a numeric reading (default `'deg'`)
+ * @returns the angle in degrees; its input is the angle in degrees, u = sigma/3600
+ * @throws {QuadspreadError} as `angleToDegrees` and `measured`.
+ * @example
+ * ```ts
+ * import { uncertain, rational, measuredAngle, budget } from 'quadspread';
+ * const U = uncertain(rational);
+ * const a = measuredAngle(U, `30°15'00"`, 9, 'a');
+ * [rational.toString(a.value), budget(U, a).sigma.toString()];
+ * //=> ['121/4', '1/400']
+ * ```
+ */
+export function measuredAngle<T>(U: UncertainArithmetic<T>, reading: Numeric<T>, sigmaArcSeconds: Numeric<T>, name: string, unit: AngleUnit = 'deg'): Uncertain<T> {
+  const where = 'measuredAngle(U, reading, sigmaArcSeconds, name)';
+  readName(name, where);
+  const s = readSigma(U, sigmaArcSeconds, where);
+  const deg = angleToDegrees(U.base, reading as Numeric<T>, unit);
+  return measured(U, deg, U.base.div(s, U.base.from(3600)), name); // 1° = 3600″
+}
+
+/** ds/dθ per degree for s = sin²θ: 2 sin θ cos θ · π/180. */
+function spreadSlope<T>(U: UncertainArithmetic<T>, degrees: T): T {
+  const B = U.base;
+  const { sin, cos } = sinCosDegrees(B, degrees);
+  // d(sin²θ)/dθ = 2 sin θ cos θ per radian; θ in degrees adds π/180.
+  return B.div(B.mul(B.mul(B.from(2), B.mul(sin, cos)), B.pi), B.from(180));
+}
+
+/**
+ * The spread s = sin²θ of an uncertain angle θ in degrees (value by `spreadFromDegrees`),
+ * with ds/dθ = 2 sin θ cos θ · π/180 per degree (the derivative of sin²; Wildberger,
+ * *Divine Proportions*, 2005, ch. 5 for s = sin²θ).
+ *
+ * @param U the uncertain arithmetic
+ * @param degrees the angle in degrees, e.g. from {@link measuredAngle}
+ * @returns the spread, with its gradient
+ * @example
+ * ```ts
+ * import { uncertain, float, measuredAngle, spreadOfAngle, budget } from 'quadspread';
+ * const U = uncertain(float);
+ * const s = spreadOfAngle(U, measuredAngle(U, 45, 3600, 't')); // u(θ) = 1°
+ * [s.value, budget(U, s).sigma === Math.PI / 180];
+ * //=> [0.5, true]
+ * ```
+ */
+export function spreadOfAngle<T>(U: UncertainArithmetic<T>, degrees: Uncertain<T> | Numeric<T>): Uncertain<T> {
+  const d = U.from(degrees as Numeric<Uncertain<T>>);
+  return withDerivative(U, d, spreadFromDegrees(U.base, d.value), spreadSlope(U, d.value));
+}
+
+/**
+ * A measured angle as a spread: {@link spreadOfAngle} of {@link measuredAngle}.
+ *
+ * @param U the uncertain arithmetic
+ * @param reading the angle reading
+ * @param sigmaArcSeconds its standard uncertainty in arc-seconds
+ * @param name the input's name (the input is the angle in degrees)
+ * @param unit the unit of a numeric reading (default `'deg'`)
+ * @returns the spread sin²θ with its gradient
+ * @throws {QuadspreadError} as {@link measuredAngle}.
+ * @example
+ * ```ts
+ * import { uncertain, float, measuredSpread } from 'quadspread';
+ * const U = uncertain(float);
+ * measuredSpread(U, 30, 10, 'a').value;
+ * //=> 0.25
+ * ```
+ */
+export function measuredSpread<T>(U: UncertainArithmetic<T>, reading: Numeric<T>, sigmaArcSeconds: Numeric<T>, name: string, unit: AngleUnit = 'deg'): Uncertain<T> {
+  return spreadOfAngle(U, measuredAngle(U, reading, sigmaArcSeconds, name, unit));
+}
+
+/**
+ * A vertical reading (spread R of the sight with the horizontal, and its sign) from an
+ * uncertain elevation or zenith angle in degrees: R = sin²α with α the elevation
+ * (α = 90° − z for a zenith angle), value by `verticalFromAngle`, dR/dα = 2 sin α cos α ·
+ * π/180 per degree and dα/dz = −1.
+ *
+ * @param U the uncertain arithmetic
+ * @param degrees the angle in degrees, e.g. from {@link measuredAngle}
+ * @param kind `'elevation'` (default) or `'zenith'`
+ * @returns the signed reading, its spread uncertain
+ * @throws {QuadspreadError} as `verticalFromAngle`.
+ * @example
+ * ```ts
+ * import { uncertain, rational, measuredAngle, verticalOfAngle } from 'quadspread';
+ * const U = uncertain(rational);
+ * const v = verticalOfAngle(U, measuredAngle(U, 120, 5, 'z'), 'zenith');
+ * [rational.toString(v.spread.value), v.sign];
+ * //=> ['1/4', -1]
+ * ```
+ */
+export function verticalOfAngle<T>(U: UncertainArithmetic<T>, degrees: Uncertain<T> | Numeric<T>, kind: VerticalKind = 'elevation'): VerticalReading<Uncertain<T>> {
+  const B = U.base;
+  const d = U.from(degrees as Numeric<Uncertain<T>>);
+  const r = verticalFromAngle(B, d.value, { kind });
+  const elev = kind === 'zenith' ? B.sub(B.from(90), d.value) : d.value; // α = 90° − z
+  const slope = spreadSlope(U, elev);
+  return { spread: withDerivative(U, d, r.spread, kind === 'zenith' ? B.neg(slope) : slope), sign: r.sign };
+}
+
+/**
+ * A measured vertical angle as a vertical reading: {@link verticalOfAngle} of
+ * {@link measuredAngle}. Pass it where a solver takes `vertical`.
+ *
+ * @param U the uncertain arithmetic
+ * @param reading the elevation or zenith angle reading
+ * @param sigmaArcSeconds its standard uncertainty in arc-seconds
+ * @param name the input's name (the input is the angle in degrees)
+ * @param options `kind` (`'elevation'` default, or `'zenith'`) and `unit` of a numeric reading
+ * @returns the signed reading, its spread uncertain
+ * @throws {QuadspreadError} as {@link measuredAngle} and `verticalFromAngle`.
+ * @example
+ * ```ts
+ * import { uncertain, float, measuredVertical } from 'quadspread';
+ * const U = uncertain(float);
+ * const v = measuredVertical(U, `-30°00'00"`, 5, 'alpha');
+ * [v.spread.value, v.sign];
+ * //=> [0.25, -1]
+ * ```
+ */
+export function measuredVertical<T>(
+  U: UncertainArithmetic<T>,
+  reading: Numeric<T>,
+  sigmaArcSeconds: Numeric<T>,
+  name: string,
+  options: { kind?: VerticalKind; unit?: AngleUnit } = {},
+): VerticalReading<Uncertain<T>> {
+  return verticalOfAngle(U, measuredAngle(U, reading, sigmaArcSeconds, name, options.unit ?? 'deg'), options.kind ?? 'elevation');
+}
+
+/**
+ * A measured distance in metres: the reading in `unit` (read by `lengthToMetres`, exact)
+ * with a standard uncertainty in millimetres (whatever the reading's unit).
+ *
+ * @param U the uncertain arithmetic
+ * @param reading the distance in `unit`
+ * @param sigmaMm its standard uncertainty in millimetres, ≥ 0
+ * @param name the input's name (the input is the distance in metres)
+ * @param unit the reading's unit (default `'m'`)
+ * @returns the distance in metres, u = sigma/1000 m
+ * @throws {QuadspreadError} as `lengthToMetres` and `measured`.
+ * @example
+ * ```ts
+ * import { uncertain, rational, measuredDistance, budget } from 'quadspread';
+ * const U = uncertain(rational);
+ * const d = measuredDistance(U, 100, 3, 'd', 'ft');
+ * [rational.toString(d.value), budget(U, d).sigma.toString()];
+ * //=> ['762/25', '3/1000']
+ * ```
+ */
+export function measuredDistance<T>(U: UncertainArithmetic<T>, reading: Numeric<T>, sigmaMm: Numeric<T>, name: string, unit: LengthUnit = 'm'): Uncertain<T> {
+  const where = 'measuredDistance(U, reading, sigmaMm, name)';
+  readName(name, where);
+  const s = readSigma(U, sigmaMm, where);
+  const m = lengthToMetres(U.base, reading as Numeric<T>, unit);
+  return measured(U, m, U.base.div(s, U.base.from(1000)), name); // 1 m = 1000 mm
+}
+
+/**
+ * A measured distance as a quadrance Q = d² in square metres, dQ/dd = 2d.
+ *
+ * @param U the uncertain arithmetic
+ * @param reading the distance in `unit`
+ * @param sigmaMm its standard uncertainty in millimetres
+ * @param name the input's name (the input is the distance in metres)
+ * @param unit the reading's unit (default `'m'`)
+ * @returns the quadrance in m², with its gradient
+ * @throws {QuadspreadError} as {@link measuredDistance}.
+ * @example
+ * ```ts
+ * import { uncertain, rational, measuredQuadrance, budget } from 'quadspread';
+ * const U = uncertain(rational);
+ * const Q = measuredQuadrance(U, 50, 5, 'd'); // u(Q) = 2·50·0.005 = 0.5 m²
+ * [rational.toString(Q.value), budget(U, Q).sigma.toString()];
+ * //=> ['2500', '1/2']
+ * ```
+ */
+export function measuredQuadrance<T>(U: UncertainArithmetic<T>, reading: Numeric<T>, sigmaMm: Numeric<T>, name: string, unit: LengthUnit = 'm'): Uncertain<T> {
+  const d = measuredDistance(U, reading, sigmaMm, name, unit);
+  return U.mul(d, d);
+}
+
+/**
+ * A measured percent grade p as a spread s = p²/(10⁴ + p²) (value by `spreadFromGrade`,
+ * exact), with ds/dp = 2·10⁴·p/(10⁴ + p²)² per percent (derived from s).
+ *
+ * @param U the uncertain arithmetic
+ * @param percent the grade in percent (100 % = 45°)
+ * @param sigmaPercent its standard uncertainty in percent, ≥ 0
+ * @param name the input's name (the input is the grade in percent)
+ * @returns the spread of the slope, with its gradient
+ * @throws {QuadspreadError} as `spreadFromGrade` and `measured`.
+ * @example
+ * ```ts
+ * import { uncertain, rational, measuredGrade, budget } from 'quadspread';
+ * const U = uncertain(rational);
+ * const s = measuredGrade(U, 100, '0.5', 'g'); // ds/dp = 2·10⁴·100/(2·10⁴)² = 1/200
+ * [rational.toString(s.value), budget(U, s).sigma.toString()];
+ * //=> ['1/2', '1/400']
+ * ```
+ */
+export function measuredGrade<T>(U: UncertainArithmetic<T>, percent: Numeric<T>, sigmaPercent: Numeric<T>, name: string): Uncertain<T> {
+  const B = U.base;
+  const p = measured(U, percent, sigmaPercent, name);
+  const s = spreadFromGrade(B, p.value);
+  const t = B.from(10000);
+  const den = B.add(t, B.mul(p.value, p.value));
+  // s = p²/(10⁴ + p²) ⇒ ds/dp = 2·10⁴·p/(10⁴ + p²)²
+  return withDerivative(U, p, s, B.div(B.mul(B.mul(B.from(2), t), p.value), B.mul(den, den)));
+}
