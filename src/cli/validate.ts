@@ -118,8 +118,12 @@ function check(x: unknown, schema0: Schema, root: Schema, path: string, out: Pro
       const results = branches.map((b) => validate(x, b, root, path));
       const ok = results.filter((r) => r.length === 0).length;
       if (schema.oneOf ? ok !== 1 : ok === 0) {
+        const near = nearest(x, branches, root);
         if (ok > 1) {
           out.push({ path: where, message: `${show(x)} matches more than one form` });
+        } else if (near !== undefined) {
+          // One form fits the value's type (or its fields) best: report what is wrong with it.
+          out.push(...results[near]!);
         } else if (expected) {
           out.push({ path: where, message: `${show(x)} is not ${expected}` });
         } else {
@@ -194,6 +198,32 @@ function check(x: unknown, schema0: Schema, root: Schema, path: string, out: Pro
     default:
       break;
   }
+}
+
+/**
+ * The one branch of a union that the value is plainly meant for: the only branch that
+ * admits its JSON type, or, for an object, the only branch that knows the most of its
+ * field names (and at least one). `undefined` when there is no single such branch.
+ */
+function nearest(x: unknown, branches: Schema[], root: Schema): number | undefined {
+  const t = typeOf(x);
+  const admits = branches.map((b0) => {
+    const b = resolve(b0, root);
+    if (b.type === undefined) return true;
+    const types = Array.isArray(b.type) ? (b.type as string[]) : [b.type as string];
+    return types.some((ty) => typeMatches(x, ty));
+  });
+  const typed = admits.flatMap((a, i) => (a ? [i] : []));
+  if (typed.length === 1) return typed[0];
+  if (t !== 'object' || typed.length === 0) return undefined;
+  const keys = Object.keys(x as object);
+  const scores = typed.map((i) => {
+    const props = (resolve(branches[i]!, root).properties ?? {}) as Record<string, unknown>;
+    return keys.filter((k) => k in props).length;
+  });
+  const best = Math.max(...scores);
+  if (best === 0 || scores.filter((s) => s === best).length !== 1) return undefined;
+  return typed[scores.indexOf(best)];
 }
 
 function depth(problems: Problem[]): number {

@@ -1,0 +1,105 @@
+// The demo as a subprocess: exit 0, and its numbers against independent computations
+// written here with classical trigonometry in JS floats (Math.sin, Math.cos, Math.tan).
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { readFileSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { bundleCli, cleanUp, cli } from './helpers';
+
+interface Q { name: string; value: string; exact?: string; sigma?: string; budget?: { input: string; share: string }[] }
+interface T { kind: string; name: string; results: Q[]; checks: { name: string; pass: boolean; value: string }[] }
+interface Job { points: Record<string, { east: number | { value: number }; north: number | { value: number } }>; tasks: Record<string, unknown>[] }
+
+let report: { tasks: T[]; caution: string; summary: { failed: number } };
+let text: string;
+const job = JSON.parse(readFileSync(resolve(__dirname, '../../examples/demo.json'), 'utf8')) as Job;
+
+/** Degrees from DMS text like 62°14'20" (written here, independently of the library's parser). */
+function dms(text: string): number {
+  const m = /^(-?)(\d+)°(?:(\d+)')?(?:([\d.]+)")?$/.exec(text.trim());
+  if (!m) throw new Error(`test data: ${text}`);
+  const v = Number(m[2]) + Number(m[3] ?? 0) / 60 + Number(m[4] ?? 0) / 3600;
+  return m[1] === '-' ? -v : v;
+}
+const rad = (deg: number) => (deg * Math.PI) / 180;
+const num = (x: number | { value: number }) => (typeof x === 'number' ? x : x.value);
+const value = (t: T, name: string) => {
+  const q = t.results.find((r) => r.name === name);
+  if (!q) throw new Error(`no result ${name} in ${t.name}`);
+  return Number(q.value);
+};
+const task = (kind: string) => {
+  const t = report.tasks.find((x) => x.kind === kind);
+  if (!t) throw new Error(`the demo has no ${kind} task`);
+  return t;
+};
+const jobTask = (kind: string) => job.tasks.find((t) => t.kind === kind)!;
+
+beforeAll(async () => {
+  await bundleCli();
+  const r = cli(['demo', '--format', 'json', '--digits', '15']);
+  expect(r.code).toBe(0);
+  report = JSON.parse(r.stdout);
+  const t = cli(['demo']);
+  expect(t.code).toBe(0);
+  text = t.stdout;
+});
+afterAll(cleanUp);
+
+describe('quadspread demo', () => {
+  it('exits 0 and prints a text report that ends with the safety caution', () => {
+    expect(text).toMatch(/quadspread report: /);
+    expect(text.trimEnd().endsWith('Design and setting-out follow local codes and licensed practice.')).toBe(true);
+    expect(text).toMatch(/check independently|check every result independently/);
+  });
+
+  it('runs the same job as examples/demo.json', () => {
+    const r = cli(['demo', '--job']);
+    expect(r.code).toBe(0);
+    expect(JSON.parse(r.stdout)).toEqual(job);
+  });
+
+  it('every check of the demo passes, and the report says so', () => {
+    expect(report.summary.failed).toBe(0);
+    expect(report.tasks.flatMap((t) => t.checks).length).toBeGreaterThan(0);
+  });
+
+  it('gives the traverse misclosure that latitudes and departures by Math.cos/Math.sin give', () => {
+    const t = task('traverse');
+    const courses = jobTask('traverse').courses as { bearing: { value: string }; distance: { value: number } }[];
+    let e = 0, n = 0;
+    for (const c of courses) {
+      const az = rad(dms(c.bearing.value));
+      e += c.distance.value * Math.sin(az); // departure = d sin(azimuth), bearings clockwise from north
+      n += c.distance.value * Math.cos(az); // latitude = d cos(azimuth)
+    }
+    expect(value(t, 'misclosure_east')).toBeCloseTo(e, 9);
+    expect(value(t, 'misclosure_north')).toBeCloseTo(n, 9);
+    expect(value(t, 'misclosure')).toBeCloseTo(Math.hypot(e, n), 9);
+    // Compass rule (Bowditch): the correction to the first course is −misclosure · d1 / total length.
+    const total = courses.reduce((s, c) => s + c.distance.value, 0);
+    const start = job.points.CM1!;
+    const d1 = courses[0]!.distance.value, az1 = rad(dms(courses[0]!.bearing.value));
+    expect(value(t, 'CM2.east')).toBeCloseTo(num(start.east) + d1 * Math.sin(az1) - (e * d1) / total, 8);
+    expect(value(t, 'CM2.north')).toBeCloseTo(num(start.north) + d1 * Math.cos(az1) - (n * d1) / total, 8);
+    expect(t.checks.find((c) => c.name === 'precision')!.pass).toBe(true);
+    expect(Number(t.checks.find((c) => c.name === 'precision')!.value)).toBeCloseTo(total / Math.hypot(e, n), 0);
+  });
+
+  it('gives the parcel area that the shoelace formula in floats gives, exactly as a fraction', () => {
+    const t = task('area');
+    const names = jobTask('area').points as string[];
+    const p = names.map((k) => ({ x: num(job.points[k]!.east), y: num(job.points[k]!.north) }));
+    let twice = 0;
+    for (let i = 0; i < p.length; i++) {
+      const a = p[i]!, b = p[(i + 1) % p.length]!;
+      twice += a.x * b.y - b.x * a.y;
+    }
+    expect(value(t, 'area')).toBeCloseTo(Math.abs(twice) / 2, 6);
+    const q = t.results.find((r) => r.name === 'area')!;
+    const [num_, den] = q.exact!.split('/').map(Number);
+    expect(num_! / (den ?? 1)).toBeCloseTo(Math.abs(twice) / 2, 6);
+    // Q2 carries σ = 0.02 m in east and north: u(area) = 0.02·√(∂A/∂E² + ∂A/∂N²), ∂A/∂E2 = (N3 − N1)/2, ∂A/∂N2 = (E1 − E3)/2 (shoelace, derived).
+    const sens = Math.hypot((p[2]!.y - p[0]!.y) / 2, (p[0]!.x - p[2]!.x) / 2);
+    expect(Number(q.sigma)).toBeCloseTo(0.02 * sens, 1);
+  });
+});

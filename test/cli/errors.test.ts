@@ -1,0 +1,121 @@
+// Bad jobs as a subprocess: not JSON or against the schema → exit 2 naming the place;
+// no solution → exit 3 naming the task; nothing partial written on any failure.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { existsSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { bundleCli, cleanUp, cli, tempFolder } from './helpers';
+
+let dir: string;
+const jobFile = (name: string, body: unknown): string => {
+  const f = join(dir, name);
+  writeFileSync(f, typeof body === 'string' ? body : JSON.stringify(body, null, 2));
+  return f;
+};
+const points = { A: { east: 0, north: 0 }, B: { east: 100, north: 0 }, C: { east: 100, north: 80 } };
+
+beforeAll(async () => {
+  await bundleCli();
+  dir = tempFolder();
+});
+afterAll(cleanUp);
+
+describe('quadspread run with a job that cannot be read', () => {
+  it('exits 2 with the line and column when the file is not JSON', () => {
+    const r = cli(['run', jobFile('broken.json', '{\n  "tasks": [\n    { "kind": "area", }\n  ]\n}\n')]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/line 3, column \d+: the job file is not valid JSON/);
+    expect(r.stdout).toBe('');
+  });
+
+  it('exits 2 naming the place of a field of the wrong type', () => {
+    const r = cli(['run', jobFile('type.json', { points, tasks: [{ kind: 'area', points: 'A B C' }] })]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toContain('tasks[0].points: "A B C" is not an array');
+  });
+
+  it('exits 2 naming an unknown task kind and listing the known ones', () => {
+    const r = cli(['run', jobFile('kind.json', { points, tasks: [{ kind: 'area', points: ['A', 'B', 'C'] }, { kind: 'heigth' }] })]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/tasks\[1\]\.kind: "heigth" is not a known kind \(.*area.*\)/);
+  });
+
+  it('exits 2 naming an unknown field', () => {
+    const r = cli(['run', jobFile('field.json', { points, tasks: [{ kind: 'area', points: ['A', 'B', 'C'], colour: 'red' }] })]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toContain('tasks[0].colour: is not a known field');
+  });
+
+  it('exits 2 naming a point that the job does not have', () => {
+    const r = cli(['run', jobFile('point.json', { points, tasks: [{ kind: 'area', points: ['A', 'B', 'D'] }] })]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toContain('tasks[0].points[2]: "D" is not a point of this job');
+  });
+
+  it('exits 2 naming a reading that is not an angle, deep in the task', () => {
+    const courses = [
+      { bearing: '90', distance: 100 },
+      { bearing: `0°61'`, distance: 80 },
+    ];
+    const r = cli(['run', jobFile('angle.json', { points, tasks: [{ kind: 'traverse', start: 'A', close: 'C', courses }] })]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/tasks\[0\]\.courses\[1\]\.bearing: "0°61'" is not a valid bearing: .*minutes 61 ≥ 60/);
+  });
+
+  it('exits 2 naming a length with an unknown unit', () => {
+    const r = cli(['run', jobFile('unit.json', { points, tasks: [{ kind: 'traverse', start: 'A', close: 'B', courses: [{ bearing: 90, distance: '100 furlongs' }] }] })]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toContain('tasks[0].courses[0].distance');
+  });
+
+  it('exits 2 for a job file that does not exist', () => {
+    const r = cli(['run', join(dir, 'missing.json')]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/cannot read the job file .*ENOENT/);
+  });
+
+  it('exits 2 for an unknown option value', () => {
+    const r = cli(['demo', '--arithmetic', 'complex']);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/complex/);
+    const d = cli(['demo', '--digits', 'many']);
+    expect(d.code).toBe(2);
+  });
+});
+
+describe('quadspread run with a job that has no solution', () => {
+  const impossible = { tasks: [{ kind: 'triangle', name: 'Long thin', known: { side1: 1, side2: 2, side3: 10 } }] };
+
+  it('exits 3 naming the task and the reason', () => {
+    const r = cli(['run', jobFile('impossible.json', impossible)]);
+    expect(r.code).toBe(3);
+    expect(r.stderr).toMatch(/tasks\[0\] \(triangle "Long thin"\): no solution: .*no proper triangle/);
+    expect(r.stdout).toBe('');
+  });
+
+  it('exits 3 for two parallel lines that must meet', () => {
+    const r = cli(['run', jobFile('parallel.json', { points: { ...points, D: { east: 0, north: 80 } }, tasks: [{ kind: 'intersection', lines: [['A', 'B'], ['D', 'C']] }] })]);
+    expect(r.code).toBe(3);
+    expect(r.stderr).toMatch(/tasks\[0\] \(intersection\): no solution: PARALLEL_LINES/);
+  });
+
+  it('writes neither the report nor the sketch, leaves no temporary file and keeps an older report as it was', () => {
+    const out = join(dir, 'out', 'report.md');
+    const sketch = join(dir, 'out', 'sketch.svg');
+    const outDir = join(dir, 'out');
+    // An older report stays as it was.
+    const f = jobFile('impossible2.json', impossible);
+    const ok = jobFile('ok.json', { points, tasks: [{ kind: 'area', points: ['A', 'B', 'C'] }] });
+    require('node:fs').mkdirSync(outDir, { recursive: true });
+    expect(cli(['run', ok, '--out', out, '--format', 'markdown']).code).toBe(0);
+    const before = readFileSync(out, 'utf8');
+    const r = cli(['run', f, '--out', out, '--sketch', sketch]);
+    expect(r.code).toBe(3);
+    expect(readFileSync(out, 'utf8')).toBe(before);
+    expect(existsSync(sketch)).toBe(false);
+    expect(readdirSync(outDir)).toEqual(['report.md']);
+    // A bad job (exit 2) writes nothing either.
+    const bad = cli(['run', jobFile('bad.json', '{"tasks": ['), '--out', join(outDir, 'new.txt'), '--sketch', join(outDir, 'new.svg')]);
+    expect(bad.code).toBe(2);
+    expect(readdirSync(outDir)).toEqual(['report.md']);
+  });
+});
