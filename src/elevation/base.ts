@@ -1,0 +1,162 @@
+/**
+ * The height of a point whose foot cannot be reached, from two stations on a measured base
+ * with horizontal spreads at each towards the point's foot.
+ *
+ * @module elevation
+ */
+import { QuadspreadError, show } from '../errors.js';
+import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+import type { Root } from '../geometry/surd.js';
+import { readQuadrance, readSpread } from '../geometry/validate.js';
+import { angleToDegrees } from '../readings/angle.js';
+import { spreadFromDegrees } from '../readings/spread.js';
+import { readVertical, type VerticalInput } from '../readings/vertical.js';
+import { rootOps } from './roots.js';
+
+/**
+ * Where the foot of the point lies, seen along the base: `'between'` when its
+ * perpendicular projection on the base line falls between the two stations (both interior
+ * angles at the stations acute), `'beyond'` when it falls beyond one of them (one interior
+ * angle obtuse — necessarily at the station with the larger spread).
+ */
+export type FootSide = 'between' | 'beyond';
+
+/** The result of {@link heightFromBase}. */
+export interface BaseHeight<T, E extends boolean> {
+  /** Horizontal quadrances from the first and the second station to the foot (spread law). */
+  readonly horizontal: readonly [Root<T, E>, Root<T, E>];
+  /** The spread at the foot between the lines to the two stations (triple spread formula). */
+  readonly spreadAtFoot: Root<T, E>;
+  /** H from each station's vertical reading (`undefined` where none was given). */
+  readonly heights: readonly [Root<T, E> | undefined, Root<T, E> | undefined];
+  /** The height quadrance: the weighted mean of the heights given (see {@link heightFromBase}). */
+  readonly H: Root<T, E>;
+  /** heights[0] − heights[1] when both readings are given. */
+  readonly discrepancy: Root<T, E> | undefined;
+  /** +1 above the stations' level, −1 below, 0 on it. */
+  readonly sign: -1 | 0 | 1;
+}
+
+/**
+ * Two stations on a measured base of quadrance `base`, a horizontal spread at each between
+ * the base and the line to the foot of a point that cannot be reached, and a vertical
+ * reading from one or both stations: the horizontal quadrances by the spread law and the
+ * point's vertical quadrance H above the stations' level.
+ *
+ * The spread s₃ at the foot follows from the triple spread formula
+ * (s₁ + s₂ + s₃)² = 2(s₁² + s₂² + s₃²) + 4s₁s₂s₃ (Wildberger, *Divine Proportions*, 2005,
+ * ch. 7), whose two solutions s₃ = s₁ + s₂ − 2s₁s₂ ± 2√(s₁s₂(1 − s₁)(1 − s₂)) are the two
+ * triangles the spreads allow: `+` when both interior angles at the stations are acute
+ * (`foot: 'between'`), `−` when one is obtuse (`foot: 'beyond'`). Spreads alone cannot tell
+ * them apart: the caller says which with `foot`, or gives the horizontal interior `angles`
+ * (degrees or DMS, each in (0°, 180°)), from which the spreads and the side follow. Then
+ * the spread law Q/s = Q_base/s₃ (same source, ch. 6) gives Q(station 1, foot) =
+ * base·s₂/s₃ and Q(station 2, foot) = base·s₁/s₃, and {@link heightFromReading} each H.
+ *
+ * With both vertical readings, H is their mean weighted by (1 − R)²/Q (as in
+ * {@link heightFromTwoStations}), here (1 − R₁)²·s₁ and (1 − R₂)²·s₂ after the common
+ * factor is taken out. Results are exact surds in `rational` (given spreads; angles in
+ * degrees are transcendental, see {@link spreadFromDegrees}), values otherwise.
+ *
+ * @param A the arithmetic
+ * @param input `base`: the quadrance between the stations; either `spreads: [s1, s2]` with
+ *   `foot: 'between' | 'beyond'`, or `angles: [a1, a2]`; `vertical: [R1, R2]` (either may
+ *   be `undefined`, not both)
+ * @returns `{ horizontal, spreadAtFoot, heights, H, discrepancy, sign }`
+ * @throws {QuadspreadError} `INVALID_ARGUMENT` for a missing or unknown `foot`, both or
+ *   neither of `spreads` and `angles`, or no vertical reading; `COLLINEAR_POINTS` when a
+ *   spread is 0 (the foot on the base line); `DEGENERATE_TRIANGLE` when the spreads admit
+ *   no triangle on that side (equal spreads with `'beyond'`, angles summing to 180° or more);
+ *   `INCONSISTENT_READINGS` for readings on opposite sides of the horizon;
+ *   `VERTICAL_SIGHT`; `SPREAD_OUT_OF_RANGE`; `NEGATIVE_QUADRANCE`; `INVALID_ANGLE`.
+ * @example
+ * ```ts
+ * import { rational, heightFromBase } from 'quadspread';
+ * // base 0→(14, 0); foot (5, 12): spreads 144/169 at the first station, 144/225 at the second
+ * const r = heightFromBase(rational, { base: 196, spreads: ['144/169', '16/25'], foot: 'between', vertical: ['1/2', undefined] });
+ * [r.horizontal[0].toString(), r.horizontal[1].toString(), r.H.toString()];
+ * //=> ['169', '225', '169']
+ * ```
+ */
+export function heightFromBase<T, E extends boolean>(
+  A: Arithmetic<T, E>,
+  input: {
+    base: Numeric<T>;
+    spreads?: readonly [Numeric<T>, Numeric<T>];
+    foot?: FootSide;
+    angles?: readonly [Numeric<T>, Numeric<T>];
+    vertical: readonly [VerticalInput<T> | undefined, VerticalInput<T> | undefined];
+  },
+): BaseHeight<T, E> {
+  const w = 'heightFromBase(input)';
+  const R = rootOps(A);
+  const base = readQuadrance(A, input.base, w, 'base');
+  if (A.isZero(base)) throw new QuadspreadError('COINCIDENT_POINTS', `${w}.base`, 'the base is zero: the stations coincide');
+  let s1: T;
+  let s2: T;
+  let side: FootSide;
+  if ((input.spreads === undefined) === (input.angles === undefined)) {
+    throw new QuadspreadError('INVALID_ARGUMENT', w, 'give either spreads (with foot) or angles, not both or neither');
+  }
+  if (input.angles !== undefined) {
+    if (input.foot !== undefined) throw new QuadspreadError('INVALID_ARGUMENT', `${w}.foot`, 'angles already fix the side of the foot; leave foot out');
+    const a = input.angles.map((x, i) => {
+      const d = angleToDegrees(A, x);
+      if (A.sign(d) <= 0 || A.cmp(d, A.from(180)) >= 0) throw new QuadspreadError('INVALID_ANGLE', `${w}.angles[${i}]`, `${show(typeof x === 'object' ? A.toString(d) : x)} is not an interior angle in (0°, 180°)`);
+      return d;
+    });
+    if (A.cmp(A.add(a[0]!, a[1]!), A.from(180)) >= 0) throw new QuadspreadError('DEGENERATE_TRIANGLE', `${w}.angles`, 'the two interior angles sum to 180° or more: the sights do not meet');
+    s1 = spreadFromDegrees(A, a[0]!);
+    s2 = spreadFromDegrees(A, a[1]!);
+    const ninety = A.from(90);
+    side = A.cmp(a[0]!, ninety) > 0 || A.cmp(a[1]!, ninety) > 0 ? 'beyond' : 'between';
+  } else {
+    if (input.foot !== 'between' && input.foot !== 'beyond') {
+      throw new QuadspreadError('INVALID_ARGUMENT', `${w}.foot`, `${show(input.foot)} is not 'between' or 'beyond': spreads alone allow two triangles, say which`);
+    }
+    side = input.foot;
+    s1 = readSpread(A, input.spreads![0], w, 'spreads[0]');
+    s2 = readSpread(A, input.spreads![1], w, 'spreads[1]');
+  }
+  if (A.isZero(s1) || A.isZero(s2)) throw new QuadspreadError('COLLINEAR_POINTS', `${w}.spreads`, 'a spread of 0 puts the foot on the base line');
+  const one = A.one;
+  const two = A.from(2);
+  // s3 = s1 + s2 − 2 s1 s2 ± 2√(s1 s2 (1 − s1)(1 − s2)): the triple spread formula solved for s3
+  const p = A.sub(A.add(s1, s2), A.mul(two, A.mul(s1, s2)));
+  const d = A.mul(A.mul(s1, s2), A.mul(A.sub(one, s1), A.sub(one, s2)));
+  const s3 = R.make(p, side === 'between' ? two : A.neg(two), d);
+  if (R.sign(s3) <= 0) throw new QuadspreadError('DEGENERATE_TRIANGLE', `${w}.spreads`, `with foot '${side}' the spreads ${A.toString(s1)} and ${A.toString(s2)} give no triangle (spread 0 at the foot)`);
+  // spread law: Q/s is the same for every side and its opposite spread
+  const scale = R.div(R.lift(base), s3);
+  const Q1 = R.mul(scale, s2);
+  const Q2 = R.mul(scale, s1);
+  const v = input.vertical ?? [undefined, undefined];
+  const readings = [0, 1].map((i) => (v[i] === undefined ? undefined : readVertical(A, v[i]!, `${w}.vertical[${i}]`)));
+  if (readings[0] === undefined && readings[1] === undefined) throw new QuadspreadError('INVALID_ARGUMENT', `${w}.vertical`, 'give at least one vertical reading');
+  const heights: (typeof Q1 | undefined)[] = [];
+  const weights: T[] = [];
+  const Qs = [Q1, Q2];
+  const ss = [s1, s2];
+  for (let i = 0; i < 2; i++) {
+    const r = readings[i];
+    if (r === undefined) { heights.push(undefined); continue; }
+    const c = A.sub(one, r.spread);
+    if (A.isZero(c)) throw new QuadspreadError('VERTICAL_SIGHT', `${w}.vertical[${i}]`, 'a vertical spread of 1 is a plumb sight: it meets no point off the station');
+    heights.push(R.mul(Qs[i]!, A.div(r.spread, c))); // H = Q·R/(1 − R)
+    weights.push(A.mul(A.mul(c, c), ss[i]!));
+  }
+  const sg = readings.map((r) => (r === undefined ? 0 : r.sign));
+  if (sg[0]! * sg[1]! < 0) throw new QuadspreadError('INCONSISTENT_READINGS', `${w}.vertical`, 'one reading is above the horizon and the other below');
+  let H: typeof Q1;
+  let discrepancy: typeof Q1 | undefined;
+  if (heights[0] !== undefined && heights[1] !== undefined) {
+    const [wa, wb] = weights as [T, T];
+    H = R.div(R.add(R.mul(heights[0], wa), R.mul(heights[1], wb)), A.add(wa, wb));
+    discrepancy = R.sub(heights[0], heights[1]);
+  } else {
+    H = (heights[0] ?? heights[1])!;
+    discrepancy = undefined;
+  }
+  const sign = (sg[0] !== 0 ? sg[0] : sg[1]) as -1 | 0 | 1;
+  return { horizontal: [Q1, Q2], spreadAtFoot: s3, heights: [heights[0], heights[1]], H, discrepancy, sign: R.sign(H) === 0 ? 0 : sign };
+}

@@ -1,0 +1,98 @@
+/**
+ * The height of a point seen from two stations of known position, its foot known in plan.
+ *
+ * @module elevation
+ */
+import { QuadspreadError } from '../errors.js';
+import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+import type { Point } from '../geometry/point.js';
+import { readVertical, type VerticalInput } from '../readings/vertical.js';
+import { heightFromReading } from './height.js';
+
+/** @internal reads a point given with numeric or arithmetic coordinates. */
+export function readPoint<T>(A: Arithmetic<T>, P: { x: Numeric<T>; y: Numeric<T> }, where: string): Point<T> {
+  if (typeof P !== 'object' || P === null) throw new QuadspreadError('INVALID_ARGUMENT', where, 'is not a point { x, y }');
+  return { x: A.from(P.x), y: A.from(P.y) };
+}
+
+/** The result of {@link heightFromTwoStations}. */
+export interface TwoStationHeight<T> {
+  /** H from the first station: Q₁·R₁/(1 − R₁). */
+  readonly H1: T;
+  /** H from the second station. */
+  readonly H2: T;
+  /** H1 − H2: zero for consistent readings. */
+  readonly discrepancy: T;
+  /** The weighted mean (w₁H₁ + w₂H₂)/(w₁ + w₂). */
+  readonly H: T;
+  /** The weights w = (1 − R)²/Q of the two readings (not normalised). */
+  readonly weights: readonly [T, T];
+  /** +1 when the point is above the stations' level, −1 below, 0 on it. */
+  readonly sign: -1 | 0 | 1;
+}
+
+/**
+ * The vertical quadrance of a point above the stations' common level from two stations of
+ * known plan position, each with a vertical reading to the point, the point's foot known
+ * in plan: H from each by {@link heightFromReading}, their discrepancy, and a weighted mean.
+ *
+ * The weights are w = (1 − R)²/Q: a vertical-angle error dα moves the height by
+ * dh = D·sec²α·dα = D/(1 − R)·dα (derived by differentiating h = D·tan α), so with equal
+ * angular precision the variance of each height is proportional to Q/(1 − R)²; the mean
+ * weights by its inverse. Exact in `rational`.
+ *
+ * @param A the arithmetic
+ * @param input `stations`: the two stations `{ x, y }` (x east, y north); `foot`: the foot of
+ *   the point in plan; `vertical`: the two readings (spreads or signed readings), same order
+ * @returns `{ H1, H2, discrepancy, H, weights, sign }`
+ * @throws {QuadspreadError} `COINCIDENT_POINTS` when a station is at the foot;
+ *   `VERTICAL_SIGHT` for a spread of 1; `INCONSISTENT_READINGS` when one reading is above
+ *   the horizon and the other below; `INVALID_ARGUMENT` unless two stations and two readings
+ *   are given; `SPREAD_OUT_OF_RANGE`.
+ * @example
+ * ```ts
+ * import { rational, heightFromTwoStations } from 'quadspread';
+ * const r = heightFromTwoStations(rational, {
+ *   stations: [{ x: 0, y: 0 }, { x: 10, y: 0 }],
+ *   foot: { x: 4, y: 3 },
+ *   vertical: ['1/2', '25/70'],
+ * });
+ * [rational.toString(r.H1), rational.toString(r.H2), rational.toString(r.discrepancy)];
+ * //=> ['25', '25', '0']
+ * ```
+ */
+export function heightFromTwoStations<T>(
+  A: Arithmetic<T>,
+  input: {
+    stations: readonly [{ x: Numeric<T>; y: Numeric<T> }, { x: Numeric<T>; y: Numeric<T> }];
+    foot: { x: Numeric<T>; y: Numeric<T> };
+    vertical: readonly [VerticalInput<T>, VerticalInput<T>];
+  },
+): TwoStationHeight<T> {
+  const w = 'heightFromTwoStations(input)';
+  if (!Array.isArray(input.stations) || input.stations.length !== 2) throw new QuadspreadError('INVALID_ARGUMENT', `${w}.stations`, 'give exactly two stations');
+  if (!Array.isArray(input.vertical) || input.vertical.length !== 2) throw new QuadspreadError('INVALID_ARGUMENT', `${w}.vertical`, 'give exactly two vertical readings');
+  const F = readPoint(A, input.foot, `${w}.foot`);
+  const H: T[] = [];
+  const weights: T[] = [];
+  const signs: number[] = [];
+  for (let i = 0; i < 2; i++) {
+    const P = readPoint(A, input.stations[i]!, `${w}.stations[${i}]`);
+    const dx = A.sub(F.x, P.x);
+    const dy = A.sub(F.y, P.y);
+    const Q = A.add(A.mul(dx, dx), A.mul(dy, dy));
+    if (A.isZero(Q)) throw new QuadspreadError('COINCIDENT_POINTS', `${w}.stations[${i}]`, 'the station is at the foot of the point: its reading is a plumb sight');
+    const v = readVertical(A, input.vertical[i]!, `${w}.vertical[${i}]`);
+    H.push(heightFromReading(A, { horizontal: Q, vertical: v }));
+    const c = A.sub(A.one, v.spread);
+    weights.push(A.div(A.mul(c, c), Q)); // w = (1 − R)²/Q (derived: dh = D/(1 − R)·dα)
+    signs.push(v.sign);
+  }
+  if (signs[0]! * signs[1]! < 0) {
+    throw new QuadspreadError('INCONSISTENT_READINGS', `${w}.vertical`, 'one reading is above the horizon and the other below');
+  }
+  const [w1, w2] = weights as [T, T];
+  const mean = A.div(A.add(A.mul(w1, H[0]!), A.mul(w2, H[1]!)), A.add(w1, w2));
+  const sign = (signs[0] !== 0 ? signs[0] : signs[1]) as -1 | 0 | 1;
+  return { H1: H[0]!, H2: H[1]!, discrepancy: A.sub(H[0]!, H[1]!), H: mean, weights: [w1, w2], sign };
+}
