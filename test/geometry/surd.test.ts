@@ -8,10 +8,10 @@ import { surd, sqrtOf, asRoot, isSurd, rootToNumber, rootToString, rootToPrecisi
 import type { Surd } from '../../src/geometry/index.js';
 import type { Rational } from '../../src/index.js';
 
-const M = create(all, { number: 'BigNumber', precision: 80 });
+const M = create(all!, { number: 'BigNumber', precision: 80 });
 /** a + b√d in mathjs BigNumber at 80 digits, from the surd's exact parts (independent of the surd code). */
 function big(s: Surd<Rational>) {
-  const part = (x: Rational) => M.divide(M.bignumber((x.s * x.n).toString()), M.bignumber(x.d.toString()));
+  const part = (x: Rational): any => M.divide(M.bignumber((x.s * x.n).toString()) as any, M.bignumber(x.d.toString()) as any);
   return M.add(part(s.a), M.multiply(part(s.b), M.sqrt(part(s.d)))) as any;
 }
 function code(f: () => unknown): string | undefined {
