@@ -22,6 +22,8 @@ interface Field<T, R> {
   mul(x: R, y: R): R;
   div(x: R, y: R): R;
   sign(x: R): -1 | 0 | 1;
+  /** A computed spread: as is when exact; clamped to at most 1 when rounded. */
+  unit(x: R): R;
 }
 
 function surdField<T>(A: Arithmetic<T>): Field<T, Surd<T>> {
@@ -33,6 +35,7 @@ function surdField<T>(A: Arithmetic<T>): Field<T, Surd<T>> {
     mul: (x, y) => x.mul(y),
     div: (x, y) => x.div(y),
     sign: (x) => x.sign(),
+    unit: (x) => x,
   };
 }
 
@@ -49,6 +52,7 @@ function valueField<T>(A: Arithmetic<T>): Field<T, T> {
     mul: A.mul,
     div: A.div,
     sign: A.sign,
+    unit: (x) => (A.cmp(x, A.one) > 0 ? A.one : x),
   };
 }
 
@@ -68,7 +72,8 @@ const KEYS = ['Q1', 'Q2', 'Q3', 's1', 's2', 's3'] as const;
  *   spread formula (two roots in general), then the quadrances by the spread law.
  *
  * **Exactness**: in an exact arithmetic every measure is a {@link Surd} (one radicand per
- * triangle), exact; elsewhere values rounded by the arithmetic.
+ * triangle), exact; elsewhere values rounded by the arithmetic (a computed spread that
+ * rounds above 1 is returned as 1).
  * **Order**: solutions come in increasing order of the measure that needed a root
  * (the minus sign first).
  * **No solution**: data that no proper triangle has — a zero quadrance or spread,
@@ -128,7 +133,7 @@ function solve<T, R>(A: Arithmetic<T>, F: Field<T, R>, Q: (T | undefined)[], s: 
     const qd = A.sub(A.mul(sum, sum), A.add(sq, sq));
     if (A.sign(qd) <= 0) return [];
     // quadrea = 4·Qj·Qk·si (cross law with the spread at Ai between sides Qj, Qk; derived).
-    const sp = (x: T, y: T) => F.lift(A.div(qd, A.mul(four, A.mul(x, y))));
+    const sp = (x: T, y: T) => F.unit(F.lift(A.div(qd, A.mul(four, A.mul(x, y)))));
     return [make([F.lift(a!), F.lift(b!), F.lift(c!)], [sp(b!, c!), sp(a!, c!), sp(a!, b!)], F.lift(qd))];
   }
 
@@ -156,8 +161,8 @@ function solve<T, R>(A: Arithmetic<T>, F: Field<T, R>, Q: (T | undefined)[], s: 
         const p: R[] = [];
         q[i] = F.lift(Qi); q[j] = F.lift(Qj); q[k] = Qk;
         p[k] = skR;
-        p[i] = F.div(F.mul(skR, F.lift(Qi)), Qk);
-        p[j] = F.div(F.mul(skR, F.lift(Qj)), Qk);
+        p[i] = F.unit(F.div(F.mul(skR, F.lift(Qi)), Qk));
+        p[j] = F.unit(F.div(F.mul(skR, F.lift(Qj)), Qk));
         out.push(make(q, p, quadrea));
       }
       return out;
@@ -180,11 +185,11 @@ function solve<T, R>(A: Arithmetic<T>, F: Field<T, R>, Q: (T | undefined)[], s: 
       const Qk = F.root(base, m, d);
       if (F.sign(Qk) <= 0) continue;
       const saR = F.lift(sa);
-      const sk = F.div(F.mul(saR, Qk), F.lift(Qa)); // spread law sk/Qk = sa/Qa
+      const sk = F.unit(F.div(F.mul(saR, Qk), F.lift(Qa))); // spread law sk/Qk = sa/Qa
       const q: R[] = [];
       const p: R[] = [];
       q[ia] = F.lift(Qa); q[ib] = F.lift(Qb); q[k] = Qk;
-      p[ia] = saR; p[ib] = F.lift(sb); p[k] = sk;
+      p[ia] = saR; p[ib] = F.unit(F.lift(sb)); p[k] = sk;
       // quadrea = 4·Qa·Qb·sk (the vertex A_k lies between the sides Qa and Qb).
       out.push(make(q, p, F.mul(F.lift(A.mul(four, A.mul(Qa, Qb))), sk)));
     }
@@ -209,7 +214,7 @@ function solve<T, R>(A: Arithmetic<T>, F: Field<T, R>, Q: (T | undefined)[], s: 
     const sc = F.root(base, m, d);
     if (F.sign(sc) <= 0) continue;
     const p: R[] = [];
-    p[a] = F.lift(sa); p[b] = F.lift(sb); p[c] = sc;
+    p[a] = F.lift(sa); p[b] = F.lift(sb); p[c] = F.unit(sc);
     // Spread law Qj = Qi·sj/si: Wildberger, Divine Proportions (2005), ch. 6.
     const ratio = F.div(Qi, p[i]!);
     const q: R[] = [];
