@@ -6,6 +6,7 @@
 import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { angleToDegrees } from '../readings/angle.js';
+import { formatDms } from '../readings/dms.js';
 
 /**
  * Reads a bearing as an azimuth in degrees, clockwise from north (x = east, y = north),
@@ -31,7 +32,12 @@ import { angleToDegrees } from '../readings/angle.js';
  * //=> '315'
  * ```
  */
-export function bearingToAzimuth<T>(A: Arithmetic<T, boolean>, bearing: Numeric<T>, where = 'bearingToAzimuth(bearing)'): T {
+export function bearingToAzimuth<T>(A: Arithmetic<T, boolean>, bearing: Numeric<T>): T {
+  return readAzimuth(A, bearing, 'bearingToAzimuth(A, bearing)');
+}
+
+/** {@link bearingToAzimuth} naming `where` in its errors. @internal */
+export function readAzimuth<T>(A: Arithmetic<T, boolean>, bearing: Numeric<T>, where: string): T {
   let deg: T;
   try {
     deg = angleToDegrees(A, bearing);
@@ -46,4 +52,36 @@ export function bearingToAzimuth<T>(A: Arithmetic<T, boolean>, bearing: Numeric<
     throw new QuadspreadError('INVALID_BEARING', where, `${show(bearing)} is not an azimuth in [0°, 360°] (clockwise from north)`);
   }
   return A.eq(deg, full) ? A.zero : deg;
+}
+
+/**
+ * Writes an azimuth (degrees clockwise from north, x = east, y = north) as a quadrant
+ * bearing such as `S 68°05'35.0" W`: N θ E for azimuths up to 90°, S (180° − θ) E up to
+ * 180°, S (θ − 180°) W up to 270°, N (360° − θ) W beyond. The angle is written by the
+ * readings' `formatDms`, seconds rounded half away from zero.
+ *
+ * @param A the arithmetic
+ * @param azimuth degrees clockwise from north, in [0, 360]
+ * @param secondsDecimals decimals of the seconds, 0..6 (default 1)
+ * @returns the quadrant bearing text
+ * @throws {QuadspreadError} `INVALID_BEARING` for an azimuth outside [0°, 360°]; `INVALID_ARGUMENT` for bad decimals.
+ * @example
+ * ```ts
+ * import { rational, azimuthToQuadrant } from 'quadspread';
+ * azimuthToQuadrant(rational, `248°05'35"`, 0);
+ * //=> `S 68°05'35" W`
+ * azimuthToQuadrant(rational, 315);
+ * //=> `N 45°00'00.0" W`
+ * ```
+ */
+export function azimuthToQuadrant<T>(A: Arithmetic<T, boolean>, azimuth: Numeric<T>, secondsDecimals = 1): string {
+  const z = readAzimuth(A, azimuth, 'azimuthToQuadrant(A, azimuth)');
+  const ninety = A.from(90);
+  const half = A.from(180);
+  const threeHalves = A.from(270);
+  // Quadrant bearings from azimuths (the inverse of the rule in bearingToAzimuth).
+  if (A.cmp(z, ninety) <= 0) return `N ${formatDms(A, z, secondsDecimals)} E`;
+  if (A.cmp(z, half) <= 0) return `S ${formatDms(A, A.sub(half, z), secondsDecimals)} E`;
+  if (A.cmp(z, threeHalves) <= 0) return `S ${formatDms(A, A.sub(z, half), secondsDecimals)} W`;
+  return `N ${formatDms(A, A.sub(A.from(360), z), secondsDecimals)} W`;
 }

@@ -7,6 +7,8 @@
 import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
+import { surd } from '../geometry/surd.js';
+import type { Root } from '../geometry/surd.js';
 
 /** A point as cogo reads it: x = east, y = north, each a value or numeric input. @internal */
 export interface PointInput<T> {
@@ -63,4 +65,13 @@ export function readArray<U>(x: unknown, where: string, max = 1_000_000): readon
   if (!Array.isArray(x)) throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(x)} is not an array`);
   if (x.length > max) throw new QuadspreadError('INPUT_TOO_LONG', where, `${x.length} items is more than the limit of ${max}`);
   return x as readonly U[];
+}
+
+/**
+ * a + b·√d as a `Root`: a surd in an exact arithmetic, a value (√ rounded by `A.sqrt`)
+ * otherwise. Requires d ≥ 0. @internal
+ */
+export function rootOf<T, E extends boolean>(A: Arithmetic<T, E>, a: T, b: T, d: T): Root<T, E> {
+  if (A.exact) return surd(A, a, b, d) as Root<T, E>;
+  return A.add(a, A.mul(b, A.sqrt(d)!)) as Root<T, E>;
 }

@@ -204,7 +204,7 @@ function readOpt<T>(A: Arithmetic<T, boolean>, v: Numeric<T> | undefined): T | u
  *   sights: [{ bs: '1.200' }, { is: '0.950' }, { fs: '0.800', bs: '1.500' }, { fs: '1.390' }],
  * });
  * [rational.toString(run.rows[3]!.level), rational.toString(run.misclosure!), rational.toString(run.rows[3]!.adjusted)];
- * //=> ['100.51', '0.01', '100.5']
+ * //=> ['10051/100', '1/100', '201/2']
  * ```
  */
 export function levelRun<T, E extends boolean>(A: Arithmetic<T, E>, input: LevelRunInput<T>): LevelRun<T, E> {

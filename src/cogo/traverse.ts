@@ -11,7 +11,7 @@ import { sqrtOf } from '../geometry/surd.js';
 import type { Root } from '../geometry/surd.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { angleToDegrees } from '../readings/angle.js';
-import { bearingToAzimuth } from './bearing.js';
+import { readAzimuth } from './bearing.js';
 import { readArray, readPoint, sqrtValue } from './internal.js';
 import type { PointInput } from './internal.js';
 
@@ -118,7 +118,7 @@ export interface Traverse<T, E extends boolean> {
  * import { rational, angularMisclosure } from 'quadspread';
  * const m = angularMisclosure(rational, [`90°00'10"`, '90', '90', `89°59'56"`]);
  * rational.toString(m.misclosure);
- * //=> '1/1800'
+ * //=> '1/600'
  * ```
  */
 export function angularMisclosure<T>(A: Arithmetic<T, boolean>, angles: readonly Numeric<T>[]): AngularMisclosure<T> {
@@ -209,7 +209,7 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
     if (c.bearing !== undefined) {
       if (c.distance === undefined) throw new QuadspreadError('INVALID_ARGUMENT', at, 'a course with a bearing needs a distance');
       d = A.from(c.distance);
-      const az = bearingToAzimuth(A, c.bearing, `${at}.bearing`);
+      const az = readAzimuth(A, c.bearing, `${at}.bearing`);
       // Latitude = d·cos(azimuth), departure = d·sin(azimuth) (azimuth clockwise from north),
       // e.g. Ghilani & Wolf, Elementary Surveying, ch. 10 (from memory).
       const sc = sinCosDegrees(A, az);
