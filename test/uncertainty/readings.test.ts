@@ -3,6 +3,7 @@ import fc from 'fast-check';
 import { create, all } from 'mathjs';
 import { rational, decimal, float, uncertain, Uncertain } from '../../src/arithmetic/index.js';
 import { spreadFromDegrees, sinCosDegrees, verticalFromAngle } from '../../src/readings/index.js';
+import { heightFromReading } from '../../src/elevation/height.js';
 import { measured } from '../../src/uncertainty/measured.js';
 import { budget } from '../../src/uncertainty/budget.js';
 import { monteCarlo } from '../../src/uncertainty/monte-carlo.js';
@@ -139,16 +140,10 @@ describe('acceptance: the height of a point from a horizontal distance d and an 
   const t = (alphaDeg * Math.PI) / 180;
   const hand = Math.sqrt(Math.tan(t) ** 2 * ud ** 2 + ((d / Math.cos(t) ** 2) * uaSec * ARCSEC) ** 2);
 
-  /** H = Q·R/(1 − R), the vertical quadrance from the horizontal quadrance and the vertical spread (DESIGN: heightFromReading). */
-  function H<T>(U: typeof F | typeof R | typeof D, Q: Uncertain<T>, Rv: Uncertain<T>): Uncertain<T> {
-    const A = U as unknown as typeof F;
-    return A.div(A.mul(Q as never, Rv as never), A.sub(A.one, Rv as never)) as unknown as Uncertain<T>;
-  }
-
   it('budget(U, h).sigma over float equals the hand propagation to 1e-12 relative', () => {
     const Q = measuredQuadrance(F, d, 5, 'd');
     const v = measuredVertical(F, `12°30'00"`, uaSec, 'alpha');
-    const h = F.sqrt(H(F, Q, v.spread))!;
+    const h = F.sqrt(heightFromReading(F, { horizontal: Q, vertical: v }))!; // H = Q·R/(1 − R), h = √H
     const B = budget(F, h);
     expect(B.value).toBeCloseTo(d * Math.tan(t), 12);
     expect(Math.abs(B.sigma - hand) / hand).toBeLessThan(1e-12);
@@ -168,7 +163,7 @@ describe('acceptance: the height of a point from a horizontal distance d and an 
   it('over rational the variance of H = h² is exact: it equals the hand formula evaluated in rational on the same readings', () => {
     const Q = measuredQuadrance(R, d, 5, 'd');
     const v = measuredVertical(R, `12°30'00"`, uaSec, 'alpha');
-    const Hq = H(R, Q, v.spread);
+    const Hq = heightFromReading(R, { horizontal: Q, vertical: v });
     const B = budget(R, Hq);
     // By hand: H = d²·R/(1 − R); ∂H/∂d = 2d·R/(1 − R); ∂H/∂α = d²·R′/(1 − R)² with R′ = 2 sin α cos α·π/180 per degree.
     const Rv = verticalFromAngle(r, '12.5').spread;
@@ -195,7 +190,7 @@ describe('acceptance: the height of a point from a horizontal distance d and an 
     const want = M.sqrt(u2 as never);
     const Q = measuredQuadrance(D, d, 5, 'd');
     const v = measuredVertical(D, '12.5', uaSec, 'alpha');
-    const h = D.sqrt(H(D, Q, v.spread))!;
+    const h = D.sqrt(heightFromReading(D, { horizontal: Q, vertical: v }))!;
     const got = bn(D.base.toString(budget(D, h).sigma));
     const rel = M.abs(M.divide(M.subtract(got, want), want));
     expect((rel as unknown as { lt(x: unknown): boolean }).lt(bn('1e-30'))).toBe(true); // not M.smaller: it compares within mathjs' tolerance

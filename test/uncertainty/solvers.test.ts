@@ -64,8 +64,8 @@ describe('solvers run in uncertain(base) without change', () => {
     const tr = triangle(R, ...(mk(R, (v, n) => measured(R, v, '0.01', n)) as [never, never, never]));
     const tf = triangle(F, ...(mk(F, (v, n) => measured(F, v, 0.01, n)) as [never, never, never]));
     for (const key of ['s1', 's2', 's3', 'quadrea', 'Q1'] as const) {
-      const gr = (tr as Record<string, Uncertain<ReturnType<typeof rational.from>>>)[key]!;
-      const gf = (tf as Record<string, Uncertain<number>>)[key]!;
+      const gr = (tr as unknown as Record<string, Uncertain<ReturnType<typeof rational.from>>>)[key]!;
+      const gf = (tf as unknown as Record<string, Uncertain<number>>)[key]!;
       for (const name of ['x0', 'y0', 'x1', 'y1', 'x2', 'y2']) {
         const a = rational.toNumber(grad(gr, name) ?? rational.zero);
         const b = grad(gf, name) ?? 0;
