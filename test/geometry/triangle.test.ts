@@ -139,6 +139,35 @@ describe('solveTriangle(float, …) agrees with classical trigonometry (Math.sin
   });
 });
 
+describe('solveTriangle in float and decimal recovers triangles within a rounding bound', () => {
+  const c = fc.double({ min: -1000, max: 1000, noNaN: true });
+  const ftri = fc.tuple(c, c, c, c, c, c).map(([a, b, d, e, f, g]) => [{ x: a, y: b }, { x: d, y: e }, { x: f, y: g }] as const)
+    .filter(([P, Q, R]) => {
+      const D = (Q.x - P.x) * (R.y - P.y) - (Q.y - P.y) * (R.x - P.x);
+      const q = [(Q.x - P.x) ** 2 + (Q.y - P.y) ** 2, (R.x - Q.x) ** 2 + (R.y - Q.y) ** 2, (R.x - P.x) ** 2 + (R.y - P.y) ** 2];
+      if (Math.min(...q) < 1e-2 * Math.max(...q)) return false;
+      // keep spreads in [0.01, 0.99]: away from the tangent cases where rounding may drop a double root
+      const s = [D * D / (q[0]! * q[2]!), D * D / (q[0]! * q[1]!), D * D / (q[1]! * q[2]!)];
+      return s.every((x) => x > 0.01 && x < 0.99);
+    });
+  // Bound: the solvers use a few dozen operations and one square root of a discriminant that
+  // stays away from zero here (spreads ≤ 0.99), so a relative error of 1e-9 leaves a wide margin.
+  it.each(CHOICES.map((ch) => [ch.join(', '), ch] as const))('float: from %s a solution matches the original to 1e-9 relative', (_name, choice) => {
+    fc.assert(fc.property(ftri, ([P, Q, R]) => {
+      const t = triangle(float, P, Q, R);
+      const sols = solveTriangle(float, Object.fromEntries(choice.map((k) => [k, t[k]])));
+      const near = (s: Triangle<number>) => [...MEASURES, 'quadrea' as const].every((k) => Math.abs(s[k] - t[k]) <= 1e-9 * Math.max(Math.abs(t[k]), k[0] === 's' ? 1 : 0));
+      expect(sols.some(near)).toBe(true);
+    }), { numRuns: 30 });
+  });
+  it('decimal(30): { Q1: 25, Q2: 16, s3: 1/2 } gives Q3 = 41 ± 20√2 to 28 digits', () => {
+    const D = decimal(30);
+    const sols = solveTriangle(D, { Q1: 25, Q2: 16, s3: '1/2' });
+    // 41 ∓ 20√2 = 12.71572875253809902396622551580… and 69.28427124746190097603377448419… (mathjs BigNumber, 50 digits)
+    expect(sols.map((t) => D.toPrecision(t.Q3, 28))).toEqual(['12.71572875253809902396622552', '69.28427124746190097603377448']);
+  });
+});
+
 describe('solveTriangle on data no proper triangle has returns an empty list', () => {
   const A = rational;
   it.each<[string, Record<string, number | string>]>([
