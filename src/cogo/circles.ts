@@ -8,7 +8,7 @@ import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import type { Root } from '../geometry/surd.js';
-import { readPoint, rootOf } from './internal.js';
+import { readPoint, rootOf, roundingSlack } from './internal.js';
 import type { PointInput } from './internal.js';
 
 /**
@@ -44,7 +44,9 @@ function readCircle<T>(A: Arithmetic<T, boolean>, c: unknown, where: string): { 
  * Coordinates are x = east, y = north. With d = P2 − P1 and f = P1 − C, the points are
  * P1 + t·d where t = (−f·d ± √((f·d)² − (d·d)(f·f − R)))/(d·d) (the quadratic formula), so
  * each coordinate is a surd a + b√k with one radicand k: exact in `rational`, a value in
- * `decimal` and `float`. A tangent line gives one point.
+ * `decimal` and `float`. A tangent line gives one point (in `decimal` and `float`, a
+ * discriminant within rounding of zero counts as a tangent: 1e-12 relative in `float`,
+ * 10^(3 − digits) in `decimal`).
  *
  * @param A the arithmetic
  * @param P1 a point of the line
@@ -80,7 +82,9 @@ export function intersectLineCircle<T, E extends boolean>(
   const h = A.add(A.mul(fx, dx), A.mul(fy, dy));
   const ff = A.add(A.mul(fx, fx), A.mul(fy, fy));
   // Quarter discriminant of (d·d)t² + 2(f·d)t + (f·f − R) = 0.
-  const disc = A.sub(A.mul(h, h), A.mul(dd, A.sub(ff, R)));
+  let disc = A.sub(A.mul(h, h), A.mul(dd, A.sub(ff, R)));
+  // In an inexact arithmetic a discriminant within rounding of zero is a tangent.
+  if (A.sign(disc) < 0 && A.cmp(A.neg(disc), A.mul(roundingSlack(A), A.add(A.mul(h, h), A.mul(dd, A.add(ff, R))))) <= 0) disc = A.zero;
   if (A.sign(disc) < 0) throw new QuadspreadError('NO_REAL_SOLUTION', where, 'the line misses the circle');
   const t0 = A.neg(A.div(h, dd));
   const ax = A.add(a.x, A.mul(t0, dx));
@@ -102,7 +106,8 @@ export function intersectLineCircle<T, E extends boolean>(
  * Coordinates are x = east, y = north. With D = Q(C1, C2), the foot on C1C2 is
  * C1 + τ·(C2 − C1) with τ = (D + R1 − R2)/(2D), and the offset is ±√(R1/D − τ²) times the
  * perpendicular (Δy, −Δx) (from the radical line of the two circles). Each coordinate is
- * a surd with one radicand: exact in `rational`.
+ * a surd with one radicand: exact in `rational`. In `decimal` and `float`, circles within
+ * rounding of touching (1e-12 relative in `float`, 10^(3 − digits) in `decimal`) touch.
  *
  * @param A the arithmetic
  * @param circle1 `{ center, radius }` or `{ center, quadrance }`
@@ -131,7 +136,9 @@ export function intersectCircles<T, E extends boolean>(
   const D = A.add(A.mul(dx, dx), A.mul(dy, dy));
   if (A.isZero(D)) throw new QuadspreadError('COINCIDENT_POINTS', where, 'the circles are concentric: they meet nowhere or everywhere');
   const tau = A.div(A.add(A.sub(D, R2), R1), A.add(D, D));
-  const k = A.sub(A.div(R1, D), A.mul(tau, tau));
+  let k = A.sub(A.div(R1, D), A.mul(tau, tau));
+  // In an inexact arithmetic a k within rounding of zero means the circles touch.
+  if (A.sign(k) < 0 && A.cmp(A.neg(k), A.mul(roundingSlack(A), A.add(A.div(R1, D), A.mul(tau, tau)))) <= 0) k = A.zero;
   if (A.sign(k) < 0) throw new QuadspreadError('NO_REAL_SOLUTION', where, 'the circles do not meet (the distances are too short or too long for the centres)');
   const bx = A.add(c1.x, A.mul(tau, dx));
   const by = A.add(c1.y, A.mul(tau, dy));

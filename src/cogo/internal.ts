@@ -75,3 +75,13 @@ export function rootOf<T, E extends boolean>(A: Arithmetic<T, E>, a: T, b: T, d:
   if (A.exact) return surd(A, a, b, d) as Root<T, E>;
   return A.add(a, A.mul(b, A.sqrt(d)!)) as Root<T, E>;
 }
+
+/**
+ * Relative slack for deciding "touching" against rounding in an inexact arithmetic: 0 in
+ * an exact one, 10^(3 − digits) for one with `digits` (decimal), 1e-12 otherwise (float). @internal
+ */
+export function roundingSlack<T>(A: Arithmetic<T, boolean>): T {
+  if (A.exact) return A.zero;
+  const digits = (A as { digits?: unknown }).digits;
+  return A.from(typeof digits === 'number' ? `1e${3 - digits}` : '1e-12');
+}

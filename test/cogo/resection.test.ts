@@ -1,0 +1,121 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { create, all } from 'mathjs';
+import { rational, decimal, float, resection, DANGER_CIRCLE_TOLERANCE, QuadspreadError } from '../../src/index.js';
+import type { Arithmetic } from '../../src/index.js';
+
+const M = create(all!, { number: 'BigNumber', precision: 70 });
+
+function code(f: () => unknown): string | undefined {
+  try {
+    f();
+  } catch (e) {
+    if (e instanceof QuadspreadError) return e.code;
+    throw e;
+  }
+  return undefined;
+}
+
+type XY = { x: number; y: number };
+/** Azimuth S→P in degrees clockwise from north, with mathjs BigNumber at 70 digits (independent of the library). */
+function azimuth(S: XY, P: XY) {
+  const a = M.atan2(M.bignumber(P.x - S.x), M.bignumber(P.y - S.y)) as unknown as ReturnType<typeof M.bignumber>;
+  const deg = M.divide(M.multiply(a, 180), M.pi) as unknown as ReturnType<typeof M.bignumber>;
+  return deg.lt(0) ? deg.add(360) : deg;
+}
+/** The clockwise angle at S from the direction to P to the direction to Q, as 60-digit text. */
+function angle(S: XY, P: XY, Q: XY): string {
+  let d = azimuth(S, Q).sub(azimuth(S, P));
+  if (d.lt(0)) d = d.add(360);
+  return d.toFixed(60);
+}
+/** Observed angles [a12, a23] at S and the danger ratio |Q(O, S) − R²|/R² computed in float. */
+function synth(S: XY, C: [XY, XY, XY]) {
+  const [P1, P2, P3] = C;
+  const bx = P2.x - P1.x, by = P2.y - P1.y, cx = P3.x - P1.x, cy = P3.y - P1.y;
+  const det = 2 * (bx * cy - by * cx);
+  const ox = (cy * (bx * bx + by * by) - by * (cx * cx + cy * cy)) / det;
+  const oy = (bx * (cx * cx + cy * cy) - cx * (bx * bx + by * by)) / det;
+  const R2 = ox * ox + oy * oy;
+  const danger = Math.abs((S.x - P1.x - ox) ** 2 + (S.y - P1.y - oy) ** 2 - R2) / R2;
+  return { angles: [angle(S, P1, P2), angle(S, P2, P3)] as [string, string], danger, collinear: det === 0 };
+}
+
+const coord = fc.integer({ min: -5000, max: 5000 });
+const pt = fc.record({ x: coord, y: coord });
+
+describe('resection(rational, …) recovers a synthetic station (Tienstra; angles from mathjs at 70 digits)', () => {
+  it('to 1e-30·(1 + size)/dangerRatio, for stations inside and outside the control triangle, either orientation', () => {
+    fc.assert(
+      fc.property(pt, pt, pt, pt, (S, P1, P2, P3) => {
+        const pts = [S, P1, P2, P3];
+        for (let i = 0; i < 4; i++) for (let j = i + 1; j < 4; j++) fc.pre(pts[i]!.x !== pts[j]!.x || pts[i]!.y !== pts[j]!.y);
+        const { angles, danger, collinear } = synth(S, [P1, P2, P3]);
+        fc.pre(!collinear && danger > 0.05);
+        const r = resection(rational, { control: [P1, P2, P3], angles });
+        const size = 1 + Math.max(...pts.flatMap((p) => [Math.abs(p.x), Math.abs(p.y)]));
+        const err = Math.hypot(rational.toNumber(rational.sub(r.station.x, rational.from(S.x))), rational.toNumber(rational.sub(r.station.y, rational.from(S.y))));
+        expect(err).toBeLessThan((1e-30 * size) / danger);
+      }),
+      { numRuns: 40 },
+    );
+  });
+
+  it('is exact when the observed angles have rational sines and cosines (multiples of 90°)', () => {
+    const r = resection(rational, { control: [{ x: 0, y: 100 }, { x: 100, y: 0 }, { x: 0, y: -50 }], angles: [90, 90] });
+    expect([rational.toString(r.station.x), rational.toString(r.station.y)]).toEqual(['0', '0']);
+  });
+});
+
+const inexact: [string, Arithmetic<unknown, boolean>, number][] = [
+  ['float', float as Arithmetic<unknown, boolean>, 1e-8],
+  ['decimal(34)', decimal(34) as Arithmetic<unknown, boolean>, 1e-25],
+];
+describe.each(inexact)('resection(%s, …)', (_name, A, bound) => {
+  it(`recovers a synthetic station to ${bound}·(1 + size)/dangerRatio`, () => {
+    fc.assert(
+      fc.property(pt, pt, pt, pt, (S, P1, P2, P3) => {
+        const pts = [S, P1, P2, P3];
+        for (let i = 0; i < 4; i++) for (let j = i + 1; j < 4; j++) fc.pre(pts[i]!.x !== pts[j]!.x || pts[i]!.y !== pts[j]!.y);
+        const { angles, danger, collinear } = synth(S, [P1, P2, P3]);
+        fc.pre(!collinear && danger > 0.05);
+        const r = resection(A, { control: [P1, P2, P3], angles });
+        const size = 1 + Math.max(...pts.flatMap((p) => [Math.abs(p.x), Math.abs(p.y)]));
+        const err = Math.hypot(A.toNumber(r.station.x) - S.x, A.toNumber(r.station.y) - S.y);
+        expect(err).toBeLessThan((bound * size) / danger);
+      }),
+      { numRuns: 40 },
+    );
+  });
+});
+
+describe.each([
+  ['rational', rational as Arithmetic<unknown, boolean>],
+  ['decimal(34)', decimal(34) as Arithmetic<unknown, boolean>],
+  ['float', float as Arithmetic<unknown, boolean>],
+])('resection(%s, …) on the danger circle', (_name, A) => {
+  const C: [XY, XY, XY] = [{ x: 0, y: 100 }, { x: 100, y: 0 }, { x: 0, y: -100 }];
+  it('refuses a station on the circle through the control points with DANGER_CIRCLE', () => {
+    const { angles } = synth({ x: -100, y: 0 }, C);
+    expect(code(() => resection(A, { control: C, angles }))).toBe('DANGER_CIRCLE');
+    expect(() => resection(A, { control: C, angles })).toThrow(/danger circle/);
+  });
+
+  it(`refuses a station within the default tolerance ${DANGER_CIRCLE_TOLERANCE} (|Q(O,S) − R²|/R² ≈ 0.01) and accepts it with a smaller one`, () => {
+    const S = { x: -100.5, y: 0 };
+    const { angles } = synth(S, C);
+    expect(code(() => resection(A, { control: C, angles }))).toBe('DANGER_CIRCLE');
+    const r = resection(A, { control: C, angles, dangerTolerance: '0.001' });
+    expect(Math.abs(A.toNumber(r.station.x) - S.x)).toBeLessThan(1e-6);
+    expect(A.toNumber(r.dangerRatio)).toBeCloseTo(0.010025, 6);
+  });
+
+  it('refuses collinear control with COLLINEAR_POINTS, bad angles with INVALID_ANGLE, wrong shapes with INVALID_ARGUMENT', () => {
+    expect(code(() => resection(A, { control: [{ x: 0, y: 0 }, { x: 1, y: 1 }, { x: 2, y: 2 }], angles: [30, 40] }))).toBe('COLLINEAR_POINTS');
+    expect(code(() => resection(A, { control: C, angles: [30, 'forty'] }))).toBe('INVALID_ANGLE');
+    expect(code(() => resection(A, { control: C, angles: [30, 360] }))).toBe('INVALID_ANGLE');
+    expect(code(() => resection(A, { control: [C[0], C[1]] as never, angles: [30, 40] }))).toBe('INVALID_ARGUMENT');
+    expect(code(() => resection(A, { control: C, angles: [30] as never }))).toBe('INVALID_ARGUMENT');
+    expect(code(() => resection(A, { control: [C[0], C[0], C[2]], angles: [30, 40] }))).toBe('COINCIDENT_POINTS');
+  });
+});
