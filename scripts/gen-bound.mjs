@@ -29,6 +29,7 @@ const ENTRIES = [
     said: 'the exact `rational` arithmetic',
     inputs: 'numbers, numeric text (`\'1/3\'`, `\'0.1\'`) or rationals',
     value: 'Rational',
+    valueDoc: 'a fraction.js `Fraction` ({@link g.Rational | Rational})',
     exact: 'true',
     header: [
       "import { rational } from './arithmetic/rational.js';",
@@ -51,6 +52,7 @@ const ENTRIES = [
     said: 'a `decimal(34)` arithmetic (34 significant digits, IEEE 754 decimal128 precision)',
     inputs: 'numbers, numeric text or big.js values of this arithmetic',
     value: 'Decimal',
+    valueDoc: 'a big.js `Big` ({@link g.Decimal | Decimal})',
     exact: 'false',
     header: [
       "import { decimal } from './arithmetic/decimal.js';",
@@ -73,6 +75,7 @@ const ENTRIES = [
     said: 'the `float` arithmetic (JS numbers)',
     inputs: 'numbers or numeric text',
     value: 'number',
+    valueDoc: 'a JS number',
     exact: 'false',
     header: [
       "import { float } from './arithmetic/float.js';",
@@ -159,6 +162,7 @@ export function collect() {
   const typesOnly = [];
   for (const exp of checker.getExportsOfModule(moduleSymbol)) {
     const name = exp.name;
+    if (name === 'arithmetic' || name === 'Value') fail(`src/index.ts exports ${name}, a name the bound entries define themselves`);
     const target = exp.flags & ts.SymbolFlags.Alias ? checker.getAliasedSymbol(exp) : exp;
     const decls = target.declarations ?? [];
     if (decls.length === 0) fail(`${name}: no declaration`);
@@ -227,6 +231,8 @@ function render(entry, { bound, values, typesOnly }) {
   L.push("import * as g from './index.js';");
   L.push(...entry.header);
   L.push('');
+  L.push(`/** The type of values of this entry's arithmetic: ${entry.valueDoc}. */`);
+  L.push(`export type Value = ${entry.value};`);
   L.push('/** A function type with its first (arithmetic) parameter dropped. */');
   L.push('type Bound<F> = F extends (A: never, ...rest: infer P) => infer R ? (...rest: P) => R : never;');
   L.push('');
@@ -234,7 +240,7 @@ function render(entry, { bound, values, typesOnly }) {
   for (const b of bound) {
     const params = b.params.map((p, i) => (p.dotDotDotToken ? '...' : '') + paramName(p, i + 1));
     const call = [A, ...b.params.map((p, i) => (p.dotDotDotToken ? '...' : '') + paramName(p, i + 1))].join(', ');
-    const type = b.loose ? `Bound<typeof g.${b.name}>` : `Bound<typeof g.${b.name}<${b.typeArgs.map((t) => (t === 'VALUE' ? entry.value : entry.exact)).join(', ')}>>`;
+    const type = b.loose ? `Bound<typeof g.${b.name}>` : `Bound<typeof g.${b.name}<${b.typeArgs.map((t) => (t === 'VALUE' ? 'Value' : entry.exact)).join(', ')}>>`;
     L.push('');
     L.push(`/** {@link g.${b.name} | ${b.name}} with the arithmetic fixed to \`${entry.kind}\`: the same arguments after the arithmetic. */`);
     L.push(`export const ${b.name}: ${type} = (${params.join(', ')}) => g.${b.name}(${call});`);
