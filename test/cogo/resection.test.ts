@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { create, all } from 'mathjs';
+import type { BigNumber } from 'mathjs';
 import { rational, decimal, float, resection, DANGER_CIRCLE_TOLERANCE, QuadspreadError } from '../../src/index.js';
 import type { Arithmetic } from '../../src/index.js';
 
@@ -18,9 +19,10 @@ function code(f: () => unknown): string | undefined {
 
 type XY = { x: number; y: number };
 /** Azimuth S→P in degrees clockwise from north, with mathjs BigNumber at 70 digits (independent of the library). */
-function azimuth(S: XY, P: XY) {
-  const a = M.atan2(M.bignumber(P.x - S.x), M.bignumber(P.y - S.y)) as unknown as ReturnType<typeof M.bignumber>;
-  const deg = M.divide(M.multiply(a, 180), M.pi) as unknown as ReturnType<typeof M.bignumber>;
+function azimuth(S: XY, P: XY): BigNumber {
+  const atan2 = M.atan2 as unknown as (y: BigNumber, x: BigNumber) => BigNumber;
+  const a = atan2(M.bignumber(P.x - S.x), M.bignumber(P.y - S.y));
+  const deg = a.mul(180).div(M.pi as unknown as BigNumber);
   return deg.lt(0) ? deg.add(360) : deg;
 }
 /** The clockwise angle at S from the direction to P to the direction to Q, as 60-digit text. */
