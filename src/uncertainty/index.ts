@@ -4,3 +4,4 @@ export * from './budget.js';
 export * from './random.js';
 export * from './monte-carlo.js';
 export * from './readings.js';
+export * from './roundoff.js';
