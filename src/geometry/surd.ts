@@ -81,6 +81,8 @@ export interface Surd<T> {
    * @throws {QuadspreadError} `INVALID_ARGUMENT` unless digits is an integer in 1..1000.
    */
   toPrecision(digits: number): string;
+  /** The exact text (as {@link Surd.toString}), so that `JSON.stringify` writes `"41 + 20√2"`. */
+  toJSON(): string;
 }
 
 /**
@@ -263,8 +265,15 @@ class SurdValue<T> implements Surd<T> {
     // quadratically; stop when both bounds of a + b√d round to the same text (an irrational
     // value is never a rounding boundary, so this ends).
     const two = A.from(2);
-    let start = A.from(Math.sqrt(Math.min(A.toNumber(d), Number.MAX_VALUE)));
-    if (A.sign(start) <= 0) start = A.one;
+    let start: T;
+    if ((d as unknown) instanceof Fraction) {
+      // (⌊√(pq)⌋ + 1)/q ≥ √(p/q), for any size of radicand
+      const f = d as unknown as Fraction;
+      start = new Fraction(isqrt(f.n * f.d) + 1n, f.d) as unknown as T;
+    } else {
+      start = A.from(Math.sqrt(A.toNumber(d)));
+      if (A.sign(start) <= 0) start = A.one;
+    }
     let hi = A.div(A.add(start, A.div(d, start)), two);
     const pos = A.sign(this.b) > 0;
     for (let i = 0; i < 60; i++) {
@@ -276,6 +285,15 @@ class SurdValue<T> implements Surd<T> {
       hi = A.div(A.add(hi, lo), two);
     }
     throw new QuadspreadError('NOT_CONVERGED', 'Surd.toPrecision(digits)', `${this.toString()} did not settle to ${digits} digits`);
+  }
+
+  toJSON(): string {
+    return this.toString();
+  }
+
+  /** Node's console shows `Surd(41 + 20√2)` rather than the fields and the arithmetic. */
+  [Symbol.for('nodejs.util.inspect.custom')](): string {
+    return `Surd(${this.toString()})`;
   }
 }
 

@@ -199,3 +199,19 @@ describe('surd text and numbers', () => {
     expect(code(() => sqrtOf(rational, 2).toPrecision(1.5))).toBe('INVALID_ARGUMENT');
   });
 });
+
+describe('surds print and serialise as their exact text', () => {
+  it('JSON.stringify writes a surd as its text and console shows Surd(…)', async () => {
+    expect(JSON.stringify({ Q3: surd(rational, 41, -20, 2) })).toBe('{"Q3":"41 - 20√2"}');
+    const { inspect } = await import('node:util');
+    expect(inspect(sqrtOf(rational, 8))).toBe('Surd(2√2)');
+  });
+  it('toPrecision works for radicands beyond the range of JS numbers', () => {
+    // √(4·10^400 + 1) = 2·10^200·(1 + 1/(8·10^400) − …): to 30 digits it is 2·10^200 (derived),
+    // written as the arithmetic writes the rational 2·10^200 to 30 digits.
+    const t = surd(rational, 0, 1, 4n * 10n ** 400n + 1n);
+    expect(t.isRational()).toBe(false);
+    expect(t.toPrecision(30)).toBe(rational.toPrecision(rational.from(2n * 10n ** 200n), 30));
+    expect(sqrtOf(rational, 4n * 10n ** 400n).toString()).toBe(`2${'0'.repeat(200)}`);
+  });
+});
