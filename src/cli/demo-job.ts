@@ -13,6 +13,9 @@ export const DEMO_JOB = {
   description: 'Every place and reading in this job is invented for the demonstration.',
   units: { length: 'm' },
   points: {
+    HB: { east: 2105, north: 3160 },
+    H1: { east: 2000, north: 3000 },
+    H2: { east: 2180, north: 2990 },
     CM1: { east: 1000, north: 2000 },
     Q1: { east: 1020.5, north: 1890.25 },
     Q2: { east: { value: 1101.75, sigma: 0.02 }, north: { value: 1902.4, sigma: 0.02 } },
@@ -21,6 +24,47 @@ export const DEMO_JOB = {
     Q5: { east: 1009.8, north: 1824.45 },
   },
   tasks: [
+    {
+      kind: 'path-grade',
+      name: 'Harrowmere Fell access road',
+      slope: '1 in 3.5',
+      grade: '1 in 12',
+      measured: 'plan',
+      fallBearing: { value: `212°30'`, sigma: `0°30'` },
+      alignments: [
+        { name: 'Line A', offset: `76°00'` },
+        { name: 'Line B', offset: `74°30'` },
+      ],
+    },
+    {
+      kind: 'inline-height',
+      name: 'Saltings mast from the causeway',
+      target: 'mast top',
+      stations: [
+        { name: 'C0', chainage: 0, vertical: { elevation: `9°33'08.9"`, sigma: `3"` } },
+        { name: 'C150', chainage: 150, vertical: { elevation: `19°57'29.3"`, sigma: `3"` } },
+        { name: 'C320', chainage: 320, vertical: { elevation: `15°34'55.6"`, sigma: `3"` } },
+        { name: 'C475', chainage: 475, vertical: { elevation: `7°55'16.2"`, sigma: `3"` } },
+      ],
+      instrumentLevel: { value: 4.212, sigma: 0.003 },
+      tolerance: '0.5 m',
+    },
+    {
+      kind: 'height',
+      name: 'Harrowmere beacon from two stations',
+      target: 'HB',
+      readings: [
+        { station: 'H1', vertical: { elevation: `7°08'52.8"`, sigma: `5"` } },
+        { station: 'H2', vertical: { zenith: `82°38'24.5"`, sigma: `5"` } },
+      ],
+      instrumentLevel: { value: 312.45, sigma: 0.005 },
+      tolerance: '0.02 m',
+    },
+    {
+      kind: 'triangle',
+      name: 'Tern Spit check triangle',
+      known: { side1: { value: 412.337, sigma: '5 mm' }, side2: { value: 385.906, sigma: '5 mm' }, side3: { value: 298.114, sigma: '5 mm' } },
+    },
     {
       kind: 'traverse',
       name: 'Crane Moss control loop',
@@ -38,6 +82,25 @@ export const DEMO_JOB = {
       kind: 'area',
       name: 'Quillet Field',
       points: ['Q1', 'Q2', 'Q3', 'Q4', 'Q5'],
+    },
+    {
+      kind: 'intersection',
+      name: 'Quillet Field centre stake',
+      lines: [['Q1', 'Q3'], ['Q2', 'Q4']],
+      point: 'QC',
+    },
+    {
+      kind: 'levelling',
+      name: 'Harrowmere bench-mark run HF1 to HF2',
+      start: 112.406,
+      close: 114.023,
+      order: 'third',
+      sights: [
+        { station: 'HF1', bs: 1.652 },
+        { station: 'TP1', fs: 0.873, bs: 2.114, distance: 85 },
+        { station: 'TP2', fs: 1.005, bs: 1.337, distance: 90 },
+        { station: 'HF2', fs: 1.612, distance: 80 },
+      ],
     },
   ],
 } as const;

@@ -6,7 +6,7 @@
  * @module cli
  */
 import { QuadspreadError, budget, decimal, float, isSurd, measured, rational, uncertain } from '../index.js';
-import type { Arithmetic, LengthUnit } from '../index.js';
+import type { Arithmetic, LengthUnit, Uncertain } from '../index.js';
 import { show } from '../errors.js';
 import { JobInvalid, JobInvalidMany, JobUnsolvable } from './failure.js';
 import { CAUTION } from './report.js';
@@ -131,7 +131,8 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
     const baseEnv: Env<unknown> = {
       A,
       get: (x: Input) => A.from(x.value),
-      num: (x) => (isSurd(x) ? x.toNumber() : A.toNumber(x)),
+      // Through decimal text: rational.toNumber refuses fractions whose numerator and denominator both exceed the float range.
+      num: (x) => Number(isSurd(x) ? x.toPrecision(17) : A.toPrecision(x, 17)),
       drawing: true,
     };
     let base: Outcome<unknown>;
@@ -141,36 +142,39 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
       if (e instanceof QuadspreadError) throw new JobUnsolvable(taskLabel(task, i), reasonOf(e));
       throw e;
     }
-    const report: TaskReport = {
-      index: i,
-      kind: String(task.kind),
-      name: typeof task.name === 'string' ? task.name : `${String(task.kind)} ${i + 1}`,
-      summary: p.summary,
-      results: base.results.map((q) => formatQuantity(A, q, options.digits, approx)),
-      checks: base.checks.map((c) => {
-        const f = formatQuantity(A, c, Math.min(options.digits, 6), true);
-        return { name: c.name, label: c.label, value: f.value, tolerance: c.tolerance, unit: c.unit, pass: c.pass };
-      }),
-      notes: [...base.notes],
-      ...(base.sketch ? { sketch: base.sketch } : {}),
-    };
-    if (approx && A.exact) report.notes.push('Angle readings are transcendental: their spreads are rationals within a stated tolerance, so no exact form is shown.');
-    if (p.inputs.some((x) => x.sigma !== undefined)) {
-      try {
-        const uEnv: Env<unknown> = {
-          A: U as Arithmetic<unknown, boolean>,
-          get: (x: Input) => (x.sigma !== undefined ? measured(U, float.from(x.value), float.from(x.sigma), x.name) : U.from(float.from(x.value))),
-          num: () => 0,
-          drawing: false,
+    // The uncertain run: every input enters as a named measured value (σ = 0 where none was
+    // given), so that the gradients tell both the budget and which results depend on an
+    // angle reading (and so have no exact form).
+    const angleNames = new Set(p.inputs.filter((x) => x.angle).map((x) => x.name));
+    const uncertainties = new Map<string, { dependsOnAngle: boolean; sigma?: string; budget?: BudgetTerm[] }>();
+    let uncertainNote: string | undefined;
+    try {
+      const cache = new Map<Input, unknown>();
+      const uEnv: Env<unknown> = {
+        A: U as Arithmetic<unknown, boolean>,
+        get: (x: Input) => {
+          let v = cache.get(x);
+          if (v === undefined) {
+            v = measured(U, float.from(x.value), x.sigma !== undefined ? float.from(x.sigma) : 0, x.name);
+            cache.set(x, v);
+          }
+          return v;
+        },
+        num: () => 0,
+        drawing: false,
+      };
+      const u = p.compute(uEnv);
+      for (const q of u.results) {
+        if (isSurd(q.value)) continue;
+        const v = q.value as Uncertain<number>;
+        const entry: { dependsOnAngle: boolean; sigma?: string; budget?: BudgetTerm[] } = {
+          dependsOnAngle: [...v.gradient.keys()].some((k) => angleNames.has(k.name)),
         };
-        const u = p.compute(uEnv);
-        for (const q of u.results) {
-          const target = report.results.find((r) => r.name === q.name);
-          if (!target || isSurd(q.value)) continue;
-          const b = budget(U, q.value as never);
-          if (b.contributions.length === 0) continue;
-          target.sigma = precision(b.sigma, SIGMA_DIGITS);
-          target.budget = b.contributions.map(
+        const b = budget(U, v);
+        const terms = b.contributions.filter((c) => c.sigma > 0);
+        if (terms.length > 0) {
+          entry.sigma = precision(b.sigma, SIGMA_DIGITS);
+          entry.budget = terms.map(
             (c): BudgetTerm => ({
               input: c.name,
               sensitivity: precision(c.sensitivity, 4),
@@ -179,10 +183,35 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
             }),
           );
         }
-      } catch (e) {
-        if (!(e instanceof QuadspreadError)) throw e;
-        report.notes.push(`Uncertainties could not be propagated to first order: ${reasonOf(e)}.`);
+        uncertainties.set(q.name, entry);
       }
+    } catch (e) {
+      if (!(e instanceof QuadspreadError)) throw e;
+      if (p.inputs.some((x) => x.sigma !== undefined)) uncertainNote = `Uncertainties could not be propagated to first order: ${reasonOf(e)}.`;
+    }
+    const report: TaskReport = {
+      index: i,
+      kind: String(task.kind),
+      name: typeof task.name === 'string' ? task.name : `${String(task.kind)} ${i + 1}`,
+      summary: p.summary,
+      results: base.results.map((q) => {
+        const un = uncertainties.get(q.name);
+        const f = formatQuantity(A, q, options.digits, un ? un.dependsOnAngle : approx);
+        if (un?.sigma !== undefined) {
+          f.sigma = un.sigma;
+          f.budget = un.budget!;
+        }
+        return f;
+      }),
+      checks: base.checks.map((c) => {
+        const f = formatQuantity(A, c, Math.min(options.digits, 6), true);
+        return { name: c.name, label: c.label, value: f.value, tolerance: c.tolerance, unit: c.unit, pass: c.pass };
+      }),
+      notes: [...base.notes, ...(uncertainNote ? [uncertainNote] : [])],
+      ...(base.sketch ? { sketch: base.sketch } : {}),
+    };
+    if (A.exact && base.results.some((q) => uncertainties.get(q.name)?.dependsOnAngle ?? approx)) {
+      report.notes.push('Results that depend on angle readings have no exact form: the spread of an angle is transcendental, so in rational it is a fraction within a stated tolerance.');
     }
     tasks.push(report);
   });

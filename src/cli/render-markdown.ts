@@ -43,7 +43,7 @@ export function renderMarkdown(report: Report): string {
       out.push('| check | value | tolerance | result |');
       out.push('|---|---|---|---|');
       for (const c of t.checks) {
-        out.push(`| ${cell(c.label)} | ${cell(withUnit(c.value, c.unit))} | ${cell(withUnit(c.tolerance, c.unit))} | ${c.pass ? '**pass**' : '**FAIL**'} |`);
+        out.push(`| ${cell(c.label)} | ${cell(withUnit(c.value, c.unit))} | ${cell(/\d/.test(c.tolerance) ? withUnit(c.tolerance, c.unit) : c.tolerance)} | ${c.pass ? '**pass**' : '**FAIL**'} |`);
       }
     }
     if (t.notes.length > 0) {

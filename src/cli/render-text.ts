@@ -48,7 +48,7 @@ export function renderText(report: Report): string {
     out.push(`  ${t.summary}`);
     for (const q of t.results) out.push(...quantityLines(q));
     for (const c of t.checks) {
-      out.push(`  check ${c.pass ? 'PASS' : 'FAIL'}: ${c.label}: ${withUnit(c.value, c.unit)} (tolerance ${withUnit(c.tolerance, c.unit)})`);
+      out.push(`  check ${c.pass ? 'PASS' : 'FAIL'}: ${c.label}: ${withUnit(c.value, c.unit)} (tolerance ${/\d/.test(c.tolerance) ? withUnit(c.tolerance, c.unit) : c.tolerance})`);
     }
     for (const n of t.notes) out.push(`  note: ${n}`);
   }

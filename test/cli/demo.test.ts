@@ -103,3 +103,78 @@ describe('quadspread demo', () => {
     expect(Number(q.sigma)).toBeCloseTo(0.02 * sens, 1);
   });
 });
+
+describe('quadspread demo, elevation and design tasks', () => {
+  it('gives the path direction that the apparent-dip formula tan g = tan φ·cos β gives', () => {
+    const t = task('path-grade');
+    // Slope "1 in 3.5" along the fall line, ruling grade "1 in 12", offsets on the plan:
+    // cos β = tan g / tan φ (apparent dip of a plane; classical structural geology).
+    const beta = Math.acos((1 / 12) / (1 / 3.5)) * (180 / Math.PI);
+    expect(value(t, 'offset_angle')).toBeCloseTo(beta, 8);
+    expect(t.results.find((r) => r.name === 'offset_spread')!.exact).toBe('527/576'); // sin²β = 1 − (3.5/12)², derived
+    expect(value(t, 'bearing_right')).toBeCloseTo(212.5 + beta, 8);
+    expect(value(t, 'bearing_left')).toBeCloseTo(212.5 - beta, 8);
+    expect(value(t, 'Line A.grade')).toBeCloseTo(100 * (1 / 3.5) * Math.cos(rad(76)), 8);
+    expect(value(t, 'Line B.grade')).toBeCloseTo(100 * (1 / 3.5) * Math.cos(rad(74.5)), 8);
+    expect(t.checks.every((c) => c.pass)).toBe(true);
+  });
+
+  it('gives the beacon height that h = d·tan α gives from each station', () => {
+    const t = task('height');
+    const P = (k: string) => ({ x: num(job.points[k]!.east), y: num(job.points[k]!.north) });
+    const foot = P('HB');
+    const d1 = Math.hypot(P('H1').x - foot.x, P('H1').y - foot.y);
+    const d2 = Math.hypot(P('H2').x - foot.x, P('H2').y - foot.y);
+    const h1 = d1 * Math.tan(rad(dms(`7°08'52.8"`)));
+    const h2 = d2 / Math.tan(rad(dms(`82°38'24.5"`))); // zenith angle: h = d·cot z
+    expect(value(t, 'H1.height')).toBeCloseTo(h1, 7);
+    expect(value(t, 'H2.height')).toBeCloseTo(h2, 7);
+    expect(value(t, 'height')).toBeGreaterThanOrEqual(Math.min(h1, h2) - 1e-9);
+    expect(value(t, 'height')).toBeLessThanOrEqual(Math.max(h1, h2) + 1e-9);
+    // σ of h = d·tan α from σ_α = 5″: σ_h = d·sec²α·σ_α (derived by differentiation).
+    const sig = d1 / Math.cos(rad(dms(`7°08'52.8"`))) ** 2 * rad(5 / 3600);
+    expect(Number(t.results.find((r) => r.name === 'H1.height')!.sigma)).toBeCloseTo(sig, 4);
+  });
+
+  it('gives a mast position and height that reproduce every causeway reading to within a few seconds (Math.atan)', () => {
+    const t = task('inline-height');
+    const h = value(t, 'height'), f = value(t, 'foot_chainage'), e = value(t, 'foot_offset');
+    const stations = jobTask('inline-height').stations as { chainage: number; vertical: { elevation: string } }[];
+    for (const s of stations) {
+      const predicted = Math.atan(h / Math.hypot(s.chainage - f, e)) * (180 / Math.PI);
+      expect(Math.abs(predicted - dms(s.vertical.elevation)) * 3600).toBeLessThan(3);
+    }
+    expect(value(t, 'level')).toBeCloseTo(4.212 + h, 8);
+  });
+
+  it('gives the triangle area that Heron\'s formula gives and spreads equal to sin² by the law of cosines', () => {
+    const t = task('triangle');
+    const k = jobTask('triangle').known as Record<string, { value: number }>;
+    const a = k.side1!.value, b = k.side2!.value, c = k.side3!.value;
+    const s = (a + b + c) / 2;
+    expect(value(t, 'area')).toBeCloseTo(Math.sqrt(s * (s - a) * (s - b) * (s - c)), 5); // Heron
+    const A1 = Math.acos((b * b + c * c - a * a) / (2 * b * c));
+    expect(value(t, 's1')).toBeCloseTo(Math.sin(A1) ** 2, 12);
+  });
+
+  it('gives the diagonal intersection that the two-line formula in floats gives', () => {
+    const t = task('intersection');
+    const P = (k: string) => ({ x: num(job.points[k]!.east), y: num(job.points[k]!.north) });
+    const [p1, p2, p3, p4] = [P('Q1'), P('Q3'), P('Q2'), P('Q4')];
+    const den = (p1.x - p2.x) * (p3.y - p4.y) - (p1.y - p2.y) * (p3.x - p4.x);
+    const a = p1.x * p2.y - p1.y * p2.x, b = p3.x * p4.y - p3.y * p4.x;
+    expect(value(t, 'QC.east')).toBeCloseTo((a * (p3.x - p4.x) - (p1.x - p2.x) * b) / den, 8);
+    expect(value(t, 'QC.north')).toBeCloseTo((a * (p3.y - p4.y) - (p1.y - p2.y) * b) / den, 8);
+  });
+
+  it('gives the levelling misclosure that ΣBS − ΣFS gives, against 12 mm·√K', () => {
+    const t = task('levelling');
+    const lv = jobTask('levelling') as { start: number; close: number; sights: { bs?: number; fs?: number; distance?: number }[] };
+    const sum = (k: 'bs' | 'fs') => lv.sights.reduce((s, r) => s + (r[k] ?? 0), 0);
+    const mis = (lv.start + sum('bs') - sum('fs') - lv.close) * 1000;
+    expect(value(t, 'misclosure')).toBeCloseTo(mis, 6);
+    const km = lv.sights.reduce((s, r) => s + (r.distance ?? 0), 0) / 1000;
+    expect(value(t, 'allowable')).toBeCloseTo(12 * Math.sqrt(km), 8);
+    expect(value(t, 'HF2.level')).toBeCloseTo(lv.close, 9);
+  });
+});

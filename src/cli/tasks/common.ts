@@ -3,8 +3,9 @@
  *
  * @module cli
  */
-import type { Point } from '../../index.js';
-import type { Env, JobPoint } from '../task.js';
+import { decimal, isSurd, sqrtOf } from '../../index.js';
+import type { Arithmetic, Point } from '../../index.js';
+import type { Env, JobPoint, Value } from '../task.js';
 import type { Input } from '../values.js';
 import type { Schema } from '../validate.js';
 
@@ -36,4 +37,44 @@ export function squared(unit: string): string {
 /** Plain-number view of a value for sketches (the run's `num`). */
 export function nums<V>(env: Env<V>, p: Point<V>): { x: number; y: number } {
   return { x: env.num(p.x), y: env.num(p.y) };
+}
+
+/** Exact text longer than this goes through decimal for square roots (see {@link root}). */
+const LONG_EXACT = 200;
+
+/**
+ * √x as a result: a surd (exact arithmetic) or a value. A rational with a very long
+ * numerator or denominator (from transcendental readings) is rooted through
+ * `decimal(60)` instead and flagged `approx`: its surd would need a radicand beyond
+ * the range the surd code can bracket.
+ */
+export function root<V>(A: Arithmetic<V, boolean>, x: V): { value: Value<V>; approx: boolean } {
+  if (A.exact && A.toString(x).length > LONG_EXACT) {
+    const D = decimal(60);
+    const r = D.sqrt(D.from(A.toPrecision(x, 60)));
+    return { value: A.from(D.toString(r!)), approx: true };
+  }
+  return { value: sqrtOf(A, x), approx: false };
+}
+
+/** A signed square root: sign·√x, e.g. a height from its vertical quadrance (see {@link root}). */
+export function signedRoot<V>(A: Arithmetic<V, boolean>, x: V, sign: number): { value: Value<V>; approx: boolean } {
+  const r = root(A, x);
+  if (sign >= 0) return r;
+  return { value: isSurd(r.value) ? r.value.neg() : A.neg(r.value as V), approx: r.approx };
+}
+
+/** a + b for a value or surd a and a value b. */
+export function plus<V>(A: Arithmetic<V, boolean>, a: Value<V>, b: V): Value<V> {
+  return isSurd(a) ? (a.add(b) as Value<V>) : A.add(a as V, b);
+}
+
+/**
+ * Whether |√H1 − √H2| ≤ t, decided exactly: (√H1 − √H2)² = H1 + H2 − 2√(H1·H2) ≤ t²
+ * ⟺ H1 + H2 − t² ≤ 2√(H1·H2), squared when the left side is positive (derived).
+ */
+export function rootsWithin<V>(A: Arithmetic<V, boolean>, H1: V, H2: V, t: V): boolean {
+  const lhs = A.sub(A.add(H1, H2), A.mul(t, t));
+  if (A.sign(lhs) <= 0) return true;
+  return A.cmp(A.mul(lhs, lhs), A.mul(A.from(4), A.mul(H1, H2))) <= 0;
 }

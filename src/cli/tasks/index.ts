@@ -5,8 +5,12 @@
  */
 import type { TaskKind } from '../task.js';
 import { areaTask } from './area.js';
+import { heightTask } from './height.js';
+import { pathGradeTask } from './path-grade.js';
+import { inlineHeightTask } from './inline-height.js';
 import { traverseTask } from './traverse.js';
 import { triangleTask } from './triangle.js';
 import { intersectionTask } from './intersection.js';
+import { levellingTask } from './levelling.js';
 
-export const TASK_KINDS: readonly TaskKind[] = [triangleTask, traverseTask, areaTask, intersectionTask];
+export const TASK_KINDS: readonly TaskKind[] = [heightTask, inlineHeightTask, pathGradeTask, triangleTask, traverseTask, areaTask, intersectionTask, levellingTask];

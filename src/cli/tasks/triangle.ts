@@ -5,13 +5,13 @@
  *
  * @module cli
  */
-import { QuadspreadError, solveTriangle, spreadFromDegrees, sqrtOf, triangle, isSurd } from '../../index.js';
+import { QuadspreadError, solveTriangle, spreadFromDegrees, triangle, isSurd } from '../../index.js';
 import type { Arithmetic } from '../../index.js';
 import { JobInvalid } from '../failure.js';
 import type { Env, RawQuantity, TaskKind, Value } from '../task.js';
 import { positive, readAngle, readLength, readNumber } from '../values.js';
 import type { Input } from '../values.js';
-import { nums, pointInputs, squared, taskSchema, xy } from './common.js';
+import { nums, pointInputs, root, squared, taskSchema, xy } from './common.js';
 
 type Known = { key: 'Q1' | 'Q2' | 'Q3' | 's1' | 's2' | 's3'; form: 'side' | 'quadrance' | 'angle' | 'spread'; input: Input };
 
@@ -26,14 +26,11 @@ const MEASURES: Record<string, { key: Known['key']; form: Known['form'] }> = {
 function rootOf<V>(A: Arithmetic<V, boolean>, x: Value<V>): { value: Value<V>; approx: boolean } {
   if (isSurd(x)) {
     const r = x.toRational();
-    if (r !== undefined) {
-      const s = sqrtOf(A, r as V);
-      return { value: s, approx: false };
-    }
+    if (r !== undefined) return root(A, r as V);
     // √(a + b√d) is not a surd of the same field: give the rounded value.
     return { value: A.from(Math.sqrt(x.toNumber())), approx: true };
   }
-  return { value: sqrtOf(A, x as V), approx: false };
+  return root(A, x as V);
 }
 
 function measures<V>(env: Env<V>, t: Record<string, Value<V>>, unit: string, tag: string): RawQuantity<V>[] {
