@@ -1,4 +1,6 @@
 import { defineConfig } from 'tsup';
+// The float entry's modules are compiled float-specialised (A.add(x, y) → x + y …); see the file.
+import { floatSpecialize } from './scripts/float-specialize.mjs';
 
 // Each entry is bundled as a self-contained copy (splitting: false), so that the code in
 // quadspread/float only ever sees the float arithmetic (see docs/performance.md).
@@ -14,5 +16,6 @@ export default defineConfig([
     platform: 'neutral',
     treeshake: true,
     external: ['fraction.js', 'big.js'],
+    esbuildPlugins: [floatSpecialize()],
   },
 ]);

@@ -9,6 +9,7 @@ import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from './types.js';
 import { isqrt, ratioToPrecision, readInput } from './exact.js';
 import { decimalElementary } from './elementary.js';
+import { decimalKernels } from './fused-decimal.js';
 
 /** A value of a {@link decimal} arithmetic: a big.js `Big`. */
 export type Decimal = Big;
@@ -155,6 +156,8 @@ export function decimal(digits = 34): DecimalArithmetic {
       if (y.c[0] === 0 && x.c[0] === 0) throw new QuadspreadError('INVALID_ARGUMENT', `${name}.atan2(y, x)`, 'the angle of the zero vector is undefined');
       return fromText(elementary.atan2(y.toString(), x.toString()));
     },
+    // Fused kernels (src/arithmetic/fused-decimal.ts): exact with bigints, rounded once.
+    kernels: decimalKernels(make, divide),
   };
 
   /** (an·10^ae) / (bn·10^be), correctly rounded to `digits`. */

@@ -9,6 +9,7 @@ import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from './types.js';
 import { isqrt, ratioToNumber, ratioToPrecision, readInput } from './exact.js';
 import { decimalElementary } from './elementary.js';
+import { rationalKernels } from './fused-rational.js';
 
 /** A value of the {@link rational} arithmetic: a fraction.js `Fraction`. */
 export type Rational = Fraction;
@@ -112,4 +113,6 @@ export const rational: RationalArithmetic = {
     if (y.n === 0n && x.n === 0n) throw new QuadspreadError('INVALID_ARGUMENT', 'rational.atan2(y, x)', 'the angle of the zero vector is undefined');
     return fromElementary(elementary.atan2(toElementary(y), toElementary(x)));
   },
+  // Fused exact kernels (src/arithmetic/fused-rational.ts): same results, fewer gcds.
+  kernels: rationalKernels,
 };

@@ -95,6 +95,38 @@ export interface Arithmetic<T, E extends boolean = boolean> {
    * @throws {QuadspreadError} `INVALID_ARGUMENT` when x = y = 0.
    */
   atan2(y: T, x: T): T;
+  /**
+   * Optional fused kernels: whole formulas computed at once (performance only). Solvers may
+   * call one where present and must give the same result without it; a kernel returns
+   * `undefined` for input it leaves to the generic path (which reports the errors).
+   * @internal
+   */
+  readonly kernels?: FusedKernels<T>;
+}
+
+/**
+ * The seven measures of triangle A1 A2 A3 as a fused kernel gives them: Q1 = Q(A2, A3)
+ * opposite A1, s1 the spread at A1.
+ * @internal
+ */
+export interface FusedTriangle<T> {
+  readonly Q1: T;
+  readonly Q2: T;
+  readonly Q3: T;
+  readonly s1: T;
+  readonly s2: T;
+  readonly s3: T;
+  readonly quadrea: T;
+}
+
+/**
+ * Fused kernels an arithmetic may offer. Exact arithmetics give exactly the generic result;
+ * rounding arithmetics compute exactly and round once, so they are at least as accurate.
+ * @internal
+ */
+export interface FusedKernels<T> {
+  /** triangle measures from the coordinates of A1, A2, A3; `undefined` if degenerate. */
+  triangle?(x1: T, y1: T, x2: T, y2: T, x3: T, y3: T): FusedTriangle<T> | undefined;
 }
 
 /** The value type of an arithmetic. */

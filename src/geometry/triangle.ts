@@ -71,9 +71,7 @@ export function triangle<T>(A: Arithmetic<T>, A1: Point<T>, A2: Point<T>, A3: Po
   // quadrea = 16·area² = 4·(u × v)² since |u × v| = 2·area (common practice).
   const D = A.sub(A.mul(ux, vy), A.mul(uy, vx));
   const D2 = A.mul(D, D);
-  if (A.isZero(D2)) {
-    throw new QuadspreadError('COLLINEAR_POINTS', 'triangle(A, A1, A2, A3)', `A1 (${show(A.toString(A1.x))}, ${show(A.toString(A1.y))}), A2 and A3 are collinear`);
-  }
+  if (A.isZero(D2)) collinear(A, A1);
   // Rounding (float, decimal) can push a spread of a right angle just above 1: clamp it.
   const one = A.one;
   let s1 = A.div(D2, A.mul(Q2, Q3));
@@ -83,6 +81,12 @@ export function triangle<T>(A: Arithmetic<T>, A1: Point<T>, A2: Point<T>, A3: Po
   if (A.cmp(s2, one) > 0) s2 = one;
   if (A.cmp(s3, one) > 0) s3 = one;
   return { Q1, Q2, Q3, s1, s2, s3, quadrea: A.mul(A.from(4), D2) };
+}
+
+// Kept out of triangle() so that its float copy stays small enough for V8 to inline
+// (docs/performance.md).
+function collinear<T>(A: Arithmetic<T>, A1: Point<T>): never {
+  throw new QuadspreadError('COLLINEAR_POINTS', 'triangle(A, A1, A2, A3)', `A1 (${show(A.toString(A1.x))}, ${show(A.toString(A1.y))}), A2 and A3 are collinear`);
 }
 
 function coincident<T>(A: Arithmetic<T>, A1: Point<T>, A2: Point<T>, A3: Point<T>, Q1: T, Q2: T): never {

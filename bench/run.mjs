@@ -1,0 +1,123 @@
+#!/usr/bin/env node
+// quadspread benchmarks: `npm run bench` (full) or `npm run bench -- --quick` (< 60 s).
+// Runs against the BUILT package (dist/; `npm run build` first) and prints, per workload, our
+// time against hand-written float code, plain fraction.js and plain big.js formulas, then the
+// headline lines `ratio float-vs-hand <x>`, `ratio naive-fraction-vs-rational <x>`,
+// `ratio naive-big-vs-decimal <x>`. Every ratio is the median of interleaved repeated
+// measurements, taken after every arithmetic has been through the same generic functions.
+// Options: --quick, --json <file> (write the results), --only <workload>.
+import { existsSync, writeFileSync } from 'node:fs';
+import { fileURLToPath, pathToFileURL } from 'node:url';
+import path from 'node:path';
+import os from 'node:os';
+import Fraction from 'fraction.js';
+import BigJs from 'big.js';
+import { ratio, median, keep } from './harness.mjs';
+import * as triangle from './workloads/triangle.mjs';
+import * as heights from './workloads/heights.mjs';
+import * as traverse from './workloads/traverse.mjs';
+import * as budget from './workloads/budget.mjs';
+
+const args = process.argv.slice(2);
+const quick = args.includes('--quick');
+const jsonAt = args.indexOf('--json');
+const jsonFile = jsonAt >= 0 ? args[jsonAt + 1] : undefined;
+const onlyAt = args.indexOf('--only');
+const only = onlyAt >= 0 ? args[onlyAt + 1] : undefined;
+
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+const dist = (f) => pathToFileURL(path.join(root, 'dist', f)).href;
+if (!existsSync(path.join(root, 'dist', 'index.js'))) {
+  console.error('bench: dist/ is missing: run `npm run build` first');
+  process.exit(2);
+}
+const g = await import(dist('index.js'));
+const F = await import(dist('float.js'));
+const R = await import(dist('rational.js'));
+const D = await import(dist('decimal.js'));
+// Plain big.js as a user would set it up: division to 34 decimal places, ties to even.
+const Big = BigJs();
+Big.DP = 34;
+Big.RM = 2;
+const lib = { g, F, R, D, Fraction, Big };
+
+// Short batches, many pairs: on a loaded machine a short batch is less often interrupted, and
+// the median of many adjacent pairs discards the interrupted ones.
+const settings = quick ? { reps: 31, targetMs: 3, n: 300, growthN: 200 } : { reps: 61, targetMs: 5, n: 1000, growthN: 500 };
+const t0 = Date.now();
+
+// Every arithmetic an integrator's process may use, run through the same generic functions
+// before anything is measured.
+const arithmetics = [g.float, g.rational, g.decimal(34), g.decimal(20)];
+if (g.uncertain) arithmetics.push(g.uncertain(g.float), g.uncertain(g.rational));
+
+const workloads = [triangle, heights, traverse, budget].filter((w) => !only || w.name === only);
+const built = [];
+for (const w of workloads) {
+  const why = w.unavailable?.(lib);
+  if (why) {
+    console.log(`skip ${w.name}: ${why}`);
+    continue;
+  }
+  const b = w.build(lib, w.makeCases(settings.n));
+  b.pollute(arithmetics);
+  built.push([w, b]);
+}
+// A second pollution round after all workloads are built (the same functions, every arithmetic).
+for (const [, b] of built) b.pollute(arithmetics);
+
+const rows = [];
+const fmt = (x) => (x >= 100 ? x.toFixed(0) : x >= 10 ? x.toFixed(1) : x >= 1 ? x.toFixed(2) : x.toFixed(3));
+function row(workload, pair, ours, base, m, higherIsBetter) {
+  const r = { workload, pair, ours, base, oursUs: m.aUs, baseUs: m.bUs, ratio: higherIsBetter ? 1 / m.ratio : m.ratio };
+  rows.push(r);
+  console.log(`${workload.padEnd(10)} ${pair.padEnd(26)} ${fmt(m.aUs).padStart(9)} µs ${fmt(m.bUs).padStart(9)} µs  ratio ${r.ratio.toFixed(2)}`);
+  return r;
+}
+
+console.log(`quadspread bench (${quick ? 'quick' : 'full'}): node ${process.version}, ${os.cpus().length} cpus, ${os.cpus()[0]?.model ?? '?'}`);
+console.log(`each ratio: median of ${settings.reps} interleaved pairs of batches of >= ${settings.targetMs} ms`);
+console.log(`${'workload'.padEnd(10)} ${'pair (ours vs baseline)'.padEnd(26)} ${'ours/item'.padStart(12)} ${'base/item'.padStart(12)}`);
+const headline = { float: [], fraction: [], big: [] };
+for (const [w, b] of built) {
+  const o = { items: b.items, reps: settings.reps, targetMs: settings.targetMs };
+  if (b.float) headline.float.push(row(w.name, 'float vs hand-written', 'float', 'hand', ratio(b.float.ours, b.float.hand, o), false));
+  if (b.floatGeneric) row(w.name, '(generic entry, float)', 'generic', 'hand', ratio(b.floatGeneric.ours, b.floatGeneric.hand, o), false);
+  if (b.rational) headline.fraction.push(row(w.name, 'fraction.js vs rational', 'rational', 'fraction.js', ratio(b.rational.ours, b.rational.naive, o), true));
+  if (b.decimal) headline.big.push(row(w.name, 'big.js vs decimal(34)', 'decimal', 'big.js', ratio(b.decimal.ours, b.decimal.naive, o), true));
+}
+
+// Rational cost growth over the inputs' significant digits, against the bare BigInt work.
+const growth = [];
+if (!only || only === 'triangle') {
+  const base = triangle.buildGrowth(lib, 2, settings.growthN);
+  console.log('rational cost growth (triangle), time at k digits / time at 2 digits:');
+  for (const k of [4, 8, 16]) {
+    const gk = triangle.buildGrowth(lib, k, settings.growthN);
+    const o = { items: settings.growthN, reps: settings.reps, targetMs: settings.targetMs };
+    const ours = ratio(gk.ours, base.ours, o);
+    const floor = ratio(gk.floor, base.floor, o);
+    growth.push({ digits: k, rational: ours.ratio, bigint: floor.ratio, rationalUs: ours.aUs, bigintUs: floor.aUs });
+    console.log(`growth    ${String(k).padStart(2)} digits: rational ×${ours.ratio.toFixed(2)} (${fmt(ours.aUs)} µs), bare BigInt ×${floor.ratio.toFixed(2)} (${fmt(floor.aUs)} µs)`);
+  }
+  console.log(`growth    at 2 digits: rational ${fmt(base.ours && ratio(base.ours, base.floor, { items: settings.growthN, reps: 3, targetMs: settings.targetMs }).ratio)}× the bare BigInt work`);
+}
+
+// Headline: the triangle workload (a), the one measured before any code existed (DESIGN.md);
+// the other workloads' ratios are printed above and tabled in docs/performance.md.
+const pick = (list) => (list.find((r) => r.workload === 'triangle') ?? list[0])?.ratio;
+const hf = pick(headline.float), hr = pick(headline.fraction), hb = pick(headline.big);
+console.log(`ratio float-vs-hand ${hf?.toFixed(2) ?? 'n/a'}`);
+console.log(`ratio naive-fraction-vs-rational ${hr?.toFixed(2) ?? 'n/a'}`);
+console.log(`ratio naive-big-vs-decimal ${hb?.toFixed(2) ?? 'n/a'}`);
+const worst = {
+  float: Math.max(...headline.float.map((r) => r.ratio)),
+  fraction: Math.min(...headline.fraction.map((r) => r.ratio)),
+  big: Math.min(...headline.big.map((r) => r.ratio)),
+};
+console.log(`worst over workloads: float-vs-hand ${worst.float.toFixed(2)}, naive-fraction-vs-rational ${worst.fraction.toFixed(2)}, naive-big-vs-decimal ${worst.big.toFixed(2)}`);
+console.log(`elapsed ${((Date.now() - t0) / 1000).toFixed(1)} s (checksum ${keep() % 10})`);
+if (jsonFile) {
+  writeFileSync(jsonFile, JSON.stringify({ quick, node: process.version, cpus: os.cpus().length, cpu: os.cpus()[0]?.model, settings, rows, growth, headline: { floatVsHand: hf, naiveFractionVsRational: hr, naiveBigVsDecimal: hb }, worst }, null, 2));
+}
+void median;

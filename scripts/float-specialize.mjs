@@ -1,0 +1,205 @@
+/**
+ * float-specialize — an esbuild plugin (used by tsup for the `quadspread/float` entry) that
+ * compiles the one generic source into a float-specialised copy.
+ *
+ * Why: generic code calling `A.add(x, y)` through an arithmetic object runs as fast as
+ * hand-written float code only while V8 can inline every call; in a real solver several calls
+ * deep, the inlining budget runs out and each operation becomes a call that boxes its doubles
+ * (see docs/performance.md). This plugin removes those calls for the float bundle only.
+ *
+ * What it does, for every module reached from the float entry (and only those — the modules of
+ * the other entries are loaded again, untouched, in esbuild's normal namespace):
+ *  - each top-level `function f(A: …Arithmetic…, …) { body }` becomes
+ *      function f(A, …) { if (A !== float) return f$qsGeneric(A, …); body' }
+ *      function f$qsGeneric(A, …) { body }          // the original, unchanged
+ *    where body' has, for that `A`: `A.add(x, y)` → `((x) + (y))`, `A.sub` → `-`, `A.mul` →
+ *    `*`, `A.neg(x)` → `(-(x))`, `A.isZero(x)` → `((x) === 0)`, `A.eq(x, y)` → `===`,
+ *    `A.abs(x)` → `Math.abs(x)`, `A.zero` → `0`, `A.one` → `1`, `A.kernels` → `undefined`
+ *    (float has none), and `A.div`, `A.sqrt`,
+ *    `A.cmp`, `A.sign`, `A.from` → tiny helpers with exactly the float arithmetic's checks
+ *    (a zero divisor or a negative root still throws the same QuadspreadError).
+ *  - Every other use of `A` (toNumber, toString, kernels, passing A on) is left as it is.
+ * The rewrite reproduces `float`'s own definitions operation by operation, so results are
+ * bit-for-bit those of the generic code with `float` (test/perf/float-specialize.test.ts checks
+ * this), and any other arithmetic that reaches the float bundle takes the untouched copy.
+ *
+ * @module scripts/float-specialize
+ */
+import { readFile } from 'node:fs/promises';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import ts from 'typescript';
+
+const NS = 'qs-float';
+const HELPERS = 'qs-float-helpers';
+
+/** Operations rewritten inline; `p` wraps an argument in parentheses. */
+const p = (s) => `(${s})`;
+const OPS = {
+  add: [2, (a, b) => `(${p(a)} + ${p(b)})`],
+  sub: [2, (a, b) => `(${p(a)} - ${p(b)})`],
+  mul: [2, (a, b) => `(${p(a)} * ${p(b)})`],
+  neg: [1, (a) => `(-${p(a)})`],
+  isZero: [1, (a) => `(${p(a)} === 0)`],
+  eq: [2, (a, b) => `(${p(a)} === ${p(b)})`],
+  abs: [1, (a) => `Math.abs(${a})`],
+  div: [2, (a, b) => `__qsDiv(${a}, ${b})`],
+  sqrt: [1, (a) => `__qsSqrt(${a})`],
+  cmp: [2, (a, b) => `__qsCmp(${a}, ${b})`],
+  sign: [1, (a) => `__qsSign(${a})`],
+  from: [1, (a) => `__qsFrom(${a})`],
+};
+// float has no fused kernels: `A.kernels` is `undefined` in the float copy.
+const CONSTANTS = { zero: '0', one: '1', kernels: 'undefined' };
+
+/** The helpers: each is exactly the float arithmetic's operation (src/arithmetic/float.ts). */
+const HELPER_SOURCE = `import { float as __qsFloat } from './arithmetic/float.js';
+export { __qsFloat };
+export const __qsDiv = (a, b) => (b === 0 ? __qsFloat.div(a, b) : a / b);
+export const __qsSqrt = (a) => (a < 0 ? __qsFloat.sqrt(a) : Math.sqrt(a));
+export const __qsCmp = (a, b) => (a < b ? -1 : a > b ? 1 : 0);
+export const __qsSign = (a) => (a < 0 ? -1 : a > 0 ? 1 : 0);
+export const __qsFrom = (x) => (typeof x === 'number' && x - x === 0 ? x : __qsFloat.from(x));
+`;
+const HELPER_IMPORT = `import { __qsFloat, __qsDiv, __qsSqrt, __qsCmp, __qsSign, __qsFrom } from '${HELPERS}';\n`;
+
+function isFunctionLike(node) {
+  return ts.isFunctionDeclaration(node) || ts.isFunctionExpression(node) || ts.isArrowFunction(node) || ts.isMethodDeclaration(node);
+}
+
+function isArithmeticParam(param, sf) {
+  if (!param || !ts.isIdentifier(param.name) || param.dotDotDotToken) return false;
+  const type = param.type ? param.type.getText(sf) : '';
+  return /Arithmetic\b/.test(type) && !/Uncertain/.test(type);
+}
+
+/**
+ * Rewrites one TypeScript module's text. Returns `{ code, functions }`, where `functions`
+ * names the functions specialised (an empty list leaves the code as it was).
+ * @param {string} code
+ * @param {string} fileName
+ */
+export function specializeSource(code, fileName = 'module.ts') {
+  const sf = ts.createSourceFile(fileName, code, ts.ScriptTarget.Latest, true, ts.ScriptKind.TS);
+  const edits = [];
+  const functions = [];
+
+  for (const st of sf.statements) {
+    if (!ts.isFunctionDeclaration(st) || !st.body || !st.name || st.asteriskToken) continue;
+    if (st.modifiers?.some((m) => m.kind === ts.SyntaxKind.AsyncKeyword)) continue;
+    const param = st.parameters[0];
+    if (!isArithmeticParam(param, sf)) continue;
+    const a = param.name.text;
+    let changed = false;
+
+    const emit = (node) => {
+      const r = replace(node);
+      if (r !== undefined) {
+        changed = true;
+        return r;
+      }
+      let out = '';
+      let pos = node.getStart(sf);
+      ts.forEachChild(node, (child) => {
+        const start = child.getStart(sf);
+        out += code.slice(pos, start) + emit(child);
+        pos = child.end;
+      });
+      return out + code.slice(pos, node.end);
+    };
+
+    const replace = (node) => {
+      // A nested function that declares its own `A` shadows ours: leave it alone.
+      if (isFunctionLike(node) && node.parameters.some((q) => ts.isIdentifier(q.name) && q.name.text === a)) {
+        return node.getText(sf);
+      }
+      if (ts.isCallExpression(node) && ts.isPropertyAccessExpression(node.expression)) {
+        const callee = node.expression;
+        const op = OPS[callee.name.text];
+        // A.from(<numeric literal>) is that literal (float.from returns a finite number as is).
+        if (
+          callee.name.text === 'from' && ts.isIdentifier(callee.expression) && callee.expression.text === a &&
+          node.arguments.length === 1 && ts.isNumericLiteral(node.arguments[0]) && Number.isFinite(Number(node.arguments[0].text))
+        ) {
+          return `(${node.arguments[0].getText(sf)})`;
+        }
+        if (
+          op && ts.isIdentifier(callee.expression) && callee.expression.text === a && !callee.questionDotToken &&
+          !node.questionDotToken && !node.typeArguments && node.arguments.length === op[0] &&
+          node.arguments.every((x) => !ts.isSpreadElement(x))
+        ) {
+          return op[1](...node.arguments.map(emit));
+        }
+      }
+      if (ts.isPropertyAccessExpression(node) && ts.isIdentifier(node.expression) && node.expression.text === a) {
+        const k = CONSTANTS[node.name.text];
+        const parent = node.parent;
+        const isCallee = ts.isCallExpression(parent) && parent.expression === node;
+        const isTarget = ts.isBinaryExpression(parent) && parent.left === node;
+        if (k !== undefined && !isCallee && !isTarget) return k;
+      }
+      return undefined;
+    };
+
+    const body = emit(st.body);
+    if (!changed) continue;
+    const name = st.name.text;
+    const generic = `${name}$qsGeneric`;
+    // Forward the parameters by name where they are plain identifiers (cheaper than `arguments`).
+    const plain = st.parameters.every((q) => ts.isIdentifier(q.name));
+    const forward = plain
+      ? `${generic}(${st.parameters.map((q) => (q.dotDotDotToken ? '...' : '') + q.name.text).join(', ')})`
+      : `${generic}.apply(this, arguments as any)`;
+    const guarded = `{ if (${a} !== __qsFloat) return ${forward};${body.slice(1)}`;
+    edits.push({ start: st.body.getStart(sf), end: st.body.end, text: guarded });
+    // The untouched original, for any other arithmetic that reaches this bundle.
+    edits.push({ start: st.end, end: st.end, text: `\nfunction ${generic}${code.slice(st.name.end, st.end)}` });
+    functions.push(name);
+  }
+  if (functions.length === 0) return { code, functions };
+  edits.sort((x, y) => y.start - x.start || y.end - x.end);
+  let out = code;
+  for (const e of edits) out = out.slice(0, e.start) + e.text + out.slice(e.end);
+  return { code: HELPER_IMPORT + out, functions };
+}
+
+function resolveTs(dir, spec) {
+  const full = path.resolve(dir, spec);
+  const candidates = [full, full.replace(/\.js$/, '.ts'), `${full}.ts`, path.join(full, 'index.ts')];
+  return candidates.find((c) => /\.[cm]?[jt]s$/.test(c) && existsSync(c));
+}
+
+/**
+ * The esbuild plugin.
+ * @param {{ entries?: string[], srcDir?: string, exclude?: RegExp }} [options]
+ *   `entries`: absolute paths of the entry files whose module graphs are specialised
+ *   (default `<cwd>/src/float.ts`); `srcDir`: the sources' root (default `<cwd>/src`);
+ *   `exclude`: modules never rewritten (default: the arithmetics and errors).
+ */
+export function floatSpecialize(options = {}) {
+  const srcDir = options.srcDir ?? path.resolve('src');
+  const entries = new Set((options.entries ?? [path.join(srcDir, 'float.ts')]).map((e) => path.resolve(e)));
+  const exclude = options.exclude ?? /[\\/]src[\\/](arithmetic[\\/]|errors\.ts$)/;
+  return {
+    name: 'float-specialize',
+    setup(build) {
+      build.onResolve({ filter: /^qs-float-helpers$/ }, () => ({ path: 'helpers', namespace: HELPERS }));
+      build.onResolve({ filter: /^\.\.?\// }, (args) => {
+        const inGraph = args.namespace === NS || args.namespace === HELPERS || entries.has(path.resolve(args.importer));
+        if (!inGraph) return undefined;
+        const resolved = resolveTs(args.resolveDir, args.path);
+        if (!resolved) return undefined;
+        return { path: resolved, namespace: NS };
+      });
+      build.onLoad({ filter: /.*/, namespace: HELPERS }, () => ({ contents: HELPER_SOURCE, loader: 'js', resolveDir: srcDir }));
+      build.onLoad({ filter: /.*/, namespace: NS }, async (args) => {
+        const code = await readFile(args.path, 'utf8');
+        const loader = /\.ts$/.test(args.path) ? 'ts' : 'js';
+        const contents = loader === 'ts' && !exclude.test(args.path) ? specializeSource(code, args.path).code : code;
+        return { contents, loader, resolveDir: path.dirname(args.path) };
+      });
+    },
+  };
+}
+
+export default floatSpecialize;
