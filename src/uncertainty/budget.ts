@@ -7,8 +7,8 @@
 import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Uncertain, UncertainArithmetic, UncertainInput } from '../arithmetic/uncertain.js';
-import { sqrtOf } from '../geometry/surd.js';
-import type { Root } from '../geometry/surd.js';
+import { isSurd, sqrtOf } from '../geometry/surd.js';
+import type { Root, Surd } from '../geometry/surd.js';
 
 /** One input's line in a {@link Budget}. */
 export interface Contribution<T> {
@@ -80,10 +80,12 @@ export interface BudgetOptions<T> {
  * {@link monteCarlo} (JCGM 101:2008).
  *
  * @param U the uncertain arithmetic the result was computed in
- * @param result the result (a constant gives a zero budget)
+ * @param result the result: a value of `U` (a constant gives a zero budget), or a surd
+ *   result of an exact solver when it is rational
  * @param options `covariance` triples for correlated inputs
  * @returns `{ value, variance, sigma, contributions, correlations }`
  * @throws {QuadspreadError} `DUPLICATE_INPUT` when two different inputs share a name;
+ *   `UNSUPPORTED_OPERATION` for an irrational surd (use an inexact base for it);
  *   `UNKNOWN_INPUT` when a covariance names an input the result does not depend on;
  *   `INVALID_COVARIANCE` for a pair of one input with itself, a pair listed twice,
  *   |u(a, b)| > u(a)·u(b), or covariances that make the variance negative.
@@ -100,12 +102,21 @@ export interface BudgetOptions<T> {
  */
 export function budget<T, E extends boolean>(
   U: UncertainArithmetic<T, E>,
-  result: Uncertain<T> | Numeric<T>,
+  result: Uncertain<T> | Surd<Uncertain<T>> | Numeric<T>,
   options: BudgetOptions<T> = {},
 ): Budget<T, E> {
   const B: Arithmetic<T, E> = U.base;
-  const y = U.is(result) ? result : U.from(result as Numeric<Uncertain<T>>);
   const where = 'budget(U, result, options)';
+  let y: Uncertain<T>;
+  if (isSurd(result)) {
+    const r = result as Surd<Uncertain<T>>;
+    if (!r.isRational()) {
+      throw new QuadspreadError('UNSUPPORTED_OPERATION', where, `the result ${r.toString()} is an irrational surd, whose sensitivities are irrational too: take its budget in uncertain(decimal(n)) or uncertain(float)`);
+    }
+    y = U.from(r.a);
+  } else {
+    y = U.is(result) ? result : U.from(result as Numeric<Uncertain<T>>);
+  }
   const byName = new Map<string, { input: UncertainInput<T>; c: T }>();
   const lines: Contribution<T>[] = [];
   let variance = B.zero;

@@ -101,3 +101,16 @@ describe('solvers run in uncertain(base) without change', () => {
     );
   });
 });
+
+describe('budget of exact solver results over uncertain(rational)', () => {
+  it('budget takes a rational surd from solveTriangle(U, { Q1, Q2, s3 }) and refuses an irrational one', () => {
+    // Q3 = Q1 + Q2 ± 2√(Q1·Q2·(1 − s3)) (DESIGN; cross law): with Q1 = 25, Q2 = 64, s3 = 16/25 the root is 24, so Q3 = 41 or 137.
+    // ∂Q3/∂Q1 = 1 ± Q2(1 − s3)/√(Q1Q2(1 − s3)) = 1 ± (64·9/25)/24 = 1 ± 24/25 (derived).
+    const t = solveTriangle(R, { Q1: measured(R, 25, 1, 'Q1'), Q2: 64, s3: '16/25' });
+    const lines = t.map((x) => budget(R, x.Q3).contributions.map((c) => rational.toString(c.sensitivity)));
+    expect(t.map((x) => x.Q3.toString())).toEqual(['41', '137']);
+    expect(lines).toEqual([['1/25'], ['49/25']]);
+    const irr = solveTriangle(R, { Q1: measured(R, 2, 1, 'Q1'), Q2: 3, s3: '1/2' });
+    expect(() => budget(R, irr[0]!.Q3)).toThrow(expect.objectContaining({ code: 'UNSUPPORTED_OPERATION' }));
+  });
+});
