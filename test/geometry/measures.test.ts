@@ -5,7 +5,7 @@ import { rational, decimal, float, QuadspreadError } from '../../src/index.js';
 import type { Arithmetic } from '../../src/index.js';
 import {
   point, quadrance, vectorQuadrance, spread, cross, spreadOfVectors,
-  line, lineThrough, isOnLine, isParallel, isPerpendicular, footOfPerpendicular, quadranceToLine, spreadOfLines,
+  triangle, line, lineThrough, isOnLine, isParallel, isPerpendicular, footOfPerpendicular, quadranceToLine, spreadOfLines,
 } from '../../src/geometry/index.js';
 
 function code(f: () => unknown): string | undefined {
@@ -82,6 +82,38 @@ describe('spread and cross in rational are exact rational functions', () => {
       expect(isParallel(A, l, line(A, k * a, k * b, c + 1))).toBe(true);
       expect(isPerpendicular(A, l, line(A, -b, a, c))).toBe(true);
       expect(isPerpendicular(A, l, line(A, a, b, 0))).toBe(false);
+    }));
+  });
+});
+
+describe('quadrance and spread are invariant under rational rotations and translations', () => {
+  const A = rational;
+  // A rotation with rational entries from a Pythagorean triple (m² − n², 2mn, m² + n²).
+  const rot = fc.tuple(fc.integer({ min: 1, max: 40 }), fc.integer({ min: 0, max: 40 })).map(([m, n]) => {
+    const h = A.from(m * m + n * n);
+    return { c: A.from(m * m - n * n).div(h), s: A.from(2 * m * n).div(h) };
+  });
+  it('Q and s of random points equal those of the rotated and shifted points, exactly', () => {
+    fc.assert(fc.property(pt, pt, pt, rot, pt, (v, p, q, r, shift) => {
+      const V = point(A, ...v), P = point(A, ...p), Q = point(A, ...q), T = point(A, ...shift);
+      fc.pre(!A.isZero(quadrance(A, V, P)) && !A.isZero(quadrance(A, V, Q)));
+      const move = (X: typeof V) => ({ x: X.x.mul(r.c).sub(X.y.mul(r.s)).add(T.x), y: X.x.mul(r.s).add(X.y.mul(r.c)).add(T.y) });
+      expect(A.eq(quadrance(A, P, Q), quadrance(A, move(P), move(Q)))).toBe(true);
+      expect(A.eq(spread(A, V, P, Q), spread(A, move(V), move(P), move(Q)))).toBe(true);
+    }));
+  });
+});
+
+describe('triangle(A, A1, A2, A3) agrees with quadrance and spread at each vertex', () => {
+  const A = rational;
+  it('Q1 = Q(A2, A3), s1 = spread(A1; A2, A3) and so on, exactly', () => {
+    fc.assert(fc.property(pt, pt, pt, (a, b, c) => {
+      const P1 = point(A, ...a), P2 = point(A, ...b), P3 = point(A, ...c);
+      const D = P2.x.sub(P1.x).mul(P3.y.sub(P1.y)).sub(P2.y.sub(P1.y).mul(P3.x.sub(P1.x)));
+      fc.pre(!D.equals(0));
+      const t = triangle(A, P1, P2, P3);
+      expect(A.eq(t.Q1, quadrance(A, P2, P3)) && A.eq(t.Q2, quadrance(A, P1, P3)) && A.eq(t.Q3, quadrance(A, P1, P2))).toBe(true);
+      expect(A.eq(t.s1, spread(A, P1, P2, P3)) && A.eq(t.s2, spread(A, P2, P1, P3)) && A.eq(t.s3, spread(A, P3, P1, P2))).toBe(true);
     }));
   });
 });
