@@ -57,6 +57,18 @@ describe('solveTriangle(rational, …) in exact form', () => {
     expect([t!.s1, t!.s2, t!.s3, t!.quadrea].map((v) => v.toString())).toEqual(['16/25', '3136/4225', '144/169', '112896']);
   });
 
+  it('the ambiguous case has one triangle when the sides are equal or the given spread is 1', () => {
+    // Isosceles Q1 = Q2 = 25 with s1 = 9/25: base = 2·5·cos A1 = 2·5·(4/5) = 8, so Q3 = 64 (by hand);
+    // the supplement would need two obtuse angles.
+    expect(solveTriangle(rational, { Q1: 25, Q2: 25, s1: '9/25' }).map((t) => t.Q3.toString())).toEqual(['64']);
+    // A right angle at A1 (s1 = 1) opposite Q1 = 25 with Q2 = 9: Q3 = 25 − 9 = 16 (Pythagoras).
+    expect(solveTriangle(rational, { Q1: 25, Q2: 9, s1: 1 }).map((t) => t.Q3.toString())).toEqual(['16']);
+    // Q1 = Q2·s1 exactly (the tangent case): one triangle, right-angled at A2.
+    const [t, ...rest] = solveTriangle(rational, { Q1: 16, Q2: 25, s1: '16/25' });
+    expect(rest).toEqual([]);
+    expect([t!.s2.toString(), t!.Q3.toString()]).toEqual(['1', '9']);
+  });
+
   const coord = fc.integer({ min: -60, max: 60 });
   const tri = fc.tuple(coord, coord, coord, coord, coord, coord)
     .filter(([a, b, c, d, e, f]) => (c - a) * (f - b) - (d - b) * (e - a) !== 0)
