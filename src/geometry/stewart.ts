@@ -122,7 +122,7 @@ function missingKey(data: Record<string, unknown>, keys: readonly string[], wher
 
 /**
  * Solves R(x) = 0 for a residual R of degree ≤ 2 in x: the coefficients come from R(0),
- * R(1), R(−1); roots are kept when `keep` accepts them.
+ * R(1), R(−1) (exact in an exact arithmetic); with `nonNegative`, negative roots are dropped.
  */
 function solveResidual<T, E extends boolean>(A: Arithmetic<T, E>, R: (x: T) => T, nonNegative: boolean, where: string): Root<T, E>[] {
   const c = R(A.zero);
