@@ -15,6 +15,12 @@ import { rootOps } from './roots.js';
 /**
  * Default coefficient of refraction k = 0.13: the classical value for daytime sights
  * (common practice; Gauss's value, widely reproduced in survey textbooks — from memory).
+ * @example
+ * ```ts
+ * import { DEFAULT_REFRACTION } from 'quadspread';
+ * DEFAULT_REFRACTION;
+ * //=> '0.13'
+ * ```
  */
 export const DEFAULT_REFRACTION = '0.13';
 
@@ -22,6 +28,12 @@ export const DEFAULT_REFRACTION = '0.13';
  * Default Earth radius in metres, 6 371 000 m: the mean radius used for the usual
  * curvature constant 0.07848·D² m with D in km (Ghilani & Wolf, *Elementary Surveying*,
  * ch. 4 — from memory). GRS 80's mean radius R₁ is 6 371 008.7714 m (Moritz 2000).
+ * @example
+ * ```ts
+ * import { DEFAULT_EARTH_RADIUS_M } from 'quadspread';
+ * DEFAULT_EARTH_RADIUS_M;
+ * //=> '6371000'
+ * ```
  */
 export const DEFAULT_EARTH_RADIUS_M = '6371000';
 

@@ -14,7 +14,15 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
  */
 export type AngleUnit = 'deg' | 'gon' | 'mil' | 'rad';
 
-/** The angle units {@link angleToDegrees} knows. */
+/**
+ * The angle units {@link angleToDegrees} knows.
+ * @example
+ * ```ts
+ * import { ANGLE_UNITS } from 'quadspread';
+ * ANGLE_UNITS;
+ * //=> ['deg', 'gon', 'mil', 'rad']
+ * ```
+ */
 export const ANGLE_UNITS: readonly AngleUnit[] = ['deg', 'gon', 'mil', 'rad'];
 
 /** @internal checks an angle unit, naming the function in the error. */

@@ -19,6 +19,12 @@ export type LengthUnit = 'm' | 'km' | 'ft' | 'us-ft' | 'ch' | 'lk' | 'us-ch' | '
  * Sources: international foot 0.3048 m and U.S. survey foot 1200/3937 m — NIST/NGS,
  * "Deprecation of the U.S. Survey Foot", Federal Register 85(193) 62698–62708, 2020;
  * Gunter's chain = 66 ft = 100 links, mile = 5280 ft = 1609.344 m (same units, derived).
+ * @example
+ * ```ts
+ * import { METRES_PER_UNIT } from 'quadspread';
+ * [METRES_PER_UNIT.ft, METRES_PER_UNIT['us-ft']];
+ * //=> ['0.3048', '1200/3937']
+ * ```
  */
 export const METRES_PER_UNIT: Readonly<Record<LengthUnit, string>> = {
   m: '1',

@@ -7,7 +7,7 @@
  */
 import type { Arithmetic } from '../arithmetic/types.js';
 
-/** Significant digits kept by {@link approxSqrt} in an exact arithmetic. */
+/** Significant digits kept by {@link approxSqrt} in an exact arithmetic. @internal */
 export const APPROX_DIGITS = 50;
 
 /**
