@@ -9,7 +9,7 @@
  */
 import { createReadStream } from 'node:fs';
 import { createInterface } from 'node:readline';
-import { QuadspreadError, point, quadrance, sqrtOf, rootToPrecision, isSurd } from '../index.js';
+import { QuadspreadError, point, quadrance, sqrtOf, rootToPrecision } from '../index.js';
 import type { Arithmetic } from '../index.js';
 import { openPending } from './atomic.js';
 import type { PendingFile } from './atomic.js';
@@ -19,6 +19,7 @@ import { arithmeticFor } from './job.js';
 import type { ArithmeticName } from './job.js';
 import type { Io } from './program.js';
 import { BATCH_EXTRA } from './tasks/batch-kinds.js';
+export { batchValue } from './batch-value.js';
 
 /** One batch kind: its input columns, output columns and the computation of one row. */
 export interface BatchKind {
@@ -27,11 +28,6 @@ export interface BatchKind {
   outputs: readonly string[];
   /** Computes the output fields of one row from its values (in the arithmetic), formatted to `digits`. */
   row<V>(A: Arithmetic<V, boolean>, values: V[], digits: number): string[];
-}
-
-/** A value (or surd) as batch output text, to `digits` significant digits. */
-export function batchValue<V>(A: Arithmetic<V, boolean>, x: unknown, digits: number): string {
-  return isSurd(x) ? x.toPrecision(digits) : A.toPrecision(x as V, digits);
 }
 
 /** The batch kinds: inverses between pairs of points, and the kinds the solvers add. */
