@@ -12,6 +12,8 @@ import type { Root } from '../geometry/surd.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { angleToDegrees } from '../readings/angle.js';
 import { readAzimuth } from './bearing.js';
+import { float } from '../arithmetic/float.js';
+import { traverseFloat } from './traverse-float.js';
 import { readArray, readPoint, sqrtValue } from './internal.js';
 import type { PointInput } from './internal.js';
 
@@ -104,6 +106,12 @@ export interface Traverse<T, E extends boolean> {
   readonly angular?: AngularMisclosure<T>;
 }
 
+/** √(lat² + dep²): `A.sqrt` directly in an inexact arithmetic (the float hot path). */
+function courseLength<T>(A: Arithmetic<T, boolean>, la: T, de: T, at: () => string): T {
+  const q = A.add(A.mul(la, la), A.mul(de, de));
+  return A.exact ? sqrtValue(A, q, at()) : A.sqrt(q)!;
+}
+
 /**
  * Angular misclosure of a closed loop traverse: the sum of its n measured interior
  * angles less (n − 2)·180° (the angle sum of a simple polygon). Exact in `rational` for
@@ -188,6 +196,14 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
   const list = readArray<TraverseCourse<T>>(input.courses, `${where} courses`);
   const n = list.length;
   if (n === 0) throw new QuadspreadError('NO_COURSES', `${where} courses`, 'the traverse has no courses');
+  if ((A as unknown) === float) {
+    // The float twin (same operations, same order) keeps this loop fast in any process.
+    const fast = traverseFloat(input as TraverseInput<number>, start as Point<number>, end as Point<number>, rule, list);
+    if (fast !== undefined) {
+      const r = fast as unknown as Traverse<T, E>;
+      return input.interiorAngles !== undefined ? { ...r, angular: angularMisclosure(A, input.interiorAngles) } : r;
+    }
+  }
 
   const lat = new Array<T>(n);
   const dep = new Array<T>(n);
@@ -201,15 +217,16 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
   let sumAbsDep = A.zero;
   for (let i = 0; i < n; i++) {
     const c = list[i] as Record<string, Numeric<T> | undefined> | null | undefined;
-    const at = `${where} courses[${i}]`;
-    if (c === null || typeof c !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', at, `${show(c)} is not a course`);
+    // Built only for an error message: keeps the float loop free of string work.
+    const at = (): string => `${where} courses[${i}]`;
+    if (c === null || typeof c !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', at(), `${show(c)} is not a course`);
     let la: T;
     let de: T;
     let d: T;
     if (c.bearing !== undefined) {
-      if (c.distance === undefined) throw new QuadspreadError('INVALID_ARGUMENT', at, 'a course with a bearing needs a distance');
+      if (c.distance === undefined) throw new QuadspreadError('INVALID_ARGUMENT', at(), 'a course with a bearing needs a distance');
       d = A.from(c.distance);
-      const az = readAzimuth(A, c.bearing, `${at}.bearing`);
+      const az = readAzimuth(A, c.bearing, at, '.bearing');
       // Latitude = d·cos(azimuth), departure = d·sin(azimuth) (azimuth clockwise from north),
       // e.g. Ghilani & Wolf, Elementary Surveying, ch. 10 (from memory).
       const sc = sinCosDegrees(A, az);
@@ -219,11 +236,11 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
       la = A.from(c.latitude);
       de = A.from(c.departure);
       // Course length by Pythagoras unless given.
-      d = c.distance !== undefined ? A.from(c.distance) : sqrtValue(A, A.add(A.mul(la, la), A.mul(de, de)), at);
+      d = c.distance !== undefined ? A.from(c.distance) : courseLength(A, la, de, at);
     } else {
-      throw new QuadspreadError('INVALID_ARGUMENT', at, 'a course is { bearing, distance } or { latitude, departure }');
+      throw new QuadspreadError('INVALID_ARGUMENT', at(), 'a course is { bearing, distance } or { latitude, departure }');
     }
-    if (A.sign(d) < 0) throw new QuadspreadError('INVALID_ARGUMENT', `${at}.distance`, `${A.toString(d)} is negative`);
+    if (A.sign(d) < 0) throw new QuadspreadError('INVALID_ARGUMENT', `${at()}.distance`, `${A.toString(d)} is negative`);
     lat[i] = la;
     dep[i] = de;
     len[i] = d;

@@ -191,3 +191,32 @@ describe('bearingToAzimuth(A, bearing)', () => {
     expect(rational.toString(bearingToAzimuth(rational, b))).toBe(want);
   });
 });
+
+describe('traverse(float, …) float twin', () => {
+  // A copy of the float arithmetic is not `float` itself, so it takes the generic path.
+  const generic = { ...float } as typeof float;
+  const course = fc.oneof(
+    fc.record({ latitude: fc.double({ min: -1e4, max: 1e4, noNaN: true }), departure: fc.double({ min: -1e4, max: 1e4, noNaN: true }) }),
+    fc.record({ bearing: fc.double({ min: 0, max: 359.999, noNaN: true }), distance: fc.double({ min: 0, max: 1e4, noNaN: true }) }),
+    fc.record({ bearing: fc.constantFrom(`N 12°34'56" E`, `S 68°05'35" W`, '90', `226°54'23"`), distance: fc.double({ min: 0, max: 1e4, noNaN: true }) }),
+  );
+  it('returns exactly what the generic code returns in float, by either rule', () => {
+    fc.assert(
+      fc.property(fc.array(course, { minLength: 1, maxLength: 30 }), fc.constantFrom('compass', 'transit'), fc.double({ min: -1, max: 1, noNaN: true }), (courses, rule, off) => {
+        const input = { start: { x: 100, y: 200 }, close: { x: 100 + off, y: 200 - off }, courses, rule: rule as 'compass' | 'transit' };
+        let a: unknown, b: unknown;
+        try {
+          a = traverse(float, input);
+        } catch (e) {
+          a = (e as QuadspreadError).code;
+        }
+        try {
+          b = traverse(generic, input);
+        } catch (e) {
+          b = (e as QuadspreadError).code;
+        }
+        expect(a).toEqual(b);
+      }),
+    );
+  });
+});

@@ -1,0 +1,122 @@
+/**
+ * The float twin of the traverse loop: the same operations, in the same order, on plain
+ * numbers, so that a 1000-course float traverse stays fast even in a process where other
+ * arithmetics have been through the generic code (see DESIGN.md, "Performance"). The
+ * property tests check that it returns exactly what the generic code returns in float.
+ *
+ * @module cogo
+ * @internal
+ */
+import type { Point } from '../geometry/point.js';
+import { float } from '../arithmetic/float.js';
+import { sinCosDegrees } from '../readings/trig.js';
+import { readAzimuth } from './bearing.js';
+import type { Traverse, TraverseInput, TraverseLeg } from './traverse.js';
+
+const where = 'traverse(A, input)';
+
+function isNum(v: unknown): v is number {
+  return typeof v === 'number' && v - v === 0;
+}
+
+/**
+ * `traverse(float, input)` for well-formed input, or `undefined` when anything needs the
+ * generic path (text numbers, malformed courses, anything that must throw): the generic
+ * code then validates and reports the error.
+ * @internal
+ */
+export function traverseFloat(
+  input: TraverseInput<number>,
+  start: Point<number>,
+  end: Point<number>,
+  rule: 'compass' | 'transit',
+  list: readonly unknown[],
+): Traverse<number, false> | undefined {
+  const n = list.length;
+  const lat = new Float64Array(n);
+  const dep = new Float64Array(n);
+  const len = new Float64Array(n);
+  const points = new Array<Point<number>>(n + 1);
+  points[0] = start;
+  let x = start.x;
+  let y = start.y;
+  let total = 0;
+  let sumAbsLat = 0;
+  let sumAbsDep = 0;
+  const transit = rule === 'transit';
+  for (let i = 0; i < n; i++) {
+    const c = list[i] as { bearing?: unknown; distance?: unknown; latitude?: unknown; departure?: unknown } | null;
+    if (c === null || typeof c !== 'object') return undefined;
+    let la: number;
+    let de: number;
+    let d: number;
+    if (c.bearing !== undefined) {
+      if (!isNum(c.distance)) return undefined;
+      d = c.distance;
+      if (typeof c.bearing !== 'number' && typeof c.bearing !== 'string') return undefined;
+      let az: number;
+      try {
+        az = readAzimuth(float, c.bearing, where);
+      } catch {
+        return undefined;
+      }
+      const sc = sinCosDegrees(float, az);
+      la = d * sc.cos;
+      de = d * sc.sin;
+    } else if (isNum(c.latitude) && isNum(c.departure)) {
+      la = c.latitude;
+      de = c.departure;
+      if (c.distance === undefined) d = Math.sqrt(la * la + de * de);
+      else if (isNum(c.distance)) d = c.distance;
+      else return undefined;
+    } else {
+      return undefined;
+    }
+    if (d < 0 || la - la !== 0 || de - de !== 0 || d - d !== 0) return undefined;
+    lat[i] = la;
+    dep[i] = de;
+    len[i] = d;
+    total = total + d;
+    if (transit) {
+      sumAbsLat = sumAbsLat + Math.abs(la);
+      sumAbsDep = sumAbsDep + Math.abs(de);
+    }
+    x = x + de;
+    y = y + la;
+    points[i + 1] = { x, y };
+  }
+  const east = x - end.x;
+  const north = y - end.y;
+  const q = east * east + north * north;
+  if (q - q !== 0 || total - total !== 0) return undefined;
+  const linear = Math.sqrt(q);
+  const ratio = q === 0 ? undefined : total / Math.sqrt(q);
+  let kLat: number;
+  let kDep: number;
+  if (!transit) {
+    if (total === 0) return undefined;
+    kLat = -north / total;
+    kDep = -east / total;
+  } else {
+    if ((sumAbsLat === 0 && north !== 0) || (sumAbsDep === 0 && east !== 0)) return undefined;
+    kLat = sumAbsLat === 0 ? 0 : -north / sumAbsLat;
+    kDep = sumAbsDep === 0 ? 0 : -east / sumAbsDep;
+  }
+  const adjusted = new Array<Point<number>>(n + 1);
+  const legs = new Array<TraverseLeg<number>>(n);
+  adjusted[0] = start;
+  let ax = start.x;
+  let ay = start.y;
+  for (let i = 0; i < n; i++) {
+    const la = lat[i]!;
+    const de = dep[i]!;
+    const adjLat = la + kLat * (transit ? Math.abs(la) : len[i]!);
+    const adjDep = de + kDep * (transit ? Math.abs(de) : len[i]!);
+    ax = ax + adjDep;
+    ay = ay + adjLat;
+    adjusted[i + 1] = { x: ax, y: ay };
+    legs[i] = { latitude: la, departure: de, length: len[i]!, adjustedLatitude: adjLat, adjustedDeparture: adjDep };
+  }
+  void input;
+  return { closure: { east, north, linear, ratio }, length: total, points, adjusted, courses: legs, rule };
+}
