@@ -1,0 +1,107 @@
+// scripts/float-specialize.mjs compiles the float entry's copy of the generic code with
+// A.add(x, y) → (x + y) etc. These tests bundle a fixture through it and check that the
+// specialised functions give bit-for-bit the generic results with `float`, throw the same
+// errors, and still run the untouched generic code for any other arithmetic; and that the
+// real quadspread/float source specialises triangle() and matches the generic triangle.
+import { describe, expect, it, beforeAll } from 'vitest';
+import fc from 'fast-check';
+import { build } from 'esbuild';
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { pathToFileURL, fileURLToPath } from 'node:url';
+// @ts-expect-error: a plain ES module without types
+import { floatSpecialize, specializeSource } from '../../scripts/float-specialize.mjs';
+import * as G from './fixtures/generic.js';
+import { float, rational, QuadspreadError } from '../../src/index.js';
+import { triangle, point } from '../../src/geometry/index.js';
+
+const here = path.dirname(fileURLToPath(import.meta.url));
+const root = path.resolve(here, '../..');
+
+async function bundle(entry: string): Promise<Record<string, unknown>> {
+  const out = await build({
+    entryPoints: [entry],
+    bundle: true,
+    write: false,
+    format: 'esm',
+    platform: 'node',
+    plugins: [floatSpecialize({ entries: [entry], srcDir: path.join(root, 'src') })],
+    logLevel: 'silent',
+  });
+  const dir = mkdtempSync(path.join(tmpdir(), 'qs-float-'));
+  const file = path.join(dir, 'bundle.mjs');
+  writeFileSync(file, out.outputFiles[0]!.text);
+  return (await import(pathToFileURL(file).href)) as Record<string, unknown>;
+}
+
+function outcome(f: () => unknown): unknown {
+  try {
+    return { value: f() };
+  } catch (e) {
+    return { error: e instanceof Error ? `${e.name}:${(e as QuadspreadError).code ?? ''}:${e.message}` : String(e) };
+  }
+}
+
+const finite = fc.double({ min: -1e9, max: 1e9, noNaN: true });
+const pt = fc.record({ x: finite, y: finite });
+
+let B: Record<string, any>;
+let F: Record<string, any>;
+beforeAll(async () => {
+  B = await bundle(path.join(here, 'fixtures/entry.ts'));
+  F = await bundle(path.join(root, 'src/float.ts'));
+}, 60_000);
+
+describe('float-specialize', () => {
+  it('rewrites the float operations inline and keeps the original as f$qsGeneric', () => {
+    const src = 'export function q<T>(A: Arithmetic<T>, a: T, b: T): T { return A.add(A.mul(a, a), A.neg(b)); }';
+    const { code, functions } = specializeSource(src, 'x.ts');
+    expect(functions).toEqual(['q']);
+    expect(code).toContain('if (A !== __qsFloat) return q$qsGeneric(A, a, b);');
+    expect(code).toContain('((((a) * (a))) + ((-(b))))');
+    expect(code).toContain('function q$qsGeneric<T>(A: Arithmetic<T>, a: T, b: T): T { return A.add(A.mul(a, a), A.neg(b)); }');
+  });
+
+  it('leaves functions without an arithmetic parameter, and uncertain ones, unchanged', () => {
+    const src = 'export function f(x: number) { return x + 1; }\nexport function g<T>(U: UncertainArithmetic<T>, a: T) { return U.add(a, a); }';
+    expect(specializeSource(src, 'y.ts').code).toBe(src);
+  });
+
+  it('the specialised spread equals the generic one bit for bit in float', () => {
+    fc.assert(
+      fc.property(pt, pt, pt, (V, P, Q) => {
+        expect(outcome(() => B.spreadAt(B.float, V, P, Q))).toEqual(outcome(() => G.spreadAt(float, V, P, Q)));
+      }),
+      { numRuns: 500 },
+    );
+  });
+
+  it('sign, cmp, isZero, sqrt, from, one, zero, kernels and the errors agree with float', () => {
+    fc.assert(
+      fc.property(fc.oneof(finite, fc.constant(0), fc.constant(-0)), fc.oneof(finite, fc.constant(0)), (a, b) => {
+        expect(outcome(() => B.mixed(B.float, a, b))).toEqual(outcome(() => G.mixed(float, a, b)));
+      }),
+      { numRuns: 500 },
+    );
+    expect(outcome(() => B.spreadAt(B.float, { x: 1, y: 1 }, { x: 1, y: 1 }, { x: 2, y: 2 }))).toEqual(outcome(() => G.spreadAt(float, { x: 1, y: 1 }, { x: 1, y: 1 }, { x: 2, y: 2 })));
+  });
+
+  it('runs the untouched generic code for any other arithmetic (here rational)', () => {
+    const R = B.rational as typeof rational;
+    const V = { x: R.from('1/3'), y: R.from(2) }, P = { x: R.from(5), y: R.from('-7/2') }, Q = { x: R.from(0), y: R.from('0.25') };
+    expect(R.toString(B.nested(R, V, P, Q))).toBe(rational.toString(G.nested(rational, V, P, Q)));
+    expect(outcome(() => B.mixed(R, R.from('1/4'), R.from(3)))).toEqual(outcome(() => G.mixed(rational, rational.from('1/4'), rational.from(3))));
+  });
+
+  it('quadspread/float triangle() is specialised and equals the generic triangle(float, …) bit for bit', () => {
+    fc.assert(
+      fc.property(pt, pt, pt, (P, Q, R) => {
+        const [a, b, c] = [P, Q, R].map((X) => point(float, X.x, X.y));
+        expect(outcome(() => F.triangle(a, b, c))).toEqual(outcome(() => triangle(float, a!, b!, c!)));
+      }),
+      { numRuns: 500 },
+    );
+    expect(outcome(() => F.triangle({ x: 0, y: 0 }, { x: 1, y: 1 }, { x: 2, y: 2 }))).toEqual(outcome(() => triangle(float, { x: 0, y: 0 }, { x: 1, y: 1 }, { x: 2, y: 2 })));
+  });
+});
