@@ -27,25 +27,46 @@ export interface UncertainInput<T> {
 /** A sparse gradient: ∂y/∂xᵢ for each input xᵢ the value depends on. */
 export type Gradient<T> = ReadonlyMap<UncertainInput<T>, T>;
 
-const EMPTY: Gradient<never> = new Map<UncertainInput<never>, never>();
+type Keys<T> = readonly UncertainInput<T>[];
+const NO_KEYS: Keys<never> = Object.freeze([]);
+const NO_DERIVS: readonly never[] = Object.freeze([]);
 
 /**
  * A value of an {@link uncertain} arithmetic: a value in the base arithmetic and its
  * first-order gradient over the named inputs it was computed from. Immutable.
+ *
+ * The gradient is kept as two small parallel arrays (inputs, derivatives); values computed
+ * from the same inputs share one inputs array, so most operations are plain loops.
  */
 export class Uncertain<T> {
   /** The value y in the base arithmetic. */
   readonly value: T;
-  /** ∂y/∂xᵢ for each input the value depends on (empty for constants). */
-  readonly gradient: Gradient<T>;
+  /** @internal the inputs, in the order first met; shared between values, never mutated */
+  readonly inputs: Keys<T>;
+  /** @internal ∂y/∂inputs[i] */
+  readonly derivatives: readonly T[];
+  #map: Gradient<T> | undefined;
 
   /**
    * @param value the value in the base arithmetic
-   * @param gradient the partial derivatives; not copied, so never mutate it afterwards
+   * @param inputs the inputs it depends on (not copied: never mutate it afterwards)
+   * @param derivatives ∂value/∂inputs[i], same length (not copied)
    */
-  constructor(value: T, gradient: Gradient<T> = EMPTY as Gradient<T>) {
+  constructor(value: T, inputs: Keys<T> = NO_KEYS as Keys<T>, derivatives: readonly T[] = NO_DERIVS as readonly T[]) {
     this.value = value;
-    this.gradient = gradient;
+    this.inputs = inputs;
+    this.derivatives = derivatives;
+    this.#map = undefined;
+  }
+
+  /** ∂y/∂xᵢ for each input the value depends on (empty for constants), in the order first met. */
+  get gradient(): Gradient<T> {
+    if (this.#map === undefined) {
+      const m = new Map<UncertainInput<T>, T>();
+      for (let i = 0; i < this.inputs.length; i++) m.set(this.inputs[i] as UncertainInput<T>, this.derivatives[i] as T);
+      this.#map = m;
+    }
+    return this.#map;
   }
 
   /** Text of the value alone (`uncertain.toString` does the same). */
@@ -64,9 +85,50 @@ export interface UncertainArithmetic<T, E extends boolean = boolean> extends Ari
   /**
    * A value with the given gradient (for building inputs; `measured` is the usual way).
    * @param value the value, read by the base arithmetic
-   * @param gradient partial derivatives, not copied
+   * @param gradient partial derivatives (copied)
    */
   make(value: Numeric<T>, gradient?: Gradient<T>): Uncertain<T>;
+}
+
+/** Position of `k` in `keys`, or −1. Linear: gradients are short. */
+function indexOf<T>(keys: Keys<T>, k: UncertainInput<T>): number {
+  for (let i = 0; i < keys.length; i++) if (keys[i] === k) return i;
+  return -1;
+}
+
+/**
+ * The union of two input lists as `b`'s positions in it: `keys` is `a` itself when `b`
+ * brings no new input (so results keep sharing one array).
+ */
+function union<T>(a: Keys<T>, b: Keys<T>): { keys: Keys<T>; where: number[] } {
+  const where = new Array<number>(b.length);
+  let keys: UncertainInput<T>[] | undefined;
+  const big = a.length * b.length > 256;
+  const index = big ? new Map(a.map((k, i) => [k, i] as const)) : undefined;
+  for (let j = 0; j < b.length; j++) {
+    const k = b[j] as UncertainInput<T>;
+    let i = index ? (index.get(k) ?? -1) : indexOf(a, k);
+    if (i < 0) {
+      // new to `a` (b's inputs are distinct, so it was not added before either)
+      keys ??= a.slice();
+      i = keys.length;
+      keys.push(k);
+      index?.set(k, i);
+    }
+    where[j] = i;
+  }
+  return { keys: keys ?? a, where };
+}
+
+function fromMap<T>(B: Arithmetic<T>, value: T, g: Gradient<T> | undefined): Uncertain<T> {
+  if (g === undefined || g.size === 0) return new Uncertain(value);
+  const keys: UncertainInput<T>[] = [];
+  const ders: T[] = [];
+  for (const [k, v] of g) {
+    keys.push(k);
+    ders.push(B.from(v));
+  }
+  return new Uncertain(value, keys, ders);
 }
 
 /**
@@ -88,7 +150,9 @@ export interface UncertainArithmetic<T, E extends boolean = boolean> extends Ari
  *   derivative 1/(2√a) is exact too.
  * - `abs(a)` at a = 0 keeps the gradient (the derivative from the right).
  *
- * Over `float` a specialised copy with plain number operations is returned (same results).
+ * Over `float` a specialised copy with plain number operations is returned (same results,
+ * bit for bit). Gradients are small arrays; values computed from the same inputs share one
+ * inputs array, so an operation costs one loop over the inputs.
  *
  * @param base the arithmetic of values and derivatives
  * @returns the uncertain arithmetic, named `uncertain(<base name>)`
@@ -107,30 +171,47 @@ export function uncertain<T, E extends boolean>(base: Arithmetic<T, E>): Uncerta
   return uncertainGeneric(base);
 }
 
-/** Σ ca·ga + cb·gb over the union of keys; `undefined` coefficients mean 1. */
-function combine<T>(B: Arithmetic<T>, ga: Gradient<T>, ca: T | undefined, gb: Gradient<T>, cb: T | undefined): Gradient<T> {
-  if (gb.size === 0) return scale(B, ga, ca);
-  if (ga.size === 0) return scale(B, gb, cb);
-  const out = new Map<UncertainInput<T>, T>();
-  for (const [k, v] of ga) out.set(k, ca === undefined ? v : B.mul(ca, v));
-  for (const [k, v] of gb) {
-    const w = cb === undefined ? v : B.mul(cb, v);
-    const prev = out.get(k);
-    out.set(k, prev === undefined ? w : B.add(prev, w));
+/** ca·∇a + cb·∇b over the union of inputs; `undefined` coefficients mean 1. */
+function lin<T>(B: Arithmetic<T>, value: T, a: Uncertain<T>, ca: T | undefined, b: Uncertain<T>, cb: T | undefined): Uncertain<T> {
+  const na = a.inputs.length;
+  const nb = b.inputs.length;
+  if (nb === 0) return scaled(B, value, a, ca);
+  if (na === 0) return scaled(B, value, b, cb);
+  const da = a.derivatives;
+  const db = b.derivatives;
+  if (a.inputs === b.inputs) {
+    const d = new Array<T>(na);
+    for (let i = 0; i < na; i++) {
+      const x = ca === undefined ? (da[i] as T) : B.mul(ca, da[i] as T);
+      const y = cb === undefined ? (db[i] as T) : B.mul(cb, db[i] as T);
+      d[i] = B.add(x, y);
+    }
+    return new Uncertain(value, a.inputs, d);
   }
-  return out;
+  const { keys, where } = union(a.inputs, b.inputs);
+  const d = new Array<T>(keys.length);
+  for (let i = 0; i < na; i++) d[i] = ca === undefined ? (da[i] as T) : B.mul(ca, da[i] as T);
+  for (let j = 0; j < nb; j++) {
+    const y = cb === undefined ? (db[j] as T) : B.mul(cb, db[j] as T);
+    const i = where[j] as number;
+    d[i] = i < na ? B.add(d[i] as T, y) : y;
+  }
+  return new Uncertain(value, keys, d);
 }
 
-function scale<T>(B: Arithmetic<T>, g: Gradient<T>, c: T | undefined): Gradient<T> {
-  if (c === undefined || g.size === 0) return g;
-  const out = new Map<UncertainInput<T>, T>();
-  for (const [k, v] of g) out.set(k, B.mul(c, v));
-  return out;
+/** c·∇a (`undefined` means 1: the arrays are shared). */
+function scaled<T>(B: Arithmetic<T>, value: T, a: Uncertain<T>, c: T | undefined): Uncertain<T> {
+  const n = a.inputs.length;
+  if (c === undefined || n === 0) return new Uncertain(value, a.inputs, a.derivatives);
+  const d = new Array<T>(n);
+  for (let i = 0; i < n; i++) d[i] = B.mul(c, a.derivatives[i] as T);
+  return new Uncertain(value, a.inputs, d);
 }
 
 function uncertainGeneric<T, E extends boolean>(B: Arithmetic<T, E>): UncertainArithmetic<T, E> {
   const name = `uncertain(${B.name})`;
   const two = B.from(2);
+  const minusOne = B.neg(B.one);
   const constant = (v: T) => new Uncertain(v);
   const isU = (x: unknown): x is Uncertain<T> => x instanceof Uncertain && B.is(x.value);
   const U: UncertainArithmetic<T, E> = {
@@ -140,7 +221,7 @@ function uncertainGeneric<T, E extends boolean>(B: Arithmetic<T, E>): UncertainA
     zero: constant(B.zero),
     one: constant(B.one),
     make(value, gradient) {
-      return new Uncertain(B.from(value), gradient ?? (EMPTY as Gradient<T>));
+      return fromMap(B, B.from(value), gradient);
     },
     from(x: Numeric<Uncertain<T>>): Uncertain<T> {
       if (isU(x)) return x;
@@ -150,10 +231,10 @@ function uncertainGeneric<T, E extends boolean>(B: Arithmetic<T, E>): UncertainA
       return constant(B.from(x as Numeric<T>));
     },
     is: isU,
-    add: (a, b) => new Uncertain(B.add(a.value, b.value), combine(B, a.gradient, undefined, b.gradient, undefined)),
-    sub: (a, b) => new Uncertain(B.sub(a.value, b.value), combine(B, a.gradient, undefined, b.gradient, B.neg(B.one))),
+    add: (a, b) => lin(B, B.add(a.value, b.value), a, undefined, b, undefined),
+    sub: (a, b) => lin(B, B.sub(a.value, b.value), a, undefined, b, minusOne),
     // d(ab) = b·da + a·db
-    mul: (a, b) => new Uncertain(B.mul(a.value, b.value), combine(B, a.gradient, b.value, b.gradient, a.value)),
+    mul: (a, b) => lin(B, B.mul(a.value, b.value), a, b.value, b, a.value),
     div(a, b) {
       if (B.isZero(b.value)) {
         throw new QuadspreadError('DIVISION_BY_ZERO', `${name}.div(a, b)`, `b is zero (a = ${B.toString(a.value)})`);
@@ -161,9 +242,9 @@ function uncertainGeneric<T, E extends boolean>(B: Arithmetic<T, E>): UncertainA
       // d(a/b) = (da − q·db)/b with q = a/b
       const q = B.div(a.value, b.value);
       const r = B.div(B.one, b.value);
-      return new Uncertain(q, combine(B, a.gradient, r, b.gradient, B.neg(B.mul(q, r))));
+      return lin(B, q, a, r, b, B.neg(B.mul(q, r)));
     },
-    neg: (a) => new Uncertain(B.neg(a.value), scale(B, a.gradient, B.neg(B.one))),
+    neg: (a) => scaled(B, B.neg(a.value), a, minusOne),
     abs: (a) => (B.sign(a.value) < 0 ? U.neg(a) : a),
     cmp: (a, b) => B.cmp(a.value, b.value),
     eq: (a, b) => B.eq(a.value, b.value),
@@ -175,12 +256,12 @@ function uncertainGeneric<T, E extends boolean>(B: Arithmetic<T, E>): UncertainA
       }
       const r = B.sqrt(a.value);
       if (r === undefined) return undefined;
-      if (a.gradient.size === 0) return constant(r);
+      if (a.inputs.length === 0) return constant(r);
       if (B.isZero(r)) {
         throw new QuadspreadError('NOT_FINITE', `${name}.sqrt(a)`, 'a = 0 depends on uncertain inputs: the derivative of √a there is infinite, so first-order propagation does not apply');
       }
       // d√a = da/(2√a)
-      return new Uncertain(r, scale(B, a.gradient, B.div(B.one, B.mul(two, r))));
+      return scaled(B, r, a, B.div(B.one, B.mul(two, r)));
     },
     toNumber: (a) => B.toNumber(a.value),
     toString: (a) => B.toString(a.value),
@@ -189,41 +270,53 @@ function uncertainGeneric<T, E extends boolean>(B: Arithmetic<T, E>): UncertainA
       return constant(B.pi);
     },
     // d sin x = cos x dx
-    sin: (x) => new Uncertain(B.sin(x.value), x.gradient.size === 0 ? x.gradient : scale(B, x.gradient, B.cos(x.value))),
+    sin: (x) => (x.inputs.length === 0 ? constant(B.sin(x.value)) : scaled(B, B.sin(x.value), x, B.cos(x.value))),
     // d cos x = −sin x dx
-    cos: (x) => new Uncertain(B.cos(x.value), x.gradient.size === 0 ? x.gradient : scale(B, x.gradient, B.neg(B.sin(x.value)))),
+    cos: (x) => (x.inputs.length === 0 ? constant(B.cos(x.value)) : scaled(B, B.cos(x.value), x, B.neg(B.sin(x.value)))),
     atan2(y, x) {
       if (B.isZero(y.value) && B.isZero(x.value)) {
         throw new QuadspreadError('INVALID_ARGUMENT', `${name}.atan2(y, x)`, 'the angle of the zero vector is undefined');
       }
       const v = B.atan2(y.value, x.value);
-      if (y.gradient.size === 0 && x.gradient.size === 0) return constant(v);
+      if (y.inputs.length === 0 && x.inputs.length === 0) return constant(v);
       // d atan2(y, x) = (x·dy − y·dx)/(x² + y²)
       const d = B.add(B.mul(x.value, x.value), B.mul(y.value, y.value));
-      return new Uncertain(v, combine(B, y.gradient, B.div(x.value, d), x.gradient, B.neg(B.div(y.value, d))));
+      return lin(B, v, y, B.div(x.value, d), x, B.neg(B.div(y.value, d)));
     },
   };
   return U;
 }
 
-/** Σ ca·ga + cb·gb over float gradients. */
-function combineF(ga: Gradient<number>, ca: number, gb: Gradient<number>, cb: number): Gradient<number> {
-  if (gb.size === 0) return scaleF(ga, ca);
-  if (ga.size === 0) return scaleF(gb, cb);
-  const out = new Map<UncertainInput<number>, number>();
-  for (const [k, v] of ga) out.set(k, ca * v);
-  for (const [k, v] of gb) {
-    const prev = out.get(k);
-    out.set(k, prev === undefined ? cb * v : prev + cb * v);
+/** ca·∇a + cb·∇b over float gradients (the same steps as {@link lin}). */
+function linF(value: number, a: Uncertain<number>, ca: number, b: Uncertain<number>, cb: number): Uncertain<number> {
+  const na = a.inputs.length;
+  const nb = b.inputs.length;
+  if (nb === 0) return scaledF(value, a, ca);
+  if (na === 0) return scaledF(value, b, cb);
+  const da = a.derivatives;
+  const db = b.derivatives;
+  if (a.inputs === b.inputs) {
+    const d = new Array<number>(na);
+    for (let i = 0; i < na; i++) d[i] = ca * (da[i] as number) + cb * (db[i] as number);
+    return new Uncertain(value, a.inputs, d);
   }
-  return out;
+  const { keys, where } = union(a.inputs, b.inputs);
+  const d = new Array<number>(keys.length);
+  for (let i = 0; i < na; i++) d[i] = ca * (da[i] as number);
+  for (let j = 0; j < nb; j++) {
+    const y = cb * (db[j] as number);
+    const i = where[j] as number;
+    d[i] = i < na ? (d[i] as number) + y : y;
+  }
+  return new Uncertain(value, keys, d);
 }
 
-function scaleF(g: Gradient<number>, c: number): Gradient<number> {
-  if (c === 1 || g.size === 0) return g;
-  const out = new Map<UncertainInput<number>, number>();
-  for (const [k, v] of g) out.set(k, c * v);
-  return out;
+function scaledF(value: number, a: Uncertain<number>, c: number): Uncertain<number> {
+  const n = a.inputs.length;
+  if (c === 1 || n === 0) return new Uncertain(value, a.inputs, a.derivatives);
+  const d = new Array<number>(n);
+  for (let i = 0; i < n; i++) d[i] = c * (a.derivatives[i] as number);
+  return new Uncertain(value, a.inputs, d);
 }
 
 /** The float twin of {@link uncertainGeneric}: the same rules with plain number operations. */
@@ -243,7 +336,7 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
     zero: constant(0),
     one: constant(1),
     make(value, gradient) {
-      return new Uncertain(float.from(value), gradient ?? (EMPTY as Gradient<number>));
+      return fromMap(float, float.from(value), gradient);
     },
     from(x: Numeric<V>): V {
       if (isU(x)) return x;
@@ -253,16 +346,16 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
       return constant(float.from(x as Numeric<number>));
     },
     is: isU,
-    add: (a, b) => new Uncertain(a.value + b.value, combineF(a.gradient, 1, b.gradient, 1)),
-    sub: (a, b) => new Uncertain(a.value - b.value, combineF(a.gradient, 1, b.gradient, -1)),
-    mul: (a, b) => new Uncertain(a.value * b.value, combineF(a.gradient, b.value, b.gradient, a.value)),
+    add: (a, b) => linF(a.value + b.value, a, 1, b, 1),
+    sub: (a, b) => linF(a.value - b.value, a, 1, b, -1),
+    mul: (a, b) => linF(a.value * b.value, a, b.value, b, a.value),
     div(a, b) {
       if (b.value === 0) throw new QuadspreadError('DIVISION_BY_ZERO', `${name}.div(a, b)`, `b is zero (a = ${show(a.value)})`);
       const q = a.value / b.value;
       const r = 1 / b.value;
-      return new Uncertain(q, combineF(a.gradient, r, b.gradient, -(q * r)));
+      return linF(q, a, r, b, -(q * r));
     },
-    neg: (a) => new Uncertain(-a.value, scaleF(a.gradient, -1)),
+    neg: (a) => scaledF(-a.value, a, -1),
     abs: (a) => (a.value < 0 ? U.neg(a) : a),
     cmp: (a, b) => (a.value < b.value ? -1 : a.value > b.value ? 1 : 0),
     eq: (a, b) => a.value === b.value,
@@ -271,26 +364,26 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
     sqrt(a) {
       if (a.value < 0) throw new QuadspreadError('NO_REAL_SOLUTION', `${name}.sqrt(a)`, `a = ${show(a.value)} is negative`);
       const r = Math.sqrt(a.value);
-      if (a.gradient.size === 0) return constant(r);
+      if (a.inputs.length === 0) return constant(r);
       if (r === 0) {
         throw new QuadspreadError('NOT_FINITE', `${name}.sqrt(a)`, 'a = 0 depends on uncertain inputs: the derivative of √a there is infinite, so first-order propagation does not apply');
       }
-      return new Uncertain(r, scaleF(a.gradient, 1 / (2 * r)));
+      return scaledF(r, a, 1 / (2 * r));
     },
     toNumber: (a) => fin(a.value, 'toNumber(a)'),
     toString: (a) => float.toString(a.value),
     toPrecision: (a, digits) => float.toPrecision(a.value, digits),
     pi: constant(Math.PI),
-    sin: (x) => new Uncertain(Math.sin(x.value), x.gradient.size === 0 ? x.gradient : scaleF(x.gradient, Math.cos(x.value))),
-    cos: (x) => new Uncertain(Math.cos(x.value), x.gradient.size === 0 ? x.gradient : scaleF(x.gradient, -Math.sin(x.value))),
+    sin: (x) => (x.inputs.length === 0 ? constant(Math.sin(x.value)) : scaledF(Math.sin(x.value), x, Math.cos(x.value))),
+    cos: (x) => (x.inputs.length === 0 ? constant(Math.cos(x.value)) : scaledF(Math.cos(x.value), x, -Math.sin(x.value))),
     atan2(y, x) {
       if (y.value === 0 && x.value === 0) {
         throw new QuadspreadError('INVALID_ARGUMENT', `${name}.atan2(y, x)`, 'the angle of the zero vector is undefined');
       }
       const v = Math.atan2(y.value, x.value);
-      if (y.gradient.size === 0 && x.gradient.size === 0) return constant(v);
+      if (y.inputs.length === 0 && x.inputs.length === 0) return constant(v);
       const d = x.value * x.value + y.value * y.value;
-      return new Uncertain(v, combineF(y.gradient, x.value / d, x.gradient, -(y.value / d)));
+      return linF(v, y, x.value / d, x, -(y.value / d));
     },
   };
   return U;

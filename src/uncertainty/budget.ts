@@ -120,7 +120,9 @@ export function budget<T, E extends boolean>(
   const byName = new Map<string, { input: UncertainInput<T>; c: T }>();
   const lines: Contribution<T>[] = [];
   let variance = B.zero;
-  for (const [input, c] of y.gradient) {
+  for (let i = 0; i < y.inputs.length; i++) {
+    const input = y.inputs[i] as UncertainInput<T>;
+    const c = y.derivatives[i] as T;
     const other = byName.get(input.name);
     if (other !== undefined) {
       throw new QuadspreadError('DUPLICATE_INPUT', where, `two different inputs are named ${show(input.name)} (values ${B.toString(other.input.value)} and ${B.toString(input.value)})`);

@@ -13,6 +13,7 @@ import type { UncertainArithmetic, UncertainInput } from '../arithmetic/uncertai
  * @internal
  */
 export function readSigma<T>(U: UncertainArithmetic<T>, sigma: Numeric<T>, where: string): T {
+  if (typeof sigma === 'number' && sigma >= 0 && sigma - sigma === 0) return U.base.from(sigma);
   let s: T;
   try {
     s = U.base.from(sigma);
@@ -62,7 +63,7 @@ export function measured<T>(U: UncertainArithmetic<T>, value: Numeric<T>, sigma:
   const s = readSigma(U, sigma, where);
   const v = U.base.from(value);
   const input: UncertainInput<T> = Object.freeze({ name: n, value: v, sigma: s });
-  return U.make(v, new Map([[input, U.base.one]]));
+  return new Uncertain(v, [input], [U.base.one]);
 }
 
 /**

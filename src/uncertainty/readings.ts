@@ -11,7 +11,7 @@
  */
 import type { Numeric } from '../arithmetic/types.js';
 import { Uncertain } from '../arithmetic/uncertain.js';
-import type { Gradient, UncertainArithmetic, UncertainInput } from '../arithmetic/uncertain.js';
+import type { UncertainArithmetic } from '../arithmetic/uncertain.js';
 import { angleToDegrees, type AngleUnit } from '../readings/angle.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { spreadFromDegrees } from '../readings/spread.js';
@@ -43,9 +43,7 @@ export function withDerivative<T>(U: UncertainArithmetic<T>, x: Uncertain<T>, va
   const B = U.base;
   const v = U.from(x);
   const d = B.from(derivative);
-  const g = new Map<UncertainInput<T>, T>();
-  for (const [k, c] of v.gradient) g.set(k, B.mul(d, c));
-  return U.make(value, g as Gradient<T>);
+  return new Uncertain(B.from(value), v.inputs, v.derivatives.map((c) => B.mul(d, c))); // d·∇x
 }
 
 /**
