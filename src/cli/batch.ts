@@ -111,7 +111,7 @@ export async function runBatch(kind: string, file: string, o: { arithmetic: Arit
     if (columns === undefined) throw new JobInvalid('', `the CSV file ${JSON.stringify(file)} is empty (it needs a header line: ${k.columns.join(', ')})`);
     pending?.commit();
     progress(true);
-    if (pending) io.stderr(`${rows} rows written to ${pending.target}\n`);
+    if (pending) io.stderr(`${rows} row${rows === 1 ? "" : "s"} written to ${pending.target}\n`);
   } catch (e) {
     pending?.abort();
     if (io.stderrIsTTY && rows > 0) io.stderr('\n');

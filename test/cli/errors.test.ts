@@ -61,6 +61,27 @@ describe('quadspread run with a job that cannot be read', () => {
     expect(r.stderr).toMatch(/tasks\[0\]\.courses\[1\]\.bearing: "0°61'" is not a valid bearing: .*minutes 61 ≥ 60/);
   });
 
+  it('exits 2 naming a vertical reading out of range, as in tasks[2].readings[1].vertical', () => {
+    const height = (vertical: unknown) => ({
+      kind: 'height',
+      target: 'C',
+      readings: [
+        { station: 'A', vertical: `10°00'` },
+        { station: 'B', vertical },
+      ],
+    });
+    const area = { kind: 'area', points: ['A', 'B', 'C'] };
+    const r = cli(['run', jobFile('elev.json', { points, tasks: [area, area, height('95°')] })]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/^quadspread: tasks\[2\]\.readings\[1\]\.vertical: "95°" is not a valid elevation angle/);
+    const z = cli(['run', jobFile('zen.json', { points, tasks: [height({ zenith: '200°', sigma: '5"' })] })]);
+    expect(z.code).toBe(2);
+    expect(z.stderr).toContain('tasks[0].readings[1].vertical.zenith: "200°" is not a valid zenith angle');
+    const s = cli(['run', jobFile('slope.json', { points, tasks: [height({ slope: 'steep' })] })]);
+    expect(s.code).toBe(2);
+    expect(s.stderr).toContain('tasks[0].readings[1].vertical.slope: "steep" is not a valid slope');
+  });
+
   it('exits 2 naming a length with an unknown unit', () => {
     const r = cli(['run', jobFile('unit.json', { points, tasks: [{ kind: 'traverse', start: 'A', close: 'B', courses: [{ bearing: 90, distance: '100 furlongs' }] }] })]);
     expect(r.code).toBe(2);
