@@ -1,0 +1,66 @@
+/**
+ * Internal helpers of the geodesy area: reading latitudes, longitudes and heights, square
+ * roots that are exact where they can be, and the precision an arithmetic claims.
+ *
+ * @module geodesy
+ * @internal
+ */
+import { QuadspreadError, show } from '../errors.js';
+import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+import { RATIONAL_TRANSCENDENTAL_DIGITS } from '../arithmetic/rational.js';
+import { angleToDegrees } from '../readings/angle.js';
+import { approxSqrt } from '../readings/numeric.js';
+
+/** @internal √x for x ≥ 0: exact or correctly rounded where the arithmetic can, else within 1e-48 relative. */
+export function root<T>(A: Arithmetic<T>, x: T): T {
+  return approxSqrt(A, x);
+}
+
+/**
+ * @internal Significant digits an arithmetic's results claim: `digits` of a decimal
+ * arithmetic (also inside an uncertain one, read from its name), 42 for an exact one
+ * (its transcendental functions), 15 otherwise (float).
+ */
+export function claimedDigits<T>(A: Arithmetic<T>): number {
+  const d = (A as { digits?: unknown }).digits;
+  if (typeof d === 'number') return d;
+  const m = /decimal\((\d+)\)/.exec(A.name);
+  if (m) return Number(m[1]);
+  if (A.exact || /rational/.test(A.name)) return RATIONAL_TRANSCENDENTAL_DIGITS;
+  return 15;
+}
+
+/** @internal 10^−k in the arithmetic. */
+export function tenToMinus<T>(A: Arithmetic<T>, k: number): T {
+  return A.from(`1e-${k}`);
+}
+
+/** @internal A latitude in degrees from decimal degrees or DMS text, checked to be within ±90°. */
+export function readLatitude<T>(A: Arithmetic<T>, lat: Numeric<T>, where: string): T {
+  if (lat === undefined || lat === null) throw new QuadspreadError('INVALID_ANGLE', where, 'the latitude is missing');
+  const v = angleToDegrees(A, lat);
+  if (A.cmp(A.abs(v), A.from(90)) > 0) {
+    throw new QuadspreadError('LATITUDE_OUT_OF_RANGE', where, `${show(typeof lat === 'object' ? A.toString(v) : lat)} is beyond ±90°`);
+  }
+  return v;
+}
+
+/** @internal A longitude in degrees from decimal degrees or DMS text (any value; used through sin and cos). */
+export function readLongitude<T>(A: Arithmetic<T>, lon: Numeric<T>, where: string): T {
+  if (lon === undefined || lon === null) throw new QuadspreadError('INVALID_ANGLE', where, 'the longitude is missing');
+  return angleToDegrees(A, lon);
+}
+
+/** @internal An ellipsoidal height in metres (default 0), refused below −a. */
+export function readHeight<T>(A: Arithmetic<T>, h: Numeric<T> | undefined, a: T, where: string): T {
+  const v = h === undefined ? A.zero : A.from(h);
+  if (A.cmp(v, A.neg(a)) < 0) {
+    throw new QuadspreadError('HEIGHT_OUT_OF_RANGE', where, `${show(typeof h === 'object' ? A.toString(v) : h)} is below −a = −${A.toString(a)} m`);
+  }
+  return v;
+}
+
+/** @internal radians → degrees: θ·180/π. */
+export function toDegrees<T>(A: Arithmetic<T>, rad: T): T {
+  return A.div(A.mul(rad, A.from(180)), A.pi); // π rad = 180° (definition of the radian)
+}
