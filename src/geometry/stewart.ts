@@ -121,23 +121,25 @@ function missingKey(data: Record<string, unknown>, keys: readonly string[], wher
 }
 
 /**
- * Solves R(x) = 0 for a residual R of degree ≤ 2 in x: the coefficients come from R(0),
- * R(1), R(−1) (exact in an exact arithmetic); with `nonNegative`, negative roots are dropped.
+ * The roots of a·x² + b·x + c = 0 (coefficients written out per unknown, so that rounded
+ * arithmetic sees no cancellation from sampling); throws when every x satisfies it.
  */
-function solveResidual<T, E extends boolean>(A: Arithmetic<T, E>, R: (x: T) => T, nonNegative: boolean, where: string): Root<T, E>[] {
-  const c = R(A.zero);
-  const p = R(A.one);
-  const q = R(A.neg(A.one));
-  const two = A.from(2);
-  const a = A.sub(A.div(A.add(p, q), two), c);
-  const b = A.div(A.sub(p, q), two);
+function roots<T, E extends boolean>(A: Arithmetic<T, E>, a: T, b: T, c: T, where: string): Root<T, E>[] {
   if (A.isZero(a) && A.isZero(b)) {
     if (A.isZero(c)) throw new QuadspreadError('INVALID_ARGUMENT', where, 'the other values do not fix the unknown (every value satisfies the relation)');
     return [];
   }
-  const roots = solveQuadratic(A, a, b, c);
-  if (!nonNegative) return roots;
-  return roots.filter((r) => (isSurd(r) ? (r as Surd<T>).sign() : A.sign(r as T)) >= 0);
+  return solveQuadratic(A, a, b, c);
+}
+
+/** base + sign·r for each root r, kept in increasing order. */
+function shift<T, E extends boolean>(A: Arithmetic<T, E>, rs: Root<T, E>[], base: T, sign: 1 | -1): Root<T, E>[] {
+  const out = rs.map((r) => (isSurd(r) ? (sign > 0 ? (r as Surd<T>).add(base) : (r as Surd<T>).neg().add(base)) : sign > 0 ? A.add(base, r as T) : A.sub(base, r as T)) as Root<T, E>);
+  return sign > 0 ? out : out.reverse();
+}
+
+function nonNegative<T, E extends boolean>(A: Arithmetic<T, E>, rs: Root<T, E>[]): Root<T, E>[] {
+  return rs.filter((r) => (isSurd(r) ? (r as Surd<T>).sign() : A.sign(r as T)) >= 0);
 }
 
 /**
@@ -174,11 +176,29 @@ export function solveStewart<T, E extends boolean>(A: Arithmetic<T, E>, data: Pa
   if (A.eq(v[ts[0]!]!, v[ts[1]!]!)) {
     throw new QuadspreadError('REPEATED_CHAINAGE', w, `${ts[0]} and ${ts[1]} are both ${show(A.toString(v[ts[0]!]!))}: the points must differ`);
   }
-  const R = (x: T): T => {
-    const g = (k: string) => (k === key ? x : v[k]!);
-    return stewart(A, g('QB'), g('QC'), g('QD'), g('tB'), g('tC'), g('tD'));
-  };
-  return solveResidual(A, R, key[0] === 'Q', w);
+  if (key[0] === 'Q') {
+    // Linear in each quadrance: solve directly (the chainages differ, so the coefficient is not 0).
+    const g = (k: string) => (k === key ? A.zero : v[k]!);
+    const c = stewart(A, g('QB'), g('QC'), g('QD'), g('tB'), g('tC'), g('tD'));
+    const m = A.sub(v.tD!, v.tB!);
+    const n = A.sub(v.tC!, v.tD!);
+    const coef = key === 'QB' ? n : key === 'QC' ? m : A.neg(A.add(m, n));
+    return nonNegative(A, roots(A, A.zero, coef, c, w));
+  }
+  const { QB, QC, QD } = v as Record<'QB' | 'QC' | 'QD', T>;
+  if (key === 'tD') {
+    // y = tD − tB, a = tC − tB: a·y² + (QC − QB − a²)·y + a·(QB − QD) = 0 (Stewart's relation expanded; derived).
+    const a = A.sub(v.tC!, v.tB!);
+    return shift(A, roots(A, a, A.sub(A.sub(QC, QB), A.mul(a, a)), A.mul(a, A.sub(QB, QD)), w), v.tB!, 1);
+  }
+  if (key === 'tB') {
+    // y = tD − tB, n = tC − tD: −n·y² + (QC − QD − n²)·y + n·(QB − QD) = 0 (derived).
+    const n = A.sub(v.tC!, v.tD!);
+    return shift(A, roots(A, A.neg(n), A.sub(A.sub(QC, QD), A.mul(n, n)), A.mul(n, A.sub(QB, QD)), w), v.tD!, -1);
+  }
+  // key === 'tC': y = tC − tD, m = tD − tB: −m·y² + (QB − QD − m²)·y + m·(QC − QD) = 0 (derived).
+  const m = A.sub(v.tD!, v.tB!);
+  return shift(A, roots(A, A.neg(m), A.sub(A.sub(QB, QD), A.mul(m, m)), A.mul(m, A.sub(QC, QD)), w), v.tD!, 1);
 }
 
 /**
@@ -204,9 +224,41 @@ export function solveStewartQuadrances<T, E extends boolean>(A: Arithmetic<T, E>
   const key = missingKey(data as Record<string, unknown>, QUADRANCE_KEYS, w);
   const v: Record<string, T> = {};
   for (const k of QUADRANCE_KEYS) if (k !== key) v[k] = readQuadrance(A, data[k]!, w, k);
-  const R = (x: T): T => {
-    const g = (k: string) => (k === key ? x : v[k]!);
-    return stewartQ(A, g('QB'), g('QC'), g('QD'), g('QBD'), g('QBC'));
-  };
-  return solveResidual(A, R, true, w);
+  const { QB, QC, QD, QBD, QBC } = v as Record<'QB' | 'QC' | 'QD' | 'QBD' | 'QBC', T>;
+  const two = A.from(2);
+  const sq = (x: T) => A.mul(x, x);
+  // Each case expands QBD·(QB + QBC − QC)² = QBC·(QB + QBD − QD)² in the unknown (derived).
+  switch (key) {
+    case 'QC': {
+      // y = QB + QBC − QC: QBD·y² − QBC·v² = 0
+      const y = roots(A, QBD, A.zero, A.neg(A.mul(QBC, sq(A.sub(A.add(QB, QBD), QD)))), w);
+      return nonNegative(A, shift(A, y, A.add(QB, QBC), -1));
+    }
+    case 'QD': {
+      // y = QB + QBD − QD: QBC·y² − QBD·u² = 0
+      const y = roots(A, QBC, A.zero, A.neg(A.mul(QBD, sq(A.sub(A.add(QB, QBC), QC)))), w);
+      return nonNegative(A, shift(A, y, A.add(QB, QBD), -1));
+    }
+    case 'QB': {
+      // QBD·(x + k1)² − QBC·(x + k2)², k1 = QBC − QC, k2 = QBD − QD
+      const k1 = A.sub(QBC, QC);
+      const k2 = A.sub(QBD, QD);
+      const a = A.sub(QBD, QBC);
+      const b = A.mul(two, A.sub(A.mul(QBD, k1), A.mul(QBC, k2)));
+      const c = A.sub(A.mul(QBD, sq(k1)), A.mul(QBC, sq(k2)));
+      return nonNegative(A, roots(A, a, b, c, w));
+    }
+    case 'QBD': {
+      // x·u² − QBC·(x + k)², u = QB + QBC − QC, k = QB − QD
+      const u = A.sub(A.add(QB, QBC), QC);
+      const k = A.sub(QB, QD);
+      return nonNegative(A, roots(A, A.neg(QBC), A.sub(sq(u), A.mul(two, A.mul(QBC, k))), A.neg(A.mul(QBC, sq(k))), w));
+    }
+    default: {
+      // QBC = x: QBD·(x + j)² − x·v², j = QB − QC, v = QB + QBD − QD
+      const j = A.sub(QB, QC);
+      const vv = sq(A.sub(A.add(QB, QBD), QD));
+      return nonNegative(A, roots(A, QBD, A.sub(A.mul(two, A.mul(QBD, j)), vv), A.mul(QBD, sq(j)), w));
+    }
+  }
 }

@@ -100,6 +100,60 @@ describe('the Stewart solvers in float', () => {
   });
 });
 
+describe('the Stewart solvers in float agree with the exact solutions at survey magnitudes', () => {
+  // Chainages to ±10 km with millimetres, P up to 10 km away. Float solutions must match the
+  // rational ones to 1e-9 relative on well-conditioned data: B < D < C with gaps of at least 1 %
+  // of the span BC, P at least 1 % of the span off the line, and two roots at least 10 % of their
+  // size apart. Bound: ~20 operations on inputs rounded once (relative 1.1e-16 each) amplified by
+  // a condition number of at most ~100² on such data: 1e-12 expected, 1e-9 asserted. Tangent
+  // (double-root) cases are left out: in float a discriminant that rounds below zero gives no root
+  // (documented).
+  const mm = fc.integer({ min: -1e7, max: 1e7 }).map((n) => A.from(n).div(1000));
+  const big = fc.record({ t1: mm, t2: mm, t3: mm, px: mm, py: mm })
+    .map((c) => {
+      const [tB, tD, tC] = [c.t1, c.t2, c.t3].sort((x, y) => x.compare(y));
+      return { ...c, tB: tB!, tD: tD!, tC: tC! };
+    })
+    .filter((c) => {
+      const span = c.tC.sub(c.tB).valueOf();
+      return span > 1 && c.tD.sub(c.tB).valueOf() > 0.01 * span && c.tC.sub(c.tD).valueOf() > 0.01 * span && Math.abs(c.py.valueOf()) > 0.01 * span;
+    })
+    .map((c) => {
+      const q = (t: Rational) => c.px.sub(t).pow(2).add(c.py.pow(2));
+      return { QB: q(c.tB), QC: q(c.tC), QD: q(c.tD), tB: c.tB, tC: c.tC, tD: c.tD, QBD: c.tD.sub(c.tB).pow(2), QBC: c.tC.sub(c.tB).pow(2) };
+    });
+  const agree = (exact: Surd<Rational>[], fl: number[], quadratic: boolean) => {
+    const e = exact.map((r) => r.toNumber());
+    const size = Math.max(1, ...e.map(Math.abs));
+    if (quadratic) fc.pre(e.length !== 1); // a tangent case: see above
+    if (e.length === 2) fc.pre(Math.abs(e[1]! - e[0]!) > 0.1 * size);
+    expect(fl.length).toBe(e.length);
+    fl.forEach((x, i) => expect(Math.abs(x - e[i]!)).toBeLessThanOrEqual(1e-9 * size));
+  };
+  for (const key of ['QB', 'QC', 'QD', 'tB', 'tC', 'tD'] as const) {
+    it(`solveStewart(float, data without ${key}) matches solveStewart(rational, …)`, () => {
+      fc.assert(fc.property(big, (c) => {
+        const data: Record<string, Rational | undefined> = { QB: c.QB, QC: c.QC, QD: c.QD, tB: c.tB, tC: c.tC, tD: c.tD };
+        delete data[key];
+        const fdata = Object.fromEntries(Object.entries(data).map(([k, x]) => [k, x!.valueOf()]));
+        agree(solveStewart(A, data), solveStewart(float, fdata), key[0] === 't');
+      }), { numRuns: 60 });
+    });
+  }
+  for (const key of ['QB', 'QC', 'QD', 'QBD', 'QBC'] as const) {
+    it(`solveStewartQuadrances(float, data without ${key}) matches the rational solutions`, () => {
+      fc.assert(fc.property(big, (c) => {
+        const data: Record<string, Rational | undefined> = { QB: c.QB, QC: c.QC, QD: c.QD, QBD: c.QBD, QBC: c.QBC };
+        delete data[key];
+        const fdata = Object.fromEntries(Object.entries(data).map(([k, x]) => [k, x!.valueOf()]));
+        let exact: Surd<Rational>[];
+        try { exact = solveStewartQuadrances(A, data); } catch { return; }
+        agree(exact, solveStewartQuadrances(float, fdata), true);
+      }), { numRuns: 60 });
+    });
+  }
+});
+
 describe('bad input to the Stewart functions throws typed errors', () => {
   it('missing more than one member, or none, throws INVALID_ARGUMENT', () => {
     expect(code(() => solveStewart(A, { QB: 1, QC: 2, tB: 0, tC: 1 }))).toBe('INVALID_ARGUMENT');
