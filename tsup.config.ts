@@ -2,20 +2,28 @@ import { defineConfig } from 'tsup';
 // The float entry's modules are compiled float-specialised (A.add(x, y) → x + y …); see the file.
 import { floatSpecialize } from './scripts/float-specialize.mjs';
 
-// Each entry is bundled as a self-contained copy (splitting: false), so that the code in
-// quadspread/float only ever sees the float arithmetic (see docs/performance.md).
+// `npm run build` (scripts/build.mjs) regenerates the bound entries, empties dist/, runs
+// these builds and fixes up the declarations.
+//
+// - quadspread/float is bundled as a self-contained copy (splitting: false), in ESM and CJS,
+//   so that its code only ever sees the float arithmetic (see docs/performance.md).
+// - The ESM of quadspread, quadspread/rational and quadspread/decimal is one file per source
+//   module (dist/esm/), so that a consumer's bundler drops every module it does not use
+//   (package.json has sideEffects: false): `quadrance` + `float` does not pull in fraction.js
+//   or big.js (npm run size checks the budget).
+// - The CJS of every entry is bundled; declarations (.d.ts and .d.cts) are built once.
+const common = {
+  target: 'es2022',
+  platform: 'neutral',
+  sourcemap: false,
+  clean: false,
+  external: ['fraction.js', 'big.js'],
+} as const;
+const entries = { index: 'src/index.ts', rational: 'src/rational.ts', decimal: 'src/decimal.ts', float: 'src/float.ts' };
+
 export default defineConfig([
-  {
-    entry: { index: 'src/index.ts', rational: 'src/rational.ts', decimal: 'src/decimal.ts', float: 'src/float.ts' },
-    format: ['esm', 'cjs'],
-    dts: true,
-    splitting: false,
-    sourcemap: false,
-    clean: true,
-    target: 'es2022',
-    platform: 'neutral',
-    treeshake: true,
-    external: ['fraction.js', 'big.js'],
-    esbuildPlugins: [floatSpecialize()],
-  },
+  { ...common, entry: entries, format: ['cjs'], splitting: false, treeshake: true, esbuildPlugins: [floatSpecialize()] },
+  { ...common, entry: { float: 'src/float.ts' }, format: ['esm'], splitting: false, treeshake: true, esbuildPlugins: [floatSpecialize()] },
+  { ...common, entry: ['src/**/*.ts', '!src/cli/**', '!src/float.ts'], outDir: 'dist/esm', format: ['esm'], bundle: false },
+  { ...common, entry: entries, format: ['esm', 'cjs'], dts: { only: true } },
 ]);

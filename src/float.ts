@@ -78,6 +78,9 @@ export const degreesToUnit: Bound<typeof g.degreesToUnit<Value>> = (degrees, uni
 /** {@link g.elevationFromVertical | elevationFromVertical} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
 export const elevationFromVertical: Bound<typeof g.elevationFromVertical<Value>> = (reading) => g.elevationFromVertical(arithmetic, reading);
 
+/** {@link g.ellipsoidParameters | ellipsoidParameters} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+export const ellipsoidParameters: Bound<typeof g.ellipsoidParameters<Value>> = (ellipsoid) => g.ellipsoidParameters(arithmetic, ellipsoid);
+
 /** {@link g.footOfPerpendicular | footOfPerpendicular} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
 export const footOfPerpendicular: Bound<typeof g.footOfPerpendicular<Value>> = (P, l) => g.footOfPerpendicular(arithmetic, P, l);
 
@@ -86,6 +89,12 @@ export const formatDms: Bound<typeof g.formatDms<Value>> = (degrees, secondsDeci
 
 /** {@link g.forward | forward} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
 export const forward: Bound<typeof g.forward<Value>> = (P, bearing, distance) => g.forward(arithmetic, P, bearing, distance);
+
+/** {@link g.geocentricToGeodetic | geocentricToGeodetic} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+export const geocentricToGeodetic: Bound<typeof g.geocentricToGeodetic<Value>> = (point, ellipsoid) => g.geocentricToGeodetic(arithmetic, point, ellipsoid);
+
+/** {@link g.geodeticToGeocentric | geodeticToGeocentric} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+export const geodeticToGeocentric: Bound<typeof g.geodeticToGeocentric<Value>> = (point, ellipsoid) => g.geodeticToGeocentric(arithmetic, point, ellipsoid);
 
 /** {@link g.gradeFromSpread | gradeFromSpread} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
 export const gradeFromSpread: Bound<typeof g.gradeFromSpread<Value, false>> = (s) => g.gradeFromSpread(arithmetic, s);
@@ -290,22 +299,24 @@ export const zenithToElevation: Bound<typeof g.zenithToElevation<Value>> = (degr
 
 export {
   ANGLE_UNITS, AREA_UNITS, BEARING_PARALLEL_TOLERANCE, budget, DANGER_CIRCLE_TOLERANCE, decimal,
-  DEFAULT_EARTH_RADIUS_M, DEFAULT_REFRACTION, ERROR_CODES, float, isSurd, LEVELLING_ORDERS,
-  MAX_DECIMAL_DIGITS, MAX_EXPONENT, MAX_INPUT_LENGTH, measured, measuredAngle, measuredDistance,
-  measuredGrade, measuredQuadrance, measuredSpread, measuredVertical, METRES_PER_UNIT,
-  monteCarlo, QuadspreadError, randomStream, rational, RATIONAL_TRANSCENDENTAL_DIGITS,
-  readRatio, roundOff, sensitivities, spreadOfAngle, Uncertain, verticalOfAngle, withDerivative,
+  decimalElementary, DEFAULT_EARTH_RADIUS_M, DEFAULT_REFRACTION, defineEllipsoid,
+  ellipsoidByName, ERROR_CODES, float, GRS80, isSurd, LEVELLING_ORDERS, MAX_DECIMAL_DIGITS,
+  MAX_EXPONENT, MAX_INPUT_LENGTH, measured, measuredAngle, measuredDistance, measuredGrade,
+  measuredQuadrance, measuredSpread, measuredVertical, METRES_PER_UNIT, monteCarlo,
+  QuadspreadError, randomStream, rational, RATIONAL_TRANSCENDENTAL_DIGITS, readRatio, roundOff,
+  sensitivities, spreadOfAngle, Uncertain, verticalOfAngle, WGS84, withDerivative,
 } from './index.js';
 export type {
   AllowableMisclosure, AngleUnit, AngularMisclosure, AreaUnit, Arithmetic, BaseHeight,
   BearingIntersection, Budget, BudgetOptions, CircleInput, Contribution, CorrelationTerm,
-  CurvatureOptions, Decimal, DecimalArithmetic, ErrorCode, FloatArithmetic, FootSide, Gradient,
-  InlineHeight, InlineQuadranceHeight, InputDistribution, Inverse, LengthUnit, LevelCheck,
-  LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, MonteCarloOptions,
-  MonteCarloResult, Numeric, OffsetMeasure, Point, PolygonArea, RandomStream, Ratio, Rational,
-  RationalArithmetic, ReciprocalTrigHeight, Resection, ResectionInput, Root, RoundOff,
-  StewartChainages, StewartQuadrances, Surd, Traverse, TraverseClosure, TraverseCourse,
-  TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
-  TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf, VerticalInput, VerticalKind,
-  VerticalReading,
+  CurvatureOptions, Decimal, DecimalArithmetic, DecimalElementary, Ellipsoid,
+  EllipsoidDefinition, EllipsoidParameters, ErrorCode, FloatArithmetic, FootSide, Geocentric,
+  Geodetic, GeodeticInput, Gradient, InlineHeight, InlineQuadranceHeight, InputDistribution,
+  Inverse, LengthUnit, LevelCheck, LevellingOrder, LevelRow, LevelRun, LevelRunInput,
+  LevelSight, Line, MonteCarloOptions, MonteCarloResult, Numeric, OffsetMeasure, Point,
+  PolygonArea, RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalTrigHeight,
+  Resection, ResectionInput, Root, RoundOff, StewartChainages, StewartQuadrances, Surd,
+  Traverse, TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg, Triangle,
+  TriangleMeasures, TrigHeight, TrigSight, TwoStationHeight, UncertainArithmetic,
+  UncertainInput, ValueOf, VerticalInput, VerticalKind, VerticalReading,
 } from './index.js';

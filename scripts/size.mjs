@@ -1,0 +1,75 @@
+#!/usr/bin/env node
+// npm run size — the bundle budget. Needs `npm run build` first.
+//
+// Bundles small consumer programs against the built package with esbuild (minified, ESM,
+// browser platform, dependencies fraction.js and big.js included as a consumer's bundler
+// would) and checks:
+//   - importing only `quadrance` and `float` from 'quadspread'      < 10 KiB
+//   - the whole library (`import * as q from 'quadspread'`)          < 120 KiB
+// Other figures are printed for information. Sizes are minified bytes (gzip in brackets).
+import { build } from 'esbuild';
+import { mkdtempSync, mkdirSync, rmSync, symlinkSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { gzipSync } from 'node:zlib';
+import { checkBuilt, packageDir, root } from './pack.mjs';
+
+const KiB = 1024;
+const CASES = [
+  { name: "quadrance + float from 'quadspread'", budget: 10 * KiB, code: "import { quadrance, float } from 'quadspread';\nconsole.log(quadrance(float, { x: 0, y: 0 }, { x: 3, y: 4 }));" },
+  { name: "the whole library ('quadspread')", budget: 120 * KiB, code: "import * as q from 'quadspread';\nconsole.log(q);" },
+  { name: "quadrance + point from 'quadspread/float'", code: "import { quadrance, point } from 'quadspread/float';\nconsole.log(quadrance(point(0, 0), point(3, 4)));" },
+  { name: "quadrance + rational from 'quadspread'", code: "import { quadrance, point, rational } from 'quadspread';\nconsole.log(quadrance(rational, point(rational, 0, 0), point(rational, 3, 4)));" },
+  { name: "solveTriangle + rational from 'quadspread'", code: "import * as q from 'quadspread';\nconsole.log(q.solveTriangle, q.rational);" },
+  { name: "all of 'quadspread/float'", code: "import * as q from 'quadspread/float';\nconsole.log(q);" },
+  { name: "all of 'quadspread/rational'", code: "import * as q from 'quadspread/rational';\nconsole.log(q);" },
+  { name: "all of 'quadspread/decimal'", code: "import * as q from 'quadspread/decimal';\nconsole.log(q);" },
+];
+
+const pkgDir = packageDir();
+checkBuilt(pkgDir);
+const work = mkdtempSync(join(tmpdir(), 'quadspread-size-'));
+mkdirSync(join(work, 'node_modules'), { recursive: true });
+symlinkSync(pkgDir, join(work, 'node_modules', 'quadspread'), 'dir');
+
+let failed = false;
+const rows = [];
+try {
+  for (const c of CASES) {
+    const entry = join(work, `case-${rows.length}.mjs`);
+    writeFileSync(entry, c.code);
+    const result = await build({
+      entryPoints: [entry],
+      bundle: true,
+      minify: true,
+      format: 'esm',
+      platform: 'browser',
+      target: 'es2022',
+      write: false,
+      legalComments: 'none',
+      nodePaths: [join(root, 'node_modules')],
+      logLevel: 'error',
+    });
+    const bytes = result.outputFiles[0].contents;
+    const gz = gzipSync(bytes).length;
+    const ok = c.budget === undefined || bytes.length < c.budget;
+    if (!ok) failed = true;
+    rows.push({ name: c.name, bytes: bytes.length, gz, budget: c.budget, ok });
+  }
+} finally {
+  rmSync(work, { recursive: true, force: true });
+  if (pkgDir !== root) rmSync(pkgDir, { recursive: true, force: true });
+}
+
+const kib = (n) => `${(n / KiB).toFixed(1)} KiB`;
+const width = Math.max(...rows.map((r) => r.name.length));
+console.log('size: esbuild --bundle --minify (ESM, browser), dependencies included');
+for (const r of rows) {
+  const budget = r.budget === undefined ? '' : `  budget < ${kib(r.budget)}: ${r.ok ? 'ok' : 'OVER'}`;
+  console.log(`  ${r.name.padEnd(width)}  ${kib(r.bytes).padStart(10)} (${kib(r.gz)} gzip)${budget}`);
+}
+if (failed) {
+  console.error('size: over budget');
+  process.exit(1);
+}
+console.log('size: within budget');
