@@ -12,29 +12,25 @@ export const APPROX_DIGITS = 50;
 
 /**
  * √x as a value of the arithmetic: `A.sqrt(x)` where it exists; in an exact arithmetic
- * where the root is irrational, a rational within 1e-48 relative (Newton's iteration from
- * the float root, rounded to {@link APPROX_DIGITS} significant digits). For x ≥ 0 only.
+ * where the root is irrational, a rational within 1e-48 relative: Newton's iteration from
+ * the float root on a rounded copy of x (kept to {@link APPROX_DIGITS} significant digits so
+ * denominators stay small), then one last step y ← (y + x/y)/2 on x itself, so that an
+ * arithmetic carrying derivatives (an uncertain one) gets d√x = dx/(2√x) to first order.
+ * For x ≥ 0 only.
  * @internal
  */
 export function approxSqrt<T>(A: Arithmetic<T>, x: T): T {
   const r = A.sqrt(x);
   if (r !== undefined) return r;
   // Newton's iteration for √x (Heron's method): y ← (y + x/y)/2, quadratic convergence.
-  let y = A.from(Math.sqrt(A.toNumber(x)));
+  const x0 = A.from(A.toPrecision(x, APPROX_DIGITS + 10));
+  let y = A.from(Math.sqrt(A.toNumber(x0)));
   if (A.isZero(y)) y = A.from('1e-300');
   const two = A.from(2);
   for (let i = 0; i < 3; i++) {
-    y = A.div(A.add(y, A.div(x, y)), two);
+    y = A.div(A.add(y, A.div(x0, y)), two);
     y = A.from(A.toPrecision(y, APPROX_DIGITS + 5));
   }
-  return A.from(A.toPrecision(y, APPROX_DIGITS));
-}
-
-/**
- * Rounds a value of an exact arithmetic to `digits` significant digits so that chains of
- * transcendental steps keep small denominators; other arithmetics are returned as is.
- * @internal
- */
-export function trim<T>(A: Arithmetic<T>, x: T, digits = APPROX_DIGITS): T {
-  return A.exact && !A.isZero(x) ? A.from(A.toPrecision(x, digits)) : x;
+  y = A.from(A.toPrecision(y, APPROX_DIGITS));
+  return A.div(A.add(y, A.div(x, y)), two);
 }

@@ -7,7 +7,7 @@ import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { angleToDegrees, type AngleUnit } from './angle.js';
 import { modulo, sinCosDegrees } from './trig.js';
-import { approxSqrt, trim } from './numeric.js';
+import { approxSqrt } from './numeric.js';
 
 /** @internal reads a spread and checks 0 ≤ s ≤ 1. */
 export function checkSpread<T>(A: Arithmetic<T>, s: Numeric<T>, where: string): T {
@@ -43,20 +43,22 @@ export function checkSpread<T>(A: Arithmetic<T>, s: Numeric<T>, where: string): 
  */
 export function spreadFromDegrees<T>(A: Arithmetic<T>, angle: Numeric<T>, unit: AngleUnit = 'deg'): T {
   const deg = angleToDegrees(A, angle, unit);
-  // 45°-type angles: sin² = cos² = 1/2 exactly (the isosceles right triangle).
-  if (A.eq(modulo(A, deg, A.from(90)), A.from(45))) return A.div(A.one, A.from(2));
-  const { sin, cos } = sinCosDegrees(A, deg);
-  const s2 = A.mul(sin, sin);
-  // 30°-type angles: sin or cos is exactly ±1/2, so the spread is 1/4 or 3/4 exactly.
-  const quarter = A.div(A.one, A.from(4));
-  if (A.eq(A.mul(cos, cos), quarter)) return A.sub(A.one, quarter);
-  return trim(A, s2);
+  // Multiples of 30° and 45°: s = (1 − cos 2θ)/2 (the double-angle formula) with cos 2θ exactly
+  // 0, ±1/2 or ±1, so s is exactly 0, 1/4, 1/2, 3/4 or 1 (and an arithmetic that carries
+  // derivatives keeps ds/dθ = sin 2θ·π/180). Elsewhere sin²θ, which has no cancellation near 0°.
+  if (A.isZero(modulo(A, deg, A.from(30))) || A.isZero(modulo(A, deg, A.from(45)))) {
+    return A.div(A.sub(A.one, sinCosDegrees(A, A.mul(deg, A.from(2))).cos), A.from(2));
+  }
+  const { sin } = sinCosDegrees(A, deg);
+  return A.mul(sin, sin);
 }
+
 
 /**
  * The angle in [0°, 90°] whose spread is s: θ = atan2(√s, √(1 − s)) in degrees.
  *
- * Exact for the spreads 0, 1/4, 1/2, 3/4 and 1 (0°, 30°, 45°, 60°, 90°); otherwise
+ * Exact for the spreads 0, 1/4, 1/2, 3/4 and 1 (0°, 30°, 45°, 60°, 90°; an arithmetic
+ * carrying derivatives keeps dθ/ds at 1/4, 1/2, 3/4); otherwise
  * through `A.atan2` and `A.pi`, so in `rational` a rational within 1e-40 relative. A
  * spread says nothing of a sign or of which of θ and 180° − θ: see
  * {@link VerticalReading} for readings that keep their sign.
@@ -74,10 +76,19 @@ export function spreadFromDegrees<T>(A: Arithmetic<T>, angle: Numeric<T>, unit: 
  */
 export function degreesFromSpread<T>(A: Arithmetic<T>, s: Numeric<T>): T {
   const v = checkSpread(A, s, 'degreesFromSpread(s)');
-  const exact: [string, number][] = [['0', 0], ['1/4', 30], ['1/2', 45], ['3/4', 60], ['1', 90]];
-  for (const [spread, deg] of exact) if (A.eq(v, A.from(spread))) return A.from(deg);
+  if (A.isZero(v)) return A.zero;
+  if (A.eq(v, A.one)) return A.from(90);
   const sin = approxSqrt(A, v);
   const cos = approxSqrt(A, A.sub(A.one, v));
+  const exact: [string, number][] = [['1/4', 30], ['1/2', 45], ['3/4', 60]];
+  for (const [spread, deg] of exact) {
+    const c = A.from(spread);
+    if (A.eq(v, c)) {
+      // the exact angle, plus (s − c)·dθ/ds (zero in value) so that derivatives carry through:
+      // dθ/ds = 1/(2 sin θ cos θ) rad = 90/(π sin θ cos θ) degrees
+      return A.add(A.from(deg), A.mul(A.sub(v, c), A.div(A.from(90), A.mul(A.pi, A.mul(sin, cos)))));
+    }
+  }
   const rad = A.atan2(sin, cos);
-  return trim(A, A.div(A.mul(rad, A.from(180)), A.pi)); // 180° = π rad
+  return A.div(A.mul(rad, A.from(180)), A.pi); // 180° = π rad
 }

@@ -22,15 +22,19 @@ export function modulo<T>(A: Arithmetic<T>, x: T, m: T): T {
  */
 function firstQuadrant<T>(A: Arithmetic<T>, t: T): { sin: T; cos: T } {
   const half = A.div(A.one, A.from(2));
-  if (A.isZero(t)) return { sin: A.zero, cos: A.one };
   const ninety = A.from(90);
-  if (A.eq(t, ninety)) return { sin: A.one, cos: A.zero };
-  const rad = (d: T): T => A.div(A.mul(d, A.pi), A.from(180)); // π rad = 180°
+  const perDegree = (): T => A.div(A.pi, A.from(180)); // π rad = 180°
+  // The exact cases add (θ − θ₀)·derivative, which is zero in value, so that an arithmetic
+  // carrying derivatives (uncertain) keeps them: d sin = cos·π/180 dθ, d cos = −sin·π/180 dθ.
+  if (A.isZero(t)) return { sin: A.mul(t, perDegree()), cos: A.one };
+  if (A.eq(t, ninety)) return { sin: A.one, cos: A.mul(A.sub(ninety, t), perDegree()) };
+  const rad = (d: T): T => A.mul(d, perDegree());
   const small = A.cmp(t, A.from(45)) <= 0;
   const u = small ? t : A.sub(ninety, t);
-  // sin 30° = 1/2 exactly (the 30-60-90 triangle); its cosine √3/2 is irrational.
-  const sinU = A.eq(u, A.from(30)) ? half : A.sin(rad(u));
   const cosU = A.cos(rad(u));
+  // sin 30° = 1/2 exactly (the 30-60-90 triangle); its cosine √3/2 is irrational.
+  const thirty = A.from(30);
+  const sinU = A.eq(u, thirty) ? A.add(half, A.mul(A.sub(u, thirty), A.mul(cosU, perDegree()))) : A.sin(rad(u));
   return small ? { sin: sinU, cos: cosU } : { sin: cosU, cos: sinU };
 }
 
