@@ -105,6 +105,13 @@ export function perimeter<T>(A: Arithmetic<T, boolean>, points: readonly PointIn
  * - `acre`: 43 560 ft² (10 square Gunter's chains of 66 ft), international foot.
  * - `us-acre`: 43 560 U.S. survey ft², for old records.
  * - `ha`: 10 000 m².
+ *
+ * @example
+ * ```ts
+ * import { AREA_UNITS } from 'quadspread';
+ * AREA_UNITS.acre;
+ * //=> '4046.8564224'
+ * ```
  */
 export const AREA_UNITS = {
   m2: '1',

@@ -24,6 +24,13 @@ export interface BearingIntersection<T> {
 /**
  * Smallest sine of the angle between the two bearings accepted by {@link intersectBearings}
  * in an inexact arithmetic: 1e-12 (about 2e-7″). Below it the rays are treated as parallel.
+ *
+ * @example
+ * ```ts
+ * import { BEARING_PARALLEL_TOLERANCE } from 'quadspread';
+ * BEARING_PARALLEL_TOLERANCE;
+ * //=> 1e-12
+ * ```
  */
 export const BEARING_PARALLEL_TOLERANCE = 1e-12;
 

@@ -20,6 +20,13 @@ import { readArray } from './internal.js';
  * Source: FGCC, *Standards and Specifications for Geodetic Control Networks* (1984). The
  * b values are as printed there; the c values (3, 4, 6, 8, 12 mm) are quoted **from memory —
  * check them against the standard before relying on them**.
+ *
+ * @example
+ * ```ts
+ * import { LEVELLING_ORDERS } from 'quadspread';
+ * LEVELLING_ORDERS.third;
+ * //=> { c: '12', b: '2.0' }
+ * ```
  */
 export const LEVELLING_ORDERS = {
   'first-I': { c: '3', b: '0.5' },

@@ -16,6 +16,13 @@ import type { PointInput } from './internal.js';
  * |Q(O, S) − R²| / R² is below 1/50, where O and R² are the centre and squared radius of
  * the circle through the control points and S is the station. That is a station within
  * about 1 % of the radius of the circle.
+ *
+ * @example
+ * ```ts
+ * import { DANGER_CIRCLE_TOLERANCE } from 'quadspread';
+ * DANGER_CIRCLE_TOLERANCE;
+ * //=> '1/50'
+ * ```
  */
 export const DANGER_CIRCLE_TOLERANCE = '1/50';
 
