@@ -7,7 +7,7 @@
 // measurements, taken after every arithmetic has been through the same generic functions.
 // Options: --quick, --json <file> (write the results), --only <workload>.
 import { existsSync, writeFileSync } from 'node:fs';
-import { fileURLToPath, pathToFileURL } from 'node:url';
+import { fileURLToPath } from 'node:url';
 import path from 'node:path';
 import os from 'node:os';
 import Fraction from 'fraction.js';
@@ -26,15 +26,16 @@ const onlyAt = args.indexOf('--only');
 const only = onlyAt >= 0 ? args[onlyAt + 1] : undefined;
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
-const dist = (f) => pathToFileURL(path.join(root, 'dist', f)).href;
-if (!existsSync(path.join(root, 'dist', 'index.js'))) {
+// The built package, loaded by its own name through package.json "exports" (a package may
+// import itself), exactly as an integrator's ESM code would: quadspread, quadspread/float, ….
+if (!existsSync(path.join(root, 'dist'))) {
   console.error('bench: dist/ is missing: run `npm run build` first');
   process.exit(2);
 }
-const g = await import(dist('index.js'));
-const F = await import(dist('float.js'));
-const R = await import(dist('rational.js'));
-const D = await import(dist('decimal.js'));
+const g = await import('quadspread');
+const F = await import('quadspread/float');
+const R = await import('quadspread/rational');
+const D = await import('quadspread/decimal');
 // Plain big.js as a user would set it up: division to 34 decimal places, ties to even.
 const Big = BigJs();
 Big.DP = 34;
@@ -110,12 +111,14 @@ const hf = pick(headline.float), hr = pick(headline.fraction), hb = pick(headlin
 console.log(`ratio float-vs-hand ${hf?.toFixed(2) ?? 'n/a'}`);
 console.log(`ratio naive-fraction-vs-rational ${hr?.toFixed(2) ?? 'n/a'}`);
 console.log(`ratio naive-big-vs-decimal ${hb?.toFixed(2) ?? 'n/a'}`);
+const worstOf = (list, f) => (list.length ? list.reduce((a, r) => (f(r.ratio, a.ratio) ? r : a)) : undefined);
 const worst = {
-  float: Math.max(...headline.float.map((r) => r.ratio)),
-  fraction: Math.min(...headline.fraction.map((r) => r.ratio)),
-  big: Math.min(...headline.big.map((r) => r.ratio)),
+  float: worstOf(headline.float, (x, y) => x > y),
+  fraction: worstOf(headline.fraction, (x, y) => x < y),
+  big: worstOf(headline.big, (x, y) => x < y),
 };
-console.log(`worst over workloads: float-vs-hand ${worst.float.toFixed(2)}, naive-fraction-vs-rational ${worst.fraction.toFixed(2)}, naive-big-vs-decimal ${worst.big.toFixed(2)}`);
+const w = (r) => (r ? `${r.ratio.toFixed(2)} (${r.workload})` : 'n/a');
+console.log(`worst over workloads: float-vs-hand ${w(worst.float)}, naive-fraction-vs-rational ${w(worst.fraction)}, naive-big-vs-decimal ${w(worst.big)}`);
 console.log(`elapsed ${((Date.now() - t0) / 1000).toFixed(1)} s (checksum ${keep() % 10})`);
 if (jsonFile) {
   writeFileSync(jsonFile, JSON.stringify({ quick, node: process.version, cpus: os.cpus().length, cpu: os.cpus()[0]?.model, settings, rows, growth, headline: { floatVsHand: hf, naiveFractionVsRational: hr, naiveBigVsDecimal: hb }, worst }, null, 2));
