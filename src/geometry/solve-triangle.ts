@@ -15,8 +15,6 @@ export type TriangleMeasures<V> = Partial<Record<'Q1' | 'Q2' | 'Q3' | 's1' | 's2
 /** The operations the solver needs, over plain values (inexact) or surds (exact). */
 interface Field<T, R> {
   lift(x: T): R;
-  /** p + q√d, d ≥ 0 */
-  root(p: T, q: T, d: T): R;
   add(x: R, y: R): R;
   sub(x: R, y: R): R;
   mul(x: R, y: R): R;
@@ -24,35 +22,47 @@ interface Field<T, R> {
   sign(x: R): -1 | 0 | 1;
   /** A computed spread: as is when exact; clamped to at most 1 when rounded. */
   unit(x: R): R;
+  /**
+   * The two roots base ∓ 2√d (d > 0), ascending, whose product is `prod`. Rounded arithmetic
+   * takes the root without cancellation and the other as prod/root (Press et al.,
+   * Numerical Recipes, 3rd ed., 2007, §5.6), so thin triangles keep their relative precision.
+   */
+  pair(base: T, d: T, prod: T): [R, R];
 }
 
 function surdField<T>(A: Arithmetic<T>): Field<T, Surd<T>> {
   return {
     lift: (x) => surd(A, x),
-    root: (p, q, d) => surd(A, p, q, d),
     add: (x, y) => x.add(y),
     sub: (x, y) => x.sub(y),
     mul: (x, y) => x.mul(y),
     div: (x, y) => x.div(y),
     sign: (x) => x.sign(),
     unit: (x) => x,
+    pair: (base, d, _prod) => [surd(A, base, -2, d), surd(A, base, 2, d)],
   };
 }
 
 function valueField<T>(A: Arithmetic<T>): Field<T, T> {
   return {
     lift: (x) => x,
-    root(p, q, d) {
-      const r = A.sqrt(d);
-      if (r === undefined) throw new QuadspreadError('UNSUPPORTED_OPERATION', 'solveTriangle(A, known)', `${A.name} has no square root of ${show(A.toString(d))}`);
-      return A.add(p, A.mul(q, r));
-    },
     add: A.add,
     sub: A.sub,
     mul: A.mul,
     div: A.div,
     sign: A.sign,
     unit: (x) => (A.cmp(x, A.one) > 0 ? A.one : x),
+    pair(base, d, prod) {
+      const r = A.sqrt(d);
+      if (r === undefined) throw new QuadspreadError('UNSUPPORTED_OPERATION', 'solveTriangle(A, known)', `${A.name} has no square root of ${show(A.toString(d))}`);
+      const r2 = A.add(r, r);
+      if (A.sign(base) >= 0) {
+        const hi = A.add(base, r2);
+        return [A.div(prod, hi), hi];
+      }
+      const lo = A.sub(base, r2);
+      return [lo, A.div(prod, lo)];
+    },
   };
 }
 
@@ -151,9 +161,10 @@ function solve<T, R>(A: Arithmetic<T>, F: Field<T, R>, Q: (T | undefined)[], s: 
       const d = A.mul(A.mul(Qi, Qj), A.sub(A.one, sk));
       const base = A.add(Qi, Qj);
       const quadrea = F.lift(A.mul(four, A.mul(A.mul(Qi, Qj), sk)));
-      const signs = A.isZero(d) ? [A.zero] : [A.neg(two), two];
-      for (const m of signs) {
-        const Qk = F.root(base, m, d);
+      // The product of the two roots is (Qi − Qj)² + 4 Qi Qj sk (derived).
+      const dq = A.sub(Qi, Qj);
+      const candidates = A.isZero(d) ? [F.lift(base)] : F.pair(base, d, A.add(A.mul(dq, dq), A.mul(four, A.mul(A.mul(Qi, Qj), sk))));
+      for (const Qk of candidates) {
         if (F.sign(Qk) <= 0) continue;
         // Spread law si/Qi = sk/Qk: Wildberger, Divine Proportions (2005), ch. 6.
         const skR = F.lift(sk);
@@ -180,9 +191,10 @@ function solve<T, R>(A: Arithmetic<T>, F: Field<T, R>, Q: (T | undefined)[], s: 
     if (A.sign(d) < 0) return [];
     const base = A.sub(A.add(Qa, Qb), A.mul(two, A.mul(Qb, sa)));
     const sb = A.div(A.mul(sa, Qb), Qa); // spread law
-    const signs = A.isZero(d) ? [A.zero] : [A.neg(two), two];
-    for (const m of signs) {
-      const Qk = F.root(base, m, d);
+    // The product of the two roots is (Qb − Qa)² (the constant term; derived).
+    const dq = A.sub(Qb, Qa);
+    const candidates = A.isZero(d) ? [F.lift(base)] : F.pair(base, d, A.mul(dq, dq));
+    for (const Qk of candidates) {
       if (F.sign(Qk) <= 0) continue;
       const saR = F.lift(sa);
       const sk = F.unit(F.div(F.mul(saR, Qk), F.lift(Qa))); // spread law sk/Qk = sa/Qa
@@ -207,11 +219,12 @@ function solve<T, R>(A: Arithmetic<T>, F: Field<T, R>, Q: (T | undefined)[], s: 
   // Wildberger, Divine Proportions (2005), ch. 6 (solution derived).
   const d = A.mul(A.mul(sa, sb), A.mul(A.sub(A.one, sa), A.sub(A.one, sb)));
   const base = A.sub(A.add(sa, sb), A.mul(two, A.mul(sa, sb)));
-  const signs = A.isZero(d) ? [A.zero] : [A.neg(two), two];
+  // The product of the two roots is (sa − sb)² (the constant term; derived).
+  const ds = A.sub(sa, sb);
+  const candidates = A.isZero(d) ? [F.lift(base)] : F.pair(base, d, A.mul(ds, ds));
   const Qi = F.lift(Q[i]!);
   const out: Triangle<R>[] = [];
-  for (const m of signs) {
-    const sc = F.root(base, m, d);
+  for (const sc of candidates) {
     if (F.sign(sc) <= 0) continue;
     const p: R[] = [];
     p[a] = F.lift(sa); p[b] = F.lift(sb); p[c] = F.unit(sc);

@@ -142,6 +142,18 @@ describe('solveTriangle(float, …) agrees with classical trigonometry (Math.sin
       sols.forEach((s, i) => expect(rel(s.Q3, uniq[i]!)).toBeLessThan(1e-8));
     }));
   });
+  it('thin triangles keep their relative precision: Q1 = Q2 = 1, s3 = 1e-12 gives Q3 = 4·sin²(θ/2)', () => {
+    // θ = asin(1e-6); the small root is taken as product/(large root), free of cancellation.
+    const theta = Math.asin(1e-6);
+    const sols = solveTriangle(float, { Q1: 1, Q2: 1, s3: 1e-12 });
+    expect(sols.length).toBe(2);
+    expect(rel(sols[0]!.Q3 / (4 * Math.sin(theta / 2) ** 2), 1)).toBeLessThan(1e-9);
+    expect(rel(sols[1]!.Q3, 4 * Math.cos(theta / 2) ** 2)).toBeLessThan(1e-12);
+    // one side and two spreads: s1 = s2 nearly, so the small third spread is sin²(θ1 − θ2)
+    const [t1, t2] = [deg(30), deg(30) + 1e-7];
+    const [small] = solveTriangle(float, { Q1: 1, s1: Math.sin(t1) ** 2, s2: Math.sin(t2) ** 2 });
+    expect(rel(small!.s3 / Math.sin(t2 - t1) ** 2, 1)).toBeLessThan(1e-6);
+  });
   it('three quadrances: spreads equal sin² of the angles from the law of cosines', () => {
     const sols = solveTriangle(float, { Q1: 49, Q2: 64, Q3: 81 });
     const angle = (a: number, b: number, c: number) => Math.acos((b * b + c * c - a * a) / (2 * b * c));
