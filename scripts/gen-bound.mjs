@@ -240,10 +240,12 @@ function render(entry, { bound, values, typesOnly }) {
   for (const b of bound) {
     const params = b.params.map((p, i) => (p.dotDotDotToken ? '...' : '') + paramName(p, i + 1));
     const call = [A, ...b.params.map((p, i) => (p.dotDotDotToken ? '...' : '') + paramName(p, i + 1))].join(', ');
-    const type = b.loose ? `Bound<typeof g.${b.name}>` : `Bound<typeof g.${b.name}<${b.typeArgs.map((t) => (t === 'VALUE' ? 'Value' : entry.exact)).join(', ')}>>`;
+    // The same type arguments in the call, so that inference cannot widen T from the inputs.
+    const targs = b.loose ? '' : `<${b.typeArgs.map((t) => (t === 'VALUE' ? 'Value' : entry.exact)).join(', ')}>`;
+    const type = `Bound<typeof g.${b.name}${targs}>`;
     L.push('');
     L.push(`/** {@link g.${b.name} | ${b.name}} with the arithmetic fixed to \`${entry.kind}\`: the same arguments after the arithmetic. */`);
-    L.push(`export const ${b.name}: ${type} = (${params.join(', ')}) => g.${b.name}(${call});`);
+    L.push(`export const ${b.name}: ${type} = (${params.join(', ')}) => g.${b.name}${targs}(${call});`);
   }
   if (values.length > 0) {
     L.push('');

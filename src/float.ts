@@ -28,274 +28,274 @@ type Bound<F> = F extends (A: never, ...rest: infer P) => infer R ? (...rest: P)
 export const arithmetic: FloatArithmetic = float;
 
 /** {@link g.allowableMisclosure | allowableMisclosure} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const allowableMisclosure: Bound<typeof g.allowableMisclosure<Value, false>> = (order, km) => g.allowableMisclosure(arithmetic, order, km);
+export const allowableMisclosure: Bound<typeof g.allowableMisclosure<Value, false>> = (order, km) => g.allowableMisclosure<Value, false>(arithmetic, order, km);
 
 /** {@link g.angleToDegrees | angleToDegrees} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const angleToDegrees: Bound<typeof g.angleToDegrees<Value>> = (reading, unit) => g.angleToDegrees(arithmetic, reading, unit);
+export const angleToDegrees: Bound<typeof g.angleToDegrees<Value>> = (reading, unit) => g.angleToDegrees<Value>(arithmetic, reading, unit);
 
 /** {@link g.angularMisclosure | angularMisclosure} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const angularMisclosure: Bound<typeof g.angularMisclosure<Value>> = (angles) => g.angularMisclosure(arithmetic, angles);
+export const angularMisclosure: Bound<typeof g.angularMisclosure<Value>> = (angles) => g.angularMisclosure<Value>(arithmetic, angles);
 
 /** {@link g.archimedesResidual | archimedesResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const archimedesResidual: Bound<typeof g.archimedesResidual<Value>> = (Q1, Q2, Q3, area) => g.archimedesResidual(arithmetic, Q1, Q2, Q3, area);
+export const archimedesResidual: Bound<typeof g.archimedesResidual<Value>> = (Q1, Q2, Q3, area) => g.archimedesResidual<Value>(arithmetic, Q1, Q2, Q3, area);
 
 /** {@link g.area | area} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const area: Bound<typeof g.area<Value>> = (points) => g.area(arithmetic, points);
+export const area: Bound<typeof g.area<Value>> = (points) => g.area<Value>(arithmetic, points);
 
 /** {@link g.asRoot | asRoot} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const asRoot: Bound<typeof g.asRoot<Value, false>> = (x) => g.asRoot(arithmetic, x);
+export const asRoot: Bound<typeof g.asRoot<Value, false>> = (x) => g.asRoot<Value, false>(arithmetic, x);
 
 /** {@link g.azimuthToQuadrant | azimuthToQuadrant} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const azimuthToQuadrant: Bound<typeof g.azimuthToQuadrant<Value>> = (azimuth, secondsDecimals) => g.azimuthToQuadrant(arithmetic, azimuth, secondsDecimals);
+export const azimuthToQuadrant: Bound<typeof g.azimuthToQuadrant<Value>> = (azimuth, secondsDecimals) => g.azimuthToQuadrant<Value>(arithmetic, azimuth, secondsDecimals);
 
 /** {@link g.bearingToAzimuth | bearingToAzimuth} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const bearingToAzimuth: Bound<typeof g.bearingToAzimuth<Value>> = (bearing) => g.bearingToAzimuth(arithmetic, bearing);
+export const bearingToAzimuth: Bound<typeof g.bearingToAzimuth<Value>> = (bearing) => g.bearingToAzimuth<Value>(arithmetic, bearing);
 
 /** {@link g.convertArea | convertArea} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const convertArea: Bound<typeof g.convertArea<Value>> = (value, from, to) => g.convertArea(arithmetic, value, from, to);
+export const convertArea: Bound<typeof g.convertArea<Value>> = (value, from, to) => g.convertArea<Value>(arithmetic, value, from, to);
 
 /** {@link g.convertLength | convertLength} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const convertLength: Bound<typeof g.convertLength<Value>> = (value, from, to) => g.convertLength(arithmetic, value, from, to);
+export const convertLength: Bound<typeof g.convertLength<Value>> = (value, from, to) => g.convertLength<Value>(arithmetic, value, from, to);
 
 /** {@link g.convertQuadrance | convertQuadrance} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const convertQuadrance: Bound<typeof g.convertQuadrance<Value>> = (quadrance, from, to) => g.convertQuadrance(arithmetic, quadrance, from, to);
+export const convertQuadrance: Bound<typeof g.convertQuadrance<Value>> = (quadrance, from, to) => g.convertQuadrance<Value>(arithmetic, quadrance, from, to);
 
 /** {@link g.cross | cross} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const cross: Bound<typeof g.cross<Value>> = (V, P, Q) => g.cross(arithmetic, V, P, Q);
+export const cross: Bound<typeof g.cross<Value>> = (V, P, Q) => g.cross<Value>(arithmetic, V, P, Q);
 
 /** {@link g.crossLawResidual | crossLawResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const crossLawResidual: Bound<typeof g.crossLawResidual<Value>> = (Q1, Q2, Q3, s3) => g.crossLawResidual(arithmetic, Q1, Q2, Q3, s3);
+export const crossLawResidual: Bound<typeof g.crossLawResidual<Value>> = (Q1, Q2, Q3, s3) => g.crossLawResidual<Value>(arithmetic, Q1, Q2, Q3, s3);
 
 /** {@link g.curvatureRefraction | curvatureRefraction} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const curvatureRefraction: Bound<typeof g.curvatureRefraction<Value>> = (distance, options) => g.curvatureRefraction(arithmetic, distance, options);
+export const curvatureRefraction: Bound<typeof g.curvatureRefraction<Value>> = (distance, options) => g.curvatureRefraction<Value>(arithmetic, distance, options);
 
 /** {@link g.degreesFromSpread | degreesFromSpread} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const degreesFromSpread: Bound<typeof g.degreesFromSpread<Value>> = (s) => g.degreesFromSpread(arithmetic, s);
+export const degreesFromSpread: Bound<typeof g.degreesFromSpread<Value>> = (s) => g.degreesFromSpread<Value>(arithmetic, s);
 
 /** {@link g.degreesToUnit | degreesToUnit} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const degreesToUnit: Bound<typeof g.degreesToUnit<Value>> = (degrees, unit) => g.degreesToUnit(arithmetic, degrees, unit);
+export const degreesToUnit: Bound<typeof g.degreesToUnit<Value>> = (degrees, unit) => g.degreesToUnit<Value>(arithmetic, degrees, unit);
 
 /** {@link g.elevationFromVertical | elevationFromVertical} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const elevationFromVertical: Bound<typeof g.elevationFromVertical<Value>> = (reading) => g.elevationFromVertical(arithmetic, reading);
+export const elevationFromVertical: Bound<typeof g.elevationFromVertical<Value>> = (reading) => g.elevationFromVertical<Value>(arithmetic, reading);
 
 /** {@link g.ellipsoidParameters | ellipsoidParameters} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const ellipsoidParameters: Bound<typeof g.ellipsoidParameters<Value>> = (ellipsoid) => g.ellipsoidParameters(arithmetic, ellipsoid);
+export const ellipsoidParameters: Bound<typeof g.ellipsoidParameters<Value>> = (ellipsoid) => g.ellipsoidParameters<Value>(arithmetic, ellipsoid);
 
 /** {@link g.footOfPerpendicular | footOfPerpendicular} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const footOfPerpendicular: Bound<typeof g.footOfPerpendicular<Value>> = (P, l) => g.footOfPerpendicular(arithmetic, P, l);
+export const footOfPerpendicular: Bound<typeof g.footOfPerpendicular<Value>> = (P, l) => g.footOfPerpendicular<Value>(arithmetic, P, l);
 
 /** {@link g.formatDms | formatDms} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const formatDms: Bound<typeof g.formatDms<Value>> = (degrees, secondsDecimals) => g.formatDms(arithmetic, degrees, secondsDecimals);
+export const formatDms: Bound<typeof g.formatDms<Value>> = (degrees, secondsDecimals) => g.formatDms<Value>(arithmetic, degrees, secondsDecimals);
 
 /** {@link g.forward | forward} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const forward: Bound<typeof g.forward<Value>> = (P, bearing, distance) => g.forward(arithmetic, P, bearing, distance);
+export const forward: Bound<typeof g.forward<Value>> = (P, bearing, distance) => g.forward<Value>(arithmetic, P, bearing, distance);
 
 /** {@link g.geocentricToGeodetic | geocentricToGeodetic} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const geocentricToGeodetic: Bound<typeof g.geocentricToGeodetic<Value>> = (point, ellipsoid) => g.geocentricToGeodetic(arithmetic, point, ellipsoid);
+export const geocentricToGeodetic: Bound<typeof g.geocentricToGeodetic<Value>> = (point, ellipsoid) => g.geocentricToGeodetic<Value>(arithmetic, point, ellipsoid);
 
 /** {@link g.geodeticToGeocentric | geodeticToGeocentric} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const geodeticToGeocentric: Bound<typeof g.geodeticToGeocentric<Value>> = (point, ellipsoid) => g.geodeticToGeocentric(arithmetic, point, ellipsoid);
+export const geodeticToGeocentric: Bound<typeof g.geodeticToGeocentric<Value>> = (point, ellipsoid) => g.geodeticToGeocentric<Value>(arithmetic, point, ellipsoid);
 
 /** {@link g.gradeFromSpread | gradeFromSpread} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const gradeFromSpread: Bound<typeof g.gradeFromSpread<Value, false>> = (s) => g.gradeFromSpread(arithmetic, s);
+export const gradeFromSpread: Bound<typeof g.gradeFromSpread<Value, false>> = (s) => g.gradeFromSpread<Value, false>(arithmetic, s);
 
 /** {@link g.gradeSquaredFromSpread | gradeSquaredFromSpread} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const gradeSquaredFromSpread: Bound<typeof g.gradeSquaredFromSpread<Value>> = (s) => g.gradeSquaredFromSpread(arithmetic, s);
+export const gradeSquaredFromSpread: Bound<typeof g.gradeSquaredFromSpread<Value>> = (s) => g.gradeSquaredFromSpread<Value>(arithmetic, s);
 
 /** {@link g.heightFromBase | heightFromBase} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const heightFromBase: Bound<typeof g.heightFromBase<Value, false>> = (input) => g.heightFromBase(arithmetic, input);
+export const heightFromBase: Bound<typeof g.heightFromBase<Value, false>> = (input) => g.heightFromBase<Value, false>(arithmetic, input);
 
 /** {@link g.heightFromInlineQuadrances | heightFromInlineQuadrances} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const heightFromInlineQuadrances: Bound<typeof g.heightFromInlineQuadrances<Value, false>> = (input) => g.heightFromInlineQuadrances(arithmetic, input);
+export const heightFromInlineQuadrances: Bound<typeof g.heightFromInlineQuadrances<Value, false>> = (input) => g.heightFromInlineQuadrances<Value, false>(arithmetic, input);
 
 /** {@link g.heightFromInlineReadings | heightFromInlineReadings} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const heightFromInlineReadings: Bound<typeof g.heightFromInlineReadings<Value>> = (input) => g.heightFromInlineReadings(arithmetic, input);
+export const heightFromInlineReadings: Bound<typeof g.heightFromInlineReadings<Value>> = (input) => g.heightFromInlineReadings<Value>(arithmetic, input);
 
 /** {@link g.heightFromReading | heightFromReading} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const heightFromReading: Bound<typeof g.heightFromReading<Value>> = (input) => g.heightFromReading(arithmetic, input);
+export const heightFromReading: Bound<typeof g.heightFromReading<Value>> = (input) => g.heightFromReading<Value>(arithmetic, input);
 
 /** {@link g.heightFromTwoStations | heightFromTwoStations} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const heightFromTwoStations: Bound<typeof g.heightFromTwoStations<Value>> = (input) => g.heightFromTwoStations(arithmetic, input);
+export const heightFromTwoStations: Bound<typeof g.heightFromTwoStations<Value>> = (input) => g.heightFromTwoStations<Value>(arithmetic, input);
 
 /** {@link g.horizontalFromHeight | horizontalFromHeight} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const horizontalFromHeight: Bound<typeof g.horizontalFromHeight<Value>> = (input) => g.horizontalFromHeight(arithmetic, input);
+export const horizontalFromHeight: Bound<typeof g.horizontalFromHeight<Value>> = (input) => g.horizontalFromHeight<Value>(arithmetic, input);
 
 /** {@link g.intersectBearings | intersectBearings} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const intersectBearings: Bound<typeof g.intersectBearings<Value>> = (P, bearingP, Q, bearingQ) => g.intersectBearings(arithmetic, P, bearingP, Q, bearingQ);
+export const intersectBearings: Bound<typeof g.intersectBearings<Value>> = (P, bearingP, Q, bearingQ) => g.intersectBearings<Value>(arithmetic, P, bearingP, Q, bearingQ);
 
 /** {@link g.intersectCircles | intersectCircles} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const intersectCircles: Bound<typeof g.intersectCircles<Value, false>> = (circle1, circle2) => g.intersectCircles(arithmetic, circle1, circle2);
+export const intersectCircles: Bound<typeof g.intersectCircles<Value, false>> = (circle1, circle2) => g.intersectCircles<Value, false>(arithmetic, circle1, circle2);
 
 /** {@link g.intersectLineCircle | intersectLineCircle} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const intersectLineCircle: Bound<typeof g.intersectLineCircle<Value, false>> = (P1, P2, circle) => g.intersectLineCircle(arithmetic, P1, P2, circle);
+export const intersectLineCircle: Bound<typeof g.intersectLineCircle<Value, false>> = (P1, P2, circle) => g.intersectLineCircle<Value, false>(arithmetic, P1, P2, circle);
 
 /** {@link g.intersectLines | intersectLines} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const intersectLines: Bound<typeof g.intersectLines<Value>> = (P1, P2, P3, P4) => g.intersectLines(arithmetic, P1, P2, P3, P4);
+export const intersectLines: Bound<typeof g.intersectLines<Value>> = (P1, P2, P3, P4) => g.intersectLines<Value>(arithmetic, P1, P2, P3, P4);
 
 /** {@link g.inverse | inverse} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const inverse: Bound<typeof g.inverse<Value, false>> = (P, Q, options) => g.inverse(arithmetic, P, Q, options);
+export const inverse: Bound<typeof g.inverse<Value, false>> = (P, Q, options) => g.inverse<Value, false>(arithmetic, P, Q, options);
 
 /** {@link g.isOnLine | isOnLine} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const isOnLine: Bound<typeof g.isOnLine<Value>> = (P, l) => g.isOnLine(arithmetic, P, l);
+export const isOnLine: Bound<typeof g.isOnLine<Value>> = (P, l) => g.isOnLine<Value>(arithmetic, P, l);
 
 /** {@link g.isParallel | isParallel} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const isParallel: Bound<typeof g.isParallel<Value>> = (l1, l2) => g.isParallel(arithmetic, l1, l2);
+export const isParallel: Bound<typeof g.isParallel<Value>> = (l1, l2) => g.isParallel<Value>(arithmetic, l1, l2);
 
 /** {@link g.isPerpendicular | isPerpendicular} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const isPerpendicular: Bound<typeof g.isPerpendicular<Value>> = (l1, l2) => g.isPerpendicular(arithmetic, l1, l2);
+export const isPerpendicular: Bound<typeof g.isPerpendicular<Value>> = (l1, l2) => g.isPerpendicular<Value>(arithmetic, l1, l2);
 
 /** {@link g.lengthToMetres | lengthToMetres} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const lengthToMetres: Bound<typeof g.lengthToMetres<Value>> = (value, unit) => g.lengthToMetres(arithmetic, value, unit);
+export const lengthToMetres: Bound<typeof g.lengthToMetres<Value>> = (value, unit) => g.lengthToMetres<Value>(arithmetic, value, unit);
 
 /** {@link g.levelRun | levelRun} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const levelRun: Bound<typeof g.levelRun<Value, false>> = (input) => g.levelRun(arithmetic, input);
+export const levelRun: Bound<typeof g.levelRun<Value, false>> = (input) => g.levelRun<Value, false>(arithmetic, input);
 
 /** {@link g.line | line} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const line: Bound<typeof g.line<Value>> = (a, b, c) => g.line(arithmetic, a, b, c);
+export const line: Bound<typeof g.line<Value>> = (a, b, c) => g.line<Value>(arithmetic, a, b, c);
 
 /** {@link g.lineThrough | lineThrough} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const lineThrough: Bound<typeof g.lineThrough<Value>> = (P, Q) => g.lineThrough(arithmetic, P, Q);
+export const lineThrough: Bound<typeof g.lineThrough<Value>> = (P, Q) => g.lineThrough<Value>(arithmetic, P, Q);
 
 /** {@link g.metresToLength | metresToLength} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const metresToLength: Bound<typeof g.metresToLength<Value>> = (metres, unit) => g.metresToLength(arithmetic, metres, unit);
+export const metresToLength: Bound<typeof g.metresToLength<Value>> = (metres, unit) => g.metresToLength<Value>(arithmetic, metres, unit);
 
 /** {@link g.pathGrade | pathGrade} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const pathGrade: Bound<typeof g.pathGrade<Value>> = (input) => g.pathGrade(arithmetic, input);
+export const pathGrade: Bound<typeof g.pathGrade<Value>> = (input) => g.pathGrade<Value>(arithmetic, input);
 
 /** {@link g.pathOffset | pathOffset} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const pathOffset: Bound<typeof g.pathOffset<Value>> = (input) => g.pathOffset(arithmetic, input);
+export const pathOffset: Bound<typeof g.pathOffset<Value>> = (input) => g.pathOffset<Value>(arithmetic, input);
 
 /** {@link g.perimeter | perimeter} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const perimeter: Bound<typeof g.perimeter<Value>> = (points) => g.perimeter(arithmetic, points);
+export const perimeter: Bound<typeof g.perimeter<Value>> = (points) => g.perimeter<Value>(arithmetic, points);
 
 /** {@link g.point | point} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const point: Bound<typeof g.point<Value>> = (x, y) => g.point(arithmetic, x, y);
+export const point: Bound<typeof g.point<Value>> = (x, y) => g.point<Value>(arithmetic, x, y);
 
 /** {@link g.polygonArea | polygonArea} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const polygonArea: Bound<typeof g.polygonArea<Value>> = (points, options) => g.polygonArea(arithmetic, points, options);
+export const polygonArea: Bound<typeof g.polygonArea<Value>> = (points, options) => g.polygonArea<Value>(arithmetic, points, options);
 
 /** {@link g.pythagorasResidual | pythagorasResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const pythagorasResidual: Bound<typeof g.pythagorasResidual<Value>> = (Q1, Q2, Q3) => g.pythagorasResidual(arithmetic, Q1, Q2, Q3);
+export const pythagorasResidual: Bound<typeof g.pythagorasResidual<Value>> = (Q1, Q2, Q3) => g.pythagorasResidual<Value>(arithmetic, Q1, Q2, Q3);
 
 /** {@link g.quadrance | quadrance} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const quadrance: Bound<typeof g.quadrance<Value>> = (P, Q) => g.quadrance(arithmetic, P, Q);
+export const quadrance: Bound<typeof g.quadrance<Value>> = (P, Q) => g.quadrance<Value>(arithmetic, P, Q);
 
 /** {@link g.quadranceToLine | quadranceToLine} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const quadranceToLine: Bound<typeof g.quadranceToLine<Value>> = (P, l) => g.quadranceToLine(arithmetic, P, l);
+export const quadranceToLine: Bound<typeof g.quadranceToLine<Value>> = (P, l) => g.quadranceToLine<Value>(arithmetic, P, l);
 
 /** {@link g.quadrea | quadrea} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const quadrea: Bound<typeof g.quadrea<Value>> = (Q1, Q2, Q3) => g.quadrea(arithmetic, Q1, Q2, Q3);
+export const quadrea: Bound<typeof g.quadrea<Value>> = (Q1, Q2, Q3) => g.quadrea<Value>(arithmetic, Q1, Q2, Q3);
 
 /** {@link g.reciprocalTrigHeight | reciprocalTrigHeight} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const reciprocalTrigHeight: Bound<typeof g.reciprocalTrigHeight<Value, false>> = (input) => g.reciprocalTrigHeight(arithmetic, input);
+export const reciprocalTrigHeight: Bound<typeof g.reciprocalTrigHeight<Value, false>> = (input) => g.reciprocalTrigHeight<Value, false>(arithmetic, input);
 
 /** {@link g.resection | resection} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const resection: Bound<typeof g.resection<Value>> = (input) => g.resection(arithmetic, input);
+export const resection: Bound<typeof g.resection<Value>> = (input) => g.resection<Value>(arithmetic, input);
 
 /** {@link g.rootToNumber | rootToNumber} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const rootToNumber: Bound<typeof g.rootToNumber<Value, false>> = (r) => g.rootToNumber(arithmetic, r);
+export const rootToNumber: Bound<typeof g.rootToNumber<Value, false>> = (r) => g.rootToNumber<Value, false>(arithmetic, r);
 
 /** {@link g.rootToPrecision | rootToPrecision} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const rootToPrecision: Bound<typeof g.rootToPrecision<Value, false>> = (r, digits) => g.rootToPrecision(arithmetic, r, digits);
+export const rootToPrecision: Bound<typeof g.rootToPrecision<Value, false>> = (r, digits) => g.rootToPrecision<Value, false>(arithmetic, r, digits);
 
 /** {@link g.rootToString | rootToString} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const rootToString: Bound<typeof g.rootToString<Value, false>> = (r) => g.rootToString(arithmetic, r);
+export const rootToString: Bound<typeof g.rootToString<Value, false>> = (r) => g.rootToString<Value, false>(arithmetic, r);
 
 /** {@link g.sinCosDegrees | sinCosDegrees} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const sinCosDegrees: Bound<typeof g.sinCosDegrees<Value>> = (degrees) => g.sinCosDegrees(arithmetic, degrees);
+export const sinCosDegrees: Bound<typeof g.sinCosDegrees<Value>> = (degrees) => g.sinCosDegrees<Value>(arithmetic, degrees);
 
 /** {@link g.solveQuadratic | solveQuadratic} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const solveQuadratic: Bound<typeof g.solveQuadratic<Value, false>> = (a, b, c) => g.solveQuadratic(arithmetic, a, b, c);
+export const solveQuadratic: Bound<typeof g.solveQuadratic<Value, false>> = (a, b, c) => g.solveQuadratic<Value, false>(arithmetic, a, b, c);
 
 /** {@link g.solveStewart | solveStewart} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const solveStewart: Bound<typeof g.solveStewart<Value, false>> = (data) => g.solveStewart(arithmetic, data);
+export const solveStewart: Bound<typeof g.solveStewart<Value, false>> = (data) => g.solveStewart<Value, false>(arithmetic, data);
 
 /** {@link g.solveStewartQuadrances | solveStewartQuadrances} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const solveStewartQuadrances: Bound<typeof g.solveStewartQuadrances<Value, false>> = (data) => g.solveStewartQuadrances(arithmetic, data);
+export const solveStewartQuadrances: Bound<typeof g.solveStewartQuadrances<Value, false>> = (data) => g.solveStewartQuadrances<Value, false>(arithmetic, data);
 
 /** {@link g.solveTriangle | solveTriangle} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const solveTriangle: Bound<typeof g.solveTriangle<Value, false>> = (known) => g.solveTriangle(arithmetic, known);
+export const solveTriangle: Bound<typeof g.solveTriangle<Value, false>> = (known) => g.solveTriangle<Value, false>(arithmetic, known);
 
 /** {@link g.spread | spread} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const spread: Bound<typeof g.spread<Value>> = (V, P, Q) => g.spread(arithmetic, V, P, Q);
+export const spread: Bound<typeof g.spread<Value>> = (V, P, Q) => g.spread<Value>(arithmetic, V, P, Q);
 
 /** {@link g.spreadFromDegrees | spreadFromDegrees} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const spreadFromDegrees: Bound<typeof g.spreadFromDegrees<Value>> = (angle, unit) => g.spreadFromDegrees(arithmetic, angle, unit);
+export const spreadFromDegrees: Bound<typeof g.spreadFromDegrees<Value>> = (angle, unit) => g.spreadFromDegrees<Value>(arithmetic, angle, unit);
 
 /** {@link g.spreadFromGrade | spreadFromGrade} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const spreadFromGrade: Bound<typeof g.spreadFromGrade<Value>> = (percent) => g.spreadFromGrade(arithmetic, percent);
+export const spreadFromGrade: Bound<typeof g.spreadFromGrade<Value>> = (percent) => g.spreadFromGrade<Value>(arithmetic, percent);
 
 /** {@link g.spreadFromOneIn | spreadFromOneIn} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const spreadFromOneIn: Bound<typeof g.spreadFromOneIn<Value>> = (n) => g.spreadFromOneIn(arithmetic, n);
+export const spreadFromOneIn: Bound<typeof g.spreadFromOneIn<Value>> = (n) => g.spreadFromOneIn<Value>(arithmetic, n);
 
 /** {@link g.spreadFromPerMille | spreadFromPerMille} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const spreadFromPerMille: Bound<typeof g.spreadFromPerMille<Value>> = (perMille) => g.spreadFromPerMille(arithmetic, perMille);
+export const spreadFromPerMille: Bound<typeof g.spreadFromPerMille<Value>> = (perMille) => g.spreadFromPerMille<Value>(arithmetic, perMille);
 
 /** {@link g.spreadFromRatio | spreadFromRatio} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const spreadFromRatio: Bound<typeof g.spreadFromRatio<Value>> = (rise, run) => g.spreadFromRatio(arithmetic, rise, run);
+export const spreadFromRatio: Bound<typeof g.spreadFromRatio<Value>> = (rise, run) => g.spreadFromRatio<Value>(arithmetic, rise, run);
 
 /** {@link g.spreadLawResidual | spreadLawResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const spreadLawResidual: Bound<typeof g.spreadLawResidual<Value>> = (Qa, sa, Qb, sb) => g.spreadLawResidual(arithmetic, Qa, sa, Qb, sb);
+export const spreadLawResidual: Bound<typeof g.spreadLawResidual<Value>> = (Qa, sa, Qb, sb) => g.spreadLawResidual<Value>(arithmetic, Qa, sa, Qb, sb);
 
 /** {@link g.spreadOfLines | spreadOfLines} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const spreadOfLines: Bound<typeof g.spreadOfLines<Value>> = (l1, l2) => g.spreadOfLines(arithmetic, l1, l2);
+export const spreadOfLines: Bound<typeof g.spreadOfLines<Value>> = (l1, l2) => g.spreadOfLines<Value>(arithmetic, l1, l2);
 
 /** {@link g.spreadOfVectors | spreadOfVectors} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const spreadOfVectors: Bound<typeof g.spreadOfVectors<Value>> = (u, v) => g.spreadOfVectors(arithmetic, u, v);
+export const spreadOfVectors: Bound<typeof g.spreadOfVectors<Value>> = (u, v) => g.spreadOfVectors<Value>(arithmetic, u, v);
 
 /** {@link g.sqrtOf | sqrtOf} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const sqrtOf: Bound<typeof g.sqrtOf<Value, false>> = (x) => g.sqrtOf(arithmetic, x);
+export const sqrtOf: Bound<typeof g.sqrtOf<Value, false>> = (x) => g.sqrtOf<Value, false>(arithmetic, x);
 
 /** {@link g.stewartQuadranceResidual | stewartQuadranceResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const stewartQuadranceResidual: Bound<typeof g.stewartQuadranceResidual<Value>> = (data) => g.stewartQuadranceResidual(arithmetic, data);
+export const stewartQuadranceResidual: Bound<typeof g.stewartQuadranceResidual<Value>> = (data) => g.stewartQuadranceResidual<Value>(arithmetic, data);
 
 /** {@link g.stewartResidual | stewartResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const stewartResidual: Bound<typeof g.stewartResidual<Value>> = (data) => g.stewartResidual(arithmetic, data);
+export const stewartResidual: Bound<typeof g.stewartResidual<Value>> = (data) => g.stewartResidual<Value>(arithmetic, data);
 
 /** {@link g.surd | surd} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const surd: Bound<typeof g.surd<Value>> = (a, b, d) => g.surd(arithmetic, a, b, d);
+export const surd: Bound<typeof g.surd<Value>> = (a, b, d) => g.surd<Value>(arithmetic, a, b, d);
 
 /** {@link g.traverse | traverse} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const traverse: Bound<typeof g.traverse<Value, false>> = (input) => g.traverse(arithmetic, input);
+export const traverse: Bound<typeof g.traverse<Value, false>> = (input) => g.traverse<Value, false>(arithmetic, input);
 
 /** {@link g.triangle | triangle} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const triangle: Bound<typeof g.triangle<Value>> = (A1, A2, A3) => g.triangle(arithmetic, A1, A2, A3);
+export const triangle: Bound<typeof g.triangle<Value>> = (A1, A2, A3) => g.triangle<Value>(arithmetic, A1, A2, A3);
 
 /** {@link g.trigHeight | trigHeight} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const trigHeight: Bound<typeof g.trigHeight<Value, false>> = (sight) => g.trigHeight(arithmetic, sight);
+export const trigHeight: Bound<typeof g.trigHeight<Value, false>> = (sight) => g.trigHeight<Value, false>(arithmetic, sight);
 
 /** {@link g.tripleQuadResidual | tripleQuadResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const tripleQuadResidual: Bound<typeof g.tripleQuadResidual<Value>> = (Q1, Q2, Q3) => g.tripleQuadResidual(arithmetic, Q1, Q2, Q3);
+export const tripleQuadResidual: Bound<typeof g.tripleQuadResidual<Value>> = (Q1, Q2, Q3) => g.tripleQuadResidual<Value>(arithmetic, Q1, Q2, Q3);
 
 /** {@link g.tripleSpreadResidual | tripleSpreadResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const tripleSpreadResidual: Bound<typeof g.tripleSpreadResidual<Value>> = (s1, s2, s3) => g.tripleSpreadResidual(arithmetic, s1, s2, s3);
+export const tripleSpreadResidual: Bound<typeof g.tripleSpreadResidual<Value>> = (s1, s2, s3) => g.tripleSpreadResidual<Value>(arithmetic, s1, s2, s3);
 
 /** {@link g.uncertain | uncertain} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const uncertain: Bound<typeof g.uncertain<Value, false>> = () => g.uncertain(arithmetic);
+export const uncertain: Bound<typeof g.uncertain<Value, false>> = () => g.uncertain<Value, false>(arithmetic);
 
 /** {@link g.vectorQuadrance | vectorQuadrance} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const vectorQuadrance: Bound<typeof g.vectorQuadrance<Value>> = (v) => g.vectorQuadrance(arithmetic, v);
+export const vectorQuadrance: Bound<typeof g.vectorQuadrance<Value>> = (v) => g.vectorQuadrance<Value>(arithmetic, v);
 
 /** {@link g.vertical | vertical} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const vertical: Bound<typeof g.vertical<Value>> = (spread, sign) => g.vertical(arithmetic, spread, sign);
+export const vertical: Bound<typeof g.vertical<Value>> = (spread, sign) => g.vertical<Value>(arithmetic, spread, sign);
 
 /** {@link g.verticalFromAngle | verticalFromAngle} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const verticalFromAngle: Bound<typeof g.verticalFromAngle<Value>> = (angle, options) => g.verticalFromAngle(arithmetic, angle, options);
+export const verticalFromAngle: Bound<typeof g.verticalFromAngle<Value>> = (angle, options) => g.verticalFromAngle<Value>(arithmetic, angle, options);
 
 /** {@link g.verticalFromHeight | verticalFromHeight} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const verticalFromHeight: Bound<typeof g.verticalFromHeight<Value>> = (input) => g.verticalFromHeight(arithmetic, input);
+export const verticalFromHeight: Bound<typeof g.verticalFromHeight<Value>> = (input) => g.verticalFromHeight<Value>(arithmetic, input);
 
 /** {@link g.verticalFromRatio | verticalFromRatio} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const verticalFromRatio: Bound<typeof g.verticalFromRatio<Value>> = (rise, run) => g.verticalFromRatio(arithmetic, rise, run);
+export const verticalFromRatio: Bound<typeof g.verticalFromRatio<Value>> = (rise, run) => g.verticalFromRatio<Value>(arithmetic, rise, run);
 
 /** {@link g.verticalFromSlope | verticalFromSlope} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const verticalFromSlope: Bound<typeof g.verticalFromSlope<Value>> = (text) => g.verticalFromSlope(arithmetic, text);
+export const verticalFromSlope: Bound<typeof g.verticalFromSlope<Value>> = (text) => g.verticalFromSlope<Value>(arithmetic, text);
 
 /** {@link g.zenithFromVertical | zenithFromVertical} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const zenithFromVertical: Bound<typeof g.zenithFromVertical<Value>> = (reading) => g.zenithFromVertical(arithmetic, reading);
+export const zenithFromVertical: Bound<typeof g.zenithFromVertical<Value>> = (reading) => g.zenithFromVertical<Value>(arithmetic, reading);
 
 /** {@link g.zenithToElevation | zenithToElevation} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
-export const zenithToElevation: Bound<typeof g.zenithToElevation<Value>> = (degrees) => g.zenithToElevation(arithmetic, degrees);
+export const zenithToElevation: Bound<typeof g.zenithToElevation<Value>> = (degrees) => g.zenithToElevation<Value>(arithmetic, degrees);
 
 export {
   ANGLE_UNITS, AREA_UNITS, BEARING_PARALLEL_TOLERANCE, budget, DANGER_CIRCLE_TOLERANCE, decimal,
