@@ -11,6 +11,13 @@ import type { Point } from './point.js';
  * The line ⟨a : b : c⟩: the points with a·x + b·y + c = 0 (x east, y north), a and b
  * not both zero. Proportional triples are the same line; functions here never assume a
  * particular scaling.
+ *
+ * @example
+ * ```ts
+ * import { float, isOnLine } from 'quadspread';
+ * isOnLine(float, { x: 2, y: 1 }, { a: 1, b: -2, c: 0 });
+ * //=> true
+ * ```
  */
 export interface Line<T> {
   /** Coefficient of x. */

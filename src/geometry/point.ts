@@ -9,6 +9,13 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
  * A point (or a vector) of the plane in arithmetic `T`: `x` east, `y` north.
  * Every geometry function reads points of this shape; any object with `x` and `y`
  * values of the arithmetic will do.
+ *
+ * @example
+ * ```ts
+ * import { float, quadrance } from 'quadspread';
+ * quadrance(float, { x: 1, y: 1 }, { x: 4, y: 5 });
+ * //=> 25
+ * ```
  */
 export interface Point<T> {
   /** East coordinate (or the first component of a vector). */

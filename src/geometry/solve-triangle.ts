@@ -9,7 +9,16 @@ import { type Root, type Surd, surd } from './surd.js';
 import type { Triangle } from './triangle.js';
 import { readQuadrance, readSpread } from './validate.js';
 
-/** Three of the six measures of a triangle (see {@link Triangle} for which is which). */
+/**
+ * Three of the six measures of a triangle (see {@link Triangle} for which is which).
+ *
+ * @example
+ * ```ts
+ * import { float, solveTriangle } from 'quadspread';
+ * solveTriangle(float, { Q1: 25, Q2: 9, Q3: 16 })[0].s1;
+ * //=> 1
+ * ```
+ */
 export type TriangleMeasures<V> = Partial<Record<'Q1' | 'Q2' | 'Q3' | 's1' | 's2' | 's3', V>>;
 
 /** The operations the solver needs, over plain values (inexact) or surds (exact). */

@@ -15,6 +15,14 @@ import { readQuadrance } from './validate.js';
  * three points B, C, D of one straight line. `QB`, `QC`, `QD` are the quadrances from P
  * to B, C, D (square units); `tB`, `tC`, `tD` are the chainages of B, C, D: signed
  * distances along the line from any origin, in the same unit.
+ *
+ * @example
+ * ```ts
+ * import { float, stewartResidual } from 'quadspread';
+ * // P = (3, 4) above the x-axis; B, C, D at chainages 0, 6, 3 along it.
+ * stewartResidual(float, { QB: 25, QC: 25, QD: 16, tB: 0, tC: 6, tD: 3 });
+ * //=> 0
+ * ```
  */
 export interface StewartChainages<V> {
   /** Quadrance P–B. */
@@ -34,6 +42,13 @@ export interface StewartChainages<V> {
 /**
  * The data of Stewart's relation in quadrances only: `QB`, `QC`, `QD` from the point P
  * to B, C, D of one line; `QBD` = Q(B, D) and `QBC` = Q(B, C) along the line.
+ *
+ * @example
+ * ```ts
+ * import { float, stewartQuadranceResidual } from 'quadspread';
+ * stewartQuadranceResidual(float, { QB: 25, QC: 25, QD: 16, QBD: 9, QBC: 36 });
+ * //=> 0
+ * ```
  */
 export interface StewartQuadrances<V> {
   /** Quadrance P–B. */

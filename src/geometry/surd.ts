@@ -27,6 +27,14 @@ import { QuadspreadError, show } from '../errors.js';
  * Comparison (`cmp`, `eq`, `sign`) is exact for any two surds, whatever their radicands.
  * Plain values (`T`, JS numbers, numeric text, bigints) are accepted wherever a surd is,
  * and read with the arithmetic's `from`.
+ *
+ * @example
+ * ```ts
+ * import { rational, surd } from 'quadspread';
+ * const p = surd(rational, 41, 20, 2);
+ * [p.toString(), p.conjugate().toString(), p.mul(p.conjugate()).toString(), p.cmp(69), p.toPrecision(6)];
+ * //=> ['41 + 20√2', '41 - 20√2', '881', 1, '69.2843']
+ * ```
  */
 export interface Surd<T> {
   /** The rational part a. */
@@ -88,6 +96,13 @@ export interface Surd<T> {
 /**
  * The type of a result that may need a square root: a {@link Surd} in an exact
  * arithmetic (`E = true`), a plain value otherwise.
+ *
+ * @example
+ * ```ts
+ * import { rational, float, sqrtOf, rootToString } from 'quadspread';
+ * [rootToString(rational, sqrtOf(rational, 8)), rootToString(float, sqrtOf(float, 9))];
+ * //=> ['2√2', '3']
+ * ```
  */
 export type Root<T, E extends boolean> = E extends true ? Surd<T> : T;
 

@@ -12,6 +12,14 @@ import type { Point } from './point.js';
  * `s1` the spread at A1 (likewise for 2 and 3), and `quadrea` = 16·area²
  * = (Q1 + Q2 + Q3)² − 2(Q1² + Q2² + Q3²). `V` is the value type: `T` from
  * {@link triangle}, `Root<T, E>` from {@link solveTriangle}.
+ *
+ * @example
+ * ```ts
+ * import { float, triangle } from 'quadspread';
+ * const t = triangle(float, { x: 0, y: 0 }, { x: 3, y: 0 }, { x: 0, y: 4 });
+ * [t.Q1, t.Q2, t.Q3, t.s1];
+ * //=> [25, 16, 9, 1]
+ * ```
  */
 export interface Triangle<V> {
   /** Quadrance opposite A1: Q(A2, A3), square units. */

@@ -59,13 +59,13 @@ describe('every @example in src/geometry runs and its //=> results hold', () => 
   }
 });
 
-describe('every exported function of src/geometry has an @example', () => {
+describe('every export of src/geometry (functions and types) has an @example', () => {
   for (const file of files) {
     it(`${file} documents each export with an example`, () => {
       const text = readFileSync(join(dir, file), 'utf8');
       const blocks = text.split(/\/\*\*/).slice(1);
       for (const b of blocks) {
-        const m = /\*\/\s*export (?:function|const) (\w+)/.exec(b);
+        const m = /\*\/\s*export (?:function|const|interface|type|class) (\w+)/.exec(b);
         if (m && !b.includes('@internal')) expect(b.includes('@example'), `${file}: ${m[1]} has no @example`).toBe(true);
       }
     });
