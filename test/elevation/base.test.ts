@@ -1,7 +1,7 @@
 // heightFromBase: a measured base, horizontal spreads at both stations, and the foot's side.
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { rational, float, QuadspreadError } from '../../src/index.js';
+import { rational, decimal, float, QuadspreadError } from '../../src/index.js';
 import { heightFromBase } from '../../src/elevation/base.js';
 import { verticalFromAngle } from '../../src/readings/vertical.js';
 
@@ -75,6 +75,14 @@ describe('heightFromBase with horizontal angles (float, classical sine rule with
       expect(Math.sqrt(r.H)).toBeCloseTo(D1 * Math.tan(eps * rad), 8);
     });
   }
+  it('decimal(40) agrees with the classical values too', () => {
+    const D = decimal(40);
+    const b = 250, a1 = 118, a2 = 23, rad = Math.PI / 180;
+    const D1 = (b * Math.sin(a2 * rad)) / Math.sin((a1 + a2) * rad);
+    const r = heightFromBase(D, { base: b * b, angles: [a1, a2], vertical: [verticalFromAngle(D, 8.5), undefined] });
+    expect(Math.sqrt(D.toNumber(r.horizontal[0]))).toBeCloseTo(D1, 9);
+    expect(Math.sqrt(D.toNumber(r.H))).toBeCloseTo(D1 * Math.tan(8.5 * rad), 9);
+  });
   it('two readings are combined by weight and their discrepancy reported', () => {
     const b = 250, a1 = 52, a2 = 71, rad = Math.PI / 180, h = 40;
     const D1 = (b * Math.sin(a2 * rad)) / Math.sin((a1 + a2) * rad);

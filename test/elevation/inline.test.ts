@@ -127,6 +127,14 @@ describe('heightFromInlineQuadrances: only the quadrances between consecutive st
     expect(r!.H.isRational()).toBe(false);
     expect(r!.H.toNumber()).toBeCloseTo(f.H, 10);
   });
+  it('float: recovers a mast height from elevation angles (Math.atan2) with spacings given as quadrances', () => {
+    // invented demo geometry: stations at chainages 0, 45, 130 along a shore; mast 27.3 high, foot at (88, 40)
+    const h = 27.3, f = 88, off = 40;
+    const cs = [0, 45, 130];
+    const v = cs.map((c) => verticalFromAngle(float, (Math.atan2(h, Math.hypot(c - f, off)) * 180) / Math.PI));
+    const r = heightFromInlineQuadrances(float, { spacings: [45 * 45, 85 * 85], vertical: v });
+    expect(Math.sqrt(r.H)).toBeCloseTo(h, 8);
+  });
   it('the mirror root is the height with the first station reflected across the second (stations 1 and 3 on one side)', () => {
     const c = [0, 10, 25].map((x) => R.from(x));
     const vr = readings(c, R.from(7), R.from(25), R.from(144));
