@@ -109,6 +109,7 @@ export interface Traverse<T, E extends boolean> {
 /** √(lat² + dep²): `A.sqrt` directly in an inexact arithmetic (the float hot path). */
 function courseLength<T>(A: Arithmetic<T, boolean>, la: T, de: T, at: () => string): T {
   const q = A.add(A.mul(la, la), A.mul(de, de));
+  if (A.isZero(q)) return A.zero;
   return A.exact ? sqrtValue(A, q, at()) : A.sqrt(q)!;
 }
 
@@ -257,7 +258,8 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
   const east = A.sub(x, end.x);
   const north = A.sub(y, end.y);
   const q = A.add(A.mul(east, east), A.mul(north, north));
-  const linear = sqrtOf(A, q);
+  // At an exact closure the linear misclosure is 0 (a root there has no first-order derivative).
+  const linear = sqrtOf(A, A.isZero(q) ? A.zero : q);
   // Precision ratio 1 : N with N = traverse length / linear misclosure.
   const ratio = A.isZero(q) ? undefined : A.div(total, sqrtValue(A, q, where));
 
