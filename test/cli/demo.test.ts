@@ -178,3 +178,35 @@ describe('quadspread demo, elevation and design tasks', () => {
     expect(value(t, 'HF2.level')).toBeCloseTo(lv.close, 9);
   });
 });
+
+describe('quadspread demo, trigonometric heighting and resection', () => {
+  it('gives the trigonometric height difference of hi + S·cos z − ht + (1 − k)·D²/(2R) with k = 0.13, R = 6371 km', () => {
+    const t = task('trig-height');
+    const j = jobTask('trig-height') as { distance: { value: number }; vertical: { zenith: string }; instrumentHeight: number; targetHeight: number; backward: { distance: number; vertical: { zenith: string }; instrumentHeight: number; targetHeight: number }; stationLevel: { value: number } };
+    const dh = (S: number, z: string, hi: number, ht: number) => {
+      const zr = rad(dms(z));
+      const D = S * Math.sin(zr);
+      return hi + S * Math.cos(zr) - ht + ((1 - 0.13) * D * D) / (2 * 6371000); // Ghilani & Wolf ch. 4 form (from memory)
+    };
+    const f = dh(j.distance.value, j.vertical.zenith, j.instrumentHeight, j.targetHeight);
+    const b = dh(j.backward.distance, j.backward.vertical.zenith, j.backward.instrumentHeight, j.backward.targetHeight);
+    expect(value(t, 'difference')).toBeCloseTo(f, 8);
+    expect(value(t, 'backward')).toBeCloseTo(b, 8);
+    expect(value(t, 'mean')).toBeCloseTo((f - b) / 2, 8);
+    expect(value(t, 'level')).toBeCloseTo(j.stationLevel.value + (f - b) / 2, 8);
+  });
+
+  it('gives a resected station from which Math.atan2 sees the control points at the booked angles', () => {
+    const t = task('resection');
+    const S = { x: value(t, 'TS.east'), y: value(t, 'TS.north') };
+    const azimuth = (k: string) => {
+      const p = job.points[k]!;
+      return (Math.atan2(num(p.east) - S.x, num(p.north) - S.y) * 180) / Math.PI; // clockwise from north
+    };
+    const booked = (jobTask('resection').angles as { value: string }[]).map((a) => dms(a.value));
+    const a12 = (((azimuth('T2') - azimuth('T1')) % 360) + 360) % 360;
+    const a23 = (((azimuth('T3') - azimuth('T2')) % 360) + 360) % 360;
+    expect(Math.abs(a12 - booked[0]!) * 3600).toBeLessThan(0.01);
+    expect(Math.abs(a23 - booked[1]!) * 3600).toBeLessThan(0.01);
+  });
+});

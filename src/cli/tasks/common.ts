@@ -78,3 +78,9 @@ export function rootsWithin<V>(A: Arithmetic<V, boolean>, H1: V, H2: V, t: V): b
   if (A.sign(lhs) <= 0) return true;
   return A.cmp(A.mul(lhs, lhs), A.mul(A.from(4), A.mul(H1, H2))) <= 0;
 }
+
+/** |x| ≤ t for a value or surd x, exactly. */
+export function absAtMost<V>(A: Arithmetic<V, boolean>, x: Value<V>, t: V): boolean {
+  if (isSurd(x)) return x.cmp(t) <= 0 && x.cmp(A.neg(t)) >= 0;
+  return A.cmp(A.abs(x as V), t) <= 0;
+}

@@ -12,5 +12,7 @@ import { traverseTask } from './traverse.js';
 import { triangleTask } from './triangle.js';
 import { intersectionTask } from './intersection.js';
 import { levellingTask } from './levelling.js';
+import { resectionTask } from './resection.js';
+import { trigHeightTask } from './trig-height.js';
 
-export const TASK_KINDS: readonly TaskKind[] = [heightTask, inlineHeightTask, pathGradeTask, triangleTask, traverseTask, areaTask, intersectionTask, levellingTask];
+export const TASK_KINDS: readonly TaskKind[] = [heightTask, inlineHeightTask, trigHeightTask, pathGradeTask, triangleTask, traverseTask, areaTask, intersectionTask, resectionTask, levellingTask];
