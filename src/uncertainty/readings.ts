@@ -18,7 +18,8 @@ import { spreadFromDegrees } from '../readings/spread.js';
 import { spreadFromGrade } from '../readings/slope.js';
 import { verticalFromAngle, type VerticalKind, type VerticalReading } from '../readings/vertical.js';
 import { lengthToMetres, type LengthUnit } from '../readings/length.js';
-import { measured, readName, readSigma } from './measured.js';
+import { measured } from './measured.js';
+import { readName, readSigma } from './internal.js';
 
 /**
  * A value y = g(x) of an uncertain `x`, given y and dy/dx: its gradient is dy/dx times
