@@ -351,7 +351,7 @@ function atanFixed(T: bigint, W: number): { v: bigint; err: bigint } {
  * E.pi;
  * //=> '3.14159265358979323846264338328'
  * E.sin('1');
- * //=> '0.841470984807896506652502321630'
+ * //=> '0.84147098480789650665250232163'
  * ```
  */
 export function decimalElementary(digits: number): DecimalElementary {

@@ -3,3 +3,8 @@ export { WGS84, GRS80, defineEllipsoid, ellipsoidByName, ellipsoidParameters } f
 export type { Ellipsoid, EllipsoidDefinition, EllipsoidParameters } from './ellipsoid.js';
 export { geodeticToGeocentric, geocentricToGeodetic } from './geocentric.js';
 export type { Geodetic, GeodeticInput, Geocentric } from './geocentric.js';
+export { enuRotation, enuFromGeocentric, geocentricFromEnu, flatEarthError } from './enu.js';
+export type { Enu, Matrix3, FlatEarthError } from './enu.js';
+export { meridianRadius, primeVerticalRadius, radiusInAzimuth, gaussianMeanRadius } from './radii.js';
+export { heightReductionFactor, transverseMercatorFactors, combinedFactor, groundToGrid, gridToGround } from './grid.js';
+export type { TransverseMercator, TmFactors } from './grid.js';

@@ -64,3 +64,12 @@ export function readHeight<T>(A: Arithmetic<T>, h: Numeric<T> | undefined, a: T,
 export function toDegrees<T>(A: Arithmetic<T>, rad: T): T {
   return A.div(A.mul(rad, A.from(180)), A.pi); // π rad = 180° (definition of the radian)
 }
+
+/**
+ * @internal In an exact arithmetic, x rounded to `digits` + 8 significant digits (for
+ * intermediate values of computations that are approximations anyway, so that fractions
+ * stay short); x itself otherwise.
+ */
+export function settle<T>(A: Arithmetic<T>, x: T, digits: number): T {
+  return A.exact ? A.from(A.toPrecision(x, digits + 8)) : x;
+}
