@@ -215,3 +215,15 @@ describe('surds print and serialise as their exact text', () => {
     expect(sqrtOf(rational, 4n * 10n ** 400n).toString()).toBe(`2${'0'.repeat(200)}`);
   });
 });
+
+describe('surds over an inexact arithmetic', () => {
+  it('surd(decimal(20), 1, 1, 2) keeps its form and rounds only when asked for a number or digits', () => {
+    const D = decimal(20);
+    const s = surd(D, 1, 1, 2);
+    expect(s.toString()).toBe('1 + √2');
+    expect(s.toNumber()).toBeCloseTo(1 + Math.SQRT2, 15);
+    // 1 + √2 = 2.41421356237309504880… (√2 from mathjs BigNumber above), to 10 digits
+    expect(s.toPrecision(10)).toBe('2.414213562');
+    expect(s.mul(s.conjugate()).toString()).toBe('-1');
+  });
+});
