@@ -27,4 +27,18 @@ export default defineConfig([
   { ...common, entry: { float: 'src/float.ts' }, format: ['esm'], splitting: false, treeshake: true, esbuildPlugins: [floatSpecialize()] },
   { ...common, entry: ['src/**/*.ts', '!src/cli/**', '!src/float.ts'], outDir: 'dist/esm', format: ['esm'], bundle: false },
   { ...common, entry: entries, format: ['esm', 'cjs'], dts: { only: true } },
+  // The quadspread command (src/cli, docs/cli.md): one ES module for Node with commander bundled
+  // in (runtime dependencies stay fraction.js and big.js); commander is CommonJS, so the bundle
+  // gets a require() for its node: imports.
+  {
+    ...common,
+    entry: { cli: 'src/cli/main.ts' },
+    format: ['esm'],
+    platform: 'node',
+    target: 'node20',
+    splitting: false,
+    treeshake: true,
+    noExternal: ['commander'],
+    banner: { js: "import { createRequire as __createRequire } from 'node:module'; const require = __createRequire(import.meta.url);" },
+  },
 ]);
