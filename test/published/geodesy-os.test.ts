@@ -1,0 +1,85 @@
+import { describe, it, expect } from 'vitest';
+import { rational } from '../../src/arithmetic/rational.js';
+import { decimal } from '../../src/arithmetic/decimal.js';
+import { float } from '../../src/arithmetic/float.js';
+import type { Arithmetic } from '../../src/arithmetic/types.js';
+import { geodeticToGeocentric, geocentricToGeodetic } from '../../src/geodesy/geocentric.js';
+import { GRS80, WGS84, ellipsoidParameters } from '../../src/geodesy/ellipsoid.js';
+
+// Ordnance Survey, "A guide to coordinate systems in Great Britain", annex B (worked
+// example on GRS 80): 53°36′43.1653″N, 1°39′51.9920″W, h = 299.800 m ↔
+// X = 3790644.900 m, Y = −110149.210 m, Z = 5111482.970 m.
+const OS = {
+  lat: `53°36'43.1653"N`,
+  lon: `1°39'51.9920"W`,
+  latDeg: 53 + 36 / 60 + 43.1653 / 3600,
+  lonDeg: -(1 + 39 / 60 + 51.992 / 3600),
+  h: '299.800',
+  X: '3790644.900',
+  Y: '-110149.210',
+  Z: '5111482.970',
+};
+
+const arithmetics: Arithmetic<unknown>[] = [float, decimal(34), decimal(40), rational] as Arithmetic<unknown>[];
+
+describe('Ordnance Survey guide, annex B: geodetic ↔ geocentric on GRS 80', () => {
+  for (const A of arithmetics) {
+    it(`geodeticToGeocentric(${A.name}) reproduces X, Y, Z to 1 mm`, () => {
+      const p = geodeticToGeocentric(A, { lat: OS.lat, lon: OS.lon, h: OS.h }, GRS80);
+      expect(Math.abs(A.toNumber(p.X) - Number(OS.X))).toBeLessThan(0.001);
+      expect(Math.abs(A.toNumber(p.Y) - Number(OS.Y))).toBeLessThan(0.001);
+      expect(Math.abs(A.toNumber(p.Z) - Number(OS.Z))).toBeLessThan(0.001);
+    });
+    it(`geocentricToGeodetic(${A.name}) reproduces the latitude and longitude to 0.0001″ and h to 1 mm`, () => {
+      const g = geocentricToGeodetic(A, { X: OS.X, Y: OS.Y, Z: OS.Z }, GRS80);
+      expect(Math.abs(A.toNumber(g.lat) - OS.latDeg) * 3600).toBeLessThan(0.0001);
+      expect(Math.abs(A.toNumber(g.lon) - OS.lonDeg) * 3600).toBeLessThan(0.0001);
+      expect(Math.abs(A.toNumber(g.h) - 299.8)).toBeLessThan(0.001);
+    });
+  }
+  it('accepts the same point as decimal degrees and as DMS text with hemisphere letters', () => {
+    const a = geodeticToGeocentric(float, { lat: OS.lat, lon: OS.lon, h: 299.8 }, 'GRS80');
+    const b = geodeticToGeocentric(float, { lat: OS.latDeg, lon: OS.lonDeg, h: 299.8 }, GRS80);
+    expect(Math.abs(a.X - b.X) + Math.abs(a.Y - b.Y) + Math.abs(a.Z - b.Z)).toBeLessThan(1e-6);
+  });
+});
+
+describe('ellipsoid parameters from their defining documents', () => {
+  it('WGS84 is a = 6378137 m, 1/f = 298.257223563 (NIMA TR8350.2, 3rd ed., 2000, table 3.1)', () => {
+    const E = ellipsoidParameters(rational, WGS84);
+    expect(rational.toString(E.a)).toBe('6378137');
+    expect(rational.toString(rational.div(rational.one, E.f))).toBe('298257223563/1000000000');
+  });
+  it('GRS80 is a = 6378137 m, 1/f = 298.257222101 (Moritz, Geodetic Reference System 1980, J. Geodesy 74, 2000)', () => {
+    const E = ellipsoidParameters(rational, GRS80);
+    expect(rational.toString(E.a)).toBe('6378137');
+    expect(rational.toString(rational.div(rational.one, E.f))).toBe('298257222101/1000000000');
+  });
+  it('GRS80 derived constants match Moritz (2000): b = 6356752.3141 m, e² = 0.00669438002290, e′² = 0.00673949677548 (from memory of its table)', () => {
+    const E = ellipsoidParameters(rational, GRS80);
+    expect(rational.toPrecision(E.b, 11)).toBe('6356752.3141');
+    expect(rational.toPrecision(E.e2, 12)).toBe('0.00669438002290');
+    expect(rational.toPrecision(E.ep2, 12)).toBe('0.00673949677548');
+  });
+  it('GRS80 mean radius R1 = (2a + b)/3 = 6371008.7714 m (Moritz 2000)', () => {
+    const E = ellipsoidParameters(rational, GRS80);
+    const R1 = rational.div(rational.add(rational.mul(rational.from(2), E.a), E.b), rational.from(3));
+    expect(rational.toPrecision(R1, 11)).toBe('6371008.7714');
+  });
+  it('WGS84 derived constants match TR8350.2 table 3.3: b = 6356752.3142 m, e² = 0.00669437999014 (from memory)', () => {
+    const E = ellipsoidParameters(rational, WGS84);
+    expect(rational.toPrecision(E.b, 11)).toBe('6356752.3142');
+    expect(rational.toPrecision(E.e2, 12)).toBe('0.00669437999014');
+  });
+  it('the derived constants are exact in rational: e² = (a² − b²)/a², e′² = (a² − b²)/b², n = (a − b)/(a + b)', () => {
+    for (const ell of [WGS84, GRS80]) {
+      const R = rational;
+      const E = ellipsoidParameters(R, ell);
+      const a2 = R.mul(E.a, E.a);
+      const b2 = R.mul(E.b, E.b);
+      expect(R.eq(E.e2, R.div(R.sub(a2, b2), a2))).toBe(true);
+      expect(R.eq(E.ep2, R.div(R.sub(a2, b2), b2))).toBe(true);
+      expect(R.eq(E.n, R.div(R.sub(E.a, E.b), R.add(E.a, E.b)))).toBe(true);
+    }
+  });
+});
