@@ -127,3 +127,28 @@ describe('quadspread demo --format markdown', () => {
     expect(r.stdout.trimEnd()).toMatch(/> \*\*Caution\.\*\* .*licensed practice\.$/);
   });
 });
+
+describe('docs/cli.md', () => {
+  const doc = readFileSync(resolve(root, 'docs/cli.md'), 'utf8');
+  it('documents every task kind and every field of each', () => {
+    const schema = readJson('docs/job-schema.json');
+    const kinds = schema.properties.tasks.items.oneOf as { properties: Record<string, { const?: string }> }[];
+    expect(kinds.length).toBeGreaterThanOrEqual(10);
+    for (const k of kinds) {
+      const kind = k.properties.kind!.const!;
+      expect(doc).toContain(`**\`${kind}\`**`);
+      const section = doc.slice(doc.indexOf(`**\`${kind}\`**`)).split('\n\n')[0]!;
+      for (const field of Object.keys(k.properties).filter((f) => f !== 'kind' && f !== 'name')) {
+        expect({ kind, field, documented: section.includes(`\`${field}\``) }).toEqual({ kind, field, documented: true });
+      }
+    }
+  });
+
+  it('documents every batch kind and its columns', () => {
+    const help = cli(['batch', '--help']).stdout;
+    for (const kind of ['inverses', 'triangles', 'heights']) {
+      expect(help).toContain(kind);
+      expect(doc).toContain(`| \`${kind}\` |`);
+    }
+  });
+});
