@@ -109,6 +109,23 @@ describe('allowableMisclosure(A, order, km)', () => {
   });
 });
 
+describe('levelRun with readings in feet', () => {
+  it('converts the misclosure to mm and the run length to km with the international foot (0.3048 m, exact)', () => {
+    const run = levelRun(rational, {
+      unit: 'ft',
+      start: 100,
+      close: '100.01',
+      order: 'third',
+      sights: [{ bs: '4.50' }, { fs: '4.50', distance: 5000 }],
+    });
+    // −0.01 ft = −3.048 mm; 5000 ft = 1.524 km; allowable² = 12² × 1.524 = 219.456 mm² (derived).
+    expect(rational.toString(run.misclosureMm!)).toBe('-381/125');
+    const a = run.allowable!.allowable;
+    expect(a.mul(a).toString()).toBe('27432/125');
+    expect(run.withinAllowable).toBe(true);
+  });
+});
+
 describe('levelRun(rational, …) properties (fast-check, exact)', () => {
   const reading = fc.integer({ min: 0, max: 4000 }).map((mm) => `${mm}/1000`);
   const row = fc.oneof(fc.record({ is: reading }), fc.record({ fs: reading, bs: reading }));
