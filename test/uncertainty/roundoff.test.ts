@@ -7,7 +7,8 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
 import type { Arithmetic } from '../../src/arithmetic/types.js';
-import { quadrance, spread, cross, quadrea, triangle } from '../../src/geometry/index.js';
+import { quadrance, spread, cross, quadrea, triangle, solveTriangle } from '../../src/geometry/index.js';
+import { rational, float } from '../../src/arithmetic/index.js';
 import { heightFromReading } from '../../src/elevation/height.js';
 import { roundOff } from '../../src/uncertainty/roundoff.js';
 
@@ -165,6 +166,20 @@ describe('round-off of the quadrea of a needle triangle', () => {
     expect(fromXY.relative!).toBeLessThan(1e-12);
     expect(fromQ.relative!).toBeGreaterThan(1);
     expect(fromQ.float).toBeLessThan(0);
+  });
+});
+
+describe('round-off of solveTriangle(float) from three quadrances of a needle', () => {
+  it('solveTriangle finds the needle in rational but may find no triangle in float: the quadrea rounds to ≤ 0', () => {
+    const pts = [['0', '0'], ['10000.017', '0.004'], ['3137.123', '0.0013']] as const;
+    const t = triangle(rational, pt(rational, pts[0]), pt(rational, pts[1]), pt(rational, pts[2]));
+    const Q = { Q1: rational.toString(t.Q1), Q2: rational.toString(t.Q2), Q3: rational.toString(t.Q3) };
+    const exact = solveTriangle(rational, Q);
+    expect(exact.length).toBe(1);
+    expect(exact[0]!.quadrea.eq(t.quadrea)).toBe(true);
+    // in float the same quadrances give Archimedes' function −4 (see above): no proper triangle
+    expect(quadrea(float, Q.Q1, Q.Q2, Q.Q3)).toBeLessThanOrEqual(0);
+    expect(solveTriangle(float, Q)).toEqual([]);
   });
 });
 
