@@ -102,16 +102,24 @@ export function heightFromInlineReadings<T>(
   A: Arithmetic<T>,
   input: { chainages: readonly Numeric<T>[]; vertical: readonly VerticalInput<T>[] },
 ): InlineHeight<T> {
+  // Performance (docs/performance.md): the arithmetic's fused kernel, where it has one
+  // (rational: three stations, in integers), gives the same result at once, or undefined for
+  // input it leaves to the code below (which reports every error).
+  const fused = A.kernels?.inlineHeight?.(input);
+  if (fused !== undefined) return fused;
   const w = 'heightFromInlineReadings(input)';
   if (!Array.isArray(input.chainages)) throw new QuadspreadError('INVALID_ARGUMENT', `${w}.chainages`, `${show(input.chainages)} is not an array of chainages`);
   const n = input.chainages.length;
   if (n < 3) throw new QuadspreadError('TOO_FEW_STATIONS', w, `${n} station${n === 1 ? '' : 's'}: at least 3 are needed`);
-  const c = input.chainages.map((x) => A.from(x));
+  const raw = input.chainages.map((x) => A.from(x));
   for (let i = 0; i < n; i++) for (let j = i + 1; j < n; j++) {
-    if (A.eq(c[i]!, c[j]!)) throw new QuadspreadError('REPEATED_CHAINAGE', `${w}.chainages`, `stations ${i} and ${j} are both at chainage ${A.toString(c[i]!)}`);
+    if (A.eq(raw[i]!, raw[j]!)) throw new QuadspreadError('REPEATED_CHAINAGE', `${w}.chainages`, `stations ${i} and ${j} are both at chainage ${A.toString(raw[i]!)}`);
   }
   const { k, sign } = readInline(A, input.vertical, w, 3, n);
   const two = A.from(2);
+  // Work from the stations' mean chainage (exact in rational; better conditioned in float), then shift back.
+  const origin = A.div(raw.reduce((s, x) => A.add(s, x), A.zero), A.from(n));
+  const c = raw.map((x) => A.sub(x, origin));
   let H: T;
   let f: T;
   let g: T;
@@ -145,7 +153,7 @@ export function heightFromInlineReadings<T>(
     const d = A.sub(ci, f);
     return A.sub(A.add(A.mul(d, d), e), A.mul(H, k[i]!));
   });
-  return { H, footChainage: f, footOffset: e, residuals, sign };
+  return { H, footChainage: A.add(f, origin), footOffset: e, residuals, sign };
 }
 
 /** The result of {@link heightFromInlineQuadrances}. */

@@ -67,6 +67,14 @@ describe('heightFromInlineReadings in float against classical trigonometry', () 
     expect(r.footChainage).toBeCloseTo(f, 7);
     expect(Math.sqrt(r.footOffset)).toBeCloseTo(off, 6);
   });
+  it('keeps its accuracy with chainages far from their origin (a line at 100 km): 1e-9 relative', () => {
+    const cs = chain.map((c) => c + 100000);
+    const v = cs.map((c) => verticalFromAngle(float, (Math.atan2(h, Math.hypot(c - (f + 100000), off)) * 180) / Math.PI));
+    const r = heightFromInlineReadings(float, { chainages: cs, vertical: v });
+    expect(Math.abs(Math.sqrt(r.H) / h - 1)).toBeLessThan(1e-9);
+    expect(Math.abs(r.footChainage - (f + 100000))).toBeLessThan(1e-6);
+    expect(Math.abs(Math.sqrt(r.footOffset) / off - 1)).toBeLessThan(1e-9);
+  });
   it('least squares with noisy readings: close to the truth, with non-zero residuals', () => {
     const noise = [0.002, -0.001, 0.0015, -0.002, 0.001]; // degrees
     const r = heightFromInlineReadings(float, { chainages: chain, vertical: elev.map((a, i) => verticalFromAngle(float, a + noise[i]!)) });
