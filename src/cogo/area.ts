@@ -47,7 +47,7 @@ export function area<T>(A: Arithmetic<T, boolean>, points: readonly PointInput<T
   const P = readPolygon(A, points, 'area(A, points)');
   const p0 = P[0]!;
   // Shoelace (Gauss's area formula): 2·area = Σ (xᵢ − x₀)(yᵢ₊₁ − y₀) − (xᵢ₊₁ − x₀)(yᵢ − y₀);
-  // the coordinate method of area of, e.g., Ghilani & Wolf, Elementary Surveying, ch. 12 (from memory).
+  // the coordinate method of area of, e.g., Ghilani & Wolf, Elementary Surveying, chapter on area (from memory).
   let twice = A.zero;
   let ex = A.sub(P[1]!.x, p0.x);
   let ey = A.sub(P[1]!.y, p0.y);

@@ -58,7 +58,7 @@ export interface Resection<T> {
  * at the clockwise horizontal angles a12 (P1 → P2) and a23 (P2 → P3).
  *
  * Coordinates are x = east, y = north; angles are measured clockwise, as read on a
- * horizontal circle graduated clockwise. Uses Tienstra's formula (J. M. Tienstra, 1931;
+ * horizontal circle graduated clockwise. Uses Tienstra's formula (after J. M. Tienstra;
  * as given e.g. in Ghilani & Wolf, *Elementary Surveying*, resection section, from
  * memory): S = (K1·P1 + K2·P2 + K3·P3)/(K1 + K2 + K3) with Kᵢ = 1/(cot Aᵢ − cot αᵢ), Aᵢ the
  * angle of the control triangle at Pᵢ and αᵢ the observed angle at S subtending the side

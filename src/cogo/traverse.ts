@@ -229,7 +229,7 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
       d = A.from(c.distance);
       const az = readAzimuth(A, c.bearing, at, '.bearing');
       // Latitude = d·cos(azimuth), departure = d·sin(azimuth) (azimuth clockwise from north),
-      // e.g. Ghilani & Wolf, Elementary Surveying, ch. 10 (from memory).
+      // e.g. Ghilani & Wolf, Elementary Surveying, chapter on traverse computations (from memory).
       const sc = sinCosDegrees(A, az);
       la = A.mul(d, sc.cos);
       de = A.mul(d, sc.sin);
@@ -265,7 +265,7 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
 
   // Per-unit corrections: compass (Bowditch) rule, correction = −misclosure·(course length /
   // total length); transit rule, correction = −misclosure·|component| / Σ|component|.
-  // Both as in Ghilani & Wolf, Elementary Surveying, ch. 10 (from memory).
+  // Both as in Ghilani & Wolf, Elementary Surveying, chapter on traverse computations (from memory).
   let kLat: T;
   let kDep: T;
   if (rule === 'compass') {
