@@ -37,6 +37,15 @@ const NO_DERIVS: readonly never[] = Object.freeze([]);
  *
  * The gradient is kept as two small parallel arrays (inputs, derivatives); values computed
  * from the same inputs share one inputs array, so most operations are plain loops.
+ *
+ * @example
+ * ```ts
+ * import { uncertain, float, measured } from 'quadspread';
+ * const U = uncertain(float);
+ * const y = U.add(measured(U, 2, 0.1, 'a'), U.from(1));
+ * [y.value, [...y.gradient].map(([input, d]) => [input.name, d])];
+ * //=> [3, [['a', 1]]]
+ * ```
  */
 export class Uncertain<T> {
   /** The value y in the base arithmetic. */

@@ -6,6 +6,8 @@
  */
 import { QuadspreadError, show } from '../errors.js';
 import { randomStream } from './random.js';
+import type { Numeric } from '../arithmetic/types.js';
+import type { Uncertain, UncertainArithmetic } from '../arithmetic/uncertain.js';
 
 /** An input distribution of {@link monteCarlo}. */
 export type InputDistribution =
@@ -150,4 +152,36 @@ export function monteCarlo<K extends string>(
     }
   }
   return Object.freeze({ n, mean, sigma, coverage: p, low: y[best] as number, high: y[best + q - 1] as number });
+}
+
+/**
+ * Normal input distributions for {@link monteCarlo} from the inputs an uncertain result
+ * depends on: each input's value as the mean and its sigma, as JS numbers, by name. With
+ * it a first-order budget can be checked in one call.
+ *
+ * @param U the uncertain arithmetic of `result`
+ * @param result a value of `U`
+ * @returns `{ [name]: { distribution: 'normal', mean, sigma } }`
+ * @throws {QuadspreadError} `DUPLICATE_INPUT` when two different inputs share a name.
+ * @example
+ * ```ts
+ * import { uncertain, float, measured, normalInputs } from 'quadspread';
+ * const U = uncertain(float);
+ * const y = U.mul(measured(U, 3, 0.1, 'a'), measured(U, 4, 0.2, 'b'));
+ * normalInputs(U, y);
+ * //=> { a: { distribution: 'normal', mean: 3, sigma: 0.1 }, b: { distribution: 'normal', mean: 4, sigma: 0.2 } }
+ * ```
+ */
+export function normalInputs<T>(U: UncertainArithmetic<T>, result: Uncertain<T> | Numeric<T>): Record<string, InputDistribution> {
+  const y = U.from(result as Numeric<Uncertain<T>>);
+  const out: Record<string, InputDistribution> = {};
+  const seen = new Map<string, unknown>();
+  for (const input of y.inputs) {
+    if (seen.has(input.name) && seen.get(input.name) !== input) {
+      throw new QuadspreadError('DUPLICATE_INPUT', 'normalInputs(U, result)', `two different inputs are named ${show(input.name)}`);
+    }
+    seen.set(input.name, input);
+    out[input.name] = { distribution: 'normal', mean: U.base.toNumber(input.value), sigma: U.base.toNumber(input.sigma) };
+  }
+  return out;
 }

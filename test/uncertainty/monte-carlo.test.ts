@@ -2,7 +2,7 @@ import { describe, it, expect } from 'vitest';
 import { float, uncertain } from '../../src/arithmetic/index.js';
 import { measured } from '../../src/uncertainty/measured.js';
 import { budget } from '../../src/uncertainty/budget.js';
-import { monteCarlo } from '../../src/uncertainty/monte-carlo.js';
+import { monteCarlo, normalInputs } from '../../src/uncertainty/monte-carlo.js';
 import { randomStream } from '../../src/uncertainty/random.js';
 
 const F = uncertain(float);
@@ -113,5 +113,23 @@ describe('monteCarlo(f, inputs, { n, seed }) propagates distributions (JCGM 101:
     expect(() => monteCarlo(f, { a: { distribution: 'rectangular', low: 1, high: 0 } }, { n: 100, seed: 1 })).toThrow(expect.objectContaining({ code: 'INVALID_ARGUMENT' }));
     expect(() => monteCarlo(f, { a: { distribution: 'cauchy' } as never }, { n: 100, seed: 1 })).toThrow(expect.objectContaining({ code: 'INVALID_ARGUMENT' }));
     expect(() => monteCarlo((x) => Math.log(x.a), ok, { n: 100, seed: 1 })).toThrow(expect.objectContaining({ code: 'NOT_FINITE' }));
+  });
+});
+
+describe('normalInputs(U, result) feeds a first-order result to monteCarlo', () => {
+  it('normalInputs gives each input of the result as a normal distribution, and the Monte Carlo check agrees with the budget', () => {
+    const a = measured(F, 12, 0.02, 'a');
+    const b = measured(F, 7, 0.03, 'b');
+    const y = F.div(a, b);
+    const inputs = normalInputs(F, y);
+    expect(inputs).toEqual({ a: { distribution: 'normal', mean: 12, sigma: 0.02 }, b: { distribution: 'normal', mean: 7, sigma: 0.03 } });
+    const n = 100000;
+    const mc = monteCarlo((x) => x.a! / x.b!, inputs, { n, seed: 77 });
+    const first = budget(F, y).sigma;
+    expect(Math.abs(mc.sigma - first)).toBeLessThan((5 * first) / Math.sqrt(2 * n));
+  });
+
+  it('normalInputs refuses two different inputs with one name', () => {
+    expect(() => normalInputs(F, F.add(measured(F, 1, 0.1, 'a'), measured(F, 2, 0.1, 'a')))).toThrow(expect.objectContaining({ code: 'DUPLICATE_INPUT' }));
   });
 });
