@@ -44,7 +44,7 @@ const lib = { g, F, R, D, Fraction, Big };
 
 // Short batches, many pairs: on a loaded machine a short batch is less often interrupted, and
 // the median of many adjacent pairs discards the interrupted ones.
-const settings = quick ? { reps: 31, targetMs: 3, n: 300, growthN: 200 } : { reps: 61, targetMs: 5, n: 1000, growthN: 500 };
+const settings = quick ? { reps: 31, targetMs: 3, n: 300, growthN: 100 } : { reps: 61, targetMs: 5, n: 1000, growthN: 400 };
 const t0 = Date.now();
 
 // Every arithmetic an integrator's process may use, run through the same generic functions
@@ -81,7 +81,8 @@ console.log(`each ratio: median of ${settings.reps} interleaved pairs of batches
 console.log(`${'workload'.padEnd(10)} ${'pair (ours vs baseline)'.padEnd(26)} ${'ours/item'.padStart(12)} ${'base/item'.padStart(12)}`);
 const headline = { float: [], fraction: [], big: [] };
 for (const [w, b] of built) {
-  const o = { items: b.items, reps: settings.reps, targetMs: settings.targetMs };
+  // A workload whose items are large (a 1000-course traverse) may ask for fewer pairs.
+  const o = { items: b.items, reps: Math.max(7, Math.round(settings.reps * (w.repsScale ?? 1))) | 1, targetMs: settings.targetMs };
   if (b.float) headline.float.push(row(w.name, 'float vs hand-written', 'float', 'hand', ratio(b.float.ours, b.float.hand, o), false));
   if (b.floatGeneric) row(w.name, '(generic entry, float)', 'generic', 'hand', ratio(b.floatGeneric.ours, b.floatGeneric.hand, o), false);
   if (b.rational) headline.fraction.push(row(w.name, 'fraction.js vs rational', 'rational', 'fraction.js', ratio(b.rational.ours, b.rational.naive, o), true));

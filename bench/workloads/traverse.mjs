@@ -7,6 +7,8 @@ import { loop1 } from '../harness.mjs';
 export const name = 'traverse';
 export const title = '(c) traverse closure, 1000 courses (compass rule)';
 const COURSES = 1000;
+/** Each item is a whole traverse (tens of ms in the exact arithmetics): a third of the pairs. */
+export const repsScale = 1 / 3;
 
 export function unavailable(lib) {
   return lib.g.traverse ? undefined : 'traverse() is not in the built package yet';

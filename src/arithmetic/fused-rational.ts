@@ -118,5 +118,70 @@ function scaled(x: Fraction, D: bigint): bigint {
   return x.d === D ? n : n * (D / x.d);
 }
 
+/** n/d in lowest terms for any signs (d ≠ 0). */
+function normalSigned(n: bigint, d: bigint): Fraction {
+  if (d < 0n) {
+    n = -n;
+    d = -d;
+  }
+  if (n === 0n) return reduced(0n, 1n);
+  const f = normal(n < 0n ? -n : n, d);
+  if (n < 0n) f.s = -1n;
+  return f;
+}
+
+const isPlainFraction = (x: unknown): x is Fraction => x instanceof Fraction;
+
+/**
+ * heightFromInlineReadings for exactly three stations given as fractions, with plain spreads
+ * in (0, 1] (no signed readings), in integers throughout. With chainages cᵢ = Cᵢ/D (one
+ * common denominator), readings Rᵢ = rᵢ/qᵢ and kᵢ = (1 − Rᵢ)/Rᵢ = pᵢ/rᵢ (pᵢ = qᵢ − rᵢ), and
+ * Aᵢⱼ = Cⱼ − Cᵢ, the generic formulas (Stewart's relation, M. Stewart, *Some General Theorems*,
+ * 1746, Prop. II; see src/elevation/inline.ts) become, with
+ * K = p₁r₂r₃A₂₃ − p₂r₁r₃A₁₃ + p₃r₁r₂A₁₂ (derived):
+ *   H = A₁₂A₂₃A₁₃·r₁r₂r₃ / (D²K),
+ *   f = ((C₁ + C₂)K + A₂₃A₁₃r₃(p₁r₂ − p₂r₁)) / (2DK),
+ *   e = (4K·A₁₂A₂₃A₁₃·p₁r₂r₃ − G²) / (4D²K²) with G = −A₁₂K − A₂₃A₁₃r₃(p₁r₂ − p₂r₁),
+ * and the three residuals are exactly 0 (three equations, three unknowns). Undefined for any
+ * other input, and wherever the generic code reports an error, which it then does.
+ */
+function inlineHeight(input: unknown): { H: Fraction; footChainage: Fraction; footOffset: Fraction; residuals: Fraction[]; sign: 1 } | undefined {
+  if (input === null || typeof input !== 'object') return undefined;
+  const { chainages, vertical } = input as { chainages?: unknown; vertical?: unknown };
+  if (!Array.isArray(chainages) || !Array.isArray(vertical) || chainages.length !== 3 || vertical.length !== 3) return undefined;
+  const [c1, c2, c3] = chainages as unknown[];
+  const [R1, R2, R3] = vertical as unknown[];
+  if (!isPlainFraction(c1) || !isPlainFraction(c2) || !isPlainFraction(c3)) return undefined;
+  if (!isPlainFraction(R1) || !isPlainFraction(R2) || !isPlainFraction(R3)) return undefined;
+  // Spreads in (0, 1]: s = +1, 0 < n ≤ d.
+  if (R1.s < 0n || R1.n === 0n || R1.n > R1.d || R2.s < 0n || R2.n === 0n || R2.n > R2.d || R3.s < 0n || R3.n === 0n || R3.n > R3.d) return undefined;
+  const d1 = c1.d, d2 = c2.d, d3 = c3.d;
+  const D = d1 === d2 && d2 === d3 ? d1 : lcm(lcm(d1, d2), d3);
+  const C1 = scaled(c1, D), C2 = scaled(c2, D), C3 = scaled(c3, D);
+  if (C1 === C2 || C2 === C3 || C1 === C3) return undefined;
+  const r1 = R1.n, r2 = R2.n, r3 = R3.n;
+  const p1 = R1.d - r1, p2 = R2.d - r2, p3 = R3.d - r3;
+  const A12 = C2 - C1, A23 = C3 - C2, A13 = C3 - C1;
+  const K = p1 * r2 * r3 * A23 - p2 * r1 * r3 * A13 + p3 * r1 * r2 * A12;
+  if (K === 0n) return undefined;
+  const P = A12 * A23 * A13;
+  const D2 = D * D;
+  const Hn = P * r1 * r2 * r3, Hd = D2 * K;
+  if ((Hn < 0n) !== (Hd < 0n) || Hn === 0n) return undefined; // H ≤ 0
+  const w = A23 * A13 * r3 * (p1 * r2 - p2 * r1);
+  const Fn = (C1 + C2) * K + w, Fd = 2n * D * K;
+  const G = -A12 * K - w;
+  const En = 4n * K * P * p1 * r2 * r3 - G * G, Ed = 4n * D2 * K * K; // Ed > 0
+  if (En < 0n) return undefined; // e < 0
+  const zero = reduced(0n, 1n);
+  return {
+    H: normalSigned(Hn, Hd),
+    footChainage: normalSigned(Fn, Fd),
+    footOffset: normalSigned(En, Ed),
+    residuals: [zero, reduced(0n, 1n), reduced(0n, 1n)],
+    sign: 1,
+  };
+}
+
 /** The fused kernels of the rational arithmetic. @internal */
-export const rationalKernels: FusedKernels<Fraction> = Object.freeze({ triangle });
+export const rationalKernels: FusedKernels<Fraction> = Object.freeze({ triangle, inlineHeight });

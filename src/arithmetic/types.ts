@@ -127,6 +127,11 @@ export interface FusedTriangle<T> {
 export interface FusedKernels<T> {
   /** triangle measures from the coordinates of A1, A2, A3; `undefined` if degenerate. */
   triangle?(x1: T, y1: T, x2: T, y2: T, x3: T, y3: T): FusedTriangle<T> | undefined;
+  /**
+   * heightFromInlineReadings for the input as given (three stations, values of this
+   * arithmetic); `undefined` for anything else or anything the generic code rejects.
+   */
+  inlineHeight?(input: unknown): { H: T; footChainage: T; footOffset: T; residuals: T[]; sign: 1 } | undefined;
 }
 
 /** The value type of an arithmetic. */
