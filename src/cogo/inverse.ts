@@ -76,7 +76,8 @@ export function inverse<T, E extends boolean>(
     quadrance,
     distance: sqrtOf(A, quadrance),
     azimuth,
-    dms: formatDms(A, azimuth, decimals),
+    // An azimuth just below 360° may round to 360°00′00″: write it as 0°.
+    dms: formatDms(A, azimuth, decimals).replace(/^360°/, '0°'),
     quadrant: azimuthToQuadrant(A, azimuth, decimals),
   };
 }

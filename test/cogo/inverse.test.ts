@@ -97,3 +97,11 @@ describe('inverse and forward in rational', () => {
     );
   });
 });
+
+describe('inverse(A, P, Q).dms near north', () => {
+  it('writes an azimuth that rounds up to 360° as 0°00\'00.0"', () => {
+    // Azimuth 360° − 0.01″ (derived: tan of 0.01″ ≈ 4.848e-8).
+    const r = inverse(float, { x: 0, y: 0 }, { x: -4.848e-8, y: 1 });
+    expect(r.dms).toBe(`0°00'00.0"`);
+  });
+});
