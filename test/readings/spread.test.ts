@@ -23,9 +23,6 @@ const refSin2 = (deg: string): string => {
   const s = M.sin(r as never);
   return M.format(M.multiply(s, s), { notation: 'fixed', precision: 55 }) as string;
 };
-// The correctly rounded elementary functions may not have landed: measure what `rational` gives for π.
-const piError = Math.abs(Number(M.subtract(M.bignumber(rational.toPrecision(rational.pi, 50)), M.pi)));
-const elementaryIsAccurate = piError < 1e-30;
 
 describe('sinCosDegrees(A, θ) is exact where the value is rational', () => {
   const exact: [number, string, string][] = [
@@ -71,20 +68,30 @@ describe('spreadFromDegrees(A, θ) is sin²θ', () => {
       expect(Math.abs(float.toNumber(spreadFromDegrees(float, deg)) - want)).toBeLessThan(1e-15);
     }));
   });
-  it('rational is within 1e-15 relative of mathjs BigNumber sin² (the current elementary functions)', () => {
+  it('rational is within 1e-15 relative of mathjs BigNumber sin² (the float-level check)', () => {
     for (const deg of ['1', '12.582416666666666', '0.0001', '89.9999', '37', '179.5', '-71.25']) {
       const ref = Number(refSin2(deg));
       expect(Math.abs(rational.toNumber(spreadFromDegrees(rational, deg)) - ref) / ref).toBeLessThan(1e-15);
     }
   });
-  it.skipIf(!elementaryIsAccurate)('rational is within 1e-20 relative of mathjs BigNumber sin² (60 digits)', () => {
+  it('rational is within 1e-20 relative of mathjs BigNumber sin² (60 digits)', () => {
     for (const deg of ['1', '12.582416666666666', '0.0001', '89.9999', '37', '179.5', '-71.25', '1e-6']) {
       const got = M.bignumber(rational.toPrecision(spreadFromDegrees(rational, deg), 45));
       const ref = M.bignumber(refSin2(deg));
       expect(Number(M.abs(M.divide(M.subtract(got, ref), ref)))).toBeLessThan(1e-20);
     }
   });
-  it.skipIf(!elementaryIsAccurate)('degreesFromSpread in rational is within 1e-20 relative of mathjs asin (60 digits)', () => {
+  it('rational radians and gons are within 1e-20 relative of mathjs BigNumber (60 digits)', () => {
+    const rel = (got: string, ref: unknown) => Number(M.abs(M.divide(M.subtract(M.bignumber(got), ref as never), ref as never)));
+    expect(rel(rational.toPrecision(angleToDegrees(rational, '1', 'rad'), 45), M.divide(180, M.pi))).toBeLessThan(1e-20);
+    const s05 = M.sin(M.bignumber('0.5'));
+    expect(rel(rational.toPrecision(spreadFromDegrees(rational, '0.5', 'rad'), 45), M.multiply(s05, s05))).toBeLessThan(1e-20);
+    const g = M.sin(M.divide(M.multiply(M.bignumber('123.4567'), M.pi), 200) as never);
+    expect(rel(rational.toPrecision(spreadFromDegrees(rational, '123.4567', 'gon'), 45), M.multiply(g, g))).toBeLessThan(1e-20);
+    const c = M.cos(M.divide(M.multiply(M.bignumber('-271.3'), M.pi), 180) as never);
+    expect(rel(rational.toPrecision(sinCosDegrees(rational, '-271.3').cos, 45), c)).toBeLessThan(1e-20);
+  });
+  it('degreesFromSpread in rational is within 1e-20 relative of mathjs asin (60 digits)', () => {
     for (const s of ['1/3', '1e-8', '0.999999', '2/7']) {
       const ref = M.divide(M.multiply(M.asin(M.sqrt(M.bignumber(rational.toPrecision(rational.from(s), 50)))), 180), M.pi);
       const got = M.bignumber(rational.toPrecision(degreesFromSpread(rational, s), 45));
