@@ -14,5 +14,6 @@ import { intersectionTask } from './intersection.js';
 import { levellingTask } from './levelling.js';
 import { resectionTask } from './resection.js';
 import { trigHeightTask } from './trig-height.js';
+import { geodeticTask } from './geodetic.js';
 
-export const TASK_KINDS: readonly TaskKind[] = [heightTask, inlineHeightTask, trigHeightTask, pathGradeTask, triangleTask, traverseTask, areaTask, intersectionTask, resectionTask, levellingTask];
+export const TASK_KINDS: readonly TaskKind[] = [heightTask, inlineHeightTask, trigHeightTask, pathGradeTask, triangleTask, traverseTask, areaTask, intersectionTask, resectionTask, levellingTask, geodeticTask];
