@@ -162,7 +162,7 @@ export function collect() {
   const typesOnly = [];
   for (const exp of checker.getExportsOfModule(moduleSymbol)) {
     const name = exp.name;
-    if (name === 'arithmetic' || name === 'Value') fail(`src/index.ts exports ${name}, a name the bound entries define themselves`);
+    if (name === 'arithmetic' || name === 'Value' || name === 'Bound') fail(`src/index.ts exports ${name}, a name the bound entries define themselves`);
     const target = exp.flags & ts.SymbolFlags.Alias ? checker.getAliasedSymbol(exp) : exp;
     const decls = target.declarations ?? [];
     if (decls.length === 0) fail(`${name}: no declaration`);
@@ -233,8 +233,8 @@ function render(entry, { bound, values, typesOnly }) {
   L.push('');
   L.push(`/** The type of values of this entry's arithmetic: ${entry.valueDoc}. */`);
   L.push(`export type Value = ${entry.value};`);
-  L.push('/** A function type with its first (arithmetic) parameter dropped. */');
-  L.push('type Bound<F> = F extends (A: never, ...rest: infer P) => infer R ? (...rest: P) => R : never;');
+  L.push('/** The type of a bound function: the generic function type `F` with its first (arithmetic) parameter dropped. */');
+  L.push('export type Bound<F> = F extends (A: never, ...rest: infer P) => infer R ? (...rest: P) => R : never;');
   L.push('');
   L.push(...entry.arithmetic);
   for (const b of bound) {
@@ -244,7 +244,7 @@ function render(entry, { bound, values, typesOnly }) {
     const targs = b.loose ? '' : `<${b.typeArgs.map((t) => (t === 'VALUE' ? 'Value' : entry.exact)).join(', ')}>`;
     const type = `Bound<typeof g.${b.name}${targs}>`;
     L.push('');
-    L.push(`/** {@link g.${b.name} | ${b.name}} with the arithmetic fixed to \`${entry.kind}\`: the same arguments after the arithmetic. */`);
+    L.push(`/** {@link g.${b.name} | ${b.name}} with the arithmetic fixed to \`${entry.kind}\`: the same arguments after the arithmetic. @function */`);
     L.push(`export const ${b.name}: ${type} = (${params.join(', ')}) => g.${b.name}${targs}(${call});`);
   }
   if (values.length > 0) {

@@ -21,280 +21,319 @@ import type { FloatArithmetic } from './arithmetic/float.js';
 
 /** The type of values of this entry's arithmetic: a JS number. */
 export type Value = number;
-/** A function type with its first (arithmetic) parameter dropped. */
-type Bound<F> = F extends (A: never, ...rest: infer P) => infer R ? (...rest: P) => R : never;
+/** The type of a bound function: the generic function type `F` with its first (arithmetic) parameter dropped. */
+export type Bound<F> = F extends (A: never, ...rest: infer P) => infer R ? (...rest: P) => R : never;
 
 /** The bound arithmetic: {@link g.float | float} (JS numbers; NaN and ±Infinity refused). */
 export const arithmetic: FloatArithmetic = float;
 
-/** {@link g.allowableMisclosure | allowableMisclosure} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.allowableMisclosure | allowableMisclosure} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const allowableMisclosure: Bound<typeof g.allowableMisclosure<Value, false>> = (order, km) => g.allowableMisclosure<Value, false>(arithmetic, order, km);
 
-/** {@link g.angleToDegrees | angleToDegrees} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.angleToDegrees | angleToDegrees} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const angleToDegrees: Bound<typeof g.angleToDegrees<Value>> = (reading, unit) => g.angleToDegrees<Value>(arithmetic, reading, unit);
 
-/** {@link g.angularMisclosure | angularMisclosure} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.angularMisclosure | angularMisclosure} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const angularMisclosure: Bound<typeof g.angularMisclosure<Value>> = (angles) => g.angularMisclosure<Value>(arithmetic, angles);
 
-/** {@link g.archimedesResidual | archimedesResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.archimedesResidual | archimedesResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const archimedesResidual: Bound<typeof g.archimedesResidual<Value>> = (Q1, Q2, Q3, area) => g.archimedesResidual<Value>(arithmetic, Q1, Q2, Q3, area);
 
-/** {@link g.area | area} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.area | area} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const area: Bound<typeof g.area<Value>> = (points) => g.area<Value>(arithmetic, points);
 
-/** {@link g.asRoot | asRoot} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.asRoot | asRoot} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const asRoot: Bound<typeof g.asRoot<Value, false>> = (x) => g.asRoot<Value, false>(arithmetic, x);
 
-/** {@link g.azimuthToQuadrant | azimuthToQuadrant} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.azimuthToQuadrant | azimuthToQuadrant} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const azimuthToQuadrant: Bound<typeof g.azimuthToQuadrant<Value>> = (azimuth, secondsDecimals) => g.azimuthToQuadrant<Value>(arithmetic, azimuth, secondsDecimals);
 
-/** {@link g.bearingToAzimuth | bearingToAzimuth} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.bearingToAzimuth | bearingToAzimuth} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const bearingToAzimuth: Bound<typeof g.bearingToAzimuth<Value>> = (bearing) => g.bearingToAzimuth<Value>(arithmetic, bearing);
 
-/** {@link g.convertArea | convertArea} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.combinedFactor | combinedFactor} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const combinedFactor: Bound<typeof g.combinedFactor<Value>> = (heightFactor, scaleFactor) => g.combinedFactor<Value>(arithmetic, heightFactor, scaleFactor);
+
+/** {@link g.convertArea | convertArea} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const convertArea: Bound<typeof g.convertArea<Value>> = (value, from, to) => g.convertArea<Value>(arithmetic, value, from, to);
 
-/** {@link g.convertLength | convertLength} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.convertLength | convertLength} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const convertLength: Bound<typeof g.convertLength<Value>> = (value, from, to) => g.convertLength<Value>(arithmetic, value, from, to);
 
-/** {@link g.convertQuadrance | convertQuadrance} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.convertQuadrance | convertQuadrance} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const convertQuadrance: Bound<typeof g.convertQuadrance<Value>> = (quadrance, from, to) => g.convertQuadrance<Value>(arithmetic, quadrance, from, to);
 
-/** {@link g.cross | cross} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.cross | cross} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const cross: Bound<typeof g.cross<Value>> = (V, P, Q) => g.cross<Value>(arithmetic, V, P, Q);
 
-/** {@link g.crossLawResidual | crossLawResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.crossLawResidual | crossLawResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const crossLawResidual: Bound<typeof g.crossLawResidual<Value>> = (Q1, Q2, Q3, s3) => g.crossLawResidual<Value>(arithmetic, Q1, Q2, Q3, s3);
 
-/** {@link g.curvatureRefraction | curvatureRefraction} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.curvatureRefraction | curvatureRefraction} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const curvatureRefraction: Bound<typeof g.curvatureRefraction<Value>> = (distance, options) => g.curvatureRefraction<Value>(arithmetic, distance, options);
 
-/** {@link g.degreesFromSpread | degreesFromSpread} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.degreesFromSpread | degreesFromSpread} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const degreesFromSpread: Bound<typeof g.degreesFromSpread<Value>> = (s) => g.degreesFromSpread<Value>(arithmetic, s);
 
-/** {@link g.degreesToUnit | degreesToUnit} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.degreesToUnit | degreesToUnit} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const degreesToUnit: Bound<typeof g.degreesToUnit<Value>> = (degrees, unit) => g.degreesToUnit<Value>(arithmetic, degrees, unit);
 
-/** {@link g.elevationFromVertical | elevationFromVertical} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.elevationFromVertical | elevationFromVertical} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const elevationFromVertical: Bound<typeof g.elevationFromVertical<Value>> = (reading) => g.elevationFromVertical<Value>(arithmetic, reading);
 
-/** {@link g.ellipsoidParameters | ellipsoidParameters} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.ellipsoidParameters | ellipsoidParameters} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const ellipsoidParameters: Bound<typeof g.ellipsoidParameters<Value>> = (ellipsoid) => g.ellipsoidParameters<Value>(arithmetic, ellipsoid);
 
-/** {@link g.footOfPerpendicular | footOfPerpendicular} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.enuFromGeocentric | enuFromGeocentric} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const enuFromGeocentric: Bound<typeof g.enuFromGeocentric<Value>> = (origin, point, ellipsoid) => g.enuFromGeocentric<Value>(arithmetic, origin, point, ellipsoid);
+
+/** {@link g.enuRotation | enuRotation} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const enuRotation: Bound<typeof g.enuRotation<Value>> = (origin) => g.enuRotation<Value>(arithmetic, origin);
+
+/** {@link g.flatEarthError | flatEarthError} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const flatEarthError: Bound<typeof g.flatEarthError<Value>> = (distance, radius) => g.flatEarthError<Value>(arithmetic, distance, radius);
+
+/** {@link g.footOfPerpendicular | footOfPerpendicular} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const footOfPerpendicular: Bound<typeof g.footOfPerpendicular<Value>> = (P, l) => g.footOfPerpendicular<Value>(arithmetic, P, l);
 
-/** {@link g.formatDms | formatDms} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.formatDms | formatDms} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const formatDms: Bound<typeof g.formatDms<Value>> = (degrees, secondsDecimals) => g.formatDms<Value>(arithmetic, degrees, secondsDecimals);
 
-/** {@link g.forward | forward} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.forward | forward} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const forward: Bound<typeof g.forward<Value>> = (P, bearing, distance) => g.forward<Value>(arithmetic, P, bearing, distance);
 
-/** {@link g.geocentricToGeodetic | geocentricToGeodetic} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.gaussianMeanRadius | gaussianMeanRadius} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const gaussianMeanRadius: Bound<typeof g.gaussianMeanRadius<Value>> = (lat, ellipsoid) => g.gaussianMeanRadius<Value>(arithmetic, lat, ellipsoid);
+
+/** {@link g.geocentricFromEnu | geocentricFromEnu} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const geocentricFromEnu: Bound<typeof g.geocentricFromEnu<Value>> = (origin, local, ellipsoid) => g.geocentricFromEnu<Value>(arithmetic, origin, local, ellipsoid);
+
+/** {@link g.geocentricToGeodetic | geocentricToGeodetic} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const geocentricToGeodetic: Bound<typeof g.geocentricToGeodetic<Value>> = (point, ellipsoid) => g.geocentricToGeodetic<Value>(arithmetic, point, ellipsoid);
 
-/** {@link g.geodeticToGeocentric | geodeticToGeocentric} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.geodeticToGeocentric | geodeticToGeocentric} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const geodeticToGeocentric: Bound<typeof g.geodeticToGeocentric<Value>> = (point, ellipsoid) => g.geodeticToGeocentric<Value>(arithmetic, point, ellipsoid);
 
-/** {@link g.gradeFromSpread | gradeFromSpread} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.gradeFromSpread | gradeFromSpread} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const gradeFromSpread: Bound<typeof g.gradeFromSpread<Value, false>> = (s) => g.gradeFromSpread<Value, false>(arithmetic, s);
 
-/** {@link g.gradeSquaredFromSpread | gradeSquaredFromSpread} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.gradeSquaredFromSpread | gradeSquaredFromSpread} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const gradeSquaredFromSpread: Bound<typeof g.gradeSquaredFromSpread<Value>> = (s) => g.gradeSquaredFromSpread<Value>(arithmetic, s);
 
-/** {@link g.heightFromBase | heightFromBase} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.gridToGround | gridToGround} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const gridToGround: Bound<typeof g.gridToGround<Value>> = (grid, factor) => g.gridToGround<Value>(arithmetic, grid, factor);
+
+/** {@link g.groundToGrid | groundToGrid} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const groundToGrid: Bound<typeof g.groundToGrid<Value>> = (ground, factor) => g.groundToGrid<Value>(arithmetic, ground, factor);
+
+/** {@link g.heightFromBase | heightFromBase} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const heightFromBase: Bound<typeof g.heightFromBase<Value, false>> = (input) => g.heightFromBase<Value, false>(arithmetic, input);
 
-/** {@link g.heightFromInlineQuadrances | heightFromInlineQuadrances} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.heightFromInlineQuadrances | heightFromInlineQuadrances} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const heightFromInlineQuadrances: Bound<typeof g.heightFromInlineQuadrances<Value, false>> = (input) => g.heightFromInlineQuadrances<Value, false>(arithmetic, input);
 
-/** {@link g.heightFromInlineReadings | heightFromInlineReadings} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.heightFromInlineReadings | heightFromInlineReadings} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const heightFromInlineReadings: Bound<typeof g.heightFromInlineReadings<Value>> = (input) => g.heightFromInlineReadings<Value>(arithmetic, input);
 
-/** {@link g.heightFromReading | heightFromReading} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.heightFromReading | heightFromReading} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const heightFromReading: Bound<typeof g.heightFromReading<Value>> = (input) => g.heightFromReading<Value>(arithmetic, input);
 
-/** {@link g.heightFromTwoStations | heightFromTwoStations} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.heightFromTwoStations | heightFromTwoStations} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const heightFromTwoStations: Bound<typeof g.heightFromTwoStations<Value>> = (input) => g.heightFromTwoStations<Value>(arithmetic, input);
 
-/** {@link g.horizontalFromHeight | horizontalFromHeight} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.heightReductionFactor | heightReductionFactor} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const heightReductionFactor: Bound<typeof g.heightReductionFactor<Value>> = (h, radius) => g.heightReductionFactor<Value>(arithmetic, h, radius);
+
+/** {@link g.horizontalFromHeight | horizontalFromHeight} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const horizontalFromHeight: Bound<typeof g.horizontalFromHeight<Value>> = (input) => g.horizontalFromHeight<Value>(arithmetic, input);
 
-/** {@link g.intersectBearings | intersectBearings} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.intersectBearings | intersectBearings} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const intersectBearings: Bound<typeof g.intersectBearings<Value>> = (P, bearingP, Q, bearingQ) => g.intersectBearings<Value>(arithmetic, P, bearingP, Q, bearingQ);
 
-/** {@link g.intersectCircles | intersectCircles} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.intersectCircles | intersectCircles} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const intersectCircles: Bound<typeof g.intersectCircles<Value, false>> = (circle1, circle2) => g.intersectCircles<Value, false>(arithmetic, circle1, circle2);
 
-/** {@link g.intersectLineCircle | intersectLineCircle} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.intersectLineCircle | intersectLineCircle} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const intersectLineCircle: Bound<typeof g.intersectLineCircle<Value, false>> = (P1, P2, circle) => g.intersectLineCircle<Value, false>(arithmetic, P1, P2, circle);
 
-/** {@link g.intersectLines | intersectLines} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.intersectLines | intersectLines} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const intersectLines: Bound<typeof g.intersectLines<Value>> = (P1, P2, P3, P4) => g.intersectLines<Value>(arithmetic, P1, P2, P3, P4);
 
-/** {@link g.inverse | inverse} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.inverse | inverse} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const inverse: Bound<typeof g.inverse<Value, false>> = (P, Q, options) => g.inverse<Value, false>(arithmetic, P, Q, options);
 
-/** {@link g.isOnLine | isOnLine} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.isOnLine | isOnLine} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const isOnLine: Bound<typeof g.isOnLine<Value>> = (P, l) => g.isOnLine<Value>(arithmetic, P, l);
 
-/** {@link g.isParallel | isParallel} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.isParallel | isParallel} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const isParallel: Bound<typeof g.isParallel<Value>> = (l1, l2) => g.isParallel<Value>(arithmetic, l1, l2);
 
-/** {@link g.isPerpendicular | isPerpendicular} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.isPerpendicular | isPerpendicular} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const isPerpendicular: Bound<typeof g.isPerpendicular<Value>> = (l1, l2) => g.isPerpendicular<Value>(arithmetic, l1, l2);
 
-/** {@link g.lengthToMetres | lengthToMetres} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.lengthToMetres | lengthToMetres} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const lengthToMetres: Bound<typeof g.lengthToMetres<Value>> = (value, unit) => g.lengthToMetres<Value>(arithmetic, value, unit);
 
-/** {@link g.levelRun | levelRun} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.levelRun | levelRun} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const levelRun: Bound<typeof g.levelRun<Value, false>> = (input) => g.levelRun<Value, false>(arithmetic, input);
 
-/** {@link g.line | line} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.line | line} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const line: Bound<typeof g.line<Value>> = (a, b, c) => g.line<Value>(arithmetic, a, b, c);
 
-/** {@link g.lineThrough | lineThrough} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.lineThrough | lineThrough} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const lineThrough: Bound<typeof g.lineThrough<Value>> = (P, Q) => g.lineThrough<Value>(arithmetic, P, Q);
 
-/** {@link g.metresToLength | metresToLength} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.meridianRadius | meridianRadius} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const meridianRadius: Bound<typeof g.meridianRadius<Value>> = (lat, ellipsoid) => g.meridianRadius<Value>(arithmetic, lat, ellipsoid);
+
+/** {@link g.metresToLength | metresToLength} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const metresToLength: Bound<typeof g.metresToLength<Value>> = (metres, unit) => g.metresToLength<Value>(arithmetic, metres, unit);
 
-/** {@link g.pathGrade | pathGrade} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.pathGrade | pathGrade} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const pathGrade: Bound<typeof g.pathGrade<Value>> = (input) => g.pathGrade<Value>(arithmetic, input);
 
-/** {@link g.pathOffset | pathOffset} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.pathOffset | pathOffset} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const pathOffset: Bound<typeof g.pathOffset<Value>> = (input) => g.pathOffset<Value>(arithmetic, input);
 
-/** {@link g.perimeter | perimeter} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.perimeter | perimeter} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const perimeter: Bound<typeof g.perimeter<Value>> = (points) => g.perimeter<Value>(arithmetic, points);
 
-/** {@link g.point | point} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.point | point} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const point: Bound<typeof g.point<Value>> = (x, y) => g.point<Value>(arithmetic, x, y);
 
-/** {@link g.polygonArea | polygonArea} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.polygonArea | polygonArea} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const polygonArea: Bound<typeof g.polygonArea<Value>> = (points, options) => g.polygonArea<Value>(arithmetic, points, options);
 
-/** {@link g.pythagorasResidual | pythagorasResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.primeVerticalRadius | primeVerticalRadius} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const primeVerticalRadius: Bound<typeof g.primeVerticalRadius<Value>> = (lat, ellipsoid) => g.primeVerticalRadius<Value>(arithmetic, lat, ellipsoid);
+
+/** {@link g.pythagorasResidual | pythagorasResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const pythagorasResidual: Bound<typeof g.pythagorasResidual<Value>> = (Q1, Q2, Q3) => g.pythagorasResidual<Value>(arithmetic, Q1, Q2, Q3);
 
-/** {@link g.quadrance | quadrance} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.quadrance | quadrance} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const quadrance: Bound<typeof g.quadrance<Value>> = (P, Q) => g.quadrance<Value>(arithmetic, P, Q);
 
-/** {@link g.quadranceToLine | quadranceToLine} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.quadranceToLine | quadranceToLine} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const quadranceToLine: Bound<typeof g.quadranceToLine<Value>> = (P, l) => g.quadranceToLine<Value>(arithmetic, P, l);
 
-/** {@link g.quadrea | quadrea} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.quadrea | quadrea} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const quadrea: Bound<typeof g.quadrea<Value>> = (Q1, Q2, Q3) => g.quadrea<Value>(arithmetic, Q1, Q2, Q3);
 
-/** {@link g.reciprocalTrigHeight | reciprocalTrigHeight} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.radiusInAzimuth | radiusInAzimuth} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const radiusInAzimuth: Bound<typeof g.radiusInAzimuth<Value>> = (lat, azimuth, ellipsoid) => g.radiusInAzimuth<Value>(arithmetic, lat, azimuth, ellipsoid);
+
+/** {@link g.reciprocalTrigHeight | reciprocalTrigHeight} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const reciprocalTrigHeight: Bound<typeof g.reciprocalTrigHeight<Value, false>> = (input) => g.reciprocalTrigHeight<Value, false>(arithmetic, input);
 
-/** {@link g.resection | resection} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.resection | resection} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const resection: Bound<typeof g.resection<Value>> = (input) => g.resection<Value>(arithmetic, input);
 
-/** {@link g.rootToNumber | rootToNumber} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.rootToNumber | rootToNumber} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const rootToNumber: Bound<typeof g.rootToNumber<Value, false>> = (r) => g.rootToNumber<Value, false>(arithmetic, r);
 
-/** {@link g.rootToPrecision | rootToPrecision} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.rootToPrecision | rootToPrecision} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const rootToPrecision: Bound<typeof g.rootToPrecision<Value, false>> = (r, digits) => g.rootToPrecision<Value, false>(arithmetic, r, digits);
 
-/** {@link g.rootToString | rootToString} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.rootToString | rootToString} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const rootToString: Bound<typeof g.rootToString<Value, false>> = (r) => g.rootToString<Value, false>(arithmetic, r);
 
-/** {@link g.sinCosDegrees | sinCosDegrees} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.sinCosDegrees | sinCosDegrees} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const sinCosDegrees: Bound<typeof g.sinCosDegrees<Value>> = (degrees) => g.sinCosDegrees<Value>(arithmetic, degrees);
 
-/** {@link g.solveQuadratic | solveQuadratic} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.solveQuadratic | solveQuadratic} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const solveQuadratic: Bound<typeof g.solveQuadratic<Value, false>> = (a, b, c) => g.solveQuadratic<Value, false>(arithmetic, a, b, c);
 
-/** {@link g.solveStewart | solveStewart} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.solveStewart | solveStewart} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const solveStewart: Bound<typeof g.solveStewart<Value, false>> = (data) => g.solveStewart<Value, false>(arithmetic, data);
 
-/** {@link g.solveStewartQuadrances | solveStewartQuadrances} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.solveStewartQuadrances | solveStewartQuadrances} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const solveStewartQuadrances: Bound<typeof g.solveStewartQuadrances<Value, false>> = (data) => g.solveStewartQuadrances<Value, false>(arithmetic, data);
 
-/** {@link g.solveTriangle | solveTriangle} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.solveTriangle | solveTriangle} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const solveTriangle: Bound<typeof g.solveTriangle<Value, false>> = (known) => g.solveTriangle<Value, false>(arithmetic, known);
 
-/** {@link g.spread | spread} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.spread | spread} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const spread: Bound<typeof g.spread<Value>> = (V, P, Q) => g.spread<Value>(arithmetic, V, P, Q);
 
-/** {@link g.spreadFromDegrees | spreadFromDegrees} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.spreadFromDegrees | spreadFromDegrees} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const spreadFromDegrees: Bound<typeof g.spreadFromDegrees<Value>> = (angle, unit) => g.spreadFromDegrees<Value>(arithmetic, angle, unit);
 
-/** {@link g.spreadFromGrade | spreadFromGrade} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.spreadFromGrade | spreadFromGrade} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const spreadFromGrade: Bound<typeof g.spreadFromGrade<Value>> = (percent) => g.spreadFromGrade<Value>(arithmetic, percent);
 
-/** {@link g.spreadFromOneIn | spreadFromOneIn} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.spreadFromOneIn | spreadFromOneIn} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const spreadFromOneIn: Bound<typeof g.spreadFromOneIn<Value>> = (n) => g.spreadFromOneIn<Value>(arithmetic, n);
 
-/** {@link g.spreadFromPerMille | spreadFromPerMille} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.spreadFromPerMille | spreadFromPerMille} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const spreadFromPerMille: Bound<typeof g.spreadFromPerMille<Value>> = (perMille) => g.spreadFromPerMille<Value>(arithmetic, perMille);
 
-/** {@link g.spreadFromRatio | spreadFromRatio} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.spreadFromRatio | spreadFromRatio} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const spreadFromRatio: Bound<typeof g.spreadFromRatio<Value>> = (rise, run) => g.spreadFromRatio<Value>(arithmetic, rise, run);
 
-/** {@link g.spreadLawResidual | spreadLawResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.spreadLawResidual | spreadLawResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const spreadLawResidual: Bound<typeof g.spreadLawResidual<Value>> = (Qa, sa, Qb, sb) => g.spreadLawResidual<Value>(arithmetic, Qa, sa, Qb, sb);
 
-/** {@link g.spreadOfLines | spreadOfLines} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.spreadOfLines | spreadOfLines} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const spreadOfLines: Bound<typeof g.spreadOfLines<Value>> = (l1, l2) => g.spreadOfLines<Value>(arithmetic, l1, l2);
 
-/** {@link g.spreadOfVectors | spreadOfVectors} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.spreadOfVectors | spreadOfVectors} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const spreadOfVectors: Bound<typeof g.spreadOfVectors<Value>> = (u, v) => g.spreadOfVectors<Value>(arithmetic, u, v);
 
-/** {@link g.sqrtOf | sqrtOf} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.sqrtOf | sqrtOf} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const sqrtOf: Bound<typeof g.sqrtOf<Value, false>> = (x) => g.sqrtOf<Value, false>(arithmetic, x);
 
-/** {@link g.stewartQuadranceResidual | stewartQuadranceResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.stewartQuadranceResidual | stewartQuadranceResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const stewartQuadranceResidual: Bound<typeof g.stewartQuadranceResidual<Value>> = (data) => g.stewartQuadranceResidual<Value>(arithmetic, data);
 
-/** {@link g.stewartResidual | stewartResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.stewartResidual | stewartResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const stewartResidual: Bound<typeof g.stewartResidual<Value>> = (data) => g.stewartResidual<Value>(arithmetic, data);
 
-/** {@link g.surd | surd} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.surd | surd} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const surd: Bound<typeof g.surd<Value>> = (a, b, d) => g.surd<Value>(arithmetic, a, b, d);
 
-/** {@link g.traverse | traverse} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.transverseMercatorFactors | transverseMercatorFactors} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const transverseMercatorFactors: Bound<typeof g.transverseMercatorFactors<Value>> = (point, projection) => g.transverseMercatorFactors<Value>(arithmetic, point, projection);
+
+/** {@link g.traverse | traverse} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const traverse: Bound<typeof g.traverse<Value, false>> = (input) => g.traverse<Value, false>(arithmetic, input);
 
-/** {@link g.triangle | triangle} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.triangle | triangle} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const triangle: Bound<typeof g.triangle<Value>> = (A1, A2, A3) => g.triangle<Value>(arithmetic, A1, A2, A3);
 
-/** {@link g.trigHeight | trigHeight} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.trigHeight | trigHeight} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const trigHeight: Bound<typeof g.trigHeight<Value, false>> = (sight) => g.trigHeight<Value, false>(arithmetic, sight);
 
-/** {@link g.tripleQuadResidual | tripleQuadResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.tripleQuadResidual | tripleQuadResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const tripleQuadResidual: Bound<typeof g.tripleQuadResidual<Value>> = (Q1, Q2, Q3) => g.tripleQuadResidual<Value>(arithmetic, Q1, Q2, Q3);
 
-/** {@link g.tripleSpreadResidual | tripleSpreadResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.tripleSpreadResidual | tripleSpreadResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const tripleSpreadResidual: Bound<typeof g.tripleSpreadResidual<Value>> = (s1, s2, s3) => g.tripleSpreadResidual<Value>(arithmetic, s1, s2, s3);
 
-/** {@link g.uncertain | uncertain} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.uncertain | uncertain} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const uncertain: Bound<typeof g.uncertain<Value, false>> = () => g.uncertain<Value, false>(arithmetic);
 
-/** {@link g.vectorQuadrance | vectorQuadrance} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.vectorQuadrance | vectorQuadrance} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const vectorQuadrance: Bound<typeof g.vectorQuadrance<Value>> = (v) => g.vectorQuadrance<Value>(arithmetic, v);
 
-/** {@link g.vertical | vertical} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.vertical | vertical} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const vertical: Bound<typeof g.vertical<Value>> = (spread, sign) => g.vertical<Value>(arithmetic, spread, sign);
 
-/** {@link g.verticalFromAngle | verticalFromAngle} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.verticalFromAngle | verticalFromAngle} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const verticalFromAngle: Bound<typeof g.verticalFromAngle<Value>> = (angle, options) => g.verticalFromAngle<Value>(arithmetic, angle, options);
 
-/** {@link g.verticalFromHeight | verticalFromHeight} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.verticalFromHeight | verticalFromHeight} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const verticalFromHeight: Bound<typeof g.verticalFromHeight<Value>> = (input) => g.verticalFromHeight<Value>(arithmetic, input);
 
-/** {@link g.verticalFromRatio | verticalFromRatio} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.verticalFromRatio | verticalFromRatio} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const verticalFromRatio: Bound<typeof g.verticalFromRatio<Value>> = (rise, run) => g.verticalFromRatio<Value>(arithmetic, rise, run);
 
-/** {@link g.verticalFromSlope | verticalFromSlope} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.verticalFromSlope | verticalFromSlope} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const verticalFromSlope: Bound<typeof g.verticalFromSlope<Value>> = (text) => g.verticalFromSlope<Value>(arithmetic, text);
 
-/** {@link g.zenithFromVertical | zenithFromVertical} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.zenithFromVertical | zenithFromVertical} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const zenithFromVertical: Bound<typeof g.zenithFromVertical<Value>> = (reading) => g.zenithFromVertical<Value>(arithmetic, reading);
 
-/** {@link g.zenithToElevation | zenithToElevation} with the arithmetic fixed to `float`: the same arguments after the arithmetic. */
+/** {@link g.zenithToElevation | zenithToElevation} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const zenithToElevation: Bound<typeof g.zenithToElevation<Value>> = (degrees) => g.zenithToElevation<Value>(arithmetic, degrees);
 
 export {
@@ -303,20 +342,22 @@ export {
   ellipsoidByName, ERROR_CODES, float, GRS80, isSurd, LEVELLING_ORDERS, MAX_DECIMAL_DIGITS,
   MAX_EXPONENT, MAX_INPUT_LENGTH, measured, measuredAngle, measuredDistance, measuredGrade,
   measuredQuadrance, measuredSpread, measuredVertical, METRES_PER_UNIT, monteCarlo,
-  QuadspreadError, randomStream, rational, RATIONAL_TRANSCENDENTAL_DIGITS, readRatio, roundOff,
-  sensitivities, spreadOfAngle, Uncertain, verticalOfAngle, WGS84, withDerivative,
+  normalInputs, QuadspreadError, randomStream, rational, RATIONAL_TRANSCENDENTAL_DIGITS,
+  readRatio, roundOff, sensitivities, spreadOfAngle, Uncertain, verticalOfAngle, WGS84,
+  withDerivative,
 } from './index.js';
 export type {
   AllowableMisclosure, AngleUnit, AngularMisclosure, AreaUnit, Arithmetic, BaseHeight,
   BearingIntersection, Budget, BudgetOptions, CircleInput, Contribution, CorrelationTerm,
   CurvatureOptions, Decimal, DecimalArithmetic, DecimalElementary, Ellipsoid,
-  EllipsoidDefinition, EllipsoidParameters, ErrorCode, FloatArithmetic, FootSide, Geocentric,
-  Geodetic, GeodeticInput, Gradient, InlineHeight, InlineQuadranceHeight, InputDistribution,
-  Inverse, LengthUnit, LevelCheck, LevellingOrder, LevelRow, LevelRun, LevelRunInput,
-  LevelSight, Line, MonteCarloOptions, MonteCarloResult, Numeric, OffsetMeasure, Point,
-  PolygonArea, RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalTrigHeight,
-  Resection, ResectionInput, Root, RoundOff, StewartChainages, StewartQuadrances, Surd,
-  Traverse, TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg, Triangle,
-  TriangleMeasures, TrigHeight, TrigSight, TwoStationHeight, UncertainArithmetic,
-  UncertainInput, ValueOf, VerticalInput, VerticalKind, VerticalReading,
+  EllipsoidDefinition, EllipsoidParameters, Enu, ErrorCode, FlatEarthError, FloatArithmetic,
+  FootSide, Geocentric, Geodetic, GeodeticInput, Gradient, InlineHeight, InlineQuadranceHeight,
+  InputDistribution, Inverse, LengthUnit, LevelCheck, LevellingOrder, LevelRow, LevelRun,
+  LevelRunInput, LevelSight, Line, Matrix3, MonteCarloOptions, MonteCarloResult, Numeric,
+  OffsetMeasure, Point, PolygonArea, RandomStream, Ratio, Rational, RationalArithmetic,
+  ReciprocalTrigHeight, Resection, ResectionInput, Root, RoundOff, StewartChainages,
+  StewartQuadrances, Surd, TmFactors, TransverseMercator, Traverse, TraverseClosure,
+  TraverseCourse, TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
+  TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf, VerticalInput, VerticalKind,
+  VerticalReading,
 } from './index.js';

@@ -1,0 +1,48 @@
+// Every @example in the sources runs, and every `//=>` result in it holds: so no example
+// in the API reference can go stale. Examples import from 'quadspread' (served here by
+// src/index.ts) or from 'quadspread/rational' | 'quadspread/decimal' | 'quadspread/float'
+// (src/rational.ts, src/decimal.ts, src/float.ts).
+import { describe, it, expect } from 'vitest';
+import * as generic from '../../src/index.js';
+import * as rationalEntry from '../../src/rational.js';
+import * as decimalEntry from '../../src/decimal.js';
+import * as floatEntry from '../../src/float.js';
+import { compileExample, examplesOf, sourceFiles, type Example } from './extract.js';
+
+const MODULES: Record<string, unknown> = {
+  quadspread: generic,
+  'quadspread/rational': rationalEntry,
+  'quadspread/decimal': decimalEntry,
+  'quadspread/float': floatEntry,
+};
+
+function requireFor(ex: Example) {
+  return (id: string) => {
+    if (id in MODULES) return MODULES[id];
+    throw new Error(`${ex.file}:${ex.line}: examples import only from 'quadspread' or its entries, not '${id}'`);
+  };
+}
+
+const AsyncFunction = Object.getPrototypeOf(async () => {}).constructor as new (...args: string[]) => (...args: unknown[]) => Promise<void>;
+
+const all = sourceFiles().flatMap((f) => examplesOf(f));
+
+describe('the examples of the API reference', () => {
+  it('are found in the sources (one per documented export at least)', () => {
+    expect(all.length).toBeGreaterThan(50);
+  });
+
+  for (const ex of all) {
+    it(`${ex.file}:${ex.line} (${ex.name}) runs and its //=> results hold`, async () => {
+      const { js, checks } = compileExample(ex);
+      const seen = new Set<number>();
+      const check = (actual: unknown, expected: unknown, site: number) => {
+        seen.add(site);
+        expect(actual, `${ex.file}:${ex.line} check #${site + 1}`).toEqual(expected);
+      };
+      await new AsyncFunction('require', '__check', 'exports', 'module', js)(requireFor(ex), check, {}, { exports: {} });
+      // Every check ran (a check inside a catch block that was never entered fails here).
+      expect([...seen].sort((a, b) => a - b)).toEqual([...Array(checks).keys()]);
+    });
+  }
+});
