@@ -8,7 +8,7 @@ import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { ellipsoidParameters, readEllipsoid, type Ellipsoid } from './ellipsoid.js';
-import { claimedDigits, readHeight, readLatitude, readLongitude, root, tenToMinus, toDegrees } from './internal.js';
+import { claimedDigits, decimalFor, readHeight, readLatitude, readLongitude, root, tenToMinus, toDegrees, toDecimalText } from './internal.js';
 
 /** Geodetic coordinates: latitude and longitude in decimal degrees (north, east positive), height in metres above the ellipsoid. */
 export interface Geodetic<T> {
@@ -127,6 +127,14 @@ export function geocentricToGeodetic<T>(A: Arithmetic<T>, point: Geocentric<Nume
   const Y = A.from(point.Y as Numeric<T>);
   const Z = A.from(point.Z as Numeric<T>);
   const p2 = A.add(A.mul(X, X), A.mul(Y, Y));
+  if (A.exact && !A.isZero(p2)) {
+    // The result is an approximation in any case: iterate in decimal with 8 guard digits,
+    // so that exact fractions do not grow, and read the result back exactly.
+    const d = claimedDigits(A) + 8;
+    const D = decimalFor(d);
+    const g = geocentricToGeodetic(D, { X: toDecimalText(A, X, d), Y: toDecimalText(A, Y, d), Z: toDecimalText(A, Z, d) }, readEllipsoid(ellipsoid, 'geocentricToGeodetic(ellipsoid)'));
+    return { lat: A.from(D.toString(g.lat)), lon: A.from(D.toString(g.lon)), h: A.from(D.toString(g.h)) };
+  }
   if (A.isZero(p2)) {
     // On the polar axis: φ = ±90°, h = |Z| − b, λ taken as 0.
     if (A.isZero(Z)) throw new QuadspreadError('INVALID_ARGUMENT', where, 'the centre of the ellipsoid has no unique geodetic coordinates');
@@ -144,6 +152,8 @@ export function geocentricToGeodetic<T>(A: Arithmetic<T>, point: Geocentric<Nume
   // tan u₀ = aZ/(bp) (Bowring 1976)
   let u = unit(A.mul(E.b, p), A.mul(E.a, Z));
   let phi: { c: T; s: T } | undefined;
+  let prev: T | undefined;
+  const noise = tenToMinus(A, Math.max(1, digits - 2));
   for (let i = 0; i < MAX_ITERATIONS; i++) {
     // tan φ = (Z + e′² b sin³u) / (p − e² a cos³u)  (Bowring 1976)
     const num = A.add(Z, A.mul(A.mul(E.ep2, E.b), cube(u.s)));
@@ -158,6 +168,11 @@ export function geocentricToGeodetic<T>(A: Arithmetic<T>, point: Geocentric<Nume
       const change = A.abs(A.sub(A.mul(phi.c, next.s), A.mul(phi.s, next.c)));
       phi = next;
       if (A.cmp(change, tol) <= 0) return finish(A, phi, p, X, Y, Z, E.a, E.e2);
+      // Converged to the rounding noise of an inexact arithmetic: a change that no longer
+      // shrinks (the true iteration gains about 10 digits a step) and is within 100 units
+      // of the last digit.
+      if (prev !== undefined && A.cmp(change, noise) <= 0 && A.cmp(A.add(change, change), prev) >= 0) return finish(A, phi, p, X, Y, Z, E.a, E.e2);
+      prev = change;
     } else {
       phi = next;
     }

@@ -16,7 +16,7 @@ import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { ellipsoidParameters, readEllipsoid, type Ellipsoid } from './ellipsoid.js';
-import { claimedDigits, readHeight, readLatitude, readLongitude, root, settle, tenToMinus, toDegrees } from './internal.js';
+import { claimedDigits, decimalFor, readHeight, readLatitude, readLongitude, root, settle, tenToMinus, toDegrees, toDecimalText } from './internal.js';
 
 /**
  * The height reduction factor R/(R + h): a horizontal distance measured on the ground at
@@ -145,6 +145,18 @@ export function transverseMercatorFactors<T>(
   const k0 = A.from(projection.k0 ?? 1);
   if (A.sign(k0) <= 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where}(projection.k0)`, `${show(projection.k0)} is not positive`);
   const lat = readLatitude(A, point.lat, `${where}(point.lat)`);
+  if (A.exact) {
+    // An approximation in any case: evaluate in decimal with 8 guard digits and read the
+    // result back exactly, so that exact fractions do not grow through the series.
+    const d = claimedDigits(A) + 8;
+    const D = decimalFor(d);
+    const r = transverseMercatorFactors(
+      D,
+      { lat: toDecimalText(A, lat, d), lon: toDecimalText(A, readLongitude(A, point.lon, `${where}(point.lon)`), d) },
+      { lon0: toDecimalText(A, readLongitude(A, projection.lon0 as Numeric<T>, `${where}(projection.lon0)`), d), k0: toDecimalText(A, k0, d), ellipsoid: projection.ellipsoid },
+    );
+    return { k: A.from(D.toString(r.k)), convergence: A.from(D.toString(r.convergence)) };
+  }
   const dlon = A.sub(readLongitude(A, point.lon, `${where}(point.lon)`), readLongitude(A, projection.lon0 as Numeric<T>, `${where}(projection.lon0)`));
   const { sin: sp, cos: cp } = sinCosDegrees(A, lat);
   const { sin: sl, cos: cl } = sinCosDegrees(A, dlon);

@@ -8,6 +8,7 @@
 import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { RATIONAL_TRANSCENDENTAL_DIGITS } from '../arithmetic/rational.js';
+import { decimal, type DecimalArithmetic } from '../arithmetic/decimal.js';
 import { angleToDegrees } from '../readings/angle.js';
 import { approxSqrt } from '../readings/numeric.js';
 
@@ -72,4 +73,24 @@ export function toDegrees<T>(A: Arithmetic<T>, rad: T): T {
  */
 export function settle<T>(A: Arithmetic<T>, x: T, digits: number): T {
   return A.exact ? A.from(A.toPrecision(x, digits + 8)) : x;
+}
+
+const decimalMemo = new Map<number, DecimalArithmetic>();
+/**
+ * @internal A decimal arithmetic with `digits` significant digits (a pure memo: decimal
+ * arithmetics are immutable). Exact arithmetics run iterations and series whose results
+ * are approximations anyway in it, so that fractions do not grow.
+ */
+export function decimalFor(digits: number): DecimalArithmetic {
+  let D = decimalMemo.get(digits);
+  if (D === undefined) {
+    D = decimal(digits);
+    decimalMemo.set(digits, D);
+  }
+  return D;
+}
+
+/** @internal A value of an exact arithmetic as text for a decimal arithmetic of `digits` digits. */
+export function toDecimalText<T>(A: Arithmetic<T>, x: T, digits: number): string {
+  return A.toPrecision(x, digits + 4);
 }
