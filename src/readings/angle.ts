@@ -6,6 +6,7 @@
  */
 import { MAX_INPUT_LENGTH, QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+import { guardOf, viaGuard } from './numeric.js';
 
 /**
  * Units of an angle reading: `'deg'` degrees (360 to the turn), `'gon'` (400 to the turn,
@@ -113,7 +114,9 @@ function parseDms(original: string, where: string): DmsParts {
  *
  * Exact in `rational` for degrees, DMS, gons (×9/10) and mils (×9/160); radians go
  * through `A.pi` (×180/π), so in `rational` they are within the arithmetic's stated
- * transcendental tolerance.
+ * transcendental tolerance. In `decimal(n)` the result is computed with 10 guard digits and
+ * rounded once (correctly rounded unless it lies within about 10⁻ⁿ⁻¹⁰ relative of a
+ * rounding boundary).
  *
  * @param A the arithmetic
  * @param reading the angle: a value, a number or text
@@ -135,6 +138,13 @@ function parseDms(original: string, where: string): DmsParts {
  * ```
  */
 export function angleToDegrees<T>(A: Arithmetic<T>, reading: Numeric<T>, unit: AngleUnit = 'deg'): T {
+  const G = guardOf(A);
+  if (G) return viaGuard(A, G, reading, (g, x) => readAngle(g, x as Numeric<typeof g.zero>, unit));
+  return readAngle(A, reading, unit);
+}
+
+/** @internal {@link angleToDegrees} computed directly in A. */
+export function readAngle<T>(A: Arithmetic<T>, reading: Numeric<T>, unit: AngleUnit = 'deg'): T {
   const where = 'angleToDegrees(reading)';
   const u = checkAngleUnit(unit, 'angleToDegrees(unit)');
   let degrees: T;
@@ -196,6 +206,8 @@ export function angleToDegrees<T>(A: Arithmetic<T>, reading: Numeric<T>, unit: A
  */
 export function degreesToUnit<T>(A: Arithmetic<T>, degrees: Numeric<T>, unit: AngleUnit): T {
   const u = checkAngleUnit(unit, 'degreesToUnit(unit)');
+  const G = guardOf(A);
+  if (G) return viaGuard(A, G, degrees, (g, x) => degreesToUnit(g, x as Numeric<typeof g.zero>, u));
   const v = A.from(degrees);
   switch (u) {
     case 'deg':

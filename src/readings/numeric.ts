@@ -6,6 +6,7 @@
  * @internal
  */
 import type { Arithmetic } from '../arithmetic/types.js';
+import { decimal, MAX_DECIMAL_DIGITS, type Decimal } from '../arithmetic/decimal.js';
 
 /** Significant digits kept by {@link approxSqrt} in an exact arithmetic. @internal */
 export const APPROX_DIGITS = 50;
@@ -33,4 +34,29 @@ export function approxSqrt<T>(A: Arithmetic<T>, x: T): T {
   }
   y = A.from(A.toPrecision(y, APPROX_DIGITS));
   return A.div(A.add(y, A.div(x, y)), two);
+}
+
+/** Guard digits of the decimal computation behind a transcendental reading in `decimal(n)`. @internal */
+export const GUARD_DIGITS = 10;
+
+/**
+ * For a `decimal(n)` arithmetic, the `decimal(n + GUARD_DIGITS)` in which a transcendental
+ * reading is computed before it is rounded once to n digits; `undefined` for any other
+ * arithmetic (which computes directly).
+ * @internal
+ */
+export function guardOf<T>(A: Arithmetic<T>): Arithmetic<Decimal> | undefined {
+  const digits = (A as { digits?: unknown }).digits;
+  if (A.exact || typeof digits !== 'number' || A.name !== `decimal(${digits})` || digits + GUARD_DIGITS > MAX_DECIMAL_DIGITS) return undefined;
+  return decimal(digits + GUARD_DIGITS);
+}
+
+/**
+ * Runs `f` in the guard arithmetic `G` of `A` with an input moved there as text, and rounds
+ * the result once into `A`.
+ * @internal
+ */
+export function viaGuard<T, I>(A: Arithmetic<T>, G: Arithmetic<Decimal>, input: I, f: (G: Arithmetic<Decimal>, x: I | string) => Decimal): T {
+  const x = A.is(input) ? A.toString(input as unknown as T) : input;
+  return A.from(G.toString(f(G, x)));
 }

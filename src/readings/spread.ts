@@ -5,9 +5,9 @@
  */
 import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { angleToDegrees, type AngleUnit } from './angle.js';
-import { modulo, sinCosDegrees } from './trig.js';
-import { approxSqrt } from './numeric.js';
+import { readAngle, type AngleUnit } from './angle.js';
+import { modulo, sinCos } from './trig.js';
+import { approxSqrt, guardOf, viaGuard } from './numeric.js';
 
 /** @internal reads a spread and checks 0 ≤ s ≤ 1. */
 export function checkSpread<T>(A: Arithmetic<T>, s: Numeric<T>, where: string): T {
@@ -25,7 +25,8 @@ export function checkSpread<T>(A: Arithmetic<T>, s: Numeric<T>, where: string): 
  * Exact in `rational` when θ is a multiple of 30° or 45° (spreads 0, 1/4, 1/2, 3/4, 1);
  * otherwise the square of {@link sinCosDegrees}' sine, within the arithmetic's stated
  * transcendental tolerance (1e-40 relative in `rational`, so well inside the library's
- * 1e-20 promise for angle readings).
+ * 1e-20 promise for angle readings). In `decimal(n)` computed with 10 guard digits and
+ * rounded once.
  *
  * @param A the arithmetic
  * @param angle the angle: degrees, DMS text, or a number in `unit`
@@ -42,14 +43,21 @@ export function checkSpread<T>(A: Arithmetic<T>, s: Numeric<T>, where: string): 
  * ```
  */
 export function spreadFromDegrees<T>(A: Arithmetic<T>, angle: Numeric<T>, unit: AngleUnit = 'deg'): T {
-  const deg = angleToDegrees(A, angle, unit);
+  const G = guardOf(A);
+  if (G) return viaGuard(A, G, angle, (g, x) => spreadOfAngle(g, x as Numeric<typeof g.zero>, unit));
+  return spreadOfAngle(A, angle, unit);
+}
+
+/** @internal {@link spreadFromDegrees} computed directly in A. */
+export function spreadOfAngle<T>(A: Arithmetic<T>, angle: Numeric<T>, unit: AngleUnit = 'deg'): T {
+  const deg = readAngle(A, angle, unit);
   // Multiples of 30° and 45°: s = (1 − cos 2θ)/2 (the double-angle formula) with cos 2θ exactly
   // 0, ±1/2 or ±1, so s is exactly 0, 1/4, 1/2, 3/4 or 1 (and an arithmetic that carries
   // derivatives keeps ds/dθ = sin 2θ·π/180). Elsewhere sin²θ, which has no cancellation near 0°.
   if (A.isZero(modulo(A, deg, A.from(30))) || A.isZero(modulo(A, deg, A.from(45)))) {
-    return A.div(A.sub(A.one, sinCosDegrees(A, A.mul(deg, A.from(2))).cos), A.from(2));
+    return A.div(A.sub(A.one, sinCos(A, A.mul(deg, A.from(2))).cos), A.from(2));
   }
-  const { sin } = sinCosDegrees(A, deg);
+  const { sin } = sinCos(A, deg);
   return A.mul(sin, sin);
 }
 
@@ -75,6 +83,16 @@ export function spreadFromDegrees<T>(A: Arithmetic<T>, angle: Numeric<T>, unit: 
  * ```
  */
 export function degreesFromSpread<T>(A: Arithmetic<T>, s: Numeric<T>): T {
+  const G = guardOf(A);
+  if (G) {
+    checkSpread(A, s, 'degreesFromSpread(s)');
+    return viaGuard(A, G, s, (g, x) => degreesOfSpread(g, x as Numeric<typeof g.zero>));
+  }
+  return degreesOfSpread(A, s);
+}
+
+/** @internal {@link degreesFromSpread} computed directly in A. */
+export function degreesOfSpread<T>(A: Arithmetic<T>, s: Numeric<T>): T {
   const v = checkSpread(A, s, 'degreesFromSpread(s)');
   if (A.isZero(v)) return A.zero;
   if (A.eq(v, A.one)) return A.from(90);

@@ -4,6 +4,7 @@
  * @module readings
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+import { guardOf } from './numeric.js';
 
 /** @internal x mod m in [0, m), exact for exact arithmetics. */
 export function modulo<T>(A: Arithmetic<T>, x: T, m: T): T {
@@ -44,8 +45,9 @@ function firstQuadrant<T>(A: Arithmetic<T>, t: T): { sin: T; cos: T } {
  * Exact at every multiple of 90° and wherever the value is rational (sin at 30°, 150°,
  * 210°, 330°; cos at 60°, 120°, 240°, 300°; angles are reduced mod 360° exactly). Elsewhere
  * from `A.sin` / `A.cos` of the angle reduced to [0°, 45°] in radians (θ·π/180), so in
- * `rational` within its stated transcendental tolerance (1e-40 relative), correctly
- * rounded to the arithmetic's digits in `decimal` (as its `sin` is), IEEE-close in `float`.
+ * `rational` within its stated transcendental tolerance (1e-40 relative); in `decimal(n)`
+ * computed with 10 guard digits and rounded once (correctly rounded unless within about
+ * 10⁻ⁿ⁻¹⁰ relative of a rounding boundary); close to IEEE in `float`.
  *
  * @param A the arithmetic
  * @param degrees the angle in degrees
@@ -60,6 +62,16 @@ function firstQuadrant<T>(A: Arithmetic<T>, t: T): { sin: T; cos: T } {
  * ```
  */
 export function sinCosDegrees<T>(A: Arithmetic<T>, degrees: Numeric<T>): { sin: T; cos: T } {
+  const G = guardOf(A);
+  if (G) {
+    const r = sinCos(G, A.is(degrees) ? A.toString(degrees as T) : (degrees as number | string | bigint));
+    return { sin: A.from(G.toString(r.sin)), cos: A.from(G.toString(r.cos)) };
+  }
+  return sinCos(A, degrees);
+}
+
+/** @internal {@link sinCosDegrees} computed directly in A. */
+export function sinCos<T>(A: Arithmetic<T>, degrees: Numeric<T>): { sin: T; cos: T } {
   const d = modulo(A, A.from(degrees), A.from(360));
   const quadrant = Math.min(3, Math.floor(A.toNumber(A.div(d, A.from(90)))));
   let q = quadrant;

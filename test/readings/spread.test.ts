@@ -91,6 +91,18 @@ describe('spreadFromDegrees(A, θ) is sin²θ', () => {
     const c = M.cos(M.divide(M.multiply(M.bignumber('-271.3'), M.pi), 180) as never);
     expect(rel(rational.toPrecision(sinCosDegrees(rational, '-271.3').cos, 45), c)).toBeLessThan(1e-20);
   });
+  it('decimal(30) spreads, sines and degrees are correctly rounded (mathjs BigNumber at 60 digits, rounded to 30)', () => {
+    const D = decimal(30);
+    const round30 = (x: unknown) => M.format(x as never, { notation: 'exponential', precision: 30 }) as string;
+    const same = (got: unknown, ref: unknown) => expect(round30(M.bignumber(D.toString(got as never)))).toBe(round30(ref));
+    for (const deg of ['1', '12.582416666666666', '37', '179.5', '-71.25', '0.0001']) {
+      same(spreadFromDegrees(D, deg), M.bignumber(refSin2(deg)));
+      same(sinCosDegrees(D, deg).sin, M.sin(M.divide(M.multiply(M.bignumber(deg), M.pi), 180) as never));
+    }
+    same(angleToDegrees(D, '1', 'rad'), M.divide(180, M.pi));
+    same(angleToDegrees(D, `12°34'56.7"`), M.evaluate('12 + 34/60 + 56.7/3600'));
+    same(degreesFromSpread(D, '0.3'), M.divide(M.multiply(M.asin(M.sqrt(M.bignumber('0.3'))), 180), M.pi));
+  });
   it('degreesFromSpread in rational is within 1e-20 relative of mathjs asin (60 digits)', () => {
     for (const s of ['1/3', '1e-8', '0.999999', '2/7']) {
       const ref = M.divide(M.multiply(M.asin(M.sqrt(M.bignumber(rational.toPrecision(rational.from(s), 50)))), 180), M.pi);
