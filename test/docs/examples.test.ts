@@ -7,7 +7,11 @@ import * as generic from '../../src/index.js';
 import * as rationalEntry from '../../src/rational.js';
 import * as decimalEntry from '../../src/decimal.js';
 import * as floatEntry from '../../src/float.js';
-import { compileExample, examplesOf, sourceFiles, type Example } from './extract.js';
+import { join } from 'node:path';
+import { compileExample, examplesOf, examplesOfMarkdown, repoRoot, sourceFiles, type Example } from './extract.js';
+
+// Guides whose code blocks are run too (add a guide here once its examples use //=>).
+const GUIDES = ['docs/choosing-an-arithmetic.md', 'docs/errors.md'];
 
 const MODULES: Record<string, unknown> = {
   quadspread: generic,
@@ -25,7 +29,7 @@ function requireFor(ex: Example) {
 
 const AsyncFunction = Object.getPrototypeOf(async () => {}).constructor as new (...args: string[]) => (...args: unknown[]) => Promise<void>;
 
-const all = sourceFiles().flatMap((f) => examplesOf(f));
+const all = [...sourceFiles().flatMap((f) => examplesOf(f)), ...GUIDES.flatMap((g) => examplesOfMarkdown(join(repoRoot, g)))];
 
 describe('the examples of the API reference', () => {
   it('are found in the sources (one per documented export at least)', () => {

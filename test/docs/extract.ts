@@ -132,3 +132,15 @@ export function compileExample(ex: Example): CompiledExample {
   }).outputText;
   return { js, checks };
 }
+
+/** The fenced ```ts blocks of a Markdown guide, as examples. */
+export function examplesOfMarkdown(path: string): Example[] {
+  const text = readFileSync(path, 'utf8');
+  const file = relative(repoRoot, path);
+  const out: Example[] = [];
+  const fence = /^```(ts|typescript)\s*\n([\s\S]*?)^```\s*$/gm;
+  for (let m = fence.exec(text); m; m = fence.exec(text)) {
+    out.push({ file, line: text.slice(0, m.index).split('\n').length, name: 'guide', code: m[2]!.replace(/\n$/, '') });
+  }
+  return out;
+}
