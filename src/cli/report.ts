@@ -62,6 +62,8 @@ export interface SketchView {
   title: string;
   /** `plan` (x east, y north) or `elevation` (x horizontal distance, y height). */
   view: 'plan' | 'elevation';
+  /** What the axes are, when not the usual (plan: x east, y north, with a north arrow; elevation: distance across, height up). */
+  caption?: string;
   points: { name: string; x: number; y: number; role: 'station' | 'control' | 'target' | 'foot' | 'computed' }[];
   lines: { x1: number; y1: number; x2: number; y2: number; role: 'sight' | 'course' | 'boundary' | 'base' | 'path' | 'adjusted' | 'ground'; label?: string }[];
   /** Free labels (e.g. a computed value written near a point). */

@@ -50,18 +50,22 @@ function panel(view: SketchView, top: number, id: string): string {
   let minY = Math.min(...ys, Infinity), maxY = Math.max(...ys, -Infinity);
   if (!Number.isFinite(minX)) { minX = 0; maxX = 1; minY = 0; maxY = 1; }
   const spanX = Math.max(maxX - minX, 1e-9), spanY = Math.max(maxY - minY, 1e-9);
-  const innerW = WIDTH - 2 * MARGIN, innerH = PANEL - 2 * MARGIN - 20;
+  // Room on the right for labels beside the rightmost points.
+  const innerW = WIDTH - 2 * MARGIN - 90, innerH = PANEL - 2 * MARGIN - 20;
   const scale = Math.min(innerW / spanX, innerH / spanY);
+  // Elevation views of long, low sights: heights exaggerated (by a whole factor, at most 10).
+  const exaggeration = view.view === 'elevation' && spanY * scale < innerH / 3 ? Math.max(1, Math.min(10, Math.floor(innerH / 2 / (spanY * scale)))) : 1;
   const ox = MARGIN + (innerW - spanX * scale) / 2;
-  const oy = top + MARGIN + 20 + (innerH - spanY * scale) / 2;
+  const oy = top + MARGIN + 20 + (innerH - spanY * scale * exaggeration) / 2;
   const X = (x: number): number => ox + (x - minX) * scale;
-  const Y = (y: number): number => oy + (maxY - y) * scale;
+  const Y = (y: number): number => oy + (maxY - y) * scale * exaggeration;
   const parts: string[] = [];
   parts.push(`<g class="panel ${view.view}" id="${id}">`);
   parts.push(`<rect class="panel-frame" x="8" y="${n(top + 8)}" width="${WIDTH - 16}" height="${PANEL - 16}"/>`);
   parts.push(`<text class="panel-title" x="20" y="${n(top + 30)}">${xmlEscape(view.title)}</text>`);
-  const caption = view.view === 'plan' ? 'plan: x east, y north' : 'elevation: horizontal distance across, height up';
-  parts.push(`<text class="caption" x="20" y="${n(top + 46)}">${caption}; not to be scaled from</text>`);
+  const caption = view.caption ?? (view.view === 'plan' ? 'plan: x east, y north' : 'elevation: horizontal distance across, height up');
+  const exaggerated = exaggeration > 1 ? `; heights exaggerated ×${exaggeration}` : '';
+  parts.push(`<text class="caption" x="20" y="${n(top + 46)}">${xmlEscape(caption + exaggerated)}; not to be scaled from</text>`);
   for (const l of view.lines) {
     parts.push(`<line class="${l.role}" x1="${n(X(l.x1))}" y1="${n(Y(l.y1))}" x2="${n(X(l.x2))}" y2="${n(Y(l.y2))}"/>`);
     if (l.label) {
@@ -80,7 +84,7 @@ function panel(view: SketchView, top: number, id: string): string {
   for (const t of view.notes) {
     parts.push(`<text class="note" x="${n(X(t.x) + 7)}" y="${n(Y(t.y) + 16)}">${xmlEscape(t.text)}</text>`);
   }
-  if (view.view === 'plan') {
+  if (view.view === 'plan' && view.caption === undefined) {
     const ax = WIDTH - 40, ay = top + 40;
     parts.push(`<path class="north" d="M ${ax} ${ay} L ${ax - 6} ${ay + 18} L ${ax + 6} ${ay + 18} Z"/>`);
     parts.push(`<text class="label" x="${ax - 4}" y="${ay + 32}">N</text>`);

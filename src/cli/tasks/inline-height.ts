@@ -83,6 +83,7 @@ export const inlineHeightTask: TaskKind = {
             {
               title: `${name} from the line: plan (chainage along x)`,
               view: 'plan' as const,
+              caption: 'plan along the line: x chainage, y offset (the side is not known)',
               points: [...stations.map((s, i) => ({ name: s.label, x: c[i]!, y: 0, role: 'station' as const })), { name: `${name} (foot)`, x: f, y: e, role: 'foot' as const }],
               lines: [
                 { x1: lo, y1: 0, x2: hi, y2: 0, role: 'base' as const },

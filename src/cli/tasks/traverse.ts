@@ -137,7 +137,7 @@ export const traverseTask: TaskKind = {
             {
               title: `Traverse ${start.name} → ${close.name}`,
               view: 'plan' as const,
-              points: adj.map((p, i) => ({ name: names[i]!, ...p, role: i === 0 || i === adj.length - 1 ? ('control' as const) : ('computed' as const) })),
+              points: adj.slice(0, close === start ? -1 : undefined).map((p, i) => ({ name: names[i]!, ...p, role: i === 0 || i === adj.length - 1 ? ('control' as const) : ('computed' as const) })),
               lines: [
                 ...raw.slice(1).map((p, i) => ({ x1: raw[i]!.x, y1: raw[i]!.y, x2: p.x, y2: p.y, role: 'course' as const })),
                 ...adj.slice(1).map((p, i) => ({ x1: adj[i]!.x, y1: adj[i]!.y, x2: p.x, y2: p.y, role: 'adjusted' as const })),

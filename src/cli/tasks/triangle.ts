@@ -120,7 +120,7 @@ export const triangleTask: TaskKind = {
             const q2 = env.num(t.Q2), q3 = env.num(t.Q3), s1 = env.num(t.s1);
             const c = Math.sqrt(q3), b = Math.sqrt(q2);
             const cos = (q2 + q3 - env.num(t.Q1)) / (2 * b * c); // cross law in cosine form, for the drawing only
-            return triangleSketch(`Triangle${solutions.length > 1 ? ` (solution ${i + 1})` : ''}`, [{ x: 0, y: 0 }, { x: c, y: 0 }, { x: b * cos, y: b * Math.sqrt(Math.max(0, s1)) }], ['A1', 'A2', 'A3']);
+            return triangleSketch(`Triangle${solutions.length > 1 ? ` (solution ${i + 1})` : ''}`, [{ x: 0, y: 0 }, { x: c, y: 0 }, { x: b * cos, y: b * Math.sqrt(Math.max(0, s1)) }], ['A1', 'A2', 'A3'], 'shape only: A1 A2 drawn across, A3 above');
           });
         }
         return { results, checks: [], notes, ...(sketch ? { sketch } : {}) };
@@ -129,10 +129,11 @@ export const triangleTask: TaskKind = {
   },
 };
 
-function triangleSketch(title: string, p: { x: number; y: number }[], names: string[]) {
+function triangleSketch(title: string, p: { x: number; y: number }[], names: string[], caption?: string) {
   return {
     title,
     view: 'plan' as const,
+    ...(caption ? { caption } : {}),
     points: p.map((q, i) => ({ name: names[i]!, ...q, role: 'control' as const })),
     lines: p.map((q, i) => ({ x1: q.x, y1: q.y, x2: p[(i + 1) % 3]!.x, y2: p[(i + 1) % 3]!.y, role: 'boundary' as const })),
     notes: [],
