@@ -59,7 +59,9 @@ function div(a, b) {
 
 /** The same formulas as heights.handFloat, on dual numbers; then the budget. */
 export function handFloat(inp) {
-  const [c1, c2, c3] = inp.chainages.map((v, i) => seed(v, i));
+  const [s1, s2, s3] = inp.chainages.map((v, i) => seed(v, i));
+  const origin = div(add(add(s1, s2), s3), konst(3)); // about the mean chainage, as the library
+  const c1 = sub(s1, origin), c2 = sub(s2, origin), c3 = sub(s3, origin);
   const [R1, R2, R3] = inp.vertical.map((v, i) => seed(v, i + 3));
   const one = konst(1), two = konst(2);
   const k1 = div(sub(one, R1), R1), k2 = div(sub(one, R2), R2), k3 = div(sub(one, R3), R3);

@@ -32,12 +32,14 @@ export function makeCases(n, seed = 2) {
 }
 
 // ---- the same formulas as src/elevation/inline.ts (three stations), written plainly -----
-// kᵢ = (1 − Rᵢ)/Rᵢ; H = (c₂ − c₁)(c₃ − c₂)(c₃ − c₁)/(k₁(c₃ − c₂) − k₂(c₃ − c₁) + k₃(c₂ − c₁))
+// Chainages taken from their mean; kᵢ = (1 − Rᵢ)/Rᵢ; H = (c₂ − c₁)(c₃ − c₂)(c₃ − c₁)/(k₁(c₃ − c₂) − k₂(c₃ − c₁) + k₃(c₂ − c₁))
 // (Stewart 1746, Prop. II); f = (c₁ + c₂ − H(k₁ − k₂)/(c₁ − c₂))/2; g = H·k₁ − (c₁ − f)² + f²;
 // e = g − f²; residuals (cᵢ − f)² + e − H·kᵢ.
 
 export function handFloat(inp) {
-  const [c1, c2, c3] = inp.chainages;
+  const [r1, r2, r3] = inp.chainages;
+  const origin = (r1 + r2 + r3) / 3; // solve about the mean chainage, as the library does
+  const c1 = r1 - origin, c2 = r2 - origin, c3 = r3 - origin;
   const [R1, R2, R3] = inp.vertical;
   if (!(R1 > 0 && R1 <= 1 && R2 > 0 && R2 <= 1 && R3 > 0 && R3 <= 1)) throw new Error('spread');
   if (c1 === c2 || c2 === c3 || c1 === c3) throw new Error('chainage');
@@ -56,11 +58,13 @@ export function handFloat(inp) {
     const d = ci - f;
     return d * d + e - H * k;
   };
-  return { H, footChainage: f, footOffset: e, residuals: [r(c1, k1), r(c2, k2), r(c3, k3)], sign: 1 };
+  return { H, footChainage: f + origin, footOffset: e, residuals: [r(c1, k1), r(c2, k2), r(c3, k3)], sign: 1 };
 }
 
 export function naiveFraction(inp) {
-  const [c1, c2, c3] = inp.chainages;
+  const [r1, r2, r3] = inp.chainages;
+  const origin = r1.add(r2).add(r3).div(3);
+  const c1 = r1.sub(origin), c2 = r2.sub(origin), c3 = r3.sub(origin);
   const [R1, R2, R3] = inp.vertical;
   const one = new Fraction(1);
   for (const R of inp.vertical) if (R.compare(0) <= 0 || R.compare(1) > 0) throw new Error('spread');
@@ -80,13 +84,15 @@ export function naiveFraction(inp) {
     const d = ci.sub(f);
     return d.mul(d).add(e).sub(H.mul(k));
   };
-  return { H, footChainage: f, footOffset: e, residuals: [r(c1, k1), r(c2, k2), r(c3, k3)], sign: 1 };
+  return { H, footChainage: f.add(origin), footOffset: e, residuals: [r(c1, k1), r(c2, k2), r(c3, k3)], sign: 1 };
 }
 
 export function makeNaiveBig(Big) {
   const one = new Big(1);
   return function naiveBig(inp) {
-    const [c1, c2, c3] = inp.chainages;
+    const [r1, r2, r3] = inp.chainages;
+    const origin = r1.plus(r2).plus(r3).div(3);
+    const c1 = r1.minus(origin), c2 = r2.minus(origin), c3 = r3.minus(origin);
     const [R1, R2, R3] = inp.vertical;
     for (const R of inp.vertical) if (R.lte(0) || R.gt(1)) throw new Error('spread');
     if (c1.eq(c2) || c2.eq(c3) || c1.eq(c3)) throw new Error('chainage');
@@ -105,7 +111,7 @@ export function makeNaiveBig(Big) {
       const d = ci.minus(f);
       return d.times(d).plus(e).minus(H.times(k));
     };
-    return { H, footChainage: f, footOffset: e, residuals: [r(c1, k1), r(c2, k2), r(c3, k3)], sign: 1 };
+    return { H, footChainage: f.plus(origin), footOffset: e, residuals: [r(c1, k1), r(c2, k2), r(c3, k3)], sign: 1 };
   };
 }
 

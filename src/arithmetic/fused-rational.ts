@@ -9,7 +9,8 @@
  * @internal
  */
 import Fraction from 'fraction.js';
-import type { FusedKernels, FusedTriangle } from './types.js';
+import type { FusedKernels, FusedTraverse, FusedTriangle } from './types.js';
+import { readInput } from './exact.js';
 
 const PROTO = Fraction.prototype;
 const SAFE = 9007199254740991n; // 2^53 − 1: below it a gcd runs in doubles
@@ -183,5 +184,106 @@ function inlineHeight(input: unknown): { H: Fraction; footChainage: Fraction; fo
   };
 }
 
+/** x as a fraction when it is one, or a number, bigint or text that reads as one; else undefined. */
+function asFraction(x: unknown): Fraction | undefined {
+  if (x instanceof Fraction) return x;
+  if (typeof x !== 'number' && typeof x !== 'string' && typeof x !== 'bigint') return undefined;
+  try {
+    // The same reading as rational.from: exact, a JS number through its shortest decimal.
+    const r = readInput(x, 'rational.from(x)');
+    return normalSigned(r.n, r.d);
+  } catch {
+    return undefined; // the generic code reports it
+  }
+}
+
+/** Signed numerator of x scaled to the denominator D (a multiple of x.d). */
+function num(x: Fraction, D: bigint): bigint {
+  return scaled(x, D);
+}
+
+/**
+ * traverse for the common case — a start (and optional closing point) and courses all given
+ * as { latitude, departure, distance }, compass rule, no interior angles — with every value
+ * over one common denominator D (the lcm of the inputs' denominators) and the adjusted values
+ * over T·D (T = D·total length): sums of integers, one gcd per reported value. The compass
+ * (Bowditch) rule, correction = −misclosure·(course length/total length), as in
+ * src/cogo/traverse.ts. The closure's root and precision ratio are left to the caller.
+ * Undefined for any other input and wherever the generic code reports an error.
+ */
+function traverse(input: unknown): FusedTraverse<Fraction> | undefined {
+  if (input === null || typeof input !== 'object') return undefined;
+  const t = input as { start?: unknown; close?: unknown; courses?: unknown; rule?: unknown; interiorAngles?: unknown };
+  if ((t.rule !== undefined && t.rule !== 'compass') || t.interiorAngles !== undefined) return undefined;
+  const list = t.courses;
+  if (!Array.isArray(list) || list.length === 0 || list.length > 1_000_000) return undefined;
+  const pt = (p: unknown): { x: Fraction; y: Fraction } | undefined => {
+    if (p === null || typeof p !== 'object' || !('x' in p) || !('y' in p)) return undefined;
+    const x = asFraction((p as { x: unknown }).x), y = asFraction((p as { y: unknown }).y);
+    return x && y ? { x, y } : undefined;
+  };
+  const start = pt(t.start);
+  if (!start) return undefined;
+  const end = t.close === undefined ? start : pt(t.close);
+  if (!end) return undefined;
+  const n = list.length;
+  const lat: Fraction[] = new Array(n), dep: Fraction[] = new Array(n), len: Fraction[] = new Array(n);
+  // The common denominator, kept in a double while it stays exact (else: leave it to the generic code).
+  let Dn = 1;
+  const take = (d: bigint): boolean => {
+    if (d === 1n) return true;
+    if (d > SAFE) return false;
+    const dn = Number(d);
+    if (Dn % dn === 0) return true;
+    const l = (Dn / gcdNum(Dn, dn)) * dn;
+    if (l > 9007199254740991) return false;
+    Dn = l;
+    return true;
+  };
+  if (!take(start.x.d) || !take(start.y.d) || !take(end.x.d) || !take(end.y.d)) return undefined;
+  for (let i = 0; i < n; i++) {
+    const c = list[i] as { bearing?: unknown; latitude?: unknown; departure?: unknown; distance?: unknown } | null;
+    if (c === null || typeof c !== 'object' || c.bearing !== undefined || c.distance === undefined) return undefined;
+    const la = asFraction(c.latitude), de = asFraction(c.departure), d = asFraction(c.distance);
+    if (!la || !de || !d || d.s < 0n) return undefined;
+    if (!take(la.d) || !take(de.d) || !take(d.d)) return undefined;
+    lat[i] = la;
+    dep[i] = de;
+    len[i] = d;
+  }
+  const D = BigInt(Dn);
+  const Sx = num(start.x, D), Sy = num(start.y, D);
+  const points: { x: Fraction; y: Fraction }[] = new Array(n + 1);
+  points[0] = start;
+  let X = Sx, Y = Sy, T = 0n;
+  const L: bigint[] = new Array(n), E: bigint[] = new Array(n), W: bigint[] = new Array(n);
+  for (let i = 0; i < n; i++) {
+    const li = num(lat[i]!, D), ei = num(dep[i]!, D), wi = num(len[i]!, D);
+    L[i] = li;
+    E[i] = ei;
+    W[i] = wi;
+    T += wi;
+    X += ei;
+    Y += li;
+    points[i + 1] = { x: normalSigned(X, D), y: normalSigned(Y, D) };
+  }
+  if (T === 0n) return undefined;
+  const east = X - num(end.x, D), north = Y - num(end.y, D); // misclosure, over D
+  // Adjusted components over T·D: lat + kLat·d = (L·T − north·W)/(T·D), kLat = −north/T.
+  const TD = T * D;
+  const adjusted: { x: Fraction; y: Fraction }[] = new Array(n + 1);
+  const courses: FusedTraverse<Fraction>['courses'] = new Array(n);
+  adjusted[0] = start;
+  let ax = Sx * T, ay = Sy * T;
+  for (let i = 0; i < n; i++) {
+    const aLat = L[i]! * T - north * W[i]!, aDep = E[i]! * T - east * W[i]!;
+    ax += aDep;
+    ay += aLat;
+    adjusted[i + 1] = { x: normalSigned(ax, TD), y: normalSigned(ay, TD) };
+    courses[i] = { latitude: lat[i]!, departure: dep[i]!, length: len[i]!, adjustedLatitude: normalSigned(aLat, TD), adjustedDeparture: normalSigned(aDep, TD) };
+  }
+  return { east: normalSigned(east, D), north: normalSigned(north, D), length: normalSigned(T, D), points, adjusted, courses, rule: 'compass' };
+}
+
 /** The fused kernels of the rational arithmetic. @internal */
-export const rationalKernels: FusedKernels<Fraction> = Object.freeze({ triangle, inlineHeight });
+export const rationalKernels: FusedKernels<Fraction> = Object.freeze({ triangle, inlineHeight, traverse });

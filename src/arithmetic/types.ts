@@ -132,6 +132,25 @@ export interface FusedKernels<T> {
    * arithmetic); `undefined` for anything else or anything the generic code rejects.
    */
   inlineHeight?(input: unknown): { H: T; footChainage: T; footOffset: T; residuals: T[]; sign: 1 } | undefined;
+  /**
+   * traverse for the input as given, all but the closure's root and precision ratio (the
+   * caller adds those); `undefined` for input it leaves to the generic code.
+   */
+  traverse?(input: unknown): FusedTraverse<T> | undefined;
+}
+
+/**
+ * What a fused traverse kernel gives: the misclosure, the total length, the points and the
+ * compass-rule adjustment. @internal
+ */
+export interface FusedTraverse<T> {
+  readonly east: T;
+  readonly north: T;
+  readonly length: T;
+  readonly points: { x: T; y: T }[];
+  readonly adjusted: { x: T; y: T }[];
+  readonly courses: { latitude: T; departure: T; length: T; adjustedLatitude: T; adjustedDeparture: T }[];
+  readonly rule: 'compass';
 }
 
 /** The value type of an arithmetic. */

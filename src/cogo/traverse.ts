@@ -184,6 +184,18 @@ export function angularMisclosure<T>(A: Arithmetic<T, boolean>, angles: readonly
  */
 export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: TraverseInput<T>): Traverse<T, E> {
   const where = 'traverse(A, input)';
+  // Performance (docs/performance.md): the arithmetic's fused kernel, where it has one
+  // (rational: courses as latitude/departure/distance, compass rule), gives the same points and
+  // adjustment at once, or undefined for input it leaves to the code below; the closure's root
+  // and ratio are computed here as below.
+  const fused = A.kernels?.traverse?.(input);
+  if (fused !== undefined) {
+    const { east, north } = fused;
+    const q = A.add(A.mul(east, east), A.mul(north, north));
+    const ratio = A.isZero(q) ? undefined : A.div(fused.length, sqrtValue(A, q, where));
+    const { points, adjusted, courses, rule, length } = fused;
+    return { closure: { east, north, linear: sqrtOf(A, A.isZero(q) ? A.zero : q), ratio }, length, points, adjusted, courses, rule };
+  }
   if (input === null || typeof input !== 'object') {
     throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(input)} is not { start, courses, close? }`);
   }
