@@ -45,12 +45,12 @@ export interface BaseHeight<T, E extends boolean> {
  *
  * The spread s₃ at the foot follows from the triple spread formula
  * (s₁ + s₂ + s₃)² = 2(s₁² + s₂² + s₃²) + 4s₁s₂s₃ (Wildberger, *Divine Proportions*, 2005,
- * ch. 7), whose two solutions s₃ = s₁ + s₂ − 2s₁s₂ ± 2√(s₁s₂(1 − s₁)(1 − s₂)) are the two
+ * ch. 6; chapter from memory), whose two solutions s₃ = s₁ + s₂ − 2s₁s₂ ± 2√(s₁s₂(1 − s₁)(1 − s₂)) are the two
  * triangles the spreads allow: `+` when both interior angles at the stations are acute
  * (`foot: 'between'`), `−` when one is obtuse (`foot: 'beyond'`). Spreads alone cannot tell
  * them apart: the caller says which with `foot`, or gives the horizontal interior `angles`
  * (degrees or DMS, each in (0°, 180°)), from which the spreads and the side follow. Then
- * the spread law Q/s = Q_base/s₃ (same source, ch. 6) gives Q(station 1, foot) =
+ * the spread law Q/s = Q_base/s₃ (same source and chapter) gives Q(station 1, foot) =
  * base·s₂/s₃ and Q(station 2, foot) = base·s₁/s₃, and {@link heightFromReading} each H.
  *
  * With both vertical readings, H is their mean weighted by (1 − R)²/Q (as in

@@ -28,8 +28,9 @@ function readMeasured(m: unknown, where: string): OffsetMeasure {
  *   sin φ·cos γ, with φ the slope angle and γ the angle from the fall line in the face:
  *   derived, the direction cosines of a line in an inclined plane);
  * - measured on the plan: U = S·(1 − R)/(1 − S·R) (tan of the path's slope is tan φ·cos β,
- *   β the plan angle from the fall line — the apparent dip of a plane, a standard result
- *   of structural geology — rewritten in spreads).
+ *   β the plan angle from the fall line — the apparent-dip relation of structural geology,
+ *   e.g. D. M. Ragan, *Structural Geology: An Introduction to Geometrical Techniques*, from
+ *   memory — rewritten in spreads).
  *
  * Exact in `rational`. A spread has no sign: the path climbs one way and falls the other.
  *
