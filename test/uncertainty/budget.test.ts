@@ -36,6 +36,22 @@ describe('budget(U, result) is the law of propagation of uncertainty (GUM, JCGM 
     expect(r.toString(Bx.variance)).toBe('9/5120'); // 0.0017578125 exactly
   });
 
+  it('budget of h = d·tan α has u²(h) = tan²α·u²(d) + (d/cos²α)²·u²(α) (derived by hand), over every base', () => {
+    // d = 85.3 m ± 4 mm, α = 0.4 rad ± 2e-5 rad; tan computed as sin/cos in the arithmetic
+    const hand = Math.sqrt(Math.tan(0.4) ** 2 * 0.004 ** 2 + (85.3 / Math.cos(0.4) ** 2) ** 2 * 2e-5 ** 2);
+    for (const U of [F, D, R] as const) {
+      const A = U as unknown as typeof F;
+      const d = measured(A, '85.3', '0.004', 'd');
+      const a = measured(A, '0.4', '0.00002', 'alpha');
+      const h = A.mul(d, A.div(A.sin(a), A.cos(a)));
+      const B = budget(A, h);
+      expect(A.base.toNumber(B.value)).toBeCloseTo(85.3 * Math.tan(0.4), 11);
+      const sigma = Math.sqrt(A.base.toNumber(B.variance));
+      expect(Math.abs(sigma - hand) / hand).toBeLessThan(1e-13);
+      expect(B.contributions[0]!.name).toBe('alpha');
+    }
+  });
+
   it('the contributions add up to the variance exactly over rational', () => {
     fc.assert(
       fc.property(
