@@ -4,7 +4,7 @@
  *
  * @module cli
  */
-import { readFileSync } from 'node:fs';
+import { readFileSync, statSync } from 'node:fs';
 import { Argument, Command, CommanderError, InvalidArgumentError, Option } from 'commander';
 import { writeFilesAtomic } from './atomic.js';
 import { BATCH_KINDS, runBatch } from './batch.js';
@@ -66,10 +66,15 @@ function report(job: unknown, source: string, o: ReportOptions, io: Io): void {
   if (o.sketch !== undefined) io.stderr(`sketch written to ${o.sketch}\n`);
 }
 
+/** Largest job file read, in bytes (a job is a page of readings, not a data set: use batch for those). */
+export const MAX_JOB_BYTES = 50 * 1024 * 1024;
+
 function readText(file: string, what: string): string {
   try {
-    return readFileSync(file, 'utf8');
+    if (statSync(file).size > MAX_JOB_BYTES) throw new JobInvalid('', `the ${what} ${JSON.stringify(file)} is larger than ${MAX_JOB_BYTES / 1024 / 1024} MB (use quadspread batch for many cases)`);
+    return readFileSync(file, 'utf8').replace(/^\uFEFF/, '');
   } catch (e) {
+    if (e instanceof JobInvalid) throw e;
     throw new JobInvalid('', `cannot read the ${what} ${JSON.stringify(file)}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`);
   }
 }

@@ -103,6 +103,23 @@ describe('quadspread run with a job that cannot be read', () => {
   });
 });
 
+describe('quadspread run with checks that fail', () => {
+  it('exits 0, marks the check FAIL and says so at the end', () => {
+    const job = { points, tasks: [{ kind: 'traverse', start: 'A', close: 'C', courses: [{ bearing: 90, distance: 100 }, { bearing: 0, distance: 80.5 }], tolerance: { linear: '0.1 m', precision: 1000 } }] };
+    const r = cli(['run', jobFile('fails.json', job)]);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toMatch(/check FAIL: Linear misclosure: 0\.5\d* m \(tolerance ≤ 0\.1 m\)/);
+    expect(r.stdout).toMatch(/check FAIL: Precision N of 1 : N: 361(\.0+)? \(tolerance ≥ 1000\)/); // 180.5 / 0.5
+    expect(r.stdout).toMatch(/checks: 0 passed, 2 failed \(of 2\) -- SEE FAILED CHECKS ABOVE/);
+  });
+
+  it('reads a job file that starts with a byte-order mark', () => {
+    const f = join(dir, 'bom.json');
+    writeFileSync(f, '\uFEFF' + JSON.stringify({ points, tasks: [{ kind: 'area', points: ['A', 'B', 'C'] }] }));
+    expect(cli(['run', f]).code).toBe(0);
+  });
+});
+
 describe('quadspread run with a job that has no solution', () => {
   const impossible = { tasks: [{ kind: 'triangle', name: 'Long thin', known: { side1: 1, side2: 2, side3: 10 } }] };
 
