@@ -8,6 +8,7 @@ import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { surd } from '../geometry/surd.js';
+import { approxSqrt } from '../readings/numeric.js';
 import type { Root } from '../geometry/surd.js';
 
 /** A point as cogo reads it: x = east, y = north, each a value or numeric input. @internal */
@@ -28,36 +29,20 @@ export function readPoint<T>(A: Arithmetic<T, boolean>, p: unknown, where: strin
   return { x: A.from(q.x), y: A.from(q.y) };
 }
 
-/** Relative tolerance of {@link sqrtValue} in an exact arithmetic. @internal */
-export const SQRT_TOLERANCE_DIGITS = 40;
-
 /**
- * √q as a value of the arithmetic. Inexact arithmetics round as their `sqrt` does. In an
- * exact arithmetic the root is exact when q is a perfect square and otherwise a rational
- * within 1e-40 relative of √q (Newton's iteration, each step rounded to 50 significant
- * digits). Never hangs: gives up with `NOT_CONVERGED` after 400 steps.
+ * √q as a value of the arithmetic, for q ≥ 0: 0 for q = 0; otherwise the readings'
+ * `approxSqrt` — `A.sqrt(q)` where the arithmetic has the root (rounded as its `sqrt` rounds
+ * in `decimal` and `float`, exact for a perfect square in `rational`), else in an exact
+ * arithmetic a rational within 1e-48 relative of √q whose last Newton step is taken on q
+ * itself, so that an uncertain arithmetic keeps d√q = dq/(2√q).
+ * @throws {QuadspreadError} `NO_REAL_SOLUTION` when q < 0, naming `where`.
  * @internal
  */
 export function sqrtValue<T>(A: Arithmetic<T, boolean>, q: T, where: string): T {
   const sign = A.sign(q);
   if (sign < 0) throw new QuadspreadError('NO_REAL_SOLUTION', where, `√ of the negative value ${A.toString(q)}`);
   if (sign === 0) return A.zero;
-  const r = A.sqrt(q);
-  if (r !== undefined) return r;
-  // Newton's iteration x ← (x + q/x)/2 (Heron's method), rounded to 50 digits each step.
-  const two = A.from(2);
-  let x: T;
-  const guess = Math.sqrt(A.toNumber(q));
-  x = guess > 0 && Number.isFinite(guess) ? A.from(guess.toPrecision(17)) : A.cmp(q, A.one) > 0 ? q : A.one;
-  const bound = A.mul(q, A.from(`1e-${SQRT_TOLERANCE_DIGITS + 6}`));
-  for (let i = 0; i < 400; i++) {
-    const next = A.from(A.toPrecision(A.div(A.add(x, A.div(q, x)), two), 50));
-    const err = A.sub(A.mul(next, next), q);
-    x = next;
-    // |x² − q| ≤ 1e-46·q gives |x − √q| < 1e-46·√q, inside the stated 1e-40.
-    if (A.cmp(A.abs(err), bound) <= 0) return x;
-  }
-  throw new QuadspreadError('NOT_CONVERGED', where, `√${A.toString(q)} did not converge`);
+  return approxSqrt(A, q);
 }
 
 /** Checks that an input is an array (not too long) and returns it. @internal */
