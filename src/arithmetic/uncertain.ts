@@ -78,7 +78,7 @@ export class Uncertain<T> {
     return this.#map;
   }
 
-  /** Text of the value alone (`uncertain.toString` does the same). */
+  /** `String(value)`, for debugging; `U.toString(x)` gives the arithmetic's own text of the value. */
   toString(): string {
     return String(this.value);
   }

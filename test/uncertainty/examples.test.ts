@@ -65,3 +65,22 @@ describe('the @example blocks of the uncertainty sources', () => {
     });
   }
 });
+
+describe('the code blocks of docs/uncertainty.md', () => {
+  const text = readFileSync(new URL('../../docs/uncertainty.md', import.meta.url), 'utf8');
+  const blocks = [...text.matchAll(/```ts\n([\s\S]*?)```/g)].map((m) => m[1] as string);
+  it('the guide has runnable blocks', () => {
+    expect(blocks.length).toBeGreaterThan(1);
+  });
+  blocks.forEach((code, k) => {
+    it(`block ${k + 1} of docs/uncertainty.md gives the results it states`, () => {
+      const js = transformSync(toChecks(code), { loader: 'ts' }).code;
+      let checks = 0;
+      new Function('__q', '__check', js)(q, (got: unknown, want: unknown) => {
+        checks++;
+        expect(got).toEqual(want);
+      });
+      expect(checks).toBeGreaterThan(0);
+    });
+  });
+});
