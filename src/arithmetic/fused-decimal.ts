@@ -10,7 +10,7 @@
  * @internal
  */
 import type { Big } from 'big.js';
-import type { FusedKernels, FusedTriangle } from './types.js';
+import type { FusedKernels, FusedTraverse, FusedTriangle } from './types.js';
 
 const POW10: bigint[] = [];
 for (let k = 0, p = 1n; k < 64; k++, p *= 10n) POW10.push(p);
@@ -45,7 +45,86 @@ function exponent(x: Big): number {
 export function decimalKernels(
   make: (coef: bigint, exp: number) => Big,
   divide: (an: bigint, ae: number, bn: bigint, be: number) => Big,
+  from: (x: unknown) => Big,
 ): FusedKernels<Big> {
+  /** x read by the arithmetic (its own rounding), or undefined where from() would throw. */
+  const read = (x: unknown): Big | undefined => {
+    if (typeof x !== 'number' && typeof x !== 'string' && typeof x !== 'bigint' && (x === null || typeof x !== 'object')) return undefined;
+    try {
+      return from(x);
+    } catch {
+      return undefined; // the generic code reports it
+    }
+  };
+
+  /**
+   * traverse for courses given as { latitude, departure, distance }, compass rule, no interior
+   * angles: exact sums of the inputs on one decimal scale 10^e, and each adjusted value
+   * (lat − north·d/total and the running sums of those) computed exactly and rounded once
+   * (compass rule as in src/cogo/traverse.ts). The closure's root and ratio are left to the
+   * caller. Undefined for any other input and wherever the generic code reports an error.
+   */
+  function traverse(input: unknown): FusedTraverse<Big> | undefined {
+    if (input === null || typeof input !== 'object') return undefined;
+    const t = input as { start?: unknown; close?: unknown; courses?: unknown; rule?: unknown; interiorAngles?: unknown };
+    if ((t.rule !== undefined && t.rule !== 'compass') || t.interiorAngles !== undefined) return undefined;
+    const list = t.courses;
+    if (!Array.isArray(list) || list.length === 0 || list.length > 1_000_000) return undefined;
+    const pt = (p: unknown): { x: Big; y: Big } | undefined => {
+      if (p === null || typeof p !== 'object' || !('x' in p) || !('y' in p)) return undefined;
+      const x = read((p as { x: unknown }).x), y = read((p as { y: unknown }).y);
+      return x && y ? { x, y } : undefined;
+    };
+    const start = pt(t.start);
+    if (!start) return undefined;
+    const end = t.close === undefined ? start : pt(t.close);
+    if (!end) return undefined;
+    const n = list.length;
+    const lat: Big[] = new Array(n), dep: Big[] = new Array(n), len: Big[] = new Array(n);
+    let e = Math.min(exponent(start.x), exponent(start.y), exponent(end.x), exponent(end.y));
+    for (let i = 0; i < n; i++) {
+      const c = list[i] as { bearing?: unknown; latitude?: unknown; departure?: unknown; distance?: unknown } | null;
+      if (c === null || typeof c !== 'object' || c.bearing !== undefined || c.distance === undefined) return undefined;
+      const la = read(c.latitude), de = read(c.departure), d = read(c.distance);
+      if (!la || !de || !d || (d.s < 0 && d.c[0] !== 0)) return undefined;
+      lat[i] = la;
+      dep[i] = de;
+      len[i] = d;
+      e = Math.min(e, exponent(la), exponent(de), exponent(d));
+    }
+    const at = (x: Big): bigint => coefficient(x) * pow10(exponent(x) - e);
+    const Sx = at(start.x), Sy = at(start.y);
+    const points: { x: Big; y: Big }[] = new Array(n + 1);
+    points[0] = start;
+    let X = Sx, Y = Sy, T = 0n;
+    const L: bigint[] = new Array(n), E: bigint[] = new Array(n), W: bigint[] = new Array(n);
+    for (let i = 0; i < n; i++) {
+      const li = at(lat[i]!), ei = at(dep[i]!), wi = at(len[i]!);
+      L[i] = li;
+      E[i] = ei;
+      W[i] = wi;
+      T += wi;
+      X += ei;
+      Y += li;
+      points[i + 1] = { x: make(X, e), y: make(Y, e) };
+    }
+    if (T === 0n) return undefined;
+    const east = X - at(end.x), north = Y - at(end.y);
+    const adjusted: { x: Big; y: Big }[] = new Array(n + 1);
+    const courses: FusedTraverse<Big>['courses'] = new Array(n);
+    adjusted[0] = start;
+    let ax = Sx * T, ay = Sy * T;
+    for (let i = 0; i < n; i++) {
+      // (L·T − north·W)/T on the scale 10^e: lat + kLat·d with kLat = −north/T, exactly.
+      const aLat = L[i]! * T - north * W[i]!, aDep = E[i]! * T - east * W[i]!;
+      ax += aDep;
+      ay += aLat;
+      adjusted[i + 1] = { x: divide(ax, e, T, 0), y: divide(ay, e, T, 0) };
+      courses[i] = { latitude: lat[i]!, departure: dep[i]!, length: len[i]!, adjustedLatitude: divide(aLat, e, T, 0), adjustedDeparture: divide(aDep, e, T, 0) };
+    }
+    return { east: make(east, e), north: make(north, e), length: make(T, e), points, adjusted, courses, rule: 'compass' };
+  }
+
   /**
    * triangle(A1, A2, A3) exactly, then rounded once per measure: Q1 = Q(A2, A3) etc.;
    * s1 = c²/(Q2·Q3) with c the cross product (A2 − A1) × (A3 − A1) (Wildberger, *Divine
@@ -77,5 +156,5 @@ export function decimalKernels(
       quadrea: make(4n * c2, 4 * e),
     };
   }
-  return Object.freeze({ triangle });
+  return Object.freeze({ triangle, traverse });
 }
