@@ -57,6 +57,18 @@ export function root<V>(A: Arithmetic<V, boolean>, x: V): { value: Value<V>; app
   return { value: sqrtOf(A, x), approx: false };
 }
 
+/**
+ * √x for a value or a surd: a surd a + b√d has no square root of the same form, so its
+ * root goes through `decimal(60)` and is flagged `approx` (a rational surd is rooted as a value).
+ */
+export function rootOfValue<V>(A: Arithmetic<V, boolean>, x: Value<V>): { value: Value<V>; approx: boolean } {
+  if (!isSurd(x)) return root(A, x as V);
+  const r = x.toRational();
+  if (r !== undefined) return root(A, r as V);
+  const D = decimal(60);
+  return { value: A.from(D.toString(D.sqrt(D.from(x.toPrecision(60)))!)), approx: true };
+}
+
 /** A signed square root: sign·√x, e.g. a height from its vertical quadrance (see {@link root}). */
 export function signedRoot<V>(A: Arithmetic<V, boolean>, x: V, sign: number): { value: Value<V>; approx: boolean } {
   const r = root(A, x);

@@ -6,6 +6,7 @@
 import type { TaskKind } from '../task.js';
 import { areaTask } from './area.js';
 import { heightTask } from './height.js';
+import { baseHeightTask } from './base-height.js';
 import { pathGradeTask } from './path-grade.js';
 import { inlineHeightTask } from './inline-height.js';
 import { traverseTask } from './traverse.js';
@@ -16,4 +17,4 @@ import { resectionTask } from './resection.js';
 import { trigHeightTask } from './trig-height.js';
 import { geodeticTask } from './geodetic.js';
 
-export const TASK_KINDS: readonly TaskKind[] = [heightTask, inlineHeightTask, trigHeightTask, pathGradeTask, triangleTask, traverseTask, areaTask, intersectionTask, resectionTask, levellingTask, geodeticTask];
+export const TASK_KINDS: readonly TaskKind[] = [heightTask, baseHeightTask, inlineHeightTask, trigHeightTask, pathGradeTask, triangleTask, traverseTask, areaTask, intersectionTask, resectionTask, levellingTask, geodeticTask];
