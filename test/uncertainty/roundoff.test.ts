@@ -10,6 +10,7 @@ import type { Arithmetic } from '../../src/arithmetic/types.js';
 import { quadrance, spread, cross, quadrea, triangle, solveTriangle } from '../../src/geometry/index.js';
 import { rational, float } from '../../src/arithmetic/index.js';
 import { heightFromReading } from '../../src/elevation/height.js';
+import { area } from '../../src/cogo/area.js';
 import { roundOff } from '../../src/uncertainty/roundoff.js';
 
 const u = 2 ** -53;
@@ -193,6 +194,38 @@ describe('round-off of heightFromReading(float) for steep sights (R near 1)', ()
         const Rn = Number(R);
         expect(r.relative!).toBeLessThanOrEqual(u * (6 + Rn / (1 - Rn)) * SLACK);
       }),
+      { numRuns: 300 },
+    );
+  });
+});
+
+describe('round-off of area(float) (shoelace about the first vertex) far from the origin', () => {
+  it('the area of a polygon at up to 10⁷ m stays within e·Σ(|eₓ| + |e_y| + |fₓ| + |f_y|)/2 + γₙ₊₂·Σ(|eₓf_y| + |fₓe_y|)/2', () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 0, max: 10_000_000 }),
+        fc.integer({ min: 0, max: 10_000_000 }),
+        fc.array(fc.tuple(fc.integer({ min: -500_000, max: 500_000 }), fc.integer({ min: -500_000, max: 500_000 })), { minLength: 3, maxLength: 12 }),
+        (X, Y, offs) => {
+          const pts = offs.map(([dx, dy]) => [mm(X + dx / 1000), mm(Y + dy / 1000)] as const);
+          const r = roundOff((A) => area(A, pts.map((p) => pt(A, p))));
+          const n = (t: string) => Number(t);
+          const M = Math.max(...pts.flat().map((t) => Math.abs(n(t))));
+          const d = pts.map((p) => [n(p[0]) - n(pts[0]![0]), n(p[1]) - n(pts[0]![1])] as const);
+          const Delta = Math.max(...d.flat().map(Math.abs));
+          const e = u * (2 * M + Delta); // error of one coordinate difference
+          let first = 0;
+          let terms = 0;
+          for (let i = 2; i < d.length; i++) {
+            const [ex, ey] = d[i - 1]!;
+            const [fx, fy] = d[i]!;
+            first += e * (Math.abs(ex) + Math.abs(ey) + Math.abs(fx) + Math.abs(fy));
+            terms += Math.abs(ex * fy) + Math.abs(fx * ey);
+          }
+          const gamma = ((d.length + 2) * u) / (1 - (d.length + 2) * u); // γₙ (Higham §3.1): products, differences, the sum
+          expect(r.absolute).toBeLessThanOrEqual(((first + gamma * terms) / 2) * SLACK);
+        },
+      ),
       { numRuns: 300 },
     );
   });
