@@ -15,7 +15,7 @@
 import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { sinCosDegrees } from '../readings/trig.js';
-import { ellipsoidParameters, readEllipsoid, type Ellipsoid } from './ellipsoid.js';
+import { ellipsoidParameters, readEllipsoid, type Ellipsoid, type EllipsoidParameters } from './ellipsoid.js';
 import { claimedDigits, decimalFor, readHeight, readLatitude, readLongitude, root, settle, tenToMinus, toDegrees, toDecimalText } from './internal.js';
 
 /**
@@ -106,18 +106,123 @@ function sinhSmall<T>(A: Arithmetic<T>, w: T, tol: T, d: number): T {
   return sum;
 }
 
+/** atanh z for |z| < 1: halve by atanh z = 2 atanh(z/(1 + √(1 − z²))) until |z| < 1/10, then the series. */
+function atanhAny<T>(A: Arithmetic<T>, z: T, tol: T, d: number): T {
+  let doublings = 0;
+  const tenth = A.from('0.1');
+  while (A.cmp(A.abs(z), tenth) > 0 && doublings < 60) {
+    // tanh(x/2) = tanh x/(1 + sech x), sech x = √(1 − tanh²x)
+    z = settle(A, A.div(z, A.add(A.one, root(A, A.sub(A.one, A.mul(z, z))))), d);
+    doublings += 1;
+  }
+  let r = atanhSmall(A, z, tol, d);
+  for (let i = 0; i < doublings; i++) r = A.add(r, r);
+  return r;
+}
+
+/** The core of Krüger's series at a point: scale k/k0, convergence in radians, and optionally ξ, η. */
+interface KrugerResult<T> {
+  readonly k: T;
+  readonly gamma: T;
+  readonly xi?: T;
+  readonly eta?: T;
+  /** A/a: the rectifying radius over a. */
+  readonly Aa: T;
+}
+
+function kruger<T>(A: Arithmetic<T>, E: EllipsoidParameters<T>, lat: T, dlon: T, where: string, wantGrid: boolean): KrugerResult<T> {
+  const { sin: sp, cos: cp } = sinCosDegrees(A, lat);
+  const { sin: sl, cos: cl } = sinCosDegrees(A, dlon);
+  if (A.sign(cl) <= 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where}(point.lon)`, 'the point is 90° or more from the central meridian');
+  const digits = claimedDigits(A);
+  const tol = tenToMinus(A, digits + 4);
+  const z = (x: T): T => settle(A, x, digits);
+  const one = A.one;
+  const two = A.from(2);
+  // Conformal latitude χ: tan χ = τ′ = τ√(1 + σ²) − σ√(1 + τ²), τ = tan φ,
+  // σ = sinh(e atanh(e sin φ)) (Karney 2011, eqs. 7–9); multiplied through by cos φ:
+  // S = τ′ cos φ = sin φ √(1 + σ²) − σ, which stays finite at the poles.
+  const e = root(A, E.e2);
+  const sigma = z(sinhSmall(A, z(A.mul(e, atanhSmall(A, z(A.mul(e, sp)), tol, digits))), tol, digits));
+  const S = z(A.sub(A.mul(sp, root(A, A.add(one, A.mul(sigma, sigma)))), sigma));
+  const Ccl = z(A.mul(cp, cl));
+  const D2 = A.add(A.mul(S, S), A.mul(Ccl, Ccl)); // cos²φ (τ′² + cos²λ)
+  if (A.isZero(D2)) throw new QuadspreadError('INVALID_ARGUMENT', `${where}(point)`, 'the projection is singular at this point');
+  const D = z(root(A, D2));
+  // Gauss–Schreiber: ξ′ = atan2(τ′, cos λ), sinh η′ = sin λ/√(τ′² + cos²λ) (Karney 2011, eq. 10)
+  const sx = z(A.div(S, D)); // sin ξ′
+  const cx = z(A.div(Ccl, D)); // cos ξ′
+  const she = z(A.div(A.mul(cp, sl), D)); // sinh η′
+  const che = z(root(A, A.add(one, A.mul(she, she)))); // cosh η′
+  // Double angles, then multiples by (cos + i sin)^j and (cosh + sinh)^j.
+  const c2 = z(A.sub(A.mul(cx, cx), A.mul(sx, sx)));
+  const s2 = z(A.mul(two, A.mul(sx, cx)));
+  const ch2 = z(A.add(one, A.mul(two, A.mul(she, she))));
+  const sh2 = z(A.mul(two, A.mul(she, che)));
+  const n = E.n;
+  const powers: T[] = [one];
+  for (let i = 1; i <= 6; i++) powers.push(A.mul(powers[i - 1]!, n));
+  let cj = c2;
+  let sj = s2;
+  let chj = ch2;
+  let shj = sh2;
+  let pp = one; // p′ = 1 + Σ 2j α_j cos 2jξ′ cosh 2jη′
+  let qq = A.zero; // q′ = Σ 2j α_j sin 2jξ′ sinh 2jη′  (Karney 2011, eqs. 11–13)
+  let dxi = A.zero; // Σ α_j sin 2jξ′ cosh 2jη′
+  let deta = A.zero; // Σ α_j cos 2jξ′ sinh 2jη′  (Karney 2011, eq. 11)
+  for (let j = 1; j <= 6; j++) {
+    let alpha = A.zero;
+    for (const [num, den, pow] of ALPHA[j - 1]!) alpha = A.add(alpha, A.div(A.mul(A.from(num), powers[pow]!), A.from(den)));
+    alpha = z(alpha);
+    const w = z(A.mul(A.from(2 * j), alpha));
+    pp = z(A.add(pp, A.mul(w, A.mul(cj, chj))));
+    qq = z(A.add(qq, A.mul(w, A.mul(sj, shj))));
+    if (wantGrid) {
+      dxi = z(A.add(dxi, A.mul(alpha, A.mul(sj, chj))));
+      deta = z(A.add(deta, A.mul(alpha, A.mul(cj, shj))));
+    }
+    const cn = A.sub(A.mul(cj, c2), A.mul(sj, s2));
+    const sn = A.add(A.mul(sj, c2), A.mul(cj, s2));
+    const chn = A.add(A.mul(chj, ch2), A.mul(shj, sh2));
+    const shn = A.add(A.mul(shj, ch2), A.mul(chj, sh2));
+    cj = z(cn);
+    sj = z(sn);
+    chj = z(chn);
+    shj = z(shn);
+  }
+  // Rectifying radius over a: A/a = (1 + n²/4 + n⁴/64 + n⁶/256)/(1 + n) (Karney 2011, eq. 14)
+  const Aa = A.div(
+    A.add(A.add(A.add(one, A.div(powers[2]!, A.from(4))), A.div(powers[4]!, A.from(64))), A.div(powers[6]!, A.from(256))),
+    A.add(one, n),
+  );
+  // k′ = √(1 − e² sin²φ) √(1 + τ²)/√(τ′² + cos²λ) = √(1 − e² sin²φ)/D; k″ = (A/a)√(p′² + q′²)
+  // (Karney 2011, eqs. 25–26 and 28)
+  const kPrime = A.div(root(A, A.sub(one, A.mul(E.e2, A.mul(sp, sp)))), D);
+  const kDouble = A.mul(Aa, root(A, A.add(A.mul(pp, pp), A.mul(qq, qq))));
+  // γ′ = atan(τ′ tan λ/√(1 + τ′²)) = atan2(S sin λ, cos λ √(S² + cos²φ)); γ″ = atan2(q′, p′)
+  // (Karney 2011, eqs. 25 and 27)
+  const gamma1 = A.atan2(A.mul(S, sl), A.mul(cl, root(A, A.add(A.mul(S, S), A.mul(cp, cp)))));
+  const gamma2 = A.atan2(qq, pp);
+  const out: KrugerResult<T> = { k: A.mul(kPrime, kDouble), gamma: A.add(gamma1, gamma2), Aa };
+  if (!wantGrid) return out;
+  // ξ = ξ′ + Σ α_j sin 2jξ′ cosh 2jη′, η = η′ + Σ α_j cos 2jξ′ sinh 2jη′ (Krüger; Karney 2011, eq. 11)
+  const xiP = A.atan2(S, Ccl);
+  const etaP = atanhAny(A, z(A.div(she, che)), tol, digits); // η′ = atanh(tanh η′)
+  return { ...out, xi: A.add(xiP, dxi), eta: A.add(etaP, deta) };
+}
+
 /**
  * Point scale factor k and grid convergence γ of a Transverse Mercator projection at a
  * geodetic point, by Krüger's series in the third flattening n (Krüger 1912), in the form
- * and to the order n⁶ of Karney (2011), eqs. 7–9 (conformal latitude), 10–11 (Gauss–Schreiber
- * coordinates), 35 (coefficients) and the scale and convergence formulas that follow from
- * the derivative of the series: k = k0 · √(1 − e² sin²φ)/√(τ′² + cos²λ)·√(1+τ²)… written
- * here without tangents so that the poles are regular. Only sin, cos, atan2, √ and two
- * rapidly converging power series (atanh and sinh of small arguments) are used, so it runs
- * in every arithmetic.
+ * and to the order n⁶ of Karney (2011): the conformal latitude (eqs. 7–9), the
+ * Gauss–Schreiber coordinates (eq. 10), the series and its derivative (eqs. 11–13, 35) and
+ * the scale and convergence that follow (eqs. 25–28), written here without tangents so that
+ * the poles are regular. Only sin, cos, atan2, √ and rapidly converging power series (atanh
+ * and sinh of small arguments) are used, so it runs in every arithmetic.
  *
  * Accuracy: the series truncation limits k to about 1e-15 relative and γ to about 1e-15 rad
  * within 4000 km of the central meridian (Karney 2011), whatever the arithmetic's digits.
+ * In `rational` it is evaluated in decimal with 50 digits and read back.
  *
  * @param A the arithmetic
  * @param point `{ lat, lon }` in degrees or DMS text
@@ -138,91 +243,104 @@ export function transverseMercatorFactors<T>(
   point: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },
   projection: TransverseMercator,
 ): TmFactors<T> {
-  const where = 'transverseMercatorFactors';
+  const r = tm(A, point, projection, false);
+  return { k: r.k, convergence: r.convergence };
+}
+
+/** A Transverse Mercator grid: a {@link TransverseMercator} with a true origin and false coordinates. */
+export interface TransverseMercatorGrid extends TransverseMercator {
+  /** Latitude of the true origin, degrees or DMS text (default 0). */
+  readonly lat0?: Numeric<never>;
+  /** Easting of the true origin, metres (default 0). */
+  readonly falseEasting?: Numeric<never>;
+  /** Northing of the true origin, metres (default 0). */
+  readonly falseNorthing?: Numeric<never>;
+}
+
+/** Grid coordinates of a point with its point scale factor and convergence. */
+export interface GridPoint<T> extends TmFactors<T> {
+  /** Easting, metres. */
+  readonly E: T;
+  /** Northing, metres. */
+  readonly N: T;
+}
+
+/**
+ * Geodetic latitude and longitude to Transverse Mercator grid coordinates, with the point
+ * scale factor and convergence: E = E0 + k0·A·η, N = N0 + k0·A·(ξ − ξ0), A the rectifying
+ * radius, ξ, η from Krüger's series (see {@link transverseMercatorFactors}; Karney 2011,
+ * eqs. 11 and 14), ξ0 that of the true origin on the central meridian.
+ *
+ * Accuracy: about 1 µm within 4000 km of the central meridian from the series (Karney 2011),
+ * and the arithmetic's rounding.
+ *
+ * @param A the arithmetic
+ * @param point `{ lat, lon }` in degrees or DMS text
+ * @param projection `{ lon0, lat0?, k0?, falseEasting?, falseNorthing?, ellipsoid }`
+ * @returns `{ E, N, k, convergence }`: metres, metres, the scale factor, degrees
+ * @throws {QuadspreadError} as {@link transverseMercatorFactors}.
+ * @example
+ * ```ts
+ * import { float, transverseMercator, GRS80 } from 'quadspread';
+ * // UTM zone 31 (central meridian 3° E, k0 = 0.9996, false easting 500 km): on the central meridian E is the false easting
+ * transverseMercator(float, { lat: 0, lon: 3 }, { lon0: 3, k0: 0.9996, falseEasting: 500000, ellipsoid: GRS80 }).E;
+ * //=> 500000
+ * ```
+ */
+export function transverseMercator<T>(
+  A: Arithmetic<T>,
+  point: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },
+  projection: TransverseMercatorGrid,
+): GridPoint<T> {
+  return tm(A, point, projection, true);
+}
+
+function tm<T>(
+  A: Arithmetic<T>,
+  point: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },
+  projection: TransverseMercatorGrid,
+  wantGrid: boolean,
+): GridPoint<T> {
+  const where = wantGrid ? 'transverseMercator' : 'transverseMercatorFactors';
   if (point === null || typeof point !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', `${where}(point)`, `${show(point)} is not { lat, lon }`);
   if (projection === null || typeof projection !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', `${where}(projection)`, `${show(projection)} is not { lon0, k0, ellipsoid }`);
-  const E = ellipsoidParameters(A, readEllipsoid(projection.ellipsoid, `${where}(projection.ellipsoid)`));
+  const ell = readEllipsoid(projection.ellipsoid, `${where}(projection.ellipsoid)`);
+  const E = ellipsoidParameters(A, ell);
   const k0 = A.from(projection.k0 ?? 1);
   if (A.sign(k0) <= 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where}(projection.k0)`, `${show(projection.k0)} is not positive`);
   const lat = readLatitude(A, point.lat, `${where}(point.lat)`);
+  const lon = readLongitude(A, point.lon, `${where}(point.lon)`);
+  const lon0 = readLongitude(A, projection.lon0 as Numeric<T>, `${where}(projection.lon0)`);
+  const lat0 = readLatitude(A, (projection.lat0 ?? 0) as Numeric<T>, `${where}(projection.lat0)`);
+  const E0 = A.from((projection.falseEasting ?? 0) as Numeric<T>);
+  const N0 = A.from((projection.falseNorthing ?? 0) as Numeric<T>);
   if (A.exact) {
     // An approximation in any case: evaluate in decimal with 8 guard digits and read the
     // result back exactly, so that exact fractions do not grow through the series.
     const d = claimedDigits(A) + 8;
     const D = decimalFor(d);
-    const r = transverseMercatorFactors(
+    const t = (x: T): string => toDecimalText(A, x, d);
+    const r = tm(
       D,
-      { lat: toDecimalText(A, lat, d), lon: toDecimalText(A, readLongitude(A, point.lon, `${where}(point.lon)`), d) },
-      { lon0: toDecimalText(A, readLongitude(A, projection.lon0 as Numeric<T>, `${where}(projection.lon0)`), d), k0: toDecimalText(A, k0, d), ellipsoid: projection.ellipsoid },
+      { lat: t(lat), lon: t(lon) },
+      { lon0: t(lon0), lat0: t(lat0), k0: t(k0), falseEasting: t(E0), falseNorthing: t(N0), ellipsoid: ell },
+      wantGrid,
     );
-    return { k: A.from(D.toString(r.k)), convergence: A.from(D.toString(r.convergence)) };
+    const back = (x: ReturnType<typeof D.from>): T => A.from(D.toString(x));
+    return { E: back(r.E), N: back(r.N), k: back(r.k), convergence: back(r.convergence) };
   }
-  const dlon = A.sub(readLongitude(A, point.lon, `${where}(point.lon)`), readLongitude(A, projection.lon0 as Numeric<T>, `${where}(projection.lon0)`));
-  const { sin: sp, cos: cp } = sinCosDegrees(A, lat);
-  const { sin: sl, cos: cl } = sinCosDegrees(A, dlon);
-  if (A.sign(cl) <= 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where}(point.lon)`, 'the point is 90° or more from the central meridian');
-  const digits = claimedDigits(A);
-  const tol = tenToMinus(A, digits + 4);
-  const z = (x: T): T => settle(A, x, digits);
-  const one = A.one;
-  const two = A.from(2);
-  // Conformal latitude χ: tan χ = τ′ = τ√(1 + σ²) − σ√(1 + τ²), σ = sinh(e atanh(e sin φ)/…)
-  // (Karney 2011, eqs. 7–9); multiplied through by cos φ: S = τ′ cos φ = sin φ √(1 + σ²) − σ.
-  const e = root(A, E.e2);
-  const sigma = z(sinhSmall(A, z(A.mul(e, atanhSmall(A, z(A.mul(e, sp)), tol, digits))), tol, digits));
-  const S = z(A.sub(A.mul(sp, root(A, A.add(one, A.mul(sigma, sigma)))), sigma));
-  const Ccl = z(A.mul(cp, cl));
-  const D2 = A.add(A.mul(S, S), A.mul(Ccl, Ccl)); // cos²φ (τ′² + cos²λ)
-  if (A.isZero(D2)) throw new QuadspreadError('INVALID_ARGUMENT', `${where}(point)`, 'the projection is singular at this point');
-  const D = z(root(A, D2));
-  // Gauss–Schreiber: ξ′ = atan2(τ′, cos λ), sinh η′ = sin λ/√(τ′² + cos²λ) (Karney 2011, eq. 10)
-  const sx = z(A.div(S, D)); // sin ξ′
-  const cx = z(A.div(Ccl, D)); // cos ξ′
-  const she = z(A.div(A.mul(cp, sl), D)); // sinh η′
-  const che = z(root(A, A.add(one, A.mul(she, she)))); // cosh η′
-  // Double angles, then multiples by (cos + i sin)^j and (cosh + sinh)^j.
-  const c2 = z(A.sub(A.mul(cx, cx), A.mul(sx, sx)));
-  const s2 = z(A.mul(two, A.mul(sx, cx)));
-  const ch2 = z(A.add(one, A.mul(two, A.mul(she, she))));
-  const sh2 = z(A.mul(two, A.mul(she, che)));
-  // Coefficients α_j in A.
-  const n = E.n;
-  const powers: T[] = [one];
-  for (let i = 1; i <= 6; i++) powers.push(A.mul(powers[i - 1]!, n));
-  let cj = c2;
-  let sj = s2;
-  let chj = ch2;
-  let shj = sh2;
-  let pp = one; // p′ = 1 + Σ 2j α_j cos 2jξ′ cosh 2jη′
-  let qq = A.zero; // q′ = Σ 2j α_j sin 2jξ′ sinh 2jη′  (Karney 2011, eqs. 11–13)
-  for (let j = 1; j <= 6; j++) {
-    let alpha = A.zero;
-    for (const [num, den, pow] of ALPHA[j - 1]!) alpha = A.add(alpha, A.div(A.mul(A.from(num), powers[pow]!), A.from(den)));
-    const w = z(A.mul(A.from(2 * j), alpha));
-    pp = z(A.add(pp, A.mul(w, A.mul(cj, chj))));
-    qq = z(A.add(qq, A.mul(w, A.mul(sj, shj))));
-    const cn = A.sub(A.mul(cj, c2), A.mul(sj, s2));
-    const sn = A.add(A.mul(sj, c2), A.mul(cj, s2));
-    const chn = A.add(A.mul(chj, ch2), A.mul(shj, sh2));
-    const shn = A.add(A.mul(shj, ch2), A.mul(chj, sh2));
-    cj = z(cn);
-    sj = z(sn);
-    chj = z(chn);
-    shj = z(shn);
-  }
-  // Rectifying radius over a: A/a = (1 + n²/4 + n⁴/64 + n⁶/256)/(1 + n) (Karney 2011, eq. 14)
-  const Aa = A.div(
-    A.add(A.add(A.add(one, A.div(powers[2]!, A.from(4))), A.div(powers[4]!, A.from(64))), A.div(powers[6]!, A.from(256))),
-    A.add(one, n),
-  );
-  // k′ = √(1 − e² sin²φ) √(1 + τ²)/√(τ′² + cos²λ) = √(1 − e² sin²φ)/D ; k″ = (A/a)√(p′² + q′²)
-  const kPrime = A.div(root(A, A.sub(one, A.mul(E.e2, A.mul(sp, sp)))), D);
-  const kDouble = A.mul(Aa, root(A, A.add(A.mul(pp, pp), A.mul(qq, qq))));
-  const k = A.mul(k0, A.mul(kPrime, kDouble));
-  // γ′ = atan(τ′ tan λ/√(1 + τ′²)) = atan2(S sin λ, cos λ √(S² + cos²φ)); γ″ = atan2(q′, p′)
-  const gamma1 = A.atan2(A.mul(S, sl), A.mul(cl, root(A, A.add(A.mul(S, S), A.mul(cp, cp)))));
-  const gamma2 = A.atan2(qq, pp);
-  return { k, convergence: toDegrees(A, A.add(gamma1, gamma2)) };
+  const c = kruger(A, E, lat, A.sub(lon, lon0), where, wantGrid);
+  const k = A.mul(k0, c.k);
+  const convergence = toDegrees(A, c.gamma);
+  if (!wantGrid) return { E: A.zero, N: A.zero, k, convergence };
+  const o = kruger(A, E, lat0, A.zero, where, true);
+  const kA = A.mul(k0, A.mul(E.a, c.Aa)); // k0 · A, A = a · (A/a)
+  return {
+    E: A.add(E0, A.mul(kA, c.eta!)),
+    N: A.add(N0, A.mul(kA, A.sub(c.xi!, o.xi!))),
+    k,
+    convergence,
+  };
 }
 
 /**

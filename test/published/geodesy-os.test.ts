@@ -4,7 +4,9 @@ import { decimal } from '../../src/arithmetic/decimal.js';
 import { float } from '../../src/arithmetic/float.js';
 import type { Arithmetic } from '../../src/arithmetic/types.js';
 import { geodeticToGeocentric, geocentricToGeodetic } from '../../src/geodesy/geocentric.js';
-import { GRS80, WGS84, ellipsoidParameters } from '../../src/geodesy/ellipsoid.js';
+import { GRS80, WGS84, defineEllipsoid, ellipsoidParameters } from '../../src/geodesy/ellipsoid.js';
+import { transverseMercator } from '../../src/geodesy/grid.js';
+import { meridianRadius } from '../../src/geodesy/radii.js';
 
 // Ordnance Survey, "A guide to coordinate systems in Great Britain", annex B (worked
 // example on GRS 80): 53°36′43.1653″N, 1°39′51.9920″W, h = 299.800 m ↔
@@ -81,5 +83,42 @@ describe('ellipsoid parameters from their defining documents', () => {
       expect(R.eq(E.ep2, R.div(R.sub(a2, b2), b2))).toBe(true);
       expect(R.eq(E.n, R.div(R.sub(E.a, E.b), R.add(E.a, E.b)))).toBe(true);
     }
+  });
+});
+
+describe('Ordnance Survey guide, annex C: Transverse Mercator (National Grid on Airy 1830)', () => {
+  // Ordnance Survey, "A guide to coordinate systems in Great Britain", annex C worked example
+  // (from memory; not listed in CHECKS.md): 52°39′27.2531″N, 1°43′4.5177″E on Airy 1830
+  // (a = 6377563.396 m, b = 6356256.909 m), National Grid (F0 = 0.9996012717, true origin
+  // 49°N 2°W, false origin E0 = 400000 m, N0 = −100000 m) → E = 651409.903 m, N = 313177.270 m.
+  // The guide's own formulas are a series good to about 1 mm this far from the central meridian.
+  const airy = defineEllipsoid({ name: 'Airy 1830', a: '6377563.396', b: '6356256.909' });
+  const grid = { lon0: -2, lat0: 49, k0: '0.9996012717', falseEasting: 400000, falseNorthing: -100000, ellipsoid: airy };
+  for (const A of arithmetics) {
+    it(`transverseMercator(${A.name}) gives E = 651409.903 m and N = 313177.270 m within 1 mm`, () => {
+      const r = transverseMercator(A, { lat: `52°39'27.2531"N`, lon: `1°43'4.5177"E` }, grid);
+      expect(Math.abs(A.toNumber(r.E) - 651409.903)).toBeLessThan(0.001);
+      expect(Math.abs(A.toNumber(r.N) - 313177.27)).toBeLessThan(0.001);
+    });
+  }
+  it('the scale factor agrees with the ratio of grid to ellipsoid distance over a short line (derived check of k)', () => {
+    // 1e-5° steps north and east: grid distance / (M dφ) and / (N cos φ dλ) both → k
+    const at = { lat: 52.6576, lon: 1.7179 };
+    const k = transverseMercator(float, at, grid).k;
+    const dd = 1e-5;
+    const p = transverseMercator(float, { lat: at.lat + dd, lon: at.lon }, grid);
+    const q = transverseMercator(float, { lat: at.lat - dd, lon: at.lon }, grid);
+    const M = meridianRadius(float, at.lat, airy);
+    const ratio = Math.hypot(p.E - q.E, p.N - q.N) / (M * 2 * dd * (Math.PI / 180));
+    expect(Math.abs(ratio - k)).toBeLessThan(1e-9);
+  });
+  it('the convergence is the sign stated: the grid bearing of the meridian (true azimuth 0) is −γ (derived check)', () => {
+    const at = { lat: 52.6576, lon: 1.7179 };
+    const { convergence } = transverseMercator(float, at, grid);
+    const p = transverseMercator(float, { lat: at.lat + 1e-5, lon: at.lon }, grid);
+    const q = transverseMercator(float, { lat: at.lat - 1e-5, lon: at.lon }, grid);
+    const gridBearing = (Math.atan2(p.E - q.E, p.N - q.N) * 180) / Math.PI;
+    expect(convergence).toBeGreaterThan(0); // east of the central meridian, northern hemisphere
+    expect(Math.abs(gridBearing + convergence)).toBeLessThan(1e-7);
   });
 });
