@@ -3,7 +3,7 @@
  *
  * @module cli
  */
-import { decimal, isSurd, sqrtOf } from '../../index.js';
+import { QuadspreadError, decimal, isSurd, sqrtOf } from '../../index.js';
 import type { Arithmetic, Point } from '../../index.js';
 import type { Env, JobPoint, Value } from '../task.js';
 import type { Input } from '../values.js';
@@ -39,22 +39,24 @@ export function nums<V>(env: Env<V>, p: Point<V>): { x: number; y: number } {
   return { x: env.num(p.x), y: env.num(p.y) };
 }
 
-/** Exact text longer than this goes through decimal for square roots (see {@link root}). */
-const LONG_EXACT = 200;
-
 /**
- * √x as a result: a surd (exact arithmetic) or a value. A rational with a very long
- * numerator or denominator (from transcendental readings) is rooted through
- * `decimal(60)` instead and flagged `approx`: its surd would need a radicand beyond
- * the range the surd code can bracket.
+ * √x as a result: a surd (exact arithmetic) or a value. Where the surd code cannot handle
+ * the rational (fractions with very long numerators and denominators, as transcendental
+ * readings give, make it refuse with NOT_FINITE), the root goes through `decimal(60)`
+ * instead and is flagged `approx`.
  */
 export function root<V>(A: Arithmetic<V, boolean>, x: V): { value: Value<V>; approx: boolean } {
-  if (A.exact && A.toString(x).length > LONG_EXACT) {
+  if (!A.exact) return { value: sqrtOf(A, x), approx: false };
+  try {
+    const s = sqrtOf(A, x);
+    if (isSurd(s)) s.toPrecision(20);
+    return { value: s, approx: false };
+  } catch (e) {
+    if (!(e instanceof QuadspreadError) || e.code !== 'NOT_FINITE') throw e;
     const D = decimal(60);
     const r = D.sqrt(D.from(A.toPrecision(x, 60)));
     return { value: A.from(D.toString(r!)), approx: true };
   }
-  return { value: sqrtOf(A, x), approx: false };
 }
 
 /**
