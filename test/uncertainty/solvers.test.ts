@@ -43,6 +43,15 @@ function checkAgainstDifferences(
 const coord = fc.integer({ min: -1000, max: 1000 }).map((n) => n / 10);
 
 describe('solvers run in uncertain(base) without change', () => {
+  it('uncertain arithmetics offer no fused kernels, so solvers take the generic path that carries gradients', () => {
+    for (const U of [F, R]) expect((U as { kernels?: unknown }).kernels).toBeUndefined();
+    const P = [{ x: measured(R, 0, 1, 'a'), y: R.from(0) }, { x: R.from(4), y: R.from(0) }, { x: R.from(0), y: R.from(3) }] as const;
+    const t = triangle(R, P[0], P[1], P[2]);
+    const plain = triangle(rational, { x: rational.from(0), y: rational.from(0) }, { x: rational.from(4), y: rational.from(0) }, { x: rational.from(0), y: rational.from(3) });
+    expect(rational.eq(t.quadrea.value, plain.quadrea)).toBe(true);
+    expect(t.quadrea.inputs.length).toBe(1);
+  });
+
   it('spread(U, V, P, Q) of measured coordinates has the gradient of its central differences', () => {
     fc.assert(
       fc.property(fc.array(coord, { minLength: 6, maxLength: 6 }), (c) => {
