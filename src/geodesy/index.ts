@@ -6,6 +6,6 @@ export type { Geodetic, GeodeticInput, Geocentric } from './geocentric.js';
 export { enuRotation, enuFromGeocentric, geocentricFromEnu, flatEarthError } from './enu.js';
 export type { Enu, Matrix3, FlatEarthError } from './enu.js';
 export { meridianRadius, primeVerticalRadius, radiusInAzimuth, gaussianMeanRadius } from './radii.js';
-export { heightReductionFactor, transverseMercatorFactors, transverseMercator, combinedFactor, groundToGrid, gridToGround } from './grid.js';
+export { heightReductionFactor, transverseMercatorFactors, transverseMercator, transverseMercatorInverse, combinedFactor, groundToGrid, gridToGround } from './grid.js';
 export type { TransverseMercator, TransverseMercatorGrid, TmFactors, GridPoint } from './grid.js';
 

@@ -23,6 +23,8 @@ import {
   gaussianMeanRadius,
   heightReductionFactor,
   transverseMercatorFactors,
+  transverseMercator,
+  transverseMercatorInverse,
   combinedFactor,
   groundToGrid,
   gridToGround,
@@ -285,6 +287,31 @@ describe('ground to grid', () => {
     const f = transverseMercatorFactors(float, { lat: `52°39'27.2531"N`, lon: `1°43'4.5177"E` }, proj);
     expect(Math.abs(f.k - D.toNumber(d.k))).toBeLessThan(1e-15);
     expect(f.convergence).toBeGreaterThan(0); // east of the central meridian, northern hemisphere
+  });
+});
+
+describe('transverseMercatorInverse undoes transverseMercator', () => {
+  const utm = { lon0: 9, k0: 0.9996, falseEasting: 500000, falseNorthing: 0, ellipsoid: GRS80 };
+  it('in float within 1e-9″ on random points up to 10° from the central meridian and 85° latitude', () => {
+    fc.assert(
+      fc.property(fc.double({ min: -85, max: 85, noNaN: true }), fc.double({ min: -1, max: 19, noNaN: true }), (lat, lon) => {
+        const p = transverseMercator(float, { lat, lon }, utm);
+        const g = transverseMercatorInverse(float, p, utm);
+        expect(Math.abs(g.lat - lat) * 3600).toBeLessThan(1e-9);
+        expect(Math.abs(g.lon - lon) * 3600 * Math.cos(lat * d2r)).toBeLessThan(1e-9);
+        expect(Math.abs(g.k - p.k)).toBeLessThan(1e-15);
+      }),
+      { numRuns: 60 },
+    );
+  });
+  it('in decimal(34) within 1e-25°', () => {
+    const D = decimal(34);
+    for (const [lat, lon] of [[47.25, 11.5], [-33.9, 6.1], [70, 3]] as const) {
+      const p = transverseMercator(D, { lat, lon }, utm);
+      const g = transverseMercatorInverse(D, p, utm);
+      expect(Math.abs(Number(D.toString(D.sub(g.lat, D.from(lat)))))).toBeLessThan(1e-25);
+      expect(Math.abs(Number(D.toString(D.sub(g.lon, D.from(lon)))))).toBeLessThan(1e-25);
+    }
   });
 });
 

@@ -5,7 +5,7 @@ import { float } from '../../src/arithmetic/float.js';
 import type { Arithmetic } from '../../src/arithmetic/types.js';
 import { geodeticToGeocentric, geocentricToGeodetic } from '../../src/geodesy/geocentric.js';
 import { GRS80, WGS84, defineEllipsoid, ellipsoidParameters } from '../../src/geodesy/ellipsoid.js';
-import { transverseMercator } from '../../src/geodesy/grid.js';
+import { transverseMercator, transverseMercatorInverse } from '../../src/geodesy/grid.js';
 import { meridianRadius } from '../../src/geodesy/radii.js';
 
 // Ordnance Survey, "A guide to coordinate systems in Great Britain", annex B (worked
@@ -99,6 +99,13 @@ describe('Ordnance Survey guide, annex C: Transverse Mercator (National Grid on 
       const r = transverseMercator(A, { lat: `52°39'27.2531"N`, lon: `1°43'4.5177"E` }, grid);
       expect(Math.abs(A.toNumber(r.E) - 651409.903)).toBeLessThan(0.001);
       expect(Math.abs(A.toNumber(r.N) - 313177.27)).toBeLessThan(0.001);
+    });
+  }
+  for (const A of arithmetics) {
+    it(`transverseMercatorInverse(${A.name}) gives back 52°39′27.2531″N, 1°43′4.5177″E within 0.0001″`, () => {
+      const g = transverseMercatorInverse(A, { E: '651409.903', N: '313177.270' }, grid);
+      expect(Math.abs(A.toNumber(g.lat) - (52 + 39 / 60 + 27.2531 / 3600)) * 3600).toBeLessThan(0.0001);
+      expect(Math.abs(A.toNumber(g.lon) - (1 + 43 / 60 + 4.5177 / 3600)) * 3600).toBeLessThan(0.0001);
     });
   }
   it('the scale factor agrees with the ratio of grid to ellipsoid distance over a short line (derived check of k)', () => {
