@@ -8,6 +8,7 @@
  */
 import { heightFromBase, isSurd } from '../../index.js';
 import { JobInvalid } from '../failure.js';
+import type { SketchView } from '../report.js';
 import type { Env, RawCheck, RawQuantity, TaskKind, Value } from '../task.js';
 import { lengthText, plain, positive, readAngle, readLength, readVertical, verticalInputs, verticalOf } from '../values.js';
 import type { Input, VerticalSpec } from '../values.js';
@@ -76,7 +77,40 @@ export const baseHeightTask: TaskKind = {
           const diff = Math.abs(h1 - h2);
           checks.push({ name: 'discrepancy', label: `Difference between the heights from ${stations[0]!.label} and ${stations[1]!.label}`, unit: u, value: A.from(String(diff)), tolerance: `≤ ${plain(tol)}`, pass: diff <= Number(plain(tol)) });
         }
-        return { results, checks, notes: ['Both stations are taken to be at one level. The horizontal angles fix on which side of the base the foot lies.'] };
+        let sketch: SketchView[] | undefined;
+        if (env.drawing) {
+          const bb = env.num(b), q1 = env.num(r.horizontal[0] as Value<V>), q2 = env.num(r.horizontal[1] as Value<V>);
+          const fx = (q1 - q2 + bb * bb) / (2 * bb); // the foot from its distances to the two stations (drawing only)
+          const fy = Math.sqrt(Math.max(0, q1 - fx * fx));
+          const hh = Math.sqrt(env.num(r.H as Value<V>)) * (r.sign < 0 ? -1 : 1);
+          const [n1, n2] = [stations[0]!.label, stations[1]!.label];
+          sketch = [
+            {
+              title: `${name} from the base ${n1}–${n2}: plan`,
+              view: 'plan',
+              caption: `plan with the base along x (${n1} at the origin)`,
+              points: [{ name: n1, x: 0, y: 0, role: 'station' }, { name: n2, x: bb, y: 0, role: 'station' }, { name: `${name} (foot)`, x: fx, y: fy, role: 'foot' }],
+              lines: [
+                { x1: 0, y1: 0, x2: bb, y2: 0, role: 'base', label: `base ${plain(base.value)} ${u}` },
+                { x1: 0, y1: 0, x2: fx, y2: fy, role: 'sight' },
+                { x1: bb, y1: 0, x2: fx, y2: fy, role: 'sight' },
+              ],
+              notes: [],
+            },
+            {
+              title: `${name} from the base ${n1}–${n2}: elevation`,
+              view: 'elevation',
+              points: [{ name: n1, x: -Math.sqrt(q1), y: 0, role: 'station' }, { name: n2, x: -Math.sqrt(q2), y: 0, role: 'station' }, { name, x: 0, y: hh, role: 'target' }],
+              lines: [
+                { x1: -Math.max(Math.sqrt(q1), Math.sqrt(q2)), y1: 0, x2: 0, y2: 0, role: 'ground' },
+                { x1: 0, y1: 0, x2: 0, y2: hh, role: 'base', label: `h = ${hh.toPrecision(6)} ${u}` },
+                ...stations.filter((s) => s.vertical).map((s) => ({ x1: -Math.sqrt(s === stations[0] ? q1 : q2), y1: 0, x2: 0, y2: hh, role: 'sight' as const })),
+              ],
+              notes: [],
+            },
+          ];
+        }
+        return { results, checks, notes: ['Both stations are taken to be at one level. The horizontal angles fix on which side of the base the foot lies.'], ...(sketch ? { sketch } : {}) };
       },
     };
   },

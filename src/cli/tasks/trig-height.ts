@@ -8,6 +8,7 @@
  */
 import { reciprocalTrigHeight, trigHeight } from '../../index.js';
 import type { TrigSight } from '../../index.js';
+import type { SketchView } from '../report.js';
 import type { Env, RawCheck, RawQuantity, TaskKind } from '../task.js';
 import { lengthText, plain, positive, readLength, readNumber, readVertical, verticalInputs, verticalOf } from '../values.js';
 import type { Input, VerticalSpec } from '../values.js';
@@ -89,7 +90,25 @@ export const trigHeightTask: TaskKind = {
           }
         }
         if (level) results.push({ name: 'level', label: 'Level of the far mark', unit: u, value: plus(A, best, env.get(level)) });
-        return { results, checks, notes: c === false ? [] : ['Curvature and refraction use k and R as stated in docs/cli.md (k = 0.13, R = 6 371 000 m by default).'] };
+        let sketch: SketchView[] | undefined;
+        if (env.drawing) {
+          const D = Math.sqrt(env.num(f.horizontalQuadrance));
+          const hi = fwd.hi ? env.num(env.get(fwd.hi)) : 0, ht = fwd.ht ? env.num(env.get(fwd.ht)) : 0;
+          const dh = env.num(best);
+          sketch = [{
+            title: 'Trigonometric sight: elevation',
+            view: 'elevation',
+            caption: 'elevation: from the station mark (left) to the far mark, height up',
+            points: [{ name: 'station mark', x: 0, y: 0, role: 'station' }, { name: 'far mark', x: D, y: dh, role: 'target' }],
+            lines: [
+              { x1: 0, y1: 0, x2: 0, y2: hi, role: 'base' },
+              { x1: D, y1: dh, x2: D, y2: dh + ht, role: 'base' },
+              { x1: 0, y1: hi, x2: D, y2: dh + ht, role: 'sight', label: `Δh = ${dh.toPrecision(6)} ${u}` },
+            ],
+            notes: [],
+          }];
+        }
+        return { results, checks, notes: c === false ? [] : ['Curvature and refraction use k and R as stated in docs/cli.md (k = 0.13, R = 6 371 000 m by default).'], ...(sketch ? { sketch } : {}) };
       },
     };
   },
