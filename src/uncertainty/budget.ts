@@ -131,7 +131,7 @@ export function budget<T, E extends boolean>(
     const cu = B.mul(c, input.sigma);
     const contribution = B.mul(cu, cu); // (cᵢ·u(xᵢ))²: GUM eq. (10) term
     variance = B.add(variance, contribution);
-    lines.push(Object.freeze({ name: input.name, value: input.value, sigma: input.sigma, sensitivity: c, contribution }));
+    lines.push({ name: input.name, value: input.value, sigma: input.sigma, sensitivity: c, contribution });
   }
   lines.sort((p, q) => B.cmp(q.contribution, p.contribution) || (p.name < q.name ? -1 : p.name > q.name ? 1 : 0));
 
@@ -177,11 +177,11 @@ export function budget<T, E extends boolean>(
     if (noise) throw new QuadspreadError('INVALID_COVARIANCE', where, `the covariances make the variance ${B.toString(variance)} negative (they cannot belong to real inputs)`);
     variance = B.zero;
   }
-  return Object.freeze({
+  return {
     value: y.value,
     variance,
     sigma: sqrtOf(B, variance),
-    contributions: Object.freeze(lines),
-    correlations: Object.freeze(correlations),
-  });
+    contributions: lines,
+    correlations,
+  };
 }
