@@ -7,6 +7,7 @@ import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { checkLengthUnit, METRES_PER_UNIT } from '../readings/length.js';
 import type { LengthUnit } from '../readings/length.js';
+import { readNumber } from '../geometry/validate.js';
 import { readArray, readPoint, sqrtValue } from './internal.js';
 import type { PointInput, XY } from './internal.js';
 
@@ -154,7 +155,7 @@ export function convertArea<T>(A: Arithmetic<T, boolean>, value: Numeric<T>, fro
   const where = 'convertArea(A, value, from, to)';
   const f = unitFactor(A, AREA_UNITS, from, `${where} from`);
   const t = unitFactor(A, AREA_UNITS, to, `${where} to`);
-  return A.div(A.mul(A.from(value), f), t);
+  return A.div(A.mul(readNumber(A, value, `${where} value`), f), t);
 }
 
 /** What {@link polygonArea} returns. All areas are unsigned except `signed`. */

@@ -8,6 +8,7 @@ import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import type { Root } from '../geometry/surd.js';
+import { readNumber } from '../geometry/validate.js';
 import { readPoint, rootOf, roundingSlack } from './internal.js';
 import type { PointInput } from './internal.js';
 
@@ -29,11 +30,11 @@ function readCircle<T>(A: Arithmetic<T, boolean>, c: unknown, where: string): { 
     throw new QuadspreadError('INVALID_ARGUMENT', where, 'give exactly one of radius and quadrance');
   }
   if (o.radius !== undefined) {
-    const r = A.from(o.radius);
+    const r = readNumber(A, o.radius, `${where}.radius`);
     if (A.sign(r) < 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where}.radius`, `${A.toString(r)} is negative`);
     return { c: center, R: A.mul(r, r) };
   }
-  const R = A.from(o.quadrance!);
+  const R = readNumber(A, o.quadrance!, `${where}.quadrance`);
   if (A.sign(R) < 0) throw new QuadspreadError('NEGATIVE_QUADRANCE', `${where}.quadrance`, `${A.toString(R)} is negative`);
   return { c: center, R };
 }

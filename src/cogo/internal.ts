@@ -9,6 +9,7 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { surd } from '../geometry/surd.js';
 import { approxSqrt } from '../readings/numeric.js';
+import { readNumber } from '../geometry/validate.js';
 import type { Root } from '../geometry/surd.js';
 
 /** A point as cogo reads it: x = east, y = north, each a value or numeric input. @internal */
@@ -26,7 +27,7 @@ export function readPoint<T>(A: Arithmetic<T, boolean>, p: unknown, where: strin
     throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(p)} is not a point { x, y } (x = east, y = north)`);
   }
   const q = p as PointInput<T>;
-  return { x: A.from(q.x), y: A.from(q.y) };
+  return { x: readNumber(A, q.x, `${where}.x`), y: readNumber(A, q.y, `${where}.y`) };
 }
 
 /**

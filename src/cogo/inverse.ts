@@ -12,6 +12,7 @@ import type { Root } from '../geometry/surd.js';
 import { formatDms } from '../readings/dms.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { azimuthToQuadrant, readAzimuth } from './bearing.js';
+import { readNumber } from '../geometry/validate.js';
 import { readPoint } from './internal.js';
 import type { PointInput } from './internal.js';
 
@@ -127,7 +128,7 @@ export function forward<T>(A: Arithmetic<T, boolean>, P: PointInput<T>, bearing:
   const where = 'forward(A, P, bearing, distance)';
   const p = readPoint(A, P, `${where} P`);
   const az = readAzimuth(A, bearing, `${where} bearing`);
-  const d = A.from(distance);
+  const d = readNumber(A, distance, `${where} distance`);
   if (A.sign(d) < 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where} distance`, `${A.toString(d)} is negative`);
   const { sin, cos } = sinCosDegrees(A, az);
   // Departure d·sin(azimuth), latitude d·cos(azimuth).

@@ -11,6 +11,7 @@ import { sqrtOf } from '../geometry/surd.js';
 import type { Root } from '../geometry/surd.js';
 import { checkLengthUnit, METRES_PER_UNIT } from '../readings/length.js';
 import type { LengthUnit } from '../readings/length.js';
+import { readNumber } from '../geometry/validate.js';
 import { readArray } from './internal.js';
 
 /**
@@ -56,7 +57,7 @@ function readC<T>(A: Arithmetic<T, boolean>, order: LevellingOrder | Numeric<T>,
   if (typeof order === 'string' && !/^[\s\d.+eE/-]+$/.test(order)) {
     throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(order)} is not a levelling order (${Object.keys(LEVELLING_ORDERS).join(', ')}) or a constant c in mm`);
   }
-  const c = A.from(order);
+  const c = readNumber(A, order, where);
   if (A.sign(c) <= 0) throw new QuadspreadError('INVALID_ARGUMENT', where, `c = ${A.toString(c)} mm is not positive`);
   return c;
 }
@@ -84,7 +85,7 @@ function readC<T>(A: Arithmetic<T, boolean>, order: LevellingOrder | Numeric<T>,
 export function allowableMisclosure<T, E extends boolean>(A: Arithmetic<T, E>, order: LevellingOrder | Numeric<T>, km: Numeric<T>): AllowableMisclosure<T, E> {
   const where = 'allowableMisclosure(A, order, km)';
   const c = readC(A, order, `${where} order`);
-  const K = A.from(km);
+  const K = readNumber(A, km, `${where} km`);
   if (A.sign(K) < 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where} km`, `K = ${A.toString(K)} km is negative`);
   // Allowable section misclosure c·√K mm (FGCC 1984; c from memory).
   const allowable = sqrtOf(A, A.mul(A.mul(c, c), K));
@@ -175,8 +176,8 @@ export interface LevelRun<T, E extends boolean> {
   readonly distributedBy: 'distance' | 'setups';
 }
 
-function readOpt<T>(A: Arithmetic<T, boolean>, v: Numeric<T> | undefined): T | undefined {
-  return v === undefined ? undefined : A.from(v);
+function readOpt<T>(A: Arithmetic<T, boolean>, v: Numeric<T> | undefined, where: string): T | undefined {
+  return v === undefined ? undefined : readNumber(A, v, where);
 }
 
 /**
@@ -220,7 +221,7 @@ export function levelRun<T, E extends boolean>(A: Arithmetic<T, E>, input: Level
   const list = readArray<LevelSight<T>>(input.sights, `${where} sights`);
   if (list.length < 2) throw new QuadspreadError('TOO_FEW_POINTS', `${where} sights`, `a run needs at least 2 rows (a backsight and a foresight), got ${list.length}`);
   const unit = checkLengthUnit(input.unit ?? 'm', `${where} unit`);
-  const start = A.from(input.start);
+  const start = readNumber(A, input.start, `${where} start`);
   const n = list.length;
 
   const bs = new Array<T | undefined>(n);
@@ -232,10 +233,10 @@ export function levelRun<T, E extends boolean>(A: Arithmetic<T, E>, input: Level
     const r = list[i];
     const at = `${where} sights[${i}]`;
     if (r === null || typeof r !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', at, `${show(r)} is not a sight { bs?, is?, fs? }`);
-    bs[i] = readOpt(A, r.bs);
-    is[i] = readOpt(A, r.is);
-    fs[i] = readOpt(A, r.fs);
-    dist[i] = readOpt(A, r.distance);
+    bs[i] = readOpt(A, r.bs, `${at}.bs`);
+    is[i] = readOpt(A, r.is, `${at}.is`);
+    fs[i] = readOpt(A, r.fs, `${at}.fs`);
+    dist[i] = readOpt(A, r.distance, `${at}.distance`);
     const d = dist[i];
     if (d !== undefined && A.sign(d) < 0) throw new QuadspreadError('INVALID_ARGUMENT', `${at}.distance`, `${A.toString(d)} is negative`);
     if (i > 0 && d === undefined) allDistances = false;
@@ -345,14 +346,14 @@ export function levelRun<T, E extends boolean>(A: Arithmetic<T, E>, input: Level
     totalWeight = A.from(setup[n - 1]!);
   }
   if (input.close !== undefined) {
-    misclosure = A.sub(last, A.from(input.close));
+    misclosure = A.sub(last, readNumber(A, input.close, `${where} close`));
     misclosureMm = A.mul(A.mul(misclosure, toMetres), A.from(1000));
   } else if (input.order !== undefined) {
     throw new QuadspreadError('INVALID_ARGUMENT', `${where} order`, 'an allowable misclosure needs the known closing level `close`');
   }
   if (input.order !== undefined && misclosureMm !== undefined) {
     let km: T;
-    if (input.km !== undefined) km = A.from(input.km);
+    if (input.km !== undefined) km = readNumber(A, input.km, `${where} km`);
     else if (allDistances) km = A.div(A.mul(totalDistance, toMetres), A.from(1000));
     else throw new QuadspreadError('INVALID_ARGUMENT', `${where} km`, 'give the section length km, or a distance on every row after the first');
     allowable = allowableMisclosure(A, input.order, km);

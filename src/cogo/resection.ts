@@ -8,6 +8,7 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { angleToDegrees } from '../readings/angle.js';
 import { sinCosDegrees } from '../readings/trig.js';
+import { readNumber } from '../geometry/validate.js';
 import { readArray, readPoint } from './internal.js';
 import type { PointInput } from './internal.js';
 
@@ -111,7 +112,7 @@ export function resection<T>(A: Arithmetic<T, boolean>, input: ResectionInput<T>
   };
   const a12 = readAngle(ang[0]!, 'angles[0] (a12)');
   const a23 = readAngle(ang[1]!, 'angles[1] (a23)');
-  const tol = A.from(input.dangerTolerance ?? DANGER_CIRCLE_TOLERANCE);
+  const tol = readNumber(A, input.dangerTolerance ?? DANGER_CIRCLE_TOLERANCE, `${where} dangerTolerance`);
   if (A.sign(tol) < 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where} dangerTolerance`, `${A.toString(tol)} is negative`);
 
   for (let i = 0; i < 3; i++) {

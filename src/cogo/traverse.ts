@@ -14,6 +14,7 @@ import { angleToDegrees } from '../readings/angle.js';
 import { readAzimuth } from './bearing.js';
 import { float } from '../arithmetic/float.js';
 import { traverseFloat } from './traverse-float.js';
+import { readNumber } from '../geometry/validate.js';
 import { readArray, readPoint, sqrtValue } from './internal.js';
 import type { PointInput } from './internal.js';
 
@@ -238,7 +239,7 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
     let d: T;
     if (c.bearing !== undefined) {
       if (c.distance === undefined) throw new QuadspreadError('INVALID_ARGUMENT', at(), 'a course with a bearing needs a distance');
-      d = A.from(c.distance);
+      d = readNumber(A, c.distance, at, '.distance');
       const az = readAzimuth(A, c.bearing, at, '.bearing');
       // Latitude = d·cos(azimuth), departure = d·sin(azimuth) (azimuth clockwise from north),
       // e.g. Ghilani & Wolf, Elementary Surveying, chapter on traverse computations (from memory).
@@ -246,10 +247,10 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
       la = A.mul(d, sc.cos);
       de = A.mul(d, sc.sin);
     } else if (c.latitude !== undefined && c.departure !== undefined) {
-      la = A.from(c.latitude);
-      de = A.from(c.departure);
+      la = readNumber(A, c.latitude, at, '.latitude');
+      de = readNumber(A, c.departure, at, '.departure');
       // Course length by Pythagoras unless given.
-      d = c.distance !== undefined ? A.from(c.distance) : courseLength(A, la, de, at);
+      d = c.distance !== undefined ? readNumber(A, c.distance, at, '.distance') : courseLength(A, la, de, at);
     } else {
       throw new QuadspreadError('INVALID_ARGUMENT', at(), 'a course is { bearing, distance } or { latitude, departure }');
     }

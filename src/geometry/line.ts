@@ -6,6 +6,7 @@
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { QuadspreadError, show } from '../errors.js';
 import type { Point } from './point.js';
+import { readNumber } from './validate.js';
 
 /**
  * The line ⟨a : b : c⟩: the points with a·x + b·y + c = 0 (x east, y north), a and b
@@ -46,9 +47,10 @@ export interface Line<T> {
  * ```
  */
 export function line<T>(A: Arithmetic<T>, a: Numeric<T>, b: Numeric<T>, c: Numeric<T>): Line<T> {
-  const l = { a: A.from(a), b: A.from(b), c: A.from(c) };
+  const w = 'line(A, a, b, c)';
+  const l = { a: readNumber(A, a, `${w} a`), b: readNumber(A, b, `${w} b`), c: readNumber(A, c, `${w} c`) };
   if (A.isZero(l.a) && A.isZero(l.b)) {
-    throw new QuadspreadError('DEGENERATE_LINE', 'line(A, a, b, c)', `a and b are both zero (c = ${show(A.toString(l.c))}), which is no line`);
+    throw new QuadspreadError('DEGENERATE_LINE', w, `a and b are both zero (c = ${show(A.toString(l.c))}), which is no line`);
   }
   return l;
 }

@@ -4,6 +4,7 @@
  * @module geometry
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+import { readNumber } from './validate.js';
 
 /**
  * A point (or a vector) of the plane in arithmetic `T`: `x` east, `y` north.
@@ -42,5 +43,5 @@ export interface Point<T> {
  * ```
  */
 export function point<T>(A: Arithmetic<T>, x: Numeric<T>, y: Numeric<T>): Point<T> {
-  return { x: A.from(x), y: A.from(y) };
+  return { x: readNumber(A, x, 'point(A, x, y) x'), y: readNumber(A, y, 'point(A, x, y) y') };
 }

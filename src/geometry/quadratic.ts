@@ -6,6 +6,7 @@
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { QuadspreadError, show } from '../errors.js';
 import { type Root, type Surd, surd } from './surd.js';
+import { readNumber } from './validate.js';
 
 /**
  * The real roots of a·x² + b·x + c = 0, distinct and in increasing order: two, one
@@ -30,9 +31,10 @@ import { type Root, type Surd, surd } from './surd.js';
  * ```
  */
 export function solveQuadratic<T, E extends boolean>(A: Arithmetic<T, E>, a: Numeric<T>, b: Numeric<T>, c: Numeric<T>): Root<T, E>[] {
-  const qa = A.from(a);
-  const qb = A.from(b);
-  const qc = A.from(c);
+  const w = 'solveQuadratic(A, a, b, c)';
+  const qa = readNumber(A, a, `${w} a`);
+  const qb = readNumber(A, b, `${w} b`);
+  const qc = readNumber(A, c, `${w} c`);
   if (A.isZero(qa)) {
     if (A.isZero(qb)) {
       throw new QuadspreadError('INVALID_ARGUMENT', 'solveQuadratic(A, a, b, c)', `a and b are both zero (c = ${show(A.toString(qc))}): no equation in x`);

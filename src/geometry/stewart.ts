@@ -8,7 +8,7 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { QuadspreadError, show } from '../errors.js';
 import { solveQuadratic } from './quadratic.js';
 import { type Root, isSurd, type Surd } from './surd.js';
-import { readQuadrance } from './validate.js';
+import { readNumber, readQuadrance } from './validate.js';
 
 /**
  * The data of Stewart's relation with chainages: a point P (off the line or on it) and
@@ -92,7 +92,7 @@ function stewartQ<T>(A: Arithmetic<T>, QB: T, QC: T, QD: T, QBD: T, QBC: T): T {
  * @param A the arithmetic
  * @param data quadrances from P (≥ 0) and chainages of B, C, D
  * @returns the residual, in cubic units
- * @throws {QuadspreadError} `NEGATIVE_QUADRANCE`; `INVALID_NUMBER`.
+ * @throws {QuadspreadError} `NEGATIVE_QUADRANCE`; `INVALID_NUMBER` naming the member; `INVALID_ARGUMENT` when `data` is not an object.
  * @example
  * ```ts
  * import { rational, stewartResidual } from 'quadspread';
@@ -102,7 +102,8 @@ function stewartQ<T>(A: Arithmetic<T>, QB: T, QC: T, QD: T, QBD: T, QBC: T): T {
  */
 export function stewartResidual<T>(A: Arithmetic<T>, data: StewartChainages<Numeric<T>>): T {
   const w = 'stewartResidual(A, data)';
-  return stewart(A, readQuadrance(A, data.QB, w, 'QB'), readQuadrance(A, data.QC, w, 'QC'), readQuadrance(A, data.QD, w, 'QD'), A.from(data.tB), A.from(data.tC), A.from(data.tD));
+  checkData(data, w);
+  return stewart(A, readQuadrance(A, data.QB, w, 'QB'), readQuadrance(A, data.QC, w, 'QC'), readQuadrance(A, data.QD, w, 'QD'), readNumber(A, data.tB, `${w} tB`), readNumber(A, data.tC, `${w} tC`), readNumber(A, data.tD, `${w} tD`));
 }
 
 /**
@@ -113,7 +114,7 @@ export function stewartResidual<T>(A: Arithmetic<T>, data: StewartChainages<Nume
  * @param A the arithmetic
  * @param data quadrances from P and along the line, all ≥ 0
  * @returns the residual, in square units cubed
- * @throws {QuadspreadError} `NEGATIVE_QUADRANCE`; `INVALID_NUMBER`.
+ * @throws {QuadspreadError} `NEGATIVE_QUADRANCE`; `INVALID_NUMBER` naming the member; `INVALID_ARGUMENT` when `data` is not an object.
  * @example
  * ```ts
  * import { rational, stewartQuadranceResidual } from 'quadspread';
@@ -123,7 +124,13 @@ export function stewartResidual<T>(A: Arithmetic<T>, data: StewartChainages<Nume
  */
 export function stewartQuadranceResidual<T>(A: Arithmetic<T>, data: StewartQuadrances<Numeric<T>>): T {
   const w = 'stewartQuadranceResidual(A, data)';
+  checkData(data, w);
   return stewartQ(A, readQuadrance(A, data.QB, w, 'QB'), readQuadrance(A, data.QC, w, 'QC'), readQuadrance(A, data.QD, w, 'QD'), readQuadrance(A, data.QBD, w, 'QBD'), readQuadrance(A, data.QBC, w, 'QBC'));
+}
+
+/** Checks that `data` is an object (the members are read from it). */
+function checkData(data: unknown, where: string): void {
+  if (data === null || typeof data !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', where, `data = ${show(data)} is not an object`);
 }
 
 /** The one missing key of `data` among `keys`; throws unless exactly one is missing. */
@@ -170,7 +177,7 @@ function nonNegative<T, E extends boolean>(A: Arithmetic<T, E>, rs: Root<T, E>[]
  * @param data five of the six members (the unknown one absent or `undefined`)
  * @returns the solutions, ascending
  * @throws {QuadspreadError} `INVALID_ARGUMENT` unless exactly one member is missing, or when
- * the others do not fix it; `REPEATED_CHAINAGE` when two given chainages are equal;
+ * the others do not fix it, or when `data` is not an object; `REPEATED_CHAINAGE` when two given chainages are equal;
  * `NEGATIVE_QUADRANCE`; `INVALID_NUMBER`.
  * @example
  * ```ts
@@ -181,11 +188,12 @@ function nonNegative<T, E extends boolean>(A: Arithmetic<T, E>, rs: Root<T, E>[]
  */
 export function solveStewart<T, E extends boolean>(A: Arithmetic<T, E>, data: Partial<StewartChainages<Numeric<T>>>): Root<T, E>[] {
   const w = 'solveStewart(A, data)';
+  checkData(data, w);
   const key = missingKey(data as Record<string, unknown>, CHAINAGE_KEYS, w);
   const v: Record<string, T> = {};
   for (const k of CHAINAGE_KEYS) {
     if (k === key) continue;
-    v[k] = k[0] === 'Q' ? readQuadrance(A, data[k]!, w, k) : A.from(data[k]!);
+    v[k] = k[0] === 'Q' ? readQuadrance(A, data[k]!, w, k) : readNumber(A, data[k]!, `${w} ${k}`);
   }
   const ts = (['tB', 'tC', 'tD'] as const).filter((k) => k !== key);
   if (A.eq(v[ts[0]!]!, v[ts[1]!]!)) {
@@ -226,7 +234,7 @@ export function solveStewart<T, E extends boolean>(A: Arithmetic<T, E>, data: Pa
  * @param data four of the five quadrances (the unknown one absent or `undefined`)
  * @returns the non-negative solutions, ascending
  * @throws {QuadspreadError} `INVALID_ARGUMENT` unless exactly one member is missing, or when
- * the others do not fix it; `NEGATIVE_QUADRANCE`; `INVALID_NUMBER`.
+ * the others do not fix it, or when `data` is not an object; `NEGATIVE_QUADRANCE`; `INVALID_NUMBER`.
  * @example
  * ```ts
  * import { rational, solveStewartQuadrances } from 'quadspread';
@@ -236,6 +244,7 @@ export function solveStewart<T, E extends boolean>(A: Arithmetic<T, E>, data: Pa
  */
 export function solveStewartQuadrances<T, E extends boolean>(A: Arithmetic<T, E>, data: Partial<StewartQuadrances<Numeric<T>>>): Root<T, E>[] {
   const w = 'solveStewartQuadrances(A, data)';
+  checkData(data, w);
   const key = missingKey(data as Record<string, unknown>, QUADRANCE_KEYS, w);
   const v: Record<string, T> = {};
   for (const k of QUADRANCE_KEYS) if (k !== key) v[k] = readQuadrance(A, data[k]!, w, k);

@@ -7,6 +7,7 @@ import Fraction from 'fraction.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { isqrt } from '../arithmetic/exact.js';
 import { QuadspreadError, show } from '../errors.js';
+import { readNumber } from './validate.js';
 
 /**
  * A quadratic surd a + b√d with a, b, d values of an arithmetic, d ≥ 0.
@@ -144,7 +145,7 @@ class SurdValue<T> implements Surd<T> {
   /** y over this surd's radicand: [a, b] with y = a + b√(this.d); throws when impossible. */
   private align(y: Surd<T> | Numeric<T>, where: string): [T, T] {
     const A = this.arithmetic;
-    if (!isSurd(y)) return [A.from(y), A.zero];
+    if (!isSurd(y)) return [readNumber(A, y, where), A.zero];
     const Y = y as Surd<T>;
     if (A.isZero(Y.b)) return [Y.a, A.zero];
     if (A.isZero(this.b) || A.eq(Y.d, this.d)) return [Y.a, Y.b];
@@ -361,11 +362,12 @@ export function isSurd(x: unknown): x is Surd<unknown> {
  * ```
  */
 export function surd<T>(A: Arithmetic<T>, a: Numeric<T>, b: Numeric<T> = 0, d: Numeric<T> = 1): Surd<T> {
-  const ra = A.from(a);
-  let rb = A.from(b);
-  let rd = A.from(d);
+  const w = 'surd(A, a, b, d)';
+  const ra = readNumber(A, a, `${w} a`);
+  let rb = readNumber(A, b, `${w} b`);
+  let rd = readNumber(A, d, `${w} d`);
   if (A.isZero(rb) || A.isZero(rd)) return new SurdValue(A, ra, A.zero, A.one);
-  if (A.sign(rd) < 0) throw new QuadspreadError('NO_REAL_SOLUTION', 'surd(A, a, b, d)', `the radicand d = ${show(A.toString(rd))} is negative`);
+  if (A.sign(rd) < 0) throw new QuadspreadError('NO_REAL_SOLUTION', w, `the radicand d = ${show(A.toString(rd))} is negative`);
   if ((rd as unknown) instanceof Fraction && (rb as unknown) instanceof Fraction) {
     // √(p/q) = √(pq)/q, then k²m → k√m for the primes below 1000.
     const f = rd as unknown as Fraction;
@@ -410,7 +412,7 @@ export function surd<T>(A: Arithmetic<T>, a: Numeric<T>, b: Numeric<T> = 0, d: N
  * ```
  */
 export function sqrtOf<T, E extends boolean>(A: Arithmetic<T, E>, x: Numeric<T>): Root<T, E> {
-  const v = A.from(x);
+  const v = readNumber(A, x, 'sqrtOf(A, x) x');
   if (A.sign(v) < 0) throw new QuadspreadError('NO_REAL_SOLUTION', 'sqrtOf(A, x)', `x = ${show(A.toString(v))} is negative`);
   if (A.exact) return surd(A, 0, 1, v) as Root<T, E>;
   const r = A.sqrt(v);
@@ -433,7 +435,7 @@ export function sqrtOf<T, E extends boolean>(A: Arithmetic<T, E>, x: Numeric<T>)
  * ```
  */
 export function asRoot<T, E extends boolean>(A: Arithmetic<T, E>, x: Numeric<T>): Root<T, E> {
-  const v = A.from(x);
+  const v = readNumber(A, x, 'asRoot(A, x) x');
   return (A.exact ? new SurdValue(A, v, A.zero, A.one) : v) as Root<T, E>;
 }
 

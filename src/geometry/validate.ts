@@ -7,23 +7,40 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { QuadspreadError, show } from '../errors.js';
 
 /**
+ * Reads a value with `A.from`; an error it raises is raised again naming `where` (the
+ * function and the argument, e.g. `area(A, points)[2].x`) instead of `A.from(x)`. `where`
+ * may be a function (and `suffix` is appended), so that loops build the text only on error.
+ * @throws {QuadspreadError} `INVALID_NUMBER`, `INPUT_TOO_LONG` (the code of `A.from`).
+ * @internal
+ */
+export function readNumber<T>(A: Arithmetic<T>, x: Numeric<T>, where: string | (() => string), suffix = ''): T {
+  try {
+    return A.from(x);
+  } catch (e) {
+    if (!(e instanceof QuadspreadError)) throw e;
+    const what = e.message.slice(`quadspread ${e.code}: ${e.where}: `.length);
+    throw new QuadspreadError(e.code, (typeof where === 'string' ? where : where()) + suffix, what);
+  }
+}
+
+/**
  * Reads a quadrance with `A.from` and checks that it is ≥ 0.
- * @throws {QuadspreadError} `NEGATIVE_QUADRANCE`; `INVALID_NUMBER` from `A.from`.
+ * @throws {QuadspreadError} `NEGATIVE_QUADRANCE`; `INVALID_NUMBER` naming the argument.
  * @internal
  */
 export function readQuadrance<T>(A: Arithmetic<T>, x: Numeric<T>, where: string, arg: string): T {
-  const v = A.from(x);
+  const v = readNumber(A, x, `${where} ${arg}`);
   if (A.sign(v) < 0) throw new QuadspreadError('NEGATIVE_QUADRANCE', where, `${arg} = ${show(A.toString(v))} is negative; a quadrance is a squared distance`);
   return v;
 }
 
 /**
  * Reads a spread with `A.from` and checks that it lies in [0, 1].
- * @throws {QuadspreadError} `SPREAD_OUT_OF_RANGE`; `INVALID_NUMBER` from `A.from`.
+ * @throws {QuadspreadError} `SPREAD_OUT_OF_RANGE`; `INVALID_NUMBER` naming the argument.
  * @internal
  */
 export function readSpread<T>(A: Arithmetic<T>, x: Numeric<T>, where: string, arg: string): T {
-  const v = A.from(x);
+  const v = readNumber(A, x, `${where} ${arg}`);
   if (A.sign(v) < 0 || A.cmp(v, A.one) > 0) throw new QuadspreadError('SPREAD_OUT_OF_RANGE', where, `${arg} = ${show(A.toString(v))} is outside [0, 1]`);
   return v;
 }

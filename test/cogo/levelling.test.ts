@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { rational, decimal, float, levelRun, allowableMisclosure, LEVELLING_ORDERS, QuadspreadError } from '../../src/index.js';
+import { rational, decimal, float, levelRun, allowableMisclosure, LEVELLING_ORDERS, QuadspreadError, area, intersectCircles, forward } from '../../src/index.js';
 import type { Arithmetic, LevelSight } from '../../src/index.js';
 
 const kinds: [string, Arithmetic<unknown, boolean>][] = [
@@ -100,6 +100,18 @@ describe('allowableMisclosure(A, order, km)', () => {
     expect(code(() => allowableMisclosure(rational, 'fourth' as never, 1))).toBe('INVALID_ARGUMENT');
     expect(code(() => allowableMisclosure(rational, 0, 1))).toBe('INVALID_ARGUMENT');
     expect(code(() => allowableMisclosure(rational, 'third', -1))).toBe('INVALID_ARGUMENT');
+  });
+});
+
+describe('errors name the input that could not be read', () => {
+  it('levelRun names start, a sight member and close; area and circles name the vertex or radius', () => {
+    expect(() => levelRun(rational, { start: 'abc', sights: [{ bs: 1 }, { fs: 1 }] })).toThrow(/levelRun\(A, input\) start: "abc" is not a number/);
+    expect(() => levelRun(float, { start: 0, sights: [{ bs: 1 }, { fs: NaN }] })).toThrow(/levelRun\(A, input\) sights\[1\]\.fs:/);
+    expect(() => levelRun(rational, { start: 0, close: '1,5', sights: [{ bs: 1 }, { fs: 1 }] })).toThrow(/levelRun\(A, input\) close:/);
+    expect(() => area(rational, [{ x: 0, y: 0 }, { x: 'one', y: 0 }, { x: 0, y: 1 }])).toThrow(/area\(A, points\)\[1\]\.x: "one" is not a number/);
+    expect(() => intersectCircles(rational, { center: { x: 0, y: 0 }, radius: 'r' }, { center: { x: 1, y: 0 }, radius: 1 })).toThrow(/circle1\.radius:/);
+    expect(() => forward(rational, { x: 0, y: 0 }, 10, 'far')).toThrow(/forward\(A, P, bearing, distance\) distance:/);
+    expect(code(() => levelRun(rational, { start: 'abc', sights: [{ bs: 1 }, { fs: 1 }] }))).toBe('INVALID_NUMBER');
   });
 });
 

@@ -158,6 +158,8 @@ describe.each(kinds)('traverse(%s, …)', (_name, A) => {
     expect(code(() => traverse(A, { start: { x: 0, y: 0 }, courses: [{ bearing: 10, distance: -5 }] }))).toBe('INVALID_ARGUMENT');
     expect(code(() => traverse(A, { start: { x: 0, y: 0 }, courses: [{ bearing: 10, distance: 5 }], rule: 'crandall' as never }))).toBe('INVALID_ARGUMENT');
     expect(code(() => traverse(A, { start: { x: 0, y: 0 }, courses: [{ bearing: 10, distance: 'five' }] }))).toBe('INVALID_NUMBER');
+    expect(() => traverse(A, { start: { x: 0, y: 0 }, courses: [{ bearing: 10, distance: 1 }, { latitude: 1, departure: 'east' }] })).toThrow(/traverse\(A, input\) courses\[1\]\.departure: "east" is not a number/);
+    expect(() => traverse(A, { start: { x: 'o', y: 0 }, courses: [{ bearing: 10, distance: 1 }] })).toThrow(/traverse\(A, input\) start\.x:/);
   });
 });
 

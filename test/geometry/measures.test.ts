@@ -5,7 +5,7 @@ import { rational, decimal, float, QuadspreadError } from '../../src/index.js';
 import type { Arithmetic } from '../../src/index.js';
 import {
   point, quadrance, vectorQuadrance, spread, cross, spreadOfVectors,
-  triangle, line, lineThrough, isOnLine, isParallel, isPerpendicular, footOfPerpendicular, quadranceToLine, spreadOfLines,
+  triangle, solveTriangle, solveQuadratic, surd, sqrtOf, line, lineThrough, isOnLine, isParallel, isPerpendicular, footOfPerpendicular, quadranceToLine, spreadOfLines,
 } from '../../src/geometry/index.js';
 
 function code(f: () => unknown): string | undefined {
@@ -148,6 +148,14 @@ describe('bad input to points, spreads and lines throws typed errors', () => {
     expect(code(() => footOfPerpendicular(A, O, bad))).toBe('DEGENERATE_LINE');
     expect(code(() => quadranceToLine(A, O, bad))).toBe('DEGENERATE_LINE');
     expect(code(() => spreadOfLines(A, bad, line(A, 1, 0, 0)))).toBe('DEGENERATE_LINE');
+  });
+  it('errors from reading a number name the function and the argument, not the arithmetic', () => {
+    expect(() => point(A, 0, 'north')).toThrow(/point\(A, x, y\) y: "north" is not a number/);
+    expect(() => line(A, 1, '2..', 0)).toThrow(/line\(A, a, b, c\) b:/);
+    expect(() => solveQuadratic(A, 1, 2, NaN)).toThrow(/solveQuadratic\(A, a, b, c\) c:/);
+    expect(() => solveTriangle(A, { Q1: 'five', Q2: 1, Q3: 1 })).toThrow(/solveTriangle\(A, known\) Q1:/);
+    expect(() => surd(A, 1, 1, 'two')).toThrow(/surd\(A, a, b, d\) d:/);
+    expect(() => sqrtOf(A, '9'.repeat(2000))).toThrow(/INPUT_TOO_LONG: sqrtOf\(A, x\) x:/);
   });
   it('point(A, x, y) refuses NaN, Infinity, bad text and overlong text', () => {
     expect(code(() => point(A, NaN, 0))).toBe('INVALID_NUMBER');

@@ -167,6 +167,14 @@ describe('bad input to the Stewart functions throws typed errors', () => {
     expect(code(() => stewartResidual(A, { QB: -1, QC: 2, QD: 3, tB: 0, tC: 1, tD: 2 }))).toBe('NEGATIVE_QUADRANCE');
     expect(code(() => stewartQuadranceResidual(A, { QB: 1, QC: 2, QD: 3, QBD: -4, QBC: 1 }))).toBe('NEGATIVE_QUADRANCE');
   });
+  it('data that is not an object throws INVALID_ARGUMENT, and a bad member is named in the message', () => {
+    expect(code(() => solveStewart(A, null as never))).toBe('INVALID_ARGUMENT');
+    expect(code(() => solveStewartQuadrances(A, undefined as never))).toBe('INVALID_ARGUMENT');
+    expect(code(() => stewartResidual(A, 7 as never))).toBe('INVALID_ARGUMENT');
+    expect(code(() => stewartQuadranceResidual(A, null as never))).toBe('INVALID_ARGUMENT');
+    expect(() => stewartResidual(A, { QB: 1, QC: 2, QD: 3, tB: 0, tC: 'ten', tD: 2 })).toThrow(/stewartResidual\(A, data\) tC: "ten" is not a number/);
+    expect(() => solveStewart(A, { QB: 1, QC: 'x', tB: 0, tC: 1, tD: 2 })).toThrow(/solveStewart\(A, data\) QC:/);
+  });
   it('data no real point fits give no solution: QD far below what the line allows', () => {
     // B at 0, C at 10, P at quadrance 34 and 74 from them: P is 5 off the line, so QD < 25 is impossible.
     expect(solveStewart(A, { QB: 34, QC: 74, QD: 20, tB: 0, tC: 10 })).toEqual([]);
