@@ -292,7 +292,8 @@ export function transverseMercator<T>(
   point: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },
   projection: TransverseMercatorGrid,
 ): GridPoint<T> {
-  return tm(A, point, projection, true);
+  const r = tm(A, point, projection, true);
+  return { E: r.E, N: r.N, k: r.k, convergence: r.convergence };
 }
 
 function tm<T>(
@@ -300,7 +301,8 @@ function tm<T>(
   point: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },
   projection: TransverseMercatorGrid,
   wantGrid: boolean,
-): GridPoint<T> {
+  originXi?: T,
+): GridPoint<T> & { xi0: T } {
   const where = wantGrid ? 'transverseMercator' : 'transverseMercatorFactors';
   if (point === null || typeof point !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', `${where}(point)`, `${show(point)} is not { lat, lon }`);
   if (projection === null || typeof projection !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', `${where}(projection)`, `${show(projection)} is not { lon0, k0, ellipsoid }`);
@@ -327,19 +329,20 @@ function tm<T>(
       wantGrid,
     );
     const back = (x: ReturnType<typeof D.from>): T => A.from(D.toString(x));
-    return { E: back(r.E), N: back(r.N), k: back(r.k), convergence: back(r.convergence) };
+    return { E: back(r.E), N: back(r.N), k: back(r.k), convergence: back(r.convergence), xi0: back(r.xi0) };
   }
   const c = kruger(A, E, lat, A.sub(lon, lon0), where, wantGrid);
   const k = A.mul(k0, c.k);
   const convergence = toDegrees(A, c.gamma);
-  if (!wantGrid) return { E: A.zero, N: A.zero, k, convergence };
-  const o = kruger(A, E, lat0, A.zero, where, true);
+  if (!wantGrid) return { E: A.zero, N: A.zero, k, convergence, xi0: A.zero };
+  const xi0 = originXi ?? kruger(A, E, lat0, A.zero, where, true).xi!;
   const kA = A.mul(k0, A.mul(E.a, c.Aa)); // k0 · A, A = a · (A/a)
   return {
     E: A.add(E0, A.mul(kA, c.eta!)),
-    N: A.add(N0, A.mul(kA, A.sub(c.xi!, o.xi!))),
+    N: A.add(N0, A.mul(kA, A.sub(c.xi!, xi0))),
     k,
     convergence,
+    xi0,
   };
 }
 
@@ -474,8 +477,10 @@ export function transverseMercatorInverse<T>(
   const tol = A.mul(P.a, tenToMinus(A, digits));
   const noise = A.mul(P.a, tenToMinus(A, Math.max(1, digits - 3)));
   let prev: T | undefined;
+  let xi0: T | undefined;
   for (let i = 0; i < MAX_INVERSE_STEPS; i++) {
-    const f = tm(A, { lat, lon }, projection, true);
+    const f = tm(A, { lat, lon }, projection, true, xi0);
+    xi0 = f.xi0;
     const dE = A.sub(Et, f.E);
     const dN = A.sub(Nt, f.N);
     const size = A.add(A.abs(dE), A.abs(dN));
