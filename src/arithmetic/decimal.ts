@@ -157,7 +157,7 @@ export function decimal(digits = 34): DecimalArithmetic {
       return fromText(elementary.atan2(y.toString(), x.toString()));
     },
     // Fused kernels (src/arithmetic/fused-decimal.ts): exact with bigints, rounded once.
-    kernels: decimalKernels(make, divide, (x) => A.from(x as Numeric<Big>)),
+    kernels: decimalKernels(digits, new D(0), (x) => A.from(x as Numeric<Big>)),
   };
 
   /** (an·10^ae) / (bn·10^be), correctly rounded to `digits`. */

@@ -37,16 +37,59 @@ function exponent(x: Big): number {
 }
 
 /**
- * The kernels of one decimal arithmetic, given its exact-to-rounded constructors:
- * `make(coef, exp)` rounds coef·10^exp and `divide(an, ae, bn, be)` rounds
- * (an·10^ae)/(bn·10^be), both correctly to the arithmetic's digits.
+ * The kernels of one decimal arithmetic of `digits` significant digits, given its zero (a
+ * value of its big.js constructor) and its `from`.
  * @internal
  */
-export function decimalKernels(
-  make: (coef: bigint, exp: number) => Big,
-  divide: (an: bigint, ae: number, bn: bigint, be: number) => Big,
-  from: (x: unknown) => Big,
-): FusedKernels<Big> {
+export function decimalKernels(digits: number, zero: Big, from: (x: unknown) => Big): FusedKernels<Big> {
+  // Results are built directly as Bigs of this arithmetic (a copy of its zero, then its digits),
+  // without going through text: most of the cost of a decimal result is otherwise the parse.
+  const Ctor = zero.constructor as unknown as new (x: Big) => Big;
+
+  /** coef·10^exp rounded to `digits` significant digits, ties to even (IEEE 754 roundTiesToEven). */
+  function make(coef: bigint, exp: number): Big {
+    const b = new Ctor(zero);
+    if (coef === 0n) return b;
+    const neg = coef < 0n;
+    const m = neg ? -coef : coef;
+    let t = m.toString();
+    if (t.length > digits) {
+      const drop = t.length - digits;
+      const p = pow10(drop);
+      let q = m / p;
+      const r = m - q * p;
+      const half = p / 2n;
+      if (r > half || (r === half && (q & 1n) === 1n)) q += 1n;
+      exp += drop;
+      t = q.toString();
+      if (t.length > digits) {
+        // q rounded up to 10^digits
+        t = t.slice(0, digits);
+        exp += 1;
+      }
+    }
+    let end = t.length;
+    while (end > 1 && t.charCodeAt(end - 1) === 48) end--;
+    const c: number[] = new Array(end);
+    for (let i = 0; i < end; i++) c[i] = t.charCodeAt(i) - 48;
+    b.s = neg ? -1 : 1;
+    b.e = exp + t.length - 1;
+    b.c = c;
+    return b;
+  }
+
+  /** (an·10^ae)/(bn·10^be) for bn > 0, correctly rounded: digits + 2 quotient digits and a sticky one. */
+  function divide(an: bigint, ae: number, bn: bigint, be: number): Big {
+    if (an === 0n) return new Ctor(zero);
+    const la = (an < 0n ? -an : an).toString().length;
+    const lb = bn.toString().length;
+    const k = Math.max(0, digits + 3 - (la - lb));
+    const num = an * pow10(k);
+    const q = num / bn;
+    if (q * bn === num) return make(q, ae - be - k);
+    return make(q * 10n + (an < 0n ? -1n : 1n), ae - be - k - 1);
+  }
+
   /** x read by the arithmetic (its own rounding), or undefined where from() would throw. */
   const read = (x: unknown): Big | undefined => {
     if (typeof x !== 'number' && typeof x !== 'string' && typeof x !== 'bigint' && (x === null || typeof x !== 'object')) return undefined;
