@@ -103,7 +103,6 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
       east: readLength(p.east, `${path}.east`, unit, `${name} east`, 'coordinate'),
       north: readLength(p.north, `${path}.north`, unit, `${name} north`, 'coordinate'),
     };
-    if (p.height !== undefined) pt.height = readLength(p.height, `${path}.height`, unit, `${name} height`, 'height');
     points.set(name, pt);
   }
   const ctx: JobContext = {

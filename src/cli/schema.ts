@@ -117,7 +117,6 @@ export function jobSchema(kinds: readonly TaskKind[]): Schema {
             properties: {
               east: { $ref: '#/$defs/measuredLength' },
               north: { $ref: '#/$defs/measuredLength' },
-              height: { $ref: '#/$defs/measuredLength' },
             },
           },
         },

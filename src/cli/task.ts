@@ -70,7 +70,6 @@ export interface JobPoint {
   name: string;
   east: Input;
   north: Input;
-  height?: Input;
 }
 
 /** What a task kind may read beside its own part of the job. */
