@@ -4,7 +4,7 @@
  * `RATIONAL_TRANSCENDENTAL_DIGITS`) by `rational`.
  *
  * Method (after J.-M. Muller, *Elementary Functions: Algorithms and Implementation*,
- * 3rd ed., Birkhäuser 2016, ch. 11 (argument reduction) and §12 (correct rounding), and
+ * 3rd ed., Birkhäuser 2016, ch. 11 (argument reduction) and ch. 12 (final rounding), and
  * R. P. Brent & P. Zimmermann, *Modern Computer Arithmetic*, CUP 2010, ch. 4):
  *
  * - every argument is read exactly as a ratio of bigints;
@@ -13,9 +13,10 @@
  *   [(F − E)/2^W, (F + E)/2^W];
  * - argument reduction (x − k·π/2, x − k·ln 2) uses π or ln 2 with as many extra bits as
  *   k has, so huge arguments lose nothing;
- * - Ziv's strategy (Muller §12.2): when both ends of the interval round to the same
- *   `digits`-digit decimal that decimal is the correctly rounded result; otherwise the
- *   working precision is doubled and the evaluation repeated.
+ * - Ziv's strategy (A. Ziv, "Fast evaluation of elementary mathematical functions with
+ *   correctly rounded last bit", ACM TOMS 17(3), 1991; Muller ch. 12): when both ends of
+ *   the interval round to the same `digits`-digit decimal, that decimal is the correctly
+ *   rounded result; otherwise the working precision is doubled and the evaluation repeated.
  *
  * Results are rounded to nearest. Exact cases (sin 0, tan 0, atan2(0, x > 0), exp 0,
  * ln 1) are returned exactly; every other result of these functions at a rational
@@ -230,7 +231,7 @@ function log2Estimate(n: bigint, d: bigint): number {
 // ---------------------------------------------------------------------------
 // Fixed-point kernels. All take and return bigints scaled by 2^W.
 
-/** atan(1/m) · 2^W by its Taylor series; error ≤ 2 per term (Brent & Zimmermann §4.2.1). */
+/** atan(1/m) · 2^W by its Taylor series; error ≤ 2 per term (Brent & Zimmermann ch. 4). */
 function atanInverse(m: bigint, W: number): { sum: bigint; terms: number } {
   const m2 = m * m;
   let t = (1n << BigInt(W)) / m; // 1/m^(2k+1)
@@ -249,7 +250,7 @@ function atanInverse(m: bigint, W: number): { sum: bigint; terms: number } {
 
 /**
  * π · 2^W with error ≤ 2, by Machin's formula π = 16 atan(1/5) − 4 atan(1/239)
- * (J. Machin, 1706; see Brent & Zimmermann §4.9.1).
+ * (J. Machin, 1706; see Brent & Zimmermann ch. 4).
  */
 function machinPi(W: number): bigint {
   const G = 2 * Math.ceil(Math.log2(W + 16)) + 8; // guard bits for the ≈ 2W/3 truncations
@@ -259,7 +260,7 @@ function machinPi(W: number): bigint {
   return p >> BigInt(G);
 }
 
-/** ln 2 · 2^W with error ≤ 2, by ln 2 = 2 atanh(1/3) = Σ 2 / ((2k+1) 3^(2k+1)) (Brent & Zimmermann §4.9.2). */
+/** ln 2 · 2^W with error ≤ 2, by ln 2 = 2 atanh(1/3) = Σ 2 / ((2k+1) 3^(2k+1)) (Brent & Zimmermann ch. 4). */
 function ln2Fixed(W: number): bigint {
   const G = 2 * Math.ceil(Math.log2(W + 16)) + 8;
   const Wg = W + G;
@@ -308,7 +309,7 @@ function atanhSeries(z: bigint, W: number): { v: bigint; terms: number } {
   return { v: sum, terms };
 }
 
-/** atan t · 2^W for 0 ≤ t ≤ 1 by argument halving t ← t/(1 + √(1 + t²)), then the Taylor series (Muller §11, Brent & Zimmermann §4.4.3). */
+/** atan t · 2^W for 0 ≤ t ≤ 1 by argument halving t ← t/(1 + √(1 + t²)), then the Taylor series (Muller ch. 11; Brent & Zimmermann ch. 4). */
 function atanFixed(T: bigint, W: number): { v: bigint; err: bigint } {
   const B = BigInt(W);
   const one = 1n << B;
@@ -525,7 +526,7 @@ export function decimalElementary(digits: number): DecimalElementary {
     if (x.n === 0n) return '1';
     if (abs(x.n) > 2302585n * x.d) throw new QuadspreadError('INVALID_ARGUMENT', where, `|x| = ${show(text)} > 2302585: e^x is beyond 10^±1000000`);
     return ziv(where, baseBits, (W) => {
-      // x = k ln 2 + r, |r| ≤ ln 2 / 2; e^x = 2^k e^r (Muller §11.1).
+      // x = k ln 2 + r, |r| ≤ ln 2 / 2; e^x = 2^k e^r (Muller ch. 11).
       const L = Math.max(0, log2Estimate(x.n, x.d) + 2);
       const Wp = W + L + 4;
       const X = toFixed(x.n, x.d, Wp);
@@ -553,7 +554,7 @@ export function decimalElementary(digits: number): DecimalElementary {
     const x = readArg(text, where);
     if (x.n <= 0n) throw new QuadspreadError('NO_REAL_SOLUTION', where, `x = ${show(text)} is not positive`);
     if (x.n === x.d) return '0';
-    // x = 2^k m with m in [2/3, 4/3); ln x = k ln 2 + 2 atanh((m − 1)/(m + 1)) (Brent & Zimmermann §4.4).
+    // x = 2^k m with m in [2/3, 4/3); ln x = k ln 2 + 2 atanh((m − 1)/(m + 1)) (Brent & Zimmermann ch. 4).
     let k = log2Estimate(x.n, x.d);
     let mn = k >= 0 ? x.n : x.n << BigInt(-k);
     let md = k >= 0 ? x.d << BigInt(k) : x.d;

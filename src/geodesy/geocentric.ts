@@ -91,8 +91,9 @@ const MAX_ITERATIONS = 30;
  * (B. R. Bowring, "Transformation from spatial to geographical coordinates", *Survey
  * Review* 23(181):323–327, 1976): with p = √(X² + Y²) and the parametric latitude u,
  * tan φ = (Z + e′² b sin³u) / (p − e² a cos³u), tan u = (1 − f) tan φ, starting from
- * tan u = aZ/(bp); each step multiplies the error by about e⁴/4·(h/a)-small factors, so
- * 2 steps reach float precision and about 5 reach 40 digits. The iteration is carried on
+ * tan u = aZ/(bp); it converges rapidly (each step gains several digits at the Earth's
+ * surface), and it stops when a step changes φ by less than 10^−(digits+2) rad or, in an
+ * inexact arithmetic, when the change stops shrinking at the rounding noise. The iteration is carried on
  * unit vectors (cos, sin), so no tangent is ever formed and the poles are regular. Then
  * h = p cos φ + Z sin φ − a √(1 − e² sin²φ) (Bowring, "The accuracy of geodetic latitude
  * and height equations", *Survey Review* 28(218):202–206, 1985), accurate at every
