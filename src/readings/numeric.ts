@@ -46,10 +46,24 @@ export const GUARD_DIGITS = 10;
  * @internal
  */
 export function guardOf<T>(A: Arithmetic<T>): Arithmetic<Decimal> | undefined {
+  if (A.exact) return undefined;
   const digits = (A as { digits?: unknown }).digits;
-  if (A.exact || typeof digits !== 'number' || A.name !== `decimal(${digits})` || digits + GUARD_DIGITS > MAX_DECIMAL_DIGITS) return undefined;
-  return decimal(digits + GUARD_DIGITS);
+  if (typeof digits !== 'number' || A.name !== `decimal(${digits})` || digits + GUARD_DIGITS > MAX_DECIMAL_DIGITS) return undefined;
+  let G = GUARDS.get(digits);
+  if (G === undefined) {
+    G = decimal(digits + GUARD_DIGITS);
+    GUARDS.set(digits, G);
+  }
+  return G;
 }
+
+/**
+ * The guard arithmetics made so far, by the digits of the arithmetic they guard (at most
+ * {@link MAX_DECIMAL_DIGITS} entries). A memo of immutable, stateless values, not a setting:
+ * `decimal(n)` always gives an arithmetic with the same results, and making one per reading
+ * cost more than the reading (its constructor and elementary tables are built anew).
+ */
+const GUARDS = new Map<number, Arithmetic<Decimal>>();
 
 /**
  * Runs `f` in the guard arithmetic `G` of `A` with an input moved there as text, and rounds

@@ -54,13 +54,15 @@ export function spreadOfAngle<T>(A: Arithmetic<T>, angle: Numeric<T>, unit: Angl
   // Multiples of 30° and 45°: s = (1 − cos 2θ)/2 (the double-angle formula) with cos 2θ exactly
   // 0, ±1/2 or ±1, so s is exactly 0, 1/4, 1/2, 3/4 or 1 (and an arithmetic that carries
   // derivatives keeps ds/dθ = sin 2θ·π/180). Elsewhere sin²θ, which has no cancellation near 0°.
-  if (A.isZero(modulo(A, deg, A.from(30))) || A.isZero(modulo(A, deg, A.from(45)))) {
+  // Both are multiples of 15°, whose nearest number over 15 is within rounding of an integer:
+  // that cheap test skips the exact checks for every other angle.
+  const n = A.toNumber(deg) / 15;
+  if (Math.abs(n - Math.round(n)) <= 1e-9 * Math.max(1, Math.abs(n)) && (A.isZero(modulo(A, deg, A.from(30))) || A.isZero(modulo(A, deg, A.from(45))))) {
     return A.div(A.sub(A.one, sinCos(A, A.mul(deg, A.from(2))).cos), A.from(2));
   }
   const { sin } = sinCos(A, deg);
   return A.mul(sin, sin);
 }
-
 
 /**
  * The angle in [0°, 90°] whose spread is s: θ = atan2(√s, √(1 − s)) in degrees.

@@ -8,6 +8,7 @@ import { guardOf } from './numeric.js';
 
 /** @internal x mod m in [0, m), exact for exact arithmetics. */
 export function modulo<T>(A: Arithmetic<T>, x: T, m: T): T {
+  if (A.sign(x) >= 0 && A.cmp(x, m) < 0) return x; // already in [0, m): the common case
   const q = Math.floor(A.toNumber(A.div(x, m)));
   let r = A.sub(x, A.mul(A.from(q), m));
   // Correct the float floor by at most a step either way (exact comparisons).
@@ -17,25 +18,23 @@ export function modulo<T>(A: Arithmetic<T>, x: T, m: T): T {
 }
 
 /**
- * sin and cos of θ ∈ [0°, 90°] (already reduced). Exact where rational: 0°, 30° (sin),
- * 60° (cos), 90°; otherwise from `A.sin` / `A.cos` of the smaller of θ and 90° − θ in
- * radians, so that the relative accuracy holds near both ends.
+ * sin and cos of θ ∈ [0°, 90°] (already reduced; `ninety` is 90 in A). Exact where rational:
+ * 0°, 30° (sin), 60° (cos), 90°; otherwise from `A.sin` / `A.cos` of the smaller of θ and
+ * 90° − θ in radians, so that the relative accuracy holds near both ends.
  */
-function firstQuadrant<T>(A: Arithmetic<T>, t: T): { sin: T; cos: T } {
-  const half = A.div(A.one, A.from(2));
-  const ninety = A.from(90);
-  const perDegree = (): T => A.div(A.pi, A.from(180)); // π rad = 180°
+function firstQuadrant<T>(A: Arithmetic<T>, t: T, ninety: T): { sin: T; cos: T } {
+  const perDegree = A.div(A.pi, A.from(180)); // π rad = 180°
   // The exact cases add (θ − θ₀)·derivative, which is zero in value, so that an arithmetic
   // carrying derivatives (uncertain) keeps them: d sin = cos·π/180 dθ, d cos = −sin·π/180 dθ.
-  if (A.isZero(t)) return { sin: A.mul(t, perDegree()), cos: A.one };
-  if (A.eq(t, ninety)) return { sin: A.one, cos: A.mul(A.sub(ninety, t), perDegree()) };
-  const rad = (d: T): T => A.mul(d, perDegree());
+  if (A.isZero(t)) return { sin: A.mul(t, perDegree), cos: A.one };
+  if (A.eq(t, ninety)) return { sin: A.one, cos: A.mul(A.sub(ninety, t), perDegree) };
   const small = A.cmp(t, A.from(45)) <= 0;
   const u = small ? t : A.sub(ninety, t);
-  const cosU = A.cos(rad(u));
+  const rad = A.mul(u, perDegree);
+  const cosU = A.cos(rad);
   // sin 30° = 1/2 exactly (the 30-60-90 triangle); its cosine √3/2 is irrational.
   const thirty = A.from(30);
-  const sinU = A.eq(u, thirty) ? A.add(half, A.mul(A.sub(u, thirty), A.mul(cosU, perDegree()))) : A.sin(rad(u));
+  const sinU = A.eq(u, thirty) ? A.add(A.div(A.one, A.from(2)), A.mul(A.sub(u, thirty), A.mul(cosU, perDegree))) : A.sin(rad);
   return small ? { sin: sinU, cos: cosU } : { sin: cosU, cos: sinU };
 }
 
@@ -72,13 +71,14 @@ export function sinCosDegrees<T>(A: Arithmetic<T>, degrees: Numeric<T>): { sin: 
 
 /** @internal {@link sinCosDegrees} computed directly in A. */
 export function sinCos<T>(A: Arithmetic<T>, degrees: Numeric<T>): { sin: T; cos: T } {
+  const ninety = A.from(90);
   const d = modulo(A, A.from(degrees), A.from(360));
-  const quadrant = Math.min(3, Math.floor(A.toNumber(A.div(d, A.from(90)))));
-  let q = quadrant;
-  let t = A.sub(d, A.from(90 * q));
-  if (A.sign(t) < 0) { q -= 1; t = A.add(t, A.from(90)); }
-  if (A.cmp(t, A.from(90)) > 0) { q += 1; t = A.sub(t, A.from(90)); }
-  const { sin, cos } = firstQuadrant(A, t);
+  // The quadrant from the nearest number, then corrected exactly by at most one step.
+  let q = Math.min(3, Math.floor(A.toNumber(d) / 90));
+  let t = q === 0 ? d : A.sub(d, A.from(90 * q));
+  if (A.sign(t) < 0) { q -= 1; t = A.add(t, ninety); }
+  if (A.cmp(t, ninety) > 0) { q += 1; t = A.sub(t, ninety); }
+  const { sin, cos } = firstQuadrant(A, t, ninety);
   // sin(θ + 90°) = cos θ, cos(θ + 90°) = −sin θ (the quadrant rotations)
   switch (((q % 4) + 4) % 4) {
     case 0: return { sin, cos };
