@@ -9,6 +9,7 @@
 //     code: fraction.js and big.js left external; the figure with them is printed too)
 // Other figures are printed for information. Sizes are minified bytes (gzip in brackets).
 import { build } from 'esbuild';
+import { execFileSync } from 'node:child_process';
 import { mkdtempSync, mkdirSync, rmSync, symlinkSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -17,12 +18,12 @@ import { checkBuilt, packageDir, root } from './pack.mjs';
 
 const KiB = 1024;
 const CASES = [
-  { name: "quadrance + float from 'quadspread'", budget: 10 * KiB, code: "import { quadrance, float } from 'quadspread';\nconsole.log(quadrance(float, { x: 0, y: 0 }, { x: 3, y: 4 }));" },
+  { name: "quadrance + float from 'quadspread'", budget: 10 * KiB, prints: '25', code: "import { quadrance, float } from 'quadspread';\nconsole.log(quadrance(float, { x: 0, y: 0 }, { x: 3, y: 4 }));" },
   { name: "the whole library ('quadspread'), own code", budget: 120 * KiB, external: ['fraction.js', 'big.js'], code: "import * as q from 'quadspread';\nconsole.log(q);" },
   { name: "the whole library ('quadspread') + fraction.js, big.js", code: "import * as q from 'quadspread';\nconsole.log(q);" },
   { name: "quadrance + point from 'quadspread/rational'", code: "import { quadrance, point } from 'quadspread/rational';\nconsole.log(quadrance(point(0, 0), point(3, 4)));" },
   { name: "quadrance + point from 'quadspread/float'", code: "import { quadrance, point } from 'quadspread/float';\nconsole.log(quadrance(point(0, 0), point(3, 4)));" },
-  { name: "quadrance + rational from 'quadspread'", code: "import { quadrance, point, rational } from 'quadspread';\nconsole.log(quadrance(rational, point(rational, 0, 0), point(rational, 3, 4)));" },
+  { name: "quadrance + rational from 'quadspread'", prints: '25', code: "import { quadrance, point, rational } from 'quadspread';\nconsole.log(rational.toString(quadrance(rational, point(rational, 0, 0), point(rational, 3, 4))));" },
   { name: "solveTriangle + rational from 'quadspread'", code: "import * as q from 'quadspread';\nconsole.log(q.solveTriangle, q.rational);" },
   { name: "all of 'quadspread/float'", code: "import * as q from 'quadspread/float';\nconsole.log(q);" },
   { name: "all of 'quadspread/rational'", code: "import * as q from 'quadspread/rational';\nconsole.log(q);" },
@@ -55,6 +56,13 @@ try {
       logLevel: 'error',
     });
     const bytes = result.outputFiles[0].contents;
+    if (c.prints !== undefined) {
+      // The tree-shaken bundle still works: run it and check what it prints.
+      const out = join(work, `case-${rows.length}.out.mjs`);
+      writeFileSync(out, bytes);
+      const printed = execFileSync(process.execPath, [out], { encoding: 'utf8' }).trim();
+      if (printed !== c.prints) throw new Error(`size: the bundle for ${c.name} printed ${JSON.stringify(printed)}, not ${c.prints}`);
+    }
     const gz = gzipSync(bytes).length;
     const ok = c.budget === undefined || bytes.length < c.budget;
     if (!ok) failed = true;
