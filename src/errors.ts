@@ -7,6 +7,13 @@
 /**
  * Every stable error code, with what it means. Codes never change meaning once
  * published; new codes may be added. The table in `docs/errors.md` lists them.
+ *
+ * @example
+ * ```ts
+ * import { ERROR_CODES } from 'quadspread';
+ * ERROR_CODES.DIVISION_BY_ZERO;
+ * //=> 'A division by zero.'
+ * ```
  */
 export const ERROR_CODES = {
   // Numbers and arithmetic
@@ -104,7 +111,18 @@ export class QuadspreadError extends Error {
   }
 }
 
-/** Longest input text any parser accepts, in characters. Longer text is refused at once. */
+/**
+ * Longest input text any parser accepts, in characters. Longer text is refused at once.
+ *
+ * @example
+ * ```ts
+ * import { rational, MAX_INPUT_LENGTH, QuadspreadError } from 'quadspread';
+ * try { rational.from('1'.repeat(MAX_INPUT_LENGTH + 1)); } catch (e) {
+ *   (e as QuadspreadError).code;
+ *   //=> 'INPUT_TOO_LONG'
+ * }
+ * ```
+ */
 export const MAX_INPUT_LENGTH = 1000;
 
 /**
