@@ -44,7 +44,7 @@ const lib = { g, F, R, D, Fraction, Big };
 
 // Short batches, many pairs: on a loaded machine a short batch is less often interrupted, and
 // the median of many adjacent pairs discards the interrupted ones.
-const settings = quick ? { reps: 31, targetMs: 3, n: 300, growthN: 100 } : { reps: 61, targetMs: 5, n: 1000, growthN: 400 };
+const settings = quick ? { reps: 21, targetMs: 3, n: 300, growthN: 100 } : { reps: 61, targetMs: 5, n: 1000, growthN: 400 };
 const t0 = Date.now();
 
 // Every arithmetic an integrator's process may use, run through the same generic functions
