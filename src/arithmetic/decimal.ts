@@ -20,7 +20,16 @@ export interface DecimalArithmetic extends Arithmetic<Decimal, false> {
   readonly digits: number;
 }
 
-/** Most significant digits a decimal arithmetic may keep. */
+/**
+ * Most significant digits a decimal arithmetic may keep.
+ *
+ * @example
+ * ```ts
+ * import { decimal, MAX_DECIMAL_DIGITS } from 'quadspread';
+ * decimal(MAX_DECIMAL_DIGITS).digits;
+ * //=> 1000
+ * ```
+ */
 export const MAX_DECIMAL_DIGITS = 1000;
 
 const HALF_EVEN = 2;
@@ -58,6 +67,7 @@ function digitCount(a: bigint): number {
  *
  * @param digits significant digits, an integer in 1..{@link MAX_DECIMAL_DIGITS}; default 34
  *   (IEEE 754 decimal128).
+ * @returns a new, independent decimal arithmetic
  * @throws {QuadspreadError} `INVALID_ARGUMENT` when `digits` is not such an integer.
  * @example
  * ```ts

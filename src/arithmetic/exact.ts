@@ -7,7 +7,19 @@
  */
 import { MAX_INPUT_LENGTH, QuadspreadError, show } from '../errors.js';
 
-/** Largest decimal exponent accepted in numeric text (`1e1000` is read, `1e1001` refused). */
+/**
+ * Largest decimal exponent accepted in numeric text (`1e1000` is read, `1e1001` refused),
+ * so that no input can make a number with millions of digits.
+ *
+ * @example
+ * ```ts
+ * import { rational, MAX_EXPONENT } from 'quadspread';
+ * MAX_EXPONENT;
+ * //=> 1000
+ * rational.toString(rational.from('2e3'));
+ * //=> '2000'
+ * ```
+ */
 export const MAX_EXPONENT = 1000;
 
 /** An exact ratio n/d of bigints with d > 0 (not necessarily in lowest terms). */
@@ -51,8 +63,10 @@ function readDecimal(text: string, where: string, original: string, allowSign: b
  * a number; `DIVISION_BY_ZERO` for `a/0`.
  * @example
  * ```ts
- * readRatio('1.5e-3', 'from(x)');
- * //=> { n: 15n, d: 10000n }
+ * import { readRatio } from 'quadspread';
+ * const r = readRatio('1.5e-3', 'from(x)');
+ * `${r.n}/${r.d}`;
+ * //=> '15/10000'
  * ```
  */
 export function readRatio(text: string, where: string): Ratio {

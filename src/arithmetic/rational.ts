@@ -21,6 +21,15 @@ export type RationalArithmetic = Arithmetic<Rational, true>;
  * Significant digits of the decimal computation behind `rational`'s transcendental
  * functions (`pi`, `sin`, `cos`, `atan2`): results are rationals within 1e-40 relative
  * (and 1e-40 absolute near zero) of the true value.
+ *
+ * @example
+ * ```ts
+ * import { rational, RATIONAL_TRANSCENDENTAL_DIGITS } from 'quadspread';
+ * RATIONAL_TRANSCENDENTAL_DIGITS;
+ * //=> 42
+ * rational.toPrecision(rational.pi, 30);
+ * //=> '3.14159265358979323846264338328'
+ * ```
  */
 export const RATIONAL_TRANSCENDENTAL_DIGITS = 42;
 
