@@ -36,13 +36,15 @@ function readInline<T>(A: Arithmetic<T>, vertical: readonly VerticalInput<T>[], 
   }
   if (count < min) throw new QuadspreadError('TOO_FEW_STATIONS', where, `${count} station${count === 1 ? '' : 's'}: at least ${min} are needed`);
   let sign: -1 | 1 | 0 = 0;
-  const k = vertical.map((x, i) => {
-    const r = readVertical(A, x, `${where}.vertical[${i}]`);
+  const k: T[] = [];
+  for (let i = 0; i < count; i++) {
+    // `where` strings for a station are built only when it is at fault (this runs in a hot path)
+    const r = readVertical(A, vertical[i]!, `${where}.vertical`, i);
     if (r.sign === 0) throw new QuadspreadError('INCONSISTENT_READINGS', `${where}.vertical[${i}]`, 'a level sight (spread 0) from a station on the line meets no point off its level');
     if (sign !== 0 && r.sign !== sign) throw new QuadspreadError('INCONSISTENT_READINGS', `${where}.vertical`, 'some readings are above the horizon and some below');
     sign = r.sign;
-    return A.div(A.sub(A.one, r.spread), r.spread); // cot²α = (1 − R)/R: horizontal quadrance per unit H
-  });
+    k.push(A.div(A.sub(A.one, r.spread), r.spread)); // cot²α = (1 − R)/R: horizontal quadrance per unit H
+  }
   return { k, sign: sign as -1 | 1 };
 }
 
@@ -111,15 +113,22 @@ export function heightFromInlineReadings<T>(
   if (!Array.isArray(input.chainages)) throw new QuadspreadError('INVALID_ARGUMENT', `${w}.chainages`, `${show(input.chainages)} is not an array of chainages`);
   const n = input.chainages.length;
   if (n < 3) throw new QuadspreadError('TOO_FEW_STATIONS', w, `${n} station${n === 1 ? '' : 's'}: at least 3 are needed`);
-  const raw = input.chainages.map((x) => A.from(x));
-  for (let i = 0; i < n; i++) for (let j = i + 1; j < n; j++) {
-    if (A.eq(raw[i]!, raw[j]!)) throw new QuadspreadError('REPEATED_CHAINAGE', `${w}.chainages`, `stations ${i} and ${j} are both at chainage ${A.toString(raw[i]!)}`);
+  const raw: T[] = [];
+  let sum = A.zero;
+  for (let i = 0; i < n; i++) {
+    const x = A.from(input.chainages[i]!);
+    for (let j = 0; j < i; j++) {
+      if (A.eq(raw[j]!, x)) throw new QuadspreadError('REPEATED_CHAINAGE', `${w}.chainages`, `stations ${j} and ${i} are both at chainage ${A.toString(x)}`);
+    }
+    raw.push(x);
+    sum = A.add(sum, x);
   }
   const { k, sign } = readInline(A, input.vertical, w, 3, n);
   const two = A.from(2);
   // Work from the stations' mean chainage (exact in rational; better conditioned in float), then shift back.
-  const origin = A.div(raw.reduce((s, x) => A.add(s, x), A.zero), A.from(n));
-  const c = raw.map((x) => A.sub(x, origin));
+  const origin = A.div(sum, A.from(n));
+  const c: T[] = [];
+  for (let i = 0; i < n; i++) c.push(A.sub(raw[i]!, origin));
   let H: T;
   let f: T;
   let g: T;
@@ -149,10 +158,11 @@ export function heightFromInlineReadings<T>(
   if (A.sign(H) <= 0) throw new QuadspreadError('INCONSISTENT_READINGS', `${w}.vertical`, `the readings give a height quadrance ${A.toString(H)} ≤ 0: no real point fits`);
   const e = A.sub(g, A.mul(f, f));
   if (A.sign(e) < 0) throw new QuadspreadError('INCONSISTENT_READINGS', `${w}.vertical`, `the readings give a negative offset quadrance ${A.toString(e)}: no real point fits`);
-  const residuals = c.map((ci, i) => {
-    const d = A.sub(ci, f);
-    return A.sub(A.add(A.mul(d, d), e), A.mul(H, k[i]!));
-  });
+  const residuals: T[] = [];
+  for (let i = 0; i < n; i++) {
+    const d = A.sub(c[i]!, f);
+    residuals.push(A.sub(A.add(A.mul(d, d), e), A.mul(H, k[i]!)));
+  }
   return { H, footChainage: A.add(f, origin), footOffset: e, residuals, sign };
 }
 

@@ -55,18 +55,29 @@ export function vertical<T>(A: Arithmetic<T>, spread: Numeric<T>, sign: -1 | 0 |
 }
 
 /**
- * @internal reads a {@link VerticalInput} for a solver, naming `where` in errors.
+ * @internal reads a {@link VerticalInput} for a solver, naming `where` in errors (followed
+ * by `[index]` when an index is given: the text is only built for an error).
  */
-export function readVertical<T>(A: Arithmetic<T>, x: VerticalInput<T>, where: string): VerticalReading<T> {
+export function readVertical<T>(A: Arithmetic<T>, x: VerticalInput<T>, where: string, index?: number): VerticalReading<T> {
   if (typeof x === 'object' && x !== null && !A.is(x) && 'spread' in (x as object)) {
     const r = x as VerticalReading<T>;
-    const s = checkSpread(A, r.spread, where);
+    const s = readSpreadAt(A, r.spread, where, index);
     if (A.isZero(s)) return { spread: s, sign: 0 };
-    if (r.sign !== 1 && r.sign !== -1) throw new QuadspreadError('INVALID_ARGUMENT', where, `sign ${show(r.sign)} is not +1 or -1 for the non-zero spread ${A.toString(s)}`);
+    if (r.sign !== 1 && r.sign !== -1) throw new QuadspreadError('INVALID_ARGUMENT', at(where, index), `sign ${show(r.sign)} is not +1 or -1 for the non-zero spread ${A.toString(s)}`);
     return { spread: s, sign: r.sign };
   }
-  const s = checkSpread(A, x as Numeric<T>, where);
+  const s = readSpreadAt(A, x as Numeric<T>, where, index);
   return { spread: s, sign: A.isZero(s) ? 0 : 1 };
+}
+
+function at(where: string, index: number | undefined): string {
+  return index === undefined ? where : `${where}[${index}]`;
+}
+
+function readSpreadAt<T>(A: Arithmetic<T>, s: Numeric<T>, where: string, index: number | undefined): T {
+  if (index === undefined) return checkSpread(A, s, where);
+  const v = A.from(s);
+  return A.sign(v) < 0 || A.cmp(v, A.one) > 0 ? checkSpread(A, s, at(where, index)) : v;
 }
 
 /** Which angle a vertical reading is: from the horizontal (`'elevation'`) or from the zenith (`'zenith'`). */
