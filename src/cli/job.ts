@@ -13,7 +13,7 @@ import { CAUTION } from './report.js';
 import type { BudgetTerm, Quantity, Report, TaskReport } from './report.js';
 import { jobSchema } from './schema.js';
 import type { Env, JobContext, JobPoint, Outcome, TaskKind, Value } from './task.js';
-import { validate } from './validate.js';
+import { joinPath, validate } from './validate.js';
 import { LENGTH_UNIT_NAMES, readLength } from './values.js';
 import type { Input } from './values.js';
 
@@ -97,7 +97,7 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
   const unitName = LENGTH_UNIT_NAMES[unit];
   const points = new Map<string, JobPoint>();
   for (const [name, p] of Object.entries(j.points ?? {})) {
-    const path = `points[${JSON.stringify(name)}]`;
+    const path = joinPath('points', name);
     const pt: JobPoint = {
       name,
       east: readLength(p.east, `${path}.east`, unit, `${name} east`, 'coordinate'),

@@ -217,3 +217,27 @@ export function plain(text: string): string {
   const t = R.toPrecision(R.from(text), 12);
   return t.includes('.') && !/e/i.test(t) ? t.replace(/0+$/, '').replace(/\.$/, '') : t;
 }
+
+/**
+ * Requires an angle input (in degrees) to lie in a range: `[lo, hi)` or `(lo, hi)`.
+ * A reading outside the range of its kind is a bad job (exit 2), not a failed computation.
+ */
+export function inRange(input: Input, path: string, what: string, lo: number, hi: number, open: 'lo' | 'both'): Input {
+  const v = R.from(input.value);
+  const low = R.cmp(v, R.from(lo));
+  const high = R.cmp(v, R.from(hi));
+  if ((open === 'both' ? low <= 0 : low < 0) || high >= 0) {
+    const range = open === 'both' ? `(${lo}°, ${hi}°)` : `[${lo}°, ${hi}°)`;
+    throw new JobInvalid(path, `${plain(input.value)}° is not a valid ${what}: it must be in ${range}`);
+  }
+  return input;
+}
+
+/** Requires a number input to lie in [lo, hi] (e.g. a spread in [0, 1]) or [lo, ∞). */
+export function inClosed(input: Input, path: string, what: string, lo: number, hi?: number): Input {
+  const v = R.from(input.value);
+  if (R.cmp(v, R.from(lo)) < 0 || (hi !== undefined && R.cmp(v, R.from(hi)) > 0)) {
+    throw new JobInvalid(path, `${plain(input.value)} is not a valid ${what}: it must be in [${lo}, ${hi ?? '∞'}${hi === undefined ? ')' : ']'}`);
+  }
+  return input;
+}

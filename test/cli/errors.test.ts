@@ -103,6 +103,25 @@ describe('quadspread run with a job that cannot be read', () => {
   });
 });
 
+describe('quadspread run tells a bad reading (exit 2) from a computation with no solution (exit 3)', () => {
+  const P = points;
+  it.each([
+    ['a spread above 1', { tasks: [{ kind: 'triangle', known: { Q1: 25, Q2: 16, s1: 2 } }] }, 2, 'tasks[0].known.s1: 2 is not a valid spread'],
+    ['a horizontal angle of 400°', { points: P, tasks: [{ kind: 'resection', control: ['A', 'B', 'C'], angles: ['400', '10'] }] }, 2, 'tasks[0].angles[0]: 400° is not a valid clockwise horizontal angle'],
+    ['an interior angle of 0°', { tasks: [{ kind: 'base-height', base: 100, stations: [{ angle: 0, vertical: 10 }, { angle: 30 }] }] }, 2, 'tasks[0].stations[0].angle: 0° is not a valid interior angle'],
+    ['a levelling run that starts with a foresight', { tasks: [{ kind: 'levelling', start: 10, sights: [{ fs: 1 }, { bs: 2 }] }] }, 2, 'tasks[0].sights[0]: the first row must be a backsight alone'],
+    ['a latitude of 95°', { tasks: [{ kind: 'geodetic', geodetic: { lat: 95, lon: 0 } }] }, 2, 'tasks[0].geodetic.lat: 95 is not a valid latitude'],
+    ['a grade steeper than its slope', { tasks: [{ kind: 'path-grade', slope: '5%', grade: '10%' }] }, 3, 'tasks[0] (path-grade): no solution: GRADE_STEEPER_THAN_SLOPE'],
+    ['in-line readings on both sides of the horizon', { tasks: [{ kind: 'inline-height', stations: [{ chainage: 0, vertical: 10 }, { chainage: 10, vertical: -10 }, { chainage: 20, vertical: 10 }] }] }, 3, 'tasks[0] (inline-height): no solution: INCONSISTENT_READINGS'],
+    ['a station on the danger circle', { points: P, tasks: [{ kind: 'resection', control: ['A', 'B', 'C'], angles: [0, 0] }] }, 3, 'tasks[0] (resection): no solution: DANGER_CIRCLE'],
+    ['base angles that do not meet', { tasks: [{ kind: 'base-height', base: 100, stations: [{ angle: 100, vertical: 10 }, { angle: 100 }] }] }, 3, 'tasks[0] (base-height): no solution: DEGENERATE_TRIANGLE'],
+  ])('%s', (_what, job, code, message) => {
+    const r = cli(['run', jobFile('classify.json', job)]);
+    expect(r.code).toBe(code);
+    expect(r.stderr).toContain(message);
+  });
+});
+
 describe('quadspread run with checks that fail', () => {
   it('exits 0, marks the check FAIL and says so at the end', () => {
     const job = { points, tasks: [{ kind: 'traverse', start: 'A', close: 'C', courses: [{ bearing: 90, distance: 100 }, { bearing: 0, distance: 80.5 }], tolerance: { linear: '0.1 m', precision: 1000 } }] };

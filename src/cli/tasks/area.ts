@@ -31,7 +31,7 @@ export const areaTask: TaskKind = {
             : { name: 'area_acres', label: 'Area in acres', unit: unit === 'us-ft' || unit === 'us-ch' || unit === 'us-lk' ? 'US survey acres' : 'acres', value: unit.startsWith('us-') ? r.usacres : r.acres },
           { name: 'perimeter', label: 'Perimeter', unit: ctx.unitName, value: r.perimeter, approx: true },
         ];
-        const notes = [`The corners run ${r.orientation} on the plan (north up).`];
+        const notes = [r.orientation === 'degenerate' ? 'The corners enclose no area (they are collinear or the outline cancels itself).' : `The corners run ${r.orientation} on the plan (north up).`];
         const sketch = env.drawing
           ? [
               {

@@ -10,7 +10,7 @@ import { heightFromBase, isSurd } from '../../index.js';
 import { JobInvalid } from '../failure.js';
 import type { SketchView } from '../report.js';
 import type { Env, RawCheck, RawQuantity, TaskKind, Value } from '../task.js';
-import { lengthText, plain, positive, readAngle, readLength, readVertical, verticalInputs, verticalOf } from '../values.js';
+import { inRange, lengthText, plain, positive, readAngle, readLength, readVertical, verticalInputs, verticalOf } from '../values.js';
 import type { Input, VerticalSpec } from '../values.js';
 import { plus, rootOfValue, squared, taskSchema } from './common.js';
 
@@ -42,7 +42,7 @@ export const baseHeightTask: TaskKind = {
       const p = `${path}.stations[${i}]`;
       return {
         label,
-        angle: readAngle(s.angle, `${p}.angle`, `${label} angle`, 'horizontal angle'),
+        angle: inRange(readAngle(s.angle, `${p}.angle`, `${label} angle`, 'horizontal angle'), `${p}.angle`, 'interior angle', 0, 180, 'both'),
         vertical: s.vertical !== undefined ? (readVertical(s.vertical, `${p}.vertical`, label) as VerticalSpec) : undefined,
       };
     });

@@ -53,6 +53,10 @@ export const levellingTask: TaskKind = {
       if (s.distance !== undefined) out.distance = readLength(s.distance, `${p}.distance`, ctx.unit, `${station} distance`, 'distance');
       return out;
     });
+    const first = (task.sights as Record<string, unknown>[])[0]!;
+    if (first.bs === undefined || first.is !== undefined || first.fs !== undefined) {
+      throw new JobInvalid(`${path}.sights[0]`, 'the first row must be a backsight alone, on the starting bench mark');
+    }
     const inputs = [start, ...(close ? [close] : []), ...sights.flatMap((s) => [s.bs, s.is, s.fs, s.distance].filter((x): x is Input => x !== undefined))];
     return {
       summary: `Levelling run of ${sights.length} rows from ${plain(start.value)} ${ctx.unitName}${close ? ` closing on ${plain(close.value)} ${ctx.unitName}` : ''}.`,

@@ -6,7 +6,7 @@
  */
 import { resection } from '../../index.js';
 import type { TaskKind } from '../task.js';
-import { readAngle } from '../values.js';
+import { inRange, readAngle } from '../values.js';
 import { nums, pointInputs, taskSchema, xy } from './common.js';
 
 export const resectionTask: TaskKind = {
@@ -20,7 +20,7 @@ export const resectionTask: TaskKind = {
   prepare(task, path, ctx) {
     const control = (task.control as unknown[]).map((n, i) => ctx.point(n, `${path}.control[${i}]`));
     const name = typeof task.point === 'string' ? task.point : 'S';
-    const angles = (task.angles as unknown[]).map((a, i) => readAngle(a, `${path}.angles[${i}]`, `angle ${control[i]!.name}→${control[i + 1]!.name}`, 'horizontal angle'));
+    const angles = (task.angles as unknown[]).map((a, i) => inRange(readAngle(a, `${path}.angles[${i}]`, `angle ${control[i]!.name}→${control[i + 1]!.name}`, 'horizontal angle'), `${path}.angles[${i}]`, 'clockwise horizontal angle', 0, 360, 'lo'));
     return {
       summary: `Station ${name} by resection on ${control.map((c) => c.name).join(', ')} (Tienstra's formula).`,
       inputs: [...control.flatMap(pointInputs), ...angles],

@@ -9,7 +9,7 @@ import { QuadspreadError, solveTriangle, spreadFromDegrees, triangle, isSurd } f
 import type { Arithmetic } from '../../index.js';
 import { JobInvalid } from '../failure.js';
 import type { Env, RawQuantity, TaskKind, Value } from '../task.js';
-import { positive, readAngle, readLength, readNumber } from '../values.js';
+import { inClosed, inRange, positive, readAngle, readLength, readNumber } from '../values.js';
 import type { Input } from '../values.js';
 import { nums, pointInputs, root, squared, taskSchema, xy } from './common.js';
 
@@ -91,8 +91,9 @@ export const triangleTask: TaskKind = {
       if (known.some((k) => k.key === m.key)) throw new JobInvalid(p, `gives ${m.key} a second time`);
       const input =
         m.form === 'side' ? positive(readLength(raw, p, ctx.unit, field, 'side'), p, 'side')
-        : m.form === 'angle' ? readAngle(raw, p, field, 'angle of a triangle')
-        : readNumber(raw, p, field, m.form === 'spread' ? 'spread' : 'quadrance');
+        : m.form === 'angle' ? inRange(readAngle(raw, p, field, 'angle of a triangle'), p, 'angle of a triangle', 0, 180, 'both')
+        : m.form === 'spread' ? inClosed(readNumber(raw, p, field, 'spread'), p, 'spread', 0, 1)
+        : inClosed(readNumber(raw, p, field, 'quadrance'), p, 'quadrance', 0);
       known.push({ key: m.key, form: m.form, input });
     }
     if (known.length !== 3) throw new JobInvalid(`${path}.known`, `gives ${known.length} measure${known.length === 1 ? '' : 's'}; a triangle needs exactly three`);

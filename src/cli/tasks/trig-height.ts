@@ -8,9 +8,10 @@
  */
 import { reciprocalTrigHeight, trigHeight } from '../../index.js';
 import type { TrigSight } from '../../index.js';
+import { JobInvalid } from '../failure.js';
 import type { SketchView } from '../report.js';
 import type { Env, RawCheck, RawQuantity, TaskKind } from '../task.js';
-import { lengthText, plain, positive, readLength, readNumber, readVertical, verticalInputs, verticalOf } from '../values.js';
+import { inClosed, lengthText, plain, positive, readLength, readNumber, readVertical, verticalInputs, verticalOf } from '../values.js';
 import type { Input, VerticalSpec } from '../values.js';
 import type { Schema } from '../validate.js';
 import { absAtMost, plus, taskSchema } from './common.js';
@@ -50,7 +51,8 @@ export const trigHeightTask: TaskKind = {
     const fwd = sight(task, path, 'forward');
     const back = task.backward !== undefined ? sight(task.backward as Record<string, unknown>, `${path}.backward`, 'backward') : undefined;
     const c = task.correction as boolean | { k?: number | string; radius?: unknown } | undefined;
-    const k = typeof c === 'object' && c.k !== undefined ? readNumber(c.k, `${path}.correction.k`, 'k', 'coefficient of refraction') : undefined;
+    const k = typeof c === 'object' && c.k !== undefined ? inClosed(readNumber(c.k, `${path}.correction.k`, 'k', 'coefficient of refraction'), `${path}.correction.k`, 'coefficient of refraction', 0, 1) : undefined;
+    if (k && k.value === '1') throw new JobInvalid(`${path}.correction.k`, '1 is not a valid coefficient of refraction: it must be below 1');
     const radius = typeof c === 'object' && c.radius !== undefined ? lengthText(c.radius, `${path}.correction.radius`, ctx.unit, 'radius') : undefined;
     const level = task.stationLevel !== undefined ? readLength(task.stationLevel, `${path}.stationLevel`, ctx.unit, 'station level', 'level') : undefined;
     const tol = task.tolerance !== undefined ? lengthText(task.tolerance, `${path}.tolerance`, ctx.unit, 'tolerance') : undefined;
