@@ -40,7 +40,7 @@ import { claimedDigits, decimalFor, readHeight, readLatitude, readLongitude, roo
 export function heightReductionFactor<T>(A: Arithmetic<T>, h: Numeric<T>, radius: Numeric<T>): T {
   const R = A.from(radius);
   if (A.sign(R) <= 0) throw new QuadspreadError('INVALID_ARGUMENT', 'heightReductionFactor(radius)', `${show(typeof radius === 'object' ? A.toString(R) : radius)} is not positive`);
-  const H = readHeight(A, h, A.div(R, A.from(2)), 'heightReductionFactor(h)');
+  const H = readHeight(A, h, A.div(R, A.from(2)), 'heightReductionFactor(h)', 'R/2');
   return A.div(R, A.add(R, H)); // R/(R + h)
 }
 

@@ -52,11 +52,11 @@ export function readLongitude<T>(A: Arithmetic<T>, lon: Numeric<T>, where: strin
   return angleToDegrees(A, lon);
 }
 
-/** @internal An ellipsoidal height in metres (default 0), refused below −a. */
-export function readHeight<T>(A: Arithmetic<T>, h: Numeric<T> | undefined, a: T, where: string): T {
+/** @internal An ellipsoidal height in metres (default 0), refused below −limit (−a unless said otherwise). */
+export function readHeight<T>(A: Arithmetic<T>, h: Numeric<T> | undefined, limit: T, where: string, name = 'a'): T {
   const v = h === undefined ? A.zero : A.from(h);
-  if (A.cmp(v, A.neg(a)) < 0) {
-    throw new QuadspreadError('HEIGHT_OUT_OF_RANGE', where, `${show(typeof h === 'object' ? A.toString(v) : h)} is below −a = −${A.toString(a)} m`);
+  if (A.cmp(v, A.neg(limit)) < 0) {
+    throw new QuadspreadError('HEIGHT_OUT_OF_RANGE', where, `${show(typeof h === 'object' ? A.toString(v) : h)} is below −${name} = −${A.toString(limit)} m`);
   }
   return v;
 }
