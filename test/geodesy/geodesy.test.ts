@@ -348,6 +348,9 @@ describe('bad input gets typed errors', () => {
     ['a TM k0 of 0', () => transverseMercatorFactors(A, { lat: 0, lon: 3 }, { lon0: 3, k0: 0, ellipsoid: GRS80 }), 'INVALID_ARGUMENT'],
     ['a negative combined factor', () => gridToGround(A, 100, -1), 'INVALID_ARGUMENT'],
     ['a zero radius for the height factor', () => heightReductionFactor(A, 100, 0), 'INVALID_ARGUMENT'],
+    ['a height factor below −R/2', () => heightReductionFactor(A, -4e6, 6.4e6), 'HEIGHT_OUT_OF_RANGE'],
+    ['an inverse projection of non-numeric text', () => transverseMercatorInverse(A, { E: 'east', N: 0 }, { lon0: 0, ellipsoid: GRS80 }), 'INVALID_NUMBER'],
+    ['a latitude of 95° for the TM origin', () => transverseMercator(A, { lat: 10, lon: 0 }, { lon0: 0, lat0: 95, ellipsoid: GRS80 }), 'LATITUDE_OUT_OF_RANGE'],
     ['a negative distance for flatEarthError', () => flatEarthError(A, -1), 'INVALID_ARGUMENT'],
   ];
   for (const [what, f, c] of cases) {
