@@ -5,6 +5,7 @@
  * @module cli
  */
 import { readFileSync, statSync } from 'node:fs';
+import { resolve } from 'node:path';
 import { Argument, Command, CommanderError, InvalidArgumentError, Option } from 'commander';
 import { writeFilesAtomic } from './atomic.js';
 import { BATCH_KINDS, runBatch } from './batch.js';
@@ -55,6 +56,9 @@ function addReportOptions(cmd: Command): Command {
 }
 
 function report(job: unknown, source: string, o: ReportOptions, io: Io): void {
+  if (o.out !== undefined && o.sketch !== undefined && resolve(o.out) === resolve(o.sketch)) {
+    throw new JobInvalid('--sketch', `${JSON.stringify(o.sketch)} is also the --out file: give them different names`);
+  }
   const r = runJob(job, TASK_KINDS, { arithmetic: o.arithmetic, digits: o.digits, source });
   const text = o.format === 'json' ? renderJson(r) : o.format === 'markdown' ? renderMarkdown(r) : renderText(r);
   const files: { target: string; text: string }[] = [];
