@@ -7,7 +7,7 @@
 import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { solveQuadratic } from '../geometry/quadratic.js';
-import { readQuadrance } from '../geometry/validate.js';
+import { readNumber, readQuadrance } from '../geometry/validate.js';
 import type { Root } from '../geometry/surd.js';
 import { readVertical, type VerticalInput } from '../readings/vertical.js';
 import { rootOps } from './roots.js';
@@ -116,7 +116,7 @@ export function heightFromInlineReadings<T>(
   const raw: T[] = [];
   let sum = A.zero;
   for (let i = 0; i < n; i++) {
-    const x = A.from(input.chainages[i]!);
+    const x = readNumber(A, input.chainages[i]!, () => `${w}.chainages[${i}]`);
     for (let j = 0; j < i; j++) {
       if (A.eq(raw[j]!, x)) throw new QuadspreadError('REPEATED_CHAINAGE', `${w}.chainages`, `stations ${j} and ${i} are both at chainage ${A.toString(x)}`);
     }

@@ -7,7 +7,7 @@
 import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { isSurd, type Root, type Surd } from '../geometry/surd.js';
-import { readQuadrance } from '../geometry/validate.js';
+import { readNumber } from '../geometry/validate.js';
 import { checkLengthUnit, METRES_PER_UNIT, type LengthUnit } from '../readings/length.js';
 import { readVertical, type VerticalInput } from '../readings/vertical.js';
 import { rootOps } from './roots.js';
@@ -48,9 +48,9 @@ export interface CurvatureOptions<T> {
 }
 
 function radius<T>(A: Arithmetic<T>, o: CurvatureOptions<T>, where: string): { k: T; R: T } {
-  const k = A.from(o.k ?? DEFAULT_REFRACTION);
+  const k = readNumber(A, o.k ?? DEFAULT_REFRACTION, `${where}.k`);
   let R: T;
-  if (o.earthRadius !== undefined) R = A.from(o.earthRadius);
+  if (o.earthRadius !== undefined) R = readNumber(A, o.earthRadius, `${where}.earthRadius`);
   else {
     const u = checkLengthUnit(o.unit ?? 'm', `${where}.unit`);
     R = A.div(A.from(DEFAULT_EARTH_RADIUS_M), A.from(METRES_PER_UNIT[u]));
@@ -82,7 +82,7 @@ function radius<T>(A: Arithmetic<T>, o: CurvatureOptions<T>, where: string): { k
  * ```
  */
 export function curvatureRefraction<T>(A: Arithmetic<T>, distance: Numeric<T>, options: CurvatureOptions<T> = {}): T {
-  const D = A.from(distance);
+  const D = readNumber(A, distance, 'curvatureRefraction(distance)');
   if (A.sign(D) < 0) throw new QuadspreadError('NEGATIVE_QUADRANCE', 'curvatureRefraction(distance)', `${show(typeof distance === 'object' ? A.toString(D) : distance)} is a negative distance`);
   return curvatureFromQuadrance(A, A.mul(D, D), options, 'curvatureRefraction(options)');
 }
@@ -153,7 +153,7 @@ export function trigHeight<T, E extends boolean>(A: Arithmetic<T, E>, sight: Tri
   if (sight.measured !== 'slope' && sight.measured !== 'horizontal') {
     throw new QuadspreadError('INVALID_ARGUMENT', `${w}.measured`, `${show(sight.measured)} is not 'slope' or 'horizontal'`);
   }
-  const D = A.from(sight.distance);
+  const D = readNumber(A, sight.distance, `${w}.distance`);
   if (A.sign(D) < 0) throw new QuadspreadError('NEGATIVE_QUADRANCE', `${w}.distance`, `${A.toString(D)} is a negative distance`);
   const v = readVertical(A, sight.vertical, `${w}.vertical`);
   const s = v.spread;
@@ -169,10 +169,9 @@ export function trigHeight<T, E extends boolean>(A: Arithmetic<T, E>, sight: Tri
     V = R.make(A.zero, A.div(A.mul(sg, D), c), A.mul(s, c)); // D·tan α = ±D·√(R(1 − R))/(1 − R)
     Qh = A.mul(D, D);
   }
-  readQuadrance(A, Qh, w, 'distance');
   const corr = sight.correction === false ? A.zero : curvatureFromQuadrance(A, Qh, sight.correction ?? {}, `${w}.correction`);
-  const hi = A.from(sight.instrumentHeight ?? 0);
-  const hr = A.from(sight.targetHeight ?? 0);
+  const hi = readNumber(A, sight.instrumentHeight ?? 0, `${w}.instrumentHeight`);
+  const hr = readNumber(A, sight.targetHeight ?? 0, `${w}.targetHeight`);
   const difference = R.add(V, A.add(A.sub(hi, hr), corr));
   return { difference, vertical: V, horizontalQuadrance: Qh, correction: corr };
 }

@@ -6,13 +6,14 @@
 import { QuadspreadError } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
+import { readNumber } from '../geometry/validate.js';
 import { readVertical, type VerticalInput } from '../readings/vertical.js';
 import { heightFromReading } from './height.js';
 
 /** @internal reads a point given with numeric or arithmetic coordinates. */
 export function readPoint<T>(A: Arithmetic<T>, P: { x: Numeric<T>; y: Numeric<T> }, where: string): Point<T> {
   if (typeof P !== 'object' || P === null) throw new QuadspreadError('INVALID_ARGUMENT', where, 'is not a point { x, y }');
-  return { x: A.from(P.x), y: A.from(P.y) };
+  return { x: readNumber(A, P.x, `${where}.x`), y: readNumber(A, P.y, `${where}.y`) };
 }
 
 /** The result of {@link heightFromTwoStations}. */

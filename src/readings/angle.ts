@@ -5,6 +5,7 @@
  * @module readings
  */
 import { MAX_INPUT_LENGTH, QuadspreadError, show } from '../errors.js';
+import { readNumber } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { guardOf, viaGuard } from './numeric.js';
 
@@ -175,7 +176,7 @@ export function readAngle<T>(A: Arithmetic<T>, reading: Numeric<T>, unit: AngleU
     degrees = dms.sign < 0 ? A.neg(value) : value;
     return degrees;
   }
-  const v = A.from(reading);
+  const v = readNumber(A, reading, where);
   switch (u) {
     case 'deg':
       return v;
@@ -208,7 +209,7 @@ export function degreesToUnit<T>(A: Arithmetic<T>, degrees: Numeric<T>, unit: An
   const u = checkAngleUnit(unit, 'degreesToUnit(unit)');
   const G = guardOf(A);
   if (G) return viaGuard(A, G, degrees, (g, x) => degreesToUnit(g, x as Numeric<typeof g.zero>, u));
-  const v = A.from(degrees);
+  const v = readNumber(A, degrees, 'degreesToUnit(degrees)');
   switch (u) {
     case 'deg':
       return v;

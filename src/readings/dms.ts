@@ -4,6 +4,7 @@
  * @module readings
  */
 import { QuadspreadError, show } from '../errors.js';
+import { readNumber } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 
 /**
@@ -31,7 +32,7 @@ export function formatDms<T>(A: Arithmetic<T>, degrees: Numeric<T>, secondsDecim
   if (!Number.isInteger(secondsDecimals) || secondsDecimals < 0 || secondsDecimals > 6) {
     throw new QuadspreadError('INVALID_ARGUMENT', 'formatDms(secondsDecimals)', `${show(secondsDecimals)} is not an integer in 0..6`);
   }
-  const d = A.from(degrees);
+  const d = readNumber(A, degrees, 'formatDms(degrees)');
   if (A.cmp(A.abs(d), A.from('1e8')) >= 0) {
     throw new QuadspreadError('INVALID_ARGUMENT', 'formatDms(degrees)', `${A.toString(d)} is too large to write as DMS`);
   }

@@ -4,6 +4,7 @@
  * @module readings
  */
 import { QuadspreadError, show } from '../errors.js';
+import { readNumber } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 
 /**
@@ -61,7 +62,7 @@ export function checkLengthUnit(unit: unknown, where: string): LengthUnit {
  */
 export function lengthToMetres<T>(A: Arithmetic<T>, value: Numeric<T>, unit: LengthUnit): T {
   const u = checkLengthUnit(unit, 'lengthToMetres(unit)');
-  return A.mul(A.from(value), A.from(METRES_PER_UNIT[u]));
+  return A.mul(readNumber(A, value, 'lengthToMetres(value)'), A.from(METRES_PER_UNIT[u]));
 }
 
 /**
@@ -81,7 +82,7 @@ export function lengthToMetres<T>(A: Arithmetic<T>, value: Numeric<T>, unit: Len
  */
 export function metresToLength<T>(A: Arithmetic<T>, metres: Numeric<T>, unit: LengthUnit): T {
   const u = checkLengthUnit(unit, 'metresToLength(unit)');
-  return A.div(A.from(metres), A.from(METRES_PER_UNIT[u]));
+  return A.div(readNumber(A, metres, 'metresToLength(metres)'), A.from(METRES_PER_UNIT[u]));
 }
 
 /**
@@ -103,7 +104,7 @@ export function metresToLength<T>(A: Arithmetic<T>, metres: Numeric<T>, unit: Le
 export function convertLength<T>(A: Arithmetic<T>, value: Numeric<T>, from: LengthUnit, to: LengthUnit): T {
   const f = checkLengthUnit(from, 'convertLength(from)');
   const t = checkLengthUnit(to, 'convertLength(to)');
-  return A.div(A.mul(A.from(value), A.from(METRES_PER_UNIT[f])), A.from(METRES_PER_UNIT[t]));
+  return A.div(A.mul(readNumber(A, value, 'convertLength(value)'), A.from(METRES_PER_UNIT[f])), A.from(METRES_PER_UNIT[t]));
 }
 
 /**
@@ -123,7 +124,7 @@ export function convertLength<T>(A: Arithmetic<T>, value: Numeric<T>, from: Leng
  * ```
  */
 export function convertQuadrance<T>(A: Arithmetic<T>, quadrance: Numeric<T>, from: LengthUnit, to: LengthUnit): T {
-  const q = A.from(quadrance);
+  const q = readNumber(A, quadrance, 'convertQuadrance(quadrance)');
   if (A.sign(q) < 0) throw new QuadspreadError('NEGATIVE_QUADRANCE', 'convertQuadrance(quadrance)', `${show(typeof quadrance === 'object' ? A.toString(q) : quadrance)} is below zero`);
   const r = convertLength(A, A.one, from, to);
   return A.mul(q, A.mul(r, r));

@@ -6,6 +6,7 @@
  * @module readings
  */
 import { QuadspreadError, show } from '../errors.js';
+import { readNumber } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { checkSpread } from './spread.js';
 
@@ -31,8 +32,8 @@ function shown<T>(A: Arithmetic<T>, x: Numeric<T>, v: T): string {
  * ```
  */
 export function spreadFromRatio<T>(A: Arithmetic<T>, rise: Numeric<T>, run: Numeric<T>): T {
-  const r = A.from(rise);
-  const d = A.from(run);
+  const r = readNumber(A, rise, 'spreadFromRatio(rise)');
+  const d = readNumber(A, run, 'spreadFromRatio(run)');
   if (A.isZero(r) && A.isZero(d)) {
     throw new QuadspreadError('INVALID_SLOPE', 'spreadFromRatio(rise, run)', 'rise and run are both zero: the slope has no direction');
   }
@@ -56,7 +57,7 @@ export function spreadFromRatio<T>(A: Arithmetic<T>, rise: Numeric<T>, run: Nume
  * ```
  */
 export function spreadFromGrade<T>(A: Arithmetic<T>, percent: Numeric<T>): T {
-  return spreadFromRatio(A, percent, 100); // p % = p/100 rise per run
+  return spreadFromRatio(A, readNumber(A, percent, 'spreadFromGrade(percent)'), 100); // p % = p/100 rise per run
 }
 
 /**
@@ -74,7 +75,7 @@ export function spreadFromGrade<T>(A: Arithmetic<T>, percent: Numeric<T>): T {
  * ```
  */
 export function spreadFromPerMille<T>(A: Arithmetic<T>, perMille: Numeric<T>): T {
-  return spreadFromRatio(A, perMille, 1000);
+  return spreadFromRatio(A, readNumber(A, perMille, 'spreadFromPerMille(perMille)'), 1000);
 }
 
 /**
@@ -93,7 +94,7 @@ export function spreadFromPerMille<T>(A: Arithmetic<T>, perMille: Numeric<T>): T
  * ```
  */
 export function spreadFromOneIn<T>(A: Arithmetic<T>, n: Numeric<T>): T {
-  const v = A.from(n);
+  const v = readNumber(A, n, 'spreadFromOneIn(n)');
   if (A.isZero(v)) throw new QuadspreadError('INVALID_SLOPE', 'spreadFromOneIn(n)', `"1 in ${shown(A, n, v)}" is not a slope`);
   return spreadFromRatio(A, 1, v);
 }

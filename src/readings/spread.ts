@@ -4,6 +4,7 @@
  * @module readings
  */
 import { QuadspreadError, show } from '../errors.js';
+import { readNumber } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readAngle, type AngleUnit } from './angle.js';
 import { modulo, sinCos } from './trig.js';
@@ -11,7 +12,7 @@ import { approxSqrt, guardOf, viaGuard } from './numeric.js';
 
 /** @internal reads a spread and checks 0 ≤ s ≤ 1. */
 export function checkSpread<T>(A: Arithmetic<T>, s: Numeric<T>, where: string): T {
-  const v = A.from(s);
+  const v = readNumber(A, s, where);
   if (A.sign(v) < 0 || A.cmp(v, A.one) > 0) {
     throw new QuadspreadError('SPREAD_OUT_OF_RANGE', where, `${show(typeof s === 'object' ? A.toString(v) : s)} is outside [0, 1]`);
   }

@@ -5,6 +5,7 @@
  * @module readings
  */
 import { MAX_INPUT_LENGTH, QuadspreadError, show } from '../errors.js';
+import { readNumber } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { angleToDegrees, type AngleUnit } from './angle.js';
 import { checkSpread, degreesFromSpread, spreadFromDegrees } from './spread.js';
@@ -76,7 +77,7 @@ function at(where: string, index: number | undefined): string {
 
 function readSpreadAt<T>(A: Arithmetic<T>, s: Numeric<T>, where: string, index: number | undefined): T {
   if (index === undefined) return checkSpread(A, s, where);
-  const v = A.from(s);
+  const v = readNumber(A, s, () => at(where, index));
   return A.sign(v) < 0 || A.cmp(v, A.one) > 0 ? checkSpread(A, s, at(where, index)) : v;
 }
 
@@ -143,8 +144,8 @@ export function verticalFromAngle<T>(
  * ```
  */
 export function verticalFromRatio<T>(A: Arithmetic<T>, rise: Numeric<T>, run: Numeric<T>): VerticalReading<T> {
-  const r = A.from(rise);
-  const d = A.from(run);
+  const r = readNumber(A, rise, 'verticalFromRatio(rise)');
+  const d = readNumber(A, run, 'verticalFromRatio(run)');
   const s = spreadFromRatio(A, r, d);
   const sg = A.isZero(s) ? 0 : A.isZero(d) ? A.sign(r) : ((A.sign(r) * A.sign(d)) as -1 | 0 | 1);
   return { spread: s, sign: sg };
@@ -253,5 +254,5 @@ export function zenithFromVertical<T>(A: Arithmetic<T>, reading: VerticalInput<T
  * ```
  */
 export function zenithToElevation<T>(A: Arithmetic<T>, degrees: Numeric<T>): T {
-  return A.sub(A.from(90), A.from(degrees));
+  return A.sub(A.from(90), readNumber(A, degrees, 'zenithToElevation(degrees)'));
 }
