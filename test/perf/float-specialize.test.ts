@@ -14,7 +14,9 @@ import { pathToFileURL, fileURLToPath } from 'node:url';
 import { floatSpecialize, specializeSource } from '../../scripts/float-specialize.mjs';
 import * as G from './fixtures/generic.js';
 import { float, rational, QuadspreadError } from '../../src/index.js';
-import { triangle, point } from '../../src/geometry/index.js';
+import { triangle, point, quadrance, spread, solveTriangle } from '../../src/geometry/index.js';
+import { heightFromReading, heightFromInlineReadings, pathGrade } from '../../src/elevation/index.js';
+import { traverse, area, intersectLines } from '../../src/cogo/index.js';
 
 const here = path.dirname(fileURLToPath(import.meta.url));
 const root = path.resolve(here, '../..');
@@ -103,5 +105,26 @@ describe('float-specialize', () => {
       { numRuns: 500 },
     );
     expect(outcome(() => F.triangle({ x: 0, y: 0 }, { x: 1, y: 1 }, { x: 2, y: 2 }))).toEqual(outcome(() => triangle(float, { x: 0, y: 0 }, { x: 1, y: 1 }, { x: 2, y: 2 })));
+  });
+
+  it('the other quadspread/float solvers equal the generic ones with float, results and errors', () => {
+    const small = fc.double({ min: -1000, max: 1000, noNaN: true });
+    const unit = fc.double({ min: -0.1, max: 1.1, noNaN: true });
+    const p2 = fc.record({ x: small, y: small });
+    fc.assert(
+      fc.property(p2, p2, p2, p2, fc.tuple(small, small, small), fc.tuple(unit, unit, unit), fc.array(fc.record({ latitude: small, departure: small, distance: fc.double({ min: 0, max: 500, noNaN: true }) }), { minLength: 1, maxLength: 20 }), (a, b, c, d, cs, vs, courses) => {
+        const same = (f: () => unknown, g: () => unknown) => expect(outcome(f)).toEqual(outcome(g));
+        same(() => F.quadrance(a, b), () => quadrance(float, a, b));
+        same(() => F.spread(a, b, c), () => spread(float, a, b, c));
+        same(() => F.solveTriangle({ Q1: a.x * a.x, Q2: b.x * b.x, s3: vs[0] }), () => solveTriangle(float, { Q1: a.x * a.x, Q2: b.x * b.x, s3: vs[0] }));
+        same(() => F.heightFromReading({ horizontal: Math.abs(a.x), vertical: vs[1] }), () => heightFromReading(float, { horizontal: Math.abs(a.x), vertical: vs[1] }));
+        same(() => F.heightFromInlineReadings({ chainages: cs, vertical: vs }), () => heightFromInlineReadings(float, { chainages: cs, vertical: vs }));
+        same(() => F.pathGrade({ fall: vs[0], offset: vs[1], measured: 'plan' }), () => pathGrade(float, { fall: vs[0], offset: vs[1], measured: 'plan' }));
+        same(() => F.traverse({ start: a, courses }), () => traverse(float, { start: a, courses }));
+        same(() => F.area([a, b, c, d]), () => area(float, [a, b, c, d]));
+        same(() => F.intersectLines(a, b, c, d), () => intersectLines(float, a, b, c, d));
+      }),
+      { numRuns: 300 },
+    );
   });
 });
