@@ -145,7 +145,19 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
     // given), so that the gradients tell both the budget and which results depend on an
     // angle reading (and so have no exact form).
     const angleNames = new Set(p.inputs.filter((x) => x.angle).map((x) => x.name));
-    const uncertainties = new Map<string, { dependsOnAngle: boolean; sigma?: string; budget?: BudgetTerm[] }>();
+    const withSigma = new Map(p.inputs.filter((x) => x.sigma !== undefined).map((x) => [x.name, x]));
+    const pairs = ((task.correlations ?? []) as { inputs: [string, string]; r: number }[]).map((c, k) => {
+      c.inputs.forEach((n, m) => {
+        if (!withSigma.has(n)) {
+          throw new JobInvalid(`tasks[${i}].correlations[${k}].inputs[${m}]`, `${show(n)} is not an input of this task with a sigma (${[...withSigma.keys()].map((x) => JSON.stringify(x)).join(', ') || 'none has one'})`);
+        }
+      });
+      if (c.inputs[0] === c.inputs[1]) throw new JobInvalid(`tasks[${i}].correlations[${k}].inputs`, 'pairs an input with itself');
+      const [a, b] = c.inputs.map((n) => withSigma.get(n)!);
+      return { names: c.inputs, r: c.r, covariance: c.r * float.from(a!.sigma!) * float.from(b!.sigma!) };
+    });
+    type UncertaintyEntry = { dependsOnAngle: boolean; sigma?: string; budget?: BudgetTerm[]; correlations?: NonNullable<Quantity['correlations']> };
+    const uncertainties = new Map<string, UncertaintyEntry>();
     let uncertainNote: string | undefined;
     try {
       const cache = new Map<Input, unknown>();
@@ -166,10 +178,12 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
       for (const q of u.results) {
         if (isSurd(q.value)) continue;
         const v = q.value as Uncertain<number>;
-        const entry: { dependsOnAngle: boolean; sigma?: string; budget?: BudgetTerm[] } = {
+        const entry: UncertaintyEntry = {
           dependsOnAngle: [...v.gradient.keys()].some((k) => angleNames.has(k.name)),
         };
-        const b = budget(U, v);
+        const depends = new Set([...v.gradient.keys()].map((k) => k.name));
+        const used = pairs.filter((c) => depends.has(c.names[0]) && depends.has(c.names[1]));
+        const b = budget(U, v, { covariance: used.map((c) => [c.names[0], c.names[1], c.covariance] as const) });
         const terms = b.contributions.filter((c) => c.sigma > 0);
         if (terms.length > 0) {
           entry.sigma = precision(b.sigma, SIGMA_DIGITS);
@@ -181,6 +195,13 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
               share: b.variance > 0 ? (Math.round((1000 * c.contribution) / b.variance) / 10).toFixed(1) : '0.0',
             }),
           );
+        }
+        if (b.correlations.length > 0 && b.variance > 0) {
+          entry.correlations = b.correlations.map((c) => ({
+            inputs: [c.names[0], c.names[1]] as [string, string],
+            r: String(used.find((u) => u.names[0] === c.names[0] && u.names[1] === c.names[1])!.r),
+            share: (Math.round((1000 * c.contribution) / b.variance) / 10).toFixed(1),
+          }));
         }
         uncertainties.set(q.name, entry);
       }
@@ -199,6 +220,7 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
         if (un?.sigma !== undefined) {
           f.sigma = un.sigma;
           f.budget = un.budget!;
+          if (un.correlations) f.correlations = un.correlations;
         }
         return f;
       }),

@@ -33,7 +33,7 @@ export function renderMarkdown(report: Report): string {
       for (const q of t.results) {
         const all = q.budget ?? [];
         const rest = all.slice(BUDGET_SHOWN);
-        const budget = [...all.slice(0, BUDGET_SHOWN).map((b) => `${b.input} ${b.share} %`), ...(rest.length ? [`${rest.length} more ${rest.reduce((s, b) => s + Number(b.share), 0).toFixed(1)} %`] : [])].join(', ');
+        const budget = [...all.slice(0, BUDGET_SHOWN).map((b) => `${b.input} ${b.share} %`), ...(rest.length ? [`${rest.length} more ${rest.reduce((s, b) => s + Number(b.share), 0).toFixed(1)} %`] : []), ...(q.correlations ?? []).map((c) => `${c.inputs[0]} ↔ ${c.inputs[1]} (r = ${c.r}) ${c.share} %`)].join(', ');
         const exact = showExact(q) ? `\`${shortExact(q.exact)}\`` : '';
         out.push(`| ${cell(q.label)} (\`${q.name}\`) | ${cell(withUnit(q.value, q.unit))} | ${q.sigma !== undefined ? cell(withUnit(q.sigma, q.unit)) : ''} | ${cell(exact)} | ${cell(budget)} |`);
       }

@@ -34,6 +34,7 @@ function quantityLines(q: Quantity): string[] {
     if (rest.length > 0) top.push(`${rest.length} other input${rest.length === 1 ? '' : 's'} ${rest.reduce((s, b) => s + Number(b.share), 0).toFixed(1)} %`);
     lines.push(`      budget: ${top.join('; ')}`);
   }
+  for (const c of q.correlations ?? []) lines.push(`      correlation ${c.inputs[0]} ↔ ${c.inputs[1]} (r = ${c.r}): ${c.share} % of the variance`);
   return lines;
 }
 

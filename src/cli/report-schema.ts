@@ -61,6 +61,19 @@ export const REPORT_SCHEMA: Schema = {
         value: { $ref: '#/$defs/decimal' },
         exact: { ...text, description: 'The exact form: a fraction n/d or a surd a + b√d.' },
         sigma: { $ref: '#/$defs/decimal', description: 'Standard uncertainty (GUM, JCGM 100:2008, first order), in unit.' },
+        correlations: {
+          type: 'array',
+          items: {
+            type: 'object',
+            required: ['inputs', 'r', 'share'],
+            additionalProperties: false,
+            properties: {
+              inputs: { type: 'array', minItems: 2, maxItems: 2, items: text },
+              r: { $ref: '#/$defs/decimal' },
+              share: { $ref: '#/$defs/decimal', description: 'Percent of the variance (negative for a negative correlation term).' },
+            },
+          },
+        },
         budget: {
           type: 'array',
           items: {

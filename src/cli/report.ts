@@ -38,6 +38,8 @@ export interface Quantity {
   sigma?: string;
   /** The uncertainty budget, largest share first. */
   budget?: BudgetTerm[];
+  /** Shares of the variance added by correlated inputs (GUM eq. (13)); may be negative. */
+  correlations?: { inputs: [string, string]; r: string; share: string }[];
 }
 
 /** A pass/fail check against a stated tolerance. */

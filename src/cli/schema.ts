@@ -73,6 +73,20 @@ export const DEFS: Record<string, Schema> = {
     'x-describe': 'a vertical reading (an elevation angle, or { "zenith": … }, { "slope": … }, { "spread": … })',
   },
   pointRef: { type: 'string', minLength: 1, maxLength: 80, description: 'The name of a point in "points".', 'x-describe': 'a point name' },
+  correlations: {
+    description: 'Correlated inputs of the task: pairs of inputs (named as in the uncertainty budget, e.g. "C0 elevation") with their correlation coefficient r; the covariance r·u(a)·u(b) enters the variance (GUM eq. (13)). Inputs not listed are uncorrelated.',
+    type: 'array',
+    maxItems: 1000,
+    items: {
+      type: 'object',
+      required: ['inputs', 'r'],
+      additionalProperties: false,
+      properties: {
+        inputs: { type: 'array', minItems: 2, maxItems: 2, items: { type: 'string', minLength: 1, maxLength: 200 } },
+        r: { type: 'number', minimum: -1, maximum: 1 },
+      },
+    },
+  },
   tolerance: {
     description: 'A tolerance in the job\'s length unit (a number or text with a unit).',
     $ref: '#/$defs/length',

@@ -122,6 +122,31 @@ describe('quadspread run tells a bad reading (exit 2) from a computation with no
   });
 });
 
+describe('quadspread run with correlated inputs', () => {
+  const job = (names: [string, string], r: number) => ({
+    points: { A: { east: 0, north: 0 }, B: { east: 0, north: 100 } },
+    tasks: [{
+      kind: 'traverse', start: 'A', close: 'B',
+      courses: [{ latitude: { value: 60, sigma: 0.003 }, departure: 0 }, { latitude: { value: 40.01, sigma: 0.004 }, departure: 0 }],
+      correlations: [{ inputs: names, r }],
+    }],
+  });
+
+  it('adds 2·r·u(a)·u(b) to the variance of a sum (GUM, JCGM 100:2008, eq. (13))', () => {
+    const r = cli(['run', jobFile('corr.json', job(['course 1 latitude', 'course 2 latitude'], 0.5)), '--format', 'json']);
+    expect(r.code).toBe(0);
+    const q = JSON.parse(r.stdout).tasks[0].results.find((x: { name: string }) => x.name === 'misclosure_north');
+    expect(Number(q.sigma)).toBeCloseTo(Math.sqrt(0.003 ** 2 + 0.004 ** 2 + 2 * 0.5 * 0.003 * 0.004), 4);
+    expect(q.correlations).toEqual([{ inputs: ['course 1 latitude', 'course 2 latitude'], r: '0.5', share: (Math.round((1000 * 2 * 0.5 * 0.003 * 0.004) / (0.003 ** 2 + 0.004 ** 2 + 2 * 0.5 * 0.003 * 0.004)) / 10).toFixed(1) }]);
+  });
+
+  it('exits 2 naming an input that the task does not have', () => {
+    const r = cli(['run', jobFile('corr-bad.json', job(['course 1 latitude', 'course 3 latitude'], 0.5))]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toContain('tasks[0].correlations[0].inputs[1]: "course 3 latitude" is not an input of this task with a sigma ("course 1 latitude", "course 2 latitude")');
+  });
+});
+
 describe('quadspread run with checks that fail', () => {
   it('exits 0, marks the check FAIL and says so at the end', () => {
     const job = { points, tasks: [{ kind: 'traverse', start: 'A', close: 'C', courses: [{ bearing: 90, distance: 100 }, { bearing: 0, distance: 80.5 }], tolerance: { linear: '0.1 m', precision: 1000 } }] };

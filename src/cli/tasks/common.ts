@@ -25,7 +25,7 @@ export function taskSchema(kind: string, required: string[], properties: Record<
     type: 'object',
     required: ['kind', ...required],
     additionalProperties: false,
-    properties: { kind: { const: kind }, name: { $ref: '#/$defs/name' }, ...properties },
+    properties: { kind: { const: kind }, name: { $ref: '#/$defs/name' }, ...properties, correlations: { $ref: '#/$defs/correlations' } },
   };
 }
 
