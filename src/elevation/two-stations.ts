@@ -6,12 +6,13 @@
 import { QuadspreadError } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
+import { quadrance } from '../geometry/quadrance.js';
 import { readNumber } from '../geometry/validate.js';
 import { readVertical, type VerticalInput } from '../readings/vertical.js';
 import { heightFromReading } from './height.js';
 
-/** @internal reads a point given with numeric or arithmetic coordinates. */
-export function readPoint<T>(A: Arithmetic<T>, P: { x: Numeric<T>; y: Numeric<T> }, where: string): Point<T> {
+/** Reads a point given with numeric or arithmetic coordinates. */
+function readPoint<T>(A: Arithmetic<T>, P: { x: Numeric<T>; y: Numeric<T> }, where: string): Point<T> {
   if (typeof P !== 'object' || P === null) throw new QuadspreadError('INVALID_ARGUMENT', where, 'is not a point { x, y }');
   return { x: readNumber(A, P.x, `${where}.x`), y: readNumber(A, P.y, `${where}.y`) };
 }
@@ -79,13 +80,12 @@ export function heightFromTwoStations<T>(
   const signs: number[] = [];
   for (let i = 0; i < 2; i++) {
     const P = readPoint(A, input.stations[i]!, `${w}.stations[${i}]`);
-    const dx = A.sub(F.x, P.x);
-    const dy = A.sub(F.y, P.y);
-    const Q = A.add(A.mul(dx, dx), A.mul(dy, dy));
+    const Q = quadrance(A, P, F);
     if (A.isZero(Q)) throw new QuadspreadError('COINCIDENT_POINTS', `${w}.stations[${i}]`, 'the station is at the foot of the point: its reading is a plumb sight');
     const v = readVertical(A, input.vertical[i]!, `${w}.vertical[${i}]`);
-    H.push(heightFromReading(A, { horizontal: Q, vertical: v }));
     const c = A.sub(A.one, v.spread);
+    if (A.isZero(c)) throw new QuadspreadError('VERTICAL_SIGHT', `${w}.vertical[${i}]`, 'a vertical spread of 1 is a plumb sight: it meets no point off the station');
+    H.push(heightFromReading(A, { horizontal: Q, vertical: v }));
     weights.push(A.div(A.mul(c, c), Q)); // w = (1 − R)²/Q (derived: dh = D/(1 − R)·dα)
     signs.push(v.sign);
   }

@@ -90,5 +90,7 @@ describe('heightFromTwoStations: two known stations, the foot known in plan', ()
     expect(codeOf(() => heightFromTwoStations(R, { ...base, foot: { x: 0, y: 0 }, vertical: ['1/2', '1/2'] }))).toBe('COINCIDENT_POINTS');
     expect(codeOf(() => heightFromTwoStations(R, { ...base, vertical: ['1/2'] as never }))).toBe('INVALID_ARGUMENT');
     expect(codeOf(() => heightFromTwoStations(R, { ...base, vertical: ['1/2', 1] }))).toBe('VERTICAL_SIGHT');
+    // the error names this solver's input, not heightFromReading's
+    expect(() => heightFromTwoStations(R, { ...base, vertical: ['1/2', 1] })).toThrow(expect.objectContaining({ where: 'heightFromTwoStations(input).vertical[1]' }));
   });
 });
