@@ -99,8 +99,9 @@ if (!only || only === 'triangle') {
     const o = { items: settings.growthN, reps: settings.reps, targetMs: settings.targetMs };
     const ours = ratio(gk.ours, base.ours, o);
     const floor = ratio(gk.floor, base.floor, o);
-    growth.push({ digits: k, rational: ours.ratio, bigint: floor.ratio, rationalUs: ours.aUs, bigintUs: floor.aUs });
-    console.log(`growth    ${String(k).padStart(2)} digits: rational ×${ours.ratio.toFixed(2)} (${fmt(ours.aUs)} µs), bare BigInt ×${floor.ratio.toFixed(2)} (${fmt(floor.aUs)} µs)`);
+    const naive = ratio(gk.naive, base.naive, o);
+    growth.push({ digits: k, rational: ours.ratio, bigint: floor.ratio, fraction: naive.ratio, rationalUs: ours.aUs, bigintUs: floor.aUs, fractionUs: naive.aUs });
+    console.log(`growth    ${String(k).padStart(2)} digits: rational ×${ours.ratio.toFixed(2)} (${fmt(ours.aUs)} µs), bare BigInt ×${floor.ratio.toFixed(2)} (${fmt(floor.aUs)} µs), plain fraction.js ×${naive.ratio.toFixed(2)} (${fmt(naive.aUs)} µs)`);
   }
   console.log(`growth    at 2 digits: rational ${fmt(base.ours && ratio(base.ours, base.floor, { items: settings.growthN, reps: 3, targetMs: settings.targetMs }).ratio)}× the bare BigInt work`);
 }

@@ -20,9 +20,9 @@ out.push('Ratios: for float, our time / hand-written time (lower is better, goal
 out.push('');
 out.push('Rational cost growth, triangle workload, time at k significant digits over time at 2 digits:');
 out.push('');
-out.push('| digits | rational triangle | growth | bare BigInt products | growth |');
-out.push('|---:|---:|---:|---:|---:|');
-for (const g of r.growth) out.push(`| ${g.digits} | ${f(g.rationalUs)} µs | ×${g.rational.toFixed(2)} | ${f(g.bigintUs)} µs | ×${g.bigint.toFixed(2)} |`);
+out.push('| digits | rational triangle | growth | bare BigInt products | growth | plain fraction.js | growth |');
+out.push('|---:|---:|---:|---:|---:|---:|---:|');
+for (const g of r.growth) out.push(`| ${g.digits} | ${f(g.rationalUs)} µs | ×${g.rational.toFixed(2)} | ${f(g.bigintUs)} µs | ×${g.bigint.toFixed(2)} | ${g.fractionUs === undefined ? 'n/a' : `${f(g.fractionUs)} µs`} | ${g.fraction === undefined ? 'n/a' : `×${g.fraction.toFixed(2)}`} |`);
 out.push('');
 out.push(`Headline (triangles): \`ratio float-vs-hand ${r.headline.floatVsHand?.toFixed(2)}\`, \`ratio naive-fraction-vs-rational ${r.headline.naiveFractionVsRational?.toFixed(2)}\`, \`ratio naive-big-vs-decimal ${r.headline.naiveBigVsDecimal?.toFixed(2)}\`.`);
 console.log(out.join('\n'));

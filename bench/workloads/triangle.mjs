@@ -139,8 +139,11 @@ export function buildGrowth(lib, digits, n) {
     return fs.map((f) => f.s * f.n * (D / f.d));
   });
   const rTri = R.triangle ? (a, b, c) => R.triangle(a, b, c) : (a, b, c) => g.triangle(g.rational, a, b, c);
+  // (fraction.js reads no exponent form: the same values, read by the library.)
+  const fr = cases.map((t) => [0, 2, 4].map((i) => ({ x: R.arithmetic.from(t[i]), y: R.arithmetic.from(t[i + 1]) })));
   return {
     items: n,
+    naive: loop3(fr, naiveFraction, (r) => r.s1.n > 0n),
     ours: () => {
       let acc = 0;
       for (const p of ra) acc += rTri(p[0], p[1], p[2]).s1.n > 0n ? 1 : 0;
