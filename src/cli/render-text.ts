@@ -3,6 +3,7 @@
  *
  * @module cli
  */
+import { rational } from '../index.js';
 import type { Quantity, Report } from './report.js';
 
 const EXACT_SHOWN = 72;
@@ -15,9 +16,18 @@ export function shortExact(exact: string): string {
   return `${exact.slice(0, EXACT_SHOWN - 12)}… (${exact.length} characters; full form in --format json)`;
 }
 
-/** Whether text and Markdown show the exact form: not for integers, which the value already shows. */
+/**
+ * Whether text and Markdown show the exact form: not when the decimal value shown is
+ * already exactly it (integers, terminating decimals such as 114023/1000 = 114.023).
+ */
 export function showExact(q: Quantity): q is Quantity & { exact: string } {
-  return q.exact !== undefined && !/^-?\d+$/.test(q.exact);
+  if (q.exact === undefined) return false;
+  if (q.exact.includes('√')) return true;
+  try {
+    return !rational.eq(rational.from(q.exact), rational.from(q.value));
+  } catch {
+    return true;
+  }
 }
 
 function withUnit(value: string, unit: string): string {
