@@ -86,7 +86,10 @@ export interface Resection<T> {
  * @throws {QuadspreadError} `DANGER_CIRCLE` for a station on or near the circle through
  * the control points; `COLLINEAR_POINTS` / `COINCIDENT_POINTS` for control points that fix
  * no circle; `INVALID_ANGLE` for an angle that does not parse or is outside [0°, 360°);
- * `INVALID_ARGUMENT` for a malformed input or a negative tolerance.
+ * `NO_REAL_SOLUTION` when no station sees the control points at the given clockwise angles
+ * (Tienstra's formula cannot tell an angle from the angle + 180°, so the one candidate it
+ * gives is checked against the observed angles); `INVALID_ARGUMENT` for a malformed input
+ * or a negative tolerance.
  * @example
  * ```ts
  * import { rational, resection } from 'quadspread';
@@ -178,5 +181,26 @@ export function resection<T>(A: Arithmetic<T, boolean>, input: ResectionInput<T>
   const ey = A.sub(sy, center.y);
   const dangerRatio = A.div(A.abs(A.sub(A.add(A.mul(ex, ex), A.mul(ey, ey)), R2)), R2);
   if (A.cmp(dangerRatio, tol) < 0 || (A.isZero(tol) && A.isZero(dangerRatio))) refuse(A.toNumber(dangerRatio).toPrecision(3));
+  // Tienstra's weights use cotangents, which cannot tell an angle from the angle + 180°: the
+  // point found sees the control points at the observed angles or at those angles ± 180°.
+  // Check each observed clockwise angle a against the one the station really sees, through
+  // the sign of cos(seen − a) = (dot·cos a − cross·sin a)/(|u||v|), u, v the directions to
+  // the two control points (x = east, y = north); negative means no station fits.
+  const seenAgrees = (U: Point<T>, W: Point<T>, o: { sin: T; cos: T }): boolean => {
+    const ux = A.sub(U.x, sx);
+    const uy = A.sub(U.y, sy);
+    const wx = A.sub(W.x, sx);
+    const wy = A.sub(W.y, sy);
+    const dot = A.add(A.mul(ux, wx), A.mul(uy, wy));
+    const cross = A.sub(A.mul(ux, wy), A.mul(uy, wx));
+    return A.sign(A.sub(A.mul(dot, o.cos), A.mul(cross, o.sin))) >= 0;
+  };
+  if (!seenAgrees(P1, P2, obs[2]!) || !seenAgrees(P2, P3, obs[0]!)) {
+    throw new QuadspreadError(
+      'NO_REAL_SOLUTION',
+      where,
+      `no station sees the control points at the clockwise angles a12 = ${show(ang[0])} and a23 = ${show(ang[1])}: the only candidate sees them about 180° apart from one of these (check the angles, the order of the control points and that the angles were turned clockwise)`,
+    );
+  }
   return { station, dangerRatio, circle };
 }

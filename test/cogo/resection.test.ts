@@ -112,6 +112,20 @@ describe.each([
     expect(A.toNumber(r.dangerRatio)).toBeCloseTo(0.010025, 6);
   });
 
+  it('refuses angles that no station sees (a 180° blunder, or a12 = 0° where P1 and P2 cannot line up) with NO_REAL_SOLUTION', () => {
+    // Tienstra's cotangents do not change when an angle gains 180°: without the check the
+    // station S itself would come back for the blundered angles.
+    const S = { x: -30, y: 20 };
+    const [a12, a23] = synth(S, C).angles.map(Number) as [number, number];
+    const good = resection(A, { control: C, angles: [a12, a23] });
+    expect(Math.hypot(A.toNumber(good.station.x) - S.x, A.toNumber(good.station.y) - S.y)).toBeLessThan(1e-6);
+    expect(code(() => resection(A, { control: C, angles: [(a12 + 180) % 360, a23] }))).toBe('NO_REAL_SOLUTION');
+    expect(code(() => resection(A, { control: C, angles: [a12, (a23 + 180) % 360] }))).toBe('NO_REAL_SOLUTION');
+    // P1 (0, 100), P2 (100, 0), P3 (0, −50): a12 = 0 puts S on line P1P2 beyond P1 or P2, from
+    // where P3 is never 90° clockwise of P2 (worked by hand); the candidate is (75, 25), where a12 = 180°.
+    expect(code(() => resection(A, { control: [{ x: 0, y: 100 }, { x: 100, y: 0 }, { x: 0, y: -50 }], angles: [0, 90] }))).toBe('NO_REAL_SOLUTION');
+  });
+
   it('refuses collinear control with COLLINEAR_POINTS, bad angles with INVALID_ANGLE, wrong shapes with INVALID_ARGUMENT', () => {
     expect(code(() => resection(A, { control: [{ x: 0, y: 0 }, { x: 1, y: 1 }, { x: 2, y: 2 }], angles: [30, 40] }))).toBe('COLLINEAR_POINTS');
     expect(code(() => resection(A, { control: C, angles: [30, 'forty'] }))).toBe('INVALID_ANGLE');
