@@ -52,6 +52,17 @@ describe('quadspread demo', () => {
     expect(text).toMatch(/check independently|check every result independently/);
   });
 
+  it('prints, in the text report, the values that classical trigonometry gives, to the digits shown', () => {
+    // Path across a 1 in 3.5 slope holding 1 in 12 (apparent dip: cos β = tan g / tan φ).
+    const beta = Math.acos((1 / 12) / (1 / 3.5)) * (180 / Math.PI);
+    expect(text).toContain(`[offset_angle]: ${beta.toPrecision(10)} °`);
+    // Beacon height from H1: h = d·tan α.
+    const d1 = Math.hypot(2105 - 2000, 3160 - 3000);
+    expect(text).toContain(`[H1.height]: ${(d1 * Math.tan(rad(dms(`7°08'52.8"`)))).toPrecision(10)} m`);
+    // Levelling: misclosure = start + ΣBS − ΣFS − close, in mm.
+    expect(text).toContain(`[misclosure]: ${((112.406 + 1.652 + 2.114 + 1.337 - 0.873 - 1.005 - 1.612 - 114.023) * 1000).toPrecision(4)}`);
+  });
+
   it('runs the same job as examples/demo.json', () => {
     const r = cli(['demo', '--job']);
     expect(r.code).toBe(0);
