@@ -68,12 +68,6 @@ describe('spreadFromDegrees(A, θ) is sin²θ', () => {
       expect(Math.abs(float.toNumber(spreadFromDegrees(float, deg)) - want)).toBeLessThan(1e-15);
     }));
   });
-  it('rational is within 1e-15 relative of mathjs BigNumber sin² (the float-level check)', () => {
-    for (const deg of ['1', '12.582416666666666', '0.0001', '89.9999', '37', '179.5', '-71.25']) {
-      const ref = Number(refSin2(deg));
-      expect(Math.abs(rational.toNumber(spreadFromDegrees(rational, deg)) - ref) / ref).toBeLessThan(1e-15);
-    }
-  });
   it('rational is within 1e-20 relative of mathjs BigNumber sin² (60 digits)', () => {
     for (const deg of ['1', '12.582416666666666', '0.0001', '89.9999', '37', '179.5', '-71.25', '1e-6']) {
       const got = M.bignumber(rational.toPrecision(spreadFromDegrees(rational, deg), 45));
@@ -132,12 +126,12 @@ describe('degreesFromSpread(A, s) is the acute angle of spread s', () => {
       }
     }), { numRuns: 60 });
   });
-  it('round-trips spreadFromDegrees on [0°, 90°] (rational within 1e-14, float 1e-12)', () => {
+  it('round-trips spreadFromDegrees on [0°, 90°] (rational within 1e-13, the rounding of the float reference; float within 2e-8, as 1 − s loses digits near 90°)', () => {
     fc.assert(fc.property(fc.integer({ min: 0, max: 9_000_000 }), (k) => {
       const deg = `${k}e-5`;
       for (const A of [rational, float] as Arithmetic<unknown>[]) {
         const back = A.toNumber(degreesFromSpread(A, spreadFromDegrees(A, deg)));
-        expect(Math.abs(back - k * 1e-5)).toBeLessThan(A === float ? 1e-6 : 1e-10);
+        expect(Math.abs(back - k * 1e-5)).toBeLessThan(A === float ? 2e-8 : 1e-13);
       }
     }), { numRuns: 40 });
   });
