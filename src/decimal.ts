@@ -291,8 +291,14 @@ export const stewartResidual: Bound<typeof g.stewartResidual<Value>> = (data) =>
 /** {@link g.surd | surd} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const surd: Bound<typeof g.surd<Value>> = (a, b, d) => g.surd<Value>(arithmetic, a, b, d);
 
+/** {@link g.transverseMercator | transverseMercator} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const transverseMercator: Bound<typeof g.transverseMercator<Value>> = (point, projection) => g.transverseMercator<Value>(arithmetic, point, projection);
+
 /** {@link g.transverseMercatorFactors | transverseMercatorFactors} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const transverseMercatorFactors: Bound<typeof g.transverseMercatorFactors<Value>> = (point, projection) => g.transverseMercatorFactors<Value>(arithmetic, point, projection);
+
+/** {@link g.transverseMercatorInverse | transverseMercatorInverse} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const transverseMercatorInverse: Bound<typeof g.transverseMercatorInverse<Value>> = (point, projection) => g.transverseMercatorInverse<Value>(arithmetic, point, projection);
 
 /** {@link g.traverse | traverse} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const traverse: Bound<typeof g.traverse<Value, false>> = (input) => g.traverse<Value, false>(arithmetic, input);
@@ -351,13 +357,13 @@ export type {
   BearingIntersection, Budget, BudgetOptions, CircleInput, Contribution, CorrelationTerm,
   CurvatureOptions, Decimal, DecimalArithmetic, DecimalElementary, Ellipsoid,
   EllipsoidDefinition, EllipsoidParameters, Enu, ErrorCode, FlatEarthError, FloatArithmetic,
-  FootSide, Geocentric, Geodetic, GeodeticInput, Gradient, InlineHeight, InlineQuadranceHeight,
-  InputDistribution, Inverse, LengthUnit, LevelCheck, LevellingOrder, LevelRow, LevelRun,
-  LevelRunInput, LevelSight, Line, Matrix3, MonteCarloOptions, MonteCarloResult, Numeric,
-  OffsetMeasure, Point, PolygonArea, RandomStream, Ratio, Rational, RationalArithmetic,
-  ReciprocalTrigHeight, Resection, ResectionInput, Root, RoundOff, StewartChainages,
-  StewartQuadrances, Surd, TmFactors, TransverseMercator, Traverse, TraverseClosure,
-  TraverseCourse, TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
-  TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf, VerticalInput, VerticalKind,
-  VerticalReading,
+  FootSide, Geocentric, Geodetic, GeodeticInput, Gradient, GridPoint, InlineHeight,
+  InlineQuadranceHeight, InputDistribution, Inverse, LengthUnit, LevelCheck, LevellingOrder,
+  LevelRow, LevelRun, LevelRunInput, LevelSight, Line, Matrix3, MonteCarloOptions,
+  MonteCarloResult, Numeric, OffsetMeasure, Point, PolygonArea, RandomStream, Ratio, Rational,
+  RationalArithmetic, ReciprocalTrigHeight, Resection, ResectionInput, Root, RoundOff,
+  StewartChainages, StewartQuadrances, Surd, TmFactors, TransverseMercator,
+  TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg,
+  Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoStationHeight, UncertainArithmetic,
+  UncertainInput, ValueOf, VerticalInput, VerticalKind, VerticalReading,
 } from './index.js';
