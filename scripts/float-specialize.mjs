@@ -73,6 +73,26 @@ function isArithmeticParam(param, sf) {
   return /Arithmetic\b/.test(type) && !/Uncertain/.test(type);
 }
 
+const ASSIGN = new Set([
+  ts.SyntaxKind.EqualsToken, ts.SyntaxKind.PlusEqualsToken, ts.SyntaxKind.MinusEqualsToken, ts.SyntaxKind.AsteriskEqualsToken,
+  ts.SyntaxKind.SlashEqualsToken, ts.SyntaxKind.BarBarEqualsToken, ts.SyntaxKind.AmpersandAmpersandEqualsToken, ts.SyntaxKind.QuestionQuestionEqualsToken,
+]);
+
+/** Whether `name` is assigned, or declared again (other than as a nested function's parameter), inside `node`. */
+function rebindsName(node, name) {
+  let found = false;
+  const visit = (n) => {
+    if (found) return;
+    if (ts.isBinaryExpression(n) && ASSIGN.has(n.operatorToken.kind) && ts.isIdentifier(n.left) && n.left.text === name) found = true;
+    else if ((ts.isPrefixUnaryExpression(n) || ts.isPostfixUnaryExpression(n)) && ts.isIdentifier(n.operand) && n.operand.text === name) found = true;
+    else if ((ts.isVariableDeclaration(n) || ts.isFunctionDeclaration(n) || ts.isClassDeclaration(n)) && n.name && ts.isIdentifier(n.name) && n.name.text === name) found = true;
+    else if ((ts.isVariableDeclaration(n) || ts.isParameter(n)) && n.name && !ts.isIdentifier(n.name) && n.name.getText().match(new RegExp(`\\b${name}\\b`))) found = true;
+    else ts.forEachChild(n, visit);
+  };
+  visit(node);
+  return found;
+}
+
 /**
  * Rewrites one TypeScript module's text. Returns `{ code, functions }`, where `functions`
  * names the functions specialised (an empty list leaves the code as it was).
@@ -90,6 +110,7 @@ export function specializeSource(code, fileName = 'module.ts') {
     const param = st.parameters[0];
     if (!isArithmeticParam(param, sf)) continue;
     const a = param.name.text;
+    if (rebindsName(st.body, a)) continue; // `A` reassigned or redeclared inside: leave the function alone
     let changed = false;
 
     const emit = (node) => {
