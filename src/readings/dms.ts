@@ -18,7 +18,8 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
  * @param secondsDecimals decimals of the seconds, an integer 0..6 (default 1)
  * @returns the DMS text
  * @throws {QuadspreadError} `INVALID_ARGUMENT` for decimals outside 0..6 or an angle too
- *   large to write; `INVALID_NUMBER` for a bad value.
+ *   large to write (|degrees| ≥ 10⁸, or over 2⁵³ units of the last decimal of a second);
+ *   `INVALID_NUMBER` for a bad value.
  * @example
  * ```ts
  * import { rational, formatDms } from 'quadspread';
@@ -40,8 +41,13 @@ export function formatDms<T>(A: Arithmetic<T>, degrees: Numeric<T>, secondsDecim
   const scale = 10 ** secondsDecimals;
   const x = A.mul(A.abs(d), A.from(3600 * scale)); // units of 10^-k seconds
   let n = Math.floor(A.toNumber(x));
-  while (n > 0 && A.cmp(A.from(n), x) > 0) n--;
-  while (A.cmp(A.from(n + 1), x) <= 0) n++;
+  if (n >= Number.MAX_SAFE_INTEGER) {
+    throw new QuadspreadError('INVALID_ARGUMENT', 'formatDms(degrees)', `${A.toString(d)} is too large to write as DMS with ${secondsDecimals} decimals of a second`);
+  }
+  // floor(x) exactly: the nearest number is off by at most one step in an arithmetic at least as
+  // fine as a double (two steps allowed; a coarser one cannot hold the seconds anyway)
+  for (let i = 0; i < 2 && n > 0 && A.sign(A.sub(x, A.from(n))) < 0; i++) n--;
+  for (let i = 0; i < 2 && A.cmp(A.sub(x, A.from(n)), A.one) >= 0; i++) n++;
   // Round half away from zero, decided exactly.
   if (A.cmp(A.sub(x, A.from(n)), A.from('0.5')) >= 0) n++;
   const unitsPerDegree = 3600 * scale;

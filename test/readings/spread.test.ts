@@ -207,5 +207,9 @@ describe('formatDms(A, degrees, decimals) writes DMS text', () => {
     expect(codeOf(() => formatDms(rational, 1, 7))).toBe('INVALID_ARGUMENT');
     expect(codeOf(() => formatDms(rational, 1, 1.5))).toBe('INVALID_ARGUMENT');
     expect(codeOf(() => formatDms(rational, '1e9'))).toBe('INVALID_ARGUMENT');
+    // 10⁸° with 6 decimals is 3.6·10¹⁷ units of 10⁻⁶″, beyond 2⁵³: refused, not a hang (it used to loop)
+    expect(codeOf(() => formatDms(rational, '99999999.123456789', 6))).toBe('INVALID_ARGUMENT');
+    // a coarse decimal: n + 1 rounds back to x, which used to step n one unit at a time (~10⁸ steps)
+    expect(formatDms(decimal(5), '1234.5', 6)).toBe(`1234°30'00.000000"`);
   });
 });
