@@ -11,7 +11,7 @@ import type { Point } from '../geometry/point.js';
 import { float } from '../arithmetic/float.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { readAzimuth } from './bearing.js';
-import type { Traverse, TraverseInput, TraverseLeg } from './traverse.js';
+import type { Traverse, TraverseLeg } from './traverse.js';
 
 const where = 'traverse(A, input)';
 
@@ -26,7 +26,6 @@ function isNum(v: unknown): v is number {
  * @internal
  */
 export function traverseFloat(
-  input: TraverseInput<number>,
   start: Point<number>,
   end: Point<number>,
   rule: 'compass' | 'transit',
@@ -117,6 +116,5 @@ export function traverseFloat(
     adjusted[i + 1] = { x: ax, y: ay };
     legs[i] = { latitude: la, departure: de, length: len[i]!, adjustedLatitude: adjLat, adjustedDeparture: adjDep };
   }
-  void input;
   return { closure: { east, north, linear, ratio }, length: total, points, adjusted, courses: legs, rule };
 }

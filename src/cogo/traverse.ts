@@ -212,7 +212,7 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
   if (n === 0) throw new QuadspreadError('NO_COURSES', `${where} courses`, 'the traverse has no courses');
   if ((A as unknown) === float) {
     // The float twin (same operations, same order) keeps this loop fast in any process.
-    const fast = traverseFloat(input as TraverseInput<number>, start as Point<number>, end as Point<number>, rule, list);
+    const fast = traverseFloat(start as Point<number>, end as Point<number>, rule, list);
     if (fast !== undefined) {
       const r = fast as unknown as Traverse<T, E>;
       return input.interiorAngles !== undefined ? { ...r, angular: angularMisclosure(A, input.interiorAngles) } : r;

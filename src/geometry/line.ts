@@ -6,7 +6,7 @@
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { QuadspreadError, show } from '../errors.js';
 import type { Point } from './point.js';
-import { readNumber } from './validate.js';
+import { atMostOne, readNumber } from './validate.js';
 
 /**
  * The line ⟨a : b : c⟩: the points with a·x + b·y + c = 0 (x east, y north), a and b
@@ -90,6 +90,7 @@ export function lineThrough<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): Line
  * @param P the point
  * @param l the line
  * @returns a·x + b·y + c = 0
+ * @throws Never: P and l are values of the arithmetic already.
  * @example
  * ```ts
  * import { rational, point, line, isOnLine } from 'quadspread';
@@ -108,6 +109,7 @@ export function isOnLine<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>): boolean 
  * @param l1 the first line
  * @param l2 the second line
  * @returns true when they are parallel
+ * @throws Never: the lines are values of the arithmetic already.
  * @example
  * ```ts
  * import { rational, line, isParallel } from 'quadspread';
@@ -127,6 +129,7 @@ export function isParallel<T>(A: Arithmetic<T>, l1: Line<T>, l2: Line<T>): boole
  * @param l1 the first line
  * @param l2 the second line
  * @returns true when they are perpendicular
+ * @throws Never: the lines are values of the arithmetic already.
  * @example
  * ```ts
  * import { rational, line, isPerpendicular } from 'quadspread';
@@ -211,6 +214,5 @@ export function spreadOfLines<T>(A: Arithmetic<T>, l1: Line<T>, l2: Line<T>): T 
   if (A.isZero(n2)) throw new QuadspreadError('DEGENERATE_LINE', 'spreadOfLines(A, l1, l2)', 'l2 has a = b = 0, which is no line');
   // Spread of two lines: Wildberger, Divine Proportions (2005), ch. 5.
   const c = A.sub(A.mul(l1.a, l2.b), A.mul(l2.a, l1.b));
-  const s = A.div(A.mul(c, c), A.mul(n1, n2));
-  return A.cmp(s, A.one) > 0 ? A.one : s; // rounding can exceed 1 in float and decimal
+  return atMostOne(A, A.div(A.mul(c, c), A.mul(n1, n2)));
 }

@@ -15,6 +15,7 @@ import type { Point } from './point.js';
  * @param P the first point
  * @param Q the second point
  * @returns the quadrance (≥ 0), in square units
+ * @throws Never: the points are values of the arithmetic already.
  * @example
  * ```ts
  * import { rational, point, quadrance } from 'quadspread';
@@ -35,6 +36,7 @@ export function quadrance<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): T {
  * @param A the arithmetic
  * @param v the vector
  * @returns x² + y², in square units
+ * @throws Never: the vector is a value of the arithmetic already.
  * @example
  * ```ts
  * import { float, point, vectorQuadrance } from 'quadspread';

@@ -7,7 +7,7 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { QuadspreadError, show } from '../errors.js';
 import { type Root, type Surd, surd } from './surd.js';
 import type { Triangle } from './triangle.js';
-import { readQuadrance, readSpread } from './validate.js';
+import { atMostOne, readQuadrance, readSpread } from './validate.js';
 
 /**
  * Three of the six measures of a triangle (see {@link Triangle} for which is which).
@@ -60,7 +60,7 @@ function valueField<T>(A: Arithmetic<T>): Field<T, T> {
     mul: A.mul,
     div: A.div,
     sign: A.sign,
-    unit: (x) => (A.cmp(x, A.one) > 0 ? A.one : x),
+    unit: (x) => atMostOne(A, x),
     pair(base, d, prod) {
       const r = A.sqrt(d);
       if (r === undefined) throw new QuadspreadError('UNSUPPORTED_OPERATION', 'solveTriangle(A, known)', `${A.name} has no square root of ${show(A.toString(d))}`);

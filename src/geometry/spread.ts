@@ -6,14 +6,27 @@
 import type { Arithmetic } from '../arithmetic/types.js';
 import { QuadspreadError, show } from '../errors.js';
 import type { Point } from './point.js';
+import { atMostOne } from './validate.js';
 
-function coincident<T>(A: Arithmetic<T>, where: string, arg: string, P: Point<T>): never {
-  throw new QuadspreadError('COINCIDENT_POINTS', where, `${arg} = (${show(A.toString(P.x))}, ${show(A.toString(P.y))}) coincides with the vertex V, so the line is undefined`);
+/**
+ * k²/(Q(u)·Q(v)) for u = (ux, uy), v = (vx, vy), with k = u × v (a spread) or u · v (a
+ * cross), clamped to 1; a zero u or v is refused naming the point U or W it came from (P or
+ * Q), or u or v for bare vectors (U, W undefined).
+ */
+function ratio<T>(A: Arithmetic<T>, ux: T, uy: T, vx: T, vy: T, dot: boolean, where: string, U: Point<T> | undefined, W: Point<T> | undefined): T {
+  const qu = A.add(A.mul(ux, ux), A.mul(uy, uy));
+  const qv = A.add(A.mul(vx, vx), A.mul(vy, vy));
+  if (A.isZero(qu)) zero(A, where, U === undefined ? 'u' : 'P', U);
+  if (A.isZero(qv)) zero(A, where, W === undefined ? 'v' : 'Q', W);
+  // Spread s = (u1 v2 − u2 v1)² / ((u1² + u2²)(v1² + v2²)) and cross c = (u1 v1 + u2 v2)² / (…) = 1 − s:
+  // Wildberger, Divine Proportions (2005), ch. 5.
+  const k = dot ? A.add(A.mul(ux, vx), A.mul(uy, vy)) : A.sub(A.mul(ux, vy), A.mul(uy, vx));
+  return atMostOne(A, A.div(A.mul(k, k), A.mul(qu, qv)));
 }
 
-/** Rounding (float, decimal) can push a spread or cross just above 1: clamp it. Never acts in `rational`. */
-function atMostOne<T>(A: Arithmetic<T>, s: T): T {
-  return A.cmp(s, A.one) > 0 ? A.one : s;
+function zero<T>(A: Arithmetic<T>, where: string, arg: string, P: Point<T> | undefined): never {
+  if (P === undefined) throw new QuadspreadError('COINCIDENT_POINTS', where, `${arg} is the zero vector, so it has no direction`);
+  throw new QuadspreadError('COINCIDENT_POINTS', where, `${arg} = (${show(A.toString(P.x))}, ${show(A.toString(P.y))}) coincides with the vertex V, so the line is undefined`);
 }
 
 /**
@@ -36,17 +49,7 @@ function atMostOne<T>(A: Arithmetic<T>, s: T): T {
  * ```
  */
 export function spread<T>(A: Arithmetic<T>, V: Point<T>, P: Point<T>, Q: Point<T>): T {
-  const ux = A.sub(P.x, V.x);
-  const uy = A.sub(P.y, V.y);
-  const vx = A.sub(Q.x, V.x);
-  const vy = A.sub(Q.y, V.y);
-  const qu = A.add(A.mul(ux, ux), A.mul(uy, uy));
-  const qv = A.add(A.mul(vx, vx), A.mul(vy, vy));
-  if (A.isZero(qu)) coincident(A, 'spread(A, V, P, Q)', 'P', P);
-  if (A.isZero(qv)) coincident(A, 'spread(A, V, P, Q)', 'Q', Q);
-  // Spread of two vectors, s = (u1 v2 − u2 v1)² / ((u1² + u2²)(v1² + v2²)): Wildberger, Divine Proportions (2005), ch. 5.
-  const c = A.sub(A.mul(ux, vy), A.mul(uy, vx));
-  return atMostOne(A, A.div(A.mul(c, c), A.mul(qu, qv)));
+  return ratio(A, A.sub(P.x, V.x), A.sub(P.y, V.y), A.sub(Q.x, V.x), A.sub(Q.y, V.y), false, 'spread(A, V, P, Q)', P, Q);
 }
 
 /**
@@ -69,17 +72,7 @@ export function spread<T>(A: Arithmetic<T>, V: Point<T>, P: Point<T>, Q: Point<T
  * ```
  */
 export function cross<T>(A: Arithmetic<T>, V: Point<T>, P: Point<T>, Q: Point<T>): T {
-  const ux = A.sub(P.x, V.x);
-  const uy = A.sub(P.y, V.y);
-  const vx = A.sub(Q.x, V.x);
-  const vy = A.sub(Q.y, V.y);
-  const qu = A.add(A.mul(ux, ux), A.mul(uy, uy));
-  const qv = A.add(A.mul(vx, vx), A.mul(vy, vy));
-  if (A.isZero(qu)) coincident(A, 'cross(A, V, P, Q)', 'P', P);
-  if (A.isZero(qv)) coincident(A, 'cross(A, V, P, Q)', 'Q', Q);
-  // Cross of two vectors, c = (u1 v1 + u2 v2)² / ((u1² + u2²)(v1² + v2²)) = 1 − s: Wildberger, Divine Proportions (2005), ch. 5.
-  const d = A.add(A.mul(ux, vx), A.mul(uy, vy));
-  return atMostOne(A, A.div(A.mul(d, d), A.mul(qu, qv)));
+  return ratio(A, A.sub(P.x, V.x), A.sub(P.y, V.y), A.sub(Q.x, V.x), A.sub(Q.y, V.y), true, 'cross(A, V, P, Q)', P, Q);
 }
 
 /**
@@ -99,11 +92,5 @@ export function cross<T>(A: Arithmetic<T>, V: Point<T>, P: Point<T>, Q: Point<T>
  * ```
  */
 export function spreadOfVectors<T>(A: Arithmetic<T>, u: Point<T>, v: Point<T>): T {
-  const qu = A.add(A.mul(u.x, u.x), A.mul(u.y, u.y));
-  const qv = A.add(A.mul(v.x, v.x), A.mul(v.y, v.y));
-  if (A.isZero(qu)) throw new QuadspreadError('COINCIDENT_POINTS', 'spreadOfVectors(A, u, v)', 'u is the zero vector, so it has no direction');
-  if (A.isZero(qv)) throw new QuadspreadError('COINCIDENT_POINTS', 'spreadOfVectors(A, u, v)', 'v is the zero vector, so it has no direction');
-  // Spread of two vectors: Wildberger, Divine Proportions (2005), ch. 5.
-  const c = A.sub(A.mul(u.x, v.y), A.mul(u.y, v.x));
-  return atMostOne(A, A.div(A.mul(c, c), A.mul(qu, qv)));
+  return ratio(A, u.x, u.y, v.x, v.y, false, 'spreadOfVectors(A, u, v)', undefined, undefined);
 }

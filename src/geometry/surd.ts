@@ -334,6 +334,7 @@ function raw<T>(A: Arithmetic<T>, a: T, b: T, d: T): Surd<T> {
  *
  * @param x anything
  * @returns true for a surd
+ * @throws Never.
  * @example
  * ```ts
  * import { rational, isSurd, sqrtOf } from 'quadspread';
@@ -427,6 +428,7 @@ export function sqrtOf<T, E extends boolean>(A: Arithmetic<T, E>, x: Numeric<T>)
  * @param A the arithmetic
  * @param x the value
  * @returns x as a root
+ * @throws {QuadspreadError} `INVALID_NUMBER` (naming `asRoot(A, x) x`) when x is not a number.
  * @example
  * ```ts
  * import { rational, asRoot } from 'quadspread';
@@ -463,6 +465,7 @@ export function rootToNumber<T, E extends boolean>(A: Arithmetic<T, E>, r: Root<
  * @param A the arithmetic
  * @param r a root (surd or plain value)
  * @returns its text
+ * @throws Never for a root of this arithmetic.
  * @example
  * ```ts
  * import { rational, sqrtOf, rootToString } from 'quadspread';

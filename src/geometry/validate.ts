@@ -1,5 +1,6 @@
 /**
- * Readers that check quadrances and spreads where they enter (internal).
+ * Internal helpers: readers that check numbers, quadrances and spreads where they enter,
+ * and the clamp of computed spreads.
  *
  * @module geometry
  */
@@ -43,4 +44,13 @@ export function readSpread<T>(A: Arithmetic<T>, x: Numeric<T>, where: string, ar
   const v = readNumber(A, x, `${where} ${arg}`);
   if (A.sign(v) < 0 || A.cmp(v, A.one) > 0) throw new QuadspreadError('SPREAD_OUT_OF_RANGE', where, `${arg} = ${show(A.toString(v))} is outside [0, 1]`);
   return v;
+}
+
+/**
+ * A computed spread or cross clamped to at most 1: rounding (float, decimal) can push one just
+ * above 1. Never acts in `rational`.
+ * @internal
+ */
+export function atMostOne<T>(A: Arithmetic<T>, s: T): T {
+  return A.cmp(s, A.one) > 0 ? A.one : s;
 }
