@@ -58,7 +58,7 @@ export function spreadOfAngle<T>(A: Arithmetic<T>, angle: Numeric<T>, unit: Angl
   // Both are multiples of 15°, whose nearest number over 15 is within rounding of an integer:
   // that cheap test skips the exact checks for every other angle.
   const n = A.toNumber(deg) / 15;
-  if (Math.abs(n - Math.round(n)) <= 1e-9 * Math.max(1, Math.abs(n)) && (A.isZero(modulo(A, deg, A.from(30))) || A.isZero(modulo(A, deg, A.from(45))))) {
+  if (Math.abs(n - Math.round(n)) <= 1e-9 * Math.max(1, Math.abs(n)) && (A.isZero(modulo(A, deg, A.from(30), 'spreadFromDegrees(angle)')) || A.isZero(modulo(A, deg, A.from(45), 'spreadFromDegrees(angle)')))) {
     return A.div(A.sub(A.one, sinCos(A, A.mul(deg, A.from(2))).cos), A.from(2));
   }
   const { sin } = sinCos(A, deg);

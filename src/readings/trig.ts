@@ -3,18 +3,32 @@
  *
  * @module readings
  */
+import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { guardOf } from './numeric.js';
 
-/** @internal x mod m in [0, m), exact for exact arithmetics. */
-export function modulo<T>(A: Arithmetic<T>, x: T, m: T): T {
+/**
+ * @internal x mod m in [0, m), exact for exact arithmetics.
+ * @throws {QuadspreadError} `INVALID_ANGLE` (at `where`) when x is too large to reduce: an
+ *   inexact arithmetic that does not resolve x to a millionth of m (the remainder would be
+ *   noise: over about 10¹² in float), or more than about 10¹²⁰·m in an exact one.
+ */
+export function modulo<T>(A: Arithmetic<T>, x: T, m: T, where = 'modulo(x)'): T {
   if (A.sign(x) >= 0 && A.cmp(x, m) < 0) return x; // already in [0, m): the common case
-  const q = Math.floor(A.toNumber(A.div(x, m)));
-  let r = A.sub(x, A.mul(A.from(q), m));
-  // Correct the float floor by at most a step either way (exact comparisons).
-  while (A.sign(r) < 0) r = A.add(r, m);
-  while (A.cmp(r, m) >= 0) r = A.sub(r, m);
-  return r;
+  // An inexact arithmetic must still resolve x to a millionth of m (e.g. about 1″ of a turn):
+  // (x + m) − x = m to within m·10⁻⁶; otherwise the remainder would be rounding noise.
+  if (!A.exact && A.cmp(A.abs(A.sub(A.sub(A.add(x, m), x), m)), A.div(m, A.from(1e6))) > 0) {
+    throw new QuadspreadError('INVALID_ANGLE', where, `${show(A.toString(x))} is too large for ${A.name} to reduce modulo ${A.toString(m)}`);
+  }
+  // Subtract the multiple of m that the nearest number gives; each pass leaves a remainder about
+  // 10¹⁶ times smaller (exact in an exact arithmetic), so a few passes reach [0, m).
+  let r = x;
+  for (let i = 0; i < 8; i++) {
+    if (A.sign(r) >= 0 && A.cmp(r, m) < 0) return r;
+    const q = Math.floor(A.toNumber(A.div(r, m)));
+    r = q === 0 ? A.add(r, m) : A.sub(r, A.mul(A.from(q), m));
+  }
+  throw new QuadspreadError('INVALID_ANGLE', where, `${show(A.toString(x))} is too large to reduce modulo ${A.toString(m)}`);
 }
 
 /**
@@ -72,7 +86,7 @@ export function sinCosDegrees<T>(A: Arithmetic<T>, degrees: Numeric<T>): { sin: 
 /** @internal {@link sinCosDegrees} computed directly in A. */
 export function sinCos<T>(A: Arithmetic<T>, degrees: Numeric<T>): { sin: T; cos: T } {
   const ninety = A.from(90);
-  const d = modulo(A, A.from(degrees), A.from(360));
+  const d = modulo(A, A.from(degrees), A.from(360), 'sinCosDegrees(degrees)');
   // The quadrant from the nearest number, then corrected exactly by at most one step.
   let q = Math.min(3, Math.floor(A.toNumber(d) / 90));
   let t = q === 0 ? d : A.sub(d, A.from(90 * q));

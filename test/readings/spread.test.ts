@@ -51,6 +51,26 @@ describe('sinCosDegrees(A, θ) is exact where the value is rational', () => {
   });
 });
 
+describe('sinCosDegrees(A, θ) with very large angles', () => {
+  it('rational reduces exactly: 10³⁰° ≡ 280° (mod 360, by hand: 10³⁰ ≡ 0 mod 8 and ≡ 10 mod 45)', () => {
+    const r = sinCosDegrees(rational, '1e30');
+    expect(rational.eq(r.sin, sinCosDegrees(rational, 280).sin)).toBe(true);
+    expect(rational.toNumber(r.cos)).toBeCloseTo(Math.cos((280 * Math.PI) / 180), 15);
+  });
+  it('float agrees with Math.sin of the exact JS remainder (x % 360) up to 10¹²°', () => {
+    for (const x of [1000.1, -123456.789, 3e12 + 0.5, -7.77e11]) {
+      expect(sinCosDegrees(float, x).sin).toBeCloseTo(Math.sin(((x % 360) * Math.PI) / 180), 12);
+    }
+  });
+  it('an angle the arithmetic cannot reduce is refused with INVALID_ANGLE (float returned sin 0, cos 1 for 1e300; decimal hung)', () => {
+    expect(codeOf(() => sinCosDegrees(float, 1e300))).toBe('INVALID_ANGLE');
+    expect(codeOf(() => sinCosDegrees(float, -1e17))).toBe('INVALID_ANGLE');
+    expect(codeOf(() => sinCosDegrees(decimal(10), 1e300))).toBe('INVALID_ANGLE');
+    expect(codeOf(() => spreadFromDegrees(float, 1e300))).toBe('INVALID_ANGLE');
+    expect(() => sinCosDegrees(float, 1e300)).toThrow(/sinCosDegrees\(degrees\).*1e\+300/);
+  });
+});
+
 describe('spreadFromDegrees(A, θ) is sin²θ', () => {
   const exact: [number | string, string][] = [[0, '0'], [30, '1/4'], [45, '1/2'], [60, '3/4'], [90, '1'], [135, '1/2'], [-45, '1/2'], [120, '3/4'], [-150, '1/4'], [180, '0'], ['45°', '1/2']];
   for (const [deg, s] of exact) {
