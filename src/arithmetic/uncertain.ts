@@ -350,7 +350,9 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
     from(x: Numeric<V>): V {
       if (isU(x)) return x;
       if ((x as unknown) instanceof Uncertain) {
-        throw new QuadspreadError('INVALID_NUMBER', `${name}.from(x)`, `${show((x as unknown as Uncertain<unknown>).value)} is a value of another uncertain arithmetic`);
+        const v = (x as unknown as Uncertain<unknown>).value;
+        if (typeof v === 'number') throw new QuadspreadError('NOT_FINITE', `${name}.from(x)`, `the value ${show(v)} is not finite (overflow)`);
+        throw new QuadspreadError('INVALID_NUMBER', `${name}.from(x)`, `${show(v)} is a value of another uncertain arithmetic`);
       }
       return constant(float.from(x as Numeric<number>));
     },

@@ -6,8 +6,11 @@
  */
 import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import type { Uncertain, UncertainArithmetic, UncertainInput } from '../arithmetic/uncertain.js';
+import { Uncertain } from '../arithmetic/uncertain.js';
+import type { UncertainArithmetic, UncertainInput } from '../arithmetic/uncertain.js';
+import Fraction from 'fraction.js';
 import { isSurd, sqrtOf } from '../geometry/surd.js';
+import { sqrtRatioToNumber } from './internal.js';
 import type { Root, Surd } from '../geometry/surd.js';
 
 /** One input's line in a {@link Budget}. */
@@ -45,8 +48,10 @@ export interface Budget<T, E extends boolean = boolean> {
   readonly variance: T;
   /**
    * The combined standard uncertainty u_c(y) = √variance: over an exact base the exact
-   * quadratic surd (`sqrtOf`, e.g. `3√2/100`; `rootToNumber` gives its number), over
-   * `float` and `decimal` the base's rounded square root.
+   * quadratic surd (`sqrtOf`, e.g. `3√2/100`; its `toNumber()` is √variance correctly
+   * rounded to the nearest JS number, computed from the variance with bigints, so it works
+   * however large the surd's radicand grows), over `float` and `decimal` the base's
+   * rounded square root.
    */
   readonly sigma: Root<T, E>;
   /**
@@ -88,7 +93,8 @@ export interface BudgetOptions<T> {
  *   `UNSUPPORTED_OPERATION` for an irrational surd (use an inexact base for it);
  *   `UNKNOWN_INPUT` when a covariance names an input the result does not depend on;
  *   `INVALID_COVARIANCE` for a pair of one input with itself, a pair listed twice,
- *   |u(a, b)| > u(a)·u(b), or covariances that make the variance negative.
+ *   |u(a, b)| > u(a)·u(b), or covariances that make the variance negative;
+ *   `NOT_FINITE` over `float` when the value or the variance overflowed.
  * @example
  * ```ts
  * import { uncertain, rational, measured, budget } from 'quadspread';
@@ -114,8 +120,12 @@ export function budget<T, E extends boolean>(
       throw new QuadspreadError('UNSUPPORTED_OPERATION', where, `the result ${r.toString()} is an irrational surd, whose sensitivities are irrational too: take its budget in uncertain(decimal(n)) or uncertain(float)`);
     }
     y = U.from(r.a);
+  } else if (U.is(result)) {
+    y = result;
+  } else if (result instanceof Uncertain && typeof result.value === 'number' && result.value - result.value !== 0) {
+    throw new QuadspreadError('NOT_FINITE', where, `the result ${show(result.value)} is not finite (overflow)`);
   } else {
-    y = U.is(result) ? result : U.from(result as Numeric<Uncertain<T>>);
+    y = U.from(result as Numeric<Uncertain<T>>);
   }
   const byName = new Map<string, { input: UncertainInput<T>; c: T }>();
   const lines: Contribution<T>[] = [];
@@ -177,11 +187,38 @@ export function budget<T, E extends boolean>(
     if (noise) throw new QuadspreadError('INVALID_COVARIANCE', where, `the covariances make the variance ${B.toString(variance)} negative (they cannot belong to real inputs)`);
     variance = B.zero;
   }
+  // float lets ±Infinity and NaN through until output: refuse them here rather than return them.
+  if (typeof variance === 'number' && (variance - variance !== 0 || (y.value as number) - (y.value as number) !== 0)) {
+    throw new QuadspreadError('NOT_FINITE', where, `the result ${show(y.value)} or its variance ${show(variance)} is not finite (overflow or an infinite sensitivity)`);
+  }
   return {
     value: y.value,
     variance,
-    sigma: sqrtOf(B, variance),
+    sigma: sigmaOf(B, variance),
     contributions: lines,
     correlations,
   };
 }
+
+/**
+ * √variance as a root; over `rational` the surd's `toNumber()` comes from the variance
+ * itself (the surd's own coefficient and radicand may lie beyond the range of JS numbers
+ * when the root does not).
+ */
+function sigmaOf<T, E extends boolean>(B: Arithmetic<T, E>, variance: T): Root<T, E> {
+  const s = sqrtOf(B, variance);
+  if (!((variance as unknown) instanceof Fraction) || !isSurd(s) || s.isRational()) return s;
+  const v = variance as unknown as Fraction;
+  const where = 'budget(U, result, options).sigma.toNumber()';
+  // A surd that differs from `s` only in how it gives its number.
+  return Object.create(s, {
+    toNumber: {
+      value: () => {
+        const x = sqrtRatioToNumber(v.n, v.d);
+        if (!Number.isFinite(x)) throw new QuadspreadError('NOT_FINITE', where, `√(${B.toString(variance)}) is beyond the range of a JS number`);
+        return x;
+      },
+    },
+  }) as Root<T, E>;
+}
+

@@ -7,6 +7,7 @@
 import { QuadspreadError, show } from '../errors.js';
 import type { Numeric } from '../arithmetic/types.js';
 import type { UncertainArithmetic } from '../arithmetic/uncertain.js';
+import { bitLength, isqrt, ratioToNumber } from '../arithmetic/exact.js';
 
 /**
  * Reads a standard uncertainty: a number of the base arithmetic that is ≥ 0.
@@ -32,3 +33,21 @@ export function readName(name: unknown, where: string): string {
   return name;
 }
 
+/**
+ * The JS number nearest to √(n/d) (n ≥ 0, d > 0; ties to even), exactly with bigints:
+ * s = ⌊√(n·4ᵏ/d)⌋ with at least 59 bits, and a sticky half when the root is inexact, so
+ * that rounding s (+ ½)·2⁻ᵏ once to 53 bits rounds √(n/d) itself.
+ * @internal
+ */
+export function sqrtRatioToNumber(n: bigint, d: bigint): number {
+  if (n === 0n) return 0;
+  const k = Math.ceil((120 - (bitLength(n) - bitLength(d))) / 2) + 1;
+  const num = k >= 0 ? n << BigInt(2 * k) : n;
+  const den = k >= 0 ? d : d << BigInt(-2 * k);
+  const N = num / den;
+  const s = isqrt(N);
+  const inexact = num % den !== 0n || s * s !== N;
+  const m = inexact ? 2n * s + 1n : 2n * s; // √(n/d) ≈ m/2^(k+1)
+  const e = k + 1;
+  return e >= 0 ? ratioToNumber(m, 1n << BigInt(e)) : ratioToNumber(m << BigInt(-e), 1n);
+}

@@ -6,6 +6,7 @@
 import type { Numeric } from '../arithmetic/types.js';
 import { Uncertain } from '../arithmetic/uncertain.js';
 import type { UncertainArithmetic, UncertainInput } from '../arithmetic/uncertain.js';
+import { readNumber } from '../geometry/validate.js';
 import { readName, readSigma } from './internal.js';
 
 /**
@@ -22,7 +23,7 @@ import { readName, readSigma } from './internal.js';
  * @param sigma its standard uncertainty u(xᵢ) ≥ 0, same units as `value`
  * @param name a non-empty name (at most 200 characters)
  * @returns the value with gradient {name: 1}
- * @throws {QuadspreadError} `INVALID_NUMBER` when `value` cannot be read; `INVALID_SIGMA`
+ * @throws {QuadspreadError} `INVALID_NUMBER` naming `value` when it cannot be read; `INVALID_SIGMA`
  *   when `sigma` is negative or not a number; `INVALID_ARGUMENT` for a bad name.
  * @example
  * ```ts
@@ -37,7 +38,7 @@ export function measured<T>(U: UncertainArithmetic<T>, value: Numeric<T>, sigma:
   const where = 'measured(U, value, sigma, name)';
   const n = readName(name, where);
   const s = readSigma(U, sigma, where);
-  const v = U.base.from(value);
+  const v = readNumber(U.base, value, `${where} value`);
   const input: UncertainInput<T> = Object.freeze({ name: n, value: v, sigma: s });
   return new Uncertain(v, [input], [U.base.one]);
 }

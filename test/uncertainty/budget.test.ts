@@ -1,8 +1,20 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
 import { rational, decimal, float, uncertain } from '../../src/arithmetic/index.js';
+import { sqrtOf } from '../../src/geometry/surd.js';
 import { measured, sensitivities } from '../../src/uncertainty/measured.js';
 import { budget } from '../../src/uncertainty/budget.js';
+import { sqrtRatioToNumber } from '../../src/uncertainty/internal.js';
+import { spreadFromDegrees } from '../../src/readings/index.js';
+import { create, all } from 'mathjs';
+import type { BigNumber, FactoryFunctionMap } from 'mathjs';
+
+// Independent reference: mathjs BigNumber at 80 significant digits.
+const M = create(all as FactoryFunctionMap, { number: 'BigNumber', precision: 80 });
+const refSqrt = (n: bigint, d: bigint): number => {
+  const q = M.divide(M.bignumber(n.toString()), M.bignumber(d.toString())) as BigNumber;
+  return Number((M.sqrt(q) as BigNumber).toPrecision(40));
+};
 
 const R = uncertain(rational);
 const F = uncertain(float);
@@ -101,6 +113,15 @@ describe('budget(U, result) is the law of propagation of uncertainty (GUM, JCGM 
     expect(budget(R, R.sub(a, b), { covariance: [['a', 'b', '0.03']] }).sigma.toString()).toBe('1/5');
   });
 
+  it('budget refuses a float result or variance that overflowed, rather than return Infinity or NaN', () => {
+    const x = measured(F, 1e200, 1, 'x');
+    expect(() => budget(F, F.mul(x, x))).toThrow(expect.objectContaining({ code: 'NOT_FINITE' }));
+    // the value 1e200 is finite, the variance (1e200·1e200)² is not
+    const w = measured(F, 1, 1e200, 'w');
+    expect(F.toNumber(F.mul(w, F.from(1e200)))).toBe(1e200);
+    expect(() => budget(F, F.mul(w, F.from(1e200)))).toThrow(expect.objectContaining({ code: 'NOT_FINITE' }));
+  });
+
   it('budget refuses two different inputs with one name', () => {
     const y = F.add(measured(F, 1, 0.1, 'a'), measured(F, 2, 0.1, 'a'));
     expect(() => budget(F, y)).toThrow(expect.objectContaining({ code: 'DUPLICATE_INPUT' }));
@@ -129,7 +150,8 @@ describe('budget(U, result) is the law of propagation of uncertainty (GUM, JCGM 
     expect(() => measured(R, 1, 'abc', 'x')).toThrow(expect.objectContaining({ code: 'INVALID_SIGMA' }));
     expect(() => measured(F, 1, Number.NaN, 'x')).toThrow(expect.objectContaining({ code: 'INVALID_SIGMA' }));
     expect(() => measured(F, 1, 0.1, '')).toThrow(expect.objectContaining({ code: 'INVALID_ARGUMENT' }));
-    expect(() => measured(F, 'abc', 0.1, 'x')).toThrow(expect.objectContaining({ code: 'INVALID_NUMBER' }));
+    expect(() => measured(F, 'abc', 0.1, 'x')).toThrow(expect.objectContaining({ code: 'INVALID_NUMBER', where: 'measured(U, value, sigma, name) value' }));
+    expect(() => measured(F, Number.NaN, 0.1, 'x')).toThrow(expect.objectContaining({ code: 'INVALID_NUMBER', where: 'measured(U, value, sigma, name) value' }));
   });
 
   it('sensitivities lists each input with ∂y/∂x', () => {
@@ -139,5 +161,38 @@ describe('budget(U, result) is the law of propagation of uncertainty (GUM, JCGM 
       ['a', '1/5'],
       ['b', '-2/25'],
     ]);
+  });
+});
+
+describe('sigma.toNumber() over rational is √variance correctly rounded, however long the surd', () => {
+  it('sqrtRatioToNumber(n, 1) equals Math.sqrt(n) for integers below 2^53 (IEEE 754 sqrt is correctly rounded)', () => {
+    fc.assert(
+      fc.property(fc.bigInt({ min: 0n, max: 2n ** 53n - 1n }), fc.integer({ min: 0, max: 60 }), (n, j) => {
+        expect(sqrtRatioToNumber(n, 1n)).toBe(Math.sqrt(Number(n)));
+        // n/4^j: the root is Math.sqrt(n)/2^j exactly
+        expect(sqrtRatioToNumber(n, 4n ** BigInt(j))).toBe(Math.sqrt(Number(n)) / 2 ** j);
+      }),
+      { numRuns: 300 },
+    );
+  });
+
+  it('sqrtRatioToNumber(n, d) agrees with mathjs BigNumber (80 digits) on ratios of huge integers', () => {
+    fc.assert(
+      fc.property(fc.bigInt({ min: 1n, max: 10n ** 400n }), fc.bigInt({ min: 1n, max: 10n ** 400n }), (n, d) => {
+        expect(sqrtRatioToNumber(n, d)).toBe(refSqrt(n, d));
+      }),
+      { numRuns: 200 },
+    );
+  });
+
+  it('budget(uncertain(rational), …).sigma.toNumber() works when the radicand is beyond JS numbers', () => {
+    // four spreads of angles read in degrees: the exact variance has denominators of hundreds of digits
+    let y = measured(R, '123.456', '0.002', 'd');
+    for (let i = 0; i < 4; i++) y = R.mul(y, spreadFromDegrees(R, measured(R, `3${i}.123457`, '0.0003', `a${i}`)));
+    const B = budget(R, y);
+    const v = B.variance;
+    expect(() => r.toNumber(B.sigma.d)).toThrow(expect.objectContaining({ code: 'NOT_FINITE' }));
+    expect(B.sigma.toNumber()).toBe(refSqrt(v.n, v.d));
+    expect(B.sigma.toString()).toBe(sqrtOf(r, v).toString());
   });
 });

@@ -37,6 +37,9 @@ describe('uncertain(base) is an arithmetic over values with gradients', () => {
     expect(() => R.from('abc')).toThrow(QuadspreadError);
     expect(() => R.from(F.from(1) as never)).toThrow(/another uncertain arithmetic/);
     expect(() => F.from(Number.NaN)).toThrow(QuadspreadError);
+    // an overflowed float value is named as such, not as another arithmetic's
+    const big = F.mul(F.from(1e200), F.from(1e200));
+    expect(() => F.from(big)).toThrow(expect.objectContaining({ code: 'NOT_FINITE' }));
   });
 
   it('uncertain(base).is accepts its own values only', () => {
