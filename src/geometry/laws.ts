@@ -31,7 +31,7 @@ export function pythagorasResidual<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Nume
   const a = readQuadrance(A, Q1, w, 'Q1');
   const b = readQuadrance(A, Q2, w, 'Q2');
   const c = readQuadrance(A, Q3, w, 'Q3');
-  // Pythagoras' theorem, Q1 + Q2 = Q3: Wildberger, Divine Proportions (2005), ch. 5.
+  // Pythagoras' theorem, Q1 + Q2 = Q3: Euclid, Elements I.47 and its converse I.48.
   return A.sub(A.add(a, b), c);
 }
 
@@ -60,8 +60,8 @@ export function quadrea<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Numeric<T>, Q3:
 }
 
 function archimedes<T>(A: Arithmetic<T>, a: T, b: T, c: T): T {
-  // Archimedes' function A(a, b, c) = (a + b + c)² − 2(a² + b² + c²): Wildberger, Divine Proportions (2005), ch. 4;
-  // equal to 16·area² by Heron's formula.
+  // Archimedes' function A(a, b, c) = (a + b + c)² − 2(a² + b² + c²), equal to 16·area² by Heron's
+  // formula (Heron, Metrica I.8) expanded in the squared sides (derived).
   const s = A.add(A.add(a, b), c);
   const q = A.add(A.add(A.mul(a, a), A.mul(b, b)), A.mul(c, c));
   return A.sub(A.mul(s, s), A.add(q, q));
@@ -86,7 +86,7 @@ function archimedes<T>(A: Arithmetic<T>, a: T, b: T, c: T): T {
  */
 export function tripleQuadResidual<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Numeric<T>, Q3: Numeric<T>): T {
   const w = 'tripleQuadResidual(A, Q1, Q2, Q3)';
-  // Triple quad formula: Wildberger, Divine Proportions (2005), ch. 5.
+  // Triple quad formula: three points are collinear exactly when Heron's area is zero (Heron, Metrica I.8; derived).
   return archimedes(A, readQuadrance(A, Q1, w, 'Q1'), readQuadrance(A, Q2, w, 'Q2'), readQuadrance(A, Q3, w, 'Q3'));
 }
 
@@ -112,7 +112,7 @@ export function archimedesResidual<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Nume
   const w = 'archimedesResidual(A, Q1, Q2, Q3, area)';
   const q = archimedes(A, readQuadrance(A, Q1, w, 'Q1'), readQuadrance(A, Q2, w, 'Q2'), readQuadrance(A, Q3, w, 'Q3'));
   const s = readNumber(A, area, `${w} area`);
-  // Archimedes' formula, quadrea = 16·area²: Wildberger, Divine Proportions (2005), ch. 8 (Heron's formula in quadrances).
+  // Archimedes' formula, quadrea = 16·area²: Heron's formula in quadrances (Heron, Metrica I.8; derived).
   return A.sub(q, A.mul(A.from(16), A.mul(s, s)));
 }
 
@@ -141,7 +141,7 @@ export function spreadLawResidual<T>(A: Arithmetic<T>, Qa: Numeric<T>, sa: Numer
   const a = readSpread(A, sa, w, 'sa');
   const qb = readQuadrance(A, Qb, w, 'Qb');
   const b = readSpread(A, sb, w, 'sb');
-  // Spread law s1/Q1 = s2/Q2 = s3/Q3: Wildberger, Divine Proportions (2005), ch. 6.
+  // Spread law s1/Q1 = s2/Q2 = s3/Q3: the law of sines, squared (derived).
   return A.sub(A.mul(a, qb), A.mul(b, qa));
 }
 
@@ -169,7 +169,7 @@ export function crossLawResidual<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Numeri
   const b = readQuadrance(A, Q2, w, 'Q2');
   const c = readQuadrance(A, Q3, w, 'Q3');
   const s = readSpread(A, s3, w, 's3');
-  // Cross law (Q1 + Q2 − Q3)² = 4 Q1 Q2 (1 − s3): Wildberger, Divine Proportions (2005), ch. 6.
+  // Cross law (Q1 + Q2 − Q3)² = 4 Q1 Q2 (1 − s3): the law of cosines (Euclid, Elements II.12–13), squared (derived).
   const t = A.sub(A.add(a, b), c);
   return A.sub(A.mul(t, t), A.mul(A.from(4), A.mul(A.mul(a, b), A.sub(A.one, s))));
 }
@@ -197,7 +197,7 @@ export function tripleSpreadResidual<T>(A: Arithmetic<T>, s1: Numeric<T>, s2: Nu
   const a = readSpread(A, s1, w, 's1');
   const b = readSpread(A, s2, w, 's2');
   const c = readSpread(A, s3, w, 's3');
-  // Triple spread formula: Wildberger, Divine Proportions (2005), ch. 6.
+  // Triple spread formula: sin² of A3 = 180° − A1 − A2 by the angle-sum formulas, squared out (derived).
   const t = archimedes(A, a, b, c);
   return A.sub(t, A.mul(A.from(4), A.mul(A.mul(a, b), c)));
 }

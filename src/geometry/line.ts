@@ -73,7 +73,7 @@ export function line<T>(A: Arithmetic<T>, a: Numeric<T>, b: Numeric<T>, c: Numer
  * ```
  */
 export function lineThrough<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): Line<T> {
-  // Line through two points (the cross product of their projective coordinates): Wildberger, Divine Proportions (2005), ch. 3.
+  // Line through two points: the cross product of their homogeneous coordinates (x, y, 1) (common practice; derived).
   const a = A.sub(P.y, Q.y);
   const b = A.sub(Q.x, P.x);
   if (A.isZero(a) && A.isZero(b)) {
@@ -118,7 +118,7 @@ export function isOnLine<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>): boolean 
  * ```
  */
 export function isParallel<T>(A: Arithmetic<T>, l1: Line<T>, l2: Line<T>): boolean {
-  // Parallel lines: a1 b2 − a2 b1 = 0, Wildberger, Divine Proportions (2005), ch. 3.
+  // Parallel lines: the normals (a1, b1), (a2, b2) are proportional, a1 b2 − a2 b1 = 0 (common practice; derived).
   return A.isZero(A.sub(A.mul(l1.a, l2.b), A.mul(l2.a, l1.b)));
 }
 
@@ -138,7 +138,7 @@ export function isParallel<T>(A: Arithmetic<T>, l1: Line<T>, l2: Line<T>): boole
  * ```
  */
 export function isPerpendicular<T>(A: Arithmetic<T>, l1: Line<T>, l2: Line<T>): boolean {
-  // Perpendicular lines: a1 a2 + b1 b2 = 0, Wildberger, Divine Proportions (2005), ch. 3.
+  // Perpendicular lines: the normals are perpendicular, a1 a2 + b1 b2 = 0 (common practice; derived).
   return A.isZero(A.add(A.mul(l1.a, l2.a), A.mul(l1.b, l2.b)));
 }
 
@@ -186,7 +186,7 @@ export function footOfPerpendicular<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>
 export function quadranceToLine<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>): T {
   const n = A.add(A.mul(l.a, l.a), A.mul(l.b, l.b));
   if (A.isZero(n)) throw new QuadspreadError('DEGENERATE_LINE', 'quadranceToLine(A, P, l)', 'l has a = b = 0, which is no line');
-  // Quadrance from a point to a line: Wildberger, Divine Proportions (2005), ch. 7 (altitude theorem).
+  // Point-to-line distance |a·x + b·y + c|/√(a² + b²), squared (common practice; derived).
   const v = A.add(A.add(A.mul(l.a, P.x), A.mul(l.b, P.y)), l.c);
   return A.div(A.mul(v, v), n);
 }
@@ -212,7 +212,7 @@ export function spreadOfLines<T>(A: Arithmetic<T>, l1: Line<T>, l2: Line<T>): T 
   const n2 = A.add(A.mul(l2.a, l2.a), A.mul(l2.b, l2.b));
   if (A.isZero(n1)) throw new QuadspreadError('DEGENERATE_LINE', 'spreadOfLines(A, l1, l2)', 'l1 has a = b = 0, which is no line');
   if (A.isZero(n2)) throw new QuadspreadError('DEGENERATE_LINE', 'spreadOfLines(A, l1, l2)', 'l2 has a = b = 0, which is no line');
-  // Spread of two lines: Wildberger, Divine Proportions (2005), ch. 5.
+  // Spread of two lines: sin² of the angle between their normals (a1, b1), (a2, b2) (derived, as for two vectors).
   const c = A.sub(A.mul(l1.a, l2.b), A.mul(l2.a, l1.b));
   return atMostOne(A, A.div(A.mul(c, c), A.mul(n1, n2)));
 }

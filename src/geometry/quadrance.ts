@@ -24,7 +24,7 @@ import type { Point } from './point.js';
  * ```
  */
 export function quadrance<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): T {
-  // Quadrance of two points: Wildberger, Divine Proportions (2005), ch. 1 (square of the Euclidean distance).
+  // The square of the Euclidean distance, by Pythagoras' theorem (Euclid, Elements I.47).
   const dx = A.sub(Q.x, P.x);
   const dy = A.sub(Q.y, P.y);
   return A.add(A.mul(dx, dx), A.mul(dy, dy));

@@ -146,7 +146,7 @@ function solve<T, R>(A: Arithmetic<T>, F: Field<T, R>, Q: (T | undefined)[], s: 
 
   if (nq === 3) {
     const [a, b, c] = Q as T[];
-    // Archimedes' function = quadrea: Wildberger, Divine Proportions (2005), ch. 4.
+    // Archimedes' function = quadrea = 16·area²: Heron's formula (Heron, Metrica I.8) expanded (derived).
     const sum = A.add(A.add(a!, b!), c!);
     const sq = A.add(A.add(A.mul(a!, a!), A.mul(b!, b!)), A.mul(c!, c!));
     const qd = A.sub(A.mul(sum, sum), A.add(sq, sq));
@@ -165,7 +165,7 @@ function solve<T, R>(A: Arithmetic<T>, F: Field<T, R>, Q: (T | undefined)[], s: 
     const out: Triangle<R>[] = [];
     if (s[k] !== undefined) {
       // Two sides and the spread between them. Cross law: (Qi + Qj − Qk)² = 4 Qi Qj (1 − sk),
-      // Wildberger, Divine Proportions (2005), ch. 6, solved for Qk.
+      // the law of cosines (Euclid, Elements II.12–13) squared, solved for Qk (derived).
       const sk = s[k]!;
       const d = A.mul(A.mul(Qi, Qj), A.sub(A.one, sk));
       const base = A.add(Qi, Qj);
@@ -175,7 +175,7 @@ function solve<T, R>(A: Arithmetic<T>, F: Field<T, R>, Q: (T | undefined)[], s: 
       const candidates = A.isZero(d) ? [F.lift(base)] : F.pair(base, d, A.add(A.mul(dq, dq), A.mul(four, A.mul(A.mul(Qi, Qj), sk))));
       for (const Qk of candidates) {
         if (F.sign(Qk) <= 0) continue;
-        // Spread law si/Qi = sk/Qk: Wildberger, Divine Proportions (2005), ch. 6.
+        // Spread law si/Qi = sk/Qk: the law of sines, squared (derived).
         const skR = F.lift(sk);
         const q: R[] = [];
         const p: R[] = [];
@@ -193,7 +193,7 @@ function solve<T, R>(A: Arithmetic<T>, F: Field<T, R>, Q: (T | undefined)[], s: 
     const Qa = Q[ia]!;
     const Qb = Q[ib]!;
     const sa = s[ia]!;
-    // Cross law at A_a: (Qb + Qk − Qa)² = 4 Qb Qk (1 − sa) (Wildberger 2005, ch. 6), a quadratic in Qk:
+    // Cross law at A_a: (Qb + Qk − Qa)² = 4 Qb Qk (1 − sa) (law of cosines squared), a quadratic in Qk:
     // Qk = Qa + Qb − 2 Qb sa ± 2√(Qb (1 − sa)(Qa − Qb sa)) (derived).
     const e = A.sub(Qa, A.mul(Qb, sa));
     const d = A.mul(A.mul(Qb, A.sub(A.one, sa)), e);
@@ -225,7 +225,7 @@ function solve<T, R>(A: Arithmetic<T>, F: Field<T, R>, Q: (T | undefined)[], s: 
   const sa = s[a]!;
   const sb = s[b]!;
   // Triple spread formula solved for sc: sc = sa + sb − 2 sa sb ± 2√(sa sb (1 − sa)(1 − sb)),
-  // Wildberger, Divine Proportions (2005), ch. 6 (solution derived).
+  // from A1 + A2 + A3 = 180° (sin²(θa ± θb) by the angle-sum formulas; derived).
   const d = A.mul(A.mul(sa, sb), A.mul(A.sub(A.one, sa), A.sub(A.one, sb)));
   const base = A.sub(A.add(sa, sb), A.mul(two, A.mul(sa, sb)));
   // The product of the two roots is (sa − sb)² (the constant term; derived).
@@ -237,7 +237,7 @@ function solve<T, R>(A: Arithmetic<T>, F: Field<T, R>, Q: (T | undefined)[], s: 
     if (F.sign(sc) <= 0) continue;
     const p: R[] = [];
     p[a] = F.lift(sa); p[b] = F.lift(sb); p[c] = F.unit(sc);
-    // Spread law Qj = Qi·sj/si: Wildberger, Divine Proportions (2005), ch. 6.
+    // Spread law Qj = Qi·sj/si: the law of sines, squared (derived).
     const ratio = F.div(Qi, p[i]!);
     const q: R[] = [];
     for (let j = 0; j < 3; j++) q[j] = j === i ? Qi : F.mul(ratio, p[j]!);

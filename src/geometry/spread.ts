@@ -19,7 +19,7 @@ function ratio<T>(A: Arithmetic<T>, ux: T, uy: T, vx: T, vy: T, dot: boolean, wh
   if (A.isZero(qu)) zero(A, where, U === undefined ? 'u' : 'P', U);
   if (A.isZero(qv)) zero(A, where, W === undefined ? 'v' : 'Q', W);
   // Spread s = (u1 v2 − u2 v1)² / ((u1² + u2²)(v1² + v2²)) and cross c = (u1 v1 + u2 v2)² / (…) = 1 − s:
-  // Wildberger, Divine Proportions (2005), ch. 5.
+  // sin² and cos² of the angle between u and v, from |u × v| = |u||v|·sin θ and u · v = |u||v|·cos θ (common practice; derived).
   const k = dot ? A.add(A.mul(ux, vx), A.mul(uy, vy)) : A.sub(A.mul(ux, vy), A.mul(uy, vx));
   return atMostOne(A, A.div(A.mul(k, k), A.mul(qu, qv)));
 }

@@ -76,7 +76,7 @@ function stewart<T>(A: Arithmetic<T>, QB: T, QC: T, QD: T, tB: T, tC: T, tD: T):
 }
 
 function stewartQ<T>(A: Arithmetic<T>, QB: T, QC: T, QD: T, QBD: T, QBC: T): T {
-  // The spread at B is the same in triangles PBC and PBD; the cross law (Wildberger, Divine Proportions, 2005, ch. 6)
+  // The spread at B is the same in triangles PBC and PBD; the cross law (the law of cosines, Euclid, Elements II.12–13, squared)
   // in both gives QBD·(QB + QBC − QC)² = QBC·(QB + QBD − QD)² (derived).
   const u = A.sub(A.add(QB, QBC), QC);
   const v = A.sub(A.add(QB, QBD), QD);

@@ -75,7 +75,7 @@ export function triangle<T>(A: Arithmetic<T>, A1: Point<T>, A2: Point<T>, A3: Po
   const Q2 = A.add(A.mul(vx, vx), A.mul(vy, vy));
   const Q3 = A.add(A.mul(ux, ux), A.mul(uy, uy));
   if (A.isZero(Q1) || A.isZero(Q2) || A.isZero(Q3)) coincident(A, A1, A2, A3, Q1, Q2);
-  // Spread from the cross product, s = (u × v)²/(Q(u) Q(v)): Wildberger, Divine Proportions (2005), ch. 5;
+  // Spread from the cross product, s = (u × v)²/(Q(u) Q(v)) = sin² of the angle (|u × v| = |u||v|·sin θ; derived);
   // quadrea = 16·area² = 4·(u × v)² since |u × v| = 2·area (common practice).
   const D = A.sub(A.mul(ux, vy), A.mul(uy, vx));
   const D2 = A.mul(D, D);
