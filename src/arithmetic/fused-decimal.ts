@@ -46,44 +46,67 @@ export function decimalKernels(digits: number, zero: Big, from: (x: unknown) => 
   // without going through text: most of the cost of a decimal result is otherwise the parse.
   const Ctor = zero.constructor as unknown as new (x: Big) => Big;
 
-  /** coef·10^exp rounded to `digits` significant digits, ties to even (IEEE 754 roundTiesToEven). */
-  function make(coef: bigint, exp: number): Big {
-    const b = new Ctor(zero);
-    if (coef === 0n) return b;
-    const neg = coef < 0n;
-    const m = neg ? -coef : coef;
-    let t = m.toString();
-    if (t.length > digits) {
-      const drop = t.length - digits;
-      const p = pow10(drop);
-      let q = m / p;
-      const r = m - q * p;
-      const half = p / 2n;
-      if (r > half || (r === half && (q & 1n) === 1n)) q += 1n;
-      exp += drop;
-      t = q.toString();
-      if (t.length > digits) {
-        // q rounded up to 10^digits
-        t = t.slice(0, digits);
-        exp += 1;
-      }
-    }
-    let end = t.length;
-    while (end > 1 && t.charCodeAt(end - 1) === 48) end--;
-    const c: number[] = new Array(end);
-    for (let i = 0; i < end; i++) c[i] = t.charCodeAt(i) - 48;
-    b.s = neg ? -1 : 1;
-    b.e = exp + t.length - 1;
+  const proto = Object.getPrototypeOf(zero) as object;
+  /** A Big of this arithmetic with the given fields, made as big.js makes one (s, e, c, constructor). */
+  function big(sign: number, e: number, c: number[]): Big {
+    const b = Object.create(proto) as { s: number; e: number; c: number[]; constructor: unknown };
+    b.s = sign;
+    b.e = e;
     b.c = c;
-    return b;
+    b.constructor = Ctor;
+    return b as unknown as Big;
   }
 
+  /** coef·10^exp rounded to `digits` significant digits, ties to even (IEEE 754 roundTiesToEven). */
+  function make(coef: bigint, exp: number): Big {
+    if (coef === 0n) return big(1, 0, [0]);
+    const neg = coef < 0n;
+    const t = (neg ? -coef : coef).toString();
+    let n = t.length;
+    let c: number[];
+    let e = exp + n - 1;
+    if (n > digits) {
+      // Round the decimal digits themselves: look at the first dropped digit and the rest.
+      const next = t.charCodeAt(digits) - 48;
+      let up = next > 5;
+      if (next === 5) {
+        let rest = false;
+        for (let i = digits + 1; i < n; i++) if (t.charCodeAt(i) !== 48) { rest = true; break; }
+        up = rest || (t.charCodeAt(digits - 1) - 48) % 2 === 1;
+      }
+      n = digits;
+      c = new Array(n);
+      for (let i = 0; i < n; i++) c[i] = t.charCodeAt(i) - 48;
+      if (up) {
+        let i = n - 1;
+        while (i >= 0 && c[i] === 9) c[i--] = 0;
+        if (i >= 0) c[i]! += 1;
+        else {
+          c.unshift(1); // 99…9 rounded up to 10…0
+          c.length = n;
+          e += 1;
+        }
+      }
+    } else {
+      c = new Array(n);
+      for (let i = 0; i < n; i++) c[i] = t.charCodeAt(i) - 48;
+    }
+    let end = c.length;
+    while (end > 1 && c[end - 1] === 0) end--;
+    c.length = end;
+    return big(neg ? -1 : 1, e, c);
+  }
+
+  let lastB = 0n, lastLb = 1;
   /** (an·10^ae)/(bn·10^be) for bn > 0, correctly rounded: digits + 2 quotient digits and a sticky one. */
   function divide(an: bigint, ae: number, bn: bigint, be: number): Big {
-    if (an === 0n) return new Ctor(zero);
+    if (an === 0n) return big(1, 0, [0]);
     const la = (an < 0n ? -an : an).toString().length;
-    const lb = bn.toString().length;
-    const k = Math.max(0, digits + 3 - (la - lb));
+    if (bn !== lastB) {
+      lastB = bn;
+      lastLb = bn.toString().length;
+    }
+    const k = Math.max(0, digits + 3 - (la - lastLb));
     const num = an * pow10(k);
     const q = num / bn;
     if (q * bn === num) return make(q, ae - be - k);
