@@ -19,9 +19,7 @@ export interface RootOps<T, E extends boolean> {
   sub(x: Root<T, E>, y: Root<T, E> | T): Root<T, E>;
   mul(x: Root<T, E>, y: Root<T, E> | T): Root<T, E>;
   div(x: Root<T, E>, y: Root<T, E> | T): Root<T, E>;
-  neg(x: Root<T, E>): Root<T, E>;
   sign(x: Root<T, E>): -1 | 0 | 1;
-  toNumber(x: Root<T, E>): number;
 }
 
 /** @internal */
@@ -35,9 +33,7 @@ export function rootOps<T, E extends boolean>(A: Arithmetic<T, E>): RootOps<T, E
       sub: (x, y) => S(x).sub(S(y)) as Root<T, E>,
       mul: (x, y) => S(x).mul(S(y)) as Root<T, E>,
       div: (x, y) => S(x).div(S(y)) as Root<T, E>,
-      neg: (x) => S(x).neg() as Root<T, E>,
       sign: (x) => S(x).sign(),
-      toNumber: (x) => S(x).toNumber(),
     };
   }
   const V = (x: unknown): T => x as T;
@@ -53,8 +49,6 @@ export function rootOps<T, E extends boolean>(A: Arithmetic<T, E>): RootOps<T, E
     sub: (x, y) => A.sub(V(x), V(y)) as Root<T, E>,
     mul: (x, y) => A.mul(V(x), V(y)) as Root<T, E>,
     div: (x, y) => A.div(V(x), V(y)) as Root<T, E>,
-    neg: (x) => A.neg(V(x)) as Root<T, E>,
     sign: (x) => A.sign(V(x)),
-    toNumber: (x) => A.toNumber(V(x)),
   };
 }

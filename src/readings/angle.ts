@@ -148,7 +148,6 @@ export function angleToDegrees<T>(A: Arithmetic<T>, reading: Numeric<T>, unit: A
 export function readAngle<T>(A: Arithmetic<T>, reading: Numeric<T>, unit: AngleUnit = 'deg'): T {
   const where = 'angleToDegrees(reading)';
   const u = checkAngleUnit(unit, 'angleToDegrees(unit)');
-  let degrees: T;
   if (typeof reading === 'string' && !PLAIN_NUMBER.test(reading)) {
     if (reading.length > MAX_INPUT_LENGTH) {
       throw new QuadspreadError('INPUT_TOO_LONG', where, `text of ${reading.length} characters is longer than the limit of ${MAX_INPUT_LENGTH}`);
@@ -173,8 +172,7 @@ export function readAngle<T>(A: Arithmetic<T>, reading: Numeric<T>, unit: AngleU
       else value = to === 'E' ? A.sub(half, value) : A.add(half, value);
       return value;
     }
-    degrees = dms.sign < 0 ? A.neg(value) : value;
-    return degrees;
+    return dms.sign < 0 ? A.neg(value) : value;
   }
   const v = readNumber(A, reading, where);
   switch (u) {
