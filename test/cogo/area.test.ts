@@ -1,25 +1,9 @@
 import { describe, expect, it } from 'vitest';
+import { code, kinds } from '../geometry/helpers.js';
 import fc from 'fast-check';
 import Fraction from 'fraction.js';
 import { create, all } from 'mathjs';
-import { rational, decimal, float, area, perimeter, convertArea, polygonArea, QuadspreadError } from '../../src/index.js';
-import type { Arithmetic } from '../../src/index.js';
-
-const kinds: [string, Arithmetic<unknown, boolean>][] = [
-  ['rational', rational as Arithmetic<unknown, boolean>],
-  ['decimal(34)', decimal(34) as Arithmetic<unknown, boolean>],
-  ['float', float as Arithmetic<unknown, boolean>],
-];
-
-function code(f: () => unknown): string | undefined {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof QuadspreadError) return e.code;
-    throw e;
-  }
-  return undefined;
-}
+import { rational, area, perimeter, convertArea, polygonArea } from '../../src/index.js';
 
 /** Rational text n/d with small integers. */
 const ratText = fc.tuple(fc.integer({ min: -1_000_000, max: 1_000_000 }), fc.integer({ min: 1, max: 1000 })).map(([n, d]) => `${n}/${d}`);

@@ -1,23 +1,9 @@
 import { describe, expect, it } from 'vitest';
+import { code, kinds } from '../geometry/helpers.js';
 import fc from 'fast-check';
-import { rational, decimal, float, intersectLineCircle, intersectCircles, intersectBearings, isSurd, QuadspreadError } from '../../src/index.js';
+import { rational, intersectLineCircle, intersectCircles, intersectBearings, isSurd, QuadspreadError } from '../../src/index.js';
 import type { Arithmetic, Surd } from '../../src/index.js';
 
-const kinds: [string, Arithmetic<unknown, boolean>][] = [
-  ['rational', rational as Arithmetic<unknown, boolean>],
-  ['decimal(34)', decimal(34) as Arithmetic<unknown, boolean>],
-  ['float', float as Arithmetic<unknown, boolean>],
-];
-
-function code(f: () => unknown): string | undefined {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof QuadspreadError) return e.code;
-    throw e;
-  }
-  return undefined;
-}
 const num = (v: unknown, A: Arithmetic<unknown, boolean>) => (isSurd(v) ? (v as Surd<unknown>).toNumber() : A.toNumber(v));
 
 describe.each(kinds)('intersectCircles(%s, circle1, circle2)', (_name, A) => {

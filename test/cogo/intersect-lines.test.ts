@@ -1,23 +1,7 @@
 import { describe, expect, it } from 'vitest';
+import { code, kinds } from '../geometry/helpers.js';
 import fc from 'fast-check';
-import { rational, decimal, float, intersectLines, QuadspreadError } from '../../src/index.js';
-import type { Arithmetic } from '../../src/index.js';
-
-const kinds: [string, Arithmetic<unknown, boolean>][] = [
-  ['rational', rational as Arithmetic<unknown, boolean>],
-  ['decimal(34)', decimal(34) as Arithmetic<unknown, boolean>],
-  ['float', float as Arithmetic<unknown, boolean>],
-];
-
-function code(f: () => unknown): string | undefined {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof QuadspreadError) return e.code;
-    throw e;
-  }
-  return undefined;
-}
+import { rational, float, intersectLines, QuadspreadError } from '../../src/index.js';
 
 const ratText = fc.tuple(fc.integer({ min: -100_000, max: 100_000 }), fc.integer({ min: 1, max: 500 })).map(([n, d]) => `${n}/${d}`);
 const pointText = fc.record({ x: ratText, y: ratText });

@@ -1,23 +1,7 @@
 import { describe, expect, it } from 'vitest';
+import { code, kinds } from '../geometry/helpers.js';
 import fc from 'fast-check';
-import { rational, decimal, float, inverse, forward, azimuthToQuadrant, bearingToAzimuth, rootToNumber, QuadspreadError } from '../../src/index.js';
-import type { Arithmetic } from '../../src/index.js';
-
-const kinds: [string, Arithmetic<unknown, boolean>][] = [
-  ['rational', rational as Arithmetic<unknown, boolean>],
-  ['decimal(34)', decimal(34) as Arithmetic<unknown, boolean>],
-  ['float', float as Arithmetic<unknown, boolean>],
-];
-
-function code(f: () => unknown): string | undefined {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof QuadspreadError) return e.code;
-    throw e;
-  }
-  return undefined;
-}
+import { rational, float, inverse, forward, azimuthToQuadrant, bearingToAzimuth, rootToNumber } from '../../src/index.js';
 
 describe.each(kinds)('inverse(%s, P, Q) (x = east, y = north, azimuth clockwise from north)', (_name, A) => {
   it.each([

@@ -1,23 +1,8 @@
 import { describe, expect, it } from 'vitest';
+import { code, kinds } from '../geometry/helpers.js';
 import fc from 'fast-check';
-import { rational, decimal, float, levelRun, allowableMisclosure, LEVELLING_ORDERS, QuadspreadError, area, intersectCircles, forward } from '../../src/index.js';
-import type { Arithmetic, LevelSight } from '../../src/index.js';
-
-const kinds: [string, Arithmetic<unknown, boolean>][] = [
-  ['rational', rational as Arithmetic<unknown, boolean>],
-  ['decimal(34)', decimal(34) as Arithmetic<unknown, boolean>],
-  ['float', float as Arithmetic<unknown, boolean>],
-];
-
-function code(f: () => unknown): string | undefined {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof QuadspreadError) return e.code;
-    throw e;
-  }
-  return undefined;
-}
+import { rational, float, levelRun, allowableMisclosure, LEVELLING_ORDERS, area, intersectCircles, forward } from '../../src/index.js';
+import type { LevelSight } from '../../src/index.js';
 
 // A run booked by hand (invented numbers; levels reduced by hand, derived):
 // BM 50.000; BS 1.525 → HI 51.525; IS 2.310 → 49.215; FS 0.985 (CP1) → 50.540, BS 2.105 → HI 52.645;

@@ -1,21 +1,12 @@
 import { describe, expect, it } from 'vitest';
+import { code } from '../geometry/helpers.js';
 import fc from 'fast-check';
 import { create, all } from 'mathjs';
 import type { BigNumber } from 'mathjs';
-import { rational, decimal, float, resection, DANGER_CIRCLE_TOLERANCE, QuadspreadError } from '../../src/index.js';
+import { rational, decimal, float, resection, DANGER_CIRCLE_TOLERANCE } from '../../src/index.js';
 import type { Arithmetic } from '../../src/index.js';
 
 const M = create(all!, { number: 'BigNumber', precision: 70 });
-
-function code(f: () => unknown): string | undefined {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof QuadspreadError) return e.code;
-    throw e;
-  }
-  return undefined;
-}
 
 type XY = { x: number; y: number };
 /** Azimuth S→P in degrees clockwise from north, with mathjs BigNumber at 70 digits (independent of the library). */

@@ -1,23 +1,7 @@
 import { describe, expect, it } from 'vitest';
+import { code, kinds } from '../geometry/helpers.js';
 import fc from 'fast-check';
 import { rational, decimal, float, traverse, angularMisclosure, bearingToAzimuth, rootToString, QuadspreadError } from '../../src/index.js';
-import type { Arithmetic } from '../../src/index.js';
-
-const kinds: [string, Arithmetic<unknown, boolean>][] = [
-  ['rational', rational as Arithmetic<unknown, boolean>],
-  ['decimal(34)', decimal(34) as Arithmetic<unknown, boolean>],
-  ['float', float as Arithmetic<unknown, boolean>],
-];
-
-function code(f: () => unknown): string | undefined {
-  try {
-    f();
-  } catch (e) {
-    if (e instanceof QuadspreadError) return e.code;
-    throw e;
-  }
-  return undefined;
-}
 
 const ratText = fc.tuple(fc.integer({ min: -1_000_000, max: 1_000_000 }), fc.integer({ min: 1, max: 1000 })).map(([n, d]) => `${n}/${d}`);
 const latDep = fc.record({ latitude: ratText, departure: ratText });

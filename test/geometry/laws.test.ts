@@ -1,19 +1,15 @@
 // The laws of rational trigonometry: residuals exactly zero in rational for random
 // rational triangles; within a stated bound in float; typed errors for bad values.
 import { describe, expect, it } from 'vitest';
+import { code } from './helpers.js';
 import fc from 'fast-check';
-import { rational, float, QuadspreadError } from '../../src/index.js';
+import { rational, float } from '../../src/index.js';
 import type { Rational } from '../../src/index.js';
 import {
   point, quadrance, triangle, pythagorasResidual, quadrea, tripleQuadResidual, archimedesResidual,
   spreadLawResidual, crossLawResidual, tripleSpreadResidual,
 } from '../../src/geometry/index.js';
 import type { Point } from '../../src/geometry/index.js';
-
-function code(f: () => unknown): string | undefined {
-  try { f(); } catch (e) { return e instanceof QuadspreadError ? e.code : `not a QuadspreadError: ${e}`; }
-  return undefined;
-}
 
 const A = rational;
 const coord = fc.tuple(fc.integer({ min: -1e6, max: 1e6 }), fc.integer({ min: 1, max: 1000 })).map(([n, m]) => `${n}/${m}`);

@@ -1,17 +1,13 @@
 // Points, quadrance, spread, cross and lines.
 import { describe, expect, it } from 'vitest';
+import { code } from './helpers.js';
 import fc from 'fast-check';
-import { rational, decimal, float, QuadspreadError } from '../../src/index.js';
+import { rational, decimal, float } from '../../src/index.js';
 import type { Arithmetic } from '../../src/index.js';
 import {
   point, quadrance, vectorQuadrance, spread, cross, spreadOfVectors,
   triangle, solveTriangle, solveQuadratic, surd, sqrtOf, line, lineThrough, isOnLine, isParallel, isPerpendicular, footOfPerpendicular, quadranceToLine, spreadOfLines,
 } from '../../src/geometry/index.js';
-
-function code(f: () => unknown): string | undefined {
-  try { f(); } catch (e) { return e instanceof QuadspreadError ? e.code : `not a QuadspreadError: ${e}`; }
-  return undefined;
-}
 
 const coord = fc.tuple(fc.integer({ min: -1e6, max: 1e6 }), fc.integer({ min: 0, max: 3 })).map(([n, k]) => `${n}e-${k}`);
 const pt = fc.tuple(coord, coord);

@@ -1,13 +1,10 @@
 // solveQuadratic: exact surd roots in rational, cancellation-free roots in float.
 import { describe, expect, it } from 'vitest';
+import { code } from './helpers.js';
 import fc from 'fast-check';
-import { rational, float, decimal, QuadspreadError } from '../../src/index.js';
+import { rational, float, decimal } from '../../src/index.js';
 import { solveQuadratic } from '../../src/geometry/index.js';
 
-function code(f: () => unknown): string | undefined {
-  try { f(); } catch (e) { return e instanceof QuadspreadError ? e.code : `not a QuadspreadError: ${e}`; }
-  return undefined;
-}
 const A = rational;
 const q = fc.tuple(fc.integer({ min: -1e4, max: 1e4 }), fc.integer({ min: 1, max: 100 })).map(([n, m]) => A.from(`${n}/${m}`));
 

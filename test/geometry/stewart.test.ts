@@ -1,16 +1,12 @@
 // Stewart's relation: residuals exactly zero for random rational configurations, and the
 // solvers recover each member from the other ones.
 import { describe, expect, it } from 'vitest';
+import { code } from './helpers.js';
 import fc from 'fast-check';
 import { rational, float, QuadspreadError } from '../../src/index.js';
 import type { Rational } from '../../src/index.js';
 import { point, quadrance, stewartResidual, stewartQuadranceResidual, solveStewart, solveStewartQuadrances } from '../../src/geometry/index.js';
 import type { Surd } from '../../src/geometry/index.js';
-
-function code(f: () => unknown): string | undefined {
-  try { f(); } catch (e) { return e instanceof QuadspreadError ? e.code : `not a QuadspreadError: ${e}`; }
-  return undefined;
-}
 
 const A = rational;
 const num = fc.tuple(fc.integer({ min: -1e5, max: 1e5 }), fc.integer({ min: 1, max: 100 })).map(([n, m]) => A.from(`${n}/${m}`));

@@ -1,9 +1,10 @@
 // Quadratic surds: normal form, exact arithmetic within a radicand, exact comparison,
 // text and decimal expansion. Independent checks use mathjs BigNumber at 80 digits.
 import { describe, expect, it } from 'vitest';
+import { code } from './helpers.js';
 import fc from 'fast-check';
 import { create, all } from 'mathjs';
-import { rational, decimal, float, QuadspreadError } from '../../src/index.js';
+import { rational, decimal, float } from '../../src/index.js';
 import { surd, sqrtOf, asRoot, isSurd, rootToNumber, rootToString, rootToPrecision } from '../../src/geometry/index.js';
 import type { Surd } from '../../src/geometry/index.js';
 import type { Rational } from '../../src/index.js';
@@ -14,11 +15,6 @@ function big(s: Surd<Rational>) {
   const part = (x: Rational): any => M.divide(M.bignumber((x.s * x.n).toString()) as any, M.bignumber(x.d.toString()) as any);
   return M.add(part(s.a), M.multiply(part(s.b), M.sqrt(part(s.d)))) as any;
 }
-function code(f: () => unknown): string | undefined {
-  try { f(); } catch (e) { return e instanceof QuadspreadError ? e.code : `not a QuadspreadError: ${e}`; }
-  return undefined;
-}
-
 const small = fc.tuple(fc.integer({ min: -400, max: 400 }), fc.integer({ min: 1, max: 30 })).map(([n, m]) => `${n}/${m}`);
 const radicand = fc.integer({ min: 2, max: 60 });
 const surdArb = fc.tuple(small, small, radicand).map(([a, b, d]) => surd(rational, a, b, d));

@@ -1,16 +1,13 @@
 // triangle(A, A1, A2, A3) and solveTriangle(A, known): exact round trips in rational,
 // classical trigonometry (Math.*) as the independent check in float, and bad input.
 import { describe, expect, it } from 'vitest';
+import { code } from './helpers.js';
 import fc from 'fast-check';
-import { rational, decimal, float, QuadspreadError } from '../../src/index.js';
+import { rational, decimal, float } from '../../src/index.js';
 import type { Arithmetic, Rational } from '../../src/index.js';
 import { point, triangle, solveTriangle } from '../../src/geometry/index.js';
 import type { Surd, Triangle } from '../../src/geometry/index.js';
 
-function code(f: () => unknown): string | undefined {
-  try { f(); } catch (e) { return e instanceof QuadspreadError ? e.code : `not a QuadspreadError: ${e}`; }
-  return undefined;
-}
 const MEASURES = ['Q1', 'Q2', 'Q3', 's1', 's2', 's3'] as const;
 type Key = (typeof MEASURES)[number];
 /** Every choice of three measures that includes a quadrance (19 of the 20). */

@@ -1,7 +1,7 @@
 // Compass-rule traverse against the published worked example.
 import { describe, expect, it } from 'vitest';
-import { rational, decimal, float, traverse, rootToNumber } from '../../src/index.js';
-import type { Arithmetic } from '../../src/index.js';
+import { kinds } from '../geometry/helpers.js';
+import { traverse, rootToNumber } from '../../src/index.js';
 
 // Mahun, "Surveying" (open text), "Solution: Traverse Adjustment", Problem 2 (a closed loop,
 // azimuths clockwise from north, distances in ft): AB 226°54′23″ 639.15; BC 0°00′00″ 523.69;
@@ -21,12 +21,6 @@ const published = [
   [-234.64, -335.663],
   [147.556, 802.447],
 ] as const;
-
-const kinds: [string, Arithmetic<unknown, boolean>][] = [
-  ['rational', rational as Arithmetic<unknown, boolean>],
-  ['decimal(34)', decimal(34) as Arithmetic<unknown, boolean>],
-  ['float', float as Arithmetic<unknown, boolean>],
-];
 
 describe.each(kinds)('traverse(%s, …) reproduces Mahun, Traverse Adjustment, Problem 2', (_name, A) => {
   const t = traverse(A, { start: { x: 1000, y: 1000 }, courses });
