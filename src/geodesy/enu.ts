@@ -9,7 +9,7 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { readEllipsoid, type Ellipsoid } from './ellipsoid.js';
 import { geodeticToGeocentric, type Geocentric, type GeodeticInput } from './geocentric.js';
-import { claimedDigits, readLatitude, readLongitude } from './internal.js';
+import { claimedDigits, readLatitude, readLongitude, roundExact } from './internal.js';
 
 /** Local coordinates in metres: east, north (in the tangent plane), up (along the ellipsoid normal). */
 export interface Enu<T> {
@@ -33,7 +33,7 @@ function onCircle<T>(A: Arithmetic<T>, c: T, s: T, digits: number): { c: T; s: T
   // Use the half-angle of θ or of θ + π, whichever keeps 1 + cos away from 0.
   const cc = neg ? A.neg(c) : c;
   const ss = neg ? A.neg(s) : s;
-  const t = A.from(A.toPrecision(A.div(ss, A.add(A.one, cc)), digits + 8));
+  const t = roundExact(A, A.div(ss, A.add(A.one, cc)), digits + 8); // keeps an uncertain gradient
   const t2 = A.mul(t, t);
   const d = A.add(A.one, t2);
   const c1 = A.div(A.sub(A.one, t2), d);

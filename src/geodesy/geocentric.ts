@@ -8,7 +8,7 @@ import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { ellipsoidParameters, readEllipsoid, type Ellipsoid } from './ellipsoid.js';
-import { claimedDigits, decimalFor, readHeight, readLatitude, readLongitude, root, tenToMinus, toDegrees, toDecimalText } from './internal.js';
+import { claimedDigits, delegateFor, readHeight, readLatitude, readLongitude, root, tenToMinus, toDegrees } from './internal.js';
 
 /** Geodetic coordinates: latitude and longitude in decimal degrees (north, east positive), height in metres above the ellipsoid. */
 export interface Geodetic<T> {
@@ -131,17 +131,17 @@ export function geocentricToGeodetic<T>(A: Arithmetic<T>, point: Geocentric<Nume
   if (A.exact && !A.isZero(p2)) {
     // The result is an approximation in any case: iterate in decimal with 8 guard digits,
     // so that exact fractions do not grow, and read the result back exactly.
-    const d = claimedDigits(A) + 8;
-    const D = decimalFor(d);
-    const g = geocentricToGeodetic(D, { X: toDecimalText(A, X, d), Y: toDecimalText(A, Y, d), Z: toDecimalText(A, Z, d) }, readEllipsoid(ellipsoid, 'geocentricToGeodetic(ellipsoid)'));
-    return { lat: A.from(D.toString(g.lat)), lon: A.from(D.toString(g.lon)), h: A.from(D.toString(g.h)) };
+    const { D, to, back } = delegateFor(A, claimedDigits(A) + 8);
+    const g = geocentricToGeodetic(D, { X: to(X), Y: to(Y), Z: to(Z) }, readEllipsoid(ellipsoid, 'geocentricToGeodetic(ellipsoid)'));
+    return { lat: back(g.lat), lon: back(g.lon), h: back(g.h) };
   }
   if (A.isZero(p2)) {
     // On the polar axis: φ = ±90°, h = |Z| − b, λ taken as 0.
     if (A.isZero(Z)) throw new QuadspreadError('INVALID_ARGUMENT', where, 'the centre of the ellipsoid has no unique geodetic coordinates');
     return { lat: A.from(A.sign(Z) > 0 ? 90 : -90), lon: A.zero, h: A.sub(A.abs(Z), E.b) };
   }
-  const p = A.exact ? A.from(A.toPrecision(root(A, p2), claimedDigits(A) + 8)) : root(A, p2);
+  // From here on A is inexact: exact arithmetics were delegated above.
+  const p = root(A, p2);
   const oneMinusF = A.sub(A.one, E.f);
   const unit = (c: T, s: T): { c: T; s: T } => {
     const r = root(A, A.add(A.mul(c, c), A.mul(s, s)));
@@ -162,8 +162,7 @@ export function geocentricToGeodetic<T>(A: Arithmetic<T>, point: Geocentric<Nume
     if (A.sign(den) <= 0) {
       throw new QuadspreadError('HEIGHT_OUT_OF_RANGE', where, `the point (${A.toString(X)}, ${A.toString(Y)}, ${A.toString(Z)}) is too deep inside the ellipsoid for geodetic coordinates`);
     }
-    let next = unit(den, num);
-    if (A.exact) next = shorten(A, next, digits + 8);
+    const next = unit(den, num);
     if (phi !== undefined) {
       // |sin(φ_new − φ_old)| = |c_old s_new − s_old c_new|
       const change = A.abs(A.sub(A.mul(phi.c, next.s), A.mul(phi.s, next.c)));
@@ -179,15 +178,8 @@ export function geocentricToGeodetic<T>(A: Arithmetic<T>, point: Geocentric<Nume
     }
     // tan u = (1 − f) tan φ
     u = unit(phi.c, A.mul(oneMinusF, phi.s));
-    // Keep exact fractions short: round the iterate (it is only an approximation).
-    if (A.exact) u = shorten(A, u, digits + 8);
   }
   throw new QuadspreadError('NOT_CONVERGED', where, `Bowring's iteration did not converge in ${MAX_ITERATIONS} steps`);
-}
-
-/** Rounds a pair to `d` significant digits (used in exact arithmetic, where the iterates are approximations anyway). */
-function shorten<T>(A: Arithmetic<T>, v: { c: T; s: T }, d: number): { c: T; s: T } {
-  return { c: A.from(A.toPrecision(v.c, d)), s: A.from(A.toPrecision(v.s, d)) };
 }
 
 function finish<T>(A: Arithmetic<T>, phi: { c: T; s: T }, p: T, X: T, Y: T, Z: T, a: T, e2: T): Geodetic<T> {

@@ -16,7 +16,7 @@ import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { ellipsoidParameters, readEllipsoid, type Ellipsoid, type EllipsoidParameters } from './ellipsoid.js';
-import { claimedDigits, decimalFor, readHeight, readLatitude, readLongitude, root, settle, tenToMinus, toDegrees, toDecimalText } from './internal.js';
+import { claimedDigits, delegateFor, readHeight, readLatitude, readLongitude, root, settle, tenToMinus, toDegrees } from './internal.js';
 
 /**
  * The height reduction factor R/(R + h): a horizontal distance measured on the ground at
@@ -319,16 +319,13 @@ function tm<T>(
   if (A.exact) {
     // An approximation in any case: evaluate in decimal with 8 guard digits and read the
     // result back exactly, so that exact fractions do not grow through the series.
-    const d = claimedDigits(A) + 8;
-    const D = decimalFor(d);
-    const t = (x: T): string => toDecimalText(A, x, d);
+    const { D, to: t, back } = delegateFor(A, claimedDigits(A) + 8);
     const r = tm(
       D,
       { lat: t(lat), lon: t(lon) },
-      { lon0: t(lon0), lat0: t(lat0), k0: t(k0), falseEasting: t(E0), falseNorthing: t(N0), ellipsoid: ell },
+      { lon0: t(lon0) as never, lat0: t(lat0) as never, k0: t(k0) as never, falseEasting: t(E0) as never, falseNorthing: t(N0) as never, ellipsoid: ell },
       wantGrid,
     );
-    const back = (x: ReturnType<typeof D.from>): T => A.from(D.toString(x));
     return { E: back(r.E), N: back(r.N), k: back(r.k), convergence: back(r.convergence), xi0: back(r.xi0) };
   }
   const c = kruger(A, E, lat, A.sub(lon, lon0), where, wantGrid);
@@ -453,10 +450,8 @@ export function transverseMercatorInverse<T>(
   const Et = A.from(point.E);
   const Nt = A.from(point.N);
   if (A.exact) {
-    const d = claimedDigits(A) + 8;
-    const D = decimalFor(d);
-    const r = transverseMercatorInverse(D, { E: toDecimalText(A, Et, d), N: toDecimalText(A, Nt, d) }, projection);
-    const back = (x: ReturnType<typeof D.from>): T => A.from(D.toString(x));
+    const { D, to, back } = delegateFor(A, claimedDigits(A) + 8);
+    const r = transverseMercatorInverse(D, { E: to(Et), N: to(Nt) }, projection);
     return { lat: back(r.lat), lon: back(r.lon), k: back(r.k), convergence: back(r.convergence) };
   }
   const P = ellipsoidParameters(A, ell);

@@ -9,6 +9,7 @@ import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { RATIONAL_TRANSCENDENTAL_DIGITS } from '../arithmetic/rational.js';
 import { decimal, type DecimalArithmetic } from '../arithmetic/decimal.js';
+import { Uncertain, uncertain } from '../arithmetic/uncertain.js';
 import { angleToDegrees } from '../readings/angle.js';
 import { approxSqrt } from '../readings/numeric.js';
 
@@ -90,7 +91,49 @@ export function decimalFor(digits: number): DecimalArithmetic {
   return D;
 }
 
-/** @internal A value of an exact arithmetic as text for a decimal arithmetic of `digits` digits. */
-export function toDecimalText<T>(A: Arithmetic<T>, x: T, digits: number): string {
-  return A.toPrecision(x, digits + 4);
+const uncertainDecimalMemo = new Map<number, Arithmetic<Uncertain<unknown>>>();
+
+/** An uncertain value moved to another base: the value and each derivative converted, the inputs kept. */
+function moveUncertain<S, R>(from: Arithmetic<S>, to: Arithmetic<R>, x: Uncertain<S>, digits: number | undefined): Uncertain<R> {
+  const text = (v: S): string => (digits === undefined ? from.toString(v) : from.toPrecision(v, digits));
+  const ders = x.derivatives.map((c) => to.from(text(c)));
+  return new Uncertain(to.from(text(x.value)), x.inputs as unknown as readonly Uncertain<R>['inputs'][number][], ders);
+}
+
+/**
+ * @internal Where an exact arithmetic evaluates a transcendental approximation: in
+ * decimal(digits), or for an uncertain arithmetic over an exact base in
+ * uncertain(decimal(digits)), so that the gradients go there and back with the values
+ * (they were dropped when values crossed as text). `to` carries a value of `A` over
+ * (rounded to digits + 4), `back` reads a result back exactly.
+ */
+export function delegateFor<T>(A: Arithmetic<T>, digits: number): { D: Arithmetic<unknown>; to: (x: T) => unknown; back: (y: unknown) => T } {
+  const Dd = decimalFor(digits) as unknown as Arithmetic<unknown>;
+  const base = (A as { base?: Arithmetic<unknown> }).base;
+  if (base === undefined) {
+    return { D: Dd, to: (x) => Dd.from(A.toPrecision(x, digits + 4)), back: (y) => A.from(Dd.toString(y)) };
+  }
+  let UD = uncertainDecimalMemo.get(digits);
+  if (UD === undefined) {
+    UD = uncertain(Dd) as unknown as Arithmetic<Uncertain<unknown>>;
+    uncertainDecimalMemo.set(digits, UD);
+  }
+  return {
+    D: UD,
+    to: (x) => moveUncertain(base, Dd, A.from(x) as unknown as Uncertain<unknown>, digits + 4),
+    back: (y) => moveUncertain(Dd, base, y as Uncertain<unknown>, undefined) as unknown as T,
+  };
+}
+
+/**
+ * @internal x rounded to `digits` significant digits in an exact arithmetic (for values that
+ * are approximations anyway); over an uncertain arithmetic the value is rounded and the
+ * gradient kept.
+ */
+export function roundExact<T>(A: Arithmetic<T>, x: T, digits: number): T {
+  const base = (A as { base?: Arithmetic<unknown> }).base;
+  if (base !== undefined && x instanceof Uncertain) {
+    return new Uncertain(base.from(base.toPrecision(x.value, digits)), x.inputs, x.derivatives) as unknown as T;
+  }
+  return A.from(A.toPrecision(x, digits));
 }
