@@ -3,7 +3,7 @@
 // into node_modules/.cache/quadspread/ and runs it with the remaining arguments.
 // Usage: node scripts/dev-run.mjs src/cli/main.ts demo --format markdown
 import { build } from 'esbuild';
-import { mkdirSync } from 'node:fs';
+import { mkdirSync, rmSync } from 'node:fs';
 import { basename, resolve } from 'node:path';
 import { pathToFileURL } from 'node:url';
 
@@ -14,7 +14,8 @@ if (!entry) {
 }
 const outdir = resolve('node_modules/.cache/quadspread');
 mkdirSync(outdir, { recursive: true });
-const outfile = resolve(outdir, basename(entry).replace(/\.ts$/, '.mjs'));
+// One file per process, so that runs at the same time never execute each other's bundle.
+const outfile = resolve(outdir, `${basename(entry).replace(/\.ts$/, '')}-${process.pid}.mjs`);
 await build({
   entryPoints: [entry],
   bundle: true,
@@ -26,4 +27,9 @@ await build({
   logLevel: 'warning',
 });
 process.argv = [process.argv[0], outfile, ...args];
-await import(pathToFileURL(outfile).href);
+try {
+  await import(pathToFileURL(outfile).href);
+} finally {
+  // The bundle is loaded; remove it (a long-running command keeps its module in memory).
+  rmSync(outfile, { force: true });
+}
