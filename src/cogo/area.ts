@@ -9,9 +9,10 @@ import { checkLengthUnit, METRES_PER_UNIT } from '../readings/length.js';
 import type { LengthUnit } from '../readings/length.js';
 import { readNumber } from '../geometry/validate.js';
 import { readArray, readPoint, sqrtValue } from './internal.js';
-import type { PointInput, XY } from './internal.js';
+import type { Point } from '../geometry/point.js';
+import type { PointInput } from './internal.js';
 
-function readPolygon<T>(A: Arithmetic<T, boolean>, points: unknown, where: string): XY<T>[] {
+function readPolygon<T>(A: Arithmetic<T, boolean>, points: unknown, where: string): Point<T>[] {
   const list = readArray<unknown>(points, `${where}`);
   if (list.length < 3) {
     throw new QuadspreadError('TOO_FEW_POINTS', where, `a polygon needs at least 3 vertices, got ${list.length}`);

@@ -18,11 +18,8 @@ export interface PointInput<T> {
   readonly y: Numeric<T>;
 }
 
-/** A point of arithmetic `T`: x = east, y = north (the geometry's `Point`). @internal */
-export type XY<T> = Point<T>;
-
 /** Reads a point `{ x, y }` (x = east, y = north) into the arithmetic. @internal */
-export function readPoint<T>(A: Arithmetic<T, boolean>, p: unknown, where: string): XY<T> {
+export function readPoint<T>(A: Arithmetic<T, boolean>, p: unknown, where: string): Point<T> {
   if (p === null || typeof p !== 'object' || !('x' in p) || !('y' in p)) {
     throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(p)} is not a point { x, y } (x = east, y = north)`);
   }

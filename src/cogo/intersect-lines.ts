@@ -6,7 +6,8 @@
 import { QuadspreadError } from '../errors.js';
 import type { Arithmetic } from '../arithmetic/types.js';
 import { readPoint } from './internal.js';
-import type { PointInput, XY } from './internal.js';
+import type { Point } from '../geometry/point.js';
+import type { PointInput } from './internal.js';
 
 /**
  * The point where line P1P2 meets line P3P4, exact in `rational`.
@@ -39,7 +40,7 @@ export function intersectLines<T>(
   P2: PointInput<T>,
   P3: PointInput<T>,
   P4: PointInput<T>,
-): XY<T> {
+): Point<T> {
   const where = 'intersectLines(A, P1, P2, P3, P4)';
   const a = readPoint(A, P1, `${where} P1`);
   const b = readPoint(A, P2, `${where} P2`);
