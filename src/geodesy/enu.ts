@@ -6,6 +6,7 @@
  */
 import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+import { readNumber } from '../geometry/validate.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { readEllipsoid, type Ellipsoid } from './ellipsoid.js';
 import { geodeticToGeocentric, type Geocentric, type GeodeticInput } from './geocentric.js';
@@ -114,9 +115,9 @@ export function enuFromGeocentric<T>(A: Arithmetic<T>, origin: GeodeticInput<T>,
   const O = geodeticToGeocentric(A, origin, E);
   const R = enuRotation(A, origin);
   const d: [T, T, T] = [
-    A.sub(A.from(point.X as Numeric<T>), O.X),
-    A.sub(A.from(point.Y as Numeric<T>), O.Y),
-    A.sub(A.from(point.Z as Numeric<T>), O.Z),
+    A.sub(readNumber(A, point.X as Numeric<T>, 'enuFromGeocentric(point).X'), O.X),
+    A.sub(readNumber(A, point.Y as Numeric<T>, 'enuFromGeocentric(point).Y'), O.Y),
+    A.sub(readNumber(A, point.Z as Numeric<T>, 'enuFromGeocentric(point).Z'), O.Z),
   ];
   const [e, n, u] = apply(A, R, d, false);
   return { e, n, u };
@@ -143,7 +144,7 @@ export function geocentricFromEnu<T>(A: Arithmetic<T>, origin: GeodeticInput<T>,
   const E = readEllipsoid(ellipsoid, 'geocentricFromEnu(ellipsoid)');
   const O = geodeticToGeocentric(A, origin, E);
   const R = enuRotation(A, origin);
-  const v: [T, T, T] = [A.from(local.e as Numeric<T>), A.from(local.n as Numeric<T>), A.from(local.u as Numeric<T>)];
+  const v: [T, T, T] = [readNumber(A, local.e as Numeric<T>, 'geocentricFromEnu(local).e'), readNumber(A, local.n as Numeric<T>, 'geocentricFromEnu(local).n'), readNumber(A, local.u as Numeric<T>, 'geocentricFromEnu(local).u')];
   const [x, y, z] = apply(A, R, v, true);
   return { X: A.add(O.X, x), Y: A.add(O.Y, y), Z: A.add(O.Z, z) };
 }
@@ -181,8 +182,8 @@ export interface FlatEarthError<T> {
  * ```
  */
 export function flatEarthError<T>(A: Arithmetic<T>, distance: Numeric<T>, radius: Numeric<T> = '6371008.7714'): FlatEarthError<T> {
-  const s = A.from(distance);
-  const R = A.from(radius);
+  const s = readNumber(A, distance, 'flatEarthError(distance)');
+  const R = readNumber(A, radius, 'flatEarthError(radius)');
   if (A.sign(s) < 0) throw new QuadspreadError('INVALID_ARGUMENT', 'flatEarthError(distance)', `${show(typeof distance === 'object' ? A.toString(s) : distance)} is negative`);
   if (A.sign(R) <= 0) throw new QuadspreadError('INVALID_ARGUMENT', 'flatEarthError(radius)', `${show(typeof radius === 'object' ? A.toString(R) : radius)} is not positive`);
   const s2 = A.mul(s, s);

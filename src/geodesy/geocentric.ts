@@ -6,6 +6,7 @@
  */
 import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+import { readNumber } from '../geometry/validate.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { ellipsoidParameters, readEllipsoid, type Ellipsoid } from './ellipsoid.js';
 import { claimedDigits, delegateFor, readHeight, readLatitude, readLongitude, root, tenToMinus, toDegrees } from './internal.js';
@@ -124,9 +125,9 @@ export function geocentricToGeodetic<T>(A: Arithmetic<T>, point: Geocentric<Nume
   const where = 'geocentricToGeodetic(point)';
   if (point === null || typeof point !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(point)} is not { X, Y, Z }`);
   const E = ellipsoidParameters(A, readEllipsoid(ellipsoid, 'geocentricToGeodetic(ellipsoid)'));
-  const X = A.from(point.X as Numeric<T>);
-  const Y = A.from(point.Y as Numeric<T>);
-  const Z = A.from(point.Z as Numeric<T>);
+  const X = readNumber(A, point.X as Numeric<T>, `${where}.X`);
+  const Y = readNumber(A, point.Y as Numeric<T>, `${where}.Y`);
+  const Z = readNumber(A, point.Z as Numeric<T>, `${where}.Z`);
   const p2 = A.add(A.mul(X, X), A.mul(Y, Y));
   if (A.exact && !A.isZero(p2)) {
     // The result is an approximation in any case: iterate in decimal with 8 guard digits,

@@ -14,6 +14,7 @@
  */
 import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+import { readNumber } from '../geometry/validate.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { ellipsoidParameters, readEllipsoid, type Ellipsoid, type EllipsoidParameters } from './ellipsoid.js';
 import { claimedDigits, delegateFor, readHeight, readLatitude, readLongitude, root, settle, tenToMinus, toDegrees } from './internal.js';
@@ -38,7 +39,7 @@ import { claimedDigits, delegateFor, readHeight, readLatitude, readLongitude, ro
  * ```
  */
 export function heightReductionFactor<T>(A: Arithmetic<T>, h: Numeric<T>, radius: Numeric<T>): T {
-  const R = A.from(radius);
+  const R = readNumber(A, radius, 'heightReductionFactor(radius)');
   if (A.sign(R) <= 0) throw new QuadspreadError('INVALID_ARGUMENT', 'heightReductionFactor(radius)', `${show(typeof radius === 'object' ? A.toString(R) : radius)} is not positive`);
   const H = readHeight(A, h, A.div(R, A.from(2)), 'heightReductionFactor(h)', 'R/2');
   return A.div(R, A.add(R, H)); // R/(R + h)
@@ -308,14 +309,14 @@ function tm<T>(
   if (projection === null || typeof projection !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', `${where}(projection)`, `${show(projection)} is not { lon0, k0, ellipsoid }`);
   const ell = readEllipsoid(projection.ellipsoid, `${where}(projection.ellipsoid)`);
   const E = ellipsoidParameters(A, ell);
-  const k0 = A.from(projection.k0 ?? 1);
+  const k0 = readNumber(A, projection.k0 ?? 1, `${where}(projection.k0)`);
   if (A.sign(k0) <= 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where}(projection.k0)`, `${show(projection.k0)} is not positive`);
   const lat = readLatitude(A, point.lat, `${where}(point.lat)`);
   const lon = readLongitude(A, point.lon, `${where}(point.lon)`);
   const lon0 = readLongitude(A, projection.lon0 as Numeric<T>, `${where}(projection.lon0)`);
   const lat0 = readLatitude(A, (projection.lat0 ?? 0) as Numeric<T>, `${where}(projection.lat0)`);
-  const E0 = A.from((projection.falseEasting ?? 0) as Numeric<T>);
-  const N0 = A.from((projection.falseNorthing ?? 0) as Numeric<T>);
+  const E0 = readNumber(A, (projection.falseEasting ?? 0) as Numeric<T>, `${where}(projection.falseEasting)`);
+  const N0 = readNumber(A, (projection.falseNorthing ?? 0) as Numeric<T>, `${where}(projection.falseNorthing)`);
   if (A.exact) {
     // An approximation in any case: evaluate in decimal with 8 guard digits and read the
     // result back exactly, so that exact fractions do not grow through the series.
@@ -366,7 +367,7 @@ export function combinedFactor<T>(A: Arithmetic<T>, heightFactor: Numeric<T>, sc
 }
 
 function positive<T>(A: Arithmetic<T>, x: Numeric<T>, where: string): T {
-  const v = A.from(x);
+  const v = readNumber(A, x, where);
   if (A.sign(v) <= 0) throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(typeof x === 'object' ? A.toString(v) : x)} is not positive`);
   return v;
 }
@@ -387,7 +388,7 @@ function positive<T>(A: Arithmetic<T>, x: Numeric<T>, where: string): T {
  * ```
  */
 export function groundToGrid<T>(A: Arithmetic<T>, ground: Numeric<T>, factor: Numeric<T>): T {
-  return A.mul(A.from(ground), positive(A, factor, 'groundToGrid(factor)'));
+  return A.mul(readNumber(A, ground, 'groundToGrid(ground)'), positive(A, factor, 'groundToGrid(factor)'));
 }
 
 /**
@@ -407,7 +408,7 @@ export function groundToGrid<T>(A: Arithmetic<T>, ground: Numeric<T>, factor: Nu
  * ```
  */
 export function gridToGround<T>(A: Arithmetic<T>, grid: Numeric<T>, factor: Numeric<T>): T {
-  return A.div(A.from(grid), positive(A, factor, 'gridToGround(factor)'));
+  return A.div(readNumber(A, grid, 'gridToGround(grid)'), positive(A, factor, 'gridToGround(factor)'));
 }
 
 /** Most Newton steps {@link transverseMercatorInverse} takes. */
@@ -447,20 +448,20 @@ export function transverseMercatorInverse<T>(
   if (point === null || typeof point !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', `${where}(point)`, `${show(point)} is not { E, N }`);
   if (projection === null || typeof projection !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', `${where}(projection)`, `${show(projection)} is not { lon0, k0, ellipsoid }`);
   const ell = readEllipsoid(projection.ellipsoid, `${where}(projection.ellipsoid)`);
-  const Et = A.from(point.E);
-  const Nt = A.from(point.N);
+  const Et = readNumber(A, point.E, `${where}(point.E)`);
+  const Nt = readNumber(A, point.N, `${where}(point.N)`);
   if (A.exact) {
     const { D, to, back } = delegateFor(A, claimedDigits(A) + 8);
     const r = transverseMercatorInverse(D, { E: to(Et), N: to(Nt) }, projection);
     return { lat: back(r.lat), lon: back(r.lon), k: back(r.k), convergence: back(r.convergence) };
   }
   const P = ellipsoidParameters(A, ell);
-  const k0 = A.from((projection.k0 ?? 1) as Numeric<T>);
+  const k0 = readNumber(A, (projection.k0 ?? 1) as Numeric<T>, `${where}(projection.k0)`);
   if (A.sign(k0) <= 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where}(projection.k0)`, `${show(projection.k0)} is not positive`);
   const lon0 = readLongitude(A, projection.lon0 as Numeric<T>, `${where}(projection.lon0)`);
   const lat0 = readLatitude(A, (projection.lat0 ?? 0) as Numeric<T>, `${where}(projection.lat0)`);
-  const E0 = A.from((projection.falseEasting ?? 0) as Numeric<T>);
-  const N0 = A.from((projection.falseNorthing ?? 0) as Numeric<T>);
+  const E0 = readNumber(A, (projection.falseEasting ?? 0) as Numeric<T>, `${where}(projection.falseEasting)`);
+  const N0 = readNumber(A, (projection.falseNorthing ?? 0) as Numeric<T>, `${where}(projection.falseNorthing)`);
   const perRad = A.div(A.from(180), A.pi); // degrees per radian
   const ka = A.mul(k0, P.a);
   // Start on a sphere of radius a: φ ≈ φ0 + (N − N0)/(k0 a), λ ≈ λ0 + (E − E0)/(k0 a cos φ).

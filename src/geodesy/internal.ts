@@ -7,6 +7,7 @@
  */
 import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+import { readNumber } from '../geometry/validate.js';
 import { RATIONAL_TRANSCENDENTAL_DIGITS } from '../arithmetic/rational.js';
 import { decimal, type DecimalArithmetic } from '../arithmetic/decimal.js';
 import { Uncertain, uncertain } from '../arithmetic/uncertain.js';
@@ -55,7 +56,7 @@ export function readLongitude<T>(A: Arithmetic<T>, lon: Numeric<T>, where: strin
 
 /** @internal An ellipsoidal height in metres (default 0), refused below −limit (−a unless said otherwise). */
 export function readHeight<T>(A: Arithmetic<T>, h: Numeric<T> | undefined, limit: T, where: string, name = 'a'): T {
-  const v = h === undefined ? A.zero : A.from(h);
+  const v = h === undefined ? A.zero : readNumber(A, h, where);
   if (A.cmp(v, A.neg(limit)) < 0) {
     throw new QuadspreadError('HEIGHT_OUT_OF_RANGE', where, `${show(typeof h === 'object' ? A.toString(v) : h)} is below −${name} = −${A.toString(limit)} m`);
   }

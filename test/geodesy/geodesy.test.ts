@@ -365,3 +365,26 @@ describe('bad input gets typed errors', () => {
     });
   }
 });
+
+describe('an unreadable number names the function and the argument it came in', () => {
+  const A: Arithmetic<number> = float;
+  const tm = { lon0: 0, ellipsoid: GRS80 };
+  const cases: [string, () => unknown][] = [
+    ['geocentricToGeodetic(point).Y', () => geocentricToGeodetic(A, { X: 1e6, Y: 'abc', Z: 0 }, GRS80)],
+    ['geodeticToGeocentric(point).h', () => geodeticToGeocentric(A, { lat: 0, lon: 0, h: 'high' }, GRS80)],
+    ['enuFromGeocentric(point).Z', () => enuFromGeocentric(A, { lat: 0, lon: 0 }, { X: 1, Y: 2, Z: Number.NaN }, GRS80)],
+    ['geocentricFromEnu(local).u', () => geocentricFromEnu(A, { lat: 0, lon: 0 }, { e: 1, n: 2, u: 'up' }, GRS80)],
+    ['flatEarthError(radius)', () => flatEarthError(A, 100, 'R')],
+    ['heightReductionFactor(radius)', () => heightReductionFactor(A, 100, 'R')],
+    ['transverseMercator(projection.k0)', () => transverseMercator(A, { lat: 1, lon: 1 }, { ...tm, k0: 'k' })],
+    ['transverseMercator(projection.falseNorthing)', () => transverseMercator(A, { lat: 1, lon: 1 }, { ...tm, falseNorthing: 'N0' })],
+    ['transverseMercatorInverse(point.N)', () => transverseMercatorInverse(A, { E: 0, N: 'north' }, tm)],
+    ['groundToGrid(ground)', () => groundToGrid(A, 'far', 1)],
+    ['gridToGround(factor)', () => gridToGround(A, 100, 'one')],
+  ];
+  for (const [where, f] of cases) {
+    it(`names ${where}`, () => {
+      expect(f).toThrow(expect.objectContaining({ code: 'INVALID_NUMBER', where }));
+    });
+  }
+});
