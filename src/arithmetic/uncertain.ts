@@ -165,6 +165,9 @@ function fromMap<T>(B: Arithmetic<T>, value: T, g: Gradient<T> | undefined): Unc
  *
  * @param base the arithmetic of values and derivatives
  * @returns the uncertain arithmetic, named `uncertain(<base name>)`
+ * @throws {QuadspreadError} never itself; its operations throw as described above
+ *   (`NO_REAL_SOLUTION` for √ of a negative value, `NOT_FINITE`, `DIVISION_BY_ZERO`,
+ *   `INVALID_ARGUMENT` for atan2(0, 0), `INVALID_NUMBER` from `from`).
  * @example
  * ```ts
  * import { uncertain, float } from 'quadspread';

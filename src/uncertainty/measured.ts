@@ -49,6 +49,7 @@ export function measured<T>(U: UncertainArithmetic<T>, value: Numeric<T>, sigma:
  * @param U the uncertain arithmetic of `y`
  * @param y a value of `U`
  * @returns `{ name, value, sigma, sensitivity }` for each input
+ * @throws {QuadspreadError} `INVALID_NUMBER` when `y` is not a value of `U`.
  * @example
  * ```ts
  * import { uncertain, float, measured, sensitivities } from 'quadspread';

@@ -18,6 +18,7 @@ import { spreadFromDegrees } from '../readings/spread.js';
 import { spreadFromGrade } from '../readings/slope.js';
 import { verticalFromAngle, type VerticalKind, type VerticalReading } from '../readings/vertical.js';
 import { lengthToMetres, type LengthUnit } from '../readings/length.js';
+import { readNumber } from '../geometry/validate.js';
 import { measured } from './measured.js';
 import { readName, readSigma } from './internal.js';
 
@@ -30,6 +31,8 @@ import { readName, readSigma } from './internal.js';
  * @param value g(x), in the base arithmetic
  * @param derivative g′(x), in the base arithmetic
  * @returns g(x) with gradient g′(x)·∇x
+ * @throws {QuadspreadError} `INVALID_NUMBER` naming `x`, `value` or `derivative` when it
+ *   cannot be read.
  * @example
  * ```ts
  * import { uncertain, float, measured, withDerivative, budget } from 'quadspread';
@@ -42,9 +45,10 @@ import { readName, readSigma } from './internal.js';
  */
 export function withDerivative<T>(U: UncertainArithmetic<T>, x: Uncertain<T>, value: Numeric<T>, derivative: Numeric<T>): Uncertain<T> {
   const B = U.base;
-  const v = U.from(x);
-  const d = B.from(derivative);
-  return new Uncertain(B.from(value), v.inputs, v.derivatives.map((c) => B.mul(d, c))); // d·∇x
+  const where = 'withDerivative(U, x, value, derivative)';
+  const v = readNumber(U, x, `${where} x`);
+  const d = readNumber(B, derivative, `${where} derivative`);
+  return new Uncertain(readNumber(B, value, `${where} value`), v.inputs, v.derivatives.map((c) => B.mul(d, c))); // d·∇x
 }
 
 /**
@@ -92,6 +96,7 @@ function spreadSlope<T>(U: UncertainArithmetic<T>, degrees: T): T {
  * @param U the uncertain arithmetic
  * @param degrees the angle in degrees, e.g. from {@link measuredAngle}
  * @returns the spread, with its gradient
+ * @throws {QuadspreadError} as `spreadFromDegrees`; `INVALID_NUMBER` for an unreadable angle.
  * @example
  * ```ts
  * import { uncertain, float, measuredAngle, spreadOfAngle, budget } from 'quadspread';

@@ -124,6 +124,12 @@ describe('uncertain readings carry sigmas from reading units through the convers
     expect(grad(y, 'b')).toBe(2 * Math.exp(5));
   });
 
+  it('withDerivative names the argument it cannot read', () => {
+    const x = measured(F, 1, 0.1, 'a');
+    expect(() => withDerivative(F, x, 'e', 1)).toThrow(expect.objectContaining({ code: 'INVALID_NUMBER', where: 'withDerivative(U, x, value, derivative) value' }));
+    expect(() => withDerivative(F, x, 1, Number.NaN)).toThrow(expect.objectContaining({ code: 'INVALID_NUMBER', where: 'withDerivative(U, x, value, derivative) derivative' }));
+  });
+
   it('the reading helpers refuse negative sigmas and bad names', () => {
     expect(() => measuredAngle(F, 10, -1, 'a')).toThrow(expect.objectContaining({ code: 'INVALID_SIGMA' }));
     expect(() => measuredDistance(F, 10, -1, 'a')).toThrow(expect.objectContaining({ code: 'INVALID_SIGMA' }));
