@@ -156,7 +156,7 @@ export function convertArea<T>(A: Arithmetic<T, boolean>, value: Numeric<T>, fro
   const where = 'convertArea(A, value, from, to)';
   const f = unitFactor(A, AREA_UNITS, from, `${where} from`);
   const t = unitFactor(A, AREA_UNITS, to, `${where} to`);
-  return A.div(A.mul(readNumber(A, value, `${where} value`), f), t);
+  return A.div(A.mul(readNumber(A, value, where, ' value'), f), t);
 }
 
 /** What {@link polygonArea} returns. All areas are unsigned except `signed`. */

@@ -30,11 +30,11 @@ function readCircle<T>(A: Arithmetic<T, boolean>, c: unknown, where: string): { 
     throw new QuadspreadError('INVALID_ARGUMENT', where, 'give exactly one of radius and quadrance');
   }
   if (o.radius !== undefined) {
-    const r = readNumber(A, o.radius, `${where}.radius`);
+    const r = readNumber(A, o.radius, where, '.radius');
     if (A.sign(r) < 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where}.radius`, `${A.toString(r)} is negative`);
     return { c: center, R: A.mul(r, r) };
   }
-  const R = readNumber(A, o.quadrance!, `${where}.quadrance`);
+  const R = readNumber(A, o.quadrance!, where, '.quadrance');
   if (A.sign(R) < 0) throw new QuadspreadError('NEGATIVE_QUADRANCE', `${where}.quadrance`, `${A.toString(R)} is negative`);
   return { c: center, R };
 }

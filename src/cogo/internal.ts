@@ -24,7 +24,7 @@ export function readPoint<T>(A: Arithmetic<T, boolean>, p: unknown, where: strin
     throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(p)} is not a point { x, y } (x = east, y = north)`);
   }
   const q = p as PointInput<T>;
-  return { x: readNumber(A, q.x, `${where}.x`), y: readNumber(A, q.y, `${where}.y`) };
+  return { x: readNumber(A, q.x, where, '.x'), y: readNumber(A, q.y, where, '.y') };
 }
 
 /**

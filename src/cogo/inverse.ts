@@ -128,7 +128,7 @@ export function forward<T>(A: Arithmetic<T, boolean>, P: PointInput<T>, bearing:
   const where = 'forward(A, P, bearing, distance)';
   const p = readPoint(A, P, `${where} P`);
   const az = readAzimuth(A, bearing, `${where} bearing`);
-  const d = readNumber(A, distance, `${where} distance`);
+  const d = readNumber(A, distance, where, ' distance');
   if (A.sign(d) < 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where} distance`, `${A.toString(d)} is negative`);
   const { sin, cos } = sinCosDegrees(A, az);
   // Departure d·sin(azimuth), latitude d·cos(azimuth).

@@ -85,7 +85,7 @@ function readC<T>(A: Arithmetic<T, boolean>, order: LevellingOrder | Numeric<T>,
 export function allowableMisclosure<T, E extends boolean>(A: Arithmetic<T, E>, order: LevellingOrder | Numeric<T>, km: Numeric<T>): AllowableMisclosure<T, E> {
   const where = 'allowableMisclosure(A, order, km)';
   const c = readC(A, order, `${where} order`);
-  const K = readNumber(A, km, `${where} km`);
+  const K = readNumber(A, km, where, ' km');
   if (A.sign(K) < 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where} km`, `K = ${A.toString(K)} km is negative`);
   // Allowable section misclosure c·√K mm (FGCC 1984; c from memory).
   const allowable = sqrtOf(A, A.mul(A.mul(c, c), K));
@@ -221,7 +221,7 @@ export function levelRun<T, E extends boolean>(A: Arithmetic<T, E>, input: Level
   const list = readArray<LevelSight<T>>(input.sights, `${where} sights`);
   if (list.length < 2) throw new QuadspreadError('TOO_FEW_POINTS', `${where} sights`, `a run needs at least 2 rows (a backsight and a foresight), got ${list.length}`);
   const unit = checkLengthUnit(input.unit ?? 'm', `${where} unit`);
-  const start = readNumber(A, input.start, `${where} start`);
+  const start = readNumber(A, input.start, where, ' start');
   const n = list.length;
 
   const bs = new Array<T | undefined>(n);
@@ -346,14 +346,14 @@ export function levelRun<T, E extends boolean>(A: Arithmetic<T, E>, input: Level
     totalWeight = A.from(setup[n - 1]!);
   }
   if (input.close !== undefined) {
-    misclosure = A.sub(last, readNumber(A, input.close, `${where} close`));
+    misclosure = A.sub(last, readNumber(A, input.close, where, ' close'));
     misclosureMm = A.mul(A.mul(misclosure, toMetres), A.from(1000));
   } else if (input.order !== undefined) {
     throw new QuadspreadError('INVALID_ARGUMENT', `${where} order`, 'an allowable misclosure needs the known closing level `close`');
   }
   if (input.order !== undefined && misclosureMm !== undefined) {
     let km: T;
-    if (input.km !== undefined) km = readNumber(A, input.km, `${where} km`);
+    if (input.km !== undefined) km = readNumber(A, input.km, where, ' km');
     else if (allDistances) km = A.div(A.mul(totalDistance, toMetres), A.from(1000));
     else throw new QuadspreadError('INVALID_ARGUMENT', `${where} km`, 'give the section length km, or a distance on every row after the first');
     allowable = allowableMisclosure(A, input.order, km);

@@ -115,7 +115,7 @@ export function resection<T>(A: Arithmetic<T, boolean>, input: ResectionInput<T>
   };
   const a12 = readAngle(ang[0]!, 'angles[0] (a12)');
   const a23 = readAngle(ang[1]!, 'angles[1] (a23)');
-  const tol = readNumber(A, input.dangerTolerance ?? DANGER_CIRCLE_TOLERANCE, `${where} dangerTolerance`);
+  const tol = readNumber(A, input.dangerTolerance ?? DANGER_CIRCLE_TOLERANCE, where, ' dangerTolerance');
   if (A.sign(tol) < 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where} dangerTolerance`, `${A.toString(tol)} is negative`);
 
   for (let i = 0; i < 3; i++) {

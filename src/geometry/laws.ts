@@ -111,7 +111,7 @@ export function tripleQuadResidual<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Nume
 export function archimedesResidual<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Numeric<T>, Q3: Numeric<T>, area: Numeric<T>): T {
   const w = 'archimedesResidual(A, Q1, Q2, Q3, area)';
   const q = archimedes(A, readQuadrance(A, Q1, w, 'Q1'), readQuadrance(A, Q2, w, 'Q2'), readQuadrance(A, Q3, w, 'Q3'));
-  const s = readNumber(A, area, `${w} area`);
+  const s = readNumber(A, area, w, ' area');
   // Archimedes' formula, quadrea = 16·area²: Heron's formula in quadrances (Heron, Metrica I.8; derived).
   return A.sub(q, A.mul(A.from(16), A.mul(s, s)));
 }

@@ -48,7 +48,7 @@ export interface Line<T> {
  */
 export function line<T>(A: Arithmetic<T>, a: Numeric<T>, b: Numeric<T>, c: Numeric<T>): Line<T> {
   const w = 'line(A, a, b, c)';
-  const l = { a: readNumber(A, a, `${w} a`), b: readNumber(A, b, `${w} b`), c: readNumber(A, c, `${w} c`) };
+  const l = { a: readNumber(A, a, w, ' a'), b: readNumber(A, b, w, ' b'), c: readNumber(A, c, w, ' c') };
   if (A.isZero(l.a) && A.isZero(l.b)) {
     throw new QuadspreadError('DEGENERATE_LINE', w, `a and b are both zero (c = ${show(A.toString(l.c))}), which is no line`);
   }

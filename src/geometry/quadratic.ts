@@ -32,12 +32,12 @@ import { readNumber } from './validate.js';
  */
 export function solveQuadratic<T, E extends boolean>(A: Arithmetic<T, E>, a: Numeric<T>, b: Numeric<T>, c: Numeric<T>): Root<T, E>[] {
   const w = 'solveQuadratic(A, a, b, c)';
-  const qa = readNumber(A, a, `${w} a`);
-  const qb = readNumber(A, b, `${w} b`);
-  const qc = readNumber(A, c, `${w} c`);
+  const qa = readNumber(A, a, w, ' a');
+  const qb = readNumber(A, b, w, ' b');
+  const qc = readNumber(A, c, w, ' c');
   if (A.isZero(qa)) {
     if (A.isZero(qb)) {
-      throw new QuadspreadError('INVALID_ARGUMENT', 'solveQuadratic(A, a, b, c)', `a and b are both zero (c = ${show(A.toString(qc))}): no equation in x`);
+      throw new QuadspreadError('INVALID_ARGUMENT', w, `a and b are both zero (c = ${show(A.toString(qc))}): no equation in x`);
     }
     const x = A.neg(A.div(qc, qb));
     return [(A.exact ? surd(A, x) : x) as Root<T, E>];

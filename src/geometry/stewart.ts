@@ -103,7 +103,7 @@ function stewartQ<T>(A: Arithmetic<T>, QB: T, QC: T, QD: T, QBD: T, QBC: T): T {
 export function stewartResidual<T>(A: Arithmetic<T>, data: StewartChainages<Numeric<T>>): T {
   const w = 'stewartResidual(A, data)';
   checkData(data, w);
-  return stewart(A, readQuadrance(A, data.QB, w, 'QB'), readQuadrance(A, data.QC, w, 'QC'), readQuadrance(A, data.QD, w, 'QD'), readNumber(A, data.tB, `${w} tB`), readNumber(A, data.tC, `${w} tC`), readNumber(A, data.tD, `${w} tD`));
+  return stewart(A, readQuadrance(A, data.QB, w, 'QB'), readQuadrance(A, data.QC, w, 'QC'), readQuadrance(A, data.QD, w, 'QD'), readNumber(A, data.tB, w, ' tB'), readNumber(A, data.tC, w, ' tC'), readNumber(A, data.tD, w, ' tD'));
 }
 
 /**
@@ -193,7 +193,7 @@ export function solveStewart<T, E extends boolean>(A: Arithmetic<T, E>, data: Pa
   const v: Record<string, T> = {};
   for (const k of CHAINAGE_KEYS) {
     if (k === key) continue;
-    v[k] = k[0] === 'Q' ? readQuadrance(A, data[k]!, w, k) : readNumber(A, data[k]!, `${w} ${k}`);
+    v[k] = k[0] === 'Q' ? readQuadrance(A, data[k]!, w, k) : readNumber(A, data[k]!, w, ` ${k}`);
   }
   const ts = (['tB', 'tC', 'tD'] as const).filter((k) => k !== key);
   if (A.eq(v[ts[0]!]!, v[ts[1]!]!)) {

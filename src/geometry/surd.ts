@@ -364,9 +364,9 @@ export function isSurd(x: unknown): x is Surd<unknown> {
  */
 export function surd<T>(A: Arithmetic<T>, a: Numeric<T>, b: Numeric<T> = 0, d: Numeric<T> = 1): Surd<T> {
   const w = 'surd(A, a, b, d)';
-  const ra = readNumber(A, a, `${w} a`);
-  let rb = readNumber(A, b, `${w} b`);
-  let rd = readNumber(A, d, `${w} d`);
+  const ra = readNumber(A, a, w, ' a');
+  let rb = readNumber(A, b, w, ' b');
+  let rd = readNumber(A, d, w, ' d');
   if (A.isZero(rb) || A.isZero(rd)) return new SurdValue(A, ra, A.zero, A.one);
   if (A.sign(rd) < 0) throw new QuadspreadError('NO_REAL_SOLUTION', w, `the radicand d = ${show(A.toString(rd))} is negative`);
   if ((rd as unknown) instanceof Fraction && (rb as unknown) instanceof Fraction) {

@@ -30,7 +30,7 @@ export function readNumber<T>(A: Arithmetic<T>, x: Numeric<T>, where: string | (
  * @internal
  */
 export function readQuadrance<T>(A: Arithmetic<T>, x: Numeric<T>, where: string, arg: string): T {
-  const v = readNumber(A, x, `${where} ${arg}`);
+  const v = readNumber(A, x, where, ` ${arg}`);
   if (A.sign(v) < 0) throw new QuadspreadError('NEGATIVE_QUADRANCE', where, `${arg} = ${show(A.toString(v))} is negative; a quadrance is a squared distance`);
   return v;
 }
@@ -41,7 +41,7 @@ export function readQuadrance<T>(A: Arithmetic<T>, x: Numeric<T>, where: string,
  * @internal
  */
 export function readSpread<T>(A: Arithmetic<T>, x: Numeric<T>, where: string, arg: string): T {
-  const v = readNumber(A, x, `${where} ${arg}`);
+  const v = readNumber(A, x, where, ` ${arg}`);
   if (A.sign(v) < 0 || A.cmp(v, A.one) > 0) throw new QuadspreadError('SPREAD_OUT_OF_RANGE', where, `${arg} = ${show(A.toString(v))} is outside [0, 1]`);
   return v;
 }
