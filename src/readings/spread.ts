@@ -33,7 +33,8 @@ export function checkSpread<T>(A: Arithmetic<T>, s: Numeric<T>, where: string): 
  * @param angle the angle: degrees, DMS text, or a number in `unit`
  * @param unit `'deg'` (default), `'gon'`, `'mil'` or `'rad'`
  * @returns the spread, in [0, 1]
- * @throws {QuadspreadError} as {@link angleToDegrees}.
+ * @throws {QuadspreadError} as {@link angleToDegrees}; `INVALID_ANGLE` for an angle too large
+ *   to reduce (as {@link sinCosDegrees}).
  * @example
  * ```ts
  * import { rational, spreadFromDegrees } from 'quadspread';

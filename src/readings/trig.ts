@@ -65,7 +65,9 @@ function firstQuadrant<T>(A: Arithmetic<T>, t: T, ninety: T): { sin: T; cos: T }
  * @param A the arithmetic
  * @param degrees the angle in degrees
  * @returns `{ sin, cos }`
- * @throws {QuadspreadError} `INVALID_NUMBER` when `degrees` is not a number.
+ * @throws {QuadspreadError} `INVALID_NUMBER` when `degrees` is not a number; `INVALID_ANGLE`
+ *   when it is too large to reduce mod 360° (over about 10¹²° in `float`, where the remainder
+ *   would be rounding noise).
  * @example
  * ```ts
  * import { rational, sinCosDegrees } from 'quadspread';
