@@ -17,7 +17,7 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber } from '../geometry/validate.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { ellipsoidParameters, readEllipsoid, type Ellipsoid, type EllipsoidParameters } from './ellipsoid.js';
-import { claimedDigits, delegateFor, readHeight, readLatitude, readLongitude, root, settle, tenToMinus, toDegrees } from './internal.js';
+import { claimedDigits, delegateFor, readHeight, readLatitude, readLongitude, root, tenToMinus, toDegrees } from './internal.js';
 
 /**
  * The height reduction factor R/(R + h): a horizontal distance measured on the ground at
@@ -81,12 +81,12 @@ const ALPHA: readonly (readonly (readonly [number, number, number])[])[] = [
 ];
 
 /** Σ z^(2k+1)/(2k+1) = atanh z for |z| < 1/10, in A, until a term is below tol. */
-function atanhSmall<T>(A: Arithmetic<T>, z: T, tol: T, d: number): T {
+function atanhSmall<T>(A: Arithmetic<T>, z: T, tol: T): T {
   const z2 = A.mul(z, z);
   let p = z;
   let sum = z;
   for (let k = 3; k < 400; k += 2) {
-    p = settle(A, A.mul(p, z2), d);
+    p = A.mul(p, z2);
     const term = A.div(p, A.from(k));
     sum = A.add(sum, term);
     if (A.cmp(A.abs(term), tol) <= 0) break;
@@ -95,12 +95,12 @@ function atanhSmall<T>(A: Arithmetic<T>, z: T, tol: T, d: number): T {
 }
 
 /** Σ w^(2k+1)/(2k+1)! = sinh w for |w| < 1/10, in A, until a term is below tol. */
-function sinhSmall<T>(A: Arithmetic<T>, w: T, tol: T, d: number): T {
+function sinhSmall<T>(A: Arithmetic<T>, w: T, tol: T): T {
   const w2 = A.mul(w, w);
   let t = w;
   let sum = w;
   for (let k = 2; k < 400; k += 2) {
-    t = settle(A, A.div(A.mul(t, w2), A.from(k * (k + 1))), d);
+    t = A.div(A.mul(t, w2), A.from(k * (k + 1)));
     sum = A.add(sum, t);
     if (A.cmp(A.abs(t), tol) <= 0) break;
   }
@@ -108,15 +108,15 @@ function sinhSmall<T>(A: Arithmetic<T>, w: T, tol: T, d: number): T {
 }
 
 /** atanh z for |z| < 1: halve by atanh z = 2 atanh(z/(1 + √(1 − z²))) until |z| < 1/10, then the series. */
-function atanhAny<T>(A: Arithmetic<T>, z: T, tol: T, d: number): T {
+function atanhAny<T>(A: Arithmetic<T>, z: T, tol: T): T {
   let doublings = 0;
   const tenth = A.from('0.1');
   while (A.cmp(A.abs(z), tenth) > 0 && doublings < 60) {
     // tanh(x/2) = tanh x/(1 + sech x), sech x = √(1 − tanh²x)
-    z = settle(A, A.div(z, A.add(A.one, root(A, A.sub(A.one, A.mul(z, z))))), d);
+    z = A.div(z, A.add(A.one, root(A, A.sub(A.one, A.mul(z, z)))));
     doublings += 1;
   }
-  let r = atanhSmall(A, z, tol, d);
+  let r = atanhSmall(A, z, tol);
   for (let i = 0; i < doublings; i++) r = A.add(r, r);
   return r;
 }
@@ -137,29 +137,28 @@ function kruger<T>(A: Arithmetic<T>, E: EllipsoidParameters<T>, lat: T, dlon: T,
   if (A.sign(cl) <= 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where}(point.lon)`, 'the point is 90° or more from the central meridian');
   const digits = claimedDigits(A);
   const tol = tenToMinus(A, digits + 4);
-  const z = (x: T): T => settle(A, x, digits);
   const one = A.one;
   const two = A.from(2);
   // Conformal latitude χ: tan χ = τ′ = τ√(1 + σ²) − σ√(1 + τ²), τ = tan φ,
   // σ = sinh(e atanh(e sin φ)) (Karney 2011, eqs. 7–9); multiplied through by cos φ:
   // S = τ′ cos φ = sin φ √(1 + σ²) − σ, which stays finite at the poles.
   const e = root(A, E.e2);
-  const sigma = z(sinhSmall(A, z(A.mul(e, atanhSmall(A, z(A.mul(e, sp)), tol, digits))), tol, digits));
-  const S = z(A.sub(A.mul(sp, root(A, A.add(one, A.mul(sigma, sigma)))), sigma));
-  const Ccl = z(A.mul(cp, cl));
+  const sigma = sinhSmall(A, A.mul(e, atanhSmall(A, A.mul(e, sp), tol)), tol);
+  const S = A.sub(A.mul(sp, root(A, A.add(one, A.mul(sigma, sigma)))), sigma);
+  const Ccl = A.mul(cp, cl);
   const D2 = A.add(A.mul(S, S), A.mul(Ccl, Ccl)); // cos²φ (τ′² + cos²λ)
   if (A.isZero(D2)) throw new QuadspreadError('INVALID_ARGUMENT', `${where}(point)`, 'the projection is singular at this point');
-  const D = z(root(A, D2));
+  const D = root(A, D2);
   // Gauss–Schreiber: ξ′ = atan2(τ′, cos λ), sinh η′ = sin λ/√(τ′² + cos²λ) (Karney 2011, eq. 10)
-  const sx = z(A.div(S, D)); // sin ξ′
-  const cx = z(A.div(Ccl, D)); // cos ξ′
-  const she = z(A.div(A.mul(cp, sl), D)); // sinh η′
-  const che = z(root(A, A.add(one, A.mul(she, she)))); // cosh η′
+  const sx = A.div(S, D); // sin ξ′
+  const cx = A.div(Ccl, D); // cos ξ′
+  const she = A.div(A.mul(cp, sl), D); // sinh η′
+  const che = root(A, A.add(one, A.mul(she, she))); // cosh η′
   // Double angles, then multiples by (cos + i sin)^j and (cosh + sinh)^j.
-  const c2 = z(A.sub(A.mul(cx, cx), A.mul(sx, sx)));
-  const s2 = z(A.mul(two, A.mul(sx, cx)));
-  const ch2 = z(A.add(one, A.mul(two, A.mul(she, she))));
-  const sh2 = z(A.mul(two, A.mul(she, che)));
+  const c2 = A.sub(A.mul(cx, cx), A.mul(sx, sx));
+  const s2 = A.mul(two, A.mul(sx, cx));
+  const ch2 = A.add(one, A.mul(two, A.mul(she, she)));
+  const sh2 = A.mul(two, A.mul(she, che));
   const n = E.n;
   const powers: T[] = [one];
   for (let i = 1; i <= 6; i++) powers.push(A.mul(powers[i - 1]!, n));
@@ -174,22 +173,21 @@ function kruger<T>(A: Arithmetic<T>, E: EllipsoidParameters<T>, lat: T, dlon: T,
   for (let j = 1; j <= 6; j++) {
     let alpha = A.zero;
     for (const [num, den, pow] of ALPHA[j - 1]!) alpha = A.add(alpha, A.div(A.mul(A.from(num), powers[pow]!), A.from(den)));
-    alpha = z(alpha);
-    const w = z(A.mul(A.from(2 * j), alpha));
-    pp = z(A.add(pp, A.mul(w, A.mul(cj, chj))));
-    qq = z(A.add(qq, A.mul(w, A.mul(sj, shj))));
+    const w = A.mul(A.from(2 * j), alpha);
+    pp = A.add(pp, A.mul(w, A.mul(cj, chj)));
+    qq = A.add(qq, A.mul(w, A.mul(sj, shj)));
     if (wantGrid) {
-      dxi = z(A.add(dxi, A.mul(alpha, A.mul(sj, chj))));
-      deta = z(A.add(deta, A.mul(alpha, A.mul(cj, shj))));
+      dxi = A.add(dxi, A.mul(alpha, A.mul(sj, chj)));
+      deta = A.add(deta, A.mul(alpha, A.mul(cj, shj)));
     }
     const cn = A.sub(A.mul(cj, c2), A.mul(sj, s2));
     const sn = A.add(A.mul(sj, c2), A.mul(cj, s2));
     const chn = A.add(A.mul(chj, ch2), A.mul(shj, sh2));
     const shn = A.add(A.mul(shj, ch2), A.mul(chj, sh2));
-    cj = z(cn);
-    sj = z(sn);
-    chj = z(chn);
-    shj = z(shn);
+    cj = cn;
+    sj = sn;
+    chj = chn;
+    shj = shn;
   }
   // Rectifying radius over a: A/a = (1 + n²/4 + n⁴/64 + n⁶/256)/(1 + n) (Karney 2011, eq. 14)
   const Aa = A.div(
@@ -208,7 +206,7 @@ function kruger<T>(A: Arithmetic<T>, E: EllipsoidParameters<T>, lat: T, dlon: T,
   if (!wantGrid) return out;
   // ξ = ξ′ + Σ α_j sin 2jξ′ cosh 2jη′, η = η′ + Σ α_j cos 2jξ′ sinh 2jη′ (Krüger; Karney 2011, eq. 11)
   const xiP = A.atan2(S, Ccl);
-  const etaP = atanhAny(A, z(A.div(she, che)), tol, digits); // η′ = atanh(tanh η′)
+  const etaP = atanhAny(A, A.div(she, che), tol); // η′ = atanh(tanh η′)
   return { ...out, xi: A.add(xiP, dxi), eta: A.add(etaP, deta) };
 }
 

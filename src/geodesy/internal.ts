@@ -68,15 +68,6 @@ export function toDegrees<T>(A: Arithmetic<T>, rad: T): T {
   return A.div(A.mul(rad, A.from(180)), A.pi); // π rad = 180° (definition of the radian)
 }
 
-/**
- * @internal In an exact arithmetic, x rounded to `digits` + 8 significant digits (for
- * intermediate values of computations that are approximations anyway, so that fractions
- * stay short); x itself otherwise.
- */
-export function settle<T>(A: Arithmetic<T>, x: T, digits: number): T {
-  return A.exact ? A.from(A.toPrecision(x, digits + 8)) : x;
-}
-
 const decimalMemo = new Map<number, DecimalArithmetic>();
 /**
  * @internal A decimal arithmetic with `digits` significant digits (a pure memo: decimal
