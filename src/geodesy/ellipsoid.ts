@@ -7,6 +7,7 @@
 import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { rational } from '../arithmetic/rational.js';
+import { readNumber } from '../geometry/validate.js';
 
 /**
  * An oblate ellipsoid of revolution, defined exactly: the semi-major axis `a` in metres
@@ -61,6 +62,9 @@ export const GRS80: Ellipsoid = Object.freeze({
 
 const KNOWN: Readonly<Record<string, Ellipsoid>> = { WGS84, GRS80 };
 
+/** Ellipsoids known to be valid: the built-in ones and those made by {@link defineEllipsoid} (frozen). */
+const CHECKED = new WeakSet<Ellipsoid>([WGS84, GRS80]);
+
 /** What {@link defineEllipsoid} accepts: a and exactly one of f, 1/f or b. */
 export interface EllipsoidDefinition {
   readonly name?: string;
@@ -99,26 +103,28 @@ export function defineEllipsoid(def: EllipsoidDefinition): Ellipsoid {
     throw new QuadspreadError('INVALID_ELLIPSOID', where, `give exactly one of f, invF, b (got ${given.length === 0 ? 'none' : given.join(', ')})`);
   }
   const R = rational;
-  const a = R.from(def.a as Numeric<never>);
+  const a = readNumber(R, def.a as Numeric<never>, `${where}.a`);
   if (R.sign(a) <= 0) throw new QuadspreadError('INVALID_ELLIPSOID', where, `a = ${show(def.a)} is not positive`);
   let f;
-  if (def.f !== undefined) f = R.from(def.f);
+  if (def.f !== undefined) f = readNumber(R, def.f, `${where}.f`);
   else if (def.invF !== undefined) {
-    const inv = R.from(def.invF);
+    const inv = readNumber(R, def.invF, `${where}.invF`);
     if (R.cmp(inv, R.one) <= 0) throw new QuadspreadError('INVALID_ELLIPSOID', where, `invF = ${show(def.invF)} is not above 1`);
     f = R.div(R.one, inv);
   } else {
-    const b = R.from(def.b as Numeric<never>);
+    const b = readNumber(R, def.b as Numeric<never>, `${where}.b`);
     if (R.sign(b) <= 0 || R.cmp(b, a) > 0) throw new QuadspreadError('INVALID_ELLIPSOID', where, `b = ${show(def.b)} is not in (0, a]`);
     f = R.div(R.sub(a, b), a); // f = (a − b)/a, the definition of flattening
   }
   if (R.sign(f) < 0 || R.cmp(f, R.one) >= 0) throw new QuadspreadError('INVALID_ELLIPSOID', where, `f = ${R.toString(f)} is not in [0, 1)`);
-  return Object.freeze({
+  const e: Ellipsoid = Object.freeze({
     name: def.name ?? 'user-defined',
     a: R.toString(a),
     f: R.toString(f),
     source: def.source ?? 'user-defined',
   });
+  CHECKED.add(e);
+  return e;
 }
 
 /**
@@ -152,6 +158,14 @@ export function readEllipsoid(e: Ellipsoid | string | undefined, where: string):
   }
   if (e === null || typeof e !== 'object' || typeof e.a !== 'string' || typeof e.f !== 'string') {
     throw new QuadspreadError('UNKNOWN_ELLIPSOID', where, `${show(e)} is not an ellipsoid (use WGS84, GRS80, a name or defineEllipsoid)`);
+  }
+  if (CHECKED.has(e)) return e;
+  // A hand-made { a, f } object: checked as defineEllipsoid would (a > 0, 0 ≤ f < 1) on every use.
+  try {
+    defineEllipsoid({ a: e.a, f: e.f });
+  } catch (err) {
+    if (!(err instanceof QuadspreadError)) throw err;
+    throw new QuadspreadError('INVALID_ELLIPSOID', where, `${show(e)} is not a valid ellipsoid: ${err.message.slice(`quadspread ${err.code}: ${err.where}: `.length)}`);
   }
   return e;
 }

@@ -358,6 +358,9 @@ describe('bad input gets typed errors', () => {
     ['an inverse projection of non-numeric text', () => transverseMercatorInverse(A, { E: 'east', N: 0 }, { lon0: 0, ellipsoid: GRS80 }), 'INVALID_NUMBER'],
     ['a latitude of 95° for the TM origin', () => transverseMercator(A, { lat: 10, lon: 0 }, { lon0: 0, lat0: 95, ellipsoid: GRS80 }), 'LATITUDE_OUT_OF_RANGE'],
     ['a negative distance for flatEarthError', () => flatEarthError(A, -1), 'INVALID_ARGUMENT'],
+    ['a hand-made ellipsoid with f = 2', () => geodeticToGeocentric(A, { lat: 0, lon: 0 }, { name: 'x', a: '6378137', f: '2', source: 'x' }), 'INVALID_ELLIPSOID'],
+    ['a hand-made ellipsoid with a = 0', () => ellipsoidParameters(A, { name: 'x', a: '0', f: '0', source: 'x' }), 'INVALID_ELLIPSOID'],
+    ['a hand-made ellipsoid with unreadable a', () => meridianRadius(A, 10, { name: 'x', a: 'big', f: '0', source: 'x' }), 'INVALID_ELLIPSOID'],
   ];
   for (const [what, f, c] of cases) {
     it(`throws ${c} for ${what}`, () => {
@@ -381,10 +384,21 @@ describe('an unreadable number names the function and the argument it came in', 
     ['transverseMercatorInverse(point.N)', () => transverseMercatorInverse(A, { E: 0, N: 'north' }, tm)],
     ['groundToGrid(ground)', () => groundToGrid(A, 'far', 1)],
     ['gridToGround(factor)', () => gridToGround(A, 100, 'one')],
+    ['defineEllipsoid(def).a', () => defineEllipsoid({ a: 'abc', invF: 300 })],
+    ['defineEllipsoid(def).invF', () => defineEllipsoid({ a: 1, invF: 'flat' })],
   ];
   for (const [where, f] of cases) {
     it(`names ${where}`, () => {
       expect(f).toThrow(expect.objectContaining({ code: 'INVALID_NUMBER', where }));
     });
   }
+});
+
+describe('a hand-made ellipsoid object', () => {
+  it('that is valid gives the same coordinates as the built-in one with the same a and f', () => {
+    const own = { name: 'mine', a: GRS80.a, f: GRS80.f, source: 'copied' };
+    const p = geodeticToGeocentric(float, { lat: 45, lon: 7, h: 100 }, own);
+    const q = geodeticToGeocentric(float, { lat: 45, lon: 7, h: 100 }, GRS80);
+    expect([p.X, p.Y, p.Z]).toEqual([q.X, q.Y, q.Z]);
+  });
 });
