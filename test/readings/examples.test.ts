@@ -1,5 +1,5 @@
-// Runs the @example of every export in src/readings and src/elevation: each line followed by
-// `//=> literal` must evaluate to a value deep-equal to that literal.
+// Runs the @example of every export in src/readings and src/elevation, and the code blocks of their
+// guides: each line followed by `//=> literal` must evaluate to a value deep-equal to that literal.
 import { describe, expect, it } from 'vitest';
 import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
@@ -29,6 +29,23 @@ function toJs(code: string): string {
   }
   return transformSync(out.join('\n'), { loader: 'ts' }).code;
 }
+
+// The code blocks of the two guides run too: every `//=>` result in them must hold.
+describe('the code blocks of docs/readings.md and docs/heights.md hold', () => {
+  for (const guide of ['readings.md', 'heights.md']) {
+    const text = readFileSync(join(__dirname, '../../docs', guide), 'utf8');
+    const re = /^```ts\n([\s\S]*?)^```/gm;
+    for (let m = re.exec(text); m; m = re.exec(text)) {
+      const code = m[1]!;
+      if (!code.includes('//=>')) continue;
+      it(`docs/${guide}:${text.slice(0, m.index).split('\n').length}`, () => {
+        let n = 0;
+        new Function('lib', 'check', toJs(code))(quadspread, (got: unknown, want: unknown) => { n++; expect(got).toEqual(want); });
+        expect(n).toBe(code.split('\n').filter((l) => l.trim().startsWith('//=>')).length);
+      });
+    }
+  }
+});
 
 for (const dir of areas) {
   const files = readdirSync(dir).filter((f) => f.endsWith('.ts') && f !== 'index.ts');
