@@ -29,8 +29,8 @@ export function makeCases(n, seed = 1, digits) {
 
 // ---- the same formulas as src/geometry/triangle.ts, written plainly ----------------------
 // u = A2 − A1, v = A3 − A1, w = A3 − A2; Q1 = w·w, Q2 = v·v, Q3 = u·u; D = u × v;
-// s1 = D²/(Q2·Q3), s2 = D²/(Q1·Q3), s3 = D²/(Q1·Q2) (Wildberger, Divine Proportions, 2005,
-// ch. 5); quadrea = 4·D² (= 16·area²).
+// s1 = D²/(Q2·Q3), s2 = D²/(Q1·Q3), s3 = D²/(Q1·Q2) (sin²θ = |u × v|²/(|u|²|v|²), Lagrange's
+// identity; derived); quadrea = 4·D² (= 16·area², Heron, Metrica I.8, in squared form).
 
 /** Hand-written float code. */
 export function handFloat(P1, P2, P3) {

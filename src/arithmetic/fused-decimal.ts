@@ -193,8 +193,9 @@ export function decimalKernels(digits: number, zero: Big, from: (x: unknown) => 
 
   /**
    * triangle(A1, A2, A3) exactly, then rounded once per measure: Q1 = Q(A2, A3) etc.;
-   * s1 = c²/(Q2·Q3) with c the cross product (A2 − A1) × (A3 − A1) (Wildberger, *Divine
-   * Proportions*, 2005, ch. 7); quadrea = 4c² = 16·area² (Archimedes' formula, ibid.).
+   * s1 = c²/(Q2·Q3) with c the cross product (A2 − A1) × (A3 − A1) (sin²θ =
+   * |u × v|²/(|u|²|v|²) by Lagrange's identity; derived); quadrea = 4c² = 16·area² (Heron,
+   * Metrica I.8, in squared form).
    */
   function triangle(x1: Big, y1: Big, x2: Big, y2: Big, x3: Big, y3: Big): FusedTriangle<Big> | undefined {
     const e1 = exponent(x1), e2 = exponent(y1), e3 = exponent(x2), e4 = exponent(y2), e5 = exponent(x3), e6 = exponent(y3);

@@ -75,9 +75,9 @@ function ratioOver(c2: bigint, p: bigint, q: bigint): Fraction {
 
 /**
  * triangle(A1, A2, A3) from its six coordinates, exactly: Q1 = Q(A2, A3) etc.;
- * s1 = c²/(Q2·Q3), where c is the cross product (A2 − A1) × (A3 − A1) (Wildberger, *Divine
- * Proportions*, 2005, ch. 7: spread from cross product); quadrea = 4c² = 16·area²
- * (Archimedes' formula, ibid.). Undefined when two points coincide or the three are
+ * s1 = c²/(Q2·Q3), where c is the cross product (A2 − A1) × (A3 − A1) (sin²θ =
+ * |u × v|²/(|u|²|v|²) by Lagrange's identity; derived); quadrea = 4c² = 16·area²
+ * (Heron, Metrica I.8, in squared form). Undefined when two points coincide or the three are
  * collinear, so that the caller's generic path reports those cases.
  */
 function triangle(x1: Fraction, y1: Fraction, x2: Fraction, y2: Fraction, x3: Fraction, y3: Fraction): FusedTriangle<Fraction> | undefined {

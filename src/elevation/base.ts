@@ -44,8 +44,8 @@ export interface BaseHeight<T, E extends boolean> {
  * point's vertical quadrance H above the stations' level.
  *
  * The spread s₃ at the foot follows from the triple spread formula
- * (s₁ + s₂ + s₃)² = 2(s₁² + s₂² + s₃²) + 4s₁s₂s₃ (Wildberger, *Divine Proportions*, 2005,
- * ch. 6; chapter from memory), whose two solutions s₃ = s₁ + s₂ − 2s₁s₂ ± 2√(s₁s₂(1 − s₁)(1 − s₂)) are the two
+ * (s₁ + s₂ + s₃)² = 2(s₁² + s₂² + s₃²) + 4s₁s₂s₃ (derived: the
+ * angles of a triangle sum to a straight angle, written in sin²), whose two solutions s₃ = s₁ + s₂ − 2s₁s₂ ± 2√(s₁s₂(1 − s₁)(1 − s₂)) are the two
  * triangles the spreads allow: `+` when both interior angles at the stations are acute
  * (`foot: 'between'`), `−` when one is obtuse (`foot: 'beyond'`). Spreads alone cannot tell
  * them apart: the caller says which with `foot`, or gives the horizontal interior `angles`

@@ -12,8 +12,8 @@ import { readVertical, type VerticalInput } from '../readings/vertical.js';
  * The vertical quadrance H of a point above (or below) the instrument's horizontal plane,
  * from the horizontal quadrance Q to the point's foot and the vertical spread R of the
  * sight: H = Q·R/(1 − R). (In the right triangle instrument–foot–point the spread at the
- * instrument is R = H/(H + Q): Wildberger, *Divine Proportions*, 2005, ch. 5 (chapter from memory), the spread
- * as a ratio of quadrances; solved for H.)
+ * instrument is R = H/(H + Q): sin² of the elevation angle as a ratio of
+ * quadrances (derived, Pythagoras, Euclid, Elements I.47); solved for H.)
  *
  * H is a quadrance (the height squared): it has no sign. A reading below the horizon
  * (a {@link VerticalReading} with `sign` −1) gives the same H, for a point below the plane;

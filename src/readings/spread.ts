@@ -20,8 +20,8 @@ export function checkSpread<T>(A: Arithmetic<T>, s: Numeric<T>, where: string): 
 }
 
 /**
- * The spread of an angle: s = sin²θ (Wildberger, *Divine Proportions*, 2005, ch. 5, chapter from memory: the
- * spread of two lines is the square of the sine of the angle between them).
+ * The spread of an angle: s = sin²θ (the definition of spread: the square of the sine of
+ * the angle between two lines).
  *
  * Exact in `rational` when θ is a multiple of 30° or 45° (spreads 0, 1/4, 1/2, 3/4, 1);
  * otherwise the square of {@link sinCosDegrees}' sine, within the arithmetic's stated

@@ -90,8 +90,8 @@ function spreadSlope<T>(U: UncertainArithmetic<T>, degrees: T): T {
 
 /**
  * The spread s = sin²θ of an uncertain angle θ in degrees (value by `spreadFromDegrees`),
- * with ds/dθ = 2 sin θ cos θ · π/180 per degree (the derivative of sin²; Wildberger,
- * *Divine Proportions*, 2005, ch. 5 for s = sin²θ).
+ * with ds/dθ = 2 sin θ cos θ · π/180 per degree (the derivative of sin²θ, the
+ * definition of spread).
  *
  * @param U the uncertain arithmetic
  * @param degrees the angle in degrees, e.g. from {@link measuredAngle}
