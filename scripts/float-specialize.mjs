@@ -55,8 +55,8 @@ const CONSTANTS = { zero: '0', one: '1', kernels: 'undefined' };
 /** The helpers: each is exactly the float arithmetic's operation (src/arithmetic/float.ts). */
 const HELPER_SOURCE = `import { float as __qsFloat } from './arithmetic/float.js';
 export { __qsFloat };
-export const __qsDiv = (a, b) => (b === 0 ? __qsFloat.div(a, b) : a / b);
-export const __qsSqrt = (a) => (a < 0 ? __qsFloat.sqrt(a) : Math.sqrt(a));
+export const __qsDiv = (a, b) => { const r = a / b; return r - r === 0 ? r : __qsFloat.div(a, b); };
+export const __qsSqrt = (a) => { const r = Math.sqrt(a); return r - r === 0 ? r : __qsFloat.sqrt(a); };
 export const __qsCmp = (a, b) => (a < b ? -1 : a > b ? 1 : 0);
 export const __qsSign = (a) => (a < 0 ? -1 : a > 0 ? 1 : 0);
 export const __qsFrom = (x) => (typeof x === 'number' && x - x === 0 ? x : __qsFloat.from(x));

@@ -19,7 +19,9 @@ function finite(v: number, where: string): number {
  * The float arithmetic: fast, rounding every operation to the nearest JS number.
  * NaN and ±Infinity are refused where values enter (`from`) and where they leave
  * (`toNumber`, `toString`, `toPrecision`); `div` refuses a zero divisor and `sqrt` a
- * negative argument, so neither can make one. Text is read correctly rounded (`'1/3'`
+ * negative argument, and both refuse a result that is not finite (`NOT_FINITE`), so an
+ * overflow met in `add`, `sub` or `mul` — left unchecked for speed, and possible only with
+ * magnitudes near 1e308 — is caught at the next division, root or conversion. Text is read correctly rounded (`'1/3'`
  * gives the double nearest to 1/3).
  *
  * @example
@@ -52,7 +54,10 @@ export const float: FloatArithmetic = {
   mul: (a, b) => a * b,
   div(a, b) {
     if (b === 0) throw new QuadspreadError('DIVISION_BY_ZERO', 'float.div(a, b)', `b is zero (a = ${show(a)})`);
-    return a / b;
+    const r = a / b;
+    // Infinity/Infinity, NaN/x or an overflowing quotient: refuse rather than pass NaN on.
+    if (r - r !== 0) throw new QuadspreadError('NOT_FINITE', 'float.div(a, b)', `${show(a)} / ${show(b)} is not finite`);
+    return r;
   },
   neg: (a) => -a,
   abs: (a) => Math.abs(a),
@@ -62,7 +67,9 @@ export const float: FloatArithmetic = {
   sign: (a) => (a < 0 ? -1 : a > 0 ? 1 : 0),
   sqrt(a) {
     if (a < 0) throw new QuadspreadError('NO_REAL_SOLUTION', 'float.sqrt(a)', `a = ${show(a)} is negative`);
-    return Math.sqrt(a);
+    const r = Math.sqrt(a);
+    if (r - r !== 0) throw new QuadspreadError('NOT_FINITE', 'float.sqrt(a)', `a = ${show(a)} is not finite`);
+    return r;
   },
   toNumber: (a) => finite(a, 'float.toNumber(a)'),
   toString: (a) => String(finite(a, 'float.toString(a)') + 0),

@@ -179,6 +179,13 @@ describe.each(all3)('%s refuses what has no value', (_n, A) => {
 });
 
 describe('float', () => {
+  it('div and sqrt refuse a result that is not finite (an overflow met earlier in mul)', () => {
+    const inf = float.mul(1e200, 1e200); // unchecked for speed
+    expect(() => float.div(inf, inf)).toThrow(/NOT_FINITE/);
+    expect(() => float.div(1, float.mul(1e-200, 1e-200))).toThrow(/DIVISION_BY_ZERO/);
+    expect(() => float.div(1e300, 1e-300)).toThrow(/NOT_FINITE/);
+    expect(() => float.sqrt(inf)).toThrow(/NOT_FINITE/);
+  });
   it('refuses to let an overflow out as Infinity', () => {
     const big = float.mul(1e200, 1e200);
     expect(() => float.toNumber(big)).toThrow(/NOT_FINITE/);
