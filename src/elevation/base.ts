@@ -5,6 +5,7 @@
  * @module elevation
  */
 import { QuadspreadError, show } from '../errors.js';
+import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Root } from '../geometry/surd.js';
 import { readQuadrance, readSpread } from '../geometry/validate.js';
@@ -89,6 +90,7 @@ export function heightFromBase<T, E extends boolean>(
   },
 ): BaseHeight<T, E> {
   const w = 'heightFromBase(input)';
+  checkObject(input, w);
   const R = rootOps(A);
   const base = readQuadrance(A, input.base, w, 'base');
   if (A.isZero(base)) throw new QuadspreadError('COINCIDENT_POINTS', `${w}.base`, 'the base is zero: the stations coincide');

@@ -4,6 +4,7 @@
  * @module elevation
  */
 import { QuadspreadError, show } from '../errors.js';
+import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readQuadrance } from '../geometry/validate.js';
 import { readVertical, type VerticalInput } from '../readings/vertical.js';
@@ -24,7 +25,8 @@ import { readVertical, type VerticalInput } from '../readings/vertical.js';
  *   [0, 1) or a signed {@link VerticalReading}
  * @returns H, in the square of Q's length unit. Exact in `rational`.
  * @throws {QuadspreadError} `VERTICAL_SIGHT` when R = 1 (a plumb sight with a horizontal
- *   quadrance); `SPREAD_OUT_OF_RANGE`; `NEGATIVE_QUADRANCE`; `INVALID_NUMBER`.
+ *   quadrance); `SPREAD_OUT_OF_RANGE`; `NEGATIVE_QUADRANCE`; `INVALID_NUMBER`;
+ *   `INVALID_ARGUMENT` when `input` is not an object.
  * @example
  * ```ts
  * import { rational, heightFromReading } from 'quadspread';
@@ -33,6 +35,7 @@ import { readVertical, type VerticalInput } from '../readings/vertical.js';
  * ```
  */
 export function heightFromReading<T>(A: Arithmetic<T>, input: { horizontal: Numeric<T>; vertical: VerticalInput<T> }): T {
+  checkObject(input, 'heightFromReading(input)');
   const w = 'heightFromReading(input.vertical)';
   const Q = readQuadrance(A, input.horizontal, 'heightFromReading(input)', 'horizontal');
   const R = readVertical(A, input.vertical, w).spread;
@@ -59,6 +62,7 @@ export function heightFromReading<T>(A: Arithmetic<T>, input: { horizontal: Nume
  * ```
  */
 export function horizontalFromHeight<T>(A: Arithmetic<T>, input: { height: Numeric<T>; vertical: VerticalInput<T> }): T {
+  checkObject(input, 'horizontalFromHeight(input)');
   const H = readQuadrance(A, input.height, 'horizontalFromHeight(input)', 'height');
   const R = readVertical(A, input.vertical, 'horizontalFromHeight(input.vertical)').spread;
   if (A.isZero(R)) {
@@ -76,7 +80,8 @@ export function horizontalFromHeight<T>(A: Arithmetic<T>, input: { height: Numer
  * @param A the arithmetic
  * @param input `height`: H ≥ 0; `horizontal`: Q ≥ 0, not both zero
  * @returns R in [0, 1]
- * @throws {QuadspreadError} `COINCIDENT_POINTS` when H = Q = 0; `NEGATIVE_QUADRANCE`.
+ * @throws {QuadspreadError} `COINCIDENT_POINTS` when H = Q = 0; `NEGATIVE_QUADRANCE`;
+ *   `INVALID_ARGUMENT` when `input` is not an object.
  * @example
  * ```ts
  * import { rational, verticalFromHeight } from 'quadspread';
@@ -85,6 +90,7 @@ export function horizontalFromHeight<T>(A: Arithmetic<T>, input: { height: Numer
  * ```
  */
 export function verticalFromHeight<T>(A: Arithmetic<T>, input: { height: Numeric<T>; horizontal: Numeric<T> }): T {
+  checkObject(input, 'verticalFromHeight(input)');
   const H = readQuadrance(A, input.height, 'verticalFromHeight(input)', 'height');
   const Q = readQuadrance(A, input.horizontal, 'verticalFromHeight(input)', 'horizontal');
   const sum = A.add(H, Q);

@@ -5,6 +5,7 @@
  * @module elevation
  */
 import { QuadspreadError, show } from '../errors.js';
+import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { solveQuadratic } from '../geometry/quadratic.js';
 import { readNumber, readQuadrance } from '../geometry/validate.js';
@@ -110,6 +111,7 @@ export function heightFromInlineReadings<T>(
   const fused = A.kernels?.inlineHeight?.(input);
   if (fused !== undefined) return fused;
   const w = 'heightFromInlineReadings(input)';
+  checkObject(input, w);
   if (!Array.isArray(input.chainages)) throw new QuadspreadError('INVALID_ARGUMENT', `${w}.chainages`, `${show(input.chainages)} is not an array of chainages`);
   const n = input.chainages.length;
   if (n < 3) throw new QuadspreadError('TOO_FEW_STATIONS', w, `${n} station${n === 1 ? '' : 's'}: at least 3 are needed`);
@@ -216,6 +218,7 @@ export function heightFromInlineQuadrances<T, E extends boolean>(
   input: { spacings: readonly [Numeric<T>, Numeric<T>]; vertical: readonly VerticalInput<T>[] },
 ): InlineQuadranceHeight<T, E> {
   const w = 'heightFromInlineQuadrances(input)';
+  checkObject(input, w);
   const R = rootOps(A);
   if (!Array.isArray(input.vertical)) throw new QuadspreadError('INVALID_ARGUMENT', `${w}.vertical`, `${show(input.vertical)} is not an array of readings`);
   if (input.vertical.length < 3) throw new QuadspreadError('TOO_FEW_STATIONS', w, `${input.vertical.length} stations: exactly 3 are needed`);

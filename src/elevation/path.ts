@@ -4,6 +4,7 @@
  * @module elevation
  */
 import { QuadspreadError, show } from '../errors.js';
+import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readSpread } from '../geometry/validate.js';
 
@@ -52,6 +53,7 @@ function readMeasured(m: unknown, where: string): OffsetMeasure {
  */
 export function pathGrade<T>(A: Arithmetic<T>, input: { fall: Numeric<T>; offset: Numeric<T>; measured: OffsetMeasure }): T {
   const w = 'pathGrade(input)';
+  checkObject(input, w);
   const measured = readMeasured(input.measured, `${w}.measured`);
   const S = readSpread(A, input.fall, w, 'fall');
   const R = readSpread(A, input.offset, w, 'offset');
@@ -88,6 +90,7 @@ export function pathGrade<T>(A: Arithmetic<T>, input: { fall: Numeric<T>; offset
  */
 export function pathOffset<T>(A: Arithmetic<T>, input: { fall: Numeric<T>; grade: Numeric<T>; measured: OffsetMeasure }): T {
   const w = 'pathOffset(input)';
+  checkObject(input, w);
   const measured = readMeasured(input.measured, `${w}.measured`);
   const S = readSpread(A, input.fall, w, 'fall');
   const U = readSpread(A, input.grade, w, 'grade');

@@ -5,6 +5,7 @@
  * @module elevation
  */
 import { QuadspreadError, show } from '../errors.js';
+import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { isSurd, type Root, type Surd } from '../geometry/surd.js';
 import { readNumber } from '../geometry/validate.js';
@@ -82,6 +83,7 @@ function radius<T>(A: Arithmetic<T>, o: CurvatureOptions<T>, where: string): { k
  * ```
  */
 export function curvatureRefraction<T>(A: Arithmetic<T>, distance: Numeric<T>, options: CurvatureOptions<T> = {}): T {
+  checkObject(options, 'curvatureRefraction(options)');
   const D = readNumber(A, distance, 'curvatureRefraction(distance)');
   if (A.sign(D) < 0) throw new QuadspreadError('NEGATIVE_QUADRANCE', 'curvatureRefraction(distance)', `${show(typeof distance === 'object' ? A.toString(D) : distance)} is a negative distance`);
   return curvatureFromQuadrance(A, A.mul(D, D), options, 'curvatureRefraction(options)');
@@ -149,6 +151,7 @@ export interface TrigHeight<T, E extends boolean> {
  */
 export function trigHeight<T, E extends boolean>(A: Arithmetic<T, E>, sight: TrigSight<T>): TrigHeight<T, E> {
   const w = 'trigHeight(sight)';
+  checkObject(sight, w);
   const R = rootOps(A);
   if (sight.measured !== 'slope' && sight.measured !== 'horizontal') {
     throw new QuadspreadError('INVALID_ARGUMENT', `${w}.measured`, `${show(sight.measured)} is not 'slope' or 'horizontal'`);
@@ -169,6 +172,7 @@ export function trigHeight<T, E extends boolean>(A: Arithmetic<T, E>, sight: Tri
     V = R.make(A.zero, A.div(A.mul(sg, D), c), A.mul(s, c)); // D·tan α = ±D·√(R(1 − R))/(1 − R)
     Qh = A.mul(D, D);
   }
+  if (sight.correction !== undefined && sight.correction !== false) checkObject(sight.correction, `${w}.correction`);
   const corr = sight.correction === false ? A.zero : curvatureFromQuadrance(A, Qh, sight.correction ?? {}, `${w}.correction`);
   const hi = readNumber(A, sight.instrumentHeight ?? 0, `${w}.instrumentHeight`);
   const hr = readNumber(A, sight.targetHeight ?? 0, `${w}.targetHeight`);
@@ -228,6 +232,9 @@ export function reciprocalTrigHeight<T, E extends boolean>(
   A: Arithmetic<T, E>,
   input: { forward: TrigSight<T>; backward: TrigSight<T> },
 ): ReciprocalTrigHeight<T, E> {
+  checkObject(input, 'reciprocalTrigHeight(input)');
+  checkObject(input.forward, 'reciprocalTrigHeight(input).forward');
+  checkObject(input.backward, 'reciprocalTrigHeight(input).backward');
   const R = rootOps(A);
   const f = trigHeight(A, input.forward).difference;
   const b = trigHeight(A, input.backward).difference;

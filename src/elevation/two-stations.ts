@@ -4,6 +4,7 @@
  * @module elevation
  */
 import { QuadspreadError } from '../errors.js';
+import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { quadrance } from '../geometry/quadrance.js';
@@ -72,6 +73,7 @@ export function heightFromTwoStations<T>(
   },
 ): TwoStationHeight<T> {
   const w = 'heightFromTwoStations(input)';
+  checkObject(input, w);
   if (!Array.isArray(input.stations) || input.stations.length !== 2) throw new QuadspreadError('INVALID_ARGUMENT', `${w}.stations`, 'give exactly two stations');
   if (!Array.isArray(input.vertical) || input.vertical.length !== 2) throw new QuadspreadError('INVALID_ARGUMENT', `${w}.vertical`, 'give exactly two vertical readings');
   const F = readPoint(A, input.foot, `${w}.foot`);

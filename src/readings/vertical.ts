@@ -111,6 +111,7 @@ export function verticalFromAngle<T>(
   angle: Numeric<T>,
   options: { kind?: VerticalKind; unit?: AngleUnit } = {},
 ): VerticalReading<T> {
+  if (typeof options !== 'object' || options === null) throw new QuadspreadError('INVALID_ARGUMENT', 'verticalFromAngle(options)', `${show(options)} is not an options object`);
   const kind = options.kind ?? 'elevation';
   if (kind !== 'elevation' && kind !== 'zenith') {
     throw new QuadspreadError('INVALID_ARGUMENT', 'verticalFromAngle(options.kind)', `${show(kind)} is not 'elevation' or 'zenith'`);
