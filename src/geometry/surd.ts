@@ -71,8 +71,10 @@ export interface Surd<T> {
   /** Whether this equals y, exactly. */
   eq(y: Surd<T> | Numeric<T>): boolean;
   /**
-   * The JS number nearest the value to within a few units in the last place (cancellation
-   * in a + b√d is avoided through the conjugate).
+   * The JS number of the value. In an exact arithmetic it is read from 40 correctly rounded
+   * digits (so the nearest JS number, whatever the size of the radicand's terms); otherwise
+   * within a few units in the last place (cancellation in a + b√d avoided through the
+   * conjugate).
    * @throws {QuadspreadError} `NOT_FINITE` beyond the range of JS numbers.
    */
   toNumber(): number;
@@ -240,8 +242,15 @@ class SurdValue<T> implements Surd<T> {
 
   toNumber(): number {
     const A = this.arithmetic;
+    if (A.isZero(this.b)) return A.toNumber(this.a);
+    if (A.exact) {
+      // Through 40 correctly rounded digits: works whatever the size of the radicand's
+      // numerator and denominator (√(p/q) is kept as √(pq)/q, which may exceed JS range).
+      const v = Number(this.toPrecision(40));
+      if (!Number.isFinite(v)) throw new QuadspreadError('NOT_FINITE', 'Surd.toNumber()', `${show(this.toPrecision(12))} is beyond the range of a JS number`);
+      return v;
+    }
     const a = A.toNumber(this.a);
-    if (A.isZero(this.b)) return a;
     const bs = A.toNumber(this.b) * Math.sqrt(A.toNumber(this.d));
     if (a === 0 || (a > 0) === (bs > 0)) return a + bs;
     // Opposite signs: a + b√d = (a² − b²d)/(a − b√d), free of cancellation.

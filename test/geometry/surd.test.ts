@@ -223,3 +223,13 @@ describe('surds over an inexact arithmetic', () => {
     expect(s.mul(s.conjugate()).toString()).toBe('-1');
   });
 });
+
+describe('Surd.toNumber()', () => {
+  it('gives the nearest number when the radicand\'s terms are beyond JS range (√(p/q) kept as √(pq)/q)', () => {
+    // (4·10^1000 + 1)/10^1000 is 4 + 1e-1000, whose root 2 + 2.5e-1001 rounds to the double 2
+    const x = rational.div(rational.from(4n * 10n ** 1000n + 1n), rational.from(10n ** 1000n));
+    const s = sqrtOf(rational, x) as Surd<Rational>;
+    expect(s.isRational()).toBe(false);
+    expect(s.toNumber()).toBe(2);
+  });
+});
