@@ -49,6 +49,10 @@ function readInline<T>(A: Arithmetic<T>, vertical: readonly VerticalInput<T>[], 
   return { k, sign: sign as -1 | 1 };
 }
 
+function repeated<T>(A: Arithmetic<T>, w: string, i: number, j: number, x: T): never {
+  throw new QuadspreadError('REPEATED_CHAINAGE', `${w}.chainages`, `stations ${i} and ${j} are both at chainage ${A.toString(x)}`);
+}
+
 /** Solves the 3×3 system M·x = y exactly (Gaussian elimination with a non-zero pivot). */
 function solve3<T>(A: Arithmetic<T>, M: T[][], y: T[], where: string): T[] {
   const m = M.map((row, i) => [...row, y[i]!]);
@@ -118,12 +122,18 @@ export function heightFromInlineReadings<T>(
   const raw: T[] = [];
   let sum = A.zero;
   for (let i = 0; i < n; i++) {
-    const x = readNumber(A, input.chainages[i]!, () => `${w}.chainages[${i}]`);
-    for (let j = 0; j < i; j++) {
-      if (A.eq(raw[j]!, x)) throw new QuadspreadError('REPEATED_CHAINAGE', `${w}.chainages`, `stations ${j} and ${i} are both at chainage ${A.toString(x)}`);
-    }
+    const x: T = readNumber(A, input.chainages[i]!, () => `${w}.chainages[${i}]`);
+    // a few stations: compare each pair at once; many: sort below (n² comparisons would hang)
+    if (n <= 8) for (let j = 0; j < i; j++) if (A.eq(raw[j]!, x)) repeated(A, w, j, i, x);
     raw.push(x);
     sum = A.add(sum, x);
+  }
+  if (n > 8) {
+    const order = raw.map((_, i) => i).sort((i, j) => A.cmp(raw[i]!, raw[j]!));
+    for (let m = 1; m < n; m++) {
+      const [i, j] = [order[m - 1]!, order[m]!];
+      if (A.eq(raw[i]!, raw[j]!)) repeated(A, w, Math.min(i, j), Math.max(i, j), raw[i]!);
+    }
   }
   const { k, sign } = readInline(A, input.vertical, w, 3, n);
   const two = A.from(2);

@@ -90,6 +90,18 @@ describe('heightFromInlineReadings refuses bad input with typed errors', () => {
   });
   it('repeated chainages', () => {
     expect(codeOf(() => heightFromInlineReadings(R, { chainages: [0, 10, 10], vertical: ['1/2', '1/3', '1/3'] }))).toBe('REPEATED_CHAINAGE');
+    // many stations (checked by sorting): the two equal chainages are named, whatever their order
+    const cs = Array.from({ length: 40 }, (_, i) => 3 * i);
+    cs[31] = cs[7]!;
+    expect(() => heightFromInlineReadings(float, { chainages: cs, vertical: cs.map(() => 0.3) })).toThrow(/REPEATED_CHAINAGE.*stations 7 and 31 .*chainage 21/);
+  });
+  it('a very long list of stations is solved (least squares) without a quadratic-time check', () => {
+    // invented demo geometry: 20 000 stations 1 m apart, a point 30 above, foot at chainage 5000, offset 20
+    const cs = Array.from({ length: 20000 }, (_, i) => i);
+    const v = cs.map((c) => { const q = (c - 5000) ** 2 + 400; return 900 / (900 + q); });
+    const r = heightFromInlineReadings(float, { chainages: cs, vertical: v });
+    expect(Math.sqrt(r.H)).toBeCloseTo(30, 6);
+    expect(r.footChainage).toBeCloseTo(5000, 6);
   });
   it('counts that differ, spreads outside [0, 1], level sights and mixed signs', () => {
     expect(codeOf(() => heightFromInlineReadings(R, { chainages: [0, 10, 20], vertical: ['1/2', '1/3'] }))).toBe('INVALID_ARGUMENT');
