@@ -173,6 +173,12 @@ function kruger<T>(A: Arithmetic<T>, E: EllipsoidParameters<T>, lat: T, dlon: T,
   for (let j = 1; j <= 6; j++) {
     let alpha = A.zero;
     for (const [num, den, pow] of ALPHA[j - 1]!) alpha = A.add(alpha, A.div(A.mul(A.from(num), powers[pow]!), A.from(den)));
+    if (j === 6 && A.cmp(A.mul(A.abs(alpha), chj), A.from('1e-10')) > 0) {
+      // The terms grow like cosh 2jη′: where the last one, α₆ cosh 12η′, exceeds 1e-10 (of a,
+      // about 0.6 mm) the truncated series no longer holds (at the equator about 61° from
+      // the central meridian; nearer 90° it returns nonsense). Derived from the series.
+      throw new QuadspreadError('INVALID_ARGUMENT', `${where}(point.lon)`, `the point is too far from the central meridian for Krüger's series to n⁶ (its last term is ${show(A.toNumber(A.mul(A.abs(alpha), chj)))})`);
+    }
     const w = A.mul(A.from(2 * j), alpha);
     pp = A.add(pp, A.mul(w, A.mul(cj, chj)));
     qq = A.add(qq, A.mul(w, A.mul(sj, shj)));
@@ -228,7 +234,9 @@ function kruger<T>(A: Arithmetic<T>, E: EllipsoidParameters<T>, lat: T, dlon: T,
  * @param projection `{ lon0, k0?, ellipsoid }`
  * @returns `{ k, convergence }` (convergence in degrees)
  * @throws {QuadspreadError} `LATITUDE_OUT_OF_RANGE`; `INVALID_ANGLE`; `INVALID_ARGUMENT`
- *   for a point 90° or more from the central meridian or k0 ≤ 0; `UNKNOWN_ELLIPSOID`.
+ *   for a point 90° or more from the central meridian, or so far from it that the series
+ *   to n⁶ no longer holds (its last term above 1e-10; at the equator beyond about 61°), or
+ *   k0 ≤ 0; `UNKNOWN_ELLIPSOID`.
  * @example
  * ```ts
  * import { float, transverseMercatorFactors, GRS80 } from 'quadspread';
@@ -428,7 +436,8 @@ const MAX_INVERSE_STEPS = 40;
  * @returns `{ lat, lon, k, convergence }`: degrees, degrees, the scale factor, degrees
  * @throws {QuadspreadError} `NOT_CONVERGED` if 40 steps do not converge (points within a
  *   few metres of a pole, or far outside the projection's zone); `INVALID_NUMBER`;
- *   `UNKNOWN_ELLIPSOID`; `INVALID_ARGUMENT` for k0 ≤ 0.
+ *   `UNKNOWN_ELLIPSOID`; `INVALID_ARGUMENT` for k0 ≤ 0 or where the forward series is
+ *   refused (see {@link transverseMercatorFactors}).
  * @example
  * ```ts
  * import { float, transverseMercatorInverse, GRS80 } from 'quadspread';

@@ -351,6 +351,8 @@ describe('bad input gets typed errors', () => {
     ['a geocentric coordinate that is not a number', () => geocentricToGeodetic(A, { X: 'abc', Y: 0, Z: 0 }, GRS80), 'INVALID_NUMBER'],
     ['a radius at latitude 100°', () => meridianRadius(A, 100, GRS80), 'LATITUDE_OUT_OF_RANGE'],
     ['a TM point 90° from the central meridian', () => transverseMercatorFactors(A, { lat: 0, lon: 93 }, { lon0: 3, ellipsoid: GRS80 }), 'INVALID_ARGUMENT'],
+    ['a TM point 89.9999° from the central meridian (the series diverges there)', () => transverseMercator(A, { lat: 0.0001, lon: 92.9999 }, { lon0: 3, ellipsoid: GRS80 }), 'INVALID_ARGUMENT'],
+    ['a TM point 65° from the central meridian on the equator', () => transverseMercatorFactors(A, { lat: 0, lon: 68 }, { lon0: 3, ellipsoid: GRS80 }), 'INVALID_ARGUMENT'],
     ['a TM k0 of 0', () => transverseMercatorFactors(A, { lat: 0, lon: 3 }, { lon0: 3, k0: 0, ellipsoid: GRS80 }), 'INVALID_ARGUMENT'],
     ['a negative combined factor', () => gridToGround(A, 100, -1), 'INVALID_ARGUMENT'],
     ['a zero radius for the height factor', () => heightReductionFactor(A, 100, 0), 'INVALID_ARGUMENT'],
@@ -392,6 +394,18 @@ describe('an unreadable number names the function and the argument it came in', 
       expect(f).toThrow(expect.objectContaining({ code: 'INVALID_NUMBER', where }));
     });
   }
+});
+
+describe('transverseMercatorFactors far from the central meridian', () => {
+  it('accepts 55° on the equator and 80° at latitude 60° (where the series still holds)', () => {
+    const tm = { lon0: 3, ellipsoid: GRS80 };
+    // on a sphere k = 1/√(1 − B²), B = cos φ sin λ (Snyder 1987, §8, from memory): the ellipsoid is close
+    for (const [lat, dl] of [[0, 55], [60, 80]] as const) {
+      const B = Math.cos(lat * (Math.PI / 180)) * Math.sin(dl * (Math.PI / 180));
+      const k = transverseMercatorFactors(float, { lat, lon: 3 + dl }, tm).k;
+      expect(Math.abs(k - 1 / Math.sqrt(1 - B * B)) / k).toBeLessThan(0.02);
+    }
+  });
 });
 
 describe('a hand-made ellipsoid object', () => {
