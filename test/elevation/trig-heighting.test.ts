@@ -58,9 +58,10 @@ describe('trigHeight in float and decimal against classical trigonometry (Math.s
 
 describe('curvature and refraction', () => {
   it('is (1 − k)·D²/(2R) exactly in rational, with R converted to the distance unit', () => {
-    expect(R.toString(curvatureRefraction(R, 1000))).toBe(R.toString(R.div(R.mul(R.from('0.87'), R.from(1e6)), R.from(12742000))));
-    // in feet the default radius is 6371000/0.3048 ft
-    expect(R.toString(curvatureRefraction(R, 1000, { unit: 'ft', k: 0 }))).toBe(R.toString(R.div(R.from(1e6), R.mul(R.from(2), R.div(R.from(6371000), R.from('0.3048'))))));
+    // by hand: 0.87 · 1000² / (2 · 6 371 000) = 870 000/12 742 000 = 435/6371
+    expect(R.toString(curvatureRefraction(R, 1000))).toBe('435/6371');
+    // in feet the default radius is 6371000/0.3048 ft: 1000² · 0.3048/12 742 000 = 304 800/12 742 000 = 762/31855 (by hand)
+    expect(R.toString(curvatureRefraction(R, 1000, { unit: 'ft', k: 0 }))).toBe('762/31855');
   });
   it('reciprocal sights cancel it exactly: the mean equals the uncorrected mean', () => {
     const fwd = { distance: 2400, measured: 'horizontal' as const, vertical: verticalFromRatio(R, 3, 400), instrumentHeight: '1.5', targetHeight: '2' };
