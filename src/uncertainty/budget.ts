@@ -10,7 +10,7 @@ import { Uncertain } from '../arithmetic/uncertain.js';
 import type { UncertainArithmetic, UncertainInput } from '../arithmetic/uncertain.js';
 import Fraction from 'fraction.js';
 import { isSurd, sqrtOf } from '../geometry/surd.js';
-import { sqrtRatioToNumber } from './internal.js';
+import { checkU, sqrtRatioToNumber } from './internal.js';
 import type { Root, Surd } from '../geometry/surd.js';
 
 /** One input's line in a {@link Budget}. */
@@ -89,7 +89,8 @@ export interface BudgetOptions<T> {
  *   result of an exact solver when it is rational
  * @param options `covariance` triples for correlated inputs
  * @returns `{ value, variance, sigma, contributions, correlations }`
- * @throws {QuadspreadError} `DUPLICATE_INPUT` when two different inputs share a name;
+ * @throws {QuadspreadError} `INVALID_ARGUMENT` when `U` is not an uncertain arithmetic;
+ *   `DUPLICATE_INPUT` when two different inputs share a name;
  *   `UNSUPPORTED_OPERATION` for an irrational surd (use an inexact base for it);
  *   `UNKNOWN_INPUT` when a covariance names an input the result does not depend on;
  *   `INVALID_COVARIANCE` for a pair of one input with itself, a pair listed twice,
@@ -111,8 +112,9 @@ export function budget<T, E extends boolean>(
   result: Uncertain<T> | Surd<Uncertain<T>> | Numeric<T>,
   options: BudgetOptions<T> = {},
 ): Budget<T, E> {
-  const B: Arithmetic<T, E> = U.base;
   const where = 'budget(U, result, options)';
+  checkU(U, where);
+  const B: Arithmetic<T, E> = U.base;
   let y: Uncertain<T>;
   if (isSurd(result)) {
     const r = result as Surd<Uncertain<T>>;

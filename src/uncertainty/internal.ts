@@ -10,10 +10,22 @@ import type { UncertainArithmetic } from '../arithmetic/uncertain.js';
 import { bitLength, isqrt, ratioToNumber } from '../arithmetic/exact.js';
 
 /**
+ * Refuses anything but an uncertain arithmetic (a plain `float` or `rational` has no `base`).
+ * @internal
+ */
+export function checkU(U: unknown, where: string): void {
+  if (U === null || typeof U !== 'object' || typeof (U as { base?: unknown }).base !== 'object' || typeof (U as { make?: unknown }).make !== 'function') {
+    const name = U !== null && typeof U === 'object' ? (U as { name?: unknown }).name : U;
+    throw new QuadspreadError('INVALID_ARGUMENT', where, `U = ${show(name)} is not an uncertain arithmetic (make one with uncertain(float), uncertain(decimal(n)) or uncertain(rational))`);
+  }
+}
+
+/**
  * Reads a standard uncertainty: a number of the base arithmetic that is ≥ 0.
  * @internal
  */
 export function readSigma<T>(U: UncertainArithmetic<T>, sigma: Numeric<T>, where: string): T {
+  checkU(U, where);
   if (typeof sigma === 'number' && sigma >= 0 && sigma - sigma === 0) return U.base.from(sigma);
   let s: T;
   try {

@@ -7,7 +7,7 @@ import type { Numeric } from '../arithmetic/types.js';
 import { Uncertain } from '../arithmetic/uncertain.js';
 import type { UncertainArithmetic, UncertainInput } from '../arithmetic/uncertain.js';
 import { readNumber } from '../geometry/validate.js';
-import { readName, readSigma } from './internal.js';
+import { checkU, readName, readSigma } from './internal.js';
 
 /**
  * An uncertain input: the measured value `value` with standard uncertainty `sigma`
@@ -24,7 +24,8 @@ import { readName, readSigma } from './internal.js';
  * @param name a non-empty name (at most 200 characters)
  * @returns the value with gradient {name: 1}
  * @throws {QuadspreadError} `INVALID_NUMBER` naming `value` when it cannot be read; `INVALID_SIGMA`
- *   when `sigma` is negative or not a number; `INVALID_ARGUMENT` for a bad name.
+ *   when `sigma` is negative or not a number; `INVALID_ARGUMENT` for a bad name or when `U`
+ *   is not an uncertain arithmetic.
  * @example
  * ```ts
  * import { uncertain, float, measured, budget } from 'quadspread';
@@ -49,7 +50,8 @@ export function measured<T>(U: UncertainArithmetic<T>, value: Numeric<T>, sigma:
  * @param U the uncertain arithmetic of `y`
  * @param y a value of `U`
  * @returns `{ name, value, sigma, sensitivity }` for each input
- * @throws {QuadspreadError} `INVALID_NUMBER` when `y` is not a value of `U`.
+ * @throws {QuadspreadError} `INVALID_NUMBER` when `y` is not a value of `U`;
+ *   `INVALID_ARGUMENT` when `U` is not an uncertain arithmetic.
  * @example
  * ```ts
  * import { uncertain, float, measured, sensitivities } from 'quadspread';
@@ -64,6 +66,7 @@ export function sensitivities<T>(
   U: UncertainArithmetic<T>,
   y: Uncertain<T>,
 ): { name: string; value: T; sigma: T; sensitivity: T }[] {
-  const v = U.from(y);
+  checkU(U, 'sensitivities(U, y)');
+  const v = readNumber(U, y, 'sensitivities(U, y) y');
   return [...v.gradient].map(([input, c]) => ({ name: input.name, value: input.value, sigma: input.sigma, sensitivity: c }));
 }

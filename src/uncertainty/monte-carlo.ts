@@ -6,6 +6,7 @@
  */
 import { QuadspreadError, show } from '../errors.js';
 import { randomStream } from './random.js';
+import { checkU } from './internal.js';
 import type { Numeric } from '../arithmetic/types.js';
 import type { Uncertain, UncertainArithmetic } from '../arithmetic/uncertain.js';
 
@@ -162,7 +163,8 @@ export function monteCarlo<K extends string>(
  * @param U the uncertain arithmetic of `result`
  * @param result a value of `U`
  * @returns `{ [name]: { distribution: 'normal', mean, sigma } }`
- * @throws {QuadspreadError} `DUPLICATE_INPUT` when two different inputs share a name.
+ * @throws {QuadspreadError} `DUPLICATE_INPUT` when two different inputs share a name;
+ *   `INVALID_ARGUMENT` when `U` is not an uncertain arithmetic.
  * @example
  * ```ts
  * import { uncertain, float, measured, normalInputs } from 'quadspread';
@@ -173,6 +175,7 @@ export function monteCarlo<K extends string>(
  * ```
  */
 export function normalInputs<T>(U: UncertainArithmetic<T>, result: Uncertain<T> | Numeric<T>): Record<string, InputDistribution> {
+  checkU(U, 'normalInputs(U, result)');
   const y = U.from(result as Numeric<Uncertain<T>>);
   const out: Record<string, InputDistribution> = {};
   const seen = new Map<string, unknown>();

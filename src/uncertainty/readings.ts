@@ -20,7 +20,7 @@ import { verticalFromAngle, type VerticalKind, type VerticalReading } from '../r
 import { lengthToMetres, type LengthUnit } from '../readings/length.js';
 import { readNumber } from '../geometry/validate.js';
 import { measured } from './measured.js';
-import { readName, readSigma } from './internal.js';
+import { checkU, readName, readSigma } from './internal.js';
 
 /**
  * A value y = g(x) of an uncertain `x`, given y and dy/dx: its gradient is dy/dx times
@@ -44,8 +44,9 @@ import { readName, readSigma } from './internal.js';
  * ```
  */
 export function withDerivative<T>(U: UncertainArithmetic<T>, x: Uncertain<T>, value: Numeric<T>, derivative: Numeric<T>): Uncertain<T> {
-  const B = U.base;
   const where = 'withDerivative(U, x, value, derivative)';
+  checkU(U, where);
+  const B = U.base;
   const v = readNumber(U, x, `${where} x`);
   const d = readNumber(B, derivative, `${where} derivative`);
   return new Uncertain(readNumber(B, value, `${where} value`), v.inputs, v.derivatives.map((c) => B.mul(d, c))); // d·∇x
@@ -107,6 +108,7 @@ function spreadSlope<T>(U: UncertainArithmetic<T>, degrees: T): T {
  * ```
  */
 export function spreadOfAngle<T>(U: UncertainArithmetic<T>, degrees: Uncertain<T> | Numeric<T>): Uncertain<T> {
+  checkU(U, 'spreadOfAngle(U, degrees)');
   const d = U.from(degrees as Numeric<Uncertain<T>>);
   return withDerivative(U, d, spreadFromDegrees(U.base, d.value), spreadSlope(U, d.value));
 }
@@ -154,6 +156,7 @@ export function measuredSpread<T>(U: UncertainArithmetic<T>, reading: Numeric<T>
  * ```
  */
 export function verticalOfAngle<T>(U: UncertainArithmetic<T>, degrees: Uncertain<T> | Numeric<T>, kind: VerticalKind = 'elevation'): VerticalReading<Uncertain<T>> {
+  checkU(U, 'verticalOfAngle(U, degrees, kind)');
   const B = U.base;
   const d = U.from(degrees as Numeric<Uncertain<T>>);
   const r = verticalFromAngle(B, d.value, { kind });

@@ -4,6 +4,8 @@ import { rational, decimal, float, uncertain } from '../../src/arithmetic/index.
 import { sqrtOf } from '../../src/geometry/surd.js';
 import { measured, sensitivities } from '../../src/uncertainty/measured.js';
 import { budget } from '../../src/uncertainty/budget.js';
+import { measuredAngle, spreadOfAngle } from '../../src/uncertainty/readings.js';
+import { normalInputs } from '../../src/uncertainty/monte-carlo.js';
 import { sqrtRatioToNumber } from '../../src/uncertainty/internal.js';
 import { spreadFromDegrees } from '../../src/readings/index.js';
 import { create, all } from 'mathjs';
@@ -152,6 +154,19 @@ describe('budget(U, result) is the law of propagation of uncertainty (GUM, JCGM 
     expect(() => measured(F, 1, 0.1, '')).toThrow(expect.objectContaining({ code: 'INVALID_ARGUMENT' }));
     expect(() => measured(F, 'abc', 0.1, 'x')).toThrow(expect.objectContaining({ code: 'INVALID_NUMBER', where: 'measured(U, value, sigma, name) value' }));
     expect(() => measured(F, Number.NaN, 0.1, 'x')).toThrow(expect.objectContaining({ code: 'INVALID_NUMBER', where: 'measured(U, value, sigma, name) value' }));
+  });
+
+  it('the uncertainty functions refuse a plain arithmetic in place of U with INVALID_ARGUMENT naming the function', () => {
+    const plain = float as never;
+    const cases: [string, () => unknown][] = [
+      ['measured(U, value, sigma, name)', () => measured(plain, 1, 0.1, 'x')],
+      ['budget(U, result, options)', () => budget(plain, 1)],
+      ['sensitivities(U, y)', () => sensitivities(plain, F.from(1))],
+      ['measuredAngle(U, reading, sigmaArcSeconds, name)', () => measuredAngle(plain, 10, 1, 'a')],
+      ['spreadOfAngle(U, degrees)', () => spreadOfAngle(plain, 10)],
+      ['normalInputs(U, result)', () => normalInputs(plain, F.from(1))],
+    ];
+    for (const [where, f] of cases) expect(f).toThrow(expect.objectContaining({ code: 'INVALID_ARGUMENT', where }));
   });
 
   it('sensitivities lists each input with ∂y/∂x', () => {
