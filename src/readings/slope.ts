@@ -37,8 +37,22 @@ export function spreadFromRatio<T>(A: Arithmetic<T>, rise: Numeric<T>, run: Nume
   if (A.isZero(r) && A.isZero(d)) {
     throw new QuadspreadError('INVALID_SLOPE', 'spreadFromRatio(rise, run)', 'rise and run are both zero: the slope has no direction');
   }
+  if (!A.exact && outOfSquareRange(A.toNumber(r), A.toNumber(d))) {
+    // Squares of such values overflow or underflow a double: divide by the larger part first.
+    const riseLarger = A.cmp(A.abs(r), A.abs(d)) >= 0;
+    const t = riseLarger ? A.div(d, r) : A.div(r, d);
+    const t2 = A.mul(t, t);
+    return riseLarger ? A.div(A.one, A.add(A.one, t2)) : A.div(t2, A.add(A.one, t2)); // the same r²/(r² + d²)
+  }
   const r2 = A.mul(r, r);
   return A.div(r2, A.add(r2, A.mul(d, d))); // sin² = r²/(r² + d²)
+}
+
+/** Whether |x| or |y| is so large (over 1e150) or so small (non-zero, under 1e-150) that its square leaves a double's range. */
+function outOfSquareRange(x: number, y: number): boolean {
+  const big = Math.max(Math.abs(x), Math.abs(y));
+  const small = Math.min(Math.abs(x) || Infinity, Math.abs(y) || Infinity);
+  return big > 1e150 || small < 1e-150;
 }
 
 /**

@@ -188,6 +188,14 @@ describe('slope readings are exact spreads', () => {
       expect(rational.eq(gradeSquaredFromSpread(rational, spreadFromGrade(rational, p)), rational.mul(p, p))).toBe(true);
     }));
   });
+  it('float: huge and tiny rises and runs give the spread, not NaN or a division by zero (squares out of range)', () => {
+    expect(spreadFromGrade(float, 1e200)).toBe(1); // 1/(1 + 10⁻³⁹⁶) rounds to 1
+    expect(spreadFromRatio(float, 1e-200, 1e-200)).toBe(0.5);
+    expect(spreadFromRatio(float, 3e200, 4e200)).toBeCloseTo(9 / 25, 15);
+    expect(spreadFromRatio(float, 0, 1e-300)).toBe(0);
+    const D = decimal(20);
+    expect(D.toString(spreadFromRatio(D, '3e-200', '4e-200'))).toBe('0.36');
+  });
   it('bad slopes throw typed errors', () => {
     expect(codeOf(() => spreadFromRatio(rational, 0, 0))).toBe('INVALID_SLOPE');
     expect(codeOf(() => spreadFromOneIn(rational, 0))).toBe('INVALID_SLOPE');
