@@ -129,8 +129,10 @@ function union<T>(a: Keys<T>, b: Keys<T>): { keys: Keys<T>; where: number[] } {
   return { keys: keys ?? a, where };
 }
 
-function fromMap<T>(B: Arithmetic<T>, value: T, g: Gradient<T> | undefined): Uncertain<T> {
-  if (g === undefined || g.size === 0) return new Uncertain(value);
+function fromMap<T>(B: Arithmetic<T>, value: T, g: Gradient<T> | undefined, name: string): Uncertain<T> {
+  if (g === undefined) return new Uncertain(value);
+  if (!(g instanceof Map)) throw new QuadspreadError('INVALID_ARGUMENT', `${name}.make(value, gradient)`, `the gradient ${show(g)} is not a Map from inputs to derivatives`);
+  if (g.size === 0) return new Uncertain(value);
   const keys: UncertainInput<T>[] = [];
   const ders: T[] = [];
   for (const [k, v] of g) {
@@ -233,7 +235,7 @@ function uncertainGeneric<T, E extends boolean>(B: Arithmetic<T, E>): UncertainA
     zero: constant(B.zero),
     one: constant(B.one),
     make(value, gradient) {
-      return fromMap(B, B.from(value), gradient);
+      return fromMap(B, B.from(value), gradient, name);
     },
     from(x: Numeric<Uncertain<T>>): Uncertain<T> {
       if (isU(x)) return x;
@@ -348,7 +350,7 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
     zero: constant(0),
     one: constant(1),
     make(value, gradient) {
-      return fromMap(float, float.from(value), gradient);
+      return fromMap(float, float.from(value), gradient, name);
     },
     from(x: Numeric<V>): V {
       if (isU(x)) return x;

@@ -19,6 +19,10 @@ export interface Enu<T> {
   readonly u: T;
 }
 
+function objectArg(x: unknown, where: string, shape: string): void {
+  if (x === null || typeof x !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(x)} is not ${shape}`);
+}
+
 /** A 3 × 3 matrix, rows first. */
 export type Matrix3<T> = readonly [readonly [T, T, T], readonly [T, T, T], readonly [T, T, T]];
 
@@ -111,6 +115,8 @@ function apply<T>(A: Arithmetic<T>, M: Matrix3<T>, v: readonly [T, T, T], transp
  * ```
  */
 export function enuFromGeocentric<T>(A: Arithmetic<T>, origin: GeodeticInput<T>, point: Geocentric<Numeric<T>> | Geocentric<T>, ellipsoid: Ellipsoid | string): Enu<T> {
+  objectArg(origin, 'enuFromGeocentric(origin)', '{ lat, lon, h }');
+  objectArg(point, 'enuFromGeocentric(point)', '{ X, Y, Z }');
   const E = readEllipsoid(ellipsoid, 'enuFromGeocentric(ellipsoid)');
   const O = geodeticToGeocentric(A, origin, E);
   const R = enuRotation(A, origin);
@@ -141,6 +147,8 @@ export function enuFromGeocentric<T>(A: Arithmetic<T>, origin: GeodeticInput<T>,
  * ```
  */
 export function geocentricFromEnu<T>(A: Arithmetic<T>, origin: GeodeticInput<T>, local: Enu<Numeric<T>> | Enu<T>, ellipsoid: Ellipsoid | string): Geocentric<T> {
+  objectArg(origin, 'geocentricFromEnu(origin)', '{ lat, lon, h }');
+  objectArg(local, 'geocentricFromEnu(local)', '{ e, n, u }');
   const E = readEllipsoid(ellipsoid, 'geocentricFromEnu(ellipsoid)');
   const O = geodeticToGeocentric(A, origin, E);
   const R = enuRotation(A, origin);

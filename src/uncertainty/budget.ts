@@ -149,7 +149,11 @@ export function budget<T, E extends boolean>(
 
   const correlations: CorrelationTerm<T>[] = [];
   const seen = new Set<string>();
-  for (const triple of options.covariance ?? []) {
+  const covariance = options?.covariance ?? [];
+  if (!Array.isArray(covariance)) {
+    throw new QuadspreadError('INVALID_COVARIANCE', `${where}.covariance`, `${show(covariance)} is not a list of [nameA, nameB, covariance] triples`);
+  }
+  for (const triple of covariance) {
     if (!Array.isArray(triple) || triple.length !== 3) {
       throw new QuadspreadError('INVALID_COVARIANCE', `${where}.covariance`, `${show(triple)} is not a [nameA, nameB, covariance] triple`);
     }

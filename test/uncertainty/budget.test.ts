@@ -138,6 +138,7 @@ describe('budget(U, result) is the law of propagation of uncertainty (GUM, JCGM 
     expect(() => budget(R, y, { covariance: [['a', 'b', 0], ['b', 'a', 0]] })).toThrow(expect.objectContaining({ code: 'INVALID_COVARIANCE' }));
     expect(() => budget(R, y, { covariance: [['a', 'b', '0.0201']] })).toThrow(expect.objectContaining({ code: 'INVALID_COVARIANCE' }));
     expect(() => budget(R, y, { covariance: [['a', 'b', 'x']] })).toThrow(expect.objectContaining({ code: 'INVALID_COVARIANCE' }));
+    expect(() => budget(R, y, { covariance: 5 as never })).toThrow(expect.objectContaining({ code: 'INVALID_COVARIANCE' }));
     expect(() => budget(R, y, { covariance: [['a', 'b', '0.02']] })).not.toThrow();
   });
 

@@ -40,6 +40,8 @@ describe('uncertain(base) is an arithmetic over values with gradients', () => {
     // an overflowed float value is named as such, not as another arithmetic's
     const big = F.mul(F.from(1e200), F.from(1e200));
     expect(() => F.from(big)).toThrow(expect.objectContaining({ code: 'NOT_FINITE' }));
+    expect(() => F.make(1, 5 as never)).toThrow(expect.objectContaining({ code: 'INVALID_ARGUMENT', where: 'uncertain(float).make(value, gradient)' }));
+    expect(() => R.make(1, [] as never)).toThrow(expect.objectContaining({ code: 'INVALID_ARGUMENT' }));
   });
 
   it('uncertain(base).is accepts its own values only', () => {
