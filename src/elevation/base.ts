@@ -8,6 +8,7 @@ import { QuadspreadError, show } from '../errors.js';
 import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Root } from '../geometry/surd.js';
+import { solveTriangle } from '../geometry/solve-triangle.js';
 import { readQuadrance, readSpread } from '../geometry/validate.js';
 import { angleToDegrees } from '../readings/angle.js';
 import { spreadFromDegrees } from '../readings/spread.js';
@@ -52,7 +53,8 @@ export interface BaseHeight<T, E extends boolean> {
  * them apart: the caller says which with `foot`, or gives the horizontal interior `angles`
  * (degrees or DMS, each in (0°, 180°)), from which the spreads and the side follow. Then
  * the spread law Q/s = Q_base/s₃ (same source and chapter) gives Q(station 1, foot) =
- * base·s₂/s₃ and Q(station 2, foot) = base·s₁/s₃, and {@link heightFromReading} each H.
+ * base·s₂/s₃ and Q(station 2, foot) = base·s₁/s₃ (both by {@link solveTriangle}), and
+ * {@link heightFromReading} each H.
  *
  * With both vertical readings, H is their mean weighted by (1 − R)²/Q (as in
  * {@link heightFromTwoStations}), here (1 − R₁)²·s₁ and (1 − R₂)²·s₂ after the common
@@ -122,16 +124,18 @@ export function heightFromBase<T, E extends boolean>(
   }
   if (A.isZero(s1) || A.isZero(s2)) throw new QuadspreadError('COLLINEAR_POINTS', `${w}.spreads`, 'a spread of 0 puts the foot on the base line');
   const one = A.one;
-  const two = A.from(2);
-  // s3 = s1 + s2 − 2 s1 s2 ± 2√(s1 s2 (1 − s1)(1 − s2)): the triple spread formula solved for s3
-  const p = A.sub(A.add(s1, s2), A.mul(two, A.mul(s1, s2)));
-  const d = A.mul(A.mul(s1, s2), A.mul(A.sub(one, s1), A.sub(one, s2)));
-  const s3 = R.make(p, side === 'between' ? two : A.neg(two), d);
-  if (R.sign(s3) <= 0) throw new QuadspreadError('DEGENERATE_TRIANGLE', `${w}.spreads`, `with foot '${side}' the spreads ${A.toString(s1)} and ${A.toString(s2)} give no triangle (spread 0 at the foot)`);
-  // spread law: Q/s is the same for every side and its opposite spread
-  const scale = R.div(R.lift(base), s3);
-  const Q1 = R.mul(scale, s2);
-  const Q2 = R.mul(scale, s1);
+  // Geometry's triangle solver with the base Q3 and the spreads s1, s2 at its ends: the triple
+  // spread formula gives s3 = p ± 2√(s1 s2 (1 − s1)(1 − s2)), p = s1 + s2 − 2 s1 s2, and the
+  // spread law the sides. The '+' triangle has the foot between the stations, the '−' one beyond.
+  const p = A.sub(A.add(s1, s2), A.mul(A.from(2), A.mul(s1, s2)));
+  const found = solveTriangle(A, { Q3: base, s1, s2 }).find((t) => {
+    const above = R.sign(R.sub(t.s3, p));
+    return side === 'between' ? above >= 0 : above <= 0;
+  });
+  if (found === undefined) throw new QuadspreadError('DEGENERATE_TRIANGLE', `${w}.spreads`, `with foot '${side}' the spreads ${A.toString(s1)} and ${A.toString(s2)} give no triangle (spread 0 at the foot)`);
+  const s3 = found.s3;
+  const Q1 = found.Q2; // Q(station 1, foot) is opposite station 2
+  const Q2 = found.Q1;
   const v = input.vertical ?? [undefined, undefined];
   const readings = [0, 1].map((i) => (v[i] === undefined ? undefined : readVertical(A, v[i]!, `${w}.vertical[${i}]`)));
   if (readings[0] === undefined && readings[1] === undefined) throw new QuadspreadError('INVALID_ARGUMENT', `${w}.vertical`, 'give at least one vertical reading');
