@@ -11,7 +11,7 @@ import { readNumber } from '../geometry/validate.js';
 import { RATIONAL_TRANSCENDENTAL_DIGITS } from '../arithmetic/rational.js';
 import { decimal, type DecimalArithmetic } from '../arithmetic/decimal.js';
 import { Uncertain, uncertain } from '../arithmetic/uncertain.js';
-import { angleToDegrees } from '../readings/angle.js';
+import { angleToDegrees, type AngleUnit } from '../readings/angle.js';
 import { approxSqrt } from '../readings/numeric.js';
 
 /** @internal √x for x ≥ 0: exact or correctly rounded where the arithmetic can, else within 1e-48 relative. */
@@ -38,10 +38,23 @@ export function tenToMinus<T>(A: Arithmetic<T>, k: number): T {
   return A.from(`1e-${k}`);
 }
 
+/**
+ * @internal An angle reading in degrees (decimal degrees, DMS text, or `unit`) by the
+ * readings' `angleToDegrees`; its errors name `where` (the caller's argument) instead.
+ */
+export function readAngle<T>(A: Arithmetic<T>, x: Numeric<T>, where: string, unit?: AngleUnit): T {
+  try {
+    return angleToDegrees(A, x, unit);
+  } catch (e) {
+    if (!(e instanceof QuadspreadError)) throw e;
+    throw new QuadspreadError(e.code, where, e.message.slice(`quadspread ${e.code}: ${e.where}: `.length));
+  }
+}
+
 /** @internal A latitude in degrees from decimal degrees or DMS text, checked to be within ±90°. */
 export function readLatitude<T>(A: Arithmetic<T>, lat: Numeric<T>, where: string): T {
   if (lat === undefined || lat === null) throw new QuadspreadError('INVALID_ANGLE', where, 'the latitude is missing');
-  const v = angleToDegrees(A, lat);
+  const v = readAngle(A, lat, where);
   if (A.cmp(A.abs(v), A.from(90)) > 0) {
     throw new QuadspreadError('LATITUDE_OUT_OF_RANGE', where, `${show(typeof lat === 'object' ? A.toString(v) : lat)} is beyond ±90°`);
   }
@@ -51,7 +64,7 @@ export function readLatitude<T>(A: Arithmetic<T>, lat: Numeric<T>, where: string
 /** @internal A longitude in degrees from decimal degrees or DMS text (any value; used through sin and cos). */
 export function readLongitude<T>(A: Arithmetic<T>, lon: Numeric<T>, where: string): T {
   if (lon === undefined || lon === null) throw new QuadspreadError('INVALID_ANGLE', where, 'the longitude is missing');
-  return angleToDegrees(A, lon);
+  return readAngle(A, lon, where);
 }
 
 /** @internal An ellipsoidal height in metres (default 0), refused below −limit (−a unless said otherwise). */

@@ -9,9 +9,8 @@
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { sinCosDegrees } from '../readings/trig.js';
-import { angleToDegrees } from '../readings/angle.js';
 import { ellipsoidParameters, readEllipsoid, type Ellipsoid } from './ellipsoid.js';
-import { readLatitude, root } from './internal.js';
+import { readAngle, readLatitude, root } from './internal.js';
 
 function setup<T>(A: Arithmetic<T>, lat: Numeric<T>, ellipsoid: Ellipsoid | string, fn: string) {
   const E = ellipsoidParameters(A, readEllipsoid(ellipsoid, `${fn}(ellipsoid)`));
@@ -84,7 +83,7 @@ export function primeVerticalRadius<T>(A: Arithmetic<T>, lat: Numeric<T>, ellips
  */
 export function radiusInAzimuth<T>(A: Arithmetic<T>, lat: Numeric<T>, azimuth: Numeric<T>, ellipsoid: Ellipsoid | string): T {
   const { E, W2, W } = setup(A, lat, ellipsoid, 'radiusInAzimuth');
-  const { sin, cos } = sinCosDegrees(A, angleToDegrees(A, azimuth));
+  const { sin, cos } = sinCosDegrees(A, readAngle(A, azimuth, 'radiusInAzimuth(azimuth)'));
   const N = A.div(E.a, W);
   const M = A.div(A.mul(E.a, A.sub(A.one, E.e2)), A.mul(W2, W));
   // R_α = MN/(N cos²α + M sin²α)  (Euler's theorem on normal curvatures)

@@ -396,6 +396,16 @@ describe('an unreadable number names the function and the argument it came in', 
       expect(f).toThrow(expect.objectContaining({ code: 'INVALID_NUMBER', where }));
     });
   }
+  const angles: [string, () => unknown][] = [
+    ['radiusInAzimuth(azimuth)', () => radiusInAzimuth(A, 45, 'abc', GRS80)],
+    ['geodeticToGeocentric(point).lat', () => geodeticToGeocentric(A, { lat: 'north', lon: 0 }, GRS80)],
+    ['transverseMercator(projection.lon0)', () => transverseMercator(A, { lat: 1, lon: 1 }, { lon0: '3x', ellipsoid: GRS80 })],
+  ];
+  for (const [where, f] of angles) {
+    it(`names ${where} for an angle it cannot read (INVALID_ANGLE)`, () => {
+      expect(f).toThrow(expect.objectContaining({ code: 'INVALID_ANGLE', where }));
+    });
+  }
 });
 
 describe('transverseMercatorFactors far from the central meridian', () => {
