@@ -46,6 +46,8 @@ describe('Ordnance Survey guide, annex B: geodetic ↔ geocentric on GRS 80', ()
   });
 });
 
+// CHECKS.md tags the WGS 84 and GRS 80 constants doc/memory: the defining values as quoted
+// there, not re-read from the documents for these tests.
 describe('ellipsoid parameters from their defining documents', () => {
   it('WGS84 is a = 6378137 m, 1/f = 298.257223563 (NIMA TR8350.2, 3rd ed., 2000, table 3.1)', () => {
     const E = ellipsoidParameters(rational, WGS84);
@@ -63,7 +65,7 @@ describe('ellipsoid parameters from their defining documents', () => {
     expect(rational.toPrecision(E.e2, 12)).toBe('0.00669438002290');
     expect(rational.toPrecision(E.ep2, 12)).toBe('0.00673949677548');
   });
-  it('GRS80 mean radius R1 = (2a + b)/3 = 6371008.7714 m (Moritz 2000)', () => {
+  it('GRS80 mean radius R1 = (2a + b)/3 = 6371008.7714 m (Moritz 2000; doc/memory in CHECKS.md)', () => {
     const E = ellipsoidParameters(rational, GRS80);
     const R1 = rational.div(rational.add(rational.mul(rational.from(2), E.a), E.b), rational.from(3));
     expect(rational.toPrecision(R1, 11)).toBe('6371008.7714');
