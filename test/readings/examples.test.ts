@@ -1,21 +1,11 @@
-// Runs the @example of every export in src/readings and src/elevation, and the code blocks of their
-// guides: each line followed by `//=> literal` must evaluate to a value deep-equal to that literal.
+// Runs the code blocks of the readings and heights guides: each line followed by `//=> literal` must
+// evaluate to a value deep-equal to that literal. (The @examples of src/readings and src/elevation
+// are run, with every other source's, by test/docs/examples.test.ts.)
 import { describe, expect, it } from 'vitest';
-import { readdirSync, readFileSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { transformSync } from 'esbuild';
 import * as quadspread from '../../src/index.js';
-
-const areas = ['readings', 'elevation'].map((a) => join(__dirname, '../../src', a));
-
-function blocks(text: string): { line: number; code: string }[] {
-  const out: { line: number; code: string }[] = [];
-  const re = /@example\s*\n\s*\*\s*```ts\n([\s\S]*?)\n\s*\*\s*```/g;
-  for (let m = re.exec(text); m; m = re.exec(text)) {
-    out.push({ line: text.slice(0, m.index).split('\n').length, code: m[1]!.split('\n').map((l) => l.replace(/^\s*\* ?/, '')).join('\n') });
-  }
-  return out;
-}
 
 function toJs(code: string): string {
   const lines = code.split('\n');
@@ -46,25 +36,3 @@ describe('the code blocks of docs/readings.md and docs/heights.md hold', () => {
     }
   }
 });
-
-for (const dir of areas) {
-  const files = readdirSync(dir).filter((f) => f.endsWith('.ts') && f !== 'index.ts');
-  describe(`the @examples of src/${dir.split('/').pop()} hold`, () => {
-    for (const file of files) {
-      const text = readFileSync(join(dir, file), 'utf8');
-      for (const ex of blocks(text)) {
-        it(`${file}:${ex.line}`, () => {
-          let n = 0;
-          new Function('lib', 'check', toJs(ex.code))(quadspread, (got: unknown, want: unknown) => { n++; expect(got).toEqual(want); });
-          expect(n).toBeGreaterThan(0);
-        });
-      }
-      it(`${file}: every public export has an @example`, () => {
-        for (const b of text.split('/**').slice(1)) {
-          const m = /\*\/\s*export (?:function|const) (\w+)/.exec(b);
-          if (m && !b.includes('@internal')) expect(b.includes('@example'), `${file}: ${m[1]}`).toBe(true);
-        }
-      });
-    }
-  });
-}
