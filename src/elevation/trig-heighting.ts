@@ -12,6 +12,7 @@ import { readNumber } from '../geometry/validate.js';
 import { checkLengthUnit, METRES_PER_UNIT, type LengthUnit } from '../readings/length.js';
 import { readVertical, type VerticalInput } from '../readings/vertical.js';
 import { rootOps } from './roots.js';
+import { approxSqrt } from '../readings/numeric.js';
 
 /**
  * Default coefficient of refraction k = 0.13: the classical value for daytime sights
@@ -189,21 +190,24 @@ export interface ReciprocalTrigHeight<T, E extends boolean> {
   /**
    * The mean height of B above A, (forward − backward)/2: curvature and refraction cancel
    * when k is the same both ways. A plain value: in `rational` the exact mean when the two
-   * surds share a radicand, otherwise the exact value rounded to 40 significant digits
-   * (two different square roots do not fit in one surd).
+   * surds share a radicand, otherwise a rational within 1e-40 relative of the exact value
+   * (two different square roots do not fit in one surd). In an uncertain arithmetic over
+   * `rational` it keeps its sensitivities.
    */
   readonly mean: T;
   /** forward + backward: zero for perfect sights with no curvature and refraction (twice their correction otherwise). */
   readonly misclosure: T;
 }
 
-/** Digits of {@link ReciprocalTrigHeight.mean} when it must be rounded. */
-const MEAN_DIGITS = 40;
-
+/**
+ * A root as a plain value: a + b·√d with √d from the readings' `approxSqrt` (within 1e-48
+ * relative, its last Newton step taken on d itself, so derivatives carried by an uncertain
+ * arithmetic survive — rounding through text would drop them).
+ */
 function rootValue<T, E extends boolean>(A: Arithmetic<T, E>, r: Root<T, E>): T {
   if (!isSurd(r)) return r as T;
   const s = r as Surd<T>;
-  return s.isRational() ? s.a : A.from(s.toPrecision(MEAN_DIGITS));
+  return s.isRational() ? s.a : A.add(s.a, A.mul(s.b, approxSqrt(A, s.d)));
 }
 
 /**

@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { create, all } from 'mathjs';
-import { rational, decimal, float, QuadspreadError } from '../../src/index.js';
+import { rational, decimal, float, QuadspreadError, uncertain, measured, budget } from '../../src/index.js';
 import type { Arithmetic } from '../../src/index.js';
 import { trigHeight, reciprocalTrigHeight, curvatureRefraction } from '../../src/elevation/trig-heighting.js';
 import { verticalFromAngle, verticalFromRatio } from '../../src/readings/vertical.js';
@@ -93,5 +93,25 @@ describe('curvature and refraction', () => {
     expect(codeOf(() => trigHeight(R, { distance: 100, measured: 'sloped' as never, vertical: '1/2' }))).toBe('INVALID_ARGUMENT');
     expect(codeOf(() => trigHeight(R, { distance: -100, measured: 'slope', vertical: '1/2' }))).toBe('NEGATIVE_QUADRANCE');
     expect(codeOf(() => trigHeight(R, { distance: 100, measured: 'slope', vertical: '3/2' }))).toBe('SPREAD_OUT_OF_RANGE');
+  });
+});
+
+describe('reciprocalTrigHeight over uncertain(rational)', () => {
+  it('keeps the sensitivities of the mean when the two sights need different square roots', () => {
+    // slope distances 1000 m ± 5 mm each way; vertical spreads 1/101 (up) and 1/99 (down):
+    // the mean (Δh_AB − Δh_BA)/2 = (1000/√101 + 1000/√99)/2 depends on both distances
+    const sights = (U: any) => ({
+      forward: { distance: measured(U, 1000, '0.005', 'dAB'), measured: 'slope' as const, vertical: '1/101', correction: false },
+      backward: { distance: measured(U, 1000, '0.005', 'dBA'), measured: 'slope' as const, vertical: { spread: '1/99', sign: -1 as const }, correction: false },
+    });
+    const Ur = uncertain(rational);
+    const Uf = uncertain(float);
+    const br = budget(Ur, reciprocalTrigHeight(Ur, sights(Ur) as never).mean);
+    const bf = budget(Uf, reciprocalTrigHeight(Uf, sights(Uf) as never).mean);
+    // by hand: ∂mean/∂dAB = sin α_AB / 2 = (1/√101)/2, ∂mean/∂dBA = (1/√99)/2
+    const byHand = Math.sqrt((0.005 / (2 * Math.sqrt(101))) ** 2 + (0.005 / (2 * Math.sqrt(99))) ** 2);
+    expect(br.contributions.map((c) => c.name).sort()).toEqual(['dAB', 'dBA']);
+    expect(Math.abs(br.sigma.toNumber() - byHand)).toBeLessThan(1e-15);
+    expect(Math.abs((bf.sigma as number) - byHand)).toBeLessThan(1e-15);
   });
 });
