@@ -4,8 +4,20 @@
  *
  * @module cli
  */
-import { closeSync, fsyncSync, openSync, renameSync, rmSync, writeSync } from 'node:fs';
+import { closeSync, fsyncSync, openSync, renameSync, rmSync, statSync, writeSync } from 'node:fs';
 import { basename, dirname, join } from 'node:path';
+import { JobInvalid } from './failure.js';
+
+/** Why `target` cannot be written, in plain words, from a file-system error. */
+function cannotWrite(target: string, e: unknown): JobInvalid {
+  const code = (e as NodeJS.ErrnoException).code;
+  const why =
+    code === 'ENOENT' ? `the folder ${JSON.stringify(dirname(target))} does not exist`
+    : code === 'EISDIR' ? 'it is a folder'
+    : code === 'EACCES' || code === 'EPERM' ? 'permission denied'
+    : code ?? (e as Error).message;
+  return new JobInvalid('', `cannot write ${JSON.stringify(target)}: ${why}`);
+}
 
 /** The temporary name used while `target` is being written (same folder, so rename is atomic). */
 export function tempNameFor(target: string): string {
@@ -23,10 +35,26 @@ export interface PendingFile {
   abort(): void;
 }
 
-/** Opens a pending file for `target` (the temporary file is created at once). */
+/**
+ * Opens a pending file for `target` (the temporary file is created at once). A target that
+ * cannot be written (a missing folder, a folder, no permission) is a bad command line:
+ * {@link JobInvalid}, exit 2, and nothing is left behind.
+ */
 export function openPending(target: string): PendingFile {
+  let isFolder = false;
+  try {
+    isFolder = statSync(target).isDirectory();
+  } catch {
+    // No such file yet: the usual case.
+  }
+  if (isFolder) throw cannotWrite(target, Object.assign(new Error('EISDIR'), { code: 'EISDIR' }));
   const temp = tempNameFor(target);
-  const fd = openSync(temp, 'wx', 0o644);
+  let fd: number;
+  try {
+    fd = openSync(temp, 'wx', 0o644);
+  } catch (e) {
+    throw cannotWrite(target, e);
+  }
   let open = true;
   const close = (): void => {
     if (open) {
@@ -37,12 +65,22 @@ export function openPending(target: string): PendingFile {
   return {
     target,
     write(text) {
-      writeSync(fd, text);
+      try {
+        writeSync(fd, text);
+      } catch (e) {
+        throw cannotWrite(target, e);
+      }
     },
     commit() {
-      fsyncSync(fd);
-      close();
-      renameSync(temp, target);
+      try {
+        fsyncSync(fd);
+        close();
+        renameSync(temp, target);
+      } catch (e) {
+        close();
+        rmSync(temp, { force: true });
+        throw cannotWrite(target, e);
+      }
     },
     abort() {
       close();
@@ -79,5 +117,14 @@ export function writeFilesAtomic(files: { target: string; text: string }[]): voi
     for (const f of pending) f.abort();
     throw e;
   }
-  for (const f of pending) f.commit();
+  // Every target was checked when its temporary file was opened, so a rename failing here
+  // is unusual; the files not yet renamed are still removed.
+  for (let i = 0; i < pending.length; i++) {
+    try {
+      pending[i]!.commit();
+    } catch (e) {
+      for (const f of pending.slice(i + 1)) f.abort();
+      throw e;
+    }
+  }
 }

@@ -201,3 +201,33 @@ describe('quadspread run with a job that has no solution', () => {
     expect(readdirSync(outDir)).toEqual(['report.md']);
   });
 });
+
+describe('quadspread run with an output file that cannot be written', () => {
+  const ok = (): string => jobFile('ok-out.json', { points, tasks: [{ kind: 'area', points: ['A', 'B', 'C'] }] });
+
+  it('exits 2 naming the missing folder of --out, without a stack trace', () => {
+    const r = cli(['run', ok(), '--out', join(dir, 'no-such-folder', 'report.txt')]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/cannot write ".*report\.txt": the folder ".*no-such-folder" does not exist/);
+    expect(r.stderr).not.toMatch(/internal error|\bat \S+ \(/);
+    expect(existsSync(join(dir, 'no-such-folder'))).toBe(false);
+  });
+
+  it('exits 2 when --sketch names a folder, and writes neither file nor leaves a temporary file', () => {
+    const outDir = join(dir, 'targets');
+    require('node:fs').mkdirSync(join(outDir, 'a-folder'), { recursive: true });
+    const r = cli(['run', ok(), '--out', join(outDir, 'report.txt'), '--sketch', join(outDir, 'a-folder')]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/cannot write ".*a-folder": it is a folder/);
+    expect(readdirSync(outDir)).toEqual(['a-folder']);
+    expect(readdirSync(join(outDir, 'a-folder'))).toEqual([]);
+  });
+
+  it('exits 2 when batch --out is in a missing folder', () => {
+    const csv = join(dir, 'tri.csv');
+    writeFileSync(csv, 'x1,y1,x2,y2,x3,y3\n0,0,4,0,0,3\n');
+    const r = cli(['batch', 'triangles', csv, '--out', join(dir, 'no-such-folder', 'out.csv')]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/the folder ".*no-such-folder" does not exist/);
+  });
+});
