@@ -128,6 +128,8 @@ describe('quadspread demo, elevation and design tasks', () => {
     expect(value(t, 'Line A.grade')).toBeCloseTo(100 * (1 / 3.5) * Math.cos(rad(76)), 8);
     expect(value(t, 'Line B.grade')).toBeCloseTo(100 * (1 / 3.5) * Math.cos(rad(74.5)), 8);
     expect(t.checks.every((c) => c.pass)).toBe(true);
+    // The checks are those of the proposed alignments; the solver's own round trip is not counted.
+    expect(t.checks.map((c) => c.name)).toEqual(['Line A.ruling', 'Line B.ruling']);
   });
 
   it('gives the beacon height that h = d·tan α gives from each station', () => {
@@ -187,6 +189,11 @@ describe('quadspread demo, elevation and design tasks', () => {
     const km = lv.sights.reduce((s, r) => s + (r.distance ?? 0), 0) / 1000;
     expect(value(t, 'allowable')).toBeCloseTo(12 * Math.sqrt(km), 8);
     expect(value(t, 'HF2.level')).toBeCloseTo(lv.close, 9);
+    // The booking's arithmetic checks confirm the program's own sums, so they are a note, not a
+    // counted check: the one check on the readings is the misclosure.
+    expect(t.checks.map((c) => c.name)).toEqual(['misclosure']);
+    const notes = (t as T & { notes: string[] }).notes;
+    expect(notes.some((n) => n.includes(`last − first = ${Number((sum('bs') - sum('fs')).toFixed(9))} m`))).toBe(true);
   });
 });
 

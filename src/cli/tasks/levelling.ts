@@ -85,16 +85,22 @@ export const levellingTask: TaskKind = {
           unit: u,
           value: close ? r.adjusted : r.level,
         }));
-        const checks = [
-          { name: 'rise_fall', label: 'Arithmetic check ΣBS − ΣFS = ΣRise − ΣFall = last − first', unit: u, value: run.check.difference, tolerance: 'all three equal', pass: run.check.riseFallOk },
-          { name: 'height_of_instrument', label: 'Height-of-instrument arithmetic check', unit: u, value: run.check.difference, tolerance: 'Σ(HI × sights) = ΣIS + ΣFS + Σlevels', pass: run.check.heightOfInstrumentOk },
-        ];
+        // The booking's arithmetic checks recompute the program's own sums: they cannot detect a
+        // misread staff, only a fault in the reduction, so they are not counted as checks on the
+        // survey. They become a note when they hold and a failed check if they ever do not.
+        const checks: { name: string; label: string; unit: string; value: typeof A.zero; tolerance: string; pass: boolean }[] = [];
+        if (!run.check.riseFallOk) checks.push({ name: 'rise_fall', label: 'Arithmetic of the reduction: ΣBS − ΣFS = ΣRise − ΣFall = last − first', unit: u, value: run.check.difference, tolerance: 'all three equal', pass: false });
+        if (!run.check.heightOfInstrumentOk) checks.push({ name: 'height_of_instrument', label: 'Arithmetic of the reduction: height-of-instrument sums', unit: u, value: run.check.difference, tolerance: 'Σ(HI × sights) = ΣIS + ΣFS + Σlevels', pass: false });
         if (run.misclosureMm !== undefined) results.push({ name: 'misclosure', label: 'Misclosure (computed less known closing level)', unit: 'mm', value: run.misclosureMm });
         if (run.allowable && run.misclosureMm !== undefined) {
           results.push({ name: 'allowable', label: `Allowable misclosure c·√K (c = ${A.toString(run.allowable.c)} mm, K = ${A.toPrecision(run.allowable.km, 4)} km)`, unit: 'mm', value: run.allowable.allowable as never });
           checks.push({ name: 'misclosure', label: 'Misclosure within c·√K', unit: 'mm', value: run.misclosureMm, tolerance: `≤ ${env.num(run.allowable.allowable as never).toFixed(1)}`, pass: run.withinAllowable === true });
         }
-        const notes = close ? [`Misclosure distributed by ${run.distributedBy}.`] : [];
+        const notes: string[] = [];
+        if (run.check.riseFallOk && run.check.heightOfInstrumentOk) {
+          notes.push(`Arithmetic of the reduction agrees: ΣBS − ΣFS = ΣRise − ΣFall = last − first = ${Number(env.num(run.check.difference).toPrecision(12))} ${u}, and Σ(HI × sights) = ΣIS + ΣFS + Σlevels (this confirms the sums, not the readings).`);
+        }
+        if (close) notes.push(`Misclosure distributed by ${run.distributedBy}.`);
         if (task.order !== undefined && typeof task.order === 'string') notes.push('The allowable misclosure constants are quoted from memory of FGCC (1984): check them against the standard before relying on them.');
         return { results, checks, notes };
       },
