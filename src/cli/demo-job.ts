@@ -50,7 +50,7 @@ export const DEMO_JOB = {
         { name: 'C475', chainage: 475, vertical: { elevation: `7°55'16.2"`, sigma: `3"` } },
       ],
       instrumentLevel: { value: 4.212, sigma: 0.003 },
-      tolerance: '0.5 m',
+      tolerance: '0.01 m',
     },
     {
       kind: 'height',

@@ -158,6 +158,13 @@ describe('quadspread demo, elevation and design tasks', () => {
       expect(Math.abs(predicted - dms(s.vertical.elevation)) * 3600).toBeLessThan(3);
     }
     expect(value(t, 'level')).toBeCloseTo(4.212 + h, 8);
+    // The residual check as a horizontal distance: the station-to-foot distance from the fitted
+    // foot, less the one the reading gives with the fitted height, h / tan α (derived).
+    const H = value(t, 'H'), eq = value(t, 'foot_offset_Q');
+    const worst = Math.max(...stations.map((s) => Math.abs(Math.sqrt((s.chainage - f) ** 2 + eq) - Math.sqrt(H) / Math.tan(rad(dms(s.vertical.elevation))))));
+    const check = t.checks.find((c) => c.name === 'residuals')!;
+    expect(Number(check.value)).toBeCloseTo(worst, 7);
+    expect(check.pass).toBe(worst <= 0.01);
   });
 
   it('gives the triangle area that Heron\'s formula gives and spreads equal to sin² by the law of cosines', () => {

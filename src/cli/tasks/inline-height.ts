@@ -29,7 +29,7 @@ export const inlineHeightTask: TaskKind = {
       },
     },
     instrumentLevel: { $ref: '#/$defs/measuredLength', description: 'Level of the instrument axis at every station (optional).' },
-    tolerance: { $ref: '#/$defs/tolerance', description: 'With four or more stations: the largest allowed residual, as a horizontal distance (the square root of the quadrance residual).' },
+    tolerance: { $ref: '#/$defs/tolerance', description: 'With four or more stations: the largest allowed residual, as a horizontal distance from the station to the foot (√ of the fitted horizontal quadrance less √ of the one read).' },
   }),
   prepare(task, path, ctx) {
     const name = typeof task.target === 'string' ? task.target : 'P';
@@ -69,9 +69,28 @@ export const inlineHeightTask: TaskKind = {
           const worst = r.residuals.reduce((m, x) => (A.cmp(A.abs(x), m) > 0 ? A.abs(x) : m), A.zero);
           results.push({ name: 'largest_residual', label: 'Largest residual (horizontal quadrance, fitted less read)', unit: squared(u), value: worst });
           if (tol !== undefined) {
+            // The residual q of station i is a difference of horizontal quadrances (fitted
+            // (cᵢ − f)² + e less read H·cot²), so as a distance it is √(fitted) − √(read) =
+            // q / (√fitted + √read), not √|q| (Q = D², derived). |√a − √b| ≤ t is decided
+            // exactly by squaring: with hi ≥ lo, hi − lo − t² ≤ 2t√lo.
             const T = A.from(tol);
-            // A residual of quadrance q corresponds to a distance √|q|: compare q with t² exactly.
-            checks.push({ name: 'residuals', label: 'Largest residual as a distance √|q|', unit: u, value: A.from(Math.sqrt(env.num(worst))), tolerance: `≤ ${plain(tol)}`, pass: A.cmp(worst, A.mul(T, T)) <= 0 });
+            let pass = true;
+            let worstDistance = 0;
+            let worstAt = stations[0]!.label;
+            r.residuals.forEach((q, i) => {
+              const d = A.sub(chain[i]!, r.footChainage);
+              const fitted = A.add(A.mul(d, d), r.footOffset);
+              const read = A.sub(fitted, q); // H·cot² of the reading: never negative
+              const [hi, lo] = A.cmp(fitted, read) >= 0 ? [fitted, read] : [read, fitted];
+              const x = A.sub(A.sub(hi, lo), A.mul(T, T));
+              if (A.sign(x) > 0 && A.cmp(A.mul(x, x), A.mul(A.mul(A.from(4), A.mul(T, T)), lo)) > 0) pass = false;
+              const dist = Math.abs(Math.sqrt(env.num(fitted)) - Math.sqrt(env.num(read)));
+              if (dist > worstDistance) {
+                worstDistance = dist;
+                worstAt = stations[i]!.label;
+              }
+            });
+            checks.push({ name: 'residuals', label: `Largest residual as a horizontal distance, √(fitted Q) − √(read Q) (at ${worstAt})`, unit: u, value: A.from(worstDistance), tolerance: `≤ ${plain(tol)}`, pass });
           }
         }
         let sketch;
