@@ -1,6 +1,6 @@
 /**
  * The bundled demonstration job: invented data at invented places (Harrowmere Fell, the
- * Saltings causeway, Crane Moss, Quillet Field), covering the main solvers, with
+ * Saltings causeway, Snipewhistle Moss, Quillet Field), covering the main solvers, with
  * uncertainties and pass/fail checks. `quadspread demo --job` prints it; the same job is
  * `examples/demo.json`.
  *
@@ -9,7 +9,7 @@
 
 /** The demonstration job (invented data; no real places). */
 export const DEMO_JOB = {
-  title: 'Demonstration job: Harrowmere Fell access road, Saltings mast, Crane Moss traverse (invented data)',
+  title: 'Demonstration job: Harrowmere Fell access road, Saltings mast, Snipewhistle Moss traverse (invented data)',
   description: 'Every place and reading in this job is invented for the demonstration.',
   units: { length: 'm' },
   points: {
@@ -89,7 +89,7 @@ export const DEMO_JOB = {
     },
     {
       kind: 'traverse',
-      name: 'Crane Moss control loop',
+      name: 'Snipewhistle Moss control loop',
       start: 'CM1',
       rule: 'compass',
       courses: [
