@@ -153,7 +153,7 @@ describe('quadspread run with checks that fail', () => {
     const r = cli(['run', jobFile('fails.json', job)]);
     expect(r.code).toBe(0);
     expect(r.stdout).toMatch(/check FAIL: Linear misclosure: 0\.5\d* m \(tolerance ≤ 0\.1 m\)/);
-    expect(r.stdout).toMatch(/check FAIL: Precision N of 1 : N: 361(\.0+)? \(tolerance ≥ 1000\)/); // 180.5 / 0.5
+    expect(r.stdout).toMatch(/check FAIL: Precision 1 : N, N = length ÷ linear misclosure: 361(\.0+)? \(tolerance ≥ 1000\)/); // 180.5 / 0.5
     expect(r.stdout).toMatch(/checks: 0 passed, 2 failed \(of 2\) -- SEE FAILED CHECKS ABOVE/);
   });
 

@@ -112,7 +112,7 @@ export const traverseTask: TaskKind = {
         if (tol.precision !== undefined) {
           const ratio = t.closure.ratio;
           const pass = ratio === undefined || A.cmp(ratio, A.from(tol.precision)) >= 0;
-          checks.push({ name: 'precision', label: 'Precision N of 1 : N', unit: '', value: ratio ?? A.zero, tolerance: `≥ ${tol.precision}`, pass });
+          checks.push({ name: 'precision', label: ratio === undefined ? 'Precision 1 : N (closes exactly: N is infinite, shown as 0)' : 'Precision 1 : N, N = length ÷ linear misclosure', unit: '', value: ratio ?? A.zero, tolerance: `≥ ${tol.precision}`, pass });
         }
         if (linearTol !== undefined) {
           const L = A.add(A.mul(t.closure.east, t.closure.east), A.mul(t.closure.north, t.closure.north));
@@ -125,7 +125,7 @@ export const traverseTask: TaskKind = {
           const m = angularMisclosure(A, angles);
           results.push({ name: 'angular_misclosure', label: 'Angular misclosure (sum of interior angles less (n − 2)·180°)', unit: '°', value: m.misclosure });
           if (angularTol !== undefined) {
-            checks.push({ name: 'angular', label: 'Angular misclosure', unit: '°', value: m.misclosure, tolerance: `≤ ${plain(angularTol)}`, pass: A.cmp(A.abs(m.misclosure), A.abs(A.from(angularTol))) <= 0 });
+            checks.push({ name: 'angular', label: 'Angular misclosure', unit: '°', value: m.misclosure, tolerance: typeof tol.angular === 'string' && !/^[\d.]+°?$/.test(tol.angular.trim()) ? `≤ ${tol.angular.trim()} = ${plain(angularTol)}` : `≤ ${plain(angularTol)}`, pass: A.cmp(A.abs(m.misclosure), A.abs(A.from(angularTol))) <= 0 });
           }
         }
         let sketch;
