@@ -17,6 +17,14 @@ export const EXIT = {
   UNSOLVABLE: 3,
 } as const;
 
+/** Longest run of digits a message shows whole; longer ones (exact values of absurd inputs) are cut. */
+const MAX_DIGITS_SHOWN = 40;
+
+/** Cuts runs of more than {@link MAX_DIGITS_SHOWN} digits to their first digits and their count, so a message stays readable. */
+export function shortenDigits(text: string): string {
+  return text.replace(new RegExp(`\\d{${MAX_DIGITS_SHOWN + 1},}`, 'g'), (d) => `${d.slice(0, 12)}…(${d.length} digits)`);
+}
+
 /** A job (or CSV, or command line) that cannot be read: exit 2. `path` names the place. */
 export class JobInvalid extends Error {
   readonly exitCode = EXIT.INVALID;
@@ -26,7 +34,7 @@ export class JobInvalid extends Error {
     /** What is wrong with the value there. */
     readonly reason: string,
   ) {
-    super(path === '' ? reason : `${path}: ${reason}`);
+    super(shortenDigits(path === '' ? reason : `${path}: ${reason}`));
     this.name = 'JobInvalid';
   }
 }
@@ -40,7 +48,7 @@ export class JobUnsolvable extends Error {
     /** Why there is no solution. */
     readonly reason: string,
   ) {
-    super(`${path}: no solution: ${reason}`);
+    super(shortenDigits(`${path}: no solution: ${reason}`));
     this.name = 'JobUnsolvable';
   }
 }

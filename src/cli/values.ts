@@ -54,13 +54,32 @@ function reason(e: unknown): string {
   throw e;
 }
 
-/** The `{ value, sigma }` form: returns the parts, or the value alone. */
-function splitMeasured(x: unknown): { value: unknown; sigma?: unknown; measuredForm: boolean } {
+/** Marks a `{ value, sigma }` pair made from a reading and the `sigma` beside it (as in `{ "elevation": …, "sigma": … }`). */
+const SIBLING_SIGMA = Symbol('sigma beside the reading');
+
+/** A reading with the `sigma` written beside it in the same object, for the readers below. */
+function withSiblingSigma(value: unknown, sigma: unknown): unknown {
+  return sigma === undefined ? value : { value, sigma, [SIBLING_SIGMA]: true };
+}
+
+/**
+ * The `{ value, sigma }` form: returns the parts, or the value alone, with the paths that
+ * name them (`path.value`, `path.sigma`; for a sigma written beside the reading, `path` and
+ * the sibling `….sigma`).
+ */
+function splitMeasured(x: unknown, path: string): { value: unknown; sigma?: unknown; measuredForm: boolean; valuePath: string; sigmaPath: string } {
   if (typeof x === 'object' && x !== null && !Array.isArray(x) && 'value' in x) {
-    const o = x as { value: unknown; sigma?: unknown };
-    return { value: o.value, ...(o.sigma !== undefined ? { sigma: o.sigma } : {}), measuredForm: true };
+    const o = x as { value: unknown; sigma?: unknown; [SIBLING_SIGMA]?: true };
+    const sibling = o[SIBLING_SIGMA] === true;
+    return {
+      value: o.value,
+      ...(o.sigma !== undefined ? { sigma: o.sigma } : {}),
+      measuredForm: true,
+      valuePath: sibling ? path : `${path}.value`,
+      sigmaPath: sibling ? path.replace(/\.[^.[\]]+$/, '.sigma') : `${path}.sigma`,
+    };
   }
-  return { value: x, measuredForm: false };
+  return { value: x, measuredForm: false, valuePath: path, sigmaPath: `${path}.sigma` };
 }
 
 /** Reads a length (number in the job's unit, or text such as `120.5 m`, `395 ft`, `5 mm`) into the job's unit, exactly. */
@@ -92,11 +111,10 @@ export function lengthText(x: unknown, path: string, unit: LengthUnit, what = 'l
 
 /** Reads a length input, with its sigma when given as `{ value, sigma }`. */
 export function readLength(x: unknown, path: string, unit: LengthUnit, name: string, what = 'length'): Input {
-  const m = splitMeasured(x);
-  const valuePath = m.measuredForm ? `${path}.value` : path;
-  const value = lengthText(m.value, valuePath, unit, what);
+  const m = splitMeasured(x, path);
+  const value = lengthText(m.value, m.valuePath, unit, what);
   const input: Input = { name, value, angle: false };
-  if (m.sigma !== undefined) input.sigma = readSigma(() => lengthText(m.sigma, `${path}.sigma`, unit, 'standard uncertainty'), `${path}.sigma`, m.sigma);
+  if (m.sigma !== undefined) input.sigma = readSigma(() => lengthText(m.sigma, m.sigmaPath, unit, 'standard uncertainty'), m.sigmaPath, m.sigma);
   return input;
 }
 
@@ -130,16 +148,16 @@ export function angleText(x: unknown, path: string, what = 'angle'): string {
 
 /** Reads an angle input in degrees, with its sigma (an angle too, e.g. `5"`) when given as `{ value, sigma }`. */
 export function readAngle(x: unknown, path: string, name: string, what = 'angle'): Input {
-  const m = splitMeasured(x);
-  const value = angleText(m.value, m.measuredForm ? `${path}.value` : path, what);
+  const m = splitMeasured(x, path);
+  const value = angleText(m.value, m.valuePath, what);
   const input: Input = { name, value, angle: true };
-  if (m.sigma !== undefined) input.sigma = readSigma(() => angleText(m.sigma, `${path}.sigma`, 'standard uncertainty'), `${path}.sigma`, m.sigma);
+  if (m.sigma !== undefined) input.sigma = readSigma(() => angleText(m.sigma, m.sigmaPath, 'standard uncertainty'), m.sigmaPath, m.sigma);
   return input;
 }
 
 /** A plain number (a spread, a ratio) with an optional sigma. */
 export function readNumber(x: unknown, path: string, name: string, what = 'number'): Input {
-  const m = splitMeasured(x);
+  const m = splitMeasured(x, path);
   const read = (v: unknown, p: string, w: string): string => {
     try {
       if (typeof v !== 'number' && typeof v !== 'string') throw new JobInvalid(p, `${show(v)} is not a valid ${w}`);
@@ -149,8 +167,8 @@ export function readNumber(x: unknown, path: string, name: string, what = 'numbe
       throw new JobInvalid(p, `${show(v)} is not a valid ${w}: ${reason(e)}`);
     }
   };
-  const input: Input = { name, value: read(m.value, m.measuredForm ? `${path}.value` : path, what), angle: false };
-  if (m.sigma !== undefined) input.sigma = readSigma(() => read(m.sigma, `${path}.sigma`, 'standard uncertainty'), `${path}.sigma`, m.sigma);
+  const input: Input = { name, value: read(m.value, m.valuePath, what), angle: false };
+  if (m.sigma !== undefined) input.sigma = readSigma(() => read(m.sigma, m.sigmaPath, 'standard uncertainty'), m.sigmaPath, m.sigma);
   return input;
 }
 
@@ -173,7 +191,7 @@ export function readVertical(x: unknown, path: string, name: string): VerticalSp
   } else if (typeof x === 'object' && x !== null) {
     const o = x as Record<string, unknown>;
     const sigma = o.sigma;
-    const withSigma = (v: unknown): unknown => (sigma === undefined ? v : { value: v, sigma });
+    const withSigma = (v: unknown): unknown => withSiblingSigma(v, sigma);
     if ('elevation' in o) spec = { form: 'elevation', input: readAngle(withSigma(o.elevation), `${path}.elevation`, `${name} elevation`, 'elevation angle'), text: String(o.elevation) };
     else if ('zenith' in o) spec = { form: 'zenith', input: readAngle(withSigma(o.zenith), `${path}.zenith`, `${name} zenith`, 'zenith angle'), text: String(o.zenith) };
     else if ('slope' in o) {

@@ -110,6 +110,10 @@ describe('quadspread run tells a bad reading (exit 2) from a computation with no
     ['a horizontal angle of 400°', { points: P, tasks: [{ kind: 'resection', control: ['A', 'B', 'C'], angles: ['400', '10'] }] }, 2, 'tasks[0].angles[0]: 400° is not a valid clockwise horizontal angle'],
     ['an interior angle of 0°', { tasks: [{ kind: 'base-height', base: 100, stations: [{ angle: 0, vertical: 10 }, { angle: 30 }] }] }, 2, 'tasks[0].stations[0].angle: 0° is not a valid interior angle'],
     ['a levelling run that starts with a foresight', { tasks: [{ kind: 'levelling', start: 10, sights: [{ fs: 1 }, { bs: 2 }] }] }, 2, 'tasks[0].sights[0]: the first row must be a backsight alone'],
+    ['a levelling row with both an intermediate sight and a foresight', { tasks: [{ kind: 'levelling', start: 10, sights: [{ bs: 1 }, { is: 1, fs: 2 }] }] }, 2, 'tasks[0].sights[1]: a row has an intermediate sight or a foresight, not both'],
+    ['a levelling row after the first with a backsight alone', { tasks: [{ kind: 'levelling', start: 10, sights: [{ bs: 1 }, { bs: 2 }, { fs: 1 }] }] }, 2, 'tasks[0].sights[1]: '],
+    ['an elevation with 68 minutes, its sigma beside it', { tasks: [{ kind: 'height', readings: [{ horizontal: 100, vertical: { elevation: `7°68'00"`, sigma: '5"' } }] }] }, 2, `tasks[0].readings[0].vertical.elevation: "7°68'00\\"" is not a valid elevation angle`],
+    ['a sigma beside an elevation that is not an angle', { tasks: [{ kind: 'height', readings: [{ horizontal: 100, vertical: { elevation: 7, sigma: 'abc' } }] }] }, 2, 'tasks[0].readings[0].vertical.sigma: "abc" is not a valid standard uncertainty'],
     ['a latitude of 95°', { tasks: [{ kind: 'geodetic', geodetic: { lat: 95, lon: 0 } }] }, 2, 'tasks[0].geodetic.lat: 95 is not a valid latitude'],
     ['a grade steeper than its slope', { tasks: [{ kind: 'path-grade', slope: '5%', grade: '10%' }] }, 3, 'tasks[0] (path-grade): no solution: GRADE_STEEPER_THAN_SLOPE'],
     ['in-line readings on both sides of the horizon', { tasks: [{ kind: 'inline-height', stations: [{ chainage: 0, vertical: 10 }, { chainage: 10, vertical: -10 }, { chainage: 20, vertical: 10 }] }] }, 3, 'tasks[0] (inline-height): no solution: INCONSISTENT_READINGS'],
@@ -229,5 +233,16 @@ describe('quadspread run with an output file that cannot be written', () => {
     const r = cli(['batch', 'triangles', csv, '--out', join(dir, 'no-such-folder', 'out.csv')]);
     expect(r.code).toBe(2);
     expect(r.stderr).toMatch(/the folder ".*no-such-folder" does not exist/);
+  });
+});
+
+describe('quadspread run with absurd values', () => {
+  it('exits 3 with a short message when an exact value has thousands of digits (a chainage of 1e999)', () => {
+    const job = { tasks: [{ kind: 'inline-height', stations: [{ chainage: 0, vertical: 10 }, { chainage: 150, vertical: 20 }, { chainage: '1e999', vertical: 15 }, { chainage: 475, vertical: 8 }] }] };
+    const r = cli(['run', jobFile('absurd.json', job)]);
+    expect(r.code).toBe(3);
+    expect(r.stderr).toMatch(/^quadspread: tasks\[0\] \(inline-height\): no solution: /);
+    expect(r.stderr).toMatch(/…\(\d+ digits\)/);
+    expect(r.stderr.length).toBeLessThan(1000);
   });
 });

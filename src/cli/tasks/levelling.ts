@@ -5,7 +5,7 @@
  *
  * @module cli
  */
-import { LEVELLING_ORDERS, levelRun } from '../../index.js';
+import { LEVELLING_ORDERS, QuadspreadError, levelRun, rational } from '../../index.js';
 import type { LevelSight, LevellingOrder } from '../../index.js';
 import { JobInvalid } from '../failure.js';
 import type { TaskKind } from '../task.js';
@@ -56,6 +56,29 @@ export const levellingTask: TaskKind = {
     const first = (task.sights as Record<string, unknown>[])[0]!;
     if (first.bs === undefined || first.is !== undefined || first.fs !== undefined) {
       throw new JobInvalid(`${path}.sights[0]`, 'the first row must be a backsight alone, on the starting bench mark');
+    }
+    // Which sights a row may hold is the library's rule: ask it now, in exact arithmetic and
+    // without the closing level, so that a mis-booked row is a bad job (exit 2) naming the row.
+    try {
+      const R = rational;
+      levelRun(R, {
+        start: R.from(start.value),
+        unit: ctx.unit,
+        sights: sights.map((s) => ({
+          station: s.station,
+          ...(s.bs ? { bs: R.from(s.bs.value) } : {}),
+          ...(s.is ? { is: R.from(s.is.value) } : {}),
+          ...(s.fs ? { fs: R.from(s.fs.value) } : {}),
+          ...(s.distance ? { distance: R.from(s.distance.value) } : {}),
+        })),
+      });
+    } catch (e) {
+      if (!(e instanceof QuadspreadError)) throw e;
+      // Other refusals are met again, and reported (exit 3), by the computation itself.
+      if (e.code === 'INVALID_ARGUMENT') {
+        const row = /sights\[(\d+)\](\.\w+)?/.exec(e.where);
+        throw new JobInvalid(row ? `${path}.sights[${row[1]}]${row[2] ?? ''}` : path, e.message.slice(e.message.indexOf(e.where) + e.where.length + 2));
+      }
     }
     const inputs = [start, ...(close ? [close] : []), ...sights.flatMap((s) => [s.bs, s.is, s.fs, s.distance].filter((x): x is Input => x !== undefined))];
     return {
