@@ -1,7 +1,8 @@
 /**
  * The SVG sketch: one panel per view (plan views with north up; elevation views with
- * height up), each fitted to its own extent at one scale in both directions, labelled
- * with the computed values. A drawing to check a configuration by eye, not a plan to
+ * height up), each fitted to its own extent at one scale in both directions (heights of
+ * long, low elevation views exaggerated by a stated whole factor), labelled with the
+ * computed values. A drawing to check a configuration by eye, not a plan to
  * set out from.
  *
  * @module cli
