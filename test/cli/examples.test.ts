@@ -66,3 +66,16 @@ describe('examples/road-grade.json', () => {
     expect(val(face!, 'Pegged line.grade')).toBeCloseTo(100 * Math.tan(Math.asin(Math.sin(phi) * Math.cos(rad(80)))), 8);
   });
 });
+
+describe('examples/geodesy.json', () => {
+  it('gives the round trip through the inverse as a note, not as a counted check on the coordinates', () => {
+    const r = cli(['run', resolve(__dirname, '../../examples/geodesy.json'), '--format', 'json']);
+    expect(r.code).toBe(0);
+    const report = JSON.parse(r.stdout) as { tasks: { checks: unknown[]; notes: string[] }[]; summary: { passed: number; failed: number } };
+    for (const t of report.tasks) {
+      expect(t.checks).toEqual([]);
+      expect(t.notes.some((n) => /^Computation check: the round trip .* agrees/.test(n))).toBe(true);
+    }
+    expect(report.summary).toMatchObject({ passed: 0, failed: 0 });
+  });
+});
