@@ -49,8 +49,11 @@ const OPS = {
   sign: [1, (a) => `__qsSign(${a})`],
   from: [1, (a) => `__qsFrom(${a})`],
 };
-// float has no fused kernels: `A.kernels` is `undefined` in the float copy.
-const CONSTANTS = { zero: '0', one: '1', kernels: 'undefined' };
+// float has no fused kernels: `A.kernels` is `undefined` in the float copy. Parenthesised so
+// that `A.zero.toFixed(1)` stays valid code.
+const CONSTANTS = { zero: '(0)', one: '(1)', kernels: '(void 0)' };
+/** The rewrite for the name `k`, own keys only (`A.toString`, `A.constructor` are left alone). */
+const own = (table, k) => (Object.hasOwn(table, k) ? table[k] : undefined);
 
 /** The helpers: each is exactly the float arithmetic's operation (src/arithmetic/float.ts). */
 const HELPER_SOURCE = `import { float as __qsFloat } from './arithmetic/float.js';
@@ -64,7 +67,32 @@ export const __qsFrom = (x) => (typeof x === 'number' && x - x === 0 ? x : __qsF
 const HELPER_IMPORT = `import { __qsFloat, __qsDiv, __qsSqrt, __qsCmp, __qsSign, __qsFrom } from '${HELPERS}';\n`;
 
 function isFunctionLike(node) {
-  return ts.isFunctionDeclaration(node) || ts.isFunctionExpression(node) || ts.isArrowFunction(node) || ts.isMethodDeclaration(node);
+  // Functions, arrows, methods, constructors, getters and setters: anything with parameters.
+  return ts.isFunctionLike(node) && Array.isArray(node.parameters);
+}
+
+/** Whether the identifier `name` occurs anywhere in `node` (conservative). */
+function mentions(node, name) {
+  let found = false;
+  const visit = (n) => {
+    if (found) return;
+    if (ts.isIdentifier(n) && n.text === name) found = true;
+    else ts.forEachChild(n, visit);
+  };
+  visit(node);
+  return found;
+}
+
+/** Whether `node` uses `this` or `arguments` (then the generic copy gets them as they came). */
+function usesCallContext(node) {
+  let found = false;
+  const visit = (n) => {
+    if (found) return;
+    if (n.kind === ts.SyntaxKind.ThisKeyword || (ts.isIdentifier(n) && n.text === 'arguments')) found = true;
+    else ts.forEachChild(n, visit);
+  };
+  visit(node);
+  return found;
 }
 
 function isArithmeticParam(param, sf) {
@@ -84,6 +112,9 @@ function rebindsName(node, name) {
   const visit = (n) => {
     if (found) return;
     if (ts.isBinaryExpression(n) && ASSIGN.has(n.operatorToken.kind) && ts.isIdentifier(n.left) && n.left.text === name) found = true;
+    // Destructuring assignment ([A] = …, ({ A } = …)) and for (A of …) / for (A in …).
+    else if (ts.isBinaryExpression(n) && n.operatorToken.kind === ts.SyntaxKind.EqualsToken && (ts.isArrayLiteralExpression(n.left) || ts.isObjectLiteralExpression(n.left)) && mentions(n.left, name)) found = true;
+    else if ((ts.isForOfStatement(n) || ts.isForInStatement(n)) && !ts.isVariableDeclarationList(n.initializer) && mentions(n.initializer, name)) found = true;
     else if ((ts.isPrefixUnaryExpression(n) || ts.isPostfixUnaryExpression(n)) && ts.isIdentifier(n.operand) && n.operand.text === name) found = true;
     else if ((ts.isVariableDeclaration(n) || ts.isFunctionDeclaration(n) || ts.isClassDeclaration(n)) && n.name && ts.isIdentifier(n.name) && n.name.text === name) found = true;
     else if ((ts.isVariableDeclaration(n) || ts.isParameter(n)) && n.name && !ts.isIdentifier(n.name) && n.name.getText().match(new RegExp(`\\b${name}\\b`))) found = true;
@@ -136,7 +167,7 @@ export function specializeSource(code, fileName = 'module.ts') {
       }
       if (ts.isCallExpression(node) && ts.isPropertyAccessExpression(node.expression)) {
         const callee = node.expression;
-        const op = OPS[callee.name.text];
+        const op = own(OPS, callee.name.text);
         // A.from(<numeric literal>) is that literal (float.from returns a finite number as is).
         if (
           callee.name.text === 'from' && ts.isIdentifier(callee.expression) && callee.expression.text === a &&
@@ -153,10 +184,10 @@ export function specializeSource(code, fileName = 'module.ts') {
         }
       }
       if (ts.isPropertyAccessExpression(node) && ts.isIdentifier(node.expression) && node.expression.text === a) {
-        const k = CONSTANTS[node.name.text];
+        const k = own(CONSTANTS, node.name.text);
         const parent = node.parent;
         const isCallee = ts.isCallExpression(parent) && parent.expression === node;
-        const isTarget = ts.isBinaryExpression(parent) && parent.left === node;
+        const isTarget = (ts.isBinaryExpression(parent) && parent.left === node) || ts.isDeleteExpression(parent) || ts.isPrefixUnaryExpression(parent) || ts.isPostfixUnaryExpression(parent);
         if (k !== undefined && !isCallee && !isTarget) return k;
       }
       return undefined;
@@ -167,7 +198,9 @@ export function specializeSource(code, fileName = 'module.ts') {
     const name = st.name.text;
     const generic = `${name}$qsGeneric`;
     // Forward the parameters by name where they are plain identifiers (cheaper than `arguments`).
-    const plain = st.parameters.every((q) => ts.isIdentifier(q.name));
+    // Where the body reads `this` or `arguments`, forward them unchanged (`arguments.length` and
+    // extra arguments would differ otherwise).
+    const plain = st.parameters.every((q) => ts.isIdentifier(q.name)) && !usesCallContext(st.body) && !st.parameters.some((q) => q.initializer && usesCallContext(q.initializer));
     const forward = plain
       ? `${generic}(${st.parameters.map((q) => (q.dotDotDotToken ? '...' : '') + q.name.text).join(', ')})`
       : `${generic}.apply(this, arguments as any)`;

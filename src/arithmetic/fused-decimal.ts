@@ -32,6 +32,13 @@ function coefficient(x: Big): bigint {
   return x.s < 0 ? -m : m;
 }
 
+/**
+ * Most decimal places between the largest and the smallest digit of a kernel's inputs: beyond
+ * it the exact integers would have thousands of digits, and the generic code (which rounds at
+ * every step) is faster. Survey coordinates span a few dozen.
+ */
+const MAX_SPAN = 2500;
+
 function exponent(x: Big): number {
   return x.e - (x.c.length - 1);
 }
@@ -113,6 +120,9 @@ export function decimalKernels(digits: number, zero: Big, from: (x: unknown) => 
     return make(q * 10n + (an < 0n ? -1n : 1n), ae - be - k - 1);
   }
 
+  /** x is a Big made by this arithmetic's constructor (not a number, text or another instance's Big). */
+  const own = (x: unknown): boolean => x !== null && typeof x === 'object' && (x as { constructor?: unknown }).constructor === Ctor && Array.isArray((x as Big).c);
+
   /** x read by the arithmetic (its own rounding), or undefined where from() would throw. */
   const read = (x: unknown): Big | undefined => {
     if (typeof x !== 'number' && typeof x !== 'string' && typeof x !== 'bigint' && (x === null || typeof x !== 'object')) return undefined;
@@ -158,6 +168,10 @@ export function decimalKernels(digits: number, zero: Big, from: (x: unknown) => 
       len[i] = d;
       e = Math.min(e, exponent(la), exponent(de), exponent(d));
     }
+    let top = Math.max(start.x.e, start.y.e, end.x.e, end.y.e);
+    for (let i = 0; i < n; i++) top = Math.max(top, lat[i]!.e, dep[i]!.e, len[i]!.e);
+    // A span of magnitudes beyond MAX_SPAN decimal places: left to the generic code (see triangle).
+    if (top - e > MAX_SPAN) return undefined;
     const at = (x: Big): bigint => coefficient(x) * pow10(exponent(x) - e);
     const Sx = at(start.x), Sy = at(start.y);
     const points: { x: Big; y: Big }[] = new Array(n + 1);
@@ -198,8 +212,16 @@ export function decimalKernels(digits: number, zero: Big, from: (x: unknown) => 
    * Metrica I.8, in squared form).
    */
   function triangle(x1: Big, y1: Big, x2: Big, y2: Big, x3: Big, y3: Big): FusedTriangle<Big> | undefined {
+    // Only this arithmetic's own values (a number, text or a Big of another decimal instance goes
+    // to the generic code, which reads or reports it).
+    // (Every big.js constructor shares one prototype, so `instanceof` cannot tell instances
+    // apart; each Big records its own constructor.)
+    if (!(own(x1) && own(y1) && own(x2) && own(y2) && own(x3) && own(y3))) return undefined;
     const e1 = exponent(x1), e2 = exponent(y1), e3 = exponent(x2), e4 = exponent(y2), e5 = exponent(x3), e6 = exponent(y3);
     const e = Math.min(e1, e2, e3, e4, e5, e6);
+    // Coordinates whose magnitudes span more than MAX_SPAN decimal places would make the exact
+    // integers huge (the generic code rounds at every step instead): leave them to it.
+    if (Math.max(x1.e, y1.e, x2.e, y2.e, x3.e, y3.e) - e > MAX_SPAN) return undefined;
     // Integers X = x·10^(−e), all on one scale.
     const X1 = coefficient(x1) * pow10(e1 - e), Y1 = coefficient(y1) * pow10(e2 - e);
     const X2 = coefficient(x2) * pow10(e3 - e), Y2 = coefficient(y2) * pow10(e4 - e);

@@ -27,6 +27,7 @@ function reduced(n: bigint, d: bigint): Fraction {
 
 /** gcd of two doubles holding integers ≥ 0 below 2^53 (Euclid, exact in binary64). */
 function gcdNum(a: number, b: number): number {
+  if (!(a >= 0 && b >= 0)) throw new RangeError('gcdNum: not integers ≥ 0'); // never loop on NaN
   while (b !== 0) {
     const t = a % b;
     a = b;
@@ -81,6 +82,10 @@ function ratioOver(c2: bigint, p: bigint, q: bigint): Fraction {
  * collinear, so that the caller's generic path reports those cases.
  */
 function triangle(x1: Fraction, y1: Fraction, x2: Fraction, y2: Fraction, x3: Fraction, y3: Fraction): FusedTriangle<Fraction> | undefined {
+  // Only this arithmetic's own values: a number, text, bigint or a value of another arithmetic
+  // in a point goes to the generic code (which reports it). Without this check a foreign
+  // value's missing denominator made gcd() loop forever on NaN.
+  if (!(x1 instanceof Fraction && y1 instanceof Fraction && x2 instanceof Fraction && y2 instanceof Fraction && x3 instanceof Fraction && y3 instanceof Fraction)) return undefined;
   // One common denominator D for the six coordinates; X = D·x are integers.
   const d1 = x1.d, d2 = y1.d, d3 = x2.d, d4 = y2.d, d5 = x3.d, d6 = y3.d;
   let D = d1;
