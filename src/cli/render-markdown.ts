@@ -6,6 +6,9 @@
 import type { Report } from './report.js';
 import { BUDGET_SHOWN, shortExact, showExact } from './render-text.js';
 
+/** What ± σ and the budget column mean, said once at the top of a report that has them. */
+const MARKDOWN_LEGEND = '± σ is the standard uncertainty (k = 1, first order); the budget gives each input\'s share of the variance.';
+
 /** Escapes text for a Markdown table cell. */
 function cell(text: string): string {
   return text.replace(/\\/g, '\\\\').replace(/\|/g, '\\|').replace(/\n/g, ' ');
@@ -21,6 +24,7 @@ export function renderMarkdown(report: Report): string {
   out.push(`# ${report.title}`);
   out.push('');
   out.push(`Source: \`${report.source}\` · arithmetic: \`${report.arithmetic}\` · ${report.digits} significant digits · lengths in ${report.lengthUnit}`);
+  if (report.tasks.some((t) => t.results.some((q) => q.sigma !== undefined))) out.push('', MARKDOWN_LEGEND);
   for (const t of report.tasks) {
     out.push('');
     out.push(`## ${t.index + 1}. ${cell(t.name)} (${t.kind})`);

@@ -30,6 +30,9 @@ export function showExact(q: Quantity): q is Quantity & { exact: string } {
   }
 }
 
+/** What ± and the budget lines mean, said once at the top of a report that has them. */
+export const UNCERTAINTY_LEGEND = '± is the standard uncertainty (k = 1, first order); a budget gives each input\'s share of the variance and, in brackets, its part of the uncertainty.';
+
 function withUnit(value: string, unit: string): string {
   return unit === '' ? value : `${value} ${unit}`;
 }
@@ -53,6 +56,7 @@ export function renderText(report: Report): string {
   const out: string[] = [];
   out.push(`quadspread report: ${report.title}`);
   out.push(`source: ${report.source}; arithmetic: ${report.arithmetic}; ${report.digits} significant digits; lengths in ${report.lengthUnit}`);
+  if (report.tasks.some((t) => t.results.some((q) => q.sigma !== undefined))) out.push(UNCERTAINTY_LEGEND);
   for (const t of report.tasks) {
     out.push('');
     out.push(`[${t.index + 1}] ${t.name} (${t.kind})`);

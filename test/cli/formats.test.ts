@@ -157,3 +157,12 @@ describe('docs/cli.md', () => {
     }
   });
 });
+
+describe('quadspread demo says what its uncertainties are', () => {
+  it('states once, at the top of text and Markdown, that ± is the standard uncertainty and what a budget share is', () => {
+    const text = cli(['demo']).stdout.split('\n');
+    expect(text[2]).toMatch(/^± is the standard uncertainty \(k = 1, first order\); a budget gives each input's share of the variance/);
+    const md = cli(['demo', '--format', 'markdown']).stdout;
+    expect(md).toContain('± σ is the standard uncertainty (k = 1, first order)');
+  });
+});
