@@ -122,6 +122,15 @@ describe('fused triangle kernels on edge cases', () => {
     }
   });
 
+  it('decimal: nearly collinear points get their tiny spread from the kernel, where the step-by-step code in 3 digits rounds the cross product to 0', () => {
+    const D = decimal(3);
+    const plainD: Arithmetic<Decimal, false> = { ...D, kernels: undefined };
+    const pts = [point(D, 0, 0), point(D, 999, 998), point(D, 1000, 999)] as const;
+    // Derived by hand: cross = 999·999 − 998·1000 = 1; Q2 = 1000² + 999², Q3 = 999² + 998².
+    expect(D.toString(triangle(D, ...pts).s1)).toBe(D.toString(D.from(`1/${(1000 ** 2 + 999 ** 2) * (999 ** 2 + 998 ** 2)}`)));
+    expect(outcome(() => triangle(plainD, ...pts))).toMatch(/^error COLLINEAR_POINTS/);
+  });
+
   it('decimal: coordinates spanning thousands of decimal places go to the generic code', () => {
     const D = decimal(34);
     let big = D.from('1e999'), tiny = D.from('1e-999');
