@@ -8,6 +8,7 @@
  * @module cli
  */
 import { createReadStream } from 'node:fs';
+import { resolve as resolvePath } from 'node:path';
 import { createInterface } from 'node:readline';
 import { QuadspreadError, point, quadrance, sqrtOf, rootToPrecision } from '../index.js';
 import type { Arithmetic } from '../index.js';
@@ -48,6 +49,9 @@ export const BATCH_KINDS: Record<string, BatchKind> = {
 export async function runBatch(kind: string, file: string, o: { arithmetic: ArithmeticName; digits: number; out?: string }, io: Io): Promise<void> {
   const k = BATCH_KINDS[kind];
   if (!k) throw new JobInvalid('', `${JSON.stringify(kind)} is not a batch kind (${Object.keys(BATCH_KINDS).join(', ')})`);
+  if (o.out !== undefined && file !== '-' && resolvePath(o.out) === resolvePath(file)) {
+    throw new JobInvalid('--out', `${JSON.stringify(o.out)} is the input CSV itself: give the results another name`);
+  }
   const A = arithmeticFor(o.arithmetic, o.digits);
   const input = file === '-' ? process.stdin : createReadStream(file, { encoding: 'utf8' });
   const opened = new Promise<void>((resolve, reject) => {

@@ -55,9 +55,15 @@ function addReportOptions(cmd: Command): Command {
     .option('-o, --out <file>', 'write the report to this file instead of the standard output');
 }
 
-function report(job: unknown, source: string, o: ReportOptions, io: Io): void {
+function report(job: unknown, source: string, o: ReportOptions, io: Io, jobFile?: string): void {
   if (o.out !== undefined && o.sketch !== undefined && resolve(o.out) === resolve(o.sketch)) {
     throw new JobInvalid('--sketch', `${JSON.stringify(o.sketch)} is also the --out file: give them different names`);
+  }
+  // Writing the report over the job file would lose the readings.
+  for (const [option, target] of [['--out', o.out], ['--sketch', o.sketch]] as const) {
+    if (jobFile !== undefined && target !== undefined && resolve(target) === resolve(jobFile)) {
+      throw new JobInvalid(option, `${JSON.stringify(target)} is the job file itself: give the output another name`);
+    }
   }
   const r = runJob(job, TASK_KINDS, { arithmetic: o.arithmetic, digits: o.digits, source });
   const text = o.format === 'json' ? renderJson(r) : o.format === 'markdown' ? renderMarkdown(r) : renderText(r);
@@ -106,7 +112,7 @@ export function program(io: Io): Command {
 
   addReportOptions(p.command('run').description('run a job file (JSON; see docs/job-schema.json) and print its report').argument('<job.json>', 'the job file')).action(
     (file: string, o: ReportOptions) => {
-      report(parseJob(readText(file, 'job file')), file, o, io);
+      report(parseJob(readText(file, 'job file')), file, o, io, file);
     },
   );
 

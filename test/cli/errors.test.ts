@@ -227,6 +227,26 @@ describe('quadspread run with an output file that cannot be written', () => {
     expect(readdirSync(join(outDir, 'a-folder'))).toEqual([]);
   });
 
+  it('exits 2 when --out or --sketch names the job file itself, and leaves the job as it was', () => {
+    const job = ok();
+    const before = readFileSync(job, 'utf8');
+    for (const option of ['--out', '--sketch']) {
+      const r = cli(['run', job, option, job]);
+      expect(r.code).toBe(2);
+      expect(r.stderr).toContain(`${option}: ${JSON.stringify(job)} is the job file itself`);
+      expect(readFileSync(job, 'utf8')).toBe(before);
+    }
+  });
+
+  it('exits 2 when batch --out names the input CSV itself, and leaves it as it was', () => {
+    const csv = join(dir, 'same.csv');
+    writeFileSync(csv, 'x1,y1,x2,y2,x3,y3\n0,0,4,0,0,3\n');
+    const r = cli(['batch', 'triangles', csv, '--out', csv]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toContain('is the input CSV itself');
+    expect(readFileSync(csv, 'utf8')).toBe('x1,y1,x2,y2,x3,y3\n0,0,4,0,0,3\n');
+  });
+
   it('exits 2 when batch --out is in a missing folder', () => {
     const csv = join(dir, 'tri.csv');
     writeFileSync(csv, 'x1,y1,x2,y2,x3,y3\n0,0,4,0,0,3\n');
