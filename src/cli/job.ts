@@ -232,7 +232,7 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
       ...(base.sketch ? { sketch: base.sketch } : {}),
     };
     if (A.exact && base.results.some((q) => uncertainties.get(q.name)?.dependsOnAngle ?? approx)) {
-      report.notes.push('Results that depend on angle readings have no exact form: the spread of an angle is transcendental, so in rational it is a fraction within a stated tolerance.');
+      report.notes.push('Results that depend on angle readings have no exact form: the spread of an angle is transcendental, so in rational it is a fraction good to about 1e-40 relative (docs/readings.md), not an exact value.');
     }
     tasks.push(report);
   });
