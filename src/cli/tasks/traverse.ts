@@ -99,8 +99,8 @@ export const traverseTask: TaskKind = {
         const t = traverse(A, { start: xy(env, start), courses: list, close: xy(env, close), rule });
         const u = ctx.unitName;
         const results = [
-          { name: 'misclosure_east', label: 'Misclosure in departure (east)', unit: u, value: t.closure.east },
-          { name: 'misclosure_north', label: 'Misclosure in latitude (north)', unit: u, value: t.closure.north },
+          { name: 'misclosure_east', label: 'Misclosure in departure (east), computed end less known closing point', unit: u, value: t.closure.east },
+          { name: 'misclosure_north', label: 'Misclosure in latitude (north), computed end less known closing point', unit: u, value: t.closure.north },
           { name: 'misclosure', label: 'Linear misclosure', unit: u, value: t.closure.linear },
           { name: 'length', label: 'Length of the traverse', unit: u, value: t.length, approx: true },
           ...t.adjusted.slice(1, -1).flatMap((p, i) => [
