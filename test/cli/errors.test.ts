@@ -266,3 +266,23 @@ describe('quadspread run with absurd values', () => {
     expect(r.stderr.length).toBeLessThan(1000);
   });
 });
+
+describe('quadspread run with an uncertain coefficient of refraction', () => {
+  it('carries σ(k) into the correction: u = σ(k)·D²/(2R) (derived from (1 − k)·D²/(2R))', () => {
+    const job = { tasks: [{ kind: 'trig-height', distance: 1000, measured: 'horizontal', vertical: 1, correction: { k: { value: 0.13, sigma: 0.05 } } }] };
+    const r = cli(['run', jobFile('k-sigma.json', job), '--format', 'json']);
+    expect(r.code).toBe(0);
+    const t = JSON.parse(r.stdout).tasks[0] as { results: { name: string; sigma?: string; budget?: { input: string }[] }[]; notes: string[] };
+    const corr = t.results.find((q) => q.name === 'correction')!;
+    expect(Number(corr.sigma)).toBeCloseTo((0.05 * 1000 * 1000) / (2 * 6371000), 4);
+    expect(corr.budget!.map((b) => b.input)).toEqual(['k']);
+    expect(t.notes.some((n) => n.includes('leaves out that of k'))).toBe(false);
+  });
+
+  it('says so when k carries no uncertainty', () => {
+    const job = { tasks: [{ kind: 'trig-height', distance: 1000, measured: 'horizontal', vertical: { elevation: 1, sigma: '5"' } }] };
+    const r = cli(['run', jobFile('k-none.json', job)]);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toContain('The uncertainty of the correction leaves out that of k');
+  });
+});

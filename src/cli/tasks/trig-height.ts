@@ -32,7 +32,17 @@ export const trigHeightTask: TaskKind = {
   schema: taskSchema('trig-height', ['distance', 'vertical'], {
     ...SIGHT,
     correction: {
-      anyOf: [{ type: 'boolean' }, { type: 'object', additionalProperties: false, properties: { k: { type: ['number', 'string'] }, radius: { $ref: '#/$defs/length' } } }],
+      anyOf: [{ type: 'boolean' }, { type: 'object', additionalProperties: false, properties: {
+        k: {
+          anyOf: [
+            { type: ['number', 'string'] },
+            { type: 'object', required: ['value'], additionalProperties: false, properties: { value: { type: ['number', 'string'] }, sigma: { type: ['number', 'string'] } } },
+          ],
+          description: 'The coefficient of refraction, or { "value": …, "sigma": … } to carry its uncertainty into the budget.',
+          'x-describe': 'a number, or { "value", "sigma" }',
+        },
+        radius: { $ref: '#/$defs/length' },
+      } }],
       description: 'Curvature and refraction: true (default: k = 0.13, R = 6 371 000 m), false, or { "k": …, "radius": … }.',
       'x-describe': 'true, false or { "k", "radius" }',
     },
@@ -110,7 +120,11 @@ export const trigHeightTask: TaskKind = {
             notes: [],
           }];
         }
-        return { results, checks, notes: c === false ? [] : ['Curvature and refraction use k and R as stated in docs/cli.md (k = 0.13, R = 6 371 000 m by default).'], ...(sketch ? { sketch } : {}) };
+        const notes = c === false ? [] : ['Curvature and refraction use k and R as stated in docs/cli.md (k = 0.13, R = 6 371 000 m by default).'];
+        if (c !== false && k?.sigma === undefined) {
+          notes.push('The uncertainty of the correction leaves out that of k (refraction varies from sight to sight): give correction.k as { "value": …, "sigma": … } to include it.');
+        }
+        return { results, checks, notes, ...(sketch ? { sketch } : {}) };
       },
     };
   },
