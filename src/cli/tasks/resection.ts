@@ -30,7 +30,7 @@ export const resectionTask: TaskKind = {
         const results = [
           { name: `${name}.east`, label: `${name} east`, unit: ctx.unitName, value: r.station.x },
           { name: `${name}.north`, label: `${name} north`, unit: ctx.unitName, value: r.station.y },
-          { name: 'danger_ratio', label: 'Distance from the danger circle, |Q(O, S) − R²| / R²', unit: '', value: r.dangerRatio },
+          { name: 'danger_ratio', label: 'Nearness to the danger circle, |Q(O, S) − R²| / R² (a ratio: 0 on the circle through the control points)', unit: '', value: r.dangerRatio },
         ];
         let sketch;
         if (env.drawing) {
@@ -44,7 +44,7 @@ export const resectionTask: TaskKind = {
             notes: [],
           }];
         }
-        return { results, checks: [], notes: ['A station near the circle through the control points is weakly fixed; the danger ratio says how near (0 on the circle).'], ...(sketch ? { sketch } : {}) };
+        return { results, checks: [], notes: ['A station near the circle through the control points is weakly fixed; the danger ratio says how near (0 on the circle).', 'Two angles to three control points fix the station with no redundancy, so nothing here checks the readings: sight a fourth known point to check it.'], ...(sketch ? { sketch } : {}) };
       },
     };
   },
