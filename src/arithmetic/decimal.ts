@@ -97,7 +97,9 @@ export function decimal(digits = 34): DecimalArithmetic {
     const c = coef * 10n + (coef < 0n ? -1n : 1n);
     return make(c, exp - 1);
   };
-  const isOwn = (x: unknown): x is Big => x instanceof D;
+  // big.js constructors share one prototype, so `instanceof` cannot tell instances apart;
+  // each Big carries its own constructor as an own property.
+  const isOwn = (x: unknown): x is Big => x instanceof D && (x as Big).constructor === D;
   const elementary = decimalElementary(digits);
   const fromText = (s: string): Big => round(new D(s));
 

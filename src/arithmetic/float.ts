@@ -31,7 +31,7 @@ function finite(v: number, where: string): number {
  * //=> 0.30000000000000004
  * ```
  */
-export const float: FloatArithmetic = {
+export const float: FloatArithmetic = Object.freeze<FloatArithmetic>({
   name: 'float',
   exact: false,
   zero: 0,
@@ -86,7 +86,7 @@ export const float: FloatArithmetic = {
     if (y === 0 && x === 0) throw new QuadspreadError('INVALID_ARGUMENT', 'float.atan2(y, x)', 'the angle of the zero vector is undefined');
     return Math.atan2(y, x);
   },
-};
+});
 
 /** The exact value of a finite double as text (a/2^k). */
 function exactText(a: number): string {

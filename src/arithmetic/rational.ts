@@ -68,7 +68,7 @@ function toElementary(a: Rational): string {
  * //=> '3/10'
  * ```
  */
-export const rational: RationalArithmetic = {
+export const rational: RationalArithmetic = Object.freeze<RationalArithmetic>({
   name: 'rational',
   exact: true,
   zero: ZERO,
@@ -124,4 +124,4 @@ export const rational: RationalArithmetic = {
   },
   // Fused exact kernels (src/arithmetic/fused-rational.ts): same results, fewer gcds.
   kernels: rationalKernels,
-};
+});

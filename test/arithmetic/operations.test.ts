@@ -214,3 +214,14 @@ describe('QuadspreadError', () => {
     expect(new Error('y')).not.toBeInstanceOf(QuadspreadError);
   });
 });
+
+describe('the arithmetic objects', () => {
+  it('are frozen, so no caller can change an operation for every other caller', () => {
+    expect(Object.isFrozen(rational)).toBe(true);
+    expect(Object.isFrozen(float)).toBe(true);
+    expect(Object.isFrozen(decimal(12))).toBe(true);
+    expect(() => {
+      (float as { add: unknown }).add = () => 0;
+    }).toThrow(TypeError);
+  });
+});

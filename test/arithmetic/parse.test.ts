@@ -164,6 +164,16 @@ describe('decimal.from(x)', () => {
     const third = D30.div(D30.one, D30.from(3));
     expect(D5.toString(D5.from(third))).toBe('0.33333');
   });
+  it('does not take a value of another decimal instance for its own', () => {
+    const D40 = decimal(40);
+    const D10 = decimal(10);
+    const x = D40.div(D40.one, D40.from(7));
+    expect(D10.is(x)).toBe(false);
+    expect(D40.is(x)).toBe(true);
+    const y = D10.from(x);
+    expect(D10.is(y)).toBe(true);
+    expect(D10.toString(y)).toBe('0.1428571429');
+  });
   it('refuses a value of another arithmetic', () => {
     expect(() => decimal(10).from(rational.from(1) as never)).toThrow(QuadspreadError);
     expect(() => rational.from(decimal(10).one as never)).toThrow(QuadspreadError);
