@@ -100,6 +100,12 @@ describe('quadspread run with a job that cannot be read', () => {
     expect(r.stderr).toMatch(/complex/);
     const d = cli(['demo', '--digits', 'many']);
     expect(d.code).toBe(2);
+    for (const digits of ['0', '101', '-3', '2.5']) {
+      const z = cli(['demo', '--digits', digits]);
+      expect(z.code).toBe(2);
+      expect(z.stdout).toBe('');
+      expect(z.stderr).toContain('is not a whole number from 1 to 100');
+    }
   });
 });
 
