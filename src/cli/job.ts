@@ -91,7 +91,8 @@ function precision(x: number, digits: number): string {
 export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOptions): Report {
   const schema = jobSchema(kinds);
   const problems = validate(job, schema);
-  if (problems.length > 0) throw new JobInvalidMany(problems);
+  // A problem with the whole file (not an object, …) is said to be about the job file.
+  if (problems.length > 0) throw new JobInvalidMany(problems.map((p) => (p.path === '' ? { path: 'the job file', message: /is not an object/.test(p.message) ? `${p.message} (a job is an object with "tasks")` : p.message } : p)));
   const j = job as { title?: string; units?: { length?: LengthUnit }; points?: Record<string, Record<string, unknown>>; tasks: Record<string, unknown>[] };
   const unit: LengthUnit = j.units?.length ?? 'm';
   const unitName = LENGTH_UNIT_NAMES[unit];

@@ -27,6 +27,12 @@ describe('quadspread run with a job that cannot be read', () => {
     expect(r.stdout).toBe('');
   });
 
+  it('exits 2 saying that the job file is not an object when it is a JSON array', () => {
+    const r = cli(['run', jobFile('array.json', '[]')]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toContain('quadspread: the job file: an array of 0 is not an object (a job is an object with "tasks")');
+  });
+
   it('exits 2 naming the place of a field of the wrong type', () => {
     const r = cli(['run', jobFile('type.json', { points, tasks: [{ kind: 'area', points: 'A B C' }] })]);
     expect(r.code).toBe(2);
