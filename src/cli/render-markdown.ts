@@ -57,7 +57,7 @@ export function renderMarkdown(report: Report): string {
   }
   out.push('');
   const s = report.summary;
-  out.push(`**Checks: ${s.passed} passed, ${s.failed} failed (of ${s.checks}).**`);
+  out.push(s.checks === 0 ? '**Checks: none** (nothing in this job is checked against a tolerance).' : `**Checks: ${s.passed} passed, ${s.failed} failed (of ${s.checks}).**`);
   out.push('');
   out.push(`> **Caution.** ${report.caution}`);
   return out.join('\n') + '\n';

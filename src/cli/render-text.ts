@@ -69,7 +69,7 @@ export function renderText(report: Report): string {
   }
   out.push('');
   const s = report.summary;
-  out.push(`checks: ${s.passed} passed, ${s.failed} failed (of ${s.checks})${s.failed > 0 ? ' -- SEE FAILED CHECKS ABOVE' : ''}`);
+  out.push(s.checks === 0 ? 'checks: none (nothing in this job is checked against a tolerance)' : `checks: ${s.passed} passed, ${s.failed} failed (of ${s.checks})${s.failed > 0 ? ' -- SEE FAILED CHECKS ABOVE' : ''}`);
   out.push('');
   out.push(report.caution);
   return out.join('\n') + '\n';

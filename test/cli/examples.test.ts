@@ -77,5 +77,7 @@ describe('examples/geodesy.json', () => {
       expect(t.notes.some((n) => /^Computation check: the round trip .* agrees/.test(n))).toBe(true);
     }
     expect(report.summary).toMatchObject({ passed: 0, failed: 0 });
+    const text = cli(['run', resolve(__dirname, '../../examples/geodesy.json')]).stdout;
+    expect(text).toContain('checks: none (nothing in this job is checked against a tolerance)');
   });
 });
