@@ -368,6 +368,8 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
     div(a, b) {
       if (b.value === 0) throw new QuadspreadError('DIVISION_BY_ZERO', `${name}.div(a, b)`, `b is zero (a = ${show(a.value)})`);
       const q = a.value / b.value;
+      // as float.div: a quotient that is not finite is refused
+      if (q - q !== 0) throw new QuadspreadError('NOT_FINITE', `${name}.div(a, b)`, `${show(a.value)} / ${show(b.value)} is not finite`);
       const r = 1 / b.value;
       return linF(q, a, r, b, -(q * r));
     },
@@ -380,6 +382,7 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
     sqrt(a) {
       if (a.value < 0) throw new QuadspreadError('NO_REAL_SOLUTION', `${name}.sqrt(a)`, `a = ${show(a.value)} is negative`);
       const r = Math.sqrt(a.value);
+      if (r - r !== 0) throw new QuadspreadError('NOT_FINITE', `${name}.sqrt(a)`, `a = ${show(a.value)} is not finite`);
       if (a.inputs.length === 0) return constant(r);
       if (r === 0) {
         throw new QuadspreadError('NOT_FINITE', `${name}.sqrt(a)`, 'a = 0 depends on uncertain inputs: the derivative of √a there is infinite, so first-order propagation does not apply');

@@ -101,6 +101,9 @@ export function traverseFloat(
     kLat = sumAbsLat === 0 ? 0 : -north / sumAbsLat;
     kDep = sumAbsDep === 0 ? 0 : -east / sumAbsDep;
   }
+  // float.div refuses a quotient that is not finite (NOT_FINITE); leave such data (a
+  // misclosure over a subnormal length) to the generic path, which reports it.
+  if (kLat - kLat !== 0 || kDep - kDep !== 0 || (ratio !== undefined && ratio - ratio !== 0)) return undefined;
   const adjusted = new Array<Point<number>>(n + 1);
   const legs = new Array<TraverseLeg<number>>(n);
   adjusted[0] = start;
