@@ -11,6 +11,7 @@
  */
 import type { Big } from 'big.js';
 import type { FusedKernels, FusedTraverse, FusedTriangle } from './types.js';
+import { readFusedTraverse } from './fused-input.js';
 
 const POW10: bigint[] = [];
 for (let k = 0, p = 1n; k < 64; k++, p *= 10n) POW10.push(p);
@@ -141,20 +142,9 @@ export function decimalKernels(digits: number, zero: Big, from: (x: unknown) => 
    * caller. Undefined for any other input and wherever the generic code reports an error.
    */
   function traverse(input: unknown): FusedTraverse<Big> | undefined {
-    if (input === null || typeof input !== 'object') return undefined;
-    const t = input as { start?: unknown; close?: unknown; courses?: unknown; rule?: unknown; interiorAngles?: unknown };
-    if ((t.rule !== undefined && t.rule !== 'compass') || t.interiorAngles !== undefined) return undefined;
-    const list = t.courses;
-    if (!Array.isArray(list) || list.length === 0 || list.length > 1_000_000) return undefined;
-    const pt = (p: unknown): { x: Big; y: Big } | undefined => {
-      if (p === null || typeof p !== 'object' || !('x' in p) || !('y' in p)) return undefined;
-      const x = read((p as { x: unknown }).x), y = read((p as { y: unknown }).y);
-      return x && y ? { x, y } : undefined;
-    };
-    const start = pt(t.start);
-    if (!start) return undefined;
-    const end = t.close === undefined ? start : pt(t.close);
-    if (!end) return undefined;
+    const parsed = readFusedTraverse(input, read);
+    if (!parsed) return undefined;
+    const { start, end, list } = parsed;
     const n = list.length;
     const lat: Big[] = new Array(n), dep: Big[] = new Array(n), len: Big[] = new Array(n);
     let e = Math.min(exponent(start.x), exponent(start.y), exponent(end.x), exponent(end.y));

@@ -11,6 +11,7 @@
 import Fraction from 'fraction.js';
 import type { FusedKernels, FusedTraverse, FusedTriangle } from './types.js';
 import { readInput } from './exact.js';
+import { readFusedTraverse } from './fused-input.js';
 
 const PROTO = Fraction.prototype;
 const SAFE = 9007199254740991n; // 2^53 − 1: below it a gcd runs in doubles
@@ -217,20 +218,9 @@ function num(x: Fraction, D: bigint): bigint {
  * Undefined for any other input and wherever the generic code reports an error.
  */
 function traverse(input: unknown): FusedTraverse<Fraction> | undefined {
-  if (input === null || typeof input !== 'object') return undefined;
-  const t = input as { start?: unknown; close?: unknown; courses?: unknown; rule?: unknown; interiorAngles?: unknown };
-  if ((t.rule !== undefined && t.rule !== 'compass') || t.interiorAngles !== undefined) return undefined;
-  const list = t.courses;
-  if (!Array.isArray(list) || list.length === 0 || list.length > 1_000_000) return undefined;
-  const pt = (p: unknown): { x: Fraction; y: Fraction } | undefined => {
-    if (p === null || typeof p !== 'object' || !('x' in p) || !('y' in p)) return undefined;
-    const x = asFraction((p as { x: unknown }).x), y = asFraction((p as { y: unknown }).y);
-    return x && y ? { x, y } : undefined;
-  };
-  const start = pt(t.start);
-  if (!start) return undefined;
-  const end = t.close === undefined ? start : pt(t.close);
-  if (!end) return undefined;
+  const parsed = readFusedTraverse(input, asFraction);
+  if (!parsed) return undefined;
+  const { start, end, list } = parsed;
   const n = list.length;
   const lat: Fraction[] = new Array(n), dep: Fraction[] = new Array(n), len: Fraction[] = new Array(n);
   // The common denominator, kept in a double while it stays exact (else: leave it to the generic code).
