@@ -145,3 +145,20 @@ export function show(x: unknown): string {
   }
   return typeof x;
 }
+
+// Factories for the codes thrown most often (internal; not exported by the entries). One call
+// instead of `new QuadspreadError('CODE', …)` at each of some two hundred places keeps the
+// minified library inside its size budget; the error is the same.
+const make = (code: ErrorCode) => (where: string, what: string): QuadspreadError => new QuadspreadError(code, where, what);
+/** @internal */ export const invalidArgument = /* @__PURE__ */ make('INVALID_ARGUMENT');
+/** @internal */ export const notFinite = /* @__PURE__ */ make('NOT_FINITE');
+/** @internal */ export const noRealSolution = /* @__PURE__ */ make('NO_REAL_SOLUTION');
+/** @internal */ export const coincidentPoints = /* @__PURE__ */ make('COINCIDENT_POINTS');
+/** @internal */ export const invalidAngle = /* @__PURE__ */ make('INVALID_ANGLE');
+/** @internal */ export const inconsistentReadings = /* @__PURE__ */ make('INCONSISTENT_READINGS');
+/** @internal */ export const invalidNumber = /* @__PURE__ */ make('INVALID_NUMBER');
+/** @internal */ export const invalidEllipsoid = /* @__PURE__ */ make('INVALID_ELLIPSOID');
+/** @internal */ export const invalidCovariance = /* @__PURE__ */ make('INVALID_COVARIANCE');
+/** @internal */ export const inputTooLong = /* @__PURE__ */ make('INPUT_TOO_LONG');
+/** @internal */ export const divisionByZero = /* @__PURE__ */ make('DIVISION_BY_ZERO');
+/** @internal */ export const verticalSight = /* @__PURE__ */ make('VERTICAL_SIGHT');

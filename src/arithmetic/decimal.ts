@@ -5,7 +5,7 @@
  */
 import BigJs from 'big.js';
 import type { Big, BigConstructor } from 'big.js';
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidArgument, divisionByZero, noRealSolution, notFinite } from '../errors.js';
 import type { Arithmetic, Numeric } from './types.js';
 import { isqrt, ratioToPrecision, readInput } from './exact.js';
 import { decimalElementary } from './elementary.js';
@@ -79,7 +79,7 @@ function digitCount(a: bigint): number {
  */
 export function decimal(digits = 34): DecimalArithmetic {
   if (!Number.isInteger(digits) || digits < 1 || digits > MAX_DECIMAL_DIGITS) {
-    throw new QuadspreadError('INVALID_ARGUMENT', 'decimal(digits)', `digits ${show(digits)} is not an integer in 1..${MAX_DECIMAL_DIGITS}`);
+    throw invalidArgument('decimal(digits)', `digits ${show(digits)} is not an integer in 1..${MAX_DECIMAL_DIGITS}`);
   }
   const D: BigConstructor = BigJs();
   D.DP = 0;
@@ -126,7 +126,7 @@ export function decimal(digits = 34): DecimalArithmetic {
     sub: (a, b) => round(a.minus(b)),
     mul: (a, b) => round(a.times(b)),
     div(a, b) {
-      if (b.c[0] === 0) throw new QuadspreadError('DIVISION_BY_ZERO', `${name}.div(a, b)`, `b is zero (a = ${a.toString()})`);
+      if (b.c[0] === 0) throw divisionByZero(`${name}.div(a, b)`, `b is zero (a = ${a.toString()})`);
       const pa = parts(a);
       const pb = parts(b);
       return divide(pa.coef, pa.exp, pb.coef, pb.exp);
@@ -139,7 +139,7 @@ export function decimal(digits = 34): DecimalArithmetic {
     sign: (a) => (a.c[0] === 0 ? 0 : (a.s as -1 | 1)),
     sqrt(a) {
       if (a.c[0] === 0) return A.zero;
-      if (a.s < 0) throw new QuadspreadError('NO_REAL_SOLUTION', `${name}.sqrt(a)`, `a = ${a.toString()} is negative`);
+      if (a.s < 0) throw noRealSolution(`${name}.sqrt(a)`, `a = ${a.toString()} is negative`);
       let { coef, exp } = parts(a);
       // Make exp even and coef large enough for digits + 2 digits of root.
       let shift = Math.max(0, 2 * (digits + 2) - digitCount(coef));
@@ -151,7 +151,7 @@ export function decimal(digits = 34): DecimalArithmetic {
     },
     toNumber(a) {
       const v = Number(a.toString());
-      if (!Number.isFinite(v)) throw new QuadspreadError('NOT_FINITE', `${name}.toNumber(a)`, `${a.toString()} is beyond the range of a JS number`);
+      if (!Number.isFinite(v)) throw notFinite(`${name}.toNumber(a)`, `${a.toString()} is beyond the range of a JS number`);
       return v;
     },
     toString: (a) => a.toString(),
@@ -165,7 +165,7 @@ export function decimal(digits = 34): DecimalArithmetic {
     sin: (x) => fromText(elementary.sin(x.toString())),
     cos: (x) => fromText(elementary.cos(x.toString())),
     atan2(y, x) {
-      if (y.c[0] === 0 && x.c[0] === 0) throw new QuadspreadError('INVALID_ARGUMENT', `${name}.atan2(y, x)`, 'the angle of the zero vector is undefined');
+      if (y.c[0] === 0 && x.c[0] === 0) throw invalidArgument(`${name}.atan2(y, x)`, 'the angle of the zero vector is undefined');
       return fromText(elementary.atan2(y.toString(), x.toString()));
     },
     // Fused kernels (src/arithmetic/fused-decimal.ts): exact with bigints, rounded once.

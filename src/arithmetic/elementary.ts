@@ -25,7 +25,7 @@
  *
  * @module arithmetic
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidNumber, inputTooLong, invalidArgument, noRealSolution } from '../errors.js';
 import { bitLength, isqrt } from './exact.js';
 
 /** Transcendental functions working on decimal text, to a fixed number of significant digits. */
@@ -103,11 +103,11 @@ interface Arg {
 const DECIMAL = /^([+-]?)(\d+)?(?:\.(\d*))?(?:[eE]([+-]?\d+))?$/;
 
 function readArg(text: string, where: string): Arg {
-  if (typeof text !== 'string') throw new QuadspreadError('INVALID_NUMBER', where, `${show(text)} is not decimal text`);
-  if (text.length > MAX_TEXT) throw new QuadspreadError('INPUT_TOO_LONG', where, `text of ${text.length} characters is longer than the limit of ${MAX_TEXT}`);
+  if (typeof text !== 'string') throw invalidNumber(where, `${show(text)} is not decimal text`);
+  if (text.length > MAX_TEXT) throw inputTooLong(where, `text of ${text.length} characters is longer than the limit of ${MAX_TEXT}`);
   const m = DECIMAL.exec(text.trim());
   if (!m || (m[2] === undefined && (m[3] === undefined || m[3] === ''))) {
-    throw new QuadspreadError('INVALID_NUMBER', where, `${show(text)} is not decimal text`);
+    throw invalidNumber(where, `${show(text)} is not decimal text`);
   }
   const frac = m[3] ?? '';
   let coef = BigInt((m[2] ?? '') + frac || '0');
@@ -115,7 +115,7 @@ function readArg(text: string, where: string): Arg {
   const e = m[4] === undefined ? 0 : Number(m[4]);
   const exp = e - frac.length;
   if (!Number.isSafeInteger(e) || (coef !== 0n && Math.abs(exp + String(abs(coef)).length) > MAX_ARG_EXPONENT)) {
-    throw new QuadspreadError('INPUT_TOO_LONG', where, `${show(text)} has a decimal exponent beyond ±${MAX_ARG_EXPONENT}`);
+    throw inputTooLong(where, `${show(text)} has a decimal exponent beyond ±${MAX_ARG_EXPONENT}`);
   }
   if (coef === 0n) return { coef: 0n, exp: 0, n: 0n, d: 1n };
   return exp >= 0 ? { coef, exp, n: coef * pow10(exp), d: 1n } : { coef, exp, n: coef, d: pow10(-exp) };
@@ -357,7 +357,7 @@ function atanFixed(T: bigint, W: number): { v: bigint; err: bigint } {
  */
 export function decimalElementary(digits: number): DecimalElementary {
   if (!Number.isInteger(digits) || digits < 1 || digits > 1000) {
-    throw new QuadspreadError('INVALID_ARGUMENT', 'decimalElementary(digits)', `digits ${show(digits)} is not an integer in 1..1000`);
+    throw invalidArgument('decimalElementary(digits)', `digits ${show(digits)} is not an integer in 1..1000`);
   }
   const name = `decimalElementary(${digits})`;
   const baseBits = Math.ceil(digits * LOG2_10) + 24;
@@ -401,7 +401,7 @@ export function decimalElementary(digits: number): DecimalElementary {
    */
   const reduce = (x: Arg, Wr: number, where: string): { r: bigint; quadrant: number } => {
     if (x.exp + String(abs(x.coef)).length > MAX_REDUCED_EXPONENT) {
-      throw new QuadspreadError('INVALID_ARGUMENT', where, `|x| ≥ 10^${MAX_REDUCED_EXPONENT} is too large to reduce by π/2`);
+      throw invalidArgument(where, `|x| ≥ 10^${MAX_REDUCED_EXPONENT} is too large to reduce by π/2`);
     }
     // |x| < 3/4 < π/4: no reduction.
     if (4n * abs(x.n) < 3n * x.d) return { r: toFixed(x.n, x.d, Wr), quadrant: 0 };
@@ -464,7 +464,7 @@ export function decimalElementary(digits: number): DecimalElementary {
     const where = `${name}.atan2(y, x)`;
     const y = readArg(yText, where);
     const x = readArg(xText, where);
-    if (y.n === 0n && x.n === 0n) throw new QuadspreadError('INVALID_ARGUMENT', where, 'the angle of the zero vector is undefined');
+    if (y.n === 0n && x.n === 0n) throw invalidArgument(where, 'the angle of the zero vector is undefined');
     if (y.n === 0n && x.n > 0n) return '0';
     // t = min(|y|, |x|) / max(|y|, |x|), exactly.
     const ay = abs(y.n) * x.d;
@@ -501,7 +501,7 @@ export function decimalElementary(digits: number): DecimalElementary {
     const where = `${name}.sqrt(x)`;
     const x = readArg(text, where);
     if (x.coef === 0n) return '0';
-    if (x.coef < 0n) throw new QuadspreadError('NO_REAL_SOLUTION', where, `x = ${show(text)} is negative`);
+    if (x.coef < 0n) throw noRealSolution(where, `x = ${show(text)} is negative`);
     let { coef, exp } = x;
     // Make exp even and coef long enough for digits + 2 digits of root.
     let shift = Math.max(0, 2 * (digits + 2) - String(coef).length);
@@ -524,7 +524,7 @@ export function decimalElementary(digits: number): DecimalElementary {
     const where = `${name}.exp(x)`;
     const x = readArg(text, where);
     if (x.n === 0n) return '1';
-    if (abs(x.n) > 2302585n * x.d) throw new QuadspreadError('INVALID_ARGUMENT', where, `|x| = ${show(text)} > 2302585: e^x is beyond 10^±1000000`);
+    if (abs(x.n) > 2302585n * x.d) throw invalidArgument(where, `|x| = ${show(text)} > 2302585: e^x is beyond 10^±1000000`);
     return ziv(where, baseBits, (W) => {
       // x = k ln 2 + r, |r| ≤ ln 2 / 2; e^x = 2^k e^r (Muller ch. 11).
       const L = Math.max(0, log2Estimate(x.n, x.d) + 2);
@@ -552,7 +552,7 @@ export function decimalElementary(digits: number): DecimalElementary {
   const ln = (text: string): string => {
     const where = `${name}.ln(x)`;
     const x = readArg(text, where);
-    if (x.n <= 0n) throw new QuadspreadError('NO_REAL_SOLUTION', where, `x = ${show(text)} is not positive`);
+    if (x.n <= 0n) throw noRealSolution(where, `x = ${show(text)} is not positive`);
     if (x.n === x.d) return '0';
     // x = 2^k m with m in [2/3, 4/3); ln x = k ln 2 + 2 atanh((m − 1)/(m + 1)) (Brent & Zimmermann ch. 4).
     let k = log2Estimate(x.n, x.d);

@@ -5,7 +5,7 @@
  *
  * @module arithmetic
  */
-import { MAX_INPUT_LENGTH, QuadspreadError, show } from '../errors.js';
+import { MAX_INPUT_LENGTH, QuadspreadError, show, invalidNumber, inputTooLong, divisionByZero, invalidArgument } from '../errors.js';
 
 /**
  * Largest decimal exponent accepted in numeric text (`1e1000` is read, `1e1001` refused),
@@ -37,14 +37,14 @@ function pow10(k: number): bigint {
 function readDecimal(text: string, where: string, original: string, allowSign: boolean): Ratio {
   const m = DECIMAL.exec(text);
   if (!m || (m[2] === undefined && (m[3] === undefined || m[3] === '')) || (!allowSign && m[1] !== '')) {
-    throw new QuadspreadError('INVALID_NUMBER', where, `${show(original)} is not a number`);
+    throw invalidNumber(where, `${show(original)} is not a number`);
   }
   const sign = m[1] === '-' ? -1n : 1n;
   const whole = m[2] ?? '';
   const frac = m[3] ?? '';
   const exp = m[4] === undefined ? 0 : Number(m[4]);
   if (!Number.isSafeInteger(exp) || Math.abs(exp) > MAX_EXPONENT) {
-    throw new QuadspreadError('INPUT_TOO_LONG', where, `${show(original)} has an exponent beyond ±${MAX_EXPONENT}`);
+    throw inputTooLong(where, `${show(original)} has an exponent beyond ±${MAX_EXPONENT}`);
   }
   const digits = BigInt((whole + frac) || '0');
   const scale = exp - frac.length;
@@ -71,14 +71,14 @@ function readDecimal(text: string, where: string, original: string, allowSign: b
  */
 export function readRatio(text: string, where: string): Ratio {
   if (text.length > MAX_INPUT_LENGTH) {
-    throw new QuadspreadError('INPUT_TOO_LONG', where, `text of ${text.length} characters is longer than the limit of ${MAX_INPUT_LENGTH}`);
+    throw inputTooLong(where, `text of ${text.length} characters is longer than the limit of ${MAX_INPUT_LENGTH}`);
   }
   const t = text.trim();
   const slash = t.indexOf('/');
   if (slash < 0) return readDecimal(t, where, text, true);
   const num = readDecimal(t.slice(0, slash).trim(), where, text, true);
   const den = readDecimal(t.slice(slash + 1).trim(), where, text, false);
-  if (den.n === 0n) throw new QuadspreadError('DIVISION_BY_ZERO', where, `${show(text)} divides by zero`);
+  if (den.n === 0n) throw divisionByZero(where, `${show(text)} divides by zero`);
   return { n: num.n * den.d, d: num.d * den.n };
 }
 
@@ -91,12 +91,12 @@ export function readRatio(text: string, where: string): Ratio {
 export function readInput(x: unknown, where: string): Ratio {
   if (typeof x === 'bigint') return { n: x, d: 1n };
   if (typeof x === 'number') {
-    if (!Number.isFinite(x)) throw new QuadspreadError('INVALID_NUMBER', where, `${show(x)} is not a finite number`);
+    if (!Number.isFinite(x)) throw invalidNumber(where, `${show(x)} is not a finite number`);
     if (Number.isSafeInteger(x)) return { n: BigInt(x), d: 1n };
     return readRatio(String(x), where);
   }
   if (typeof x === 'string') return readRatio(x, where);
-  throw new QuadspreadError('INVALID_NUMBER', where, `${show(x)} is not a number, numeric text or bigint`);
+  throw invalidNumber(where, `${show(x)} is not a number, numeric text or bigint`);
 }
 
 /** Greatest common divisor of |a| and |b|. @internal */
@@ -174,7 +174,7 @@ export function ratioToNumber(n: bigint, d: bigint): number {
  */
 export function ratioToPrecision(n: bigint, d: bigint, digits: number): string {
   if (!Number.isInteger(digits) || digits < 1 || digits > 1000) {
-    throw new QuadspreadError('INVALID_ARGUMENT', 'toPrecision(a, digits)', `digits ${show(digits)} is not an integer in 1..1000`);
+    throw invalidArgument('toPrecision(a, digits)', `digits ${show(digits)} is not an integer in 1..1000`);
   }
   if (n === 0n) return digits > 1 ? `0.${'0'.repeat(digits - 1)}` : '0';
   const neg = n < 0n;

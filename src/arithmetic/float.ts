@@ -3,7 +3,7 @@
  *
  * @module arithmetic
  */
-import { QuadspreadError, show } from '../errors.js';
+import { show, notFinite, invalidNumber, divisionByZero, noRealSolution, invalidArgument } from '../errors.js';
 import type { Arithmetic, Numeric } from './types.js';
 import { ratioToNumber, ratioToPrecision, readInput, readRatio } from './exact.js';
 
@@ -11,7 +11,7 @@ import { ratioToNumber, ratioToPrecision, readInput, readRatio } from './exact.j
 export type FloatArithmetic = Arithmetic<number, false>;
 
 function finite(v: number, where: string): number {
-  if (!Number.isFinite(v)) throw new QuadspreadError('NOT_FINITE', where, `the result ${show(v)} is not finite`);
+  if (!Number.isFinite(v)) throw notFinite(where, `the result ${show(v)} is not finite`);
   return v;
 }
 
@@ -38,7 +38,7 @@ export const float: FloatArithmetic = Object.freeze<FloatArithmetic>({
   one: 1,
   from(x: Numeric<number>): number {
     if (typeof x === 'number') {
-      if (x - x !== 0) throw new QuadspreadError('INVALID_NUMBER', 'float.from(x)', `${show(x)} is not a finite number`);
+      if (x - x !== 0) throw invalidNumber('float.from(x)', `${show(x)} is not a finite number`);
       return x;
     }
     if (typeof x === 'string') {
@@ -53,10 +53,10 @@ export const float: FloatArithmetic = Object.freeze<FloatArithmetic>({
   sub: (a, b) => a - b,
   mul: (a, b) => a * b,
   div(a, b) {
-    if (b === 0) throw new QuadspreadError('DIVISION_BY_ZERO', 'float.div(a, b)', `b is zero (a = ${show(a)})`);
+    if (b === 0) throw divisionByZero('float.div(a, b)', `b is zero (a = ${show(a)})`);
     const r = a / b;
     // Infinity/Infinity, NaN/x or an overflowing quotient: refuse rather than pass NaN on.
-    if (r - r !== 0) throw new QuadspreadError('NOT_FINITE', 'float.div(a, b)', `${show(a)} / ${show(b)} is not finite`);
+    if (r - r !== 0) throw notFinite('float.div(a, b)', `${show(a)} / ${show(b)} is not finite`);
     return r;
   },
   neg: (a) => -a,
@@ -66,9 +66,9 @@ export const float: FloatArithmetic = Object.freeze<FloatArithmetic>({
   isZero: (a) => a === 0,
   sign: (a) => (a < 0 ? -1 : a > 0 ? 1 : 0),
   sqrt(a) {
-    if (a < 0) throw new QuadspreadError('NO_REAL_SOLUTION', 'float.sqrt(a)', `a = ${show(a)} is negative`);
+    if (a < 0) throw noRealSolution('float.sqrt(a)', `a = ${show(a)} is negative`);
     const r = Math.sqrt(a);
-    if (r - r !== 0) throw new QuadspreadError('NOT_FINITE', 'float.sqrt(a)', `a = ${show(a)} is not finite`);
+    if (r - r !== 0) throw notFinite('float.sqrt(a)', `a = ${show(a)} is not finite`);
     return r;
   },
   toNumber: (a) => finite(a, 'float.toNumber(a)'),
@@ -83,7 +83,7 @@ export const float: FloatArithmetic = Object.freeze<FloatArithmetic>({
   sin: (x) => Math.sin(x),
   cos: (x) => Math.cos(x),
   atan2(y, x) {
-    if (y === 0 && x === 0) throw new QuadspreadError('INVALID_ARGUMENT', 'float.atan2(y, x)', 'the angle of the zero vector is undefined');
+    if (y === 0 && x === 0) throw invalidArgument('float.atan2(y, x)', 'the angle of the zero vector is undefined');
     return Math.atan2(y, x);
   },
 });

@@ -5,7 +5,7 @@
  * @module arithmetic
  */
 import Fraction from 'fraction.js';
-import { QuadspreadError, show } from '../errors.js';
+import { show, divisionByZero, noRealSolution, notFinite, invalidArgument } from '../errors.js';
 import type { Arithmetic, Numeric } from './types.js';
 import { isqrt, ratioToNumber, ratioToPrecision, readInput } from './exact.js';
 import { decimalElementary } from './elementary.js';
@@ -85,7 +85,7 @@ export const rational: RationalArithmetic = Object.freeze<RationalArithmetic>({
   sub: (a, b) => a.sub(b),
   mul: (a, b) => a.mul(b),
   div(a, b) {
-    if (b.n === 0n) throw new QuadspreadError('DIVISION_BY_ZERO', 'rational.div(a, b)', `b is zero (a = ${a.toFraction()})`);
+    if (b.n === 0n) throw divisionByZero('rational.div(a, b)', `b is zero (a = ${a.toFraction()})`);
     return a.div(b);
   },
   neg: (a) => a.neg(),
@@ -99,7 +99,7 @@ export const rational: RationalArithmetic = Object.freeze<RationalArithmetic>({
   sign: (a) => (a.n === 0n ? 0 : a.s < 0n ? -1 : 1),
   sqrt(a) {
     if (a.n === 0n) return ZERO;
-    if (a.s < 0n) throw new QuadspreadError('NO_REAL_SOLUTION', 'rational.sqrt(a)', `a = ${a.toFraction()} is negative`);
+    if (a.s < 0n) throw noRealSolution('rational.sqrt(a)', `a = ${a.toFraction()} is negative`);
     const rn = isqrt(a.n);
     if (rn * rn !== a.n) return undefined;
     const rd = isqrt(a.d);
@@ -108,7 +108,7 @@ export const rational: RationalArithmetic = Object.freeze<RationalArithmetic>({
   },
   toNumber(a) {
     const v = ratioToNumber(signed(a), a.d);
-    if (!Number.isFinite(v)) throw new QuadspreadError('NOT_FINITE', 'rational.toNumber(a)', `${show(a.toFraction())} is beyond the range of a JS number`);
+    if (!Number.isFinite(v)) throw notFinite('rational.toNumber(a)', `${show(a.toFraction())} is beyond the range of a JS number`);
     return v;
   },
   toString: (a) => a.toFraction(),
@@ -119,7 +119,7 @@ export const rational: RationalArithmetic = Object.freeze<RationalArithmetic>({
   sin: (x) => fromElementary(elementary.sin(toElementary(x))),
   cos: (x) => fromElementary(elementary.cos(toElementary(x))),
   atan2(y, x) {
-    if (y.n === 0n && x.n === 0n) throw new QuadspreadError('INVALID_ARGUMENT', 'rational.atan2(y, x)', 'the angle of the zero vector is undefined');
+    if (y.n === 0n && x.n === 0n) throw invalidArgument('rational.atan2(y, x)', 'the angle of the zero vector is undefined');
     return fromElementary(elementary.atan2(toElementary(y), toElementary(x)));
   },
   // Fused exact kernels (src/arithmetic/fused-rational.ts): same results, fewer gcds.

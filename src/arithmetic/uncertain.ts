@@ -6,7 +6,7 @@
  *
  * @module arithmetic
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidArgument, invalidNumber, divisionByZero, noRealSolution, notFinite } from '../errors.js';
 import type { Arithmetic, Numeric } from './types.js';
 import { float } from './float.js';
 
@@ -131,7 +131,7 @@ function union<T>(a: Keys<T>, b: Keys<T>): { keys: Keys<T>; where: number[] } {
 
 function fromMap<T>(B: Arithmetic<T>, value: T, g: Gradient<T> | undefined, name: string): Uncertain<T> {
   if (g === undefined) return new Uncertain(value);
-  if (!(g instanceof Map)) throw new QuadspreadError('INVALID_ARGUMENT', `${name}.make(value, gradient)`, `the gradient ${show(g)} is not a Map from inputs to derivatives`);
+  if (!(g instanceof Map)) throw invalidArgument(`${name}.make(value, gradient)`, `the gradient ${show(g)} is not a Map from inputs to derivatives`);
   if (g.size === 0) return new Uncertain(value);
   const keys: UncertainInput<T>[] = [];
   const ders: T[] = [];
@@ -240,7 +240,7 @@ function uncertainGeneric<T, E extends boolean>(B: Arithmetic<T, E>): UncertainA
     from(x: Numeric<Uncertain<T>>): Uncertain<T> {
       if (isU(x)) return x;
       if ((x as unknown) instanceof Uncertain) {
-        throw new QuadspreadError('INVALID_NUMBER', `${name}.from(x)`, `${show((x as unknown as Uncertain<unknown>).value)} is a value of another uncertain arithmetic`);
+        throw invalidNumber(`${name}.from(x)`, `${show((x as unknown as Uncertain<unknown>).value)} is a value of another uncertain arithmetic`);
       }
       return constant(B.from(x as Numeric<T>));
     },
@@ -251,7 +251,7 @@ function uncertainGeneric<T, E extends boolean>(B: Arithmetic<T, E>): UncertainA
     mul: (a, b) => lin(B, B.mul(a.value, b.value), a, b.value, b, a.value),
     div(a, b) {
       if (B.isZero(b.value)) {
-        throw new QuadspreadError('DIVISION_BY_ZERO', `${name}.div(a, b)`, `b is zero (a = ${B.toString(a.value)})`);
+        throw divisionByZero(`${name}.div(a, b)`, `b is zero (a = ${B.toString(a.value)})`);
       }
       // d(a/b) = (da − q·db)/b with q = a/b
       const q = B.div(a.value, b.value);
@@ -266,13 +266,13 @@ function uncertainGeneric<T, E extends boolean>(B: Arithmetic<T, E>): UncertainA
     sign: (a) => B.sign(a.value),
     sqrt(a) {
       if (B.sign(a.value) < 0) {
-        throw new QuadspreadError('NO_REAL_SOLUTION', `${name}.sqrt(a)`, `a = ${B.toString(a.value)} is negative`);
+        throw noRealSolution(`${name}.sqrt(a)`, `a = ${B.toString(a.value)} is negative`);
       }
       const r = B.sqrt(a.value);
       if (r === undefined) return undefined;
       if (a.inputs.length === 0) return constant(r);
       if (B.isZero(r)) {
-        throw new QuadspreadError('NOT_FINITE', `${name}.sqrt(a)`, 'a = 0 depends on uncertain inputs: the derivative of √a there is infinite, so first-order propagation does not apply');
+        throw notFinite(`${name}.sqrt(a)`, 'a = 0 depends on uncertain inputs: the derivative of √a there is infinite, so first-order propagation does not apply');
       }
       // d√a = da/(2√a)
       return scaled(B, r, a, B.div(B.one, B.mul(two, r)));
@@ -289,7 +289,7 @@ function uncertainGeneric<T, E extends boolean>(B: Arithmetic<T, E>): UncertainA
     cos: (x) => (x.inputs.length === 0 ? constant(B.cos(x.value)) : scaled(B, B.cos(x.value), x, B.neg(B.sin(x.value)))),
     atan2(y, x) {
       if (B.isZero(y.value) && B.isZero(x.value)) {
-        throw new QuadspreadError('INVALID_ARGUMENT', `${name}.atan2(y, x)`, 'the angle of the zero vector is undefined');
+        throw invalidArgument(`${name}.atan2(y, x)`, 'the angle of the zero vector is undefined');
       }
       const v = B.atan2(y.value, x.value);
       if (y.inputs.length === 0 && x.inputs.length === 0) return constant(v);
@@ -340,7 +340,7 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
   const constant = (v: number) => new Uncertain(v);
   const isU = (x: unknown): x is V => x instanceof Uncertain && float.is(x.value);
   const fin = (v: number, where: string): number => {
-    if (v - v !== 0) throw new QuadspreadError('NOT_FINITE', `${name}.${where}`, `the result ${show(v)} is not finite`);
+    if (v - v !== 0) throw notFinite(`${name}.${where}`, `the result ${show(v)} is not finite`);
     return v;
   };
   const U: UncertainArithmetic<number, false> = {
@@ -356,8 +356,8 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
       if (isU(x)) return x;
       if ((x as unknown) instanceof Uncertain) {
         const v = (x as unknown as Uncertain<unknown>).value;
-        if (typeof v === 'number') throw new QuadspreadError('NOT_FINITE', `${name}.from(x)`, `the value ${show(v)} is not finite (overflow)`);
-        throw new QuadspreadError('INVALID_NUMBER', `${name}.from(x)`, `${show(v)} is a value of another uncertain arithmetic`);
+        if (typeof v === 'number') throw notFinite(`${name}.from(x)`, `the value ${show(v)} is not finite (overflow)`);
+        throw invalidNumber(`${name}.from(x)`, `${show(v)} is a value of another uncertain arithmetic`);
       }
       return constant(float.from(x as Numeric<number>));
     },
@@ -366,10 +366,10 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
     sub: (a, b) => linF(a.value - b.value, a, 1, b, -1),
     mul: (a, b) => linF(a.value * b.value, a, b.value, b, a.value),
     div(a, b) {
-      if (b.value === 0) throw new QuadspreadError('DIVISION_BY_ZERO', `${name}.div(a, b)`, `b is zero (a = ${show(a.value)})`);
+      if (b.value === 0) throw divisionByZero(`${name}.div(a, b)`, `b is zero (a = ${show(a.value)})`);
       const q = a.value / b.value;
       // as float.div: a quotient that is not finite is refused
-      if (q - q !== 0) throw new QuadspreadError('NOT_FINITE', `${name}.div(a, b)`, `${show(a.value)} / ${show(b.value)} is not finite`);
+      if (q - q !== 0) throw notFinite(`${name}.div(a, b)`, `${show(a.value)} / ${show(b.value)} is not finite`);
       const r = 1 / b.value;
       return linF(q, a, r, b, -(q * r));
     },
@@ -380,12 +380,12 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
     isZero: (a) => a.value === 0,
     sign: (a) => (a.value < 0 ? -1 : a.value > 0 ? 1 : 0),
     sqrt(a) {
-      if (a.value < 0) throw new QuadspreadError('NO_REAL_SOLUTION', `${name}.sqrt(a)`, `a = ${show(a.value)} is negative`);
+      if (a.value < 0) throw noRealSolution(`${name}.sqrt(a)`, `a = ${show(a.value)} is negative`);
       const r = Math.sqrt(a.value);
-      if (r - r !== 0) throw new QuadspreadError('NOT_FINITE', `${name}.sqrt(a)`, `a = ${show(a.value)} is not finite`);
+      if (r - r !== 0) throw notFinite(`${name}.sqrt(a)`, `a = ${show(a.value)} is not finite`);
       if (a.inputs.length === 0) return constant(r);
       if (r === 0) {
-        throw new QuadspreadError('NOT_FINITE', `${name}.sqrt(a)`, 'a = 0 depends on uncertain inputs: the derivative of √a there is infinite, so first-order propagation does not apply');
+        throw notFinite(`${name}.sqrt(a)`, 'a = 0 depends on uncertain inputs: the derivative of √a there is infinite, so first-order propagation does not apply');
       }
       return scaledF(r, a, 1 / (2 * r));
     },
@@ -397,7 +397,7 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
     cos: (x) => (x.inputs.length === 0 ? constant(Math.cos(x.value)) : scaledF(Math.cos(x.value), x, -Math.sin(x.value))),
     atan2(y, x) {
       if (y.value === 0 && x.value === 0) {
-        throw new QuadspreadError('INVALID_ARGUMENT', `${name}.atan2(y, x)`, 'the angle of the zero vector is undefined');
+        throw invalidArgument(`${name}.atan2(y, x)`, 'the angle of the zero vector is undefined');
       }
       const v = Math.atan2(y.value, x.value);
       if (y.inputs.length === 0 && x.inputs.length === 0) return constant(v);

@@ -4,7 +4,7 @@
  *
  * @module cogo
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidArgument, coincidentPoints, noRealSolution } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import type { Root } from '../geometry/surd.js';
@@ -22,16 +22,16 @@ export type CircleInput<T> =
 
 function readCircle<T>(A: Arithmetic<T, boolean>, c: unknown, where: string): { c: Point<T>; R: T } {
   if (c === null || typeof c !== 'object' || !('center' in c)) {
-    throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(c)} is not a circle { center, radius } or { center, quadrance }`);
+    throw invalidArgument(where, `${show(c)} is not a circle { center, radius } or { center, quadrance }`);
   }
   const o = c as { center: unknown; radius?: Numeric<T>; quadrance?: Numeric<T> };
   const center = readPoint(A, o.center, `${where}.center`);
   if ((o.radius === undefined) === (o.quadrance === undefined)) {
-    throw new QuadspreadError('INVALID_ARGUMENT', where, 'give exactly one of radius and quadrance');
+    throw invalidArgument(where, 'give exactly one of radius and quadrance');
   }
   if (o.radius !== undefined) {
     const r = readNumber(A, o.radius, where, '.radius');
-    if (A.sign(r) < 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where}.radius`, `${A.toString(r)} is negative`);
+    if (A.sign(r) < 0) throw invalidArgument(`${where}.radius`, `${A.toString(r)} is negative`);
     return { c: center, R: A.mul(r, r) };
   }
   const R = readNumber(A, o.quadrance!, where, '.quadrance');
@@ -77,7 +77,7 @@ export function intersectLineCircle<T, E extends boolean>(
   const dx = A.sub(b.x, a.x);
   const dy = A.sub(b.y, a.y);
   const dd = A.add(A.mul(dx, dx), A.mul(dy, dy));
-  if (A.isZero(dd)) throw new QuadspreadError('COINCIDENT_POINTS', where, 'P1 and P2 are the same point: they fix no line');
+  if (A.isZero(dd)) throw coincidentPoints(where, 'P1 and P2 are the same point: they fix no line');
   const fx = A.sub(a.x, c.x);
   const fy = A.sub(a.y, c.y);
   const h = A.add(A.mul(fx, dx), A.mul(fy, dy));
@@ -86,7 +86,7 @@ export function intersectLineCircle<T, E extends boolean>(
   let disc = A.sub(A.mul(h, h), A.mul(dd, A.sub(ff, R)));
   // In an inexact arithmetic a discriminant within rounding of zero is a tangent.
   if (A.sign(disc) < 0 && A.cmp(A.neg(disc), A.mul(roundingSlack(A), A.add(A.mul(h, h), A.mul(dd, A.add(ff, R))))) <= 0) disc = A.zero;
-  if (A.sign(disc) < 0) throw new QuadspreadError('NO_REAL_SOLUTION', where, 'the line misses the circle');
+  if (A.sign(disc) < 0) throw noRealSolution(where, 'the line misses the circle');
   const t0 = A.neg(A.div(h, dd));
   const ax = A.add(a.x, A.mul(t0, dx));
   const ay = A.add(a.y, A.mul(t0, dy));
@@ -135,12 +135,12 @@ export function intersectCircles<T, E extends boolean>(
   const dx = A.sub(c2.x, c1.x);
   const dy = A.sub(c2.y, c1.y);
   const D = A.add(A.mul(dx, dx), A.mul(dy, dy));
-  if (A.isZero(D)) throw new QuadspreadError('COINCIDENT_POINTS', where, 'the circles are concentric: they meet nowhere or everywhere');
+  if (A.isZero(D)) throw coincidentPoints(where, 'the circles are concentric: they meet nowhere or everywhere');
   const tau = A.div(A.add(A.sub(D, R2), R1), A.add(D, D));
   let k = A.sub(A.div(R1, D), A.mul(tau, tau));
   // In an inexact arithmetic a k within rounding of zero means the circles touch.
   if (A.sign(k) < 0 && A.cmp(A.neg(k), A.mul(roundingSlack(A), A.add(A.div(R1, D), A.mul(tau, tau)))) <= 0) k = A.zero;
-  if (A.sign(k) < 0) throw new QuadspreadError('NO_REAL_SOLUTION', where, 'the circles do not meet (the distances are too short or too long for the centres)');
+  if (A.sign(k) < 0) throw noRealSolution(where, 'the circles do not meet (the distances are too short or too long for the centres)');
   const bx = A.add(c1.x, A.mul(tau, dx));
   const by = A.add(c1.y, A.mul(tau, dy));
   if (A.isZero(k)) return [{ x: rootOf(A, bx, A.zero, A.zero), y: rootOf(A, by, A.zero, A.zero) }];

@@ -4,7 +4,7 @@
  * @module cogo
  * @internal
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidArgument, noRealSolution, inputTooLong } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { surd } from '../geometry/surd.js';
@@ -21,7 +21,7 @@ export interface PointInput<T> {
 /** Reads a point `{ x, y }` (x = east, y = north) into the arithmetic. @internal */
 export function readPoint<T>(A: Arithmetic<T, boolean>, p: unknown, where: string): Point<T> {
   if (p === null || typeof p !== 'object' || !('x' in p) || !('y' in p)) {
-    throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(p)} is not a point { x, y } (x = east, y = north)`);
+    throw invalidArgument(where, `${show(p)} is not a point { x, y } (x = east, y = north)`);
   }
   const q = p as PointInput<T>;
   return { x: readNumber(A, q.x, where, '.x'), y: readNumber(A, q.y, where, '.y') };
@@ -38,15 +38,15 @@ export function readPoint<T>(A: Arithmetic<T, boolean>, p: unknown, where: strin
  */
 export function sqrtValue<T>(A: Arithmetic<T, boolean>, q: T, where: string): T {
   const sign = A.sign(q);
-  if (sign < 0) throw new QuadspreadError('NO_REAL_SOLUTION', where, `√ of the negative value ${A.toString(q)}`);
+  if (sign < 0) throw noRealSolution(where, `√ of the negative value ${A.toString(q)}`);
   if (sign === 0) return A.zero;
   return approxSqrt(A, q);
 }
 
 /** Checks that an input is an array (not too long) and returns it. @internal */
 export function readArray<U>(x: unknown, where: string, max = 1_000_000): readonly U[] {
-  if (!Array.isArray(x)) throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(x)} is not an array`);
-  if (x.length > max) throw new QuadspreadError('INPUT_TOO_LONG', where, `${x.length} items is more than the limit of ${max}`);
+  if (!Array.isArray(x)) throw invalidArgument(where, `${show(x)} is not an array`);
+  if (x.length > max) throw inputTooLong(where, `${x.length} items is more than the limit of ${max}`);
   return x as readonly U[];
 }
 

@@ -3,7 +3,7 @@
  *
  * @module cogo
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, noRealSolution } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { sinCosDegrees } from '../readings/trig.js';
@@ -87,7 +87,7 @@ export function intersectBearings<T>(
   const s = A.div(A.sub(A.mul(ex, b.cos), A.mul(ey, b.sin)), den);
   const t = A.div(A.sub(A.mul(ex, a.cos), A.mul(ey, a.sin)), den);
   if (A.sign(s) < 0 || A.sign(t) < 0) {
-    throw new QuadspreadError('NO_REAL_SOLUTION', where, `the rays meet behind ${A.sign(s) < 0 ? 'P' : 'Q'} (distance ${A.toPrecision(A.sign(s) < 0 ? s : t, 6)}): check the bearings`);
+    throw noRealSolution(where, `the rays meet behind ${A.sign(s) < 0 ? 'P' : 'Q'} (distance ${A.toPrecision(A.sign(s) < 0 ? s : t, 6)}): check the bearings`);
   }
   return { point: { x: A.add(p.x, A.mul(s, a.sin)), y: A.add(p.y, A.mul(s, a.cos)) }, distanceP: s, distanceQ: t };
 }

@@ -3,7 +3,7 @@
  *
  * @module cogo
  */
-import { QuadspreadError } from '../errors.js';
+import { QuadspreadError, coincidentPoints } from '../errors.js';
 import type { Arithmetic } from '../arithmetic/types.js';
 import { readPoint } from './internal.js';
 import type { Point } from '../geometry/point.js';
@@ -51,10 +51,10 @@ export function intersectLines<T>(
   const d2x = A.sub(d.x, c.x);
   const d2y = A.sub(d.y, c.y);
   if (A.isZero(d1x) && A.isZero(d1y)) {
-    throw new QuadspreadError('COINCIDENT_POINTS', where, `P1 and P2 are the same point (${A.toString(a.x)}, ${A.toString(a.y)}): they fix no line`);
+    throw coincidentPoints(where, `P1 and P2 are the same point (${A.toString(a.x)}, ${A.toString(a.y)}): they fix no line`);
   }
   if (A.isZero(d2x) && A.isZero(d2y)) {
-    throw new QuadspreadError('COINCIDENT_POINTS', where, `P3 and P4 are the same point (${A.toString(c.x)}, ${A.toString(c.y)}): they fix no line`);
+    throw coincidentPoints(where, `P3 and P4 are the same point (${A.toString(c.x)}, ${A.toString(c.y)}): they fix no line`);
   }
   // Cramer's rule: t = ((P3 − P1) × d2) / (d1 × d2), with u × v = uₓv_y − u_yvₓ.
   const den = A.sub(A.mul(d1x, d2y), A.mul(d1y, d2x));

@@ -4,7 +4,7 @@
  *
  * @module cogo
  */
-import { QuadspreadError } from '../errors.js';
+import { QuadspreadError, coincidentPoints, invalidArgument } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { sqrtOf } from '../geometry/surd.js';
@@ -67,7 +67,7 @@ export function inverse<T, E extends boolean>(
   const dx = A.sub(q.x, p.x);
   const dy = A.sub(q.y, p.y);
   if (A.isZero(dx) && A.isZero(dy)) {
-    throw new QuadspreadError('COINCIDENT_POINTS', where, `P and Q are the same point (${A.toString(p.x)}, ${A.toString(p.y)}): no bearing`);
+    throw coincidentPoints(where, `P and Q are the same point (${A.toString(p.x)}, ${A.toString(p.y)}): no bearing`);
   }
   const quadrance = A.add(A.mul(dx, dx), A.mul(dy, dy));
   const azimuth = azimuthOf(A, dx, dy);
@@ -129,7 +129,7 @@ export function forward<T>(A: Arithmetic<T, boolean>, P: PointInput<T>, bearing:
   const p = readPoint(A, P, `${where} P`);
   const az = readAzimuth(A, bearing, `${where} bearing`);
   const d = readNumber(A, distance, where, ' distance');
-  if (A.sign(d) < 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where} distance`, `${A.toString(d)} is negative`);
+  if (A.sign(d) < 0) throw invalidArgument(`${where} distance`, `${A.toString(d)} is negative`);
   const { sin, cos } = sinCosDegrees(A, az);
   // Departure d·sin(azimuth), latitude d·cos(azimuth).
   return { x: A.add(p.x, A.mul(d, sin)), y: A.add(p.y, A.mul(d, cos)) };

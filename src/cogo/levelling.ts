@@ -5,7 +5,7 @@
  *
  * @module cogo
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidArgument } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { sqrtOf } from '../geometry/surd.js';
 import type { Root } from '../geometry/surd.js';
@@ -55,10 +55,10 @@ function readC<T>(A: Arithmetic<T, boolean>, order: LevellingOrder | Numeric<T>,
     return A.from(LEVELLING_ORDERS[order as LevellingOrder].c);
   }
   if (typeof order === 'string' && !/^[\s\d.+eE/-]+$/.test(order)) {
-    throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(order)} is not a levelling order (${Object.keys(LEVELLING_ORDERS).join(', ')}) or a constant c in mm`);
+    throw invalidArgument(where, `${show(order)} is not a levelling order (${Object.keys(LEVELLING_ORDERS).join(', ')}) or a constant c in mm`);
   }
   const c = readNumber(A, order, where);
-  if (A.sign(c) <= 0) throw new QuadspreadError('INVALID_ARGUMENT', where, `c = ${A.toString(c)} mm is not positive`);
+  if (A.sign(c) <= 0) throw invalidArgument(where, `c = ${A.toString(c)} mm is not positive`);
   return c;
 }
 
@@ -86,7 +86,7 @@ export function allowableMisclosure<T, E extends boolean>(A: Arithmetic<T, E>, o
   const where = 'allowableMisclosure(A, order, km)';
   const c = readC(A, order, `${where} order`);
   const K = readNumber(A, km, where, ' km');
-  if (A.sign(K) < 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where} km`, `K = ${A.toString(K)} km is negative`);
+  if (A.sign(K) < 0) throw invalidArgument(`${where} km`, `K = ${A.toString(K)} km is negative`);
   // Allowable section misclosure c·√K mm (FGCC 1984; c from memory).
   const allowable = sqrtOf(A, A.mul(A.mul(c, c), K));
   return { c, km: K, allowable };
@@ -217,7 +217,7 @@ function readOpt<T>(A: Arithmetic<T, boolean>, v: Numeric<T> | undefined, where:
  */
 export function levelRun<T, E extends boolean>(A: Arithmetic<T, E>, input: LevelRunInput<T>): LevelRun<T, E> {
   const where = 'levelRun(A, input)';
-  if (input === null || typeof input !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(input)} is not { start, sights }`);
+  if (input === null || typeof input !== 'object') throw invalidArgument(where, `${show(input)} is not { start, sights }`);
   const list = readArray<LevelSight<T>>(input.sights, `${where} sights`);
   if (list.length < 2) throw new QuadspreadError('TOO_FEW_POINTS', `${where} sights`, `a run needs at least 2 rows (a backsight and a foresight), got ${list.length}`);
   const unit = checkLengthUnit(input.unit ?? 'm', `${where} unit`);
@@ -232,22 +232,22 @@ export function levelRun<T, E extends boolean>(A: Arithmetic<T, E>, input: Level
   for (let i = 0; i < n; i++) {
     const r = list[i];
     const at = `${where} sights[${i}]`;
-    if (r === null || typeof r !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', at, `${show(r)} is not a sight { bs?, is?, fs? }`);
+    if (r === null || typeof r !== 'object') throw invalidArgument(at, `${show(r)} is not a sight { bs?, is?, fs? }`);
     bs[i] = readOpt(A, r.bs, `${at}.bs`);
     is[i] = readOpt(A, r.is, `${at}.is`);
     fs[i] = readOpt(A, r.fs, `${at}.fs`);
     dist[i] = readOpt(A, r.distance, `${at}.distance`);
     const d = dist[i];
-    if (d !== undefined && A.sign(d) < 0) throw new QuadspreadError('INVALID_ARGUMENT', `${at}.distance`, `${A.toString(d)} is negative`);
+    if (d !== undefined && A.sign(d) < 0) throw invalidArgument(`${at}.distance`, `${A.toString(d)} is negative`);
     if (i > 0 && d === undefined) allDistances = false;
     if (i === 0) {
-      if (bs[i] === undefined || is[i] !== undefined || fs[i] !== undefined) throw new QuadspreadError('INVALID_ARGUMENT', at, 'the first row must be a backsight alone (on the starting bench mark)');
+      if (bs[i] === undefined || is[i] !== undefined || fs[i] !== undefined) throw invalidArgument(at, 'the first row must be a backsight alone (on the starting bench mark)');
       continue;
     }
-    if (is[i] !== undefined && fs[i] !== undefined) throw new QuadspreadError('INVALID_ARGUMENT', at, 'a row has an intermediate sight or a foresight, not both');
-    if (is[i] === undefined && fs[i] === undefined) throw new QuadspreadError('INVALID_ARGUMENT', at, 'a row after the first needs an intermediate sight or a foresight');
-    if (bs[i] !== undefined && fs[i] === undefined) throw new QuadspreadError('INVALID_ARGUMENT', at, 'a backsight after the first row belongs on a change point, with its foresight');
-    if (i === n - 1 && (fs[i] === undefined || bs[i] !== undefined)) throw new QuadspreadError('INVALID_ARGUMENT', at, 'the last row must be a foresight alone');
+    if (is[i] !== undefined && fs[i] !== undefined) throw invalidArgument(at, 'a row has an intermediate sight or a foresight, not both');
+    if (is[i] === undefined && fs[i] === undefined) throw invalidArgument(at, 'a row after the first needs an intermediate sight or a foresight');
+    if (bs[i] !== undefined && fs[i] === undefined) throw invalidArgument(at, 'a backsight after the first row belongs on a change point, with its foresight');
+    if (i === n - 1 && (fs[i] === undefined || bs[i] !== undefined)) throw invalidArgument(at, 'the last row must be a foresight alone');
   }
 
   // Reduction. Rise-and-fall and height of instrument, side by side (e.g. Uren & Price,
@@ -349,13 +349,13 @@ export function levelRun<T, E extends boolean>(A: Arithmetic<T, E>, input: Level
     misclosure = A.sub(last, readNumber(A, input.close, where, ' close'));
     misclosureMm = A.mul(A.mul(misclosure, toMetres), A.from(1000));
   } else if (input.order !== undefined) {
-    throw new QuadspreadError('INVALID_ARGUMENT', `${where} order`, 'an allowable misclosure needs the known closing level `close`');
+    throw invalidArgument(`${where} order`, 'an allowable misclosure needs the known closing level `close`');
   }
   if (input.order !== undefined && misclosureMm !== undefined) {
     let km: T;
     if (input.km !== undefined) km = readNumber(A, input.km, where, ' km');
     else if (allDistances) km = A.div(A.mul(totalDistance, toMetres), A.from(1000));
-    else throw new QuadspreadError('INVALID_ARGUMENT', `${where} km`, 'give the section length km, or a distance on every row after the first');
+    else throw invalidArgument(`${where} km`, 'give the section length km, or a distance on every row after the first');
     allowable = allowableMisclosure(A, input.order, km);
     // |m| ≤ c·√K  ⇔  m² ≤ c²·K (both sides non-negative): exact in rational.
     withinAllowable = A.cmp(A.mul(misclosureMm, misclosureMm), A.mul(A.mul(allowable.c, allowable.c), km)) <= 0;

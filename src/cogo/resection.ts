@@ -3,7 +3,7 @@
  *
  * @module cogo
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidArgument, invalidAngle, coincidentPoints, noRealSolution } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { angleToDegrees } from '../readings/angle.js';
@@ -101,28 +101,28 @@ export interface Resection<T> {
  */
 export function resection<T>(A: Arithmetic<T, boolean>, input: ResectionInput<T>): Resection<T> {
   const where = 'resection(A, { control, angles })';
-  if (input === null || typeof input !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(input)} is not { control, angles }`);
+  if (input === null || typeof input !== 'object') throw invalidArgument(where, `${show(input)} is not { control, angles }`);
   const ctl = readArray<PointInput<T>>(input.control, `${where} control`);
-  if (ctl.length !== 3) throw new QuadspreadError('INVALID_ARGUMENT', `${where} control`, `three control points are needed, got ${ctl.length}`);
+  if (ctl.length !== 3) throw invalidArgument(`${where} control`, `three control points are needed, got ${ctl.length}`);
   const ang = readArray<Numeric<T>>(input.angles, `${where} angles`);
-  if (ang.length !== 2) throw new QuadspreadError('INVALID_ARGUMENT', `${where} angles`, `two angles [a12, a23] are needed, got ${ang.length}`);
+  if (ang.length !== 2) throw invalidArgument(`${where} angles`, `two angles [a12, a23] are needed, got ${ang.length}`);
   const P = ctl.map((p, i) => readPoint(A, p, `${where} control[${i}]`)) as [Point<T>, Point<T>, Point<T>];
   const full = A.from(360);
   const readAngle = (a: Numeric<T>, name: string): T => {
     const d = angleToDegrees(A, a);
-    if (A.sign(d) < 0 || A.cmp(d, full) >= 0) throw new QuadspreadError('INVALID_ANGLE', `${where} ${name}`, `${show(a)} is not a clockwise angle in [0°, 360°)`);
+    if (A.sign(d) < 0 || A.cmp(d, full) >= 0) throw invalidAngle(`${where} ${name}`, `${show(a)} is not a clockwise angle in [0°, 360°)`);
     return d;
   };
   const a12 = readAngle(ang[0]!, 'angles[0] (a12)');
   const a23 = readAngle(ang[1]!, 'angles[1] (a23)');
   const tol = readNumber(A, input.dangerTolerance ?? DANGER_CIRCLE_TOLERANCE, where, ' dangerTolerance');
-  if (A.sign(tol) < 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where} dangerTolerance`, `${A.toString(tol)} is negative`);
+  if (A.sign(tol) < 0) throw invalidArgument(`${where} dangerTolerance`, `${A.toString(tol)} is negative`);
 
   for (let i = 0; i < 3; i++) {
     const p = P[i]!;
     const q = P[(i + 1) % 3]!;
     if (A.eq(p.x, q.x) && A.eq(p.y, q.y)) {
-      throw new QuadspreadError('COINCIDENT_POINTS', `${where} control`, `control[${i}] and control[${(i + 1) % 3}] are the same point`);
+      throw coincidentPoints(`${where} control`, `control[${i}] and control[${(i + 1) % 3}] are the same point`);
     }
   }
   // Cotangent of the clockwise angle at V from the direction to U to the direction to W:
@@ -196,9 +196,7 @@ export function resection<T>(A: Arithmetic<T, boolean>, input: ResectionInput<T>
     return A.sign(A.sub(A.mul(dot, o.cos), A.mul(cross, o.sin))) >= 0;
   };
   if (!seenAgrees(P1, P2, obs[2]!) || !seenAgrees(P2, P3, obs[0]!)) {
-    throw new QuadspreadError(
-      'NO_REAL_SOLUTION',
-      where,
+    throw noRealSolution(where,
       `no station sees the control points at the clockwise angles a12 = ${show(ang[0])} and a23 = ${show(ang[1])}: the only candidate sees them about 180° apart from one of these (check the angles, the order of the control points and that the angles were turned clockwise)`,
     );
   }

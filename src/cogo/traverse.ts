@@ -4,7 +4,7 @@
  *
  * @module cogo
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidArgument } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { sqrtOf } from '../geometry/surd.js';
@@ -198,13 +198,13 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
     return { closure: { east, north, linear: sqrtOf(A, A.isZero(q) ? A.zero : q), ratio }, length, points, adjusted, courses, rule };
   }
   if (input === null || typeof input !== 'object') {
-    throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(input)} is not { start, courses, close? }`);
+    throw invalidArgument(where, `${show(input)} is not { start, courses, close? }`);
   }
   const start = readPoint(A, input.start, `${where} start`);
   const end = input.close === undefined ? start : readPoint(A, input.close, `${where} close`);
   const rule = input.rule ?? 'compass';
   if (rule !== 'compass' && rule !== 'transit') {
-    throw new QuadspreadError('INVALID_ARGUMENT', `${where} rule`, `${show(rule)} is not 'compass' or 'transit'`);
+    throw invalidArgument(`${where} rule`, `${show(rule)} is not 'compass' or 'transit'`);
   }
   if (input.courses === undefined) throw new QuadspreadError('NO_COURSES', `${where} courses`, 'no courses were given');
   const list = readArray<TraverseCourse<T>>(input.courses, `${where} courses`);
@@ -233,12 +233,12 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
     const c = list[i] as Record<string, Numeric<T> | undefined> | null | undefined;
     // Built only for an error message: keeps the float loop free of string work.
     const at = (): string => `${where} courses[${i}]`;
-    if (c === null || typeof c !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', at(), `${show(c)} is not a course`);
+    if (c === null || typeof c !== 'object') throw invalidArgument(at(), `${show(c)} is not a course`);
     let la: T;
     let de: T;
     let d: T;
     if (c.bearing !== undefined) {
-      if (c.distance === undefined) throw new QuadspreadError('INVALID_ARGUMENT', at(), 'a course with a bearing needs a distance');
+      if (c.distance === undefined) throw invalidArgument(at(), 'a course with a bearing needs a distance');
       d = readNumber(A, c.distance, at, '.distance');
       const az = readAzimuth(A, c.bearing, at, '.bearing');
       // Latitude = d·cos(azimuth), departure = d·sin(azimuth) (azimuth clockwise from north),
@@ -252,9 +252,9 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
       // Course length by Pythagoras unless given.
       d = c.distance !== undefined ? readNumber(A, c.distance, at, '.distance') : courseLength(A, la, de, at);
     } else {
-      throw new QuadspreadError('INVALID_ARGUMENT', at(), 'a course is { bearing, distance } or { latitude, departure }');
+      throw invalidArgument(at(), 'a course is { bearing, distance } or { latitude, departure }');
     }
-    if (A.sign(d) < 0) throw new QuadspreadError('INVALID_ARGUMENT', `${at()}.distance`, `${A.toString(d)} is negative`);
+    if (A.sign(d) < 0) throw invalidArgument(`${at()}.distance`, `${A.toString(d)} is negative`);
     lat[i] = la;
     dep[i] = de;
     len[i] = d;
@@ -283,7 +283,7 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
   let kDep: T;
   if (rule === 'compass') {
     if (A.isZero(total)) {
-      if (!A.isZero(q)) throw new QuadspreadError('INVALID_ARGUMENT', where, 'the courses have zero total length: the compass rule cannot distribute a misclosure');
+      if (!A.isZero(q)) throw invalidArgument(where, 'the courses have zero total length: the compass rule cannot distribute a misclosure');
       kLat = A.zero;
       kDep = A.zero;
     } else {
@@ -291,8 +291,8 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
       kDep = A.div(A.neg(east), total);
     }
   } else {
-    if (A.isZero(sumAbsLat) && !A.isZero(north)) throw new QuadspreadError('INVALID_ARGUMENT', where, 'every latitude is zero: the transit rule cannot distribute the north misclosure');
-    if (A.isZero(sumAbsDep) && !A.isZero(east)) throw new QuadspreadError('INVALID_ARGUMENT', where, 'every departure is zero: the transit rule cannot distribute the east misclosure');
+    if (A.isZero(sumAbsLat) && !A.isZero(north)) throw invalidArgument(where, 'every latitude is zero: the transit rule cannot distribute the north misclosure');
+    if (A.isZero(sumAbsDep) && !A.isZero(east)) throw invalidArgument(where, 'every departure is zero: the transit rule cannot distribute the east misclosure');
     kLat = A.isZero(sumAbsLat) ? A.zero : A.div(A.neg(north), sumAbsLat);
     kDep = A.isZero(sumAbsDep) ? A.zero : A.div(A.neg(east), sumAbsDep);
   }

@@ -4,7 +4,7 @@
  *
  * @module elevation
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, coincidentPoints, invalidArgument, invalidAngle, verticalSight, inconsistentReadings } from '../errors.js';
 import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Root } from '../geometry/surd.js';
@@ -95,18 +95,18 @@ export function heightFromBase<T, E extends boolean>(
   checkObject(input, w);
   const R = rootOps(A);
   const base = readQuadrance(A, input.base, w, 'base');
-  if (A.isZero(base)) throw new QuadspreadError('COINCIDENT_POINTS', `${w}.base`, 'the base is zero: the stations coincide');
+  if (A.isZero(base)) throw coincidentPoints(`${w}.base`, 'the base is zero: the stations coincide');
   let s1: T;
   let s2: T;
   let side: FootSide;
   if ((input.spreads === undefined) === (input.angles === undefined)) {
-    throw new QuadspreadError('INVALID_ARGUMENT', w, 'give either spreads (with foot) or angles, not both or neither');
+    throw invalidArgument(w, 'give either spreads (with foot) or angles, not both or neither');
   }
   if (input.angles !== undefined) {
-    if (input.foot !== undefined) throw new QuadspreadError('INVALID_ARGUMENT', `${w}.foot`, 'angles already fix the side of the foot; leave foot out');
+    if (input.foot !== undefined) throw invalidArgument(`${w}.foot`, 'angles already fix the side of the foot; leave foot out');
     const a = input.angles.map((x, i) => {
       const d = angleToDegrees(A, x);
-      if (A.sign(d) <= 0 || A.cmp(d, A.from(180)) >= 0) throw new QuadspreadError('INVALID_ANGLE', `${w}.angles[${i}]`, `${show(typeof x === 'object' ? A.toString(d) : x)} is not an interior angle in (0°, 180°)`);
+      if (A.sign(d) <= 0 || A.cmp(d, A.from(180)) >= 0) throw invalidAngle(`${w}.angles[${i}]`, `${show(typeof x === 'object' ? A.toString(d) : x)} is not an interior angle in (0°, 180°)`);
       return d;
     });
     if (A.cmp(A.add(a[0]!, a[1]!), A.from(180)) >= 0) throw new QuadspreadError('DEGENERATE_TRIANGLE', `${w}.angles`, 'the two interior angles sum to 180° or more: the sights do not meet');
@@ -116,7 +116,7 @@ export function heightFromBase<T, E extends boolean>(
     side = A.cmp(a[0]!, ninety) > 0 || A.cmp(a[1]!, ninety) > 0 ? 'beyond' : 'between';
   } else {
     if (input.foot !== 'between' && input.foot !== 'beyond') {
-      throw new QuadspreadError('INVALID_ARGUMENT', `${w}.foot`, `${show(input.foot)} is not 'between' or 'beyond': spreads alone allow two triangles, say which`);
+      throw invalidArgument(`${w}.foot`, `${show(input.foot)} is not 'between' or 'beyond': spreads alone allow two triangles, say which`);
     }
     side = input.foot;
     s1 = readSpread(A, input.spreads![0], w, 'spreads[0]');
@@ -138,7 +138,7 @@ export function heightFromBase<T, E extends boolean>(
   const Q2 = found.Q1;
   const v = input.vertical ?? [undefined, undefined];
   const readings = [0, 1].map((i) => (v[i] === undefined ? undefined : readVertical(A, v[i]!, `${w}.vertical[${i}]`)));
-  if (readings[0] === undefined && readings[1] === undefined) throw new QuadspreadError('INVALID_ARGUMENT', `${w}.vertical`, 'give at least one vertical reading');
+  if (readings[0] === undefined && readings[1] === undefined) throw invalidArgument(`${w}.vertical`, 'give at least one vertical reading');
   const heights: (typeof Q1 | undefined)[] = [];
   const weights: T[] = [];
   const Qs = [Q1, Q2];
@@ -147,12 +147,12 @@ export function heightFromBase<T, E extends boolean>(
     const r = readings[i];
     if (r === undefined) { heights.push(undefined); continue; }
     const c = A.sub(one, r.spread);
-    if (A.isZero(c)) throw new QuadspreadError('VERTICAL_SIGHT', `${w}.vertical[${i}]`, 'a vertical spread of 1 is a plumb sight: it meets no point off the station');
+    if (A.isZero(c)) throw verticalSight(`${w}.vertical[${i}]`, 'a vertical spread of 1 is a plumb sight: it meets no point off the station');
     heights.push(R.mul(Qs[i]!, A.div(r.spread, c))); // H = Q·R/(1 − R)
     weights.push(A.mul(A.mul(c, c), ss[i]!));
   }
   const sg = readings.map((r) => (r === undefined ? 0 : r.sign));
-  if (sg[0]! * sg[1]! < 0) throw new QuadspreadError('INCONSISTENT_READINGS', `${w}.vertical`, 'one reading is above the horizon and the other below');
+  if (sg[0]! * sg[1]! < 0) throw inconsistentReadings(`${w}.vertical`, 'one reading is above the horizon and the other below');
   let H: typeof Q1;
   let discrepancy: typeof Q1 | undefined;
   if (heights[0] !== undefined && heights[1] !== undefined) {

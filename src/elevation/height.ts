@@ -3,7 +3,7 @@
  *
  * @module elevation
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, verticalSight, invalidArgument, inconsistentReadings, coincidentPoints } from '../errors.js';
 import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readQuadrance } from '../geometry/validate.js';
@@ -40,7 +40,7 @@ export function heightFromReading<T>(A: Arithmetic<T>, input: { horizontal: Nume
   const Q = readQuadrance(A, input.horizontal, 'heightFromReading(input)', 'horizontal');
   const R = readVertical(A, input.vertical, w).spread;
   const c = A.sub(A.one, R);
-  if (A.isZero(c)) throw new QuadspreadError('VERTICAL_SIGHT', w, `a vertical spread of 1 is a plumb sight: it meets no point at horizontal quadrance ${show(A.toString(Q))}`);
+  if (A.isZero(c)) throw verticalSight(w, `a vertical spread of 1 is a plumb sight: it meets no point at horizontal quadrance ${show(A.toString(Q))}`);
   return A.div(A.mul(Q, R), c); // H = Q·R/(1 − R)
 }
 
@@ -66,8 +66,8 @@ export function horizontalFromHeight<T>(A: Arithmetic<T>, input: { height: Numer
   const H = readQuadrance(A, input.height, 'horizontalFromHeight(input)', 'height');
   const R = readVertical(A, input.vertical, 'horizontalFromHeight(input.vertical)').spread;
   if (A.isZero(R)) {
-    if (A.isZero(H)) throw new QuadspreadError('INVALID_ARGUMENT', 'horizontalFromHeight(input)', 'a level sight to a point in the plane fits every distance');
-    throw new QuadspreadError('INCONSISTENT_READINGS', 'horizontalFromHeight(input.vertical)', `a level sight (R = 0) cannot reach a point at height quadrance ${show(A.toString(H))}`);
+    if (A.isZero(H)) throw invalidArgument('horizontalFromHeight(input)', 'a level sight to a point in the plane fits every distance');
+    throw inconsistentReadings('horizontalFromHeight(input.vertical)', `a level sight (R = 0) cannot reach a point at height quadrance ${show(A.toString(H))}`);
   }
   return A.div(A.mul(H, A.sub(A.one, R)), R); // Q = H(1 − R)/R
 }
@@ -94,6 +94,6 @@ export function verticalFromHeight<T>(A: Arithmetic<T>, input: { height: Numeric
   const H = readQuadrance(A, input.height, 'verticalFromHeight(input)', 'height');
   const Q = readQuadrance(A, input.horizontal, 'verticalFromHeight(input)', 'horizontal');
   const sum = A.add(H, Q);
-  if (A.isZero(sum)) throw new QuadspreadError('COINCIDENT_POINTS', 'verticalFromHeight(input)', 'height and horizontal are both 0: the point is the instrument');
+  if (A.isZero(sum)) throw coincidentPoints('verticalFromHeight(input)', 'height and horizontal are both 0: the point is the instrument');
   return A.div(H, sum); // R = H/(H + Q)
 }

@@ -4,7 +4,7 @@
  * @module elevation
  * @internal
  */
-import { QuadspreadError, show } from '../errors.js';
+import { show, invalidArgument } from '../errors.js';
 
 /**
  * Throws `INVALID_ARGUMENT` at `where` unless `x` is an object (so that a missing or wrong
@@ -12,5 +12,5 @@ import { QuadspreadError, show } from '../errors.js';
  * @internal
  */
 export function checkObject(x: unknown, where: string): void {
-  if (typeof x !== 'object' || x === null) throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(x)} is not an object of named inputs`);
+  if (typeof x !== 'object' || x === null) throw invalidArgument(where, `${show(x)} is not an object of named inputs`);
 }

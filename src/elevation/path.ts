@@ -3,7 +3,7 @@
  *
  * @module elevation
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidArgument } from '../errors.js';
 import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readSpread } from '../geometry/validate.js';
@@ -17,7 +17,7 @@ export type OffsetMeasure = 'face' | 'plan';
 
 function readMeasured(m: unknown, where: string): OffsetMeasure {
   if (m === 'face' || m === 'plan') return m;
-  throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(m)} is not 'face' or 'plan'`);
+  throw invalidArgument(where, `${show(m)} is not 'face' or 'plan'`);
 }
 
 /**
@@ -60,7 +60,7 @@ export function pathGrade<T>(A: Arithmetic<T>, input: { fall: Numeric<T>; offset
   const face = A.mul(S, A.sub(A.one, R)); // U = S(1 − R)
   if (measured === 'face') return face;
   const den = A.sub(A.one, A.mul(S, R));
-  if (A.isZero(den)) throw new QuadspreadError('INVALID_ARGUMENT', w, 'a vertical face (fall 1) has no plan direction along the contour (offset 1)');
+  if (A.isZero(den)) throw invalidArgument(w, 'a vertical face (fall 1) has no plan direction along the contour (offset 1)');
   return A.div(face, den); // U = S(1 − R)/(1 − S·R)
 }
 
@@ -94,12 +94,12 @@ export function pathOffset<T>(A: Arithmetic<T>, input: { fall: Numeric<T>; grade
   const measured = readMeasured(input.measured, `${w}.measured`);
   const S = readSpread(A, input.fall, w, 'fall');
   const U = readSpread(A, input.grade, w, 'grade');
-  if (A.isZero(S)) throw new QuadspreadError('INVALID_ARGUMENT', `${w}.fall`, 'a level plane (fall 0): every direction is level, no offset is fixed');
+  if (A.isZero(S)) throw invalidArgument(`${w}.fall`, 'a level plane (fall 0): every direction is level, no offset is fixed');
   if (A.cmp(U, S) > 0) {
     throw new QuadspreadError('GRADE_STEEPER_THAN_SLOPE', `${w}.grade`, `grade spread ${A.toString(U)} is steeper than the slope's fall-line spread ${A.toString(S)}`);
   }
   if (measured === 'face') return A.sub(A.one, A.div(U, S)); // R = 1 − U/S
   const den = A.mul(S, A.sub(A.one, U));
-  if (A.isZero(den)) throw new QuadspreadError('INVALID_ARGUMENT', w, 'a vertical face climbed vertically (fall = grade = 1) has no plan direction');
+  if (A.isZero(den)) throw invalidArgument(w, 'a vertical face climbed vertically (fall = grade = 1) has no plan direction');
   return A.div(A.sub(S, U), den); // R = (S − U)/(S(1 − U))
 }

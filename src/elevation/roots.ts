@@ -6,7 +6,7 @@
  * @internal
  */
 import type { Arithmetic } from '../arithmetic/types.js';
-import { QuadspreadError } from '../errors.js';
+import { noRealSolution } from '../errors.js';
 import { isSurd, surd, type Root, type Surd } from '../geometry/surd.js';
 
 /** @internal operations on roots of one arithmetic. */
@@ -41,7 +41,7 @@ export function rootOps<T, E extends boolean>(A: Arithmetic<T, E>): RootOps<T, E
     make(a, b, d) {
       if (A.isZero(b)) return a as Root<T, E>;
       const r = A.sqrt(d);
-      if (r === undefined) throw new QuadspreadError('NO_REAL_SOLUTION', 'root(a, b, d)', `no square root of ${A.toString(d)}`);
+      if (r === undefined) throw noRealSolution('root(a, b, d)', `no square root of ${A.toString(d)}`);
       return A.add(a, A.mul(b, r)) as Root<T, E>;
     },
     lift: (x) => x as Root<T, E>,

@@ -4,7 +4,7 @@
  *
  * @module elevation
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidArgument, verticalSight } from '../errors.js';
 import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { isSurd, type Root, type Surd } from '../geometry/surd.js';
@@ -57,8 +57,8 @@ function radius<T>(A: Arithmetic<T>, o: CurvatureOptions<T>, where: string): { k
     const u = checkLengthUnit(o.unit ?? 'm', `${where}.unit`);
     R = A.div(A.from(DEFAULT_EARTH_RADIUS_M), A.from(METRES_PER_UNIT[u]));
   }
-  if (A.sign(R) <= 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where}.earthRadius`, `${A.toString(R)} is not a positive radius`);
-  if (A.sign(k) < 0 || A.cmp(k, A.one) >= 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where}.k`, `${A.toString(k)} is outside [0, 1)`);
+  if (A.sign(R) <= 0) throw invalidArgument(`${where}.earthRadius`, `${A.toString(R)} is not a positive radius`);
+  if (A.sign(k) < 0 || A.cmp(k, A.one) >= 0) throw invalidArgument(`${where}.k`, `${A.toString(k)} is outside [0, 1)`);
   return { k, R };
 }
 
@@ -155,7 +155,7 @@ export function trigHeight<T, E extends boolean>(A: Arithmetic<T, E>, sight: Tri
   checkObject(sight, w);
   const R = rootOps(A);
   if (sight.measured !== 'slope' && sight.measured !== 'horizontal') {
-    throw new QuadspreadError('INVALID_ARGUMENT', `${w}.measured`, `${show(sight.measured)} is not 'slope' or 'horizontal'`);
+    throw invalidArgument(`${w}.measured`, `${show(sight.measured)} is not 'slope' or 'horizontal'`);
   }
   const D = readNumber(A, sight.distance, `${w}.distance`);
   if (A.sign(D) < 0) throw new QuadspreadError('NEGATIVE_QUADRANCE', `${w}.distance`, `${A.toString(D)} is a negative distance`);
@@ -169,7 +169,7 @@ export function trigHeight<T, E extends boolean>(A: Arithmetic<T, E>, sight: Tri
     V = R.make(A.zero, A.mul(sg, D), s); // S·sin α = ±S·√R
     Qh = A.mul(A.mul(D, D), c); // D² = S²·cos²α = S²(1 − R)
   } else {
-    if (A.isZero(c)) throw new QuadspreadError('VERTICAL_SIGHT', `${w}.vertical`, 'a vertical spread of 1 with a horizontal distance: the sight is plumb');
+    if (A.isZero(c)) throw verticalSight(`${w}.vertical`, 'a vertical spread of 1 with a horizontal distance: the sight is plumb');
     V = R.make(A.zero, A.div(A.mul(sg, D), c), A.mul(s, c)); // D·tan α = ±D·√(R(1 − R))/(1 − R)
     Qh = A.mul(D, D);
   }

@@ -3,7 +3,7 @@
  *
  * @module elevation
  */
-import { QuadspreadError } from '../errors.js';
+import { QuadspreadError, invalidArgument, coincidentPoints, verticalSight, inconsistentReadings } from '../errors.js';
 import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
@@ -14,7 +14,7 @@ import { heightFromReading } from './height.js';
 
 /** Reads a point given with numeric or arithmetic coordinates. */
 function readPoint<T>(A: Arithmetic<T>, P: { x: Numeric<T>; y: Numeric<T> }, where: string): Point<T> {
-  if (typeof P !== 'object' || P === null) throw new QuadspreadError('INVALID_ARGUMENT', where, 'is not a point { x, y }');
+  if (typeof P !== 'object' || P === null) throw invalidArgument(where, 'is not a point { x, y }');
   return { x: readNumber(A, P.x, `${where}.x`), y: readNumber(A, P.y, `${where}.y`) };
 }
 
@@ -74,8 +74,8 @@ export function heightFromTwoStations<T>(
 ): TwoStationHeight<T> {
   const w = 'heightFromTwoStations(input)';
   checkObject(input, w);
-  if (!Array.isArray(input.stations) || input.stations.length !== 2) throw new QuadspreadError('INVALID_ARGUMENT', `${w}.stations`, 'give exactly two stations');
-  if (!Array.isArray(input.vertical) || input.vertical.length !== 2) throw new QuadspreadError('INVALID_ARGUMENT', `${w}.vertical`, 'give exactly two vertical readings');
+  if (!Array.isArray(input.stations) || input.stations.length !== 2) throw invalidArgument(`${w}.stations`, 'give exactly two stations');
+  if (!Array.isArray(input.vertical) || input.vertical.length !== 2) throw invalidArgument(`${w}.vertical`, 'give exactly two vertical readings');
   const F = readPoint(A, input.foot, `${w}.foot`);
   const H: T[] = [];
   const weights: T[] = [];
@@ -83,16 +83,16 @@ export function heightFromTwoStations<T>(
   for (let i = 0; i < 2; i++) {
     const P = readPoint(A, input.stations[i]!, `${w}.stations[${i}]`);
     const Q = quadrance(A, P, F);
-    if (A.isZero(Q)) throw new QuadspreadError('COINCIDENT_POINTS', `${w}.stations[${i}]`, 'the station is at the foot of the point: its reading is a plumb sight');
+    if (A.isZero(Q)) throw coincidentPoints(`${w}.stations[${i}]`, 'the station is at the foot of the point: its reading is a plumb sight');
     const v = readVertical(A, input.vertical[i]!, `${w}.vertical[${i}]`);
     const c = A.sub(A.one, v.spread);
-    if (A.isZero(c)) throw new QuadspreadError('VERTICAL_SIGHT', `${w}.vertical[${i}]`, 'a vertical spread of 1 is a plumb sight: it meets no point off the station');
+    if (A.isZero(c)) throw verticalSight(`${w}.vertical[${i}]`, 'a vertical spread of 1 is a plumb sight: it meets no point off the station');
     H.push(heightFromReading(A, { horizontal: Q, vertical: v }));
     weights.push(A.div(A.mul(c, c), Q)); // w = (1 − R)²/Q (derived: dh = D/(1 − R)·dα)
     signs.push(v.sign);
   }
   if (signs[0]! * signs[1]! < 0) {
-    throw new QuadspreadError('INCONSISTENT_READINGS', `${w}.vertical`, 'one reading is above the horizon and the other below');
+    throw inconsistentReadings(`${w}.vertical`, 'one reading is above the horizon and the other below');
   }
   const [w1, w2] = weights as [T, T];
   const mean = A.div(A.add(A.mul(w1, H[0]!), A.mul(w2, H[1]!)), A.add(w1, w2));

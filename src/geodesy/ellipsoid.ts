@@ -4,7 +4,7 @@
  *
  * @module geodesy
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidEllipsoid } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { rational } from '../arithmetic/rational.js';
 import { readNumber } from '../geometry/validate.js';
@@ -97,26 +97,26 @@ export interface EllipsoidDefinition {
  */
 export function defineEllipsoid(def: EllipsoidDefinition): Ellipsoid {
   const where = 'defineEllipsoid(def)';
-  if (def === null || typeof def !== 'object') throw new QuadspreadError('INVALID_ELLIPSOID', where, `${show(def)} is not an object { a, f | invF | b }`);
+  if (def === null || typeof def !== 'object') throw invalidEllipsoid(where, `${show(def)} is not an object { a, f | invF | b }`);
   const given = (['f', 'invF', 'b'] as const).filter((k) => def[k] !== undefined);
   if (given.length !== 1) {
-    throw new QuadspreadError('INVALID_ELLIPSOID', where, `give exactly one of f, invF, b (got ${given.length === 0 ? 'none' : given.join(', ')})`);
+    throw invalidEllipsoid(where, `give exactly one of f, invF, b (got ${given.length === 0 ? 'none' : given.join(', ')})`);
   }
   const R = rational;
   const a = readNumber(R, def.a as Numeric<never>, `${where}.a`);
-  if (R.sign(a) <= 0) throw new QuadspreadError('INVALID_ELLIPSOID', where, `a = ${show(def.a)} is not positive`);
+  if (R.sign(a) <= 0) throw invalidEllipsoid(where, `a = ${show(def.a)} is not positive`);
   let f;
   if (def.f !== undefined) f = readNumber(R, def.f, `${where}.f`);
   else if (def.invF !== undefined) {
     const inv = readNumber(R, def.invF, `${where}.invF`);
-    if (R.cmp(inv, R.one) <= 0) throw new QuadspreadError('INVALID_ELLIPSOID', where, `invF = ${show(def.invF)} is not above 1`);
+    if (R.cmp(inv, R.one) <= 0) throw invalidEllipsoid(where, `invF = ${show(def.invF)} is not above 1`);
     f = R.div(R.one, inv);
   } else {
     const b = readNumber(R, def.b as Numeric<never>, `${where}.b`);
-    if (R.sign(b) <= 0 || R.cmp(b, a) > 0) throw new QuadspreadError('INVALID_ELLIPSOID', where, `b = ${show(def.b)} is not in (0, a]`);
+    if (R.sign(b) <= 0 || R.cmp(b, a) > 0) throw invalidEllipsoid(where, `b = ${show(def.b)} is not in (0, a]`);
     f = R.div(R.sub(a, b), a); // f = (a − b)/a, the definition of flattening
   }
-  if (R.sign(f) < 0 || R.cmp(f, R.one) >= 0) throw new QuadspreadError('INVALID_ELLIPSOID', where, `f = ${R.toString(f)} is not in [0, 1)`);
+  if (R.sign(f) < 0 || R.cmp(f, R.one) >= 0) throw invalidEllipsoid(where, `f = ${R.toString(f)} is not in [0, 1)`);
   const e: Ellipsoid = Object.freeze({
     name: def.name ?? 'user-defined',
     a: R.toString(a),
@@ -165,7 +165,7 @@ export function readEllipsoid(e: Ellipsoid | string | undefined, where: string):
     defineEllipsoid({ a: e.a, f: e.f });
   } catch (err) {
     if (!(err instanceof QuadspreadError)) throw err;
-    throw new QuadspreadError('INVALID_ELLIPSOID', where, `${show(e)} is not a valid ellipsoid: ${err.message.slice(`quadspread ${err.code}: ${err.where}: `.length)}`);
+    throw invalidEllipsoid(where, `${show(e)} is not a valid ellipsoid: ${err.message.slice(`quadspread ${err.code}: ${err.where}: `.length)}`);
   }
   return e;
 }

@@ -4,7 +4,7 @@
  *
  * @module geodesy
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidArgument } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber } from '../geometry/validate.js';
 import { sinCosDegrees } from '../readings/trig.js';
@@ -20,7 +20,7 @@ export interface Enu<T> {
 }
 
 function objectArg(x: unknown, where: string, shape: string): void {
-  if (x === null || typeof x !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(x)} is not ${shape}`);
+  if (x === null || typeof x !== 'object') throw invalidArgument(where, `${show(x)} is not ${shape}`);
 }
 
 /** A 3 × 3 matrix, rows first. */
@@ -72,7 +72,7 @@ function onCircle<T>(A: Arithmetic<T>, c: T, s: T, digits: number): { c: T; s: T
  */
 export function enuRotation<T>(A: Arithmetic<T>, origin: { readonly lat: Numeric<T>; readonly lon: Numeric<T> }): Matrix3<T> {
   const where = 'enuRotation(origin)';
-  if (origin === null || typeof origin !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(origin)} is not { lat, lon }`);
+  if (origin === null || typeof origin !== 'object') throw invalidArgument(where, `${show(origin)} is not { lat, lon }`);
   const digits = claimedDigits(A);
   const la = sinCosDegrees(A, readLatitude(A, origin.lat, `${where}.lat`));
   const lo = sinCosDegrees(A, readLongitude(A, origin.lon, `${where}.lon`));
@@ -192,8 +192,8 @@ export interface FlatEarthError<T> {
 export function flatEarthError<T>(A: Arithmetic<T>, distance: Numeric<T>, radius: Numeric<T> = '6371008.7714'): FlatEarthError<T> {
   const s = readNumber(A, distance, 'flatEarthError(distance)');
   const R = readNumber(A, radius, 'flatEarthError(radius)');
-  if (A.sign(s) < 0) throw new QuadspreadError('INVALID_ARGUMENT', 'flatEarthError(distance)', `${show(typeof distance === 'object' ? A.toString(s) : distance)} is negative`);
-  if (A.sign(R) <= 0) throw new QuadspreadError('INVALID_ARGUMENT', 'flatEarthError(radius)', `${show(typeof radius === 'object' ? A.toString(R) : radius)} is not positive`);
+  if (A.sign(s) < 0) throw invalidArgument('flatEarthError(distance)', `${show(typeof distance === 'object' ? A.toString(s) : distance)} is negative`);
+  if (A.sign(R) <= 0) throw invalidArgument('flatEarthError(radius)', `${show(typeof radius === 'object' ? A.toString(R) : radius)} is not positive`);
   const s2 = A.mul(s, s);
   return {
     drop: A.div(s2, A.mul(A.from(2), R)), // s²/(2R) (derived, leading term of R(1 − cos(s/R)))

@@ -4,7 +4,7 @@
  *
  * @module geodesy
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidArgument } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber } from '../geometry/validate.js';
 import { sinCosDegrees } from '../readings/trig.js';
@@ -63,7 +63,7 @@ export interface Geocentric<T> {
  */
 export function geodeticToGeocentric<T>(A: Arithmetic<T>, point: GeodeticInput<T>, ellipsoid: Ellipsoid | string): Geocentric<T> {
   const where = 'geodeticToGeocentric(point)';
-  if (point === null || typeof point !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(point)} is not { lat, lon, h }`);
+  if (point === null || typeof point !== 'object') throw invalidArgument(where, `${show(point)} is not { lat, lon, h }`);
   const E = ellipsoidParameters(A, readEllipsoid(ellipsoid, 'geodeticToGeocentric(ellipsoid)'));
   const lat = readLatitude(A, point.lat, `${where}.lat`);
   const lon = readLongitude(A, point.lon, `${where}.lon`);
@@ -123,7 +123,7 @@ const MAX_ITERATIONS = 30;
  */
 export function geocentricToGeodetic<T>(A: Arithmetic<T>, point: Geocentric<Numeric<T>> | Geocentric<T>, ellipsoid: Ellipsoid | string): Geodetic<T> {
   const where = 'geocentricToGeodetic(point)';
-  if (point === null || typeof point !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(point)} is not { X, Y, Z }`);
+  if (point === null || typeof point !== 'object') throw invalidArgument(where, `${show(point)} is not { X, Y, Z }`);
   const E = ellipsoidParameters(A, readEllipsoid(ellipsoid, 'geocentricToGeodetic(ellipsoid)'));
   const X = readNumber(A, point.X as Numeric<T>, `${where}.X`);
   const Y = readNumber(A, point.Y as Numeric<T>, `${where}.Y`);
@@ -138,7 +138,7 @@ export function geocentricToGeodetic<T>(A: Arithmetic<T>, point: Geocentric<Nume
   }
   if (A.isZero(p2)) {
     // On the polar axis: φ = ±90°, h = |Z| − b, λ taken as 0.
-    if (A.isZero(Z)) throw new QuadspreadError('INVALID_ARGUMENT', where, 'the centre of the ellipsoid has no unique geodetic coordinates');
+    if (A.isZero(Z)) throw invalidArgument(where, 'the centre of the ellipsoid has no unique geodetic coordinates');
     return { lat: A.from(A.sign(Z) > 0 ? 90 : -90), lon: A.zero, h: A.sub(A.abs(Z), E.b) };
   }
   // From here on A is inexact: exact arithmetics were delegated above.

@@ -12,7 +12,7 @@
  *
  * @module geodesy
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidArgument } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber } from '../geometry/validate.js';
 import { sinCosDegrees } from '../readings/trig.js';
@@ -40,7 +40,7 @@ import { claimedDigits, delegateFor, readHeight, readLatitude, readLongitude, ro
  */
 export function heightReductionFactor<T>(A: Arithmetic<T>, h: Numeric<T>, radius: Numeric<T>): T {
   const R = readNumber(A, radius, 'heightReductionFactor(radius)');
-  if (A.sign(R) <= 0) throw new QuadspreadError('INVALID_ARGUMENT', 'heightReductionFactor(radius)', `${show(typeof radius === 'object' ? A.toString(R) : radius)} is not positive`);
+  if (A.sign(R) <= 0) throw invalidArgument('heightReductionFactor(radius)', `${show(typeof radius === 'object' ? A.toString(R) : radius)} is not positive`);
   const H = readHeight(A, h, A.div(R, A.from(2)), 'heightReductionFactor(h)', 'R/2');
   return A.div(R, A.add(R, H)); // R/(R + h)
 }
@@ -134,7 +134,7 @@ interface KrugerResult<T> {
 function kruger<T>(A: Arithmetic<T>, E: EllipsoidParameters<T>, lat: T, dlon: T, where: string, wantGrid: boolean): KrugerResult<T> {
   const { sin: sp, cos: cp } = sinCosDegrees(A, lat);
   const { sin: sl, cos: cl } = sinCosDegrees(A, dlon);
-  if (A.sign(cl) <= 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where}(point.lon)`, 'the point is 90° or more from the central meridian');
+  if (A.sign(cl) <= 0) throw invalidArgument(`${where}(point.lon)`, 'the point is 90° or more from the central meridian');
   const digits = claimedDigits(A);
   const tol = tenToMinus(A, digits + 4);
   const one = A.one;
@@ -147,7 +147,7 @@ function kruger<T>(A: Arithmetic<T>, E: EllipsoidParameters<T>, lat: T, dlon: T,
   const S = A.sub(A.mul(sp, root(A, A.add(one, A.mul(sigma, sigma)))), sigma);
   const Ccl = A.mul(cp, cl);
   const D2 = A.add(A.mul(S, S), A.mul(Ccl, Ccl)); // cos²φ (τ′² + cos²λ)
-  if (A.isZero(D2)) throw new QuadspreadError('INVALID_ARGUMENT', `${where}(point)`, 'the projection is singular at this point');
+  if (A.isZero(D2)) throw invalidArgument(`${where}(point)`, 'the projection is singular at this point');
   const D = root(A, D2);
   // Gauss–Schreiber: ξ′ = atan2(τ′, cos λ), sinh η′ = sin λ/√(τ′² + cos²λ) (Karney 2011, eq. 10)
   const sx = A.div(S, D); // sin ξ′
@@ -177,7 +177,7 @@ function kruger<T>(A: Arithmetic<T>, E: EllipsoidParameters<T>, lat: T, dlon: T,
       // The terms grow like cosh 2jη′: where the last one, α₆ cosh 12η′, exceeds 1e-10 (of a,
       // about 0.6 mm) the truncated series no longer holds (at the equator about 61° from
       // the central meridian; nearer 90° it returns nonsense). Derived from the series.
-      throw new QuadspreadError('INVALID_ARGUMENT', `${where}(point.lon)`, `the point is too far from the central meridian for Krüger's series to n⁶ (its last term is ${show(A.toNumber(A.mul(A.abs(alpha), chj)))})`);
+      throw invalidArgument(`${where}(point.lon)`, `the point is too far from the central meridian for Krüger's series to n⁶ (its last term is ${show(A.toNumber(A.mul(A.abs(alpha), chj)))})`);
     }
     const w = A.mul(A.from(2 * j), alpha);
     pp = A.add(pp, A.mul(w, A.mul(cj, chj)));
@@ -311,12 +311,12 @@ function tm<T>(
   originXi?: T,
 ): GridPoint<T> & { xi0: T } {
   const where = wantGrid ? 'transverseMercator' : 'transverseMercatorFactors';
-  if (point === null || typeof point !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', `${where}(point)`, `${show(point)} is not { lat, lon }`);
-  if (projection === null || typeof projection !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', `${where}(projection)`, `${show(projection)} is not { lon0, k0, ellipsoid }`);
+  if (point === null || typeof point !== 'object') throw invalidArgument(`${where}(point)`, `${show(point)} is not { lat, lon }`);
+  if (projection === null || typeof projection !== 'object') throw invalidArgument(`${where}(projection)`, `${show(projection)} is not { lon0, k0, ellipsoid }`);
   const ell = readEllipsoid(projection.ellipsoid, `${where}(projection.ellipsoid)`);
   const E = ellipsoidParameters(A, ell);
   const k0 = readNumber(A, projection.k0 ?? 1, `${where}(projection.k0)`);
-  if (A.sign(k0) <= 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where}(projection.k0)`, `${show(projection.k0)} is not positive`);
+  if (A.sign(k0) <= 0) throw invalidArgument(`${where}(projection.k0)`, `${show(projection.k0)} is not positive`);
   const lat = readLatitude(A, point.lat, `${where}(point.lat)`);
   const lon = readLongitude(A, point.lon, `${where}(point.lon)`);
   const lon0 = readLongitude(A, projection.lon0 as Numeric<T>, `${where}(projection.lon0)`);
@@ -374,7 +374,7 @@ export function combinedFactor<T>(A: Arithmetic<T>, heightFactor: Numeric<T>, sc
 
 function positive<T>(A: Arithmetic<T>, x: Numeric<T>, where: string): T {
   const v = readNumber(A, x, where);
-  if (A.sign(v) <= 0) throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(typeof x === 'object' ? A.toString(v) : x)} is not positive`);
+  if (A.sign(v) <= 0) throw invalidArgument(where, `${show(typeof x === 'object' ? A.toString(v) : x)} is not positive`);
   return v;
 }
 
@@ -452,8 +452,8 @@ export function transverseMercatorInverse<T>(
   projection: TransverseMercatorGrid,
 ): { lat: T; lon: T; k: T; convergence: T } {
   const where = 'transverseMercatorInverse';
-  if (point === null || typeof point !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', `${where}(point)`, `${show(point)} is not { E, N }`);
-  if (projection === null || typeof projection !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', `${where}(projection)`, `${show(projection)} is not { lon0, k0, ellipsoid }`);
+  if (point === null || typeof point !== 'object') throw invalidArgument(`${where}(point)`, `${show(point)} is not { E, N }`);
+  if (projection === null || typeof projection !== 'object') throw invalidArgument(`${where}(projection)`, `${show(projection)} is not { lon0, k0, ellipsoid }`);
   const ell = readEllipsoid(projection.ellipsoid, `${where}(projection.ellipsoid)`);
   const Et = readNumber(A, point.E, `${where}(point.E)`);
   const Nt = readNumber(A, point.N, `${where}(point.N)`);
@@ -464,7 +464,7 @@ export function transverseMercatorInverse<T>(
   }
   const P = ellipsoidParameters(A, ell);
   const k0 = readNumber(A, (projection.k0 ?? 1) as Numeric<T>, `${where}(projection.k0)`);
-  if (A.sign(k0) <= 0) throw new QuadspreadError('INVALID_ARGUMENT', `${where}(projection.k0)`, `${show(projection.k0)} is not positive`);
+  if (A.sign(k0) <= 0) throw invalidArgument(`${where}(projection.k0)`, `${show(projection.k0)} is not positive`);
   const lon0 = readLongitude(A, projection.lon0 as Numeric<T>, `${where}(projection.lon0)`);
   const lat0 = readLatitude(A, (projection.lat0 ?? 0) as Numeric<T>, `${where}(projection.lat0)`);
   const E0 = readNumber(A, (projection.falseEasting ?? 0) as Numeric<T>, `${where}(projection.falseEasting)`);

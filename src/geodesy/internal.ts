@@ -5,7 +5,7 @@
  * @module geodesy
  * @internal
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidAngle } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber } from '../geometry/validate.js';
 import { RATIONAL_TRANSCENDENTAL_DIGITS } from '../arithmetic/rational.js';
@@ -53,7 +53,7 @@ export function readAngle<T>(A: Arithmetic<T>, x: Numeric<T>, where: string, uni
 
 /** @internal A latitude in degrees from decimal degrees or DMS text, checked to be within ±90°. */
 export function readLatitude<T>(A: Arithmetic<T>, lat: Numeric<T>, where: string): T {
-  if (lat === undefined || lat === null) throw new QuadspreadError('INVALID_ANGLE', where, 'the latitude is missing');
+  if (lat === undefined || lat === null) throw invalidAngle(where, 'the latitude is missing');
   const v = readAngle(A, lat, where);
   if (A.cmp(A.abs(v), A.from(90)) > 0) {
     throw new QuadspreadError('LATITUDE_OUT_OF_RANGE', where, `${show(typeof lat === 'object' ? A.toString(v) : lat)} is beyond ±90°`);
@@ -63,7 +63,7 @@ export function readLatitude<T>(A: Arithmetic<T>, lat: Numeric<T>, where: string
 
 /** @internal A longitude in degrees from decimal degrees or DMS text (any value; used through sin and cos). */
 export function readLongitude<T>(A: Arithmetic<T>, lon: Numeric<T>, where: string): T {
-  if (lon === undefined || lon === null) throw new QuadspreadError('INVALID_ANGLE', where, 'the longitude is missing');
+  if (lon === undefined || lon === null) throw invalidAngle(where, 'the longitude is missing');
   return readAngle(A, lon, where);
 }
 

@@ -4,7 +4,7 @@
  * @module geometry
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, coincidentPoints } from '../errors.js';
 import type { Point } from './point.js';
 import { atMostOne, readNumber } from './validate.js';
 
@@ -77,7 +77,7 @@ export function lineThrough<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): Line
   const a = A.sub(P.y, Q.y);
   const b = A.sub(Q.x, P.x);
   if (A.isZero(a) && A.isZero(b)) {
-    throw new QuadspreadError('COINCIDENT_POINTS', 'lineThrough(A, P, Q)', `P and Q coincide at (${show(A.toString(P.x))}, ${show(A.toString(P.y))})`);
+    throw coincidentPoints('lineThrough(A, P, Q)', `P and Q coincide at (${show(A.toString(P.x))}, ${show(A.toString(P.y))})`);
   }
   return { a, b, c: A.sub(A.mul(P.x, Q.y), A.mul(Q.x, P.y)) };
 }

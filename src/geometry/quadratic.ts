@@ -4,7 +4,7 @@
  * @module geometry
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidArgument } from '../errors.js';
 import { type Root, type Surd, surd } from './surd.js';
 import { readNumber } from './validate.js';
 
@@ -37,7 +37,7 @@ export function solveQuadratic<T, E extends boolean>(A: Arithmetic<T, E>, a: Num
   const qc = readNumber(A, c, w, ' c');
   if (A.isZero(qa)) {
     if (A.isZero(qb)) {
-      throw new QuadspreadError('INVALID_ARGUMENT', w, `a and b are both zero (c = ${show(A.toString(qc))}): no equation in x`);
+      throw invalidArgument(w, `a and b are both zero (c = ${show(A.toString(qc))}): no equation in x`);
     }
     const x = A.neg(A.div(qc, qb));
     return [(A.exact ? surd(A, x) : x) as Root<T, E>];

@@ -4,7 +4,7 @@
  * @module geometry
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidArgument } from '../errors.js';
 import { type Root, type Surd, surd } from './surd.js';
 import type { Triangle } from './triangle.js';
 import { atMostOne, readQuadrance, readSpread } from './validate.js';
@@ -116,9 +116,9 @@ const KEYS = ['Q1', 'Q2', 'Q3', 's1', 's2', 's3'] as const;
  */
 export function solveTriangle<T, E extends boolean>(A: Arithmetic<T, E>, known: TriangleMeasures<Numeric<T>>): Triangle<Root<T, E>>[] {
   const w = 'solveTriangle(A, known)';
-  if (typeof known !== 'object' || known === null) throw new QuadspreadError('INVALID_ARGUMENT', w, `known = ${show(known)} is not an object`);
+  if (typeof known !== 'object' || known === null) throw invalidArgument(w, `known = ${show(known)} is not an object`);
   for (const k of Object.keys(known)) {
-    if (!(KEYS as readonly string[]).includes(k)) throw new QuadspreadError('INVALID_ARGUMENT', w, `unknown measure ${show(k)}; use Q1, Q2, Q3, s1, s2, s3`);
+    if (!(KEYS as readonly string[]).includes(k)) throw invalidArgument(w, `unknown measure ${show(k)}; use Q1, Q2, Q3, s1, s2, s3`);
   }
   const Q: (T | undefined)[] = [];
   const s: (T | undefined)[] = [];
@@ -130,7 +130,7 @@ export function solveTriangle<T, E extends boolean>(A: Arithmetic<T, E>, known: 
     s.push(p === undefined ? undefined : readSpread(A, p, w, KEYS[i + 3]!));
     count += (q === undefined ? 0 : 1) + (p === undefined ? 0 : 1);
   }
-  if (count !== 3) throw new QuadspreadError('INVALID_ARGUMENT', w, `give exactly three measures; ${count} given`);
+  if (count !== 3) throw invalidArgument(w, `give exactly three measures; ${count} given`);
   const nq = Q.filter((x) => x !== undefined).length;
   if (nq === 0) throw new QuadspreadError('NEEDS_A_QUADRANCE', w, 'three spreads fix a triangle only up to scale: give a quadrance');
   // A proper triangle has no zero quadrance or spread.

@@ -4,7 +4,7 @@
  * @module geometry
  */
 import type { Arithmetic } from '../arithmetic/types.js';
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, coincidentPoints } from '../errors.js';
 import type { Point } from './point.js';
 import { atMostOne } from './validate.js';
 
@@ -25,8 +25,8 @@ function ratio<T>(A: Arithmetic<T>, ux: T, uy: T, vx: T, vy: T, dot: boolean, wh
 }
 
 function zero<T>(A: Arithmetic<T>, where: string, arg: string, P: Point<T> | undefined): never {
-  if (P === undefined) throw new QuadspreadError('COINCIDENT_POINTS', where, `${arg} is the zero vector, so it has no direction`);
-  throw new QuadspreadError('COINCIDENT_POINTS', where, `${arg} = (${show(A.toString(P.x))}, ${show(A.toString(P.y))}) coincides with the vertex V, so the line is undefined`);
+  if (P === undefined) throw coincidentPoints(where, `${arg} is the zero vector, so it has no direction`);
+  throw coincidentPoints(where, `${arg} = (${show(A.toString(P.x))}, ${show(A.toString(P.y))}) coincides with the vertex V, so the line is undefined`);
 }
 
 /**

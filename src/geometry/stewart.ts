@@ -5,7 +5,7 @@
  * @module geometry
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidArgument } from '../errors.js';
 import { solveQuadratic } from './quadratic.js';
 import { type Root, isSurd, type Surd } from './surd.js';
 import { readNumber, readQuadrance } from './validate.js';
@@ -130,14 +130,14 @@ export function stewartQuadranceResidual<T>(A: Arithmetic<T>, data: StewartQuadr
 
 /** Checks that `data` is an object (the members are read from it). */
 function checkData(data: unknown, where: string): void {
-  if (data === null || typeof data !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', where, `data = ${show(data)} is not an object`);
+  if (data === null || typeof data !== 'object') throw invalidArgument(where, `data = ${show(data)} is not an object`);
 }
 
 /** The one missing key of `data` among `keys`; throws unless exactly one is missing. */
 function missingKey(data: Record<string, unknown>, keys: readonly string[], where: string): string {
   const missing = keys.filter((k) => data[k] === undefined);
   if (missing.length !== 1) {
-    throw new QuadspreadError('INVALID_ARGUMENT', where, `give all of ${keys.join(', ')} but one; ${missing.length === 0 ? 'none is' : `${missing.join(', ')} are`} missing`);
+    throw invalidArgument(where, `give all of ${keys.join(', ')} but one; ${missing.length === 0 ? 'none is' : `${missing.join(', ')} are`} missing`);
   }
   return missing[0]!;
 }
@@ -148,7 +148,7 @@ function missingKey(data: Record<string, unknown>, keys: readonly string[], wher
  */
 function roots<T, E extends boolean>(A: Arithmetic<T, E>, a: T, b: T, c: T, where: string): Root<T, E>[] {
   if (A.isZero(a) && A.isZero(b)) {
-    if (A.isZero(c)) throw new QuadspreadError('INVALID_ARGUMENT', where, 'the other values do not fix the unknown (every value satisfies the relation)');
+    if (A.isZero(c)) throw invalidArgument(where, 'the other values do not fix the unknown (every value satisfies the relation)');
     return [];
   }
   return solveQuadratic(A, a, b, c);

@@ -6,7 +6,7 @@
 import Fraction from 'fraction.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { isqrt } from '../arithmetic/exact.js';
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, divisionByZero, notFinite, invalidArgument, noRealSolution } from '../errors.js';
 import { readNumber } from './validate.js';
 
 /**
@@ -189,7 +189,7 @@ class SurdValue<T> implements Surd<T> {
     const d = this.radicand(y);
     // (a + b√d)/(c + e√d) = (a + b√d)(c − e√d)/(c² − e²d)
     const n = A.sub(A.mul(ya, ya), A.mul(A.mul(yb, yb), d));
-    if (A.isZero(n)) throw new QuadspreadError('DIVISION_BY_ZERO', 'Surd.div(y)', `${this.toString()} divided by zero`);
+    if (A.isZero(n)) throw divisionByZero('Surd.div(y)', `${this.toString()} divided by zero`);
     const a = A.div(A.sub(A.mul(this.a, ya), A.mul(A.mul(this.b, yb), d)), n);
     const b = A.div(A.sub(A.mul(this.b, ya), A.mul(this.a, yb)), n);
     return raw(A, a, b, d);
@@ -247,7 +247,7 @@ class SurdValue<T> implements Surd<T> {
       // Through 40 correctly rounded digits: works whatever the size of the radicand's
       // numerator and denominator (√(p/q) is kept as √(pq)/q, which may exceed JS range).
       const v = Number(this.toPrecision(40));
-      if (!Number.isFinite(v)) throw new QuadspreadError('NOT_FINITE', 'Surd.toNumber()', `${show(this.toPrecision(12))} is beyond the range of a JS number`);
+      if (!Number.isFinite(v)) throw notFinite('Surd.toNumber()', `${show(this.toPrecision(12))} is beyond the range of a JS number`);
       return v;
     }
     const a = A.toNumber(this.a);
@@ -277,7 +277,7 @@ class SurdValue<T> implements Surd<T> {
   toPrecision(digits: number): string {
     const A = this.arithmetic;
     if (!Number.isInteger(digits) || digits < 1 || digits > 1000) {
-      throw new QuadspreadError('INVALID_ARGUMENT', 'Surd.toPrecision(digits)', `digits ${show(digits)} is not an integer in 1..1000`);
+      throw invalidArgument('Surd.toPrecision(digits)', `digits ${show(digits)} is not an integer in 1..1000`);
     }
     if (A.isZero(this.b)) return A.toPrecision(this.a, digits);
     const d = this.d;
@@ -377,7 +377,7 @@ export function surd<T>(A: Arithmetic<T>, a: Numeric<T>, b: Numeric<T> = 0, d: N
   let rb = readNumber(A, b, w, ' b');
   let rd = readNumber(A, d, w, ' d');
   if (A.isZero(rb) || A.isZero(rd)) return new SurdValue(A, ra, A.zero, A.one);
-  if (A.sign(rd) < 0) throw new QuadspreadError('NO_REAL_SOLUTION', w, `the radicand d = ${show(A.toString(rd))} is negative`);
+  if (A.sign(rd) < 0) throw noRealSolution(w, `the radicand d = ${show(A.toString(rd))} is negative`);
   if ((rd as unknown) instanceof Fraction && (rb as unknown) instanceof Fraction) {
     // √(p/q) = √(pq)/q, then k²m → k√m for the primes below 1000.
     const f = rd as unknown as Fraction;
@@ -423,7 +423,7 @@ export function surd<T>(A: Arithmetic<T>, a: Numeric<T>, b: Numeric<T> = 0, d: N
  */
 export function sqrtOf<T, E extends boolean>(A: Arithmetic<T, E>, x: Numeric<T>): Root<T, E> {
   const v = readNumber(A, x, 'sqrtOf(A, x) x');
-  if (A.sign(v) < 0) throw new QuadspreadError('NO_REAL_SOLUTION', 'sqrtOf(A, x)', `x = ${show(A.toString(v))} is negative`);
+  if (A.sign(v) < 0) throw noRealSolution('sqrtOf(A, x)', `x = ${show(A.toString(v))} is negative`);
   if (A.exact) return surd(A, 0, 1, v) as Root<T, E>;
   const r = A.sqrt(v);
   if (r === undefined) throw new QuadspreadError('UNSUPPORTED_OPERATION', 'sqrtOf(A, x)', `${A.name} has no square root of ${show(A.toString(v))}`);

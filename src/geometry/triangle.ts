@@ -4,7 +4,7 @@
  * @module geometry
  */
 import type { Arithmetic } from '../arithmetic/types.js';
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, coincidentPoints } from '../errors.js';
 import type { Point } from './point.js';
 
 /**
@@ -99,5 +99,5 @@ function collinear<T>(A: Arithmetic<T>, A1: Point<T>): never {
 
 function coincident<T>(A: Arithmetic<T>, A1: Point<T>, A2: Point<T>, A3: Point<T>, Q1: T, Q2: T): never {
   const [n1, n2, P] = A.isZero(Q1) ? ['A2', 'A3', A2] : A.isZero(Q2) ? ['A1', 'A3', A1] : ['A1', 'A2', A1];
-  throw new QuadspreadError('COINCIDENT_POINTS', 'triangle(A, A1, A2, A3)', `${n1} and ${n2} coincide at (${show(A.toString(P.x))}, ${show(A.toString(P.y))})`);
+  throw coincidentPoints('triangle(A, A1, A2, A3)', `${n1} and ${n2} coincide at (${show(A.toString(P.x))}, ${show(A.toString(P.y))})`);
 }

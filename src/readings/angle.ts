@@ -4,7 +4,7 @@
  *
  * @module readings
  */
-import { MAX_INPUT_LENGTH, QuadspreadError, show } from '../errors.js';
+import { MAX_INPUT_LENGTH, QuadspreadError, show, invalidAngle, inputTooLong } from '../errors.js';
 import { readNumber } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { guardOf, viaGuard } from './numeric.js';
@@ -52,7 +52,7 @@ function normaliseMarks(text: string): string {
 
 function parseDms(original: string, where: string): DmsParts {
   const bad = (why: string): never => {
-    throw new QuadspreadError('INVALID_ANGLE', where, `${show(original)} ${why}`);
+    throw invalidAngle(where, `${show(original)} ${why}`);
   };
   let text = normaliseMarks(original).trim();
   let sign: 1 | -1 = 1;
@@ -150,23 +150,23 @@ export function readAngle<T>(A: Arithmetic<T>, reading: Numeric<T>, unit: AngleU
   const u = checkAngleUnit(unit, 'angleToDegrees(unit)');
   if (typeof reading === 'string' && !PLAIN_NUMBER.test(reading)) {
     if (reading.length > MAX_INPUT_LENGTH) {
-      throw new QuadspreadError('INPUT_TOO_LONG', where, `text of ${reading.length} characters is longer than the limit of ${MAX_INPUT_LENGTH}`);
+      throw inputTooLong(where, `text of ${reading.length} characters is longer than the limit of ${MAX_INPUT_LENGTH}`);
     }
-    if (u !== 'deg') throw new QuadspreadError('INVALID_ANGLE', where, `${show(reading)} is DMS text, which is in degrees, but the unit is '${u}'`);
+    if (u !== 'deg') throw invalidAngle(where, `${show(reading)} is DMS text, which is in degrees, but the unit is '${u}'`);
     const dms = parseDms(reading, where);
     const sixty = A.from(60);
     let value = A.zero;
     for (const p of dms.parts) {
       const v = A.from(p.text);
       if (p.position > 0 && A.cmp(v, sixty) >= 0) {
-        throw new QuadspreadError('INVALID_ANGLE', where, `${show(reading)} has ${p.position === 1 ? 'minutes' : 'seconds'} ${p.text} ≥ 60`);
+        throw invalidAngle(where, `${show(reading)} has ${p.position === 1 ? 'minutes' : 'seconds'} ${p.text} ≥ 60`);
       }
       const scale = p.position === 0 ? A.one : p.position === 1 ? sixty : A.from(3600);
       value = A.add(value, A.div(v, scale));
     }
     if (dms.quadrant) {
       const { from, to } = dms.quadrant;
-      if (A.cmp(value, A.from(90)) > 0) throw new QuadspreadError('INVALID_ANGLE', where, `${show(reading)} is a quadrant bearing over 90°`);
+      if (A.cmp(value, A.from(90)) > 0) throw invalidAngle(where, `${show(reading)} is a quadrant bearing over 90°`);
       const half = A.from(180);
       if (from === 'N') value = to === 'E' ? value : A.isZero(value) ? value : A.sub(A.from(360), value);
       else value = to === 'E' ? A.sub(half, value) : A.add(half, value);

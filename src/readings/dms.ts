@@ -3,7 +3,7 @@
  *
  * @module readings
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidArgument } from '../errors.js';
 import { readNumber } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 
@@ -31,18 +31,18 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
  */
 export function formatDms<T>(A: Arithmetic<T>, degrees: Numeric<T>, secondsDecimals = 1): string {
   if (!Number.isInteger(secondsDecimals) || secondsDecimals < 0 || secondsDecimals > 6) {
-    throw new QuadspreadError('INVALID_ARGUMENT', 'formatDms(secondsDecimals)', `${show(secondsDecimals)} is not an integer in 0..6`);
+    throw invalidArgument('formatDms(secondsDecimals)', `${show(secondsDecimals)} is not an integer in 0..6`);
   }
   const d = readNumber(A, degrees, 'formatDms(degrees)');
   if (A.cmp(A.abs(d), A.from('1e8')) >= 0) {
-    throw new QuadspreadError('INVALID_ARGUMENT', 'formatDms(degrees)', `${A.toString(d)} is too large to write as DMS`);
+    throw invalidArgument('formatDms(degrees)', `${A.toString(d)} is too large to write as DMS`);
   }
   const negative = A.sign(d) < 0;
   const scale = 10 ** secondsDecimals;
   const x = A.mul(A.abs(d), A.from(3600 * scale)); // units of 10^-k seconds
   let n = Math.floor(A.toNumber(x));
   if (n >= Number.MAX_SAFE_INTEGER) {
-    throw new QuadspreadError('INVALID_ARGUMENT', 'formatDms(degrees)', `${A.toString(d)} is too large to write as DMS with ${secondsDecimals} decimals of a second`);
+    throw invalidArgument('formatDms(degrees)', `${A.toString(d)} is too large to write as DMS with ${secondsDecimals} decimals of a second`);
   }
   // floor(x) exactly: the nearest number is off by at most one step in an arithmetic at least as
   // fine as a double (two steps allowed; a coarser one cannot hold the seconds anyway)

@@ -3,7 +3,7 @@
  *
  * @module readings
  */
-import { QuadspreadError } from '../errors.js';
+import { QuadspreadError, verticalSight } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { sqrtOf, surd, type Root } from '../geometry/surd.js';
 import { checkSpread } from './spread.js';
@@ -31,7 +31,7 @@ import { checkSpread } from './spread.js';
 export function gradeFromSpread<T, E extends boolean>(A: Arithmetic<T, E>, s: Numeric<T>): Root<T, E> {
   const v = checkSpread(A, s, 'gradeFromSpread(s)');
   const c = A.sub(A.one, v);
-  if (A.isZero(c)) throw new QuadspreadError('VERTICAL_SIGHT', 'gradeFromSpread(s)', 'a spread of 1 is vertical: it has no grade');
+  if (A.isZero(c)) throw verticalSight('gradeFromSpread(s)', 'a spread of 1 is vertical: it has no grade');
   const k = A.div(A.from(100), c);
   const rad = A.mul(v, c);
   if (A.exact) return surd(A, 0, k, rad) as Root<T, E>; // 100·√(s(1 − s))/(1 − s)

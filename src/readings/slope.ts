@@ -5,7 +5,7 @@
  *
  * @module readings
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, verticalSight } from '../errors.js';
 import { readNumber } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { checkSpread } from './spread.js';
@@ -130,6 +130,6 @@ export function spreadFromOneIn<T>(A: Arithmetic<T>, n: Numeric<T>): T {
  */
 export function gradeSquaredFromSpread<T>(A: Arithmetic<T>, s: Numeric<T>): T {
   const v = checkSpread(A, s, 'gradeSquaredFromSpread(s)');
-  if (A.eq(v, A.one)) throw new QuadspreadError('VERTICAL_SIGHT', 'gradeSquaredFromSpread(s)', 'a spread of 1 is vertical: it has no grade');
+  if (A.eq(v, A.one)) throw verticalSight('gradeSquaredFromSpread(s)', 'a spread of 1 is vertical: it has no grade');
   return A.div(A.mul(A.from(10000), v), A.sub(A.one, v)); // tan² = s/(1 − s)
 }

@@ -3,7 +3,7 @@
  *
  * @module readings
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidAngle } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { guardOf } from './numeric.js';
 
@@ -18,7 +18,7 @@ export function modulo<T>(A: Arithmetic<T>, x: T, m: T, where = 'modulo(x)'): T 
   // An inexact arithmetic must still resolve x to a millionth of m (e.g. about 1″ of a turn):
   // (x + m) − x = m to within m·10⁻⁶; otherwise the remainder would be rounding noise.
   if (!A.exact && A.cmp(A.abs(A.sub(A.sub(A.add(x, m), x), m)), A.div(m, A.from(1e6))) > 0) {
-    throw new QuadspreadError('INVALID_ANGLE', where, `${show(A.toString(x))} is too large for ${A.name} to reduce modulo ${A.toString(m)}`);
+    throw invalidAngle(where, `${show(A.toString(x))} is too large for ${A.name} to reduce modulo ${A.toString(m)}`);
   }
   // Subtract the multiple of m that the nearest number gives; each pass leaves a remainder about
   // 10¹⁶ times smaller (exact in an exact arithmetic), so a few passes reach [0, m).
@@ -28,7 +28,7 @@ export function modulo<T>(A: Arithmetic<T>, x: T, m: T, where = 'modulo(x)'): T 
     const q = Math.floor(A.toNumber(A.div(r, m)));
     r = q === 0 ? A.add(r, m) : A.sub(r, A.mul(A.from(q), m));
   }
-  throw new QuadspreadError('INVALID_ANGLE', where, `${show(A.toString(x))} is too large to reduce modulo ${A.toString(m)}`);
+  throw invalidAngle(where, `${show(A.toString(x))} is too large to reduce modulo ${A.toString(m)}`);
 }
 
 /**

@@ -4,7 +4,7 @@
  *
  * @module readings
  */
-import { MAX_INPUT_LENGTH, QuadspreadError, show } from '../errors.js';
+import { MAX_INPUT_LENGTH, QuadspreadError, show, invalidArgument, invalidAngle, inputTooLong } from '../errors.js';
 import { readNumber } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { angleToDegrees, type AngleUnit } from './angle.js';
@@ -51,7 +51,7 @@ export type VerticalInput<T> = VerticalReading<T> | Numeric<T>;
 export function vertical<T>(A: Arithmetic<T>, spread: Numeric<T>, sign: -1 | 0 | 1 = 1): VerticalReading<T> {
   const s = checkSpread(A, spread, 'vertical(spread)');
   if (A.isZero(s)) return { spread: s, sign: 0 };
-  if (sign !== 1 && sign !== -1) throw new QuadspreadError('INVALID_ARGUMENT', 'vertical(sign)', `${show(sign)} is not +1 or -1 (the spread ${A.toString(s)} is not 0)`);
+  if (sign !== 1 && sign !== -1) throw invalidArgument('vertical(sign)', `${show(sign)} is not +1 or -1 (the spread ${A.toString(s)} is not 0)`);
   return { spread: s, sign };
 }
 
@@ -64,7 +64,7 @@ export function readVertical<T>(A: Arithmetic<T>, x: VerticalInput<T>, where: st
     const r = x as VerticalReading<T>;
     const s = readSpreadAt(A, r.spread, where, index);
     if (A.isZero(s)) return { spread: s, sign: 0 };
-    if (r.sign !== 1 && r.sign !== -1) throw new QuadspreadError('INVALID_ARGUMENT', at(where, index), `sign ${show(r.sign)} is not +1 or -1 for the non-zero spread ${A.toString(s)}`);
+    if (r.sign !== 1 && r.sign !== -1) throw invalidArgument(at(where, index), `sign ${show(r.sign)} is not +1 or -1 for the non-zero spread ${A.toString(s)}`);
     return { spread: s, sign: r.sign };
   }
   const s = readSpreadAt(A, x as Numeric<T>, where, index);
@@ -111,17 +111,17 @@ export function verticalFromAngle<T>(
   angle: Numeric<T>,
   options: { kind?: VerticalKind; unit?: AngleUnit } = {},
 ): VerticalReading<T> {
-  if (typeof options !== 'object' || options === null) throw new QuadspreadError('INVALID_ARGUMENT', 'verticalFromAngle(options)', `${show(options)} is not an options object`);
+  if (typeof options !== 'object' || options === null) throw invalidArgument('verticalFromAngle(options)', `${show(options)} is not an options object`);
   const kind = options.kind ?? 'elevation';
   if (kind !== 'elevation' && kind !== 'zenith') {
-    throw new QuadspreadError('INVALID_ARGUMENT', 'verticalFromAngle(options.kind)', `${show(kind)} is not 'elevation' or 'zenith'`);
+    throw invalidArgument('verticalFromAngle(options.kind)', `${show(kind)} is not 'elevation' or 'zenith'`);
   }
   const deg = angleToDegrees(A, angle, options.unit ?? 'deg');
   const elev = kind === 'elevation' ? deg : A.sub(A.from(90), deg); // α = 90° − z
   const ninety = A.from(90);
   if (A.cmp(A.abs(elev), ninety) > 0) {
     const range = kind === 'elevation' ? '[-90°, 90°]' : '[0°, 180°]';
-    throw new QuadspreadError('INVALID_ANGLE', 'verticalFromAngle(angle)', `${show(typeof angle === 'object' ? A.toString(deg) : angle)} is outside ${range} for a${kind === 'elevation' ? 'n elevation' : ' zenith'} angle`);
+    throw invalidAngle('verticalFromAngle(angle)', `${show(typeof angle === 'object' ? A.toString(deg) : angle)} is outside ${range} for a${kind === 'elevation' ? 'n elevation' : ' zenith'} angle`);
   }
   const s = spreadFromDegrees(A, elev);
   return { spread: s, sign: A.isZero(s) ? 0 : A.sign(elev) };
@@ -175,7 +175,7 @@ const SLOPE_TEXT = /^\s*([+-]?[\d.]+(?:[eE][+-]?\d+)?)\s*(%|‰|:|in\b)\s*([\d.]
 export function verticalFromSlope<T>(A: Arithmetic<T>, text: string): VerticalReading<T> {
   const where = 'verticalFromSlope(text)';
   if (typeof text !== 'string') throw new QuadspreadError('INVALID_SLOPE', where, `${show(text)} is not slope text`);
-  if (text.length > MAX_INPUT_LENGTH) throw new QuadspreadError('INPUT_TOO_LONG', where, `text of ${text.length} characters is longer than the limit of ${MAX_INPUT_LENGTH}`);
+  if (text.length > MAX_INPUT_LENGTH) throw inputTooLong(where, `text of ${text.length} characters is longer than the limit of ${MAX_INPUT_LENGTH}`);
   const m = SLOPE_TEXT.exec(text);
   const bad = (): never => {
     throw new QuadspreadError('INVALID_SLOPE', where, `${show(text)} is not a slope (write 5%, 12‰, 1:200 or 1 in 200)`);

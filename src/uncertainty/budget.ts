@@ -4,7 +4,7 @@
  *
  * @module uncertainty
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, notFinite, invalidCovariance } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { Uncertain } from '../arithmetic/uncertain.js';
 import type { UncertainArithmetic, UncertainInput } from '../arithmetic/uncertain.js';
@@ -125,7 +125,7 @@ export function budget<T, E extends boolean>(
   } else if (U.is(result)) {
     y = result;
   } else if (result instanceof Uncertain && typeof result.value === 'number' && result.value - result.value !== 0) {
-    throw new QuadspreadError('NOT_FINITE', where, `the result ${show(result.value)} is not finite (overflow)`);
+    throw notFinite(where, `the result ${show(result.value)} is not finite (overflow)`);
   } else {
     y = U.from(result as Numeric<Uncertain<T>>);
   }
@@ -151,11 +151,11 @@ export function budget<T, E extends boolean>(
   const seen = new Set<string>();
   const covariance = options?.covariance ?? [];
   if (!Array.isArray(covariance)) {
-    throw new QuadspreadError('INVALID_COVARIANCE', `${where}.covariance`, `${show(covariance)} is not a list of [nameA, nameB, covariance] triples`);
+    throw invalidCovariance(`${where}.covariance`, `${show(covariance)} is not a list of [nameA, nameB, covariance] triples`);
   }
   for (const triple of covariance) {
     if (!Array.isArray(triple) || triple.length !== 3) {
-      throw new QuadspreadError('INVALID_COVARIANCE', `${where}.covariance`, `${show(triple)} is not a [nameA, nameB, covariance] triple`);
+      throw invalidCovariance(`${where}.covariance`, `${show(triple)} is not a [nameA, nameB, covariance] triple`);
     }
     const [na, nb, cov] = triple;
     const a = byName.get(na);
@@ -164,20 +164,20 @@ export function budget<T, E extends boolean>(
       const missing = a === undefined ? na : nb;
       throw new QuadspreadError('UNKNOWN_INPUT', `${where}.covariance`, `the result does not depend on an input named ${show(missing)}`);
     }
-    if (na === nb) throw new QuadspreadError('INVALID_COVARIANCE', `${where}.covariance`, `${show(na)} is paired with itself (its variance is its sigma squared)`);
+    if (na === nb) throw invalidCovariance(`${where}.covariance`, `${show(na)} is paired with itself (its variance is its sigma squared)`);
     const key = na < nb ? `${na}\u0000${nb}` : `${nb}\u0000${na}`;
-    if (seen.has(key)) throw new QuadspreadError('INVALID_COVARIANCE', `${where}.covariance`, `the pair ${show(na)}, ${show(nb)} is listed twice`);
+    if (seen.has(key)) throw invalidCovariance(`${where}.covariance`, `the pair ${show(na)}, ${show(nb)} is listed twice`);
     seen.add(key);
     let v: T;
     try {
       v = B.from(cov);
     } catch {
-      throw new QuadspreadError('INVALID_COVARIANCE', `${where}.covariance`, `${show(cov)} is not a number`);
+      throw invalidCovariance(`${where}.covariance`, `${show(cov)} is not a number`);
     }
     // |u(a, b)| ≤ u(a)·u(b), i.e. |r| ≤ 1 (GUM §C.3.6): compared squared, exact in rational.
     const bound = B.mul(a.input.sigma, b.input.sigma);
     if (B.cmp(B.mul(v, v), B.mul(bound, bound)) > 0) {
-      throw new QuadspreadError('INVALID_COVARIANCE', `${where}.covariance`, `|${show(cov)}| exceeds u(${na})·u(${nb}) = ${B.toString(bound)}`);
+      throw invalidCovariance(`${where}.covariance`, `|${show(cov)}| exceeds u(${na})·u(${nb}) = ${B.toString(bound)}`);
     }
     const contribution = B.mul(B.from(2), B.mul(B.mul(a.c, b.c), v)); // 2·cᵢ·cⱼ·u(xᵢ, xⱼ): GUM eq. (13)
     variance = B.add(variance, contribution);
@@ -190,12 +190,12 @@ export function budget<T, E extends boolean>(
     for (const l of lines) scale = B.add(scale, l.contribution);
     for (const c of correlations) scale = B.add(scale, B.abs(c.contribution));
     const noise = B.exact || B.cmp(B.abs(variance), B.mul(scale, B.from('1e-12'))) > 0;
-    if (noise) throw new QuadspreadError('INVALID_COVARIANCE', where, `the covariances make the variance ${B.toString(variance)} negative (they cannot belong to real inputs)`);
+    if (noise) throw invalidCovariance(where, `the covariances make the variance ${B.toString(variance)} negative (they cannot belong to real inputs)`);
     variance = B.zero;
   }
   // float lets ±Infinity and NaN through until output: refuse them here rather than return them.
   if (typeof variance === 'number' && (variance - variance !== 0 || (y.value as number) - (y.value as number) !== 0)) {
-    throw new QuadspreadError('NOT_FINITE', where, `the result ${show(y.value)} or its variance ${show(variance)} is not finite (overflow or an infinite sensitivity)`);
+    throw notFinite(where, `the result ${show(y.value)} or its variance ${show(variance)} is not finite (overflow or an infinite sensitivity)`);
   }
   return {
     value: y.value,
@@ -221,7 +221,7 @@ function sigmaOf<T, E extends boolean>(B: Arithmetic<T, E>, variance: T): Root<T
     toNumber: {
       value: () => {
         const x = sqrtRatioToNumber(v.n, v.d);
-        if (!Number.isFinite(x)) throw new QuadspreadError('NOT_FINITE', where, `√(${B.toString(variance)}) is beyond the range of a JS number`);
+        if (!Number.isFinite(x)) throw notFinite(where, `√(${B.toString(variance)}) is beyond the range of a JS number`);
         return x;
       },
     },

@@ -4,7 +4,7 @@
  * @module uncertainty
  * @internal
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidArgument } from '../errors.js';
 import type { Numeric } from '../arithmetic/types.js';
 import type { UncertainArithmetic } from '../arithmetic/uncertain.js';
 import { bitLength, isqrt, ratioToNumber } from '../arithmetic/exact.js';
@@ -16,7 +16,7 @@ import { bitLength, isqrt, ratioToNumber } from '../arithmetic/exact.js';
 export function checkU(U: unknown, where: string): void {
   if (U === null || typeof U !== 'object' || typeof (U as { base?: unknown }).base !== 'object' || typeof (U as { make?: unknown }).make !== 'function') {
     const name = U !== null && typeof U === 'object' ? (U as { name?: unknown }).name : U;
-    throw new QuadspreadError('INVALID_ARGUMENT', where, `U = ${show(name)} is not an uncertain arithmetic (make one with uncertain(float), uncertain(decimal(n)) or uncertain(rational))`);
+    throw invalidArgument(where, `U = ${show(name)} is not an uncertain arithmetic (make one with uncertain(float), uncertain(decimal(n)) or uncertain(rational))`);
   }
 }
 
@@ -40,7 +40,7 @@ export function readSigma<T>(U: UncertainArithmetic<T>, sigma: Numeric<T>, where
 /** @internal */
 export function readName(name: unknown, where: string): string {
   if (typeof name !== 'string' || name.length === 0 || name.length > 200) {
-    throw new QuadspreadError('INVALID_ARGUMENT', where, `the name ${show(name)} is not a string of 1 to 200 characters`);
+    throw invalidArgument(where, `the name ${show(name)} is not a string of 1 to 200 characters`);
   }
   return name;
 }

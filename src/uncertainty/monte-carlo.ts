@@ -4,7 +4,7 @@
  *
  * @module uncertainty
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidArgument, invalidNumber, notFinite } from '../errors.js';
 import { randomStream } from './random.js';
 import { checkU } from './internal.js';
 import type { Numeric } from '../arithmetic/types.js';
@@ -47,16 +47,16 @@ const MAX_TRIALS = 10_000_000;
 
 function checkInput(name: string, d: InputDistribution): void {
   const where = `monteCarlo(f, inputs.${name})`;
-  if (d === null || typeof d !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(d)} is not a distribution`);
+  if (d === null || typeof d !== 'object') throw invalidArgument(where, `${show(d)} is not a distribution`);
   const fin = (x: unknown) => typeof x === 'number' && Number.isFinite(x);
   if (d.distribution === 'normal') {
-    if (!fin(d.mean)) throw new QuadspreadError('INVALID_NUMBER', where, `the mean ${show(d.mean)} is not a finite number`);
+    if (!fin(d.mean)) throw invalidNumber(where, `the mean ${show(d.mean)} is not a finite number`);
     if (!fin(d.sigma) || d.sigma < 0) throw new QuadspreadError('INVALID_SIGMA', where, `${show(d.sigma)} is not a finite number ≥ 0`);
   } else if (d.distribution === 'rectangular') {
-    if (!fin(d.low) || !fin(d.high)) throw new QuadspreadError('INVALID_NUMBER', where, `the limits ${show(d.low)}, ${show(d.high)} are not finite numbers`);
-    if (d.low > d.high) throw new QuadspreadError('INVALID_ARGUMENT', where, `low ${show(d.low)} is above high ${show(d.high)}`);
+    if (!fin(d.low) || !fin(d.high)) throw invalidNumber(where, `the limits ${show(d.low)}, ${show(d.high)} are not finite numbers`);
+    if (d.low > d.high) throw invalidArgument(where, `low ${show(d.low)} is above high ${show(d.high)}`);
   } else {
-    throw new QuadspreadError('INVALID_ARGUMENT', where, `the distribution ${show((d as { distribution?: unknown }).distribution)} is not 'normal' or 'rectangular'`);
+    throw invalidArgument(where, `the distribution ${show((d as { distribution?: unknown }).distribution)} is not 'normal' or 'rectangular'`);
   }
 }
 
@@ -92,14 +92,14 @@ export function monteCarlo<K extends string>(
   options: MonteCarloOptions,
 ): MonteCarloResult {
   const where = 'monteCarlo(f, inputs, options)';
-  if (typeof f !== 'function') throw new QuadspreadError('INVALID_ARGUMENT', where, `f ${show(f)} is not a function`);
-  if (inputs === null || typeof inputs !== 'object') throw new QuadspreadError('INVALID_ARGUMENT', where, `inputs ${show(inputs)} is not an object`);
+  if (typeof f !== 'function') throw invalidArgument(where, `f ${show(f)} is not a function`);
+  if (inputs === null || typeof inputs !== 'object') throw invalidArgument(where, `inputs ${show(inputs)} is not an object`);
   const { n, seed } = options ?? ({} as MonteCarloOptions);
   const p = options?.coverage ?? 0.95;
   if (!Number.isInteger(n) || n < 100 || n > MAX_TRIALS) {
-    throw new QuadspreadError('INVALID_ARGUMENT', `${where}.n`, `${show(n)} is not an integer in [100, ${MAX_TRIALS}]`);
+    throw invalidArgument(`${where}.n`, `${show(n)} is not an integer in [100, ${MAX_TRIALS}]`);
   }
-  if (typeof p !== 'number' || !(p > 0 && p < 1)) throw new QuadspreadError('INVALID_ARGUMENT', `${where}.coverage`, `${show(p)} is not in (0, 1)`);
+  if (typeof p !== 'number' || !(p > 0 && p < 1)) throw invalidArgument(`${where}.coverage`, `${show(p)} is not in (0, 1)`);
   const names = Object.keys(inputs) as K[];
   const dists = names.map((name) => {
     const d = inputs[name] as InputDistribution;
@@ -117,7 +117,7 @@ export function monteCarlo<K extends string>(
     }
     const v = f(x);
     if (typeof v !== 'number' || !Number.isFinite(v)) {
-      throw new QuadspreadError('NOT_FINITE', where, `f returned ${show(v)} on trial ${r + 1} (inputs ${JSON.stringify(x)})`);
+      throw notFinite(where, `f returned ${show(v)} on trial ${r + 1} (inputs ${JSON.stringify(x)})`);
     }
     y[r] = v;
   }

@@ -4,7 +4,7 @@
  *
  * @module uncertainty
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidArgument } from '../errors.js';
 
 /** A stream of pseudo-random numbers from one seed. Each call advances the stream. */
 export interface RandomStream {
@@ -51,7 +51,7 @@ export function randomStream(seed: number | bigint): RandomStream {
   const okNumber = typeof seed === 'number' && Number.isSafeInteger(seed) && seed >= 0;
   const okBig = typeof seed === 'bigint' && seed >= 0n && seed <= MASK64;
   if (!okNumber && !okBig) {
-    throw new QuadspreadError('INVALID_ARGUMENT', 'randomStream(seed)', `${show(seed)} is not an integer in [0, 2^64)`);
+    throw invalidArgument('randomStream(seed)', `${show(seed)} is not an integer in [0, 2^64)`);
   }
   let st = BigInt(seed);
   const words: number[] = [];

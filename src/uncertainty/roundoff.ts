@@ -4,7 +4,7 @@
  *
  * @module uncertainty
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidArgument } from '../errors.js';
 import type { Arithmetic } from '../arithmetic/types.js';
 import { float } from '../arithmetic/float.js';
 import { rational, type Rational } from '../arithmetic/rational.js';
@@ -58,11 +58,11 @@ function exactValue(x: number): Rational {
  */
 export function roundOff(f: <T>(A: Arithmetic<T>) => T): RoundOff {
   const where = 'roundOff(f)';
-  if (typeof f !== 'function') throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(f)} is not a function`);
+  if (typeof f !== 'function') throw invalidArgument(where, `${show(f)} is not a function`);
   const x = f(float);
-  if (!float.is(x)) throw new QuadspreadError('INVALID_ARGUMENT', where, `f(float) returned ${show(x)}, not a finite number`);
+  if (!float.is(x)) throw invalidArgument(where, `f(float) returned ${show(x)}, not a finite number`);
   const e = f(rational);
-  if (!rational.is(e)) throw new QuadspreadError('INVALID_ARGUMENT', where, `f(rational) returned ${show(e)}, not a rational`);
+  if (!rational.is(e)) throw invalidArgument(where, `f(rational) returned ${show(e)}, not a rational`);
   const xf = exactValue(x);
   const diff = rational.abs(rational.sub(xf, e));
   const absolute = rational.toNumber(diff);
