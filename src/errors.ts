@@ -147,7 +147,7 @@ export function show(x: unknown): string {
 }
 
 // Factories for the codes thrown most often (internal; not exported by the entries). One call
-// instead of `new QuadspreadError('CODE', …)` at each of some two hundred places keeps the
+// instead of `new QuadspreadError('CODE', …)` at each of some 240 places keeps the
 // minified library inside its size budget; the error is the same.
 const make = (code: ErrorCode) => (where: string, what: string): QuadspreadError => new QuadspreadError(code, where, what);
 /** @internal */ export const invalidArgument = /* @__PURE__ */ make('INVALID_ARGUMENT');
@@ -162,3 +162,13 @@ const make = (code: ErrorCode) => (where: string, what: string): QuadspreadError
 /** @internal */ export const inputTooLong = /* @__PURE__ */ make('INPUT_TOO_LONG');
 /** @internal */ export const divisionByZero = /* @__PURE__ */ make('DIVISION_BY_ZERO');
 /** @internal */ export const verticalSight = /* @__PURE__ */ make('VERTICAL_SIGHT');
+/** @internal */ export const unsupportedOperation = /* @__PURE__ */ make('UNSUPPORTED_OPERATION');
+/** @internal */ export const negativeQuadrance = /* @__PURE__ */ make('NEGATIVE_QUADRANCE');
+/** @internal */ export const degenerateLine = /* @__PURE__ */ make('DEGENERATE_LINE');
+/** @internal */ export const invalidSlope = /* @__PURE__ */ make('INVALID_SLOPE');
+
+/** `INVALID_ARGUMENT` for atan2(0, 0), which every arithmetic refuses. @internal */
+export const zeroVectorAngle = (where: string): QuadspreadError => invalidArgument(where, 'the angle of the zero vector is undefined');
+/** `INPUT_TOO_LONG` for text of `length` characters over `limit`. @internal */
+export const textTooLong = (where: string, length: number, limit: number = MAX_INPUT_LENGTH): QuadspreadError =>
+  inputTooLong(where, `text of ${length} characters is longer than the limit of ${limit}`);

@@ -5,7 +5,7 @@
  */
 import BigJs from 'big.js';
 import type { Big, BigConstructor } from 'big.js';
-import { QuadspreadError, show, invalidArgument, divisionByZero, noRealSolution, notFinite } from '../errors.js';
+import { show, invalidArgument, divisionByZero, noRealSolution, notFinite, zeroVectorAngle } from '../errors.js';
 import type { Arithmetic, Numeric } from './types.js';
 import { isqrt, ratioToPrecision, readInput } from './exact.js';
 import { decimalElementary } from './elementary.js';
@@ -165,7 +165,7 @@ export function decimal(digits = 34): DecimalArithmetic {
     sin: (x) => fromText(elementary.sin(x.toString())),
     cos: (x) => fromText(elementary.cos(x.toString())),
     atan2(y, x) {
-      if (y.c[0] === 0 && x.c[0] === 0) throw invalidArgument(`${name}.atan2(y, x)`, 'the angle of the zero vector is undefined');
+      if (y.c[0] === 0 && x.c[0] === 0) throw zeroVectorAngle(`${name}.atan2(y, x)`);
       return fromText(elementary.atan2(y.toString(), x.toString()));
     },
     // Fused kernels (src/arithmetic/fused-decimal.ts): exact with bigints, rounded once.

@@ -25,7 +25,7 @@
  *
  * @module arithmetic
  */
-import { QuadspreadError, show, invalidNumber, inputTooLong, invalidArgument, noRealSolution } from '../errors.js';
+import { QuadspreadError, show, invalidNumber, inputTooLong, invalidArgument, noRealSolution, zeroVectorAngle, textTooLong } from '../errors.js';
 import { bitLength, isqrt } from './exact.js';
 
 /** Transcendental functions working on decimal text, to a fixed number of significant digits. */
@@ -104,7 +104,7 @@ const DECIMAL = /^([+-]?)(\d+)?(?:\.(\d*))?(?:[eE]([+-]?\d+))?$/;
 
 function readArg(text: string, where: string): Arg {
   if (typeof text !== 'string') throw invalidNumber(where, `${show(text)} is not decimal text`);
-  if (text.length > MAX_TEXT) throw inputTooLong(where, `text of ${text.length} characters is longer than the limit of ${MAX_TEXT}`);
+  if (text.length > MAX_TEXT) throw textTooLong(where, text.length, MAX_TEXT);
   const m = DECIMAL.exec(text.trim());
   if (!m || (m[2] === undefined && (m[3] === undefined || m[3] === ''))) {
     throw invalidNumber(where, `${show(text)} is not decimal text`);
@@ -464,7 +464,7 @@ export function decimalElementary(digits: number): DecimalElementary {
     const where = `${name}.atan2(y, x)`;
     const y = readArg(yText, where);
     const x = readArg(xText, where);
-    if (y.n === 0n && x.n === 0n) throw invalidArgument(where, 'the angle of the zero vector is undefined');
+    if (y.n === 0n && x.n === 0n) throw zeroVectorAngle(where);
     if (y.n === 0n && x.n > 0n) return '0';
     // t = min(|y|, |x|) / max(|y|, |x|), exactly.
     const ay = abs(y.n) * x.d;

@@ -5,7 +5,7 @@
  *
  * @module arithmetic
  */
-import { MAX_INPUT_LENGTH, QuadspreadError, show, invalidNumber, inputTooLong, divisionByZero, invalidArgument } from '../errors.js';
+import { MAX_INPUT_LENGTH, show, invalidNumber, inputTooLong, divisionByZero, invalidArgument, textTooLong } from '../errors.js';
 
 /**
  * Largest decimal exponent accepted in numeric text (`1e1000` is read, `1e1001` refused),
@@ -71,7 +71,7 @@ function readDecimal(text: string, where: string, original: string, allowSign: b
  */
 export function readRatio(text: string, where: string): Ratio {
   if (text.length > MAX_INPUT_LENGTH) {
-    throw inputTooLong(where, `text of ${text.length} characters is longer than the limit of ${MAX_INPUT_LENGTH}`);
+    throw textTooLong(where, text.length);
   }
   const t = text.trim();
   const slash = t.indexOf('/');

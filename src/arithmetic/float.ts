@@ -3,7 +3,7 @@
  *
  * @module arithmetic
  */
-import { show, notFinite, invalidNumber, divisionByZero, noRealSolution, invalidArgument } from '../errors.js';
+import { show, notFinite, invalidNumber, divisionByZero, noRealSolution, zeroVectorAngle } from '../errors.js';
 import type { Arithmetic, Numeric } from './types.js';
 import { ratioToNumber, ratioToPrecision, readInput, readRatio } from './exact.js';
 
@@ -83,7 +83,7 @@ export const float: FloatArithmetic = Object.freeze<FloatArithmetic>({
   sin: (x) => Math.sin(x),
   cos: (x) => Math.cos(x),
   atan2(y, x) {
-    if (y === 0 && x === 0) throw invalidArgument('float.atan2(y, x)', 'the angle of the zero vector is undefined');
+    if (y === 0 && x === 0) throw zeroVectorAngle('float.atan2(y, x)');
     return Math.atan2(y, x);
   },
 });

@@ -5,7 +5,7 @@
  * @module arithmetic
  */
 import Fraction from 'fraction.js';
-import { show, divisionByZero, noRealSolution, notFinite, invalidArgument } from '../errors.js';
+import { show, divisionByZero, noRealSolution, notFinite, zeroVectorAngle } from '../errors.js';
 import type { Arithmetic, Numeric } from './types.js';
 import { isqrt, ratioToNumber, ratioToPrecision, readInput } from './exact.js';
 import { decimalElementary } from './elementary.js';
@@ -119,7 +119,7 @@ export const rational: RationalArithmetic = Object.freeze<RationalArithmetic>({
   sin: (x) => fromElementary(elementary.sin(toElementary(x))),
   cos: (x) => fromElementary(elementary.cos(toElementary(x))),
   atan2(y, x) {
-    if (y.n === 0n && x.n === 0n) throw invalidArgument('rational.atan2(y, x)', 'the angle of the zero vector is undefined');
+    if (y.n === 0n && x.n === 0n) throw zeroVectorAngle('rational.atan2(y, x)');
     return fromElementary(elementary.atan2(toElementary(y), toElementary(x)));
   },
   // Fused exact kernels (src/arithmetic/fused-rational.ts): same results, fewer gcds.

@@ -6,7 +6,7 @@
  *
  * @module arithmetic
  */
-import { QuadspreadError, show, invalidArgument, invalidNumber, divisionByZero, noRealSolution, notFinite } from '../errors.js';
+import { show, invalidArgument, invalidNumber, divisionByZero, noRealSolution, notFinite, zeroVectorAngle } from '../errors.js';
 import type { Arithmetic, Numeric } from './types.js';
 import { float } from './float.js';
 
@@ -185,6 +185,8 @@ export function uncertain<T, E extends boolean>(base: Arithmetic<T, E>): Uncerta
   return uncertainGeneric(base);
 }
 
+const SQRT_AT_ZERO = 'a = 0 depends on uncertain inputs: the derivative of √a there is infinite, so first-order propagation does not apply';
+
 /** ca·∇a + cb·∇b over the union of inputs; `undefined` coefficients mean 1. */
 function lin<T>(B: Arithmetic<T>, value: T, a: Uncertain<T>, ca: T | undefined, b: Uncertain<T>, cb: T | undefined): Uncertain<T> {
   const na = a.inputs.length;
@@ -272,7 +274,7 @@ function uncertainGeneric<T, E extends boolean>(B: Arithmetic<T, E>): UncertainA
       if (r === undefined) return undefined;
       if (a.inputs.length === 0) return constant(r);
       if (B.isZero(r)) {
-        throw notFinite(`${name}.sqrt(a)`, 'a = 0 depends on uncertain inputs: the derivative of √a there is infinite, so first-order propagation does not apply');
+        throw notFinite(`${name}.sqrt(a)`, SQRT_AT_ZERO);
       }
       // d√a = da/(2√a)
       return scaled(B, r, a, B.div(B.one, B.mul(two, r)));
@@ -289,7 +291,7 @@ function uncertainGeneric<T, E extends boolean>(B: Arithmetic<T, E>): UncertainA
     cos: (x) => (x.inputs.length === 0 ? constant(B.cos(x.value)) : scaled(B, B.cos(x.value), x, B.neg(B.sin(x.value)))),
     atan2(y, x) {
       if (B.isZero(y.value) && B.isZero(x.value)) {
-        throw invalidArgument(`${name}.atan2(y, x)`, 'the angle of the zero vector is undefined');
+        throw zeroVectorAngle(`${name}.atan2(y, x)`);
       }
       const v = B.atan2(y.value, x.value);
       if (y.inputs.length === 0 && x.inputs.length === 0) return constant(v);
@@ -333,27 +335,20 @@ function scaledF(value: number, a: Uncertain<number>, c: number): Uncertain<numb
   return new Uncertain(value, a.inputs, d);
 }
 
-/** The float twin of {@link uncertainGeneric}: the same rules with plain number operations. */
+/**
+ * The float twin of {@link uncertainGeneric}: the same rules with plain number operations for
+ * everything a solver does in its loops (arithmetic, comparisons, √, sin, cos); the rest
+ * (`make`, `is`, output, `pi`, `atan2`) is the generic arithmetic's own.
+ */
 function uncertainFloat(): UncertainArithmetic<number, false> {
-  const name = 'uncertain(float)';
+  const G = uncertainGeneric(float);
+  const name = G.name;
   type V = Uncertain<number>;
   const constant = (v: number) => new Uncertain(v);
-  const isU = (x: unknown): x is V => x instanceof Uncertain && float.is(x.value);
-  const fin = (v: number, where: string): number => {
-    if (v - v !== 0) throw notFinite(`${name}.${where}`, `the result ${show(v)} is not finite`);
-    return v;
-  };
   const U: UncertainArithmetic<number, false> = {
-    name,
-    exact: false,
-    base: float,
-    zero: constant(0),
-    one: constant(1),
-    make(value, gradient) {
-      return fromMap(float, float.from(value), gradient, name);
-    },
+    ...G,
     from(x: Numeric<V>): V {
-      if (isU(x)) return x;
+      if (G.is(x)) return x;
       if ((x as unknown) instanceof Uncertain) {
         const v = (x as unknown as Uncertain<unknown>).value;
         if (typeof v === 'number') throw notFinite(`${name}.from(x)`, `the value ${show(v)} is not finite (overflow)`);
@@ -361,7 +356,6 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
       }
       return constant(float.from(x as Numeric<number>));
     },
-    is: isU,
     add: (a, b) => linF(a.value + b.value, a, 1, b, 1),
     sub: (a, b) => linF(a.value - b.value, a, 1, b, -1),
     mul: (a, b) => linF(a.value * b.value, a, b.value, b, a.value),
@@ -384,26 +378,11 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
       const r = Math.sqrt(a.value);
       if (r - r !== 0) throw notFinite(`${name}.sqrt(a)`, `a = ${show(a.value)} is not finite`);
       if (a.inputs.length === 0) return constant(r);
-      if (r === 0) {
-        throw notFinite(`${name}.sqrt(a)`, 'a = 0 depends on uncertain inputs: the derivative of √a there is infinite, so first-order propagation does not apply');
-      }
+      if (r === 0) throw notFinite(`${name}.sqrt(a)`, SQRT_AT_ZERO);
       return scaledF(r, a, 1 / (2 * r));
     },
-    toNumber: (a) => fin(a.value, 'toNumber(a)'),
-    toString: (a) => float.toString(a.value),
-    toPrecision: (a, digits) => float.toPrecision(a.value, digits),
-    pi: constant(Math.PI),
     sin: (x) => (x.inputs.length === 0 ? constant(Math.sin(x.value)) : scaledF(Math.sin(x.value), x, Math.cos(x.value))),
     cos: (x) => (x.inputs.length === 0 ? constant(Math.cos(x.value)) : scaledF(Math.cos(x.value), x, -Math.sin(x.value))),
-    atan2(y, x) {
-      if (y.value === 0 && x.value === 0) {
-        throw invalidArgument(`${name}.atan2(y, x)`, 'the angle of the zero vector is undefined');
-      }
-      const v = Math.atan2(y.value, x.value);
-      if (y.inputs.length === 0 && x.inputs.length === 0) return constant(v);
-      const d = x.value * x.value + y.value * y.value;
-      return linF(v, y, x.value / d, x, -(y.value / d));
-    },
   };
   return U;
 }

@@ -4,7 +4,7 @@
  *
  * @module cogo
  */
-import { QuadspreadError, show, invalidArgument, coincidentPoints, noRealSolution } from '../errors.js';
+import { show, invalidArgument, coincidentPoints, noRealSolution, negativeQuadrance } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import type { Root } from '../geometry/surd.js';
@@ -35,7 +35,7 @@ function readCircle<T>(A: Arithmetic<T, boolean>, c: unknown, where: string): { 
     return { c: center, R: A.mul(r, r) };
   }
   const R = readNumber(A, o.quadrance!, where, '.quadrance');
-  if (A.sign(R) < 0) throw new QuadspreadError('NEGATIVE_QUADRANCE', `${where}.quadrance`, `${A.toString(R)} is negative`);
+  if (A.sign(R) < 0) throw negativeQuadrance(`${where}.quadrance`, `${A.toString(R)} is negative`);
   return { c: center, R };
 }
 

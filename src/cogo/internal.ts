@@ -4,7 +4,7 @@
  * @module cogo
  * @internal
  */
-import { QuadspreadError, show, invalidArgument, noRealSolution, inputTooLong } from '../errors.js';
+import { show, invalidArgument, noRealSolution, inputTooLong } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { surd } from '../geometry/surd.js';

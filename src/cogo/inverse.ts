@@ -4,7 +4,7 @@
  *
  * @module cogo
  */
-import { QuadspreadError, coincidentPoints, invalidArgument } from '../errors.js';
+import { coincidentPoints, invalidArgument } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { sqrtOf } from '../geometry/surd.js';

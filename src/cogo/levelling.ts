@@ -11,7 +11,7 @@ import { sqrtOf } from '../geometry/surd.js';
 import type { Root } from '../geometry/surd.js';
 import { checkLengthUnit, METRES_PER_UNIT } from '../readings/length.js';
 import type { LengthUnit } from '../readings/length.js';
-import { readNumber } from '../geometry/validate.js';
+import { readNumber, expectObject } from '../geometry/validate.js';
 import { readArray } from './internal.js';
 
 /**
@@ -217,7 +217,7 @@ function readOpt<T>(A: Arithmetic<T, boolean>, v: Numeric<T> | undefined, where:
  */
 export function levelRun<T, E extends boolean>(A: Arithmetic<T, E>, input: LevelRunInput<T>): LevelRun<T, E> {
   const where = 'levelRun(A, input)';
-  if (input === null || typeof input !== 'object') throw invalidArgument(where, `${show(input)} is not { start, sights }`);
+  expectObject(input, where, '{ start, sights }');
   const list = readArray<LevelSight<T>>(input.sights, `${where} sights`);
   if (list.length < 2) throw new QuadspreadError('TOO_FEW_POINTS', `${where} sights`, `a run needs at least 2 rows (a backsight and a foresight), got ${list.length}`);
   const unit = checkLengthUnit(input.unit ?? 'm', `${where} unit`);
@@ -232,7 +232,7 @@ export function levelRun<T, E extends boolean>(A: Arithmetic<T, E>, input: Level
   for (let i = 0; i < n; i++) {
     const r = list[i];
     const at = `${where} sights[${i}]`;
-    if (r === null || typeof r !== 'object') throw invalidArgument(at, `${show(r)} is not a sight { bs?, is?, fs? }`);
+    expectObject(r, at, 'a sight { bs?, is?, fs? }');
     bs[i] = readOpt(A, r.bs, `${at}.bs`);
     is[i] = readOpt(A, r.is, `${at}.is`);
     fs[i] = readOpt(A, r.fs, `${at}.fs`);

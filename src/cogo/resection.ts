@@ -8,7 +8,7 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { angleToDegrees } from '../readings/angle.js';
 import { sinCosDegrees } from '../readings/trig.js';
-import { readNumber } from '../geometry/validate.js';
+import { readNumber, expectObject } from '../geometry/validate.js';
 import { readArray, readPoint } from './internal.js';
 import type { PointInput } from './internal.js';
 
@@ -101,7 +101,7 @@ export interface Resection<T> {
  */
 export function resection<T>(A: Arithmetic<T, boolean>, input: ResectionInput<T>): Resection<T> {
   const where = 'resection(A, { control, angles })';
-  if (input === null || typeof input !== 'object') throw invalidArgument(where, `${show(input)} is not { control, angles }`);
+  expectObject(input, where, '{ control, angles }');
   const ctl = readArray<PointInput<T>>(input.control, `${where} control`);
   if (ctl.length !== 3) throw invalidArgument(`${where} control`, `three control points are needed, got ${ctl.length}`);
   const ang = readArray<Numeric<T>>(input.angles, `${where} angles`);

@@ -14,7 +14,7 @@ import { angleToDegrees } from '../readings/angle.js';
 import { readAzimuth } from './bearing.js';
 import { float } from '../arithmetic/float.js';
 import { traverseFloat } from './traverse-float.js';
-import { readNumber } from '../geometry/validate.js';
+import { readNumber, expectObject } from '../geometry/validate.js';
 import { readArray, readPoint, sqrtValue } from './internal.js';
 import type { PointInput } from './internal.js';
 
@@ -233,7 +233,7 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
     const c = list[i] as Record<string, Numeric<T> | undefined> | null | undefined;
     // Built only for an error message: keeps the float loop free of string work.
     const at = (): string => `${where} courses[${i}]`;
-    if (c === null || typeof c !== 'object') throw invalidArgument(at(), `${show(c)} is not a course`);
+    expectObject(c, at, 'a course');
     let la: T;
     let de: T;
     let d: T;

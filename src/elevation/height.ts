@@ -3,7 +3,7 @@
  *
  * @module elevation
  */
-import { QuadspreadError, show, verticalSight, invalidArgument, inconsistentReadings, coincidentPoints } from '../errors.js';
+import { show, verticalSight, invalidArgument, inconsistentReadings, coincidentPoints } from '../errors.js';
 import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readQuadrance } from '../geometry/validate.js';
@@ -62,11 +62,12 @@ export function heightFromReading<T>(A: Arithmetic<T>, input: { horizontal: Nume
  * ```
  */
 export function horizontalFromHeight<T>(A: Arithmetic<T>, input: { height: Numeric<T>; vertical: VerticalInput<T> }): T {
-  checkObject(input, 'horizontalFromHeight(input)');
-  const H = readQuadrance(A, input.height, 'horizontalFromHeight(input)', 'height');
+  const where = 'horizontalFromHeight(input)';
+  checkObject(input, where);
+  const H = readQuadrance(A, input.height, where, 'height');
   const R = readVertical(A, input.vertical, 'horizontalFromHeight(input.vertical)').spread;
   if (A.isZero(R)) {
-    if (A.isZero(H)) throw invalidArgument('horizontalFromHeight(input)', 'a level sight to a point in the plane fits every distance');
+    if (A.isZero(H)) throw invalidArgument(where, 'a level sight to a point in the plane fits every distance');
     throw inconsistentReadings('horizontalFromHeight(input.vertical)', `a level sight (R = 0) cannot reach a point at height quadrance ${show(A.toString(H))}`);
   }
   return A.div(A.mul(H, A.sub(A.one, R)), R); // Q = H(1 − R)/R
@@ -90,10 +91,11 @@ export function horizontalFromHeight<T>(A: Arithmetic<T>, input: { height: Numer
  * ```
  */
 export function verticalFromHeight<T>(A: Arithmetic<T>, input: { height: Numeric<T>; horizontal: Numeric<T> }): T {
-  checkObject(input, 'verticalFromHeight(input)');
-  const H = readQuadrance(A, input.height, 'verticalFromHeight(input)', 'height');
-  const Q = readQuadrance(A, input.horizontal, 'verticalFromHeight(input)', 'horizontal');
+  const where = 'verticalFromHeight(input)';
+  checkObject(input, where);
+  const H = readQuadrance(A, input.height, where, 'height');
+  const Q = readQuadrance(A, input.horizontal, where, 'horizontal');
   const sum = A.add(H, Q);
-  if (A.isZero(sum)) throw coincidentPoints('verticalFromHeight(input)', 'height and horizontal are both 0: the point is the instrument');
+  if (A.isZero(sum)) throw coincidentPoints(where, 'height and horizontal are both 0: the point is the instrument');
   return A.div(H, sum); // R = H/(H + Q)
 }

@@ -4,7 +4,7 @@
  * @module elevation
  * @internal
  */
-import { show, invalidArgument } from '../errors.js';
+import { expectObject } from '../geometry/validate.js';
 
 /**
  * Throws `INVALID_ARGUMENT` at `where` unless `x` is an object (so that a missing or wrong
@@ -12,5 +12,5 @@ import { show, invalidArgument } from '../errors.js';
  * @internal
  */
 export function checkObject(x: unknown, where: string): void {
-  if (typeof x !== 'object' || x === null) throw invalidArgument(where, `${show(x)} is not an object of named inputs`);
+  expectObject(x, where, 'an object of named inputs');
 }

@@ -4,7 +4,7 @@
  *
  * @module elevation
  */
-import { QuadspreadError, show, invalidArgument, verticalSight } from '../errors.js';
+import { QuadspreadError, show, invalidArgument, verticalSight, negativeQuadrance } from '../errors.js';
 import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { isSurd, type Root, type Surd } from '../geometry/surd.js';
@@ -86,7 +86,7 @@ function radius<T>(A: Arithmetic<T>, o: CurvatureOptions<T>, where: string): { k
 export function curvatureRefraction<T>(A: Arithmetic<T>, distance: Numeric<T>, options: CurvatureOptions<T> = {}): T {
   checkObject(options, 'curvatureRefraction(options)');
   const D = readNumber(A, distance, 'curvatureRefraction(distance)');
-  if (A.sign(D) < 0) throw new QuadspreadError('NEGATIVE_QUADRANCE', 'curvatureRefraction(distance)', `${show(typeof distance === 'object' ? A.toString(D) : distance)} is a negative distance`);
+  if (A.sign(D) < 0) throw negativeQuadrance('curvatureRefraction(distance)', `${show(typeof distance === 'object' ? A.toString(D) : distance)} is a negative distance`);
   return curvatureFromQuadrance(A, A.mul(D, D), options, 'curvatureRefraction(options)');
 }
 
@@ -158,7 +158,7 @@ export function trigHeight<T, E extends boolean>(A: Arithmetic<T, E>, sight: Tri
     throw invalidArgument(`${w}.measured`, `${show(sight.measured)} is not 'slope' or 'horizontal'`);
   }
   const D = readNumber(A, sight.distance, `${w}.distance`);
-  if (A.sign(D) < 0) throw new QuadspreadError('NEGATIVE_QUADRANCE', `${w}.distance`, `${A.toString(D)} is a negative distance`);
+  if (A.sign(D) < 0) throw negativeQuadrance(`${w}.distance`, `${A.toString(D)} is a negative distance`);
   const v = readVertical(A, sight.vertical, `${w}.vertical`);
   const s = v.spread;
   const c = A.sub(A.one, s);

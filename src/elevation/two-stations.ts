@@ -3,7 +3,7 @@
  *
  * @module elevation
  */
-import { QuadspreadError, invalidArgument, coincidentPoints, verticalSight, inconsistentReadings } from '../errors.js';
+import { invalidArgument, coincidentPoints, verticalSight, inconsistentReadings } from '../errors.js';
 import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';

@@ -4,9 +4,9 @@
  *
  * @module geodesy
  */
-import { QuadspreadError, show, invalidArgument } from '../errors.js';
+import { show, invalidArgument } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { readNumber } from '../geometry/validate.js';
+import { readNumber, expectObject } from '../geometry/validate.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { readEllipsoid, type Ellipsoid } from './ellipsoid.js';
 import { geodeticToGeocentric, type Geocentric, type GeodeticInput } from './geocentric.js';
@@ -72,7 +72,7 @@ function onCircle<T>(A: Arithmetic<T>, c: T, s: T, digits: number): { c: T; s: T
  */
 export function enuRotation<T>(A: Arithmetic<T>, origin: { readonly lat: Numeric<T>; readonly lon: Numeric<T> }): Matrix3<T> {
   const where = 'enuRotation(origin)';
-  if (origin === null || typeof origin !== 'object') throw invalidArgument(where, `${show(origin)} is not { lat, lon }`);
+  expectObject(origin, where, '{ lat, lon }');
   const digits = claimedDigits(A);
   const la = sinCosDegrees(A, readLatitude(A, origin.lat, `${where}.lat`));
   const lo = sinCosDegrees(A, readLongitude(A, origin.lon, `${where}.lon`));

@@ -4,9 +4,9 @@
  *
  * @module geodesy
  */
-import { QuadspreadError, show, invalidArgument } from '../errors.js';
+import { QuadspreadError, invalidArgument } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { readNumber } from '../geometry/validate.js';
+import { readNumber, expectObject } from '../geometry/validate.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { ellipsoidParameters, readEllipsoid, type Ellipsoid } from './ellipsoid.js';
 import { claimedDigits, delegateFor, readHeight, readLatitude, readLongitude, root, tenToMinus, toDegrees } from './internal.js';
@@ -63,7 +63,7 @@ export interface Geocentric<T> {
  */
 export function geodeticToGeocentric<T>(A: Arithmetic<T>, point: GeodeticInput<T>, ellipsoid: Ellipsoid | string): Geocentric<T> {
   const where = 'geodeticToGeocentric(point)';
-  if (point === null || typeof point !== 'object') throw invalidArgument(where, `${show(point)} is not { lat, lon, h }`);
+  expectObject(point, where, '{ lat, lon, h }');
   const E = ellipsoidParameters(A, readEllipsoid(ellipsoid, 'geodeticToGeocentric(ellipsoid)'));
   const lat = readLatitude(A, point.lat, `${where}.lat`);
   const lon = readLongitude(A, point.lon, `${where}.lon`);
@@ -123,7 +123,7 @@ const MAX_ITERATIONS = 30;
  */
 export function geocentricToGeodetic<T>(A: Arithmetic<T>, point: Geocentric<Numeric<T>> | Geocentric<T>, ellipsoid: Ellipsoid | string): Geodetic<T> {
   const where = 'geocentricToGeodetic(point)';
-  if (point === null || typeof point !== 'object') throw invalidArgument(where, `${show(point)} is not { X, Y, Z }`);
+  expectObject(point, where, '{ X, Y, Z }');
   const E = ellipsoidParameters(A, readEllipsoid(ellipsoid, 'geocentricToGeodetic(ellipsoid)'));
   const X = readNumber(A, point.X as Numeric<T>, `${where}.X`);
   const Y = readNumber(A, point.Y as Numeric<T>, `${where}.Y`);

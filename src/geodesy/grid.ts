@@ -14,7 +14,7 @@
  */
 import { QuadspreadError, show, invalidArgument } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { readNumber } from '../geometry/validate.js';
+import { readNumber, expectObject } from '../geometry/validate.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { ellipsoidParameters, readEllipsoid, type Ellipsoid, type EllipsoidParameters } from './ellipsoid.js';
 import { claimedDigits, delegateFor, readHeight, readLatitude, readLongitude, root, tenToMinus, toDegrees } from './internal.js';
@@ -311,8 +311,8 @@ function tm<T>(
   originXi?: T,
 ): GridPoint<T> & { xi0: T } {
   const where = wantGrid ? 'transverseMercator' : 'transverseMercatorFactors';
-  if (point === null || typeof point !== 'object') throw invalidArgument(`${where}(point)`, `${show(point)} is not { lat, lon }`);
-  if (projection === null || typeof projection !== 'object') throw invalidArgument(`${where}(projection)`, `${show(projection)} is not { lon0, k0, ellipsoid }`);
+  expectObject(point, `${where}(point)`, '{ lat, lon }');
+  expectObject(projection, `${where}(projection)`, '{ lon0, k0, ellipsoid }');
   const ell = readEllipsoid(projection.ellipsoid, `${where}(projection.ellipsoid)`);
   const E = ellipsoidParameters(A, ell);
   const k0 = readNumber(A, projection.k0 ?? 1, `${where}(projection.k0)`);
@@ -452,8 +452,8 @@ export function transverseMercatorInverse<T>(
   projection: TransverseMercatorGrid,
 ): { lat: T; lon: T; k: T; convergence: T } {
   const where = 'transverseMercatorInverse';
-  if (point === null || typeof point !== 'object') throw invalidArgument(`${where}(point)`, `${show(point)} is not { E, N }`);
-  if (projection === null || typeof projection !== 'object') throw invalidArgument(`${where}(projection)`, `${show(projection)} is not { lon0, k0, ellipsoid }`);
+  expectObject(point, `${where}(point)`, '{ E, N }');
+  expectObject(projection, `${where}(projection)`, '{ lon0, k0, ellipsoid }');
   const ell = readEllipsoid(projection.ellipsoid, `${where}(projection.ellipsoid)`);
   const Et = readNumber(A, point.E, `${where}(point.E)`);
   const Nt = readNumber(A, point.N, `${where}(point.N)`);

@@ -4,7 +4,7 @@
  * @module geometry
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { QuadspreadError, show, coincidentPoints } from '../errors.js';
+import { show, coincidentPoints, degenerateLine } from '../errors.js';
 import type { Point } from './point.js';
 import { atMostOne, readNumber } from './validate.js';
 
@@ -50,7 +50,7 @@ export function line<T>(A: Arithmetic<T>, a: Numeric<T>, b: Numeric<T>, c: Numer
   const w = 'line(A, a, b, c)';
   const l = { a: readNumber(A, a, w, ' a'), b: readNumber(A, b, w, ' b'), c: readNumber(A, c, w, ' c') };
   if (A.isZero(l.a) && A.isZero(l.b)) {
-    throw new QuadspreadError('DEGENERATE_LINE', w, `a and b are both zero (c = ${show(A.toString(l.c))}), which is no line`);
+    throw degenerateLine(w, `a and b are both zero (c = ${show(A.toString(l.c))}), which is no line`);
   }
   return l;
 }
@@ -161,7 +161,7 @@ export function isPerpendicular<T>(A: Arithmetic<T>, l1: Line<T>, l2: Line<T>): 
  */
 export function footOfPerpendicular<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>): Point<T> {
   const n = A.add(A.mul(l.a, l.a), A.mul(l.b, l.b));
-  if (A.isZero(n)) throw new QuadspreadError('DEGENERATE_LINE', 'footOfPerpendicular(A, P, l)', 'l has a = b = 0, which is no line');
+  if (A.isZero(n)) throw degenerateLine('footOfPerpendicular(A, P, l)', 'l has a = b = 0, which is no line');
   // Orthogonal projection onto a·x + b·y + c = 0 (common practice; derived from the normal vector (a, b)).
   const k = A.div(A.add(A.add(A.mul(l.a, P.x), A.mul(l.b, P.y)), l.c), n);
   return { x: A.sub(P.x, A.mul(k, l.a)), y: A.sub(P.y, A.mul(k, l.b)) };
@@ -185,7 +185,7 @@ export function footOfPerpendicular<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>
  */
 export function quadranceToLine<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>): T {
   const n = A.add(A.mul(l.a, l.a), A.mul(l.b, l.b));
-  if (A.isZero(n)) throw new QuadspreadError('DEGENERATE_LINE', 'quadranceToLine(A, P, l)', 'l has a = b = 0, which is no line');
+  if (A.isZero(n)) throw degenerateLine('quadranceToLine(A, P, l)', 'l has a = b = 0, which is no line');
   // Point-to-line distance |a·x + b·y + c|/√(a² + b²), squared (common practice; derived).
   const v = A.add(A.add(A.mul(l.a, P.x), A.mul(l.b, P.y)), l.c);
   return A.div(A.mul(v, v), n);
@@ -210,8 +210,8 @@ export function quadranceToLine<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>): T
 export function spreadOfLines<T>(A: Arithmetic<T>, l1: Line<T>, l2: Line<T>): T {
   const n1 = A.add(A.mul(l1.a, l1.a), A.mul(l1.b, l1.b));
   const n2 = A.add(A.mul(l2.a, l2.a), A.mul(l2.b, l2.b));
-  if (A.isZero(n1)) throw new QuadspreadError('DEGENERATE_LINE', 'spreadOfLines(A, l1, l2)', 'l1 has a = b = 0, which is no line');
-  if (A.isZero(n2)) throw new QuadspreadError('DEGENERATE_LINE', 'spreadOfLines(A, l1, l2)', 'l2 has a = b = 0, which is no line');
+  if (A.isZero(n1)) throw degenerateLine('spreadOfLines(A, l1, l2)', 'l1 has a = b = 0, which is no line');
+  if (A.isZero(n2)) throw degenerateLine('spreadOfLines(A, l1, l2)', 'l2 has a = b = 0, which is no line');
   // Spread of two lines: sin² of the angle between their normals (a1, b1), (a2, b2) (derived, as for two vectors).
   const c = A.sub(A.mul(l1.a, l2.b), A.mul(l2.a, l1.b));
   return atMostOne(A, A.div(A.mul(c, c), A.mul(n1, n2)));

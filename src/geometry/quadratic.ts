@@ -4,7 +4,7 @@
  * @module geometry
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { QuadspreadError, show, invalidArgument } from '../errors.js';
+import { show, invalidArgument, unsupportedOperation } from '../errors.js';
 import { type Root, type Surd, surd } from './surd.js';
 import { readNumber } from './validate.js';
 
@@ -61,7 +61,7 @@ export function solveQuadratic<T, E extends boolean>(A: Arithmetic<T, E>, a: Num
   }
   if (sd === 0) return [A.div(A.neg(qb), A.mul(two, qa)) as Root<T, E>];
   const r = A.sqrt(disc);
-  if (r === undefined) throw new QuadspreadError('UNSUPPORTED_OPERATION', 'solveQuadratic(A, a, b, c)', `${A.name} has no square root of ${show(A.toString(disc))}`);
+  if (r === undefined) throw unsupportedOperation('solveQuadratic(A, a, b, c)', `${A.name} has no square root of ${show(A.toString(disc))}`);
   const q = A.div(A.neg(A.sign(qb) < 0 ? A.sub(qb, r) : A.add(qb, r)), two);
   const x1 = A.div(q, qa);
   const x2 = A.div(qc, q);

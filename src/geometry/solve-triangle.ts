@@ -4,7 +4,7 @@
  * @module geometry
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { QuadspreadError, show, invalidArgument } from '../errors.js';
+import { QuadspreadError, show, invalidArgument, unsupportedOperation } from '../errors.js';
 import { type Root, type Surd, surd } from './surd.js';
 import type { Triangle } from './triangle.js';
 import { atMostOne, readQuadrance, readSpread } from './validate.js';
@@ -63,7 +63,7 @@ function valueField<T>(A: Arithmetic<T>): Field<T, T> {
     unit: (x) => atMostOne(A, x),
     pair(base, d, prod) {
       const r = A.sqrt(d);
-      if (r === undefined) throw new QuadspreadError('UNSUPPORTED_OPERATION', 'solveTriangle(A, known)', `${A.name} has no square root of ${show(A.toString(d))}`);
+      if (r === undefined) throw unsupportedOperation('solveTriangle(A, known)', `${A.name} has no square root of ${show(A.toString(d))}`);
       const r2 = A.add(r, r);
       if (A.sign(base) >= 0) {
         const hi = A.add(base, r2);

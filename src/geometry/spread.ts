@@ -4,7 +4,7 @@
  * @module geometry
  */
 import type { Arithmetic } from '../arithmetic/types.js';
-import { QuadspreadError, show, coincidentPoints } from '../errors.js';
+import { show, coincidentPoints } from '../errors.js';
 import type { Point } from './point.js';
 import { atMostOne } from './validate.js';
 

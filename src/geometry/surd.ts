@@ -6,7 +6,7 @@
 import Fraction from 'fraction.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { isqrt } from '../arithmetic/exact.js';
-import { QuadspreadError, show, divisionByZero, notFinite, invalidArgument, noRealSolution } from '../errors.js';
+import { QuadspreadError, show, divisionByZero, notFinite, invalidArgument, noRealSolution, unsupportedOperation } from '../errors.js';
 import { readNumber } from './validate.js';
 
 /**
@@ -283,7 +283,7 @@ class SurdValue<T> implements Surd<T> {
     const d = this.d;
     if (!A.exact) {
       const r = A.sqrt(d);
-      if (r === undefined) throw new QuadspreadError('UNSUPPORTED_OPERATION', 'Surd.toPrecision(digits)', `${A.name} has no square root of ${A.toString(d)}`);
+      if (r === undefined) throw unsupportedOperation('Surd.toPrecision(digits)', `${A.name} has no square root of ${A.toString(d)}`);
       return A.toPrecision(A.add(this.a, A.mul(this.b, r)), digits);
     }
     // Newton's iteration from above brackets √d: hi ≥ √d ≥ d/hi (AM–GM), the gap shrinking
@@ -426,7 +426,7 @@ export function sqrtOf<T, E extends boolean>(A: Arithmetic<T, E>, x: Numeric<T>)
   if (A.sign(v) < 0) throw noRealSolution('sqrtOf(A, x)', `x = ${show(A.toString(v))} is negative`);
   if (A.exact) return surd(A, 0, 1, v) as Root<T, E>;
   const r = A.sqrt(v);
-  if (r === undefined) throw new QuadspreadError('UNSUPPORTED_OPERATION', 'sqrtOf(A, x)', `${A.name} has no square root of ${show(A.toString(v))}`);
+  if (r === undefined) throw unsupportedOperation('sqrtOf(A, x)', `${A.name} has no square root of ${show(A.toString(v))}`);
   return r as Root<T, E>;
 }
 

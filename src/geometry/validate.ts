@@ -5,7 +5,7 @@
  * @module geometry
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, invalidArgument, negativeQuadrance } from '../errors.js';
 
 /**
  * Reads a value with `A.from`; an error it raises is raised again naming `where` (the
@@ -25,13 +25,24 @@ export function readNumber<T>(A: Arithmetic<T>, x: Numeric<T>, where: string | (
 }
 
 /**
+ * Throws `INVALID_ARGUMENT` at `where` unless `x` is an object (not null), so that a missing or
+ * wrong input gives a typed error rather than a TypeError from reading its fields. `shape`
+ * says what was expected, e.g. `{ lat, lon }`; `where` may be a function, called only on error.
+ * @throws {QuadspreadError} `INVALID_ARGUMENT`: "… is not {shape}".
+ * @internal
+ */
+export function expectObject(x: unknown, where: string | (() => string), shape: string): asserts x is object {
+  if (x === null || typeof x !== 'object') throw invalidArgument(typeof where === 'string' ? where : where(), `${show(x)} is not ${shape}`);
+}
+
+/**
  * Reads a quadrance with `A.from` and checks that it is ≥ 0.
  * @throws {QuadspreadError} `NEGATIVE_QUADRANCE`; `INVALID_NUMBER` naming the argument.
  * @internal
  */
 export function readQuadrance<T>(A: Arithmetic<T>, x: Numeric<T>, where: string, arg: string): T {
   const v = readNumber(A, x, where, ` ${arg}`);
-  if (A.sign(v) < 0) throw new QuadspreadError('NEGATIVE_QUADRANCE', where, `${arg} = ${show(A.toString(v))} is negative; a quadrance is a squared distance`);
+  if (A.sign(v) < 0) throw negativeQuadrance(where, `${arg} = ${show(A.toString(v))} is negative; a quadrance is a squared distance`);
   return v;
 }
 

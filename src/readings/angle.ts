@@ -4,7 +4,7 @@
  *
  * @module readings
  */
-import { MAX_INPUT_LENGTH, QuadspreadError, show, invalidAngle, inputTooLong } from '../errors.js';
+import { MAX_INPUT_LENGTH, QuadspreadError, show, invalidAngle, textTooLong } from '../errors.js';
 import { readNumber } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { guardOf, viaGuard } from './numeric.js';
@@ -150,7 +150,7 @@ export function readAngle<T>(A: Arithmetic<T>, reading: Numeric<T>, unit: AngleU
   const u = checkAngleUnit(unit, 'angleToDegrees(unit)');
   if (typeof reading === 'string' && !PLAIN_NUMBER.test(reading)) {
     if (reading.length > MAX_INPUT_LENGTH) {
-      throw inputTooLong(where, `text of ${reading.length} characters is longer than the limit of ${MAX_INPUT_LENGTH}`);
+      throw textTooLong(where, reading.length);
     }
     if (u !== 'deg') throw invalidAngle(where, `${show(reading)} is DMS text, which is in degrees, but the unit is '${u}'`);
     const dms = parseDms(reading, where);

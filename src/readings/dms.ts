@@ -3,7 +3,7 @@
  *
  * @module readings
  */
-import { QuadspreadError, show, invalidArgument } from '../errors.js';
+import { show, invalidArgument } from '../errors.js';
 import { readNumber } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 

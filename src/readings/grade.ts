@@ -3,7 +3,7 @@
  *
  * @module readings
  */
-import { QuadspreadError, verticalSight } from '../errors.js';
+import { verticalSight } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { sqrtOf, surd, type Root } from '../geometry/surd.js';
 import { checkSpread } from './spread.js';

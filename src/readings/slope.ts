@@ -5,7 +5,7 @@
  *
  * @module readings
  */
-import { QuadspreadError, show, verticalSight } from '../errors.js';
+import { show, verticalSight, invalidSlope } from '../errors.js';
 import { readNumber } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { checkSpread } from './spread.js';
@@ -35,7 +35,7 @@ export function spreadFromRatio<T>(A: Arithmetic<T>, rise: Numeric<T>, run: Nume
   const r = readNumber(A, rise, 'spreadFromRatio(rise)');
   const d = readNumber(A, run, 'spreadFromRatio(run)');
   if (A.isZero(r) && A.isZero(d)) {
-    throw new QuadspreadError('INVALID_SLOPE', 'spreadFromRatio(rise, run)', 'rise and run are both zero: the slope has no direction');
+    throw invalidSlope('spreadFromRatio(rise, run)', 'rise and run are both zero: the slope has no direction');
   }
   if (!A.exact && outOfSquareRange(A.toNumber(r), A.toNumber(d))) {
     // Squares of such values overflow or underflow a double: divide by the larger part first.
@@ -109,7 +109,7 @@ export function spreadFromPerMille<T>(A: Arithmetic<T>, perMille: Numeric<T>): T
  */
 export function spreadFromOneIn<T>(A: Arithmetic<T>, n: Numeric<T>): T {
   const v = readNumber(A, n, 'spreadFromOneIn(n)');
-  if (A.isZero(v)) throw new QuadspreadError('INVALID_SLOPE', 'spreadFromOneIn(n)', `"1 in ${shown(A, n, v)}" is not a slope`);
+  if (A.isZero(v)) throw invalidSlope('spreadFromOneIn(n)', `"1 in ${shown(A, n, v)}" is not a slope`);
   return spreadFromRatio(A, 1, v);
 }
 

@@ -3,7 +3,7 @@
  *
  * @module readings
  */
-import { QuadspreadError, show, invalidAngle } from '../errors.js';
+import { show, invalidAngle } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { guardOf } from './numeric.js';
 

@@ -4,7 +4,7 @@
  *
  * @module readings
  */
-import { MAX_INPUT_LENGTH, QuadspreadError, show, invalidArgument, invalidAngle, inputTooLong } from '../errors.js';
+import { MAX_INPUT_LENGTH, show, invalidArgument, invalidAngle, invalidSlope, textTooLong } from '../errors.js';
 import { readNumber } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { angleToDegrees, type AngleUnit } from './angle.js';
@@ -174,11 +174,11 @@ const SLOPE_TEXT = /^\s*([+-]?[\d.]+(?:[eE][+-]?\d+)?)\s*(%|‰|:|in\b)\s*([\d.]
  */
 export function verticalFromSlope<T>(A: Arithmetic<T>, text: string): VerticalReading<T> {
   const where = 'verticalFromSlope(text)';
-  if (typeof text !== 'string') throw new QuadspreadError('INVALID_SLOPE', where, `${show(text)} is not slope text`);
-  if (text.length > MAX_INPUT_LENGTH) throw inputTooLong(where, `text of ${text.length} characters is longer than the limit of ${MAX_INPUT_LENGTH}`);
+  if (typeof text !== 'string') throw invalidSlope(where, `${show(text)} is not slope text`);
+  if (text.length > MAX_INPUT_LENGTH) throw textTooLong(where, text.length);
   const m = SLOPE_TEXT.exec(text);
   const bad = (): never => {
-    throw new QuadspreadError('INVALID_SLOPE', where, `${show(text)} is not a slope (write 5%, 12‰, 1:200 or 1 in 200)`);
+    throw invalidSlope(where, `${show(text)} is not a slope (write 5%, 12‰, 1:200 or 1 in 200)`);
   };
   if (!m) return bad();
   const mark = m[2]!.toLowerCase();
@@ -196,7 +196,7 @@ export function verticalFromSlope<T>(A: Arithmetic<T>, text: string): VerticalRe
   }
   if (m[3] === '') bad();
   const second = read(m[3]!);
-  if (A.isZero(second)) throw new QuadspreadError('INVALID_SLOPE', where, `${show(text)} has a zero run`);
+  if (A.isZero(second)) throw invalidSlope(where, `${show(text)} has a zero run`);
   return verticalFromRatio(A, first, second);
 }
 

@@ -4,7 +4,7 @@
  *
  * @module uncertainty
  */
-import { QuadspreadError, show, notFinite, invalidCovariance } from '../errors.js';
+import { QuadspreadError, show, notFinite, invalidCovariance, unsupportedOperation } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { Uncertain } from '../arithmetic/uncertain.js';
 import type { UncertainArithmetic, UncertainInput } from '../arithmetic/uncertain.js';
@@ -119,7 +119,7 @@ export function budget<T, E extends boolean>(
   if (isSurd(result)) {
     const r = result as Surd<Uncertain<T>>;
     if (!r.isRational()) {
-      throw new QuadspreadError('UNSUPPORTED_OPERATION', where, `the result ${r.toString()} is an irrational surd, whose sensitivities are irrational too: take its budget in uncertain(decimal(n)) or uncertain(float)`);
+      throw unsupportedOperation(where, `the result ${r.toString()} is an irrational surd, whose sensitivities are irrational too: take its budget in uncertain(decimal(n)) or uncertain(float)`);
     }
     y = U.from(r.a);
   } else if (U.is(result)) {

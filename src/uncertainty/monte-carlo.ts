@@ -5,6 +5,7 @@
  * @module uncertainty
  */
 import { QuadspreadError, show, invalidArgument, invalidNumber, notFinite } from '../errors.js';
+import { expectObject } from '../geometry/validate.js';
 import { randomStream } from './random.js';
 import { checkU } from './internal.js';
 import type { Numeric } from '../arithmetic/types.js';
@@ -47,7 +48,7 @@ const MAX_TRIALS = 10_000_000;
 
 function checkInput(name: string, d: InputDistribution): void {
   const where = `monteCarlo(f, inputs.${name})`;
-  if (d === null || typeof d !== 'object') throw invalidArgument(where, `${show(d)} is not a distribution`);
+  expectObject(d, where, 'a distribution');
   const fin = (x: unknown) => typeof x === 'number' && Number.isFinite(x);
   if (d.distribution === 'normal') {
     if (!fin(d.mean)) throw invalidNumber(where, `the mean ${show(d.mean)} is not a finite number`);

@@ -4,7 +4,7 @@
  *
  * @module uncertainty
  */
-import { QuadspreadError, show, invalidArgument } from '../errors.js';
+import { show, invalidArgument } from '../errors.js';
 
 /** A stream of pseudo-random numbers from one seed. Each call advances the stream. */
 export interface RandomStream {

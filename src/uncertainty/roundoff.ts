@@ -4,7 +4,7 @@
  *
  * @module uncertainty
  */
-import { QuadspreadError, show, invalidArgument } from '../errors.js';
+import { show, invalidArgument } from '../errors.js';
 import type { Arithmetic } from '../arithmetic/types.js';
 import { float } from '../arithmetic/float.js';
 import { rational, type Rational } from '../arithmetic/rational.js';
