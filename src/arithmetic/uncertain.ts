@@ -51,7 +51,7 @@ export class Uncertain<T> {
   /** The value y in the base arithmetic. */
   readonly value: T;
   /** @internal the inputs, in the order first met; shared between values, never mutated */
-  readonly inputs: Keys<T>;
+  readonly inputs: readonly UncertainInput<T>[];
   /** @internal ∂y/∂inputs[i] */
   readonly derivatives: readonly T[];
   #map: Gradient<T> | undefined;
@@ -61,7 +61,7 @@ export class Uncertain<T> {
    * @param inputs the inputs it depends on (not copied: never mutate it afterwards)
    * @param derivatives ∂value/∂inputs[i], same length (not copied)
    */
-  constructor(value: T, inputs: Keys<T> = NO_KEYS as Keys<T>, derivatives: readonly T[] = NO_DERIVS as readonly T[]) {
+  constructor(value: T, inputs: readonly UncertainInput<T>[] = NO_KEYS as Keys<T>, derivatives: readonly T[] = NO_DERIVS as readonly T[]) {
     this.value = value;
     this.inputs = inputs;
     this.derivatives = derivatives;

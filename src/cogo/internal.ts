@@ -12,11 +12,8 @@ import { approxSqrt } from '../readings/numeric.js';
 import { readNumber } from '../geometry/validate.js';
 import type { Root } from '../geometry/surd.js';
 
-/** A point as cogo reads it: x = east, y = north, each a value or numeric input. @internal */
-export interface PointInput<T> {
-  readonly x: Numeric<T>;
-  readonly y: Numeric<T>;
-}
+import type { PointInput } from '../geometry/point.js';
+export type { PointInput };
 
 /** Reads a point `{ x, y }` (x = east, y = north) into the arithmetic. @internal */
 export function readPoint<T>(A: Arithmetic<T, boolean>, p: unknown, where: string): Point<T> {

@@ -26,6 +26,26 @@ export interface Point<T> {
 }
 
 /**
+ * A point as the coordinate and elevation solvers read it: `x` east and `y` north, each a
+ * value of the arithmetic or anything its `from` reads (a number, numeric text, a bigint).
+ * A {@link Point} made by {@link point} is one.
+ *
+ * @example
+ * ```ts
+ * import { rational, area, type PointInput } from 'quadspread';
+ * const lot: PointInput<ReturnType<typeof rational.from>>[] = [{ x: 0, y: 0 }, { x: '4', y: 0 }, { x: 4, y: '3/2' }];
+ * rational.toString(area(rational, lot));
+ * //=> '3'
+ * ```
+ */
+export interface PointInput<T> {
+  /** East coordinate. */
+  readonly x: Numeric<T>;
+  /** North coordinate. */
+  readonly y: Numeric<T>;
+}
+
+/**
  * Makes a point `{ x, y }` (x = east, y = north), reading each coordinate with `A.from`.
  * The same shape serves as a vector.
  *
