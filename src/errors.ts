@@ -67,7 +67,7 @@ export const ERROR_CODES = {
 /** A stable error code: one of the keys of {@link ERROR_CODES}. */
 export type ErrorCode = keyof typeof ERROR_CODES;
 
-const BRAND: unique symbol = Symbol.for('quadspread.error') as never;
+const BRAND: unique symbol = /* @__PURE__ */ Symbol.for('quadspread.error') as never;
 
 /**
  * The one error class of quadspread. Every bad input, impossible configuration and

@@ -31,7 +31,7 @@ function finite(v: number, where: string): number {
  * //=> 0.30000000000000004
  * ```
  */
-export const float: FloatArithmetic = Object.freeze<FloatArithmetic>({
+export const float: FloatArithmetic = /* @__PURE__ */ Object.freeze<FloatArithmetic>({
   name: 'float',
   exact: false,
   zero: 0,

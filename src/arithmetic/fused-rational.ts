@@ -281,4 +281,4 @@ function traverse(input: unknown): FusedTraverse<Fraction> | undefined {
 }
 
 /** The fused kernels of the rational arithmetic. @internal */
-export const rationalKernels: FusedKernels<Fraction> = Object.freeze({ triangle, inlineHeight, traverse });
+export const rationalKernels: FusedKernels<Fraction> = /* @__PURE__ */ Object.freeze({ triangle, inlineHeight, traverse });

@@ -33,8 +33,8 @@ export type RationalArithmetic = Arithmetic<Rational, true>;
  */
 export const RATIONAL_TRANSCENDENTAL_DIGITS = 42;
 
-const ZERO = new Fraction(0);
-const ONE = new Fraction(1);
+const ZERO = /* @__PURE__ */ new Fraction(0);
+const ONE = /* @__PURE__ */ new Fraction(1);
 
 function frac(n: bigint, d: bigint): Rational {
   return new Fraction(n, d);
@@ -44,7 +44,7 @@ function signed(a: Rational): bigint {
   return a.s * a.n;
 }
 
-const elementary = decimalElementary(RATIONAL_TRANSCENDENTAL_DIGITS);
+const elementary = /* @__PURE__ */ decimalElementary(RATIONAL_TRANSCENDENTAL_DIGITS);
 
 function fromElementary(text: string): Rational {
   const r = readInput(text, 'rational (transcendental)');
@@ -68,7 +68,7 @@ function toElementary(a: Rational): string {
  * //=> '3/10'
  * ```
  */
-export const rational: RationalArithmetic = Object.freeze<RationalArithmetic>({
+export const rational: RationalArithmetic = /* @__PURE__ */ Object.freeze<RationalArithmetic>({
   name: 'rational',
   exact: true,
   zero: ZERO,

@@ -28,8 +28,8 @@ export interface UncertainInput<T> {
 export type Gradient<T> = ReadonlyMap<UncertainInput<T>, T>;
 
 type Keys<T> = readonly UncertainInput<T>[];
-const NO_KEYS: Keys<never> = Object.freeze([]);
-const NO_DERIVS: readonly never[] = Object.freeze([]);
+const NO_KEYS: Keys<never> = /* @__PURE__ */ Object.freeze([]);
+const NO_DERIVS: readonly never[] = /* @__PURE__ */ Object.freeze([]);
 
 /**
  * A value of an {@link uncertain} arithmetic: a value in the base arithmetic and its

@@ -35,7 +35,7 @@ export interface Ellipsoid {
  * //=> ['6378137', '1/298.257223563']
  * ```
  */
-export const WGS84: Ellipsoid = Object.freeze({
+export const WGS84: Ellipsoid = /* @__PURE__ */ Object.freeze({
   name: 'WGS84',
   a: '6378137',
   f: '1/298.257223563',
@@ -53,7 +53,7 @@ export const WGS84: Ellipsoid = Object.freeze({
  * //=> '1/298.257222101'
  * ```
  */
-export const GRS80: Ellipsoid = Object.freeze({
+export const GRS80: Ellipsoid = /* @__PURE__ */ Object.freeze({
   name: 'GRS80',
   a: '6378137',
   f: '1/298.257222101',
@@ -63,7 +63,7 @@ export const GRS80: Ellipsoid = Object.freeze({
 const KNOWN: Readonly<Record<string, Ellipsoid>> = { WGS84, GRS80 };
 
 /** Ellipsoids known to be valid: the built-in ones and those made by {@link defineEllipsoid} (frozen). */
-const CHECKED = new WeakSet<Ellipsoid>([WGS84, GRS80]);
+const CHECKED = /* @__PURE__ */ new WeakSet<Ellipsoid>([WGS84, GRS80]);
 
 /** What {@link defineEllipsoid} accepts: a and exactly one of f, 1/f or b. */
 export interface EllipsoidDefinition {

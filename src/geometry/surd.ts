@@ -109,10 +109,14 @@ export interface Surd<T> {
  */
 export type Root<T, E extends boolean> = E extends true ? Surd<T> : T;
 
-const BRAND: unique symbol = Symbol.for('quadspread.surd') as never;
+const BRAND: unique symbol = /* @__PURE__ */ Symbol.for('quadspread.surd') as never;
+const INSPECT = /* @__PURE__ */ Symbol.for('nodejs.util.inspect.custom');
+function inspectSurd(this: Surd<unknown>): string {
+  return `Surd(${this.toString()})`;
+}
 
 // Primes below 1000, for pulling square factors out of radicands (sieve of Eratosthenes).
-const SMALL_PRIMES: readonly bigint[] = (() => {
+const SMALL_PRIMES: readonly bigint[] = /* @__PURE__ */ (() => {
   const out: bigint[] = [];
   const composite = new Uint8Array(1000);
   for (let i = 2; i < 1000; i++) {
@@ -134,6 +138,9 @@ class SurdValue<T> implements Surd<T> {
     this.b = b;
     this.d = d;
     Object.defineProperty(this, BRAND, { value: true });
+    // Node's console shows `Surd(41 + 20√2)` rather than the fields and the arithmetic. Set
+    // here, not as a computed method, so that a bundler can drop the class when it is unused.
+    Object.defineProperty(this, INSPECT, { value: inspectSurd });
   }
 
   isRational(): boolean {
@@ -316,10 +323,6 @@ class SurdValue<T> implements Surd<T> {
     return this.toString();
   }
 
-  /** Node's console shows `Surd(41 + 20√2)` rather than the fields and the arithmetic. */
-  [Symbol.for('nodejs.util.inspect.custom')](): string {
-    return `Surd(${this.toString()})`;
-  }
 }
 
 function signOf<T>(A: Arithmetic<T>, a: T, b: T, d: T): -1 | 0 | 1 {
