@@ -13,13 +13,12 @@ import type { FusedKernels, FusedTraverse, FusedTriangle } from './types.js';
 import { readInput } from './exact.js';
 import { readFusedTraverse } from './fused-input.js';
 
-const PROTO = Fraction.prototype;
 const SAFE = 9007199254740991n; // 2^53 − 1: below it a gcd runs in doubles
 
 /** A fraction already in lowest terms, n ≥ 0, d > 0: built without fraction.js's gcd. */
 function reduced(n: bigint, d: bigint): Fraction {
   // The same shape fraction.js's own internal constructor makes (prototype, then s, n, d).
-  const f = Object.create(PROTO) as Fraction;
+  const f = Object.create(Fraction.prototype) as Fraction;
   f.s = 1n;
   f.n = n;
   f.d = d;
