@@ -219,8 +219,9 @@ function render(entry, { bound, values, typesOnly }) {
   L.push(` * ${entry.module} — the bound entry: every function of the generic entry \`quadspread\``);
   L.push(` * with ${entry.said} fixed, so the arithmetic argument is dropped.`);
   L.push(` * Inputs may be ${entry.inputs}; results are values of {@link arithmetic}. The geometry`);
-  L.push(' * primitives that take points or lines (`quadrance`, `spread`, `cross`, `triangle`, the line');
-  L.push(' * functions) take values made by `point` and `line`/`lineThrough`, as the arithmetic\'s own');
+  L.push(' * primitives that take points, vectors or lines (`quadrance`, `vectorQuadrance`, `spread`,');
+  L.push(' * `cross`, `spreadOfVectors`, `triangle`, the line functions) take values made by `point` and');
+  L.push(' * `line`/`lineThrough`, as the arithmetic\'s own');
   L.push(' * operations take its values; the solvers read plain `{ x, y }` of numbers or text.');
   L.push(' * Everything else (constants, classes, types, the other arithmetics) is re-exported unchanged.');
   L.push(' *');

@@ -4,8 +4,9 @@
  * quadspread/rational — the bound entry: every function of the generic entry `quadspread`
  * with the exact `rational` arithmetic fixed, so the arithmetic argument is dropped.
  * Inputs may be numbers, numeric text (`'1/3'`, `'0.1'`) or rationals; results are values of {@link arithmetic}. The geometry
- * primitives that take points or lines (`quadrance`, `spread`, `cross`, `triangle`, the line
- * functions) take values made by `point` and `line`/`lineThrough`, as the arithmetic's own
+ * primitives that take points, vectors or lines (`quadrance`, `vectorQuadrance`, `spread`,
+ * `cross`, `spreadOfVectors`, `triangle`, the line functions) take values made by `point` and
+ * `line`/`lineThrough`, as the arithmetic's own
  * operations take its values; the solvers read plain `{ x, y }` of numbers or text.
  * Everything else (constants, classes, types, the other arithmetics) is re-exported unchanged.
  *

@@ -22,9 +22,9 @@ function finite(v: number, where: string): number {
  * negative argument, and both refuse a result that is not finite (`NOT_FINITE`), so an
  * overflow met in `add`, `sub` or `mul` — left unchecked for speed, and possible only with
  * magnitudes near 1e308 — is caught at the next division, root or conversion; a function
- * whose result is a bare sum or product (`quadrance`, `area`) returns ±Infinity for
- * coordinates beyond about 1e154. Text is read correctly rounded (`'1/3'` gives the double
- * nearest to 1/3).
+ * whose result is a bare sum, difference or product (`quadrance`, `lineThrough`, the law
+ * residuals) returns ±Infinity or NaN for values beyond about 1e154 (see the guide "Choosing
+ * an arithmetic"). Text is read correctly rounded (`'1/3'` gives the double nearest to 1/3).
  *
  * @example
  * ```ts

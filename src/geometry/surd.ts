@@ -110,9 +110,17 @@ export interface Surd<T> {
 export type Root<T, E extends boolean> = E extends true ? Surd<T> : T;
 
 const BRAND: unique symbol = /* @__PURE__ */ Symbol.for('quadspread.surd') as never;
-const INSPECT = /* @__PURE__ */ Symbol.for('nodejs.util.inspect.custom');
-function inspectSurd(this: Surd<unknown>): string {
-  return `Surd(${this.toString()})`;
+// Node's console shows `Surd(41 + 20√2)` rather than the fields and the arithmetic. The method
+// goes on the prototype when the first surd is made, not as a computed class member, so that a
+// bundler can drop the whole class from a program that never makes a surd.
+let inspectReady = false;
+function showInConsole(): void {
+  inspectReady = true;
+  Object.defineProperty(SurdValue.prototype, Symbol.for('nodejs.util.inspect.custom'), {
+    value(this: Surd<unknown>): string {
+      return `Surd(${this.toString()})`;
+    },
+  });
 }
 
 // Primes below 1000, for pulling square factors out of radicands (sieve of Eratosthenes).
@@ -138,9 +146,7 @@ class SurdValue<T> implements Surd<T> {
     this.b = b;
     this.d = d;
     Object.defineProperty(this, BRAND, { value: true });
-    // Node's console shows `Surd(41 + 20√2)` rather than the fields and the arithmetic. Set
-    // here, not as a computed method, so that a bundler can drop the class when it is unused.
-    Object.defineProperty(this, INSPECT, { value: inspectSurd });
+    if (!inspectReady) showInConsole();
   }
 
   isRational(): boolean {
