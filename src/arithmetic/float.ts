@@ -21,10 +21,10 @@ function finite(v: number, where: string): number {
  * (`toNumber`, `toString`, `toPrecision`); `div` refuses a zero divisor and `sqrt` a
  * negative argument, and both refuse a result that is not finite (`NOT_FINITE`), so an
  * overflow met in `add`, `sub` or `mul` — left unchecked for speed, and possible only with
- * magnitudes near 1e308 — is caught at the next division, root or conversion; a function
- * whose result is a bare sum, difference or product (`quadrance`, `lineThrough`, the law
- * residuals) returns ±Infinity or NaN for values beyond about 1e154 (see the guide "Choosing
- * an arithmetic"). Text is read correctly rounded (`'1/3'` gives the double nearest to 1/3).
+ * magnitudes near 1e308 — is caught at the next division, root or conversion, and the
+ * functions whose result is a bare sum, difference or product (`quadrance`, `lineThrough`, the
+ * law residuals) check that result once. Text is read correctly rounded (`'1/3'` gives the
+ * double nearest to 1/3).
  *
  * @example
  * ```ts

@@ -7,7 +7,7 @@
  * @module geometry
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { readNumber, readQuadrance, readSpread } from './validate.js';
+import { finiteResult, readNumber, readQuadrance, readSpread } from './validate.js';
 
 /**
  * Pythagoras' theorem in quadrances: the residual Q1 + Q2 − Q3, zero exactly when the
@@ -18,7 +18,7 @@ import { readNumber, readQuadrance, readSpread } from './validate.js';
  * @param Q2 a quadrance (leg), ≥ 0
  * @param Q3 the quadrance opposite the right vertex (hypotenuse), ≥ 0
  * @returns Q1 + Q2 − Q3, in square units
- * @throws {QuadspreadError} `NEGATIVE_QUADRANCE`; `INVALID_NUMBER`.
+ * @throws {QuadspreadError} `NEGATIVE_QUADRANCE`; `INVALID_NUMBER`; `NOT_FINITE` in float when the result overflows (values beyond about 1e154).
  * @example
  * ```ts
  * import { rational, pythagorasResidual } from 'quadspread';
@@ -32,7 +32,7 @@ export function pythagorasResidual<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Nume
   const b = readQuadrance(A, Q2, w, 'Q2');
   const c = readQuadrance(A, Q3, w, 'Q3');
   // Pythagoras' theorem, Q1 + Q2 = Q3: Euclid, Elements I.47 and its converse I.48.
-  return A.sub(A.add(a, b), c);
+  return finiteResult(A.sub(A.add(a, b), c), w);
 }
 
 /**
@@ -46,7 +46,7 @@ export function pythagorasResidual<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Nume
  * @param Q2 a quadrance, ≥ 0
  * @param Q3 a quadrance, ≥ 0
  * @returns the quadrea, in square units squared
- * @throws {QuadspreadError} `NEGATIVE_QUADRANCE`; `INVALID_NUMBER`.
+ * @throws {QuadspreadError} `NEGATIVE_QUADRANCE`; `INVALID_NUMBER`; `NOT_FINITE` in float when the result overflows (values beyond about 1e154).
  * @example
  * ```ts
  * import { rational, quadrea } from 'quadspread';
@@ -56,7 +56,7 @@ export function pythagorasResidual<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Nume
  */
 export function quadrea<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Numeric<T>, Q3: Numeric<T>): T {
   const w = 'quadrea(A, Q1, Q2, Q3)';
-  return archimedes(A, readQuadrance(A, Q1, w, 'Q1'), readQuadrance(A, Q2, w, 'Q2'), readQuadrance(A, Q3, w, 'Q3'));
+  return finiteResult(archimedes(A, readQuadrance(A, Q1, w, 'Q1'), readQuadrance(A, Q2, w, 'Q2'), readQuadrance(A, Q3, w, 'Q3')), w);
 }
 
 function archimedes<T>(A: Arithmetic<T>, a: T, b: T, c: T): T {
@@ -76,7 +76,7 @@ function archimedes<T>(A: Arithmetic<T>, a: T, b: T, c: T): T {
  * @param Q2 a quadrance, ≥ 0
  * @param Q3 a quadrance, ≥ 0
  * @returns the residual (the quadrea), in square units squared
- * @throws {QuadspreadError} `NEGATIVE_QUADRANCE`; `INVALID_NUMBER`.
+ * @throws {QuadspreadError} `NEGATIVE_QUADRANCE`; `INVALID_NUMBER`; `NOT_FINITE` in float when the result overflows (values beyond about 1e154).
  * @example
  * ```ts
  * import { rational, tripleQuadResidual } from 'quadspread';
@@ -87,7 +87,7 @@ function archimedes<T>(A: Arithmetic<T>, a: T, b: T, c: T): T {
 export function tripleQuadResidual<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Numeric<T>, Q3: Numeric<T>): T {
   const w = 'tripleQuadResidual(A, Q1, Q2, Q3)';
   // Triple quad formula: three points are collinear exactly when Heron's area is zero (Heron, Metrica I.8; derived).
-  return archimedes(A, readQuadrance(A, Q1, w, 'Q1'), readQuadrance(A, Q2, w, 'Q2'), readQuadrance(A, Q3, w, 'Q3'));
+  return finiteResult(archimedes(A, readQuadrance(A, Q1, w, 'Q1'), readQuadrance(A, Q2, w, 'Q2'), readQuadrance(A, Q3, w, 'Q3')), w);
 }
 
 /**
@@ -100,7 +100,7 @@ export function tripleQuadResidual<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Nume
  * @param Q3 a quadrance, ≥ 0
  * @param area the area (any sign; only its square matters), in square units
  * @returns quadrea − 16·area², in square units squared
- * @throws {QuadspreadError} `NEGATIVE_QUADRANCE`; `INVALID_NUMBER`.
+ * @throws {QuadspreadError} `NEGATIVE_QUADRANCE`; `INVALID_NUMBER`; `NOT_FINITE` in float when the result overflows (values beyond about 1e154).
  * @example
  * ```ts
  * import { rational, archimedesResidual } from 'quadspread';
@@ -113,7 +113,7 @@ export function archimedesResidual<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Nume
   const q = archimedes(A, readQuadrance(A, Q1, w, 'Q1'), readQuadrance(A, Q2, w, 'Q2'), readQuadrance(A, Q3, w, 'Q3'));
   const s = readNumber(A, area, w, ' area');
   // Archimedes' formula, quadrea = 16·area²: Heron's formula in quadrances (Heron, Metrica I.8; derived).
-  return A.sub(q, A.mul(A.from(16), A.mul(s, s)));
+  return finiteResult(A.sub(q, A.mul(A.from(16), A.mul(s, s))), w);
 }
 
 /**
@@ -142,6 +142,7 @@ export function spreadLawResidual<T>(A: Arithmetic<T>, Qa: Numeric<T>, sa: Numer
   const qb = readQuadrance(A, Qb, w, 'Qb');
   const b = readSpread(A, sb, w, 'sb');
   // Spread law s1/Q1 = s2/Q2 = s3/Q3: the law of sines, squared (derived).
+  // Spreads are at most 1, so neither product exceeds its quadrance: nothing to overflow.
   return A.sub(A.mul(a, qb), A.mul(b, qa));
 }
 
@@ -155,7 +156,7 @@ export function spreadLawResidual<T>(A: Arithmetic<T>, Qa: Numeric<T>, sa: Numer
  * @param Q3 the quadrance opposite the vertex, ≥ 0
  * @param s3 the spread at the vertex, in [0, 1]
  * @returns the residual, in square units squared
- * @throws {QuadspreadError} `NEGATIVE_QUADRANCE`, `SPREAD_OUT_OF_RANGE`; `INVALID_NUMBER`.
+ * @throws {QuadspreadError} `NEGATIVE_QUADRANCE`, `SPREAD_OUT_OF_RANGE`; `INVALID_NUMBER`; `NOT_FINITE` in float when the result overflows (values beyond about 1e154).
  * @example
  * ```ts
  * import { rational, crossLawResidual } from 'quadspread';
@@ -171,7 +172,7 @@ export function crossLawResidual<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Numeri
   const s = readSpread(A, s3, w, 's3');
   // Cross law (Q1 + Q2 − Q3)² = 4 Q1 Q2 (1 − s3): the law of cosines (Euclid, Elements II.12–13), squared (derived).
   const t = A.sub(A.add(a, b), c);
-  return A.sub(A.mul(t, t), A.mul(A.from(4), A.mul(A.mul(a, b), A.sub(A.one, s))));
+  return finiteResult(A.sub(A.mul(t, t), A.mul(A.from(4), A.mul(A.mul(a, b), A.sub(A.one, s)))), w);
 }
 
 /**

@@ -6,7 +6,7 @@
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { show, coincidentPoints, degenerateLine } from '../errors.js';
 import type { Point } from './point.js';
-import { atMostOne, readNumber } from './validate.js';
+import { atMostOne, finiteResult, readNumber } from './validate.js';
 
 /**
  * The line ⟨a : b : c⟩: the points with a·x + b·y + c = 0 (x east, y north), a and b
@@ -63,7 +63,8 @@ export function line<T>(A: Arithmetic<T>, a: Numeric<T>, b: Numeric<T>, c: Numer
  * @param P a point
  * @param Q another point
  * @returns the line PQ
- * @throws {QuadspreadError} `COINCIDENT_POINTS` when P = Q.
+ * @throws {QuadspreadError} `COINCIDENT_POINTS` when P = Q; `NOT_FINITE` in float when c overflows
+ *   (coordinates beyond about 1e154).
  * @example
  * ```ts
  * import { rational, point, lineThrough } from 'quadspread';
@@ -74,12 +75,13 @@ export function line<T>(A: Arithmetic<T>, a: Numeric<T>, b: Numeric<T>, c: Numer
  */
 export function lineThrough<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): Line<T> {
   // Line through two points: the cross product of their homogeneous coordinates (x, y, 1) (common practice; derived).
-  const a = A.sub(P.y, Q.y);
-  const b = A.sub(Q.x, P.x);
+  const where = 'lineThrough(A, P, Q)';
+  const a = finiteResult(A.sub(P.y, Q.y), where);
+  const b = finiteResult(A.sub(Q.x, P.x), where);
   if (A.isZero(a) && A.isZero(b)) {
-    throw coincidentPoints('lineThrough(A, P, Q)', `P and Q coincide at (${show(A.toString(P.x))}, ${show(A.toString(P.y))})`);
+    throw coincidentPoints(where, `P and Q coincide at (${show(A.toString(P.x))}, ${show(A.toString(P.y))})`);
   }
-  return { a, b, c: A.sub(A.mul(P.x, Q.y), A.mul(Q.x, P.y)) };
+  return { a, b, c: finiteResult(A.sub(A.mul(P.x, Q.y), A.mul(Q.x, P.y)), where) };
 }
 
 /**

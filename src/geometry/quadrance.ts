@@ -5,6 +5,7 @@
  */
 import type { Arithmetic } from '../arithmetic/types.js';
 import type { Point } from './point.js';
+import { finiteResult } from './validate.js';
 
 /**
  * The quadrance Q(P, Q) = (x₂ − x₁)² + (y₂ − y₁)²: the squared distance between two
@@ -15,7 +16,8 @@ import type { Point } from './point.js';
  * @param P the first point
  * @param Q the second point
  * @returns the quadrance (≥ 0), in square units
- * @throws Never: the points are values of the arithmetic already.
+ * @throws {QuadspreadError} `NOT_FINITE` in float when the result overflows (coordinates beyond about 1e154);
+ *   nothing else: the points are values of the arithmetic already.
  * @example
  * ```ts
  * import { rational, point, quadrance } from 'quadspread';
@@ -27,7 +29,7 @@ export function quadrance<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): T {
   // The square of the Euclidean distance, by Pythagoras' theorem (Euclid, Elements I.47).
   const dx = A.sub(Q.x, P.x);
   const dy = A.sub(Q.y, P.y);
-  return A.add(A.mul(dx, dx), A.mul(dy, dy));
+  return finiteResult(A.add(A.mul(dx, dx), A.mul(dy, dy)), 'quadrance(A, P, Q)');
 }
 
 /**
@@ -36,7 +38,8 @@ export function quadrance<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): T {
  * @param A the arithmetic
  * @param v the vector
  * @returns x² + y², in square units
- * @throws Never: the vector is a value of the arithmetic already.
+ * @throws {QuadspreadError} `NOT_FINITE` in float when the result overflows; nothing else: the
+ *   vector is a value of the arithmetic already.
  * @example
  * ```ts
  * import { float, point, vectorQuadrance } from 'quadspread';
@@ -45,5 +48,5 @@ export function quadrance<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): T {
  * ```
  */
 export function vectorQuadrance<T>(A: Arithmetic<T>, v: Point<T>): T {
-  return A.add(A.mul(v.x, v.x), A.mul(v.y, v.y));
+  return finiteResult(A.add(A.mul(v.x, v.x), A.mul(v.y, v.y)), 'vectorQuadrance(A, v)');
 }

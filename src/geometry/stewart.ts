@@ -8,7 +8,7 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { QuadspreadError, show, invalidArgument } from '../errors.js';
 import { solveQuadratic } from './quadratic.js';
 import { type Root, isSurd, type Surd } from './surd.js';
-import { readNumber, readQuadrance } from './validate.js';
+import { finiteResult, readNumber, readQuadrance } from './validate.js';
 
 /**
  * The data of Stewart's relation with chainages: a point P (off the line or on it) and
@@ -92,7 +92,7 @@ function stewartQ<T>(A: Arithmetic<T>, QB: T, QC: T, QD: T, QBD: T, QBC: T): T {
  * @param A the arithmetic
  * @param data quadrances from P (≥ 0) and chainages of B, C, D
  * @returns the residual, in cubic units
- * @throws {QuadspreadError} `NEGATIVE_QUADRANCE`; `INVALID_NUMBER` naming the member; `INVALID_ARGUMENT` when `data` is not an object.
+ * @throws {QuadspreadError} `NEGATIVE_QUADRANCE`; `INVALID_NUMBER` naming the member; `INVALID_ARGUMENT` when `data` is not an object; `NOT_FINITE` in float when the result overflows.
  * @example
  * ```ts
  * import { rational, stewartResidual } from 'quadspread';
@@ -103,7 +103,7 @@ function stewartQ<T>(A: Arithmetic<T>, QB: T, QC: T, QD: T, QBD: T, QBC: T): T {
 export function stewartResidual<T>(A: Arithmetic<T>, data: StewartChainages<Numeric<T>>): T {
   const w = 'stewartResidual(A, data)';
   checkData(data, w);
-  return stewart(A, readQuadrance(A, data.QB, w, 'QB'), readQuadrance(A, data.QC, w, 'QC'), readQuadrance(A, data.QD, w, 'QD'), readNumber(A, data.tB, w, ' tB'), readNumber(A, data.tC, w, ' tC'), readNumber(A, data.tD, w, ' tD'));
+  return finiteResult(stewart(A, readQuadrance(A, data.QB, w, 'QB'), readQuadrance(A, data.QC, w, 'QC'), readQuadrance(A, data.QD, w, 'QD'), readNumber(A, data.tB, w, ' tB'), readNumber(A, data.tC, w, ' tC'), readNumber(A, data.tD, w, ' tD')), w);
 }
 
 /**
@@ -114,7 +114,7 @@ export function stewartResidual<T>(A: Arithmetic<T>, data: StewartChainages<Nume
  * @param A the arithmetic
  * @param data quadrances from P and along the line, all ≥ 0
  * @returns the residual, in square units cubed
- * @throws {QuadspreadError} `NEGATIVE_QUADRANCE`; `INVALID_NUMBER` naming the member; `INVALID_ARGUMENT` when `data` is not an object.
+ * @throws {QuadspreadError} `NEGATIVE_QUADRANCE`; `INVALID_NUMBER` naming the member; `INVALID_ARGUMENT` when `data` is not an object; `NOT_FINITE` in float when the result overflows.
  * @example
  * ```ts
  * import { rational, stewartQuadranceResidual } from 'quadspread';
@@ -125,7 +125,7 @@ export function stewartResidual<T>(A: Arithmetic<T>, data: StewartChainages<Nume
 export function stewartQuadranceResidual<T>(A: Arithmetic<T>, data: StewartQuadrances<Numeric<T>>): T {
   const w = 'stewartQuadranceResidual(A, data)';
   checkData(data, w);
-  return stewartQ(A, readQuadrance(A, data.QB, w, 'QB'), readQuadrance(A, data.QC, w, 'QC'), readQuadrance(A, data.QD, w, 'QD'), readQuadrance(A, data.QBD, w, 'QBD'), readQuadrance(A, data.QBC, w, 'QBC'));
+  return finiteResult(stewartQ(A, readQuadrance(A, data.QB, w, 'QB'), readQuadrance(A, data.QC, w, 'QC'), readQuadrance(A, data.QD, w, 'QD'), readQuadrance(A, data.QBD, w, 'QBD'), readQuadrance(A, data.QBC, w, 'QBC')), w);
 }
 
 /** Checks that `data` is an object (the members are read from it). */

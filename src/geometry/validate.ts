@@ -5,7 +5,7 @@
  * @module geometry
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { QuadspreadError, show, invalidArgument, negativeQuadrance } from '../errors.js';
+import { QuadspreadError, show, invalidArgument, negativeQuadrance, notFinite } from '../errors.js';
 
 /**
  * Reads a value with `A.from`; an error it raises is raised again naming `where` (the
@@ -22,6 +22,20 @@ export function readNumber<T>(A: Arithmetic<T>, x: Numeric<T>, where: string | (
     const what = e.message.slice(`quadspread ${e.code}: ${e.where}: `.length);
     throw new QuadspreadError(e.code, (typeof where === 'string' ? where : where()) + suffix, what);
   }
+}
+
+/**
+ * Returns `r`, or throws `NOT_FINITE` when it is a float (or `uncertain(float)`) value that is
+ * not finite. `float` leaves `add`, `sub` and `mul` unchecked for speed, so the functions whose
+ * result is a bare sum, difference or product check it here, once; exact and decimal values are
+ * always finite.
+ * @throws {QuadspreadError} `NOT_FINITE` naming `where`.
+ * @internal
+ */
+export function finiteResult<T>(r: T, where: string): T {
+  const v = typeof r === 'object' && r !== null ? (r as { value?: unknown }).value : r;
+  if (typeof v === 'number' && v - v !== 0) throw notFinite(where, `the result ${show(v)} is not finite: float overflowed (use decimal(n) for values this large)`);
+  return r;
 }
 
 /**

@@ -4,7 +4,7 @@
  * @module readings
  */
 import { QuadspreadError, show, negativeQuadrance } from '../errors.js';
-import { readNumber } from '../geometry/validate.js';
+import { finiteResult, readNumber } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 
 /**
@@ -52,7 +52,7 @@ export function checkLengthUnit(unit: unknown, where: string): LengthUnit {
  * @param value the length in `unit`
  * @param unit its unit (see {@link LengthUnit})
  * @returns the length in metres
- * @throws {QuadspreadError} `INVALID_UNIT` for an unknown unit; `INVALID_NUMBER` for a bad value.
+ * @throws {QuadspreadError} `INVALID_UNIT` for an unknown unit; `INVALID_NUMBER` for a bad value; `NOT_FINITE` in float when the result overflows.
  * @example
  * ```ts
  * import { rational, lengthToMetres } from 'quadspread';
@@ -62,7 +62,7 @@ export function checkLengthUnit(unit: unknown, where: string): LengthUnit {
  */
 export function lengthToMetres<T>(A: Arithmetic<T>, value: Numeric<T>, unit: LengthUnit): T {
   const u = checkLengthUnit(unit, 'lengthToMetres(unit)');
-  return A.mul(readNumber(A, value, 'lengthToMetres(value)'), A.from(METRES_PER_UNIT[u]));
+  return finiteResult(A.mul(readNumber(A, value, 'lengthToMetres(value)'), A.from(METRES_PER_UNIT[u])), 'lengthToMetres(value)');
 }
 
 /**
@@ -115,7 +115,7 @@ export function convertLength<T>(A: Arithmetic<T>, value: Numeric<T>, from: Leng
  * @param from the unit of the length squared
  * @param to the unit wanted
  * @returns the quadrance in `to`²
- * @throws {QuadspreadError} `INVALID_UNIT` for an unknown unit; `NEGATIVE_QUADRANCE` below zero.
+ * @throws {QuadspreadError} `INVALID_UNIT` for an unknown unit; `NEGATIVE_QUADRANCE` below zero; `NOT_FINITE` in float when the result overflows.
  * @example
  * ```ts
  * import { rational, convertQuadrance } from 'quadspread';
@@ -127,5 +127,5 @@ export function convertQuadrance<T>(A: Arithmetic<T>, quadrance: Numeric<T>, fro
   const q = readNumber(A, quadrance, 'convertQuadrance(quadrance)');
   if (A.sign(q) < 0) throw negativeQuadrance('convertQuadrance(quadrance)', `${show(typeof quadrance === 'object' ? A.toString(q) : quadrance)} is below zero`);
   const r = convertLength(A, A.one, from, to);
-  return A.mul(q, A.mul(r, r));
+  return finiteResult(A.mul(q, A.mul(r, r)), 'convertQuadrance(quadrance)');
 }
