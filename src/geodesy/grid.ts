@@ -14,7 +14,7 @@
  */
 import { QuadspreadError, show, invalidArgument } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { readNumber, expectObject } from '../geometry/validate.js';
+import { readNumber, expectObject, finiteResult } from '../geometry/validate.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { ellipsoidParameters, readEllipsoid, type Ellipsoid, type EllipsoidParameters } from './ellipsoid.js';
 import { claimedDigits, delegateFor, readHeight, readLatitude, readLongitude, root, tenToMinus, toDegrees } from './internal.js';
@@ -358,7 +358,7 @@ function tm<T>(
  * @param heightFactor from {@link heightReductionFactor}
  * @param scaleFactor k from {@link transverseMercatorFactors} (the mean over the line for long lines)
  * @returns the combined factor
- * @throws {QuadspreadError} `INVALID_ARGUMENT` when a factor is not positive.
+ * @throws {QuadspreadError} `INVALID_ARGUMENT` when a factor is not positive; `NOT_FINITE` in float when the product overflows.
  * @example
  * ```ts
  * import { rational, combinedFactor } from 'quadspread';
@@ -369,7 +369,7 @@ function tm<T>(
 export function combinedFactor<T>(A: Arithmetic<T>, heightFactor: Numeric<T>, scaleFactor: Numeric<T>): T {
   const h = positive(A, heightFactor, 'combinedFactor(heightFactor)');
   const k = positive(A, scaleFactor, 'combinedFactor(scaleFactor)');
-  return A.mul(h, k);
+  return finiteResult(A.mul(h, k), 'combinedFactor(heightFactor, scaleFactor)');
 }
 
 function positive<T>(A: Arithmetic<T>, x: Numeric<T>, where: string): T {

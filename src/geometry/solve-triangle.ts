@@ -7,7 +7,7 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { QuadspreadError, show, invalidArgument, unsupportedOperation } from '../errors.js';
 import { type Root, type Surd, surd } from './surd.js';
 import type { Triangle } from './triangle.js';
-import { atMostOne, readQuadrance, readSpread } from './validate.js';
+import { atMostOne, finiteResult, readQuadrance, readSpread } from './validate.js';
 
 /**
  * Three of the six measures of a triangle (see {@link Triangle} for which is which).
@@ -106,7 +106,8 @@ const KEYS = ['Q1', 'Q2', 'Q3', 's1', 's2', 's3'] as const;
  * @returns 0, 1 or 2 triangles
  * @throws {QuadspreadError} `NEEDS_A_QUADRANCE` for three spreads; `INVALID_ARGUMENT` unless
  * exactly three known measures are given (and no other keys); `NEGATIVE_QUADRANCE`,
- * `SPREAD_OUT_OF_RANGE`, `INVALID_NUMBER` for bad values.
+ * `SPREAD_OUT_OF_RANGE`, `INVALID_NUMBER` for bad values; `NOT_FINITE` in float when the quadrea
+ * (a product of quadrances) overflows.
  * @example
  * ```ts
  * import { rational, solveTriangle } from 'quadspread';
@@ -142,7 +143,8 @@ export function solveTriangle<T, E extends boolean>(A: Arithmetic<T, E>, known: 
 function solve<T, R>(A: Arithmetic<T>, F: Field<T, R>, Q: (T | undefined)[], s: (T | undefined)[], nq: number): Triangle<R>[] {
   const two = A.from(2);
   const four = A.from(4);
-  const make = (q: R[], p: R[], quadrea: R): Triangle<R> => ({ Q1: q[0]!, Q2: q[1]!, Q3: q[2]!, s1: p[0]!, s2: p[1]!, s3: p[2]!, quadrea });
+  // quadrea is a product of quadrances: in float it can overflow where the sides do not.
+  const make = (q: R[], p: R[], quadrea: R): Triangle<R> => ({ Q1: q[0]!, Q2: q[1]!, Q3: q[2]!, s1: p[0]!, s2: p[1]!, s3: p[2]!, quadrea: finiteResult(quadrea, 'solveTriangle(A, known)') });
 
   if (nq === 3) {
     const [a, b, c] = Q as T[];
