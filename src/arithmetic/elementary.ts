@@ -26,7 +26,7 @@
  * @module arithmetic
  */
 import { QuadspreadError, show, invalidNumber, inputTooLong, invalidArgument, noRealSolution, zeroVectorAngle, textTooLong } from '../errors.js';
-import { bitLength, isqrt } from './exact.js';
+import { bitLength, DECIMAL, isqrt, pow10 } from './exact.js';
 
 /** Transcendental functions working on decimal text, to a fixed number of significant digits. */
 export interface DecimalElementary {
@@ -73,16 +73,6 @@ const MAX_ARG_EXPONENT = 20000;
 const MAX_REDUCED_EXPONENT = 1001;
 const LOG2_10 = 3.321928094887362;
 
-const pow10memo = new Map<number, bigint>();
-/** 10^k (a pure memo: the values never change). */
-function pow10(k: number): bigint {
-  let v = pow10memo.get(k);
-  if (v === undefined) {
-    v = 10n ** BigInt(k);
-    if (k <= 4096) pow10memo.set(k, v);
-  }
-  return v;
-}
 
 const abs = (a: bigint): bigint => (a < 0n ? -a : a);
 /** a · b / 2^B truncated toward zero (so that series terms of either sign reach 0). */
@@ -100,7 +90,6 @@ interface Arg {
   readonly d: bigint;
 }
 
-const DECIMAL = /^([+-]?)(\d+)?(?:\.(\d*))?(?:[eE]([+-]?\d+))?$/;
 
 function readArg(text: string, where: string): Arg {
   if (typeof text !== 'string') throw invalidNumber(where, `${show(text)} is not decimal text`);

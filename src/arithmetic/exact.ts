@@ -28,10 +28,18 @@ export interface Ratio {
   readonly d: bigint;
 }
 
-const DECIMAL = /^([+-]?)(\d+)?(?:\.(\d*))?(?:[eE]([+-]?\d+))?$/;
+/** Decimal text: sign, integer digits, fraction digits, exponent. @internal */
+export const DECIMAL = /^([+-]?)(\d+)?(?:\.(\d*))?(?:[eE]([+-]?\d+))?$/;
 
-function pow10(k: number): bigint {
-  return 10n ** BigInt(k);
+const pow10memo = new Map<number, bigint>();
+/** 10^k for k ≥ 0 (a pure memo up to 10^4096: the values never change). @internal */
+export function pow10(k: number): bigint {
+  let v = pow10memo.get(k);
+  if (v === undefined) {
+    v = 10n ** BigInt(k);
+    if (k <= 4096) pow10memo.set(k, v);
+  }
+  return v;
 }
 
 function readDecimal(text: string, where: string, original: string, allowSign: boolean): Ratio {

@@ -5,7 +5,7 @@
  * @internal
  */
 import { show, invalidArgument, noRealSolution, inputTooLong } from '../errors.js';
-import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+import type { Arithmetic } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { surd } from '../geometry/surd.js';
 import { approxSqrt } from '../readings/numeric.js';

@@ -9,7 +9,7 @@ import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Root } from '../geometry/surd.js';
 import { solveTriangle } from '../geometry/solve-triangle.js';
-import { readQuadrance, readSpread } from '../geometry/validate.js';
+import { readQuadrance, readSpread, shownInput } from '../geometry/validate.js';
 import { angleToDegrees } from '../readings/angle.js';
 import { spreadFromDegrees } from '../readings/spread.js';
 import { readVertical, type VerticalInput } from '../readings/vertical.js';
@@ -106,7 +106,7 @@ export function heightFromBase<T, E extends boolean>(
     if (input.foot !== undefined) throw invalidArgument(`${w}.foot`, 'angles already fix the side of the foot; leave foot out');
     const a = input.angles.map((x, i) => {
       const d = angleToDegrees(A, x);
-      if (A.sign(d) <= 0 || A.cmp(d, A.from(180)) >= 0) throw invalidAngle(`${w}.angles[${i}]`, `${show(typeof x === 'object' ? A.toString(d) : x)} is not an interior angle in (0°, 180°)`);
+      if (A.sign(d) <= 0 || A.cmp(d, A.from(180)) >= 0) throw invalidAngle(`${w}.angles[${i}]`, `${shownInput(A, x, d)} is not an interior angle in (0°, 180°)`);
       return d;
     });
     if (A.cmp(A.add(a[0]!, a[1]!), A.from(180)) >= 0) throw new QuadspreadError('DEGENERATE_TRIANGLE', `${w}.angles`, 'the two interior angles sum to 180° or more: the sights do not meet');

@@ -8,7 +8,7 @@ import { QuadspreadError, show, invalidArgument, verticalSight, negativeQuadranc
 import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { isSurd, type Root, type Surd } from '../geometry/surd.js';
-import { readNumber } from '../geometry/validate.js';
+import { readNumber, shownInput } from '../geometry/validate.js';
 import { checkLengthUnit, METRES_PER_UNIT, type LengthUnit } from '../readings/length.js';
 import { readVertical, type VerticalInput } from '../readings/vertical.js';
 import { rootOps } from './roots.js';
@@ -86,7 +86,7 @@ function radius<T>(A: Arithmetic<T>, o: CurvatureOptions<T>, where: string): { k
 export function curvatureRefraction<T>(A: Arithmetic<T>, distance: Numeric<T>, options: CurvatureOptions<T> = {}): T {
   checkObject(options, 'curvatureRefraction(options)');
   const D = readNumber(A, distance, 'curvatureRefraction(distance)');
-  if (A.sign(D) < 0) throw negativeQuadrance('curvatureRefraction(distance)', `${show(typeof distance === 'object' ? A.toString(D) : distance)} is a negative distance`);
+  if (A.sign(D) < 0) throw negativeQuadrance('curvatureRefraction(distance)', `${shownInput(A, distance, D)} is a negative distance`);
   return curvatureFromQuadrance(A, A.mul(D, D), options, 'curvatureRefraction(options)');
 }
 

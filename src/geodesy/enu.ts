@@ -6,7 +6,7 @@
  */
 import { show, invalidArgument } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { readNumber, expectObject } from '../geometry/validate.js';
+import { readNumber, expectObject, shownInput } from '../geometry/validate.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { readEllipsoid, type Ellipsoid } from './ellipsoid.js';
 import { geodeticToGeocentric, type Geocentric, type GeodeticInput } from './geocentric.js';
@@ -192,8 +192,8 @@ export interface FlatEarthError<T> {
 export function flatEarthError<T>(A: Arithmetic<T>, distance: Numeric<T>, radius: Numeric<T> = '6371008.7714'): FlatEarthError<T> {
   const s = readNumber(A, distance, 'flatEarthError(distance)');
   const R = readNumber(A, radius, 'flatEarthError(radius)');
-  if (A.sign(s) < 0) throw invalidArgument('flatEarthError(distance)', `${show(typeof distance === 'object' ? A.toString(s) : distance)} is negative`);
-  if (A.sign(R) <= 0) throw invalidArgument('flatEarthError(radius)', `${show(typeof radius === 'object' ? A.toString(R) : radius)} is not positive`);
+  if (A.sign(s) < 0) throw invalidArgument('flatEarthError(distance)', `${shownInput(A, distance, s)} is negative`);
+  if (A.sign(R) <= 0) throw invalidArgument('flatEarthError(radius)', `${shownInput(A, radius, R)} is not positive`);
   const s2 = A.mul(s, s);
   return {
     drop: A.div(s2, A.mul(A.from(2), R)), // s²/(2R) (derived, leading term of R(1 − cos(s/R)))

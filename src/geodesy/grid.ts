@@ -14,7 +14,7 @@
  */
 import { QuadspreadError, show, invalidArgument } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { readNumber, expectObject, finiteResult } from '../geometry/validate.js';
+import { readNumber, expectObject, finiteResult, shownInput } from '../geometry/validate.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { ellipsoidParameters, readEllipsoid, type Ellipsoid, type EllipsoidParameters } from './ellipsoid.js';
 import { claimedDigits, delegateFor, readHeight, readLatitude, readLongitude, root, tenToMinus, toDegrees } from './internal.js';
@@ -40,7 +40,7 @@ import { claimedDigits, delegateFor, readHeight, readLatitude, readLongitude, ro
  */
 export function heightReductionFactor<T>(A: Arithmetic<T>, h: Numeric<T>, radius: Numeric<T>): T {
   const R = readNumber(A, radius, 'heightReductionFactor(radius)');
-  if (A.sign(R) <= 0) throw invalidArgument('heightReductionFactor(radius)', `${show(typeof radius === 'object' ? A.toString(R) : radius)} is not positive`);
+  if (A.sign(R) <= 0) throw invalidArgument('heightReductionFactor(radius)', `${shownInput(A, radius, R)} is not positive`);
   const H = readHeight(A, h, A.div(R, A.from(2)), 'heightReductionFactor(h)', 'R/2');
   return A.div(R, A.add(R, H)); // R/(R + h)
 }
@@ -374,7 +374,7 @@ export function combinedFactor<T>(A: Arithmetic<T>, heightFactor: Numeric<T>, sc
 
 function positive<T>(A: Arithmetic<T>, x: Numeric<T>, where: string): T {
   const v = readNumber(A, x, where);
-  if (A.sign(v) <= 0) throw invalidArgument(where, `${show(typeof x === 'object' ? A.toString(v) : x)} is not positive`);
+  if (A.sign(v) <= 0) throw invalidArgument(where, `${shownInput(A, x, v)} is not positive`);
   return v;
 }
 

@@ -5,9 +5,9 @@
  * @module geodesy
  * @internal
  */
-import { QuadspreadError, show, invalidAngle } from '../errors.js';
+import { QuadspreadError, invalidAngle } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { readNumber } from '../geometry/validate.js';
+import { readNumber, shownInput } from '../geometry/validate.js';
 import { RATIONAL_TRANSCENDENTAL_DIGITS } from '../arithmetic/rational.js';
 import { decimal, type DecimalArithmetic } from '../arithmetic/decimal.js';
 import { Uncertain, uncertain } from '../arithmetic/uncertain.js';
@@ -56,7 +56,7 @@ export function readLatitude<T>(A: Arithmetic<T>, lat: Numeric<T>, where: string
   if (lat === undefined || lat === null) throw invalidAngle(where, 'the latitude is missing');
   const v = readAngle(A, lat, where);
   if (A.cmp(A.abs(v), A.from(90)) > 0) {
-    throw new QuadspreadError('LATITUDE_OUT_OF_RANGE', where, `${show(typeof lat === 'object' ? A.toString(v) : lat)} is beyond ±90°`);
+    throw new QuadspreadError('LATITUDE_OUT_OF_RANGE', where, `${shownInput(A, lat, v)} is beyond ±90°`);
   }
   return v;
 }
@@ -71,7 +71,7 @@ export function readLongitude<T>(A: Arithmetic<T>, lon: Numeric<T>, where: strin
 export function readHeight<T>(A: Arithmetic<T>, h: Numeric<T> | undefined, limit: T, where: string, name = 'a'): T {
   const v = h === undefined ? A.zero : readNumber(A, h, where);
   if (A.cmp(v, A.neg(limit)) < 0) {
-    throw new QuadspreadError('HEIGHT_OUT_OF_RANGE', where, `${show(typeof h === 'object' ? A.toString(v) : h)} is below −${name} = −${A.toString(limit)} m`);
+    throw new QuadspreadError('HEIGHT_OUT_OF_RANGE', where, `${shownInput(A, h, v)} is below −${name} = −${A.toString(limit)} m`);
   }
   return v;
 }

@@ -25,6 +25,15 @@ export function readNumber<T>(A: Arithmetic<T>, x: Numeric<T>, where: string | (
 }
 
 /**
+ * An input for an error message: as the caller wrote it, or, when it was a value of the
+ * arithmetic (an object), that value as text.
+ * @internal
+ */
+export function shownInput<T>(A: Arithmetic<T>, x: unknown, v: T): string {
+  return show(typeof x === 'object' ? A.toString(v) : x);
+}
+
+/**
  * Returns `r`, or throws `NOT_FINITE` when it is a float (or `uncertain(float)`) value that is
  * not finite. `float` leaves `add`, `sub` and `mul` unchecked for speed, so the functions whose
  * result is a bare sum, difference or product check it here, once; exact and decimal values are

@@ -4,7 +4,7 @@
  * @module readings
  */
 import { QuadspreadError, show, negativeQuadrance } from '../errors.js';
-import { finiteResult, readNumber } from '../geometry/validate.js';
+import { finiteResult, readNumber, shownInput } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 
 /**
@@ -125,7 +125,7 @@ export function convertLength<T>(A: Arithmetic<T>, value: Numeric<T>, from: Leng
  */
 export function convertQuadrance<T>(A: Arithmetic<T>, quadrance: Numeric<T>, from: LengthUnit, to: LengthUnit): T {
   const q = readNumber(A, quadrance, 'convertQuadrance(quadrance)');
-  if (A.sign(q) < 0) throw negativeQuadrance('convertQuadrance(quadrance)', `${show(typeof quadrance === 'object' ? A.toString(q) : quadrance)} is below zero`);
+  if (A.sign(q) < 0) throw negativeQuadrance('convertQuadrance(quadrance)', `${shownInput(A, quadrance, q)} is below zero`);
   const r = convertLength(A, A.one, from, to);
   return finiteResult(A.mul(q, A.mul(r, r)), 'convertQuadrance(quadrance)');
 }

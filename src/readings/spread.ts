@@ -3,8 +3,8 @@
  *
  * @module readings
  */
-import { QuadspreadError, show } from '../errors.js';
-import { readNumber } from '../geometry/validate.js';
+import { QuadspreadError } from '../errors.js';
+import { readNumber, shownInput } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readAngle, type AngleUnit } from './angle.js';
 import { modulo, sinCos } from './trig.js';
@@ -14,7 +14,7 @@ import { approxSqrt, guardOf, viaGuard } from './numeric.js';
 export function checkSpread<T>(A: Arithmetic<T>, s: Numeric<T>, where: string): T {
   const v = readNumber(A, s, where);
   if (A.sign(v) < 0 || A.cmp(v, A.one) > 0) {
-    throw new QuadspreadError('SPREAD_OUT_OF_RANGE', where, `${show(typeof s === 'object' ? A.toString(v) : s)} is outside [0, 1]`);
+    throw new QuadspreadError('SPREAD_OUT_OF_RANGE', where, `${shownInput(A, s, v)} is outside [0, 1]`);
   }
   return v;
 }

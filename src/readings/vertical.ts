@@ -5,7 +5,7 @@
  * @module readings
  */
 import { MAX_INPUT_LENGTH, show, invalidArgument, invalidAngle, invalidSlope, textTooLong } from '../errors.js';
-import { readNumber } from '../geometry/validate.js';
+import { readNumber, shownInput } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { angleToDegrees, type AngleUnit } from './angle.js';
 import { checkSpread, degreesFromSpread, spreadFromDegrees } from './spread.js';
@@ -121,7 +121,7 @@ export function verticalFromAngle<T>(
   const ninety = A.from(90);
   if (A.cmp(A.abs(elev), ninety) > 0) {
     const range = kind === 'elevation' ? '[-90°, 90°]' : '[0°, 180°]';
-    throw invalidAngle('verticalFromAngle(angle)', `${show(typeof angle === 'object' ? A.toString(deg) : angle)} is outside ${range} for a${kind === 'elevation' ? 'n elevation' : ' zenith'} angle`);
+    throw invalidAngle('verticalFromAngle(angle)', `${shownInput(A, angle, deg)} is outside ${range} for a${kind === 'elevation' ? 'n elevation' : ' zenith'} angle`);
   }
   const s = spreadFromDegrees(A, elev);
   return { spread: s, sign: A.isZero(s) ? 0 : A.sign(elev) };
