@@ -1,3 +1,4 @@
+import path from 'node:path';
 import { defineConfig, type Options } from 'tsup';
 // The float entry's modules are compiled float-specialised (A.add(x, y) → x + y …); see the file.
 // @ts-ignore -- a plain .mjs plugin without declarations (tsc checks *.config.ts)
@@ -22,9 +23,23 @@ const common: Options = {
 };
 const entries = { index: 'src/index.ts', rational: 'src/rational.ts', decimal: 'src/decimal.ts', float: 'src/float.ts' };
 
+// In the ESM of quadspread/float, the decimal arithmetic is not copied in but imported from the
+// per-module tree (dist/esm/arithmetic/decimal.js): it has no float code to specialise, and
+// big.js (8 KiB, a package with side effects as far as bundlers know) then reaches a consumer's
+// bundle only when `decimal` is used.
+const decimalFromTree = {
+  name: 'decimal-from-esm-tree',
+  setup(build: { onResolve: (o: { filter: RegExp }, f: (a: { path: string; resolveDir: string }) => unknown) => void }) {
+    const target = path.resolve('src/arithmetic/decimal.ts');
+    build.onResolve({ filter: /(^|\/)decimal\.js$/ }, (args) =>
+      path.resolve(args.resolveDir, args.path.replace(/\.js$/, '.ts')) === target ? { path: './esm/arithmetic/decimal.js', external: true } : undefined,
+    );
+  },
+};
+
 export default defineConfig([
   { ...common, entry: entries, format: ['cjs'], splitting: false, treeshake: true, esbuildPlugins: [floatSpecialize()] },
-  { ...common, entry: { float: 'src/float.ts' }, format: ['esm'], splitting: false, treeshake: true, esbuildPlugins: [floatSpecialize()] },
+  { ...common, entry: { float: 'src/float.ts' }, format: ['esm'], splitting: false, treeshake: true, esbuildPlugins: [decimalFromTree, floatSpecialize()] },
   { ...common, entry: ['src/**/*.ts', '!src/cli/**', '!src/float.ts'], outDir: 'dist/esm', format: ['esm'], bundle: false },
   { ...common, entry: entries, format: ['esm', 'cjs'], dts: { only: true } },
   // The quadspread command (src/cli, docs/cli.md): one ES module for Node with commander bundled
