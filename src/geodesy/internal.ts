@@ -5,7 +5,7 @@
  * @module geodesy
  * @internal
  */
-import { QuadspreadError, invalidAngle } from '../errors.js';
+import { QuadspreadError, show, invalidAngle } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber, shownInput } from '../geometry/validate.js';
 import { RATIONAL_TRANSCENDENTAL_DIGITS } from '../arithmetic/rational.js';
@@ -51,9 +51,24 @@ export function readAngle<T>(A: Arithmetic<T>, x: Numeric<T>, where: string, uni
   }
 }
 
+/**
+ * Refuses a hemisphere letter of the other axis in angle text: E or W on a latitude, N or S on
+ * a longitude (the two swapped would otherwise be read without complaint).
+ */
+function checkHemisphere(x: unknown, allowed: string, where: string, what: string): void {
+  if (typeof x !== 'string') return;
+  for (const m of [/^\s*([NSEW])/i.exec(x), /([NSEW])\s*$/i.exec(x)]) {
+    const letter = m?.[1]!.toUpperCase();
+    if (letter !== undefined && !allowed.includes(letter)) {
+      throw invalidAngle(where, `${show(x)} carries ${letter}, but a ${what} takes ${allowed[0]} or ${allowed[1]}: are latitude and longitude swapped?`);
+    }
+  }
+}
+
 /** @internal A latitude in degrees from decimal degrees or DMS text, checked to be within ±90°. */
 export function readLatitude<T>(A: Arithmetic<T>, lat: Numeric<T>, where: string): T {
   if (lat === undefined || lat === null) throw invalidAngle(where, 'the latitude is missing');
+  checkHemisphere(lat, 'NS', where, 'latitude');
   const v = readAngle(A, lat, where);
   if (A.cmp(A.abs(v), A.from(90)) > 0) {
     throw new QuadspreadError('LATITUDE_OUT_OF_RANGE', where, `${shownInput(A, lat, v)} is beyond ±90°`);
@@ -64,6 +79,7 @@ export function readLatitude<T>(A: Arithmetic<T>, lat: Numeric<T>, where: string
 /** @internal A longitude in degrees from decimal degrees or DMS text (any value; used through sin and cos). */
 export function readLongitude<T>(A: Arithmetic<T>, lon: Numeric<T>, where: string): T {
   if (lon === undefined || lon === null) throw invalidAngle(where, 'the longitude is missing');
+  checkHemisphere(lon, 'EW', where, 'longitude');
   return readAngle(A, lon, where);
 }
 

@@ -338,6 +338,10 @@ describe('bad input gets typed errors', () => {
     ['a latitude of −91° as DMS', () => geodeticToGeocentric(A, { lat: `91°00'00"S`, lon: 0 }, WGS84), 'LATITUDE_OUT_OF_RANGE'],
     ['non-numeric DMS text', () => geodeticToGeocentric(A, { lat: `5x°12'`, lon: 0 }, WGS84), 'INVALID_ANGLE'],
     ['minutes of 61 in DMS', () => geodeticToGeocentric(A, { lat: 10, lon: `10°61'` }, WGS84), 'INVALID_ANGLE'],
+    // OS guide annex B's point with latitude and longitude swapped: the letters give it away.
+    ['a latitude ending in W (swapped with the longitude)', () => geodeticToGeocentric(A, { lat: `1°39'51.9920"W`, lon: `53°36'43.1653"N` }, GRS80), 'INVALID_ANGLE'],
+    ['a longitude ending in N', () => geodeticToGeocentric(A, { lat: 53.6, lon: `1°39'51.9920"N` }, GRS80), 'INVALID_ANGLE'],
+    ['a latitude starting with E', () => transverseMercator(A, { lat: 'E 10', lon: 0 }, { lon0: 0, ellipsoid: GRS80 }), 'INVALID_ANGLE'],
     ['a height below −a', () => geodeticToGeocentric(A, { lat: 0, lon: 0, h: -6378137.5 }, WGS84), 'HEIGHT_OUT_OF_RANGE'],
     ['an unknown ellipsoid name', () => geodeticToGeocentric(A, { lat: 0, lon: 0 }, 'Clarke 1880'), 'UNKNOWN_ELLIPSOID'],
     ['an object that is not an ellipsoid', () => geocentricToGeodetic(A, { X: 1, Y: 2, Z: 3 }, {} as never), 'UNKNOWN_ELLIPSOID'],
