@@ -172,3 +172,12 @@ export const zeroVectorAngle = (where: string): QuadspreadError => invalidArgume
 /** `INPUT_TOO_LONG` for text of `length` characters over `limit`. @internal */
 export const textTooLong = (where: string, length: number, limit: number = MAX_INPUT_LENGTH): QuadspreadError =>
   inputTooLong(where, `text of ${length} characters is longer than the limit of ${limit}`);
+/**
+ * `INVALID_NUMBER` for an operand of `arith`'s operation `op` that is not a value of that
+ * arithmetic (a JS number, text, or a value of another arithmetic). @internal
+ */
+export const notAValue = (arith: string, op: string, x: unknown): QuadspreadError =>
+  invalidNumber(
+    `${arith}.${op}(…)`,
+    `${show(x)} (${typeof x === 'object' && x !== null ? ((x as object).constructor?.name ?? 'an object') : typeof x}) is not a ${arith} value: use ${arith}.from, or point(${arith}, x, y)`,
+  );

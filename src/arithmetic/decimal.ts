@@ -7,7 +7,7 @@ import BigJs from 'big.js';
 import type { Big, BigConstructor } from 'big.js';
 import { show, invalidArgument, divisionByZero, noRealSolution, notFinite, zeroVectorAngle } from '../errors.js';
 import type { Arithmetic, Numeric } from './types.js';
-import { isqrt, ratioToPrecision, readInput } from './exact.js';
+import { isqrt, operandChecks, pow10, ratioToPrecision, readInput } from './exact.js';
 import { decimalElementary } from './elementary.js';
 import { decimalKernels } from './fused-decimal.js';
 
@@ -48,9 +48,6 @@ function isForeignBig(x: unknown): x is Big {
   return Array.isArray(b.c) && typeof b.e === 'number' && (b.s === 1 || b.s === -1);
 }
 
-function pow10(k: number): bigint {
-  return 10n ** BigInt(k);
-}
 
 function digitCount(a: bigint): number {
   return (a < 0n ? -a : a).toString().length;
@@ -100,6 +97,9 @@ export function decimal(digits = 34): DecimalArithmetic {
   // big.js constructors share one prototype, so `instanceof` cannot tell instances apart;
   // each Big carries its own constructor as an own property.
   const isOwn = (x: unknown): x is Big => x instanceof D && (x as Big).constructor === D;
+  // Operands must be Bigs, by shape (of any decimal(n), or of a second copy of big.js: the
+  // operations are exact before they round, so such a Big is read at its full value).
+  const { one, two } = operandChecks<Big>(name, isForeignBig);
   const elementary = decimalElementary(digits);
   const fromText = (s: string): Big => round(new D(s));
 
@@ -122,23 +122,24 @@ export function decimal(digits = 34): DecimalArithmetic {
       return divide(r.n, 0, r.d, 0);
     },
     is: isOwn,
-    add: (a, b) => round(a.plus(b)),
-    sub: (a, b) => round(a.minus(b)),
-    mul: (a, b) => round(a.times(b)),
+    // Every operation checks that its operands are Bigs: a number, text or a fraction is refused.
+    add: (a, b) => round(two('add', a, b).plus(b)),
+    sub: (a, b) => round(two('sub', a, b).minus(b)),
+    mul: (a, b) => round(two('mul', a, b).times(b)),
     div(a, b) {
-      if (b.c[0] === 0) throw divisionByZero(`${name}.div(a, b)`, `b is zero (a = ${a.toString()})`);
+      if (two('div', a, b) && b.c[0] === 0) throw divisionByZero(`${name}.div(a, b)`, `b is zero (a = ${a.toString()})`);
       const pa = parts(a);
       const pb = parts(b);
       return divide(pa.coef, pa.exp, pb.coef, pb.exp);
     },
-    neg: (a) => a.neg(),
-    abs: (a) => a.abs(),
-    cmp: (a, b) => a.cmp(b) as -1 | 0 | 1,
-    eq: (a, b) => a.eq(b),
-    isZero: (a) => a.c[0] === 0,
-    sign: (a) => (a.c[0] === 0 ? 0 : (a.s as -1 | 1)),
+    neg: (a) => one('neg', a).neg(),
+    abs: (a) => one('abs', a).abs(),
+    cmp: (a, b) => two('cmp', a, b).cmp(b) as -1 | 0 | 1,
+    eq: (a, b) => two('eq', a, b).eq(b),
+    isZero: (a) => one('isZero', a).c[0] === 0,
+    sign: (a) => (one('sign', a).c[0] === 0 ? 0 : (a.s as -1 | 1)),
     sqrt(a) {
-      if (a.c[0] === 0) return A.zero;
+      if (one('sqrt', a).c[0] === 0) return A.zero;
       if (a.s < 0) throw noRealSolution(`${name}.sqrt(a)`, `a = ${a.toString()} is negative`);
       let { coef, exp } = parts(a);
       // Make exp even and coef large enough for digits + 2 digits of root.
@@ -150,13 +151,13 @@ export function decimal(digits = 34): DecimalArithmetic {
       return withSticky(r, exp / 2, r * r !== coef);
     },
     toNumber(a) {
-      const v = Number(a.toString());
+      const v = Number(one('toNumber', a).toString());
       if (!Number.isFinite(v)) throw notFinite(`${name}.toNumber(a)`, `${a.toString()} is beyond the range of a JS number`);
       return v;
     },
-    toString: (a) => a.toString(),
+    toString: (a) => one('toString', a).toString(),
     toPrecision(a, d) {
-      const p = parts(a);
+      const p = parts(one('toPrecision', a));
       return p.exp >= 0 ? ratioToPrecision(p.coef * pow10(p.exp), 1n, d) : ratioToPrecision(p.coef, pow10(-p.exp), d);
     },
     get pi() {

@@ -5,7 +5,7 @@
  *
  * @module arithmetic
  */
-import { MAX_INPUT_LENGTH, show, invalidNumber, inputTooLong, divisionByZero, invalidArgument, textTooLong } from '../errors.js';
+import { MAX_INPUT_LENGTH, show, invalidNumber, inputTooLong, divisionByZero, invalidArgument, textTooLong, notAValue } from '../errors.js';
 
 /**
  * Largest decimal exponent accepted in numeric text (`1e1000` is read, `1e1001` refused),
@@ -215,4 +215,23 @@ export function ratioToPrecision(n: bigint, d: bigint, digits: number): string {
     out = `0.${'0'.repeat(-e - 1)}${s}`;
   }
   return neg ? `-${out}` : out;
+}
+
+/**
+ * The operand checks of an arithmetic: `one(op, a)` and `two(op, a, b)` return `a` once the
+ * operands pass `is`, and otherwise throw `INVALID_NUMBER` naming `name.op(…)` (a JS number,
+ * text or a value of another arithmetic is refused, never computed with).
+ * @internal
+ */
+export function operandChecks<V>(name: string, is: (x: unknown) => boolean) {
+  return {
+    one(op: string, a: V): V {
+      if (is(a)) return a;
+      throw notAValue(name, op, a);
+    },
+    two(op: string, a: V, b: V): V {
+      if (is(a) && is(b)) return a;
+      throw notAValue(name, op, is(a) ? b : a);
+    },
+  };
 }

@@ -7,7 +7,7 @@
 import Fraction from 'fraction.js';
 import { show, divisionByZero, noRealSolution, notFinite, zeroVectorAngle } from '../errors.js';
 import type { Arithmetic, Numeric } from './types.js';
-import { isqrt, ratioToNumber, ratioToPrecision, readInput } from './exact.js';
+import { isqrt, ratioToNumber, ratioToPrecision, readInput, operandChecks } from './exact.js';
 import { decimalElementary } from './elementary.js';
 import { rationalKernels } from './fused-rational.js';
 
@@ -55,6 +55,12 @@ function toElementary(a: Rational): string {
   return ratioToPrecision(signed(a), a.d, RATIONAL_TRANSCENDENTAL_DIGITS + 8);
 }
 
+// A fraction.js value by shape (bigint numerator and denominator), so that fractions made by a
+// second copy of fraction.js (a program loading both the CommonJS and the ES build) still pass.
+const isFraction = (x: unknown): boolean => typeof (x as Rational | null)?.d === 'bigint' && typeof (x as Rational).n === 'bigint';
+
+const { one, two } = /* @__PURE__ */ operandChecks<Rational>('rational', isFraction);
+
 /**
  * The exact arithmetic. + − × ÷ never round; `sqrt` is exact or `undefined`; a JS
  * number is read through its shortest round-trip decimal, so `0.1` is exactly 1/10.
@@ -81,24 +87,26 @@ export const rational: RationalArithmetic = /* @__PURE__ */ Object.freeze<Ration
   is(x: unknown): x is Rational {
     return x instanceof Fraction;
   },
-  add: (a, b) => a.add(b),
-  sub: (a, b) => a.sub(b),
-  mul: (a, b) => a.mul(b),
+  // Every operation checks that its operands are fractions (two instanceof tests, next to a
+  // gcd): a JS number or a value of another arithmetic is refused, never computed with.
+  add: (a, b) => two('add', a, b).add(b),
+  sub: (a, b) => two('sub', a, b).sub(b),
+  mul: (a, b) => two('mul', a, b).mul(b),
   div(a, b) {
-    if (b.n === 0n) throw divisionByZero('rational.div(a, b)', `b is zero (a = ${a.toFraction()})`);
+    if (two('div', a, b) && b.n === 0n) throw divisionByZero('rational.div(a, b)', `b is zero (a = ${a.toFraction()})`);
     return a.div(b);
   },
-  neg: (a) => a.neg(),
-  abs: (a) => a.abs(),
+  neg: (a) => one('neg', a).neg(),
+  abs: (a) => one('abs', a).abs(),
   cmp(a, b) {
-    const c = a.compare(b);
+    const c = two('cmp', a, b).compare(b);
     return c < 0 ? -1 : c > 0 ? 1 : 0;
   },
-  eq: (a, b) => a.s === b.s && a.n === b.n && a.d === b.d,
-  isZero: (a) => a.n === 0n,
-  sign: (a) => (a.n === 0n ? 0 : a.s < 0n ? -1 : 1),
+  eq: (a, b) => two('eq', a, b).s === b.s && a.n === b.n && a.d === b.d,
+  isZero: (a) => one('isZero', a).n === 0n,
+  sign: (a) => (one('sign', a).n === 0n ? 0 : a.s < 0n ? -1 : 1),
   sqrt(a) {
-    if (a.n === 0n) return ZERO;
+    if (one('sqrt', a).n === 0n) return ZERO;
     if (a.s < 0n) throw noRealSolution('rational.sqrt(a)', `a = ${a.toFraction()} is negative`);
     const rn = isqrt(a.n);
     if (rn * rn !== a.n) return undefined;
@@ -107,12 +115,12 @@ export const rational: RationalArithmetic = /* @__PURE__ */ Object.freeze<Ration
     return frac(rn, rd);
   },
   toNumber(a) {
-    const v = ratioToNumber(signed(a), a.d);
+    const v = ratioToNumber(signed(one('toNumber', a)), a.d);
     if (!Number.isFinite(v)) throw notFinite('rational.toNumber(a)', `${show(a.toFraction())} is beyond the range of a JS number`);
     return v;
   },
-  toString: (a) => a.toFraction(),
-  toPrecision: (a, digits) => ratioToPrecision(signed(a), a.d, digits),
+  toString: (a) => one('toString', a).toFraction(),
+  toPrecision: (a, digits) => ratioToPrecision(signed(one('toPrecision', a)), a.d, digits),
   get pi() {
     return fromElementary(elementary.pi);
   },

@@ -5,7 +5,7 @@
  * @module elevation
  */
 import { QuadspreadError, show, coincidentPoints, invalidArgument, invalidAngle, verticalSight, inconsistentReadings } from '../errors.js';
-import { checkObject } from './input.js';
+import { checkObject, PLUMB_SIGHT } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Root } from '../geometry/surd.js';
 import { solveTriangle } from '../geometry/solve-triangle.js';
@@ -147,7 +147,7 @@ export function heightFromBase<T, E extends boolean>(
     const r = readings[i];
     if (r === undefined) { heights.push(undefined); continue; }
     const c = A.sub(one, r.spread);
-    if (A.isZero(c)) throw verticalSight(`${w}.vertical[${i}]`, 'a vertical spread of 1 is a plumb sight: it meets no point off the station');
+    if (A.isZero(c)) throw verticalSight(`${w}.vertical[${i}]`, PLUMB_SIGHT);
     heights.push(R.mul(Qs[i]!, A.div(r.spread, c))); // H = Q·R/(1 − R)
     weights.push(A.mul(A.mul(c, c), ss[i]!));
   }

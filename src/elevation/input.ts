@@ -14,3 +14,6 @@ import { expectObject } from '../geometry/validate.js';
 export function checkObject(x: unknown, where: string): void {
   expectObject(x, where, 'an object of named inputs');
 }
+
+/** The message for a vertical spread of 1 where the point must lie off the station. @internal */
+export const PLUMB_SIGHT = 'a vertical spread of 1 is a plumb sight: it meets no point off the station';

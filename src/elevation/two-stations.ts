@@ -4,7 +4,7 @@
  * @module elevation
  */
 import { invalidArgument, coincidentPoints, verticalSight, inconsistentReadings } from '../errors.js';
-import { checkObject } from './input.js';
+import { checkObject, PLUMB_SIGHT } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { quadrance } from '../geometry/quadrance.js';
@@ -86,7 +86,7 @@ export function heightFromTwoStations<T>(
     if (A.isZero(Q)) throw coincidentPoints(`${w}.stations[${i}]`, 'the station is at the foot of the point: its reading is a plumb sight');
     const v = readVertical(A, input.vertical[i]!, `${w}.vertical[${i}]`);
     const c = A.sub(A.one, v.spread);
-    if (A.isZero(c)) throw verticalSight(`${w}.vertical[${i}]`, 'a vertical spread of 1 is a plumb sight: it meets no point off the station');
+    if (A.isZero(c)) throw verticalSight(`${w}.vertical[${i}]`, PLUMB_SIGHT);
     H.push(heightFromReading(A, { horizontal: Q, vertical: v }));
     weights.push(A.div(A.mul(c, c), Q)); // w = (1 − R)²/Q (derived: dh = D/(1 − R)·dα)
     signs.push(v.sign);

@@ -312,17 +312,10 @@ function tm<T>(
 ): GridPoint<T> & { xi0: T } {
   const where = wantGrid ? 'transverseMercator' : 'transverseMercatorFactors';
   expectObject(point, `${where}(point)`, '{ lat, lon }');
-  expectObject(projection, `${where}(projection)`, '{ lon0, k0, ellipsoid }');
-  const ell = readEllipsoid(projection.ellipsoid, `${where}(projection.ellipsoid)`);
+  const { ell, k0, lon0, lat0, E0, N0 } = readProjection(A, projection, where);
   const E = ellipsoidParameters(A, ell);
-  const k0 = readNumber(A, projection.k0 ?? 1, `${where}(projection.k0)`);
-  if (A.sign(k0) <= 0) throw invalidArgument(`${where}(projection.k0)`, `${show(projection.k0)} is not positive`);
   const lat = readLatitude(A, point.lat, `${where}(point.lat)`);
   const lon = readLongitude(A, point.lon, `${where}(point.lon)`);
-  const lon0 = readLongitude(A, projection.lon0 as Numeric<T>, `${where}(projection.lon0)`);
-  const lat0 = readLatitude(A, (projection.lat0 ?? 0) as Numeric<T>, `${where}(projection.lat0)`);
-  const E0 = readNumber(A, (projection.falseEasting ?? 0) as Numeric<T>, `${where}(projection.falseEasting)`);
-  const N0 = readNumber(A, (projection.falseNorthing ?? 0) as Numeric<T>, `${where}(projection.falseNorthing)`);
   if (A.exact) {
     // An approximation in any case: evaluate in decimal with 8 guard digits and read the
     // result back exactly, so that exact fractions do not grow through the series.
@@ -347,6 +340,23 @@ function tm<T>(
     k,
     convergence,
     xi0,
+  };
+}
+
+/** The projection's members, read and checked, naming `where(projection.member)` on error. */
+function readProjection<T>(A: Arithmetic<T>, projection: TransverseMercatorGrid, where: string) {
+  expectObject(projection, `${where}(projection)`, '{ lon0, k0, ellipsoid }');
+  const at = (k: string): string => `${where}(projection.${k})`;
+  const ell = readEllipsoid(projection.ellipsoid, at('ellipsoid'));
+  const k0 = readNumber(A, (projection.k0 ?? 1) as Numeric<T>, at('k0'));
+  if (A.sign(k0) <= 0) throw invalidArgument(at('k0'), `${show(projection.k0)} is not positive`);
+  return {
+    ell,
+    k0,
+    lon0: readLongitude(A, projection.lon0 as Numeric<T>, at('lon0')),
+    lat0: readLatitude(A, (projection.lat0 ?? 0) as Numeric<T>, at('lat0')),
+    E0: readNumber(A, (projection.falseEasting ?? 0) as Numeric<T>, at('falseEasting')),
+    N0: readNumber(A, (projection.falseNorthing ?? 0) as Numeric<T>, at('falseNorthing')),
   };
 }
 
@@ -453,8 +463,7 @@ export function transverseMercatorInverse<T>(
 ): { lat: T; lon: T; k: T; convergence: T } {
   const where = 'transverseMercatorInverse';
   expectObject(point, `${where}(point)`, '{ E, N }');
-  expectObject(projection, `${where}(projection)`, '{ lon0, k0, ellipsoid }');
-  const ell = readEllipsoid(projection.ellipsoid, `${where}(projection.ellipsoid)`);
+  const { ell, k0, lon0, lat0, E0, N0 } = readProjection(A, projection, where);
   const Et = readNumber(A, point.E, `${where}(point.E)`);
   const Nt = readNumber(A, point.N, `${where}(point.N)`);
   if (A.exact) {
@@ -463,12 +472,6 @@ export function transverseMercatorInverse<T>(
     return { lat: back(r.lat), lon: back(r.lon), k: back(r.k), convergence: back(r.convergence) };
   }
   const P = ellipsoidParameters(A, ell);
-  const k0 = readNumber(A, (projection.k0 ?? 1) as Numeric<T>, `${where}(projection.k0)`);
-  if (A.sign(k0) <= 0) throw invalidArgument(`${where}(projection.k0)`, `${show(projection.k0)} is not positive`);
-  const lon0 = readLongitude(A, projection.lon0 as Numeric<T>, `${where}(projection.lon0)`);
-  const lat0 = readLatitude(A, (projection.lat0 ?? 0) as Numeric<T>, `${where}(projection.lat0)`);
-  const E0 = readNumber(A, (projection.falseEasting ?? 0) as Numeric<T>, `${where}(projection.falseEasting)`);
-  const N0 = readNumber(A, (projection.falseNorthing ?? 0) as Numeric<T>, `${where}(projection.falseNorthing)`);
   const perRad = A.div(A.from(180), A.pi); // degrees per radian
   const ka = A.mul(k0, P.a);
   // Start on a sphere of radius a: φ ≈ φ0 + (N − N0)/(k0 a), λ ≈ λ0 + (E − E0)/(k0 a cos φ).

@@ -225,3 +225,49 @@ describe('the arithmetic objects', () => {
     }).toThrow(TypeError);
   });
 });
+
+describe('rational and decimal operations take only their own values', () => {
+  const R = rational;
+  const D = decimal(20);
+  const codeOf = (f: () => unknown): string => {
+    try {
+      f();
+      return 'no error';
+    } catch (e) {
+      return e instanceof QuadspreadError ? e.code : `not a QuadspreadError: ${String(e)}`;
+    }
+  };
+  const cases: [string, () => unknown][] = [
+    ['rational.add of a JS number', () => R.add(R.one, 2 as never)],
+    ['rational.sub with a JS number first', () => R.sub(3 as never, R.one)],
+    ['rational.mul of a Big', () => R.mul(R.one, D.from('0.1') as never)],
+    ['rational.isZero of a Big (would read as "not zero")', () => R.isZero(D.zero as never)],
+    ['rational.eq of text', () => R.eq(R.one, '1' as never)],
+    ['rational.toString of a number', () => R.toString(1 as never)],
+    ['decimal.add of a fraction', () => D.add(D.one, R.from('1/3') as never)],
+    ['decimal.cmp of a JS number', () => D.cmp(D.one, 1 as never)],
+    ['decimal.sqrt of text', () => D.sqrt('4' as never)],
+    ['decimal.sign of undefined', () => D.sign(undefined as never)],
+  ];
+  it.each(cases)('%s: INVALID_NUMBER, not a TypeError or a value of the wrong kind', (_n, f) => {
+    expect(codeOf(f)).toBe('INVALID_NUMBER');
+  });
+
+  it('names the operation and the value', () => {
+    expect(() => R.add(R.one, 2 as never)).toThrow(/^quadspread INVALID_NUMBER: rational\.add\(…\): 2 \(number\) is not a rational value/);
+  });
+
+  it('a point of plain numbers in rational is refused by the geometry primitives (they take values)', async () => {
+    const { quadrance, point } = await import('../../src/geometry/index.js');
+    expect(codeOf(() => quadrance(R, { x: 0, y: 0 } as never, { x: 3, y: 4 } as never))).toBe('INVALID_NUMBER');
+    expect(codeOf(() => quadrance(R, point(R, 0, 0), point(D, '0.1', 0) as never))).toBe('INVALID_NUMBER');
+    expect(R.toString(quadrance(R, point(R, 0, 0), point(R, 3, 4)))).toBe('25');
+  });
+
+  it('a Big of another decimal(n) is read at its full value (the operations are exact, then round)', () => {
+    const D30 = decimal(30);
+    const third30 = D30.div(D30.one, D30.from(3)); // 0.333… (30 digits)
+    // at 20 digits: 1 + 0.333…(30 digits) = 1.3333333333333333333 (20 digits), as from text
+    expect(D.toString(D.add(D.one, third30))).toBe('1.3333333333333333333');
+  });
+});
