@@ -5,8 +5,8 @@
  *
  * @module cli
  */
-import { QuadspreadError, solveTriangle, spreadFromDegrees, triangle, isSurd } from '../../index.js';
-import type { Arithmetic } from '../../index.js';
+import { QuadspreadError, solveTriangle, spreadFromDegrees, triangle, isSurd, surd } from '../../index.js';
+import type { Arithmetic, Surd, Triangle } from '../../index.js';
 import { JobInvalid } from '../failure.js';
 import type { Env, RawQuantity, TaskKind, Value } from '../task.js';
 import { inClosed, inRange, positive, readAngle, readLength, readNumber } from '../values.js';
@@ -108,7 +108,21 @@ export const triangleTask: TaskKind = {
           const x = env.get(k.input);
           given[k.key] = k.form === 'side' ? A.mul(x, x) : k.form === 'angle' ? spreadFromDegrees(A, x) : x;
         }
-        const solutions = solveTriangle(A, given);
+        let solutions = solveTriangle(A, given);
+        // A spread does not tell an angle from its supplement, but the job gave the angle:
+        // keep the triangles whose angle there is acute, right or obtuse as given, by the sign
+        // of Qj + Qk − Qi (the cross law: Qi = Qj + Qk − 2√(Qj Qk)·cos θ).
+        const angles = known.filter((k) => k.form === 'angle');
+        if (solutions.length > 1 && angles.length > 0) {
+          const kept = solutions.filter((t) =>
+            angles.every((k) => {
+              const i = Number(k.key[1]) as 1 | 2 | 3;
+              const want = Math.sign(90 - env.num(env.get(k.input)));
+              return want === 0 || crossSign(A, t, i) === want;
+            }),
+          );
+          if (kept.length > 0) solutions = kept;
+        }
         if (solutions.length === 0) {
           throw new QuadspreadError('NO_REAL_SOLUTION', 'triangle task', `no proper triangle has ${known.map((k) => `${k.key} = ${A.toPrecision(given[k.key]!, 8)}`).join(', ')}`);
         }
@@ -129,6 +143,20 @@ export const triangleTask: TaskKind = {
     };
   },
 };
+
+/** The sign of Qj + Qk − Qi in triangle t ({i, j, k} = {1, 2, 3}): + acute at Ai, 0 right, − obtuse. */
+function crossSign<V>(A: Arithmetic<V, boolean>, t: Triangle<Value<V>>, i: 1 | 2 | 3): number {
+  const Q = [t.Q1, t.Q2, t.Q3];
+  const [qi, qj, qk] = [Q[i - 1]!, Q[i % 3]!, Q[(i + 1) % 3]!];
+  if (A.exact) {
+    // Exact surds: the sign is decided exactly.
+    const asSurd = (x: Value<V>): Surd<V> => (isSurd(x) ? x : surd(A, x as V));
+    return asSurd(qj).add(qk).sub(qi).sign();
+  }
+  const d = A.toNumber(A.sub(A.add(qj as V, qk as V), qi as V));
+  // Rounding: within 1e-9 of the sides' scale counts as a right angle.
+  return Math.abs(d) <= 1e-9 * (Math.abs(A.toNumber(qj as V)) + Math.abs(A.toNumber(qk as V))) ? 0 : Math.sign(d);
+}
 
 function triangleSketch(title: string, p: { x: number; y: number }[], names: string[], caption?: string) {
   return {
