@@ -43,7 +43,7 @@ export function shownInput<T>(A: Arithmetic<T>, x: unknown, v: T): string {
  */
 export function finiteResult<T>(r: T, where: string): T {
   const v = typeof r === 'object' && r !== null ? (r as { value?: unknown }).value : r;
-  if (typeof v === 'number' && v - v !== 0) throw notFinite(where, `the result ${show(v)} is not finite: float overflowed (use decimal(n) for values this large)`);
+  if (typeof v === 'number' && v - v !== 0) throw notFinite(where, `the result ${show(v)} is not finite: float overflowed (use decimal(n) for values this large) or an input was not a number`);
   return r;
 }
 
