@@ -78,6 +78,7 @@ function readDecimal(text: string, where: string, original: string, allowSign: b
  * ```
  */
 export function readRatio(text: string, where: string): Ratio {
+  if (typeof text !== 'string') throw invalidNumber(where, `${show(text)} is not text`);
   if (text.length > MAX_INPUT_LENGTH) {
     throw textTooLong(where, text.length);
   }

@@ -7,7 +7,7 @@ import { QuadspreadError, show } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { checkLengthUnit, METRES_PER_UNIT } from '../readings/length.js';
 import type { LengthUnit } from '../readings/length.js';
-import { readNumber } from '../geometry/validate.js';
+import { expectObject, readNumber } from '../geometry/validate.js';
 import { readArray, readPoint, sqrtValue } from './internal.js';
 import type { Point } from '../geometry/point.js';
 import type { PointInput } from './internal.js';
@@ -208,6 +208,7 @@ export function polygonArea<T>(
   options: { readonly unit?: LengthUnit } = {},
 ): PolygonArea<T> {
   const where = 'polygonArea(A, points, options)';
+  expectObject(options, `${where} options`, '{ unit? }');
   const u = A.from(METRES_PER_UNIT[checkLengthUnit(options.unit ?? 'm', `${where} unit`)]);
   let signed: T;
   let per: T;

@@ -3,7 +3,7 @@
 // (e.g. 1.5e-3 = 15/10000 = 3/2000); they are not produced by the code under test.
 import { describe, expect, it } from 'vitest';
 import Fraction from 'fraction.js';
-import { rational, decimal, float, QuadspreadError, MAX_INPUT_LENGTH } from '../../src/index.js';
+import { rational, decimal, float, QuadspreadError, MAX_INPUT_LENGTH, readRatio } from '../../src/index.js';
 import type { Arithmetic } from '../../src/index.js';
 
 interface Case {
@@ -177,5 +177,21 @@ describe('decimal.from(x)', () => {
   it('refuses a value of another arithmetic', () => {
     expect(() => decimal(10).from(rational.from(1) as never)).toThrow(QuadspreadError);
     expect(() => rational.from(decimal(10).one as never)).toThrow(QuadspreadError);
+  });
+});
+
+describe('readRatio', () => {
+  it('reads decimal text exactly (1.5e-3 = 15/10000)', () => {
+    const r = readRatio('1.5e-3', 'test');
+    expect(`${r.n}/${r.d}`).toBe('15/10000');
+  });
+  it.each([[undefined], [null], [12], [{}]])('refuses %s, which is not text, with INVALID_NUMBER', (x) => {
+    let c = 'no error';
+    try {
+      readRatio(x as never, 'test');
+    } catch (e) {
+      c = e instanceof QuadspreadError ? e.code : `not a QuadspreadError: ${String(e)}`;
+    }
+    expect(c).toBe('INVALID_NUMBER');
   });
 });

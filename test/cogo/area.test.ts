@@ -95,6 +95,10 @@ describe('convertArea(A, value, from, to) and polygonArea', () => {
     expect(code(() => polygonArea(rational, [{ x: 0, y: 0 }, { x: 1, y: 0 }, { x: 0, y: 1 }], { unit: 'yd' as never }))).toBe('INVALID_UNIT');
   });
 
+  it('refuses options that are not an object with INVALID_ARGUMENT (not a TypeError)', () => {
+    expect(code(() => polygonArea(rational, [{ x: 0, y: 0 }, { x: 1, y: 0 }, { x: 0, y: 1 }], null as never))).toBe('INVALID_ARGUMENT');
+  });
+
   it('reports a 66 ft × 660 ft rectangle (one furlong by one chain) as 1 acre, counterclockwise', () => {
     const r = polygonArea(rational, [{ x: 0, y: 0 }, { x: 66, y: 0 }, { x: 66, y: 660 }, { x: 0, y: 660 }], { unit: 'ft' });
     expect(r.orientation).toBe('counterclockwise');
