@@ -12,7 +12,7 @@ import type { Root } from '../geometry/surd.js';
 import { formatDms } from '../readings/dms.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { azimuthToQuadrant, readAzimuth } from './bearing.js';
-import { readNumber } from '../geometry/validate.js';
+import { readNumber, finiteResult } from '../geometry/validate.js';
 import { readPoint } from './internal.js';
 import type { PointInput } from './internal.js';
 
@@ -132,5 +132,5 @@ export function forward<T>(A: Arithmetic<T, boolean>, P: PointInput<T>, bearing:
   if (A.sign(d) < 0) throw invalidArgument(`${where} distance`, `${A.toString(d)} is negative`);
   const { sin, cos } = sinCosDegrees(A, az);
   // Departure d·sin(azimuth), latitude d·cos(azimuth).
-  return { x: A.add(p.x, A.mul(d, sin)), y: A.add(p.y, A.mul(d, cos)) };
+  return { x: finiteResult(A.add(p.x, A.mul(d, sin)), where), y: finiteResult(A.add(p.y, A.mul(d, cos)), where) };
 }

@@ -404,7 +404,7 @@ function positive<T>(A: Arithmetic<T>, x: Numeric<T>, where: string): T {
  * ```
  */
 export function groundToGrid<T>(A: Arithmetic<T>, ground: Numeric<T>, factor: Numeric<T>): T {
-  return A.mul(readNumber(A, ground, 'groundToGrid(ground)'), positive(A, factor, 'groundToGrid(factor)'));
+  return finiteResult(A.mul(readNumber(A, ground, 'groundToGrid(ground)'), positive(A, factor, 'groundToGrid(factor)')), 'groundToGrid(ground, factor)');
 }
 
 /**

@@ -36,6 +36,8 @@ const calls = (s: number, m: Api): [string, () => unknown][] => [
   ['curvatureRefraction', () => m.curvatureRefraction!(1000 * s)],
   ['inverse', () => m.inverse!(P(0, 0), P(3 * s, 4 * s))],
   ['forward', () => m.forward!(P(100 * s, 200 * s), 'S 30° E', 10 * s)],
+  ['forward (near the end of the range)', () => m.forward!(P(1.2e308, 0), 90, 1e308 / (1 + 1 / s))],
+  ['groundToGrid (near the end of the range)', () => m.groundToGrid!(1e308, 2 - 1 / s)],
   ['intersectLines', () => m.intersectLines!(P(0, 0), P(s, s), P(0, s), P(s, 0))],
   ['intersectBearings', () => m.intersectBearings!(P(0, 0), 45, P(10 * s, 0), 315)],
   ['intersectCircles', () => m.intersectCircles!({ center: P(0, 0), radius: 5 * s }, { center: P(6 * s, 0), radius: 5 * s })],

@@ -119,6 +119,7 @@ describe('quadspread run tells a bad reading (exit 2) from a computation with no
   const P = points;
   it.each([
     ['a spread above 1', { tasks: [{ kind: 'triangle', known: { Q1: 25, Q2: 16, s1: 2 } }] }, 2, 'tasks[0].known.s1: 2 is not a valid spread'],
+    ['latitude and longitude swapped (a W on the latitude)', { tasks: [{ kind: 'geodetic', geodetic: { lat: `1°39'51.9920"W`, lon: `53°36'43.1653"N` } }] }, 2, 'tasks[0].geodetic.lat: "1°39\'51.9920\\"W" carries W, but a latitude takes N or S'],
     ['a horizontal angle of 400°', { points: P, tasks: [{ kind: 'resection', control: ['A', 'B', 'C'], angles: ['400', '10'] }] }, 2, 'tasks[0].angles[0]: 400° is not a valid clockwise horizontal angle'],
     ['an interior angle of 0°', { tasks: [{ kind: 'base-height', base: 100, stations: [{ angle: 0, vertical: 10 }, { angle: 30 }] }] }, 2, 'tasks[0].stations[0].angle: 0° is not a valid interior angle'],
     ['a levelling run that starts with a foresight', { tasks: [{ kind: 'levelling', start: 10, sights: [{ fs: 1 }, { bs: 2 }] }] }, 2, 'tasks[0].sights[0]: the first row must be a backsight alone'],

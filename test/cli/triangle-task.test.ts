@@ -22,14 +22,19 @@ beforeAll(async () => {
       { kind: 'triangle', name: 'included acute', known: { side2: '120.5 m', side3: 85.3, angle1: `47°12'30"` } },
       { kind: 'triangle', name: 'included obtuse', known: { side2: '120.5 m', side3: 85.3, angle1: `132°47'30"` } },
       { kind: 'triangle', name: 'two sides and an opposite angle', known: { side1: 5, side2: 7, angle1: 30 } },
+      { kind: 'triangle', name: 'long and short side, nearly right', known: { side1: 3500, side2: 1, angle3: 89.9999 } },
     ],
   };
   const file = join(dir, 'job.json');
   writeFileSync(file, JSON.stringify(job));
-  const r = cli(['run', file, '--format', 'json', '--digits', '12']);
-  expect(r.code).toBe(0);
-  tasks = (JSON.parse(r.stdout) as { tasks: T[] }).tasks;
+  for (const arithmetic of ['float', 'rational']) {
+    const r = cli(['run', file, '--format', 'json', '--digits', '12', '--arithmetic', arithmetic]);
+    expect(r.code).toBe(0);
+    reports[arithmetic] = (JSON.parse(r.stdout) as { tasks: T[] }).tasks;
+  }
+  tasks = reports.float!;
 });
+const reports: Record<string, T[]> = {};
 afterAll(cleanUp);
 
 const value = (t: T, name: string) => Number(t.results.find((r) => r.name === name)!.value);
@@ -57,5 +62,15 @@ describe('triangle task with a given angle', () => {
     expect(got[0]).toBeCloseTo(roots[0]!, 9);
     expect(got[1]).toBeCloseTo(roots[1]!, 9);
     expect(t.notes.join(' ')).toMatch(/Two triangles fit/);
+  });
+
+  it('a nearly right angle between a long and a short side: one triangle in float and in rational alike', () => {
+    // c² = a² + b² − 2ab·cos γ with a = 3500, b = 1, γ = 89.9999° (law of cosines, Math.cos)
+    const want = 3500 ** 2 + 1 - 2 * 3500 * Math.cos((89.9999 * Math.PI) / 180);
+    for (const arithmetic of ['float', 'rational']) {
+      const t = reports[arithmetic]![3]!;
+      expect(t.results.some((r) => r.name.endsWith('.2')), arithmetic).toBe(false);
+      expect(value(t, 'Q3')).toBeCloseTo(want, 3); // the report gives 12 significant digits
+    }
   });
 });

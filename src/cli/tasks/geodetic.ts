@@ -33,6 +33,8 @@ export const geodeticTask: TaskKind = {
     const ellipsoid = (task.ellipsoid as string | undefined) ?? 'GRS80';
     if (task.geodetic !== undefined) {
       const g = task.geodetic as Record<string, unknown>;
+      hemisphere(g.lat, `${path}.geodetic.lat`, 'NS', 'latitude');
+      hemisphere(g.lon, `${path}.geodetic.lon`, 'EW', 'longitude');
       const lat = readAngle(g.lat, `${path}.geodetic.lat`, 'latitude', 'latitude');
       if (rational.cmp(rational.abs(rational.from(lat.value)), rational.from(90)) > 0) throw new JobInvalid(`${path}.geodetic.lat`, `${JSON.stringify(g.lat)} is not a valid latitude: beyond ±90°`);
       const lon = readAngle(g.lon, `${path}.geodetic.lon`, 'longitude', 'longitude');
@@ -93,4 +95,20 @@ function computationChecks<V>(checks: RawCheck<V>[], notes: string[], agrees: st
   const failed = checks.filter((c) => !c.pass);
   if (failed.length === 0) notes.push(`Computation check: ${agrees}; this tests the computation, not the coordinates.`);
   return { checks: failed };
+}
+
+/**
+ * Refuses a hemisphere letter of the other axis (E or W on a latitude, N or S on a longitude):
+ * latitude and longitude swapped. The runner reads angles to degrees itself, so the library's
+ * own check of the letters never sees the text.
+ */
+function hemisphere(raw: unknown, path: string, allowed: string, what: string): void {
+  const text = typeof raw === 'object' && raw !== null ? (raw as { value?: unknown }).value : raw;
+  if (typeof text !== 'string') return;
+  for (const m of [/^\s*([NSEW])/i.exec(text), /([NSEW])\s*$/i.exec(text)]) {
+    const letter = m?.[1]!.toUpperCase();
+    if (letter !== undefined && !allowed.includes(letter)) {
+      throw new JobInvalid(path, `${JSON.stringify(text)} carries ${letter}, but a ${what} takes ${allowed[0]} or ${allowed[1]}: are latitude and longitude swapped?`);
+    }
+  }
 }

@@ -117,8 +117,10 @@ export const triangleTask: TaskKind = {
           const kept = solutions.filter((t) =>
             angles.every((k) => {
               const i = Number(k.key[1]) as 1 | 2 | 3;
-              const want = Math.sign(90 - env.num(env.get(k.input)));
-              return want === 0 || crossSign(A, t, i) === want;
+              // cos θ of the given angle; within 1e-9 of a right angle neither triangle is
+              // preferred (the same rule in every arithmetic, so their reports agree).
+              const cos = Math.cos((env.num(env.get(k.input)) * Math.PI) / 180);
+              return Math.abs(cos) <= 1e-9 || crossSign(A, t, i) === Math.sign(cos);
             }),
           );
           if (kept.length > 0) solutions = kept;
@@ -127,7 +129,7 @@ export const triangleTask: TaskKind = {
           throw new QuadspreadError('NO_REAL_SOLUTION', 'triangle task', `no proper triangle has ${known.map((k) => `${k.key} = ${A.toPrecision(given[k.key]!, 8)}`).join(', ')}`);
         }
         const results = solutions.flatMap((t, i) => measures(env, t as unknown as Record<string, Value<typeof A.zero>>, unit, solutions.length > 1 ? `.${i + 1}` : ''));
-        const notes = solutions.length > 1 ? [`Two triangles fit these measures (names ending .1 and .2; the one that needed the minus sign of the square root first): a spread does not tell an angle from its supplement, so say which one the field work saw.`] : [];
+        const notes = solutions.length > 1 ? [`Two triangles fit these measures (names ending .1 and .2; the one that needed the minus sign of the square root first): an angle that was not given can be acute or obtuse (a spread does not tell an angle from its supplement), so say which one the field work saw.`] : [];
         let sketch;
         if (env.drawing) {
           sketch = solutions.map((t, i) => {
@@ -153,9 +155,9 @@ function crossSign<V>(A: Arithmetic<V, boolean>, t: Triangle<Value<V>>, i: 1 | 2
     const asSurd = (x: Value<V>): Surd<V> => (isSurd(x) ? x : surd(A, x as V));
     return asSurd(qj).add(qk).sub(qi).sign();
   }
+  // Qj + Qk − Qi = 2√(Qj Qk)·cos θ: its sign, counted as 0 where |cos θ| ≤ 1e-9 (rounding).
   const d = A.toNumber(A.sub(A.add(qj as V, qk as V), qi as V));
-  // Rounding: within 1e-9 of the sides' scale counts as a right angle.
-  return Math.abs(d) <= 1e-9 * (Math.abs(A.toNumber(qj as V)) + Math.abs(A.toNumber(qk as V))) ? 0 : Math.sign(d);
+  return Math.abs(d) <= 2e-9 * Math.sqrt(A.toNumber(qj as V) * A.toNumber(qk as V)) ? 0 : Math.sign(d);
 }
 
 function triangleSketch(title: string, p: { x: number; y: number }[], names: string[], caption?: string) {
