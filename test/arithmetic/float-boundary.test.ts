@@ -5,13 +5,7 @@
 // unchecked for speed, so this is what catches a result that is a bare sum or product.
 // Run in float, in uncertain(float), and in the float-specialised copy (quadspread/float).
 import { describe, expect, it, beforeAll } from 'vitest';
-import { build } from 'esbuild';
-import { mkdtempSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import path from 'node:path';
-import { pathToFileURL, fileURLToPath } from 'node:url';
-// @ts-expect-error: a plain ES module without types
-import { floatSpecialize } from '../../scripts/float-specialize.mjs';
+import { loadFloatEntry } from '../float-entry.js';
 import * as q from '../../src/index.js';
 
 type Api = Record<string, (...a: any[]) => any>;
@@ -132,15 +126,7 @@ describe('float: finite results or a QuadspreadError, at any scale', () => {
   describe('quadspread/float (float-specialised)', () => {
     let bound: Api;
     beforeAll(async () => {
-      const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
-      const entry = path.join(root, 'src', 'float.ts');
-      const out = await build({
-        entryPoints: [entry], bundle: true, write: false, format: 'esm', platform: 'node', logLevel: 'silent',
-        plugins: [floatSpecialize({ entries: [entry], srcDir: path.join(root, 'src') })],
-      });
-      const file = path.join(mkdtempSync(path.join(tmpdir(), 'qs-boundary-')), 'float.mjs');
-      writeFileSync(file, out.outputFiles[0]!.text);
-      bound = (await import(pathToFileURL(file).href)) as Api;
+      bound = (await loadFloatEntry()) as typeof bound;
     }, 60_000);
 
     it('bound float entry', () => {

@@ -5,13 +5,7 @@
 // written by hand (1e155² = 1e310). (spreadLawResidual cannot overflow: a spread is at most 1,
 // so s·Q ≤ Q.)
 import { describe, expect, it, beforeAll } from 'vitest';
-import { build } from 'esbuild';
-import { mkdtempSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import path from 'node:path';
-import { pathToFileURL, fileURLToPath } from 'node:url';
-// @ts-expect-error: a plain ES module without types
-import { floatSpecialize } from '../../scripts/float-specialize.mjs';
+import { loadFloatEntry } from '../float-entry.js';
 import * as q from '../../src/index.js';
 import { QuadspreadError } from '../../src/index.js';
 
@@ -72,16 +66,7 @@ describe('float overflow in a bare sum or product is refused, not returned', () 
 describe('the float-specialised copy (quadspread/float) refuses the same', () => {
   let bound: Record<string, (...a: unknown[]) => unknown>;
   beforeAll(async () => {
-    const here = path.dirname(fileURLToPath(import.meta.url));
-    const root = path.resolve(here, '../..');
-    const entry = path.join(root, 'src', 'float.ts');
-    const out = await build({
-      entryPoints: [entry], bundle: true, write: false, format: 'esm', platform: 'node', logLevel: 'silent',
-      plugins: [floatSpecialize({ entries: [entry], srcDir: path.join(root, 'src') })],
-    });
-    const file = path.join(mkdtempSync(path.join(tmpdir(), 'qs-overflow-')), 'float.mjs');
-    writeFileSync(file, out.outputFiles[0]!.text);
-    bound = (await import(pathToFileURL(file).href)) as typeof bound;
+    bound = (await loadFloatEntry()) as typeof bound;
   }, 60_000);
 
   it('quadrance, lineThrough, quadrea, lengthToMetres', () => {
