@@ -1,5 +1,6 @@
-// Test helper: quadspread/float as the build makes it — src/float.ts bundled through the
-// float-specialising esbuild plugin — loaded from a temporary file, without `npm run build`.
+// Test helper: a module bundled through the float-specialising esbuild plugin
+// (scripts/float-specialize.mjs), as the build bundles quadspread/float, and loaded from a
+// temporary file, without `npm run build`.
 import { build } from 'esbuild';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -8,14 +9,20 @@ import { pathToFileURL, fileURLToPath } from 'node:url';
 // @ts-expect-error: a plain ES module without types
 import { floatSpecialize } from '../scripts/float-specialize.mjs';
 
-export async function loadFloatEntry(): Promise<Record<string, (...a: any[]) => any>> {
-  const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
-  const entry = path.join(root, 'src', 'float.ts');
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+
+/** `entry` (an absolute path) bundled float-specialised, imported. */
+export async function loadSpecialised(entry: string): Promise<Record<string, any>> {
   const out = await build({
     entryPoints: [entry], bundle: true, write: false, format: 'esm', platform: 'node', logLevel: 'silent',
     plugins: [floatSpecialize({ entries: [entry], srcDir: path.join(root, 'src') })],
   });
-  const file = path.join(mkdtempSync(path.join(tmpdir(), 'qs-float-entry-')), 'float.mjs');
+  const file = path.join(mkdtempSync(path.join(tmpdir(), 'qs-float-entry-')), 'bundle.mjs');
   writeFileSync(file, out.outputFiles[0]!.text);
-  return (await import(pathToFileURL(file).href)) as Record<string, (...a: any[]) => any>;
+  return (await import(pathToFileURL(file).href)) as Record<string, any>;
+}
+
+/** quadspread/float as the build makes it: src/float.ts bundled float-specialised. */
+export function loadFloatEntry(): Promise<Record<string, any>> {
+  return loadSpecialised(path.join(root, 'src', 'float.ts'));
 }

@@ -5,18 +5,16 @@
 // function with the same source run unbundled, in float and in rational, on random inputs.
 import { describe, expect, it, beforeAll } from 'vitest';
 import fc from 'fast-check';
-import { build } from 'esbuild';
-import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { readFileSync } from 'node:fs';
 import path from 'node:path';
-import { pathToFileURL, fileURLToPath } from 'node:url';
+import { fileURLToPath } from 'node:url';
 // @ts-expect-error: a plain ES module without types
-import { floatSpecialize, specializeSource } from '../../scripts/float-specialize.mjs';
+import { specializeSource } from '../../scripts/float-specialize.mjs';
+import { loadSpecialised } from '../float-entry.js';
 import * as G from './fixtures/risky.js';
 import { float, rational } from '../../src/index.js';
 
 const here = path.dirname(fileURLToPath(import.meta.url));
-const root = path.resolve(here, '../..');
 const fixture = path.join(here, 'fixtures/risky.ts');
 
 /** A comparable picture of a result or an error: numbers (−0 kept), text, lists; other values by String. */
@@ -38,20 +36,7 @@ function outcome(f: () => unknown): unknown {
 
 let B: Record<string, any>;
 beforeAll(async () => {
-  const entry = path.join(here, 'fixtures/entry-risky.ts');
-  const out = await build({
-    entryPoints: [entry],
-    bundle: true,
-    write: false,
-    format: 'esm',
-    platform: 'node',
-    plugins: [floatSpecialize({ entries: [entry], srcDir: path.join(root, 'src') })],
-    logLevel: 'silent',
-  });
-  const dir = mkdtempSync(path.join(tmpdir(), 'qs-risky-'));
-  const file = path.join(dir, 'bundle.mjs');
-  writeFileSync(file, out.outputFiles[0]!.text);
-  B = (await import(pathToFileURL(file).href)) as Record<string, any>;
+  B = await loadSpecialised(path.join(here, 'fixtures/entry-risky.ts'));
 }, 60_000);
 
 const num = fc.oneof(fc.double({ noNaN: false }), fc.constant(0), fc.constant(-0), fc.integer({ min: -9, max: 9 }));

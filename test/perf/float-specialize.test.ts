@@ -5,13 +5,11 @@
 // real quadspread/float source specialises triangle() and matches the generic triangle.
 import { describe, expect, it, beforeAll } from 'vitest';
 import fc from 'fast-check';
-import { build } from 'esbuild';
-import { mkdtempSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { pathToFileURL, fileURLToPath } from 'node:url';
+import { fileURLToPath } from 'node:url';
 // @ts-expect-error: a plain ES module without types
-import { floatSpecialize, specializeSource } from '../../scripts/float-specialize.mjs';
+import { specializeSource } from '../../scripts/float-specialize.mjs';
+import { loadSpecialised } from '../float-entry.js';
 import * as G from './fixtures/generic.js';
 import { float, rational, QuadspreadError } from '../../src/index.js';
 import { triangle, point, quadrance, spread, solveTriangle } from '../../src/geometry/index.js';
@@ -21,21 +19,7 @@ import { traverse, area, intersectLines } from '../../src/cogo/index.js';
 const here = path.dirname(fileURLToPath(import.meta.url));
 const root = path.resolve(here, '../..');
 
-async function bundle(entry: string): Promise<Record<string, unknown>> {
-  const out = await build({
-    entryPoints: [entry],
-    bundle: true,
-    write: false,
-    format: 'esm',
-    platform: 'node',
-    plugins: [floatSpecialize({ entries: [entry], srcDir: path.join(root, 'src') })],
-    logLevel: 'silent',
-  });
-  const dir = mkdtempSync(path.join(tmpdir(), 'qs-float-'));
-  const file = path.join(dir, 'bundle.mjs');
-  writeFileSync(file, out.outputFiles[0]!.text);
-  return (await import(pathToFileURL(file).href)) as Record<string, unknown>;
-}
+const bundle = (entry: string): Promise<Record<string, unknown>> => loadSpecialised(entry);
 
 function outcome(f: () => unknown): unknown {
   try {
