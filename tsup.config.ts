@@ -1,7 +1,7 @@
 import path from 'node:path';
 import { defineConfig, type Options } from 'tsup';
 // The float entry's modules are compiled float-specialised (A.add(x, y) → x + y …); see the file.
-// @ts-ignore -- a plain .mjs plugin without declarations (tsc checks *.config.ts)
+// @ts-expect-error -- a plain .mjs plugin without declarations (tsc checks *.config.ts)
 import { floatSpecialize } from './scripts/float-specialize.mjs';
 
 // `npm run build` (scripts/build.mjs) regenerates the bound entries, empties dist/, runs
@@ -21,7 +21,12 @@ const common: Options = {
   clean: false,
   external: ['fraction.js', 'big.js'],
 };
-const entries = { index: 'src/index.ts', rational: 'src/rational.ts', decimal: 'src/decimal.ts', float: 'src/float.ts' };
+const entries = {
+  index: 'src/index.ts',
+  rational: 'src/rational.ts',
+  decimal: 'src/decimal.ts',
+  float: 'src/float.ts',
+};
 
 // In the ESM of quadspread/float, the decimal arithmetic is not copied in but imported from the
 // per-module tree (dist/esm/arithmetic/decimal.js): it has no float code to specialise, and
@@ -29,18 +34,45 @@ const entries = { index: 'src/index.ts', rational: 'src/rational.ts', decimal: '
 // bundle only when `decimal` is used.
 const decimalFromTree = {
   name: 'decimal-from-esm-tree',
-  setup(build: { onResolve: (o: { filter: RegExp }, f: (a: { path: string; resolveDir: string }) => unknown) => void }) {
+  setup(build: {
+    onResolve: (
+      o: { filter: RegExp },
+      f: (a: { path: string; resolveDir: string }) => unknown,
+    ) => void;
+  }) {
     const target = path.resolve('src/arithmetic/decimal.ts');
     build.onResolve({ filter: /(^|\/)decimal\.js$/ }, (args) =>
-      path.resolve(args.resolveDir, args.path.replace(/\.js$/, '.ts')) === target ? { path: './esm/arithmetic/decimal.js', external: true } : undefined,
+      path.resolve(args.resolveDir, args.path.replace(/\.js$/, '.ts')) === target
+        ? { path: './esm/arithmetic/decimal.js', external: true }
+        : undefined,
     );
   },
 };
 
 export default defineConfig([
-  { ...common, entry: entries, format: ['cjs'], splitting: false, treeshake: true, esbuildPlugins: [floatSpecialize()] },
-  { ...common, entry: { float: 'src/float.ts' }, format: ['esm'], splitting: false, treeshake: true, esbuildPlugins: [decimalFromTree, floatSpecialize()] },
-  { ...common, entry: ['src/**/*.ts', '!src/cli/**', '!src/float.ts'], outDir: 'dist/esm', format: ['esm'], bundle: false },
+  {
+    ...common,
+    entry: entries,
+    format: ['cjs'],
+    splitting: false,
+    treeshake: true,
+    esbuildPlugins: [floatSpecialize()],
+  },
+  {
+    ...common,
+    entry: { float: 'src/float.ts' },
+    format: ['esm'],
+    splitting: false,
+    treeshake: true,
+    esbuildPlugins: [decimalFromTree, floatSpecialize()],
+  },
+  {
+    ...common,
+    entry: ['src/**/*.ts', '!src/cli/**', '!src/float.ts'],
+    outDir: 'dist/esm',
+    format: ['esm'],
+    bundle: false,
+  },
   { ...common, entry: entries, format: ['esm', 'cjs'], dts: { only: true } },
   // The quadspread command (src/cli, docs/cli.md): one ES module for Node with commander bundled
   // in (runtime dependencies stay fraction.js and big.js); commander is CommonJS, so the bundle
@@ -54,6 +86,8 @@ export default defineConfig([
     splitting: false,
     treeshake: true,
     noExternal: ['commander'],
-    banner: { js: "import { createRequire as __createRequire } from 'node:module'; const require = __createRequire(import.meta.url);" },
+    banner: {
+      js: "import { createRequire as __createRequire } from 'node:module'; const require = __createRequire(import.meta.url);",
+    },
   },
 ]);

@@ -27,7 +27,8 @@ function calibrate(fn, targetMs) {
   let times = 1;
   for (;;) {
     const t = timeIt(fn, times);
-    if (t >= targetMs || times > 1 << 24) return Math.max(1, Math.ceil((times * targetMs) / Math.max(t, 1e-3)));
+    if (t >= targetMs || times > 1 << 24)
+      return Math.max(1, Math.ceil((times * targetMs) / Math.max(t, 1e-3)));
     times *= t < targetMs / 16 ? 8 : 2;
   }
 }
@@ -49,7 +50,8 @@ export function ratio(a, b, { items, reps, targetMs }) {
   // Warm-up: a few substantial batches of each side, alternating, before any sizing. (Sizing
   // from cold, one item-loop at a time, was seen to leave V8 in a worse state for whichever
   // side ran first: ratios then flipped between 0.2 and 7 from one process to the next.)
-  const ka = warmCount(a, targetMs), kb = warmCount(b, targetMs);
+  const ka = warmCount(a, targetMs),
+    kb = warmCount(b, targetMs);
   for (let i = 0; i < 3; i++) {
     timeIt(a, ka);
     timeIt(b, kb);
@@ -72,7 +74,12 @@ export function ratio(a, b, { items, reps, targetMs }) {
     ta.push(x);
     tb.push(y);
   }
-  return { ratio: median(ratios), aUs: (median(ta) * 1000) / items, bUs: (median(tb) * 1000) / items, ratios };
+  return {
+    ratio: median(ratios),
+    aUs: (median(ta) * 1000) / items,
+    bUs: (median(tb) * 1000) / items,
+    ratios,
+  };
 }
 
 export function keep() {

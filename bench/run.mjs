@@ -44,7 +44,9 @@ const lib = { g, F, R, D, Fraction, Big };
 
 // Short batches, many pairs: on a loaded machine a short batch is less often interrupted, and
 // the median of many adjacent pairs discards the interrupted ones.
-const settings = quick ? { reps: 21, targetMs: 3, n: 300, growthN: 100 } : { reps: 61, targetMs: 5, n: 1000, growthN: 400 };
+const settings = quick
+  ? { reps: 21, targetMs: 3, n: 300, growthN: 100 }
+  : { reps: 61, targetMs: 5, n: 1000, growthN: 400 };
 const t0 = Date.now();
 
 // Every arithmetic an integrator's process may use, run through the same generic functions
@@ -68,25 +70,84 @@ for (const w of workloads) {
 for (const [, b] of built) b.pollute(arithmetics);
 
 const rows = [];
-const fmt = (x) => (x >= 100 ? x.toFixed(0) : x >= 10 ? x.toFixed(1) : x >= 1 ? x.toFixed(2) : x.toFixed(3));
+const fmt = (x) =>
+  x >= 100 ? x.toFixed(0) : x >= 10 ? x.toFixed(1) : x >= 1 ? x.toFixed(2) : x.toFixed(3);
 function row(workload, pair, ours, base, m, higherIsBetter) {
-  const r = { workload, pair, ours, base, oursUs: m.aUs, baseUs: m.bUs, ratio: higherIsBetter ? 1 / m.ratio : m.ratio };
+  const r = {
+    workload,
+    pair,
+    ours,
+    base,
+    oursUs: m.aUs,
+    baseUs: m.bUs,
+    ratio: higherIsBetter ? 1 / m.ratio : m.ratio,
+  };
   rows.push(r);
-  console.log(`${workload.padEnd(10)} ${pair.padEnd(26)} ${fmt(m.aUs).padStart(9)} µs ${fmt(m.bUs).padStart(9)} µs  ratio ${r.ratio.toFixed(2)}`);
+  console.log(
+    `${workload.padEnd(10)} ${pair.padEnd(26)} ${fmt(m.aUs).padStart(9)} µs ${fmt(m.bUs).padStart(9)} µs  ratio ${r.ratio.toFixed(2)}`,
+  );
   return r;
 }
 
-console.log(`quadspread bench (${quick ? 'quick' : 'full'}): node ${process.version}, ${os.cpus().length} cpus, ${os.cpus()[0]?.model ?? '?'}`);
-console.log(`each ratio: median of ${settings.reps} interleaved pairs of batches of >= ${settings.targetMs} ms`);
-console.log(`${'workload'.padEnd(10)} ${'pair (ours vs baseline)'.padEnd(26)} ${'ours/item'.padStart(12)} ${'base/item'.padStart(12)}`);
+console.log(
+  `quadspread bench (${quick ? 'quick' : 'full'}): node ${process.version}, ${os.cpus().length} cpus, ${os.cpus()[0]?.model ?? '?'}`,
+);
+console.log(
+  `each ratio: median of ${settings.reps} interleaved pairs of batches of >= ${settings.targetMs} ms`,
+);
+console.log(
+  `${'workload'.padEnd(10)} ${'pair (ours vs baseline)'.padEnd(26)} ${'ours/item'.padStart(12)} ${'base/item'.padStart(12)}`,
+);
 const headline = { float: [], fraction: [], big: [] };
 for (const [w, b] of built) {
   // A workload whose items are large (a 1000-course traverse) may ask for fewer pairs.
-  const o = { items: b.items, reps: Math.max(7, Math.round(settings.reps * (w.repsScale ?? 1))) | 1, targetMs: settings.targetMs };
-  if (b.float) headline.float.push(row(w.name, 'float vs hand-written', 'float', 'hand', ratio(b.float.ours, b.float.hand, o), false));
-  if (b.floatGeneric) row(w.name, '(generic entry, float)', 'generic', 'hand', ratio(b.floatGeneric.ours, b.floatGeneric.hand, o), false);
-  if (b.rational) headline.fraction.push(row(w.name, 'fraction.js vs rational', 'rational', 'fraction.js', ratio(b.rational.ours, b.rational.naive, o), true));
-  if (b.decimal) headline.big.push(row(w.name, 'big.js vs decimal(34)', 'decimal', 'big.js', ratio(b.decimal.ours, b.decimal.naive, o), true));
+  const o = {
+    items: b.items,
+    reps: Math.max(7, Math.round(settings.reps * (w.repsScale ?? 1))) | 1,
+    targetMs: settings.targetMs,
+  };
+  if (b.float)
+    headline.float.push(
+      row(
+        w.name,
+        'float vs hand-written',
+        'float',
+        'hand',
+        ratio(b.float.ours, b.float.hand, o),
+        false,
+      ),
+    );
+  if (b.floatGeneric)
+    row(
+      w.name,
+      '(generic entry, float)',
+      'generic',
+      'hand',
+      ratio(b.floatGeneric.ours, b.floatGeneric.hand, o),
+      false,
+    );
+  if (b.rational)
+    headline.fraction.push(
+      row(
+        w.name,
+        'fraction.js vs rational',
+        'rational',
+        'fraction.js',
+        ratio(b.rational.ours, b.rational.naive, o),
+        true,
+      ),
+    );
+  if (b.decimal)
+    headline.big.push(
+      row(
+        w.name,
+        'big.js vs decimal(34)',
+        'decimal',
+        'big.js',
+        ratio(b.decimal.ours, b.decimal.naive, o),
+        true,
+      ),
+    );
 }
 
 // Rational cost growth over the inputs' significant digits, against the bare BigInt work.
@@ -100,29 +161,63 @@ if (!only || only === 'triangle') {
     const ours = ratio(gk.ours, base.ours, o);
     const floor = ratio(gk.floor, base.floor, o);
     const naive = ratio(gk.naive, base.naive, o);
-    growth.push({ digits: k, rational: ours.ratio, bigint: floor.ratio, fraction: naive.ratio, rationalUs: ours.aUs, bigintUs: floor.aUs, fractionUs: naive.aUs });
-    console.log(`growth    ${String(k).padStart(2)} digits: rational ×${ours.ratio.toFixed(2)} (${fmt(ours.aUs)} µs), bare BigInt ×${floor.ratio.toFixed(2)} (${fmt(floor.aUs)} µs), plain fraction.js ×${naive.ratio.toFixed(2)} (${fmt(naive.aUs)} µs)`);
+    growth.push({
+      digits: k,
+      rational: ours.ratio,
+      bigint: floor.ratio,
+      fraction: naive.ratio,
+      rationalUs: ours.aUs,
+      bigintUs: floor.aUs,
+      fractionUs: naive.aUs,
+    });
+    console.log(
+      `growth    ${String(k).padStart(2)} digits: rational ×${ours.ratio.toFixed(2)} (${fmt(ours.aUs)} µs), bare BigInt ×${floor.ratio.toFixed(2)} (${fmt(floor.aUs)} µs), plain fraction.js ×${naive.ratio.toFixed(2)} (${fmt(naive.aUs)} µs)`,
+    );
   }
-  console.log(`growth    at 2 digits: rational ${fmt(base.ours && ratio(base.ours, base.floor, { items: settings.growthN, reps: 3, targetMs: settings.targetMs }).ratio)}× the bare BigInt work`);
+  console.log(
+    `growth    at 2 digits: rational ${fmt(base.ours && ratio(base.ours, base.floor, { items: settings.growthN, reps: 3, targetMs: settings.targetMs }).ratio)}× the bare BigInt work`,
+  );
 }
 
 // Headline: the triangle workload (a), the one measured before any code existed (DESIGN.md);
 // the other workloads' ratios are printed above and tabled in docs/performance.md.
 const pick = (list) => (list.find((r) => r.workload === 'triangle') ?? list[0])?.ratio;
-const hf = pick(headline.float), hr = pick(headline.fraction), hb = pick(headline.big);
+const hf = pick(headline.float),
+  hr = pick(headline.fraction),
+  hb = pick(headline.big);
 console.log(`ratio float-vs-hand ${hf?.toFixed(2) ?? 'n/a'}`);
 console.log(`ratio naive-fraction-vs-rational ${hr?.toFixed(2) ?? 'n/a'}`);
 console.log(`ratio naive-big-vs-decimal ${hb?.toFixed(2) ?? 'n/a'}`);
-const worstOf = (list, f) => (list.length ? list.reduce((a, r) => (f(r.ratio, a.ratio) ? r : a)) : undefined);
+const worstOf = (list, f) =>
+  list.length ? list.reduce((a, r) => (f(r.ratio, a.ratio) ? r : a)) : undefined;
 const worst = {
   float: worstOf(headline.float, (x, y) => x > y),
   fraction: worstOf(headline.fraction, (x, y) => x < y),
   big: worstOf(headline.big, (x, y) => x < y),
 };
 const w = (r) => (r ? `${r.ratio.toFixed(2)} (${r.workload})` : 'n/a');
-console.log(`worst over workloads: float-vs-hand ${w(worst.float)}, naive-fraction-vs-rational ${w(worst.fraction)}, naive-big-vs-decimal ${w(worst.big)}`);
+console.log(
+  `worst over workloads: float-vs-hand ${w(worst.float)}, naive-fraction-vs-rational ${w(worst.fraction)}, naive-big-vs-decimal ${w(worst.big)}`,
+);
 console.log(`elapsed ${((Date.now() - t0) / 1000).toFixed(1)} s (checksum ${keep() % 10})`);
 if (jsonFile) {
-  writeFileSync(jsonFile, JSON.stringify({ quick, node: process.version, cpus: os.cpus().length, cpu: os.cpus()[0]?.model, settings, rows, growth, headline: { floatVsHand: hf, naiveFractionVsRational: hr, naiveBigVsDecimal: hb }, worst }, null, 2));
+  writeFileSync(
+    jsonFile,
+    JSON.stringify(
+      {
+        quick,
+        node: process.version,
+        cpus: os.cpus().length,
+        cpu: os.cpus()[0]?.model,
+        settings,
+        rows,
+        growth,
+        headline: { floatVsHand: hf, naiveFractionVsRational: hr, naiveBigVsDecimal: hb },
+        worst,
+      },
+      null,
+      2,
+    ),
+  );
 }
 void median;

@@ -6,8 +6,12 @@ import { rmSync } from 'node:fs';
 import { join } from 'node:path';
 import { root } from './pack.mjs';
 
-const node = (script, ...args) => execFileSync(process.execPath, [join(root, script), ...args], { cwd: root, stdio: 'inherit' });
+const node = (script, ...args) =>
+  execFileSync(process.execPath, [join(root, script), ...args], { cwd: root, stdio: 'inherit' });
 node('scripts/gen-bound.mjs');
 rmSync(join(root, 'dist'), { recursive: true, force: true });
-execFileSync(process.execPath, [join(root, 'node_modules', 'tsup', 'dist', 'cli-default.js')], { cwd: root, stdio: 'inherit' });
+execFileSync(process.execPath, [join(root, 'node_modules', 'tsup', 'dist', 'cli-default.js')], {
+  cwd: root,
+  stdio: 'inherit',
+});
 node('scripts/fix-dts.mjs');

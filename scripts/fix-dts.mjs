@@ -12,7 +12,9 @@ import { readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { resolve, dirname } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
-const dist = resolve(process.argv[2] ?? resolve(dirname(fileURLToPath(import.meta.url)), '../dist'));
+const dist = resolve(
+  process.argv[2] ?? resolve(dirname(fileURLToPath(import.meta.url)), '../dist'),
+);
 const IMPORT = /^import Fraction from 'fraction\.js';$/m;
 const REPLACEMENT = "type Fraction = InstanceType<(typeof import('fraction.js'))['Fraction']>;";
 let fixed = 0;
@@ -24,4 +26,6 @@ for (const name of readdirSync(dist)) {
   writeFileSync(path, text.replace(IMPORT, REPLACEMENT));
   fixed++;
 }
-console.log(`fix-dts: ${fixed} declaration files take the Fraction type from fraction.js's named export`);
+console.log(
+  `fix-dts: ${fixed} declaration files take the Fraction type from fraction.js's named export`,
+);

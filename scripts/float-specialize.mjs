@@ -88,7 +88,8 @@ function usesCallContext(node) {
   let found = false;
   const visit = (n) => {
     if (found) return;
-    if (n.kind === ts.SyntaxKind.ThisKeyword || (ts.isIdentifier(n) && n.text === 'arguments')) found = true;
+    if (n.kind === ts.SyntaxKind.ThisKeyword || (ts.isIdentifier(n) && n.text === 'arguments'))
+      found = true;
     else ts.forEachChild(n, visit);
   };
   visit(node);
@@ -102,8 +103,14 @@ function isArithmeticParam(param, sf) {
 }
 
 const ASSIGN = new Set([
-  ts.SyntaxKind.EqualsToken, ts.SyntaxKind.PlusEqualsToken, ts.SyntaxKind.MinusEqualsToken, ts.SyntaxKind.AsteriskEqualsToken,
-  ts.SyntaxKind.SlashEqualsToken, ts.SyntaxKind.BarBarEqualsToken, ts.SyntaxKind.AmpersandAmpersandEqualsToken, ts.SyntaxKind.QuestionQuestionEqualsToken,
+  ts.SyntaxKind.EqualsToken,
+  ts.SyntaxKind.PlusEqualsToken,
+  ts.SyntaxKind.MinusEqualsToken,
+  ts.SyntaxKind.AsteriskEqualsToken,
+  ts.SyntaxKind.SlashEqualsToken,
+  ts.SyntaxKind.BarBarEqualsToken,
+  ts.SyntaxKind.AmpersandAmpersandEqualsToken,
+  ts.SyntaxKind.QuestionQuestionEqualsToken,
 ]);
 
 /** Whether `name` is assigned, or declared again (other than as a nested function's parameter), inside `node`. */
@@ -111,13 +118,47 @@ function rebindsName(node, name) {
   let found = false;
   const visit = (n) => {
     if (found) return;
-    if (ts.isBinaryExpression(n) && ASSIGN.has(n.operatorToken.kind) && ts.isIdentifier(n.left) && n.left.text === name) found = true;
+    if (
+      ts.isBinaryExpression(n) &&
+      ASSIGN.has(n.operatorToken.kind) &&
+      ts.isIdentifier(n.left) &&
+      n.left.text === name
+    )
+      found = true;
     // Destructuring assignment ([A] = …, ({ A } = …)) and for (A of …) / for (A in …).
-    else if (ts.isBinaryExpression(n) && n.operatorToken.kind === ts.SyntaxKind.EqualsToken && (ts.isArrayLiteralExpression(n.left) || ts.isObjectLiteralExpression(n.left)) && mentions(n.left, name)) found = true;
-    else if ((ts.isForOfStatement(n) || ts.isForInStatement(n)) && !ts.isVariableDeclarationList(n.initializer) && mentions(n.initializer, name)) found = true;
-    else if ((ts.isPrefixUnaryExpression(n) || ts.isPostfixUnaryExpression(n)) && ts.isIdentifier(n.operand) && n.operand.text === name) found = true;
-    else if ((ts.isVariableDeclaration(n) || ts.isFunctionDeclaration(n) || ts.isClassDeclaration(n)) && n.name && ts.isIdentifier(n.name) && n.name.text === name) found = true;
-    else if ((ts.isVariableDeclaration(n) || ts.isParameter(n)) && n.name && !ts.isIdentifier(n.name) && n.name.getText().match(new RegExp(`\\b${name}\\b`))) found = true;
+    else if (
+      ts.isBinaryExpression(n) &&
+      n.operatorToken.kind === ts.SyntaxKind.EqualsToken &&
+      (ts.isArrayLiteralExpression(n.left) || ts.isObjectLiteralExpression(n.left)) &&
+      mentions(n.left, name)
+    )
+      found = true;
+    else if (
+      (ts.isForOfStatement(n) || ts.isForInStatement(n)) &&
+      !ts.isVariableDeclarationList(n.initializer) &&
+      mentions(n.initializer, name)
+    )
+      found = true;
+    else if (
+      (ts.isPrefixUnaryExpression(n) || ts.isPostfixUnaryExpression(n)) &&
+      ts.isIdentifier(n.operand) &&
+      n.operand.text === name
+    )
+      found = true;
+    else if (
+      (ts.isVariableDeclaration(n) || ts.isFunctionDeclaration(n) || ts.isClassDeclaration(n)) &&
+      n.name &&
+      ts.isIdentifier(n.name) &&
+      n.name.text === name
+    )
+      found = true;
+    else if (
+      (ts.isVariableDeclaration(n) || ts.isParameter(n)) &&
+      n.name &&
+      !ts.isIdentifier(n.name) &&
+      n.name.getText().match(new RegExp(`\\b${name}\\b`))
+    )
+      found = true;
     else ts.forEachChild(n, visit);
   };
   visit(node);
@@ -162,7 +203,10 @@ export function specializeSource(code, fileName = 'module.ts') {
 
     const replace = (node) => {
       // A nested function that declares its own `A` shadows ours: leave it alone.
-      if (isFunctionLike(node) && node.parameters.some((q) => ts.isIdentifier(q.name) && q.name.text === a)) {
+      if (
+        isFunctionLike(node) &&
+        node.parameters.some((q) => ts.isIdentifier(q.name) && q.name.text === a)
+      ) {
         return node.getText(sf);
       }
       if (ts.isCallExpression(node) && ts.isPropertyAccessExpression(node.expression)) {
@@ -170,24 +214,41 @@ export function specializeSource(code, fileName = 'module.ts') {
         const op = own(OPS, callee.name.text);
         // A.from(<numeric literal>) is that literal (float.from returns a finite number as is).
         if (
-          callee.name.text === 'from' && ts.isIdentifier(callee.expression) && callee.expression.text === a &&
-          node.arguments.length === 1 && ts.isNumericLiteral(node.arguments[0]) && Number.isFinite(Number(node.arguments[0].text))
+          callee.name.text === 'from' &&
+          ts.isIdentifier(callee.expression) &&
+          callee.expression.text === a &&
+          node.arguments.length === 1 &&
+          ts.isNumericLiteral(node.arguments[0]) &&
+          Number.isFinite(Number(node.arguments[0].text))
         ) {
           return `(${node.arguments[0].getText(sf)})`;
         }
         if (
-          op && ts.isIdentifier(callee.expression) && callee.expression.text === a && !callee.questionDotToken &&
-          !node.questionDotToken && !node.typeArguments && node.arguments.length === op[0] &&
+          op &&
+          ts.isIdentifier(callee.expression) &&
+          callee.expression.text === a &&
+          !callee.questionDotToken &&
+          !node.questionDotToken &&
+          !node.typeArguments &&
+          node.arguments.length === op[0] &&
           node.arguments.every((x) => !ts.isSpreadElement(x))
         ) {
           return op[1](...node.arguments.map(emit));
         }
       }
-      if (ts.isPropertyAccessExpression(node) && ts.isIdentifier(node.expression) && node.expression.text === a) {
+      if (
+        ts.isPropertyAccessExpression(node) &&
+        ts.isIdentifier(node.expression) &&
+        node.expression.text === a
+      ) {
         const k = own(CONSTANTS, node.name.text);
         const parent = node.parent;
         const isCallee = ts.isCallExpression(parent) && parent.expression === node;
-        const isTarget = (ts.isBinaryExpression(parent) && parent.left === node) || ts.isDeleteExpression(parent) || ts.isPrefixUnaryExpression(parent) || ts.isPostfixUnaryExpression(parent);
+        const isTarget =
+          (ts.isBinaryExpression(parent) && parent.left === node) ||
+          ts.isDeleteExpression(parent) ||
+          ts.isPrefixUnaryExpression(parent) ||
+          ts.isPostfixUnaryExpression(parent);
         if (k !== undefined && !isCallee && !isTarget) return k;
       }
       return undefined;
@@ -200,14 +261,21 @@ export function specializeSource(code, fileName = 'module.ts') {
     // Forward the parameters by name where they are plain identifiers (cheaper than `arguments`).
     // Where the body reads `this` or `arguments`, forward them unchanged (`arguments.length` and
     // extra arguments would differ otherwise).
-    const plain = st.parameters.every((q) => ts.isIdentifier(q.name)) && !usesCallContext(st.body) && !st.parameters.some((q) => q.initializer && usesCallContext(q.initializer));
+    const plain =
+      st.parameters.every((q) => ts.isIdentifier(q.name)) &&
+      !usesCallContext(st.body) &&
+      !st.parameters.some((q) => q.initializer && usesCallContext(q.initializer));
     const forward = plain
       ? `${generic}(${st.parameters.map((q) => (q.dotDotDotToken ? '...' : '') + q.name.text).join(', ')})`
       : `${generic}.apply(this, arguments as any)`;
     const guarded = `{ if (${a} !== __qsFloat) return ${forward};${body.slice(1)}`;
     edits.push({ start: st.body.getStart(sf), end: st.body.end, text: guarded });
     // The untouched original, for any other arithmetic that reaches this bundle.
-    edits.push({ start: st.end, end: st.end, text: `\nfunction ${generic}${code.slice(st.name.end, st.end)}` });
+    edits.push({
+      start: st.end,
+      end: st.end,
+      text: `\nfunction ${generic}${code.slice(st.name.end, st.end)}`,
+    });
     functions.push(name);
   }
   if (functions.length === 0) return { code, functions };
@@ -219,7 +287,12 @@ export function specializeSource(code, fileName = 'module.ts') {
 
 function resolveTs(dir, spec) {
   const full = path.resolve(dir, spec);
-  const candidates = [full, full.replace(/\.js$/, '.ts'), `${full}.ts`, path.join(full, 'index.ts')];
+  const candidates = [
+    full,
+    full.replace(/\.js$/, '.ts'),
+    `${full}.ts`,
+    path.join(full, 'index.ts'),
+  ];
   return candidates.find((c) => /\.[cm]?[jt]s$/.test(c) && existsSync(c));
 }
 
@@ -232,24 +305,39 @@ function resolveTs(dir, spec) {
  */
 export function floatSpecialize(options = {}) {
   const srcDir = options.srcDir ?? path.resolve('src');
-  const entries = new Set((options.entries ?? [path.join(srcDir, 'float.ts')]).map((e) => path.resolve(e)));
+  const entries = new Set(
+    (options.entries ?? [path.join(srcDir, 'float.ts')]).map((e) => path.resolve(e)),
+  );
   const exclude = options.exclude ?? /[\\/]src[\\/](arithmetic[\\/]|errors\.ts$)/;
   return {
     name: 'float-specialize',
     setup(build) {
-      build.onResolve({ filter: /^qs-float-helpers$/ }, () => ({ path: 'helpers', namespace: HELPERS }));
+      build.onResolve({ filter: /^qs-float-helpers$/ }, () => ({
+        path: 'helpers',
+        namespace: HELPERS,
+      }));
       build.onResolve({ filter: /^\.\.?\// }, (args) => {
-        const inGraph = args.namespace === NS || args.namespace === HELPERS || entries.has(path.resolve(args.importer));
+        const inGraph =
+          args.namespace === NS ||
+          args.namespace === HELPERS ||
+          entries.has(path.resolve(args.importer));
         if (!inGraph) return undefined;
         const resolved = resolveTs(args.resolveDir, args.path);
         if (!resolved) return undefined;
         return { path: resolved, namespace: NS };
       });
-      build.onLoad({ filter: /.*/, namespace: HELPERS }, () => ({ contents: HELPER_SOURCE, loader: 'js', resolveDir: srcDir }));
+      build.onLoad({ filter: /.*/, namespace: HELPERS }, () => ({
+        contents: HELPER_SOURCE,
+        loader: 'js',
+        resolveDir: srcDir,
+      }));
       build.onLoad({ filter: /.*/, namespace: NS }, async (args) => {
         const code = await readFile(args.path, 'utf8');
         const loader = /\.ts$/.test(args.path) ? 'ts' : 'js';
-        const contents = loader === 'ts' && !exclude.test(args.path) ? specializeSource(code, args.path).code : code;
+        const contents =
+          loader === 'ts' && !exclude.test(args.path)
+            ? specializeSource(code, args.path).code
+            : code;
         return { contents, loader, resolveDir: path.dirname(args.path) };
       });
     },

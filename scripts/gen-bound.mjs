@@ -27,7 +27,7 @@ const ENTRIES = [
     module: 'quadspread/rational',
     kind: 'rational',
     said: 'the exact `rational` arithmetic',
-    inputs: 'numbers, numeric text (`\'1/3\'`, `\'0.1\'`) or rationals',
+    inputs: "numbers, numeric text (`'1/3'`, `'0.1'`) or rationals",
     value: 'Rational',
     valueDoc: 'a fraction.js `Fraction` ({@link g.Rational | Rational})',
     exact: 'true',
@@ -87,8 +87,8 @@ const ENTRIES = [
     ],
     example: [
       "import { point, quadrance } from 'quadspread/float';",
-      "quadrance(point(0, 0), point(3, 4));",
-      "//=> 25",
+      'quadrance(point(0, 0), point(3, 4));',
+      '//=> 25',
     ],
   },
 ];
@@ -122,10 +122,13 @@ function paramName(p, i) {
  * with T (and E) type parameters of the function, how to bind it; otherwise undefined.
  */
 function bindingOf(checker, arithmeticSymbol, decl) {
-  const fn =
-    ts.isFunctionDeclaration(decl) ? decl
-      : ts.isVariableDeclaration(decl) && decl.initializer && (ts.isArrowFunction(decl.initializer) || ts.isFunctionExpression(decl.initializer)) ? decl.initializer
-        : undefined;
+  const fn = ts.isFunctionDeclaration(decl)
+    ? decl
+    : ts.isVariableDeclaration(decl) &&
+        decl.initializer &&
+        (ts.isArrowFunction(decl.initializer) || ts.isFunctionExpression(decl.initializer))
+      ? decl.initializer
+      : undefined;
   if (!fn || fn.parameters.length === 0) return undefined;
   const first = fn.parameters[0];
   const type = first.type;
@@ -134,7 +137,9 @@ function bindingOf(checker, arithmeticSymbol, decl) {
   if (sym && sym.flags & ts.SymbolFlags.Alias) sym = checker.getAliasedSymbol(sym);
   if (sym !== arithmeticSymbol) return undefined;
   const typeParams = (fn.typeParameters ?? []).map((t) => t.name.text);
-  const args = (type.typeArguments ?? []).map((a) => (ts.isTypeReferenceNode(a) && ts.isIdentifier(a.typeName) ? a.typeName.text : a.getText()));
+  const args = (type.typeArguments ?? []).map((a) =>
+    ts.isTypeReferenceNode(a) && ts.isIdentifier(a.typeName) ? a.typeName.text : a.getText(),
+  );
   const valueParam = args[0];
   const exactParam = args[1];
   if (!valueParam || !typeParams.includes(valueParam)) return undefined;
@@ -162,7 +167,8 @@ export function collect() {
   const typesOnly = [];
   for (const exp of checker.getExportsOfModule(moduleSymbol)) {
     const name = exp.name;
-    if (name === 'arithmetic' || name === 'Value' || name === 'Bound') fail(`src/index.ts exports ${name}, a name the bound entries define themselves`);
+    if (name === 'arithmetic' || name === 'Value' || name === 'Bound')
+      fail(`src/index.ts exports ${name}, a name the bound entries define themselves`);
     const target = exp.flags & ts.SymbolFlags.Alias ? checker.getAliasedSymbol(exp) : exp;
     const decls = target.declarations ?? [];
     if (decls.length === 0) fail(`${name}: no declaration`);
@@ -172,26 +178,40 @@ export function collect() {
       typesOnly.push(name);
       continue;
     }
-    const valueDecls = decls.filter((d) => ts.isFunctionDeclaration(d) || ts.isVariableDeclaration(d));
+    const valueDecls = decls.filter(
+      (d) => ts.isFunctionDeclaration(d) || ts.isVariableDeclaration(d),
+    );
     const implementations = valueDecls.filter((d) => !ts.isFunctionDeclaration(d) || d.body);
     const signatures = valueDecls.filter((d) => ts.isFunctionDeclaration(d) && !d.body);
     const chosen = signatures.length > 0 ? signatures : implementations;
     const bindings = chosen.map((d) => bindingOf(checker, arithmeticSymbol, d));
     if (bindings.length > 0 && bindings.every(Boolean)) {
       if (bindings.length > 1 || bindings[0].loose) {
-        console.warn(`gen-bound: ${name} is overloaded or has extra type parameters: its bound type is approximate`);
+        console.warn(
+          `gen-bound: ${name} is overloaded or has extra type parameters: its bound type is approximate`,
+        );
         bound.push({ name, loose: true, params: bindings[0].fn.parameters.slice(1) });
       } else {
-        bound.push({ name, loose: false, typeArgs: bindings[0].typeArgs, params: bindings[0].fn.parameters.slice(1) });
+        bound.push({
+          name,
+          loose: false,
+          typeArgs: bindings[0].typeArgs,
+          params: bindings[0].fn.parameters.slice(1),
+        });
       }
       // A type of the same name would be lost behind the bound value.
-      if (target.flags & ts.SymbolFlags.Type && !(target.flags & ts.SymbolFlags.Function)) fail(`${name}: a type and a bound function share the name`);
+      if (target.flags & ts.SymbolFlags.Type && !(target.flags & ts.SymbolFlags.Function))
+        fail(`${name}: a type and a bound function share the name`);
     } else {
       values.push(name);
     }
   }
   const byName = (a, b) => (a.name ?? a).localeCompare(b.name ?? b);
-  return { bound: bound.sort(byName), values: values.sort(byName), typesOnly: typesOnly.sort(byName) };
+  return {
+    bound: bound.sort(byName),
+    values: values.sort(byName),
+    typesOnly: typesOnly.sort(byName),
+  };
 }
 
 function wrap(lines, width = 96) {
@@ -214,16 +234,28 @@ function render(entry, { bound, values, typesOnly }) {
   const A = 'arithmetic';
   const L = [];
   L.push('// GENERATED by scripts/gen-bound.mjs from src/index.ts: do not edit by hand.');
-  L.push('// `npm run gen:bound` (or `npm run build`) regenerates it; a test fails when it is stale.');
+  L.push(
+    '// `npm run gen:bound` (or `npm run build`) regenerates it; a test fails when it is stale.',
+  );
   L.push('/**');
-  L.push(` * ${entry.module} — the bound entry: every function of the generic entry \`quadspread\``);
+  L.push(
+    ` * ${entry.module} — the bound entry: every function of the generic entry \`quadspread\``,
+  );
   L.push(` * with ${entry.said} fixed, so the arithmetic argument is dropped.`);
-  L.push(` * Inputs may be ${entry.inputs}; results are values of {@link arithmetic}. The geometry`);
-  L.push(' * primitives that take points, vectors or lines (`quadrance`, `vectorQuadrance`, `spread`,');
-  L.push(' * `cross`, `spreadOfVectors`, `triangle`, the line functions) take values made by `point` and');
-  L.push(' * `line`/`lineThrough`, as the arithmetic\'s own');
+  L.push(
+    ` * Inputs may be ${entry.inputs}; results are values of {@link arithmetic}. The geometry`,
+  );
+  L.push(
+    ' * primitives that take points, vectors or lines (`quadrance`, `vectorQuadrance`, `spread`,',
+  );
+  L.push(
+    ' * `cross`, `spreadOfVectors`, `triangle`, the line functions) take values made by `point` and',
+  );
+  L.push(" * `line`/`lineThrough`, as the arithmetic's own");
   L.push(' * operations take its values; the solvers read plain `{ x, y }` of numbers or text.');
-  L.push(' * Everything else (constants, classes, types, the other arithmetics) is re-exported unchanged.');
+  L.push(
+    ' * Everything else (constants, classes, types, the other arithmetics) is re-exported unchanged.',
+  );
   L.push(' *');
   L.push(' * @example');
   L.push(' * ```ts');
@@ -237,19 +269,32 @@ function render(entry, { bound, values, typesOnly }) {
   L.push('');
   L.push(`/** The type of values of this entry's arithmetic: ${entry.valueDoc}. */`);
   L.push(`export type Value = ${entry.value};`);
-  L.push('/** The type of a bound function: the generic function type `F` with its first (arithmetic) parameter dropped. */');
-  L.push('export type Bound<F> = F extends (A: never, ...rest: infer P) => infer R ? (...rest: P) => R : never;');
+  L.push(
+    '/** The type of a bound function: the generic function type `F` with its first (arithmetic) parameter dropped. */',
+  );
+  L.push(
+    'export type Bound<F> = F extends (A: never, ...rest: infer P) => infer R ? (...rest: P) => R : never;',
+  );
   L.push('');
   L.push(...entry.arithmetic);
   for (const b of bound) {
     const params = b.params.map((p, i) => (p.dotDotDotToken ? '...' : '') + paramName(p, i + 1));
-    const call = [A, ...b.params.map((p, i) => (p.dotDotDotToken ? '...' : '') + paramName(p, i + 1))].join(', ');
+    const call = [
+      A,
+      ...b.params.map((p, i) => (p.dotDotDotToken ? '...' : '') + paramName(p, i + 1)),
+    ].join(', ');
     // The same type arguments in the call, so that inference cannot widen T from the inputs.
-    const targs = b.loose ? '' : `<${b.typeArgs.map((t) => (t === 'VALUE' ? 'Value' : entry.exact)).join(', ')}>`;
+    const targs = b.loose
+      ? ''
+      : `<${b.typeArgs.map((t) => (t === 'VALUE' ? 'Value' : entry.exact)).join(', ')}>`;
     const type = `Bound<typeof g.${b.name}${targs}>`;
     L.push('');
-    L.push(`/** {@link g.${b.name} | ${b.name}} with the arithmetic fixed to \`${entry.kind}\`: the same arguments after the arithmetic. @function */`);
-    L.push(`export const ${b.name}: ${type} = (${params.join(', ')}) => g.${b.name}${targs}(${call});`);
+    L.push(
+      `/** {@link g.${b.name} | ${b.name}} with the arithmetic fixed to \`${entry.kind}\`: the same arguments after the arithmetic. @function */`,
+    );
+    L.push(
+      `export const ${b.name}: ${type} = (${params.join(', ')}) => g.${b.name}${targs}(${call});`,
+    );
   }
   if (values.length > 0) {
     L.push('');
@@ -284,9 +329,12 @@ if (process.argv[1] && resolve(process.argv[1]) === fileURLToPath(import.meta.ur
   const check = process.argv.includes('--check');
   const { api, stale } = generate({ check });
   if (check && stale.length > 0) {
-    console.error(`gen-bound: out of date: ${stale.join(', ')}. Run \`npm run gen:bound\` and commit them.`);
+    console.error(
+      `gen-bound: out of date: ${stale.join(', ')}. Run \`npm run gen:bound\` and commit them.`,
+    );
     process.exit(1);
   }
-  console.log(`gen-bound: ${api.bound.length} bound functions, ${api.values.length} values and ${api.typesOnly.length} types re-exported${check ? ' (up to date)' : stale.length ? ` (wrote ${stale.join(', ')})` : ''}`);
+  console.log(
+    `gen-bound: ${api.bound.length} bound functions, ${api.values.length} values and ${api.typesOnly.length} types re-exported${check ? ' (up to date)' : stale.length ? ` (wrote ${stale.join(', ')})` : ''}`,
+  );
 }
-

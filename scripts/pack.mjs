@@ -17,13 +17,19 @@ export function packageDir() {
   const stage = mkdtempSync(join(tmpdir(), 'quadspread-stage-'));
   const pkg = JSON.parse(readFileSync(join(root, 'package.json'), 'utf8'));
   cpSync(join(root, 'package.json'), join(stage, 'package.json'));
-  for (const f of ['README.md', 'LICENSE']) if (existsSync(join(root, f))) cpSync(join(root, f), join(stage, f));
+  for (const f of ['README.md', 'LICENSE'])
+    if (existsSync(join(root, f))) cpSync(join(root, f), join(stage, f));
   for (const f of pkg.files) {
     const base = f.split('/')[0];
     if (base === 'dist' || base.includes('*')) continue;
-    if (existsSync(join(root, base))) cpSync(join(root, base), join(stage, base), { recursive: true });
+    if (existsSync(join(root, base)))
+      cpSync(join(root, base), join(stage, base), { recursive: true });
   }
-  if (existsSync(join(root, 'docs'))) cpSync(join(root, 'docs'), join(stage, 'docs'), { recursive: true, filter: (p) => !p.includes('/docs/api') });
+  if (existsSync(join(root, 'docs')))
+    cpSync(join(root, 'docs'), join(stage, 'docs'), {
+      recursive: true,
+      filter: (p) => !p.includes('/docs/api'),
+    });
   cpSync(resolve(dist), join(stage, 'dist'), { recursive: true });
   return stage;
 }
@@ -38,7 +44,8 @@ export function checkBuilt(dir = root) {
     } else if (v && typeof v === 'object') Object.values(v).forEach(walk);
   };
   walk(pkg.exports);
-  if (missing.length > 0) throw new Error(`not built (missing ${missing.join(', ')}): run \`npm run build\` first`);
+  if (missing.length > 0)
+    throw new Error(`not built (missing ${missing.join(', ')}): run \`npm run build\` first`);
   return pkg;
 }
 
@@ -47,11 +54,20 @@ export function packTarball(dest = mkdtempSync(join(tmpdir(), 'quadspread-pack-'
   const dir = packageDir();
   checkBuilt(dir);
   mkdirSync(dest, { recursive: true });
-  const out = execFileSync('npm', ['pack', '--ignore-scripts', '--json', '--pack-destination', dest], {
-    cwd: dir,
-    encoding: 'utf8',
-    stdio: ['ignore', 'pipe', 'inherit'],
-  });
+  const out = execFileSync(
+    'npm',
+    ['pack', '--ignore-scripts', '--json', '--pack-destination', dest],
+    {
+      cwd: dir,
+      encoding: 'utf8',
+      stdio: ['ignore', 'pipe', 'inherit'],
+    },
+  );
   const [info] = JSON.parse(out);
-  return { tarball: join(dest, info.filename), files: info.files.map((f) => f.path), dir: dest, size: info.size };
+  return {
+    tarball: join(dest, info.filename),
+    files: info.files.map((f) => f.path),
+    dir: dest,
+    size: info.size,
+  };
 }

@@ -19,20 +19,57 @@ import { checkBuilt, packageDir, root } from './pack.mjs';
 
 const KiB = 1024;
 const CASES = [
-  { name: "quadrance + float from 'quadspread'", budget: 10 * KiB, prints: '25', code: "import { quadrance, float } from 'quadspread';\nconsole.log(quadrance(float, { x: 0, y: 0 }, { x: 3, y: 4 }));" },
+  {
+    name: "quadrance + float from 'quadspread'",
+    budget: 10 * KiB,
+    prints: '25',
+    code: "import { quadrance, float } from 'quadspread';\nconsole.log(quadrance(float, { x: 0, y: 0 }, { x: 3, y: 4 }));",
+  },
   // quadspread's own code: the dependencies are a consumer's to share or not, and are
   // printed in the next line.
-  { name: "the whole library ('quadspread'), own code", budget: 120 * KiB, external: ['fraction.js', 'big.js'], code: "import * as q from 'quadspread';\nconsole.log(q);" },
-  { name: "the whole library ('quadspread') + fraction.js, big.js", code: "import * as q from 'quadspread';\nconsole.log(q);" },
-  { name: "quadrance + point from 'quadspread/rational'", code: "import { quadrance, point } from 'quadspread/rational';\nconsole.log(quadrance(point(0, 0), point(3, 4)));" },
+  {
+    name: "the whole library ('quadspread'), own code",
+    budget: 120 * KiB,
+    external: ['fraction.js', 'big.js'],
+    code: "import * as q from 'quadspread';\nconsole.log(q);",
+  },
+  {
+    name: "the whole library ('quadspread') + fraction.js, big.js",
+    code: "import * as q from 'quadspread';\nconsole.log(q);",
+  },
+  {
+    name: "quadrance + point from 'quadspread/rational'",
+    code: "import { quadrance, point } from 'quadspread/rational';\nconsole.log(quadrance(point(0, 0), point(3, 4)));",
+  },
   // Not in the issue: held so that the float entry stays tree-shakable (35 KiB before its
   // module-level values were marked pure and it took `decimal`, with big.js, from dist/esm/).
-  { name: "quadrance + point from 'quadspread/float'", budget: 8 * KiB, prints: '25', code: "import { quadrance, point } from 'quadspread/float';\nconsole.log(quadrance(point(0, 0), point(3, 4)));" },
-  { name: "quadrance + rational from 'quadspread'", prints: '25', code: "import { quadrance, point, rational } from 'quadspread';\nconsole.log(rational.toString(quadrance(rational, point(rational, 0, 0), point(rational, 3, 4))));" },
-  { name: "solveTriangle + rational from 'quadspread'", code: "import * as q from 'quadspread';\nconsole.log(q.solveTriangle, q.rational);" },
-  { name: "all of 'quadspread/float'", code: "import * as q from 'quadspread/float';\nconsole.log(q);" },
-  { name: "all of 'quadspread/rational'", code: "import * as q from 'quadspread/rational';\nconsole.log(q);" },
-  { name: "all of 'quadspread/decimal'", code: "import * as q from 'quadspread/decimal';\nconsole.log(q);" },
+  {
+    name: "quadrance + point from 'quadspread/float'",
+    budget: 8 * KiB,
+    prints: '25',
+    code: "import { quadrance, point } from 'quadspread/float';\nconsole.log(quadrance(point(0, 0), point(3, 4)));",
+  },
+  {
+    name: "quadrance + rational from 'quadspread'",
+    prints: '25',
+    code: "import { quadrance, point, rational } from 'quadspread';\nconsole.log(rational.toString(quadrance(rational, point(rational, 0, 0), point(rational, 3, 4))));",
+  },
+  {
+    name: "solveTriangle + rational from 'quadspread'",
+    code: "import * as q from 'quadspread';\nconsole.log(q.solveTriangle, q.rational);",
+  },
+  {
+    name: "all of 'quadspread/float'",
+    code: "import * as q from 'quadspread/float';\nconsole.log(q);",
+  },
+  {
+    name: "all of 'quadspread/rational'",
+    code: "import * as q from 'quadspread/rational';\nconsole.log(q);",
+  },
+  {
+    name: "all of 'quadspread/decimal'",
+    code: "import * as q from 'quadspread/decimal';\nconsole.log(q);",
+  },
 ];
 
 const pkgDir = packageDir();
@@ -66,7 +103,10 @@ try {
       const out = join(work, `case-${rows.length}.out.mjs`);
       writeFileSync(out, bytes);
       const printed = execFileSync(process.execPath, [out], { encoding: 'utf8' }).trim();
-      if (printed !== c.prints) throw new Error(`size: the bundle for ${c.name} printed ${JSON.stringify(printed)}, not ${c.prints}`);
+      if (printed !== c.prints)
+        throw new Error(
+          `size: the bundle for ${c.name} printed ${JSON.stringify(printed)}, not ${c.prints}`,
+        );
     }
     const gz = gzipSync(bytes).length;
     const ok = c.budget === undefined || bytes.length < c.budget;
@@ -80,10 +120,15 @@ try {
 
 const kib = (n) => `${(n / KiB).toFixed(1)} KiB`;
 const width = Math.max(...rows.map((r) => r.name.length));
-console.log('size: esbuild --bundle --minify (ESM, browser); fraction.js and big.js bundled unless the line says "own code"');
+console.log(
+  'size: esbuild --bundle --minify (ESM, browser); fraction.js and big.js bundled unless the line says "own code"',
+);
 for (const r of rows) {
-  const budget = r.budget === undefined ? '' : `  budget < ${kib(r.budget)}: ${r.ok ? 'ok' : 'OVER'}`;
-  console.log(`  ${r.name.padEnd(width)}  ${kib(r.bytes).padStart(10)} (${kib(r.gz)} gzip)${budget}`);
+  const budget =
+    r.budget === undefined ? '' : `  budget < ${kib(r.budget)}: ${r.ok ? 'ok' : 'OVER'}`;
+  console.log(
+    `  ${r.name.padEnd(width)}  ${kib(r.bytes).padStart(10)} (${kib(r.gz)} gzip)${budget}`,
+  );
 }
 if (failed) {
   console.error('size: over budget');

@@ -40,7 +40,13 @@ export function load(app) {
     const area = AREAS[first];
     if (area) {
       areaOfReflection.set(reflection.id, area);
-      if (!areaOfName.has(reflection.name) && first !== 'rational.ts' && first !== 'decimal.ts' && first !== 'float.ts') areaOfName.set(reflection.name, area);
+      if (
+        !areaOfName.has(reflection.name) &&
+        first !== 'rational.ts' &&
+        first !== 'decimal.ts' &&
+        first !== 'float.ts'
+      )
+        areaOfName.set(reflection.name, area);
     }
   });
 
@@ -56,10 +62,17 @@ export function load(app) {
         const groups = new Map();
         for (const child of children) {
           let area = areaOfName.get(child.name) ?? areaOfReflection.get(child.id);
-          if (!area && (child.name === 'arithmetic' || child.name === 'Value' || child.name === 'Bound')) area = 'Arithmetic';
-          if (!area && child.isReference?.()) area = areaOfName.get(child.getTargetReflectionDeep().name);
+          if (
+            !area &&
+            (child.name === 'arithmetic' || child.name === 'Value' || child.name === 'Bound')
+          )
+            area = 'Arithmetic';
+          if (!area && child.isReference?.())
+            area = areaOfName.get(child.getTargetReflectionDeep().name);
           if (!area) {
-            app.logger.warn(`typedoc-areas: ${mod.name}.${child.name} is not defined in an area folder of src/`);
+            app.logger.warn(
+              `typedoc-areas: ${mod.name}.${child.name} is not defined in an area folder of src/`,
+            );
             area = 'Other';
           }
           if (!groups.has(area)) groups.set(area, new ReflectionGroup(area, child));

@@ -17,8 +17,10 @@
  */
 export const ERROR_CODES = {
   // Numbers and arithmetic
-  INVALID_NUMBER: 'A value is not a number this arithmetic can read (bad text, NaN, ±Infinity, null, an object, a value of another arithmetic).',
-  INPUT_TOO_LONG: 'An input string is longer than the documented limit, or its exponent is too large.',
+  INVALID_NUMBER:
+    'A value is not a number this arithmetic can read (bad text, NaN, ±Infinity, null, an object, a value of another arithmetic).',
+  INPUT_TOO_LONG:
+    'An input string is longer than the documented limit, or its exponent is too large.',
   NOT_FINITE: 'A float result overflowed to ±Infinity or became NaN.',
   DIVISION_BY_ZERO: 'A division by zero.',
   NO_REAL_SOLUTION: 'A square root of a negative number, or readings with no real solution.',
@@ -56,7 +58,8 @@ export const ERROR_CODES = {
   INVALID_COVARIANCE: 'A covariance that cannot belong to the inputs (for example |r| > 1).',
   // Geodesy
   LATITUDE_OUT_OF_RANGE: 'A latitude beyond ±90°.',
-  HEIGHT_OUT_OF_RANGE: 'A height that cannot belong to a point of the ellipsoid (for example below −a).',
+  HEIGHT_OUT_OF_RANGE:
+    'A height that cannot belong to a point of the ellipsoid (for example below −a).',
   UNKNOWN_ELLIPSOID: 'An ellipsoid that is not known.',
   INVALID_ELLIPSOID: 'Ellipsoid parameters that do not define an oblate ellipsoid.',
   NOT_CONVERGED: 'An iteration did not converge within its limit.',
@@ -141,7 +144,11 @@ export function show(x: unknown): string {
   if (Array.isArray(x)) return `an array of ${x.length}`;
   if (typeof x === 'object') {
     const text = String(x);
-    return text === '[object Object]' ? 'an object' : text.length > 60 ? `${text.slice(0, 57)}...` : text;
+    return text === '[object Object]'
+      ? 'an object'
+      : text.length > 60
+        ? `${text.slice(0, 57)}...`
+        : text;
   }
   return typeof x;
 }
@@ -149,7 +156,10 @@ export function show(x: unknown): string {
 // Factories for the codes thrown most often (internal; not exported by the entries). One call
 // instead of `new QuadspreadError('CODE', …)` at each of some 240 places keeps the
 // minified library inside its size budget; the error is the same.
-const make = (code: ErrorCode) => (where: string, what: string): QuadspreadError => new QuadspreadError(code, where, what);
+const make =
+  (code: ErrorCode) =>
+  (where: string, what: string): QuadspreadError =>
+    new QuadspreadError(code, where, what);
 /** @internal */ export const invalidArgument = /* @__PURE__ */ make('INVALID_ARGUMENT');
 /** @internal */ export const notFinite = /* @__PURE__ */ make('NOT_FINITE');
 /** @internal */ export const noRealSolution = /* @__PURE__ */ make('NO_REAL_SOLUTION');
@@ -168,9 +178,14 @@ const make = (code: ErrorCode) => (where: string, what: string): QuadspreadError
 /** @internal */ export const invalidSlope = /* @__PURE__ */ make('INVALID_SLOPE');
 
 /** `INVALID_ARGUMENT` for atan2(0, 0), which every arithmetic refuses. @internal */
-export const zeroVectorAngle = (where: string): QuadspreadError => invalidArgument(where, 'the angle of the zero vector is undefined');
+export const zeroVectorAngle = (where: string): QuadspreadError =>
+  invalidArgument(where, 'the angle of the zero vector is undefined');
 /** `INPUT_TOO_LONG` for text of `length` characters over `limit`. @internal */
-export const textTooLong = (where: string, length: number, limit: number = MAX_INPUT_LENGTH): QuadspreadError =>
+export const textTooLong = (
+  where: string,
+  length: number,
+  limit: number = MAX_INPUT_LENGTH,
+): QuadspreadError =>
   inputTooLong(where, `text of ${length} characters is longer than the limit of ${limit}`);
 /**
  * `INVALID_NUMBER` for an operand of `arith`'s operation `op` that is not a value of that

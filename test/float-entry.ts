@@ -14,7 +14,12 @@ const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 /** `entry` (an absolute path) bundled float-specialised, imported. */
 export async function loadSpecialised(entry: string): Promise<Record<string, any>> {
   const out = await build({
-    entryPoints: [entry], bundle: true, write: false, format: 'esm', platform: 'node', logLevel: 'silent',
+    entryPoints: [entry],
+    bundle: true,
+    write: false,
+    format: 'esm',
+    platform: 'node',
+    logLevel: 'silent',
     plugins: [floatSpecialize({ entries: [entry], srcDir: path.join(root, 'src') })],
   });
   const file = path.join(mkdtempSync(path.join(tmpdir(), 'qs-float-entry-')), 'bundle.mjs');

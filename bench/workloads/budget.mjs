@@ -9,12 +9,15 @@ import { makeCases as heightCases } from './heights.mjs';
 
 export const name = 'budget';
 export const title = '(d) uncertainty budget of (b), float';
-const SIG_C = 0.002, SIG_R = 1e-6;
+const SIG_C = 0.002,
+  SIG_R = 1e-6;
 const NAMES = ['c1', 'c2', 'c3', 'R1', 'R2', 'R3'];
 
 export function unavailable(lib) {
   const { g } = lib;
-  return g.uncertain && g.budget && g.measured && g.heightFromInlineReadings ? undefined : 'uncertain/budget/heightFromInlineReadings are not all in the built package yet';
+  return g.uncertain && g.budget && g.measured && g.heightFromInlineReadings
+    ? undefined
+    : 'uncertain/budget/heightFromInlineReadings are not all in the built package yet';
 }
 
 export const makeCases = (n) => heightCases(n, 4);
@@ -61,11 +64,18 @@ function div(a, b) {
 export function handFloat(inp) {
   const [s1, s2, s3] = inp.chainages.map((v, i) => seed(v, i));
   const origin = div(add(add(s1, s2), s3), konst(3)); // about the mean chainage, as the library
-  const c1 = sub(s1, origin), c2 = sub(s2, origin), c3 = sub(s3, origin);
+  const c1 = sub(s1, origin),
+    c2 = sub(s2, origin),
+    c3 = sub(s3, origin);
   const [R1, R2, R3] = inp.vertical.map((v, i) => seed(v, i + 3));
-  const one = konst(1), two = konst(2);
-  const k1 = div(sub(one, R1), R1), k2 = div(sub(one, R2), R2), k3 = div(sub(one, R3), R3);
-  const a12 = sub(c2, c1), a23 = sub(c3, c2), a13 = sub(c3, c1);
+  const one = konst(1),
+    two = konst(2);
+  const k1 = div(sub(one, R1), R1),
+    k2 = div(sub(one, R2), R2),
+    k3 = div(sub(one, R3), R3);
+  const a12 = sub(c2, c1),
+    a23 = sub(c3, c2),
+    a13 = sub(c3, c1);
   const coef = add(sub(mul(k1, a23), mul(k2, a13)), mul(k3, a12));
   const H = div(mul(mul(a12, a23), a13), coef);
   if (H[0] <= 0) throw new Error('inconsistent');
@@ -88,7 +98,10 @@ export function handFloat(inp) {
 
 export function build(lib, cases) {
   const { g } = lib;
-  const fl = cases.map((c) => ({ chainages: c.chainages.map((s) => g.float.from(s)), vertical: c.vertical.map((s) => g.float.from(s)) }));
+  const fl = cases.map((c) => ({
+    chainages: c.chainages.map((s) => g.float.from(s)),
+    vertical: c.vertical.map((s) => g.float.from(s)),
+  }));
   const U = g.uncertain(g.float);
   const ours = (inp) => {
     const chainages = inp.chainages.map((v, i) => g.measured(U, v, SIG_C, NAMES[i]));
@@ -98,7 +111,10 @@ export function build(lib, cases) {
   };
   return {
     items: cases.length,
-    float: { ours: loop1(fl, ours, (b) => b.variance > 0), hand: loop1(fl, handFloat, (b) => b.variance > 0) },
+    float: {
+      ours: loop1(fl, ours, (b) => b.variance > 0),
+      hand: loop1(fl, handFloat, (b) => b.variance > 0),
+    },
     pollute(arithmetics) {
       let n = 0;
       for (const A of arithmetics) {

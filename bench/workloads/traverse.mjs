@@ -21,7 +21,8 @@ export function makeCases(n, seed = 3) {
   const out = [];
   for (let t = 0; t < count; t++) {
     const courses = [];
-    let sx = 0, sy = 0;
+    let sx = 0,
+      sy = 0;
     for (let i = 0; i < COURSES; i++) {
       // A closed polygon-ish walk: headings turn once around; legs 20–300 m; the last course
       // returns to the start with a few millimetres of misclosure.
@@ -50,8 +51,11 @@ export function makeCases(n, seed = 3) {
 // length/linear; compass rule: correction = −misclosure·(course length/total length).
 
 export function handFloat(inp) {
-  const cs = inp.courses, n = cs.length;
-  let x = inp.start.x, y = inp.start.y, total = 0;
+  const cs = inp.courses,
+    n = cs.length;
+  let x = inp.start.x,
+    y = inp.start.y,
+    total = 0;
   const points = new Array(n + 1);
   points[0] = inp.start;
   for (let i = 0; i < n; i++) {
@@ -62,30 +66,50 @@ export function handFloat(inp) {
     y += c.latitude;
     points[i + 1] = { x, y };
   }
-  const east = x - inp.start.x, north = y - inp.start.y;
+  const east = x - inp.start.x,
+    north = y - inp.start.y;
   const q = east * east + north * north;
   const linear = Math.sqrt(q);
   const ratio = q === 0 ? undefined : total / linear;
-  const kLat = -north / total, kDep = -east / total;
+  const kLat = -north / total,
+    kDep = -east / total;
   const adjusted = new Array(n + 1);
   const legs = new Array(n);
   adjusted[0] = inp.start;
-  let ax = inp.start.x, ay = inp.start.y;
+  let ax = inp.start.x,
+    ay = inp.start.y;
   for (let i = 0; i < n; i++) {
     const c = cs[i];
-    const adjLat = c.latitude + kLat * c.distance, adjDep = c.departure + kDep * c.distance;
+    const adjLat = c.latitude + kLat * c.distance,
+      adjDep = c.departure + kDep * c.distance;
     ax += adjDep;
     ay += adjLat;
     adjusted[i + 1] = { x: ax, y: ay };
-    legs[i] = { latitude: c.latitude, departure: c.departure, length: c.distance, adjustedLatitude: adjLat, adjustedDeparture: adjDep };
+    legs[i] = {
+      latitude: c.latitude,
+      departure: c.departure,
+      length: c.distance,
+      adjustedLatitude: adjLat,
+      adjustedDeparture: adjDep,
+    };
   }
-  return { closure: { east, north, linear, ratio }, length: total, points, adjusted, courses: legs, rule: 'compass' };
+  return {
+    closure: { east, north, linear, ratio },
+    length: total,
+    points,
+    adjusted,
+    courses: legs,
+    rule: 'compass',
+  };
 }
 
 /** Plain fraction.js; √ (which fraction.js lacks) through Math.sqrt of the value. */
 export function naiveFraction(inp) {
-  const cs = inp.courses, n = cs.length;
-  let x = inp.start.x, y = inp.start.y, total = new Fraction(0);
+  const cs = inp.courses,
+    n = cs.length;
+  let x = inp.start.x,
+    y = inp.start.y,
+    total = new Fraction(0);
   const points = new Array(n + 1);
   points[0] = inp.start;
   for (let i = 0; i < n; i++) {
@@ -96,30 +120,50 @@ export function naiveFraction(inp) {
     y = y.add(c.latitude);
     points[i + 1] = { x, y };
   }
-  const east = x.sub(inp.start.x), north = y.sub(inp.start.y);
+  const east = x.sub(inp.start.x),
+    north = y.sub(inp.start.y);
   const q = east.mul(east).add(north.mul(north));
   const linear = new Fraction(Math.sqrt(q.valueOf()));
   const ratio = q.n === 0n ? undefined : total.div(linear);
-  const kLat = north.neg().div(total), kDep = east.neg().div(total);
+  const kLat = north.neg().div(total),
+    kDep = east.neg().div(total);
   const adjusted = new Array(n + 1);
   const legs = new Array(n);
   adjusted[0] = inp.start;
-  let ax = inp.start.x, ay = inp.start.y;
+  let ax = inp.start.x,
+    ay = inp.start.y;
   for (let i = 0; i < n; i++) {
     const c = cs[i];
-    const adjLat = c.latitude.add(kLat.mul(c.distance)), adjDep = c.departure.add(kDep.mul(c.distance));
+    const adjLat = c.latitude.add(kLat.mul(c.distance)),
+      adjDep = c.departure.add(kDep.mul(c.distance));
     ax = ax.add(adjDep);
     ay = ay.add(adjLat);
     adjusted[i + 1] = { x: ax, y: ay };
-    legs[i] = { latitude: c.latitude, departure: c.departure, length: c.distance, adjustedLatitude: adjLat, adjustedDeparture: adjDep };
+    legs[i] = {
+      latitude: c.latitude,
+      departure: c.departure,
+      length: c.distance,
+      adjustedLatitude: adjLat,
+      adjustedDeparture: adjDep,
+    };
   }
-  return { closure: { east, north, linear, ratio }, length: total, points, adjusted, courses: legs, rule: 'compass' };
+  return {
+    closure: { east, north, linear, ratio },
+    length: total,
+    points,
+    adjusted,
+    courses: legs,
+    rule: 'compass',
+  };
 }
 
 /** Plain big.js (÷ and √ to Big.DP = 34 places). */
 export function naiveBig(inp) {
-  const cs = inp.courses, n = cs.length;
-  let x = inp.start.x, y = inp.start.y, total = inp.start.x.times(0);
+  const cs = inp.courses,
+    n = cs.length;
+  let x = inp.start.x,
+    y = inp.start.y,
+    total = inp.start.x.times(0);
   const points = new Array(n + 1);
   points[0] = inp.start;
   for (let i = 0; i < n; i++) {
@@ -130,24 +174,41 @@ export function naiveBig(inp) {
     y = y.plus(c.latitude);
     points[i + 1] = { x, y };
   }
-  const east = x.minus(inp.start.x), north = y.minus(inp.start.y);
+  const east = x.minus(inp.start.x),
+    north = y.minus(inp.start.y);
   const q = east.times(east).plus(north.times(north));
   const linear = q.sqrt();
   const ratio = q.eq(0) ? undefined : total.div(linear);
-  const kLat = north.neg().div(total), kDep = east.neg().div(total);
+  const kLat = north.neg().div(total),
+    kDep = east.neg().div(total);
   const adjusted = new Array(n + 1);
   const legs = new Array(n);
   adjusted[0] = inp.start;
-  let ax = inp.start.x, ay = inp.start.y;
+  let ax = inp.start.x,
+    ay = inp.start.y;
   for (let i = 0; i < n; i++) {
     const c = cs[i];
-    const adjLat = c.latitude.plus(kLat.times(c.distance)), adjDep = c.departure.plus(kDep.times(c.distance));
+    const adjLat = c.latitude.plus(kLat.times(c.distance)),
+      adjDep = c.departure.plus(kDep.times(c.distance));
     ax = ax.plus(adjDep);
     ay = ay.plus(adjLat);
     adjusted[i + 1] = { x: ax, y: ay };
-    legs[i] = { latitude: c.latitude, departure: c.departure, length: c.distance, adjustedLatitude: adjLat, adjustedDeparture: adjDep };
+    legs[i] = {
+      latitude: c.latitude,
+      departure: c.departure,
+      length: c.distance,
+      adjustedLatitude: adjLat,
+      adjustedDeparture: adjDep,
+    };
   }
-  return { closure: { east, north, linear, ratio }, length: total, points, adjusted, courses: legs, rule: 'compass' };
+  return {
+    closure: { east, north, linear, ratio },
+    length: total,
+    points,
+    adjusted,
+    courses: legs,
+    rule: 'compass',
+  };
 }
 
 export function build(lib, cases) {
@@ -155,7 +216,11 @@ export function build(lib, cases) {
   const as = (from) =>
     cases.map((t) => ({
       start: { x: from(t.start.x), y: from(t.start.y) },
-      courses: t.courses.map((c) => ({ latitude: from(c.latitude), departure: from(c.departure), distance: from(c.distance) })),
+      courses: t.courses.map((c) => ({
+        latitude: from(c.latitude),
+        departure: from(c.departure),
+        distance: from(c.distance),
+      })),
     }));
   const fl = as((s) => F.arithmetic.from(s));
   const ra = as((s) => R.arithmetic.from(s));
@@ -166,9 +231,18 @@ export function build(lib, cases) {
   return {
     items: cases.length,
     float: { ours: loop1(fl, F.traverse, keyF), hand: loop1(fl, handFloat, keyF) },
-    floatGeneric: { ours: loop1(fl, (x) => g.traverse(g.float, x), keyF), hand: loop1(fl, handFloat, keyF) },
-    rational: { ours: loop1(ra, R.traverse, (r) => r.adjusted.length > 0), naive: loop1(fr, naiveFraction, (r) => r.adjusted.length > 0) },
-    decimal: { ours: loop1(de, D.traverse, (r) => r.adjusted.length > 0), naive: loop1(bi, naiveBig, (r) => r.adjusted.length > 0) },
+    floatGeneric: {
+      ours: loop1(fl, (x) => g.traverse(g.float, x), keyF),
+      hand: loop1(fl, handFloat, keyF),
+    },
+    rational: {
+      ours: loop1(ra, R.traverse, (r) => r.adjusted.length > 0),
+      naive: loop1(fr, naiveFraction, (r) => r.adjusted.length > 0),
+    },
+    decimal: {
+      ours: loop1(de, D.traverse, (r) => r.adjusted.length > 0),
+      naive: loop1(bi, naiveBig, (r) => r.adjusted.length > 0),
+    },
     pollute(arithmetics) {
       let n = 0;
       for (const A of arithmetics) {

@@ -5,7 +5,14 @@
  */
 import BigJs from 'big.js';
 import type { Big, BigConstructor } from 'big.js';
-import { show, invalidArgument, divisionByZero, noRealSolution, notFinite, zeroVectorAngle } from '../errors.js';
+import {
+  show,
+  invalidArgument,
+  divisionByZero,
+  noRealSolution,
+  notFinite,
+  zeroVectorAngle,
+} from '../errors.js';
 import type { Arithmetic, Numeric } from './types.js';
 import { isqrt, operandChecks, pow10, ratioToPrecision, readInput } from './exact.js';
 import { decimalElementary } from './elementary.js';
@@ -48,7 +55,6 @@ function isForeignBig(x: unknown): x is Big {
   return Array.isArray(b.c) && typeof b.e === 'number' && (b.s === 1 || b.s === -1);
 }
 
-
 function digitCount(a: bigint): number {
   return (a < 0n ? -a : a).toString().length;
 }
@@ -76,7 +82,10 @@ function digitCount(a: bigint): number {
  */
 export function decimal(digits = 34): DecimalArithmetic {
   if (!Number.isInteger(digits) || digits < 1 || digits > MAX_DECIMAL_DIGITS) {
-    throw invalidArgument('decimal(digits)', `digits ${show(digits)} is not an integer in 1..${MAX_DECIMAL_DIGITS}`);
+    throw invalidArgument(
+      'decimal(digits)',
+      `digits ${show(digits)} is not an integer in 1..${MAX_DECIMAL_DIGITS}`,
+    );
   }
   const D: BigConstructor = BigJs();
   D.DP = 0;
@@ -127,7 +136,8 @@ export function decimal(digits = 34): DecimalArithmetic {
     sub: (a, b) => round(two('sub', a, b).minus(b)),
     mul: (a, b) => round(two('mul', a, b).times(b)),
     div(a, b) {
-      if (two('div', a, b) && b.c[0] === 0) throw divisionByZero(`${name}.div(a, b)`, `b is zero (a = ${a.toString()})`);
+      if (two('div', a, b) && b.c[0] === 0)
+        throw divisionByZero(`${name}.div(a, b)`, `b is zero (a = ${a.toString()})`);
       const pa = parts(a);
       const pb = parts(b);
       return divide(pa.coef, pa.exp, pb.coef, pb.exp);
@@ -152,13 +162,19 @@ export function decimal(digits = 34): DecimalArithmetic {
     },
     toNumber(a) {
       const v = Number(one('toNumber', a).toString());
-      if (!Number.isFinite(v)) throw notFinite(`${name}.toNumber(a)`, `${a.toString()} is beyond the range of a JS number`);
+      if (!Number.isFinite(v))
+        throw notFinite(
+          `${name}.toNumber(a)`,
+          `${a.toString()} is beyond the range of a JS number`,
+        );
       return v;
     },
     toString: (a) => one('toString', a).toString(),
     toPrecision(a, d) {
       const p = parts(one('toPrecision', a));
-      return p.exp >= 0 ? ratioToPrecision(p.coef * pow10(p.exp), 1n, d) : ratioToPrecision(p.coef, pow10(-p.exp), d);
+      return p.exp >= 0
+        ? ratioToPrecision(p.coef * pow10(p.exp), 1n, d)
+        : ratioToPrecision(p.coef, pow10(-p.exp), d);
     },
     get pi() {
       return fromText(elementary.pi);

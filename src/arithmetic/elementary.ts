@@ -25,7 +25,16 @@
  *
  * @module arithmetic
  */
-import { QuadspreadError, show, invalidNumber, inputTooLong, invalidArgument, noRealSolution, zeroVectorAngle, textTooLong } from '../errors.js';
+import {
+  QuadspreadError,
+  show,
+  invalidNumber,
+  inputTooLong,
+  invalidArgument,
+  noRealSolution,
+  zeroVectorAngle,
+  textTooLong,
+} from '../errors.js';
 import { bitLength, DECIMAL, isqrt, pow10 } from './exact.js';
 
 /** Transcendental functions working on decimal text, to a fixed number of significant digits. */
@@ -73,7 +82,6 @@ const MAX_ARG_EXPONENT = 20000;
 const MAX_REDUCED_EXPONENT = 1001;
 const LOG2_10 = 3.321928094887362;
 
-
 const abs = (a: bigint): bigint => (a < 0n ? -a : a);
 /** a · b / 2^B truncated toward zero (so that series terms of either sign reach 0). */
 const mulShift = (a: bigint, b: bigint, B: bigint): bigint => {
@@ -90,7 +98,6 @@ interface Arg {
   readonly d: bigint;
 }
 
-
 function readArg(text: string, where: string): Arg {
   if (typeof text !== 'string') throw invalidNumber(where, `${show(text)} is not decimal text`);
   if (text.length > MAX_TEXT) throw textTooLong(where, text.length, MAX_TEXT);
@@ -103,11 +110,16 @@ function readArg(text: string, where: string): Arg {
   if (m[1] === '-') coef = -coef;
   const e = m[4] === undefined ? 0 : Number(m[4]);
   const exp = e - frac.length;
-  if (!Number.isSafeInteger(e) || (coef !== 0n && Math.abs(exp + String(abs(coef)).length) > MAX_ARG_EXPONENT)) {
+  if (
+    !Number.isSafeInteger(e) ||
+    (coef !== 0n && Math.abs(exp + String(abs(coef)).length) > MAX_ARG_EXPONENT)
+  ) {
     throw inputTooLong(where, `${show(text)} has a decimal exponent beyond ±${MAX_ARG_EXPONENT}`);
   }
   if (coef === 0n) return { coef: 0n, exp: 0, n: 0n, d: 1n };
-  return exp >= 0 ? { coef, exp, n: coef * pow10(exp), d: 1n } : { coef, exp, n: coef, d: pow10(-exp) };
+  return exp >= 0
+    ? { coef, exp, n: coef * pow10(exp), d: 1n }
+    : { coef, exp, n: coef, d: pow10(-exp) };
 }
 
 /** round(n · 2^W / d) for d > 0, W ≥ 0: error ≤ 1/2. */
@@ -190,7 +202,8 @@ function decide(a: Approx, digits: number): Rounded | undefined {
 
 /** Decimal text of coef · 10^exp: trailing zeros dropped; plain unless the exponent is outside [−7, 21). */
 function format(r: Rounded): string {
-  let { coef, exp } = r;
+  const { coef } = r;
+  let { exp } = r;
   if (coef === 0n) return '0';
   const neg = coef < 0n;
   let s = String(abs(coef));
@@ -201,7 +214,10 @@ function format(r: Rounded): string {
   const sci = exp + s.length - 1; // exponent of the leading digit
   let out: string;
   if (sci >= 21 || sci < -7) {
-    out = s.length > 1 ? `${s[0]}.${s.slice(1)}e${sci >= 0 ? '+' : ''}${sci}` : `${s}e${sci >= 0 ? '+' : ''}${sci}`;
+    out =
+      s.length > 1
+        ? `${s[0]}.${s.slice(1)}e${sci >= 0 ? '+' : ''}${sci}`
+        : `${s}e${sci >= 0 ? '+' : ''}${sci}`;
   } else if (exp >= 0) {
     out = s + '0'.repeat(exp);
   } else if (sci >= 0) {
@@ -346,7 +362,10 @@ function atanFixed(T: bigint, W: number): { v: bigint; err: bigint } {
  */
 export function decimalElementary(digits: number): DecimalElementary {
   if (!Number.isInteger(digits) || digits < 1 || digits > 1000) {
-    throw invalidArgument('decimalElementary(digits)', `digits ${show(digits)} is not an integer in 1..1000`);
+    throw invalidArgument(
+      'decimalElementary(digits)',
+      `digits ${show(digits)} is not an integer in 1..1000`,
+    );
   }
   const name = `decimalElementary(${digits})`;
   const baseBits = Math.ceil(digits * LOG2_10) + 24;
@@ -379,7 +398,12 @@ export function decimalElementary(digits: number): DecimalElementary {
     for (;;) {
       const r = decide(approx(W), digits);
       if (r) return format(r);
-      if (W > limit) throw new QuadspreadError('NOT_CONVERGED', where, `the rounding to ${digits} digits was not decided at ${W} bits`);
+      if (W > limit)
+        throw new QuadspreadError(
+          'NOT_CONVERGED',
+          where,
+          `the rounding to ${digits} digits was not decided at ${W} bits`,
+        );
       W *= 2;
     }
   };
@@ -390,7 +414,10 @@ export function decimalElementary(digits: number): DecimalElementary {
    */
   const reduce = (x: Arg, Wr: number, where: string): { r: bigint; quadrant: number } => {
     if (x.exp + String(abs(x.coef)).length > MAX_REDUCED_EXPONENT) {
-      throw invalidArgument(where, `|x| ≥ 10^${MAX_REDUCED_EXPONENT} is too large to reduce by π/2`);
+      throw invalidArgument(
+        where,
+        `|x| ≥ 10^${MAX_REDUCED_EXPONENT} is too large to reduce by π/2`,
+      );
     }
     // |x| < 3/4 < π/4: no reduction.
     if (4n * abs(x.n) < 3n * x.d) return { r: toFixed(x.n, x.d, Wr), quadrant: 0 };
@@ -513,7 +540,8 @@ export function decimalElementary(digits: number): DecimalElementary {
     const where = `${name}.exp(x)`;
     const x = readArg(text, where);
     if (x.n === 0n) return '1';
-    if (abs(x.n) > 2302585n * x.d) throw invalidArgument(where, `|x| = ${show(text)} > 2302585: e^x is beyond 10^±1000000`);
+    if (abs(x.n) > 2302585n * x.d)
+      throw invalidArgument(where, `|x| = ${show(text)} > 2302585: e^x is beyond 10^±1000000`);
     return ziv(where, baseBits, (W) => {
       // x = k ln 2 + r, |r| ≤ ln 2 / 2; e^x = 2^k e^r (Muller ch. 11).
       const L = Math.max(0, log2Estimate(x.n, x.d) + 2);
@@ -577,7 +605,8 @@ export function decimalElementary(digits: number): DecimalElementary {
   return Object.freeze({
     digits,
     get pi(): string {
-      if (piText === undefined) piText = ziv(`${name}.pi`, baseBits, (W) => ({ F: pi(W), E: 3n, W }));
+      if (piText === undefined)
+        piText = ziv(`${name}.pi`, baseBits, (W) => ({ F: pi(W), E: 3n, W }));
       return piText;
     },
     sin,

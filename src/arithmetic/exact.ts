@@ -5,7 +5,16 @@
  *
  * @module arithmetic
  */
-import { MAX_INPUT_LENGTH, show, invalidNumber, inputTooLong, divisionByZero, invalidArgument, textTooLong, notAValue } from '../errors.js';
+import {
+  MAX_INPUT_LENGTH,
+  show,
+  invalidNumber,
+  inputTooLong,
+  divisionByZero,
+  invalidArgument,
+  textTooLong,
+  notAValue,
+} from '../errors.js';
 
 /**
  * Largest decimal exponent accepted in numeric text (`1e1000` is read, `1e1001` refused),
@@ -44,7 +53,11 @@ export function pow10(k: number): bigint {
 
 function readDecimal(text: string, where: string, original: string, allowSign: boolean): Ratio {
   const m = DECIMAL.exec(text);
-  if (!m || (m[2] === undefined && (m[3] === undefined || m[3] === '')) || (!allowSign && m[1] !== '')) {
+  if (
+    !m ||
+    (m[2] === undefined && (m[3] === undefined || m[3] === '')) ||
+    (!allowSign && m[1] !== '')
+  ) {
     throw invalidNumber(where, `${show(original)} is not a number`);
   }
   const sign = m[1] === '-' ? -1n : 1n;
@@ -54,9 +67,11 @@ function readDecimal(text: string, where: string, original: string, allowSign: b
   if (!Number.isSafeInteger(exp) || Math.abs(exp) > MAX_EXPONENT) {
     throw inputTooLong(where, `${show(original)} has an exponent beyond ±${MAX_EXPONENT}`);
   }
-  const digits = BigInt((whole + frac) || '0');
+  const digits = BigInt(whole + frac || '0');
   const scale = exp - frac.length;
-  return scale >= 0 ? { n: sign * digits * pow10(scale), d: 1n } : { n: sign * digits, d: pow10(-scale) };
+  return scale >= 0
+    ? { n: sign * digits * pow10(scale), d: 1n }
+    : { n: sign * digits, d: pow10(-scale) };
 }
 
 /**
@@ -183,7 +198,10 @@ export function ratioToNumber(n: bigint, d: bigint): number {
  */
 export function ratioToPrecision(n: bigint, d: bigint, digits: number): string {
   if (!Number.isInteger(digits) || digits < 1 || digits > 1000) {
-    throw invalidArgument('toPrecision(a, digits)', `digits ${show(digits)} is not an integer in 1..1000`);
+    throw invalidArgument(
+      'toPrecision(a, digits)',
+      `digits ${show(digits)} is not an integer in 1..1000`,
+    );
   }
   if (n === 0n) return digits > 1 ? `0.${'0'.repeat(digits - 1)}` : '0';
   const neg = n < 0n;
@@ -207,7 +225,10 @@ export function ratioToPrecision(n: bigint, d: bigint, digits: number): string {
   }
   let out: string;
   if (e >= 21 || e < -7) {
-    out = s.length > 1 ? `${s[0]}.${s.slice(1)}e${e >= 0 ? '+' : ''}${e}` : `${s}e${e >= 0 ? '+' : ''}${e}`;
+    out =
+      s.length > 1
+        ? `${s[0]}.${s.slice(1)}e${e >= 0 ? '+' : ''}${e}`
+        : `${s}e${e >= 0 ? '+' : ''}${e}`;
   } else if (e >= digits - 1) {
     out = s + '0'.repeat(e - digits + 1);
   } else if (e >= 0) {

@@ -3,7 +3,14 @@
  *
  * @module arithmetic
  */
-import { show, notFinite, invalidNumber, divisionByZero, noRealSolution, zeroVectorAngle } from '../errors.js';
+import {
+  show,
+  notFinite,
+  invalidNumber,
+  divisionByZero,
+  noRealSolution,
+  zeroVectorAngle,
+} from '../errors.js';
 import type { Arithmetic, Numeric } from './types.js';
 import { ratioToNumber, ratioToPrecision, readInput, readRatio } from './exact.js';
 

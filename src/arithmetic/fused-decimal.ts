@@ -49,7 +49,11 @@ function exponent(x: Big): number {
  * value of its big.js constructor) and its `from`.
  * @internal
  */
-export function decimalKernels(digits: number, zero: Big, from: (x: unknown) => Big): FusedKernels<Big> {
+export function decimalKernels(
+  digits: number,
+  zero: Big,
+  from: (x: unknown) => Big,
+): FusedKernels<Big> {
   // Results are built directly as Bigs of this arithmetic (a copy of its zero, then its digits),
   // without going through text: most of the cost of a decimal result is otherwise the parse.
   const Ctor = zero.constructor as unknown as new (x: Big) => Big;
@@ -79,7 +83,11 @@ export function decimalKernels(digits: number, zero: Big, from: (x: unknown) => 
       let up = next > 5;
       if (next === 5) {
         let rest = false;
-        for (let i = digits + 1; i < n; i++) if (t.charCodeAt(i) !== 48) { rest = true; break; }
+        for (let i = digits + 1; i < n; i++)
+          if (t.charCodeAt(i) !== 48) {
+            rest = true;
+            break;
+          }
         up = rest || (t.charCodeAt(digits - 1) - 48) % 2 === 1;
       }
       n = digits;
@@ -105,7 +113,8 @@ export function decimalKernels(digits: number, zero: Big, from: (x: unknown) => 
     return big(neg ? -1 : 1, e, c);
   }
 
-  let lastB = 0n, lastLb = 1;
+  let lastB = 0n,
+    lastLb = 1;
   /** (an·10^ae)/(bn·10^be) for bn > 0, correctly rounded: digits + 2 quotient digits and a sticky one. */
   function divide(an: bigint, ae: number, bn: bigint, be: number): Big {
     if (an === 0n) return big(1, 0, [0]);
@@ -122,11 +131,21 @@ export function decimalKernels(digits: number, zero: Big, from: (x: unknown) => 
   }
 
   /** x is a Big made by this arithmetic's constructor (not a number, text or another instance's Big). */
-  const own = (x: unknown): boolean => x !== null && typeof x === 'object' && (x as { constructor?: unknown }).constructor === Ctor && Array.isArray((x as Big).c);
+  const own = (x: unknown): boolean =>
+    x !== null &&
+    typeof x === 'object' &&
+    (x as { constructor?: unknown }).constructor === Ctor &&
+    Array.isArray((x as Big).c);
 
   /** x read by the arithmetic (its own rounding), or undefined where from() would throw. */
   const read = (x: unknown): Big | undefined => {
-    if (typeof x !== 'number' && typeof x !== 'string' && typeof x !== 'bigint' && (x === null || typeof x !== 'object')) return undefined;
+    if (
+      typeof x !== 'number' &&
+      typeof x !== 'string' &&
+      typeof x !== 'bigint' &&
+      (x === null || typeof x !== 'object')
+    )
+      return undefined;
     try {
       return from(x);
     } catch {
@@ -146,12 +165,27 @@ export function decimalKernels(digits: number, zero: Big, from: (x: unknown) => 
     if (!parsed) return undefined;
     const { start, end, list } = parsed;
     const n = list.length;
-    const lat: Big[] = new Array(n), dep: Big[] = new Array(n), len: Big[] = new Array(n);
+    const lat: Big[] = new Array(n),
+      dep: Big[] = new Array(n),
+      len: Big[] = new Array(n);
     let e = Math.min(exponent(start.x), exponent(start.y), exponent(end.x), exponent(end.y));
     for (let i = 0; i < n; i++) {
-      const c = list[i] as { bearing?: unknown; latitude?: unknown; departure?: unknown; distance?: unknown } | null;
-      if (c === null || typeof c !== 'object' || c.bearing !== undefined || c.distance === undefined) return undefined;
-      const la = read(c.latitude), de = read(c.departure), d = read(c.distance);
+      const c = list[i] as {
+        bearing?: unknown;
+        latitude?: unknown;
+        departure?: unknown;
+        distance?: unknown;
+      } | null;
+      if (
+        c === null ||
+        typeof c !== 'object' ||
+        c.bearing !== undefined ||
+        c.distance === undefined
+      )
+        return undefined;
+      const la = read(c.latitude),
+        de = read(c.departure),
+        d = read(c.distance);
       if (!la || !de || !d || (d.s < 0 && d.c[0] !== 0)) return undefined;
       lat[i] = la;
       dep[i] = de;
@@ -163,13 +197,20 @@ export function decimalKernels(digits: number, zero: Big, from: (x: unknown) => 
     // A span of magnitudes beyond MAX_SPAN decimal places: left to the generic code (see triangle).
     if (top - e > MAX_SPAN) return undefined;
     const at = (x: Big): bigint => coefficient(x) * pow10(exponent(x) - e);
-    const Sx = at(start.x), Sy = at(start.y);
+    const Sx = at(start.x),
+      Sy = at(start.y);
     const points: { x: Big; y: Big }[] = new Array(n + 1);
     points[0] = start;
-    let X = Sx, Y = Sy, T = 0n;
-    const L: bigint[] = new Array(n), E: bigint[] = new Array(n), W: bigint[] = new Array(n);
+    let X = Sx,
+      Y = Sy,
+      T = 0n;
+    const L: bigint[] = new Array(n),
+      E: bigint[] = new Array(n),
+      W: bigint[] = new Array(n);
     for (let i = 0; i < n; i++) {
-      const li = at(lat[i]!), ei = at(dep[i]!), wi = at(len[i]!);
+      const li = at(lat[i]!),
+        ei = at(dep[i]!),
+        wi = at(len[i]!);
       L[i] = li;
       E[i] = ei;
       W[i] = wi;
@@ -179,20 +220,37 @@ export function decimalKernels(digits: number, zero: Big, from: (x: unknown) => 
       points[i + 1] = { x: make(X, e), y: make(Y, e) };
     }
     if (T === 0n) return undefined;
-    const east = X - at(end.x), north = Y - at(end.y);
+    const east = X - at(end.x),
+      north = Y - at(end.y);
     const adjusted: { x: Big; y: Big }[] = new Array(n + 1);
     const courses: FusedTraverse<Big>['courses'] = new Array(n);
     adjusted[0] = start;
-    let ax = Sx * T, ay = Sy * T;
+    let ax = Sx * T,
+      ay = Sy * T;
     for (let i = 0; i < n; i++) {
       // (L·T − north·W)/T on the scale 10^e: lat + kLat·d with kLat = −north/T, exactly.
-      const aLat = L[i]! * T - north * W[i]!, aDep = E[i]! * T - east * W[i]!;
+      const aLat = L[i]! * T - north * W[i]!,
+        aDep = E[i]! * T - east * W[i]!;
       ax += aDep;
       ay += aLat;
       adjusted[i + 1] = { x: divide(ax, e, T, 0), y: divide(ay, e, T, 0) };
-      courses[i] = { latitude: lat[i]!, departure: dep[i]!, length: len[i]!, adjustedLatitude: divide(aLat, e, T, 0), adjustedDeparture: divide(aDep, e, T, 0) };
+      courses[i] = {
+        latitude: lat[i]!,
+        departure: dep[i]!,
+        length: len[i]!,
+        adjustedLatitude: divide(aLat, e, T, 0),
+        adjustedDeparture: divide(aDep, e, T, 0),
+      };
     }
-    return { east: make(east, e), north: make(north, e), length: make(T, e), points, adjusted, courses, rule: 'compass' };
+    return {
+      east: make(east, e),
+      north: make(north, e),
+      length: make(T, e),
+      points,
+      adjusted,
+      courses,
+      rule: 'compass',
+    };
   }
 
   /**
@@ -201,24 +259,42 @@ export function decimalKernels(digits: number, zero: Big, from: (x: unknown) => 
    * |u × v|²/(|u|²|v|²) by Lagrange's identity; derived); quadrea = 4c² = 16·area² (Heron,
    * Metrica I.8, in squared form).
    */
-  function triangle(x1: Big, y1: Big, x2: Big, y2: Big, x3: Big, y3: Big): FusedTriangle<Big> | undefined {
+  function triangle(
+    x1: Big,
+    y1: Big,
+    x2: Big,
+    y2: Big,
+    x3: Big,
+    y3: Big,
+  ): FusedTriangle<Big> | undefined {
     // Only this arithmetic's own values (a number, text or a Big of another decimal instance goes
     // to the generic code, which reads or reports it).
     // (Every big.js constructor shares one prototype, so `instanceof` cannot tell instances
     // apart; each Big records its own constructor.)
     if (!(own(x1) && own(y1) && own(x2) && own(y2) && own(x3) && own(y3))) return undefined;
-    const e1 = exponent(x1), e2 = exponent(y1), e3 = exponent(x2), e4 = exponent(y2), e5 = exponent(x3), e6 = exponent(y3);
+    const e1 = exponent(x1),
+      e2 = exponent(y1),
+      e3 = exponent(x2),
+      e4 = exponent(y2),
+      e5 = exponent(x3),
+      e6 = exponent(y3);
     const e = Math.min(e1, e2, e3, e4, e5, e6);
     // Coordinates whose magnitudes span more than MAX_SPAN decimal places would make the exact
     // integers huge (the generic code rounds at every step instead): leave them to it.
     if (Math.max(x1.e, y1.e, x2.e, y2.e, x3.e, y3.e) - e > MAX_SPAN) return undefined;
     // Integers X = x·10^(−e), all on one scale.
-    const X1 = coefficient(x1) * pow10(e1 - e), Y1 = coefficient(y1) * pow10(e2 - e);
-    const X2 = coefficient(x2) * pow10(e3 - e), Y2 = coefficient(y2) * pow10(e4 - e);
-    const X3 = coefficient(x3) * pow10(e5 - e), Y3 = coefficient(y3) * pow10(e6 - e);
-    const ux = X2 - X1, uy = Y2 - Y1;
-    const vx = X3 - X1, vy = Y3 - Y1;
-    const wx = X3 - X2, wy = Y3 - Y2;
+    const X1 = coefficient(x1) * pow10(e1 - e),
+      Y1 = coefficient(y1) * pow10(e2 - e);
+    const X2 = coefficient(x2) * pow10(e3 - e),
+      Y2 = coefficient(y2) * pow10(e4 - e);
+    const X3 = coefficient(x3) * pow10(e5 - e),
+      Y3 = coefficient(y3) * pow10(e6 - e);
+    const ux = X2 - X1,
+      uy = Y2 - Y1;
+    const vx = X3 - X1,
+      vy = Y3 - Y1;
+    const wx = X3 - X2,
+      wy = Y3 - Y2;
     const q1 = wx * wx + wy * wy;
     const q2 = vx * vx + vy * vy;
     const q3 = ux * ux + uy * uy;

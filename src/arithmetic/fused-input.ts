@@ -20,15 +20,26 @@ export interface FusedTraverseInput<V> {
  * input is anything else.
  * @internal
  */
-export function readFusedTraverse<V>(input: unknown, read: (x: unknown) => V | undefined): FusedTraverseInput<V> | undefined {
+export function readFusedTraverse<V>(
+  input: unknown,
+  read: (x: unknown) => V | undefined,
+): FusedTraverseInput<V> | undefined {
   if (input === null || typeof input !== 'object') return undefined;
-  const t = input as { start?: unknown; close?: unknown; courses?: unknown; rule?: unknown; interiorAngles?: unknown };
-  if ((t.rule !== undefined && t.rule !== 'compass') || t.interiorAngles !== undefined) return undefined;
+  const t = input as {
+    start?: unknown;
+    close?: unknown;
+    courses?: unknown;
+    rule?: unknown;
+    interiorAngles?: unknown;
+  };
+  if ((t.rule !== undefined && t.rule !== 'compass') || t.interiorAngles !== undefined)
+    return undefined;
   const list = t.courses;
   if (!Array.isArray(list) || list.length === 0 || list.length > 1_000_000) return undefined;
   const pt = (p: unknown): { x: V; y: V } | undefined => {
     if (p === null || typeof p !== 'object' || !('x' in p) || !('y' in p)) return undefined;
-    const x = read((p as { x: unknown }).x), y = read((p as { y: unknown }).y);
+    const x = read((p as { x: unknown }).x),
+      y = read((p as { y: unknown }).y);
     return x !== undefined && y !== undefined ? { x, y } : undefined;
   };
   const start = pt(t.start);

@@ -81,21 +81,49 @@ function ratioOver(c2: bigint, p: bigint, q: bigint): Fraction {
  * (Heron, Metrica I.8, in squared form). Undefined when two points coincide or the three are
  * collinear, so that the caller's generic path reports those cases.
  */
-function triangle(x1: Fraction, y1: Fraction, x2: Fraction, y2: Fraction, x3: Fraction, y3: Fraction): FusedTriangle<Fraction> | undefined {
+function triangle(
+  x1: Fraction,
+  y1: Fraction,
+  x2: Fraction,
+  y2: Fraction,
+  x3: Fraction,
+  y3: Fraction,
+): FusedTriangle<Fraction> | undefined {
   // Only this arithmetic's own values: a number, text, bigint or a value of another arithmetic
   // in a point goes to the generic code (which reports it). Without this check a foreign
   // value's missing denominator made gcd() loop forever on NaN.
-  if (!(x1 instanceof Fraction && y1 instanceof Fraction && x2 instanceof Fraction && y2 instanceof Fraction && x3 instanceof Fraction && y3 instanceof Fraction)) return undefined;
+  if (!(
+    x1 instanceof Fraction &&
+    y1 instanceof Fraction &&
+    x2 instanceof Fraction &&
+    y2 instanceof Fraction &&
+    x3 instanceof Fraction &&
+    y3 instanceof Fraction
+  ))
+    return undefined;
   // One common denominator D for the six coordinates; X = D·x are integers.
-  const d1 = x1.d, d2 = y1.d, d3 = x2.d, d4 = y2.d, d5 = x3.d, d6 = y3.d;
+  const d1 = x1.d,
+    d2 = y1.d,
+    d3 = x2.d,
+    d4 = y2.d,
+    d5 = x3.d,
+    d6 = y3.d;
   let D = d1;
   if (d2 !== D || d3 !== D || d4 !== D || d5 !== D || d6 !== D) {
     D = lcm(lcm(lcm(d1, d2), lcm(d3, d4)), lcm(d5, d6));
   }
-  const X1 = scaled(x1, D), Y1 = scaled(y1, D), X2 = scaled(x2, D), Y2 = scaled(y2, D), X3 = scaled(x3, D), Y3 = scaled(y3, D);
-  const ux = X2 - X1, uy = Y2 - Y1; // A1 → A2
-  const vx = X3 - X1, vy = Y3 - Y1; // A1 → A3
-  const wx = X3 - X2, wy = Y3 - Y2; // A2 → A3
+  const X1 = scaled(x1, D),
+    Y1 = scaled(y1, D),
+    X2 = scaled(x2, D),
+    Y2 = scaled(y2, D),
+    X3 = scaled(x3, D),
+    Y3 = scaled(y3, D);
+  const ux = X2 - X1,
+    uy = Y2 - Y1; // A1 → A2
+  const vx = X3 - X1,
+    vy = Y3 - Y1; // A1 → A3
+  const wx = X3 - X2,
+    wy = Y3 - Y2; // A2 → A3
   const q1 = wx * wx + wy * wy; // D²·Q1
   const q2 = vx * vx + vy * vy; // D²·Q2
   const q3 = ux * ux + uy * uy; // D²·Q3
@@ -151,33 +179,67 @@ const isPlainFraction = (x: unknown): x is Fraction => x instanceof Fraction;
  * and the three residuals are exactly 0 (three equations, three unknowns). Undefined for any
  * other input, and wherever the generic code reports an error, which it then does.
  */
-function inlineHeight(input: unknown): { H: Fraction; footChainage: Fraction; footOffset: Fraction; residuals: Fraction[]; sign: 1 } | undefined {
+function inlineHeight(
+  input: unknown,
+):
+  | { H: Fraction; footChainage: Fraction; footOffset: Fraction; residuals: Fraction[]; sign: 1 }
+  | undefined {
   if (input === null || typeof input !== 'object') return undefined;
   const { chainages, vertical } = input as { chainages?: unknown; vertical?: unknown };
-  if (!Array.isArray(chainages) || !Array.isArray(vertical) || chainages.length !== 3 || vertical.length !== 3) return undefined;
+  if (
+    !Array.isArray(chainages) ||
+    !Array.isArray(vertical) ||
+    chainages.length !== 3 ||
+    vertical.length !== 3
+  )
+    return undefined;
   const [c1, c2, c3] = chainages as unknown[];
   const [R1, R2, R3] = vertical as unknown[];
   if (!isPlainFraction(c1) || !isPlainFraction(c2) || !isPlainFraction(c3)) return undefined;
   if (!isPlainFraction(R1) || !isPlainFraction(R2) || !isPlainFraction(R3)) return undefined;
   // Spreads in (0, 1]: s = +1, 0 < n ≤ d.
-  if (R1.s < 0n || R1.n === 0n || R1.n > R1.d || R2.s < 0n || R2.n === 0n || R2.n > R2.d || R3.s < 0n || R3.n === 0n || R3.n > R3.d) return undefined;
-  const d1 = c1.d, d2 = c2.d, d3 = c3.d;
+  if (
+    R1.s < 0n ||
+    R1.n === 0n ||
+    R1.n > R1.d ||
+    R2.s < 0n ||
+    R2.n === 0n ||
+    R2.n > R2.d ||
+    R3.s < 0n ||
+    R3.n === 0n ||
+    R3.n > R3.d
+  )
+    return undefined;
+  const d1 = c1.d,
+    d2 = c2.d,
+    d3 = c3.d;
   const D = d1 === d2 && d2 === d3 ? d1 : lcm(lcm(d1, d2), d3);
-  const C1 = scaled(c1, D), C2 = scaled(c2, D), C3 = scaled(c3, D);
+  const C1 = scaled(c1, D),
+    C2 = scaled(c2, D),
+    C3 = scaled(c3, D);
   if (C1 === C2 || C2 === C3 || C1 === C3) return undefined;
-  const r1 = R1.n, r2 = R2.n, r3 = R3.n;
-  const p1 = R1.d - r1, p2 = R2.d - r2, p3 = R3.d - r3;
-  const A12 = C2 - C1, A23 = C3 - C2, A13 = C3 - C1;
+  const r1 = R1.n,
+    r2 = R2.n,
+    r3 = R3.n;
+  const p1 = R1.d - r1,
+    p2 = R2.d - r2,
+    p3 = R3.d - r3;
+  const A12 = C2 - C1,
+    A23 = C3 - C2,
+    A13 = C3 - C1;
   const K = p1 * r2 * r3 * A23 - p2 * r1 * r3 * A13 + p3 * r1 * r2 * A12;
   if (K === 0n) return undefined;
   const P = A12 * A23 * A13;
   const D2 = D * D;
-  const Hn = P * r1 * r2 * r3, Hd = D2 * K;
-  if ((Hn < 0n) !== (Hd < 0n) || Hn === 0n) return undefined; // H ≤ 0
+  const Hn = P * r1 * r2 * r3,
+    Hd = D2 * K;
+  if (Hn < 0n !== Hd < 0n || Hn === 0n) return undefined; // H ≤ 0
   const w = A23 * A13 * r3 * (p1 * r2 - p2 * r1);
-  const Fn = (C1 + C2) * K + w, Fd = 2n * D * K;
+  const Fn = (C1 + C2) * K + w,
+    Fd = 2n * D * K;
   const G = -A12 * K - w;
-  const En = 4n * K * P * p1 * r2 * r3 - G * G, Ed = 4n * D2 * K * K; // Ed > 0
+  const En = 4n * K * P * p1 * r2 * r3 - G * G,
+    Ed = 4n * D2 * K * K; // Ed > 0
   if (En < 0n) return undefined; // e < 0
   const zero = reduced(0n, 1n);
   return {
@@ -221,7 +283,9 @@ function traverse(input: unknown): FusedTraverse<Fraction> | undefined {
   if (!parsed) return undefined;
   const { start, end, list } = parsed;
   const n = list.length;
-  const lat: Fraction[] = new Array(n), dep: Fraction[] = new Array(n), len: Fraction[] = new Array(n);
+  const lat: Fraction[] = new Array(n),
+    dep: Fraction[] = new Array(n),
+    len: Fraction[] = new Array(n);
   // The common denominator, kept in a double while it stays exact (else: leave it to the generic code).
   let Dn = 1;
   const take = (d: bigint): boolean => {
@@ -236,9 +300,17 @@ function traverse(input: unknown): FusedTraverse<Fraction> | undefined {
   };
   if (!take(start.x.d) || !take(start.y.d) || !take(end.x.d) || !take(end.y.d)) return undefined;
   for (let i = 0; i < n; i++) {
-    const c = list[i] as { bearing?: unknown; latitude?: unknown; departure?: unknown; distance?: unknown } | null;
-    if (c === null || typeof c !== 'object' || c.bearing !== undefined || c.distance === undefined) return undefined;
-    const la = asFraction(c.latitude), de = asFraction(c.departure), d = asFraction(c.distance);
+    const c = list[i] as {
+      bearing?: unknown;
+      latitude?: unknown;
+      departure?: unknown;
+      distance?: unknown;
+    } | null;
+    if (c === null || typeof c !== 'object' || c.bearing !== undefined || c.distance === undefined)
+      return undefined;
+    const la = asFraction(c.latitude),
+      de = asFraction(c.departure),
+      d = asFraction(c.distance);
     if (!la || !de || !d || d.s < 0n) return undefined;
     if (!take(la.d) || !take(de.d) || !take(d.d)) return undefined;
     lat[i] = la;
@@ -246,13 +318,20 @@ function traverse(input: unknown): FusedTraverse<Fraction> | undefined {
     len[i] = d;
   }
   const D = BigInt(Dn);
-  const Sx = num(start.x, D), Sy = num(start.y, D);
+  const Sx = num(start.x, D),
+    Sy = num(start.y, D);
   const points: { x: Fraction; y: Fraction }[] = new Array(n + 1);
   points[0] = start;
-  let X = Sx, Y = Sy, T = 0n;
-  const L: bigint[] = new Array(n), E: bigint[] = new Array(n), W: bigint[] = new Array(n);
+  let X = Sx,
+    Y = Sy,
+    T = 0n;
+  const L: bigint[] = new Array(n),
+    E: bigint[] = new Array(n),
+    W: bigint[] = new Array(n);
   for (let i = 0; i < n; i++) {
-    const li = num(lat[i]!, D), ei = num(dep[i]!, D), wi = num(len[i]!, D);
+    const li = num(lat[i]!, D),
+      ei = num(dep[i]!, D),
+      wi = num(len[i]!, D);
     L[i] = li;
     E[i] = ei;
     W[i] = wi;
@@ -262,22 +341,43 @@ function traverse(input: unknown): FusedTraverse<Fraction> | undefined {
     points[i + 1] = { x: normalSigned(X, D), y: normalSigned(Y, D) };
   }
   if (T === 0n) return undefined;
-  const east = X - num(end.x, D), north = Y - num(end.y, D); // misclosure, over D
+  const east = X - num(end.x, D),
+    north = Y - num(end.y, D); // misclosure, over D
   // Adjusted components over T·D: lat + kLat·d = (L·T − north·W)/(T·D), kLat = −north/T.
   const TD = T * D;
   const adjusted: { x: Fraction; y: Fraction }[] = new Array(n + 1);
   const courses: FusedTraverse<Fraction>['courses'] = new Array(n);
   adjusted[0] = start;
-  let ax = Sx * T, ay = Sy * T;
+  let ax = Sx * T,
+    ay = Sy * T;
   for (let i = 0; i < n; i++) {
-    const aLat = L[i]! * T - north * W[i]!, aDep = E[i]! * T - east * W[i]!;
+    const aLat = L[i]! * T - north * W[i]!,
+      aDep = E[i]! * T - east * W[i]!;
     ax += aDep;
     ay += aLat;
     adjusted[i + 1] = { x: normalSigned(ax, TD), y: normalSigned(ay, TD) };
-    courses[i] = { latitude: lat[i]!, departure: dep[i]!, length: len[i]!, adjustedLatitude: normalSigned(aLat, TD), adjustedDeparture: normalSigned(aDep, TD) };
+    courses[i] = {
+      latitude: lat[i]!,
+      departure: dep[i]!,
+      length: len[i]!,
+      adjustedLatitude: normalSigned(aLat, TD),
+      adjustedDeparture: normalSigned(aDep, TD),
+    };
   }
-  return { east: normalSigned(east, D), north: normalSigned(north, D), length: normalSigned(T, D), points, adjusted, courses, rule: 'compass' };
+  return {
+    east: normalSigned(east, D),
+    north: normalSigned(north, D),
+    length: normalSigned(T, D),
+    points,
+    adjusted,
+    courses,
+    rule: 'compass',
+  };
 }
 
 /** The fused kernels of the rational arithmetic. @internal */
-export const rationalKernels: FusedKernels<Fraction> = /* @__PURE__ */ Object.freeze({ triangle, inlineHeight, traverse });
+export const rationalKernels: FusedKernels<Fraction> = /* @__PURE__ */ Object.freeze({
+  triangle,
+  inlineHeight,
+  traverse,
+});

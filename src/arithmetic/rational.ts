@@ -57,7 +57,8 @@ function toElementary(a: Rational): string {
 
 // A fraction.js value by shape (bigint numerator and denominator), so that fractions made by a
 // second copy of fraction.js (a program loading both the CommonJS and the ES build) still pass.
-const isFraction = (x: unknown): boolean => typeof (x as Rational | null)?.d === 'bigint' && typeof (x as Rational).n === 'bigint';
+const isFraction = (x: unknown): boolean =>
+  typeof (x as Rational | null)?.d === 'bigint' && typeof (x as Rational).n === 'bigint';
 
 const { one, two } = /* @__PURE__ */ operandChecks<Rational>('rational', isFraction);
 
@@ -93,7 +94,8 @@ export const rational: RationalArithmetic = /* @__PURE__ */ Object.freeze<Ration
   sub: (a, b) => two('sub', a, b).sub(b),
   mul: (a, b) => two('mul', a, b).mul(b),
   div(a, b) {
-    if (two('div', a, b) && b.n === 0n) throw divisionByZero('rational.div(a, b)', `b is zero (a = ${a.toFraction()})`);
+    if (two('div', a, b) && b.n === 0n)
+      throw divisionByZero('rational.div(a, b)', `b is zero (a = ${a.toFraction()})`);
     return a.div(b);
   },
   neg: (a) => one('neg', a).neg(),
@@ -116,7 +118,11 @@ export const rational: RationalArithmetic = /* @__PURE__ */ Object.freeze<Ration
   },
   toNumber(a) {
     const v = ratioToNumber(signed(one('toNumber', a)), a.d);
-    if (!Number.isFinite(v)) throw notFinite('rational.toNumber(a)', `${show(a.toFraction())} is beyond the range of a JS number`);
+    if (!Number.isFinite(v))
+      throw notFinite(
+        'rational.toNumber(a)',
+        `${show(a.toFraction())} is beyond the range of a JS number`,
+      );
     return v;
   },
   toString: (a) => one('toString', a).toFraction(),

@@ -131,7 +131,9 @@ export interface FusedKernels<T> {
    * heightFromInlineReadings for the input as given (three stations, values of this
    * arithmetic); `undefined` for anything else or anything the generic code rejects.
    */
-  inlineHeight?(input: unknown): { H: T; footChainage: T; footOffset: T; residuals: T[]; sign: 1 } | undefined;
+  inlineHeight?(
+    input: unknown,
+  ): { H: T; footChainage: T; footOffset: T; residuals: T[]; sign: 1 } | undefined;
   /**
    * traverse for the input as given, all but the closure's root and precision ratio (the
    * caller adds those); `undefined` for input it leaves to the generic code.
@@ -149,7 +151,13 @@ export interface FusedTraverse<T> {
   readonly length: T;
   readonly points: { x: T; y: T }[];
   readonly adjusted: { x: T; y: T }[];
-  readonly courses: { latitude: T; departure: T; length: T; adjustedLatitude: T; adjustedDeparture: T }[];
+  readonly courses: {
+    latitude: T;
+    departure: T;
+    length: T;
+    adjustedLatitude: T;
+    adjustedDeparture: T;
+  }[];
   readonly rule: 'compass';
 }
 

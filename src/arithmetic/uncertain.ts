@@ -6,7 +6,15 @@
  *
  * @module arithmetic
  */
-import { show, invalidArgument, invalidNumber, divisionByZero, noRealSolution, notFinite, zeroVectorAngle } from '../errors.js';
+import {
+  show,
+  invalidArgument,
+  invalidNumber,
+  divisionByZero,
+  noRealSolution,
+  notFinite,
+  zeroVectorAngle,
+} from '../errors.js';
 import type { Arithmetic, Numeric } from './types.js';
 import { float } from './float.js';
 
@@ -61,7 +69,11 @@ export class Uncertain<T> {
    * @param inputs the inputs it depends on (not copied: never mutate it afterwards)
    * @param derivatives ∂value/∂inputs[i], same length (not copied)
    */
-  constructor(value: T, inputs: readonly UncertainInput<T>[] = NO_KEYS as Keys<T>, derivatives: readonly T[] = NO_DERIVS as readonly T[]) {
+  constructor(
+    value: T,
+    inputs: readonly UncertainInput<T>[] = NO_KEYS as Keys<T>,
+    derivatives: readonly T[] = NO_DERIVS as readonly T[],
+  ) {
     this.value = value;
     this.inputs = inputs;
     this.derivatives = derivatives;
@@ -72,7 +84,8 @@ export class Uncertain<T> {
   get gradient(): Gradient<T> {
     if (this.#map === undefined) {
       const m = new Map<UncertainInput<T>, T>();
-      for (let i = 0; i < this.inputs.length; i++) m.set(this.inputs[i] as UncertainInput<T>, this.derivatives[i] as T);
+      for (let i = 0; i < this.inputs.length; i++)
+        m.set(this.inputs[i] as UncertainInput<T>, this.derivatives[i] as T);
       this.#map = m;
     }
     return this.#map;
@@ -88,7 +101,10 @@ export class Uncertain<T> {
  * The type of an {@link uncertain} arithmetic: an {@link Arithmetic} over
  * {@link Uncertain} values, exact exactly when its base is.
  */
-export interface UncertainArithmetic<T, E extends boolean = boolean> extends Arithmetic<Uncertain<T>, E> {
+export interface UncertainArithmetic<T, E extends boolean = boolean> extends Arithmetic<
+  Uncertain<T>,
+  E
+> {
   /** The arithmetic values and derivatives are computed in. */
   readonly base: Arithmetic<T, E>;
   /**
@@ -129,9 +145,18 @@ function union<T>(a: Keys<T>, b: Keys<T>): { keys: Keys<T>; where: number[] } {
   return { keys: keys ?? a, where };
 }
 
-function fromMap<T>(B: Arithmetic<T>, value: T, g: Gradient<T> | undefined, name: string): Uncertain<T> {
+function fromMap<T>(
+  B: Arithmetic<T>,
+  value: T,
+  g: Gradient<T> | undefined,
+  name: string,
+): Uncertain<T> {
   if (g === undefined) return new Uncertain(value);
-  if (!(g instanceof Map)) throw invalidArgument(`${name}.make(value, gradient)`, `the gradient ${show(g)} is not a Map from inputs to derivatives`);
+  if (!(g instanceof Map))
+    throw invalidArgument(
+      `${name}.make(value, gradient)`,
+      `the gradient ${show(g)} is not a Map from inputs to derivatives`,
+    );
   if (g.size === 0) return new Uncertain(value);
   const keys: UncertainInput<T>[] = [];
   const ders: T[] = [];
@@ -185,10 +210,18 @@ export function uncertain<T, E extends boolean>(base: Arithmetic<T, E>): Uncerta
   return uncertainGeneric(base);
 }
 
-const SQRT_AT_ZERO = 'a = 0 depends on uncertain inputs: the derivative of √a there is infinite, so first-order propagation does not apply';
+const SQRT_AT_ZERO =
+  'a = 0 depends on uncertain inputs: the derivative of √a there is infinite, so first-order propagation does not apply';
 
 /** ca·∇a + cb·∇b over the union of inputs; `undefined` coefficients mean 1. */
-function lin<T>(B: Arithmetic<T>, value: T, a: Uncertain<T>, ca: T | undefined, b: Uncertain<T>, cb: T | undefined): Uncertain<T> {
+function lin<T>(
+  B: Arithmetic<T>,
+  value: T,
+  a: Uncertain<T>,
+  ca: T | undefined,
+  b: Uncertain<T>,
+  cb: T | undefined,
+): Uncertain<T> {
   const na = a.inputs.length;
   const nb = b.inputs.length;
   if (nb === 0) return scaled(B, value, a, ca);
@@ -242,7 +275,10 @@ function uncertainGeneric<T, E extends boolean>(B: Arithmetic<T, E>): UncertainA
     from(x: Numeric<Uncertain<T>>): Uncertain<T> {
       if (isU(x)) return x;
       if ((x as unknown) instanceof Uncertain) {
-        throw invalidNumber(`${name}.from(x)`, `${show((x as unknown as Uncertain<unknown>).value)} is a value of another uncertain arithmetic`);
+        throw invalidNumber(
+          `${name}.from(x)`,
+          `${show((x as unknown as Uncertain<unknown>).value)} is a value of another uncertain arithmetic`,
+        );
       }
       return constant(B.from(x as Numeric<T>));
     },
@@ -286,9 +322,15 @@ function uncertainGeneric<T, E extends boolean>(B: Arithmetic<T, E>): UncertainA
       return constant(B.pi);
     },
     // d sin x = cos x dx
-    sin: (x) => (x.inputs.length === 0 ? constant(B.sin(x.value)) : scaled(B, B.sin(x.value), x, B.cos(x.value))),
+    sin: (x) =>
+      x.inputs.length === 0
+        ? constant(B.sin(x.value))
+        : scaled(B, B.sin(x.value), x, B.cos(x.value)),
     // d cos x = −sin x dx
-    cos: (x) => (x.inputs.length === 0 ? constant(B.cos(x.value)) : scaled(B, B.cos(x.value), x, B.neg(B.sin(x.value)))),
+    cos: (x) =>
+      x.inputs.length === 0
+        ? constant(B.cos(x.value))
+        : scaled(B, B.cos(x.value), x, B.neg(B.sin(x.value))),
     atan2(y, x) {
       if (B.isZero(y.value) && B.isZero(x.value)) {
         throw zeroVectorAngle(`${name}.atan2(y, x)`);
@@ -304,7 +346,13 @@ function uncertainGeneric<T, E extends boolean>(B: Arithmetic<T, E>): UncertainA
 }
 
 /** ca·∇a + cb·∇b over float gradients (the same steps as {@link lin}). */
-function linF(value: number, a: Uncertain<number>, ca: number, b: Uncertain<number>, cb: number): Uncertain<number> {
+function linF(
+  value: number,
+  a: Uncertain<number>,
+  ca: number,
+  b: Uncertain<number>,
+  cb: number,
+): Uncertain<number> {
   const na = a.inputs.length;
   const nb = b.inputs.length;
   if (nb === 0) return scaledF(value, a, ca);
@@ -351,8 +399,12 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
       if (G.is(x)) return x;
       if ((x as unknown) instanceof Uncertain) {
         const v = (x as unknown as Uncertain<unknown>).value;
-        if (typeof v === 'number') throw notFinite(`${name}.from(x)`, `the value ${show(v)} is not finite (overflow)`);
-        throw invalidNumber(`${name}.from(x)`, `${show(v)} is a value of another uncertain arithmetic`);
+        if (typeof v === 'number')
+          throw notFinite(`${name}.from(x)`, `the value ${show(v)} is not finite (overflow)`);
+        throw invalidNumber(
+          `${name}.from(x)`,
+          `${show(v)} is a value of another uncertain arithmetic`,
+        );
       }
       return constant(float.from(x as Numeric<number>));
     },
@@ -360,10 +412,12 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
     sub: (a, b) => linF(a.value - b.value, a, 1, b, -1),
     mul: (a, b) => linF(a.value * b.value, a, b.value, b, a.value),
     div(a, b) {
-      if (b.value === 0) throw divisionByZero(`${name}.div(a, b)`, `b is zero (a = ${show(a.value)})`);
+      if (b.value === 0)
+        throw divisionByZero(`${name}.div(a, b)`, `b is zero (a = ${show(a.value)})`);
       const q = a.value / b.value;
       // as float.div: a quotient that is not finite is refused
-      if (q - q !== 0) throw notFinite(`${name}.div(a, b)`, `${show(a.value)} / ${show(b.value)} is not finite`);
+      if (q - q !== 0)
+        throw notFinite(`${name}.div(a, b)`, `${show(a.value)} / ${show(b.value)} is not finite`);
       const r = 1 / b.value;
       return linF(q, a, r, b, -(q * r));
     },
@@ -381,8 +435,14 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
       if (r === 0) throw notFinite(`${name}.sqrt(a)`, SQRT_AT_ZERO);
       return scaledF(r, a, 1 / (2 * r));
     },
-    sin: (x) => (x.inputs.length === 0 ? constant(Math.sin(x.value)) : scaledF(Math.sin(x.value), x, Math.cos(x.value))),
-    cos: (x) => (x.inputs.length === 0 ? constant(Math.cos(x.value)) : scaledF(Math.cos(x.value), x, -Math.sin(x.value))),
+    sin: (x) =>
+      x.inputs.length === 0
+        ? constant(Math.sin(x.value))
+        : scaledF(Math.sin(x.value), x, Math.cos(x.value)),
+    cos: (x) =>
+      x.inputs.length === 0
+        ? constant(Math.cos(x.value))
+        : scaledF(Math.cos(x.value), x, -Math.sin(x.value)),
   };
   return U;
 }

@@ -12,16 +12,22 @@ import { JobInvalid } from './failure.js';
 function cannotWrite(target: string, e: unknown): JobInvalid {
   const code = (e as NodeJS.ErrnoException).code;
   const why =
-    code === 'ENOENT' ? `the folder ${JSON.stringify(dirname(target))} does not exist`
-    : code === 'EISDIR' ? 'it is a folder'
-    : code === 'EACCES' || code === 'EPERM' ? 'permission denied'
-    : code ?? (e as Error).message;
+    code === 'ENOENT'
+      ? `the folder ${JSON.stringify(dirname(target))} does not exist`
+      : code === 'EISDIR'
+        ? 'it is a folder'
+        : code === 'EACCES' || code === 'EPERM'
+          ? 'permission denied'
+          : (code ?? (e as Error).message);
   return new JobInvalid('', `cannot write ${JSON.stringify(target)}: ${why}`);
 }
 
 /** The temporary name used while `target` is being written (same folder, so rename is atomic). */
 export function tempNameFor(target: string): string {
-  return join(dirname(target), `.${basename(target)}.${process.pid}.${Date.now().toString(36)}.tmp`);
+  return join(
+    dirname(target),
+    `.${basename(target)}.${process.pid}.${Date.now().toString(36)}.tmp`,
+  );
 }
 
 /**

@@ -34,30 +34,53 @@ export interface BatchKind {
 /** The batch kinds: inverses between pairs of points, and the kinds the solvers add. */
 export const BATCH_KINDS: Record<string, BatchKind> = {
   inverses: {
-    description: 'pairs of points (east1, north1, east2, north2): quadrance and distance between them',
+    description:
+      'pairs of points (east1, north1, east2, north2): quadrance and distance between them',
     columns: ['east1', 'north1', 'east2', 'north2'],
     outputs: ['quadrance', 'distance'],
     row(A, [e1, n1, e2, n2], digits) {
       const Q = quadrance(A, point(A, e1!, n1!), point(A, e2!, n2!));
-      return [A.exact ? A.toString(Q) : A.toPrecision(Q, digits), rootToPrecision(A, sqrtOf(A, Q), digits)];
+      return [
+        A.exact ? A.toString(Q) : A.toPrecision(Q, digits),
+        rootToPrecision(A, sqrtOf(A, Q), digits),
+      ];
     },
   },
   ...BATCH_EXTRA,
 };
 
 /** Runs a batch, writing to `o.out` (atomically) or the standard output. */
-export async function runBatch(kind: string, file: string, o: { arithmetic: ArithmeticName; digits: number; out?: string }, io: Io): Promise<void> {
+export async function runBatch(
+  kind: string,
+  file: string,
+  o: { arithmetic: ArithmeticName; digits: number; out?: string },
+  io: Io,
+): Promise<void> {
   const k = BATCH_KINDS[kind];
-  if (!k) throw new JobInvalid('', `${JSON.stringify(kind)} is not a batch kind (${Object.keys(BATCH_KINDS).join(', ')})`);
+  if (!k)
+    throw new JobInvalid(
+      '',
+      `${JSON.stringify(kind)} is not a batch kind (${Object.keys(BATCH_KINDS).join(', ')})`,
+    );
   if (o.out !== undefined && file !== '-' && resolvePath(o.out) === resolvePath(file)) {
-    throw new JobInvalid('--out', `${JSON.stringify(o.out)} is the input CSV itself: give the results another name`);
+    throw new JobInvalid(
+      '--out',
+      `${JSON.stringify(o.out)} is the input CSV itself: give the results another name`,
+    );
   }
   const A = arithmeticFor(o.arithmetic, o.digits);
   const input = file === '-' ? process.stdin : createReadStream(file, { encoding: 'utf8' });
   const opened = new Promise<void>((resolve, reject) => {
     if (file === '-') resolve();
     input.once('open', () => resolve());
-    input.once('error', (e: NodeJS.ErrnoException) => reject(new JobInvalid('', `cannot read the CSV file ${JSON.stringify(file)}: ${e.code ?? e.message}`)));
+    input.once('error', (e: NodeJS.ErrnoException) =>
+      reject(
+        new JobInvalid(
+          '',
+          `cannot read the CSV file ${JSON.stringify(file)}: ${e.code ?? e.message}`,
+        ),
+      ),
+    );
   });
   await opened;
   let pending: PendingFile | undefined;
@@ -71,7 +94,9 @@ export async function runBatch(kind: string, file: string, o: { arithmetic: Arit
     const now = Date.now();
     if (!final && now - lastShown < 100) return;
     lastShown = now;
-    io.stderr(`\rquadspread batch ${kind}: ${rows} row${rows === 1 ? '' : 's'}${final ? ' done\n' : ''}`);
+    io.stderr(
+      `\rquadspread batch ${kind}: ${rows} row${rows === 1 ? '' : 's'}${final ? ' done\n' : ''}`,
+    );
   };
   try {
     if (o.out !== undefined) pending = openPending(o.out);
@@ -85,7 +110,11 @@ export async function runBatch(kind: string, file: string, o: { arithmetic: Arit
         const names = fields.map((f) => f.trim());
         columns = k.columns.map((c) => {
           const at = names.indexOf(c);
-          if (at < 0) throw new JobInvalid('line 1', `the header has no column "${c}" (a ${kind} batch needs ${k.columns.join(', ')})`);
+          if (at < 0)
+            throw new JobInvalid(
+              'line 1',
+              `the header has no column "${c}" (a ${kind} batch needs ${k.columns.join(', ')})`,
+            );
           return at;
         });
         write(csvLine([...names, ...k.outputs]));
@@ -93,11 +122,16 @@ export async function runBatch(kind: string, file: string, o: { arithmetic: Arit
       }
       const values = columns.map((at, i) => {
         const text = fields[at];
-        if (text === undefined || text === '') throw new JobInvalid(`line ${lineNo}, column "${k.columns[i]}"`, 'the value is missing');
+        if (text === undefined || text === '')
+          throw new JobInvalid(`line ${lineNo}, column "${k.columns[i]}"`, 'the value is missing');
         try {
           return A.from(text);
         } catch (e) {
-          if (e instanceof QuadspreadError) throw new JobInvalid(`line ${lineNo}, column "${k.columns[i]}"`, `${JSON.stringify(text)} is not a number`);
+          if (e instanceof QuadspreadError)
+            throw new JobInvalid(
+              `line ${lineNo}, column "${k.columns[i]}"`,
+              `${JSON.stringify(text)} is not a number`,
+            );
           throw e;
         }
       });
@@ -105,17 +139,22 @@ export async function runBatch(kind: string, file: string, o: { arithmetic: Arit
       try {
         out = k.row(A, values, o.digits);
       } catch (e) {
-        if (e instanceof QuadspreadError) throw new JobUnsolvable(`line ${lineNo}`, e.message.replace(/^quadspread /, ''));
+        if (e instanceof QuadspreadError)
+          throw new JobUnsolvable(`line ${lineNo}`, e.message.replace(/^quadspread /, ''));
         throw e;
       }
       write(csvLine([...fields, ...out]));
       rows++;
       progress(false);
     }
-    if (columns === undefined) throw new JobInvalid('', `the CSV file ${JSON.stringify(file)} is empty (it needs a header line: ${k.columns.join(', ')})`);
+    if (columns === undefined)
+      throw new JobInvalid(
+        '',
+        `the CSV file ${JSON.stringify(file)} is empty (it needs a header line: ${k.columns.join(', ')})`,
+      );
     pending?.commit();
     progress(true);
-    if (pending) io.stderr(`${rows} row${rows === 1 ? "" : "s"} written to ${pending.target}\n`);
+    if (pending) io.stderr(`${rows} row${rows === 1 ? '' : 's'} written to ${pending.target}\n`);
   } catch (e) {
     pending?.abort();
     if (io.stderrIsTTY && rows > 0) io.stderr('\n');

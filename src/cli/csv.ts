@@ -41,5 +41,7 @@ export function splitCsvLine(line: string): string[] | string {
 
 /** Writes one CSV record (with a trailing newline). */
 export function csvLine(fields: readonly string[]): string {
-  return fields.map((f) => (/[",\n\r]/.test(f) ? `"${f.replace(/"/g, '""')}"` : f)).join(',') + '\n';
+  return (
+    fields.map((f) => (/[",\n\r]/.test(f) ? `"${f.replace(/"/g, '""')}"` : f)).join(',') + '\n'
+  );
 }

@@ -9,7 +9,8 @@
 
 /** The demonstration job (invented data; no real places). */
 export const DEMO_JOB = {
-  title: 'Demonstration job: Harrowmere Fell access road, Saltings mast, Snipewhistle Moss traverse (invented data)',
+  title:
+    'Demonstration job: Harrowmere Fell access road, Saltings mast, Snipewhistle Moss traverse (invented data)',
   description: 'Every place and reading in this job is invented for the demonstration.',
   units: { length: 'm' },
   points: {
@@ -71,7 +72,13 @@ export const DEMO_JOB = {
       vertical: { zenith: `88°40'43.0"`, sigma: `2"` },
       instrumentHeight: 1.562,
       targetHeight: 1.7,
-      backward: { distance: 1843.231, measured: 'slope', vertical: { zenith: `91°19'36.5"`, sigma: `2"` }, instrumentHeight: 1.548, targetHeight: 1.7 },
+      backward: {
+        distance: 1843.231,
+        measured: 'slope',
+        vertical: { zenith: `91°19'36.5"`, sigma: `2"` },
+        instrumentHeight: 1.548,
+        targetHeight: 1.7,
+      },
       stationLevel: { value: 336.45, sigma: 0.006 },
       tolerance: '0.05 m',
     },
@@ -79,13 +86,20 @@ export const DEMO_JOB = {
       kind: 'resection',
       name: 'Tern Spit station by resection',
       control: ['T1', 'T2', 'T3'],
-      angles: [{ value: `55°14'49.1"`, sigma: `3"` }, { value: `55°48'41.2"`, sigma: `3"` }],
+      angles: [
+        { value: `55°14'49.1"`, sigma: `3"` },
+        { value: `55°48'41.2"`, sigma: `3"` },
+      ],
       point: 'TS',
     },
     {
       kind: 'triangle',
       name: 'Tern Spit check triangle',
-      known: { side1: { value: 412.337, sigma: '5 mm' }, side2: { value: 385.906, sigma: '5 mm' }, side3: { value: 298.114, sigma: '5 mm' } },
+      known: {
+        side1: { value: 412.337, sigma: '5 mm' },
+        side2: { value: 385.906, sigma: '5 mm' },
+        side3: { value: 298.114, sigma: '5 mm' },
+      },
     },
     {
       kind: 'traverse',
@@ -93,10 +107,26 @@ export const DEMO_JOB = {
       start: 'CM1',
       rule: 'compass',
       courses: [
-        { to: 'CM2', bearing: { value: `62°14'20"`, sigma: `5"` }, distance: { value: 212.406, sigma: '4 mm' } },
-        { to: 'CM3', bearing: { value: `151°38'05"`, sigma: `5"` }, distance: { value: 187.322, sigma: '4 mm' } },
-        { to: 'CM4', bearing: { value: `246°51'40"`, sigma: `5"` }, distance: { value: 241.017, sigma: '4 mm' } },
-        { to: 'CM1', bearing: { value: `340°59'36"`, sigma: `5"` }, distance: { value: 169.874, sigma: '4 mm' } },
+        {
+          to: 'CM2',
+          bearing: { value: `62°14'20"`, sigma: `5"` },
+          distance: { value: 212.406, sigma: '4 mm' },
+        },
+        {
+          to: 'CM3',
+          bearing: { value: `151°38'05"`, sigma: `5"` },
+          distance: { value: 187.322, sigma: '4 mm' },
+        },
+        {
+          to: 'CM4',
+          bearing: { value: `246°51'40"`, sigma: `5"` },
+          distance: { value: 241.017, sigma: '4 mm' },
+        },
+        {
+          to: 'CM1',
+          bearing: { value: `340°59'36"`, sigma: `5"` },
+          distance: { value: 169.874, sigma: '4 mm' },
+        },
       ],
       tolerance: { precision: 10000, linear: '0.05 m' },
     },
@@ -108,7 +138,10 @@ export const DEMO_JOB = {
     {
       kind: 'intersection',
       name: 'Quillet Field centre stake',
-      lines: [['Q1', 'Q3'], ['Q2', 'Q4']],
+      lines: [
+        ['Q1', 'Q3'],
+        ['Q2', 'Q4'],
+      ],
       point: 'QC',
     },
     {

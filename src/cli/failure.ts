@@ -22,7 +22,10 @@ const MAX_DIGITS_SHOWN = 40;
 
 /** Cuts runs of more than {@link MAX_DIGITS_SHOWN} digits to their first digits and their count, so a message stays readable. */
 export function shortenDigits(text: string): string {
-  return text.replace(new RegExp(`\\d{${MAX_DIGITS_SHOWN + 1},}`, 'g'), (d) => `${d.slice(0, 12)}…(${d.length} digits)`);
+  return text.replace(
+    new RegExp(`\\d{${MAX_DIGITS_SHOWN + 1},}`, 'g'),
+    (d) => `${d.slice(0, 12)}…(${d.length} digits)`,
+  );
 }
 
 /** A job (or CSV, or command line) that cannot be read: exit 2. `path` names the place. */
@@ -57,6 +60,8 @@ export class JobUnsolvable extends Error {
 export class JobInvalidMany extends JobInvalid {
   constructor(readonly problems: { path: string; message: string }[]) {
     super(problems[0]?.path ?? '', problems[0]?.message ?? 'invalid job');
-    this.message = problems.map((p) => (p.path === '' ? p.message : `${p.path}: ${p.message}`)).join('\n');
+    this.message = problems
+      .map((p) => (p.path === '' ? p.message : `${p.path}: ${p.message}`))
+      .join('\n');
   }
 }

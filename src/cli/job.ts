@@ -5,7 +5,16 @@
  *
  * @module cli
  */
-import { QuadspreadError, budget, decimal, float, isSurd, measured, rational, uncertain } from '../index.js';
+import {
+  QuadspreadError,
+  budget,
+  decimal,
+  float,
+  isSurd,
+  measured,
+  rational,
+  uncertain,
+} from '../index.js';
 import type { Arithmetic, LengthUnit, Uncertain } from '../index.js';
 import { show } from '../errors.js';
 import { JobInvalid, JobInvalidMany, JobUnsolvable } from './failure.js';
@@ -54,7 +63,10 @@ export function parseJob(text: string): unknown {
       const before = text.slice(0, at).split('\n');
       where = `line ${before.length}, column ${before[before.length - 1]!.length + 1}`;
     }
-    throw new JobInvalid(where, `the job file is not valid JSON (${msg.replace(/^JSON\.parse: /, '')})`);
+    throw new JobInvalid(
+      where,
+      `the job file is not valid JSON (${msg.replace(/^JSON\.parse: /, '')})`,
+    );
   }
 }
 
@@ -69,7 +81,12 @@ function reasonOf(e: QuadspreadError): string {
 
 const SIGMA_DIGITS = 2;
 
-function formatQuantity<V>(A: Arithmetic<V, boolean>, q: { name: string; label: string; unit: string; value: Value<V>; approx?: boolean }, digits: number, approx0: boolean): Quantity {
+function formatQuantity<V>(
+  A: Arithmetic<V, boolean>,
+  q: { name: string; label: string; unit: string; value: Value<V>; approx?: boolean },
+  digits: number,
+  approx0: boolean,
+): Quantity {
   const approx = approx0 || q.approx === true;
   const out: Quantity = { name: q.name, label: q.label, unit: q.unit, value: '' };
   if (isSurd(q.value)) {
@@ -92,8 +109,25 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
   const schema = jobSchema(kinds);
   const problems = validate(job, schema);
   // A problem with the whole file (not an object, …) is said to be about the job file.
-  if (problems.length > 0) throw new JobInvalidMany(problems.map((p) => (p.path === '' ? { path: 'the job file', message: /is not an object/.test(p.message) ? `${p.message} (a job is an object with "tasks")` : p.message } : p)));
-  const j = job as { title?: string; units?: { length?: LengthUnit }; points?: Record<string, Record<string, unknown>>; tasks: Record<string, unknown>[] };
+  if (problems.length > 0)
+    throw new JobInvalidMany(
+      problems.map((p) =>
+        p.path === ''
+          ? {
+              path: 'the job file',
+              message: /is not an object/.test(p.message)
+                ? `${p.message} (a job is an object with "tasks")`
+                : p.message,
+            }
+          : p,
+      ),
+    );
+  const j = job as {
+    title?: string;
+    units?: { length?: LengthUnit };
+    points?: Record<string, Record<string, unknown>>;
+    tasks: Record<string, unknown>[];
+  };
   const unit: LengthUnit = j.units?.length ?? 'm';
   const unitName = LENGTH_UNIT_NAMES[unit];
   const points = new Map<string, JobPoint>();
@@ -114,13 +148,18 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
       const p = typeof name === 'string' ? points.get(name) : undefined;
       if (!p) {
         const known = [...points.keys()];
-        throw new JobInvalid(path, `${show(name)} is not a point of this job${known.length ? ` (points: ${known.slice(0, 12).join(', ')}${known.length > 12 ? ', …' : ''})` : ' (the job has no "points")'}`);
+        throw new JobInvalid(
+          path,
+          `${show(name)} is not a point of this job${known.length ? ` (points: ${known.slice(0, 12).join(', ')}${known.length > 12 ? ', …' : ''})` : ' (the job has no "points")'}`,
+        );
       }
       return p;
     },
   };
   const byKind = new Map(kinds.map((k) => [k.kind, k]));
-  const prepared = j.tasks.map((t, i) => byKind.get(t.kind as string)!.prepare(t, `tasks[${i}]`, ctx));
+  const prepared = j.tasks.map((t, i) =>
+    byKind.get(t.kind as string)!.prepare(t, `tasks[${i}]`, ctx),
+  );
 
   const A = arithmeticFor(options.arithmetic, options.digits);
   const U = uncertain(float);
@@ -146,18 +185,38 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
     // given), so that the gradients tell both the budget and which results depend on an
     // angle reading (and so have no exact form).
     const angleNames = new Set(p.inputs.filter((x) => x.angle).map((x) => x.name));
-    const withSigma = new Map(p.inputs.filter((x) => x.sigma !== undefined).map((x) => [x.name, x]));
-    const pairs = ((task.correlations ?? []) as { inputs: [string, string]; r: number }[]).map((c, k) => {
-      c.inputs.forEach((n, m) => {
-        if (!withSigma.has(n)) {
-          throw new JobInvalid(`tasks[${i}].correlations[${k}].inputs[${m}]`, `${show(n)} is not an input of this task with a sigma (${[...withSigma.keys()].map((x) => JSON.stringify(x)).join(', ') || 'none has one'})`);
-        }
-      });
-      if (c.inputs[0] === c.inputs[1]) throw new JobInvalid(`tasks[${i}].correlations[${k}].inputs`, 'pairs an input with itself');
-      const [a, b] = c.inputs.map((n) => withSigma.get(n)!);
-      return { names: c.inputs, r: c.r, covariance: c.r * float.from(a!.sigma!) * float.from(b!.sigma!) };
-    });
-    type UncertaintyEntry = { dependsOnAngle: boolean; sigma?: string; budget?: BudgetTerm[]; correlations?: NonNullable<Quantity['correlations']> };
+    const withSigma = new Map(
+      p.inputs.filter((x) => x.sigma !== undefined).map((x) => [x.name, x]),
+    );
+    const pairs = ((task.correlations ?? []) as { inputs: [string, string]; r: number }[]).map(
+      (c, k) => {
+        c.inputs.forEach((n, m) => {
+          if (!withSigma.has(n)) {
+            throw new JobInvalid(
+              `tasks[${i}].correlations[${k}].inputs[${m}]`,
+              `${show(n)} is not an input of this task with a sigma (${[...withSigma.keys()].map((x) => JSON.stringify(x)).join(', ') || 'none has one'})`,
+            );
+          }
+        });
+        if (c.inputs[0] === c.inputs[1])
+          throw new JobInvalid(
+            `tasks[${i}].correlations[${k}].inputs`,
+            'pairs an input with itself',
+          );
+        const [a, b] = c.inputs.map((n) => withSigma.get(n)!);
+        return {
+          names: c.inputs,
+          r: c.r,
+          covariance: c.r * float.from(a!.sigma!) * float.from(b!.sigma!),
+        };
+      },
+    );
+    type UncertaintyEntry = {
+      dependsOnAngle: boolean;
+      sigma?: string;
+      budget?: BudgetTerm[];
+      correlations?: NonNullable<Quantity['correlations']>;
+    };
     const uncertainties = new Map<string, UncertaintyEntry>();
     let uncertainNote: string | undefined;
     try {
@@ -167,7 +226,12 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
         get: (x: Input) => {
           let v = cache.get(x);
           if (v === undefined) {
-            v = measured(U, float.from(x.value), x.sigma !== undefined ? float.from(x.sigma) : 0, x.name);
+            v = measured(
+              U,
+              float.from(x.value),
+              x.sigma !== undefined ? float.from(x.sigma) : 0,
+              x.name,
+            );
             cache.set(x, v);
           }
           return v;
@@ -184,18 +248,21 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
         };
         const depends = new Set([...v.gradient.keys()].map((k) => k.name));
         const used = pairs.filter((c) => depends.has(c.names[0]) && depends.has(c.names[1]));
-        const b = budget(U, v, { covariance: used.map((c) => [c.names[0], c.names[1], c.covariance] as const) });
+        const b = budget(U, v, {
+          covariance: used.map((c) => [c.names[0], c.names[1], c.covariance] as const),
+        });
         const terms = b.contributions.filter((c) => c.sigma > 0);
         if (terms.length > 0) {
           entry.sigma = precision(b.sigma, SIGMA_DIGITS);
-          entry.budget = terms.map(
-            (c): BudgetTerm => ({
-              input: c.name,
-              sensitivity: precision(c.sensitivity, 4),
-              part: precision(Math.sqrt(c.contribution), SIGMA_DIGITS),
-              share: b.variance > 0 ? (Math.round((1000 * c.contribution) / b.variance) / 10).toFixed(1) : '0.0',
-            }),
-          );
+          entry.budget = terms.map((c): BudgetTerm => ({
+            input: c.name,
+            sensitivity: precision(c.sensitivity, 4),
+            part: precision(Math.sqrt(c.contribution), SIGMA_DIGITS),
+            share:
+              b.variance > 0
+                ? (Math.round((1000 * c.contribution) / b.variance) / 10).toFixed(1)
+                : '0.0',
+          }));
         }
         if (b.correlations.length > 0 && b.variance > 0) {
           entry.correlations = b.correlations.map((c) => ({
@@ -208,7 +275,8 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
       }
     } catch (e) {
       if (!(e instanceof QuadspreadError)) throw e;
-      if (p.inputs.some((x) => x.sigma !== undefined)) uncertainNote = `Uncertainties could not be propagated to first order: ${reasonOf(e)}.`;
+      if (p.inputs.some((x) => x.sigma !== undefined))
+        uncertainNote = `Uncertainties could not be propagated to first order: ${reasonOf(e)}.`;
     }
     const report: TaskReport = {
       index: i,
@@ -227,13 +295,22 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
       }),
       checks: base.checks.map((c) => {
         const f = formatQuantity(A, c, Math.min(options.digits, 6), true);
-        return { name: c.name, label: c.label, value: f.value, tolerance: c.tolerance, unit: c.unit, pass: c.pass };
+        return {
+          name: c.name,
+          label: c.label,
+          value: f.value,
+          tolerance: c.tolerance,
+          unit: c.unit,
+          pass: c.pass,
+        };
       }),
       notes: [...base.notes, ...(uncertainNote ? [uncertainNote] : [])],
       ...(base.sketch ? { sketch: base.sketch } : {}),
     };
     if (A.exact && base.results.some((q) => uncertainties.get(q.name)?.dependsOnAngle ?? approx)) {
-      report.notes.push('Results that depend on angle readings have no exact form: the spread of an angle is transcendental, so in rational it is a fraction good to about 1e-40 relative (docs/readings.md), not an exact value.');
+      report.notes.push(
+        'Results that depend on angle readings have no exact form: the spread of an angle is transcendental, so in rational it is a fraction good to about 1e-40 relative (docs/readings.md), not an exact value.',
+      );
     }
     tasks.push(report);
   });

@@ -42,31 +42,61 @@ interface ReportOptions {
 
 function digitsOption(value: string): number {
   const n = Number(value);
-  if (!/^\d+$/.test(value) || n < 1 || n > 100) throw new InvalidArgumentError(`${JSON.stringify(value)} is not a whole number from 1 to 100`);
+  if (!/^\d+$/.test(value) || n < 1 || n > 100)
+    throw new InvalidArgumentError(`${JSON.stringify(value)} is not a whole number from 1 to 100`);
   return n;
 }
 
 function addReportOptions(cmd: Command): Command {
   return cmd
-    .addOption(new Option('-a, --arithmetic <kind>', 'the arithmetic: exact fractions, big decimals or JS floats').choices(['rational', 'decimal', 'float']).default('rational'))
-    .addOption(new Option('-d, --digits <n>', 'significant digits shown (decimal works with n + 10)').argParser(digitsOption).default(10))
-    .addOption(new Option('-f, --format <format>', 'report format').choices(['text', 'markdown', 'json']).default('text'))
+    .addOption(
+      new Option(
+        '-a, --arithmetic <kind>',
+        'the arithmetic: exact fractions, big decimals or JS floats',
+      )
+        .choices(['rational', 'decimal', 'float'])
+        .default('rational'),
+    )
+    .addOption(
+      new Option('-d, --digits <n>', 'significant digits shown (decimal works with n + 10)')
+        .argParser(digitsOption)
+        .default(10),
+    )
+    .addOption(
+      new Option('-f, --format <format>', 'report format')
+        .choices(['text', 'markdown', 'json'])
+        .default('text'),
+    )
     .option('-s, --sketch <file.svg>', 'also write an SVG sketch of the configuration to this file')
     .option('-o, --out <file>', 'write the report to this file instead of the standard output');
 }
 
 function report(job: unknown, source: string, o: ReportOptions, io: Io, jobFile?: string): void {
   if (o.out !== undefined && o.sketch !== undefined && resolve(o.out) === resolve(o.sketch)) {
-    throw new JobInvalid('--sketch', `${JSON.stringify(o.sketch)} is also the --out file: give them different names`);
+    throw new JobInvalid(
+      '--sketch',
+      `${JSON.stringify(o.sketch)} is also the --out file: give them different names`,
+    );
   }
   // Writing the report over the job file would lose the readings.
-  for (const [option, target] of [['--out', o.out], ['--sketch', o.sketch]] as const) {
+  for (const [option, target] of [
+    ['--out', o.out],
+    ['--sketch', o.sketch],
+  ] as const) {
     if (jobFile !== undefined && target !== undefined && resolve(target) === resolve(jobFile)) {
-      throw new JobInvalid(option, `${JSON.stringify(target)} is the job file itself: give the output another name`);
+      throw new JobInvalid(
+        option,
+        `${JSON.stringify(target)} is the job file itself: give the output another name`,
+      );
     }
   }
   const r = runJob(job, TASK_KINDS, { arithmetic: o.arithmetic, digits: o.digits, source });
-  const text = o.format === 'json' ? renderJson(r) : o.format === 'markdown' ? renderMarkdown(r) : renderText(r);
+  const text =
+    o.format === 'json'
+      ? renderJson(r)
+      : o.format === 'markdown'
+        ? renderMarkdown(r)
+        : renderText(r);
   const files: { target: string; text: string }[] = [];
   if (o.out !== undefined) files.push({ target: o.out, text });
   if (o.sketch !== undefined) files.push({ target: o.sketch, text: renderSketch(r) });
@@ -81,25 +111,35 @@ export const MAX_JOB_BYTES = 50 * 1024 * 1024;
 
 function readText(file: string, what: string): string {
   try {
-    if (statSync(file).size > MAX_JOB_BYTES) throw new JobInvalid('', `the ${what} ${JSON.stringify(file)} is larger than ${MAX_JOB_BYTES / 1024 / 1024} MB (use quadspread batch for many cases)`);
+    if (statSync(file).size > MAX_JOB_BYTES)
+      throw new JobInvalid(
+        '',
+        `the ${what} ${JSON.stringify(file)} is larger than ${MAX_JOB_BYTES / 1024 / 1024} MB (use quadspread batch for many cases)`,
+      );
     return readFileSync(file, 'utf8').replace(/^\uFEFF/, '');
   } catch (e) {
     if (e instanceof JobInvalid) throw e;
-    throw new JobInvalid('', `cannot read the ${what} ${JSON.stringify(file)}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`);
+    throw new JobInvalid(
+      '',
+      `cannot read the ${what} ${JSON.stringify(file)}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`,
+    );
   }
 }
 
 /** Builds the commander program. */
 export function program(io: Io): Command {
   const p = new Command('quadspread');
-  p.description('Runs survey computation jobs in rational trigonometry (quadrance and spread) and reports results, uncertainties and checks.')
+  p.description(
+    'Runs survey computation jobs in rational trigonometry (quadrance and spread) and reports results, uncertainties and checks.',
+  )
     .version(VERSION)
     .configureOutput({ writeOut: io.stdout, writeErr: io.stderr })
     .exitOverride()
     .showHelpAfterError('(add --help for usage)');
 
   addReportOptions(
-    p.command('demo')
+    p
+      .command('demo')
       .description('run the bundled demonstration job (invented places) and print its report')
       .option('--job', 'print the demonstration job file instead of running it'),
   ).action((o: ReportOptions & { job?: boolean }) => {
@@ -110,28 +150,50 @@ export function program(io: Io): Command {
     report(DEMO_JOB, 'demo', o, io);
   });
 
-  addReportOptions(p.command('run').description('run a job file (JSON; see docs/job-schema.json) and print its report').argument('<job.json>', 'the job file')).action(
-    (file: string, o: ReportOptions) => {
-      report(parseJob(readText(file, 'job file')), file, o, io, file);
-    },
-  );
+  addReportOptions(
+    p
+      .command('run')
+      .description('run a job file (JSON; see docs/job-schema.json) and print its report')
+      .argument('<job.json>', 'the job file'),
+  ).action((file: string, o: ReportOptions) => {
+    report(parseJob(readText(file, 'job file')), file, o, io, file);
+  });
 
   p.command('batch')
     .description('stream a CSV of many cases through one computation, writing a CSV of results')
     .argument('<kind>', `what each row is: ${Object.keys(BATCH_KINDS).join(', ')}`)
     .argument('<file.csv>', 'the input CSV (first line: column names); - for the standard input')
-    .addOption(new Option('-a, --arithmetic <kind>', 'the arithmetic').choices(['rational', 'decimal', 'float']).default('float'))
-    .addOption(new Option('-d, --digits <n>', 'significant digits written').argParser(digitsOption).default(10))
-    .option('-o, --out <file>', 'write the results to this file (atomically) instead of the standard output')
-    .action(async (kind: string, file: string, o: { arithmetic: ArithmeticName; digits: number; out?: string }) => {
-      await runBatch(kind, file, o, io);
-    });
+    .addOption(
+      new Option('-a, --arithmetic <kind>', 'the arithmetic')
+        .choices(['rational', 'decimal', 'float'])
+        .default('float'),
+    )
+    .addOption(
+      new Option('-d, --digits <n>', 'significant digits written')
+        .argParser(digitsOption)
+        .default(10),
+    )
+    .option(
+      '-o, --out <file>',
+      'write the results to this file (atomically) instead of the standard output',
+    )
+    .action(
+      async (
+        kind: string,
+        file: string,
+        o: { arithmetic: ArithmeticName; digits: number; out?: string },
+      ) => {
+        await runBatch(kind, file, o, io);
+      },
+    );
 
   p.command('schema')
     .description('print the JSON Schema of job files or of JSON reports')
     .addArgument(new Argument('<which>', 'job or report').choices(['job', 'report']))
     .action((which: string) => {
-      io.stdout(JSON.stringify(which === 'job' ? jobSchema(TASK_KINDS) : REPORT_SCHEMA, null, 2) + '\n');
+      io.stdout(
+        JSON.stringify(which === 'job' ? jobSchema(TASK_KINDS) : REPORT_SCHEMA, null, 2) + '\n',
+      );
     });
   return p;
 }
@@ -151,7 +213,9 @@ export async function main(argv: string[], io: Io): Promise<number> {
       io.stderr(`quadspread: ${e.message}\n`);
       return e.exitCode;
     }
-    io.stderr(`quadspread: internal error (please report it): ${(e as Error).stack ?? String(e)}\n`);
+    io.stderr(
+      `quadspread: internal error (please report it): ${(e as Error).stack ?? String(e)}\n`,
+    );
     return EXIT.INTERNAL;
   }
 }

@@ -7,7 +7,8 @@ import type { Report } from './report.js';
 import { BUDGET_SHOWN, shortExact, showExact } from './render-text.js';
 
 /** What ± σ and the budget column mean, said once at the top of a report that has them. */
-const MARKDOWN_LEGEND = '± σ is the standard uncertainty (k = 1, first order); the budget gives each input\'s share of the variance.';
+const MARKDOWN_LEGEND =
+  "± σ is the standard uncertainty (k = 1, first order); the budget gives each input's share of the variance.";
 
 /** Escapes text for a Markdown table cell. */
 function cell(text: string): string {
@@ -23,8 +24,11 @@ export function renderMarkdown(report: Report): string {
   const out: string[] = [];
   out.push(`# ${report.title}`);
   out.push('');
-  out.push(`Source: \`${report.source}\` · arithmetic: \`${report.arithmetic}\` · ${report.digits} significant digits · lengths in ${report.lengthUnit}`);
-  if (report.tasks.some((t) => t.results.some((q) => q.sigma !== undefined))) out.push('', MARKDOWN_LEGEND);
+  out.push(
+    `Source: \`${report.source}\` · arithmetic: \`${report.arithmetic}\` · ${report.digits} significant digits · lengths in ${report.lengthUnit}`,
+  );
+  if (report.tasks.some((t) => t.results.some((q) => q.sigma !== undefined)))
+    out.push('', MARKDOWN_LEGEND);
   for (const t of report.tasks) {
     out.push('');
     out.push(`## ${t.index + 1}. ${cell(t.name)} (${t.kind})`);
@@ -37,9 +41,19 @@ export function renderMarkdown(report: Report): string {
       for (const q of t.results) {
         const all = q.budget ?? [];
         const rest = all.slice(BUDGET_SHOWN);
-        const budget = [...all.slice(0, BUDGET_SHOWN).map((b) => `${b.input} ${b.share} %`), ...(rest.length ? [`${rest.length} more ${rest.reduce((s, b) => s + Number(b.share), 0).toFixed(1)} %`] : []), ...(q.correlations ?? []).map((c) => `${c.inputs[0]} ↔ ${c.inputs[1]} (r = ${c.r}) ${c.share} %`)].join(', ');
+        const budget = [
+          ...all.slice(0, BUDGET_SHOWN).map((b) => `${b.input} ${b.share} %`),
+          ...(rest.length
+            ? [`${rest.length} more ${rest.reduce((s, b) => s + Number(b.share), 0).toFixed(1)} %`]
+            : []),
+          ...(q.correlations ?? []).map(
+            (c) => `${c.inputs[0]} ↔ ${c.inputs[1]} (r = ${c.r}) ${c.share} %`,
+          ),
+        ].join(', ');
         const exact = showExact(q) ? `\`${shortExact(q.exact)}\`` : '';
-        out.push(`| ${cell(q.label)} (\`${q.name}\`) | ${cell(withUnit(q.value, q.unit))} | ${q.sigma !== undefined ? cell(withUnit(q.sigma, q.unit)) : ''} | ${cell(exact)} | ${cell(budget)} |`);
+        out.push(
+          `| ${cell(q.label)} (\`${q.name}\`) | ${cell(withUnit(q.value, q.unit))} | ${q.sigma !== undefined ? cell(withUnit(q.sigma, q.unit)) : ''} | ${cell(exact)} | ${cell(budget)} |`,
+        );
       }
     }
     if (t.checks.length > 0) {
@@ -47,7 +61,9 @@ export function renderMarkdown(report: Report): string {
       out.push('| check | value | tolerance | result |');
       out.push('|---|---|---|---|');
       for (const c of t.checks) {
-        out.push(`| ${cell(c.label)} | ${cell(withUnit(c.value, c.unit))} | ${cell(/\d/.test(c.tolerance) ? withUnit(c.tolerance, c.unit) : c.tolerance)} | ${c.pass ? '**pass**' : '**FAIL**'} |`);
+        out.push(
+          `| ${cell(c.label)} | ${cell(withUnit(c.value, c.unit))} | ${cell(/\d/.test(c.tolerance) ? withUnit(c.tolerance, c.unit) : c.tolerance)} | ${c.pass ? '**pass**' : '**FAIL**'} |`,
+        );
       }
     }
     if (t.notes.length > 0) {
@@ -57,7 +73,11 @@ export function renderMarkdown(report: Report): string {
   }
   out.push('');
   const s = report.summary;
-  out.push(s.checks === 0 ? '**Checks: none** (nothing in this job is checked against a tolerance).' : `**Checks: ${s.passed} passed, ${s.failed} failed (of ${s.checks}).**`);
+  out.push(
+    s.checks === 0
+      ? '**Checks: none** (nothing in this job is checked against a tolerance).'
+      : `**Checks: ${s.passed} passed, ${s.failed} failed (of ${s.checks}).**`,
+  );
   out.push('');
   out.push(`> **Caution.** ${report.caution}`);
   return out.join('\n') + '\n';

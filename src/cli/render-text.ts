@@ -31,7 +31,8 @@ export function showExact(q: Quantity): q is Quantity & { exact: string } {
 }
 
 /** What ± and the budget lines mean, said once at the top of a report that has them. */
-export const UNCERTAINTY_LEGEND = '± is the standard uncertainty (k = 1, first order); a budget gives each input\'s share of the variance and, in brackets, its part of the uncertainty.';
+export const UNCERTAINTY_LEGEND =
+  "± is the standard uncertainty (k = 1, first order); a budget gives each input's share of the variance and, in brackets, its part of the uncertainty.";
 
 function withUnit(value: string, unit: string): string {
   return unit === '' ? value : `${value} ${unit}`;
@@ -42,12 +43,20 @@ function quantityLines(q: Quantity): string[] {
   const lines = [`  ${q.label} [${q.name}]: ${withUnit(q.value, q.unit)}${sigma}`];
   if (showExact(q)) lines.push(`      exact: ${shortExact(q.exact)}`);
   if (q.budget && q.budget.length > 0) {
-    const top = q.budget.slice(0, BUDGET_SHOWN).map((b) => `${b.input} ${b.share} % (${withUnit(b.part, q.unit)})`);
+    const top = q.budget
+      .slice(0, BUDGET_SHOWN)
+      .map((b) => `${b.input} ${b.share} % (${withUnit(b.part, q.unit)})`);
     const rest = q.budget.slice(BUDGET_SHOWN);
-    if (rest.length > 0) top.push(`${rest.length} other input${rest.length === 1 ? '' : 's'} ${rest.reduce((s, b) => s + Number(b.share), 0).toFixed(1)} %`);
+    if (rest.length > 0)
+      top.push(
+        `${rest.length} other input${rest.length === 1 ? '' : 's'} ${rest.reduce((s, b) => s + Number(b.share), 0).toFixed(1)} %`,
+      );
     lines.push(`      budget: ${top.join('; ')}`);
   }
-  for (const c of q.correlations ?? []) lines.push(`      correlation ${c.inputs[0]} ↔ ${c.inputs[1]} (r = ${c.r}): ${c.share} % of the variance`);
+  for (const c of q.correlations ?? [])
+    lines.push(
+      `      correlation ${c.inputs[0]} ↔ ${c.inputs[1]} (r = ${c.r}): ${c.share} % of the variance`,
+    );
   return lines;
 }
 
@@ -55,21 +64,30 @@ function quantityLines(q: Quantity): string[] {
 export function renderText(report: Report): string {
   const out: string[] = [];
   out.push(`quadspread report: ${report.title}`);
-  out.push(`source: ${report.source}; arithmetic: ${report.arithmetic}; ${report.digits} significant digits; lengths in ${report.lengthUnit}`);
-  if (report.tasks.some((t) => t.results.some((q) => q.sigma !== undefined))) out.push(UNCERTAINTY_LEGEND);
+  out.push(
+    `source: ${report.source}; arithmetic: ${report.arithmetic}; ${report.digits} significant digits; lengths in ${report.lengthUnit}`,
+  );
+  if (report.tasks.some((t) => t.results.some((q) => q.sigma !== undefined)))
+    out.push(UNCERTAINTY_LEGEND);
   for (const t of report.tasks) {
     out.push('');
     out.push(`[${t.index + 1}] ${t.name} (${t.kind})`);
     out.push(`  ${t.summary}`);
     for (const q of t.results) out.push(...quantityLines(q));
     for (const c of t.checks) {
-      out.push(`  check ${c.pass ? 'PASS' : 'FAIL'}: ${c.label}: ${withUnit(c.value, c.unit)} (tolerance ${/\d/.test(c.tolerance) ? withUnit(c.tolerance, c.unit) : c.tolerance})`);
+      out.push(
+        `  check ${c.pass ? 'PASS' : 'FAIL'}: ${c.label}: ${withUnit(c.value, c.unit)} (tolerance ${/\d/.test(c.tolerance) ? withUnit(c.tolerance, c.unit) : c.tolerance})`,
+      );
     }
     for (const n of t.notes) out.push(`  note: ${n}`);
   }
   out.push('');
   const s = report.summary;
-  out.push(s.checks === 0 ? 'checks: none (nothing in this job is checked against a tolerance)' : `checks: ${s.passed} passed, ${s.failed} failed (of ${s.checks})${s.failed > 0 ? ' -- SEE FAILED CHECKS ABOVE' : ''}`);
+  out.push(
+    s.checks === 0
+      ? 'checks: none (nothing in this job is checked against a tolerance)'
+      : `checks: ${s.passed} passed, ${s.failed} failed (of ${s.checks})${s.failed > 0 ? ' -- SEE FAILED CHECKS ABOVE' : ''}`,
+  );
   out.push('');
   out.push(report.caution);
   return out.join('\n') + '\n';

@@ -13,9 +13,21 @@ export const REPORT_SCHEMA: Schema = {
   $schema: 'https://json-schema.org/draft/2020-12/schema',
   $id: 'https://quadspread.invalid/report-schema.json',
   title: 'quadspread report',
-  description: 'The JSON report of a quadspread job run. Numbers are decimal text rounded to "digits" significant digits; exact forms are fractions (n/d) or surds (a + b√d).',
+  description:
+    'The JSON report of a quadspread job run. Numbers are decimal text rounded to "digits" significant digits; exact forms are fractions (n/d) or surds (a + b√d).',
   type: 'object',
-  required: ['format', 'version', 'title', 'source', 'arithmetic', 'digits', 'lengthUnit', 'tasks', 'summary', 'caution'],
+  required: [
+    'format',
+    'version',
+    'title',
+    'source',
+    'arithmetic',
+    'digits',
+    'lengthUnit',
+    'tasks',
+    'summary',
+    'caution',
+  ],
   additionalProperties: false,
   properties: {
     format: { const: 'quadspread-report' },
@@ -30,12 +42,20 @@ export const REPORT_SCHEMA: Schema = {
       type: 'object',
       required: ['checks', 'passed', 'failed'],
       additionalProperties: false,
-      properties: { checks: { type: 'integer', minimum: 0 }, passed: { type: 'integer', minimum: 0 }, failed: { type: 'integer', minimum: 0 } },
+      properties: {
+        checks: { type: 'integer', minimum: 0 },
+        passed: { type: 'integer', minimum: 0 },
+        failed: { type: 'integer', minimum: 0 },
+      },
     },
     caution: text,
   },
   $defs: {
-    decimal: { type: 'string', pattern: '^-?\\d+(\\.\\d+)?([eE][+-]?\\d+)?$', description: 'Decimal text.' },
+    decimal: {
+      type: 'string',
+      pattern: '^-?\\d+(\\.\\d+)?([eE][+-]?\\d+)?$',
+      description: 'Decimal text.',
+    },
     task: {
       type: 'object',
       required: ['index', 'kind', 'name', 'summary', 'results', 'checks', 'notes'],
@@ -60,7 +80,10 @@ export const REPORT_SCHEMA: Schema = {
         unit: text,
         value: { $ref: '#/$defs/decimal' },
         exact: { ...text, description: 'The exact form: a fraction n/d or a surd a + b√d.' },
-        sigma: { $ref: '#/$defs/decimal', description: 'Standard uncertainty (GUM, JCGM 100:2008, first order), in unit.' },
+        sigma: {
+          $ref: '#/$defs/decimal',
+          description: 'Standard uncertainty (GUM, JCGM 100:2008, first order), in unit.',
+        },
         correlations: {
           type: 'array',
           items: {
@@ -70,7 +93,10 @@ export const REPORT_SCHEMA: Schema = {
             properties: {
               inputs: { type: 'array', minItems: 2, maxItems: 2, items: text },
               r: { $ref: '#/$defs/decimal' },
-              share: { $ref: '#/$defs/decimal', description: 'Percent of the variance (negative for a negative correlation term).' },
+              share: {
+                $ref: '#/$defs/decimal',
+                description: 'Percent of the variance (negative for a negative correlation term).',
+              },
             },
           },
         },
@@ -94,7 +120,14 @@ export const REPORT_SCHEMA: Schema = {
       type: 'object',
       required: ['name', 'label', 'value', 'tolerance', 'unit', 'pass'],
       additionalProperties: false,
-      properties: { name: text, label: text, value: { $ref: '#/$defs/decimal' }, tolerance: text, unit: text, pass: { type: 'boolean' } },
+      properties: {
+        name: text,
+        label: text,
+        value: { $ref: '#/$defs/decimal' },
+        tolerance: text,
+        unit: text,
+        pass: { type: 'boolean' },
+      },
     },
   },
 };

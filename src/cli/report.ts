@@ -66,8 +66,20 @@ export interface SketchView {
   view: 'plan' | 'elevation';
   /** What the axes are, when not the usual (plan: x east, y north, with a north arrow; elevation: distance across, height up). */
   caption?: string;
-  points: { name: string; x: number; y: number; role: 'station' | 'control' | 'target' | 'foot' | 'computed' }[];
-  lines: { x1: number; y1: number; x2: number; y2: number; role: 'sight' | 'course' | 'boundary' | 'base' | 'path' | 'adjusted' | 'ground'; label?: string }[];
+  points: {
+    name: string;
+    x: number;
+    y: number;
+    role: 'station' | 'control' | 'target' | 'foot' | 'computed';
+  }[];
+  lines: {
+    x1: number;
+    y1: number;
+    x2: number;
+    y2: number;
+    role: 'sight' | 'course' | 'boundary' | 'base' | 'path' | 'adjusted' | 'ground';
+    label?: string;
+  }[];
   /** Free labels (e.g. a computed value written near a point). */
   notes: { x: number; y: number; text: string }[];
 }

@@ -7,13 +7,20 @@
 import type { TaskKind } from './task.js';
 import type { Schema } from './validate.js';
 
-const LENGTH_PATTERN = '^\\s*[+-]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][+-]?\\d+)?(\\s*/\\s*\\d+)?\\s*(mm|m|km|ft|us-ft|ch|lk|us-ch|us-lk|mi)?\\s*$';
+const LENGTH_PATTERN =
+  '^\\s*[+-]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][+-]?\\d+)?(\\s*/\\s*\\d+)?\\s*(mm|m|km|ft|us-ft|ch|lk|us-ch|us-lk|mi)?\\s*$';
 
 /** Definitions shared by the task kinds (`#/$defs/...`). */
 export const DEFS: Record<string, Schema> = {
-  name: { type: 'string', minLength: 1, maxLength: 80, 'x-describe': 'a name of 1 to 80 characters' },
+  name: {
+    type: 'string',
+    minLength: 1,
+    maxLength: 80,
+    'x-describe': 'a name of 1 to 80 characters',
+  },
   length: {
-    description: 'A length: a number in the job\'s length unit, or text with a unit: "120.5 m", "395.2 ft", "5 mm", "3 ch".',
+    description:
+      'A length: a number in the job\'s length unit, or text with a unit: "120.5 m", "395.2 ft", "5 mm", "3 ch".',
     type: ['number', 'string'],
     pattern: LENGTH_PATTERN,
     'x-describe': 'a length (a number, or text such as "120.5 m")',
@@ -32,13 +39,15 @@ export const DEFS: Record<string, Schema> = {
     'x-describe': 'a length, or { "value": …, "sigma": … }',
   },
   angle: {
-    description: 'An angle: decimal degrees (a number), DMS text ("12°34\'56.7\"", "12 34 56.7"), or a number with a unit ("100 gon", "1600 mil", "0.5 rad").',
+    description:
+      'An angle: decimal degrees (a number), DMS text ("12°34\'56.7"", "12 34 56.7"), or a number with a unit ("100 gon", "1600 mil", "0.5 rad").',
     type: ['number', 'string'],
     maxLength: 200,
     'x-describe': 'an angle',
   },
   measuredAngle: {
-    description: 'An angle, or { "value": angle, "sigma": angle } (sigma e.g. "5\\"" for five seconds of arc).',
+    description:
+      'An angle, or { "value": angle, "sigma": angle } (sigma e.g. "5\\"" for five seconds of arc).',
     anyOf: [
       { $ref: '#/$defs/angle' },
       {
@@ -70,11 +79,19 @@ export const DEFS: Record<string, Schema> = {
         },
       },
     ],
-    'x-describe': 'a vertical reading (an elevation angle, or { "zenith": … }, { "slope": … }, { "spread": … })',
+    'x-describe':
+      'a vertical reading (an elevation angle, or { "zenith": … }, { "slope": … }, { "spread": … })',
   },
-  pointRef: { type: 'string', minLength: 1, maxLength: 80, description: 'The name of a point in "points".', 'x-describe': 'a point name' },
+  pointRef: {
+    type: 'string',
+    minLength: 1,
+    maxLength: 80,
+    description: 'The name of a point in "points".',
+    'x-describe': 'a point name',
+  },
   correlations: {
-    description: 'Correlated inputs of the task: pairs of inputs (named as in the uncertainty budget, e.g. "C0 elevation") with their correlation coefficient r; the covariance r·u(a)·u(b) enters the variance (GUM eq. (13)). Inputs not listed are uncorrelated.',
+    description:
+      'Correlated inputs of the task: pairs of inputs (named as in the uncertainty budget, e.g. "C0 elevation") with their correlation coefficient r; the covariance r·u(a)·u(b) enters the variance (GUM eq. (13)). Inputs not listed are uncorrelated.',
     type: 'array',
     maxItems: 1000,
     items: {
@@ -82,13 +99,18 @@ export const DEFS: Record<string, Schema> = {
       required: ['inputs', 'r'],
       additionalProperties: false,
       properties: {
-        inputs: { type: 'array', minItems: 2, maxItems: 2, items: { type: 'string', minLength: 1, maxLength: 200 } },
+        inputs: {
+          type: 'array',
+          minItems: 2,
+          maxItems: 2,
+          items: { type: 'string', minLength: 1, maxLength: 200 },
+        },
         r: { type: 'number', minimum: -1, maximum: 1 },
       },
     },
   },
   tolerance: {
-    description: 'A tolerance in the job\'s length unit (a number or text with a unit).',
+    description: "A tolerance in the job's length unit (a number or text with a unit).",
     $ref: '#/$defs/length',
   },
 };
@@ -116,13 +138,15 @@ export function jobSchema(kinds: readonly TaskKind[]): Schema {
         properties: {
           length: {
             enum: ['m', 'km', 'ft', 'us-ft', 'ch', 'lk', 'us-ch', 'us-lk', 'mi'],
-            description: 'Unit of bare-number lengths and of every length in the report (default m). Lengths written with a unit are converted to it exactly.',
+            description:
+              'Unit of bare-number lengths and of every length in the report (default m). Lengths written with a unit are converted to it exactly.',
           },
         },
       },
       points: {
         type: 'object',
-        description: 'Named points: stations, control points, corners. Coordinates in the job\'s length unit.',
+        description:
+          "Named points: stations, control points, corners. Coordinates in the job's length unit.",
         patternProperties: {
           '^.{1,80}$': {
             type: 'object',

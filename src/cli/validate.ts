@@ -46,8 +46,13 @@ function typeMatches(x: unknown, t: string): boolean {
 }
 
 const ARTICLE: Record<string, string> = {
-  object: 'an object', array: 'an array', string: 'a string', number: 'a number',
-  integer: 'an integer', boolean: 'true or false', null: 'null',
+  object: 'an object',
+  array: 'an array',
+  string: 'a string',
+  number: 'a number',
+  integer: 'an integer',
+  boolean: 'true or false',
+  null: 'null',
 };
 
 function describe(schema: Schema): string | undefined {
@@ -60,7 +65,12 @@ function describe(schema: Schema): string | undefined {
  * schema node has an `x-describe` annotation, that text names what was expected
  * (`"95°" is not a valid elevation angle` comes from the readings, not from here).
  */
-export function validate(value: unknown, schema: Schema, root: Schema = schema, path = ''): Problem[] {
+export function validate(
+  value: unknown,
+  schema: Schema,
+  root: Schema = schema,
+  path = '',
+): Problem[] {
   const out: Problem[] = [];
   check(value, schema, root, path, out);
   return out;
@@ -88,8 +98,14 @@ function check(x: unknown, schema0: Schema, root: Schema, path: string, out: Pro
     out.push({ path: where, message: `${show(x)} must be ${JSON.stringify(schema.const)}` });
     return;
   }
-  if (Array.isArray(schema.enum) && !schema.enum.some((e) => JSON.stringify(e) === JSON.stringify(x))) {
-    out.push({ path: where, message: `${show(x)} is not one of ${schema.enum.map((e) => JSON.stringify(e)).join(', ')}` });
+  if (
+    Array.isArray(schema.enum) &&
+    !schema.enum.some((e) => JSON.stringify(e) === JSON.stringify(x))
+  ) {
+    out.push({
+      path: where,
+      message: `${show(x)} is not one of ${schema.enum.map((e) => JSON.stringify(e)).join(', ')}`,
+    });
     return;
   }
   if (schema.type !== undefined) {
@@ -102,14 +118,18 @@ function check(x: unknown, schema0: Schema, root: Schema, path: string, out: Pro
   }
   if (Array.isArray(schema.oneOf) || Array.isArray(schema.anyOf)) {
     const branches = ((schema.oneOf ?? schema.anyOf) as Schema[]).map((b) => resolve(b, root));
-    const kinds = branches.map((b) => ((b.properties as Record<string, Schema> | undefined)?.kind as Schema | undefined)?.const);
+    const kinds = branches.map(
+      (b) =>
+        ((b.properties as Record<string, Schema> | undefined)?.kind as Schema | undefined)?.const,
+    );
     if (kinds.every((k) => typeof k === 'string')) {
       // A tagged union: the kind picks the branch.
       const kind = typeOf(x) === 'object' ? (x as Record<string, unknown>).kind : undefined;
       const i = kinds.indexOf(kind as string);
       if (i < 0) {
         const p = typeOf(x) === 'object' ? joinPath(path, 'kind') : path;
-        const what = kind === undefined ? 'a task needs a "kind"' : `${show(kind)} is not a known kind`;
+        const what =
+          kind === undefined ? 'a task needs a "kind"' : `${show(kind)} is not a known kind`;
         out.push({ path: p, message: `${what} (${(kinds as string[]).join(', ')})` });
         return;
       }
@@ -128,7 +148,9 @@ function check(x: unknown, schema0: Schema, root: Schema, path: string, out: Pro
           out.push({ path: where, message: `${show(x)} is not ${expected}` });
         } else {
           // Report the branch that got furthest (fewest problems, deepest path).
-          const best = results.slice().sort((a, b) => depth(b) - depth(a) || a.length - b.length)[0]!;
+          const best = results
+            .slice()
+            .sort((a, b) => depth(b) - depth(a) || a.length - b.length)[0]!;
           out.push(...best);
         }
         return;
@@ -139,29 +161,47 @@ function check(x: unknown, schema0: Schema, root: Schema, path: string, out: Pro
     case 'string': {
       const s = x as string;
       if (typeof schema.maxLength === 'number' && s.length > schema.maxLength) {
-        out.push({ path: where, message: `${show(s)} is longer than ${schema.maxLength} characters` });
+        out.push({
+          path: where,
+          message: `${show(s)} is longer than ${schema.maxLength} characters`,
+        });
       } else if (typeof schema.minLength === 'number' && s.length < schema.minLength) {
-        out.push({ path: where, message: `${show(s)} is shorter than ${schema.minLength} characters` });
+        out.push({
+          path: where,
+          message: `${show(s)} is shorter than ${schema.minLength} characters`,
+        });
       } else if (typeof schema.pattern === 'string' && !new RegExp(schema.pattern, 'u').test(s)) {
-        out.push({ path: where, message: `${show(s)} is not ${expected ?? `text of the form ${schema.pattern}`}` });
+        out.push({
+          path: where,
+          message: `${show(s)} is not ${expected ?? `text of the form ${schema.pattern}`}`,
+        });
       }
       break;
     }
     case 'integer':
     case 'number': {
       const n = x as number;
-      if (typeof schema.minimum === 'number' && n < schema.minimum) out.push({ path: where, message: `${n} is below the minimum ${schema.minimum}` });
-      if (typeof schema.maximum === 'number' && n > schema.maximum) out.push({ path: where, message: `${n} is above the maximum ${schema.maximum}` });
-      if (typeof schema.exclusiveMinimum === 'number' && n <= schema.exclusiveMinimum) out.push({ path: where, message: `${n} must be greater than ${schema.exclusiveMinimum}` });
+      if (typeof schema.minimum === 'number' && n < schema.minimum)
+        out.push({ path: where, message: `${n} is below the minimum ${schema.minimum}` });
+      if (typeof schema.maximum === 'number' && n > schema.maximum)
+        out.push({ path: where, message: `${n} is above the maximum ${schema.maximum}` });
+      if (typeof schema.exclusiveMinimum === 'number' && n <= schema.exclusiveMinimum)
+        out.push({ path: where, message: `${n} must be greater than ${schema.exclusiveMinimum}` });
       break;
     }
     case 'array': {
       const a = x as unknown[];
       if (typeof schema.minItems === 'number' && a.length < schema.minItems) {
-        out.push({ path: where, message: `has ${a.length} item${a.length === 1 ? '' : 's'}; at least ${schema.minItems} needed` });
+        out.push({
+          path: where,
+          message: `has ${a.length} item${a.length === 1 ? '' : 's'}; at least ${schema.minItems} needed`,
+        });
       }
       if (typeof schema.maxItems === 'number' && a.length > schema.maxItems) {
-        out.push({ path: where, message: `has ${a.length} items; at most ${schema.maxItems} allowed` });
+        out.push({
+          path: where,
+          message: `has ${a.length} items; at most ${schema.maxItems} allowed`,
+        });
       }
       if (schema.items && typeof schema.items === 'object') {
         a.forEach((item, i) => check(item, schema.items as Schema, root, joinPath(path, i), out));
@@ -188,7 +228,10 @@ function check(x: unknown, schema0: Schema, root: Schema, path: string, out: Pro
         }
         if (schema.additionalProperties === false) {
           const known = Object.keys(props);
-          out.push({ path: p, message: `is not a known field${known.length ? ` (known: ${known.join(', ')})` : ''}` });
+          out.push({
+            path: p,
+            message: `is not a known field${known.length ? ` (known: ${known.join(', ')})` : ''}`,
+          });
         } else if (schema.additionalProperties && typeof schema.additionalProperties === 'object') {
           check(v, schema.additionalProperties as Schema, root, p, out);
         }

@@ -37,14 +37,33 @@ export interface Input {
 }
 
 /** The length units a job may use. */
-export const LENGTH_UNITS: readonly LengthUnit[] = ['m', 'km', 'ft', 'us-ft', 'ch', 'lk', 'us-ch', 'us-lk', 'mi'];
+export const LENGTH_UNITS: readonly LengthUnit[] = [
+  'm',
+  'km',
+  'ft',
+  'us-ft',
+  'ch',
+  'lk',
+  'us-ch',
+  'us-lk',
+  'mi',
+];
 
 /** Words for the length units, for reports (`m`, `ft`, `US survey ft`, …). */
 export const LENGTH_UNIT_NAMES: Record<LengthUnit, string> = {
-  m: 'm', km: 'km', ft: 'ft', 'us-ft': 'US survey ft', ch: 'ch', lk: 'lk', 'us-ch': 'US survey ch', 'us-lk': 'US survey lk', mi: 'mi',
+  m: 'm',
+  km: 'km',
+  ft: 'ft',
+  'us-ft': 'US survey ft',
+  ch: 'ch',
+  lk: 'lk',
+  'us-ch': 'US survey ch',
+  'us-lk': 'US survey lk',
+  mi: 'mi',
 };
 
-const LENGTH_TEXT = /^\s*([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?(?:\s*\/\s*\d+)?)\s*([A-Za-z-]+)?\s*$/;
+const LENGTH_TEXT =
+  /^\s*([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?(?:\s*\/\s*\d+)?)\s*([A-Za-z-]+)?\s*$/;
 
 function reason(e: unknown): string {
   if (e instanceof QuadspreadError) {
@@ -67,7 +86,16 @@ function withSiblingSigma(value: unknown, sigma: unknown): unknown {
  * name them (`path.value`, `path.sigma`; for a sigma written beside the reading, `path` and
  * the sibling `….sigma`).
  */
-function splitMeasured(x: unknown, path: string): { value: unknown; sigma?: unknown; measuredForm: boolean; valuePath: string; sigmaPath: string } {
+function splitMeasured(
+  x: unknown,
+  path: string,
+): {
+  value: unknown;
+  sigma?: unknown;
+  measuredForm: boolean;
+  valuePath: string;
+  sigmaPath: string;
+} {
   if (typeof x === 'object' && x !== null && !Array.isArray(x) && 'value' in x) {
     const o = x as { value: unknown; sigma?: unknown; [SIBLING_SIGMA]?: true };
     const sibling = o[SIBLING_SIGMA] === true;
@@ -91,16 +119,27 @@ export function lengthText(x: unknown, path: string, unit: LengthUnit, what = 'l
       throw new JobInvalid(path, `${show(x)} is not a valid ${what}: ${reason(e)}`);
     }
   }
-  if (typeof x !== 'string') throw new JobInvalid(path, `${show(x)} is not a valid ${what} (give a number or text such as "120.5 m")`);
+  if (typeof x !== 'string')
+    throw new JobInvalid(
+      path,
+      `${show(x)} is not a valid ${what} (give a number or text such as "120.5 m")`,
+    );
   const m = LENGTH_TEXT.exec(x);
-  if (!m) throw new JobInvalid(path, `${show(x)} is not a valid ${what} (write a number with an optional unit, such as "120.5 m" or "395.2 ft")`);
+  if (!m)
+    throw new JobInvalid(
+      path,
+      `${show(x)} is not a valid ${what} (write a number with an optional unit, such as "120.5 m" or "395.2 ft")`,
+    );
   const given = m[2];
   try {
     const v = R.from(m[1]!.replace(/\s+/g, ''));
     if (given === undefined) return R.toString(v);
     if (given === 'mm') return R.toString(convertLength(R, R.div(v, R.from(1000)), 'm', unit));
     if (!(LENGTH_UNITS as readonly string[]).includes(given)) {
-      throw new JobInvalid(path, `${show(x)} is not a valid ${what}: unknown unit "${given}" (use ${['mm', ...LENGTH_UNITS].join(', ')})`);
+      throw new JobInvalid(
+        path,
+        `${show(x)} is not a valid ${what}: unknown unit "${given}" (use ${['mm', ...LENGTH_UNITS].join(', ')})`,
+      );
     }
     return R.toString(convertLength(R, v, given as LengthUnit, unit));
   } catch (e) {
@@ -110,23 +149,39 @@ export function lengthText(x: unknown, path: string, unit: LengthUnit, what = 'l
 }
 
 /** Reads a length input, with its sigma when given as `{ value, sigma }`. */
-export function readLength(x: unknown, path: string, unit: LengthUnit, name: string, what = 'length'): Input {
+export function readLength(
+  x: unknown,
+  path: string,
+  unit: LengthUnit,
+  name: string,
+  what = 'length',
+): Input {
   const m = splitMeasured(x, path);
   const value = lengthText(m.value, m.valuePath, unit, what);
   const input: Input = { name, value, angle: false };
-  if (m.sigma !== undefined) input.sigma = readSigma(() => lengthText(m.sigma, m.sigmaPath, unit, 'standard uncertainty'), m.sigmaPath, m.sigma);
+  if (m.sigma !== undefined)
+    input.sigma = readSigma(
+      () => lengthText(m.sigma, m.sigmaPath, unit, 'standard uncertainty'),
+      m.sigmaPath,
+      m.sigma,
+    );
   return input;
 }
 
 /** Requires a length to be positive. */
 export function positive(input: Input, path: string, what: string): Input {
-  if (R.sign(R.from(input.value)) <= 0) throw new JobInvalid(path, `${input.value} is not a valid ${what}: it must be greater than zero`);
+  if (R.sign(R.from(input.value)) <= 0)
+    throw new JobInvalid(
+      path,
+      `${input.value} is not a valid ${what}: it must be greater than zero`,
+    );
   return input;
 }
 
 function readSigma(read: () => string, path: string, raw: unknown): string {
   const s = read();
-  if (R.sign(R.from(s)) < 0) throw new JobInvalid(path, `${show(raw)} is not a valid standard uncertainty: it is negative`);
+  if (R.sign(R.from(s)) < 0)
+    throw new JobInvalid(path, `${show(raw)} is not a valid standard uncertainty: it is negative`);
   return s;
 }
 
@@ -134,7 +189,8 @@ const ANGLE_SUFFIX = /^\s*(.*?)\s*(gon|mil|rad|deg)\s*$/;
 
 /** Reads an angle (decimal degrees, DMS text, or a number with `gon`, `mil`, `rad`) into exact degrees text. */
 export function angleText(x: unknown, path: string, what = 'angle'): string {
-  if (typeof x !== 'number' && typeof x !== 'string') throw new JobInvalid(path, `${show(x)} is not a valid ${what}`);
+  if (typeof x !== 'number' && typeof x !== 'string')
+    throw new JobInvalid(path, `${show(x)} is not a valid ${what}`);
   try {
     if (typeof x === 'string') {
       const m = ANGLE_SUFFIX.exec(x);
@@ -151,7 +207,12 @@ export function readAngle(x: unknown, path: string, name: string, what = 'angle'
   const m = splitMeasured(x, path);
   const value = angleText(m.value, m.valuePath, what);
   const input: Input = { name, value, angle: true };
-  if (m.sigma !== undefined) input.sigma = readSigma(() => angleText(m.sigma, m.sigmaPath, 'standard uncertainty'), m.sigmaPath, m.sigma);
+  if (m.sigma !== undefined)
+    input.sigma = readSigma(
+      () => angleText(m.sigma, m.sigmaPath, 'standard uncertainty'),
+      m.sigmaPath,
+      m.sigma,
+    );
   return input;
 }
 
@@ -160,7 +221,8 @@ export function readNumber(x: unknown, path: string, name: string, what = 'numbe
   const m = splitMeasured(x, path);
   const read = (v: unknown, p: string, w: string): string => {
     try {
-      if (typeof v !== 'number' && typeof v !== 'string') throw new JobInvalid(p, `${show(v)} is not a valid ${w}`);
+      if (typeof v !== 'number' && typeof v !== 'string')
+        throw new JobInvalid(p, `${show(v)} is not a valid ${w}`);
       return R.toString(R.from(v));
     } catch (e) {
       if (e instanceof JobInvalid) throw e;
@@ -168,7 +230,12 @@ export function readNumber(x: unknown, path: string, name: string, what = 'numbe
     }
   };
   const input: Input = { name, value: read(m.value, m.valuePath, what), angle: false };
-  if (m.sigma !== undefined) input.sigma = readSigma(() => read(m.sigma, m.sigmaPath, 'standard uncertainty'), m.sigmaPath, m.sigma);
+  if (m.sigma !== undefined)
+    input.sigma = readSigma(
+      () => read(m.sigma, m.sigmaPath, 'standard uncertainty'),
+      m.sigmaPath,
+      m.sigma,
+    );
   return input;
 }
 
@@ -187,33 +254,77 @@ export type VerticalSpec =
 export function readVertical(x: unknown, path: string, name: string): VerticalSpec {
   let spec: VerticalSpec;
   if (typeof x === 'string' || typeof x === 'number') {
-    spec = { form: 'elevation', input: readAngle(x, path, `${name} elevation`, 'elevation angle'), text: String(x) };
+    spec = {
+      form: 'elevation',
+      input: readAngle(x, path, `${name} elevation`, 'elevation angle'),
+      text: String(x),
+    };
   } else if (typeof x === 'object' && x !== null) {
     const o = x as Record<string, unknown>;
     const sigma = o.sigma;
     const withSigma = (v: unknown): unknown => withSiblingSigma(v, sigma);
-    if ('elevation' in o) spec = { form: 'elevation', input: readAngle(withSigma(o.elevation), `${path}.elevation`, `${name} elevation`, 'elevation angle'), text: String(o.elevation) };
-    else if ('zenith' in o) spec = { form: 'zenith', input: readAngle(withSigma(o.zenith), `${path}.zenith`, `${name} zenith`, 'zenith angle'), text: String(o.zenith) };
+    if ('elevation' in o)
+      spec = {
+        form: 'elevation',
+        input: readAngle(
+          withSigma(o.elevation),
+          `${path}.elevation`,
+          `${name} elevation`,
+          'elevation angle',
+        ),
+        text: String(o.elevation),
+      };
+    else if ('zenith' in o)
+      spec = {
+        form: 'zenith',
+        input: readAngle(withSigma(o.zenith), `${path}.zenith`, `${name} zenith`, 'zenith angle'),
+        text: String(o.zenith),
+      };
     else if ('slope' in o) {
-      if (sigma !== undefined) throw new JobInvalid(`${path}.sigma`, 'a slope reading takes no sigma here (give the reading as an angle to carry an uncertainty)');
+      if (sigma !== undefined)
+        throw new JobInvalid(
+          `${path}.sigma`,
+          'a slope reading takes no sigma here (give the reading as an angle to carry an uncertainty)',
+        );
       spec = { form: 'slope', text: String(o.slope) };
     } else if ('spread' in o) {
-      spec = { form: 'spread', input: readNumber(withSigma(o.spread), `${path}.spread`, `${name} spread`, 'spread'), sign: o.below === true ? -1 : 1, text: String(o.spread) };
-    } else throw new JobInvalid(path, 'a vertical reading needs one of "elevation", "zenith", "slope" or "spread"');
+      spec = {
+        form: 'spread',
+        input: readNumber(withSigma(o.spread), `${path}.spread`, `${name} spread`, 'spread'),
+        sign: o.below === true ? -1 : 1,
+        text: String(o.spread),
+      };
+    } else
+      throw new JobInvalid(
+        path,
+        'a vertical reading needs one of "elevation", "zenith", "slope" or "spread"',
+      );
   } else throw new JobInvalid(path, `${show(x)} is not a valid vertical reading`);
   // Check it now, exactly, so that a bad reading is a bad job (exit 2), not a failed computation.
-  const where = spec.form === 'elevation' || spec.form === 'zenith' ? `${path}${typeof x === 'object' ? `.${spec.form}` : ''}` : `${path}.${spec.form}`;
+  const where =
+    spec.form === 'elevation' || spec.form === 'zenith'
+      ? `${path}${typeof x === 'object' ? `.${spec.form}` : ''}`
+      : `${path}.${spec.form}`;
   try {
     verticalOf(R, spec, (i) => R.from(i.value));
   } catch (e) {
-    const label = spec.form === 'elevation' ? 'elevation angle' : spec.form === 'zenith' ? 'zenith angle' : spec.form;
+    const label =
+      spec.form === 'elevation'
+        ? 'elevation angle'
+        : spec.form === 'zenith'
+          ? 'zenith angle'
+          : spec.form;
     throw new JobInvalid(where, `${show(spec.text)} is not a valid ${label}: ${reason(e)}`);
   }
   return spec;
 }
 
 /** The signed vertical reading of a spec in an arithmetic, through the library's readings. */
-export function verticalOf<V>(A: Arithmetic<V>, spec: VerticalSpec, get: (i: Input) => V): VerticalReading<V> {
+export function verticalOf<V>(
+  A: Arithmetic<V>,
+  spec: VerticalSpec,
+  get: (i: Input) => V,
+): VerticalReading<V> {
   switch (spec.form) {
     case 'elevation':
     case 'zenith':
@@ -240,13 +351,23 @@ export function plain(text: string): string {
  * Requires an angle input (in degrees) to lie in a range: `[lo, hi)` or `(lo, hi)`.
  * A reading outside the range of its kind is a bad job (exit 2), not a failed computation.
  */
-export function inRange(input: Input, path: string, what: string, lo: number, hi: number, open: 'lo' | 'both'): Input {
+export function inRange(
+  input: Input,
+  path: string,
+  what: string,
+  lo: number,
+  hi: number,
+  open: 'lo' | 'both',
+): Input {
   const v = R.from(input.value);
   const low = R.cmp(v, R.from(lo));
   const high = R.cmp(v, R.from(hi));
   if ((open === 'both' ? low <= 0 : low < 0) || high >= 0) {
     const range = open === 'both' ? `(${lo}°, ${hi}°)` : `[${lo}°, ${hi}°)`;
-    throw new JobInvalid(path, `${plain(input.value)}° is not a valid ${what}: it must be in ${range}`);
+    throw new JobInvalid(
+      path,
+      `${plain(input.value)}° is not a valid ${what}: it must be in ${range}`,
+    );
   }
   return input;
 }
@@ -255,7 +376,10 @@ export function inRange(input: Input, path: string, what: string, lo: number, hi
 export function inClosed(input: Input, path: string, what: string, lo: number, hi?: number): Input {
   const v = R.from(input.value);
   if (R.cmp(v, R.from(lo)) < 0 || (hi !== undefined && R.cmp(v, R.from(hi)) > 0)) {
-    throw new JobInvalid(path, `${plain(input.value)} is not a valid ${what}: it must be in [${lo}, ${hi ?? '∞'}${hi === undefined ? ')' : ']'}`);
+    throw new JobInvalid(
+      path,
+      `${plain(input.value)} is not a valid ${what}: it must be in [${lo}, ${hi ?? '∞'}${hi === undefined ? ')' : ']'}`,
+    );
   }
   return input;
 }

@@ -15,7 +15,11 @@ import type { PointInput } from './internal.js';
 function readPolygon<T>(A: Arithmetic<T, boolean>, points: unknown, where: string): Point<T>[] {
   const list = readArray<unknown>(points, `${where}`);
   if (list.length < 3) {
-    throw new QuadspreadError('TOO_FEW_POINTS', where, `a polygon needs at least 3 vertices, got ${list.length}`);
+    throw new QuadspreadError(
+      'TOO_FEW_POINTS',
+      where,
+      `a polygon needs at least 3 vertices, got ${list.length}`,
+    );
   }
   return list.map((p, i) => readPoint(A, p, `${where}[${i}]`));
 }
@@ -127,9 +131,18 @@ export const AREA_UNITS = {
 /** An area unit: a key of {@link AREA_UNITS}. */
 export type AreaUnit = keyof typeof AREA_UNITS;
 
-function unitFactor<T>(A: Arithmetic<T, boolean>, table: Record<string, string>, unit: unknown, where: string): T {
+function unitFactor<T>(
+  A: Arithmetic<T, boolean>,
+  table: Record<string, string>,
+  unit: unknown,
+  where: string,
+): T {
   if (typeof unit !== 'string' || !Object.prototype.hasOwnProperty.call(table, unit)) {
-    throw new QuadspreadError('INVALID_UNIT', where, `${show(unit)} is not one of ${Object.keys(table).join(', ')}`);
+    throw new QuadspreadError(
+      'INVALID_UNIT',
+      where,
+      `${show(unit)} is not one of ${Object.keys(table).join(', ')}`,
+    );
   }
   return A.from(table[unit]!);
 }
@@ -152,7 +165,12 @@ function unitFactor<T>(A: Arithmetic<T, boolean>, table: Record<string, string>,
  * //=> '316160658/78125'
  * ```
  */
-export function convertArea<T>(A: Arithmetic<T, boolean>, value: Numeric<T>, from: AreaUnit, to: AreaUnit): T {
+export function convertArea<T>(
+  A: Arithmetic<T, boolean>,
+  value: Numeric<T>,
+  from: AreaUnit,
+  to: AreaUnit,
+): T {
   const where = 'convertArea(A, value, from, to)';
   const f = unitFactor(A, AREA_UNITS, from, `${where} from`);
   const t = unitFactor(A, AREA_UNITS, to, `${where} to`);
@@ -216,7 +234,8 @@ export function polygonArea<T>(
     signed = area(A, points);
     per = perimeter(A, points);
   } catch (e) {
-    if (e instanceof QuadspreadError) throw new QuadspreadError(e.code, where, e.message.replace(/^quadspread \w+: /, ''));
+    if (e instanceof QuadspreadError)
+      throw new QuadspreadError(e.code, where, e.message.replace(/^quadspread \w+: /, ''));
     throw e;
   }
   const size = A.abs(signed);

@@ -44,19 +44,32 @@ function whereOf(whereText: string | (() => string), suffix: string): string {
  * {@link bearingToAzimuth} naming `where` (+ `suffix`) in its errors; `where` may be a
  * function so that hot loops build the text only on error. @internal
  */
-export function readAzimuth<T>(A: Arithmetic<T, boolean>, bearing: Numeric<T>, whereText: string | (() => string), suffix = ''): T {
+export function readAzimuth<T>(
+  A: Arithmetic<T, boolean>,
+  bearing: Numeric<T>,
+  whereText: string | (() => string),
+  suffix = '',
+): T {
   let deg: T;
   try {
     deg = angleToDegrees(A, bearing);
   } catch (e) {
     if (e instanceof QuadspreadError && e.code !== 'INPUT_TOO_LONG') {
-      throw new QuadspreadError('INVALID_BEARING', whereOf(whereText, suffix), `${show(bearing)} is not a bearing (${e.message.replace(/^quadspread \w+: [^:]*: /, '')})`);
+      throw new QuadspreadError(
+        'INVALID_BEARING',
+        whereOf(whereText, suffix),
+        `${show(bearing)} is not a bearing (${e.message.replace(/^quadspread \w+: [^:]*: /, '')})`,
+      );
     }
     throw e;
   }
   const full = A.from(360);
   if (A.sign(deg) < 0 || A.cmp(deg, full) > 0) {
-    throw new QuadspreadError('INVALID_BEARING', whereOf(whereText, suffix), `${show(bearing)} is not an azimuth in [0°, 360°] (clockwise from north)`);
+    throw new QuadspreadError(
+      'INVALID_BEARING',
+      whereOf(whereText, suffix),
+      `${show(bearing)} is not an azimuth in [0°, 360°] (clockwise from north)`,
+    );
   }
   return A.eq(deg, full) ? A.zero : deg;
 }
@@ -81,7 +94,11 @@ export function readAzimuth<T>(A: Arithmetic<T, boolean>, bearing: Numeric<T>, w
  * //=> `N 45°00'00.0" W`
  * ```
  */
-export function azimuthToQuadrant<T>(A: Arithmetic<T, boolean>, azimuth: Numeric<T>, secondsDecimals = 1): string {
+export function azimuthToQuadrant<T>(
+  A: Arithmetic<T, boolean>,
+  azimuth: Numeric<T>,
+  secondsDecimals = 1,
+): string {
   const z = readAzimuth(A, azimuth, 'azimuthToQuadrant(A, azimuth)');
   const ninety = A.from(90);
   const half = A.from(180);

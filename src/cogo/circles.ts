@@ -4,7 +4,13 @@
  *
  * @module cogo
  */
-import { show, invalidArgument, coincidentPoints, noRealSolution, negativeQuadrance } from '../errors.js';
+import {
+  show,
+  invalidArgument,
+  coincidentPoints,
+  noRealSolution,
+  negativeQuadrance,
+} from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import type { Root } from '../geometry/surd.js';
@@ -20,9 +26,16 @@ export type CircleInput<T> =
   | { readonly center: PointInput<T>; readonly radius: Numeric<T> }
   | { readonly center: PointInput<T>; readonly quadrance: Numeric<T> };
 
-function readCircle<T>(A: Arithmetic<T, boolean>, c: unknown, where: string): { c: Point<T>; R: T } {
+function readCircle<T>(
+  A: Arithmetic<T, boolean>,
+  c: unknown,
+  where: string,
+): { c: Point<T>; R: T } {
   if (c === null || typeof c !== 'object' || !('center' in c)) {
-    throw invalidArgument(where, `${show(c)} is not a circle { center, radius } or { center, quadrance }`);
+    throw invalidArgument(
+      where,
+      `${show(c)} is not a circle { center, radius } or { center, quadrance }`,
+    );
   }
   const o = c as { center: unknown; radius?: Numeric<T>; quadrance?: Numeric<T> };
   const center = readPoint(A, o.center, `${where}.center`);
@@ -85,14 +98,19 @@ export function intersectLineCircle<T, E extends boolean>(
   // Quarter discriminant of (d·d)t² + 2(f·d)t + (f·f − R) = 0.
   let disc = A.sub(A.mul(h, h), A.mul(dd, A.sub(ff, R)));
   // In an inexact arithmetic a discriminant within rounding of zero is a tangent.
-  if (A.sign(disc) < 0 && A.cmp(A.neg(disc), A.mul(roundingSlack(A), A.add(A.mul(h, h), A.mul(dd, A.add(ff, R))))) <= 0) disc = A.zero;
+  if (
+    A.sign(disc) < 0 &&
+    A.cmp(A.neg(disc), A.mul(roundingSlack(A), A.add(A.mul(h, h), A.mul(dd, A.add(ff, R))))) <= 0
+  )
+    disc = A.zero;
   if (A.sign(disc) < 0) throw noRealSolution(where, 'the line misses the circle');
   const t0 = A.neg(A.div(h, dd));
   const ax = A.add(a.x, A.mul(t0, dx));
   const ay = A.add(a.y, A.mul(t0, dy));
   const kx = A.div(dx, dd);
   const ky = A.div(dy, dd);
-  if (A.isZero(disc)) return [{ x: rootOf(A, ax, A.zero, A.zero), y: rootOf(A, ay, A.zero, A.zero) }];
+  if (A.isZero(disc))
+    return [{ x: rootOf(A, ax, A.zero, A.zero), y: rootOf(A, ay, A.zero, A.zero) }];
   return [
     { x: rootOf(A, ax, A.neg(kx), disc), y: rootOf(A, ay, A.neg(ky), disc) },
     { x: rootOf(A, ax, kx, disc), y: rootOf(A, ay, ky, disc) },
@@ -135,12 +153,21 @@ export function intersectCircles<T, E extends boolean>(
   const dx = A.sub(c2.x, c1.x);
   const dy = A.sub(c2.y, c1.y);
   const D = A.add(A.mul(dx, dx), A.mul(dy, dy));
-  if (A.isZero(D)) throw coincidentPoints(where, 'the circles are concentric: they meet nowhere or everywhere');
+  if (A.isZero(D))
+    throw coincidentPoints(where, 'the circles are concentric: they meet nowhere or everywhere');
   const tau = A.div(A.add(A.sub(D, R2), R1), A.add(D, D));
   let k = A.sub(A.div(R1, D), A.mul(tau, tau));
   // In an inexact arithmetic a k within rounding of zero means the circles touch.
-  if (A.sign(k) < 0 && A.cmp(A.neg(k), A.mul(roundingSlack(A), A.add(A.div(R1, D), A.mul(tau, tau)))) <= 0) k = A.zero;
-  if (A.sign(k) < 0) throw noRealSolution(where, 'the circles do not meet (the distances are too short or too long for the centres)');
+  if (
+    A.sign(k) < 0 &&
+    A.cmp(A.neg(k), A.mul(roundingSlack(A), A.add(A.div(R1, D), A.mul(tau, tau)))) <= 0
+  )
+    k = A.zero;
+  if (A.sign(k) < 0)
+    throw noRealSolution(
+      where,
+      'the circles do not meet (the distances are too short or too long for the centres)',
+    );
   const bx = A.add(c1.x, A.mul(tau, dx));
   const by = A.add(c1.y, A.mul(tau, dy));
   if (A.isZero(k)) return [{ x: rootOf(A, bx, A.zero, A.zero), y: rootOf(A, by, A.zero, A.zero) }];

@@ -4,9 +4,24 @@ export type { AreaUnit, PolygonArea } from './area.js';
 export { intersectLines } from './intersect-lines.js';
 export { bearingToAzimuth, azimuthToQuadrant } from './bearing.js';
 export { traverse, angularMisclosure } from './traverse.js';
-export type { TraverseCourse, TraverseInput, TraverseClosure, Traverse, TraverseLeg, AngularMisclosure } from './traverse.js';
+export type {
+  TraverseCourse,
+  TraverseInput,
+  TraverseClosure,
+  Traverse,
+  TraverseLeg,
+  AngularMisclosure,
+} from './traverse.js';
 export { levelRun, allowableMisclosure, LEVELLING_ORDERS } from './levelling.js';
-export type { LevellingOrder, AllowableMisclosure, LevelSight, LevelRunInput, LevelRow, LevelCheck, LevelRun } from './levelling.js';
+export type {
+  LevellingOrder,
+  AllowableMisclosure,
+  LevelSight,
+  LevelRunInput,
+  LevelRow,
+  LevelCheck,
+  LevelRun,
+} from './levelling.js';
 export { inverse, forward } from './inverse.js';
 export type { Inverse } from './inverse.js';
 export { intersectBearings, BEARING_PARALLEL_TOLERANCE } from './intersect-bearings.js';

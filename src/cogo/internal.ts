@@ -43,7 +43,8 @@ export function sqrtValue<T>(A: Arithmetic<T, boolean>, q: T, where: string): T 
 /** Checks that an input is an array (not too long) and returns it. @internal */
 export function readArray<U>(x: unknown, where: string, max = 1_000_000): readonly U[] {
   if (!Array.isArray(x)) throw invalidArgument(where, `${show(x)} is not an array`);
-  if (x.length > max) throw inputTooLong(where, `${x.length} items is more than the limit of ${max}`);
+  if (x.length > max)
+    throw inputTooLong(where, `${x.length} items is more than the limit of ${max}`);
   return x as readonly U[];
 }
 

@@ -79,7 +79,11 @@ export function intersectBearings<T>(
   const den = A.sub(A.mul(a.sin, b.cos), A.mul(a.cos, b.sin));
   const parallel = A.exact ? A.isZero(den) : Math.abs(A.toNumber(den)) < BEARING_PARALLEL_TOLERANCE;
   if (parallel) {
-    throw new QuadspreadError('PARALLEL_LINES', where, `bearings ${show(bearingP)} and ${show(bearingQ)} are parallel: the rays do not meet at one point`);
+    throw new QuadspreadError(
+      'PARALLEL_LINES',
+      where,
+      `bearings ${show(bearingP)} and ${show(bearingQ)} are parallel: the rays do not meet at one point`,
+    );
   }
   const ex = A.sub(q.x, p.x);
   const ey = A.sub(q.y, p.y);
@@ -87,7 +91,14 @@ export function intersectBearings<T>(
   const s = A.div(A.sub(A.mul(ex, b.cos), A.mul(ey, b.sin)), den);
   const t = A.div(A.sub(A.mul(ex, a.cos), A.mul(ey, a.sin)), den);
   if (A.sign(s) < 0 || A.sign(t) < 0) {
-    throw noRealSolution(where, `the rays meet behind ${A.sign(s) < 0 ? 'P' : 'Q'} (distance ${A.toPrecision(A.sign(s) < 0 ? s : t, 6)}): check the bearings`);
+    throw noRealSolution(
+      where,
+      `the rays meet behind ${A.sign(s) < 0 ? 'P' : 'Q'} (distance ${A.toPrecision(A.sign(s) < 0 ? s : t, 6)}): check the bearings`,
+    );
   }
-  return { point: { x: A.add(p.x, A.mul(s, a.sin)), y: A.add(p.y, A.mul(s, a.cos)) }, distanceP: s, distanceQ: t };
+  return {
+    point: { x: A.add(p.x, A.mul(s, a.sin)), y: A.add(p.y, A.mul(s, a.cos)) },
+    distanceP: s,
+    distanceQ: t,
+  };
 }

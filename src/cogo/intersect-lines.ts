@@ -51,15 +51,25 @@ export function intersectLines<T>(
   const d2x = A.sub(d.x, c.x);
   const d2y = A.sub(d.y, c.y);
   if (A.isZero(d1x) && A.isZero(d1y)) {
-    throw coincidentPoints(where, `P1 and P2 are the same point (${A.toString(a.x)}, ${A.toString(a.y)}): they fix no line`);
+    throw coincidentPoints(
+      where,
+      `P1 and P2 are the same point (${A.toString(a.x)}, ${A.toString(a.y)}): they fix no line`,
+    );
   }
   if (A.isZero(d2x) && A.isZero(d2y)) {
-    throw coincidentPoints(where, `P3 and P4 are the same point (${A.toString(c.x)}, ${A.toString(c.y)}): they fix no line`);
+    throw coincidentPoints(
+      where,
+      `P3 and P4 are the same point (${A.toString(c.x)}, ${A.toString(c.y)}): they fix no line`,
+    );
   }
   // Cramer's rule: t = ((P3 − P1) × d2) / (d1 × d2), with u × v = uₓv_y − u_yvₓ.
   const den = A.sub(A.mul(d1x, d2y), A.mul(d1y, d2x));
   if (A.isZero(den)) {
-    throw new QuadspreadError('PARALLEL_LINES', where, 'line P1P2 and line P3P4 are parallel (or the same line): they have no single intersection');
+    throw new QuadspreadError(
+      'PARALLEL_LINES',
+      where,
+      'line P1P2 and line P3P4 are parallel (or the same line): they have no single intersection',
+    );
   }
   const ex = A.sub(c.x, a.x);
   const ey = A.sub(c.y, a.y);

@@ -67,7 +67,10 @@ export function inverse<T, E extends boolean>(
   const dx = A.sub(q.x, p.x);
   const dy = A.sub(q.y, p.y);
   if (A.isZero(dx) && A.isZero(dy)) {
-    throw coincidentPoints(where, `P and Q are the same point (${A.toString(p.x)}, ${A.toString(p.y)}): no bearing`);
+    throw coincidentPoints(
+      where,
+      `P and Q are the same point (${A.toString(p.x)}, ${A.toString(p.y)}): no bearing`,
+    );
   }
   const quadrance = A.add(A.mul(dx, dx), A.mul(dy, dy));
   const azimuth = azimuthOf(A, dx, dy);
@@ -124,7 +127,12 @@ export function azimuthOf<T>(A: Arithmetic<T, boolean>, dx: T, dy: T): T {
  * //=> ['105', '191.339745962']
  * ```
  */
-export function forward<T>(A: Arithmetic<T, boolean>, P: PointInput<T>, bearing: Numeric<T>, distance: Numeric<T>): Point<T> {
+export function forward<T>(
+  A: Arithmetic<T, boolean>,
+  P: PointInput<T>,
+  bearing: Numeric<T>,
+  distance: Numeric<T>,
+): Point<T> {
   const where = 'forward(A, P, bearing, distance)';
   const p = readPoint(A, P, `${where} P`);
   const az = readAzimuth(A, bearing, `${where} bearing`);
@@ -132,5 +140,8 @@ export function forward<T>(A: Arithmetic<T, boolean>, P: PointInput<T>, bearing:
   if (A.sign(d) < 0) throw invalidArgument(`${where} distance`, `${A.toString(d)} is negative`);
   const { sin, cos } = sinCosDegrees(A, az);
   // Departure d·sin(azimuth), latitude d·cos(azimuth).
-  return { x: finiteResult(A.add(p.x, A.mul(d, sin)), where), y: finiteResult(A.add(p.y, A.mul(d, cos)), where) };
+  return {
+    x: finiteResult(A.add(p.x, A.mul(d, sin)), where),
+    y: finiteResult(A.add(p.y, A.mul(d, cos)), where),
+  };
 }

@@ -55,7 +55,10 @@ function readC<T>(A: Arithmetic<T, boolean>, order: LevellingOrder | Numeric<T>,
     return A.from(LEVELLING_ORDERS[order as LevellingOrder].c);
   }
   if (typeof order === 'string' && !/^[\s\d.+eE/-]+$/.test(order)) {
-    throw invalidArgument(where, `${show(order)} is not a levelling order (${Object.keys(LEVELLING_ORDERS).join(', ')}) or a constant c in mm`);
+    throw invalidArgument(
+      where,
+      `${show(order)} is not a levelling order (${Object.keys(LEVELLING_ORDERS).join(', ')}) or a constant c in mm`,
+    );
   }
   const c = readNumber(A, order, where);
   if (A.sign(c) <= 0) throw invalidArgument(where, `c = ${A.toString(c)} mm is not positive`);
@@ -82,7 +85,11 @@ function readC<T>(A: Arithmetic<T, boolean>, order: LevellingOrder | Numeric<T>,
  * //=> '6√2'
  * ```
  */
-export function allowableMisclosure<T, E extends boolean>(A: Arithmetic<T, E>, order: LevellingOrder | Numeric<T>, km: Numeric<T>): AllowableMisclosure<T, E> {
+export function allowableMisclosure<T, E extends boolean>(
+  A: Arithmetic<T, E>,
+  order: LevellingOrder | Numeric<T>,
+  km: Numeric<T>,
+): AllowableMisclosure<T, E> {
   const where = 'allowableMisclosure(A, order, km)';
   const c = readC(A, order, `${where} order`);
   const K = readNumber(A, km, where, ' km');
@@ -176,7 +183,11 @@ export interface LevelRun<T, E extends boolean> {
   readonly distributedBy: 'distance' | 'setups';
 }
 
-function readOpt<T>(A: Arithmetic<T, boolean>, v: Numeric<T> | undefined, where: string): T | undefined {
+function readOpt<T>(
+  A: Arithmetic<T, boolean>,
+  v: Numeric<T> | undefined,
+  where: string,
+): T | undefined {
   return v === undefined ? undefined : readNumber(A, v, where);
 }
 
@@ -215,11 +226,19 @@ function readOpt<T>(A: Arithmetic<T, boolean>, v: Numeric<T> | undefined, where:
  * //=> ['10051/100', '1/100', '201/2']
  * ```
  */
-export function levelRun<T, E extends boolean>(A: Arithmetic<T, E>, input: LevelRunInput<T>): LevelRun<T, E> {
+export function levelRun<T, E extends boolean>(
+  A: Arithmetic<T, E>,
+  input: LevelRunInput<T>,
+): LevelRun<T, E> {
   const where = 'levelRun(A, input)';
   expectObject(input, where, '{ start, sights }');
   const list = readArray<LevelSight<T>>(input.sights, `${where} sights`);
-  if (list.length < 2) throw new QuadspreadError('TOO_FEW_POINTS', `${where} sights`, `a run needs at least 2 rows (a backsight and a foresight), got ${list.length}`);
+  if (list.length < 2)
+    throw new QuadspreadError(
+      'TOO_FEW_POINTS',
+      `${where} sights`,
+      `a run needs at least 2 rows (a backsight and a foresight), got ${list.length}`,
+    );
   const unit = checkLengthUnit(input.unit ?? 'm', `${where} unit`);
   const start = readNumber(A, input.start, where, ' start');
   const n = list.length;
@@ -238,16 +257,28 @@ export function levelRun<T, E extends boolean>(A: Arithmetic<T, E>, input: Level
     fs[i] = readOpt(A, r.fs, `${at}.fs`);
     dist[i] = readOpt(A, r.distance, `${at}.distance`);
     const d = dist[i];
-    if (d !== undefined && A.sign(d) < 0) throw invalidArgument(`${at}.distance`, `${A.toString(d)} is negative`);
+    if (d !== undefined && A.sign(d) < 0)
+      throw invalidArgument(`${at}.distance`, `${A.toString(d)} is negative`);
     if (i > 0 && d === undefined) allDistances = false;
     if (i === 0) {
-      if (bs[i] === undefined || is[i] !== undefined || fs[i] !== undefined) throw invalidArgument(at, 'the first row must be a backsight alone (on the starting bench mark)');
+      if (bs[i] === undefined || is[i] !== undefined || fs[i] !== undefined)
+        throw invalidArgument(
+          at,
+          'the first row must be a backsight alone (on the starting bench mark)',
+        );
       continue;
     }
-    if (is[i] !== undefined && fs[i] !== undefined) throw invalidArgument(at, 'a row has an intermediate sight or a foresight, not both');
-    if (is[i] === undefined && fs[i] === undefined) throw invalidArgument(at, 'a row after the first needs an intermediate sight or a foresight');
-    if (bs[i] !== undefined && fs[i] === undefined) throw invalidArgument(at, 'a backsight after the first row belongs on a change point, with its foresight');
-    if (i === n - 1 && (fs[i] === undefined || bs[i] !== undefined)) throw invalidArgument(at, 'the last row must be a foresight alone');
+    if (is[i] !== undefined && fs[i] !== undefined)
+      throw invalidArgument(at, 'a row has an intermediate sight or a foresight, not both');
+    if (is[i] === undefined && fs[i] === undefined)
+      throw invalidArgument(at, 'a row after the first needs an intermediate sight or a foresight');
+    if (bs[i] !== undefined && fs[i] === undefined)
+      throw invalidArgument(
+        at,
+        'a backsight after the first row belongs on a change point, with its foresight',
+      );
+    if (i === n - 1 && (fs[i] === undefined || bs[i] !== undefined))
+      throw invalidArgument(at, 'the last row must be a foresight alone');
   }
 
   // Reduction. Rise-and-fall and height of instrument, side by side (e.g. Uren & Price,
@@ -321,7 +352,9 @@ export function levelRun<T, E extends boolean>(A: Arithmetic<T, E>, input: Level
     difference,
     riseFallOk: close(bsMinusFs, A.sub(sumRise, sumFall)) && close(bsMinusFs, difference),
     heightOfInstrumentOk:
-      levelsAgree && close(sumHiUses, A.add(A.add(sumIS, sumFS), sumLevelsAfterFirst)) && close(A.sub(levelHI[n - 1]!, start), bsMinusFs),
+      levelsAgree &&
+      close(sumHiUses, A.add(A.add(sumIS, sumFS), sumLevelsAfterFirst)) &&
+      close(A.sub(levelHI[n - 1]!, start), bsMinusFs),
   };
 
   // Misclosure and its distribution.
@@ -339,7 +372,8 @@ export function levelRun<T, E extends boolean>(A: Arithmetic<T, E>, input: Level
       weight[i] = totalDistance;
     }
   }
-  const distributedBy: 'distance' | 'setups' = allDistances && !A.isZero(totalDistance) ? 'distance' : 'setups';
+  const distributedBy: 'distance' | 'setups' =
+    allDistances && !A.isZero(totalDistance) ? 'distance' : 'setups';
   let totalWeight = totalDistance;
   if (distributedBy === 'setups') {
     for (let i = 0; i < n; i++) weight[i] = A.from(setup[i]!);
@@ -349,21 +383,32 @@ export function levelRun<T, E extends boolean>(A: Arithmetic<T, E>, input: Level
     misclosure = A.sub(last, readNumber(A, input.close, where, ' close'));
     misclosureMm = A.mul(A.mul(misclosure, toMetres), A.from(1000));
   } else if (input.order !== undefined) {
-    throw invalidArgument(`${where} order`, 'an allowable misclosure needs the known closing level `close`');
+    throw invalidArgument(
+      `${where} order`,
+      'an allowable misclosure needs the known closing level `close`',
+    );
   }
   if (input.order !== undefined && misclosureMm !== undefined) {
     let km: T;
     if (input.km !== undefined) km = readNumber(A, input.km, where, ' km');
     else if (allDistances) km = A.div(A.mul(totalDistance, toMetres), A.from(1000));
-    else throw invalidArgument(`${where} km`, 'give the section length km, or a distance on every row after the first');
+    else
+      throw invalidArgument(
+        `${where} km`,
+        'give the section length km, or a distance on every row after the first',
+      );
     allowable = allowableMisclosure(A, input.order, km);
     // |m| ≤ c·√K  ⇔  m² ≤ c²·K (both sides non-negative): exact in rational.
-    withinAllowable = A.cmp(A.mul(misclosureMm, misclosureMm), A.mul(A.mul(allowable.c, allowable.c), km)) <= 0;
+    withinAllowable =
+      A.cmp(A.mul(misclosureMm, misclosureMm), A.mul(A.mul(allowable.c, allowable.c), km)) <= 0;
   }
 
   const rows = new Array<LevelRow<T>>(n);
   for (let i = 0; i < n; i++) {
-    const correction = misclosure === undefined || A.isZero(misclosure) ? A.zero : A.neg(A.div(A.mul(misclosure, weight[i]!), totalWeight));
+    const correction =
+      misclosure === undefined || A.isZero(misclosure)
+        ? A.zero
+        : A.neg(A.div(A.mul(misclosure, weight[i]!), totalWeight));
     rows[i] = {
       station: list[i]!.station,
       bs: bs[i],

@@ -3,7 +3,14 @@
  *
  * @module cogo
  */
-import { QuadspreadError, show, invalidArgument, invalidAngle, coincidentPoints, noRealSolution } from '../errors.js';
+import {
+  QuadspreadError,
+  show,
+  invalidArgument,
+  invalidAngle,
+  coincidentPoints,
+  noRealSolution,
+} from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { angleToDegrees } from '../readings/angle.js';
@@ -103,26 +110,42 @@ export function resection<T>(A: Arithmetic<T, boolean>, input: ResectionInput<T>
   const where = 'resection(A, { control, angles })';
   expectObject(input, where, '{ control, angles }');
   const ctl = readArray<PointInput<T>>(input.control, `${where} control`);
-  if (ctl.length !== 3) throw invalidArgument(`${where} control`, `three control points are needed, got ${ctl.length}`);
+  if (ctl.length !== 3)
+    throw invalidArgument(`${where} control`, `three control points are needed, got ${ctl.length}`);
   const ang = readArray<Numeric<T>>(input.angles, `${where} angles`);
-  if (ang.length !== 2) throw invalidArgument(`${where} angles`, `two angles [a12, a23] are needed, got ${ang.length}`);
-  const P = ctl.map((p, i) => readPoint(A, p, `${where} control[${i}]`)) as [Point<T>, Point<T>, Point<T>];
+  if (ang.length !== 2)
+    throw invalidArgument(`${where} angles`, `two angles [a12, a23] are needed, got ${ang.length}`);
+  const P = ctl.map((p, i) => readPoint(A, p, `${where} control[${i}]`)) as [
+    Point<T>,
+    Point<T>,
+    Point<T>,
+  ];
   const full = A.from(360);
   const readAngle = (a: Numeric<T>, name: string): T => {
     const d = angleToDegrees(A, a);
-    if (A.sign(d) < 0 || A.cmp(d, full) >= 0) throw invalidAngle(`${where} ${name}`, `${show(a)} is not a clockwise angle in [0°, 360°)`);
+    if (A.sign(d) < 0 || A.cmp(d, full) >= 0)
+      throw invalidAngle(`${where} ${name}`, `${show(a)} is not a clockwise angle in [0°, 360°)`);
     return d;
   };
   const a12 = readAngle(ang[0]!, 'angles[0] (a12)');
   const a23 = readAngle(ang[1]!, 'angles[1] (a23)');
-  const tol = readNumber(A, input.dangerTolerance ?? DANGER_CIRCLE_TOLERANCE, where, ' dangerTolerance');
-  if (A.sign(tol) < 0) throw invalidArgument(`${where} dangerTolerance`, `${A.toString(tol)} is negative`);
+  const tol = readNumber(
+    A,
+    input.dangerTolerance ?? DANGER_CIRCLE_TOLERANCE,
+    where,
+    ' dangerTolerance',
+  );
+  if (A.sign(tol) < 0)
+    throw invalidArgument(`${where} dangerTolerance`, `${A.toString(tol)} is negative`);
 
   for (let i = 0; i < 3; i++) {
     const p = P[i]!;
     const q = P[(i + 1) % 3]!;
     if (A.eq(p.x, q.x) && A.eq(p.y, q.y)) {
-      throw coincidentPoints(`${where} control`, `control[${i}] and control[${(i + 1) % 3}] are the same point`);
+      throw coincidentPoints(
+        `${where} control`,
+        `control[${i}] and control[${(i + 1) % 3}] are the same point`,
+      );
     }
   }
   // Cotangent of the clockwise angle at V from the direction to U to the direction to W:
@@ -133,13 +156,22 @@ export function resection<T>(A: Arithmetic<T, boolean>, input: ResectionInput<T>
     const wx = A.sub(W.x, V.x);
     const wy = A.sub(W.y, V.y);
     const cross = A.sub(A.mul(ux, wy), A.mul(uy, wx));
-    if (A.isZero(cross)) throw new QuadspreadError('COLLINEAR_POINTS', `${where} control`, 'the three control points are collinear: no circle passes through them');
+    if (A.isZero(cross))
+      throw new QuadspreadError(
+        'COLLINEAR_POINTS',
+        `${where} control`,
+        'the three control points are collinear: no circle passes through them',
+      );
     return A.div(A.add(A.mul(ux, wx), A.mul(uy, wy)), A.neg(cross));
   };
   const [P1, P2, P3] = P;
   const cot = [cotAt(P1, P2, P3), cotAt(P2, P3, P1), cotAt(P3, P1, P2)];
   // Observed angles subtending the side opposite each control point.
-  const obs = [sinCosDegrees(A, a23), sinCosDegrees(A, A.neg(A.add(a12, a23))), sinCosDegrees(A, a12)];
+  const obs = [
+    sinCosDegrees(A, a23),
+    sinCosDegrees(A, A.neg(A.add(a12, a23))),
+    sinCosDegrees(A, a12),
+  ];
   // Tienstra: Kᵢ = 1/(cot Aᵢ − cot αᵢ) = sin αᵢ / (cot Aᵢ·sin αᵢ − cos αᵢ). Clearing the
   // denominators Dᵢ, the weights wᵢ = sin αᵢ·Dⱼ·Dₖ give S = Σ wᵢPᵢ / Σ wᵢ.
   const D = obs.map((o, i) => A.sub(A.mul(cot[i]!, o.sin), o.cos));
@@ -180,7 +212,8 @@ export function resection<T>(A: Arithmetic<T, boolean>, input: ResectionInput<T>
   const ex = A.sub(sx, center.x);
   const ey = A.sub(sy, center.y);
   const dangerRatio = A.div(A.abs(A.sub(A.add(A.mul(ex, ex), A.mul(ey, ey)), R2)), R2);
-  if (A.cmp(dangerRatio, tol) < 0 || (A.isZero(tol) && A.isZero(dangerRatio))) refuse(A.toNumber(dangerRatio).toPrecision(3));
+  if (A.cmp(dangerRatio, tol) < 0 || (A.isZero(tol) && A.isZero(dangerRatio)))
+    refuse(A.toNumber(dangerRatio).toPrecision(3));
   // Tienstra's weights use cotangents, which cannot tell an angle from the angle + 180°: the
   // point found sees the control points at the observed angles or at those angles ± 180°.
   // Check each observed clockwise angle a against the one the station really sees, through
@@ -196,7 +229,8 @@ export function resection<T>(A: Arithmetic<T, boolean>, input: ResectionInput<T>
     return A.sign(A.sub(A.mul(dot, o.cos), A.mul(cross, o.sin))) >= 0;
   };
   if (!seenAgrees(P1, P2, obs[2]!) || !seenAgrees(P2, P3, obs[0]!)) {
-    throw noRealSolution(where,
+    throw noRealSolution(
+      where,
       `no station sees the control points at the clockwise angles a12 = ${show(ang[0])} and a23 = ${show(ang[1])}: the only candidate sees them about 180° apart from one of these (check the angles, the order of the control points and that the angles were turned clockwise)`,
     );
   }

@@ -44,7 +44,12 @@ export function traverseFloat(
   let sumAbsDep = 0;
   const transit = rule === 'transit';
   for (let i = 0; i < n; i++) {
-    const c = list[i] as { bearing?: unknown; distance?: unknown; latitude?: unknown; departure?: unknown } | null;
+    const c = list[i] as {
+      bearing?: unknown;
+      distance?: unknown;
+      latitude?: unknown;
+      departure?: unknown;
+    } | null;
     if (c === null || typeof c !== 'object') return undefined;
     let la: number;
     let de: number;
@@ -103,7 +108,8 @@ export function traverseFloat(
   }
   // float.div refuses a quotient that is not finite (NOT_FINITE); leave such data (a
   // misclosure over a subnormal length) to the generic path, which reports it.
-  if (kLat - kLat !== 0 || kDep - kDep !== 0 || (ratio !== undefined && ratio - ratio !== 0)) return undefined;
+  if (kLat - kLat !== 0 || kDep - kDep !== 0 || (ratio !== undefined && ratio - ratio !== 0))
+    return undefined;
   const adjusted = new Array<Point<number>>(n + 1);
   const legs = new Array<TraverseLeg<number>>(n);
   adjusted[0] = start;
@@ -117,7 +123,20 @@ export function traverseFloat(
     ax = ax + adjDep;
     ay = ay + adjLat;
     adjusted[i + 1] = { x: ax, y: ay };
-    legs[i] = { latitude: la, departure: de, length: len[i]!, adjustedLatitude: adjLat, adjustedDeparture: adjDep };
+    legs[i] = {
+      latitude: la,
+      departure: de,
+      length: len[i]!,
+      adjustedLatitude: adjLat,
+      adjustedDeparture: adjDep,
+    };
   }
-  return { closure: { east, north, linear, ratio }, length: total, points, adjusted, courses: legs, rule };
+  return {
+    closure: { east, north, linear, ratio },
+    length: total,
+    points,
+    adjusted,
+    courses: legs,
+    rule,
+  };
 }

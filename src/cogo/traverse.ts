@@ -30,7 +30,11 @@ import type { PointInput } from './internal.js';
  */
 export type TraverseCourse<T> =
   | { readonly bearing: Numeric<T>; readonly distance: Numeric<T> }
-  | { readonly latitude: Numeric<T>; readonly departure: Numeric<T>; readonly distance?: Numeric<T> };
+  | {
+      readonly latitude: Numeric<T>;
+      readonly departure: Numeric<T>;
+      readonly distance?: Numeric<T>;
+    };
 
 /** Input of {@link traverse}. */
 export interface TraverseInput<T> {
@@ -131,10 +135,18 @@ function courseLength<T>(A: Arithmetic<T, boolean>, la: T, de: T, at: () => stri
  * //=> '1/600'
  * ```
  */
-export function angularMisclosure<T>(A: Arithmetic<T, boolean>, angles: readonly Numeric<T>[]): AngularMisclosure<T> {
+export function angularMisclosure<T>(
+  A: Arithmetic<T, boolean>,
+  angles: readonly Numeric<T>[],
+): AngularMisclosure<T> {
   const where = 'angularMisclosure(A, angles)';
   const list = readArray<Numeric<T>>(angles, where);
-  if (list.length < 3) throw new QuadspreadError('TOO_FEW_POINTS', where, `a closed loop has at least 3 angles, got ${list.length}`);
+  if (list.length < 3)
+    throw new QuadspreadError(
+      'TOO_FEW_POINTS',
+      where,
+      `a closed loop has at least 3 angles, got ${list.length}`,
+    );
   let sum = A.zero;
   for (const a of list) sum = A.add(sum, angleToDegrees(A, a));
   // Interior angles of a simple n-gon sum to (n − 2)·180° (Euclid I.32, corollary).
@@ -183,7 +195,10 @@ export function angularMisclosure<T>(A: Arithmetic<T, boolean>, angles: readonly
  * //=> ['-1/100', '0', '0']
  * ```
  */
-export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: TraverseInput<T>): Traverse<T, E> {
+export function traverse<T, E extends boolean>(
+  A: Arithmetic<T, E>,
+  input: TraverseInput<T>,
+): Traverse<T, E> {
   const where = 'traverse(A, input)';
   // Performance (docs/performance.md): the arithmetic's fused kernel, where it has one
   // (rational: courses as latitude/departure/distance, compass rule), gives the same points and
@@ -195,7 +210,14 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
     const q = A.add(A.mul(east, east), A.mul(north, north));
     const ratio = A.isZero(q) ? undefined : A.div(fused.length, sqrtValue(A, q, where));
     const { points, adjusted, courses, rule, length } = fused;
-    return { closure: { east, north, linear: sqrtOf(A, A.isZero(q) ? A.zero : q), ratio }, length, points, adjusted, courses, rule };
+    return {
+      closure: { east, north, linear: sqrtOf(A, A.isZero(q) ? A.zero : q), ratio },
+      length,
+      points,
+      adjusted,
+      courses,
+      rule,
+    };
   }
   if (input === null || typeof input !== 'object') {
     throw invalidArgument(where, `${show(input)} is not { start, courses, close? }`);
@@ -206,16 +228,20 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
   if (rule !== 'compass' && rule !== 'transit') {
     throw invalidArgument(`${where} rule`, `${show(rule)} is not 'compass' or 'transit'`);
   }
-  if (input.courses === undefined) throw new QuadspreadError('NO_COURSES', `${where} courses`, 'no courses were given');
+  if (input.courses === undefined)
+    throw new QuadspreadError('NO_COURSES', `${where} courses`, 'no courses were given');
   const list = readArray<TraverseCourse<T>>(input.courses, `${where} courses`);
   const n = list.length;
-  if (n === 0) throw new QuadspreadError('NO_COURSES', `${where} courses`, 'the traverse has no courses');
+  if (n === 0)
+    throw new QuadspreadError('NO_COURSES', `${where} courses`, 'the traverse has no courses');
   if ((A as unknown) === float) {
     // The float twin (same operations, same order) keeps this loop fast in any process.
     const fast = traverseFloat(start as Point<number>, end as Point<number>, rule, list);
     if (fast !== undefined) {
       const r = fast as unknown as Traverse<T, E>;
-      return input.interiorAngles !== undefined ? { ...r, angular: angularMisclosure(A, input.interiorAngles) } : r;
+      return input.interiorAngles !== undefined
+        ? { ...r, angular: angularMisclosure(A, input.interiorAngles) }
+        : r;
     }
   }
 
@@ -238,7 +264,8 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
     let de: T;
     let d: T;
     if (c.bearing !== undefined) {
-      if (c.distance === undefined) throw invalidArgument(at(), 'a course with a bearing needs a distance');
+      if (c.distance === undefined)
+        throw invalidArgument(at(), 'a course with a bearing needs a distance');
       d = readNumber(A, c.distance, at, '.distance');
       const az = readAzimuth(A, c.bearing, at, '.bearing');
       // Latitude = d·cos(azimuth), departure = d·sin(azimuth) (azimuth clockwise from north),
@@ -250,7 +277,10 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
       la = readNumber(A, c.latitude, at, '.latitude');
       de = readNumber(A, c.departure, at, '.departure');
       // Course length by Pythagoras unless given.
-      d = c.distance !== undefined ? readNumber(A, c.distance, at, '.distance') : courseLength(A, la, de, at);
+      d =
+        c.distance !== undefined
+          ? readNumber(A, c.distance, at, '.distance')
+          : courseLength(A, la, de, at);
     } else {
       throw invalidArgument(at(), 'a course is { bearing, distance } or { latitude, departure }');
     }
@@ -283,7 +313,11 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
   let kDep: T;
   if (rule === 'compass') {
     if (A.isZero(total)) {
-      if (!A.isZero(q)) throw invalidArgument(where, 'the courses have zero total length: the compass rule cannot distribute a misclosure');
+      if (!A.isZero(q))
+        throw invalidArgument(
+          where,
+          'the courses have zero total length: the compass rule cannot distribute a misclosure',
+        );
       kLat = A.zero;
       kDep = A.zero;
     } else {
@@ -291,8 +325,16 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
       kDep = A.div(A.neg(east), total);
     }
   } else {
-    if (A.isZero(sumAbsLat) && !A.isZero(north)) throw invalidArgument(where, 'every latitude is zero: the transit rule cannot distribute the north misclosure');
-    if (A.isZero(sumAbsDep) && !A.isZero(east)) throw invalidArgument(where, 'every departure is zero: the transit rule cannot distribute the east misclosure');
+    if (A.isZero(sumAbsLat) && !A.isZero(north))
+      throw invalidArgument(
+        where,
+        'every latitude is zero: the transit rule cannot distribute the north misclosure',
+      );
+    if (A.isZero(sumAbsDep) && !A.isZero(east))
+      throw invalidArgument(
+        where,
+        'every departure is zero: the transit rule cannot distribute the east misclosure',
+      );
     kLat = A.isZero(sumAbsLat) ? A.zero : A.div(A.neg(north), sumAbsLat);
     kDep = A.isZero(sumAbsDep) ? A.zero : A.div(A.neg(east), sumAbsDep);
   }
@@ -312,7 +354,13 @@ export function traverse<T, E extends boolean>(A: Arithmetic<T, E>, input: Trave
     ax = A.add(ax, adjDep);
     ay = A.add(ay, adjLat);
     adjusted[i + 1] = { x: ax, y: ay };
-    legs[i] = { latitude: la, departure: de, length: len[i]!, adjustedLatitude: adjLat, adjustedDeparture: adjDep };
+    legs[i] = {
+      latitude: la,
+      departure: de,
+      length: len[i]!,
+      adjustedLatitude: adjLat,
+      adjustedDeparture: adjDep,
+    };
   }
 
   const result: Traverse<T, E> = {

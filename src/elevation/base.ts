@@ -4,7 +4,15 @@
  *
  * @module elevation
  */
-import { QuadspreadError, show, coincidentPoints, invalidArgument, invalidAngle, verticalSight, inconsistentReadings } from '../errors.js';
+import {
+  QuadspreadError,
+  show,
+  coincidentPoints,
+  invalidArgument,
+  invalidAngle,
+  verticalSight,
+  inconsistentReadings,
+} from '../errors.js';
 import { checkObject, PLUMB_SIGHT } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Root } from '../geometry/surd.js';
@@ -95,7 +103,8 @@ export function heightFromBase<T, E extends boolean>(
   checkObject(input, w);
   const R = rootOps(A);
   const base = readQuadrance(A, input.base, w, 'base');
-  if (A.isZero(base)) throw coincidentPoints(`${w}.base`, 'the base is zero: the stations coincide');
+  if (A.isZero(base))
+    throw coincidentPoints(`${w}.base`, 'the base is zero: the stations coincide');
   let s1: T;
   let s2: T;
   let side: FootSide;
@@ -103,26 +112,44 @@ export function heightFromBase<T, E extends boolean>(
     throw invalidArgument(w, 'give either spreads (with foot) or angles, not both or neither');
   }
   if (input.angles !== undefined) {
-    if (input.foot !== undefined) throw invalidArgument(`${w}.foot`, 'angles already fix the side of the foot; leave foot out');
+    if (input.foot !== undefined)
+      throw invalidArgument(`${w}.foot`, 'angles already fix the side of the foot; leave foot out');
     const a = input.angles.map((x, i) => {
       const d = angleToDegrees(A, x);
-      if (A.sign(d) <= 0 || A.cmp(d, A.from(180)) >= 0) throw invalidAngle(`${w}.angles[${i}]`, `${shownInput(A, x, d)} is not an interior angle in (0°, 180°)`);
+      if (A.sign(d) <= 0 || A.cmp(d, A.from(180)) >= 0)
+        throw invalidAngle(
+          `${w}.angles[${i}]`,
+          `${shownInput(A, x, d)} is not an interior angle in (0°, 180°)`,
+        );
       return d;
     });
-    if (A.cmp(A.add(a[0]!, a[1]!), A.from(180)) >= 0) throw new QuadspreadError('DEGENERATE_TRIANGLE', `${w}.angles`, 'the two interior angles sum to 180° or more: the sights do not meet');
+    if (A.cmp(A.add(a[0]!, a[1]!), A.from(180)) >= 0)
+      throw new QuadspreadError(
+        'DEGENERATE_TRIANGLE',
+        `${w}.angles`,
+        'the two interior angles sum to 180° or more: the sights do not meet',
+      );
     s1 = spreadFromDegrees(A, a[0]!);
     s2 = spreadFromDegrees(A, a[1]!);
     const ninety = A.from(90);
     side = A.cmp(a[0]!, ninety) > 0 || A.cmp(a[1]!, ninety) > 0 ? 'beyond' : 'between';
   } else {
     if (input.foot !== 'between' && input.foot !== 'beyond') {
-      throw invalidArgument(`${w}.foot`, `${show(input.foot)} is not 'between' or 'beyond': spreads alone allow two triangles, say which`);
+      throw invalidArgument(
+        `${w}.foot`,
+        `${show(input.foot)} is not 'between' or 'beyond': spreads alone allow two triangles, say which`,
+      );
     }
     side = input.foot;
     s1 = readSpread(A, input.spreads![0], w, 'spreads[0]');
     s2 = readSpread(A, input.spreads![1], w, 'spreads[1]');
   }
-  if (A.isZero(s1) || A.isZero(s2)) throw new QuadspreadError('COLLINEAR_POINTS', `${w}.spreads`, 'a spread of 0 puts the foot on the base line');
+  if (A.isZero(s1) || A.isZero(s2))
+    throw new QuadspreadError(
+      'COLLINEAR_POINTS',
+      `${w}.spreads`,
+      'a spread of 0 puts the foot on the base line',
+    );
   const one = A.one;
   // Geometry's triangle solver with the base Q3 and the spreads s1, s2 at its ends: the triple
   // spread formula gives s3 = p ± 2√(s1 s2 (1 − s1)(1 − s2)), p = s1 + s2 − 2 s1 s2, and the
@@ -132,27 +159,42 @@ export function heightFromBase<T, E extends boolean>(
     const above = R.sign(R.sub(t.s3, p));
     return side === 'between' ? above >= 0 : above <= 0;
   });
-  if (found === undefined) throw new QuadspreadError('DEGENERATE_TRIANGLE', `${w}.spreads`, `with foot '${side}' the spreads ${A.toString(s1)} and ${A.toString(s2)} give no triangle (spread 0 at the foot)`);
+  if (found === undefined)
+    throw new QuadspreadError(
+      'DEGENERATE_TRIANGLE',
+      `${w}.spreads`,
+      `with foot '${side}' the spreads ${A.toString(s1)} and ${A.toString(s2)} give no triangle (spread 0 at the foot)`,
+    );
   const s3 = found.s3;
   const Q1 = found.Q2; // Q(station 1, foot) is opposite station 2
   const Q2 = found.Q1;
   const v = input.vertical ?? [undefined, undefined];
-  const readings = [0, 1].map((i) => (v[i] === undefined ? undefined : readVertical(A, v[i]!, `${w}.vertical[${i}]`)));
-  if (readings[0] === undefined && readings[1] === undefined) throw invalidArgument(`${w}.vertical`, 'give at least one vertical reading');
+  const readings = [0, 1].map((i) =>
+    v[i] === undefined ? undefined : readVertical(A, v[i]!, `${w}.vertical[${i}]`),
+  );
+  if (readings[0] === undefined && readings[1] === undefined)
+    throw invalidArgument(`${w}.vertical`, 'give at least one vertical reading');
   const heights: (typeof Q1 | undefined)[] = [];
   const weights: T[] = [];
   const Qs = [Q1, Q2];
   const ss = [s1, s2];
   for (let i = 0; i < 2; i++) {
     const r = readings[i];
-    if (r === undefined) { heights.push(undefined); continue; }
+    if (r === undefined) {
+      heights.push(undefined);
+      continue;
+    }
     const c = A.sub(one, r.spread);
     if (A.isZero(c)) throw verticalSight(`${w}.vertical[${i}]`, PLUMB_SIGHT);
     heights.push(R.mul(Qs[i]!, A.div(r.spread, c))); // H = Q·R/(1 − R)
     weights.push(A.mul(A.mul(c, c), ss[i]!));
   }
   const sg = readings.map((r) => (r === undefined ? 0 : r.sign));
-  if (sg[0]! * sg[1]! < 0) throw inconsistentReadings(`${w}.vertical`, 'one reading is above the horizon and the other below');
+  if (sg[0]! * sg[1]! < 0)
+    throw inconsistentReadings(
+      `${w}.vertical`,
+      'one reading is above the horizon and the other below',
+    );
   let H: typeof Q1;
   let discrepancy: typeof Q1 | undefined;
   if (heights[0] !== undefined && heights[1] !== undefined) {
@@ -164,5 +206,12 @@ export function heightFromBase<T, E extends boolean>(
     discrepancy = undefined;
   }
   const sign = (sg[0] !== 0 ? sg[0] : sg[1]) as -1 | 0 | 1;
-  return { horizontal: [Q1, Q2], spreadAtFoot: s3, heights: [heights[0], heights[1]], H, discrepancy, sign: R.sign(H) === 0 ? 0 : sign };
+  return {
+    horizontal: [Q1, Q2],
+    spreadAtFoot: s3,
+    heights: [heights[0], heights[1]],
+    H,
+    discrepancy,
+    sign: R.sign(H) === 0 ? 0 : sign,
+  };
 }

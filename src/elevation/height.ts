@@ -3,7 +3,13 @@
  *
  * @module elevation
  */
-import { show, verticalSight, invalidArgument, inconsistentReadings, coincidentPoints } from '../errors.js';
+import {
+  show,
+  verticalSight,
+  invalidArgument,
+  inconsistentReadings,
+  coincidentPoints,
+} from '../errors.js';
 import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readQuadrance } from '../geometry/validate.js';
@@ -34,13 +40,20 @@ import { readVertical, type VerticalInput } from '../readings/vertical.js';
  * //=> '225/4'
  * ```
  */
-export function heightFromReading<T>(A: Arithmetic<T>, input: { horizontal: Numeric<T>; vertical: VerticalInput<T> }): T {
+export function heightFromReading<T>(
+  A: Arithmetic<T>,
+  input: { horizontal: Numeric<T>; vertical: VerticalInput<T> },
+): T {
   checkObject(input, 'heightFromReading(input)');
   const w = 'heightFromReading(input.vertical)';
   const Q = readQuadrance(A, input.horizontal, 'heightFromReading(input)', 'horizontal');
   const R = readVertical(A, input.vertical, w).spread;
   const c = A.sub(A.one, R);
-  if (A.isZero(c)) throw verticalSight(w, `a vertical spread of 1 is a plumb sight: it meets no point at horizontal quadrance ${show(A.toString(Q))}`);
+  if (A.isZero(c))
+    throw verticalSight(
+      w,
+      `a vertical spread of 1 is a plumb sight: it meets no point at horizontal quadrance ${show(A.toString(Q))}`,
+    );
   return A.div(A.mul(Q, R), c); // H = Q·R/(1 − R)
 }
 
@@ -61,14 +74,21 @@ export function heightFromReading<T>(A: Arithmetic<T>, input: { horizontal: Nume
  * //=> '100'
  * ```
  */
-export function horizontalFromHeight<T>(A: Arithmetic<T>, input: { height: Numeric<T>; vertical: VerticalInput<T> }): T {
+export function horizontalFromHeight<T>(
+  A: Arithmetic<T>,
+  input: { height: Numeric<T>; vertical: VerticalInput<T> },
+): T {
   const where = 'horizontalFromHeight(input)';
   checkObject(input, where);
   const H = readQuadrance(A, input.height, where, 'height');
   const R = readVertical(A, input.vertical, 'horizontalFromHeight(input.vertical)').spread;
   if (A.isZero(R)) {
-    if (A.isZero(H)) throw invalidArgument(where, 'a level sight to a point in the plane fits every distance');
-    throw inconsistentReadings('horizontalFromHeight(input.vertical)', `a level sight (R = 0) cannot reach a point at height quadrance ${show(A.toString(H))}`);
+    if (A.isZero(H))
+      throw invalidArgument(where, 'a level sight to a point in the plane fits every distance');
+    throw inconsistentReadings(
+      'horizontalFromHeight(input.vertical)',
+      `a level sight (R = 0) cannot reach a point at height quadrance ${show(A.toString(H))}`,
+    );
   }
   return A.div(A.mul(H, A.sub(A.one, R)), R); // Q = H(1 − R)/R
 }
@@ -90,12 +110,16 @@ export function horizontalFromHeight<T>(A: Arithmetic<T>, input: { height: Numer
  * //=> '9/25'
  * ```
  */
-export function verticalFromHeight<T>(A: Arithmetic<T>, input: { height: Numeric<T>; horizontal: Numeric<T> }): T {
+export function verticalFromHeight<T>(
+  A: Arithmetic<T>,
+  input: { height: Numeric<T>; horizontal: Numeric<T> },
+): T {
   const where = 'verticalFromHeight(input)';
   checkObject(input, where);
   const H = readQuadrance(A, input.height, where, 'height');
   const Q = readQuadrance(A, input.horizontal, where, 'horizontal');
   const sum = A.add(H, Q);
-  if (A.isZero(sum)) throw coincidentPoints(where, 'height and horizontal are both 0: the point is the instrument');
+  if (A.isZero(sum))
+    throw coincidentPoints(where, 'height and horizontal are both 0: the point is the instrument');
   return A.div(H, sum); // R = H/(H + Q)
 }

@@ -8,5 +8,16 @@ export { heightFromInlineReadings, heightFromInlineQuadrances } from './inline.j
 export type { InlineHeight, InlineQuadranceHeight } from './inline.js';
 export { pathGrade, pathOffset } from './path.js';
 export type { OffsetMeasure } from './path.js';
-export { trigHeight, reciprocalTrigHeight, curvatureRefraction, DEFAULT_REFRACTION, DEFAULT_EARTH_RADIUS_M } from './trig-heighting.js';
-export type { TrigSight, TrigHeight, ReciprocalTrigHeight, CurvatureOptions } from './trig-heighting.js';
+export {
+  trigHeight,
+  reciprocalTrigHeight,
+  curvatureRefraction,
+  DEFAULT_REFRACTION,
+  DEFAULT_EARTH_RADIUS_M,
+} from './trig-heighting.js';
+export type {
+  TrigSight,
+  TrigHeight,
+  ReciprocalTrigHeight,
+  CurvatureOptions,
+} from './trig-heighting.js';

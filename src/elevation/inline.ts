@@ -31,18 +31,40 @@ export interface InlineHeight<T> {
 }
 
 /** Reads in-line readings: checks counts, chainages, spreads and signs; returns k = (1 − R)/R. */
-function readInline<T>(A: Arithmetic<T>, vertical: readonly VerticalInput<T>[], where: string, min: number, count: number): { k: T[]; sign: -1 | 1 } {
+function readInline<T>(
+  A: Arithmetic<T>,
+  vertical: readonly VerticalInput<T>[],
+  where: string,
+  min: number,
+  count: number,
+): { k: T[]; sign: -1 | 1 } {
   if (!Array.isArray(vertical) || vertical.length !== count) {
-    throw invalidArgument(`${where}.vertical`, `give one vertical reading per station (${count} stations, ${Array.isArray(vertical) ? vertical.length : show(vertical)} readings)`);
+    throw invalidArgument(
+      `${where}.vertical`,
+      `give one vertical reading per station (${count} stations, ${Array.isArray(vertical) ? vertical.length : show(vertical)} readings)`,
+    );
   }
-  if (count < min) throw new QuadspreadError('TOO_FEW_STATIONS', where, `${count} station${count === 1 ? '' : 's'}: at least ${min} are needed`);
+  if (count < min)
+    throw new QuadspreadError(
+      'TOO_FEW_STATIONS',
+      where,
+      `${count} station${count === 1 ? '' : 's'}: at least ${min} are needed`,
+    );
   let sign: -1 | 1 | 0 = 0;
   const k: T[] = [];
   for (let i = 0; i < count; i++) {
     // `where` strings for a station are built only when it is at fault (this runs in a hot path)
     const r = readVertical(A, vertical[i]!, `${where}.vertical`, i);
-    if (r.sign === 0) throw inconsistentReadings(`${where}.vertical[${i}]`, 'a level sight (spread 0) from a station on the line meets no point off its level');
-    if (sign !== 0 && r.sign !== sign) throw inconsistentReadings(`${where}.vertical`, 'some readings are above the horizon and some below');
+    if (r.sign === 0)
+      throw inconsistentReadings(
+        `${where}.vertical[${i}]`,
+        'a level sight (spread 0) from a station on the line meets no point off its level',
+      );
+    if (sign !== 0 && r.sign !== sign)
+      throw inconsistentReadings(
+        `${where}.vertical`,
+        'some readings are above the horizon and some below',
+      );
     sign = r.sign;
     k.push(A.div(A.sub(A.one, r.spread), r.spread)); // cot²α = (1 − R)/R: horizontal quadrance per unit H
   }
@@ -50,7 +72,11 @@ function readInline<T>(A: Arithmetic<T>, vertical: readonly VerticalInput<T>[], 
 }
 
 function repeated<T>(A: Arithmetic<T>, w: string, i: number, j: number, x: T): never {
-  throw new QuadspreadError('REPEATED_CHAINAGE', `${w}.chainages`, `stations ${i} and ${j} are both at chainage ${A.toString(x)}`);
+  throw new QuadspreadError(
+    'REPEATED_CHAINAGE',
+    `${w}.chainages`,
+    `stations ${i} and ${j} are both at chainage ${A.toString(x)}`,
+  );
 }
 
 /** Solves the 3×3 system M·x = y exactly (Gaussian elimination with a non-zero pivot). */
@@ -60,7 +86,11 @@ function solve3<T>(A: Arithmetic<T>, M: T[][], y: T[], where: string): T[] {
     let p = c;
     // pivot: the largest magnitude (exact arithmetics need only non-zero; floats like the largest)
     for (let r = c + 1; r < 3; r++) if (A.cmp(A.abs(m[r]![c]!), A.abs(m[p]![c]!)) > 0) p = r;
-    if (A.isZero(m[p]![c]!)) throw inconsistentReadings(where, 'the readings fit no single point at a finite height (the equations are singular)');
+    if (A.isZero(m[p]![c]!))
+      throw inconsistentReadings(
+        where,
+        'the readings fit no single point at a finite height (the equations are singular)',
+      );
     [m[c], m[p]] = [m[p]!, m[c]!];
     for (let r = 0; r < 3; r++) {
       if (r === c) continue;
@@ -116,9 +146,18 @@ export function heightFromInlineReadings<T>(
   if (fused !== undefined) return fused;
   const w = 'heightFromInlineReadings(input)';
   checkObject(input, w);
-  if (!Array.isArray(input.chainages)) throw invalidArgument(`${w}.chainages`, `${show(input.chainages)} is not an array of chainages`);
+  if (!Array.isArray(input.chainages))
+    throw invalidArgument(
+      `${w}.chainages`,
+      `${show(input.chainages)} is not an array of chainages`,
+    );
   const n = input.chainages.length;
-  if (n < 3) throw new QuadspreadError('TOO_FEW_STATIONS', w, `${n} station${n === 1 ? '' : 's'}: at least 3 are needed`);
+  if (n < 3)
+    throw new QuadspreadError(
+      'TOO_FEW_STATIONS',
+      w,
+      `${n} station${n === 1 ? '' : 's'}: at least 3 are needed`,
+    );
   const raw: T[] = [];
   let sum = A.zero;
   for (let i = 0; i < n; i++) {
@@ -153,7 +192,11 @@ export function heightFromInlineReadings<T>(
     const a23 = A.sub(c3, c2);
     const a13 = A.sub(c3, c1);
     const coef = A.add(A.sub(A.mul(k1, a23), A.mul(k2, a13)), A.mul(k3, a12));
-    if (A.isZero(coef)) throw inconsistentReadings(`${w}.vertical`, 'the readings fit no single point at a finite height');
+    if (A.isZero(coef))
+      throw inconsistentReadings(
+        `${w}.vertical`,
+        'the readings fit no single point at a finite height',
+      );
     H = A.div(A.mul(A.mul(a12, a23), a13), coef);
     // Q₁ − Q₂ = (c₁ − c₂)(c₁ + c₂ − 2f): the foot's chainage
     f = A.div(A.sub(A.add(c1, c2), A.div(A.mul(H, A.sub(k1, k2)), A.sub(c1, c2))), two);
@@ -163,13 +206,25 @@ export function heightFromInlineReadings<T>(
     // Least squares on H·kᵢ + 2cᵢ·f − g = cᵢ² (normal equations, solved exactly)
     const rows = c.map((ci, i) => [k[i]!, A.mul(two, ci), A.neg(A.one)]);
     const rhs = c.map((ci) => A.mul(ci, ci));
-    const N: T[][] = [0, 1, 2].map((a) => [0, 1, 2].map((b) => rows.reduce((s, r) => A.add(s, A.mul(r[a]!, r[b]!)), A.zero)));
-    const y: T[] = [0, 1, 2].map((a) => rows.reduce((s, r, i) => A.add(s, A.mul(r[a]!, rhs[i]!)), A.zero));
+    const N: T[][] = [0, 1, 2].map((a) =>
+      [0, 1, 2].map((b) => rows.reduce((s, r) => A.add(s, A.mul(r[a]!, r[b]!)), A.zero)),
+    );
+    const y: T[] = [0, 1, 2].map((a) =>
+      rows.reduce((s, r, i) => A.add(s, A.mul(r[a]!, rhs[i]!)), A.zero),
+    );
     [H, f, g] = solve3(A, N, y, `${w}.vertical`) as [T, T, T];
   }
-  if (A.sign(H) <= 0) throw inconsistentReadings(`${w}.vertical`, `the readings give a height quadrance ${A.toString(H)} ≤ 0: no real point fits`);
+  if (A.sign(H) <= 0)
+    throw inconsistentReadings(
+      `${w}.vertical`,
+      `the readings give a height quadrance ${A.toString(H)} ≤ 0: no real point fits`,
+    );
   const e = A.sub(g, A.mul(f, f));
-  if (A.sign(e) < 0) throw inconsistentReadings(`${w}.vertical`, `the readings give a negative offset quadrance ${A.toString(e)}: no real point fits`);
+  if (A.sign(e) < 0)
+    throw inconsistentReadings(
+      `${w}.vertical`,
+      `the readings give a negative offset quadrance ${A.toString(e)}: no real point fits`,
+    );
   const residuals: T[] = [];
   for (let i = 0; i < n; i++) {
     const d = A.sub(c[i]!, f);
@@ -230,13 +285,29 @@ export function heightFromInlineQuadrances<T, E extends boolean>(
   const w = 'heightFromInlineQuadrances(input)';
   checkObject(input, w);
   const R = rootOps(A);
-  if (!Array.isArray(input.vertical)) throw invalidArgument(`${w}.vertical`, `${show(input.vertical)} is not an array of readings`);
-  if (input.vertical.length < 3) throw new QuadspreadError('TOO_FEW_STATIONS', w, `${input.vertical.length} stations: exactly 3 are needed`);
-  if (input.vertical.length > 3) throw invalidArgument(`${w}.vertical`, `${input.vertical.length} stations: this form takes exactly 3 (use heightFromInlineReadings with chainages for more)`);
-  if (!Array.isArray(input.spacings) || input.spacings.length !== 2) throw invalidArgument(`${w}.spacings`, 'give the two quadrances between consecutive stations');
+  if (!Array.isArray(input.vertical))
+    throw invalidArgument(`${w}.vertical`, `${show(input.vertical)} is not an array of readings`);
+  if (input.vertical.length < 3)
+    throw new QuadspreadError(
+      'TOO_FEW_STATIONS',
+      w,
+      `${input.vertical.length} stations: exactly 3 are needed`,
+    );
+  if (input.vertical.length > 3)
+    throw invalidArgument(
+      `${w}.vertical`,
+      `${input.vertical.length} stations: this form takes exactly 3 (use heightFromInlineReadings with chainages for more)`,
+    );
+  if (!Array.isArray(input.spacings) || input.spacings.length !== 2)
+    throw invalidArgument(`${w}.spacings`, 'give the two quadrances between consecutive stations');
   const Q12 = readQuadrance(A, input.spacings[0], w, 'spacings[0]');
   const Q23 = readQuadrance(A, input.spacings[1], w, 'spacings[1]');
-  if (A.isZero(Q12) || A.isZero(Q23)) throw new QuadspreadError('REPEATED_CHAINAGE', `${w}.spacings`, 'a spacing of 0 puts two stations at one place');
+  if (A.isZero(Q12) || A.isZero(Q23))
+    throw new QuadspreadError(
+      'REPEATED_CHAINAGE',
+      `${w}.spacings`,
+      'a spacing of 0 puts two stations at one place',
+    );
   const { k, sign } = readInline(A, input.vertical, w, 3, 3);
   const [k1, k2, k3] = k as [T, T, T];
   // u(H) = Q₂ + Q₂₃ − Q₃ = αH + Q₂₃ and v(H) = Q₂ + Q₁₂ − Q₁ = βH + Q₁₂
@@ -246,7 +317,8 @@ export function heightFromInlineQuadrances<T, E extends boolean>(
   const qa = A.sub(A.mul(Q12, A.mul(al, al)), A.mul(Q23, A.mul(be, be)));
   const qb = A.mul(A.from(2), A.mul(A.mul(Q12, Q23), A.sub(al, be)));
   const qc = A.mul(A.mul(Q12, Q23), A.sub(Q23, Q12));
-  if (A.isZero(qa) && A.isZero(qb)) throw inconsistentReadings(`${w}.vertical`, 'the readings do not fix a height');
+  if (A.isZero(qa) && A.isZero(qb))
+    throw inconsistentReadings(`${w}.vertical`, 'the readings do not fix a height');
   const roots = solveQuadratic(A, qa, qb, qc).filter((h) => R.sign(h) > 0);
   const physical: Root<T, E>[] = [];
   const other: Root<T, E>[] = [];
@@ -256,7 +328,11 @@ export function heightFromInlineQuadrances<T, E extends boolean>(
     if (R.sign(u) * R.sign(v) <= 0) physical.push(h);
     else other.push(h);
   }
-  if (physical.length === 0) throw inconsistentReadings(`${w}.vertical`, 'no positive height puts the middle station between the other two');
+  if (physical.length === 0)
+    throw inconsistentReadings(
+      `${w}.vertical`,
+      'no positive height puts the middle station between the other two',
+    );
   // Two physical roots would need u = v = 0 at both: impossible for a quadratic with distinct roots unless degenerate.
   return { H: physical[physical.length - 1]!, mirror: other[0], quadratic: [qa, qb, qc], sign };
 }

@@ -16,4 +16,5 @@ export function checkObject(x: unknown, where: string): void {
 }
 
 /** The message for a vertical spread of 1 where the point must lie off the station. @internal */
-export const PLUMB_SIGHT = 'a vertical spread of 1 is a plumb sight: it meets no point off the station';
+export const PLUMB_SIGHT =
+  'a vertical spread of 1 is a plumb sight: it meets no point off the station';

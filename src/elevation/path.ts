@@ -51,7 +51,10 @@ function readMeasured(m: unknown, where: string): OffsetMeasure {
  * //=> '3/20'
  * ```
  */
-export function pathGrade<T>(A: Arithmetic<T>, input: { fall: Numeric<T>; offset: Numeric<T>; measured: OffsetMeasure }): T {
+export function pathGrade<T>(
+  A: Arithmetic<T>,
+  input: { fall: Numeric<T>; offset: Numeric<T>; measured: OffsetMeasure },
+): T {
   const w = 'pathGrade(input)';
   checkObject(input, w);
   const measured = readMeasured(input.measured, `${w}.measured`);
@@ -60,7 +63,11 @@ export function pathGrade<T>(A: Arithmetic<T>, input: { fall: Numeric<T>; offset
   const face = A.mul(S, A.sub(A.one, R)); // U = S(1 − R)
   if (measured === 'face') return face;
   const den = A.sub(A.one, A.mul(S, R));
-  if (A.isZero(den)) throw invalidArgument(w, 'a vertical face (fall 1) has no plan direction along the contour (offset 1)');
+  if (A.isZero(den))
+    throw invalidArgument(
+      w,
+      'a vertical face (fall 1) has no plan direction along the contour (offset 1)',
+    );
   return A.div(face, den); // U = S(1 − R)/(1 − S·R)
 }
 
@@ -88,18 +95,33 @@ export function pathGrade<T>(A: Arithmetic<T>, input: { fall: Numeric<T>; offset
  * //=> '1/4'
  * ```
  */
-export function pathOffset<T>(A: Arithmetic<T>, input: { fall: Numeric<T>; grade: Numeric<T>; measured: OffsetMeasure }): T {
+export function pathOffset<T>(
+  A: Arithmetic<T>,
+  input: { fall: Numeric<T>; grade: Numeric<T>; measured: OffsetMeasure },
+): T {
   const w = 'pathOffset(input)';
   checkObject(input, w);
   const measured = readMeasured(input.measured, `${w}.measured`);
   const S = readSpread(A, input.fall, w, 'fall');
   const U = readSpread(A, input.grade, w, 'grade');
-  if (A.isZero(S)) throw invalidArgument(`${w}.fall`, 'a level plane (fall 0): every direction is level, no offset is fixed');
+  if (A.isZero(S))
+    throw invalidArgument(
+      `${w}.fall`,
+      'a level plane (fall 0): every direction is level, no offset is fixed',
+    );
   if (A.cmp(U, S) > 0) {
-    throw new QuadspreadError('GRADE_STEEPER_THAN_SLOPE', `${w}.grade`, `grade spread ${A.toString(U)} is steeper than the slope's fall-line spread ${A.toString(S)}`);
+    throw new QuadspreadError(
+      'GRADE_STEEPER_THAN_SLOPE',
+      `${w}.grade`,
+      `grade spread ${A.toString(U)} is steeper than the slope's fall-line spread ${A.toString(S)}`,
+    );
   }
   if (measured === 'face') return A.sub(A.one, A.div(U, S)); // R = 1 − U/S
   const den = A.mul(S, A.sub(A.one, U));
-  if (A.isZero(den)) throw invalidArgument(w, 'a vertical face climbed vertically (fall = grade = 1) has no plan direction');
+  if (A.isZero(den))
+    throw invalidArgument(
+      w,
+      'a vertical face climbed vertically (fall = grade = 1) has no plan direction',
+    );
   return A.div(A.sub(S, U), den); // R = (S − U)/(S(1 − U))
 }

@@ -41,7 +41,8 @@ export function rootOps<T, E extends boolean>(A: Arithmetic<T, E>): RootOps<T, E
     make(a, b, d) {
       if (A.isZero(b)) return a as Root<T, E>;
       const r = A.sqrt(d);
-      if (r === undefined) throw noRealSolution('root(a, b, d)', `no square root of ${A.toString(d)}`);
+      if (r === undefined)
+        throw noRealSolution('root(a, b, d)', `no square root of ${A.toString(d)}`);
       return A.add(a, A.mul(b, r)) as Root<T, E>;
     },
     lift: (x) => x as Root<T, E>,

@@ -4,7 +4,13 @@
  *
  * @module elevation
  */
-import { QuadspreadError, show, invalidArgument, verticalSight, negativeQuadrance } from '../errors.js';
+import {
+  QuadspreadError,
+  show,
+  invalidArgument,
+  verticalSight,
+  negativeQuadrance,
+} from '../errors.js';
 import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { isSurd, type Root, type Surd } from '../geometry/surd.js';
@@ -57,8 +63,10 @@ function radius<T>(A: Arithmetic<T>, o: CurvatureOptions<T>, where: string): { k
     const u = checkLengthUnit(o.unit ?? 'm', `${where}.unit`);
     R = A.div(A.from(DEFAULT_EARTH_RADIUS_M), A.from(METRES_PER_UNIT[u]));
   }
-  if (A.sign(R) <= 0) throw invalidArgument(`${where}.earthRadius`, `${A.toString(R)} is not a positive radius`);
-  if (A.sign(k) < 0 || A.cmp(k, A.one) >= 0) throw invalidArgument(`${where}.k`, `${A.toString(k)} is outside [0, 1)`);
+  if (A.sign(R) <= 0)
+    throw invalidArgument(`${where}.earthRadius`, `${A.toString(R)} is not a positive radius`);
+  if (A.sign(k) < 0 || A.cmp(k, A.one) >= 0)
+    throw invalidArgument(`${where}.k`, `${A.toString(k)} is outside [0, 1)`);
   return { k, R };
 }
 
@@ -83,14 +91,27 @@ function radius<T>(A: Arithmetic<T>, o: CurvatureOptions<T>, where: string): { k
  * //=> '500/6371'
  * ```
  */
-export function curvatureRefraction<T>(A: Arithmetic<T>, distance: Numeric<T>, options: CurvatureOptions<T> = {}): T {
+export function curvatureRefraction<T>(
+  A: Arithmetic<T>,
+  distance: Numeric<T>,
+  options: CurvatureOptions<T> = {},
+): T {
   checkObject(options, 'curvatureRefraction(options)');
   const D = readNumber(A, distance, 'curvatureRefraction(distance)');
-  if (A.sign(D) < 0) throw negativeQuadrance('curvatureRefraction(distance)', `${shownInput(A, distance, D)} is a negative distance`);
+  if (A.sign(D) < 0)
+    throw negativeQuadrance(
+      'curvatureRefraction(distance)',
+      `${shownInput(A, distance, D)} is a negative distance`,
+    );
   return curvatureFromQuadrance(A, A.mul(D, D), options, 'curvatureRefraction(options)');
 }
 
-function curvatureFromQuadrance<T>(A: Arithmetic<T>, Q: T, options: CurvatureOptions<T>, where: string): T {
+function curvatureFromQuadrance<T>(
+  A: Arithmetic<T>,
+  Q: T,
+  options: CurvatureOptions<T>,
+  where: string,
+): T {
   const { k, R } = radius(A, options, where);
   return A.div(A.mul(A.sub(A.one, k), Q), A.mul(A.from(2), R)); // (1 − k)·D²/(2R)
 }
@@ -150,15 +171,22 @@ export interface TrigHeight<T, E extends boolean> {
  * //=> '99/2'
  * ```
  */
-export function trigHeight<T, E extends boolean>(A: Arithmetic<T, E>, sight: TrigSight<T>): TrigHeight<T, E> {
+export function trigHeight<T, E extends boolean>(
+  A: Arithmetic<T, E>,
+  sight: TrigSight<T>,
+): TrigHeight<T, E> {
   const w = 'trigHeight(sight)';
   checkObject(sight, w);
   const R = rootOps(A);
   if (sight.measured !== 'slope' && sight.measured !== 'horizontal') {
-    throw invalidArgument(`${w}.measured`, `${show(sight.measured)} is not 'slope' or 'horizontal'`);
+    throw invalidArgument(
+      `${w}.measured`,
+      `${show(sight.measured)} is not 'slope' or 'horizontal'`,
+    );
   }
   const D = readNumber(A, sight.distance, `${w}.distance`);
-  if (A.sign(D) < 0) throw negativeQuadrance(`${w}.distance`, `${A.toString(D)} is a negative distance`);
+  if (A.sign(D) < 0)
+    throw negativeQuadrance(`${w}.distance`, `${A.toString(D)} is a negative distance`);
   const v = readVertical(A, sight.vertical, `${w}.vertical`);
   const s = v.spread;
   const c = A.sub(A.one, s);
@@ -169,12 +197,20 @@ export function trigHeight<T, E extends boolean>(A: Arithmetic<T, E>, sight: Tri
     V = R.make(A.zero, A.mul(sg, D), s); // S·sin α = ±S·√R
     Qh = A.mul(A.mul(D, D), c); // D² = S²·cos²α = S²(1 − R)
   } else {
-    if (A.isZero(c)) throw verticalSight(`${w}.vertical`, 'a vertical spread of 1 with a horizontal distance: the sight is plumb');
+    if (A.isZero(c))
+      throw verticalSight(
+        `${w}.vertical`,
+        'a vertical spread of 1 with a horizontal distance: the sight is plumb',
+      );
     V = R.make(A.zero, A.div(A.mul(sg, D), c), A.mul(s, c)); // D·tan α = ±D·√(R(1 − R))/(1 − R)
     Qh = A.mul(D, D);
   }
-  if (sight.correction !== undefined && sight.correction !== false) checkObject(sight.correction, `${w}.correction`);
-  const corr = sight.correction === false ? A.zero : curvatureFromQuadrance(A, Qh, sight.correction ?? {}, `${w}.correction`);
+  if (sight.correction !== undefined && sight.correction !== false)
+    checkObject(sight.correction, `${w}.correction`);
+  const corr =
+    sight.correction === false
+      ? A.zero
+      : curvatureFromQuadrance(A, Qh, sight.correction ?? {}, `${w}.correction`);
   const hi = readNumber(A, sight.instrumentHeight ?? 0, `${w}.instrumentHeight`);
   const hr = readNumber(A, sight.targetHeight ?? 0, `${w}.targetHeight`);
   const difference = R.add(V, A.add(A.sub(hi, hr), corr));

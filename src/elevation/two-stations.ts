@@ -3,7 +3,12 @@
  *
  * @module elevation
  */
-import { invalidArgument, coincidentPoints, verticalSight, inconsistentReadings } from '../errors.js';
+import {
+  invalidArgument,
+  coincidentPoints,
+  verticalSight,
+  inconsistentReadings,
+} from '../errors.js';
 import { checkObject, PLUMB_SIGHT } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
@@ -13,7 +18,11 @@ import { readVertical, type VerticalInput } from '../readings/vertical.js';
 import { heightFromReading } from './height.js';
 
 /** Reads a point given with numeric or arithmetic coordinates. */
-function readPoint<T>(A: Arithmetic<T>, P: { x: Numeric<T>; y: Numeric<T> }, where: string): Point<T> {
+function readPoint<T>(
+  A: Arithmetic<T>,
+  P: { x: Numeric<T>; y: Numeric<T> },
+  where: string,
+): Point<T> {
   if (typeof P !== 'object' || P === null) throw invalidArgument(where, 'is not a point { x, y }');
   return { x: readNumber(A, P.x, `${where}.x`), y: readNumber(A, P.y, `${where}.y`) };
 }
@@ -74,8 +83,10 @@ export function heightFromTwoStations<T>(
 ): TwoStationHeight<T> {
   const w = 'heightFromTwoStations(input)';
   checkObject(input, w);
-  if (!Array.isArray(input.stations) || input.stations.length !== 2) throw invalidArgument(`${w}.stations`, 'give exactly two stations');
-  if (!Array.isArray(input.vertical) || input.vertical.length !== 2) throw invalidArgument(`${w}.vertical`, 'give exactly two vertical readings');
+  if (!Array.isArray(input.stations) || input.stations.length !== 2)
+    throw invalidArgument(`${w}.stations`, 'give exactly two stations');
+  if (!Array.isArray(input.vertical) || input.vertical.length !== 2)
+    throw invalidArgument(`${w}.vertical`, 'give exactly two vertical readings');
   const F = readPoint(A, input.foot, `${w}.foot`);
   const H: T[] = [];
   const weights: T[] = [];
@@ -83,7 +94,11 @@ export function heightFromTwoStations<T>(
   for (let i = 0; i < 2; i++) {
     const P = readPoint(A, input.stations[i]!, `${w}.stations[${i}]`);
     const Q = quadrance(A, P, F);
-    if (A.isZero(Q)) throw coincidentPoints(`${w}.stations[${i}]`, 'the station is at the foot of the point: its reading is a plumb sight');
+    if (A.isZero(Q))
+      throw coincidentPoints(
+        `${w}.stations[${i}]`,
+        'the station is at the foot of the point: its reading is a plumb sight',
+      );
     const v = readVertical(A, input.vertical[i]!, `${w}.vertical[${i}]`);
     const c = A.sub(A.one, v.spread);
     if (A.isZero(c)) throw verticalSight(`${w}.vertical[${i}]`, PLUMB_SIGHT);
@@ -92,10 +107,20 @@ export function heightFromTwoStations<T>(
     signs.push(v.sign);
   }
   if (signs[0]! * signs[1]! < 0) {
-    throw inconsistentReadings(`${w}.vertical`, 'one reading is above the horizon and the other below');
+    throw inconsistentReadings(
+      `${w}.vertical`,
+      'one reading is above the horizon and the other below',
+    );
   }
   const [w1, w2] = weights as [T, T];
   const mean = A.div(A.add(A.mul(w1, H[0]!), A.mul(w2, H[1]!)), A.add(w1, w2));
   const sign = (signs[0] !== 0 ? signs[0] : signs[1]) as -1 | 0 | 1;
-  return { H1: H[0]!, H2: H[1]!, discrepancy: A.sub(H[0]!, H[1]!), H: mean, weights: [w1, w2], sign };
+  return {
+    H1: H[0]!,
+    H2: H[1]!,
+    discrepancy: A.sub(H[0]!, H[1]!),
+    H: mean,
+    weights: [w1, w2],
+    sign,
+  };
 }

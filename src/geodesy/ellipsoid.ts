@@ -97,10 +97,14 @@ export interface EllipsoidDefinition {
  */
 export function defineEllipsoid(def: EllipsoidDefinition): Ellipsoid {
   const where = 'defineEllipsoid(def)';
-  if (def === null || typeof def !== 'object') throw invalidEllipsoid(where, `${show(def)} is not an object { a, f | invF | b }`);
+  if (def === null || typeof def !== 'object')
+    throw invalidEllipsoid(where, `${show(def)} is not an object { a, f | invF | b }`);
   const given = (['f', 'invF', 'b'] as const).filter((k) => def[k] !== undefined);
   if (given.length !== 1) {
-    throw invalidEllipsoid(where, `give exactly one of f, invF, b (got ${given.length === 0 ? 'none' : given.join(', ')})`);
+    throw invalidEllipsoid(
+      where,
+      `give exactly one of f, invF, b (got ${given.length === 0 ? 'none' : given.join(', ')})`,
+    );
   }
   const R = rational;
   const a = readNumber(R, def.a as Numeric<never>, `${where}.a`);
@@ -109,14 +113,17 @@ export function defineEllipsoid(def: EllipsoidDefinition): Ellipsoid {
   if (def.f !== undefined) f = readNumber(R, def.f, `${where}.f`);
   else if (def.invF !== undefined) {
     const inv = readNumber(R, def.invF, `${where}.invF`);
-    if (R.cmp(inv, R.one) <= 0) throw invalidEllipsoid(where, `invF = ${show(def.invF)} is not above 1`);
+    if (R.cmp(inv, R.one) <= 0)
+      throw invalidEllipsoid(where, `invF = ${show(def.invF)} is not above 1`);
     f = R.div(R.one, inv);
   } else {
     const b = readNumber(R, def.b as Numeric<never>, `${where}.b`);
-    if (R.sign(b) <= 0 || R.cmp(b, a) > 0) throw invalidEllipsoid(where, `b = ${show(def.b)} is not in (0, a]`);
+    if (R.sign(b) <= 0 || R.cmp(b, a) > 0)
+      throw invalidEllipsoid(where, `b = ${show(def.b)} is not in (0, a]`);
     f = R.div(R.sub(a, b), a); // f = (a − b)/a, the definition of flattening
   }
-  if (R.sign(f) < 0 || R.cmp(f, R.one) >= 0) throw invalidEllipsoid(where, `f = ${R.toString(f)} is not in [0, 1)`);
+  if (R.sign(f) < 0 || R.cmp(f, R.one) >= 0)
+    throw invalidEllipsoid(where, `f = ${R.toString(f)} is not in [0, 1)`);
   const e: Ellipsoid = Object.freeze({
     name: def.name ?? 'user-defined',
     a: R.toString(a),
@@ -143,7 +150,12 @@ export function defineEllipsoid(def: EllipsoidDefinition): Ellipsoid {
 export function ellipsoidByName(name: string): Ellipsoid {
   const key = typeof name === 'string' ? name.toUpperCase().replace(/[\s_-]/g, '') : '';
   const e = KNOWN[key];
-  if (!e) throw new QuadspreadError('UNKNOWN_ELLIPSOID', 'ellipsoidByName(name)', `${show(name)} is not a known ellipsoid (use 'WGS84', 'GRS80' or defineEllipsoid)`);
+  if (!e)
+    throw new QuadspreadError(
+      'UNKNOWN_ELLIPSOID',
+      'ellipsoidByName(name)',
+      `${show(name)} is not a known ellipsoid (use 'WGS84', 'GRS80' or defineEllipsoid)`,
+    );
   return e;
 }
 
@@ -153,11 +165,19 @@ export function readEllipsoid(e: Ellipsoid | string | undefined, where: string):
     try {
       return ellipsoidByName(e);
     } catch {
-      throw new QuadspreadError('UNKNOWN_ELLIPSOID', where, `${show(e)} is not a known ellipsoid (use 'WGS84', 'GRS80' or defineEllipsoid)`);
+      throw new QuadspreadError(
+        'UNKNOWN_ELLIPSOID',
+        where,
+        `${show(e)} is not a known ellipsoid (use 'WGS84', 'GRS80' or defineEllipsoid)`,
+      );
     }
   }
   if (e === null || typeof e !== 'object' || typeof e.a !== 'string' || typeof e.f !== 'string') {
-    throw new QuadspreadError('UNKNOWN_ELLIPSOID', where, `${show(e)} is not an ellipsoid (use WGS84, GRS80, a name or defineEllipsoid)`);
+    throw new QuadspreadError(
+      'UNKNOWN_ELLIPSOID',
+      where,
+      `${show(e)} is not an ellipsoid (use WGS84, GRS80, a name or defineEllipsoid)`,
+    );
   }
   if (CHECKED.has(e)) return e;
   // A hand-made { a, f } object: checked as defineEllipsoid would (a > 0, 0 ≤ f < 1) on every use.
@@ -165,7 +185,10 @@ export function readEllipsoid(e: Ellipsoid | string | undefined, where: string):
     defineEllipsoid({ a: e.a, f: e.f });
   } catch (err) {
     if (!(err instanceof QuadspreadError)) throw err;
-    throw invalidEllipsoid(where, `${show(e)} is not a valid ellipsoid: ${err.message.slice(`quadspread ${err.code}: ${err.where}: `.length)}`);
+    throw invalidEllipsoid(
+      where,
+      `${show(e)} is not a valid ellipsoid: ${err.message.slice(`quadspread ${err.code}: ${err.where}: `.length)}`,
+    );
   }
   return e;
 }
@@ -201,7 +224,10 @@ export interface EllipsoidParameters<T> {
  * //=> '500000000/297757222101'
  * ```
  */
-export function ellipsoidParameters<T>(A: Arithmetic<T>, ellipsoid: Ellipsoid | string): EllipsoidParameters<T> {
+export function ellipsoidParameters<T>(
+  A: Arithmetic<T>,
+  ellipsoid: Ellipsoid | string,
+): EllipsoidParameters<T> {
   const E = readEllipsoid(ellipsoid, 'ellipsoidParameters(ellipsoid)');
   const a = A.from(E.a);
   const f = A.from(E.f);

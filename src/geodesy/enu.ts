@@ -20,7 +20,8 @@ export interface Enu<T> {
 }
 
 function objectArg(x: unknown, where: string, shape: string): void {
-  if (x === null || typeof x !== 'object') throw invalidArgument(where, `${show(x)} is not ${shape}`);
+  if (x === null || typeof x !== 'object')
+    throw invalidArgument(where, `${show(x)} is not ${shape}`);
 }
 
 /** A 3 × 3 matrix, rows first. */
@@ -70,7 +71,10 @@ function onCircle<T>(A: Arithmetic<T>, c: T, s: T, digits: number): { c: T; s: T
  * //=> [['0', '1', '0'], ['-1', '0', '0'], ['0', '0', '1']]
  * ```
  */
-export function enuRotation<T>(A: Arithmetic<T>, origin: { readonly lat: Numeric<T>; readonly lon: Numeric<T> }): Matrix3<T> {
+export function enuRotation<T>(
+  A: Arithmetic<T>,
+  origin: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },
+): Matrix3<T> {
   const where = 'enuRotation(origin)';
   expectObject(origin, where, '{ lat, lon }');
   const digits = claimedDigits(A);
@@ -86,9 +90,15 @@ export function enuRotation<T>(A: Arithmetic<T>, origin: { readonly lat: Numeric
   ];
 }
 
-function apply<T>(A: Arithmetic<T>, M: Matrix3<T>, v: readonly [T, T, T], transpose: boolean): [T, T, T] {
+function apply<T>(
+  A: Arithmetic<T>,
+  M: Matrix3<T>,
+  v: readonly [T, T, T],
+  transpose: boolean,
+): [T, T, T] {
   const at = (i: number, j: number): T => (transpose ? M[j]![i]! : M[i]![j]!);
-  const row = (i: number): T => A.add(A.add(A.mul(at(i, 0), v[0]), A.mul(at(i, 1), v[1])), A.mul(at(i, 2), v[2]));
+  const row = (i: number): T =>
+    A.add(A.add(A.mul(at(i, 0), v[0]), A.mul(at(i, 1), v[1])), A.mul(at(i, 2), v[2]));
   return [row(0), row(1), row(2)];
 }
 
@@ -114,7 +124,12 @@ function apply<T>(A: Arithmetic<T>, M: Matrix3<T>, v: readonly [T, T, T], transp
  * //=> 100
  * ```
  */
-export function enuFromGeocentric<T>(A: Arithmetic<T>, origin: GeodeticInput<T>, point: Geocentric<Numeric<T>> | Geocentric<T>, ellipsoid: Ellipsoid | string): Enu<T> {
+export function enuFromGeocentric<T>(
+  A: Arithmetic<T>,
+  origin: GeodeticInput<T>,
+  point: Geocentric<Numeric<T>> | Geocentric<T>,
+  ellipsoid: Ellipsoid | string,
+): Enu<T> {
   objectArg(origin, 'enuFromGeocentric(origin)', '{ lat, lon, h }');
   objectArg(point, 'enuFromGeocentric(point)', '{ X, Y, Z }');
   const E = readEllipsoid(ellipsoid, 'enuFromGeocentric(ellipsoid)');
@@ -146,13 +161,22 @@ export function enuFromGeocentric<T>(A: Arithmetic<T>, origin: GeodeticInput<T>,
  * //=> [6378167, 10, 20]
  * ```
  */
-export function geocentricFromEnu<T>(A: Arithmetic<T>, origin: GeodeticInput<T>, local: Enu<Numeric<T>> | Enu<T>, ellipsoid: Ellipsoid | string): Geocentric<T> {
+export function geocentricFromEnu<T>(
+  A: Arithmetic<T>,
+  origin: GeodeticInput<T>,
+  local: Enu<Numeric<T>> | Enu<T>,
+  ellipsoid: Ellipsoid | string,
+): Geocentric<T> {
   objectArg(origin, 'geocentricFromEnu(origin)', '{ lat, lon, h }');
   objectArg(local, 'geocentricFromEnu(local)', '{ e, n, u }');
   const E = readEllipsoid(ellipsoid, 'geocentricFromEnu(ellipsoid)');
   const O = geodeticToGeocentric(A, origin, E);
   const R = enuRotation(A, origin);
-  const v: [T, T, T] = [readNumber(A, local.e as Numeric<T>, 'geocentricFromEnu(local).e'), readNumber(A, local.n as Numeric<T>, 'geocentricFromEnu(local).n'), readNumber(A, local.u as Numeric<T>, 'geocentricFromEnu(local).u')];
+  const v: [T, T, T] = [
+    readNumber(A, local.e as Numeric<T>, 'geocentricFromEnu(local).e'),
+    readNumber(A, local.n as Numeric<T>, 'geocentricFromEnu(local).n'),
+    readNumber(A, local.u as Numeric<T>, 'geocentricFromEnu(local).u'),
+  ];
   const [x, y, z] = apply(A, R, v, true);
   return { X: A.add(O.X, x), Y: A.add(O.Y, y), Z: A.add(O.Z, z) };
 }
@@ -189,11 +213,17 @@ export interface FlatEarthError<T> {
  * //=> ['7.848', '4.11']
  * ```
  */
-export function flatEarthError<T>(A: Arithmetic<T>, distance: Numeric<T>, radius: Numeric<T> = '6371008.7714'): FlatEarthError<T> {
+export function flatEarthError<T>(
+  A: Arithmetic<T>,
+  distance: Numeric<T>,
+  radius: Numeric<T> = '6371008.7714',
+): FlatEarthError<T> {
   const s = readNumber(A, distance, 'flatEarthError(distance)');
   const R = readNumber(A, radius, 'flatEarthError(radius)');
-  if (A.sign(s) < 0) throw invalidArgument('flatEarthError(distance)', `${shownInput(A, distance, s)} is negative`);
-  if (A.sign(R) <= 0) throw invalidArgument('flatEarthError(radius)', `${shownInput(A, radius, R)} is not positive`);
+  if (A.sign(s) < 0)
+    throw invalidArgument('flatEarthError(distance)', `${shownInput(A, distance, s)} is negative`);
+  if (A.sign(R) <= 0)
+    throw invalidArgument('flatEarthError(radius)', `${shownInput(A, radius, R)} is not positive`);
   const s2 = A.mul(s, s);
   return {
     drop: A.div(s2, A.mul(A.from(2), R)), // s²/(2R) (derived, leading term of R(1 − cos(s/R)))

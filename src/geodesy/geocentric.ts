@@ -9,7 +9,16 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber, expectObject } from '../geometry/validate.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { ellipsoidParameters, readEllipsoid, type Ellipsoid } from './ellipsoid.js';
-import { claimedDigits, delegateFor, readHeight, readLatitude, readLongitude, root, tenToMinus, toDegrees } from './internal.js';
+import {
+  claimedDigits,
+  delegateFor,
+  readHeight,
+  readLatitude,
+  readLongitude,
+  root,
+  tenToMinus,
+  toDegrees,
+} from './internal.js';
 
 /** Geodetic coordinates: latitude and longitude in decimal degrees (north, east positive), height in metres above the ellipsoid. */
 export interface Geodetic<T> {
@@ -61,7 +70,11 @@ export interface Geocentric<T> {
  * //=> ['3790644.900', '-110149.210', '5111482.970']
  * ```
  */
-export function geodeticToGeocentric<T>(A: Arithmetic<T>, point: GeodeticInput<T>, ellipsoid: Ellipsoid | string): Geocentric<T> {
+export function geodeticToGeocentric<T>(
+  A: Arithmetic<T>,
+  point: GeodeticInput<T>,
+  ellipsoid: Ellipsoid | string,
+): Geocentric<T> {
   const where = 'geodeticToGeocentric(point)';
   expectObject(point, where, '{ lat, lon, h }');
   const E = ellipsoidParameters(A, readEllipsoid(ellipsoid, 'geodeticToGeocentric(ellipsoid)'));
@@ -121,7 +134,11 @@ const MAX_ITERATIONS = 30;
  * //=> [`53°36'43.1653"`, `-1°39'51.9920"`, '299.800']
  * ```
  */
-export function geocentricToGeodetic<T>(A: Arithmetic<T>, point: Geocentric<Numeric<T>> | Geocentric<T>, ellipsoid: Ellipsoid | string): Geodetic<T> {
+export function geocentricToGeodetic<T>(
+  A: Arithmetic<T>,
+  point: Geocentric<Numeric<T>> | Geocentric<T>,
+  ellipsoid: Ellipsoid | string,
+): Geodetic<T> {
   const where = 'geocentricToGeodetic(point)';
   expectObject(point, where, '{ X, Y, Z }');
   const E = ellipsoidParameters(A, readEllipsoid(ellipsoid, 'geocentricToGeodetic(ellipsoid)'));
@@ -133,12 +150,20 @@ export function geocentricToGeodetic<T>(A: Arithmetic<T>, point: Geocentric<Nume
     // The result is an approximation in any case: iterate in decimal with 8 guard digits,
     // so that exact fractions do not grow, and read the result back exactly.
     const { D, to, back } = delegateFor(A, claimedDigits(A) + 8);
-    const g = geocentricToGeodetic(D, { X: to(X), Y: to(Y), Z: to(Z) }, readEllipsoid(ellipsoid, 'geocentricToGeodetic(ellipsoid)'));
+    const g = geocentricToGeodetic(
+      D,
+      { X: to(X), Y: to(Y), Z: to(Z) },
+      readEllipsoid(ellipsoid, 'geocentricToGeodetic(ellipsoid)'),
+    );
     return { lat: back(g.lat), lon: back(g.lon), h: back(g.h) };
   }
   if (A.isZero(p2)) {
     // On the polar axis: φ = ±90°, h = |Z| − b, λ taken as 0.
-    if (A.isZero(Z)) throw invalidArgument(where, 'the centre of the ellipsoid has no unique geodetic coordinates');
+    if (A.isZero(Z))
+      throw invalidArgument(
+        where,
+        'the centre of the ellipsoid has no unique geodetic coordinates',
+      );
     return { lat: A.from(A.sign(Z) > 0 ? 90 : -90), lon: A.zero, h: A.sub(A.abs(Z), E.b) };
   }
   // From here on A is inexact: exact arithmetics were delegated above.
@@ -161,7 +186,11 @@ export function geocentricToGeodetic<T>(A: Arithmetic<T>, point: Geocentric<Nume
     const num = A.add(Z, A.mul(A.mul(E.ep2, E.b), cube(u.s)));
     const den = A.sub(p, A.mul(A.mul(E.e2, E.a), cube(u.c)));
     if (A.sign(den) <= 0) {
-      throw new QuadspreadError('HEIGHT_OUT_OF_RANGE', where, `the point (${A.toString(X)}, ${A.toString(Y)}, ${A.toString(Z)}) is too deep inside the ellipsoid for geodetic coordinates`);
+      throw new QuadspreadError(
+        'HEIGHT_OUT_OF_RANGE',
+        where,
+        `the point (${A.toString(X)}, ${A.toString(Y)}, ${A.toString(Z)}) is too deep inside the ellipsoid for geodetic coordinates`,
+      );
     }
     const next = unit(den, num);
     if (phi !== undefined) {
@@ -172,7 +201,12 @@ export function geocentricToGeodetic<T>(A: Arithmetic<T>, point: Geocentric<Nume
       // Converged to the rounding noise of an inexact arithmetic: a change that no longer
       // shrinks (the true iteration gains about 10 digits a step) and is within 100 units
       // of the last digit.
-      if (prev !== undefined && A.cmp(change, noise) <= 0 && A.cmp(A.add(change, change), prev) >= 0) return finish(A, phi, p, X, Y, Z, E.a, E.e2);
+      if (
+        prev !== undefined &&
+        A.cmp(change, noise) <= 0 &&
+        A.cmp(A.add(change, change), prev) >= 0
+      )
+        return finish(A, phi, p, X, Y, Z, E.a, E.e2);
       prev = change;
     } else {
       phi = next;
@@ -180,10 +214,23 @@ export function geocentricToGeodetic<T>(A: Arithmetic<T>, point: Geocentric<Nume
     // tan u = (1 − f) tan φ
     u = unit(phi.c, A.mul(oneMinusF, phi.s));
   }
-  throw new QuadspreadError('NOT_CONVERGED', where, `Bowring's iteration did not converge in ${MAX_ITERATIONS} steps`);
+  throw new QuadspreadError(
+    'NOT_CONVERGED',
+    where,
+    `Bowring's iteration did not converge in ${MAX_ITERATIONS} steps`,
+  );
 }
 
-function finish<T>(A: Arithmetic<T>, phi: { c: T; s: T }, p: T, X: T, Y: T, Z: T, a: T, e2: T): Geodetic<T> {
+function finish<T>(
+  A: Arithmetic<T>,
+  phi: { c: T; s: T },
+  p: T,
+  X: T,
+  Y: T,
+  Z: T,
+  a: T,
+  e2: T,
+): Geodetic<T> {
   // h = p cos φ + Z sin φ − a √(1 − e² sin²φ)  (Bowring 1985)
   const w = root(A, A.sub(A.one, A.mul(e2, A.mul(phi.s, phi.s))));
   const h = A.sub(A.add(A.mul(p, phi.c), A.mul(Z, phi.s)), A.mul(a, w));

@@ -16,8 +16,22 @@ import { QuadspreadError, show, invalidArgument } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber, expectObject, finiteResult, shownInput } from '../geometry/validate.js';
 import { sinCosDegrees } from '../readings/trig.js';
-import { ellipsoidParameters, readEllipsoid, type Ellipsoid, type EllipsoidParameters } from './ellipsoid.js';
-import { claimedDigits, delegateFor, readHeight, readLatitude, readLongitude, root, tenToMinus, toDegrees } from './internal.js';
+import {
+  ellipsoidParameters,
+  readEllipsoid,
+  type Ellipsoid,
+  type EllipsoidParameters,
+} from './ellipsoid.js';
+import {
+  claimedDigits,
+  delegateFor,
+  readHeight,
+  readLatitude,
+  readLongitude,
+  root,
+  tenToMinus,
+  toDegrees,
+} from './internal.js';
 
 /**
  * The height reduction factor R/(R + h): a horizontal distance measured on the ground at
@@ -40,7 +54,11 @@ import { claimedDigits, delegateFor, readHeight, readLatitude, readLongitude, ro
  */
 export function heightReductionFactor<T>(A: Arithmetic<T>, h: Numeric<T>, radius: Numeric<T>): T {
   const R = readNumber(A, radius, 'heightReductionFactor(radius)');
-  if (A.sign(R) <= 0) throw invalidArgument('heightReductionFactor(radius)', `${shownInput(A, radius, R)} is not positive`);
+  if (A.sign(R) <= 0)
+    throw invalidArgument(
+      'heightReductionFactor(radius)',
+      `${shownInput(A, radius, R)} is not positive`,
+    );
   const H = readHeight(A, h, A.div(R, A.from(2)), 'heightReductionFactor(h)', 'R/2');
   return A.div(R, A.add(R, H)); // R/(R + h)
 }
@@ -72,11 +90,36 @@ export interface TmFactors<T> {
 // "Transverse Mercator with an accuracy of a few nanometers", J. Geodesy 85:475–485,
 // 2011, eq. 35). Each row: [numerator, denominator, power of n].
 const ALPHA: readonly (readonly (readonly [number, number, number])[])[] = [
-  [[1, 2, 1], [-2, 3, 2], [5, 16, 3], [41, 180, 4], [-127, 288, 5], [7891, 37800, 6]],
-  [[13, 48, 2], [-3, 5, 3], [557, 1440, 4], [281, 630, 5], [-1983433, 1935360, 6]],
-  [[61, 240, 3], [-103, 140, 4], [15061, 26880, 5], [167603, 181440, 6]],
-  [[49561, 161280, 4], [-179, 168, 5], [6601661, 7257600, 6]],
-  [[34729, 80640, 5], [-3418889, 1995840, 6]],
+  [
+    [1, 2, 1],
+    [-2, 3, 2],
+    [5, 16, 3],
+    [41, 180, 4],
+    [-127, 288, 5],
+    [7891, 37800, 6],
+  ],
+  [
+    [13, 48, 2],
+    [-3, 5, 3],
+    [557, 1440, 4],
+    [281, 630, 5],
+    [-1983433, 1935360, 6],
+  ],
+  [
+    [61, 240, 3],
+    [-103, 140, 4],
+    [15061, 26880, 5],
+    [167603, 181440, 6],
+  ],
+  [
+    [49561, 161280, 4],
+    [-179, 168, 5],
+    [6601661, 7257600, 6],
+  ],
+  [
+    [34729, 80640, 5],
+    [-3418889, 1995840, 6],
+  ],
   [[212378941, 319334400, 6]],
 ];
 
@@ -131,10 +174,21 @@ interface KrugerResult<T> {
   readonly Aa: T;
 }
 
-function kruger<T>(A: Arithmetic<T>, E: EllipsoidParameters<T>, lat: T, dlon: T, where: string, wantGrid: boolean): KrugerResult<T> {
+function kruger<T>(
+  A: Arithmetic<T>,
+  E: EllipsoidParameters<T>,
+  lat: T,
+  dlon: T,
+  where: string,
+  wantGrid: boolean,
+): KrugerResult<T> {
   const { sin: sp, cos: cp } = sinCosDegrees(A, lat);
   const { sin: sl, cos: cl } = sinCosDegrees(A, dlon);
-  if (A.sign(cl) <= 0) throw invalidArgument(`${where}(point.lon)`, 'the point is 90° or more from the central meridian');
+  if (A.sign(cl) <= 0)
+    throw invalidArgument(
+      `${where}(point.lon)`,
+      'the point is 90° or more from the central meridian',
+    );
   const digits = claimedDigits(A);
   const tol = tenToMinus(A, digits + 4);
   const one = A.one;
@@ -147,7 +201,8 @@ function kruger<T>(A: Arithmetic<T>, E: EllipsoidParameters<T>, lat: T, dlon: T,
   const S = A.sub(A.mul(sp, root(A, A.add(one, A.mul(sigma, sigma)))), sigma);
   const Ccl = A.mul(cp, cl);
   const D2 = A.add(A.mul(S, S), A.mul(Ccl, Ccl)); // cos²φ (τ′² + cos²λ)
-  if (A.isZero(D2)) throw invalidArgument(`${where}(point)`, 'the projection is singular at this point');
+  if (A.isZero(D2))
+    throw invalidArgument(`${where}(point)`, 'the projection is singular at this point');
   const D = root(A, D2);
   // Gauss–Schreiber: ξ′ = atan2(τ′, cos λ), sinh η′ = sin λ/√(τ′² + cos²λ) (Karney 2011, eq. 10)
   const sx = A.div(S, D); // sin ξ′
@@ -172,12 +227,16 @@ function kruger<T>(A: Arithmetic<T>, E: EllipsoidParameters<T>, lat: T, dlon: T,
   let deta = A.zero; // Σ α_j cos 2jξ′ sinh 2jη′  (Karney 2011, eq. 11)
   for (let j = 1; j <= 6; j++) {
     let alpha = A.zero;
-    for (const [num, den, pow] of ALPHA[j - 1]!) alpha = A.add(alpha, A.div(A.mul(A.from(num), powers[pow]!), A.from(den)));
+    for (const [num, den, pow] of ALPHA[j - 1]!)
+      alpha = A.add(alpha, A.div(A.mul(A.from(num), powers[pow]!), A.from(den)));
     if (j === 6 && A.cmp(A.mul(A.abs(alpha), chj), A.from('1e-10')) > 0) {
       // The terms grow like cosh 2jη′: where the last one, α₆ cosh 12η′, exceeds 1e-10 (of a,
       // about 0.6 mm) the truncated series no longer holds (at the equator about 61° from
       // the central meridian; nearer 90° it returns nonsense). Derived from the series.
-      throw invalidArgument(`${where}(point.lon)`, `the point is too far from the central meridian for Krüger's series to n⁶ (its last term is ${show(A.toNumber(A.mul(A.abs(alpha), chj)))})`);
+      throw invalidArgument(
+        `${where}(point.lon)`,
+        `the point is too far from the central meridian for Krüger's series to n⁶ (its last term is ${show(A.toNumber(A.mul(A.abs(alpha), chj)))})`,
+      );
     }
     const w = A.mul(A.from(2 * j), alpha);
     pp = A.add(pp, A.mul(w, A.mul(cj, chj)));
@@ -197,7 +256,10 @@ function kruger<T>(A: Arithmetic<T>, E: EllipsoidParameters<T>, lat: T, dlon: T,
   }
   // Rectifying radius over a: A/a = (1 + n²/4 + n⁴/64 + n⁶/256)/(1 + n) (Karney 2011, eq. 14)
   const Aa = A.div(
-    A.add(A.add(A.add(one, A.div(powers[2]!, A.from(4))), A.div(powers[4]!, A.from(64))), A.div(powers[6]!, A.from(256))),
+    A.add(
+      A.add(A.add(one, A.div(powers[2]!, A.from(4))), A.div(powers[4]!, A.from(64))),
+      A.div(powers[6]!, A.from(256)),
+    ),
     A.add(one, n),
   );
   // k′ = √(1 − e² sin²φ) √(1 + τ²)/√(τ′² + cos²λ) = √(1 − e² sin²φ)/D; k″ = (A/a)√(p′² + q′²)
@@ -323,10 +385,23 @@ function tm<T>(
     const r = tm(
       D,
       { lat: t(lat), lon: t(lon) },
-      { lon0: t(lon0) as never, lat0: t(lat0) as never, k0: t(k0) as never, falseEasting: t(E0) as never, falseNorthing: t(N0) as never, ellipsoid: ell },
+      {
+        lon0: t(lon0) as never,
+        lat0: t(lat0) as never,
+        k0: t(k0) as never,
+        falseEasting: t(E0) as never,
+        falseNorthing: t(N0) as never,
+        ellipsoid: ell,
+      },
       wantGrid,
     );
-    return { E: back(r.E), N: back(r.N), k: back(r.k), convergence: back(r.convergence), xi0: back(r.xi0) };
+    return {
+      E: back(r.E),
+      N: back(r.N),
+      k: back(r.k),
+      convergence: back(r.convergence),
+      xi0: back(r.xi0),
+    };
   }
   const c = kruger(A, E, lat, A.sub(lon, lon0), where, wantGrid);
   const k = A.mul(k0, c.k);
@@ -376,7 +451,11 @@ function readProjection<T>(A: Arithmetic<T>, projection: TransverseMercatorGrid,
  * //=> '31262/31275'
  * ```
  */
-export function combinedFactor<T>(A: Arithmetic<T>, heightFactor: Numeric<T>, scaleFactor: Numeric<T>): T {
+export function combinedFactor<T>(
+  A: Arithmetic<T>,
+  heightFactor: Numeric<T>,
+  scaleFactor: Numeric<T>,
+): T {
   const h = positive(A, heightFactor, 'combinedFactor(heightFactor)');
   const k = positive(A, scaleFactor, 'combinedFactor(scaleFactor)');
   return finiteResult(A.mul(h, k), 'combinedFactor(heightFactor, scaleFactor)');
@@ -404,7 +483,13 @@ function positive<T>(A: Arithmetic<T>, x: Numeric<T>, where: string): T {
  * ```
  */
 export function groundToGrid<T>(A: Arithmetic<T>, ground: Numeric<T>, factor: Numeric<T>): T {
-  return finiteResult(A.mul(readNumber(A, ground, 'groundToGrid(ground)'), positive(A, factor, 'groundToGrid(factor)')), 'groundToGrid(ground, factor)');
+  return finiteResult(
+    A.mul(
+      readNumber(A, ground, 'groundToGrid(ground)'),
+      positive(A, factor, 'groundToGrid(factor)'),
+    ),
+    'groundToGrid(ground, factor)',
+  );
 }
 
 /**
@@ -424,7 +509,10 @@ export function groundToGrid<T>(A: Arithmetic<T>, ground: Numeric<T>, factor: Nu
  * ```
  */
 export function gridToGround<T>(A: Arithmetic<T>, grid: Numeric<T>, factor: Numeric<T>): T {
-  return A.div(readNumber(A, grid, 'gridToGround(grid)'), positive(A, factor, 'gridToGround(factor)'));
+  return A.div(
+    readNumber(A, grid, 'gridToGround(grid)'),
+    positive(A, factor, 'gridToGround(factor)'),
+  );
 }
 
 /** Most Newton steps {@link transverseMercatorInverse} takes. */
@@ -476,7 +564,8 @@ export function transverseMercatorInverse<T>(
   const ka = A.mul(k0, P.a);
   // Start on a sphere of radius a: φ ≈ φ0 + (N − N0)/(k0 a), λ ≈ λ0 + (E − E0)/(k0 a cos φ).
   const ninety = A.from('89.9');
-  const clampLat = (x: T): T => (A.cmp(x, ninety) > 0 ? ninety : A.cmp(x, A.neg(ninety)) < 0 ? A.neg(ninety) : x);
+  const clampLat = (x: T): T =>
+    A.cmp(x, ninety) > 0 ? ninety : A.cmp(x, A.neg(ninety)) < 0 ? A.neg(ninety) : x;
   let lat = clampLat(A.add(lat0, A.mul(A.div(A.sub(Nt, N0), ka), perRad)));
   let lon = A.add(lon0, A.mul(A.div(A.sub(Et, E0), A.mul(ka, sinCosDegrees(A, lat).cos)), perRad));
   const digits = claimedDigits(A);
@@ -490,7 +579,10 @@ export function transverseMercatorInverse<T>(
     const dE = A.sub(Et, f.E);
     const dN = A.sub(Nt, f.N);
     const size = A.add(A.abs(dE), A.abs(dN));
-    if (A.cmp(size, tol) <= 0 || (prev !== undefined && A.cmp(size, noise) <= 0 && A.cmp(A.add(size, size), prev) >= 0)) {
+    if (
+      A.cmp(size, tol) <= 0 ||
+      (prev !== undefined && A.cmp(size, noise) <= 0 && A.cmp(A.add(size, size), prev) >= 0)
+    ) {
       return { lat, lon, k: f.k, convergence: f.convergence };
     }
     prev = size;
@@ -505,5 +597,9 @@ export function transverseMercatorInverse<T>(
     lat = clampLat(A.add(lat, A.mul(A.div(dn, M), perRad)));
     lon = A.add(lon, A.mul(A.div(de, A.mul(Nr, cp)), perRad));
   }
-  throw new QuadspreadError('NOT_CONVERGED', `${where}(point)`, `Newton's iteration did not converge in ${MAX_INVERSE_STEPS} steps`);
+  throw new QuadspreadError(
+    'NOT_CONVERGED',
+    `${where}(point)`,
+    `Newton's iteration did not converge in ${MAX_INVERSE_STEPS} steps`,
+  );
 }

@@ -1,11 +1,29 @@
 // Public exports of src/geodesy/ (one line per file as files land).
-export { WGS84, GRS80, defineEllipsoid, ellipsoidByName, ellipsoidParameters } from './ellipsoid.js';
+export {
+  WGS84,
+  GRS80,
+  defineEllipsoid,
+  ellipsoidByName,
+  ellipsoidParameters,
+} from './ellipsoid.js';
 export type { Ellipsoid, EllipsoidDefinition, EllipsoidParameters } from './ellipsoid.js';
 export { geodeticToGeocentric, geocentricToGeodetic } from './geocentric.js';
 export type { Geodetic, GeodeticInput, Geocentric } from './geocentric.js';
 export { enuRotation, enuFromGeocentric, geocentricFromEnu, flatEarthError } from './enu.js';
 export type { Enu, Matrix3, FlatEarthError } from './enu.js';
-export { meridianRadius, primeVerticalRadius, radiusInAzimuth, gaussianMeanRadius } from './radii.js';
-export { heightReductionFactor, transverseMercatorFactors, transverseMercator, transverseMercatorInverse, combinedFactor, groundToGrid, gridToGround } from './grid.js';
+export {
+  meridianRadius,
+  primeVerticalRadius,
+  radiusInAzimuth,
+  gaussianMeanRadius,
+} from './radii.js';
+export {
+  heightReductionFactor,
+  transverseMercatorFactors,
+  transverseMercator,
+  transverseMercatorInverse,
+  combinedFactor,
+  groundToGrid,
+  gridToGround,
+} from './grid.js';
 export type { TransverseMercator, TransverseMercatorGrid, TmFactors, GridPoint } from './grid.js';
-

@@ -47,7 +47,11 @@ export function readAngle<T>(A: Arithmetic<T>, x: Numeric<T>, where: string, uni
     return angleToDegrees(A, x, unit);
   } catch (e) {
     if (!(e instanceof QuadspreadError)) throw e;
-    throw new QuadspreadError(e.code, where, e.message.slice(`quadspread ${e.code}: ${e.where}: `.length));
+    throw new QuadspreadError(
+      e.code,
+      where,
+      e.message.slice(`quadspread ${e.code}: ${e.where}: `.length),
+    );
   }
 }
 
@@ -60,7 +64,10 @@ function checkHemisphere(x: unknown, allowed: string, where: string, what: strin
   for (const m of [/^\s*([NSEW])/i.exec(x), /([NSEW])\s*$/i.exec(x)]) {
     const letter = m?.[1]!.toUpperCase();
     if (letter !== undefined && !allowed.includes(letter)) {
-      throw invalidAngle(where, `${show(x)} carries ${letter}, but a ${what} takes ${allowed[0]} or ${allowed[1]}: are latitude and longitude swapped?`);
+      throw invalidAngle(
+        where,
+        `${show(x)} carries ${letter}, but a ${what} takes ${allowed[0]} or ${allowed[1]}: are latitude and longitude swapped?`,
+      );
     }
   }
 }
@@ -71,7 +78,11 @@ export function readLatitude<T>(A: Arithmetic<T>, lat: Numeric<T>, where: string
   checkHemisphere(lat, 'NS', where, 'latitude');
   const v = readAngle(A, lat, where);
   if (A.cmp(A.abs(v), A.from(90)) > 0) {
-    throw new QuadspreadError('LATITUDE_OUT_OF_RANGE', where, `${shownInput(A, lat, v)} is beyond ±90°`);
+    throw new QuadspreadError(
+      'LATITUDE_OUT_OF_RANGE',
+      where,
+      `${shownInput(A, lat, v)} is beyond ±90°`,
+    );
   }
   return v;
 }
@@ -84,10 +95,20 @@ export function readLongitude<T>(A: Arithmetic<T>, lon: Numeric<T>, where: strin
 }
 
 /** @internal An ellipsoidal height in metres (default 0), refused below −limit (−a unless said otherwise). */
-export function readHeight<T>(A: Arithmetic<T>, h: Numeric<T> | undefined, limit: T, where: string, name = 'a'): T {
+export function readHeight<T>(
+  A: Arithmetic<T>,
+  h: Numeric<T> | undefined,
+  limit: T,
+  where: string,
+  name = 'a',
+): T {
   const v = h === undefined ? A.zero : readNumber(A, h, where);
   if (A.cmp(v, A.neg(limit)) < 0) {
-    throw new QuadspreadError('HEIGHT_OUT_OF_RANGE', where, `${shownInput(A, h, v)} is below −${name} = −${A.toString(limit)} m`);
+    throw new QuadspreadError(
+      'HEIGHT_OUT_OF_RANGE',
+      where,
+      `${shownInput(A, h, v)} is below −${name} = −${A.toString(limit)} m`,
+    );
   }
   return v;
 }
@@ -115,10 +136,20 @@ export function decimalFor(digits: number): DecimalArithmetic {
 const uncertainDecimalMemo = new Map<number, Arithmetic<Uncertain<unknown>>>();
 
 /** An uncertain value moved to another base: the value and each derivative converted, the inputs kept. */
-function moveUncertain<S, R>(from: Arithmetic<S>, to: Arithmetic<R>, x: Uncertain<S>, digits: number | undefined): Uncertain<R> {
-  const text = (v: S): string => (digits === undefined ? from.toString(v) : from.toPrecision(v, digits));
+function moveUncertain<S, R>(
+  from: Arithmetic<S>,
+  to: Arithmetic<R>,
+  x: Uncertain<S>,
+  digits: number | undefined,
+): Uncertain<R> {
+  const text = (v: S): string =>
+    digits === undefined ? from.toString(v) : from.toPrecision(v, digits);
   const ders = x.derivatives.map((c) => to.from(text(c)));
-  return new Uncertain(to.from(text(x.value)), x.inputs as unknown as readonly Uncertain<R>['inputs'][number][], ders);
+  return new Uncertain(
+    to.from(text(x.value)),
+    x.inputs as unknown as readonly Uncertain<R>['inputs'][number][],
+    ders,
+  );
 }
 
 /**
@@ -128,11 +159,18 @@ function moveUncertain<S, R>(from: Arithmetic<S>, to: Arithmetic<R>, x: Uncertai
  * (they were dropped when values crossed as text). `to` carries a value of `A` over
  * (rounded to digits + 4), `back` reads a result back exactly.
  */
-export function delegateFor<T>(A: Arithmetic<T>, digits: number): { D: Arithmetic<unknown>; to: (x: T) => unknown; back: (y: unknown) => T } {
+export function delegateFor<T>(
+  A: Arithmetic<T>,
+  digits: number,
+): { D: Arithmetic<unknown>; to: (x: T) => unknown; back: (y: unknown) => T } {
   const Dd = decimalFor(digits) as unknown as Arithmetic<unknown>;
   const base = (A as { base?: Arithmetic<unknown> }).base;
   if (base === undefined) {
-    return { D: Dd, to: (x) => Dd.from(A.toPrecision(x, digits + 4)), back: (y) => A.from(Dd.toString(y)) };
+    return {
+      D: Dd,
+      to: (x) => Dd.from(A.toPrecision(x, digits + 4)),
+      back: (y) => A.from(Dd.toString(y)),
+    };
   }
   let UD = uncertainDecimalMemo.get(digits);
   if (UD === undefined) {
@@ -154,7 +192,11 @@ export function delegateFor<T>(A: Arithmetic<T>, digits: number): { D: Arithmeti
 export function roundExact<T>(A: Arithmetic<T>, x: T, digits: number): T {
   const base = (A as { base?: Arithmetic<unknown> }).base;
   if (base !== undefined && x instanceof Uncertain) {
-    return new Uncertain(base.from(base.toPrecision(x.value, digits)), x.inputs, x.derivatives) as unknown as T;
+    return new Uncertain(
+      base.from(base.toPrecision(x.value, digits)),
+      x.inputs,
+      x.derivatives,
+    ) as unknown as T;
   }
   return A.from(A.toPrecision(x, digits));
 }

@@ -36,7 +36,11 @@ function setup<T>(A: Arithmetic<T>, lat: Numeric<T>, ellipsoid: Ellipsoid | stri
  * //=> '6335439.3271'
  * ```
  */
-export function meridianRadius<T>(A: Arithmetic<T>, lat: Numeric<T>, ellipsoid: Ellipsoid | string): T {
+export function meridianRadius<T>(
+  A: Arithmetic<T>,
+  lat: Numeric<T>,
+  ellipsoid: Ellipsoid | string,
+): T {
   const { E, W2, W } = setup(A, lat, ellipsoid, 'meridianRadius');
   return A.div(A.mul(E.a, A.sub(A.one, E.e2)), A.mul(W2, W)); // M = a(1 − e²)/W³
 }
@@ -57,7 +61,11 @@ export function meridianRadius<T>(A: Arithmetic<T>, lat: Numeric<T>, ellipsoid: 
  * //=> 6378137
  * ```
  */
-export function primeVerticalRadius<T>(A: Arithmetic<T>, lat: Numeric<T>, ellipsoid: Ellipsoid | string): T {
+export function primeVerticalRadius<T>(
+  A: Arithmetic<T>,
+  lat: Numeric<T>,
+  ellipsoid: Ellipsoid | string,
+): T {
   const { E, W } = setup(A, lat, ellipsoid, 'primeVerticalRadius');
   return A.div(E.a, W); // N = a/W
 }
@@ -81,7 +89,12 @@ export function primeVerticalRadius<T>(A: Arithmetic<T>, lat: Numeric<T>, ellips
  * //=> true
  * ```
  */
-export function radiusInAzimuth<T>(A: Arithmetic<T>, lat: Numeric<T>, azimuth: Numeric<T>, ellipsoid: Ellipsoid | string): T {
+export function radiusInAzimuth<T>(
+  A: Arithmetic<T>,
+  lat: Numeric<T>,
+  azimuth: Numeric<T>,
+  ellipsoid: Ellipsoid | string,
+): T {
   const { E, W2, W } = setup(A, lat, ellipsoid, 'radiusInAzimuth');
   const { sin, cos } = sinCosDegrees(A, readAngle(A, azimuth, 'radiusInAzimuth(azimuth)'));
   const N = A.div(E.a, W);
@@ -107,7 +120,11 @@ export function radiusInAzimuth<T>(A: Arithmetic<T>, lat: Numeric<T>, azimuth: N
  * //=> '6399593.6259'
  * ```
  */
-export function gaussianMeanRadius<T>(A: Arithmetic<T>, lat: Numeric<T>, ellipsoid: Ellipsoid | string): T {
+export function gaussianMeanRadius<T>(
+  A: Arithmetic<T>,
+  lat: Numeric<T>,
+  ellipsoid: Ellipsoid | string,
+): T {
   const { E, W2 } = setup(A, lat, ellipsoid, 'gaussianMeanRadius');
   return A.div(A.mul(E.a, root(A, A.sub(A.one, E.e2))), W2); // √(MN) = a√(1 − e²)/W²
 }

@@ -26,7 +26,12 @@ import { finiteResult, readNumber, readQuadrance, readSpread } from './validate.
  * //=> '0'
  * ```
  */
-export function pythagorasResidual<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Numeric<T>, Q3: Numeric<T>): T {
+export function pythagorasResidual<T>(
+  A: Arithmetic<T>,
+  Q1: Numeric<T>,
+  Q2: Numeric<T>,
+  Q3: Numeric<T>,
+): T {
   const w = 'pythagorasResidual(A, Q1, Q2, Q3)';
   const a = readQuadrance(A, Q1, w, 'Q1');
   const b = readQuadrance(A, Q2, w, 'Q2');
@@ -56,7 +61,15 @@ export function pythagorasResidual<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Nume
  */
 export function quadrea<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Numeric<T>, Q3: Numeric<T>): T {
   const w = 'quadrea(A, Q1, Q2, Q3)';
-  return finiteResult(archimedes(A, readQuadrance(A, Q1, w, 'Q1'), readQuadrance(A, Q2, w, 'Q2'), readQuadrance(A, Q3, w, 'Q3')), w);
+  return finiteResult(
+    archimedes(
+      A,
+      readQuadrance(A, Q1, w, 'Q1'),
+      readQuadrance(A, Q2, w, 'Q2'),
+      readQuadrance(A, Q3, w, 'Q3'),
+    ),
+    w,
+  );
 }
 
 function archimedes<T>(A: Arithmetic<T>, a: T, b: T, c: T): T {
@@ -84,10 +97,23 @@ function archimedes<T>(A: Arithmetic<T>, a: T, b: T, c: T): T {
  * //=> '0'
  * ```
  */
-export function tripleQuadResidual<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Numeric<T>, Q3: Numeric<T>): T {
+export function tripleQuadResidual<T>(
+  A: Arithmetic<T>,
+  Q1: Numeric<T>,
+  Q2: Numeric<T>,
+  Q3: Numeric<T>,
+): T {
   const w = 'tripleQuadResidual(A, Q1, Q2, Q3)';
   // Triple quad formula: three points are collinear exactly when Heron's area is zero (Heron, Metrica I.8; derived).
-  return finiteResult(archimedes(A, readQuadrance(A, Q1, w, 'Q1'), readQuadrance(A, Q2, w, 'Q2'), readQuadrance(A, Q3, w, 'Q3')), w);
+  return finiteResult(
+    archimedes(
+      A,
+      readQuadrance(A, Q1, w, 'Q1'),
+      readQuadrance(A, Q2, w, 'Q2'),
+      readQuadrance(A, Q3, w, 'Q3'),
+    ),
+    w,
+  );
 }
 
 /**
@@ -108,9 +134,20 @@ export function tripleQuadResidual<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Nume
  * //=> '0'
  * ```
  */
-export function archimedesResidual<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Numeric<T>, Q3: Numeric<T>, area: Numeric<T>): T {
+export function archimedesResidual<T>(
+  A: Arithmetic<T>,
+  Q1: Numeric<T>,
+  Q2: Numeric<T>,
+  Q3: Numeric<T>,
+  area: Numeric<T>,
+): T {
   const w = 'archimedesResidual(A, Q1, Q2, Q3, area)';
-  const q = archimedes(A, readQuadrance(A, Q1, w, 'Q1'), readQuadrance(A, Q2, w, 'Q2'), readQuadrance(A, Q3, w, 'Q3'));
+  const q = archimedes(
+    A,
+    readQuadrance(A, Q1, w, 'Q1'),
+    readQuadrance(A, Q2, w, 'Q2'),
+    readQuadrance(A, Q3, w, 'Q3'),
+  );
   const s = readNumber(A, area, w, ' area');
   // Archimedes' formula, quadrea = 16·area²: Heron's formula in quadrances (Heron, Metrica I.8; derived).
   return finiteResult(A.sub(q, A.mul(A.from(16), A.mul(s, s))), w);
@@ -135,7 +172,13 @@ export function archimedesResidual<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Nume
  * //=> '0'
  * ```
  */
-export function spreadLawResidual<T>(A: Arithmetic<T>, Qa: Numeric<T>, sa: Numeric<T>, Qb: Numeric<T>, sb: Numeric<T>): T {
+export function spreadLawResidual<T>(
+  A: Arithmetic<T>,
+  Qa: Numeric<T>,
+  sa: Numeric<T>,
+  Qb: Numeric<T>,
+  sb: Numeric<T>,
+): T {
   const w = 'spreadLawResidual(A, Qa, sa, Qb, sb)';
   const qa = readQuadrance(A, Qa, w, 'Qa');
   const a = readSpread(A, sa, w, 'sa');
@@ -164,7 +207,13 @@ export function spreadLawResidual<T>(A: Arithmetic<T>, Qa: Numeric<T>, sa: Numer
  * //=> '0'
  * ```
  */
-export function crossLawResidual<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Numeric<T>, Q3: Numeric<T>, s3: Numeric<T>): T {
+export function crossLawResidual<T>(
+  A: Arithmetic<T>,
+  Q1: Numeric<T>,
+  Q2: Numeric<T>,
+  Q3: Numeric<T>,
+  s3: Numeric<T>,
+): T {
   const w = 'crossLawResidual(A, Q1, Q2, Q3, s3)';
   const a = readQuadrance(A, Q1, w, 'Q1');
   const b = readQuadrance(A, Q2, w, 'Q2');
@@ -193,7 +242,12 @@ export function crossLawResidual<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Numeri
  * //=> '0'
  * ```
  */
-export function tripleSpreadResidual<T>(A: Arithmetic<T>, s1: Numeric<T>, s2: Numeric<T>, s3: Numeric<T>): T {
+export function tripleSpreadResidual<T>(
+  A: Arithmetic<T>,
+  s1: Numeric<T>,
+  s2: Numeric<T>,
+  s3: Numeric<T>,
+): T {
   const w = 'tripleSpreadResidual(A, s1, s2, s3)';
   const a = readSpread(A, s1, w, 's1');
   const b = readSpread(A, s2, w, 's2');

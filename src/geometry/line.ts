@@ -48,9 +48,16 @@ export interface Line<T> {
  */
 export function line<T>(A: Arithmetic<T>, a: Numeric<T>, b: Numeric<T>, c: Numeric<T>): Line<T> {
   const w = 'line(A, a, b, c)';
-  const l = { a: readNumber(A, a, w, ' a'), b: readNumber(A, b, w, ' b'), c: readNumber(A, c, w, ' c') };
+  const l = {
+    a: readNumber(A, a, w, ' a'),
+    b: readNumber(A, b, w, ' b'),
+    c: readNumber(A, c, w, ' c'),
+  };
   if (A.isZero(l.a) && A.isZero(l.b)) {
-    throw degenerateLine(w, `a and b are both zero (c = ${show(A.toString(l.c))}), which is no line`);
+    throw degenerateLine(
+      w,
+      `a and b are both zero (c = ${show(A.toString(l.c))}), which is no line`,
+    );
   }
   return l;
 }
@@ -79,7 +86,10 @@ export function lineThrough<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): Line
   const a = finiteResult(A.sub(P.y, Q.y), where);
   const b = finiteResult(A.sub(Q.x, P.x), where);
   if (A.isZero(a) && A.isZero(b)) {
-    throw coincidentPoints(where, `P and Q coincide at (${show(A.toString(P.x))}, ${show(A.toString(P.y))})`);
+    throw coincidentPoints(
+      where,
+      `P and Q coincide at (${show(A.toString(P.x))}, ${show(A.toString(P.y))})`,
+    );
   }
   return { a, b, c: finiteResult(A.sub(A.mul(P.x, Q.y), A.mul(Q.x, P.y)), where) };
 }
@@ -163,7 +173,8 @@ export function isPerpendicular<T>(A: Arithmetic<T>, l1: Line<T>, l2: Line<T>): 
  */
 export function footOfPerpendicular<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>): Point<T> {
   const n = A.add(A.mul(l.a, l.a), A.mul(l.b, l.b));
-  if (A.isZero(n)) throw degenerateLine('footOfPerpendicular(A, P, l)', 'l has a = b = 0, which is no line');
+  if (A.isZero(n))
+    throw degenerateLine('footOfPerpendicular(A, P, l)', 'l has a = b = 0, which is no line');
   // Orthogonal projection onto a·x + b·y + c = 0 (common practice; derived from the normal vector (a, b)).
   const k = A.div(A.add(A.add(A.mul(l.a, P.x), A.mul(l.b, P.y)), l.c), n);
   return { x: A.sub(P.x, A.mul(k, l.a)), y: A.sub(P.y, A.mul(k, l.b)) };
@@ -187,7 +198,8 @@ export function footOfPerpendicular<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>
  */
 export function quadranceToLine<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>): T {
   const n = A.add(A.mul(l.a, l.a), A.mul(l.b, l.b));
-  if (A.isZero(n)) throw degenerateLine('quadranceToLine(A, P, l)', 'l has a = b = 0, which is no line');
+  if (A.isZero(n))
+    throw degenerateLine('quadranceToLine(A, P, l)', 'l has a = b = 0, which is no line');
   // Point-to-line distance |a·x + b·y + c|/√(a² + b²), squared (common practice; derived).
   const v = A.add(A.add(A.mul(l.a, P.x), A.mul(l.b, P.y)), l.c);
   return A.div(A.mul(v, v), n);
@@ -212,8 +224,10 @@ export function quadranceToLine<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>): T
 export function spreadOfLines<T>(A: Arithmetic<T>, l1: Line<T>, l2: Line<T>): T {
   const n1 = A.add(A.mul(l1.a, l1.a), A.mul(l1.b, l1.b));
   const n2 = A.add(A.mul(l2.a, l2.a), A.mul(l2.b, l2.b));
-  if (A.isZero(n1)) throw degenerateLine('spreadOfLines(A, l1, l2)', 'l1 has a = b = 0, which is no line');
-  if (A.isZero(n2)) throw degenerateLine('spreadOfLines(A, l1, l2)', 'l2 has a = b = 0, which is no line');
+  if (A.isZero(n1))
+    throw degenerateLine('spreadOfLines(A, l1, l2)', 'l1 has a = b = 0, which is no line');
+  if (A.isZero(n2))
+    throw degenerateLine('spreadOfLines(A, l1, l2)', 'l2 has a = b = 0, which is no line');
   // Spread of two lines: sin² of the angle between their normals (a1, b1), (a2, b2) (derived, as for two vectors).
   const c = A.sub(A.mul(l1.a, l2.b), A.mul(l2.a, l1.b));
   return atMostOne(A, A.div(A.mul(c, c), A.mul(n1, n2)));

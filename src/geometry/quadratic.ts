@@ -30,14 +30,22 @@ import { readNumber } from './validate.js';
  * //=> ['41 - 20√2', '41 + 20√2']
  * ```
  */
-export function solveQuadratic<T, E extends boolean>(A: Arithmetic<T, E>, a: Numeric<T>, b: Numeric<T>, c: Numeric<T>): Root<T, E>[] {
+export function solveQuadratic<T, E extends boolean>(
+  A: Arithmetic<T, E>,
+  a: Numeric<T>,
+  b: Numeric<T>,
+  c: Numeric<T>,
+): Root<T, E>[] {
   const w = 'solveQuadratic(A, a, b, c)';
   const qa = readNumber(A, a, w, ' a');
   const qb = readNumber(A, b, w, ' b');
   const qc = readNumber(A, c, w, ' c');
   if (A.isZero(qa)) {
     if (A.isZero(qb)) {
-      throw invalidArgument(w, `a and b are both zero (c = ${show(A.toString(qc))}): no equation in x`);
+      throw invalidArgument(
+        w,
+        `a and b are both zero (c = ${show(A.toString(qc))}): no equation in x`,
+      );
     }
     const x = A.neg(A.div(qc, qb));
     return [(A.exact ? surd(A, x) : x) as Root<T, E>];
@@ -61,7 +69,11 @@ export function solveQuadratic<T, E extends boolean>(A: Arithmetic<T, E>, a: Num
   }
   if (sd === 0) return [A.div(A.neg(qb), A.mul(two, qa)) as Root<T, E>];
   const r = A.sqrt(disc);
-  if (r === undefined) throw unsupportedOperation('solveQuadratic(A, a, b, c)', `${A.name} has no square root of ${show(A.toString(disc))}`);
+  if (r === undefined)
+    throw unsupportedOperation(
+      'solveQuadratic(A, a, b, c)',
+      `${A.name} has no square root of ${show(A.toString(disc))}`,
+    );
   const q = A.div(A.neg(A.sign(qb) < 0 ? A.sub(qb, r) : A.add(qb, r)), two);
   const x1 = A.div(q, qa);
   const x2 = A.div(qc, q);

@@ -63,7 +63,11 @@ function valueField<T>(A: Arithmetic<T>): Field<T, T> {
     unit: (x) => atMostOne(A, x),
     pair(base, d, prod) {
       const r = A.sqrt(d);
-      if (r === undefined) throw unsupportedOperation('solveTriangle(A, known)', `${A.name} has no square root of ${show(A.toString(d))}`);
+      if (r === undefined)
+        throw unsupportedOperation(
+          'solveTriangle(A, known)',
+          `${A.name} has no square root of ${show(A.toString(d))}`,
+        );
       const r2 = A.add(r, r);
       if (A.sign(base) >= 0) {
         const hi = A.add(base, r2);
@@ -115,11 +119,16 @@ const KEYS = ['Q1', 'Q2', 'Q3', 's1', 's2', 's3'] as const;
  * //=> ['41 - 20√2', '41 + 20√2']
  * ```
  */
-export function solveTriangle<T, E extends boolean>(A: Arithmetic<T, E>, known: TriangleMeasures<Numeric<T>>): Triangle<Root<T, E>>[] {
+export function solveTriangle<T, E extends boolean>(
+  A: Arithmetic<T, E>,
+  known: TriangleMeasures<Numeric<T>>,
+): Triangle<Root<T, E>>[] {
   const w = 'solveTriangle(A, known)';
-  if (typeof known !== 'object' || known === null) throw invalidArgument(w, `known = ${show(known)} is not an object`);
+  if (typeof known !== 'object' || known === null)
+    throw invalidArgument(w, `known = ${show(known)} is not an object`);
   for (const k of Object.keys(known)) {
-    if (!(KEYS as readonly string[]).includes(k)) throw invalidArgument(w, `unknown measure ${show(k)}; use Q1, Q2, Q3, s1, s2, s3`);
+    if (!(KEYS as readonly string[]).includes(k))
+      throw invalidArgument(w, `unknown measure ${show(k)}; use Q1, Q2, Q3, s1, s2, s3`);
   }
   const Q: (T | undefined)[] = [];
   const s: (T | undefined)[] = [];
@@ -133,18 +142,39 @@ export function solveTriangle<T, E extends boolean>(A: Arithmetic<T, E>, known: 
   }
   if (count !== 3) throw invalidArgument(w, `give exactly three measures; ${count} given`);
   const nq = Q.filter((x) => x !== undefined).length;
-  if (nq === 0) throw new QuadspreadError('NEEDS_A_QUADRANCE', w, 'three spreads fix a triangle only up to scale: give a quadrance');
+  if (nq === 0)
+    throw new QuadspreadError(
+      'NEEDS_A_QUADRANCE',
+      w,
+      'three spreads fix a triangle only up to scale: give a quadrance',
+    );
   // A proper triangle has no zero quadrance or spread.
-  for (let i = 0; i < 3; i++) if ((Q[i] !== undefined && A.isZero(Q[i]!)) || (s[i] !== undefined && A.isZero(s[i]!))) return [];
+  for (let i = 0; i < 3; i++)
+    if ((Q[i] !== undefined && A.isZero(Q[i]!)) || (s[i] !== undefined && A.isZero(s[i]!)))
+      return [];
   const F = (A.exact ? surdField(A) : valueField(A)) as unknown as Field<T, Root<T, E>>;
   return solve(A, F, Q, s, nq);
 }
 
-function solve<T, R>(A: Arithmetic<T>, F: Field<T, R>, Q: (T | undefined)[], s: (T | undefined)[], nq: number): Triangle<R>[] {
+function solve<T, R>(
+  A: Arithmetic<T>,
+  F: Field<T, R>,
+  Q: (T | undefined)[],
+  s: (T | undefined)[],
+  nq: number,
+): Triangle<R>[] {
   const two = A.from(2);
   const four = A.from(4);
   // quadrea is a product of quadrances: in float it can overflow where the sides do not.
-  const make = (q: R[], p: R[], quadrea: R): Triangle<R> => ({ Q1: q[0]!, Q2: q[1]!, Q3: q[2]!, s1: p[0]!, s2: p[1]!, s3: p[2]!, quadrea: finiteResult(quadrea, 'solveTriangle(A, known)') });
+  const make = (q: R[], p: R[], quadrea: R): Triangle<R> => ({
+    Q1: q[0]!,
+    Q2: q[1]!,
+    Q3: q[2]!,
+    s1: p[0]!,
+    s2: p[1]!,
+    s3: p[2]!,
+    quadrea: finiteResult(quadrea, 'solveTriangle(A, known)'),
+  });
 
   if (nq === 3) {
     const [a, b, c] = Q as T[];
@@ -155,7 +185,9 @@ function solve<T, R>(A: Arithmetic<T>, F: Field<T, R>, Q: (T | undefined)[], s: 
     if (A.sign(qd) <= 0) return [];
     // quadrea = 4·Qj·Qk·si (cross law with the spread at Ai between sides Qj, Qk; derived).
     const sp = (x: T, y: T) => F.unit(F.lift(A.div(qd, A.mul(four, A.mul(x, y)))));
-    return [make([F.lift(a!), F.lift(b!), F.lift(c!)], [sp(b!, c!), sp(a!, c!), sp(a!, b!)], F.lift(qd))];
+    return [
+      make([F.lift(a!), F.lift(b!), F.lift(c!)], [sp(b!, c!), sp(a!, c!), sp(a!, b!)], F.lift(qd)),
+    ];
   }
 
   if (nq === 2) {
@@ -174,14 +206,18 @@ function solve<T, R>(A: Arithmetic<T>, F: Field<T, R>, Q: (T | undefined)[], s: 
       const quadrea = F.lift(A.mul(four, A.mul(A.mul(Qi, Qj), sk)));
       // The product of the two roots is (Qi − Qj)² + 4 Qi Qj sk (derived).
       const dq = A.sub(Qi, Qj);
-      const candidates = A.isZero(d) ? [F.lift(base)] : F.pair(base, d, A.add(A.mul(dq, dq), A.mul(four, A.mul(A.mul(Qi, Qj), sk))));
+      const candidates = A.isZero(d)
+        ? [F.lift(base)]
+        : F.pair(base, d, A.add(A.mul(dq, dq), A.mul(four, A.mul(A.mul(Qi, Qj), sk))));
       for (const Qk of candidates) {
         if (F.sign(Qk) <= 0) continue;
         // Spread law si/Qi = sk/Qk: the law of sines, squared (derived).
         const skR = F.lift(sk);
         const q: R[] = [];
         const p: R[] = [];
-        q[i] = F.lift(Qi); q[j] = F.lift(Qj); q[k] = Qk;
+        q[i] = F.lift(Qi);
+        q[j] = F.lift(Qj);
+        q[k] = Qk;
         p[k] = skR;
         p[i] = F.unit(F.div(F.mul(skR, F.lift(Qi)), Qk));
         p[j] = F.unit(F.div(F.mul(skR, F.lift(Qj)), Qk));
@@ -211,8 +247,12 @@ function solve<T, R>(A: Arithmetic<T>, F: Field<T, R>, Q: (T | undefined)[], s: 
       const sk = F.unit(F.div(F.mul(saR, Qk), F.lift(Qa))); // spread law sk/Qk = sa/Qa
       const q: R[] = [];
       const p: R[] = [];
-      q[ia] = F.lift(Qa); q[ib] = F.lift(Qb); q[k] = Qk;
-      p[ia] = saR; p[ib] = F.unit(F.lift(sb)); p[k] = sk;
+      q[ia] = F.lift(Qa);
+      q[ib] = F.lift(Qb);
+      q[k] = Qk;
+      p[ia] = saR;
+      p[ib] = F.unit(F.lift(sb));
+      p[k] = sk;
       // quadrea = 4·Qa·Qb·sk (the vertex A_k lies between the sides Qa and Qb).
       out.push(make(q, p, F.mul(F.lift(A.mul(four, A.mul(Qa, Qb))), sk)));
     }
@@ -238,7 +278,9 @@ function solve<T, R>(A: Arithmetic<T>, F: Field<T, R>, Q: (T | undefined)[], s: 
   for (const sc of candidates) {
     if (F.sign(sc) <= 0) continue;
     const p: R[] = [];
-    p[a] = F.lift(sa); p[b] = F.lift(sb); p[c] = F.unit(sc);
+    p[a] = F.lift(sa);
+    p[b] = F.lift(sb);
+    p[c] = F.unit(sc);
     // Spread law Qj = Qi·sj/si: the law of sines, squared (derived).
     const ratio = F.div(Qi, p[i]!);
     const q: R[] = [];

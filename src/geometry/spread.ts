@@ -13,7 +13,17 @@ import { atMostOne } from './validate.js';
  * cross), clamped to 1; a zero u or v is refused naming the point U or W it came from (P or
  * Q), or u or v for bare vectors (U, W undefined).
  */
-function ratio<T>(A: Arithmetic<T>, ux: T, uy: T, vx: T, vy: T, dot: boolean, where: string, U: Point<T> | undefined, W: Point<T> | undefined): T {
+function ratio<T>(
+  A: Arithmetic<T>,
+  ux: T,
+  uy: T,
+  vx: T,
+  vy: T,
+  dot: boolean,
+  where: string,
+  U: Point<T> | undefined,
+  W: Point<T> | undefined,
+): T {
   const qu = A.add(A.mul(ux, ux), A.mul(uy, uy));
   const qv = A.add(A.mul(vx, vx), A.mul(vy, vy));
   if (A.isZero(qu)) zero(A, where, U === undefined ? 'u' : 'P', U);
@@ -25,8 +35,12 @@ function ratio<T>(A: Arithmetic<T>, ux: T, uy: T, vx: T, vy: T, dot: boolean, wh
 }
 
 function zero<T>(A: Arithmetic<T>, where: string, arg: string, P: Point<T> | undefined): never {
-  if (P === undefined) throw coincidentPoints(where, `${arg} is the zero vector, so it has no direction`);
-  throw coincidentPoints(where, `${arg} = (${show(A.toString(P.x))}, ${show(A.toString(P.y))}) coincides with the vertex V, so the line is undefined`);
+  if (P === undefined)
+    throw coincidentPoints(where, `${arg} is the zero vector, so it has no direction`);
+  throw coincidentPoints(
+    where,
+    `${arg} = (${show(A.toString(P.x))}, ${show(A.toString(P.y))}) coincides with the vertex V, so the line is undefined`,
+  );
 }
 
 /**
@@ -49,7 +63,17 @@ function zero<T>(A: Arithmetic<T>, where: string, arg: string, P: Point<T> | und
  * ```
  */
 export function spread<T>(A: Arithmetic<T>, V: Point<T>, P: Point<T>, Q: Point<T>): T {
-  return ratio(A, A.sub(P.x, V.x), A.sub(P.y, V.y), A.sub(Q.x, V.x), A.sub(Q.y, V.y), false, 'spread(A, V, P, Q)', P, Q);
+  return ratio(
+    A,
+    A.sub(P.x, V.x),
+    A.sub(P.y, V.y),
+    A.sub(Q.x, V.x),
+    A.sub(Q.y, V.y),
+    false,
+    'spread(A, V, P, Q)',
+    P,
+    Q,
+  );
 }
 
 /**
@@ -72,7 +96,17 @@ export function spread<T>(A: Arithmetic<T>, V: Point<T>, P: Point<T>, Q: Point<T
  * ```
  */
 export function cross<T>(A: Arithmetic<T>, V: Point<T>, P: Point<T>, Q: Point<T>): T {
-  return ratio(A, A.sub(P.x, V.x), A.sub(P.y, V.y), A.sub(Q.x, V.x), A.sub(Q.y, V.y), true, 'cross(A, V, P, Q)', P, Q);
+  return ratio(
+    A,
+    A.sub(P.x, V.x),
+    A.sub(P.y, V.y),
+    A.sub(Q.x, V.x),
+    A.sub(Q.y, V.y),
+    true,
+    'cross(A, V, P, Q)',
+    P,
+    Q,
+  );
 }
 
 /**

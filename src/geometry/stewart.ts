@@ -103,7 +103,18 @@ function stewartQ<T>(A: Arithmetic<T>, QB: T, QC: T, QD: T, QBD: T, QBC: T): T {
 export function stewartResidual<T>(A: Arithmetic<T>, data: StewartChainages<Numeric<T>>): T {
   const w = 'stewartResidual(A, data)';
   checkData(data, w);
-  return finiteResult(stewart(A, readQuadrance(A, data.QB, w, 'QB'), readQuadrance(A, data.QC, w, 'QC'), readQuadrance(A, data.QD, w, 'QD'), readNumber(A, data.tB, w, ' tB'), readNumber(A, data.tC, w, ' tC'), readNumber(A, data.tD, w, ' tD')), w);
+  return finiteResult(
+    stewart(
+      A,
+      readQuadrance(A, data.QB, w, 'QB'),
+      readQuadrance(A, data.QC, w, 'QC'),
+      readQuadrance(A, data.QD, w, 'QD'),
+      readNumber(A, data.tB, w, ' tB'),
+      readNumber(A, data.tC, w, ' tC'),
+      readNumber(A, data.tD, w, ' tD'),
+    ),
+    w,
+  );
 }
 
 /**
@@ -122,22 +133,39 @@ export function stewartResidual<T>(A: Arithmetic<T>, data: StewartChainages<Nume
  * //=> '0'
  * ```
  */
-export function stewartQuadranceResidual<T>(A: Arithmetic<T>, data: StewartQuadrances<Numeric<T>>): T {
+export function stewartQuadranceResidual<T>(
+  A: Arithmetic<T>,
+  data: StewartQuadrances<Numeric<T>>,
+): T {
   const w = 'stewartQuadranceResidual(A, data)';
   checkData(data, w);
-  return finiteResult(stewartQ(A, readQuadrance(A, data.QB, w, 'QB'), readQuadrance(A, data.QC, w, 'QC'), readQuadrance(A, data.QD, w, 'QD'), readQuadrance(A, data.QBD, w, 'QBD'), readQuadrance(A, data.QBC, w, 'QBC')), w);
+  return finiteResult(
+    stewartQ(
+      A,
+      readQuadrance(A, data.QB, w, 'QB'),
+      readQuadrance(A, data.QC, w, 'QC'),
+      readQuadrance(A, data.QD, w, 'QD'),
+      readQuadrance(A, data.QBD, w, 'QBD'),
+      readQuadrance(A, data.QBC, w, 'QBC'),
+    ),
+    w,
+  );
 }
 
 /** Checks that `data` is an object (the members are read from it). */
 function checkData(data: unknown, where: string): void {
-  if (data === null || typeof data !== 'object') throw invalidArgument(where, `data = ${show(data)} is not an object`);
+  if (data === null || typeof data !== 'object')
+    throw invalidArgument(where, `data = ${show(data)} is not an object`);
 }
 
 /** The one missing key of `data` among `keys`; throws unless exactly one is missing. */
 function missingKey(data: Record<string, unknown>, keys: readonly string[], where: string): string {
   const missing = keys.filter((k) => data[k] === undefined);
   if (missing.length !== 1) {
-    throw invalidArgument(where, `give all of ${keys.join(', ')} but one; ${missing.length === 0 ? 'none is' : `${missing.join(', ')} are`} missing`);
+    throw invalidArgument(
+      where,
+      `give all of ${keys.join(', ')} but one; ${missing.length === 0 ? 'none is' : `${missing.join(', ')} are`} missing`,
+    );
   }
   return missing[0]!;
 }
@@ -146,17 +174,41 @@ function missingKey(data: Record<string, unknown>, keys: readonly string[], wher
  * The roots of a·x² + b·x + c = 0 (coefficients written out per unknown, so that rounded
  * arithmetic sees no cancellation from sampling); throws when every x satisfies it.
  */
-function roots<T, E extends boolean>(A: Arithmetic<T, E>, a: T, b: T, c: T, where: string): Root<T, E>[] {
+function roots<T, E extends boolean>(
+  A: Arithmetic<T, E>,
+  a: T,
+  b: T,
+  c: T,
+  where: string,
+): Root<T, E>[] {
   if (A.isZero(a) && A.isZero(b)) {
-    if (A.isZero(c)) throw invalidArgument(where, 'the other values do not fix the unknown (every value satisfies the relation)');
+    if (A.isZero(c))
+      throw invalidArgument(
+        where,
+        'the other values do not fix the unknown (every value satisfies the relation)',
+      );
     return [];
   }
   return solveQuadratic(A, a, b, c);
 }
 
 /** base + sign·r for each root r, kept in increasing order. */
-function shift<T, E extends boolean>(A: Arithmetic<T, E>, rs: Root<T, E>[], base: T, sign: 1 | -1): Root<T, E>[] {
-  const out = rs.map((r) => (isSurd(r) ? (sign > 0 ? (r as Surd<T>).add(base) : (r as Surd<T>).neg().add(base)) : sign > 0 ? A.add(base, r as T) : A.sub(base, r as T)) as Root<T, E>);
+function shift<T, E extends boolean>(
+  A: Arithmetic<T, E>,
+  rs: Root<T, E>[],
+  base: T,
+  sign: 1 | -1,
+): Root<T, E>[] {
+  const out = rs.map(
+    (r) =>
+      (isSurd(r)
+        ? sign > 0
+          ? (r as Surd<T>).add(base)
+          : (r as Surd<T>).neg().add(base)
+        : sign > 0
+          ? A.add(base, r as T)
+          : A.sub(base, r as T)) as Root<T, E>,
+  );
   return sign > 0 ? out : out.reverse();
 }
 
@@ -186,7 +238,10 @@ function nonNegative<T, E extends boolean>(A: Arithmetic<T, E>, rs: Root<T, E>[]
  * //=> ['43/7']
  * ```
  */
-export function solveStewart<T, E extends boolean>(A: Arithmetic<T, E>, data: Partial<StewartChainages<Numeric<T>>>): Root<T, E>[] {
+export function solveStewart<T, E extends boolean>(
+  A: Arithmetic<T, E>,
+  data: Partial<StewartChainages<Numeric<T>>>,
+): Root<T, E>[] {
   const w = 'solveStewart(A, data)';
   checkData(data, w);
   const key = missingKey(data as Record<string, unknown>, CHAINAGE_KEYS, w);
@@ -197,7 +252,11 @@ export function solveStewart<T, E extends boolean>(A: Arithmetic<T, E>, data: Pa
   }
   const ts = (['tB', 'tC', 'tD'] as const).filter((k) => k !== key);
   if (A.eq(v[ts[0]!]!, v[ts[1]!]!)) {
-    throw new QuadspreadError('REPEATED_CHAINAGE', w, `${ts[0]} and ${ts[1]} are both ${show(A.toString(v[ts[0]!]!))}: the points must differ`);
+    throw new QuadspreadError(
+      'REPEATED_CHAINAGE',
+      w,
+      `${ts[0]} and ${ts[1]} are both ${show(A.toString(v[ts[0]!]!))}: the points must differ`,
+    );
   }
   if (key[0] === 'Q') {
     // Linear in each quadrance: solve directly (the chainages differ, so the coefficient is not 0).
@@ -212,16 +271,31 @@ export function solveStewart<T, E extends boolean>(A: Arithmetic<T, E>, data: Pa
   if (key === 'tD') {
     // y = tD − tB, a = tC − tB: a·y² + (QC − QB − a²)·y + a·(QB − QD) = 0 (Stewart's relation expanded; derived).
     const a = A.sub(v.tC!, v.tB!);
-    return shift(A, roots(A, a, A.sub(A.sub(QC, QB), A.mul(a, a)), A.mul(a, A.sub(QB, QD)), w), v.tB!, 1);
+    return shift(
+      A,
+      roots(A, a, A.sub(A.sub(QC, QB), A.mul(a, a)), A.mul(a, A.sub(QB, QD)), w),
+      v.tB!,
+      1,
+    );
   }
   if (key === 'tB') {
     // y = tD − tB, n = tC − tD: −n·y² + (QC − QD − n²)·y + n·(QB − QD) = 0 (derived).
     const n = A.sub(v.tC!, v.tD!);
-    return shift(A, roots(A, A.neg(n), A.sub(A.sub(QC, QD), A.mul(n, n)), A.mul(n, A.sub(QB, QD)), w), v.tD!, -1);
+    return shift(
+      A,
+      roots(A, A.neg(n), A.sub(A.sub(QC, QD), A.mul(n, n)), A.mul(n, A.sub(QB, QD)), w),
+      v.tD!,
+      -1,
+    );
   }
   // key === 'tC': y = tC − tD, m = tD − tB: −m·y² + (QB − QD − m²)·y + m·(QC − QD) = 0 (derived).
   const m = A.sub(v.tD!, v.tB!);
-  return shift(A, roots(A, A.neg(m), A.sub(A.sub(QB, QD), A.mul(m, m)), A.mul(m, A.sub(QC, QD)), w), v.tD!, 1);
+  return shift(
+    A,
+    roots(A, A.neg(m), A.sub(A.sub(QB, QD), A.mul(m, m)), A.mul(m, A.sub(QC, QD)), w),
+    v.tD!,
+    1,
+  );
 }
 
 /**
@@ -242,7 +316,10 @@ export function solveStewart<T, E extends boolean>(A: Arithmetic<T, E>, data: Pa
  * //=> ['43/7', '433/7']
  * ```
  */
-export function solveStewartQuadrances<T, E extends boolean>(A: Arithmetic<T, E>, data: Partial<StewartQuadrances<Numeric<T>>>): Root<T, E>[] {
+export function solveStewartQuadrances<T, E extends boolean>(
+  A: Arithmetic<T, E>,
+  data: Partial<StewartQuadrances<Numeric<T>>>,
+): Root<T, E>[] {
   const w = 'solveStewartQuadrances(A, data)';
   checkData(data, w);
   const key = missingKey(data as Record<string, unknown>, QUADRANCE_KEYS, w);
@@ -276,13 +353,19 @@ export function solveStewartQuadrances<T, E extends boolean>(A: Arithmetic<T, E>
       // x·u² − QBC·(x + k)², u = QB + QBC − QC, k = QB − QD
       const u = A.sub(A.add(QB, QBC), QC);
       const k = A.sub(QB, QD);
-      return nonNegative(A, roots(A, A.neg(QBC), A.sub(sq(u), A.mul(two, A.mul(QBC, k))), A.neg(A.mul(QBC, sq(k))), w));
+      return nonNegative(
+        A,
+        roots(A, A.neg(QBC), A.sub(sq(u), A.mul(two, A.mul(QBC, k))), A.neg(A.mul(QBC, sq(k))), w),
+      );
     }
     default: {
       // QBC = x: QBD·(x + j)² − x·v², j = QB − QC, v = QB + QBD − QD
       const j = A.sub(QB, QC);
       const vv = sq(A.sub(A.add(QB, QBD), QD));
-      return nonNegative(A, roots(A, QBD, A.sub(A.mul(two, A.mul(QBD, j)), vv), A.mul(QBD, sq(j)), w));
+      return nonNegative(
+        A,
+        roots(A, QBD, A.sub(A.mul(two, A.mul(QBD, j)), vv), A.mul(QBD, sq(j)), w),
+      );
     }
   }
 }

@@ -6,7 +6,15 @@
 import Fraction from 'fraction.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { isqrt } from '../arithmetic/exact.js';
-import { QuadspreadError, show, divisionByZero, notFinite, invalidArgument, noRealSolution, unsupportedOperation } from '../errors.js';
+import {
+  QuadspreadError,
+  show,
+  divisionByZero,
+  notFinite,
+  invalidArgument,
+  noRealSolution,
+  unsupportedOperation,
+} from '../errors.js';
 import { readNumber } from './validate.js';
 
 /**
@@ -166,7 +174,11 @@ class SurdValue<T> implements Surd<T> {
     if (A.isZero(this.b) || A.eq(Y.d, this.d)) return [Y.a, Y.b];
     const k = A.sqrt(A.div(Y.d, this.d));
     if (k !== undefined) return [Y.a, A.mul(Y.b, k)];
-    throw new QuadspreadError('DIFFERENT_RADICANDS', where, `${this.toString()} and ${Y.toString()} have different radicands (${A.toString(this.d)} and ${A.toString(Y.d)})`);
+    throw new QuadspreadError(
+      'DIFFERENT_RADICANDS',
+      where,
+      `${this.toString()} and ${Y.toString()} have different radicands (${A.toString(this.d)} and ${A.toString(Y.d)})`,
+    );
   }
 
   /** The radicand of a result combining this with y. */
@@ -240,12 +252,17 @@ class SurdValue<T> implements Surd<T> {
     const q = A.mul(A.mul(Y.b, Y.b), Y.d);
     const sb1 = A.sign(this.b);
     const sb2 = -A.sign(Y.b);
-    const sX: -1 | 0 | 1 = sb1 === sb2 ? sb1 : (A.cmp(p, q) * sb1) as -1 | 0 | 1;
+    const sX: -1 | 0 | 1 = sb1 === sb2 ? sb1 : ((A.cmp(p, q) * sb1) as -1 | 0 | 1);
     const su = A.sign(u);
     if (su === 0) return sX;
     if (sX === 0 || su === sX) return su;
     // u² − X² = (u² − p − q) + 2 b1 b2 √(d1 d2)
-    const r = signOf(A, A.sub(A.sub(A.mul(u, u), p), q), A.mul(A.from(2), A.mul(this.b, Y.b)), A.mul(this.d, Y.d));
+    const r = signOf(
+      A,
+      A.sub(A.sub(A.mul(u, u), p), q),
+      A.mul(A.from(2), A.mul(this.b, Y.b)),
+      A.mul(this.d, Y.d),
+    );
     return r > 0 ? su : r < 0 ? sX : 0;
   }
 
@@ -260,12 +277,16 @@ class SurdValue<T> implements Surd<T> {
       // Through 40 correctly rounded digits: works whatever the size of the radicand's
       // numerator and denominator (√(p/q) is kept as √(pq)/q, which may exceed JS range).
       const v = Number(this.toPrecision(40));
-      if (!Number.isFinite(v)) throw notFinite('Surd.toNumber()', `${show(this.toPrecision(12))} is beyond the range of a JS number`);
+      if (!Number.isFinite(v))
+        throw notFinite(
+          'Surd.toNumber()',
+          `${show(this.toPrecision(12))} is beyond the range of a JS number`,
+        );
       return v;
     }
     const a = A.toNumber(this.a);
     const bs = A.toNumber(this.b) * Math.sqrt(A.toNumber(this.d));
-    if (a === 0 || (a > 0) === (bs > 0)) return a + bs;
+    if (a === 0 || a > 0 === bs > 0) return a + bs;
     // Opposite signs: a + b√d = (a² − b²d)/(a − b√d), free of cancellation.
     const n = A.toNumber(A.sub(A.mul(this.a, this.a), A.mul(A.mul(this.b, this.b), this.d)));
     return n / (a - bs);
@@ -290,13 +311,20 @@ class SurdValue<T> implements Surd<T> {
   toPrecision(digits: number): string {
     const A = this.arithmetic;
     if (!Number.isInteger(digits) || digits < 1 || digits > 1000) {
-      throw invalidArgument('Surd.toPrecision(digits)', `digits ${show(digits)} is not an integer in 1..1000`);
+      throw invalidArgument(
+        'Surd.toPrecision(digits)',
+        `digits ${show(digits)} is not an integer in 1..1000`,
+      );
     }
     if (A.isZero(this.b)) return A.toPrecision(this.a, digits);
     const d = this.d;
     if (!A.exact) {
       const r = A.sqrt(d);
-      if (r === undefined) throw unsupportedOperation('Surd.toPrecision(digits)', `${A.name} has no square root of ${A.toString(d)}`);
+      if (r === undefined)
+        throw unsupportedOperation(
+          'Surd.toPrecision(digits)',
+          `${A.name} has no square root of ${A.toString(d)}`,
+        );
       return A.toPrecision(A.add(this.a, A.mul(this.b, r)), digits);
     }
     // Newton's iteration from above brackets √d: hi ≥ √d ≥ d/hi (AM–GM), the gap shrinking
@@ -322,13 +350,16 @@ class SurdValue<T> implements Surd<T> {
       if (tl === A.toPrecision(u, digits)) return tl;
       hi = A.div(A.add(hi, lo), two);
     }
-    throw new QuadspreadError('NOT_CONVERGED', 'Surd.toPrecision(digits)', `${this.toString()} did not settle to ${digits} digits`);
+    throw new QuadspreadError(
+      'NOT_CONVERGED',
+      'Surd.toPrecision(digits)',
+      `${this.toString()} did not settle to ${digits} digits`,
+    );
   }
 
   toJSON(): string {
     return this.toString();
   }
-
 }
 
 function signOf<T>(A: Arithmetic<T>, a: T, b: T, d: T): -1 | 0 | 1 {
@@ -380,13 +411,19 @@ export function isSurd(x: unknown): x is Surd<unknown> {
  * //=> ['1 + 30√2', '11', '√2/2']
  * ```
  */
-export function surd<T>(A: Arithmetic<T>, a: Numeric<T>, b: Numeric<T> = 0, d: Numeric<T> = 1): Surd<T> {
+export function surd<T>(
+  A: Arithmetic<T>,
+  a: Numeric<T>,
+  b: Numeric<T> = 0,
+  d: Numeric<T> = 1,
+): Surd<T> {
   const w = 'surd(A, a, b, d)';
   const ra = readNumber(A, a, w, ' a');
   let rb = readNumber(A, b, w, ' b');
   let rd = readNumber(A, d, w, ' d');
   if (A.isZero(rb) || A.isZero(rd)) return new SurdValue(A, ra, A.zero, A.one);
-  if (A.sign(rd) < 0) throw noRealSolution(w, `the radicand d = ${show(A.toString(rd))} is negative`);
+  if (A.sign(rd) < 0)
+    throw noRealSolution(w, `the radicand d = ${show(A.toString(rd))} is negative`);
   if ((rd as unknown) instanceof Fraction && (rb as unknown) instanceof Fraction) {
     // √(p/q) = √(pq)/q, then k²m → k√m for the primes below 1000.
     const f = rd as unknown as Fraction;
@@ -435,7 +472,11 @@ export function sqrtOf<T, E extends boolean>(A: Arithmetic<T, E>, x: Numeric<T>)
   if (A.sign(v) < 0) throw noRealSolution('sqrtOf(A, x)', `x = ${show(A.toString(v))} is negative`);
   if (A.exact) return surd(A, 0, 1, v) as Root<T, E>;
   const r = A.sqrt(v);
-  if (r === undefined) throw unsupportedOperation('sqrtOf(A, x)', `${A.name} has no square root of ${show(A.toString(v))}`);
+  if (r === undefined)
+    throw unsupportedOperation(
+      'sqrtOf(A, x)',
+      `${A.name} has no square root of ${show(A.toString(v))}`,
+    );
   return r as Root<T, E>;
 }
 
@@ -512,6 +553,10 @@ export function rootToString<T, E extends boolean>(A: Arithmetic<T, E>, r: Root<
  * //=> '1.4142135623730950488'
  * ```
  */
-export function rootToPrecision<T, E extends boolean>(A: Arithmetic<T, E>, r: Root<T, E>, digits: number): string {
+export function rootToPrecision<T, E extends boolean>(
+  A: Arithmetic<T, E>,
+  r: Root<T, E>,
+  digits: number,
+): string {
   return isSurd(r) ? (r as Surd<T>).toPrecision(digits) : A.toPrecision(r as T, digits);
 }

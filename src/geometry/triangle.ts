@@ -59,7 +59,12 @@ export interface Triangle<V> {
  * //=> ['25', '1', '9/25', '16/25', '576']
  * ```
  */
-export function triangle<T>(A: Arithmetic<T>, A1: Point<T>, A2: Point<T>, A3: Point<T>): Triangle<T> {
+export function triangle<T>(
+  A: Arithmetic<T>,
+  A1: Point<T>,
+  A2: Point<T>,
+  A3: Point<T>,
+): Triangle<T> {
   // Performance (docs/performance.md): an arithmetic's fused kernel, where it has one, computes
   // the same measures at once (exactly equal in rational; rounded once in decimal) and returns
   // undefined for degenerate input, which the generic code below reports.
@@ -94,10 +99,28 @@ export function triangle<T>(A: Arithmetic<T>, A1: Point<T>, A2: Point<T>, A3: Po
 // Kept out of triangle() so that its float copy stays small enough for V8 to inline
 // (docs/performance.md).
 function collinear<T>(A: Arithmetic<T>, A1: Point<T>): never {
-  throw new QuadspreadError('COLLINEAR_POINTS', 'triangle(A, A1, A2, A3)', `A1 (${show(A.toString(A1.x))}, ${show(A.toString(A1.y))}), A2 and A3 are collinear`);
+  throw new QuadspreadError(
+    'COLLINEAR_POINTS',
+    'triangle(A, A1, A2, A3)',
+    `A1 (${show(A.toString(A1.x))}, ${show(A.toString(A1.y))}), A2 and A3 are collinear`,
+  );
 }
 
-function coincident<T>(A: Arithmetic<T>, A1: Point<T>, A2: Point<T>, A3: Point<T>, Q1: T, Q2: T): never {
-  const [n1, n2, P] = A.isZero(Q1) ? ['A2', 'A3', A2] : A.isZero(Q2) ? ['A1', 'A3', A1] : ['A1', 'A2', A1];
-  throw coincidentPoints('triangle(A, A1, A2, A3)', `${n1} and ${n2} coincide at (${show(A.toString(P.x))}, ${show(A.toString(P.y))})`);
+function coincident<T>(
+  A: Arithmetic<T>,
+  A1: Point<T>,
+  A2: Point<T>,
+  A3: Point<T>,
+  Q1: T,
+  Q2: T,
+): never {
+  const [n1, n2, P] = A.isZero(Q1)
+    ? ['A2', 'A3', A2]
+    : A.isZero(Q2)
+      ? ['A1', 'A3', A1]
+      : ['A1', 'A2', A1];
+  throw coincidentPoints(
+    'triangle(A, A1, A2, A3)',
+    `${n1} and ${n2} coincide at (${show(A.toString(P.x))}, ${show(A.toString(P.y))})`,
+  );
 }

@@ -14,7 +14,12 @@ import { QuadspreadError, show, invalidArgument, negativeQuadrance, notFinite } 
  * @throws {QuadspreadError} `INVALID_NUMBER`, `INPUT_TOO_LONG` (the code of `A.from`).
  * @internal
  */
-export function readNumber<T>(A: Arithmetic<T>, x: Numeric<T>, where: string | (() => string), suffix = ''): T {
+export function readNumber<T>(
+  A: Arithmetic<T>,
+  x: Numeric<T>,
+  where: string | (() => string),
+  suffix = '',
+): T {
   try {
     return A.from(x);
   } catch (e) {
@@ -43,7 +48,11 @@ export function shownInput<T>(A: Arithmetic<T>, x: unknown, v: T): string {
  */
 export function finiteResult<T>(r: T, where: string): T {
   const v = typeof r === 'object' && r !== null ? (r as { value?: unknown }).value : r;
-  if (typeof v === 'number' && v - v !== 0) throw notFinite(where, `the result ${show(v)} is not finite: float overflowed (use decimal(n) for values this large) or an input was not a number`);
+  if (typeof v === 'number' && v - v !== 0)
+    throw notFinite(
+      where,
+      `the result ${show(v)} is not finite: float overflowed (use decimal(n) for values this large) or an input was not a number`,
+    );
   return r;
 }
 
@@ -54,8 +63,16 @@ export function finiteResult<T>(r: T, where: string): T {
  * @throws {QuadspreadError} `INVALID_ARGUMENT`: "… is not {shape}".
  * @internal
  */
-export function expectObject(x: unknown, where: string | (() => string), shape: string): asserts x is object {
-  if (x === null || typeof x !== 'object') throw invalidArgument(typeof where === 'string' ? where : where(), `${show(x)} is not ${shape}`);
+export function expectObject(
+  x: unknown,
+  where: string | (() => string),
+  shape: string,
+): asserts x is object {
+  if (x === null || typeof x !== 'object')
+    throw invalidArgument(
+      typeof where === 'string' ? where : where(),
+      `${show(x)} is not ${shape}`,
+    );
 }
 
 /**
@@ -65,7 +82,11 @@ export function expectObject(x: unknown, where: string | (() => string), shape: 
  */
 export function readQuadrance<T>(A: Arithmetic<T>, x: Numeric<T>, where: string, arg: string): T {
   const v = readNumber(A, x, where, ` ${arg}`);
-  if (A.sign(v) < 0) throw negativeQuadrance(where, `${arg} = ${show(A.toString(v))} is negative; a quadrance is a squared distance`);
+  if (A.sign(v) < 0)
+    throw negativeQuadrance(
+      where,
+      `${arg} = ${show(A.toString(v))} is negative; a quadrance is a squared distance`,
+    );
   return v;
 }
 
@@ -76,7 +97,12 @@ export function readQuadrance<T>(A: Arithmetic<T>, x: Numeric<T>, where: string,
  */
 export function readSpread<T>(A: Arithmetic<T>, x: Numeric<T>, where: string, arg: string): T {
   const v = readNumber(A, x, where, ` ${arg}`);
-  if (A.sign(v) < 0 || A.cmp(v, A.one) > 0) throw new QuadspreadError('SPREAD_OUT_OF_RANGE', where, `${arg} = ${show(A.toString(v))} is outside [0, 1]`);
+  if (A.sign(v) < 0 || A.cmp(v, A.one) > 0)
+    throw new QuadspreadError(
+      'SPREAD_OUT_OF_RANGE',
+      where,
+      `${arg} = ${show(A.toString(v))} is outside [0, 1]`,
+    );
   return v;
 }
 

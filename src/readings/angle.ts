@@ -29,8 +29,13 @@ export const ANGLE_UNITS: readonly AngleUnit[] = ['deg', 'gon', 'mil', 'rad'];
 
 /** @internal checks an angle unit, naming the function in the error. */
 export function checkAngleUnit(unit: unknown, where: string): AngleUnit {
-  if (typeof unit === 'string' && (ANGLE_UNITS as readonly string[]).includes(unit)) return unit as AngleUnit;
-  throw new QuadspreadError('INVALID_UNIT', where, `${show(unit)} is not an angle unit (use ${ANGLE_UNITS.map((u) => `'${u}'`).join(', ')})`);
+  if (typeof unit === 'string' && (ANGLE_UNITS as readonly string[]).includes(unit))
+    return unit as AngleUnit;
+  throw new QuadspreadError(
+    'INVALID_UNIT',
+    where,
+    `${show(unit)} is not an angle unit (use ${ANGLE_UNITS.map((u) => `'${u}'`).join(', ')})`,
+  );
 }
 
 const PLAIN_NUMBER = /^\s*[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?(\s*\/\s*\d+)?\s*$/;
@@ -68,8 +73,9 @@ function parseDms(original: string, where: string): DmsParts {
     const t = trail[1]!.toUpperCase();
     text = text.slice(0, text.length - trail[0].length);
     if (letter !== undefined) {
-      if ((letter === 'N' || letter === 'S') && (t === 'E' || t === 'W')) quadrant = { from: letter, to: t };
-      else bad('is not a quadrant bearing (write N or S first, then E or W, as in N 45°30\' E)');
+      if ((letter === 'N' || letter === 'S') && (t === 'E' || t === 'W'))
+        quadrant = { from: letter, to: t };
+      else bad("is not a quadrant bearing (write N or S first, then E or W, as in N 45°30' E)");
     } else letter = t;
   }
   const signMatch = /^([+-])\s*/.exec(text);
@@ -78,7 +84,8 @@ function parseDms(original: string, where: string): DmsParts {
     if (signMatch[1] === '-') sign = -1;
     text = text.slice(signMatch[0].length);
   }
-  if (letter !== undefined && quadrant === undefined && (letter === 'S' || letter === 'W')) sign = -1;
+  if (letter !== undefined && quadrant === undefined && (letter === 'S' || letter === 'W'))
+    sign = -1;
   const parts: DmsParts['parts'] = [];
   const marks: Record<string, number> = { '°': 0, "'": 1, '"': 2 };
   let at = 0;
@@ -86,7 +93,8 @@ function parseDms(original: string, where: string): DmsParts {
   while (at < text.length) {
     COMPONENT.lastIndex = at;
     const m = COMPONENT.exec(text);
-    if (!m || m[0].length === 0) bad('is not an angle (write 12°34\'56.7", 12 34 56.7 or decimal degrees)');
+    if (!m || m[0].length === 0)
+      bad('is not an angle (write 12°34\'56.7", 12 34 56.7 or decimal degrees)');
     const mark = m![2];
     const position = mark !== undefined && mark !== ':' ? marks[mark]! : next;
     if (position < next || position > 2) bad('has its degrees, minutes and seconds out of order');
@@ -138,7 +146,11 @@ function parseDms(original: string, where: string): DmsParts {
  * //=> '841/4'
  * ```
  */
-export function angleToDegrees<T>(A: Arithmetic<T>, reading: Numeric<T>, unit: AngleUnit = 'deg'): T {
+export function angleToDegrees<T>(
+  A: Arithmetic<T>,
+  reading: Numeric<T>,
+  unit: AngleUnit = 'deg',
+): T {
   const G = guardOf(A);
   if (G) return viaGuard(A, G, reading, (g, x) => readAngle(g, x as Numeric<typeof g.zero>, unit));
   return readAngle(A, reading, unit);
@@ -152,23 +164,32 @@ export function readAngle<T>(A: Arithmetic<T>, reading: Numeric<T>, unit: AngleU
     if (reading.length > MAX_INPUT_LENGTH) {
       throw textTooLong(where, reading.length);
     }
-    if (u !== 'deg') throw invalidAngle(where, `${show(reading)} is DMS text, which is in degrees, but the unit is '${u}'`);
+    if (u !== 'deg')
+      throw invalidAngle(
+        where,
+        `${show(reading)} is DMS text, which is in degrees, but the unit is '${u}'`,
+      );
     const dms = parseDms(reading, where);
     const sixty = A.from(60);
     let value = A.zero;
     for (const p of dms.parts) {
       const v = A.from(p.text);
       if (p.position > 0 && A.cmp(v, sixty) >= 0) {
-        throw invalidAngle(where, `${show(reading)} has ${p.position === 1 ? 'minutes' : 'seconds'} ${p.text} ≥ 60`);
+        throw invalidAngle(
+          where,
+          `${show(reading)} has ${p.position === 1 ? 'minutes' : 'seconds'} ${p.text} ≥ 60`,
+        );
       }
       const scale = p.position === 0 ? A.one : p.position === 1 ? sixty : A.from(3600);
       value = A.add(value, A.div(v, scale));
     }
     if (dms.quadrant) {
       const { from, to } = dms.quadrant;
-      if (A.cmp(value, A.from(90)) > 0) throw invalidAngle(where, `${show(reading)} is a quadrant bearing over 90°`);
+      if (A.cmp(value, A.from(90)) > 0)
+        throw invalidAngle(where, `${show(reading)} is a quadrant bearing over 90°`);
       const half = A.from(180);
-      if (from === 'N') value = to === 'E' ? value : A.isZero(value) ? value : A.sub(A.from(360), value);
+      if (from === 'N')
+        value = to === 'E' ? value : A.isZero(value) ? value : A.sub(A.from(360), value);
       else value = to === 'E' ? A.sub(half, value) : A.add(half, value);
       return value;
     }

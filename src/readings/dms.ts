@@ -31,7 +31,10 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
  */
 export function formatDms<T>(A: Arithmetic<T>, degrees: Numeric<T>, secondsDecimals = 1): string {
   if (!Number.isInteger(secondsDecimals) || secondsDecimals < 0 || secondsDecimals > 6) {
-    throw invalidArgument('formatDms(secondsDecimals)', `${show(secondsDecimals)} is not an integer in 0..6`);
+    throw invalidArgument(
+      'formatDms(secondsDecimals)',
+      `${show(secondsDecimals)} is not an integer in 0..6`,
+    );
   }
   const d = readNumber(A, degrees, 'formatDms(degrees)');
   if (A.cmp(A.abs(d), A.from('1e8')) >= 0) {
@@ -42,7 +45,10 @@ export function formatDms<T>(A: Arithmetic<T>, degrees: Numeric<T>, secondsDecim
   const x = A.mul(A.abs(d), A.from(3600 * scale)); // units of 10^-k seconds
   let n = Math.floor(A.toNumber(x));
   if (n >= Number.MAX_SAFE_INTEGER) {
-    throw invalidArgument('formatDms(degrees)', `${A.toString(d)} is too large to write as DMS with ${secondsDecimals} decimals of a second`);
+    throw invalidArgument(
+      'formatDms(degrees)',
+      `${A.toString(d)} is too large to write as DMS with ${secondsDecimals} decimals of a second`,
+    );
   }
   // floor(x) exactly: the nearest number is off by at most one step in an arithmetic at least as
   // fine as a double (two steps allowed; a coarser one cannot hold the seconds anyway)
@@ -57,7 +63,9 @@ export function formatDms<T>(A: Arithmetic<T>, degrees: Numeric<T>, secondsDecim
   rest -= min * 60 * scale;
   const secInt = Math.floor(rest / scale);
   const secFrac = rest - secInt * scale;
-  const sec = String(secInt).padStart(2, '0') + (secondsDecimals > 0 ? `.${String(secFrac).padStart(secondsDecimals, '0')}` : '');
+  const sec =
+    String(secInt).padStart(2, '0') +
+    (secondsDecimals > 0 ? `.${String(secFrac).padStart(secondsDecimals, '0')}` : '');
   const sign = negative && n > 0 ? '-' : '';
   return `${sign}${deg}°${String(min).padStart(2, '0')}'${sec}"`;
 }

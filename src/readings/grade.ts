@@ -28,10 +28,14 @@ import { checkSpread } from './spread.js';
  * //=> ['75', '50√2', 100]
  * ```
  */
-export function gradeFromSpread<T, E extends boolean>(A: Arithmetic<T, E>, s: Numeric<T>): Root<T, E> {
+export function gradeFromSpread<T, E extends boolean>(
+  A: Arithmetic<T, E>,
+  s: Numeric<T>,
+): Root<T, E> {
   const v = checkSpread(A, s, 'gradeFromSpread(s)');
   const c = A.sub(A.one, v);
-  if (A.isZero(c)) throw verticalSight('gradeFromSpread(s)', 'a spread of 1 is vertical: it has no grade');
+  if (A.isZero(c))
+    throw verticalSight('gradeFromSpread(s)', 'a spread of 1 is vertical: it has no grade');
   const k = A.div(A.from(100), c);
   const rad = A.mul(v, c);
   if (A.exact) return surd(A, 0, k, rad) as Root<T, E>; // 100·√(s(1 − s))/(1 − s)

@@ -5,8 +5,28 @@ export { formatDms } from './dms.js';
 export { sinCosDegrees } from './trig.js';
 export { spreadFromDegrees, degreesFromSpread } from './spread.js';
 export { gradeFromSpread } from './grade.js';
-export { spreadFromRatio, spreadFromGrade, spreadFromPerMille, spreadFromOneIn, gradeSquaredFromSpread } from './slope.js';
-export { vertical, verticalFromAngle, verticalFromRatio, verticalFromSlope, elevationFromVertical, zenithFromVertical, zenithToElevation } from './vertical.js';
+export {
+  spreadFromRatio,
+  spreadFromGrade,
+  spreadFromPerMille,
+  spreadFromOneIn,
+  gradeSquaredFromSpread,
+} from './slope.js';
+export {
+  vertical,
+  verticalFromAngle,
+  verticalFromRatio,
+  verticalFromSlope,
+  elevationFromVertical,
+  zenithFromVertical,
+  zenithToElevation,
+} from './vertical.js';
 export type { VerticalReading, VerticalInput, VerticalKind } from './vertical.js';
-export { lengthToMetres, metresToLength, convertLength, convertQuadrance, METRES_PER_UNIT } from './length.js';
+export {
+  lengthToMetres,
+  metresToLength,
+  convertLength,
+  convertQuadrance,
+  METRES_PER_UNIT,
+} from './length.js';
 export type { LengthUnit } from './length.js';

@@ -41,8 +41,15 @@ export const METRES_PER_UNIT: Readonly<Record<LengthUnit, string>> = {
 
 /** @internal checks a length unit. */
 export function checkLengthUnit(unit: unknown, where: string): LengthUnit {
-  if (typeof unit === 'string' && Object.prototype.hasOwnProperty.call(METRES_PER_UNIT, unit)) return unit as LengthUnit;
-  throw new QuadspreadError('INVALID_UNIT', where, `${show(unit)} is not a length unit (use ${Object.keys(METRES_PER_UNIT).map((u) => `'${u}'`).join(', ')})`);
+  if (typeof unit === 'string' && Object.prototype.hasOwnProperty.call(METRES_PER_UNIT, unit))
+    return unit as LengthUnit;
+  throw new QuadspreadError(
+    'INVALID_UNIT',
+    where,
+    `${show(unit)} is not a length unit (use ${Object.keys(METRES_PER_UNIT)
+      .map((u) => `'${u}'`)
+      .join(', ')})`,
+  );
 }
 
 /**
@@ -62,7 +69,10 @@ export function checkLengthUnit(unit: unknown, where: string): LengthUnit {
  */
 export function lengthToMetres<T>(A: Arithmetic<T>, value: Numeric<T>, unit: LengthUnit): T {
   const u = checkLengthUnit(unit, 'lengthToMetres(unit)');
-  return finiteResult(A.mul(readNumber(A, value, 'lengthToMetres(value)'), A.from(METRES_PER_UNIT[u])), 'lengthToMetres(value)');
+  return finiteResult(
+    A.mul(readNumber(A, value, 'lengthToMetres(value)'), A.from(METRES_PER_UNIT[u])),
+    'lengthToMetres(value)',
+  );
 }
 
 /**
@@ -101,10 +111,18 @@ export function metresToLength<T>(A: Arithmetic<T>, metres: Numeric<T>, unit: Le
  * //=> '500000/499999'
  * ```
  */
-export function convertLength<T>(A: Arithmetic<T>, value: Numeric<T>, from: LengthUnit, to: LengthUnit): T {
+export function convertLength<T>(
+  A: Arithmetic<T>,
+  value: Numeric<T>,
+  from: LengthUnit,
+  to: LengthUnit,
+): T {
   const f = checkLengthUnit(from, 'convertLength(from)');
   const t = checkLengthUnit(to, 'convertLength(to)');
-  return A.div(A.mul(readNumber(A, value, 'convertLength(value)'), A.from(METRES_PER_UNIT[f])), A.from(METRES_PER_UNIT[t]));
+  return A.div(
+    A.mul(readNumber(A, value, 'convertLength(value)'), A.from(METRES_PER_UNIT[f])),
+    A.from(METRES_PER_UNIT[t]),
+  );
 }
 
 /**
@@ -123,9 +141,18 @@ export function convertLength<T>(A: Arithmetic<T>, value: Numeric<T>, from: Leng
  * //=> '145161/15625'
  * ```
  */
-export function convertQuadrance<T>(A: Arithmetic<T>, quadrance: Numeric<T>, from: LengthUnit, to: LengthUnit): T {
+export function convertQuadrance<T>(
+  A: Arithmetic<T>,
+  quadrance: Numeric<T>,
+  from: LengthUnit,
+  to: LengthUnit,
+): T {
   const q = readNumber(A, quadrance, 'convertQuadrance(quadrance)');
-  if (A.sign(q) < 0) throw negativeQuadrance('convertQuadrance(quadrance)', `${shownInput(A, quadrance, q)} is below zero`);
+  if (A.sign(q) < 0)
+    throw negativeQuadrance(
+      'convertQuadrance(quadrance)',
+      `${shownInput(A, quadrance, q)} is below zero`,
+    );
   const r = convertLength(A, A.one, from, to);
   return finiteResult(A.mul(q, A.mul(r, r)), 'convertQuadrance(quadrance)');
 }

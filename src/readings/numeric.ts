@@ -48,7 +48,12 @@ export const GUARD_DIGITS = 10;
 export function guardOf<T>(A: Arithmetic<T>): Arithmetic<Decimal> | undefined {
   if (A.exact) return undefined;
   const digits = (A as { digits?: unknown }).digits;
-  if (typeof digits !== 'number' || A.name !== `decimal(${digits})` || digits + GUARD_DIGITS > MAX_DECIMAL_DIGITS) return undefined;
+  if (
+    typeof digits !== 'number' ||
+    A.name !== `decimal(${digits})` ||
+    digits + GUARD_DIGITS > MAX_DECIMAL_DIGITS
+  )
+    return undefined;
   let G = GUARDS.get(digits);
   if (G === undefined) {
     G = decimal(digits + GUARD_DIGITS);
@@ -70,7 +75,12 @@ const GUARDS = new Map<number, Arithmetic<Decimal>>();
  * the result once into `A`.
  * @internal
  */
-export function viaGuard<T, I>(A: Arithmetic<T>, G: Arithmetic<Decimal>, input: I, f: (G: Arithmetic<Decimal>, x: I | string) => Decimal): T {
+export function viaGuard<T, I>(
+  A: Arithmetic<T>,
+  G: Arithmetic<Decimal>,
+  input: I,
+  f: (G: Arithmetic<Decimal>, x: I | string) => Decimal,
+): T {
   const x = A.is(input) ? A.toString(input as unknown as T) : input;
   return A.from(G.toString(f(G, x)));
 }

@@ -35,7 +35,10 @@ export function spreadFromRatio<T>(A: Arithmetic<T>, rise: Numeric<T>, run: Nume
   const r = readNumber(A, rise, 'spreadFromRatio(rise)');
   const d = readNumber(A, run, 'spreadFromRatio(run)');
   if (A.isZero(r) && A.isZero(d)) {
-    throw invalidSlope('spreadFromRatio(rise, run)', 'rise and run are both zero: the slope has no direction');
+    throw invalidSlope(
+      'spreadFromRatio(rise, run)',
+      'rise and run are both zero: the slope has no direction',
+    );
   }
   if (!A.exact && outOfSquareRange(A.toNumber(r), A.toNumber(d))) {
     // Squares of such values overflow or underflow a double: divide by the larger part first.
@@ -109,7 +112,8 @@ export function spreadFromPerMille<T>(A: Arithmetic<T>, perMille: Numeric<T>): T
  */
 export function spreadFromOneIn<T>(A: Arithmetic<T>, n: Numeric<T>): T {
   const v = readNumber(A, n, 'spreadFromOneIn(n)');
-  if (A.isZero(v)) throw invalidSlope('spreadFromOneIn(n)', `"1 in ${shown(A, n, v)}" is not a slope`);
+  if (A.isZero(v))
+    throw invalidSlope('spreadFromOneIn(n)', `"1 in ${shown(A, n, v)}" is not a slope`);
   return spreadFromRatio(A, 1, v);
 }
 
@@ -130,6 +134,7 @@ export function spreadFromOneIn<T>(A: Arithmetic<T>, n: Numeric<T>): T {
  */
 export function gradeSquaredFromSpread<T>(A: Arithmetic<T>, s: Numeric<T>): T {
   const v = checkSpread(A, s, 'gradeSquaredFromSpread(s)');
-  if (A.eq(v, A.one)) throw verticalSight('gradeSquaredFromSpread(s)', 'a spread of 1 is vertical: it has no grade');
+  if (A.eq(v, A.one))
+    throw verticalSight('gradeSquaredFromSpread(s)', 'a spread of 1 is vertical: it has no grade');
   return A.div(A.mul(A.from(10000), v), A.sub(A.one, v)); // tan² = s/(1 − s)
 }

@@ -14,7 +14,11 @@ import { approxSqrt, guardOf, viaGuard } from './numeric.js';
 export function checkSpread<T>(A: Arithmetic<T>, s: Numeric<T>, where: string): T {
   const v = readNumber(A, s, where);
   if (A.sign(v) < 0 || A.cmp(v, A.one) > 0) {
-    throw new QuadspreadError('SPREAD_OUT_OF_RANGE', where, `${shownInput(A, s, v)} is outside [0, 1]`);
+    throw new QuadspreadError(
+      'SPREAD_OUT_OF_RANGE',
+      where,
+      `${shownInput(A, s, v)} is outside [0, 1]`,
+    );
   }
   return v;
 }
@@ -44,9 +48,14 @@ export function checkSpread<T>(A: Arithmetic<T>, s: Numeric<T>, where: string): 
  * //=> '1/2'
  * ```
  */
-export function spreadFromDegrees<T>(A: Arithmetic<T>, angle: Numeric<T>, unit: AngleUnit = 'deg'): T {
+export function spreadFromDegrees<T>(
+  A: Arithmetic<T>,
+  angle: Numeric<T>,
+  unit: AngleUnit = 'deg',
+): T {
   const G = guardOf(A);
-  if (G) return viaGuard(A, G, angle, (g, x) => spreadOfAngle(g, x as Numeric<typeof g.zero>, unit));
+  if (G)
+    return viaGuard(A, G, angle, (g, x) => spreadOfAngle(g, x as Numeric<typeof g.zero>, unit));
   return spreadOfAngle(A, angle, unit);
 }
 
@@ -59,7 +68,11 @@ export function spreadOfAngle<T>(A: Arithmetic<T>, angle: Numeric<T>, unit: Angl
   // Both are multiples of 15°, whose nearest number over 15 is within rounding of an integer:
   // that cheap test skips the exact checks for every other angle.
   const n = A.toNumber(deg) / 15;
-  if (Math.abs(n - Math.round(n)) <= 1e-9 * Math.max(1, Math.abs(n)) && (A.isZero(modulo(A, deg, A.from(30), 'spreadFromDegrees(angle)')) || A.isZero(modulo(A, deg, A.from(45), 'spreadFromDegrees(angle)')))) {
+  if (
+    Math.abs(n - Math.round(n)) <= 1e-9 * Math.max(1, Math.abs(n)) &&
+    (A.isZero(modulo(A, deg, A.from(30), 'spreadFromDegrees(angle)')) ||
+      A.isZero(modulo(A, deg, A.from(45), 'spreadFromDegrees(angle)')))
+  ) {
     return A.div(A.sub(A.one, sinCos(A, A.mul(deg, A.from(2))).cos), A.from(2));
   }
   const { sin } = sinCos(A, deg);
@@ -102,13 +115,20 @@ export function degreesOfSpread<T>(A: Arithmetic<T>, s: Numeric<T>): T {
   if (A.eq(v, A.one)) return A.from(90);
   const sin = approxSqrt(A, v);
   const cos = approxSqrt(A, A.sub(A.one, v));
-  const exact: [string, number][] = [['1/4', 30], ['1/2', 45], ['3/4', 60]];
+  const exact: [string, number][] = [
+    ['1/4', 30],
+    ['1/2', 45],
+    ['3/4', 60],
+  ];
   for (const [spread, deg] of exact) {
     const c = A.from(spread);
     if (A.eq(v, c)) {
       // the exact angle, plus (s − c)·dθ/ds (zero in value) so that derivatives carry through:
       // dθ/ds = 1/(2 sin θ cos θ) rad = 90/(π sin θ cos θ) degrees
-      return A.add(A.from(deg), A.mul(A.sub(v, c), A.div(A.from(90), A.mul(A.pi, A.mul(sin, cos)))));
+      return A.add(
+        A.from(deg),
+        A.mul(A.sub(v, c), A.div(A.from(90), A.mul(A.pi, A.mul(sin, cos)))),
+      );
     }
   }
   const rad = A.atan2(sin, cos);

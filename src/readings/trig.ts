@@ -18,7 +18,10 @@ export function modulo<T>(A: Arithmetic<T>, x: T, m: T, where = 'modulo(x)'): T 
   // An inexact arithmetic must still resolve x to a millionth of m (e.g. about 1″ of a turn):
   // (x + m) − x = m to within m·10⁻⁶; otherwise the remainder would be rounding noise.
   if (!A.exact && A.cmp(A.abs(A.sub(A.sub(A.add(x, m), x), m)), A.div(m, A.from(1e6))) > 0) {
-    throw invalidAngle(where, `${show(A.toString(x))} is too large for ${A.name} to reduce modulo ${A.toString(m)}`);
+    throw invalidAngle(
+      where,
+      `${show(A.toString(x))} is too large for ${A.name} to reduce modulo ${A.toString(m)}`,
+    );
   }
   // Subtract the multiple of m that the nearest number gives; each pass leaves a remainder about
   // 10¹⁶ times smaller (exact in an exact arithmetic), so a few passes reach [0, m).
@@ -28,7 +31,10 @@ export function modulo<T>(A: Arithmetic<T>, x: T, m: T, where = 'modulo(x)'): T 
     const q = Math.floor(A.toNumber(A.div(r, m)));
     r = q === 0 ? A.add(r, m) : A.sub(r, A.mul(A.from(q), m));
   }
-  throw invalidAngle(where, `${show(A.toString(x))} is too large to reduce modulo ${A.toString(m)}`);
+  throw invalidAngle(
+    where,
+    `${show(A.toString(x))} is too large to reduce modulo ${A.toString(m)}`,
+  );
 }
 
 /**
@@ -48,7 +54,9 @@ function firstQuadrant<T>(A: Arithmetic<T>, t: T, ninety: T): { sin: T; cos: T }
   const cosU = A.cos(rad);
   // sin 30° = 1/2 exactly (the 30-60-90 triangle); its cosine √3/2 is irrational.
   const thirty = A.from(30);
-  const sinU = A.eq(u, thirty) ? A.add(A.div(A.one, A.from(2)), A.mul(A.sub(u, thirty), A.mul(cosU, perDegree))) : A.sin(rad);
+  const sinU = A.eq(u, thirty)
+    ? A.add(A.div(A.one, A.from(2)), A.mul(A.sub(u, thirty), A.mul(cosU, perDegree)))
+    : A.sin(rad);
   return small ? { sin: sinU, cos: cosU } : { sin: cosU, cos: sinU };
 }
 
@@ -79,7 +87,10 @@ function firstQuadrant<T>(A: Arithmetic<T>, t: T, ninety: T): { sin: T; cos: T }
 export function sinCosDegrees<T>(A: Arithmetic<T>, degrees: Numeric<T>): { sin: T; cos: T } {
   const G = guardOf(A);
   if (G) {
-    const r = sinCos(G, A.is(degrees) ? A.toString(degrees as T) : (degrees as number | string | bigint));
+    const r = sinCos(
+      G,
+      A.is(degrees) ? A.toString(degrees as T) : (degrees as number | string | bigint),
+    );
     return { sin: A.from(G.toString(r.sin)), cos: A.from(G.toString(r.cos)) };
   }
   return sinCos(A, degrees);
@@ -92,14 +103,24 @@ export function sinCos<T>(A: Arithmetic<T>, degrees: Numeric<T>): { sin: T; cos:
   // The quadrant from the nearest number, then corrected exactly by at most one step.
   let q = Math.min(3, Math.floor(A.toNumber(d) / 90));
   let t = q === 0 ? d : A.sub(d, A.from(90 * q));
-  if (A.sign(t) < 0) { q -= 1; t = A.add(t, ninety); }
-  if (A.cmp(t, ninety) > 0) { q += 1; t = A.sub(t, ninety); }
+  if (A.sign(t) < 0) {
+    q -= 1;
+    t = A.add(t, ninety);
+  }
+  if (A.cmp(t, ninety) > 0) {
+    q += 1;
+    t = A.sub(t, ninety);
+  }
   const { sin, cos } = firstQuadrant(A, t, ninety);
   // sin(θ + 90°) = cos θ, cos(θ + 90°) = −sin θ (the quadrant rotations)
   switch (((q % 4) + 4) % 4) {
-    case 0: return { sin, cos };
-    case 1: return { sin: cos, cos: A.neg(sin) };
-    case 2: return { sin: A.neg(sin), cos: A.neg(cos) };
-    default: return { sin: A.neg(cos), cos: sin };
+    case 0:
+      return { sin, cos };
+    case 1:
+      return { sin: cos, cos: A.neg(sin) };
+    case 2:
+      return { sin: A.neg(sin), cos: A.neg(cos) };
+    default:
+      return { sin: A.neg(cos), cos: sin };
   }
 }

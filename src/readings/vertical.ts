@@ -4,7 +4,14 @@
  *
  * @module readings
  */
-import { MAX_INPUT_LENGTH, show, invalidArgument, invalidAngle, invalidSlope, textTooLong } from '../errors.js';
+import {
+  MAX_INPUT_LENGTH,
+  show,
+  invalidArgument,
+  invalidAngle,
+  invalidSlope,
+  textTooLong,
+} from '../errors.js';
 import { readNumber, shownInput } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { angleToDegrees, type AngleUnit } from './angle.js';
@@ -48,10 +55,18 @@ export type VerticalInput<T> = VerticalReading<T> | Numeric<T>;
  * //=> ['1/4', -1]
  * ```
  */
-export function vertical<T>(A: Arithmetic<T>, spread: Numeric<T>, sign: -1 | 0 | 1 = 1): VerticalReading<T> {
+export function vertical<T>(
+  A: Arithmetic<T>,
+  spread: Numeric<T>,
+  sign: -1 | 0 | 1 = 1,
+): VerticalReading<T> {
   const s = checkSpread(A, spread, 'vertical(spread)');
   if (A.isZero(s)) return { spread: s, sign: 0 };
-  if (sign !== 1 && sign !== -1) throw invalidArgument('vertical(sign)', `${show(sign)} is not +1 or -1 (the spread ${A.toString(s)} is not 0)`);
+  if (sign !== 1 && sign !== -1)
+    throw invalidArgument(
+      'vertical(sign)',
+      `${show(sign)} is not +1 or -1 (the spread ${A.toString(s)} is not 0)`,
+    );
   return { spread: s, sign };
 }
 
@@ -59,12 +74,21 @@ export function vertical<T>(A: Arithmetic<T>, spread: Numeric<T>, sign: -1 | 0 |
  * @internal reads a {@link VerticalInput} for a solver, naming `where` in errors (followed
  * by `[index]` when an index is given: the text is only built for an error).
  */
-export function readVertical<T>(A: Arithmetic<T>, x: VerticalInput<T>, where: string, index?: number): VerticalReading<T> {
+export function readVertical<T>(
+  A: Arithmetic<T>,
+  x: VerticalInput<T>,
+  where: string,
+  index?: number,
+): VerticalReading<T> {
   if (typeof x === 'object' && x !== null && !A.is(x) && 'spread' in (x as object)) {
     const r = x as VerticalReading<T>;
     const s = readSpreadAt(A, r.spread, where, index);
     if (A.isZero(s)) return { spread: s, sign: 0 };
-    if (r.sign !== 1 && r.sign !== -1) throw invalidArgument(at(where, index), `sign ${show(r.sign)} is not +1 or -1 for the non-zero spread ${A.toString(s)}`);
+    if (r.sign !== 1 && r.sign !== -1)
+      throw invalidArgument(
+        at(where, index),
+        `sign ${show(r.sign)} is not +1 or -1 for the non-zero spread ${A.toString(s)}`,
+      );
     return { spread: s, sign: r.sign };
   }
   const s = readSpreadAt(A, x as Numeric<T>, where, index);
@@ -75,7 +99,12 @@ function at(where: string, index: number | undefined): string {
   return index === undefined ? where : `${where}[${index}]`;
 }
 
-function readSpreadAt<T>(A: Arithmetic<T>, s: Numeric<T>, where: string, index: number | undefined): T {
+function readSpreadAt<T>(
+  A: Arithmetic<T>,
+  s: Numeric<T>,
+  where: string,
+  index: number | undefined,
+): T {
   if (index === undefined) return checkSpread(A, s, where);
   const v = readNumber(A, s, () => at(where, index));
   return A.sign(v) < 0 || A.cmp(v, A.one) > 0 ? checkSpread(A, s, at(where, index)) : v;
@@ -111,17 +140,27 @@ export function verticalFromAngle<T>(
   angle: Numeric<T>,
   options: { kind?: VerticalKind; unit?: AngleUnit } = {},
 ): VerticalReading<T> {
-  if (typeof options !== 'object' || options === null) throw invalidArgument('verticalFromAngle(options)', `${show(options)} is not an options object`);
+  if (typeof options !== 'object' || options === null)
+    throw invalidArgument(
+      'verticalFromAngle(options)',
+      `${show(options)} is not an options object`,
+    );
   const kind = options.kind ?? 'elevation';
   if (kind !== 'elevation' && kind !== 'zenith') {
-    throw invalidArgument('verticalFromAngle(options.kind)', `${show(kind)} is not 'elevation' or 'zenith'`);
+    throw invalidArgument(
+      'verticalFromAngle(options.kind)',
+      `${show(kind)} is not 'elevation' or 'zenith'`,
+    );
   }
   const deg = angleToDegrees(A, angle, options.unit ?? 'deg');
   const elev = kind === 'elevation' ? deg : A.sub(A.from(90), deg); // α = 90° − z
   const ninety = A.from(90);
   if (A.cmp(A.abs(elev), ninety) > 0) {
     const range = kind === 'elevation' ? '[-90°, 90°]' : '[0°, 180°]';
-    throw invalidAngle('verticalFromAngle(angle)', `${shownInput(A, angle, deg)} is outside ${range} for a${kind === 'elevation' ? 'n elevation' : ' zenith'} angle`);
+    throw invalidAngle(
+      'verticalFromAngle(angle)',
+      `${shownInput(A, angle, deg)} is outside ${range} for a${kind === 'elevation' ? 'n elevation' : ' zenith'} angle`,
+    );
   }
   const s = spreadFromDegrees(A, elev);
   return { spread: s, sign: A.isZero(s) ? 0 : A.sign(elev) };
@@ -144,7 +183,11 @@ export function verticalFromAngle<T>(
  * //=> ['1/50', -1]
  * ```
  */
-export function verticalFromRatio<T>(A: Arithmetic<T>, rise: Numeric<T>, run: Numeric<T>): VerticalReading<T> {
+export function verticalFromRatio<T>(
+  A: Arithmetic<T>,
+  rise: Numeric<T>,
+  run: Numeric<T>,
+): VerticalReading<T> {
   const r = readNumber(A, rise, 'verticalFromRatio(rise)');
   const d = readNumber(A, run, 'verticalFromRatio(run)');
   const s = spreadFromRatio(A, r, d);
@@ -152,7 +195,8 @@ export function verticalFromRatio<T>(A: Arithmetic<T>, rise: Numeric<T>, run: Nu
   return { spread: s, sign: sg };
 }
 
-const SLOPE_TEXT = /^\s*([+-]?[\d.]+(?:[eE][+-]?\d+)?)\s*(%|‰|:|in\b)\s*([\d.]*(?:[eE][+-]?\d+)?)\s*$/i;
+const SLOPE_TEXT =
+  /^\s*([+-]?[\d.]+(?:[eE][+-]?\d+)?)\s*(%|‰|:|in\b)\s*([\d.]*(?:[eE][+-]?\d+)?)\s*$/i;
 
 /**
  * Reads slope text into a {@link VerticalReading}, exactly: `'5%'`, `'-2.5 %'`,

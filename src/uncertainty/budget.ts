@@ -4,7 +4,13 @@
  *
  * @module uncertainty
  */
-import { QuadspreadError, show, notFinite, invalidCovariance, unsupportedOperation } from '../errors.js';
+import {
+  QuadspreadError,
+  show,
+  notFinite,
+  invalidCovariance,
+  unsupportedOperation,
+} from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { Uncertain } from '../arithmetic/uncertain.js';
 import type { UncertainArithmetic, UncertainInput } from '../arithmetic/uncertain.js';
@@ -119,12 +125,19 @@ export function budget<T, E extends boolean>(
   if (isSurd(result)) {
     const r = result as Surd<Uncertain<T>>;
     if (!r.isRational()) {
-      throw unsupportedOperation(where, `the result ${r.toString()} is an irrational surd, whose sensitivities are irrational too: take its budget in uncertain(decimal(n)) or uncertain(float)`);
+      throw unsupportedOperation(
+        where,
+        `the result ${r.toString()} is an irrational surd, whose sensitivities are irrational too: take its budget in uncertain(decimal(n)) or uncertain(float)`,
+      );
     }
     y = U.from(r.a);
   } else if (U.is(result)) {
     y = result;
-  } else if (result instanceof Uncertain && typeof result.value === 'number' && result.value - result.value !== 0) {
+  } else if (
+    result instanceof Uncertain &&
+    typeof result.value === 'number' &&
+    result.value - result.value !== 0
+  ) {
     throw notFinite(where, `the result ${show(result.value)} is not finite (overflow)`);
   } else {
     y = U.from(result as Numeric<Uncertain<T>>);
@@ -137,36 +150,67 @@ export function budget<T, E extends boolean>(
     const c = y.derivatives[i] as T;
     const other = byName.get(input.name);
     if (other !== undefined) {
-      throw new QuadspreadError('DUPLICATE_INPUT', where, `two different inputs are named ${show(input.name)} (values ${B.toString(other.input.value)} and ${B.toString(input.value)})`);
+      throw new QuadspreadError(
+        'DUPLICATE_INPUT',
+        where,
+        `two different inputs are named ${show(input.name)} (values ${B.toString(other.input.value)} and ${B.toString(input.value)})`,
+      );
     }
     byName.set(input.name, { input, c });
     const cu = B.mul(c, input.sigma);
     const contribution = B.mul(cu, cu); // (cᵢ·u(xᵢ))²: GUM eq. (10) term
     variance = B.add(variance, contribution);
-    lines.push({ name: input.name, value: input.value, sigma: input.sigma, sensitivity: c, contribution });
+    lines.push({
+      name: input.name,
+      value: input.value,
+      sigma: input.sigma,
+      sensitivity: c,
+      contribution,
+    });
   }
-  lines.sort((p, q) => B.cmp(q.contribution, p.contribution) || (p.name < q.name ? -1 : p.name > q.name ? 1 : 0));
+  lines.sort(
+    (p, q) =>
+      B.cmp(q.contribution, p.contribution) || (p.name < q.name ? -1 : p.name > q.name ? 1 : 0),
+  );
 
   const correlations: CorrelationTerm<T>[] = [];
   const seen = new Set<string>();
   const covariance = options?.covariance ?? [];
   if (!Array.isArray(covariance)) {
-    throw invalidCovariance(`${where}.covariance`, `${show(covariance)} is not a list of [nameA, nameB, covariance] triples`);
+    throw invalidCovariance(
+      `${where}.covariance`,
+      `${show(covariance)} is not a list of [nameA, nameB, covariance] triples`,
+    );
   }
   for (const triple of covariance) {
     if (!Array.isArray(triple) || triple.length !== 3) {
-      throw invalidCovariance(`${where}.covariance`, `${show(triple)} is not a [nameA, nameB, covariance] triple`);
+      throw invalidCovariance(
+        `${where}.covariance`,
+        `${show(triple)} is not a [nameA, nameB, covariance] triple`,
+      );
     }
     const [na, nb, cov] = triple;
     const a = byName.get(na);
     const b = byName.get(nb);
     if (a === undefined || b === undefined) {
       const missing = a === undefined ? na : nb;
-      throw new QuadspreadError('UNKNOWN_INPUT', `${where}.covariance`, `the result does not depend on an input named ${show(missing)}`);
+      throw new QuadspreadError(
+        'UNKNOWN_INPUT',
+        `${where}.covariance`,
+        `the result does not depend on an input named ${show(missing)}`,
+      );
     }
-    if (na === nb) throw invalidCovariance(`${where}.covariance`, `${show(na)} is paired with itself (its variance is its sigma squared)`);
+    if (na === nb)
+      throw invalidCovariance(
+        `${where}.covariance`,
+        `${show(na)} is paired with itself (its variance is its sigma squared)`,
+      );
     const key = na < nb ? `${na}\u0000${nb}` : `${nb}\u0000${na}`;
-    if (seen.has(key)) throw invalidCovariance(`${where}.covariance`, `the pair ${show(na)}, ${show(nb)} is listed twice`);
+    if (seen.has(key))
+      throw invalidCovariance(
+        `${where}.covariance`,
+        `the pair ${show(na)}, ${show(nb)} is listed twice`,
+      );
     seen.add(key);
     let v: T;
     try {
@@ -177,11 +221,16 @@ export function budget<T, E extends boolean>(
     // |u(a, b)| ≤ u(a)·u(b), i.e. |r| ≤ 1 (GUM §C.3.6): compared squared, exact in rational.
     const bound = B.mul(a.input.sigma, b.input.sigma);
     if (B.cmp(B.mul(v, v), B.mul(bound, bound)) > 0) {
-      throw invalidCovariance(`${where}.covariance`, `|${show(cov)}| exceeds u(${na})·u(${nb}) = ${B.toString(bound)}`);
+      throw invalidCovariance(
+        `${where}.covariance`,
+        `|${show(cov)}| exceeds u(${na})·u(${nb}) = ${B.toString(bound)}`,
+      );
     }
     const contribution = B.mul(B.from(2), B.mul(B.mul(a.c, b.c), v)); // 2·cᵢ·cⱼ·u(xᵢ, xⱼ): GUM eq. (13)
     variance = B.add(variance, contribution);
-    correlations.push(Object.freeze({ names: Object.freeze([na, nb] as const), covariance: v, contribution }));
+    correlations.push(
+      Object.freeze({ names: Object.freeze([na, nb] as const), covariance: v, contribution }),
+    );
   }
   // A negative total means covariances no joint distribution can have; in an inexact base
   // a negative total within 1e-12 of the terms is round-off (perfect anti-correlation): 0.
@@ -190,12 +239,22 @@ export function budget<T, E extends boolean>(
     for (const l of lines) scale = B.add(scale, l.contribution);
     for (const c of correlations) scale = B.add(scale, B.abs(c.contribution));
     const noise = B.exact || B.cmp(B.abs(variance), B.mul(scale, B.from('1e-12'))) > 0;
-    if (noise) throw invalidCovariance(where, `the covariances make the variance ${B.toString(variance)} negative (they cannot belong to real inputs)`);
+    if (noise)
+      throw invalidCovariance(
+        where,
+        `the covariances make the variance ${B.toString(variance)} negative (they cannot belong to real inputs)`,
+      );
     variance = B.zero;
   }
   // float lets ±Infinity and NaN through until output: refuse them here rather than return them.
-  if (typeof variance === 'number' && (variance - variance !== 0 || (y.value as number) - (y.value as number) !== 0)) {
-    throw notFinite(where, `the result ${show(y.value)} or its variance ${show(variance)} is not finite (overflow or an infinite sensitivity)`);
+  if (
+    typeof variance === 'number' &&
+    (variance - variance !== 0 || (y.value as number) - (y.value as number) !== 0)
+  ) {
+    throw notFinite(
+      where,
+      `the result ${show(y.value)} or its variance ${show(variance)} is not finite (overflow or an infinite sensitivity)`,
+    );
   }
   return {
     value: y.value,
@@ -221,10 +280,10 @@ function sigmaOf<T, E extends boolean>(B: Arithmetic<T, E>, variance: T): Root<T
     toNumber: {
       value: () => {
         const x = sqrtRatioToNumber(v.n, v.d);
-        if (!Number.isFinite(x)) throw notFinite(where, `√(${B.toString(variance)}) is beyond the range of a JS number`);
+        if (!Number.isFinite(x))
+          throw notFinite(where, `√(${B.toString(variance)}) is beyond the range of a JS number`);
         return x;
       },
     },
   }) as Root<T, E>;
 }
-

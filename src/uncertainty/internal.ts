@@ -14,9 +14,17 @@ import { bitLength, isqrt, ratioToNumber } from '../arithmetic/exact.js';
  * @internal
  */
 export function checkU(U: unknown, where: string): void {
-  if (U === null || typeof U !== 'object' || typeof (U as { base?: unknown }).base !== 'object' || typeof (U as { make?: unknown }).make !== 'function') {
+  if (
+    U === null ||
+    typeof U !== 'object' ||
+    typeof (U as { base?: unknown }).base !== 'object' ||
+    typeof (U as { make?: unknown }).make !== 'function'
+  ) {
     const name = U !== null && typeof U === 'object' ? (U as { name?: unknown }).name : U;
-    throw invalidArgument(where, `U = ${show(name)} is not an uncertain arithmetic (make one with uncertain(float), uncertain(decimal(n)) or uncertain(rational))`);
+    throw invalidArgument(
+      where,
+      `U = ${show(name)} is not an uncertain arithmetic (make one with uncertain(float), uncertain(decimal(n)) or uncertain(rational))`,
+    );
   }
 }
 
@@ -33,7 +41,8 @@ export function readSigma<T>(U: UncertainArithmetic<T>, sigma: Numeric<T>, where
   } catch {
     throw new QuadspreadError('INVALID_SIGMA', where, `${show(sigma)} is not a number`);
   }
-  if (U.base.sign(s) < 0) throw new QuadspreadError('INVALID_SIGMA', where, `${show(sigma)} is negative`);
+  if (U.base.sign(s) < 0)
+    throw new QuadspreadError('INVALID_SIGMA', where, `${show(sigma)} is negative`);
   return s;
 }
 

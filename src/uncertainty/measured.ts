@@ -35,7 +35,12 @@ import { checkU, readName, readSigma } from './internal.js';
  * //=> 0.006
  * ```
  */
-export function measured<T>(U: UncertainArithmetic<T>, value: Numeric<T>, sigma: Numeric<T>, name: string): Uncertain<T> {
+export function measured<T>(
+  U: UncertainArithmetic<T>,
+  value: Numeric<T>,
+  sigma: Numeric<T>,
+  name: string,
+): Uncertain<T> {
   const where = 'measured(U, value, sigma, name)';
   const n = readName(name, where);
   const s = readSigma(U, sigma, where);
@@ -68,5 +73,10 @@ export function sensitivities<T>(
 ): { name: string; value: T; sigma: T; sensitivity: T }[] {
   checkU(U, 'sensitivities(U, y)');
   const v = readNumber(U, y, 'sensitivities(U, y) y');
-  return [...v.gradient].map(([input, c]) => ({ name: input.name, value: input.value, sigma: input.sigma, sensitivity: c }));
+  return [...v.gradient].map(([input, c]) => ({
+    name: input.name,
+    value: input.value,
+    sigma: input.sigma,
+    sensitivity: c,
+  }));
 }

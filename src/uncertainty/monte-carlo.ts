@@ -52,12 +52,25 @@ function checkInput(name: string, d: InputDistribution): void {
   const fin = (x: unknown) => typeof x === 'number' && Number.isFinite(x);
   if (d.distribution === 'normal') {
     if (!fin(d.mean)) throw invalidNumber(where, `the mean ${show(d.mean)} is not a finite number`);
-    if (!fin(d.sigma) || d.sigma < 0) throw new QuadspreadError('INVALID_SIGMA', where, `${show(d.sigma)} is not a finite number ≥ 0`);
+    if (!fin(d.sigma) || d.sigma < 0)
+      throw new QuadspreadError(
+        'INVALID_SIGMA',
+        where,
+        `${show(d.sigma)} is not a finite number ≥ 0`,
+      );
   } else if (d.distribution === 'rectangular') {
-    if (!fin(d.low) || !fin(d.high)) throw invalidNumber(where, `the limits ${show(d.low)}, ${show(d.high)} are not finite numbers`);
-    if (d.low > d.high) throw invalidArgument(where, `low ${show(d.low)} is above high ${show(d.high)}`);
+    if (!fin(d.low) || !fin(d.high))
+      throw invalidNumber(
+        where,
+        `the limits ${show(d.low)}, ${show(d.high)} are not finite numbers`,
+      );
+    if (d.low > d.high)
+      throw invalidArgument(where, `low ${show(d.low)} is above high ${show(d.high)}`);
   } else {
-    throw invalidArgument(where, `the distribution ${show((d as { distribution?: unknown }).distribution)} is not 'normal' or 'rectangular'`);
+    throw invalidArgument(
+      where,
+      `the distribution ${show((d as { distribution?: unknown }).distribution)} is not 'normal' or 'rectangular'`,
+    );
   }
 }
 
@@ -94,13 +107,15 @@ export function monteCarlo<K extends string>(
 ): MonteCarloResult {
   const where = 'monteCarlo(f, inputs, options)';
   if (typeof f !== 'function') throw invalidArgument(where, `f ${show(f)} is not a function`);
-  if (inputs === null || typeof inputs !== 'object') throw invalidArgument(where, `inputs ${show(inputs)} is not an object`);
+  if (inputs === null || typeof inputs !== 'object')
+    throw invalidArgument(where, `inputs ${show(inputs)} is not an object`);
   const { n, seed } = options ?? ({} as MonteCarloOptions);
   const p = options?.coverage ?? 0.95;
   if (!Number.isInteger(n) || n < 100 || n > MAX_TRIALS) {
     throw invalidArgument(`${where}.n`, `${show(n)} is not an integer in [100, ${MAX_TRIALS}]`);
   }
-  if (typeof p !== 'number' || !(p > 0 && p < 1)) throw invalidArgument(`${where}.coverage`, `${show(p)} is not in (0, 1)`);
+  if (typeof p !== 'number' || !(p > 0 && p < 1))
+    throw invalidArgument(`${where}.coverage`, `${show(p)} is not in (0, 1)`);
   const names = Object.keys(inputs) as K[];
   const dists = names.map((name) => {
     const d = inputs[name] as InputDistribution;
@@ -114,11 +129,17 @@ export function monteCarlo<K extends string>(
     for (let i = 0; i < names.length; i++) {
       const d = dists[i] as InputDistribution;
       // JCGM 101 §6.4.7 (normal: μ + σz) and §6.4.2.4 (rectangular: a + (b − a)·u)
-      x[names[i] as K] = d.distribution === 'normal' ? d.mean + d.sigma * rng.normal() : d.low + (d.high - d.low) * rng.uniform();
+      x[names[i] as K] =
+        d.distribution === 'normal'
+          ? d.mean + d.sigma * rng.normal()
+          : d.low + (d.high - d.low) * rng.uniform();
     }
     const v = f(x);
     if (typeof v !== 'number' || !Number.isFinite(v)) {
-      throw notFinite(where, `f returned ${show(v)} on trial ${r + 1} (inputs ${JSON.stringify(x)})`);
+      throw notFinite(
+        where,
+        `f returned ${show(v)} on trial ${r + 1} (inputs ${JSON.stringify(x)})`,
+      );
     }
     y[r] = v;
   }
@@ -153,7 +174,14 @@ export function monteCarlo<K extends string>(
       best = r;
     }
   }
-  return Object.freeze({ n, mean, sigma, coverage: p, low: y[best] as number, high: y[best + q - 1] as number });
+  return Object.freeze({
+    n,
+    mean,
+    sigma,
+    coverage: p,
+    low: y[best] as number,
+    high: y[best + q - 1] as number,
+  });
 }
 
 /**
@@ -175,17 +203,28 @@ export function monteCarlo<K extends string>(
  * //=> { a: { distribution: 'normal', mean: 3, sigma: 0.1 }, b: { distribution: 'normal', mean: 4, sigma: 0.2 } }
  * ```
  */
-export function normalInputs<T>(U: UncertainArithmetic<T>, result: Uncertain<T> | Numeric<T>): Record<string, InputDistribution> {
+export function normalInputs<T>(
+  U: UncertainArithmetic<T>,
+  result: Uncertain<T> | Numeric<T>,
+): Record<string, InputDistribution> {
   checkU(U, 'normalInputs(U, result)');
   const y = U.from(result as Numeric<Uncertain<T>>);
   const out: Record<string, InputDistribution> = {};
   const seen = new Map<string, unknown>();
   for (const input of y.inputs) {
     if (seen.has(input.name) && seen.get(input.name) !== input) {
-      throw new QuadspreadError('DUPLICATE_INPUT', 'normalInputs(U, result)', `two different inputs are named ${show(input.name)}`);
+      throw new QuadspreadError(
+        'DUPLICATE_INPUT',
+        'normalInputs(U, result)',
+        `two different inputs are named ${show(input.name)}`,
+      );
     }
     seen.set(input.name, input);
-    out[input.name] = { distribution: 'normal', mean: U.base.toNumber(input.value), sigma: U.base.toNumber(input.sigma) };
+    out[input.name] = {
+      distribution: 'normal',
+      mean: U.base.toNumber(input.value),
+      sigma: U.base.toNumber(input.sigma),
+    };
   }
   return out;
 }

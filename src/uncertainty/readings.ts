@@ -16,7 +16,11 @@ import { angleToDegrees, type AngleUnit } from '../readings/angle.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { spreadFromDegrees } from '../readings/spread.js';
 import { spreadFromGrade } from '../readings/slope.js';
-import { verticalFromAngle, type VerticalKind, type VerticalReading } from '../readings/vertical.js';
+import {
+  verticalFromAngle,
+  type VerticalKind,
+  type VerticalReading,
+} from '../readings/vertical.js';
 import { lengthToMetres, type LengthUnit } from '../readings/length.js';
 import { readNumber } from '../geometry/validate.js';
 import { measured } from './measured.js';
@@ -43,13 +47,22 @@ import { checkU, readName, readSigma } from './internal.js';
  * //=> 3
  * ```
  */
-export function withDerivative<T>(U: UncertainArithmetic<T>, x: Uncertain<T>, value: Numeric<T>, derivative: Numeric<T>): Uncertain<T> {
+export function withDerivative<T>(
+  U: UncertainArithmetic<T>,
+  x: Uncertain<T>,
+  value: Numeric<T>,
+  derivative: Numeric<T>,
+): Uncertain<T> {
   const where = 'withDerivative(U, x, value, derivative)';
   checkU(U, where);
   const B = U.base;
   const v = readNumber(U, x, `${where} x`);
   const d = readNumber(B, derivative, `${where} derivative`);
-  return new Uncertain(readNumber(B, value, `${where} value`), v.inputs, v.derivatives.map((c) => B.mul(d, c))); // d·∇x
+  return new Uncertain(
+    readNumber(B, value, `${where} value`),
+    v.inputs,
+    v.derivatives.map((c) => B.mul(d, c)),
+  ); // d·∇x
 }
 
 /**
@@ -73,7 +86,13 @@ export function withDerivative<T>(U: UncertainArithmetic<T>, x: Uncertain<T>, va
  * //=> ['121/4', '1/400']
  * ```
  */
-export function measuredAngle<T>(U: UncertainArithmetic<T>, reading: Numeric<T>, sigmaArcSeconds: Numeric<T>, name: string, unit: AngleUnit = 'deg'): Uncertain<T> {
+export function measuredAngle<T>(
+  U: UncertainArithmetic<T>,
+  reading: Numeric<T>,
+  sigmaArcSeconds: Numeric<T>,
+  name: string,
+  unit: AngleUnit = 'deg',
+): Uncertain<T> {
   const where = 'measuredAngle(U, reading, sigmaArcSeconds, name)';
   readName(name, where);
   const s = readSigma(U, sigmaArcSeconds, where);
@@ -107,7 +126,10 @@ function spreadSlope<T>(U: UncertainArithmetic<T>, degrees: T): T {
  * //=> [0.5, true]
  * ```
  */
-export function spreadOfAngle<T>(U: UncertainArithmetic<T>, degrees: Uncertain<T> | Numeric<T>): Uncertain<T> {
+export function spreadOfAngle<T>(
+  U: UncertainArithmetic<T>,
+  degrees: Uncertain<T> | Numeric<T>,
+): Uncertain<T> {
   checkU(U, 'spreadOfAngle(U, degrees)');
   const d = U.from(degrees as Numeric<Uncertain<T>>);
   return withDerivative(U, d, spreadFromDegrees(U.base, d.value), spreadSlope(U, d.value));
@@ -131,7 +153,13 @@ export function spreadOfAngle<T>(U: UncertainArithmetic<T>, degrees: Uncertain<T
  * //=> 0.25
  * ```
  */
-export function measuredSpread<T>(U: UncertainArithmetic<T>, reading: Numeric<T>, sigmaArcSeconds: Numeric<T>, name: string, unit: AngleUnit = 'deg'): Uncertain<T> {
+export function measuredSpread<T>(
+  U: UncertainArithmetic<T>,
+  reading: Numeric<T>,
+  sigmaArcSeconds: Numeric<T>,
+  name: string,
+  unit: AngleUnit = 'deg',
+): Uncertain<T> {
   return spreadOfAngle(U, measuredAngle(U, reading, sigmaArcSeconds, name, unit));
 }
 
@@ -155,14 +183,21 @@ export function measuredSpread<T>(U: UncertainArithmetic<T>, reading: Numeric<T>
  * //=> ['1/4', -1]
  * ```
  */
-export function verticalOfAngle<T>(U: UncertainArithmetic<T>, degrees: Uncertain<T> | Numeric<T>, kind: VerticalKind = 'elevation'): VerticalReading<Uncertain<T>> {
+export function verticalOfAngle<T>(
+  U: UncertainArithmetic<T>,
+  degrees: Uncertain<T> | Numeric<T>,
+  kind: VerticalKind = 'elevation',
+): VerticalReading<Uncertain<T>> {
   checkU(U, 'verticalOfAngle(U, degrees, kind)');
   const B = U.base;
   const d = U.from(degrees as Numeric<Uncertain<T>>);
   const r = verticalFromAngle(B, d.value, { kind });
   const elev = kind === 'zenith' ? B.sub(B.from(90), d.value) : d.value; // α = 90° − z
   const slope = spreadSlope(U, elev);
-  return { spread: withDerivative(U, d, r.spread, kind === 'zenith' ? B.neg(slope) : slope), sign: r.sign };
+  return {
+    spread: withDerivative(U, d, r.spread, kind === 'zenith' ? B.neg(slope) : slope),
+    sign: r.sign,
+  };
 }
 
 /**
@@ -192,7 +227,11 @@ export function measuredVertical<T>(
   name: string,
   options: { kind?: VerticalKind; unit?: AngleUnit } = {},
 ): VerticalReading<Uncertain<T>> {
-  return verticalOfAngle(U, measuredAngle(U, reading, sigmaArcSeconds, name, options.unit ?? 'deg'), options.kind ?? 'elevation');
+  return verticalOfAngle(
+    U,
+    measuredAngle(U, reading, sigmaArcSeconds, name, options.unit ?? 'deg'),
+    options.kind ?? 'elevation',
+  );
 }
 
 /**
@@ -215,7 +254,13 @@ export function measuredVertical<T>(
  * //=> ['762/25', '3/1000']
  * ```
  */
-export function measuredDistance<T>(U: UncertainArithmetic<T>, reading: Numeric<T>, sigmaMm: Numeric<T>, name: string, unit: LengthUnit = 'm'): Uncertain<T> {
+export function measuredDistance<T>(
+  U: UncertainArithmetic<T>,
+  reading: Numeric<T>,
+  sigmaMm: Numeric<T>,
+  name: string,
+  unit: LengthUnit = 'm',
+): Uncertain<T> {
   const where = 'measuredDistance(U, reading, sigmaMm, name)';
   readName(name, where);
   const s = readSigma(U, sigmaMm, where);
@@ -242,7 +287,13 @@ export function measuredDistance<T>(U: UncertainArithmetic<T>, reading: Numeric<
  * //=> ['2500', '1/2']
  * ```
  */
-export function measuredQuadrance<T>(U: UncertainArithmetic<T>, reading: Numeric<T>, sigmaMm: Numeric<T>, name: string, unit: LengthUnit = 'm'): Uncertain<T> {
+export function measuredQuadrance<T>(
+  U: UncertainArithmetic<T>,
+  reading: Numeric<T>,
+  sigmaMm: Numeric<T>,
+  name: string,
+  unit: LengthUnit = 'm',
+): Uncertain<T> {
   const d = measuredDistance(U, reading, sigmaMm, name, unit);
   return U.mul(d, d);
 }
@@ -266,7 +317,12 @@ export function measuredQuadrance<T>(U: UncertainArithmetic<T>, reading: Numeric
  * //=> ['1/2', '1/400']
  * ```
  */
-export function measuredGrade<T>(U: UncertainArithmetic<T>, percent: Numeric<T>, sigmaPercent: Numeric<T>, name: string): Uncertain<T> {
+export function measuredGrade<T>(
+  U: UncertainArithmetic<T>,
+  percent: Numeric<T>,
+  sigmaPercent: Numeric<T>,
+  name: string,
+): Uncertain<T> {
   const B = U.base;
   const p = measured(U, percent, sigmaPercent, name);
   const s = spreadFromGrade(B, p.value);

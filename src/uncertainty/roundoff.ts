@@ -60,12 +60,16 @@ export function roundOff(f: <T>(A: Arithmetic<T>) => T): RoundOff {
   const where = 'roundOff(f)';
   if (typeof f !== 'function') throw invalidArgument(where, `${show(f)} is not a function`);
   const x = f(float);
-  if (!float.is(x)) throw invalidArgument(where, `f(float) returned ${show(x)}, not a finite number`);
+  if (!float.is(x))
+    throw invalidArgument(where, `f(float) returned ${show(x)}, not a finite number`);
   const e = f(rational);
-  if (!rational.is(e)) throw invalidArgument(where, `f(rational) returned ${show(e)}, not a rational`);
+  if (!rational.is(e))
+    throw invalidArgument(where, `f(rational) returned ${show(e)}, not a rational`);
   const xf = exactValue(x);
   const diff = rational.abs(rational.sub(xf, e));
   const absolute = rational.toNumber(diff);
-  const relative = rational.isZero(e) ? undefined : rational.toNumber(rational.div(diff, rational.abs(e)));
+  const relative = rational.isZero(e)
+    ? undefined
+    : rational.toNumber(rational.div(diff, rational.abs(e)));
   return Object.freeze({ float: x, exact: e, absolute, relative });
 }

@@ -16,7 +16,10 @@ import { QuadspreadError } from '../../src/errors.js';
 function reference(precision: number) {
   const M = create(all as FactoryFunctionMap, { precision });
   const big = (x: string | number): BigNumber => M.bignumber(x);
-  const un = (f: unknown) => (x: string): BigNumber => (f as (v: BigNumber) => BigNumber)(big(x));
+  const un =
+    (f: unknown) =>
+    (x: string): BigNumber =>
+      (f as (v: BigNumber) => BigNumber)(big(x));
   return {
     big,
     sin: un(M.sin),
@@ -26,7 +29,8 @@ function reference(precision: number) {
     sqrt: un(M.sqrt),
     exp: un(M.exp),
     ln: un(M.log),
-    atan2: (y: string, x: string): BigNumber => (M.atan2 as unknown as (a: BigNumber, b: BigNumber) => BigNumber)(big(y), big(x)),
+    atan2: (y: string, x: string): BigNumber =>
+      (M.atan2 as unknown as (a: BigNumber, b: BigNumber) => BigNumber)(big(y), big(x)),
     pi: (): BigNumber => big(-1).acos(),
   };
 }
@@ -49,7 +53,11 @@ function agreeingDigits(M: Ref, a: string, b: BigNumber): number {
 /** Random decimal text: up to 40 significant digits, decimal exponent in [lo, hi]. */
 const decimalText = (lo: number, hi: number) =>
   fc
-    .tuple(fc.boolean(), fc.bigInt({ min: 1n, max: 10n ** 40n - 1n }), fc.integer({ min: lo, max: hi }))
+    .tuple(
+      fc.boolean(),
+      fc.bigInt({ min: 1n, max: 10n ** 40n - 1n }),
+      fc.integer({ min: lo, max: hi }),
+    )
     .map(([neg, c, e]) => `${neg ? '-' : ''}${c}e${e - String(c).length + 1}`);
 
 const E40 = decimalElementary(40);
@@ -66,7 +74,10 @@ describe('decimalElementary(40) against mathjs BigNumber', () => {
     it(`${name}(x) is correctly rounded to 40 digits on random arguments of moderate size`, () => {
       fc.assert(
         fc.property(decimalText(-6, 6), (x) => {
-          expect(agreeingDigits(M64, mine(x), ref(M64, theirs(M64, x), 40)), `${name}(${x})`).toBeGreaterThanOrEqual(38);
+          expect(
+            agreeingDigits(M64, mine(x), ref(M64, theirs(M64, x), 40)),
+            `${name}(${x})`,
+          ).toBeGreaterThanOrEqual(38);
           expect(M160.big(mine(x)).eq(ref(M160, theirs(M160, x), 40)), `${name}(${x})`).toBe(true);
         }),
         { numRuns: 150 },
@@ -85,12 +96,19 @@ describe('decimalElementary(40) against mathjs BigNumber', () => {
 
   it('sqrt, exp and ln are correctly rounded to 40 digits on random arguments (including 1 ± tiny)', () => {
     fc.assert(
-      fc.property(fc.oneof(decimalText(-30, 30), fc.integer({ min: 1, max: 60 }).map((k) => `1.${'0'.repeat(k)}7`)), decimalText(-1, 2), (x, y) => {
-        const ax = x.replace(/^-/, '');
-        expect(M160.big(E40.sqrt(ax)).eq(ref(M160, M160.sqrt(ax), 40)), `sqrt(${ax})`).toBe(true);
-        expect(M160.big(E40.ln(ax)).eq(ref(M160, M160.ln(ax), 40)), `ln(${ax})`).toBe(true);
-        expect(M160.big(E40.exp(y)).eq(ref(M160, M160.exp(y), 40)), `exp(${y})`).toBe(true);
-      }),
+      fc.property(
+        fc.oneof(
+          decimalText(-30, 30),
+          fc.integer({ min: 1, max: 60 }).map((k) => `1.${'0'.repeat(k)}7`),
+        ),
+        decimalText(-1, 2),
+        (x, y) => {
+          const ax = x.replace(/^-/, '');
+          expect(M160.big(E40.sqrt(ax)).eq(ref(M160, M160.sqrt(ax), 40)), `sqrt(${ax})`).toBe(true);
+          expect(M160.big(E40.ln(ax)).eq(ref(M160, M160.ln(ax), 40)), `ln(${ax})`).toBe(true);
+          expect(M160.big(E40.exp(y)).eq(ref(M160, M160.exp(y), 40)), `exp(${y})`).toBe(true);
+        },
+      ),
       { numRuns: 150 },
     );
   });
@@ -116,20 +134,26 @@ describe('decimalElementary near multiples of π/2 (reference: mathjs at 160 dig
   it('sin, cos and tan keep 40 correct digits at 40-digit arguments within 1e-30 of kπ/2', () => {
     const halfPi = M160.pi().div(2);
     fc.assert(
-      fc.property(fc.integer({ min: -1000000, max: 1000000 }), fc.integer({ min: -30, max: 30 }), (k, off) => {
-        // x = k·π/2 rounded to 40 digits, nudged by off units of the 40th digit
-        const base = halfPi.times(k).toSignificantDigits(40);
-        const x = base.plus(M160.big(10).pow(base.abs().log(10).floor().minus(39)).times(off)).toString();
-        if (M160.big(x).isZero()) return;
-        for (const [name, mine, theirs] of [
-          ['sin', E40.sin, M160.sin],
-          ['cos', E40.cos, M160.cos],
-          ['tan', E40.tan, M160.tan],
-        ] as const) {
-          const r = ref(M160, theirs(x), 40);
-          expect(M160.big(mine(x)).eq(r), `${name}(${x})`).toBe(true);
-        }
-      }),
+      fc.property(
+        fc.integer({ min: -1000000, max: 1000000 }),
+        fc.integer({ min: -30, max: 30 }),
+        (k, off) => {
+          // x = k·π/2 rounded to 40 digits, nudged by off units of the 40th digit
+          const base = halfPi.times(k).toSignificantDigits(40);
+          const x = base
+            .plus(M160.big(10).pow(base.abs().log(10).floor().minus(39)).times(off))
+            .toString();
+          if (M160.big(x).isZero()) return;
+          for (const [name, mine, theirs] of [
+            ['sin', E40.sin, M160.sin],
+            ['cos', E40.cos, M160.cos],
+            ['tan', E40.tan, M160.tan],
+          ] as const) {
+            const r = ref(M160, theirs(x), 40);
+            expect(M160.big(mine(x)).eq(r), `${name}(${x})`).toBe(true);
+          }
+        },
+      ),
       { numRuns: 80 },
     );
   });
@@ -141,7 +165,14 @@ describe('decimalElementary near multiples of π/2 (reference: mathjs at 160 dig
 
 describe('decimalElementary exact cases and rounding', () => {
   it('returns the exact values sin 0 = 0, cos 0 = 1, tan 0 = 0, exp 0 = 1, ln 1 = 0, atan2(0, 1) = 0', () => {
-    expect([E40.sin('0'), E40.cos('0'), E40.tan('-0'), E40.exp('0'), E40.ln('1'), E40.atan2('0', '5')]).toEqual(['0', '1', '0', '1', '0', '0']);
+    expect([
+      E40.sin('0'),
+      E40.cos('0'),
+      E40.tan('-0'),
+      E40.exp('0'),
+      E40.ln('1'),
+      E40.atan2('0', '5'),
+    ]).toEqual(['0', '1', '0', '1', '0', '0']);
   });
   it('atan2(y, x) gives π for y = 0, x < 0 and ±π/2 on the y axis (range (−π, π])', () => {
     expect(E40.atan2('0', '-2')).toBe(E40.pi);
@@ -180,12 +211,16 @@ describe('decimal(d) and rational use decimalElementary', () => {
   });
   it(`rational.cos(x) is within 1e-40 of the true value (computed at ${RATIONAL_TRANSCENDENTAL_DIGITS} digits)`, () => {
     fc.assert(
-      fc.property(fc.integer({ min: -10000, max: 10000 }), fc.integer({ min: 1, max: 997 }), (n, d) => {
-        const c = rational.cos(rational.from(`${n}/${d}`));
-        const mine = M64.big(c.n.toString()).times(Number(c.s)).div(M64.big(c.d.toString()));
-        const truth = M64.big(n).div(d).cos();
-        expect(Number(mine.minus(truth).abs().toString())).toBeLessThan(1e-40);
-      }),
+      fc.property(
+        fc.integer({ min: -10000, max: 10000 }),
+        fc.integer({ min: 1, max: 997 }),
+        (n, d) => {
+          const c = rational.cos(rational.from(`${n}/${d}`));
+          const mine = M64.big(c.n.toString()).times(Number(c.s)).div(M64.big(c.d.toString()));
+          const truth = M64.big(n).div(d).cos();
+          expect(Number(mine.minus(truth).abs().toString())).toBeLessThan(1e-40);
+        },
+      ),
       { numRuns: 100 },
     );
   });

@@ -18,13 +18,21 @@ function exact(t: string): Fraction {
 function halfUlp(v: Fraction, digits: number): Fraction {
   const a = v.abs();
   let e = 0;
-  while (a.compare(new Fraction(10n ** BigInt(Math.max(e + 1, 0)), 10n ** BigInt(Math.max(-(e + 1), 0)))) >= 0) e++;
-  while (a.compare(new Fraction(10n ** BigInt(Math.max(e, 0)), 10n ** BigInt(Math.max(-e, 0)))) < 0) e--;
+  while (
+    a.compare(
+      new Fraction(10n ** BigInt(Math.max(e + 1, 0)), 10n ** BigInt(Math.max(-(e + 1), 0))),
+    ) >= 0
+  )
+    e++;
+  while (a.compare(new Fraction(10n ** BigInt(Math.max(e, 0)), 10n ** BigInt(Math.max(-e, 0)))) < 0)
+    e--;
   const k = e - digits + 1;
   return new Fraction(10n ** BigInt(Math.max(k, 0)), 2n * 10n ** BigInt(Math.max(-k, 0)));
 }
 
-const digitsText = fc.tuple(fc.bigInt({ min: 1n, max: 10n ** 30n }), fc.integer({ min: -20, max: 20 })).map(([n, k]) => `${n}e${k}`);
+const digitsText = fc
+  .tuple(fc.bigInt({ min: 1n, max: 10n ** 30n }), fc.integer({ min: -20, max: 20 }))
+  .map(([n, k]) => `${n}e${k}`);
 
 describe('decimal(digits)', () => {
   it('decimal(30) gives 1/3 to 30 significant digits while decimal(10) in the same process gives 10', () => {
@@ -38,7 +46,7 @@ describe('decimal(digits)', () => {
     expect(c).toBe(a);
   });
 
-  it('leaves big.js\'s own global settings untouched', () => {
+  it("leaves big.js's own global settings untouched", () => {
     decimal(50).div(decimal(50).one, decimal(50).from(7));
     expect(Big.DP).toBe(20);
     expect(Big.RM).toBe(1);
@@ -60,28 +68,41 @@ describe('decimal(digits)', () => {
     expect(D.toString(D.from('-1.125'))).toBe('-1.12');
   });
 
-  it.each([5, 17, 34, 60])('div(a, b) in decimal(%i) is correctly rounded (within half an ulp of the exact quotient)', (digits) => {
-    const D = decimal(digits);
-    fc.assert(fc.property(digitsText, digitsText, (x, y) => {
-      const a = D.from(x), b = D.from(y);
-      const q = exact(D.toString(D.div(a, b)));
-      const truth = exact(D.toString(a)).div(exact(D.toString(b)));
-      expect(q.sub(truth).abs().compare(halfUlp(truth, digits))).toBeLessThanOrEqual(0);
-    }), { numRuns: 200 });
-  });
+  it.each([5, 17, 34, 60])(
+    'div(a, b) in decimal(%i) is correctly rounded (within half an ulp of the exact quotient)',
+    (digits) => {
+      const D = decimal(digits);
+      fc.assert(
+        fc.property(digitsText, digitsText, (x, y) => {
+          const a = D.from(x),
+            b = D.from(y);
+          const q = exact(D.toString(D.div(a, b)));
+          const truth = exact(D.toString(a)).div(exact(D.toString(b)));
+          expect(q.sub(truth).abs().compare(halfUlp(truth, digits))).toBeLessThanOrEqual(0);
+        }),
+        { numRuns: 200 },
+      );
+    },
+  );
 
-  it.each([5, 17, 34, 60])('sqrt(a) in decimal(%i) is correctly rounded (r brackets √a within half an ulp)', (digits) => {
-    const D = decimal(digits);
-    fc.assert(fc.property(digitsText, (x) => {
-      const a = D.from(x);
-      const r = exact(D.toString(D.sqrt(a) as Decimal));
-      const h = halfUlp(r, digits);
-      const A = exact(D.toString(a));
-      // √a lies in [r − h, r + h]  ⇔  (r − h)² ≤ a ≤ (r + h)²
-      expect(r.sub(h).mul(r.sub(h)).compare(A)).toBeLessThanOrEqual(0);
-      expect(r.add(h).mul(r.add(h)).compare(A)).toBeGreaterThanOrEqual(0);
-    }), { numRuns: 200 });
-  });
+  it.each([5, 17, 34, 60])(
+    'sqrt(a) in decimal(%i) is correctly rounded (r brackets √a within half an ulp)',
+    (digits) => {
+      const D = decimal(digits);
+      fc.assert(
+        fc.property(digitsText, (x) => {
+          const a = D.from(x);
+          const r = exact(D.toString(D.sqrt(a) as Decimal));
+          const h = halfUlp(r, digits);
+          const A = exact(D.toString(a));
+          // √a lies in [r − h, r + h]  ⇔  (r − h)² ≤ a ≤ (r + h)²
+          expect(r.sub(h).mul(r.sub(h)).compare(A)).toBeLessThanOrEqual(0);
+          expect(r.add(h).mul(r.add(h)).compare(A)).toBeGreaterThanOrEqual(0);
+        }),
+        { numRuns: 200 },
+      );
+    },
+  );
 
   it('agrees with mathjs BigNumber (an independent decimal library) on √2 and 22/7 to 50 digits', () => {
     const m = create(all!, { number: 'BigNumber', precision: 80 });
@@ -113,15 +134,24 @@ describe('rational', () => {
     expect(rational.toString(rational.sqrt(rational.from('0.0001'))!)).toBe('1/100');
     expect(rational.sqrt(rational.from(2))).toBeUndefined();
     expect(rational.sqrt(rational.from('4/3'))).toBeUndefined();
-    expect(rational.toString(rational.sqrt(rational.from((10n ** 40n + 1n) ** 2n))!)).toBe(String(10n ** 40n + 1n));
+    expect(rational.toString(rational.sqrt(rational.from((10n ** 40n + 1n) ** 2n))!)).toBe(
+      String(10n ** 40n + 1n),
+    );
   });
-  it('toNumber is correctly rounded (JavaScript\'s own decimal parsing as the reference)', () => {
-    fc.assert(fc.property(fc.bigInt({ min: 1n, max: 10n ** 40n }), fc.integer({ min: -330, max: 290 }), (n, k) => {
-      const t = `${n}e${k}`;
-      const want = Number(t);
-      if (Number.isFinite(want)) expect(rational.toNumber(rational.from(t))).toBe(want);
-      else expect(() => rational.toNumber(rational.from(t))).toThrow(/NOT_FINITE/);
-    }), { numRuns: 500 });
+  it("toNumber is correctly rounded (JavaScript's own decimal parsing as the reference)", () => {
+    fc.assert(
+      fc.property(
+        fc.bigInt({ min: 1n, max: 10n ** 40n }),
+        fc.integer({ min: -330, max: 290 }),
+        (n, k) => {
+          const t = `${n}e${k}`;
+          const want = Number(t);
+          if (Number.isFinite(want)) expect(rational.toNumber(rational.from(t))).toBe(want);
+          else expect(() => rational.toNumber(rational.from(t))).toThrow(/NOT_FINITE/);
+        },
+      ),
+      { numRuns: 500 },
+    );
   });
   it('toNumber refuses values beyond the range of a JS number', () => {
     expect(() => rational.toNumber(rational.from('1e400'))).toThrow(/NOT_FINITE/);
@@ -129,7 +159,11 @@ describe('rational', () => {
 });
 
 describe('toPrecision(a, digits)', () => {
-  const A3: Array<[string, Arithmetic<any>]> = [['rational', rational], ['decimal(40)', decimal(40)], ['float', float]];
+  const A3: Array<[string, Arithmetic<any>]> = [
+    ['rational', rational],
+    ['decimal(40)', decimal(40)],
+    ['float', float],
+  ];
   it.each(A3)('%s rounds half away from zero and carries into a new digit', (_n, A) => {
     expect(A.toPrecision(A.from('2/3'), 5)).toBe('0.66667');
     expect(A.toPrecision(A.from('0.125'), 2)).toBe('0.13');
@@ -147,7 +181,11 @@ describe('toPrecision(a, digits)', () => {
   });
 });
 
-const all3: Array<[string, Arithmetic<any>]> = [['rational', rational], ['decimal(20)', decimal(20)], ['float', float]];
+const all3: Array<[string, Arithmetic<any>]> = [
+  ['rational', rational],
+  ['decimal(20)', decimal(20)],
+  ['float', float],
+];
 
 describe.each(all3)('%s refuses what has no value', (_n, A) => {
   it('div(a, 0) throws DIVISION_BY_ZERO', () => {
@@ -165,7 +203,8 @@ describe.each(all3)('%s refuses what has no value', (_n, A) => {
     expect(() => A.atan2(A.zero, A.zero)).toThrow(/INVALID_ARGUMENT/);
   });
   it('compares, signs and tests for zero', () => {
-    const a = A.from('-3/2'), b = A.from('1/4');
+    const a = A.from('-3/2'),
+      b = A.from('1/4');
     expect(A.cmp(a, b)).toBe(-1);
     expect(A.cmp(b, a)).toBe(1);
     expect(A.cmp(a, A.from('-1.5'))).toBe(0);
@@ -205,7 +244,9 @@ describe('QuadspreadError', () => {
       expect(q.name).toBe('QuadspreadError');
       expect(q.code).toBe('INVALID_NUMBER');
       expect(q.where).toBe('rational.from(x)');
-      expect(q.message).toBe('quadspread INVALID_NUMBER: rational.from(x): "12..5" is not a number');
+      expect(q.message).toBe(
+        'quadspread INVALID_NUMBER: rational.from(x): "12..5" is not a number',
+      );
     }
   });
   it('is matched by instanceof through its brand, as a copy from another entry would be', () => {
@@ -254,13 +295,19 @@ describe('rational and decimal operations take only their own values', () => {
   });
 
   it('names the operation and the value', () => {
-    expect(() => R.add(R.one, 2 as never)).toThrow(/^quadspread INVALID_NUMBER: rational\.add\(…\): 2 \(number\) is not a rational value/);
+    expect(() => R.add(R.one, 2 as never)).toThrow(
+      /^quadspread INVALID_NUMBER: rational\.add\(…\): 2 \(number\) is not a rational value/,
+    );
   });
 
   it('a point of plain numbers in rational is refused by the geometry primitives (they take values)', async () => {
     const { quadrance, point } = await import('../../src/geometry/index.js');
-    expect(codeOf(() => quadrance(R, { x: 0, y: 0 } as never, { x: 3, y: 4 } as never))).toBe('INVALID_NUMBER');
-    expect(codeOf(() => quadrance(R, point(R, 0, 0), point(D, '0.1', 0) as never))).toBe('INVALID_NUMBER');
+    expect(codeOf(() => quadrance(R, { x: 0, y: 0 } as never, { x: 3, y: 4 } as never))).toBe(
+      'INVALID_NUMBER',
+    );
+    expect(codeOf(() => quadrance(R, point(R, 0, 0), point(D, '0.1', 0) as never))).toBe(
+      'INVALID_NUMBER',
+    );
     expect(R.toString(quadrance(R, point(R, 0, 0), point(R, 3, 4)))).toBe('25');
   });
 

@@ -3,7 +3,14 @@
 // (e.g. 1.5e-3 = 15/10000 = 3/2000); they are not produced by the code under test.
 import { describe, expect, it } from 'vitest';
 import Fraction from 'fraction.js';
-import { rational, decimal, float, QuadspreadError, MAX_INPUT_LENGTH, readRatio } from '../../src/index.js';
+import {
+  rational,
+  decimal,
+  float,
+  QuadspreadError,
+  MAX_INPUT_LENGTH,
+  readRatio,
+} from '../../src/index.js';
 import type { Arithmetic } from '../../src/index.js';
 
 interface Case {
@@ -118,7 +125,10 @@ describe.each(arithmetics)('%s.from(x)', (_name, A) => {
     } else {
       // Correct rounding: the error is within half a unit in the last place. For decimal(d)
       // that is 5·10^-d relative to the value; for float, 2^-53 relative.
-      const rel = A === float ? new Fraction(1n, 2n ** 53n) : new Fraction(5n, 10n ** BigInt((A as unknown as { digits: number }).digits));
+      const rel =
+        A === float
+          ? new Fraction(1n, 2n ** 53n)
+          : new Fraction(5n, 10n ** BigInt((A as unknown as { digits: number }).digits));
       const err = got.sub(want).abs();
       expect(err.compare(want.abs().mul(rel))).toBeLessThanOrEqual(0);
     }
@@ -185,13 +195,16 @@ describe('readRatio', () => {
     const r = readRatio('1.5e-3', 'test');
     expect(`${r.n}/${r.d}`).toBe('15/10000');
   });
-  it.each([[undefined], [null], [12], [{}]])('refuses %s, which is not text, with INVALID_NUMBER', (x) => {
-    let c = 'no error';
-    try {
-      readRatio(x as never, 'test');
-    } catch (e) {
-      c = e instanceof QuadspreadError ? e.code : `not a QuadspreadError: ${String(e)}`;
-    }
-    expect(c).toBe('INVALID_NUMBER');
-  });
+  it.each([[undefined], [null], [12], [{}]])(
+    'refuses %s, which is not text, with INVALID_NUMBER',
+    (x) => {
+      let c = 'no error';
+      try {
+        readRatio(x as never, 'test');
+      } catch (e) {
+        c = e instanceof QuadspreadError ? e.code : `not a QuadspreadError: ${String(e)}`;
+      }
+      expect(c).toBe('INVALID_NUMBER');
+    },
+  );
 });

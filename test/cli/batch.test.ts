@@ -1,7 +1,7 @@
 // The batch command: a CSV streams through one computation; progress on stderr only when
 // stderr is a terminal; with --out nothing is written unless every row is computed.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { existsSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { runBatch } from '../../src/cli/batch';
 import { bundleCli, cleanUp, cli, tempFolder } from './helpers';
@@ -22,7 +22,10 @@ afterAll(cleanUp);
 describe('quadspread batch', () => {
   it('inverses: writes the quadrance exactly and the distance that Math.hypot gives, without progress when stderr is not a terminal', () => {
     const rows = Array.from({ length: 200 }, (_, i) => [i * 1.5, 2 * i, 300 - i, i * 0.25]);
-    const f = csv('pairs.csv', 'east1,north1,east2,north2\n' + rows.map((r) => r.join(',')).join('\n') + '\n');
+    const f = csv(
+      'pairs.csv',
+      'east1,north1,east2,north2\n' + rows.map((r) => r.join(',')).join('\n') + '\n',
+    );
     const r = cli(['batch', 'inverses', f, '--arithmetic', 'rational', '--digits', '12']);
     expect(r.code).toBe(0);
     expect(r.stderr).toBe('');
@@ -42,16 +45,30 @@ describe('quadspread batch', () => {
     const r = cli(['batch', 'triangles', f, '--arithmetic', 'float']);
     expect(r.code).toBe(0);
     const [, a, b] = r.stdout.trim().split('\n');
-    expect(a!.split(',').slice(7)).toEqual(['25.00000000', '9.000000000', '16.00000000', '1.000000000', '0.3600000000', '0.6400000000', '576.0000000']);
+    expect(a!.split(',').slice(7)).toEqual([
+      '25.00000000',
+      '9.000000000',
+      '16.00000000',
+      '1.000000000',
+      '0.3600000000',
+      '0.6400000000',
+      '576.0000000',
+    ]);
     const [x1, y1, x2, y2, x3, y3] = [1, 2, 7, 3, 2, 9];
     const angle = Math.atan2(y3 - y1, x3 - x1) - Math.atan2(y2 - y1, x2 - x1);
     expect(Number(b!.split(',')[10])).toBeCloseTo(Math.sin(angle) ** 2, 9);
   });
 
   it('heights: h = d·tan α, negative below the horizon, from the standard input', () => {
-    const r = cli(['batch', 'heights', '-', '--arithmetic', 'decimal'], { input: 'horizontal,elevation\n100,45\n120.5,-12.25\n' });
+    const r = cli(['batch', 'heights', '-', '--arithmetic', 'decimal'], {
+      input: 'horizontal,elevation\n100,45\n120.5,-12.25\n',
+    });
     expect(r.code).toBe(0);
-    const rows = r.stdout.trim().split('\n').slice(1).map((l) => Number(l.split(',')[3]));
+    const rows = r.stdout
+      .trim()
+      .split('\n')
+      .slice(1)
+      .map((l) => Number(l.split(',')[3]));
     expect(rows[0]).toBeCloseTo(100, 8);
     expect(rows[1]).toBeCloseTo(-120.5 * Math.tan((12.25 * Math.PI) / 180), 7);
   });
@@ -59,7 +76,7 @@ describe('quadspread batch', () => {
   it('exits 2 naming the line and column of a bad value, and writes no --out file', () => {
     const f = csv('bad.csv', 'east1,north1,east2,north2\n0,0,3,4\n1,1,two,5\n');
     const out = join(dir, 'bad-out', 'r.csv');
-    require('node:fs').mkdirSync(join(dir, 'bad-out'));
+    mkdirSync(join(dir, 'bad-out'));
     const r = cli(['batch', 'inverses', f, '--out', out]);
     expect(r.code).toBe(2);
     expect(r.stderr).toContain('line 3, column "east2": "two" is not a number');
@@ -82,9 +99,17 @@ describe('quadspread batch', () => {
 
   it('writes --out atomically when every row is computed', () => {
     const out = join(dir, 'ok.csv');
-    const r = cli(['batch', 'inverses', csv('ok-in.csv', 'east1,north1,east2,north2\n0,0,3,4\n'), '--out', out]);
+    const r = cli([
+      'batch',
+      'inverses',
+      csv('ok-in.csv', 'east1,north1,east2,north2\n0,0,3,4\n'),
+      '--out',
+      out,
+    ]);
     expect(r.code).toBe(0);
-    expect(readFileSync(out, 'utf8')).toBe('east1,north1,east2,north2,quadrance,distance\n0,0,3,4,25.00000000,5.000000000\n');
+    expect(readFileSync(out, 'utf8')).toBe(
+      'east1,north1,east2,north2,quadrance,distance\n0,0,3,4,25.00000000,5.000000000\n',
+    );
     expect(r.stderr).toBe(`1 row written to ${out}\n`);
   });
 
@@ -92,7 +117,12 @@ describe('quadspread batch', () => {
     const f = csv('tty.csv', 'east1,north1,east2,north2\n0,0,3,4\n0,0,6,8\n');
     const err: string[] = [];
     const out: string[] = [];
-    await runBatch('inverses', f, { arithmetic: 'float', digits: 6, out: undefined }, { stdout: (t) => out.push(t), stderr: (t) => err.push(t), stderrIsTTY: true });
+    await runBatch(
+      'inverses',
+      f,
+      { arithmetic: 'float', digits: 6, out: undefined },
+      { stdout: (t) => out.push(t), stderr: (t) => err.push(t), stderrIsTTY: true },
+    );
     expect(err.join('')).toMatch(/\rquadspread batch inverses: 2 rows done\n$/);
     expect(out.join('')).toContain('0,0,6,8,100.000,10.0000');
   });

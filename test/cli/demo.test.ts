@@ -5,9 +5,23 @@ import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { bundleCli, cleanUp, cli } from './helpers';
 
-interface Q { name: string; value: string; exact?: string; sigma?: string; budget?: { input: string; share: string }[] }
-interface T { kind: string; name: string; results: Q[]; checks: { name: string; pass: boolean; value: string }[] }
-interface Job { points: Record<string, { east: number | { value: number }; north: number | { value: number } }>; tasks: Record<string, unknown>[] }
+interface Q {
+  name: string;
+  value: string;
+  exact?: string;
+  sigma?: string;
+  budget?: { input: string; share: string }[];
+}
+interface T {
+  kind: string;
+  name: string;
+  results: Q[];
+  checks: { name: string; pass: boolean; value: string }[];
+}
+interface Job {
+  points: Record<string, { east: number | { value: number }; north: number | { value: number } }>;
+  tasks: Record<string, unknown>[];
+}
 
 let report: { tasks: T[]; caution: string; summary: { failed: number } };
 let text: string;
@@ -48,19 +62,25 @@ afterAll(cleanUp);
 describe('quadspread demo', () => {
   it('exits 0 and prints a text report that ends with the safety caution', () => {
     expect(text).toMatch(/quadspread report: /);
-    expect(text.trimEnd().endsWith('Design and setting-out follow local codes and licensed practice.')).toBe(true);
+    expect(
+      text.trimEnd().endsWith('Design and setting-out follow local codes and licensed practice.'),
+    ).toBe(true);
     expect(text).toMatch(/check independently|check every result independently/);
   });
 
   it('prints, in the text report, the values that classical trigonometry gives, to the digits shown', () => {
     // Path across a 1 in 3.5 slope holding 1 in 12 (apparent dip: cos β = tan g / tan φ).
-    const beta = Math.acos((1 / 12) / (1 / 3.5)) * (180 / Math.PI);
+    const beta = Math.acos(1 / 12 / (1 / 3.5)) * (180 / Math.PI);
     expect(text).toContain(`[offset_angle]: ${beta.toPrecision(10)} °`);
     // Beacon height from H1: h = d·tan α.
     const d1 = Math.hypot(2105 - 2000, 3160 - 3000);
-    expect(text).toContain(`[H1.height]: ${(d1 * Math.tan(rad(dms(`7°08'52.8"`)))).toPrecision(10)} m`);
+    expect(text).toContain(
+      `[H1.height]: ${(d1 * Math.tan(rad(dms(`7°08'52.8"`)))).toPrecision(10)} m`,
+    );
     // Levelling: misclosure = start + ΣBS − ΣFS − close, in mm.
-    expect(text).toContain(`[misclosure]: ${((112.406 + 1.652 + 2.114 + 1.337 - 0.873 - 1.005 - 1.612 - 114.023) * 1000).toPrecision(4)}`);
+    expect(text).toContain(
+      `[misclosure]: ${((112.406 + 1.652 + 2.114 + 1.337 - 0.873 - 1.005 - 1.612 - 114.023) * 1000).toPrecision(4)}`,
+    );
   });
 
   it('runs the same job as examples/demo.json', () => {
@@ -76,8 +96,12 @@ describe('quadspread demo', () => {
 
   it('gives the traverse misclosure that latitudes and departures by Math.cos/Math.sin give', () => {
     const t = task('traverse');
-    const courses = jobTask('traverse').courses as { bearing: { value: string }; distance: { value: number } }[];
-    let e = 0, n = 0;
+    const courses = jobTask('traverse').courses as {
+      bearing: { value: string };
+      distance: { value: number };
+    }[];
+    let e = 0,
+      n = 0;
     for (const c of courses) {
       const az = rad(dms(c.bearing.value));
       e += c.distance.value * Math.sin(az); // departure = d sin(azimuth), bearings clockwise from north
@@ -89,11 +113,21 @@ describe('quadspread demo', () => {
     // Compass rule (Bowditch): the correction to the first course is −misclosure · d1 / total length.
     const total = courses.reduce((s, c) => s + c.distance.value, 0);
     const start = job.points.CM1!;
-    const d1 = courses[0]!.distance.value, az1 = rad(dms(courses[0]!.bearing.value));
-    expect(value(t, 'CM2.east')).toBeCloseTo(num(start.east) + d1 * Math.sin(az1) - (e * d1) / total, 8);
-    expect(value(t, 'CM2.north')).toBeCloseTo(num(start.north) + d1 * Math.cos(az1) - (n * d1) / total, 8);
+    const d1 = courses[0]!.distance.value,
+      az1 = rad(dms(courses[0]!.bearing.value));
+    expect(value(t, 'CM2.east')).toBeCloseTo(
+      num(start.east) + d1 * Math.sin(az1) - (e * d1) / total,
+      8,
+    );
+    expect(value(t, 'CM2.north')).toBeCloseTo(
+      num(start.north) + d1 * Math.cos(az1) - (n * d1) / total,
+      8,
+    );
     expect(t.checks.find((c) => c.name === 'precision')!.pass).toBe(true);
-    expect(Number(t.checks.find((c) => c.name === 'precision')!.value)).toBeCloseTo(total / Math.hypot(e, n), 0);
+    expect(Number(t.checks.find((c) => c.name === 'precision')!.value)).toBeCloseTo(
+      total / Math.hypot(e, n),
+      0,
+    );
   });
 
   it('gives the parcel area that the shoelace formula in floats gives, exactly as a fraction', () => {
@@ -102,7 +136,8 @@ describe('quadspread demo', () => {
     const p = names.map((k) => ({ x: num(job.points[k]!.east), y: num(job.points[k]!.north) }));
     let twice = 0;
     for (let i = 0; i < p.length; i++) {
-      const a = p[i]!, b = p[(i + 1) % p.length]!;
+      const a = p[i]!,
+        b = p[(i + 1) % p.length]!;
       twice += a.x * b.y - b.x * a.y;
     }
     expect(value(t, 'area')).toBeCloseTo(Math.abs(twice) / 2, 6);
@@ -120,7 +155,7 @@ describe('quadspread demo, elevation and design tasks', () => {
     const t = task('path-grade');
     // Slope "1 in 3.5" along the fall line, ruling grade "1 in 12", offsets on the plan:
     // cos β = tan g / tan φ (apparent dip of a plane; classical structural geology).
-    const beta = Math.acos((1 / 12) / (1 / 3.5)) * (180 / Math.PI);
+    const beta = Math.acos(1 / 12 / (1 / 3.5)) * (180 / Math.PI);
     expect(value(t, 'offset_angle')).toBeCloseTo(beta, 8);
     expect(t.results.find((r) => r.name === 'offset_spread')!.exact).toBe('527/576'); // sin²β = 1 − (3.5/12)², derived
     expect(value(t, 'bearing_right')).toBeCloseTo(212.5 + beta, 8);
@@ -145,14 +180,19 @@ describe('quadspread demo, elevation and design tasks', () => {
     expect(value(t, 'height')).toBeGreaterThanOrEqual(Math.min(h1, h2) - 1e-9);
     expect(value(t, 'height')).toBeLessThanOrEqual(Math.max(h1, h2) + 1e-9);
     // σ of h = d·tan α from σ_α = 5″: σ_h = d·sec²α·σ_α (derived by differentiation).
-    const sig = d1 / Math.cos(rad(dms(`7°08'52.8"`))) ** 2 * rad(5 / 3600);
+    const sig = (d1 / Math.cos(rad(dms(`7°08'52.8"`))) ** 2) * rad(5 / 3600);
     expect(Number(t.results.find((r) => r.name === 'H1.height')!.sigma)).toBeCloseTo(sig, 4);
   });
 
   it('gives a mast position and height that reproduce every causeway reading to within a few seconds (Math.atan)', () => {
     const t = task('inline-height');
-    const h = value(t, 'height'), f = value(t, 'foot_chainage'), e = value(t, 'foot_offset');
-    const stations = jobTask('inline-height').stations as { chainage: number; vertical: { elevation: string } }[];
+    const h = value(t, 'height'),
+      f = value(t, 'foot_chainage'),
+      e = value(t, 'foot_offset');
+    const stations = jobTask('inline-height').stations as {
+      chainage: number;
+      vertical: { elevation: string };
+    }[];
     for (const s of stations) {
       const predicted = Math.atan(h / Math.hypot(s.chainage - f, e)) * (180 / Math.PI);
       expect(Math.abs(predicted - dms(s.vertical.elevation)) * 3600).toBeLessThan(3);
@@ -160,17 +200,27 @@ describe('quadspread demo, elevation and design tasks', () => {
     expect(value(t, 'level')).toBeCloseTo(4.212 + h, 8);
     // The residual check as a horizontal distance: the station-to-foot distance from the fitted
     // foot, less the one the reading gives with the fitted height, h / tan α (derived).
-    const H = value(t, 'H'), eq = value(t, 'foot_offset_Q');
-    const worst = Math.max(...stations.map((s) => Math.abs(Math.sqrt((s.chainage - f) ** 2 + eq) - Math.sqrt(H) / Math.tan(rad(dms(s.vertical.elevation))))));
+    const H = value(t, 'H'),
+      eq = value(t, 'foot_offset_Q');
+    const worst = Math.max(
+      ...stations.map((s) =>
+        Math.abs(
+          Math.sqrt((s.chainage - f) ** 2 + eq) -
+            Math.sqrt(H) / Math.tan(rad(dms(s.vertical.elevation))),
+        ),
+      ),
+    );
     const check = t.checks.find((c) => c.name === 'residuals')!;
     expect(Number(check.value)).toBeCloseTo(worst, 7);
     expect(check.pass).toBe(worst <= 0.01);
   });
 
-  it('gives the triangle area that Heron\'s formula gives and spreads equal to sin² by the law of cosines', () => {
+  it("gives the triangle area that Heron's formula gives and spreads equal to sin² by the law of cosines", () => {
     const t = task('triangle');
     const k = jobTask('triangle').known as Record<string, { value: number }>;
-    const a = k.side1!.value, b = k.side2!.value, c = k.side3!.value;
+    const a = k.side1!.value,
+      b = k.side2!.value,
+      c = k.side3!.value;
     const s = (a + b + c) / 2;
     expect(value(t, 'area')).toBeCloseTo(Math.sqrt(s * (s - a) * (s - b) * (s - c)), 5); // Heron
     const A1 = Math.acos((b * b + c * c - a * a) / (2 * b * c));
@@ -182,14 +232,19 @@ describe('quadspread demo, elevation and design tasks', () => {
     const P = (k: string) => ({ x: num(job.points[k]!.east), y: num(job.points[k]!.north) });
     const [p1, p2, p3, p4] = [P('Q1'), P('Q3'), P('Q2'), P('Q4')];
     const den = (p1.x - p2.x) * (p3.y - p4.y) - (p1.y - p2.y) * (p3.x - p4.x);
-    const a = p1.x * p2.y - p1.y * p2.x, b = p3.x * p4.y - p3.y * p4.x;
+    const a = p1.x * p2.y - p1.y * p2.x,
+      b = p3.x * p4.y - p3.y * p4.x;
     expect(value(t, 'QC.east')).toBeCloseTo((a * (p3.x - p4.x) - (p1.x - p2.x) * b) / den, 8);
     expect(value(t, 'QC.north')).toBeCloseTo((a * (p3.y - p4.y) - (p1.y - p2.y) * b) / den, 8);
   });
 
   it('gives the levelling misclosure that ΣBS − ΣFS gives, against 12 mm·√K', () => {
     const t = task('levelling');
-    const lv = jobTask('levelling') as { start: number; close: number; sights: { bs?: number; fs?: number; distance?: number }[] };
+    const lv = jobTask('levelling') as {
+      start: number;
+      close: number;
+      sights: { bs?: number; fs?: number; distance?: number }[];
+    };
     const sum = (k: 'bs' | 'fs') => lv.sights.reduce((s, r) => s + (r[k] ?? 0), 0);
     const mis = (lv.start + sum('bs') - sum('fs') - lv.close) * 1000;
     expect(value(t, 'misclosure')).toBeCloseTo(mis, 6);
@@ -200,21 +255,42 @@ describe('quadspread demo, elevation and design tasks', () => {
     // counted check: the one check on the readings is the misclosure.
     expect(t.checks.map((c) => c.name)).toEqual(['misclosure']);
     const notes = (t as T & { notes: string[] }).notes;
-    expect(notes.some((n) => n.includes(`last − first = ${Number((sum('bs') - sum('fs')).toFixed(9))} m`))).toBe(true);
+    expect(
+      notes.some((n) =>
+        n.includes(`last − first = ${Number((sum('bs') - sum('fs')).toFixed(9))} m`),
+      ),
+    ).toBe(true);
   });
 });
 
 describe('quadspread demo, trigonometric heighting and resection', () => {
   it('gives the trigonometric height difference of hi + S·cos z − ht + (1 − k)·D²/(2R) with k = 0.13, R = 6371 km', () => {
     const t = task('trig-height');
-    const j = jobTask('trig-height') as { distance: { value: number }; vertical: { zenith: string }; instrumentHeight: number; targetHeight: number; backward: { distance: number; vertical: { zenith: string }; instrumentHeight: number; targetHeight: number }; stationLevel: { value: number } };
+    const j = jobTask('trig-height') as {
+      distance: { value: number };
+      vertical: { zenith: string };
+      instrumentHeight: number;
+      targetHeight: number;
+      backward: {
+        distance: number;
+        vertical: { zenith: string };
+        instrumentHeight: number;
+        targetHeight: number;
+      };
+      stationLevel: { value: number };
+    };
     const dh = (S: number, z: string, hi: number, ht: number) => {
       const zr = rad(dms(z));
       const D = S * Math.sin(zr);
       return hi + S * Math.cos(zr) - ht + ((1 - 0.13) * D * D) / (2 * 6371000); // Ghilani & Wolf ch. 4 form (from memory)
     };
     const f = dh(j.distance.value, j.vertical.zenith, j.instrumentHeight, j.targetHeight);
-    const b = dh(j.backward.distance, j.backward.vertical.zenith, j.backward.instrumentHeight, j.backward.targetHeight);
+    const b = dh(
+      j.backward.distance,
+      j.backward.vertical.zenith,
+      j.backward.instrumentHeight,
+      j.backward.targetHeight,
+    );
     expect(value(t, 'difference')).toBeCloseTo(f, 8);
     expect(value(t, 'backward')).toBeCloseTo(b, 8);
     expect(value(t, 'mean')).toBeCloseTo((f - b) / 2, 8);

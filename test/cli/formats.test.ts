@@ -26,7 +26,9 @@ afterAll(cleanUp);
 describe('published schemas', () => {
   it('docs/job-schema.json and docs/report-schema.json are what the runner uses (quadspread schema …)', () => {
     expect(JSON.parse(cli(['schema', 'job']).stdout)).toEqual(readJson('docs/job-schema.json'));
-    expect(JSON.parse(cli(['schema', 'report']).stdout)).toEqual(readJson('docs/report-schema.json'));
+    expect(JSON.parse(cli(['schema', 'report']).stdout)).toEqual(
+      readJson('docs/report-schema.json'),
+    );
   });
 
   it('every example job is valid for ajv against docs/job-schema.json and runs with exit 0', () => {
@@ -61,24 +63,34 @@ describe('published schemas', () => {
 });
 
 describe('quadspread demo --format json', () => {
-  it.each(['rational', 'decimal', 'float'])('is valid against docs/report-schema.json with --arithmetic %s', (arithmetic) => {
-    const r = cli(['demo', '--format', 'json', '--arithmetic', arithmetic, '--digits', '8']);
-    expect(r.code).toBe(0);
-    const report = JSON.parse(r.stdout);
-    const validate = ajv().compile(readJson('docs/report-schema.json'));
-    expect(validate.errors ?? validate(report)).toBe(true);
-    expect(report.arithmetic).toMatch(arithmetic === 'decimal' ? /^decimal\(18\)$/ : new RegExp(`^${arithmetic}$`));
-    expect(report.caution).toMatch(/check .*independently/);
-  });
+  it.each(['rational', 'decimal', 'float'])(
+    'is valid against docs/report-schema.json with --arithmetic %s',
+    (arithmetic) => {
+      const r = cli(['demo', '--format', 'json', '--arithmetic', arithmetic, '--digits', '8']);
+      expect(r.code).toBe(0);
+      const report = JSON.parse(r.stdout);
+      const validate = ajv().compile(readJson('docs/report-schema.json'));
+      expect(validate.errors ?? validate(report)).toBe(true);
+      expect(report.arithmetic).toMatch(
+        arithmetic === 'decimal' ? /^decimal\(18\)$/ : new RegExp(`^${arithmetic}$`),
+      );
+      expect(report.caution).toMatch(/check .*independently/);
+    },
+  );
 
   it('gives the same values in every arithmetic to the digits shown', () => {
-    const get = (a: string) => JSON.parse(cli(['demo', '--format', 'json', '--arithmetic', a, '--digits', '8']).stdout);
+    const get = (a: string) =>
+      JSON.parse(cli(['demo', '--format', 'json', '--arithmetic', a, '--digits', '8']).stdout);
     const [r, d, f] = ['rational', 'decimal', 'float'].map(get);
     r.tasks.forEach((t: { results: { name: string; value: string }[] }, i: number) => {
       t.results.forEach((q, j) => {
         const scale = Math.max(Math.abs(Number(q.value)), 1e-300);
-        expect(Math.abs(Number(d.tasks[i].results[j].value) - Number(q.value)) / scale).toBeLessThan(1e-7);
-        expect(Math.abs(Number(f.tasks[i].results[j].value) - Number(q.value)) / scale).toBeLessThan(1e-6);
+        expect(
+          Math.abs(Number(d.tasks[i].results[j].value) - Number(q.value)) / scale,
+        ).toBeLessThan(1e-7);
+        expect(
+          Math.abs(Number(f.tasks[i].results[j].value) - Number(q.value)) / scale,
+        ).toBeLessThan(1e-6);
       });
     });
   });
@@ -90,7 +102,11 @@ describe('quadspread demo --sketch', () => {
     const r = cli(['demo', '--sketch', svg, '--out', join(dir, 'demo.txt')]);
     expect(r.code).toBe(0);
     // Python's standard XML parser: an implementation independent of ours.
-    const py = spawnSync('python3', ['-c', `
+    const py = spawnSync(
+      'python3',
+      [
+        '-c',
+        `
 import json, sys, xml.etree.ElementTree as ET
 ns = {'s': 'http://www.w3.org/2000/svg'}
 root = ET.parse(sys.argv[1]).getroot()
@@ -101,8 +117,15 @@ print(json.dumps({
   'panels': [p.get('id') for p in panels],
   'classes': sorted({e.get('class') for e in root.iter() if e.get('class')}),
   'texts': [t.text for t in root.iter('{http://www.w3.org/2000/svg}text')],
-}))`, svg], { encoding: 'utf8' });
-    if (py.error) throw new Error(`this test needs python3 (its XML parser is independent of ours): ${py.error.message}`);
+}))`,
+        svg,
+      ],
+      { encoding: 'utf8' },
+    );
+    if (py.error)
+      throw new Error(
+        `this test needs python3 (its XML parser is independent of ours): ${py.error.message}`,
+      );
     expect(py.stderr).toBe('');
     const parsed = JSON.parse(py.stdout);
     expect(parsed.tag).toBe('{http://www.w3.org/2000/svg}svg');
@@ -110,8 +133,21 @@ print(json.dumps({
     expect(parsed.panels).toContain('task-2-plan-1');
     expect(parsed.panels).toContain('task-2-elevation-2');
     expect(parsed.panels).toContain('task-3-elevation-2');
-    expect(parsed.classes).toEqual(expect.arrayContaining(['station', 'target', 'sight', 'foot', 'course', 'boundary', 'panel plan', 'panel elevation']));
-    expect(parsed.texts).toEqual(expect.arrayContaining(['HB (foot)', 'H1', 'H2', 'C0', 'C475', 'mast top', 'CM2', 'QC']));
+    expect(parsed.classes).toEqual(
+      expect.arrayContaining([
+        'station',
+        'target',
+        'sight',
+        'foot',
+        'course',
+        'boundary',
+        'panel plan',
+        'panel elevation',
+      ]),
+    );
+    expect(parsed.texts).toEqual(
+      expect.arrayContaining(['HB (foot)', 'H1', 'H2', 'C0', 'C475', 'mast top', 'CM2', 'QC']),
+    );
     expect(parsed.texts.some((t: string) => /^h = 38\.5\d* m$/.test(t))).toBe(true);
     expect(parsed.texts.join(' ')).toMatch(/computational aid/);
   });
@@ -122,7 +158,9 @@ describe('quadspread demo --format markdown', () => {
     const r = cli(['demo', '--format', 'markdown']);
     expect(r.code).toBe(0);
     expect(r.stdout.startsWith('# Demonstration job')).toBe(true);
-    expect(r.stdout).toContain('| quantity | value | ± σ | exact form | budget (share of variance) |');
+    expect(r.stdout).toContain(
+      '| quantity | value | ± σ | exact form | budget (share of variance) |',
+    );
     expect(r.stdout).toContain('| check | value | tolerance | result |');
     expect(r.stdout).toContain('`527/576`');
     expect(r.stdout.trimEnd()).toMatch(/> \*\*Caution\.\*\* .*licensed practice\.$/);
@@ -133,14 +171,22 @@ describe('docs/cli.md', () => {
   const doc = readFileSync(resolve(root, 'docs/cli.md'), 'utf8');
   it('documents every task kind and every field of each', () => {
     const schema = readJson('docs/job-schema.json');
-    const kinds = schema.properties.tasks.items.oneOf as { properties: Record<string, { const?: string }> }[];
+    const kinds = schema.properties.tasks.items.oneOf as {
+      properties: Record<string, { const?: string }>;
+    }[];
     expect(kinds.length).toBeGreaterThanOrEqual(10);
     for (const k of kinds) {
       const kind = k.properties.kind!.const!;
       expect(doc).toContain(`**\`${kind}\`**`);
       const section = doc.slice(doc.indexOf(`**\`${kind}\`**`)).split('\n\n')[0]!;
-      for (const field of Object.keys(k.properties).filter((f) => f !== 'kind' && f !== 'name' && f !== 'correlations')) {
-        expect({ kind, field, documented: section.includes(`\`${field}\``) }).toEqual({ kind, field, documented: true });
+      for (const field of Object.keys(k.properties).filter(
+        (f) => f !== 'kind' && f !== 'name' && f !== 'correlations',
+      )) {
+        expect({ kind, field, documented: section.includes(`\`${field}\``) }).toEqual({
+          kind,
+          field,
+          documented: true,
+        });
       }
     }
   });
@@ -161,7 +207,9 @@ describe('docs/cli.md', () => {
 describe('quadspread demo says what its uncertainties are', () => {
   it('states once, at the top of text and Markdown, that ± is the standard uncertainty and what a budget share is', () => {
     const text = cli(['demo']).stdout.split('\n');
-    expect(text[2]).toMatch(/^± is the standard uncertainty \(k = 1, first order\); a budget gives each input's share of the variance/);
+    expect(text[2]).toMatch(
+      /^± is the standard uncertainty \(k = 1, first order\); a budget gives each input's share of the variance/,
+    );
     const md = cli(['demo', '--format', 'markdown']).stdout;
     expect(md).toContain('± σ is the standard uncertainty (k = 1, first order)');
   });

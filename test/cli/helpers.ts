@@ -37,7 +37,9 @@ export async function bundleCli(): Promise<string> {
     absWorkingDir: resolve(__dirname, '../..'),
     logLevel: 'error',
     // commander is CommonJS: give the ES module bundle a require() for its node: imports.
-    banner: { js: "import { createRequire as __createRequire } from 'node:module'; const require = __createRequire(import.meta.url);" },
+    banner: {
+      js: "import { createRequire as __createRequire } from 'node:module'; const require = __createRequire(import.meta.url);",
+    },
   });
   bundled = out;
   return out;

@@ -7,9 +7,14 @@ import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { bundleCli, cleanUp, cli, tempFolder } from './helpers';
 
-interface T { name: string; results: { name: string; value: string }[]; notes: string[] }
+interface T {
+  name: string;
+  results: { name: string; value: string }[];
+  notes: string[];
+}
 let tasks: T[];
-const b = 120.5, c = 85.3;
+const b = 120.5,
+  c = 85.3;
 const angles = { acute: 47 + 12 / 60 + 30 / 3600, obtuse: 132 + 47 / 60 + 30 / 3600 };
 
 beforeAll(async () => {
@@ -19,10 +24,26 @@ beforeAll(async () => {
     title: 'Triangle task check (invented)',
     units: { length: 'm' },
     tasks: [
-      { kind: 'triangle', name: 'included acute', known: { side2: '120.5 m', side3: 85.3, angle1: `47°12'30"` } },
-      { kind: 'triangle', name: 'included obtuse', known: { side2: '120.5 m', side3: 85.3, angle1: `132°47'30"` } },
-      { kind: 'triangle', name: 'two sides and an opposite angle', known: { side1: 5, side2: 7, angle1: 30 } },
-      { kind: 'triangle', name: 'long and short side, nearly right', known: { side1: 3500, side2: 1, angle3: 89.9999 } },
+      {
+        kind: 'triangle',
+        name: 'included acute',
+        known: { side2: '120.5 m', side3: 85.3, angle1: `47°12'30"` },
+      },
+      {
+        kind: 'triangle',
+        name: 'included obtuse',
+        known: { side2: '120.5 m', side3: 85.3, angle1: `132°47'30"` },
+      },
+      {
+        kind: 'triangle',
+        name: 'two sides and an opposite angle',
+        known: { side1: 5, side2: 7, angle1: 30 },
+      },
+      {
+        kind: 'triangle',
+        name: 'long and short side, nearly right',
+        known: { side1: 3500, side2: 1, angle3: 89.9999 },
+      },
     ],
   };
   const file = join(dir, 'job.json');
@@ -38,7 +59,8 @@ const reports: Record<string, T[]> = {};
 afterAll(cleanUp);
 
 const value = (t: T, name: string) => Number(t.results.find((r) => r.name === name)!.value);
-const cosineLaw = (deg: number) => Math.sqrt(b * b + c * c - 2 * b * c * Math.cos((deg * Math.PI) / 180));
+const cosineLaw = (deg: number) =>
+  Math.sqrt(b * b + c * c - 2 * b * c * Math.cos((deg * Math.PI) / 180));
 
 describe('triangle task with a given angle', () => {
   it('two sides and the included acute angle: one triangle, the side of the law of cosines', () => {
@@ -57,7 +79,10 @@ describe('triangle task with a given angle', () => {
     const t = tasks[2]!;
     // a = 5 opposite A1 = 30°, b = 7: sin A2 = 7·sin 30°/5 = 0.7, A2 = 44.4° or 135.6°, so
     // side3 = 7 cos 30° ± √(25 − 49 sin² 30°) (law of cosines solved for c).
-    const roots = [7 * Math.cos(Math.PI / 6) - Math.sqrt(25 - 49 / 4), 7 * Math.cos(Math.PI / 6) + Math.sqrt(25 - 49 / 4)];
+    const roots = [
+      7 * Math.cos(Math.PI / 6) - Math.sqrt(25 - 49 / 4),
+      7 * Math.cos(Math.PI / 6) + Math.sqrt(25 - 49 / 4),
+    ];
     const got = [value(t, 'side3.1'), value(t, 'side3.2')].sort((x, y) => x - y);
     expect(got[0]).toBeCloseTo(roots[0]!, 9);
     expect(got[1]).toBeCloseTo(roots[1]!, 9);
@@ -69,7 +94,10 @@ describe('triangle task with a given angle', () => {
     const want = 3500 ** 2 + 1 - 2 * 3500 * Math.cos((89.9999 * Math.PI) / 180);
     for (const arithmetic of ['float', 'rational']) {
       const t = reports[arithmetic]![3]!;
-      expect(t.results.some((r) => r.name.endsWith('.2')), arithmetic).toBe(false);
+      expect(
+        t.results.some((r) => r.name.endsWith('.2')),
+        arithmetic,
+      ).toBe(false);
       expect(value(t, 'Q3')).toBeCloseTo(want, 3); // the report gives 12 significant digits
     }
   });

@@ -1,7 +1,15 @@
 import { describe, expect, it } from 'vitest';
 import { code, kinds } from '../geometry/helpers.js';
 import fc from 'fast-check';
-import { rational, float, levelRun, allowableMisclosure, LEVELLING_ORDERS, area, intersectCircles, forward } from '../../src/index.js';
+import {
+  rational,
+  float,
+  levelRun,
+  allowableMisclosure,
+  area,
+  intersectCircles,
+  forward,
+} from '../../src/index.js';
 import type { LevelSight } from '../../src/index.js';
 
 // A run booked by hand (invented numbers; levels reduced by hand, derived):
@@ -19,18 +27,29 @@ const sights: LevelSight<string>[] = [
 const levels = ['50', '49.215', '50.54', '50.985', '49.63', '49.02'];
 
 describe.each(kinds)('levelRun(%s, …)', (_name, A) => {
-  const run = levelRun(A, { start: '50.000', sights: sights as never, close: '49.030', order: 'third' });
+  const run = levelRun(A, {
+    start: '50.000',
+    sights: sights as never,
+    close: '49.030',
+    order: 'third',
+  });
 
   it('reduces the booking to the levels worked by hand', () => {
-    run.rows.forEach((r, i) => expect(Math.abs(A.toNumber(r.level) - Number(levels[i]))).toBeLessThan(1e-12));
+    run.rows.forEach((r, i) =>
+      expect(Math.abs(A.toNumber(r.level) - Number(levels[i]))).toBeLessThan(1e-12),
+    );
   });
 
   it('books rises and falls (A: fall 0.785; CP1: rise 1.325; B: rise 0.445; CP2: fall 1.355; BM2: fall 0.610)', () => {
-    const rf = run.rows.map((r) => (r.rise !== undefined ? A.toNumber(r.rise) : r.fall !== undefined ? -A.toNumber(r.fall) : null));
+    const rf = run.rows.map((r) =>
+      r.rise !== undefined ? A.toNumber(r.rise) : r.fall !== undefined ? -A.toNumber(r.fall) : null,
+    );
     expect(rf[0]).toBeNull();
     [-0.785, 1.325, 0.445, -1.355, -0.61].forEach((v, i) => expect(rf[i + 1]!).toBeCloseTo(v, 12));
     const his = run.rows.map((r) => (r.hi === undefined ? null : A.toNumber(r.hi)));
-    [51.525, null, 52.645, null, 50.38, null].forEach((v, i) => (v === null ? expect(his[i]).toBeNull() : expect(his[i]!).toBeCloseTo(v, 12)));
+    [51.525, null, 52.645, null, 50.38, null].forEach((v, i) =>
+      v === null ? expect(his[i]).toBeNull() : expect(his[i]!).toBeCloseTo(v, 12),
+    );
   });
 
   it('passes both arithmetic checks: ΣBS − ΣFS = ΣRise − ΣFall = last − first = −0.980', () => {
@@ -55,7 +74,11 @@ describe.each(kinds)('levelRun(%s, …)', (_name, A) => {
   });
 
   it('distributes by setups when distances are missing', () => {
-    const r = levelRun(A, { start: 50, sights: sights.map(({ distance: _d, ...s }) => s) as never, close: '49.030' });
+    const r = levelRun(A, {
+      start: 50,
+      sights: sights.map(({ distance: _d, ...s }) => s) as never,
+      close: '49.030',
+    });
     expect(r.distributedBy).toBe('setups');
     // Three setups: A and CP1 are read from setup 1 (1/3 of the correction), B and CP2 from 2, BM2 from 3.
     expect(A.toNumber(r.rows[1]!.correction)).toBeCloseTo(0.01 / 3, 12);
@@ -64,13 +87,25 @@ describe.each(kinds)('levelRun(%s, …)', (_name, A) => {
   });
 
   it('refuses bookings that break the rules with INVALID_ARGUMENT naming the row', () => {
-    expect(code(() => levelRun(A, { start: 0, sights: [{ fs: 1 }, { fs: 1 }] }))).toBe('INVALID_ARGUMENT');
-    expect(() => levelRun(A, { start: 0, sights: [{ bs: 1 }, { is: 1, fs: 2 }, { fs: 1 }] })).toThrow(/sights\[1\]/);
-    expect(code(() => levelRun(A, { start: 0, sights: [{ bs: 1 }, { is: 1 }] }))).toBe('INVALID_ARGUMENT');
-    expect(code(() => levelRun(A, { start: 0, sights: [{ bs: 1 }, { bs: 2 }, { fs: 1 }] }))).toBe('INVALID_ARGUMENT');
-    expect(code(() => levelRun(A, { start: 0, sights: [{ bs: 1 }, { fs: 1 }], order: 'third' }))).toBe('INVALID_ARGUMENT');
+    expect(code(() => levelRun(A, { start: 0, sights: [{ fs: 1 }, { fs: 1 }] }))).toBe(
+      'INVALID_ARGUMENT',
+    );
+    expect(() =>
+      levelRun(A, { start: 0, sights: [{ bs: 1 }, { is: 1, fs: 2 }, { fs: 1 }] }),
+    ).toThrow(/sights\[1\]/);
+    expect(code(() => levelRun(A, { start: 0, sights: [{ bs: 1 }, { is: 1 }] }))).toBe(
+      'INVALID_ARGUMENT',
+    );
+    expect(code(() => levelRun(A, { start: 0, sights: [{ bs: 1 }, { bs: 2 }, { fs: 1 }] }))).toBe(
+      'INVALID_ARGUMENT',
+    );
+    expect(
+      code(() => levelRun(A, { start: 0, sights: [{ bs: 1 }, { fs: 1 }], order: 'third' })),
+    ).toBe('INVALID_ARGUMENT');
     expect(code(() => levelRun(A, { start: 0, sights: [{ bs: 1 }] }))).toBe('TOO_FEW_POINTS');
-    expect(code(() => levelRun(A, { start: 0, sights: [{ bs: 1 }, { fs: 'x' }] }))).toBe('INVALID_NUMBER');
+    expect(code(() => levelRun(A, { start: 0, sights: [{ bs: 1 }, { fs: 'x' }] }))).toBe(
+      'INVALID_NUMBER',
+    );
   });
 });
 
@@ -82,7 +117,9 @@ describe('allowableMisclosure(A, order, km)', () => {
   });
 
   it('refuses an unknown order, c ≤ 0 and negative K with INVALID_ARGUMENT', () => {
-    expect(code(() => allowableMisclosure(rational, 'fourth' as never, 1))).toBe('INVALID_ARGUMENT');
+    expect(code(() => allowableMisclosure(rational, 'fourth' as never, 1))).toBe(
+      'INVALID_ARGUMENT',
+    );
     expect(code(() => allowableMisclosure(rational, 0, 1))).toBe('INVALID_ARGUMENT');
     expect(code(() => allowableMisclosure(rational, 'third', -1))).toBe('INVALID_ARGUMENT');
   });
@@ -90,13 +127,35 @@ describe('allowableMisclosure(A, order, km)', () => {
 
 describe('errors name the input that could not be read', () => {
   it('levelRun names start, a sight member and close; area and circles name the vertex or radius', () => {
-    expect(() => levelRun(rational, { start: 'abc', sights: [{ bs: 1 }, { fs: 1 }] })).toThrow(/levelRun\(A, input\) start: "abc" is not a number/);
-    expect(() => levelRun(float, { start: 0, sights: [{ bs: 1 }, { fs: NaN }] })).toThrow(/levelRun\(A, input\) sights\[1\]\.fs:/);
-    expect(() => levelRun(rational, { start: 0, close: '1,5', sights: [{ bs: 1 }, { fs: 1 }] })).toThrow(/levelRun\(A, input\) close:/);
-    expect(() => area(rational, [{ x: 0, y: 0 }, { x: 'one', y: 0 }, { x: 0, y: 1 }])).toThrow(/area\(A, points\)\[1\]\.x: "one" is not a number/);
-    expect(() => intersectCircles(rational, { center: { x: 0, y: 0 }, radius: 'r' }, { center: { x: 1, y: 0 }, radius: 1 })).toThrow(/circle1\.radius:/);
-    expect(() => forward(rational, { x: 0, y: 0 }, 10, 'far')).toThrow(/forward\(A, P, bearing, distance\) distance:/);
-    expect(code(() => levelRun(rational, { start: 'abc', sights: [{ bs: 1 }, { fs: 1 }] }))).toBe('INVALID_NUMBER');
+    expect(() => levelRun(rational, { start: 'abc', sights: [{ bs: 1 }, { fs: 1 }] })).toThrow(
+      /levelRun\(A, input\) start: "abc" is not a number/,
+    );
+    expect(() => levelRun(float, { start: 0, sights: [{ bs: 1 }, { fs: NaN }] })).toThrow(
+      /levelRun\(A, input\) sights\[1\]\.fs:/,
+    );
+    expect(() =>
+      levelRun(rational, { start: 0, close: '1,5', sights: [{ bs: 1 }, { fs: 1 }] }),
+    ).toThrow(/levelRun\(A, input\) close:/);
+    expect(() =>
+      area(rational, [
+        { x: 0, y: 0 },
+        { x: 'one', y: 0 },
+        { x: 0, y: 1 },
+      ]),
+    ).toThrow(/area\(A, points\)\[1\]\.x: "one" is not a number/);
+    expect(() =>
+      intersectCircles(
+        rational,
+        { center: { x: 0, y: 0 }, radius: 'r' },
+        { center: { x: 1, y: 0 }, radius: 1 },
+      ),
+    ).toThrow(/circle1\.radius:/);
+    expect(() => forward(rational, { x: 0, y: 0 }, 10, 'far')).toThrow(
+      /forward\(A, P, bearing, distance\) distance:/,
+    );
+    expect(code(() => levelRun(rational, { start: 'abc', sights: [{ bs: 1 }, { fs: 1 }] }))).toBe(
+      'INVALID_NUMBER',
+    );
   });
 });
 
@@ -122,14 +181,20 @@ describe('levelRun(rational, …) properties (fast-check, exact)', () => {
   const row = fc.oneof(fc.record({ is: reading }), fc.record({ fs: reading, bs: reading }));
   it('satisfies both checks exactly and lands the adjusted end on the closing level', () => {
     fc.assert(
-      fc.property(reading, fc.array(row, { maxLength: 20 }), reading, fc.integer({ min: -50, max: 50 }), (bs0, middle, fsEnd, mm) => {
-        const s = [{ bs: bs0 }, ...middle, { fs: fsEnd }] as LevelSight<string>[];
-        const r = levelRun(rational, { start: 100, sights: s as never });
-        expect(r.check.riseFallOk && r.check.heightOfInstrumentOk).toBe(true);
-        const closeLevel = rational.add(r.rows[s.length - 1]!.level, rational.from(`${mm}/1000`));
-        const adj = levelRun(rational, { start: 100, sights: s as never, close: closeLevel });
-        expect(rational.eq(adj.rows[s.length - 1]!.adjusted, closeLevel)).toBe(true);
-      }),
+      fc.property(
+        reading,
+        fc.array(row, { maxLength: 20 }),
+        reading,
+        fc.integer({ min: -50, max: 50 }),
+        (bs0, middle, fsEnd, mm) => {
+          const s = [{ bs: bs0 }, ...middle, { fs: fsEnd }] as LevelSight<string>[];
+          const r = levelRun(rational, { start: 100, sights: s as never });
+          expect(r.check.riseFallOk && r.check.heightOfInstrumentOk).toBe(true);
+          const closeLevel = rational.add(r.rows[s.length - 1]!.level, rational.from(`${mm}/1000`));
+          const adj = levelRun(rational, { start: 100, sights: s as never, close: closeLevel });
+          expect(rational.eq(adj.rows[s.length - 1]!.adjusted, closeLevel)).toBe(true);
+        },
+      ),
     );
   });
 });

@@ -25,13 +25,20 @@ function angle(S: XY, P: XY, Q: XY): string {
 /** Observed angles [a12, a23] at S and the danger ratio |Q(O, S) − R²|/R² computed in float. */
 function synth(S: XY, C: [XY, XY, XY]) {
   const [P1, P2, P3] = C;
-  const bx = P2.x - P1.x, by = P2.y - P1.y, cx = P3.x - P1.x, cy = P3.y - P1.y;
+  const bx = P2.x - P1.x,
+    by = P2.y - P1.y,
+    cx = P3.x - P1.x,
+    cy = P3.y - P1.y;
   const det = 2 * (bx * cy - by * cx);
   const ox = (cy * (bx * bx + by * by) - by * (cx * cx + cy * cy)) / det;
   const oy = (bx * (cx * cx + cy * cy) - cx * (bx * bx + by * by)) / det;
   const R2 = ox * ox + oy * oy;
   const danger = Math.abs((S.x - P1.x - ox) ** 2 + (S.y - P1.y - oy) ** 2 - R2) / R2;
-  return { angles: [angle(S, P1, P2), angle(S, P2, P3)] as [string, string], danger, collinear: det === 0 };
+  return {
+    angles: [angle(S, P1, P2), angle(S, P2, P3)] as [string, string],
+    danger,
+    collinear: det === 0,
+  };
 }
 
 // The bound grows as the station nears the danger circle (ratio → 0); a station far outside a
@@ -44,12 +51,17 @@ describe('resection(rational, …) recovers a synthetic station (Tienstra; angle
     fc.assert(
       fc.property(pt, pt, pt, pt, (S, P1, P2, P3) => {
         const pts = [S, P1, P2, P3];
-        for (let i = 0; i < 4; i++) for (let j = i + 1; j < 4; j++) fc.pre(pts[i]!.x !== pts[j]!.x || pts[i]!.y !== pts[j]!.y);
+        for (let i = 0; i < 4; i++)
+          for (let j = i + 1; j < 4; j++)
+            fc.pre(pts[i]!.x !== pts[j]!.x || pts[i]!.y !== pts[j]!.y);
         const { angles, danger, collinear } = synth(S, [P1, P2, P3]);
         fc.pre(!collinear && danger > 0.05);
         const r = resection(rational, { control: [P1, P2, P3], angles });
         const size = 1 + Math.max(...pts.flatMap((p) => [Math.abs(p.x), Math.abs(p.y)]));
-        const err = Math.hypot(rational.toNumber(rational.sub(r.station.x, rational.from(S.x))), rational.toNumber(rational.sub(r.station.y, rational.from(S.y))));
+        const err = Math.hypot(
+          rational.toNumber(rational.sub(r.station.x, rational.from(S.x))),
+          rational.toNumber(rational.sub(r.station.y, rational.from(S.y))),
+        );
         expect(err).toBeLessThan((1e-30 * size) / Math.min(danger, 1));
       }),
       { numRuns: 40 },
@@ -57,7 +69,14 @@ describe('resection(rational, …) recovers a synthetic station (Tienstra; angle
   });
 
   it('is exact when the observed angles have rational sines and cosines (multiples of 90°)', () => {
-    const r = resection(rational, { control: [{ x: 0, y: 100 }, { x: 100, y: 0 }, { x: 0, y: -50 }], angles: [90, 90] });
+    const r = resection(rational, {
+      control: [
+        { x: 0, y: 100 },
+        { x: 100, y: 0 },
+        { x: 0, y: -50 },
+      ],
+      angles: [90, 90],
+    });
     expect([rational.toString(r.station.x), rational.toString(r.station.y)]).toEqual(['0', '0']);
   });
 });
@@ -71,7 +90,9 @@ describe.each(inexact)('resection(%s, …)', (_name, A, bound) => {
     fc.assert(
       fc.property(pt, pt, pt, pt, (S, P1, P2, P3) => {
         const pts = [S, P1, P2, P3];
-        for (let i = 0; i < 4; i++) for (let j = i + 1; j < 4; j++) fc.pre(pts[i]!.x !== pts[j]!.x || pts[i]!.y !== pts[j]!.y);
+        for (let i = 0; i < 4; i++)
+          for (let j = i + 1; j < 4; j++)
+            fc.pre(pts[i]!.x !== pts[j]!.x || pts[i]!.y !== pts[j]!.y);
         const { angles, danger, collinear } = synth(S, [P1, P2, P3]);
         fc.pre(!collinear && danger > 0.05);
         const r = resection(A, { control: [P1, P2, P3], angles });
@@ -89,7 +110,11 @@ describe.each([
   ['decimal(34)', decimal(34) as Arithmetic<unknown, boolean>],
   ['float', float as Arithmetic<unknown, boolean>],
 ])('resection(%s, …) on the danger circle', (_name, A) => {
-  const C: [XY, XY, XY] = [{ x: 0, y: 100 }, { x: 100, y: 0 }, { x: 0, y: -100 }];
+  const C: [XY, XY, XY] = [
+    { x: 0, y: 100 },
+    { x: 100, y: 0 },
+    { x: 0, y: -100 },
+  ];
   it('refuses a station on the circle through the control points with DANGER_CIRCLE', () => {
     const { angles } = synth({ x: -100, y: 0 }, C);
     expect(code(() => resection(A, { control: C, angles }))).toBe('DANGER_CIRCLE');
@@ -111,20 +136,54 @@ describe.each([
     const S = { x: -30, y: 20 };
     const [a12, a23] = synth(S, C).angles.map(Number) as [number, number];
     const good = resection(A, { control: C, angles: [a12, a23] });
-    expect(Math.hypot(A.toNumber(good.station.x) - S.x, A.toNumber(good.station.y) - S.y)).toBeLessThan(1e-6);
-    expect(code(() => resection(A, { control: C, angles: [(a12 + 180) % 360, a23] }))).toBe('NO_REAL_SOLUTION');
-    expect(code(() => resection(A, { control: C, angles: [a12, (a23 + 180) % 360] }))).toBe('NO_REAL_SOLUTION');
+    expect(
+      Math.hypot(A.toNumber(good.station.x) - S.x, A.toNumber(good.station.y) - S.y),
+    ).toBeLessThan(1e-6);
+    expect(code(() => resection(A, { control: C, angles: [(a12 + 180) % 360, a23] }))).toBe(
+      'NO_REAL_SOLUTION',
+    );
+    expect(code(() => resection(A, { control: C, angles: [a12, (a23 + 180) % 360] }))).toBe(
+      'NO_REAL_SOLUTION',
+    );
     // P1 (0, 100), P2 (100, 0), P3 (0, −50): a12 = 0 puts S on line P1P2 beyond P1 or P2, from
     // where P3 is never 90° clockwise of P2 (worked by hand); the candidate is (75, 25), where a12 = 180°.
-    expect(code(() => resection(A, { control: [{ x: 0, y: 100 }, { x: 100, y: 0 }, { x: 0, y: -50 }], angles: [0, 90] }))).toBe('NO_REAL_SOLUTION');
+    expect(
+      code(() =>
+        resection(A, {
+          control: [
+            { x: 0, y: 100 },
+            { x: 100, y: 0 },
+            { x: 0, y: -50 },
+          ],
+          angles: [0, 90],
+        }),
+      ),
+    ).toBe('NO_REAL_SOLUTION');
   });
 
   it('refuses collinear control with COLLINEAR_POINTS, bad angles with INVALID_ANGLE, wrong shapes with INVALID_ARGUMENT', () => {
-    expect(code(() => resection(A, { control: [{ x: 0, y: 0 }, { x: 1, y: 1 }, { x: 2, y: 2 }], angles: [30, 40] }))).toBe('COLLINEAR_POINTS');
+    expect(
+      code(() =>
+        resection(A, {
+          control: [
+            { x: 0, y: 0 },
+            { x: 1, y: 1 },
+            { x: 2, y: 2 },
+          ],
+          angles: [30, 40],
+        }),
+      ),
+    ).toBe('COLLINEAR_POINTS');
     expect(code(() => resection(A, { control: C, angles: [30, 'forty'] }))).toBe('INVALID_ANGLE');
     expect(code(() => resection(A, { control: C, angles: [30, 360] }))).toBe('INVALID_ANGLE');
-    expect(code(() => resection(A, { control: [C[0], C[1]] as never, angles: [30, 40] }))).toBe('INVALID_ARGUMENT');
-    expect(code(() => resection(A, { control: C, angles: [30] as never }))).toBe('INVALID_ARGUMENT');
-    expect(code(() => resection(A, { control: [C[0], C[0], C[2]], angles: [30, 40] }))).toBe('COINCIDENT_POINTS');
+    expect(code(() => resection(A, { control: [C[0], C[1]] as never, angles: [30, 40] }))).toBe(
+      'INVALID_ARGUMENT',
+    );
+    expect(code(() => resection(A, { control: C, angles: [30] as never }))).toBe(
+      'INVALID_ARGUMENT',
+    );
+    expect(code(() => resection(A, { control: [C[0], C[0], C[2]], angles: [30, 40] }))).toBe(
+      'COINCIDENT_POINTS',
+    );
   });
 });

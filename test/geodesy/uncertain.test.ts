@@ -5,7 +5,15 @@ import { decimal } from '../../src/arithmetic/decimal.js';
 import { uncertain } from '../../src/arithmetic/uncertain.js';
 import { measured } from '../../src/uncertainty/measured.js';
 import { budget } from '../../src/uncertainty/budget.js';
-import { GRS80, enuRotation, geodeticToGeocentric, geocentricToGeodetic, transverseMercator, transverseMercatorFactors, transverseMercatorInverse } from '../../src/geodesy/index.js';
+import {
+  GRS80,
+  enuRotation,
+  geodeticToGeocentric,
+  geocentricToGeodetic,
+  transverseMercator,
+  transverseMercatorFactors,
+  transverseMercatorInverse,
+} from '../../src/geodesy/index.js';
 
 const d2r = Math.PI / 180;
 
@@ -15,7 +23,9 @@ describe('geodesy in uncertain arithmetic', () => {
     const h = measured(U, 100, 0.02, 'h');
     const P = geodeticToGeocentric(U, { lat: 52, lon: 10, h }, GRS80);
     expect(Math.abs(budget(U, P.Z).sigma - 0.02 * Math.sin(52 * d2r))).toBeLessThan(1e-12);
-    expect(Math.abs(budget(U, P.X).sigma - 0.02 * Math.cos(52 * d2r) * Math.cos(10 * d2r))).toBeLessThan(1e-12);
+    expect(
+      Math.abs(budget(U, P.X).sigma - 0.02 * Math.cos(52 * d2r) * Math.cos(10 * d2r)),
+    ).toBeLessThan(1e-12);
   });
   it('a geodetic → geocentric → geodetic round trip carries σ(h) and σ(lat) back unchanged, in uncertain(float) and uncertain(decimal(30))', () => {
     for (const base of [float, decimal(30)] as const) {
@@ -40,7 +50,8 @@ describe('geodesy in uncertain arithmetic', () => {
 
 describe('geodesy in uncertain(rational) keeps the gradients through its decimal evaluation', () => {
   const R = uncertain(rational);
-  const sig = (x: Parameters<typeof budget<import('fraction.js').default, true>>[1]) => rational.toNumber(budget(R, x).variance) ** 0.5;
+  const sig = (x: Parameters<typeof budget<import('fraction.js').default, true>>[1]) =>
+    rational.toNumber(budget(R, x).variance) ** 0.5;
 
   it('geocentricToGeodetic: σ(h) from σ(X) is σ(X)·cos φ cos λ (derived: ∂h/∂X is the X component of the normal)', () => {
     // Ordnance Survey guide, annex B point; φ, λ as published
@@ -56,7 +67,11 @@ describe('geodesy in uncertain(rational) keeps the gradients through its decimal
   it('transverseMercator, its factors and its inverse: σ in uncertain(rational) equals σ in uncertain(float)', () => {
     const proj = { lon0: 3, k0: '0.9996', ellipsoid: GRS80 };
     const F = uncertain(float);
-    const kR = transverseMercatorFactors(R, { lat: 50, lon: measured(R, 5, '0.01', 'lon') }, proj).k;
+    const kR = transverseMercatorFactors(
+      R,
+      { lat: 50, lon: measured(R, 5, '0.01', 'lon') },
+      proj,
+    ).k;
     const kF = transverseMercatorFactors(F, { lat: 50, lon: measured(F, 5, 0.01, 'lon') }, proj).k;
     const sF = budget(F, kF).sigma;
     expect(sF).toBeGreaterThan(0);
@@ -64,8 +79,16 @@ describe('geodesy in uncertain(rational) keeps the gradients through its decimal
     const ER = transverseMercator(R, { lat: measured(R, 50, '0.0001', 'lat'), lon: 5 }, proj).N;
     const EF = transverseMercator(F, { lat: measured(F, 50, 0.0001, 'lat'), lon: 5 }, proj).N;
     expect(Math.abs(sig(ER) - budget(F, EF).sigma) / budget(F, EF).sigma).toBeLessThan(1e-9);
-    const gR = transverseMercatorInverse(R, { E: measured(R, 500000, '0.01', 'E'), N: 5500000 }, proj).lon;
-    const gF = transverseMercatorInverse(F, { E: measured(F, 500000, 0.01, 'E'), N: 5500000 }, proj).lon;
+    const gR = transverseMercatorInverse(
+      R,
+      { E: measured(R, 500000, '0.01', 'E'), N: 5500000 },
+      proj,
+    ).lon;
+    const gF = transverseMercatorInverse(
+      F,
+      { E: measured(F, 500000, 0.01, 'E'), N: 5500000 },
+      proj,
+    ).lon;
     expect(Math.abs(sig(gR) - budget(F, gF).sigma) / budget(F, gF).sigma).toBeLessThan(1e-9);
   });
 

@@ -15,7 +15,8 @@ describe('every export of src/geometry (functions and types) has an @example', (
       const blocks = text.split(/\/\*\*/).slice(1);
       for (const b of blocks) {
         const m = /\*\/\s*export (?:function|const|interface|type|class) (\w+)/.exec(b);
-        if (m && !b.includes('@internal')) expect(b.includes('@example'), `${file}: ${m[1]} has no @example`).toBe(true);
+        if (m && !b.includes('@internal'))
+          expect(b.includes('@example'), `${file}: ${m[1]} has no @example`).toBe(true);
       }
     });
   }

@@ -21,8 +21,15 @@ const cases: [string, (A: q.Arithmetic<any>) => unknown][] = [
   ['tripleQuadResidual', (A) => q.tripleQuadResidual(A, 1e160, 1e160, 1e160)],
   ['archimedesResidual', (A) => q.archimedesResidual(A, 1e160, 1e160, 1e160, 1)],
   ['crossLawResidual', (A) => q.crossLawResidual(A, 1e160, 1e160, 1e160, '1/2')],
-  ['stewartResidual', (A) => q.stewartResidual(A, { QB: 1e300, QC: 1e300, QD: 1e300, tB: 0, tC: 1e160, tD: 1e155 })],
-  ['stewartQuadranceResidual', (A) => q.stewartQuadranceResidual(A, { QB: 1e160, QC: 1e160, QD: 1e160, QBD: 1e160, QBC: 1e100 })],
+  [
+    'stewartResidual',
+    (A) => q.stewartResidual(A, { QB: 1e300, QC: 1e300, QD: 1e300, tB: 0, tC: 1e160, tD: 1e155 }),
+  ],
+  [
+    'stewartQuadranceResidual',
+    (A) =>
+      q.stewartQuadranceResidual(A, { QB: 1e160, QC: 1e160, QD: 1e160, QBD: 1e160, QBC: 1e100 }),
+  ],
   ['lineThrough', (A) => q.lineThrough(A, q.point(A, big, 2 * big), q.point(A, 2 * big, 4 * big))],
   ['lengthToMetres', (A) => q.lengthToMetres(A, 1e308, 'km')],
   ['convertQuadrance', (A) => q.convertQuadrance(A, 1e308, 'km', 'm')],
@@ -53,7 +60,9 @@ describe('float overflow in a bare sum or product is refused, not returned', () 
 
   it('the exact values behind two of them (by hand: 1e155² = 1e310)', () => {
     const R = q.rational;
-    expect(R.toString(q.quadrance(R, q.point(R, 0, 0), q.point(R, big, 0)))).toBe(`1${'0'.repeat(310)}`);
+    expect(R.toString(q.quadrance(R, q.point(R, 0, 0), q.point(R, big, 0)))).toBe(
+      `1${'0'.repeat(310)}`,
+    );
     expect(R.toString(q.lengthToMetres(R, 1e308, 'km'))).toBe(`1${'0'.repeat(311)}`);
   });
 
@@ -70,9 +79,14 @@ describe('the float-specialised copy (quadspread/float) refuses the same', () =>
   }, 60_000);
 
   it('quadrance, lineThrough, quadrea, lengthToMetres', () => {
-    const { point, quadrance, lineThrough, quadrea, lengthToMetres } = bound as Record<string, (...a: any[]) => any>;
+    const { point, quadrance, lineThrough, quadrea, lengthToMetres } = bound as Record<
+      string,
+      (...a: any[]) => any
+    >;
     expect(code(() => quadrance!(point!(0, 0), point!(big, 0)))).toBe('NOT_FINITE');
-    expect(code(() => lineThrough!(point!(big, 2 * big), point!(2 * big, 4 * big)))).toBe('NOT_FINITE');
+    expect(code(() => lineThrough!(point!(big, 2 * big), point!(2 * big, 4 * big)))).toBe(
+      'NOT_FINITE',
+    );
     expect(code(() => quadrea!(1e160, 1e160, 1e160))).toBe('NOT_FINITE');
     expect(code(() => lengthToMetres!(1e308, 'km'))).toBe('NOT_FINITE');
     expect(quadrance!(point!(0, 0), point!(3, 4))).toBe(25);

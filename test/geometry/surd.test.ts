@@ -5,17 +5,28 @@ import { code } from './helpers.js';
 import fc from 'fast-check';
 import { create, all } from 'mathjs';
 import { rational, decimal, float } from '../../src/index.js';
-import { surd, sqrtOf, asRoot, isSurd, rootToNumber, rootToString, rootToPrecision } from '../../src/geometry/index.js';
+import {
+  surd,
+  sqrtOf,
+  asRoot,
+  isSurd,
+  rootToNumber,
+  rootToString,
+  rootToPrecision,
+} from '../../src/geometry/index.js';
 import type { Surd } from '../../src/geometry/index.js';
 import type { Rational } from '../../src/index.js';
 
 const M = create(all!, { number: 'BigNumber', precision: 80 });
 /** a + b√d in mathjs BigNumber at 80 digits, from the surd's exact parts (independent of the surd code). */
 function big(s: Surd<Rational>) {
-  const part = (x: Rational): any => M.divide(M.bignumber((x.s * x.n).toString()) as any, M.bignumber(x.d.toString()) as any);
+  const part = (x: Rational): any =>
+    M.divide(M.bignumber((x.s * x.n).toString()) as any, M.bignumber(x.d.toString()) as any);
   return M.add(part(s.a), M.multiply(part(s.b), M.sqrt(part(s.d)))) as any;
 }
-const small = fc.tuple(fc.integer({ min: -400, max: 400 }), fc.integer({ min: 1, max: 30 })).map(([n, m]) => `${n}/${m}`);
+const small = fc
+  .tuple(fc.integer({ min: -400, max: 400 }), fc.integer({ min: 1, max: 30 }))
+  .map(([n, m]) => `${n}/${m}`);
 const radicand = fc.integer({ min: 2, max: 60 });
 const surdArb = fc.tuple(small, small, radicand).map(([a, b, d]) => surd(rational, a, b, d));
 
@@ -41,7 +52,11 @@ describe('surd(A, a, b, d) builds the normal form', () => {
   });
   it('a rational surd has b = 0 and d = 1 and says so', () => {
     const s = surd(rational, 3, 2, '4/9');
-    expect([rational.toString(s.a), rational.toString(s.b), rational.toString(s.d)]).toEqual(['13/3', '0', '1']);
+    expect([rational.toString(s.a), rational.toString(s.b), rational.toString(s.d)]).toEqual([
+      '13/3',
+      '0',
+      '1',
+    ]);
     expect(s.isRational()).toBe(true);
     expect(rational.toString(s.toRational()!)).toBe('13/3');
     expect(sqrtOf(rational, 2).isRational()).toBe(false);
@@ -60,13 +75,19 @@ describe('surd(A, a, b, d) builds the normal form', () => {
 
 describe('sqrtOf(A, x) is a surd in rational and a value elsewhere', () => {
   it('sqrtOf(rational, x)² = x exactly for random rationals x ≥ 0', () => {
-    fc.assert(fc.property(fc.integer({ min: 0, max: 10 ** 6 }), fc.integer({ min: 1, max: 10 ** 6 }), (n, m) => {
-      const r = sqrtOf(rational, `${n}/${m}`);
-      expect(isSurd(r)).toBe(true);
-      const sq = r.mul(r);
-      expect(sq.isRational()).toBe(true);
-      expect(rational.eq(sq.toRational()!, rational.from(`${n}/${m}`))).toBe(true);
-    }));
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 0, max: 10 ** 6 }),
+        fc.integer({ min: 1, max: 10 ** 6 }),
+        (n, m) => {
+          const r = sqrtOf(rational, `${n}/${m}`);
+          expect(isSurd(r)).toBe(true);
+          const sq = r.mul(r);
+          expect(sq.isRational()).toBe(true);
+          expect(rational.eq(sq.toRational()!, rational.from(`${n}/${m}`))).toBe(true);
+        },
+      ),
+    );
   });
   it('sqrtOf(float, x) is Math.sqrt(x) and sqrtOf(decimal(30), 2) is correctly rounded', () => {
     expect(sqrtOf(float, 2)).toBe(Math.SQRT2);
@@ -91,24 +112,31 @@ describe('surd arithmetic is exact within one radicand', () => {
     expect(p.sub(p.conjugate()).toString()).toBe('40√2');
   });
   it('x + y − y = x, x·y ÷ y = x and x − x = 0 for random surds over one radicand', () => {
-    fc.assert(fc.property(small, small, small, small, radicand, (a, b, c, e, d) => {
-      const x = surd(rational, a, b, d);
-      const y = surd(rational, c, e, d);
-      expect(x.add(y).sub(y).eq(x)).toBe(true);
-      if (!y.isZero()) expect(x.mul(y).div(y).eq(x)).toBe(true);
-      expect(x.sub(x).isZero()).toBe(true);
-    }));
+    fc.assert(
+      fc.property(small, small, small, small, radicand, (a, b, c, e, d) => {
+        const x = surd(rational, a, b, d);
+        const y = surd(rational, c, e, d);
+        expect(x.add(y).sub(y).eq(x)).toBe(true);
+        if (!y.isZero()) expect(x.mul(y).div(y).eq(x)).toBe(true);
+        expect(x.sub(x).isZero()).toBe(true);
+      }),
+    );
   });
   it('the value of x·y, x + y and x ÷ y agrees with mathjs BigNumber to 60 digits', () => {
-    fc.assert(fc.property(small, small, small, small, radicand, (a, b, c, e, d) => {
-      const x = surd(rational, a, b, d);
-      const y = surd(rational, c, e, d);
-      const tol = M.bignumber('1e-60');
-      const close = (s: Surd<Rational>, v: any) => expect(M.smallerEq(M.abs(M.subtract(big(s), v)), M.multiply(tol, M.add(1, M.abs(v))))).toBe(true);
-      close(x.mul(y), M.multiply(big(x), big(y)));
-      close(x.add(y), M.add(big(x), big(y)));
-      if (!y.isZero()) close(x.div(y), M.divide(big(x), big(y)));
-    }));
+    fc.assert(
+      fc.property(small, small, small, small, radicand, (a, b, c, e, d) => {
+        const x = surd(rational, a, b, d);
+        const y = surd(rational, c, e, d);
+        const tol = M.bignumber('1e-60');
+        const close = (s: Surd<Rational>, v: any) =>
+          expect(
+            M.smallerEq(M.abs(M.subtract(big(s), v)), M.multiply(tol, M.add(1, M.abs(v)))),
+          ).toBe(true);
+        close(x.mul(y), M.multiply(big(x), big(y)));
+        close(x.add(y), M.add(big(x), big(y)));
+        if (!y.isZero()) close(x.div(y), M.divide(big(x), big(y)));
+      }),
+    );
   });
   it('radicands whose ratio is a square combine: √8 + √2 = 3√2', () => {
     expect(sqrtOf(rational, 8).add(sqrtOf(rational, 2)).toString()).toBe('3√2');
@@ -133,13 +161,15 @@ describe('surd arithmetic is exact within one radicand', () => {
 
 describe('surd comparison is exact, across radicands too', () => {
   it('cmp agrees with mathjs BigNumber for random surds over any radicands', () => {
-    fc.assert(fc.property(surdArb, surdArb, (x, y) => {
-      const c = Number(M.compare(big(x), big(y)));
-      const want = M.equal(big(x), big(y)) ? 0 : c;
-      // equal values at 80 digits but different exact values cannot occur for these small surds
-      expect(x.cmp(y)).toBe(want);
-      expect(x.eq(y)).toBe(want === 0);
-    }));
+    fc.assert(
+      fc.property(surdArb, surdArb, (x, y) => {
+        const c = Number(M.compare(big(x), big(y)));
+        const want = M.equal(big(x), big(y)) ? 0 : c;
+        // equal values at 80 digits but different exact values cannot occur for these small surds
+        expect(x.cmp(y)).toBe(want);
+        expect(x.eq(y)).toBe(want === 0);
+      }),
+    );
   });
   it('sign is exact where floats cancel: 665857 − 470832√2 > 0 and 470832√2 − 665857 < 0', () => {
     // 665857² − 2·470832² = 1 (a Pell equation solution, derived): the difference is 1/(665857 + 470832√2) ≈ 7.5e-7.
@@ -169,25 +199,34 @@ describe('surd text and numbers', () => {
     expect(surd(rational, a, b, d).toString()).toBe(text);
   });
   it('toNumber is within 2 ulp of the mathjs value, even with cancellation', () => {
-    fc.assert(fc.property(surdArb, (x) => {
-      const v = Number(big(x).toString());
-      expect(Math.abs(x.toNumber() - v)).toBeLessThanOrEqual(4 * Number.EPSILON * Math.abs(v) + Number.MIN_VALUE);
-    }));
+    fc.assert(
+      fc.property(surdArb, (x) => {
+        const v = Number(big(x).toString());
+        expect(Math.abs(x.toNumber() - v)).toBeLessThanOrEqual(
+          4 * Number.EPSILON * Math.abs(v) + Number.MIN_VALUE,
+        );
+      }),
+    );
     const p = surd(rational, 665857, -470832, 2);
     const v = Number(big(p).toString());
     expect(Math.abs(p.toNumber() - v)).toBeLessThanOrEqual(4 * Number.EPSILON * v);
   });
   it('toPrecision(n) rounds correctly: it matches mathjs BigNumber rounded to n digits', () => {
-    fc.assert(fc.property(surdArb, fc.integer({ min: 1, max: 50 }), (x, n) => {
-      fc.pre(!x.isZero());
-      const mine = M.bignumber(x.toPrecision(n));
-      const ref = M.bignumber(M.format(big(x), { precision: n }));
-      expect(M.equal(mine, ref)).toBe(true);
-    }), { numRuns: 200 });
+    fc.assert(
+      fc.property(surdArb, fc.integer({ min: 1, max: 50 }), (x, n) => {
+        fc.pre(!x.isZero());
+        const mine = M.bignumber(x.toPrecision(n));
+        const ref = M.bignumber(M.format(big(x), { precision: n }));
+        expect(M.equal(mine, ref)).toBe(true);
+      }),
+      { numRuns: 200 },
+    );
   });
   it('(41 − 20√2).toPrecision(40) has 40 correct digits', () => {
     // 41 − 20√2 with √2 = 1.41421356237309504880168872420969807856967187537694... (mathjs, 80 digits)
-    const want = M.format(M.subtract(41, M.multiply(20, M.sqrt(M.bignumber(2)))), { precision: 40 });
+    const want = M.format(M.subtract(41, M.multiply(20, M.sqrt(M.bignumber(2)))), {
+      precision: 40,
+    });
     expect(surd(rational, 41, -20, 2).toPrecision(40)).toBe(want);
   });
   it('toPrecision refuses a digit count outside 1..1000 with INVALID_ARGUMENT', () => {
@@ -225,7 +264,7 @@ describe('surds over an inexact arithmetic', () => {
 });
 
 describe('Surd.toNumber()', () => {
-  it('gives the nearest number when the radicand\'s terms are beyond JS range (√(p/q) kept as √(pq)/q)', () => {
+  it("gives the nearest number when the radicand's terms are beyond JS range (√(p/q) kept as √(pq)/q)", () => {
     // (4·10^1000 + 1)/10^1000 is 4 + 1e-1000, whose root 2 + 2.5e-1001 rounds to the double 2
     const x = rational.div(rational.from(4n * 10n ** 1000n + 1n), rational.from(10n ** 1000n));
     const s = sqrtOf(rational, x) as Surd<Rational>;

@@ -3,7 +3,15 @@
 import { describe, expect, expectTypeOf, it } from 'vitest';
 import { rational, float, decimal } from '../../src/index.js';
 import type { Rational, Decimal } from '../../src/index.js';
-import { sqrtOf, solveTriangle, solveQuadratic, solveStewart, isSurd, triangle, point } from '../../src/geometry/index.js';
+import {
+  sqrtOf,
+  solveTriangle,
+  solveQuadratic,
+  solveStewart,
+  isSurd,
+  triangle,
+  point,
+} from '../../src/geometry/index.js';
 import type { Surd, Root } from '../../src/geometry/index.js';
 
 describe('Root<T, E> is a surd exactly when the arithmetic is exact', () => {
@@ -18,10 +26,14 @@ describe('Root<T, E> is a surd exactly when the arithmetic is exact', () => {
     expect(typeof sqrtOf(float, 2)).toBe('number');
   });
   it('solveTriangle, solveQuadratic and solveStewart return roots of the matching kind', () => {
-    expectTypeOf(solveTriangle(rational, { Q1: 1, Q2: 1, Q3: 1 })[0]!.Q3).toEqualTypeOf<Surd<Rational>>();
+    expectTypeOf(solveTriangle(rational, { Q1: 1, Q2: 1, Q3: 1 })[0]!.Q3).toEqualTypeOf<
+      Surd<Rational>
+    >();
     expectTypeOf(solveTriangle(float, { Q1: 1, Q2: 1, Q3: 1 })[0]!.s1).toEqualTypeOf<number>();
     expectTypeOf(solveQuadratic(rational, 1, 0, -2)).toEqualTypeOf<Surd<Rational>[]>();
-    expectTypeOf(solveStewart(float, { QB: 1, QC: 1, tB: 0, tC: 1, tD: 2 })).toEqualTypeOf<number[]>();
+    expectTypeOf(solveStewart(float, { QB: 1, QC: 1, tB: 0, tC: 1, tD: 2 })).toEqualTypeOf<
+      number[]
+    >();
     expectTypeOf<Root<number, false>>().toEqualTypeOf<number>();
     expect(isSurd(solveQuadratic(rational, 1, 0, -2)[0])).toBe(true);
     expect(typeof solveQuadratic(float, 1, 0, -2)[0]).toBe('number');

@@ -29,7 +29,9 @@ describe('bound entries', () => {
 
   it('the generator finds the functions that take an arithmetic first (quadrance, spread, point)', () => {
     expect(boundNames).toEqual(expect.arrayContaining(['point', 'quadrance', 'spread']));
-    expect(api.values).toEqual(expect.arrayContaining(['QuadspreadError', 'ERROR_CODES', 'rational', 'float', 'decimal']));
+    expect(api.values).toEqual(
+      expect.arrayContaining(['QuadspreadError', 'ERROR_CODES', 'rational', 'float', 'decimal']),
+    );
   });
 
   for (const [name, entry, fixed] of entries) {
@@ -39,7 +41,8 @@ describe('bound entries', () => {
         expect(typeof mod[key], key).toBe('function');
         expect(mod[key], key).not.toBe((generic as Record<string, unknown>)[key]);
       }
-      for (const key of api.values) expect(mod[key], key).toBe((generic as Record<string, unknown>)[key]);
+      for (const key of api.values)
+        expect(mod[key], key).toBe((generic as Record<string, unknown>)[key]);
       expect(Object.keys(mod).sort()).toEqual(['arithmetic', ...boundNames, ...api.values].sort());
     });
     if (fixed) {
@@ -86,7 +89,9 @@ describe('bound entries', () => {
     expectTypeOf(R.quadrance).returns.toEqualTypeOf<Rational>();
     expectTypeOf(D.quadrance).returns.toEqualTypeOf<Decimal>();
     expectTypeOf(F.quadrance).returns.toEqualTypeOf<number>();
-    expectTypeOf(F.point).parameters.toEqualTypeOf<[x: generic.Numeric<number>, y: generic.Numeric<number>]>();
+    expectTypeOf(F.point).parameters.toEqualTypeOf<
+      [x: generic.Numeric<number>, y: generic.Numeric<number>]
+    >();
     // An optional parameter of the generic function stays optional.
     expectTypeOf(F.spreadFromDegrees).toBeCallableWith(30);
     expectTypeOf(F.spreadFromDegrees).toBeCallableWith(30, 'gon');

@@ -20,15 +20,27 @@ const started = Date.now();
 function ensureChromium() {
   if (existsSync(CHROMIUM)) return;
   const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
-  if (!isRoot) throw new Error(`${CHROMIUM} is missing: install Debian's chromium package (apt-get install chromium)`);
+  if (!isRoot)
+    throw new Error(
+      `${CHROMIUM} is missing: install Debian's chromium package (apt-get install chromium)`,
+    );
   console.log('test:browser: installing chromium with apt-get');
   const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
   execFileSync('apt-get', ['update', '-qq'], { stdio: 'inherit', env });
-  execFileSync('apt-get', ['install', '-y', '-qq', '--no-install-recommends', 'chromium'], { stdio: 'inherit', env });
-  if (!existsSync(CHROMIUM)) throw new Error(`apt-get install chromium did not provide ${CHROMIUM}`);
+  execFileSync('apt-get', ['install', '-y', '-qq', '--no-install-recommends', 'chromium'], {
+    stdio: 'inherit',
+    env,
+  });
+  if (!existsSync(CHROMIUM))
+    throw new Error(`apt-get install chromium did not provide ${CHROMIUM}`);
 }
 
-const TYPES = { '.html': 'text/html; charset=utf-8', '.js': 'text/javascript; charset=utf-8', '.mjs': 'text/javascript; charset=utf-8', '.json': 'application/json' };
+const TYPES = {
+  '.html': 'text/html; charset=utf-8',
+  '.js': 'text/javascript; charset=utf-8',
+  '.mjs': 'text/javascript; charset=utf-8',
+  '.json': 'application/json',
+};
 
 // The page. The triangle A1(0, 0), A2(14, 0), A3(5, 12) is Heron's 13-14-15 triangle.
 const PAGE = `<!doctype html>
@@ -124,7 +136,16 @@ try {
   context = await chromium.launchPersistentContext(profile, {
     executablePath: CHROMIUM,
     headless: true,
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   });
   const page = context.pages()[0] ?? (await context.newPage());
   const errors = [];
@@ -144,7 +165,9 @@ try {
     const ok = JSON.stringify(results[key]) === JSON.stringify(want);
     if (ok) passed++;
     else failed++;
-    console.log(`  ${ok ? '✓' : '✗'} ${key}: ${JSON.stringify(results[key])}${ok ? '' : ` (expected ${JSON.stringify(want)})`}`);
+    console.log(
+      `  ${ok ? '✓' : '✗'} ${key}: ${JSON.stringify(results[key])}${ok ? '' : ` (expected ${JSON.stringify(want)})`}`,
+    );
   }
   if (errors.length > 0) {
     failed++;
@@ -159,5 +182,7 @@ try {
   rmSync(profile, { recursive: true, force: true });
   if (pkgDir !== root) rmSync(pkgDir, { recursive: true, force: true });
 }
-console.log(`\ntest:browser: ${passed} passed, ${failed} failed (${((Date.now() - started) / 1000).toFixed(1)} s)`);
+console.log(
+  `\ntest:browser: ${passed} passed, ${failed} failed (${((Date.now() - started) / 1000).toFixed(1)} s)`,
+);
 process.exit(failed > 0 ? 1 : 0);

@@ -35,7 +35,11 @@ function check(name, fn) {
   } catch (e) {
     failed++;
     console.log(`  ✗ ${name}`);
-    console.log(String(e.stdout ?? '') + String(e.stderr ?? '') + (e.stdout || e.stderr ? '' : String(e.stack ?? e)));
+    console.log(
+      String(e.stdout ?? '') +
+        String(e.stderr ?? '') +
+        (e.stdout || e.stderr ? '' : String(e.stack ?? e)),
+    );
   }
 }
 
@@ -79,15 +83,25 @@ try {
   const pack = packTarball(join(work, 'pack'));
   const pkg = JSON.parse(readFileSync(join(root, 'package.json'), 'utf8'));
   for (const f of pack.files) {
-    if (!/^(dist\/|docs\/|rational\/|decimal\/|float\/|package\.json$|README|LICENSE)/.test(f)) throw new Error(`unexpected file in the tarball: ${f}`);
+    if (!/^(dist\/|docs\/|rational\/|decimal\/|float\/|package\.json$|README|LICENSE)/.test(f))
+      throw new Error(`unexpected file in the tarball: ${f}`);
   }
-  console.log(`test:package: ${pack.files.length} files, ${(pack.size / 1024).toFixed(1)} KiB packed`);
+  console.log(
+    `test:package: ${pack.files.length} files, ${(pack.size / 1024).toFixed(1)} KiB packed`,
+  );
 
   const app = join(work, 'app');
   mkdirSync(app, { recursive: true });
-  writeFileSync(join(app, 'package.json'), JSON.stringify({ name: 'consumer-app', version: '1.0.0', private: true }, null, 2));
+  writeFileSync(
+    join(app, 'package.json'),
+    JSON.stringify({ name: 'consumer-app', version: '1.0.0', private: true }, null, 2),
+  );
   console.log('test:package: installing the tarball (offline: dependencies from the npm cache)');
-  run('npm', ['install', pack.tarball, '--no-audit', '--no-fund', '--prefer-offline', '--no-package-lock'], app);
+  run(
+    'npm',
+    ['install', pack.tarball, '--no-audit', '--no-fund', '--prefer-offline', '--no-package-lock'],
+    app,
+  );
 
   write(app, {
     'checks.cjs': `${CHECKS}\nmodule.exports = { runChecks };\n`,
@@ -161,10 +175,72 @@ const n: number = fq(fp(0, 0), fp(1, 1));
 const s: string = arithmetic.toString(q) + D.toString(D.from(1));
 export { t, n, s };
 `,
-    'ts/tsconfig.node16.json': JSON.stringify({ compilerOptions: { module: 'node16', moduleResolution: 'node16', target: 'es2022', strict: true, noEmit: true, skipLibCheck: false, types: [] }, files: ['esm.mts', 'cjs.cts'] }, null, 2),
-    'ts/tsconfig.nodenext.json': JSON.stringify({ compilerOptions: { module: 'nodenext', moduleResolution: 'nodenext', target: 'es2022', strict: true, noEmit: true, skipLibCheck: false, types: [] }, files: ['esm.mts', 'cjs.cts'] }, null, 2),
-    'ts/tsconfig.bundler.json': JSON.stringify({ compilerOptions: { module: 'esnext', moduleResolution: 'bundler', target: 'es2022', strict: true, noEmit: true, skipLibCheck: false, types: [] }, files: ['bundler.ts'] }, null, 2),
-    'ts/tsconfig.node10.json': JSON.stringify({ compilerOptions: { module: 'commonjs', moduleResolution: 'node10', target: 'es2022', strict: true, noEmit: true, skipLibCheck: false, esModuleInterop: true, types: [], ignoreDeprecations: '5.0' }, files: ['bundler.ts'] }, null, 2),
+    'ts/tsconfig.node16.json': JSON.stringify(
+      {
+        compilerOptions: {
+          module: 'node16',
+          moduleResolution: 'node16',
+          target: 'es2022',
+          strict: true,
+          noEmit: true,
+          skipLibCheck: false,
+          types: [],
+        },
+        files: ['esm.mts', 'cjs.cts'],
+      },
+      null,
+      2,
+    ),
+    'ts/tsconfig.nodenext.json': JSON.stringify(
+      {
+        compilerOptions: {
+          module: 'nodenext',
+          moduleResolution: 'nodenext',
+          target: 'es2022',
+          strict: true,
+          noEmit: true,
+          skipLibCheck: false,
+          types: [],
+        },
+        files: ['esm.mts', 'cjs.cts'],
+      },
+      null,
+      2,
+    ),
+    'ts/tsconfig.bundler.json': JSON.stringify(
+      {
+        compilerOptions: {
+          module: 'esnext',
+          moduleResolution: 'bundler',
+          target: 'es2022',
+          strict: true,
+          noEmit: true,
+          skipLibCheck: false,
+          types: [],
+        },
+        files: ['bundler.ts'],
+      },
+      null,
+      2,
+    ),
+    'ts/tsconfig.node10.json': JSON.stringify(
+      {
+        compilerOptions: {
+          module: 'commonjs',
+          moduleResolution: 'node10',
+          target: 'es2022',
+          strict: true,
+          noEmit: true,
+          skipLibCheck: false,
+          esModuleInterop: true,
+          types: [],
+          ignoreDeprecations: '5.0',
+        },
+        files: ['bundler.ts'],
+      },
+      null,
+      2,
+    ),
   });
 
   console.log('test:package: loading the installed package');
@@ -176,12 +252,17 @@ export { t, n, s };
   }
   const tsc = join(root, 'node_modules', 'typescript', 'bin', 'tsc');
   for (const config of ['node16', 'nodenext', 'bundler', 'node10']) {
-    check(`tsc -p tsconfig.${config}.json (strict, skipLibCheck off)`, () => run(process.execPath, [tsc, '-p', `tsconfig.${config}.json`], join(app, 'ts')));
+    check(`tsc -p tsconfig.${config}.json (strict, skipLibCheck off)`, () =>
+      run(process.execPath, [tsc, '-p', `tsconfig.${config}.json`], join(app, 'ts')),
+    );
   }
   check('the installed package.json has sideEffects: false and the four entries', () => {
-    const installed = JSON.parse(readFileSync(join(app, 'node_modules', 'quadspread', 'package.json'), 'utf8'));
+    const installed = JSON.parse(
+      readFileSync(join(app, 'node_modules', 'quadspread', 'package.json'), 'utf8'),
+    );
     if (installed.sideEffects !== false) throw new Error('sideEffects is not false');
-    for (const e of ['.', './rational', './decimal', './float']) if (!installed.exports[e]) throw new Error(`no export ${e}`);
+    for (const e of ['.', './rational', './decimal', './float'])
+      if (!installed.exports[e]) throw new Error(`no export ${e}`);
     if (installed.version !== pkg.version) throw new Error('version');
   });
 } catch (e) {
@@ -191,5 +272,7 @@ export { t, n, s };
   if (!keep) rmSync(work, { recursive: true, force: true });
   else console.log(`kept ${work}`);
 }
-console.log(`\ntest:package: ${passed} passed, ${failed} failed (${((Date.now() - started) / 1000).toFixed(1)} s)`);
+console.log(
+  `\ntest:package: ${passed} passed, ${failed} failed (${((Date.now() - started) / 1000).toFixed(1)} s)`,
+);
 process.exit(failed > 0 ? 1 : 0);

@@ -18,16 +18,29 @@ function roundHalfEven(n: bigint, d: bigint, p: number): string {
   const at = (j: number): [bigint, bigint] => (j >= 0 ? [n * pow10(j), d] : [n, d * pow10(-j)]);
   let [a, b] = at(k);
   let q = a / b;
-  while (q >= pow10(p)) [a, b] = at(--k), (q = a / b);
-  while (q < pow10(p - 1)) [a, b] = at(++k), (q = a / b);
+  while (q >= pow10(p)) {
+    [a, b] = at(--k);
+    q = a / b;
+  }
+  while (q < pow10(p - 1)) {
+    [a, b] = at(++k);
+    q = a / b;
+  }
   const r2 = 2n * (a - q * b);
   if (r2 > b || (r2 === b && q % 2n === 1n)) q += 1n;
   return `${neg ? '-' : ''}${q}e${-k}`;
 }
 
 const mmText = fc.integer({ min: -300_000, max: 300_000 }).map((m) => `${m / 1000}`);
-const course = fc.record({ latitude: mmText, departure: mmText, distance: fc.integer({ min: 0, max: 300_000 }).map((m) => `${m / 1000}`) });
-const input = fc.record({ start: fc.record({ x: mmText, y: mmText }), courses: fc.array(course, { minLength: 1, maxLength: 40 }) });
+const course = fc.record({
+  latitude: mmText,
+  departure: mmText,
+  distance: fc.integer({ min: 0, max: 300_000 }).map((m) => `${m / 1000}`),
+});
+const input = fc.record({
+  start: fc.record({ x: mmText, y: mmText }),
+  courses: fc.array(course, { minLength: 1, maxLength: 40 }),
+});
 
 function code(f: () => unknown): string | undefined {
   try {
@@ -51,17 +64,48 @@ describe('the fused decimal traverse kernel', () => {
         const slow = traverse(plain, t);
         const exact = traverse({ ...rational, kernels: undefined }, t);
         // Millimetre sums of at most 40 courses need at most 10 digits: exact in both.
-        for (const [a, b] of [[fast.closure.east, slow.closure.east], [fast.closure.north, slow.closure.north], [fast.length, slow.length]] as const) expect(D.eq(a, b)).toBe(true);
-        fast.points.forEach((P, i) => expect(D.eq(P.x, slow.points[i]!.x) && D.eq(P.y, slow.points[i]!.y)).toBe(true));
+        for (const [a, b] of [
+          [fast.closure.east, slow.closure.east],
+          [fast.closure.north, slow.closure.north],
+          [fast.length, slow.length],
+        ] as const)
+          expect(D.eq(a, b)).toBe(true);
+        fast.points.forEach((P, i) =>
+          expect(D.eq(P.x, slow.points[i]!.x) && D.eq(P.y, slow.points[i]!.y)).toBe(true),
+        );
         fast.adjusted.forEach((P, i) => {
           const X = exact.adjusted[i]!;
-          expect(D.eq(P.x, D.from(roundHalfEven(X.x.s * X.x.n, X.x.d, p))), `adjusted[${i}].x`).toBe(true);
-          expect(D.eq(P.y, D.from(roundHalfEven(X.y.s * X.y.n, X.y.d, p))), `adjusted[${i}].y`).toBe(true);
+          expect(
+            D.eq(P.x, D.from(roundHalfEven(X.x.s * X.x.n, X.x.d, p))),
+            `adjusted[${i}].x`,
+          ).toBe(true);
+          expect(
+            D.eq(P.y, D.from(roundHalfEven(X.y.s * X.y.n, X.y.d, p))),
+            `adjusted[${i}].y`,
+          ).toBe(true);
         });
         fast.courses.forEach((c, i) => {
           const x = exact.courses[i]!;
-          expect(D.eq(c.adjustedLatitude, D.from(roundHalfEven(x.adjustedLatitude.s * x.adjustedLatitude.n, x.adjustedLatitude.d, p)))).toBe(true);
-          expect(D.eq(c.adjustedDeparture, D.from(roundHalfEven(x.adjustedDeparture.s * x.adjustedDeparture.n, x.adjustedDeparture.d, p)))).toBe(true);
+          expect(
+            D.eq(
+              c.adjustedLatitude,
+              D.from(
+                roundHalfEven(x.adjustedLatitude.s * x.adjustedLatitude.n, x.adjustedLatitude.d, p),
+              ),
+            ),
+          ).toBe(true);
+          expect(
+            D.eq(
+              c.adjustedDeparture,
+              D.from(
+                roundHalfEven(
+                  x.adjustedDeparture.s * x.adjustedDeparture.n,
+                  x.adjustedDeparture.d,
+                  p,
+                ),
+              ),
+            ),
+          ).toBe(true);
         });
         expect(fast.closure.ratio === undefined).toBe(slow.closure.ratio === undefined);
       }),

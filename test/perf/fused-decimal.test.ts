@@ -20,15 +20,23 @@ function roundHalfEven(n: bigint, d: bigint, p: number): string {
   const at = (j: number): [bigint, bigint] => (j >= 0 ? [n * pow10(j), d] : [n, d * pow10(-j)]);
   let [a, b] = at(k);
   let q = a / b;
-  while (q >= pow10(p)) [a, b] = at(--k), (q = a / b);
-  while (q < pow10(p - 1)) [a, b] = at(++k), (q = a / b);
+  while (q >= pow10(p)) {
+    [a, b] = at(--k);
+    q = a / b;
+  }
+  while (q < pow10(p - 1)) {
+    [a, b] = at(++k);
+    q = a / b;
+  }
   const r2 = 2n * (a - q * b);
   if (r2 > b || (r2 === b && q % 2n === 1n)) q += 1n;
   return `${q}e${-k}`;
 }
 
 const mm = fc.integer({ min: -100_000_000, max: 100_000_000 }).map((m) => `${m / 1000}`);
-const long = fc.tuple(fc.bigInt({ min: -(10n ** 18n), max: 10n ** 18n }), fc.integer({ min: -20, max: 3 })).map(([m, e]) => `${m}e${e}`);
+const long = fc
+  .tuple(fc.bigInt({ min: -(10n ** 18n), max: 10n ** 18n }), fc.integer({ min: -20, max: 3 }))
+  .map(([m, e]) => `${m}e${e}`);
 const coord = fc.oneof(mm, long, fc.integer({ min: -9, max: 9 }).map(String));
 const six = fc.tuple(coord, coord, coord, coord, coord, coord);
 const digits = fc.constantFrom(7, 12, 20, 34, 50);
@@ -49,7 +57,9 @@ describe('the fused decimal triangle kernel', () => {
         const D = decimal(p);
         const [P, Q, R] = [0, 2, 4].map((i) => point(D, c[i]!, c[i + 1]!));
         // The exact measures, from the same (already rounded) decimal inputs, in rational.
-        const [Pe, Qe, Re] = [P, Q, R].map((X) => point(rational, D.toString(X!.x), D.toString(X!.y)));
+        const [Pe, Qe, Re] = [P, Q, R].map((X) =>
+          point(rational, D.toString(X!.x), D.toString(X!.y)),
+        );
         let exact;
         if (code(() => (exact = triangle(rational, Pe!, Qe!, Re!))) !== undefined) return;
         const t = triangle(D, P!, Q!, R!);

@@ -27,8 +27,15 @@ function code(f: () => unknown): string | undefined {
 
 // Coordinates of several kinds: millimetres up to 100 km, arbitrary fractions, big integers.
 const mm = fc.integer({ min: -100_000_000, max: 100_000_000 }).map((m) => `${m / 1000}`);
-const ratio = fc.tuple(fc.bigInt({ min: -(10n ** 20n), max: 10n ** 20n }), fc.bigInt({ min: 1n, max: 10n ** 12n })).map(([n, d]) => `${n}/${d}`);
-const digits16 = fc.tuple(fc.bigInt({ min: 10n ** 15n, max: 10n ** 16n - 1n }), fc.integer({ min: -16, max: 4 })).map(([m, e]) => `${m}e${e}`);
+const ratio = fc
+  .tuple(
+    fc.bigInt({ min: -(10n ** 20n), max: 10n ** 20n }),
+    fc.bigInt({ min: 1n, max: 10n ** 12n }),
+  )
+  .map(([n, d]) => `${n}/${d}`);
+const digits16 = fc
+  .tuple(fc.bigInt({ min: 10n ** 15n, max: 10n ** 16n - 1n }), fc.integer({ min: -16, max: 4 }))
+  .map(([m, e]) => `${m}e${e}`);
 const coord = fc.oneof(mm, ratio, digits16, fc.integer({ min: -5, max: 5 }).map(String));
 const pt = coord.chain((x) => coord.map((y) => point(rational, x, y)));
 
@@ -48,7 +55,12 @@ describe('the fused rational triangle kernel', () => {
   });
 
   it('its results are fraction.js fractions that behave like any other', () => {
-    const t = triangle(rational, point(rational, 0, 0), point(rational, '0.004', 0), point(rational, 0, '0.003'));
+    const t = triangle(
+      rational,
+      point(rational, 0, 0),
+      point(rational, '0.004', 0),
+      point(rational, 0, '0.003'),
+    );
     // 3-4-5 in millimetres (derived): Q1 = 25e-6, right angle at A1 so s1 = 1, s2 = 9/25.
     expect(t.Q1 instanceof Fraction).toBe(true);
     expect(rational.toString(t.Q1)).toBe('1/40000');
@@ -63,7 +75,15 @@ describe('the fused rational triangle kernel', () => {
     const [a, b, c] = [rational.from(1), rational.from(2), rational.from(3)];
     expect(k(a, a, a, a, b, c)).toBeUndefined();
     expect(k(a, a, b, b, c, c)).toBeUndefined();
-    expect(code(() => triangle(rational, point(rational, 1, 1), point(rational, 1, 1), point(rational, 2, 3)))).toBe('COINCIDENT_POINTS');
-    expect(code(() => triangle(rational, point(rational, 1, 1), point(rational, 2, 2), point(rational, 3, 3)))).toBe('COLLINEAR_POINTS');
+    expect(
+      code(() =>
+        triangle(rational, point(rational, 1, 1), point(rational, 1, 1), point(rational, 2, 3)),
+      ),
+    ).toBe('COINCIDENT_POINTS');
+    expect(
+      code(() =>
+        triangle(rational, point(rational, 1, 1), point(rational, 2, 2), point(rational, 3, 3)),
+      ),
+    ).toBe('COLLINEAR_POINTS');
   });
 });

@@ -11,10 +11,20 @@ const plain: Arithmetic<Rational, true> = { ...rational, kernels: undefined };
 
 /** Every value of a result as text, in order, with fractions and surds by their exact text. */
 function flatten(x: unknown, out: string[] = []): string[] {
-  if (x instanceof Object && 'n' in x && 'd' in x && 's' in x) out.push(`F ${rational.toString(x as Rational)} ${(x as Rational).d}`);
-  else if (x !== null && typeof x === 'object' && typeof (x as { isRational?: unknown }).isRational === 'function') out.push(`S ${String(x)}`);
+  if (x instanceof Object && 'n' in x && 'd' in x && 's' in x)
+    out.push(`F ${rational.toString(x as Rational)} ${(x as Rational).d}`);
+  else if (
+    x !== null &&
+    typeof x === 'object' &&
+    typeof (x as { isRational?: unknown }).isRational === 'function'
+  )
+    out.push(`S ${String(x)}`);
   else if (Array.isArray(x)) x.forEach((v) => flatten(v, out));
-  else if (x !== null && typeof x === 'object') for (const k of Object.keys(x).sort()) (out.push(`.${k}`), flatten((x as Record<string, unknown>)[k], out));
+  else if (x !== null && typeof x === 'object')
+    for (const k of Object.keys(x).sort()) {
+      out.push(`.${k}`);
+      flatten((x as Record<string, unknown>)[k], out);
+    }
   else out.push(`${typeof x} ${String(x)}`);
   return out;
 }
@@ -23,13 +33,28 @@ function outcome(f: () => unknown): unknown {
   try {
     return flatten(f());
   } catch (e) {
-    return e instanceof QuadspreadError ? `error ${e.code}: ${e.message}` : `not a QuadspreadError: ${String(e)}`;
+    return e instanceof QuadspreadError
+      ? `error ${e.code}: ${e.message}`
+      : `not a QuadspreadError: ${String(e)}`;
   }
 }
 
 const mmText = fc.integer({ min: -300_000, max: 300_000 }).map((m) => `${m / 1000}`);
-const value = fc.oneof(mmText, fc.integer({ min: -50, max: 50 }), fc.tuple(fc.integer({ min: -1000, max: 1000 }), fc.integer({ min: 1, max: 64 })).map(([n, d]) => rational.from(`${n}/${d}`)));
-const course = fc.record({ latitude: value, departure: value, distance: fc.oneof(mmText.map((s) => s.replace('-', '')), fc.integer({ min: 0, max: 300 })) });
+const value = fc.oneof(
+  mmText,
+  fc.integer({ min: -50, max: 50 }),
+  fc
+    .tuple(fc.integer({ min: -1000, max: 1000 }), fc.integer({ min: 1, max: 64 }))
+    .map(([n, d]) => rational.from(`${n}/${d}`)),
+);
+const course = fc.record({
+  latitude: value,
+  departure: value,
+  distance: fc.oneof(
+    mmText.map((s) => s.replace('-', '')),
+    fc.integer({ min: 0, max: 300 }),
+  ),
+});
 const input = fc.record(
   {
     start: fc.record({ x: value, y: value }),
@@ -51,12 +76,22 @@ describe('the fused rational traverse kernel', () => {
   });
 
   it('closes a loop exactly: the adjusted end is the start, and the misclosure is the sum of the courses', () => {
-    const t = { start: { x: '10', y: '20' }, courses: [{ latitude: '3.001', departure: 0, distance: 3 }, { latitude: 0, departure: 4, distance: 4 }, { latitude: -3, departure: -4, distance: 5 }] };
+    const t = {
+      start: { x: '10', y: '20' },
+      courses: [
+        { latitude: '3.001', departure: 0, distance: 3 },
+        { latitude: 0, departure: 4, distance: 4 },
+        { latitude: -3, departure: -4, distance: 5 },
+      ],
+    };
     const r = traverse(rational, t);
     // Derived by hand: the courses sum to (0, 0.001) north, over a length of 12.
     expect(rational.toString(r.closure.north)).toBe('1/1000');
     expect(rational.toString(r.closure.east)).toBe('0');
-    expect([rational.toString(r.adjusted[3]!.x), rational.toString(r.adjusted[3]!.y)]).toEqual(['10', '20']);
+    expect([rational.toString(r.adjusted[3]!.x), rational.toString(r.adjusted[3]!.y)]).toEqual([
+      '10',
+      '20',
+    ]);
     expect(rational.toString(r.closure.ratio!)).toBe('12000');
     expect(outcome(() => r)).toEqual(outcome(() => traverse(plain, t)));
   });
@@ -65,8 +100,26 @@ describe('the fused rational traverse kernel', () => {
     const k = rational.kernels!.traverse!;
     expect(k({ start: { x: 0, y: 0 }, courses: [{ bearing: '45', distance: 1 }] })).toBeUndefined();
     expect(k({ start: { x: 0, y: 0 }, courses: [{ latitude: 3, departure: 4 }] })).toBeUndefined();
-    expect(k({ start: { x: 0, y: 0 }, courses: [{ latitude: 'x', departure: 4, distance: 5 }] })).toBeUndefined();
-    expect(k({ start: { x: 0, y: 0 }, courses: [{ latitude: 3, departure: 4, distance: -5 }] })).toBeUndefined();
-    expect(outcome(() => traverse(rational, { start: { x: 0, y: 0 }, courses: [{ latitude: 3, departure: 4, distance: -5 }] }))).toEqual(outcome(() => traverse(plain, { start: { x: 0, y: 0 }, courses: [{ latitude: 3, departure: 4, distance: -5 }] })));
+    expect(
+      k({ start: { x: 0, y: 0 }, courses: [{ latitude: 'x', departure: 4, distance: 5 }] }),
+    ).toBeUndefined();
+    expect(
+      k({ start: { x: 0, y: 0 }, courses: [{ latitude: 3, departure: 4, distance: -5 }] }),
+    ).toBeUndefined();
+    expect(
+      outcome(() =>
+        traverse(rational, {
+          start: { x: 0, y: 0 },
+          courses: [{ latitude: 3, departure: 4, distance: -5 }],
+        }),
+      ),
+    ).toEqual(
+      outcome(() =>
+        traverse(plain, {
+          start: { x: 0, y: 0 },
+          courses: [{ latitude: 3, departure: 4, distance: -5 }],
+        }),
+      ),
+    );
   });
 });

@@ -17,13 +17,25 @@ describe('quadspread run on Mahun, Trig Leveling, Problem 1', () => {
   ])('sight %s over %s ft gives elevation %s ft (±0.005 ft)', (angle, slope, expected) => {
     const job = {
       units: { length: 'ft' },
-      tasks: [{ kind: 'trig-height', distance: slope, measured: 'slope', vertical: angle, instrumentHeight: 5.41, targetHeight: 5.64, stationLevel: 745.39 }],
+      tasks: [
+        {
+          kind: 'trig-height',
+          distance: slope,
+          measured: 'slope',
+          vertical: angle,
+          instrumentHeight: 5.41,
+          targetHeight: 5.64,
+          stationLevel: 745.39,
+        },
+      ],
     };
     const f = join(tempFolder(), 'mahun.json');
     writeFileSync(f, JSON.stringify(job));
     const r = cli(['run', f, '--format', 'json']);
     expect(r.code).toBe(0);
-    const level = JSON.parse(r.stdout).tasks[0].results.find((q: { name: string }) => q.name === 'level');
+    const level = JSON.parse(r.stdout).tasks[0].results.find(
+      (q: { name: string }) => q.name === 'level',
+    );
     expect(Math.abs(Number(level.value) - expected)).toBeLessThanOrEqual(0.005);
     expect(level.unit).toBe('ft');
   });

@@ -8,8 +8,20 @@ import { rational, LEVELLING_ORDERS, allowableMisclosure } from '../../src/index
 // the same orders: from memory — check before relying on it.
 describe('LEVELLING_ORDERS follows FGCC 1984', () => {
   it('has the printed elevation-difference accuracies b (mm/√km) for the five orders', () => {
-    expect(Object.keys(LEVELLING_ORDERS)).toEqual(['first-I', 'first-II', 'second-I', 'second-II', 'third']);
-    expect(Object.values(LEVELLING_ORDERS).map((o) => o.b)).toEqual(['0.5', '0.7', '1.0', '1.3', '2.0']);
+    expect(Object.keys(LEVELLING_ORDERS)).toEqual([
+      'first-I',
+      'first-II',
+      'second-I',
+      'second-II',
+      'third',
+    ]);
+    expect(Object.values(LEVELLING_ORDERS).map((o) => o.b)).toEqual([
+      '0.5',
+      '0.7',
+      '1.0',
+      '1.3',
+      '2.0',
+    ]);
   });
 
   it('has the allowable-misclosure constants c = 3, 4, 6, 8, 12 mm (from memory)', () => {

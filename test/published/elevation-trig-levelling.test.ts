@@ -6,7 +6,11 @@ import { trigHeight, curvatureRefraction } from '../../src/elevation/trig-height
 import { verticalFromAngle } from '../../src/readings/vertical.js';
 import { rootToNumber } from '../../src/geometry/surd.js';
 
-const arithmetics: Arithmetic<unknown, boolean>[] = [rational as never, decimal(34) as never, float as never];
+const arithmetics: Arithmetic<unknown, boolean>[] = [
+  rational as never,
+  decimal(34) as never,
+  float as never,
+];
 
 describe('Mahun, Surveying (open text), "Solution: Trig Leveling", Problem 1', () => {
   // Instrument 5.41 ft over a point of elevation 745.39 ft, target 5.64 ft; elevation = H + hi + S·sin α − hr.
@@ -20,8 +24,12 @@ describe('Mahun, Surveying (open text), "Solution: Trig Leveling", Problem 1', (
     for (const [angle, S, elevation] of cases) {
       it(`${A.name}: ${angle} over ${S} ft gives ${elevation} ft (±0.005)`, () => {
         const r = trigHeight(A, {
-          distance: String(S), measured: 'slope', vertical: verticalFromAngle(A, angle),
-          instrumentHeight: '5.41', targetHeight: '5.64', correction: { unit: 'ft' },
+          distance: String(S),
+          measured: 'slope',
+          vertical: verticalFromAngle(A, angle),
+          instrumentHeight: '5.41',
+          targetHeight: '5.64',
+          correction: { unit: 'ft' },
         });
         const elev = 745.39 + rootToNumber(A, r.difference as never);
         expect(Math.abs(elev - elevation)).toBeLessThanOrEqual(0.005);
@@ -34,13 +42,24 @@ describe('Mahun, Surveying (open text), "Solution: Trig Leveling", Problem 1', (
 
 describe('curvature and refraction constants (Ghilani & Wolf, Elementary Surveying, ch. 4 — from memory; derived with R = 6371 km)', () => {
   it('curvature alone is 0.07848·D² m with D in km', () => {
-    expect(rational.toNumber(curvatureRefraction(rational, 1000, { k: 0 }))).toBeCloseTo(0.07848, 5);
-    expect(rational.toNumber(curvatureRefraction(rational, 3000, { k: 0 })) / 9).toBeCloseTo(0.07848, 5);
+    expect(rational.toNumber(curvatureRefraction(rational, 1000, { k: 0 }))).toBeCloseTo(
+      0.07848,
+      5,
+    );
+    expect(rational.toNumber(curvatureRefraction(rational, 3000, { k: 0 })) / 9).toBeCloseTo(
+      0.07848,
+      5,
+    );
   });
   it('with k = 0.14 it is 0.0675·D² m', () => {
-    expect(rational.toNumber(curvatureRefraction(rational, 1000, { k: '0.14' }))).toBeCloseTo(0.0675, 4);
+    expect(rational.toNumber(curvatureRefraction(rational, 1000, { k: '0.14' }))).toBeCloseTo(
+      0.0675,
+      4,
+    );
   });
   it('in feet, 0.0206·F² ft with F in thousands of feet (k = 0.14)', () => {
-    expect(rational.toNumber(curvatureRefraction(rational, 1000, { k: '0.14', unit: 'ft' }))).toBeCloseTo(0.0206, 4);
+    expect(
+      rational.toNumber(curvatureRefraction(rational, 1000, { k: '0.14', unit: 'ft' })),
+    ).toBeCloseTo(0.0206, 4);
   });
 });

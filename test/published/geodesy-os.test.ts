@@ -22,7 +22,12 @@ const OS = {
   Z: '5111482.970',
 };
 
-const arithmetics: Arithmetic<unknown>[] = [float, decimal(34), decimal(40), rational] as Arithmetic<unknown>[];
+const arithmetics: Arithmetic<unknown>[] = [
+  float,
+  decimal(34),
+  decimal(40),
+  rational,
+] as Arithmetic<unknown>[];
 
 describe('Ordnance Survey guide, annex B: geodetic ↔ geocentric on GRS 80', () => {
   for (const A of arithmetics) {
@@ -67,7 +72,10 @@ describe('ellipsoid parameters from their defining documents', () => {
   });
   it('GRS80 mean radius R1 = (2a + b)/3 = 6371008.7714 m (Moritz 2000; doc/memory in CHECKS.md)', () => {
     const E = ellipsoidParameters(rational, GRS80);
-    const R1 = rational.div(rational.add(rational.mul(rational.from(2), E.a), E.b), rational.from(3));
+    const R1 = rational.div(
+      rational.add(rational.mul(rational.from(2), E.a), E.b),
+      rational.from(3),
+    );
     expect(rational.toPrecision(R1, 11)).toBe('6371008.7714');
   });
   it('WGS84 derived constants match TR8350.2 table 3.3: b = 6356752.3142 m, e² = 0.00669437999014 (from memory)', () => {
@@ -95,7 +103,14 @@ describe('Ordnance Survey guide, annex C: Transverse Mercator (National Grid on 
   // 49°N 2°W, false origin E0 = 400000 m, N0 = −100000 m) → E = 651409.903 m, N = 313177.270 m.
   // The guide's own formulas are a series good to about 1 mm this far from the central meridian.
   const airy = defineEllipsoid({ name: 'Airy 1830', a: '6377563.396', b: '6356256.909' });
-  const grid = { lon0: -2, lat0: 49, k0: '0.9996012717', falseEasting: 400000, falseNorthing: -100000, ellipsoid: airy };
+  const grid = {
+    lon0: -2,
+    lat0: 49,
+    k0: '0.9996012717',
+    falseEasting: 400000,
+    falseNorthing: -100000,
+    ellipsoid: airy,
+  };
   for (const A of arithmetics) {
     it(`transverseMercator(${A.name}) gives E = 651409.903 m and N = 313177.270 m within 1 mm`, () => {
       const r = transverseMercator(A, { lat: `52°39'27.2531"N`, lon: `1°43'4.5177"E` }, grid);
@@ -106,8 +121,12 @@ describe('Ordnance Survey guide, annex C: Transverse Mercator (National Grid on 
   for (const A of arithmetics) {
     it(`transverseMercatorInverse(${A.name}) gives back 52°39′27.2531″N, 1°43′4.5177″E within 0.0001″`, () => {
       const g = transverseMercatorInverse(A, { E: '651409.903', N: '313177.270' }, grid);
-      expect(Math.abs(A.toNumber(g.lat) - (52 + 39 / 60 + 27.2531 / 3600)) * 3600).toBeLessThan(0.0001);
-      expect(Math.abs(A.toNumber(g.lon) - (1 + 43 / 60 + 4.5177 / 3600)) * 3600).toBeLessThan(0.0001);
+      expect(Math.abs(A.toNumber(g.lat) - (52 + 39 / 60 + 27.2531 / 3600)) * 3600).toBeLessThan(
+        0.0001,
+      );
+      expect(Math.abs(A.toNumber(g.lon) - (1 + 43 / 60 + 4.5177 / 3600)) * 3600).toBeLessThan(
+        0.0001,
+      );
     });
   }
   it('the scale factor agrees with the ratio of grid to ellipsoid distance over a short line (derived check of k)', () => {

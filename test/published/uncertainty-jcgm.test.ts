@@ -21,11 +21,15 @@ describe('JCGM 101:2008 §9.2: additive model Y = X1 + X2 + X3 + X4, every Xi ~ 
   it('Monte Carlo with M = 2·10⁵ gives u(y) = 2.00 and the shortest 95 % interval ±3.92 (JCGM 101 §9.2.2, within the Monte Carlo error)', () => {
     const n = 200000;
     const N01 = { distribution: 'normal', mean: 0, sigma: 1 } as const;
-    const r = monteCarlo((x) => x.X1 + x.X2 + x.X3 + x.X4, { X1: N01, X2: N01, X3: N01, X4: N01 }, { n, seed: 2008 });
+    const r = monteCarlo(
+      (x) => x.X1 + x.X2 + x.X3 + x.X4,
+      { X1: N01, X2: N01, X3: N01, X4: N01 },
+      { n, seed: 2008 },
+    );
     // Standard errors (derived): mean 2/√M; s.d. 2/√(2M); a 2.5 % quantile of N(0, 4)
     // √(p(1 − p)/M)/φ where φ = density at 3.92 = 0.0292: about 0.012.
-    expect(Math.abs(r.mean)).toBeLessThan(5 * 2 / Math.sqrt(n));
-    expect(Math.abs(r.sigma - 2)).toBeLessThan(5 * 2 / Math.sqrt(2 * n));
+    expect(Math.abs(r.mean)).toBeLessThan((5 * 2) / Math.sqrt(n));
+    expect(Math.abs(r.sigma - 2)).toBeLessThan((5 * 2) / Math.sqrt(2 * n));
     expect(Math.abs(r.low + 3.92)).toBeLessThan(0.06);
     expect(Math.abs(r.high - 3.92)).toBeLessThan(0.06);
     expect(r.coverage).toBe(0.95);
@@ -49,7 +53,10 @@ describe('GUM (JCGM 100:2008) §5.1.2 eq. (10) and §5.1.6', () => {
     const U = uncertain(float);
     const s = 1.489;
     const readings = Array.from({ length: 20 }, (_, i) => measured(U, 100.145, s, `t${i}`));
-    const mean = U.div(readings.reduce((p, t) => U.add(p, t)), U.from(20));
+    const mean = U.div(
+      readings.reduce((p, t) => U.add(p, t)),
+      U.from(20),
+    );
     const B = budget(U, mean);
     expect(Math.abs(B.value - 100.145)).toBeLessThan(1e-12);
     // published to 3 decimals: 0.333 ± 0.0005

@@ -23,13 +23,18 @@ describe('Mahun, Surveying, Traverse Adjustment Problem 2, with uncertainty budg
   const U = uncertain(float);
   const t = traverse(U, {
     start: { x: U.from(1000), y: U.from(1000) },
-    courses: legs.map((l) => ({ bearing: measuredAngle(U, l.az, uaSec, `az ${l.name}`), distance: measured(U, l.d, ud, `d ${l.name}`) })),
+    courses: legs.map((l) => ({
+      bearing: measuredAngle(U, l.az, uaSec, `az ${l.name}`),
+      distance: measured(U, l.d, ud, `d ${l.name}`),
+    })),
   });
 
-  it('the misclosure values are the document\'s: latitude −0.115, departure +0.107, linear 0.157 ft', () => {
+  it("the misclosure values are the document's: latitude −0.115, departure +0.107, linear 0.157 ft", () => {
     expect(Math.abs(t.closure.north.value + 0.115)).toBeLessThanOrEqual(0.001);
     expect(Math.abs(t.closure.east.value - 0.107)).toBeLessThanOrEqual(0.001);
-    expect(Math.abs((t.closure.linear as typeof t.closure.east).value - 0.157)).toBeLessThanOrEqual(0.001);
+    expect(Math.abs((t.closure.linear as typeof t.closure.east).value - 0.157)).toBeLessThanOrEqual(
+      0.001,
+    );
   });
 
   it('the sigmas of the departure and latitude misclosures equal the hand propagation', () => {
@@ -41,8 +46,12 @@ describe('Mahun, Surveying, Traverse Adjustment Problem 2, with uncertainty budg
       vE += (Math.sin(a) * ud) ** 2 + (l.d * Math.cos(a) * ua) ** 2; // ∂(d sin a)/∂d, ∂/∂a
       vN += (Math.cos(a) * ud) ** 2 + (l.d * Math.sin(a) * ua) ** 2;
     }
-    expect(Math.abs(budget(U, t.closure.east).sigma - Math.sqrt(vE)) / Math.sqrt(vE)).toBeLessThan(1e-12);
-    expect(Math.abs(budget(U, t.closure.north).sigma - Math.sqrt(vN)) / Math.sqrt(vN)).toBeLessThan(1e-12);
+    expect(Math.abs(budget(U, t.closure.east).sigma - Math.sqrt(vE)) / Math.sqrt(vE)).toBeLessThan(
+      1e-12,
+    );
+    expect(Math.abs(budget(U, t.closure.north).sigma - Math.sqrt(vN)) / Math.sqrt(vN)).toBeLessThan(
+      1e-12,
+    );
     expect(budget(U, t.closure.east).contributions.length).toBe(8);
   });
 });

@@ -25,11 +25,20 @@ describe('Mahun, Surveying, Trig Leveling Problem 1, with an uncertainty budget'
         const A = U as unknown as ReturnType<typeof uncertain<number, false>>;
         const S = measured(A, s.S, uS, 'S');
         const v = measuredVertical(A, s.angle, uaSec, 'alpha');
-        const r = trigHeight(A, { distance: S, measured: 'slope', vertical: v, instrumentHeight: '5.41', targetHeight: '5.64', correction: false });
+        const r = trigHeight(A, {
+          distance: S,
+          measured: 'slope',
+          vertical: v,
+          instrumentHeight: '5.41',
+          targetHeight: '5.64',
+          correction: false,
+        });
         const elevation = A.base.toNumber(r.difference.value) + 745.39;
         expect(Math.abs(elevation - s.elevation)).toBeLessThanOrEqual(0.005 + 1e-9);
         const t = (s.deg * Math.PI) / 180;
-        const hand = Math.sqrt((Math.sin(t) * uS) ** 2 + (s.S * Math.cos(t) * uaSec * (Math.PI / 648000)) ** 2);
+        const hand = Math.sqrt(
+          (Math.sin(t) * uS) ** 2 + (s.S * Math.cos(t) * uaSec * (Math.PI / 648000)) ** 2,
+        );
         const B = budget(A, r.difference);
         expect(Math.abs(A.base.toNumber(B.sigma) - hand) / hand).toBeLessThan(1e-12);
       });

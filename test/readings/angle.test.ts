@@ -4,7 +4,11 @@ import { rational, decimal, float, QuadspreadError } from '../../src/index.js';
 import type { Arithmetic } from '../../src/index.js';
 import { angleToDegrees, degreesToUnit } from '../../src/readings/angle.js';
 
-const arithmetics: Arithmetic<unknown>[] = [rational as Arithmetic<unknown>, decimal(40) as Arithmetic<unknown>, float as Arithmetic<unknown>];
+const arithmetics: Arithmetic<unknown>[] = [
+  rational as Arithmetic<unknown>,
+  decimal(40) as Arithmetic<unknown>,
+  float as Arithmetic<unknown>,
+];
 
 // Expected values worked by hand: D + M/60 + S/3600 (the sexagesimal definition).
 const dmsTable: { input: string | number; expected: string }[] = [
@@ -33,14 +37,20 @@ describe('angleToDegrees(A, reading) reads field-book DMS text', () => {
     for (const { input, expected } of dmsTable) {
       it(`${A.name}: ${JSON.stringify(input)} is ${expected}°`, () => {
         const got = angleToDegrees(A, input as never);
-        const rel = Math.abs(A.toNumber(got) - Number(expected)) / Math.max(1, Math.abs(Number(expected)));
+        const rel =
+          Math.abs(A.toNumber(got) - Number(expected)) / Math.max(1, Math.abs(Number(expected)));
         expect(rel).toBeLessThan(1e-15);
       });
     }
   }
   it('rational: the DMS value is exact (12°34\'56.7" = 12 + 34/60 + 56.7/3600)', () => {
     expect(rational.toString(angleToDegrees(rational, `12°34'56.7"`))).toBe(
-      rational.toString(rational.add(rational.from(12), rational.add(rational.from('34/60'), rational.from('56.7/3600')))),
+      rational.toString(
+        rational.add(
+          rational.from(12),
+          rational.add(rational.from('34/60'), rational.from('56.7/3600')),
+        ),
+      ),
     );
   });
 });
@@ -54,7 +64,8 @@ describe('angleToDegrees(A, reading, unit) converts gons, mils and radians', () 
     expect(rational.toString(angleToDegrees(rational, 1600, 'mil'))).toBe('90');
   });
   it('1 rad is 57.29577951308232…° (independent: 180/Math.PI)', () => {
-    for (const A of arithmetics) expect(A.toNumber(angleToDegrees(A, 1, 'rad'))).toBeCloseTo(180 / Math.PI, 12);
+    for (const A of arithmetics)
+      expect(A.toNumber(angleToDegrees(A, 1, 'rad'))).toBeCloseTo(180 / Math.PI, 12);
   });
   it('degreesToUnit inverts angleToDegrees for gon and mil exactly', () => {
     for (const u of ['deg', 'gon', 'mil'] as const) {
@@ -96,6 +107,8 @@ describe('angleToDegrees refuses bad readings with typed errors', () => {
     });
   }
   it('the message names the input and the minutes at fault', () => {
-    expect(() => angleToDegrees(rational, `12°60'`)).toThrow(/angleToDegrees\(reading\).*12°60'.*minutes 60/);
+    expect(() => angleToDegrees(rational, `12°60'`)).toThrow(
+      /angleToDegrees\(reading\).*12°60'.*minutes 60/,
+    );
   });
 });

@@ -12,9 +12,16 @@ function toJs(code: string): string {
   const out: string[] = [];
   for (let i = 0; i < lines.length; i++) {
     const imp = /^import\s*\{([^}]*)\}\s*from\s*'quadspread';?$/.exec(lines[i]!.trim());
-    if (imp) { out.push(`const {${imp[1]}} = lib;`); continue; }
+    if (imp) {
+      out.push(`const {${imp[1]}} = lib;`);
+      continue;
+    }
     const want = /^\s*\/\/=>\s*(.*)$/.exec(lines[i + 1] ?? '');
-    if (want) { out.push(`check((${lines[i]!.trim().replace(/;$/, '')}), (${want[1]}));`); i++; continue; }
+    if (want) {
+      out.push(`check((${lines[i]!.trim().replace(/;$/, '')}), (${want[1]}));`);
+      i++;
+      continue;
+    }
     out.push(lines[i]!);
   }
   return transformSync(out.join('\n'), { loader: 'ts' }).code;
@@ -30,7 +37,10 @@ describe('the code blocks of docs/readings.md and docs/heights.md hold', () => {
       if (!code.includes('//=>')) continue;
       it(`docs/${guide}:${text.slice(0, m.index).split('\n').length}`, () => {
         let n = 0;
-        new Function('lib', 'check', toJs(code))(quadspread, (got: unknown, want: unknown) => { n++; expect(got).toEqual(want); });
+        new Function('lib', 'check', toJs(code))(quadspread, (got: unknown, want: unknown) => {
+          n++;
+          expect(got).toEqual(want);
+        });
         expect(n).toBe(code.split('\n').filter((l) => l.trim().startsWith('//=>')).length);
       });
     }

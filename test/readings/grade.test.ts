@@ -12,23 +12,29 @@ describe('gradeFromSpread(A, s) is 100·tan of the angle of spread s', () => {
     expect(gradeFromSpread(rational, '1/3').toString()).toBe('50√2');
   });
   it('inverts spreadFromGrade exactly in rational on random rational grades', () => {
-    fc.assert(fc.property(fc.integer({ min: 0, max: 1e6 }), fc.integer({ min: 1, max: 1000 }), (n, m) => {
-      const p = rational.from(`${n}/${m}`);
-      const g = gradeFromSpread(rational, spreadFromGrade(rational, p));
-      expect(g.isRational()).toBe(true);
-      expect(rational.eq(g.toRational()!, p)).toBe(true);
-    }));
+    fc.assert(
+      fc.property(fc.integer({ min: 0, max: 1e6 }), fc.integer({ min: 1, max: 1000 }), (n, m) => {
+        const p = rational.from(`${n}/${m}`);
+        const g = gradeFromSpread(rational, spreadFromGrade(rational, p));
+        expect(g.isRational()).toBe(true);
+        expect(rational.eq(g.toRational()!, p)).toBe(true);
+      }),
+    );
   });
   it('float and decimal agree with 100·tan(asin(√s)) (Math.tan, Math.asin) to 1e-12 relative', () => {
-    fc.assert(fc.property(fc.double({ min: 0.001, max: 0.999, noNaN: true }), (s) => {
-      const want = 100 * Math.tan(Math.asin(Math.sqrt(s)));
-      expect(Math.abs(gradeFromSpread(float, s) / want - 1)).toBeLessThan(1e-12);
-      const D = decimal(30);
-      expect(Math.abs(D.toNumber(gradeFromSpread(D, s)) / want - 1)).toBeLessThan(1e-12);
-    }));
+    fc.assert(
+      fc.property(fc.double({ min: 0.001, max: 0.999, noNaN: true }), (s) => {
+        const want = 100 * Math.tan(Math.asin(Math.sqrt(s)));
+        expect(Math.abs(gradeFromSpread(float, s) / want - 1)).toBeLessThan(1e-12);
+        const D = decimal(30);
+        expect(Math.abs(D.toNumber(gradeFromSpread(D, s)) / want - 1)).toBeLessThan(1e-12);
+      }),
+    );
   });
   it('refuses a vertical spread and spreads outside [0, 1]', () => {
-    expect(() => gradeFromSpread(rational, 1)).toThrow(expect.objectContaining({ code: 'VERTICAL_SIGHT' }));
+    expect(() => gradeFromSpread(rational, 1)).toThrow(
+      expect.objectContaining({ code: 'VERTICAL_SIGHT' }),
+    );
     expect(() => gradeFromSpread(float, -0.1)).toThrow(QuadspreadError);
   });
 });

@@ -7,8 +7,14 @@ import { sinCosDegrees } from '../../src/readings/trig.js';
 import { heightFromReading } from '../../src/elevation/height.js';
 
 type U = ReturnType<typeof uncertain<number, false>>;
-const bases: [string, Arithmetic<unknown>][] = [['float', float as Arithmetic<unknown>], ['rational', rational as Arithmetic<unknown>]];
-const derivative = (y: { gradient: ReadonlyMap<unknown, unknown> }, B: Arithmetic<unknown>): number => {
+const bases: [string, Arithmetic<unknown>][] = [
+  ['float', float as Arithmetic<unknown>],
+  ['rational', rational as Arithmetic<unknown>],
+];
+const derivative = (
+  y: { gradient: ReadonlyMap<unknown, unknown> },
+  B: Arithmetic<unknown>,
+): number => {
   const d = [...y.gradient.values()];
   expect(d.length).toBeLessThanOrEqual(1); // one input; a zero derivative may be dropped
   return d.length === 0 ? 0 : B.toNumber(d[0]);
@@ -23,7 +29,10 @@ describe('spreadFromDegrees carries ds/dθ = sin 2θ·π/180 (derived from s = s
         const s = spreadFromDegrees(Un, x);
         const want = (Math.sin((2 * deg * Math.PI) / 180) * Math.PI) / 180;
         expect(Math.abs(derivative(s as never, B) - want)).toBeLessThan(1e-14);
-        expect(B.toNumber((s as unknown as { value: unknown }).value)).toBeCloseTo(Math.sin((deg * Math.PI) / 180) ** 2, 14);
+        expect(B.toNumber((s as unknown as { value: unknown }).value)).toBeCloseTo(
+          Math.sin((deg * Math.PI) / 180) ** 2,
+          14,
+        );
       });
     }
   }
@@ -32,7 +41,10 @@ describe('spreadFromDegrees carries ds/dθ = sin 2θ·π/180 (derived from s = s
     const x = measured(Un, 30, 0.001, 'theta');
     const { sin } = sinCosDegrees(Un, x);
     expect(rational.toString(sin.value)).toBe('1/2');
-    expect(derivative(sin as never, rational as Arithmetic<unknown>)).toBeCloseTo((Math.cos(Math.PI / 6) * Math.PI) / 180, 14);
+    expect(derivative(sin as never, rational as Arithmetic<unknown>)).toBeCloseTo(
+      (Math.cos(Math.PI / 6) * Math.PI) / 180,
+      14,
+    );
   });
 });
 
@@ -45,7 +57,9 @@ describe('degreesFromSpread carries dθ/ds = 90/(π sin θ cos θ) (derived)', (
         const th = degreesFromSpread(Un, s);
         const v = B.toNumber(B.from(sv));
         const t = Math.asin(Math.sqrt(v));
-        expect(Math.abs(derivative(th as never, B) - 90 / (Math.PI * Math.sin(t) * Math.cos(t)))).toBeLessThan(1e-9);
+        expect(
+          Math.abs(derivative(th as never, B) - 90 / (Math.PI * Math.sin(t) * Math.cos(t))),
+        ).toBeLessThan(1e-9);
       });
     }
   }

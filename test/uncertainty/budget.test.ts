@@ -31,7 +31,9 @@ describe('budget(U, result) is the law of propagation of uncertainty (GUM, JCGM 
     // 4²·0.02² + 12.5²·0.01² = 0.0064 + 0.015625 = 0.022025
     expect(r.toString(B.variance)).toBe('881/40000');
     expect(B.sigma.toString()).toBe('√881/200');
-    expect(B.contributions.map((c) => [c.name, r.toString(c.sensitivity), r.toString(c.contribution)])).toEqual([
+    expect(
+      B.contributions.map((c) => [c.name, r.toString(c.sensitivity), r.toString(c.contribution)]),
+    ).toEqual([
       ['b', '25/2', '1/64'],
       ['a', '4', '4/625'],
     ]);
@@ -52,7 +54,9 @@ describe('budget(U, result) is the law of propagation of uncertainty (GUM, JCGM 
 
   it('budget of h = d·tan α has u²(h) = tan²α·u²(d) + (d/cos²α)²·u²(α) (derived by hand), over every base', () => {
     // d = 85.3 m ± 4 mm, α = 0.4 rad ± 2e-5 rad; tan computed as sin/cos in the arithmetic
-    const hand = Math.sqrt(Math.tan(0.4) ** 2 * 0.004 ** 2 + (85.3 / Math.cos(0.4) ** 2) ** 2 * 2e-5 ** 2);
+    const hand = Math.sqrt(
+      Math.tan(0.4) ** 2 * 0.004 ** 2 + (85.3 / Math.cos(0.4) ** 2) ** 2 * 2e-5 ** 2,
+    );
     for (const U of [F, D, R] as const) {
       const A = U as unknown as typeof F;
       const d = measured(A, '85.3', '0.004', 'd');
@@ -69,10 +73,15 @@ describe('budget(U, result) is the law of propagation of uncertainty (GUM, JCGM 
   it('the contributions add up to the variance exactly over rational', () => {
     fc.assert(
       fc.property(
-        fc.array(fc.tuple(fc.integer({ min: 1, max: 500 }), fc.integer({ min: 0, max: 50 })), { minLength: 1, maxLength: 5 }),
+        fc.array(fc.tuple(fc.integer({ min: 1, max: 500 }), fc.integer({ min: 0, max: 50 })), {
+          minLength: 1,
+          maxLength: 5,
+        }),
         fc.integer({ min: 1, max: 9 }),
         (specs, k) => {
-          const xs = specs.map(([v, s], i) => measured(R, v, r.div(r.from(s), r.from(100)), `x${i}`));
+          const xs = specs.map(([v, s], i) =>
+            measured(R, v, r.div(r.from(s), r.from(100)), `x${i}`),
+          );
           // y = (Σ k·xᵢ²) / (1 + x₀) — non-linear, several inputs
           let num = R.zero;
           for (const x of xs) num = R.add(num, R.mul(R.from(k), R.mul(x, x)));
@@ -90,12 +99,20 @@ describe('budget(U, result) is the law of propagation of uncertainty (GUM, JCGM 
 
   it('budget lists contributions largest first, ties by name', () => {
     const U = F;
-    const y = U.add(U.add(measured(U, 1, 0.5, 'c'), measured(U, 1, 2, 'big')), U.add(measured(U, 1, 0.5, 'a'), measured(U, 1, 1, 'mid')));
+    const y = U.add(
+      U.add(measured(U, 1, 0.5, 'c'), measured(U, 1, 2, 'big')),
+      U.add(measured(U, 1, 0.5, 'a'), measured(U, 1, 1, 'mid')),
+    );
     expect(budget(U, y).contributions.map((c) => c.name)).toEqual(['big', 'mid', 'a', 'c']);
   });
 
   it('budget of a constant is zero, and of x − x lists x with sensitivity 0', () => {
-    expect(budget(F, F.from(3))).toMatchObject({ value: 3, variance: 0, sigma: 0, contributions: [] });
+    expect(budget(F, F.from(3))).toMatchObject({
+      value: 3,
+      variance: 0,
+      sigma: 0,
+      contributions: [],
+    });
     const x = measured(R, 5, 1, 'x');
     const B = budget(R, R.sub(x, x));
     expect(r.isZero(B.variance)).toBe(true);
@@ -108,11 +125,15 @@ describe('budget(U, result) is the law of propagation of uncertainty (GUM, JCGM 
     const s = R.add(a, b);
     const plus = budget(R, s, { covariance: [['a', 'b', '0.03']] });
     expect(plus.sigma.toString()).toBe('2/5');
-    expect(plus.correlations.map((c) => [c.names, r.toString(c.contribution)])).toEqual([[['a', 'b'], '3/50']]);
+    expect(plus.correlations.map((c) => [c.names, r.toString(c.contribution)])).toEqual([
+      [['a', 'b'], '3/50'],
+    ]);
     const minus = budget(R, s, { covariance: [['b', 'a', '-0.03']] });
     expect(minus.sigma.toString()).toBe('1/5');
     // a − b with r = +1: |0.3 − 0.1|
-    expect(budget(R, R.sub(a, b), { covariance: [['a', 'b', '0.03']] }).sigma.toString()).toBe('1/5');
+    expect(budget(R, R.sub(a, b), { covariance: [['a', 'b', '0.03']] }).sigma.toString()).toBe(
+      '1/5',
+    );
   });
 
   it('budget refuses a float result or variance that overflowed, rather than return Infinity or NaN', () => {
@@ -121,7 +142,9 @@ describe('budget(U, result) is the law of propagation of uncertainty (GUM, JCGM 
     // the value 1e200 is finite, the variance (1e200·1e200)² is not
     const w = measured(F, 1, 1e200, 'w');
     expect(F.toNumber(F.mul(w, F.from(1e200)))).toBe(1e200);
-    expect(() => budget(F, F.mul(w, F.from(1e200)))).toThrow(expect.objectContaining({ code: 'NOT_FINITE' }));
+    expect(() => budget(F, F.mul(w, F.from(1e200)))).toThrow(
+      expect.objectContaining({ code: 'NOT_FINITE' }),
+    );
   });
 
   it('budget refuses two different inputs with one name', () => {
@@ -133,28 +156,71 @@ describe('budget(U, result) is the law of propagation of uncertainty (GUM, JCGM 
     const a = measured(R, 1, '0.1', 'a');
     const b = measured(R, 1, '0.2', 'b');
     const y = R.add(a, b);
-    expect(() => budget(R, y, { covariance: [['a', 'z', 0]] })).toThrow(expect.objectContaining({ code: 'UNKNOWN_INPUT' }));
-    expect(() => budget(R, y, { covariance: [['a', 'a', '0.01']] })).toThrow(expect.objectContaining({ code: 'INVALID_COVARIANCE' }));
-    expect(() => budget(R, y, { covariance: [['a', 'b', 0], ['b', 'a', 0]] })).toThrow(expect.objectContaining({ code: 'INVALID_COVARIANCE' }));
-    expect(() => budget(R, y, { covariance: [['a', 'b', '0.0201']] })).toThrow(expect.objectContaining({ code: 'INVALID_COVARIANCE' }));
-    expect(() => budget(R, y, { covariance: [['a', 'b', 'x']] })).toThrow(expect.objectContaining({ code: 'INVALID_COVARIANCE' }));
-    expect(() => budget(R, y, { covariance: 5 as never })).toThrow(expect.objectContaining({ code: 'INVALID_COVARIANCE' }));
+    expect(() => budget(R, y, { covariance: [['a', 'z', 0]] })).toThrow(
+      expect.objectContaining({ code: 'UNKNOWN_INPUT' }),
+    );
+    expect(() => budget(R, y, { covariance: [['a', 'a', '0.01']] })).toThrow(
+      expect.objectContaining({ code: 'INVALID_COVARIANCE' }),
+    );
+    expect(() =>
+      budget(R, y, {
+        covariance: [
+          ['a', 'b', 0],
+          ['b', 'a', 0],
+        ],
+      }),
+    ).toThrow(expect.objectContaining({ code: 'INVALID_COVARIANCE' }));
+    expect(() => budget(R, y, { covariance: [['a', 'b', '0.0201']] })).toThrow(
+      expect.objectContaining({ code: 'INVALID_COVARIANCE' }),
+    );
+    expect(() => budget(R, y, { covariance: [['a', 'b', 'x']] })).toThrow(
+      expect.objectContaining({ code: 'INVALID_COVARIANCE' }),
+    );
+    expect(() => budget(R, y, { covariance: 5 as never })).toThrow(
+      expect.objectContaining({ code: 'INVALID_COVARIANCE' }),
+    );
     expect(() => budget(R, y, { covariance: [['a', 'b', '0.02']] })).not.toThrow();
   });
 
   it('budget refuses covariances that make the variance negative (not positive semi-definite)', () => {
     const x = [0, 1, 2].map((i) => measured(R, 1, 1, `x${i}`));
     const y = R.add(R.add(x[0]!, x[1]!), x[2]!);
-    expect(() => budget(R, y, { covariance: [['x0', 'x1', -1], ['x0', 'x2', -1], ['x1', 'x2', -1]] })).toThrow(expect.objectContaining({ code: 'INVALID_COVARIANCE' }));
+    expect(() =>
+      budget(R, y, {
+        covariance: [
+          ['x0', 'x1', -1],
+          ['x0', 'x2', -1],
+          ['x1', 'x2', -1],
+        ],
+      }),
+    ).toThrow(expect.objectContaining({ code: 'INVALID_COVARIANCE' }));
   });
 
   it('measured refuses negative or unreadable sigmas and empty names', () => {
-    expect(() => measured(F, 1, -0.1, 'x')).toThrow(expect.objectContaining({ code: 'INVALID_SIGMA' }));
-    expect(() => measured(R, 1, 'abc', 'x')).toThrow(expect.objectContaining({ code: 'INVALID_SIGMA' }));
-    expect(() => measured(F, 1, Number.NaN, 'x')).toThrow(expect.objectContaining({ code: 'INVALID_SIGMA' }));
-    expect(() => measured(F, 1, 0.1, '')).toThrow(expect.objectContaining({ code: 'INVALID_ARGUMENT' }));
-    expect(() => measured(F, 'abc', 0.1, 'x')).toThrow(expect.objectContaining({ code: 'INVALID_NUMBER', where: 'measured(U, value, sigma, name) value' }));
-    expect(() => measured(F, Number.NaN, 0.1, 'x')).toThrow(expect.objectContaining({ code: 'INVALID_NUMBER', where: 'measured(U, value, sigma, name) value' }));
+    expect(() => measured(F, 1, -0.1, 'x')).toThrow(
+      expect.objectContaining({ code: 'INVALID_SIGMA' }),
+    );
+    expect(() => measured(R, 1, 'abc', 'x')).toThrow(
+      expect.objectContaining({ code: 'INVALID_SIGMA' }),
+    );
+    expect(() => measured(F, 1, Number.NaN, 'x')).toThrow(
+      expect.objectContaining({ code: 'INVALID_SIGMA' }),
+    );
+    expect(() => measured(F, 1, 0.1, '')).toThrow(
+      expect.objectContaining({ code: 'INVALID_ARGUMENT' }),
+    );
+    expect(() => measured(F, 'abc', 0.1, 'x')).toThrow(
+      expect.objectContaining({
+        code: 'INVALID_NUMBER',
+        where: 'measured(U, value, sigma, name) value',
+      }),
+    );
+    expect(() => measured(F, Number.NaN, 0.1, 'x')).toThrow(
+      expect.objectContaining({
+        code: 'INVALID_NUMBER',
+        where: 'measured(U, value, sigma, name) value',
+      }),
+    );
   });
 
   it('the uncertainty functions refuse a plain arithmetic in place of U with INVALID_ARGUMENT naming the function', () => {
@@ -167,7 +233,8 @@ describe('budget(U, result) is the law of propagation of uncertainty (GUM, JCGM 
       ['spreadOfAngle(U, degrees)', () => spreadOfAngle(plain, 10)],
       ['normalInputs(U, result)', () => normalInputs(plain, F.from(1))],
     ];
-    for (const [where, f] of cases) expect(f).toThrow(expect.objectContaining({ code: 'INVALID_ARGUMENT', where }));
+    for (const [where, f] of cases)
+      expect(f).toThrow(expect.objectContaining({ code: 'INVALID_ARGUMENT', where }));
   });
 
   it('sensitivities lists each input with ∂y/∂x', () => {
@@ -183,20 +250,28 @@ describe('budget(U, result) is the law of propagation of uncertainty (GUM, JCGM 
 describe('sigma.toNumber() over rational is √variance correctly rounded, however long the surd', () => {
   it('sqrtRatioToNumber(n, 1) equals Math.sqrt(n) for integers below 2^53 (IEEE 754 sqrt is correctly rounded)', () => {
     fc.assert(
-      fc.property(fc.bigInt({ min: 0n, max: 2n ** 53n - 1n }), fc.integer({ min: 0, max: 60 }), (n, j) => {
-        expect(sqrtRatioToNumber(n, 1n)).toBe(Math.sqrt(Number(n)));
-        // n/4^j: the root is Math.sqrt(n)/2^j exactly
-        expect(sqrtRatioToNumber(n, 4n ** BigInt(j))).toBe(Math.sqrt(Number(n)) / 2 ** j);
-      }),
+      fc.property(
+        fc.bigInt({ min: 0n, max: 2n ** 53n - 1n }),
+        fc.integer({ min: 0, max: 60 }),
+        (n, j) => {
+          expect(sqrtRatioToNumber(n, 1n)).toBe(Math.sqrt(Number(n)));
+          // n/4^j: the root is Math.sqrt(n)/2^j exactly
+          expect(sqrtRatioToNumber(n, 4n ** BigInt(j))).toBe(Math.sqrt(Number(n)) / 2 ** j);
+        },
+      ),
       { numRuns: 300 },
     );
   });
 
   it('sqrtRatioToNumber(n, d) agrees with mathjs BigNumber (80 digits) on ratios of huge integers', () => {
     fc.assert(
-      fc.property(fc.bigInt({ min: 1n, max: 10n ** 400n }), fc.bigInt({ min: 1n, max: 10n ** 400n }), (n, d) => {
-        expect(sqrtRatioToNumber(n, d)).toBe(refSqrt(n, d));
-      }),
+      fc.property(
+        fc.bigInt({ min: 1n, max: 10n ** 400n }),
+        fc.bigInt({ min: 1n, max: 10n ** 400n }),
+        (n, d) => {
+          expect(sqrtRatioToNumber(n, d)).toBe(refSqrt(n, d));
+        },
+      ),
       { numRuns: 200 },
     );
   });
@@ -204,7 +279,8 @@ describe('sigma.toNumber() over rational is √variance correctly rounded, howev
   it('budget(uncertain(rational), …).sigma.toNumber() works when the radicand is beyond JS numbers', () => {
     // four spreads of angles read in degrees: the exact variance has denominators of hundreds of digits
     let y = measured(R, '123.456', '0.002', 'd');
-    for (let i = 0; i < 4; i++) y = R.mul(y, spreadFromDegrees(R, measured(R, `3${i}.123457`, '0.0003', `a${i}`)));
+    for (let i = 0; i < 4; i++)
+      y = R.mul(y, spreadFromDegrees(R, measured(R, `3${i}.123457`, '0.0003', `a${i}`)));
     const B = budget(R, y);
     const v = B.variance;
     expect(() => r.toNumber(B.sigma.d)).toThrow(expect.objectContaining({ code: 'NOT_FINITE' }));

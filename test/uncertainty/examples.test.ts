@@ -13,7 +13,11 @@ function toChecks(code: string): string {
     const m = /^\s*\/\/=> (.*)$/.exec(line);
     if (m) {
       let i = out.length - 1;
-      while (i >= 0 && ((out[i] as string).trim() === '' || (out[i] as string).trim().startsWith('//'))) i--;
+      while (
+        i >= 0 &&
+        ((out[i] as string).trim() === '' || (out[i] as string).trim().startsWith('//'))
+      )
+        i--;
       const stmt = (out[i] as string).replace(/;\s*(\/\/.*)?$/, '');
       const indent = /^\s*/.exec(stmt)?.[0] ?? '';
       out[i] = `${indent}__check(${stmt.trim()}, ${m[1]});`;

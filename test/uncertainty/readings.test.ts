@@ -47,11 +47,18 @@ describe('uncertain readings carry sigmas from reading units through the convers
 
   it('measuredQuadrance has u(Q) = 2d·u(d) (derived)', () => {
     fc.assert(
-      fc.property(fc.integer({ min: 1, max: 100000 }), fc.integer({ min: 0, max: 50 }), (cm, mm) => {
-        const Q = measuredQuadrance(R, r.div(r.from(cm), r.from(100)), mm, 'd');
-        const expected = r.mul(r.mul(r.from(2), r.div(r.from(cm), r.from(100))), r.div(r.from(mm), r.from(1000)));
-        expect(budget(R, Q).sigma.eq(expected)).toBe(true);
-      }),
+      fc.property(
+        fc.integer({ min: 1, max: 100000 }),
+        fc.integer({ min: 0, max: 50 }),
+        (cm, mm) => {
+          const Q = measuredQuadrance(R, r.div(r.from(cm), r.from(100)), mm, 'd');
+          const expected = r.mul(
+            r.mul(r.from(2), r.div(r.from(cm), r.from(100))),
+            r.div(r.from(mm), r.from(1000)),
+          );
+          expect(budget(R, Q).sigma.eq(expected)).toBe(true);
+        },
+      ),
       { numRuns: 100 },
     );
   });
@@ -67,7 +74,10 @@ describe('uncertain readings carry sigmas from reading units through the convers
         expect(Math.abs(s.value - Math.sin(t) ** 2)).toBeLessThan(tol);
         expect(Math.abs(d - (Math.sin(2 * t) * Math.PI) / 180)).toBeLessThan(tol);
         const h = 1e-5;
-        const fd = (Math.sin(((deg + h) * Math.PI) / 180) ** 2 - Math.sin(((deg - h) * Math.PI) / 180) ** 2) / (2 * h);
+        const fd =
+          (Math.sin(((deg + h) * Math.PI) / 180) ** 2 -
+            Math.sin(((deg - h) * Math.PI) / 180) ** 2) /
+          (2 * h);
         expect(Math.abs(d - fd)).toBeLessThan(1e-9);
       }),
       { numRuns: 300 },
@@ -75,7 +85,11 @@ describe('uncertain readings carry sigmas from reading units through the convers
   });
 
   it('spreadOfAngle keeps the gradient at the exact angles 30°, 45°, 60° (where the readings give exact spreads)', () => {
-    for (const [deg, s] of [[30, '1/4'], [45, '1/2'], [60, '3/4']] as const) {
+    for (const [deg, s] of [
+      [30, '1/4'],
+      [45, '1/2'],
+      [60, '3/4'],
+    ] as const) {
       const v = measuredSpread(R, deg, 1, 't');
       expect(r.toString(v.value)).toBe(s);
       const expected = (Math.sin((2 * deg * Math.PI) / 180) * Math.PI) / 180;
@@ -85,13 +99,20 @@ describe('uncertain readings carry sigmas from reading units through the convers
 
   it('spreadOfAngle agrees with spreadFromDegrees run in uncertain(float) away from the exact angles', () => {
     fc.assert(
-      fc.property(fc.double({ min: 0.5, max: 89.5, noNaN: true }).filter((x) => Math.abs(x - 30) > 0.1 && Math.abs(x - 45) > 0.1 && Math.abs(x - 60) > 0.1), (deg) => {
-        const x = measured(F, deg, 1, 't');
-        const generic = spreadFromDegrees(F, x);
-        const mine = spreadOfAngle(F, x);
-        expect(Math.abs(generic.value - mine.value)).toBeLessThan(1e-15);
-        expect(Math.abs((grad(generic, 't') ?? 0) - (grad(mine, 't') ?? 0))).toBeLessThan(1e-15);
-      }),
+      fc.property(
+        fc
+          .double({ min: 0.5, max: 89.5, noNaN: true })
+          .filter(
+            (x) => Math.abs(x - 30) > 0.1 && Math.abs(x - 45) > 0.1 && Math.abs(x - 60) > 0.1,
+          ),
+        (deg) => {
+          const x = measured(F, deg, 1, 't');
+          const generic = spreadFromDegrees(F, x);
+          const mine = spreadOfAngle(F, x);
+          expect(Math.abs(generic.value - mine.value)).toBeLessThan(1e-15);
+          expect(Math.abs((grad(generic, 't') ?? 0) - (grad(mine, 't') ?? 0))).toBeLessThan(1e-15);
+        },
+      ),
       { numRuns: 100 },
     );
   });
@@ -103,7 +124,10 @@ describe('uncertain readings carry sigmas from reading units through the convers
     expect(budget(R, s).sigma.toString()).toBe('2/10201');
     // against a central difference in float
     const sf = measuredGrade(F, 7.5, 0.1, 'g');
-    const fd = ((7.5 + 1e-5) ** 2 / (1e4 + (7.5 + 1e-5) ** 2) - (7.5 - 1e-5) ** 2 / (1e4 + (7.5 - 1e-5) ** 2)) / 2e-5;
+    const fd =
+      ((7.5 + 1e-5) ** 2 / (1e4 + (7.5 + 1e-5) ** 2) -
+        (7.5 - 1e-5) ** 2 / (1e4 + (7.5 - 1e-5) ** 2)) /
+      2e-5;
     expect(Math.abs((grad(sf, 'g') ?? 0) - fd)).toBeLessThan(1e-10);
   });
 
@@ -126,16 +150,36 @@ describe('uncertain readings carry sigmas from reading units through the convers
 
   it('withDerivative names the argument it cannot read', () => {
     const x = measured(F, 1, 0.1, 'a');
-    expect(() => withDerivative(F, x, 'e', 1)).toThrow(expect.objectContaining({ code: 'INVALID_NUMBER', where: 'withDerivative(U, x, value, derivative) value' }));
-    expect(() => withDerivative(F, x, 1, Number.NaN)).toThrow(expect.objectContaining({ code: 'INVALID_NUMBER', where: 'withDerivative(U, x, value, derivative) derivative' }));
+    expect(() => withDerivative(F, x, 'e', 1)).toThrow(
+      expect.objectContaining({
+        code: 'INVALID_NUMBER',
+        where: 'withDerivative(U, x, value, derivative) value',
+      }),
+    );
+    expect(() => withDerivative(F, x, 1, Number.NaN)).toThrow(
+      expect.objectContaining({
+        code: 'INVALID_NUMBER',
+        where: 'withDerivative(U, x, value, derivative) derivative',
+      }),
+    );
   });
 
   it('the reading helpers refuse negative sigmas and bad names', () => {
-    expect(() => measuredAngle(F, 10, -1, 'a')).toThrow(expect.objectContaining({ code: 'INVALID_SIGMA' }));
-    expect(() => measuredDistance(F, 10, -1, 'a')).toThrow(expect.objectContaining({ code: 'INVALID_SIGMA' }));
-    expect(() => measuredGrade(F, 10, -1, 'a')).toThrow(expect.objectContaining({ code: 'INVALID_SIGMA' }));
-    expect(() => measuredAngle(F, 10, 1, '')).toThrow(expect.objectContaining({ code: 'INVALID_ARGUMENT' }));
-    expect(() => measuredVertical(F, 95, 1, 'a')).toThrow(expect.objectContaining({ code: 'INVALID_ANGLE' }));
+    expect(() => measuredAngle(F, 10, -1, 'a')).toThrow(
+      expect.objectContaining({ code: 'INVALID_SIGMA' }),
+    );
+    expect(() => measuredDistance(F, 10, -1, 'a')).toThrow(
+      expect.objectContaining({ code: 'INVALID_SIGMA' }),
+    );
+    expect(() => measuredGrade(F, 10, -1, 'a')).toThrow(
+      expect.objectContaining({ code: 'INVALID_SIGMA' }),
+    );
+    expect(() => measuredAngle(F, 10, 1, '')).toThrow(
+      expect.objectContaining({ code: 'INVALID_ARGUMENT' }),
+    );
+    expect(() => measuredVertical(F, 95, 1, 'a')).toThrow(
+      expect.objectContaining({ code: 'INVALID_ANGLE' }),
+    );
   });
 });
 
@@ -146,7 +190,9 @@ describe('acceptance: the height of a point from a horizontal distance d and an 
   const alphaDeg = 12.5; // 12°30′
   const uaSec = 5;
   const t = (alphaDeg * Math.PI) / 180;
-  const hand = Math.sqrt(Math.tan(t) ** 2 * ud ** 2 + ((d / Math.cos(t) ** 2) * uaSec * ARCSEC) ** 2);
+  const hand = Math.sqrt(
+    Math.tan(t) ** 2 * ud ** 2 + ((d / Math.cos(t) ** 2) * uaSec * ARCSEC) ** 2,
+  );
 
   it('budget(U, h).sigma over float equals the hand propagation to 1e-12 relative', () => {
     const Q = measuredQuadrance(F, d, 5, 'd');
@@ -162,7 +208,10 @@ describe('acceptance: the height of a point from a horizontal distance d and an 
     const n = 100000;
     const mc = monteCarlo(
       (x) => x.d * Math.tan((x.alpha * Math.PI) / 180),
-      { d: { distribution: 'normal', mean: d, sigma: ud }, alpha: { distribution: 'normal', mean: alphaDeg, sigma: uaSec / 3600 } },
+      {
+        d: { distribution: 'normal', mean: d, sigma: ud },
+        alpha: { distribution: 'normal', mean: alphaDeg, sigma: uaSec / 3600 },
+      },
       { n, seed: 20260101 },
     );
     expect(Math.abs(mc.sigma - hand)).toBeLessThan((5 * hand) / Math.sqrt(2 * n));
@@ -181,7 +230,10 @@ describe('acceptance: the height of a point from a horizontal distance d and an 
     const dHdd = r.div(r.mul(r.from(2 * d), Rv), one);
     const dHda = r.div(r.mul(r.from(d * d), Rp), r.mul(one, one));
     const ua = r.div(r.from(uaSec), r.from(3600));
-    const expected = r.add(r.mul(r.mul(dHdd, dHdd), r.from('0.000025')), r.mul(r.mul(dHda, dHda), r.mul(ua, ua)));
+    const expected = r.add(
+      r.mul(r.mul(dHdd, dHdd), r.from('0.000025')),
+      r.mul(r.mul(dHda, dHda), r.mul(ua, ua)),
+    );
     expect(r.eq(B.variance, expected)).toBe(true);
     // and its value matches the float hand propagation: u(H) = 2h·u(h)
     expect(Math.sqrt(r.toNumber(B.variance)) / (2 * d * Math.tan(t) * hand)).toBeCloseTo(1, 12);
@@ -194,7 +246,10 @@ describe('acceptance: the height of a point from a horizontal distance d and an 
     const tan = M.tan(tt as never);
     const sec2 = M.divide(bn(1), M.pow(M.cos(tt as never), 2));
     const uar = M.divide(M.multiply(bn(5), M.pi), bn(648000));
-    const u2 = M.add(M.multiply(M.pow(tan, 2), bn('0.000025')), M.pow(M.multiply(M.multiply(bn(150), sec2), uar), 2));
+    const u2 = M.add(
+      M.multiply(M.pow(tan, 2), bn('0.000025')),
+      M.pow(M.multiply(M.multiply(bn(150), sec2), uar), 2),
+    );
     const want = M.sqrt(u2 as never);
     const Q = measuredQuadrance(D, d, 5, 'd');
     const v = measuredVertical(D, '12.5', uaSec, 'alpha');

@@ -7,7 +7,14 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
 import type { Arithmetic } from '../../src/arithmetic/types.js';
-import { quadrance, spread, cross, quadrea, triangle, solveTriangle } from '../../src/geometry/index.js';
+import {
+  quadrance,
+  spread,
+  cross,
+  quadrea,
+  triangle,
+  solveTriangle,
+} from '../../src/geometry/index.js';
 import { rational, float } from '../../src/arithmetic/index.js';
 import { heightFromReading } from '../../src/elevation/height.js';
 import { area } from '../../src/cogo/area.js';
@@ -17,27 +24,37 @@ const u = 2 ** -53;
 const SLACK = 1 + 1e-6; // room for the second-order terms the bounds leave out
 
 const mm = (x: number) => x.toFixed(3); // a coordinate reading to the millimetre, as text
-const pt = <T,>(A: Arithmetic<T>, p: readonly [string, string]) => ({ x: A.from(p[0]), y: A.from(p[1]) });
+const pt = <T>(A: Arithmetic<T>, p: readonly [string, string]) => ({
+  x: A.from(p[0]),
+  y: A.from(p[1]),
+});
 
 /** Far-away points with small differences: a base up to 10⁷ m, offsets 1 mm to 100 m. */
-const far = fc.record({
-  X: fc.integer({ min: 0, max: 10_000_000 }),
-  Y: fc.integer({ min: 0, max: 10_000_000 }),
-  dx: fc.integer({ min: -100_000, max: 100_000 }),
-  dy: fc.integer({ min: -100_000, max: 100_000 }),
-}).filter((r) => r.dx !== 0 || r.dy !== 0);
+const far = fc
+  .record({
+    X: fc.integer({ min: 0, max: 10_000_000 }),
+    Y: fc.integer({ min: 0, max: 10_000_000 }),
+    dx: fc.integer({ min: -100_000, max: 100_000 }),
+    dy: fc.integer({ min: -100_000, max: 100_000 }),
+  })
+  .filter((r) => r.dx !== 0 || r.dy !== 0);
 
 describe('round-off of quadrance(float) far from the origin', () => {
   it('quadrance of points at up to 10⁷ m with differences D ≥ 1 mm has relative error ≤ 3u(2M/D + 2)', () => {
     fc.assert(
-      fc.property(far, fc.integer({ min: 0, max: 999 }), fc.integer({ min: 0, max: 999 }), ({ X, Y, dx, dy }, fx, fy) => {
-        const P = [mm(X + fx / 1000), mm(Y + fy / 1000)] as const;
-        const Q = [mm(X + fx / 1000 + dx / 1000), mm(Y + fy / 1000 + dy / 1000)] as const;
-        const r = roundOff((A) => quadrance(A, pt(A, P), pt(A, Q)));
-        const M = Math.max(...[...P, ...Q].map((t) => Math.abs(Number(t))));
-        const D = Math.hypot(dx, dy) / 1000;
-        expect(r.relative!).toBeLessThanOrEqual(3 * u * (2 * M / D + 2) * SLACK);
-      }),
+      fc.property(
+        far,
+        fc.integer({ min: 0, max: 999 }),
+        fc.integer({ min: 0, max: 999 }),
+        ({ X, Y, dx, dy }, fx, fy) => {
+          const P = [mm(X + fx / 1000), mm(Y + fy / 1000)] as const;
+          const Q = [mm(X + fx / 1000 + dx / 1000), mm(Y + fy / 1000 + dy / 1000)] as const;
+          const r = roundOff((A) => quadrance(A, pt(A, P), pt(A, Q)));
+          const M = Math.max(...[...P, ...Q].map((t) => Math.abs(Number(t))));
+          const D = Math.hypot(dx, dy) / 1000;
+          expect(r.relative!).toBeLessThanOrEqual(3 * u * ((2 * M) / D + 2) * SLACK);
+        },
+      ),
       { numRuns: 300 },
     );
   });
@@ -45,7 +62,9 @@ describe('round-off of quadrance(float) far from the origin', () => {
   it('the same quadrance from coordinates reduced to a local origin (exactly, in the text) has relative error ≤ 6u', () => {
     fc.assert(
       fc.property(far, ({ dx, dy }) => {
-        const r = roundOff((A) => quadrance(A, pt(A, ['0.000', '0.000']), pt(A, [mm(dx / 1000), mm(dy / 1000)])));
+        const r = roundOff((A) =>
+          quadrance(A, pt(A, ['0.000', '0.000']), pt(A, [mm(dx / 1000), mm(dy / 1000)])),
+        );
         expect(r.relative!).toBeLessThanOrEqual(6 * u);
       }),
       { numRuns: 200 },
@@ -54,7 +73,12 @@ describe('round-off of quadrance(float) far from the origin', () => {
 });
 
 /** The first-order bound on the relative error of spread() or cross() (docs/uncertainty.md). */
-function spreadBound(V: readonly string[], P: readonly string[], Q: readonly string[], kind: 'spread' | 'cross'): number {
+function spreadBound(
+  V: readonly string[],
+  P: readonly string[],
+  Q: readonly string[],
+  kind: 'spread' | 'cross',
+): number {
   const n = (t: string) => Number(t);
   const ux = n(P[0]!) - n(V[0]!);
   const uy = n(P[1]!) - n(V[1]!);
@@ -64,37 +88,45 @@ function spreadBound(V: readonly string[], P: readonly string[], Q: readonly str
   const Delta = Math.max(Math.abs(ux), Math.abs(uy), Math.abs(vx), Math.abs(vy));
   const e = u * (2 * M + Delta); // error of one coordinate difference
   const top = kind === 'spread' ? ux * vy - uy * vx : ux * vx + uy * vy;
-  const terms = kind === 'spread' ? Math.abs(ux * vy) + Math.abs(uy * vx) : Math.abs(ux * vx) + Math.abs(uy * vy);
+  const terms =
+    kind === 'spread'
+      ? Math.abs(ux * vy) + Math.abs(uy * vx)
+      : Math.abs(ux * vx) + Math.abs(uy * vy);
   const dTop = e * (Math.abs(ux) + Math.abs(uy) + Math.abs(vx) + Math.abs(vy)) + 2 * u * terms;
   const qu = ux * ux + uy * uy;
   const qv = vx * vx + vy * vy;
-  const relQ = (a: number, b: number, q: number) => (2 * e * (Math.abs(a) + Math.abs(b))) / q + 2 * u;
+  const relQ = (a: number, b: number, q: number) =>
+    (2 * e * (Math.abs(a) + Math.abs(b))) / q + 2 * u;
   return (2 * dTop) / Math.abs(top) + relQ(ux, uy, qu) + relQ(vx, vy, qv) + 3 * u;
 }
 
 /** Nearly collinear (small angle θ at V) or nearly perpendicular (θ near 90°) sights, far away. */
 const sights = (near: 0 | 90) =>
-  fc.record({
-    X: fc.integer({ min: 0, max: 1_000_000 }),
-    Y: fc.integer({ min: 0, max: 10_000_000 }),
-    L1: fc.integer({ min: 10, max: 5000 }),
-    L2: fc.integer({ min: 10, max: 5000 }),
-    phi: fc.double({ min: 0, max: 2 * Math.PI, noNaN: true }),
-    k: fc.integer({ min: 1, max: 6 }),
-    m: fc.integer({ min: 1, max: 9 }),
-  }).map(({ X, Y, L1, L2, phi, k, m }) => {
-    const theta = (near === 0 ? 0 : Math.PI / 2) + m * 10 ** -k; // 1e-6 … 0.9 rad from the limit
-    const V = [mm(X), mm(Y)];
-    const P = [mm(X + L1 * Math.cos(phi)), mm(Y + L1 * Math.sin(phi))];
-    const Q = [mm(X + L2 * Math.cos(phi + theta)), mm(Y + L2 * Math.sin(phi + theta))];
-    return { V, P, Q };
-  });
+  fc
+    .record({
+      X: fc.integer({ min: 0, max: 1_000_000 }),
+      Y: fc.integer({ min: 0, max: 10_000_000 }),
+      L1: fc.integer({ min: 10, max: 5000 }),
+      L2: fc.integer({ min: 10, max: 5000 }),
+      phi: fc.double({ min: 0, max: 2 * Math.PI, noNaN: true }),
+      k: fc.integer({ min: 1, max: 6 }),
+      m: fc.integer({ min: 1, max: 9 }),
+    })
+    .map(({ X, Y, L1, L2, phi, k, m }) => {
+      const theta = (near === 0 ? 0 : Math.PI / 2) + m * 10 ** -k; // 1e-6 … 0.9 rad from the limit
+      const V = [mm(X), mm(Y)];
+      const P = [mm(X + L1 * Math.cos(phi)), mm(Y + L1 * Math.sin(phi))];
+      const Q = [mm(X + L2 * Math.cos(phi + theta)), mm(Y + L2 * Math.sin(phi + theta))];
+      return { V, P, Q };
+    });
 
 describe('round-off of spread(float) and cross(float) near 0 and 1', () => {
   it('spread of nearly collinear far-away sights stays within the first-order bound (grows like 1/θ)', () => {
     fc.assert(
       fc.property(sights(0), ({ V, P, Q }) => {
-        const r = roundOff((A) => spread(A, pt(A, V as never), pt(A, P as never), pt(A, Q as never)));
+        const r = roundOff((A) =>
+          spread(A, pt(A, V as never), pt(A, P as never), pt(A, Q as never)),
+        );
         fc.pre(r.relative !== undefined);
         expect(r.relative!).toBeLessThanOrEqual(spreadBound(V, P, Q, 'spread') * SLACK);
       }),
@@ -105,7 +137,9 @@ describe('round-off of spread(float) and cross(float) near 0 and 1', () => {
   it('cross of nearly perpendicular far-away sights stays within the same bound with the dot product', () => {
     fc.assert(
       fc.property(sights(90), ({ V, P, Q }) => {
-        const r = roundOff((A) => cross(A, pt(A, V as never), pt(A, P as never), pt(A, Q as never)));
+        const r = roundOff((A) =>
+          cross(A, pt(A, V as never), pt(A, P as never), pt(A, Q as never)),
+        );
         fc.pre(r.relative !== undefined);
         expect(r.relative!).toBeLessThanOrEqual(spreadBound(V, P, Q, 'cross') * SLACK);
       }),
@@ -126,11 +160,20 @@ describe('round-off of spread(float) and cross(float) near 0 and 1', () => {
 
 describe('round-off of the quadrea of a needle triangle', () => {
   /** A needle triangle: a long side, a small height h, as coordinates to the millimetre. */
-  const needle = fc.record({
-    L: fc.integer({ min: 10, max: 10000 }),
-    t: fc.integer({ min: 1, max: 999 }),
-    hmm: fc.integer({ min: 1, max: 1000 }),
-  }).map(({ L, t, hmm }) => [['0.000', '0.000'], [mm(L), '0.000'], [mm((L * t) / 1000), mm(hmm / 1000)]] as const);
+  const needle = fc
+    .record({
+      L: fc.integer({ min: 10, max: 10000 }),
+      t: fc.integer({ min: 1, max: 999 }),
+      hmm: fc.integer({ min: 1, max: 1000 }),
+    })
+    .map(
+      ({ L, t, hmm }) =>
+        [
+          ['0.000', '0.000'],
+          [mm(L), '0.000'],
+          [mm((L * t) / 1000), mm(hmm / 1000)],
+        ] as const,
+    );
 
   it('quadrea(Q1, Q2, Q3) (Archimedes) from decimal quadrances stays within u(6S² + 8ΣQ² + |A|) + uΣ|2S − 4Qᵢ|Qᵢ', () => {
     fc.assert(
@@ -148,7 +191,9 @@ describe('round-off of the quadrea of a needle triangle', () => {
         const S = Qn[0]! + Qn[1]! + Qn[2]!;
         const sq = Qn.reduce((s, x) => s + x * x, 0);
         const Aexact = Number(r.exact.valueOf());
-        const bound = u * (6 * S * S + 8 * sq + Math.abs(Aexact)) + u * Qn.reduce((s, x) => s + Math.abs(2 * S - 4 * x) * x, 0);
+        const bound =
+          u * (6 * S * S + 8 * sq + Math.abs(Aexact)) +
+          u * Qn.reduce((s, x) => s + Math.abs(2 * S - 4 * x) * x, 0);
         expect(r.absolute).toBeLessThanOrEqual(bound * SLACK);
       }),
       { numRuns: 300 },
@@ -158,8 +203,14 @@ describe('round-off of the quadrea of a needle triangle', () => {
   it('triangle(A, …).quadrea from the coordinates is far more accurate on needles than Archimedes from quadrances', () => {
     // A 10 km side, 1 to 4 mm off line: the quadrea from quadrances cancels about 16 digits
     // and here even comes out negative (−4 against the exact 0.8155…).
-    const pts = [['0', '0'], ['10000.017', '0.004'], ['3137.123', '0.0013']] as const;
-    const fromXY = roundOff((A) => triangle(A, pt(A, pts[0]), pt(A, pts[1]), pt(A, pts[2])).quadrea);
+    const pts = [
+      ['0', '0'],
+      ['10000.017', '0.004'],
+      ['3137.123', '0.0013'],
+    ] as const;
+    const fromXY = roundOff(
+      (A) => triangle(A, pt(A, pts[0]), pt(A, pts[1]), pt(A, pts[2])).quadrea,
+    );
     const fromQ = roundOff((A) => {
       const t = triangle(A, pt(A, pts[0]), pt(A, pts[1]), pt(A, pts[2]));
       return quadrea(A, t.Q1, t.Q2, t.Q3);
@@ -172,9 +223,17 @@ describe('round-off of the quadrea of a needle triangle', () => {
 
 describe('round-off of solveTriangle(float) from three quadrances of a needle', () => {
   it('solveTriangle finds the needle in rational but may find no triangle in float: the quadrea rounds to ≤ 0', () => {
-    const pts = [['0', '0'], ['10000.017', '0.004'], ['3137.123', '0.0013']] as const;
+    const pts = [
+      ['0', '0'],
+      ['10000.017', '0.004'],
+      ['3137.123', '0.0013'],
+    ] as const;
     const t = triangle(rational, pt(rational, pts[0]), pt(rational, pts[1]), pt(rational, pts[2]));
-    const Q = { Q1: rational.toString(t.Q1), Q2: rational.toString(t.Q2), Q3: rational.toString(t.Q3) };
+    const Q = {
+      Q1: rational.toString(t.Q1),
+      Q2: rational.toString(t.Q2),
+      Q3: rational.toString(t.Q3),
+    };
     const exact = solveTriangle(rational, Q);
     expect(exact.length).toBe(1);
     expect(exact[0]!.quadrea.eq(t.quadrea)).toBe(true);
@@ -187,13 +246,18 @@ describe('round-off of solveTriangle(float) from three quadrances of a needle', 
 describe('round-off of heightFromReading(float) for steep sights (R near 1)', () => {
   it('H = Q·R/(1 − R) from decimal Q and R has relative error ≤ u(6 + R/(1 − R))', () => {
     fc.assert(
-      fc.property(fc.integer({ min: 1, max: 100000 }), fc.integer({ min: 1, max: 14 }), fc.integer({ min: 1, max: 9 }), (qcm, k, m) => {
-        const Q = (qcm / 100).toFixed(2);
-        const R = (1 - m * 10 ** -k).toFixed(k + 1); // 0.9…, text
-        const r = roundOff((A) => heightFromReading(A, { horizontal: Q, vertical: R }));
-        const Rn = Number(R);
-        expect(r.relative!).toBeLessThanOrEqual(u * (6 + Rn / (1 - Rn)) * SLACK);
-      }),
+      fc.property(
+        fc.integer({ min: 1, max: 100000 }),
+        fc.integer({ min: 1, max: 14 }),
+        fc.integer({ min: 1, max: 9 }),
+        (qcm, k, m) => {
+          const Q = (qcm / 100).toFixed(2);
+          const R = (1 - m * 10 ** -k).toFixed(k + 1); // 0.9…, text
+          const r = roundOff((A) => heightFromReading(A, { horizontal: Q, vertical: R }));
+          const Rn = Number(R);
+          expect(r.relative!).toBeLessThanOrEqual(u * (6 + Rn / (1 - Rn)) * SLACK);
+        },
+      ),
       { numRuns: 300 },
     );
   });
@@ -205,10 +269,21 @@ describe('round-off of area(float) (shoelace about the first vertex) far from th
       fc.property(
         fc.integer({ min: 0, max: 10_000_000 }),
         fc.integer({ min: 0, max: 10_000_000 }),
-        fc.array(fc.tuple(fc.integer({ min: -500_000, max: 500_000 }), fc.integer({ min: -500_000, max: 500_000 })), { minLength: 3, maxLength: 12 }),
+        fc.array(
+          fc.tuple(
+            fc.integer({ min: -500_000, max: 500_000 }),
+            fc.integer({ min: -500_000, max: 500_000 }),
+          ),
+          { minLength: 3, maxLength: 12 },
+        ),
         (X, Y, offs) => {
           const pts = offs.map(([dx, dy]) => [mm(X + dx / 1000), mm(Y + dy / 1000)] as const);
-          const r = roundOff((A) => area(A, pts.map((p) => pt(A, p))));
+          const r = roundOff((A) =>
+            area(
+              A,
+              pts.map((p) => pt(A, p)),
+            ),
+          );
           const n = (t: string) => Number(t);
           const M = Math.max(...pts.flat().map((t) => Math.abs(n(t))));
           const d = pts.map((p) => [n(p[0]) - n(pts[0]![0]), n(p[1]) - n(pts[0]![1])] as const);

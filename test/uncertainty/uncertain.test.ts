@@ -28,7 +28,8 @@ describe('uncertain(base) is an arithmetic over values with gradients', () => {
   });
 
   it('uncertain(base).from gives constants with empty gradients', () => {
-    for (const x of [R.from(3), R.from('1/3'), R.from(2n), R.zero, R.one, R.pi]) expect(x.gradient.size).toBe(0);
+    for (const x of [R.from(3), R.from('1/3'), R.from(2n), R.zero, R.one, R.pi])
+      expect(x.gradient.size).toBe(0);
     expect(rational.toString(R.from('0.1').value)).toBe('1/10');
     expect(F.from(0.5).value).toBe(0.5);
   });
@@ -40,8 +41,15 @@ describe('uncertain(base) is an arithmetic over values with gradients', () => {
     // an overflowed float value is named as such, not as another arithmetic's
     const big = F.mul(F.from(1e200), F.from(1e200));
     expect(() => F.from(big)).toThrow(expect.objectContaining({ code: 'NOT_FINITE' }));
-    expect(() => F.make(1, 5 as never)).toThrow(expect.objectContaining({ code: 'INVALID_ARGUMENT', where: 'uncertain(float).make(value, gradient)' }));
-    expect(() => R.make(1, [] as never)).toThrow(expect.objectContaining({ code: 'INVALID_ARGUMENT' }));
+    expect(() => F.make(1, 5 as never)).toThrow(
+      expect.objectContaining({
+        code: 'INVALID_ARGUMENT',
+        where: 'uncertain(float).make(value, gradient)',
+      }),
+    );
+    expect(() => R.make(1, [] as never)).toThrow(
+      expect.objectContaining({ code: 'INVALID_ARGUMENT' }),
+    );
   });
 
   it('uncertain(base).is accepts its own values only', () => {
@@ -63,78 +71,122 @@ describe('uncertain(base) is an arithmetic over values with gradients', () => {
 
   it('the derivatives of + − × ÷ of a rational function are exact over rational (hand-derived)', () => {
     fc.assert(
-      fc.property(fc.integer({ min: -50, max: 50 }), fc.integer({ min: 1, max: 20 }), fc.integer({ min: -50, max: 50 }), fc.integer({ min: 1, max: 20 }), (xn, xd, yn, yd) => {
-        const xv = rational.div(rational.from(xn), rational.from(xd));
-        const yv = rational.div(rational.from(yn), rational.from(yd));
-        const x = measured(R, xv, 1, 'x');
-        const y = measured(R, yv, 1, 'y');
-        // f = (x·y + x)/(y² + 1)
-        const f = R.div(R.add(R.mul(x, y), x), R.add(R.mul(y, y), R.one));
-        const den = rational.add(rational.mul(yv, yv), rational.one);
-        // ∂f/∂x = (y + 1)/(y² + 1); ∂f/∂y = (x(y² + 1) − 2y(xy + x))/(y² + 1)² (derived by hand)
-        const dx = rational.div(rational.add(yv, rational.one), den);
-        const num = rational.sub(rational.mul(xv, den), rational.mul(rational.mul(rational.from(2), yv), rational.add(rational.mul(xv, yv), xv)));
-        const dy = rational.div(num, rational.mul(den, den));
-        expect(rational.eq(grad(f, 'x')!, dx)).toBe(true);
-        expect(rational.eq(grad(f, 'y')!, dy)).toBe(true);
-      }),
+      fc.property(
+        fc.integer({ min: -50, max: 50 }),
+        fc.integer({ min: 1, max: 20 }),
+        fc.integer({ min: -50, max: 50 }),
+        fc.integer({ min: 1, max: 20 }),
+        (xn, xd, yn, yd) => {
+          const xv = rational.div(rational.from(xn), rational.from(xd));
+          const yv = rational.div(rational.from(yn), rational.from(yd));
+          const x = measured(R, xv, 1, 'x');
+          const y = measured(R, yv, 1, 'y');
+          // f = (x·y + x)/(y² + 1)
+          const f = R.div(R.add(R.mul(x, y), x), R.add(R.mul(y, y), R.one));
+          const den = rational.add(rational.mul(yv, yv), rational.one);
+          // ∂f/∂x = (y + 1)/(y² + 1); ∂f/∂y = (x(y² + 1) − 2y(xy + x))/(y² + 1)² (derived by hand)
+          const dx = rational.div(rational.add(yv, rational.one), den);
+          const num = rational.sub(
+            rational.mul(xv, den),
+            rational.mul(
+              rational.mul(rational.from(2), yv),
+              rational.add(rational.mul(xv, yv), xv),
+            ),
+          );
+          const dy = rational.div(num, rational.mul(den, den));
+          expect(rational.eq(grad(f, 'x')!, dx)).toBe(true);
+          expect(rational.eq(grad(f, 'y')!, dy)).toBe(true);
+        },
+      ),
       { numRuns: 200 },
     );
   });
 
   it('the gradient of a composition equals the chain rule product (rational, exact)', () => {
     // Stages g(x) with their derivatives g′(x), derived by hand.
-    type Stage = { f: (A: typeof R, x: Uncertain<ReturnType<typeof q>>) => Uncertain<ReturnType<typeof q>>; d: (x: ReturnType<typeof q>) => ReturnType<typeof q> };
+    type Stage = {
+      f: (A: typeof R, x: Uncertain<ReturnType<typeof q>>) => Uncertain<ReturnType<typeof q>>;
+      d: (x: ReturnType<typeof q>) => ReturnType<typeof q>;
+    };
     const r = rational;
     const stages: Stage[] = [
       { f: (A, x) => A.add(A.mul(x, x), A.one), d: (x) => r.mul(r.from(2), x) }, // x² + 1
-      { f: (A, x) => A.div(A.one, A.add(A.mul(x, x), A.one)), d: (x) => r.neg(r.div(r.mul(r.from(2), x), r.mul(r.add(r.mul(x, x), r.one), r.add(r.mul(x, x), r.one)))) }, // 1/(x² + 1)
+      {
+        f: (A, x) => A.div(A.one, A.add(A.mul(x, x), A.one)),
+        d: (x) =>
+          r.neg(
+            r.div(r.mul(r.from(2), x), r.mul(r.add(r.mul(x, x), r.one), r.add(r.mul(x, x), r.one))),
+          ),
+      }, // 1/(x² + 1)
       { f: (A, x) => A.sub(A.mul(A.from(3), x), A.from(2)), d: () => r.from(3) }, // 3x − 2
       { f: (A, x) => A.neg(A.mul(x, A.mul(x, x))), d: (x) => r.neg(r.mul(r.from(3), r.mul(x, x))) }, // −x³
     ];
     fc.assert(
-      fc.property(fc.array(fc.integer({ min: 0, max: stages.length - 1 }), { minLength: 1, maxLength: 4 }), fc.integer({ min: -9, max: 9 }), fc.integer({ min: 1, max: 7 }), (chain, n, d) => {
-        const x0 = r.div(r.from(n), r.from(d));
-        let u = measured(R, x0, 1, 'x');
-        let plain = x0;
-        let product = r.one;
-        for (const k of chain) {
-          const s = stages[k]!;
-          product = r.mul(product, s.d(plain));
-          u = s.f(R, u);
-          plain = u.value;
-        }
-        expect(r.eq(grad(u, 'x') ?? r.zero, product)).toBe(true);
-      }),
+      fc.property(
+        fc.array(fc.integer({ min: 0, max: stages.length - 1 }), { minLength: 1, maxLength: 4 }),
+        fc.integer({ min: -9, max: 9 }),
+        fc.integer({ min: 1, max: 7 }),
+        (chain, n, d) => {
+          const x0 = r.div(r.from(n), r.from(d));
+          let u = measured(R, x0, 1, 'x');
+          let plain = x0;
+          let product = r.one;
+          for (const k of chain) {
+            const s = stages[k]!;
+            product = r.mul(product, s.d(plain));
+            u = s.f(R, u);
+            plain = u.value;
+          }
+          expect(r.eq(grad(u, 'x') ?? r.zero, product)).toBe(true);
+        },
+      ),
       { numRuns: 200 },
     );
   });
 
   it('the gradient of a composition of sin, cos, sqrt, atan2 matches the chain rule with Math derivatives (float, 1e-12 relative)', () => {
-    const stages: { f: (x: Uncertain<number>) => Uncertain<number>; v: (x: number) => number; d: (x: number) => number }[] = [
+    const stages: {
+      f: (x: Uncertain<number>) => Uncertain<number>;
+      v: (x: number) => number;
+      d: (x: number) => number;
+    }[] = [
       { f: (x) => F.sin(x), v: Math.sin, d: Math.cos },
       { f: (x) => F.cos(x), v: Math.cos, d: (x) => -Math.sin(x) },
-      { f: (x) => F.sqrt(F.add(F.mul(x, x), F.one))!, v: (x) => Math.sqrt(x * x + 1), d: (x) => x / Math.sqrt(x * x + 1) },
+      {
+        f: (x) => F.sqrt(F.add(F.mul(x, x), F.one))!,
+        v: (x) => Math.sqrt(x * x + 1),
+        d: (x) => x / Math.sqrt(x * x + 1),
+      },
       { f: (x) => F.atan2(x, F.from(2)), v: (x) => Math.atan2(x, 2), d: (x) => 2 / (4 + x * x) },
-      { f: (x) => F.atan2(F.one, F.add(x, F.from(3))), v: (x) => Math.atan2(1, x + 3), d: (x) => -1 / (1 + (x + 3) * (x + 3)) },
+      {
+        f: (x) => F.atan2(F.one, F.add(x, F.from(3))),
+        v: (x) => Math.atan2(1, x + 3),
+        d: (x) => -1 / (1 + (x + 3) * (x + 3)),
+      },
     ];
     fc.assert(
-      fc.property(fc.array(fc.integer({ min: 0, max: stages.length - 1 }), { minLength: 1, maxLength: 5 }), fc.double({ min: -2, max: 2, noNaN: true }), (chain, x0) => {
-        let u = measured(F, x0, 1, 'x');
-        let plain = x0;
-        let product = 1;
-        let scale = 1;
-        for (const k of chain) {
-          const s = stages[k]!;
-          const dk = s.d(plain);
-          product *= dk;
-          scale *= Math.abs(dk) + 1e-300;
-          plain = s.v(plain);
-          u = s.f(u);
-        }
-        expect(u.value).toBeCloseTo(plain, 12);
-        expect(Math.abs((grad(u, 'x') ?? 0) - product)).toBeLessThanOrEqual(1e-12 * Math.max(scale, 1e-300) + 1e-300);
-      }),
+      fc.property(
+        fc.array(fc.integer({ min: 0, max: stages.length - 1 }), { minLength: 1, maxLength: 5 }),
+        fc.double({ min: -2, max: 2, noNaN: true }),
+        (chain, x0) => {
+          let u = measured(F, x0, 1, 'x');
+          let plain = x0;
+          let product = 1;
+          let scale = 1;
+          for (const k of chain) {
+            const s = stages[k]!;
+            const dk = s.d(plain);
+            product *= dk;
+            scale *= Math.abs(dk) + 1e-300;
+            plain = s.v(plain);
+            u = s.f(u);
+          }
+          expect(u.value).toBeCloseTo(plain, 12);
+          expect(Math.abs((grad(u, 'x') ?? 0) - product)).toBeLessThanOrEqual(
+            1e-12 * Math.max(scale, 1e-300) + 1e-300,
+          );
+        },
+      ),
       { numRuns: 300 },
     );
   });
@@ -144,25 +196,35 @@ describe('uncertain(base) is an arithmetic over values with gradients', () => {
     expect(G.name).toBe('uncertain(float)');
     const ops = ['add', 'sub', 'mul', 'div', 'sin', 'cos', 'sqrt', 'atan2', 'neg', 'abs'] as const;
     fc.assert(
-      fc.property(fc.array(fc.tuple(fc.constantFrom(...ops), fc.nat(), fc.nat()), { minLength: 1, maxLength: 12 }), fc.tuple(fc.double({ min: 0.1, max: 10, noNaN: true }), fc.double({ min: 0.1, max: 10, noNaN: true })), (prog, [a, b]) => {
-        const run = (U: typeof F) => {
-          const vals = [measured(U, a, 0.1, 'a'), measured(U, b, 0.2, 'b'), U.from(1.5)];
-          for (const [op, i, j] of prog) {
-            const x = vals[i % vals.length]!;
-            const y = vals[j % vals.length]!;
-            let r: Uncertain<number> | undefined;
-            if (op === 'sqrt') r = U.sqrt(U.abs(x).value === 0 ? U.one : U.add(U.abs(x), U.one));
-            else if (op === 'div') r = U.div(x, U.add(U.abs(y), U.one));
-            else if (op === 'atan2') r = U.atan2(y, U.add(U.abs(x), U.one));
-            else if (op === 'sin' || op === 'cos' || op === 'neg' || op === 'abs') r = U[op](x);
-            else r = U[op](x, y);
-            if (Math.abs(r!.value) > 1e6) r = U.from(1);
-            vals.push(r!);
-          }
-          return vals.map((v) => [v.value, grad(v, 'a') ?? 0, grad(v, 'b') ?? 0]);
-        };
-        expect(run(F)).toEqual(run(G as unknown as typeof F));
-      }),
+      fc.property(
+        fc.array(fc.tuple(fc.constantFrom(...ops), fc.nat(), fc.nat()), {
+          minLength: 1,
+          maxLength: 12,
+        }),
+        fc.tuple(
+          fc.double({ min: 0.1, max: 10, noNaN: true }),
+          fc.double({ min: 0.1, max: 10, noNaN: true }),
+        ),
+        (prog, [a, b]) => {
+          const run = (U: typeof F) => {
+            const vals = [measured(U, a, 0.1, 'a'), measured(U, b, 0.2, 'b'), U.from(1.5)];
+            for (const [op, i, j] of prog) {
+              const x = vals[i % vals.length]!;
+              const y = vals[j % vals.length]!;
+              let r: Uncertain<number> | undefined;
+              if (op === 'sqrt') r = U.sqrt(U.abs(x).value === 0 ? U.one : U.add(U.abs(x), U.one));
+              else if (op === 'div') r = U.div(x, U.add(U.abs(y), U.one));
+              else if (op === 'atan2') r = U.atan2(y, U.add(U.abs(x), U.one));
+              else if (op === 'sin' || op === 'cos' || op === 'neg' || op === 'abs') r = U[op](x);
+              else r = U[op](x, y);
+              if (Math.abs(r!.value) > 1e6) r = U.from(1);
+              vals.push(r!);
+            }
+            return vals.map((v) => [v.value, grad(v, 'a') ?? 0, grad(v, 'b') ?? 0]);
+          };
+          expect(run(F)).toEqual(run(G as unknown as typeof F));
+        },
+      ),
       { numRuns: 200 },
     );
   });
@@ -178,15 +240,25 @@ describe('uncertain(base) is an arithmetic over values with gradients', () => {
   it('sqrt of an uncertain zero is refused: its derivative is infinite', () => {
     const x = measured(F, 0, 0.1, 'x');
     expect(() => F.sqrt(x)).toThrow(expect.objectContaining({ code: 'NOT_FINITE' }));
-    expect(() => R.sqrt(measured(R, 0, 1, 'x'))).toThrow(expect.objectContaining({ code: 'NOT_FINITE' }));
+    expect(() => R.sqrt(measured(R, 0, 1, 'x'))).toThrow(
+      expect.objectContaining({ code: 'NOT_FINITE' }),
+    );
     expect(F.sqrt(F.zero)!.value).toBe(0);
   });
 
   it('sqrt of a negative value and division by an uncertain zero are refused', () => {
-    expect(() => F.sqrt(measured(F, -1, 0.1, 'x'))).toThrow(expect.objectContaining({ code: 'NO_REAL_SOLUTION' }));
-    expect(() => R.div(R.one, measured(R, 0, 1, 'x'))).toThrow(expect.objectContaining({ code: 'DIVISION_BY_ZERO' }));
-    expect(() => F.div(F.one, F.zero)).toThrow(expect.objectContaining({ code: 'DIVISION_BY_ZERO' }));
-    expect(() => D.atan2(D.zero, D.zero)).toThrow(expect.objectContaining({ code: 'INVALID_ARGUMENT' }));
+    expect(() => F.sqrt(measured(F, -1, 0.1, 'x'))).toThrow(
+      expect.objectContaining({ code: 'NO_REAL_SOLUTION' }),
+    );
+    expect(() => R.div(R.one, measured(R, 0, 1, 'x'))).toThrow(
+      expect.objectContaining({ code: 'DIVISION_BY_ZERO' }),
+    );
+    expect(() => F.div(F.one, F.zero)).toThrow(
+      expect.objectContaining({ code: 'DIVISION_BY_ZERO' }),
+    );
+    expect(() => D.atan2(D.zero, D.zero)).toThrow(
+      expect.objectContaining({ code: 'INVALID_ARGUMENT' }),
+    );
   });
 
   it('abs keeps the gradient for positive values and negates it for negative ones', () => {
@@ -216,22 +288,31 @@ describe('uncertain(base) is an arithmetic over values with gradients', () => {
 
   it('budget(U, measured(U, v, σ, name)).sigma is σ: exactly over rational', () => {
     fc.assert(
-      fc.property(fc.integer({ min: -1000, max: 1000 }), fc.integer({ min: 0, max: 10000 }), fc.integer({ min: 1, max: 997 }), (v, sn, sd) => {
-        const s = rational.div(rational.from(sn), rational.from(sd));
-        const b = budget(R, measured(R, v, s, 'x'));
-        expect(b.sigma.eq(s)).toBe(true);
-        expect(rational.eq(b.variance, rational.mul(s, s))).toBe(true);
-      }),
+      fc.property(
+        fc.integer({ min: -1000, max: 1000 }),
+        fc.integer({ min: 0, max: 10000 }),
+        fc.integer({ min: 1, max: 997 }),
+        (v, sn, sd) => {
+          const s = rational.div(rational.from(sn), rational.from(sd));
+          const b = budget(R, measured(R, v, s, 'x'));
+          expect(b.sigma.eq(s)).toBe(true);
+          expect(rational.eq(b.variance, rational.mul(s, s))).toBe(true);
+        },
+      ),
       { numRuns: 200 },
     );
   });
 
   it('budget(U, measured(U, v, σ, name)).sigma is σ within one ulp over float', () => {
     fc.assert(
-      fc.property(fc.double({ min: -1e6, max: 1e6, noNaN: true }), fc.double({ min: 1e-9, max: 1e3, noNaN: true }), (v, s) => {
-        const b = budget(F, measured(F, v, s, 'x'));
-        expect(Math.abs(b.sigma - s)).toBeLessThanOrEqual(s * Number.EPSILON);
-      }),
+      fc.property(
+        fc.double({ min: -1e6, max: 1e6, noNaN: true }),
+        fc.double({ min: 1e-9, max: 1e3, noNaN: true }),
+        (v, s) => {
+          const b = budget(F, measured(F, v, s, 'x'));
+          expect(Math.abs(b.sigma - s)).toBeLessThanOrEqual(s * Number.EPSILON);
+        },
+      ),
       { numRuns: 200 },
     );
   });

@@ -14,7 +14,8 @@ function exactOr<V>(A: Arithmetic<V, boolean>, x: V, digits: number): string {
 
 export const BATCH_EXTRA: Record<string, BatchKind> = {
   triangles: {
-    description: 'triangles by their vertices (x1, y1, x2, y2, x3, y3; x east, y north): quadrances, spreads and quadrea, exact in rational',
+    description:
+      'triangles by their vertices (x1, y1, x2, y2, x3, y3; x east, y north): quadrances, spreads and quadrea, exact in rational',
     columns: ['x1', 'y1', 'x2', 'y2', 'x3', 'y3'],
     outputs: ['Q1', 'Q2', 'Q3', 's1', 's2', 's3', 'quadrea'],
     row(A, [x1, y1, x2, y2, x3, y3], digits) {
@@ -23,7 +24,8 @@ export const BATCH_EXTRA: Record<string, BatchKind> = {
     },
   },
   heights: {
-    description: 'heights from a horizontal distance and an elevation angle in degrees (horizontal, elevation): H = Q·R/(1 − R) and the signed height',
+    description:
+      'heights from a horizontal distance and an elevation angle in degrees (horizontal, elevation): H = Q·R/(1 − R) and the signed height',
     columns: ['horizontal', 'elevation'],
     outputs: ['H', 'height'],
     row(A, [d, e], digits) {
@@ -31,7 +33,10 @@ export const BATCH_EXTRA: Record<string, BatchKind> = {
       const H = heightFromReading(A, { horizontal: A.mul(d!, d!), vertical: v });
       const h = sqrtOf(A, H);
       const text = batchValue(A, h, digits);
-      return [A.toPrecision(H, digits), v.sign < 0 && !text.startsWith('-') && text !== '0' ? `-${text}` : text];
+      return [
+        A.toPrecision(H, digits),
+        v.sign < 0 && !text.startsWith('-') && text !== '0' ? `-${text}` : text,
+      ];
     },
   },
 };

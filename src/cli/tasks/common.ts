@@ -20,12 +20,21 @@ export function pointInputs(p: JobPoint): Input[] {
 }
 
 /** The schema of a task kind: `kind` fixed, an optional `name`, the given properties. */
-export function taskSchema(kind: string, required: string[], properties: Record<string, Schema>): Schema {
+export function taskSchema(
+  kind: string,
+  required: string[],
+  properties: Record<string, Schema>,
+): Schema {
   return {
     type: 'object',
     required: ['kind', ...required],
     additionalProperties: false,
-    properties: { kind: { const: kind }, name: { $ref: '#/$defs/name' }, ...properties, correlations: { $ref: '#/$defs/correlations' } },
+    properties: {
+      kind: { const: kind },
+      name: { $ref: '#/$defs/name' },
+      ...properties,
+      correlations: { $ref: '#/$defs/correlations' },
+    },
   };
 }
 
@@ -63,7 +72,10 @@ export function root<V>(A: Arithmetic<V, boolean>, x: V): { value: Value<V>; app
  * √x for a value or a surd: a surd a + b√d has no square root of the same form, so its
  * root goes through `decimal(60)` and is flagged `approx` (a rational surd is rooted as a value).
  */
-export function rootOfValue<V>(A: Arithmetic<V, boolean>, x: Value<V>): { value: Value<V>; approx: boolean } {
+export function rootOfValue<V>(
+  A: Arithmetic<V, boolean>,
+  x: Value<V>,
+): { value: Value<V>; approx: boolean } {
   if (!isSurd(x)) return root(A, x as V);
   const r = x.toRational();
   if (r !== undefined) return root(A, r as V);
@@ -72,7 +84,11 @@ export function rootOfValue<V>(A: Arithmetic<V, boolean>, x: Value<V>): { value:
 }
 
 /** A signed square root: sign·√x, e.g. a height from its vertical quadrance (see {@link root}). */
-export function signedRoot<V>(A: Arithmetic<V, boolean>, x: V, sign: number): { value: Value<V>; approx: boolean } {
+export function signedRoot<V>(
+  A: Arithmetic<V, boolean>,
+  x: V,
+  sign: number,
+): { value: Value<V>; approx: boolean } {
   const r = root(A, x);
   if (sign >= 0) return r;
   return { value: isSurd(r.value) ? r.value.neg() : A.neg(r.value as V), approx: r.approx };

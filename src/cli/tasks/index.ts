@@ -17,4 +17,17 @@ import { resectionTask } from './resection.js';
 import { trigHeightTask } from './trig-height.js';
 import { geodeticTask } from './geodetic.js';
 
-export const TASK_KINDS: readonly TaskKind[] = [heightTask, baseHeightTask, inlineHeightTask, trigHeightTask, pathGradeTask, triangleTask, traverseTask, areaTask, intersectionTask, resectionTask, levellingTask, geodeticTask];
+export const TASK_KINDS: readonly TaskKind[] = [
+  heightTask,
+  baseHeightTask,
+  inlineHeightTask,
+  trigHeightTask,
+  pathGradeTask,
+  triangleTask,
+  traverseTask,
+  areaTask,
+  intersectionTask,
+  resectionTask,
+  levellingTask,
+  geodeticTask,
+];

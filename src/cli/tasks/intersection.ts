@@ -13,7 +13,9 @@ export const intersectionTask: TaskKind = {
   description: 'The point where line P1P2 meets line P3P4 (each through two job points).',
   schema: taskSchema('intersection', ['lines'], {
     lines: {
-      type: 'array', minItems: 2, maxItems: 2,
+      type: 'array',
+      minItems: 2,
+      maxItems: 2,
       items: { type: 'array', minItems: 2, maxItems: 2, items: { $ref: '#/$defs/pointRef' } },
       description: 'Two lines, each as two point names: [["P1", "P2"], ["P3", "P4"]].',
     },
@@ -37,16 +39,23 @@ export const intersectionTask: TaskKind = {
         if (env.drawing) {
           const n = P.map((p) => nums(env, p));
           const x = nums(env, X);
-          sketch = [{
-            title: `Intersection ${name}`,
-            view: 'plan' as const,
-            points: [...all.map((p, i) => ({ name: p.name, ...n[i]!, role: 'control' as const })), { name, ...x, role: 'computed' as const }],
-            lines: [
-              { x1: n[0]!.x, y1: n[0]!.y, x2: x.x, y2: x.y, role: 'sight' as const }, { x1: n[1]!.x, y1: n[1]!.y, x2: x.x, y2: x.y, role: 'sight' as const },
-              { x1: n[2]!.x, y1: n[2]!.y, x2: x.x, y2: x.y, role: 'sight' as const }, { x1: n[3]!.x, y1: n[3]!.y, x2: x.x, y2: x.y, role: 'sight' as const },
-            ],
-            notes: [],
-          }];
+          sketch = [
+            {
+              title: `Intersection ${name}`,
+              view: 'plan' as const,
+              points: [
+                ...all.map((p, i) => ({ name: p.name, ...n[i]!, role: 'control' as const })),
+                { name, ...x, role: 'computed' as const },
+              ],
+              lines: [
+                { x1: n[0]!.x, y1: n[0]!.y, x2: x.x, y2: x.y, role: 'sight' as const },
+                { x1: n[1]!.x, y1: n[1]!.y, x2: x.x, y2: x.y, role: 'sight' as const },
+                { x1: n[2]!.x, y1: n[2]!.y, x2: x.x, y2: x.y, role: 'sight' as const },
+                { x1: n[3]!.x, y1: n[3]!.y, x2: x.x, y2: x.y, role: 'sight' as const },
+              ],
+              notes: [],
+            },
+          ];
         }
         return { results, checks: [], notes: [], ...(sketch ? { sketch } : {}) };
       },

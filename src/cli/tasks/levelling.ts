@@ -13,49 +13,98 @@ import { plain, readLength } from '../values.js';
 import type { Input } from '../values.js';
 import { taskSchema } from './common.js';
 
-interface SightSpec { station: string; bs?: Input; is?: Input; fs?: Input; distance?: Input }
+interface SightSpec {
+  station: string;
+  bs?: Input;
+  is?: Input;
+  fs?: Input;
+  distance?: Input;
+}
 
 export const levellingTask: TaskKind = {
   kind: 'levelling',
-  description: 'A levelling run: reduced levels from booked backsights, intermediate sights and foresights; arithmetic checks; misclosure on the closing bench mark against c·√K.',
+  description:
+    'A levelling run: reduced levels from booked backsights, intermediate sights and foresights; arithmetic checks; misclosure on the closing bench mark against c·√K.',
   schema: taskSchema('levelling', ['start', 'sights'], {
-    start: { $ref: '#/$defs/measuredLength', description: 'Reduced level of the starting bench mark.' },
-    close: { $ref: '#/$defs/measuredLength', description: 'Known reduced level of the closing bench mark.' },
+    start: {
+      $ref: '#/$defs/measuredLength',
+      description: 'Reduced level of the starting bench mark.',
+    },
+    close: {
+      $ref: '#/$defs/measuredLength',
+      description: 'Known reduced level of the closing bench mark.',
+    },
     order: {
       anyOf: [{ enum: Object.keys(LEVELLING_ORDERS) }, { type: 'number', exclusiveMinimum: 0 }],
-      description: 'Order for the allowable misclosure c·√K (FGCC 1984; c values from memory, check them), or c in mm.',
+      description:
+        'Order for the allowable misclosure c·√K (FGCC 1984; c values from memory, check them), or c in mm.',
       'x-describe': `an order (${Object.keys(LEVELLING_ORDERS).join(', ')}) or c in mm`,
     },
-    km: { type: 'number', minimum: 0, description: 'Section length K in km (default: the sum of the sight distances).' },
+    km: {
+      type: 'number',
+      minimum: 0,
+      description: 'Section length K in km (default: the sum of the sight distances).',
+    },
     sights: {
-      type: 'array', minItems: 2, maxItems: 100000,
+      type: 'array',
+      minItems: 2,
+      maxItems: 100000,
       items: {
-        type: 'object', additionalProperties: false,
+        type: 'object',
+        additionalProperties: false,
         properties: {
           station: { $ref: '#/$defs/name' },
           bs: { $ref: '#/$defs/measuredLength', description: 'Backsight staff reading.' },
           is: { $ref: '#/$defs/measuredLength', description: 'Intermediate sight.' },
           fs: { $ref: '#/$defs/measuredLength', description: 'Foresight.' },
-          distance: { $ref: '#/$defs/length', description: 'Distance from the previous row\'s point, for distributing the misclosure.' },
+          distance: {
+            $ref: '#/$defs/length',
+            description: "Distance from the previous row's point, for distributing the misclosure.",
+          },
         },
       },
     },
   }),
   prepare(task, path, ctx) {
     const start = readLength(task.start, `${path}.start`, ctx.unit, 'start level', 'reduced level');
-    const close = task.close !== undefined ? readLength(task.close, `${path}.close`, ctx.unit, 'close level', 'reduced level') : undefined;
-    if (task.order !== undefined && close === undefined) throw new JobInvalid(`${path}.order`, 'an allowable misclosure needs the closing level "close"');
+    const close =
+      task.close !== undefined
+        ? readLength(task.close, `${path}.close`, ctx.unit, 'close level', 'reduced level')
+        : undefined;
+    if (task.order !== undefined && close === undefined)
+      throw new JobInvalid(
+        `${path}.order`,
+        'an allowable misclosure needs the closing level "close"',
+      );
     const sights: SightSpec[] = (task.sights as Record<string, unknown>[]).map((s, i) => {
       const p = `${path}.sights[${i}]`;
       const station = typeof s.station === 'string' ? s.station : `row ${i + 1}`;
       const out: SightSpec = { station };
-      for (const k of ['bs', 'is', 'fs'] as const) if (s[k] !== undefined) out[k] = readLength(s[k], `${p}.${k}`, ctx.unit, `${station} ${k.toUpperCase()}`, 'staff reading');
-      if (s.distance !== undefined) out.distance = readLength(s.distance, `${p}.distance`, ctx.unit, `${station} distance`, 'distance');
+      for (const k of ['bs', 'is', 'fs'] as const)
+        if (s[k] !== undefined)
+          out[k] = readLength(
+            s[k],
+            `${p}.${k}`,
+            ctx.unit,
+            `${station} ${k.toUpperCase()}`,
+            'staff reading',
+          );
+      if (s.distance !== undefined)
+        out.distance = readLength(
+          s.distance,
+          `${p}.distance`,
+          ctx.unit,
+          `${station} distance`,
+          'distance',
+        );
       return out;
     });
     const first = (task.sights as Record<string, unknown>[])[0]!;
     if (first.bs === undefined || first.is !== undefined || first.fs !== undefined) {
-      throw new JobInvalid(`${path}.sights[0]`, 'the first row must be a backsight alone, on the starting bench mark');
+      throw new JobInvalid(
+        `${path}.sights[0]`,
+        'the first row must be a backsight alone, on the starting bench mark',
+      );
     }
     // Which sights a row may hold is the library's rule: ask it now, in exact arithmetic and
     // without the closing level, so that a mis-booked row is a bad job (exit 2) naming the row.
@@ -77,10 +126,19 @@ export const levellingTask: TaskKind = {
       // Other refusals are met again, and reported (exit 3), by the computation itself.
       if (e.code === 'INVALID_ARGUMENT') {
         const row = /sights\[(\d+)\](\.\w+)?/.exec(e.where);
-        throw new JobInvalid(row ? `${path}.sights[${row[1]}]${row[2] ?? ''}` : path, e.message.slice(e.message.indexOf(e.where) + e.where.length + 2));
+        throw new JobInvalid(
+          row ? `${path}.sights[${row[1]}]${row[2] ?? ''}` : path,
+          e.message.slice(e.message.indexOf(e.where) + e.where.length + 2),
+        );
       }
     }
-    const inputs = [start, ...(close ? [close] : []), ...sights.flatMap((s) => [s.bs, s.is, s.fs, s.distance].filter((x): x is Input => x !== undefined))];
+    const inputs = [
+      start,
+      ...(close ? [close] : []),
+      ...sights.flatMap((s) =>
+        [s.bs, s.is, s.fs, s.distance].filter((x): x is Input => x !== undefined),
+      ),
+    ];
     return {
       summary: `Levelling run of ${sights.length} rows from ${plain(start.value)} ${ctx.unitName}${close ? ` closing on ${plain(close.value)} ${ctx.unitName}` : ''}.`,
       inputs,
@@ -111,20 +169,66 @@ export const levellingTask: TaskKind = {
         // The booking's arithmetic checks recompute the program's own sums: they cannot detect a
         // misread staff, only a fault in the reduction, so they are not counted as checks on the
         // survey. They become a note when they hold and a failed check if they ever do not.
-        const checks: { name: string; label: string; unit: string; value: typeof A.zero; tolerance: string; pass: boolean }[] = [];
-        if (!run.check.riseFallOk) checks.push({ name: 'rise_fall', label: 'Arithmetic of the reduction: ΣBS − ΣFS = ΣRise − ΣFall = last − first', unit: u, value: run.check.difference, tolerance: 'all three equal', pass: false });
-        if (!run.check.heightOfInstrumentOk) checks.push({ name: 'height_of_instrument', label: 'Arithmetic of the reduction: height-of-instrument sums', unit: u, value: run.check.difference, tolerance: 'Σ(HI × sights) = ΣIS + ΣFS + Σlevels', pass: false });
-        if (run.misclosureMm !== undefined) results.push({ name: 'misclosure', label: 'Misclosure (computed less known closing level)', unit: 'mm', value: run.misclosureMm });
+        const checks: {
+          name: string;
+          label: string;
+          unit: string;
+          value: typeof A.zero;
+          tolerance: string;
+          pass: boolean;
+        }[] = [];
+        if (!run.check.riseFallOk)
+          checks.push({
+            name: 'rise_fall',
+            label: 'Arithmetic of the reduction: ΣBS − ΣFS = ΣRise − ΣFall = last − first',
+            unit: u,
+            value: run.check.difference,
+            tolerance: 'all three equal',
+            pass: false,
+          });
+        if (!run.check.heightOfInstrumentOk)
+          checks.push({
+            name: 'height_of_instrument',
+            label: 'Arithmetic of the reduction: height-of-instrument sums',
+            unit: u,
+            value: run.check.difference,
+            tolerance: 'Σ(HI × sights) = ΣIS + ΣFS + Σlevels',
+            pass: false,
+          });
+        if (run.misclosureMm !== undefined)
+          results.push({
+            name: 'misclosure',
+            label: 'Misclosure (computed less known closing level)',
+            unit: 'mm',
+            value: run.misclosureMm,
+          });
         if (run.allowable && run.misclosureMm !== undefined) {
-          results.push({ name: 'allowable', label: `Allowable misclosure c·√K (c = ${A.toString(run.allowable.c)} mm, K = ${A.toPrecision(run.allowable.km, 4)} km)`, unit: 'mm', value: run.allowable.allowable as never });
-          checks.push({ name: 'misclosure', label: 'Misclosure within c·√K', unit: 'mm', value: run.misclosureMm, tolerance: `≤ ${env.num(run.allowable.allowable as never).toFixed(1)}`, pass: run.withinAllowable === true });
+          results.push({
+            name: 'allowable',
+            label: `Allowable misclosure c·√K (c = ${A.toString(run.allowable.c)} mm, K = ${A.toPrecision(run.allowable.km, 4)} km)`,
+            unit: 'mm',
+            value: run.allowable.allowable as never,
+          });
+          checks.push({
+            name: 'misclosure',
+            label: 'Misclosure within c·√K',
+            unit: 'mm',
+            value: run.misclosureMm,
+            tolerance: `≤ ${env.num(run.allowable.allowable as never).toFixed(1)}`,
+            pass: run.withinAllowable === true,
+          });
         }
         const notes: string[] = [];
         if (run.check.riseFallOk && run.check.heightOfInstrumentOk) {
-          notes.push(`Arithmetic of the reduction agrees: ΣBS − ΣFS = ΣRise − ΣFall = last − first = ${Number(env.num(run.check.difference).toPrecision(12))} ${u}, and Σ(HI × sights) = ΣIS + ΣFS + Σlevels (this confirms the sums, not the readings).`);
+          notes.push(
+            `Arithmetic of the reduction agrees: ΣBS − ΣFS = ΣRise − ΣFall = last − first = ${Number(env.num(run.check.difference).toPrecision(12))} ${u}, and Σ(HI × sights) = ΣIS + ΣFS + Σlevels (this confirms the sums, not the readings).`,
+          );
         }
         if (close) notes.push(`Misclosure distributed by ${run.distributedBy}.`);
-        if (task.order !== undefined && typeof task.order === 'string') notes.push('The allowable misclosure constants are quoted from memory of FGCC (1984): check them against the standard before relying on them.');
+        if (task.order !== undefined && typeof task.order === 'string')
+          notes.push(
+            'The allowable misclosure constants are quoted from memory of FGCC (1984): check them against the standard before relying on them.',
+          );
         return { results, checks, notes };
       },
     };

@@ -13,15 +13,24 @@ import { angleText, lengthText, plain, positive, readAngle, readLength } from '.
 import type { Input } from '../values.js';
 import { nums, pointInputs, taskSchema, xy } from './common.js';
 
-type CourseSpec = { to: string; bearing: Input; distance: Input } | { to: string; latitude: Input; departure: Input };
+type CourseSpec =
+  | { to: string; bearing: Input; distance: Input }
+  | { to: string; latitude: Input; departure: Input };
 
 export const traverseTask: TaskKind = {
   kind: 'traverse',
-  description: 'A traverse from a known point: misclosure on the closing point, precision 1 : N, adjusted coordinates (compass or transit rule).',
+  description:
+    'A traverse from a known point: misclosure on the closing point, precision 1 : N, adjusted coordinates (compass or transit rule).',
   schema: taskSchema('traverse', ['start', 'courses'], {
     start: { $ref: '#/$defs/pointRef', description: 'The known starting point.' },
-    close: { $ref: '#/$defs/pointRef', description: 'The known point the traverse ends on (default: the start, a closed loop).' },
-    rule: { enum: ['compass', 'transit'], description: 'How the misclosure is distributed (default compass, i.e. Bowditch).' },
+    close: {
+      $ref: '#/$defs/pointRef',
+      description: 'The known point the traverse ends on (default: the start, a closed loop).',
+    },
+    rule: {
+      enum: ['compass', 'transit'],
+      description: 'How the misclosure is distributed (default compass, i.e. Bowditch).',
+    },
     courses: {
       type: 'array',
       minItems: 1,
@@ -29,15 +38,23 @@ export const traverseTask: TaskKind = {
       items: {
         anyOf: [
           {
-            type: 'object', required: ['bearing', 'distance'], additionalProperties: false,
+            type: 'object',
+            required: ['bearing', 'distance'],
+            additionalProperties: false,
             properties: {
               to: { $ref: '#/$defs/name', description: 'Name of the point this course reaches.' },
-              bearing: { $ref: '#/$defs/measuredAngle', description: 'Azimuth clockwise from north, or a quadrant bearing such as "S 68°05\'35\\" W".' },
+              bearing: {
+                $ref: '#/$defs/measuredAngle',
+                description:
+                  'Azimuth clockwise from north, or a quadrant bearing such as "S 68°05\'35\\" W".',
+              },
               distance: { $ref: '#/$defs/measuredLength', description: 'Horizontal distance.' },
             },
           },
           {
-            type: 'object', required: ['latitude', 'departure'], additionalProperties: false,
+            type: 'object',
+            required: ['latitude', 'departure'],
+            additionalProperties: false,
             properties: {
               to: { $ref: '#/$defs/name' },
               latitude: { $ref: '#/$defs/measuredLength', description: 'North component.' },
@@ -45,13 +62,21 @@ export const traverseTask: TaskKind = {
             },
           },
         ],
-        'x-describe': 'a course: { "bearing", "distance" } or { "latitude", "departure" }, with an optional "to"',
+        'x-describe':
+          'a course: { "bearing", "distance" } or { "latitude", "departure" }, with an optional "to"',
       },
     },
-    interiorAngles: { type: 'array', minItems: 3, items: { $ref: '#/$defs/angle' }, description: 'Measured interior angles of a closed loop, for the angular misclosure.' },
+    interiorAngles: {
+      type: 'array',
+      minItems: 3,
+      items: { $ref: '#/$defs/angle' },
+      description: 'Measured interior angles of a closed loop, for the angular misclosure.',
+    },
     tolerance: {
-      type: 'object', additionalProperties: false,
-      description: 'Pass/fail limits: the least precision N of 1 : N, the largest linear misclosure, the largest angular misclosure.',
+      type: 'object',
+      additionalProperties: false,
+      description:
+        'Pass/fail limits: the least precision N of 1 : N, the largest linear misclosure, the largest angular misclosure.',
       properties: {
         precision: { type: 'number', exclusiveMinimum: 0 },
         linear: { $ref: '#/$defs/length' },
@@ -64,12 +89,25 @@ export const traverseTask: TaskKind = {
     const close = task.close !== undefined ? ctx.point(task.close, `${path}.close`) : start;
     const courses: CourseSpec[] = (task.courses as Record<string, unknown>[]).map((c, i) => {
       const p = `${path}.courses[${i}]`;
-      const to = typeof c.to === 'string' ? c.to : `${i + 1 === (task.courses as unknown[]).length ? close.name : `P${i + 1}`}`;
+      const to =
+        typeof c.to === 'string'
+          ? c.to
+          : `${i + 1 === (task.courses as unknown[]).length ? close.name : `P${i + 1}`}`;
       if ('bearing' in c) {
         return {
           to,
           bearing: readAngle(c.bearing, `${p}.bearing`, `course ${i + 1} bearing`, 'bearing'),
-          distance: positive(readLength(c.distance, `${p}.distance`, ctx.unit, `course ${i + 1} distance`, 'distance'), `${p}.distance`, 'distance'),
+          distance: positive(
+            readLength(
+              c.distance,
+              `${p}.distance`,
+              ctx.unit,
+              `course ${i + 1} distance`,
+              'distance',
+            ),
+            `${p}.distance`,
+            'distance',
+          ),
         };
       }
       return {
@@ -78,54 +116,139 @@ export const traverseTask: TaskKind = {
         departure: readLength(c.departure, `${p}.departure`, ctx.unit, `course ${i + 1} departure`),
       };
     });
-    const angles = (task.interiorAngles as unknown[] | undefined)?.map((a, i) => angleText(a, `${path}.interiorAngles[${i}]`, 'interior angle'));
+    const angles = (task.interiorAngles as unknown[] | undefined)?.map((a, i) =>
+      angleText(a, `${path}.interiorAngles[${i}]`, 'interior angle'),
+    );
     if (angles && task.close !== undefined && task.close !== task.start) {
-      throw new JobInvalid(`${path}.interiorAngles`, 'interior angles belong to a closed loop, but this traverse closes on another point');
+      throw new JobInvalid(
+        `${path}.interiorAngles`,
+        'interior angles belong to a closed loop, but this traverse closes on another point',
+      );
     }
-    const tol = (task.tolerance ?? {}) as { precision?: number; linear?: unknown; angular?: unknown };
-    const linearTol = tol.linear !== undefined ? lengthText(tol.linear, `${path}.tolerance.linear`, ctx.unit, 'tolerance') : undefined;
-    const angularTol = tol.angular !== undefined ? angleText(tol.angular, `${path}.tolerance.angular`, 'tolerance') : undefined;
+    const tol = (task.tolerance ?? {}) as {
+      precision?: number;
+      linear?: unknown;
+      angular?: unknown;
+    };
+    const linearTol =
+      tol.linear !== undefined
+        ? lengthText(tol.linear, `${path}.tolerance.linear`, ctx.unit, 'tolerance')
+        : undefined;
+    const angularTol =
+      tol.angular !== undefined
+        ? angleText(tol.angular, `${path}.tolerance.angular`, 'tolerance')
+        : undefined;
     const rule = (task.rule as 'compass' | 'transit' | undefined) ?? 'compass';
     const inputs: Input[] = [...pointInputs(start), ...(close === start ? [] : pointInputs(close))];
-    for (const c of courses) inputs.push(...('bearing' in c ? [c.bearing, c.distance] : [c.latitude, c.departure]));
+    for (const c of courses)
+      inputs.push(...('bearing' in c ? [c.bearing, c.distance] : [c.latitude, c.departure]));
     return {
       summary: `Traverse from ${start.name} through ${courses.length} course${courses.length === 1 ? '' : 's'} closing on ${close.name}, ${rule} rule.`,
       inputs,
       compute(env) {
         const A = env.A;
         const list: TraverseCourse<typeof A.zero>[] = courses.map((c) =>
-          'bearing' in c ? { bearing: env.get(c.bearing), distance: env.get(c.distance) } : { latitude: env.get(c.latitude), departure: env.get(c.departure) },
+          'bearing' in c
+            ? { bearing: env.get(c.bearing), distance: env.get(c.distance) }
+            : { latitude: env.get(c.latitude), departure: env.get(c.departure) },
         );
-        const t = traverse(A, { start: xy(env, start), courses: list, close: xy(env, close), rule });
+        const t = traverse(A, {
+          start: xy(env, start),
+          courses: list,
+          close: xy(env, close),
+          rule,
+        });
         const u = ctx.unitName;
         const results = [
-          { name: 'misclosure_east', label: 'Misclosure in departure (east), computed end less known closing point', unit: u, value: t.closure.east },
-          { name: 'misclosure_north', label: 'Misclosure in latitude (north), computed end less known closing point', unit: u, value: t.closure.north },
+          {
+            name: 'misclosure_east',
+            label: 'Misclosure in departure (east), computed end less known closing point',
+            unit: u,
+            value: t.closure.east,
+          },
+          {
+            name: 'misclosure_north',
+            label: 'Misclosure in latitude (north), computed end less known closing point',
+            unit: u,
+            value: t.closure.north,
+          },
           { name: 'misclosure', label: 'Linear misclosure', unit: u, value: t.closure.linear },
-          { name: 'length', label: 'Length of the traverse', unit: u, value: t.length, approx: true },
+          {
+            name: 'length',
+            label: 'Length of the traverse',
+            unit: u,
+            value: t.length,
+            approx: true,
+          },
           ...t.adjusted.slice(1, -1).flatMap((p, i) => [
-            { name: `${courses[i]!.to}.east`, label: `${courses[i]!.to} adjusted east`, unit: u, value: p.x },
-            { name: `${courses[i]!.to}.north`, label: `${courses[i]!.to} adjusted north`, unit: u, value: p.y },
+            {
+              name: `${courses[i]!.to}.east`,
+              label: `${courses[i]!.to} adjusted east`,
+              unit: u,
+              value: p.x,
+            },
+            {
+              name: `${courses[i]!.to}.north`,
+              label: `${courses[i]!.to} adjusted north`,
+              unit: u,
+              value: p.y,
+            },
           ]),
         ];
         const checks = [];
         if (tol.precision !== undefined) {
           const ratio = t.closure.ratio;
           const pass = ratio === undefined || A.cmp(ratio, A.from(tol.precision)) >= 0;
-          checks.push({ name: 'precision', label: ratio === undefined ? 'Precision 1 : N (closes exactly: N is infinite, shown as 0)' : 'Precision 1 : N, N = length ÷ linear misclosure', unit: '', value: ratio ?? A.zero, tolerance: `≥ ${tol.precision}`, pass });
+          checks.push({
+            name: 'precision',
+            label:
+              ratio === undefined
+                ? 'Precision 1 : N (closes exactly: N is infinite, shown as 0)'
+                : 'Precision 1 : N, N = length ÷ linear misclosure',
+            unit: '',
+            value: ratio ?? A.zero,
+            tolerance: `≥ ${tol.precision}`,
+            pass,
+          });
         }
         if (linearTol !== undefined) {
-          const L = A.add(A.mul(t.closure.east, t.closure.east), A.mul(t.closure.north, t.closure.north));
+          const L = A.add(
+            A.mul(t.closure.east, t.closure.east),
+            A.mul(t.closure.north, t.closure.north),
+          );
           const T = A.from(linearTol);
-          checks.push({ name: 'linear', label: 'Linear misclosure', unit: u, value: t.closure.linear, tolerance: `≤ ${plain(linearTol)}`, pass: A.cmp(L, A.mul(T, T)) <= 0 });
+          checks.push({
+            name: 'linear',
+            label: 'Linear misclosure',
+            unit: u,
+            value: t.closure.linear,
+            tolerance: `≤ ${plain(linearTol)}`,
+            pass: A.cmp(L, A.mul(T, T)) <= 0,
+          });
         }
         const notes: string[] = [];
-        if (t.closure.ratio === undefined) notes.push('The traverse closes exactly: precision 1 : ∞.');
+        if (t.closure.ratio === undefined)
+          notes.push('The traverse closes exactly: precision 1 : ∞.');
         if (angles) {
           const m = angularMisclosure(A, angles);
-          results.push({ name: 'angular_misclosure', label: 'Angular misclosure (sum of interior angles less (n − 2)·180°)', unit: '°', value: m.misclosure });
+          results.push({
+            name: 'angular_misclosure',
+            label: 'Angular misclosure (sum of interior angles less (n − 2)·180°)',
+            unit: '°',
+            value: m.misclosure,
+          });
           if (angularTol !== undefined) {
-            checks.push({ name: 'angular', label: 'Angular misclosure', unit: '°', value: m.misclosure, tolerance: typeof tol.angular === 'string' && !/^[\d.]+°?$/.test(tol.angular.trim()) ? `≤ ${tol.angular.trim()} = ${plain(angularTol)}` : `≤ ${plain(angularTol)}`, pass: A.cmp(A.abs(m.misclosure), A.abs(A.from(angularTol))) <= 0 });
+            checks.push({
+              name: 'angular',
+              label: 'Angular misclosure',
+              unit: '°',
+              value: m.misclosure,
+              tolerance:
+                typeof tol.angular === 'string' && !/^[\d.]+°?$/.test(tol.angular.trim())
+                  ? `≤ ${tol.angular.trim()} = ${plain(angularTol)}`
+                  : `≤ ${plain(angularTol)}`,
+              pass: A.cmp(A.abs(m.misclosure), A.abs(A.from(angularTol))) <= 0,
+            });
           }
         }
         let sketch;
@@ -137,12 +260,34 @@ export const traverseTask: TaskKind = {
             {
               title: `Traverse ${start.name} → ${close.name}`,
               view: 'plan' as const,
-              points: adj.slice(0, close === start ? -1 : undefined).map((p, i) => ({ name: names[i]!, ...p, role: i === 0 || i === adj.length - 1 ? ('control' as const) : ('computed' as const) })),
+              points: adj.slice(0, close === start ? -1 : undefined).map((p, i) => ({
+                name: names[i]!,
+                ...p,
+                role:
+                  i === 0 || i === adj.length - 1 ? ('control' as const) : ('computed' as const),
+              })),
               lines: [
-                ...raw.slice(1).map((p, i) => ({ x1: raw[i]!.x, y1: raw[i]!.y, x2: p.x, y2: p.y, role: 'course' as const })),
-                ...adj.slice(1).map((p, i) => ({ x1: adj[i]!.x, y1: adj[i]!.y, x2: p.x, y2: p.y, role: 'adjusted' as const })),
+                ...raw.slice(1).map((p, i) => ({
+                  x1: raw[i]!.x,
+                  y1: raw[i]!.y,
+                  x2: p.x,
+                  y2: p.y,
+                  role: 'course' as const,
+                })),
+                ...adj.slice(1).map((p, i) => ({
+                  x1: adj[i]!.x,
+                  y1: adj[i]!.y,
+                  x2: p.x,
+                  y2: p.y,
+                  role: 'adjusted' as const,
+                })),
               ],
-              notes: [{ ...adj[adj.length - 1]!, text: `misclosure ${env.A.toPrecision(t.closure.east, 3)} E, ${env.A.toPrecision(t.closure.north, 3)} N` }],
+              notes: [
+                {
+                  ...adj[adj.length - 1]!,
+                  text: `misclosure ${env.A.toPrecision(t.closure.east, 3)} E, ${env.A.toPrecision(t.closure.north, 3)} N`,
+                },
+              ],
             },
           ];
         }

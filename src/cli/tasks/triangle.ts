@@ -5,7 +5,14 @@
  *
  * @module cli
  */
-import { QuadspreadError, solveTriangle, spreadFromDegrees, triangle, isSurd, surd } from '../../index.js';
+import {
+  QuadspreadError,
+  solveTriangle,
+  spreadFromDegrees,
+  triangle,
+  isSurd,
+  surd,
+} from '../../index.js';
 import type { Arithmetic, Surd, Triangle } from '../../index.js';
 import { JobInvalid } from '../failure.js';
 import type { Env, RawQuantity, TaskKind, Value } from '../task.js';
@@ -13,13 +20,25 @@ import { inClosed, inRange, positive, readAngle, readLength, readNumber } from '
 import type { Input } from '../values.js';
 import { nums, pointInputs, root, squared, taskSchema, xy } from './common.js';
 
-type Known = { key: 'Q1' | 'Q2' | 'Q3' | 's1' | 's2' | 's3'; form: 'side' | 'quadrance' | 'angle' | 'spread'; input: Input };
+type Known = {
+  key: 'Q1' | 'Q2' | 'Q3' | 's1' | 's2' | 's3';
+  form: 'side' | 'quadrance' | 'angle' | 'spread';
+  input: Input;
+};
 
 const MEASURES: Record<string, { key: Known['key']; form: Known['form'] }> = {
-  side1: { key: 'Q1', form: 'side' }, side2: { key: 'Q2', form: 'side' }, side3: { key: 'Q3', form: 'side' },
-  Q1: { key: 'Q1', form: 'quadrance' }, Q2: { key: 'Q2', form: 'quadrance' }, Q3: { key: 'Q3', form: 'quadrance' },
-  angle1: { key: 's1', form: 'angle' }, angle2: { key: 's2', form: 'angle' }, angle3: { key: 's3', form: 'angle' },
-  s1: { key: 's1', form: 'spread' }, s2: { key: 's2', form: 'spread' }, s3: { key: 's3', form: 'spread' },
+  side1: { key: 'Q1', form: 'side' },
+  side2: { key: 'Q2', form: 'side' },
+  side3: { key: 'Q3', form: 'side' },
+  Q1: { key: 'Q1', form: 'quadrance' },
+  Q2: { key: 'Q2', form: 'quadrance' },
+  Q3: { key: 'Q3', form: 'quadrance' },
+  angle1: { key: 's1', form: 'angle' },
+  angle2: { key: 's2', form: 'angle' },
+  angle3: { key: 's3', form: 'angle' },
+  s1: { key: 's1', form: 'spread' },
+  s2: { key: 's2', form: 'spread' },
+  s3: { key: 's3', form: 'spread' },
 };
 
 /** √x as a result: exact when x is a rational square (or the arithmetic is inexact), else rounded (flagged approx). */
@@ -33,43 +52,90 @@ function rootOf<V>(A: Arithmetic<V, boolean>, x: Value<V>): { value: Value<V>; a
   return root(A, x as V);
 }
 
-function measures<V>(env: Env<V>, t: Record<string, Value<V>>, unit: string, tag: string): RawQuantity<V>[] {
+function measures<V>(
+  env: Env<V>,
+  t: Record<string, Value<V>>,
+  unit: string,
+  tag: string,
+): RawQuantity<V>[] {
   const A = env.A;
   const out: RawQuantity<V>[] = [];
-  for (const i of [1, 2, 3]) out.push({ name: `Q${i}${tag}`, label: `Quadrance Q${i} (opposite A${i})`, unit: squared(unit), value: t[`Q${i}`]! });
+  for (const i of [1, 2, 3])
+    out.push({
+      name: `Q${i}${tag}`,
+      label: `Quadrance Q${i} (opposite A${i})`,
+      unit: squared(unit),
+      value: t[`Q${i}`]!,
+    });
   for (const i of [1, 2, 3]) {
     const r = rootOf(A, t[`Q${i}`]!);
-    out.push({ name: `side${i}${tag}`, label: `Side ${i} (opposite A${i})`, unit, value: r.value, approx: r.approx });
+    out.push({
+      name: `side${i}${tag}`,
+      label: `Side ${i} (opposite A${i})`,
+      unit,
+      value: r.value,
+      approx: r.approx,
+    });
   }
-  for (const i of [1, 2, 3]) out.push({ name: `s${i}${tag}`, label: `Spread s${i} at A${i}`, unit: '', value: t[`s${i}`]! });
-  out.push({ name: `quadrea${tag}`, label: 'Quadrea (16·area²)', unit: `${unit}⁴`, value: t.quadrea! });
+  for (const i of [1, 2, 3])
+    out.push({ name: `s${i}${tag}`, label: `Spread s${i} at A${i}`, unit: '', value: t[`s${i}`]! });
+  out.push({
+    name: `quadrea${tag}`,
+    label: 'Quadrea (16·area²)',
+    unit: `${unit}⁴`,
+    value: t.quadrea!,
+  });
   const q = rootOf(A, t.quadrea!);
   const area = isSurd(q.value) ? q.value.div(4) : A.div(q.value as V, A.from(4));
-  out.push({ name: `area${tag}`, label: 'Area (√quadrea / 4)', unit: squared(unit), value: area as Value<V>, approx: q.approx });
+  out.push({
+    name: `area${tag}`,
+    label: 'Area (√quadrea / 4)',
+    unit: squared(unit),
+    value: area as Value<V>,
+    approx: q.approx,
+  });
   return out;
 }
 
 export const triangleTask: TaskKind = {
   kind: 'triangle',
-  description: 'Every triangle with three given measures (sides side1..3 or quadrances Q1..3, angles angle1..3 or spreads s1..3; index i is opposite vertex Ai), or the measures of the triangle of three points.',
+  description:
+    'Every triangle with three given measures (sides side1..3 or quadrances Q1..3, angles angle1..3 or spreads s1..3; index i is opposite vertex Ai), or the measures of the triangle of three points.',
   schema: taskSchema('triangle', [], {
-    vertices: { type: 'array', minItems: 3, maxItems: 3, items: { $ref: '#/$defs/pointRef' }, description: 'Three job points A1, A2, A3 (instead of "known").' },
+    vertices: {
+      type: 'array',
+      minItems: 3,
+      maxItems: 3,
+      items: { $ref: '#/$defs/pointRef' },
+      description: 'Three job points A1, A2, A3 (instead of "known").',
+    },
     known: {
       type: 'object',
       additionalProperties: false,
       description: 'Exactly three measures, at least one a side or quadrance.',
       properties: {
-        side1: { $ref: '#/$defs/measuredLength' }, side2: { $ref: '#/$defs/measuredLength' }, side3: { $ref: '#/$defs/measuredLength' },
-        Q1: { type: ['number', 'string'] }, Q2: { type: ['number', 'string'] }, Q3: { type: ['number', 'string'] },
-        angle1: { $ref: '#/$defs/measuredAngle' }, angle2: { $ref: '#/$defs/measuredAngle' }, angle3: { $ref: '#/$defs/measuredAngle' },
-        s1: { type: ['number', 'string'] }, s2: { type: ['number', 'string'] }, s3: { type: ['number', 'string'] },
+        side1: { $ref: '#/$defs/measuredLength' },
+        side2: { $ref: '#/$defs/measuredLength' },
+        side3: { $ref: '#/$defs/measuredLength' },
+        Q1: { type: ['number', 'string'] },
+        Q2: { type: ['number', 'string'] },
+        Q3: { type: ['number', 'string'] },
+        angle1: { $ref: '#/$defs/measuredAngle' },
+        angle2: { $ref: '#/$defs/measuredAngle' },
+        angle3: { $ref: '#/$defs/measuredAngle' },
+        s1: { type: ['number', 'string'] },
+        s2: { type: ['number', 'string'] },
+        s3: { type: ['number', 'string'] },
       },
     },
   }),
   prepare(task, path, ctx) {
     const unit = ctx.unitName;
     if (Array.isArray(task.vertices) === (task.known !== undefined)) {
-      throw new JobInvalid(path, 'a triangle task needs either "vertices" (three points) or "known" (three measures), not both or neither');
+      throw new JobInvalid(
+        path,
+        'a triangle task needs either "vertices" (three points) or "known" (three measures), not both or neither',
+      );
     }
     if (Array.isArray(task.vertices)) {
       const v = (task.vertices as unknown[]).map((n, i) => ctx.point(n, `${path}.vertices[${i}]`));
@@ -77,10 +143,32 @@ export const triangleTask: TaskKind = {
         summary: `Measures of the triangle ${v.map((p) => p.name).join(' ')} (A1 A2 A3).`,
         inputs: v.flatMap(pointInputs),
         compute(env) {
-          const [P1, P2, P3] = v.map((p) => xy(env, p)) as [ReturnType<typeof xy<typeof env.A.zero>>, ReturnType<typeof xy<typeof env.A.zero>>, ReturnType<typeof xy<typeof env.A.zero>>];
+          const [P1, P2, P3] = v.map((p) => xy(env, p)) as [
+            ReturnType<typeof xy<typeof env.A.zero>>,
+            ReturnType<typeof xy<typeof env.A.zero>>,
+            ReturnType<typeof xy<typeof env.A.zero>>,
+          ];
           const t = triangle(env.A, P1, P2, P3);
-          const sketch = env.drawing ? [triangleSketch(`Triangle ${v.map((p) => p.name).join(' ')}`, [P1, P2, P3].map((p) => nums(env, p)), v.map((p) => p.name))] : undefined;
-          return { results: measures(env, t as unknown as Record<string, Value<typeof env.A.zero>>, unit, ''), checks: [], notes: [], ...(sketch ? { sketch } : {}) };
+          const sketch = env.drawing
+            ? [
+                triangleSketch(
+                  `Triangle ${v.map((p) => p.name).join(' ')}`,
+                  [P1, P2, P3].map((p) => nums(env, p)),
+                  v.map((p) => p.name),
+                ),
+              ]
+            : undefined;
+          return {
+            results: measures(
+              env,
+              t as unknown as Record<string, Value<typeof env.A.zero>>,
+              unit,
+              '',
+            ),
+            checks: [],
+            notes: [],
+            ...(sketch ? { sketch } : {}),
+          };
         },
       };
     }
@@ -88,16 +176,35 @@ export const triangleTask: TaskKind = {
     for (const [field, raw] of Object.entries(task.known as Record<string, unknown>)) {
       const m = MEASURES[field]!;
       const p = `${path}.known.${field}`;
-      if (known.some((k) => k.key === m.key)) throw new JobInvalid(p, `gives ${m.key} a second time`);
+      if (known.some((k) => k.key === m.key))
+        throw new JobInvalid(p, `gives ${m.key} a second time`);
       const input =
-        m.form === 'side' ? positive(readLength(raw, p, ctx.unit, field, 'side'), p, 'side')
-        : m.form === 'angle' ? inRange(readAngle(raw, p, field, 'angle of a triangle'), p, 'angle of a triangle', 0, 180, 'both')
-        : m.form === 'spread' ? inClosed(readNumber(raw, p, field, 'spread'), p, 'spread', 0, 1)
-        : inClosed(readNumber(raw, p, field, 'quadrance'), p, 'quadrance', 0);
+        m.form === 'side'
+          ? positive(readLength(raw, p, ctx.unit, field, 'side'), p, 'side')
+          : m.form === 'angle'
+            ? inRange(
+                readAngle(raw, p, field, 'angle of a triangle'),
+                p,
+                'angle of a triangle',
+                0,
+                180,
+                'both',
+              )
+            : m.form === 'spread'
+              ? inClosed(readNumber(raw, p, field, 'spread'), p, 'spread', 0, 1)
+              : inClosed(readNumber(raw, p, field, 'quadrance'), p, 'quadrance', 0);
       known.push({ key: m.key, form: m.form, input });
     }
-    if (known.length !== 3) throw new JobInvalid(`${path}.known`, `gives ${known.length} measure${known.length === 1 ? '' : 's'}; a triangle needs exactly three`);
-    if (!known.some((k) => k.key.startsWith('Q'))) throw new JobInvalid(`${path}.known`, 'three angles fix a triangle only up to scale: give at least one side');
+    if (known.length !== 3)
+      throw new JobInvalid(
+        `${path}.known`,
+        `gives ${known.length} measure${known.length === 1 ? '' : 's'}; a triangle needs exactly three`,
+      );
+    if (!known.some((k) => k.key.startsWith('Q')))
+      throw new JobInvalid(
+        `${path}.known`,
+        'three angles fix a triangle only up to scale: give at least one side',
+      );
     return {
       summary: `Triangles with ${known.map((k) => k.key).join(', ')} given.`,
       inputs: known.map((k) => k.input),
@@ -106,7 +213,8 @@ export const triangleTask: TaskKind = {
         const given: Record<string, typeof A.zero> = {};
         for (const k of known) {
           const x = env.get(k.input);
-          given[k.key] = k.form === 'side' ? A.mul(x, x) : k.form === 'angle' ? spreadFromDegrees(A, x) : x;
+          given[k.key] =
+            k.form === 'side' ? A.mul(x, x) : k.form === 'angle' ? spreadFromDegrees(A, x) : x;
         }
         let solutions = solveTriangle(A, given);
         // A spread does not tell an angle from its supplement, but the job gave the angle:
@@ -126,18 +234,46 @@ export const triangleTask: TaskKind = {
           if (kept.length > 0) solutions = kept;
         }
         if (solutions.length === 0) {
-          throw new QuadspreadError('NO_REAL_SOLUTION', 'triangle task', `no proper triangle has ${known.map((k) => `${k.key} = ${A.toPrecision(given[k.key]!, 8)}`).join(', ')}`);
+          throw new QuadspreadError(
+            'NO_REAL_SOLUTION',
+            'triangle task',
+            `no proper triangle has ${known.map((k) => `${k.key} = ${A.toPrecision(given[k.key]!, 8)}`).join(', ')}`,
+          );
         }
-        const results = solutions.flatMap((t, i) => measures(env, t as unknown as Record<string, Value<typeof A.zero>>, unit, solutions.length > 1 ? `.${i + 1}` : ''));
-        const notes = solutions.length > 1 ? [`Two triangles fit these measures (names ending .1 and .2; the one that needed the minus sign of the square root first): an angle that was not given can be acute or obtuse (a spread does not tell an angle from its supplement), so say which one the field work saw.`] : [];
+        const results = solutions.flatMap((t, i) =>
+          measures(
+            env,
+            t as unknown as Record<string, Value<typeof A.zero>>,
+            unit,
+            solutions.length > 1 ? `.${i + 1}` : '',
+          ),
+        );
+        const notes =
+          solutions.length > 1
+            ? [
+                `Two triangles fit these measures (names ending .1 and .2; the one that needed the minus sign of the square root first): an angle that was not given can be acute or obtuse (a spread does not tell an angle from its supplement), so say which one the field work saw.`,
+              ]
+            : [];
         let sketch;
         if (env.drawing) {
           sketch = solutions.map((t, i) => {
             // Draw A1 at the origin, A2 along east: |A1A2|² = Q3, |A1A3|² = Q2.
-            const q2 = env.num(t.Q2), q3 = env.num(t.Q3), s1 = env.num(t.s1);
-            const c = Math.sqrt(q3), b = Math.sqrt(q2);
+            const q2 = env.num(t.Q2),
+              q3 = env.num(t.Q3),
+              s1 = env.num(t.s1);
+            const c = Math.sqrt(q3),
+              b = Math.sqrt(q2);
             const cos = (q2 + q3 - env.num(t.Q1)) / (2 * b * c); // cross law in cosine form, for the drawing only
-            return triangleSketch(`Triangle${solutions.length > 1 ? ` (solution ${i + 1})` : ''}`, [{ x: 0, y: 0 }, { x: c, y: 0 }, { x: b * cos, y: b * Math.sqrt(Math.max(0, s1)) }], ['A1', 'A2', 'A3'], 'shape only: A1 A2 drawn across, A3 above');
+            return triangleSketch(
+              `Triangle${solutions.length > 1 ? ` (solution ${i + 1})` : ''}`,
+              [
+                { x: 0, y: 0 },
+                { x: c, y: 0 },
+                { x: b * cos, y: b * Math.sqrt(Math.max(0, s1)) },
+              ],
+              ['A1', 'A2', 'A3'],
+              'shape only: A1 A2 drawn across, A3 above',
+            );
           });
         }
         return { results, checks: [], notes, ...(sketch ? { sketch } : {}) };
@@ -157,16 +293,29 @@ function crossSign<V>(A: Arithmetic<V, boolean>, t: Triangle<Value<V>>, i: 1 | 2
   }
   // Qj + Qk − Qi = 2√(Qj Qk)·cos θ: its sign, counted as 0 where |cos θ| ≤ 1e-9 (rounding).
   const d = A.toNumber(A.sub(A.add(qj as V, qk as V), qi as V));
-  return Math.abs(d) <= 2e-9 * Math.sqrt(A.toNumber(qj as V) * A.toNumber(qk as V)) ? 0 : Math.sign(d);
+  return Math.abs(d) <= 2e-9 * Math.sqrt(A.toNumber(qj as V) * A.toNumber(qk as V))
+    ? 0
+    : Math.sign(d);
 }
 
-function triangleSketch(title: string, p: { x: number; y: number }[], names: string[], caption?: string) {
+function triangleSketch(
+  title: string,
+  p: { x: number; y: number }[],
+  names: string[],
+  caption?: string,
+) {
   return {
     title,
     view: 'plan' as const,
     ...(caption ? { caption } : {}),
     points: p.map((q, i) => ({ name: names[i]!, ...q, role: 'control' as const })),
-    lines: p.map((q, i) => ({ x1: q.x, y1: q.y, x2: p[(i + 1) % 3]!.x, y2: p[(i + 1) % 3]!.y, role: 'boundary' as const })),
+    lines: p.map((q, i) => ({
+      x1: q.x,
+      y1: q.y,
+      x2: p[(i + 1) % 3]!.x,
+      y2: p[(i + 1) % 3]!.y,
+      role: 'boundary' as const,
+    })),
     notes: [],
   };
 }
