@@ -51,7 +51,7 @@ const OPS = {
 };
 // float has no fused kernels: `A.kernels` is `undefined` in the float copy. Parenthesised so
 // that `A.zero.toFixed(1)` stays valid code.
-const CONSTANTS = { zero: '(0)', one: '(1)', kernels: '(void 0)' };
+const CONSTANTS = { zero: '(0)', one: '(1)', kernels: '(void 0)', float64: '(true)' };
 /** The rewrite for the name `k`, own keys only (`A.toString`, `A.constructor` are left alone). */
 const own = (table, k) => (Object.hasOwn(table, k) ? table[k] : undefined);
 

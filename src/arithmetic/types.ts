@@ -102,6 +102,13 @@ export interface Arithmetic<T, E extends boolean = boolean> {
    * @internal
    */
   readonly kernels?: FusedKernels<T>;
+  /**
+   * `true` only for `float`: values are JS numbers and every operation is the IEEE binary64
+   * one with float's checks, so a solver may run its float twin (the same operations on plain
+   * numbers, proven equal by property tests) instead of the generic code. Performance only.
+   * @internal
+   */
+  readonly float64?: true;
 }
 
 /**

@@ -27,11 +27,16 @@ export function root<T>(A: Arithmetic<T>, x: T): T {
 export function claimedDigits<T>(A: Arithmetic<T>): number {
   const d = (A as { digits?: unknown }).digits;
   if (typeof d === 'number') return d;
-  const m = /decimal\((\d+)\)/.exec(A.name);
-  if (m) return Number(m[1]);
-  if (A.exact || /rational/.test(A.name)) return RATIONAL_TRANSCENDENTAL_DIGITS;
-  return 15;
+  let k = CLAIMED.get(A);
+  if (k === undefined) {
+    const m = /decimal\((\d+)\)/.exec(A.name);
+    k = m ? Number(m[1]) : A.exact || /rational/.test(A.name) ? RATIONAL_TRANSCENDENTAL_DIGITS : 15;
+    CLAIMED.set(A, k);
+  }
+  return k;
 }
+/** Digits already read from an arithmetic's name (a pure memo: arithmetics are immutable). */
+const CLAIMED = /* @__PURE__ */ new WeakMap<object, number>();
 
 /** @internal 10^−k in the arithmetic. */
 export function tenToMinus<T>(A: Arithmetic<T>, k: number): T {
