@@ -8,7 +8,6 @@
 import { QuadspreadError, show, invalidAngle } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber, shownInput } from '../geometry/validate.js';
-import { RATIONAL_TRANSCENDENTAL_DIGITS } from '../arithmetic/rational.js';
 import { decimal, type DecimalArithmetic } from '../arithmetic/decimal.js';
 import { Uncertain, uncertain } from '../arithmetic/uncertain.js';
 import { angleToDegrees, type AngleUnit } from '../readings/angle.js';
@@ -20,23 +19,13 @@ export function root<T>(A: Arithmetic<T>, x: T): T {
 }
 
 /**
- * @internal Significant digits an arithmetic's results claim: `digits` of a decimal
- * arithmetic (also inside an uncertain one, read from its name), 42 for an exact one
- * (its transcendental functions), 15 otherwise (float).
+ * @internal Significant digits an arithmetic's results claim ({@link Arithmetic.digits}): n
+ * for `decimal(n)` (also inside an uncertain one), 42 for `rational` (its transcendental
+ * functions), 15 for float.
  */
 export function claimedDigits<T>(A: Arithmetic<T>): number {
-  const d = (A as { digits?: unknown }).digits;
-  if (typeof d === 'number') return d;
-  let k = CLAIMED.get(A);
-  if (k === undefined) {
-    const m = /decimal\((\d+)\)/.exec(A.name);
-    k = m ? Number(m[1]) : A.exact || /rational/.test(A.name) ? RATIONAL_TRANSCENDENTAL_DIGITS : 15;
-    CLAIMED.set(A, k);
-  }
-  return k;
+  return A.digits;
 }
-/** Digits already read from an arithmetic's name (a pure memo: arithmetics are immutable). */
-const CLAIMED = /* @__PURE__ */ new WeakMap<object, number>();
 
 /** @internal 10^−k in the arithmetic. */
 export function tenToMinus<T>(A: Arithmetic<T>, k: number): T {
