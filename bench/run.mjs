@@ -19,6 +19,7 @@ import * as traverse from './workloads/traverse.mjs';
 import * as budget from './workloads/budget.mjs';
 import * as geodesy from './workloads/geodesy.mjs';
 import * as roundtrip from './workloads/roundtrip.mjs';
+import * as sideshots from './workloads/side-shots.mjs';
 
 const args = process.argv.slice(2);
 const quick = args.includes('--quick');
@@ -56,7 +57,7 @@ const t0 = Date.now();
 const arithmetics = [g.float, g.rational, g.decimal(34), g.decimal(20)];
 if (g.uncertain) arithmetics.push(g.uncertain(g.float), g.uncertain(g.rational));
 
-const workloads = [triangle, heights, traverse, budget, geodesy, roundtrip].filter(
+const workloads = [triangle, heights, traverse, budget, geodesy, roundtrip, sideshots].filter(
   (w) => !only || w.name === only,
 );
 const built = [];
