@@ -143,8 +143,14 @@ export const heightFromInlineQuadrances: Bound<typeof g.heightFromInlineQuadranc
 /** {@link g.heightFromInlineReadings | heightFromInlineReadings} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const heightFromInlineReadings: Bound<typeof g.heightFromInlineReadings<Value>> = (input) => g.heightFromInlineReadings<Value>(arithmetic, input);
 
+/** {@link g.heightFromQuadrance | heightFromQuadrance} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const heightFromQuadrance: Bound<typeof g.heightFromQuadrance<Value, true>> = (H, sign) => g.heightFromQuadrance<Value, true>(arithmetic, H, sign);
+
 /** {@link g.heightFromReading | heightFromReading} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const heightFromReading: Bound<typeof g.heightFromReading<Value>> = (input) => g.heightFromReading<Value>(arithmetic, input);
+
+/** {@link g.heightFromSight | heightFromSight} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const heightFromSight: Bound<typeof g.heightFromSight<Value, true>> = (input) => g.heightFromSight<Value, true>(arithmetic, input);
 
 /** {@link g.heightFromTwoStations | heightFromTwoStations} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const heightFromTwoStations: Bound<typeof g.heightFromTwoStations<Value>> = (input) => g.heightFromTwoStations<Value>(arithmetic, input);
@@ -394,9 +400,9 @@ export type {
   Point3Input, Pointing, PointInput, PolygonArea, RandomStream, Ratio, Rational,
   RationalArithmetic, ReciprocalTrigHeight, ReducedObservation, Resection, ResectionInput, Root,
   RoundOff, SetOut, SetOutCheck, SetOutOptions, SetOutTolerance, SetupInput, SetupTolerance,
-  Shot, SideShot, StationSetup, StewartChainages, StewartQuadrances, Surd, TmFactors,
-  TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse,
-  TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
+  Shot, SideShot, SightHeight, StationSetup, StewartChainages, StewartQuadrances, Surd,
+  TmFactors, TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure,
+  TraverseCourse, TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
   TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf, VerticalInput, VerticalKind,
   VerticalReading,
 } from '../index.js';
