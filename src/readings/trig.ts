@@ -55,12 +55,7 @@ export function modulo<T>(A: Arithmetic<T>, x: T, m: T, where = 'modulo(x)'): T 
   for (let i = 0; i < 8; i++) {
     if (A.sign(r) >= 0 && A.cmp(r, m) < 0) return r;
     const k = q !== undefined ? 0 : Math.floor(A.toNumber(A.div(r, m)));
-    r =
-      k === 0
-        ? A.sign(r) < 0
-          ? A.add(r, m)
-          : A.sub(r, m)
-        : A.sub(r, A.mul(A.from(k), m));
+    r = k === 0 ? (A.sign(r) < 0 ? A.add(r, m) : A.sub(r, m)) : A.sub(r, A.mul(A.from(k), m));
   }
   throw invalidAngle(
     where,
