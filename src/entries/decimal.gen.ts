@@ -113,6 +113,9 @@ export const formatDms: Bound<typeof g.formatDms<Value>> = (degrees, secondsDeci
 /** {@link g.forward | forward} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const forward: Bound<typeof g.forward<Value>> = (P, bearing, distance) => g.forward<Value>(arithmetic, P, bearing, distance);
 
+/** {@link g.freeStation | freeStation} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const freeStation: Bound<typeof g.freeStation<Value>> = (input) => g.freeStation<Value>(arithmetic, input);
+
 /** {@link g.gaussianMeanRadius | gaussianMeanRadius} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const gaussianMeanRadius: Bound<typeof g.gaussianMeanRadius<Value>> = (lat, ellipsoid) => g.gaussianMeanRadius<Value>(arithmetic, lat, ellipsoid);
 
@@ -257,6 +260,9 @@ export const quadrea: Bound<typeof g.quadrea<Value>> = (Q1, Q2, Q3) => g.quadrea
 /** {@link g.radiusInAzimuth | radiusInAzimuth} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const radiusInAzimuth: Bound<typeof g.radiusInAzimuth<Value>> = (lat, azimuth, ellipsoid) => g.radiusInAzimuth<Value>(arithmetic, lat, azimuth, ellipsoid);
 
+/** {@link g.reciprocalLevelling | reciprocalLevelling} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const reciprocalLevelling: Bound<typeof g.reciprocalLevelling<Value>> = (input) => g.reciprocalLevelling<Value>(arithmetic, input);
+
 /** {@link g.reciprocalTrigHeight | reciprocalTrigHeight} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const reciprocalTrigHeight: Bound<typeof g.reciprocalTrigHeight<Value, false>> = (input) => g.reciprocalTrigHeight<Value, false>(arithmetic, input);
 
@@ -365,6 +371,9 @@ export const tripleQuadResidual: Bound<typeof g.tripleQuadResidual<Value>> = (Q1
 /** {@link g.tripleSpreadResidual | tripleSpreadResidual} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const tripleSpreadResidual: Bound<typeof g.tripleSpreadResidual<Value>> = (s1, s2, s3) => g.tripleSpreadResidual<Value>(arithmetic, s1, s2, s3);
 
+/** {@link g.twoPegTest | twoPegTest} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const twoPegTest: Bound<typeof g.twoPegTest<Value>> = (input) => g.twoPegTest<Value>(arithmetic, input);
+
 /** {@link g.uncertain | uncertain} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const uncertain: Bound<typeof g.uncertain<Value, false>> = () => g.uncertain<Value, false>(arithmetic);
 
@@ -405,21 +414,22 @@ export {
 export type {
   AllowableMisclosure, AngleUnit, AngularMisclosure, AreaUnit, Arithmetic, Atmosphere,
   AtmosphericPpm, Backsight, BacksightResult, BaseHeight, BearingIntersection, Budget,
-  BudgetOptions, CircleInput, Contribution, CorrelationTerm, CurvatureOptions,
+  BudgetOptions, CircleInput, Contribution, ControlPoint, CorrelationTerm, CurvatureOptions,
   DatumTransformation, DatumTransformOptions, Decimal, DecimalArithmetic, DecimalElementary,
   Ellipsoid, EllipsoidDefinition, EllipsoidParameters, Enu, ErrorCode, FaceOptions, FieldCheck,
-  FieldObservation, FlatEarthError, FloatArithmetic, FootSide, Geocentric,
-  GeocentricTranslationParameters, Geodetic, GeodeticInput, Gradient, GridPoint, GridReduction,
-  HelmertConvention, HelmertParameters, InlineHeight, InlineQuadranceHeight, InputDistribution,
-  Inverse, LengthUnit, LevelCheck, LevellingOrder, LevelRow, LevelRun, LevelRunInput,
-  LevelSight, Line, Matrix3, MeanFaces, MolodenskyBadekasParameters, MonteCarloOptions,
-  MonteCarloResult, Numeric, OffsetMeasure, OrientInput, Point, Point3, Point3Input, Pointing,
-  PointInput, PolygonArea, RandomStream, Ratio, Rational, RationalArithmetic,
+  FieldObservation, FlatEarthError, FloatArithmetic, FootSide, FreeStation, FreeStationInput,
+  FreeStationResidual, Geocentric, GeocentricTranslationParameters, Geodetic, GeodeticInput,
+  Gradient, GridPoint, GridReduction, HelmertConvention, HelmertParameters, InlineHeight,
+  InlineQuadranceHeight, InputDistribution, Inverse, LengthUnit, LevelCheck, LevellingOrder,
+  LevelRow, LevelRun, LevelRunInput, LevelSight, Line, Matrix3, MeanFaces,
+  MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, Numeric, OffsetMeasure,
+  OrientInput, PegReadings, Point, Point3, Point3Input, Pointing, PointInput, PolygonArea,
+  RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalLevelling, ReciprocalSet,
   ReciprocalTrigHeight, ReducedObservation, Resection, ResectionInput, Root, RotationInput,
   RotationUnit, RoundOff, SetOut, SetOutCheck, SetOutOptions, SetOutTolerance, SetupInput,
-  SetupTolerance, Shot, SideShot, StationSetup, StewartChainages, StewartQuadrances, Surd,
-  TmFactors, TransformedPoint, TransverseMercator, TransverseMercatorGrid, Traverse,
-  TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg, Triangle, TriangleMeasures,
-  TrigHeight, TrigSight, TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf,
-  VerticalInput, VerticalKind, VerticalReading,
+  SetupTolerance, Shot, SideShot, StaffPair, StationObservation, StationSetup, StewartChainages,
+  StewartQuadrances, Surd, TmFactors, TransformedPoint, TransverseMercator,
+  TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg,
+  Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoPeg, TwoPegInput, TwoStationHeight,
+  UncertainArithmetic, UncertainInput, ValueOf, VerticalInput, VerticalKind, VerticalReading,
 } from '../index.js';
