@@ -152,8 +152,14 @@ export const heightFromInlineQuadrances: Bound<typeof g.heightFromInlineQuadranc
 /** {@link g.heightFromInlineReadings | heightFromInlineReadings} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const heightFromInlineReadings: Bound<typeof g.heightFromInlineReadings<Value>> = (input) => g.heightFromInlineReadings<Value>(arithmetic, input);
 
+/** {@link g.heightFromQuadrance | heightFromQuadrance} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const heightFromQuadrance: Bound<typeof g.heightFromQuadrance<Value, true>> = (H, sign) => g.heightFromQuadrance<Value, true>(arithmetic, H, sign);
+
 /** {@link g.heightFromReading | heightFromReading} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const heightFromReading: Bound<typeof g.heightFromReading<Value>> = (input) => g.heightFromReading<Value>(arithmetic, input);
+
+/** {@link g.heightFromSight | heightFromSight} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const heightFromSight: Bound<typeof g.heightFromSight<Value, true>> = (input) => g.heightFromSight<Value, true>(arithmetic, input);
 
 /** {@link g.heightFromTwoStations | heightFromTwoStations} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const heightFromTwoStations: Bound<typeof g.heightFromTwoStations<Value>> = (input) => g.heightFromTwoStations<Value>(arithmetic, input);
@@ -427,8 +433,8 @@ export type {
   RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalLevelling, ReciprocalSet,
   ReciprocalTrigHeight, ReducedObservation, Resection, ResectionInput, Root, RotationInput,
   RotationUnit, RoundOff, SetOut, SetOutCheck, SetOutOptions, SetOutTolerance, SetupInput,
-  SetupTolerance, Shot, SideShot, StaffPair, StationObservation, StationSetup, StewartChainages,
-  StewartQuadrances, Surd, TmFactors, TransformedPoint, TransverseMercator,
+  SetupTolerance, Shot, SideShot, SightHeight, StaffPair, StationObservation, StationSetup,
+  StewartChainages, StewartQuadrances, Surd, TmFactors, TransformedPoint, TransverseMercator,
   TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg,
   Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoPeg, TwoPegInput, TwoStationHeight,
   UncertainArithmetic, UncertainInput, ValueOf, VerticalInput, VerticalKind, VerticalReading,
