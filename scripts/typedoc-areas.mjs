@@ -13,6 +13,7 @@ const AREAS = {
   elevation: 'Elevation',
   cogo: 'Coordinates (cogo)',
   geodesy: 'Geodesy',
+  alignment: 'Alignment',
   uncertainty: 'Uncertainty',
   'errors.ts': 'Errors',
 };

@@ -63,6 +63,12 @@ export const ERROR_CODES = {
   UNKNOWN_ELLIPSOID: 'An ellipsoid that is not known.',
   INVALID_ELLIPSOID: 'Ellipsoid parameters that do not define an oblate ellipsoid.',
   NOT_CONVERGED: 'An iteration did not converge within its limit.',
+  // Alignment
+  CURVES_OVERLAP:
+    'Curves of an alignment that overlap: tangents longer than their leg, or a vertical curve running into the next or past an end.',
+  TRANSITION_TOO_LONG:
+    'Transition curves that turn through more than the deflection of their curve.',
+  OFF_ALIGNMENT: 'A chainage or a point beyond the ends of an alignment or a profile.',
   // Job runner
   INVALID_JOB: 'A job file that is not valid JSON or breaks the job schema.',
 } as const;

@@ -31,6 +31,12 @@ export type Bound<F> = F extends (A: never, ...rest: infer P) => infer R ? (...r
 /** The bound arithmetic: {@link g.float | float} (JS numbers; NaN and ±Infinity refused). */
 export const arithmetic: FloatArithmetic = float;
 
+/** {@link g.alignmentPoint | alignmentPoint} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const alignmentPoint: Bound<typeof g.alignmentPoint<Value>> = (alignment, chainage, offset, options) => g.alignmentPoint<Value>(arithmetic, alignment, chainage, offset, options);
+
+/** {@link g.alignmentStation | alignmentStation} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const alignmentStation: Bound<typeof g.alignmentStation<Value>> = (alignment, P, options) => g.alignmentStation<Value>(arithmetic, alignment, P, options);
+
 /** {@link g.allowableMisclosure | allowableMisclosure} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const allowableMisclosure: Bound<typeof g.allowableMisclosure<Value, false>> = (order, km) => g.allowableMisclosure<Value, false>(arithmetic, order, km);
 
@@ -55,6 +61,9 @@ export const azimuthToQuadrant: Bound<typeof g.azimuthToQuadrant<Value>> = (azim
 /** {@link g.bearingToAzimuth | bearingToAzimuth} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const bearingToAzimuth: Bound<typeof g.bearingToAzimuth<Value>> = (bearing) => g.bearingToAzimuth<Value>(arithmetic, bearing);
 
+/** {@link g.clothoid | clothoid} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const clothoid: Bound<typeof g.clothoid<Value>> = (input) => g.clothoid<Value>(arithmetic, input);
+
 /** {@link g.combinedFactor | combinedFactor} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const combinedFactor: Bound<typeof g.combinedFactor<Value>> = (heightFactor, scaleFactor) => g.combinedFactor<Value>(arithmetic, heightFactor, scaleFactor);
 
@@ -75,6 +84,9 @@ export const crossLawResidual: Bound<typeof g.crossLawResidual<Value>> = (Q1, Q2
 
 /** {@link g.curvatureRefraction | curvatureRefraction} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const curvatureRefraction: Bound<typeof g.curvatureRefraction<Value>> = (distance, options) => g.curvatureRefraction<Value>(arithmetic, distance, options);
+
+/** {@link g.deflectionTable | deflectionTable} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const deflectionTable: Bound<typeof g.deflectionTable<Value>> = (alignment, curve, options) => g.deflectionTable<Value>(arithmetic, alignment, curve, options);
 
 /** {@link g.degreesFromSpread | degreesFromSpread} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const degreesFromSpread: Bound<typeof g.degreesFromSpread<Value>> = (s) => g.degreesFromSpread<Value>(arithmetic, s);
@@ -102,6 +114,9 @@ export const footOfPerpendicular: Bound<typeof g.footOfPerpendicular<Value>> = (
 
 /** {@link g.formatDms | formatDms} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const formatDms: Bound<typeof g.formatDms<Value>> = (degrees, secondsDecimals) => g.formatDms<Value>(arithmetic, degrees, secondsDecimals);
+
+/** {@link g.formatStation | formatStation} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const formatStation: Bound<typeof g.formatStation<Value>> = (chainage, options) => g.formatStation<Value>(arithmetic, chainage, options);
 
 /** {@link g.forward | forward} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const forward: Bound<typeof g.forward<Value>> = (P, bearing, distance) => g.forward<Value>(arithmetic, P, bearing, distance);
@@ -147,6 +162,9 @@ export const heightFromTwoStations: Bound<typeof g.heightFromTwoStations<Value>>
 
 /** {@link g.heightReductionFactor | heightReductionFactor} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const heightReductionFactor: Bound<typeof g.heightReductionFactor<Value>> = (h, radius) => g.heightReductionFactor<Value>(arithmetic, h, radius);
+
+/** {@link g.horizontalAlignment | horizontalAlignment} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const horizontalAlignment: Bound<typeof g.horizontalAlignment<Value>> = (input) => g.horizontalAlignment<Value>(arithmetic, input);
 
 /** {@link g.horizontalFromHeight | horizontalFromHeight} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const horizontalFromHeight: Bound<typeof g.horizontalFromHeight<Value>> = (input) => g.horizontalFromHeight<Value>(arithmetic, input);
@@ -211,6 +229,9 @@ export const polygonArea: Bound<typeof g.polygonArea<Value>> = (points, options)
 /** {@link g.primeVerticalRadius | primeVerticalRadius} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const primeVerticalRadius: Bound<typeof g.primeVerticalRadius<Value>> = (lat, ellipsoid) => g.primeVerticalRadius<Value>(arithmetic, lat, ellipsoid);
 
+/** {@link g.profileLevel | profileLevel} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const profileLevel: Bound<typeof g.profileLevel<Value>> = (profile, chainage) => g.profileLevel<Value>(arithmetic, profile, chainage);
+
 /** {@link g.pythagorasResidual | pythagorasResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const pythagorasResidual: Bound<typeof g.pythagorasResidual<Value>> = (Q1, Q2, Q3) => g.pythagorasResidual<Value>(arithmetic, Q1, Q2, Q3);
 
@@ -226,6 +247,9 @@ export const quadrea: Bound<typeof g.quadrea<Value>> = (Q1, Q2, Q3) => g.quadrea
 /** {@link g.radiusInAzimuth | radiusInAzimuth} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const radiusInAzimuth: Bound<typeof g.radiusInAzimuth<Value>> = (lat, azimuth, ellipsoid) => g.radiusInAzimuth<Value>(arithmetic, lat, azimuth, ellipsoid);
 
+/** {@link g.readStation | readStation} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const readStation: Bound<typeof g.readStation<Value>> = (text) => g.readStation<Value>(arithmetic, text);
+
 /** {@link g.reciprocalTrigHeight | reciprocalTrigHeight} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const reciprocalTrigHeight: Bound<typeof g.reciprocalTrigHeight<Value, false>> = (input) => g.reciprocalTrigHeight<Value, false>(arithmetic, input);
 
@@ -240,6 +264,9 @@ export const rootToPrecision: Bound<typeof g.rootToPrecision<Value, false>> = (r
 
 /** {@link g.rootToString | rootToString} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const rootToString: Bound<typeof g.rootToString<Value, false>> = (r) => g.rootToString<Value, false>(arithmetic, r);
+
+/** {@link g.settingOutTable | settingOutTable} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const settingOutTable: Bound<typeof g.settingOutTable<Value>> = (alignment, options) => g.settingOutTable<Value>(arithmetic, alignment, options);
 
 /** {@link g.sinCosDegrees | sinCosDegrees} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const sinCosDegrees: Bound<typeof g.sinCosDegrees<Value>> = (degrees) => g.sinCosDegrees<Value>(arithmetic, degrees);
@@ -328,6 +355,9 @@ export const vectorQuadrance: Bound<typeof g.vectorQuadrance<Value>> = (v) => g.
 /** {@link g.vertical | vertical} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const vertical: Bound<typeof g.vertical<Value>> = (spread, sign) => g.vertical<Value>(arithmetic, spread, sign);
 
+/** {@link g.verticalAlignment | verticalAlignment} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const verticalAlignment: Bound<typeof g.verticalAlignment<Value>> = (input) => g.verticalAlignment<Value>(arithmetic, input);
+
 /** {@link g.verticalFromAngle | verticalFromAngle} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const verticalFromAngle: Bound<typeof g.verticalFromAngle<Value>> = (angle, options) => g.verticalFromAngle<Value>(arithmetic, angle, options);
 
@@ -357,17 +387,22 @@ export {
   withDerivative,
 } from './index.js';
 export type {
-  AllowableMisclosure, AngleUnit, AngularMisclosure, AreaUnit, Arithmetic, BaseHeight,
-  BearingIntersection, Budget, BudgetOptions, CircleInput, Contribution, CorrelationTerm,
-  CurvatureOptions, Decimal, DecimalArithmetic, DecimalElementary, Ellipsoid,
-  EllipsoidDefinition, EllipsoidParameters, Enu, ErrorCode, FlatEarthError, FloatArithmetic,
-  FootSide, Geocentric, Geodetic, GeodeticInput, Gradient, GridPoint, InlineHeight,
-  InlineQuadranceHeight, InputDistribution, Inverse, LengthUnit, LevelCheck, LevellingOrder,
-  LevelRow, LevelRun, LevelRunInput, LevelSight, Line, Matrix3, MonteCarloOptions,
-  MonteCarloResult, Numeric, OffsetMeasure, Point, PointInput, PolygonArea, RandomStream, Ratio,
-  Rational, RationalArithmetic, ReciprocalTrigHeight, Resection, ResectionInput, Root, RoundOff,
-  StewartChainages, StewartQuadrances, Surd, TmFactors, TransverseMercator,
+  AlignmentElement, AlignmentPoint, AlignmentStation, AlignmentStationOptions,
+  AllowableMisclosure, AngleUnit, AngularMisclosure, ArcElement, AreaUnit, Arithmetic,
+  BaseHeight, BearingIntersection, Budget, BudgetOptions, ChainageEquation,
+  ChainageEquationInput, CircleInput, Clothoid, Contribution, CorrelationTerm, CurvatureOptions,
+  Decimal, DecimalArithmetic, DecimalElementary, DeflectionRow, Ellipsoid, EllipsoidDefinition,
+  EllipsoidParameters, Enu, ErrorCode, FlatEarthError, FloatArithmetic, FootSide, Geocentric,
+  Geodetic, GeodeticInput, Gradient, GridPoint, HorizontalAlignment, HorizontalAlignmentInput,
+  HorizontalCurve, HorizontalCurveInput, InlineHeight, InlineQuadranceHeight, InputDistribution,
+  Inverse, KeyPoint, LengthUnit, LevelCheck, LevellingOrder, LevelRow, LevelRun, LevelRunInput,
+  LevelSight, Line, Matrix3, MonteCarloOptions, MonteCarloResult, Numeric, OffsetMeasure, Point,
+  PointInput, PolygonArea, ProfileLevel, ProfilePointInput, RandomStream, Ratio, Rational,
+  RationalArithmetic, ReciprocalTrigHeight, Resection, ResectionInput, Root, RoundOff,
+  SetOutPoint, SettingOutRow, StationCandidate, StewartChainages, StewartQuadrances,
+  StraightElement, Surd, TmFactors, TransitionElement, TransitionMeasures, TransverseMercator,
   TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg,
   Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoStationHeight, UncertainArithmetic,
-  UncertainInput, ValueOf, VerticalInput, VerticalKind, VerticalReading,
+  UncertainInput, ValueOf, VerticalAlignment, VerticalAlignmentInput, VerticalCurve,
+  VerticalCurveInput, VerticalInput, VerticalKind, VerticalReading,
 } from './index.js';
