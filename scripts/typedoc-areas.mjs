@@ -14,7 +14,10 @@ const AREAS = {
   cogo: 'Coordinates (cogo)',
   geodesy: 'Geodesy',
   alignment: 'Alignment',
+  adjustment: 'Adjustment',
+  field: 'Field work',
   uncertainty: 'Uncertainty',
+  io: 'Data exchange (io)',
   'errors.ts': 'Errors',
 };
 const ORDER = Object.values(AREAS);
@@ -41,13 +44,9 @@ export function load(app) {
     const area = AREAS[first];
     if (area) {
       areaOfReflection.set(reflection.id, area);
-      if (
-        !areaOfName.has(reflection.name) &&
-        first !== 'rational.ts' &&
-        first !== 'decimal.ts' &&
-        first !== 'float.ts'
-      )
-        areaOfName.set(reflection.name, area);
+      // (the generated bound entries, src/entries/, are no area: their names keep the area of
+      // the generic function they bind)
+      if (!areaOfName.has(reflection.name)) areaOfName.set(reflection.name, area);
     }
   });
 

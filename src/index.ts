@@ -12,4 +12,5 @@ export * from './elevation/index.js';
 export * from './cogo/index.js';
 export * from './geodesy/index.js';
 export * from './alignment/index.js';
+export * from './field/index.js';
 export * from './uncertainty/index.js';
