@@ -125,6 +125,9 @@ export const formatStation: Bound<typeof g.formatStation<Value>> = (chainage, op
 /** {@link g.forward | forward} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const forward: Bound<typeof g.forward<Value>> = (P, bearing, distance) => g.forward<Value>(arithmetic, P, bearing, distance);
 
+/** {@link g.freeStation | freeStation} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const freeStation: Bound<typeof g.freeStation<Value>> = (input) => g.freeStation<Value>(arithmetic, input);
+
 /** {@link g.gaussianMeanRadius | gaussianMeanRadius} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const gaussianMeanRadius: Bound<typeof g.gaussianMeanRadius<Value>> = (lat, ellipsoid) => g.gaussianMeanRadius<Value>(arithmetic, lat, ellipsoid);
 
@@ -260,6 +263,9 @@ export const radiusInAzimuth: Bound<typeof g.radiusInAzimuth<Value>> = (lat, azi
 /** {@link g.readStation | readStation} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const readStation: Bound<typeof g.readStation<Value>> = (text) => g.readStation<Value>(arithmetic, text);
 
+/** {@link g.reciprocalLevelling | reciprocalLevelling} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const reciprocalLevelling: Bound<typeof g.reciprocalLevelling<Value>> = (input) => g.reciprocalLevelling<Value>(arithmetic, input);
+
 /** {@link g.reciprocalTrigHeight | reciprocalTrigHeight} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const reciprocalTrigHeight: Bound<typeof g.reciprocalTrigHeight<Value, true>> = (input) => g.reciprocalTrigHeight<Value, true>(arithmetic, input);
 
@@ -371,6 +377,9 @@ export const tripleQuadResidual: Bound<typeof g.tripleQuadResidual<Value>> = (Q1
 /** {@link g.tripleSpreadResidual | tripleSpreadResidual} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const tripleSpreadResidual: Bound<typeof g.tripleSpreadResidual<Value>> = (s1, s2, s3) => g.tripleSpreadResidual<Value>(arithmetic, s1, s2, s3);
 
+/** {@link g.twoPegTest | twoPegTest} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const twoPegTest: Bound<typeof g.twoPegTest<Value>> = (input) => g.twoPegTest<Value>(arithmetic, input);
+
 /** {@link g.uncertain | uncertain} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const uncertain: Bound<typeof g.uncertain<Value, true>> = () => g.uncertain<Value, true>(arithmetic);
 
@@ -416,22 +425,24 @@ export type {
   AllowableMisclosure, AngleUnit, AngularMisclosure, ArcElement, AreaUnit, Arithmetic,
   Atmosphere, AtmosphericPpm, Backsight, BacksightResult, BaseHeight, BearingIntersection,
   Budget, BudgetOptions, ChainageEquation, ChainageEquationInput, CircleInput, Clothoid,
-  Contribution, CorrelationTerm, CurvatureOptions, Decimal, DecimalArithmetic,
+  Contribution, ControlPoint, CorrelationTerm, CurvatureOptions, Decimal, DecimalArithmetic,
   DecimalElementary, DeflectionRow, Ellipsoid, EllipsoidDefinition, EllipsoidParameters, Enu,
   ErrorCode, FaceOptions, FieldCheck, FieldObservation, FlatEarthError, FloatArithmetic,
-  FootSide, Geocentric, Geodetic, GeodeticInput, Gradient, GridPoint, GridReduction,
-  HorizontalAlignment, HorizontalAlignmentInput, HorizontalCurve, HorizontalCurveInput,
-  InlineHeight, InlineQuadranceHeight, InputDistribution, Inverse, KeyPoint, LengthUnit,
-  LevelCheck, LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, Matrix3,
-  MeanFaces, MonteCarloOptions, MonteCarloResult, Numeric, OffsetMeasure, OrientInput, Point,
+  FootSide, FreeStation, FreeStationInput, FreeStationResidual, Geocentric, Geodetic,
+  GeodeticInput, Gradient, GridPoint, GridReduction, HorizontalAlignment,
+  HorizontalAlignmentInput, HorizontalCurve, HorizontalCurveInput, InlineHeight,
+  InlineQuadranceHeight, InputDistribution, Inverse, KeyPoint, LengthUnit, LevelCheck,
+  LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, Matrix3, MeanFaces,
+  MonteCarloOptions, MonteCarloResult, Numeric, OffsetMeasure, OrientInput, PegReadings, Point,
   Point3, Point3Input, Pointing, PointInput, PolygonArea, ProfileLevel, ProfilePointInput,
-  RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalTrigHeight, ReducedObservation,
-  Resection, ResectionInput, Root, RoundOff, SetOut, SetOutCheck, SetOutOptions, SetOutPoint,
-  SetOutTolerance, SettingOutRow, SetupInput, SetupTolerance, Shot, SideShot, StationCandidate,
-  StationSetup, StewartChainages, StewartQuadrances, StraightElement, Surd, TmFactors,
-  TransitionElement, TransitionMeasures, TransverseMercator, TransverseMercatorGrid, Traverse,
-  TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg, Triangle, TriangleMeasures,
-  TrigHeight, TrigSight, TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf,
+  RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalLevelling, ReciprocalSet,
+  ReciprocalTrigHeight, ReducedObservation, Resection, ResectionInput, Root, RoundOff, SetOut,
+  SetOutCheck, SetOutOptions, SetOutPoint, SetOutTolerance, SettingOutRow, SetupInput,
+  SetupTolerance, Shot, SideShot, StaffPair, StationCandidate, StationObservation, StationSetup,
+  StewartChainages, StewartQuadrances, StraightElement, Surd, TmFactors, TransitionElement,
+  TransitionMeasures, TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure,
+  TraverseCourse, TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
+  TwoPeg, TwoPegInput, TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf,
   VerticalAlignment, VerticalAlignmentInput, VerticalCurve, VerticalCurveInput, VerticalInput,
   VerticalKind, VerticalReading,
 } from '../index.js';
