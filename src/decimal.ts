@@ -31,6 +31,9 @@ export type Bound<F> = F extends (A: never, ...rest: infer P) => infer R ? (...r
 /** The bound arithmetic: {@link g.decimal | decimal(34)} (34 significant digits, ties to even; IEEE 754 decimal128 precision). */
 export const arithmetic: DecimalArithmetic = /* @__PURE__ */ decimal(34);
 
+/** {@link g.adjustLevelling | adjustLevelling} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const adjustLevelling: Bound<typeof g.adjustLevelling<Value, false>> = (input) => g.adjustLevelling<Value, false>(arithmetic, input);
+
 /** {@link g.allowableMisclosure | allowableMisclosure} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const allowableMisclosure: Bound<typeof g.allowableMisclosure<Value, false>> = (order, km) => g.allowableMisclosure<Value, false>(arithmetic, order, km);
 
@@ -347,27 +350,31 @@ export const zenithFromVertical: Bound<typeof g.zenithFromVertical<Value>> = (re
 export const zenithToElevation: Bound<typeof g.zenithToElevation<Value>> = (degrees) => g.zenithToElevation<Value>(arithmetic, degrees);
 
 export {
-  ANGLE_UNITS, AREA_UNITS, BEARING_PARALLEL_TOLERANCE, budget, DANGER_CIRCLE_TOLERANCE, decimal,
-  decimalElementary, DEFAULT_EARTH_RADIUS_M, DEFAULT_REFRACTION, defineEllipsoid,
-  ellipsoidByName, ERROR_CODES, float, GRS80, isSurd, LEVELLING_ORDERS, MAX_DECIMAL_DIGITS,
-  MAX_EXPONENT, MAX_INPUT_LENGTH, measured, measuredAngle, measuredDistance, measuredGrade,
-  measuredQuadrance, measuredSpread, measuredVertical, METRES_PER_UNIT, monteCarlo,
-  normalInputs, QuadspreadError, randomStream, rational, RATIONAL_TRANSCENDENTAL_DIGITS,
-  readRatio, roundOff, sensitivities, spreadOfAngle, Uncertain, verticalOfAngle, WGS84,
-  withDerivative,
+  ANGLE_UNITS, AREA_UNITS, baardaTest, BEARING_PARALLEL_TOLERANCE, budget, chiSquareCdf,
+  chiSquareQuantile, DANGER_CIRCLE_TOLERANCE, decimal, decimalElementary,
+  DEFAULT_EARTH_RADIUS_M, DEFAULT_REFRACTION, defineEllipsoid, ellipsoidByName, ERROR_CODES,
+  fCdf, float, fQuantile, GRS80, isSurd, LEVELLING_ORDERS, MAX_DECIMAL_DIGITS, MAX_EXPONENT,
+  MAX_INPUT_LENGTH, measured, measuredAngle, measuredDistance, measuredGrade, measuredQuadrance,
+  measuredSpread, measuredVertical, METRES_PER_UNIT, monteCarlo, normalCdf, normalInputs,
+  normalQuantile, QuadspreadError, randomStream, rational, RATIONAL_TRANSCENDENTAL_DIGITS,
+  readRatio, roundOff, sensitivities, spreadOfAngle, tauCritical, Uncertain, verticalOfAngle,
+  WGS84, withDerivative,
 } from './index.js';
 export type {
-  AllowableMisclosure, AngleUnit, AngularMisclosure, AreaUnit, Arithmetic, BaseHeight,
-  BearingIntersection, Budget, BudgetOptions, CircleInput, Contribution, CorrelationTerm,
-  CurvatureOptions, Decimal, DecimalArithmetic, DecimalElementary, Ellipsoid,
-  EllipsoidDefinition, EllipsoidParameters, Enu, ErrorCode, FlatEarthError, FloatArithmetic,
-  FootSide, Geocentric, Geodetic, GeodeticInput, Gradient, GridPoint, InlineHeight,
-  InlineQuadranceHeight, InputDistribution, Inverse, LengthUnit, LevelCheck, LevellingOrder,
-  LevelRow, LevelRun, LevelRunInput, LevelSight, Line, Matrix3, MonteCarloOptions,
-  MonteCarloResult, Numeric, OffsetMeasure, Point, PointInput, PolygonArea, RandomStream, Ratio,
+  AdjustedHeight, AdjustedLevelObservation, AllowableMisclosure, AngleUnit, AngularMisclosure,
+  AreaUnit, Arithmetic, BaardaTest, BaseHeight, BearingIntersection, BenchmarkInput, Budget,
+  BudgetOptions, CircleInput, Contribution, CorrelationTerm, CurvatureOptions, Decimal,
+  DecimalArithmetic, DecimalElementary, Ellipsoid, EllipsoidDefinition, EllipsoidParameters,
+  Enu, ErrorCode, FlatEarthError, FloatArithmetic, FootSide, Geocentric, Geodetic,
+  GeodeticInput, GlobalTest, Gradient, GridPoint, InlineHeight, InlineQuadranceHeight,
+  InputDistribution, Inverse, LengthUnit, LevelCheck, LevellingAdjustment, LevellingInput,
+  LevellingObservationInput, LevellingOptions, LevellingOrder, LevelRow, LevelRun,
+  LevelRunInput, LevelSight, Line, LocalTest, Matrix3, MonteCarloOptions, MonteCarloResult,
+  Numeric, ObservationTest, OffsetMeasure, Point, PointInput, PolygonArea, RandomStream, Ratio,
   Rational, RationalArithmetic, ReciprocalTrigHeight, Resection, ResectionInput, Root, RoundOff,
-  StewartChainages, StewartQuadrances, Surd, TmFactors, TransverseMercator,
-  TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg,
-  Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoStationHeight, UncertainArithmetic,
-  UncertainInput, ValueOf, VerticalInput, VerticalKind, VerticalReading,
+  SnoopingRemoval, SnoopingReport, StewartChainages, StewartQuadrances, Surd, TestOptions,
+  TmFactors, TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure,
+  TraverseCourse, TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
+  TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf, VerticalInput, VerticalKind,
+  VerticalReading,
 } from './index.js';

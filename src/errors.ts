@@ -63,6 +63,14 @@ export const ERROR_CODES = {
   UNKNOWN_ELLIPSOID: 'An ellipsoid that is not known.',
   INVALID_ELLIPSOID: 'Ellipsoid parameters that do not define an oblate ellipsoid.',
   NOT_CONVERGED: 'An iteration did not converge within its limit.',
+  // Adjustment
+  UNKNOWN_POINT: 'A point name that is not in the network.',
+  DATUM_DEFECT:
+    'A network whose datum is not fixed: too few fixed points, weighted points or constraints.',
+  DISCONNECTED_NETWORK: 'Points that no chain of observations connects to the datum.',
+  SINGULAR_NETWORK:
+    'Observations that do not determine a point (weak geometry): the normal equations are singular.',
+  TOO_FEW_OBSERVATIONS: 'Fewer observations than the computation needs.',
   // Job runner
   INVALID_JOB: 'A job file that is not valid JSON or breaks the job schema.',
 } as const;

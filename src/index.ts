@@ -12,3 +12,4 @@ export * from './elevation/index.js';
 export * from './cogo/index.js';
 export * from './geodesy/index.js';
 export * from './uncertainty/index.js';
+export * from './adjustment/index.js';
