@@ -300,13 +300,13 @@ function resolveTs(dir, spec) {
  * The esbuild plugin.
  * @param {{ entries?: string[], srcDir?: string, exclude?: RegExp }} [options]
  *   `entries`: absolute paths of the entry files whose module graphs are specialised
- *   (default `<cwd>/src/float.ts`); `srcDir`: the sources' root (default `<cwd>/src`);
+ *   (default `<cwd>/src/entries/float.gen.ts`); `srcDir`: the sources' root (default `<cwd>/src`);
  *   `exclude`: modules never rewritten (default: the arithmetics and errors).
  */
 export function floatSpecialize(options = {}) {
   const srcDir = options.srcDir ?? path.resolve('src');
   const entries = new Set(
-    (options.entries ?? [path.join(srcDir, 'float.ts')]).map((e) => path.resolve(e)),
+    (options.entries ?? [path.join(srcDir, 'entries', 'float.gen.ts')]).map((e) => path.resolve(e)),
   );
   const exclude = options.exclude ?? /[\\/]src[\\/](arithmetic[\\/]|errors\.ts$)/;
   return {
