@@ -113,6 +113,9 @@ export const formatDms: Bound<typeof g.formatDms<Value>> = (degrees, secondsDeci
 /** {@link g.forward | forward} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const forward: Bound<typeof g.forward<Value>> = (P, bearing, distance) => g.forward<Value>(arithmetic, P, bearing, distance);
 
+/** {@link g.freeStation | freeStation} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const freeStation: Bound<typeof g.freeStation<Value>> = (input) => g.freeStation<Value>(arithmetic, input);
+
 /** {@link g.gaussianMeanRadius | gaussianMeanRadius} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const gaussianMeanRadius: Bound<typeof g.gaussianMeanRadius<Value>> = (lat, ellipsoid) => g.gaussianMeanRadius<Value>(arithmetic, lat, ellipsoid);
 
@@ -239,6 +242,9 @@ export const quadrea: Bound<typeof g.quadrea<Value>> = (Q1, Q2, Q3) => g.quadrea
 /** {@link g.radiusInAzimuth | radiusInAzimuth} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const radiusInAzimuth: Bound<typeof g.radiusInAzimuth<Value>> = (lat, azimuth, ellipsoid) => g.radiusInAzimuth<Value>(arithmetic, lat, azimuth, ellipsoid);
 
+/** {@link g.reciprocalLevelling | reciprocalLevelling} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const reciprocalLevelling: Bound<typeof g.reciprocalLevelling<Value>> = (input) => g.reciprocalLevelling<Value>(arithmetic, input);
+
 /** {@link g.reciprocalTrigHeight | reciprocalTrigHeight} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const reciprocalTrigHeight: Bound<typeof g.reciprocalTrigHeight<Value, true>> = (input) => g.reciprocalTrigHeight<Value, true>(arithmetic, input);
 
@@ -347,6 +353,9 @@ export const tripleQuadResidual: Bound<typeof g.tripleQuadResidual<Value>> = (Q1
 /** {@link g.tripleSpreadResidual | tripleSpreadResidual} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const tripleSpreadResidual: Bound<typeof g.tripleSpreadResidual<Value>> = (s1, s2, s3) => g.tripleSpreadResidual<Value>(arithmetic, s1, s2, s3);
 
+/** {@link g.twoPegTest | twoPegTest} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const twoPegTest: Bound<typeof g.twoPegTest<Value>> = (input) => g.twoPegTest<Value>(arithmetic, input);
+
 /** {@link g.uncertain | uncertain} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const uncertain: Bound<typeof g.uncertain<Value, true>> = () => g.uncertain<Value, true>(arithmetic);
 
@@ -389,20 +398,22 @@ export type {
   AdjustedHeight, AdjustedLevelObservation, AllowableMisclosure, AngleUnit, AngularMisclosure,
   AreaUnit, Arithmetic, Atmosphere, AtmosphericPpm, BaardaTest, Backsight, BacksightResult,
   BaseHeight, BearingIntersection, BenchmarkInput, Budget, BudgetOptions, CircleInput,
-  Contribution, CorrelationTerm, CurvatureOptions, Decimal, DecimalArithmetic,
+  Contribution, ControlPoint, CorrelationTerm, CurvatureOptions, Decimal, DecimalArithmetic,
   DecimalElementary, Ellipsoid, EllipsoidDefinition, EllipsoidParameters, Enu, ErrorCode,
   FaceOptions, FieldCheck, FieldObservation, FlatEarthError, FloatArithmetic, FootSide,
-  Geocentric, Geodetic, GeodeticInput, GlobalTest, Gradient, GridPoint, GridReduction,
-  InlineHeight, InlineQuadranceHeight, InputDistribution, Inverse, LengthUnit, LevelCheck,
-  LevellingAdjustment, LevellingInput, LevellingObservationInput, LevellingOptions,
-  LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, LocalTest, Matrix3,
-  MeanFaces, MonteCarloOptions, MonteCarloResult, Numeric, ObservationTest, OffsetMeasure,
-  OrientInput, Point, Point3, Point3Input, Pointing, PointInput, PolygonArea, RandomStream,
-  Ratio, Rational, RationalArithmetic, ReciprocalTrigHeight, ReducedObservation, Resection,
-  ResectionInput, Root, RoundOff, SetOut, SetOutCheck, SetOutOptions, SetOutTolerance,
-  SetupInput, SetupTolerance, Shot, SideShot, SnoopingRemoval, SnoopingReport, StationSetup,
-  StewartChainages, StewartQuadrances, Surd, TestOptions, TmFactors, TransverseMercator,
-  TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg,
-  Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoStationHeight, UncertainArithmetic,
-  UncertainInput, ValueOf, VerticalInput, VerticalKind, VerticalReading,
+  FreeStation, FreeStationInput, FreeStationResidual, Geocentric, Geodetic, GeodeticInput,
+  GlobalTest, Gradient, GridPoint, GridReduction, InlineHeight, InlineQuadranceHeight,
+  InputDistribution, Inverse, LengthUnit, LevelCheck, LevellingAdjustment, LevellingInput,
+  LevellingObservationInput, LevellingOptions, LevellingOrder, LevelRow, LevelRun,
+  LevelRunInput, LevelSight, Line, LocalTest, Matrix3, MeanFaces, MonteCarloOptions,
+  MonteCarloResult, Numeric, ObservationTest, OffsetMeasure, OrientInput, PegReadings, Point,
+  Point3, Point3Input, Pointing, PointInput, PolygonArea, RandomStream, Ratio, Rational,
+  RationalArithmetic, ReciprocalLevelling, ReciprocalSet, ReciprocalTrigHeight,
+  ReducedObservation, Resection, ResectionInput, Root, RoundOff, SetOut, SetOutCheck,
+  SetOutOptions, SetOutTolerance, SetupInput, SetupTolerance, Shot, SideShot, SnoopingRemoval,
+  SnoopingReport, StaffPair, StationObservation, StationSetup, StewartChainages,
+  StewartQuadrances, Surd, TestOptions, TmFactors, TransverseMercator, TransverseMercatorGrid,
+  Traverse, TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg, Triangle,
+  TriangleMeasures, TrigHeight, TrigSight, TwoPeg, TwoPegInput, TwoStationHeight,
+  UncertainArithmetic, UncertainInput, ValueOf, VerticalInput, VerticalKind, VerticalReading,
 } from '../index.js';
