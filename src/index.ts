@@ -14,3 +14,4 @@ export * from './geodesy/index.js';
 export * from './alignment/index.js';
 export * from './field/index.js';
 export * from './uncertainty/index.js';
+export * from './adjustment/index.js';

@@ -32,6 +32,9 @@ export type Bound<F> = F extends (A: never, ...rest: infer P) => infer R ? (...r
 /** The bound arithmetic: {@link g.decimal | decimal(34)} (34 significant digits, ties to even; IEEE 754 decimal128 precision). */
 export const arithmetic: DecimalArithmetic = /* @__PURE__ */ decimal(34);
 
+/** {@link g.adjustLevelling | adjustLevelling} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const adjustLevelling: Bound<typeof g.adjustLevelling<Value, false>> = (input) => g.adjustLevelling<Value, false>(arithmetic, input);
+
 /** {@link g.alignmentPoint | alignmentPoint} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const alignmentPoint: Bound<typeof g.alignmentPoint<Value>> = (alignment, chainage, offset, options) => g.alignmentPoint<Value>(arithmetic, alignment, chainage, offset, options);
 
@@ -438,40 +441,44 @@ export const zenithFromVertical: Bound<typeof g.zenithFromVertical<Value>> = (re
 export const zenithToElevation: Bound<typeof g.zenithToElevation<Value>> = (degrees) => g.zenithToElevation<Value>(arithmetic, degrees);
 
 export {
-  ANGLE_UNITS, AREA_UNITS, BEARING_PARALLEL_TOLERANCE, budget, DANGER_CIRCLE_TOLERANCE, decimal,
-  decimalElementary, DEFAULT_EARTH_RADIUS_M, DEFAULT_REFRACTION, defineEllipsoid,
-  ellipsoidByName, ERROR_CODES, float, GRS80, isSurd, LEVELLING_ORDERS, MAX_DECIMAL_DIGITS,
-  MAX_EXPONENT, MAX_INPUT_LENGTH, measured, measuredAngle, measuredDistance, measuredGrade,
-  measuredQuadrance, measuredSpread, measuredVertical, METRES_PER_UNIT, monteCarlo,
-  normalInputs, QuadspreadError, randomStream, rational, RATIONAL_TRANSCENDENTAL_DIGITS,
-  readRatio, roundOff, sensitivities, spreadOfAngle, Uncertain, verticalOfAngle, WGS84,
-  withDerivative,
+  ANGLE_UNITS, AREA_UNITS, baardaTest, BEARING_PARALLEL_TOLERANCE, budget, chiSquareCdf,
+  chiSquareQuantile, DANGER_CIRCLE_TOLERANCE, decimal, decimalElementary,
+  DEFAULT_EARTH_RADIUS_M, DEFAULT_REFRACTION, defineEllipsoid, ellipsoidByName, ERROR_CODES,
+  fCdf, float, fQuantile, GRS80, isSurd, LEVELLING_ORDERS, MAX_DECIMAL_DIGITS, MAX_EXPONENT,
+  MAX_INPUT_LENGTH, measured, measuredAngle, measuredDistance, measuredGrade, measuredQuadrance,
+  measuredSpread, measuredVertical, METRES_PER_UNIT, monteCarlo, normalCdf, normalInputs,
+  normalQuantile, QuadspreadError, randomStream, rational, RATIONAL_TRANSCENDENTAL_DIGITS,
+  readRatio, roundOff, sensitivities, spreadOfAngle, tauCritical, Uncertain, verticalOfAngle,
+  WGS84, withDerivative,
 } from '../index.js';
 export type {
-  AlignmentElement, AlignmentPoint, AlignmentStation, AlignmentStationOptions,
-  AllowableMisclosure, AngleUnit, AngularMisclosure, ArcElement, AreaUnit, Arithmetic,
-  Atmosphere, AtmosphericPpm, Backsight, BacksightResult, BaseHeight, BearingIntersection,
-  Budget, BudgetOptions, ChainageEquation, ChainageEquationInput, CircleInput, Clothoid,
-  Contribution, ControlPoint, CorrelationTerm, CurvatureOptions, DatumTransformation,
-  DatumTransformOptions, Decimal, DecimalArithmetic, DecimalElementary, DeflectionRow,
-  Ellipsoid, EllipsoidDefinition, EllipsoidParameters, Enu, ErrorCode, FaceOptions, FieldCheck,
-  FieldObservation, FlatEarthError, FloatArithmetic, FootSide, FreeStation, FreeStationInput,
-  FreeStationResidual, Geocentric, GeocentricTranslationParameters, Geodetic, GeodeticInput,
-  Gradient, GridPoint, GridReduction, HelmertConvention, HelmertParameters, HorizontalAlignment,
+  AdjustedHeight, AdjustedLevelObservation, AlignmentElement, AlignmentPoint, AlignmentStation,
+  AlignmentStationOptions, AllowableMisclosure, AngleUnit, AngularMisclosure, ArcElement,
+  AreaUnit, Arithmetic, Atmosphere, AtmosphericPpm, BaardaTest, Backsight, BacksightResult,
+  BaseHeight, BearingIntersection, BenchmarkInput, Budget, BudgetOptions, ChainageEquation,
+  ChainageEquationInput, CircleInput, Clothoid, Contribution, ControlPoint, CorrelationTerm,
+  CurvatureOptions, DatumTransformation, DatumTransformOptions, Decimal, DecimalArithmetic,
+  DecimalElementary, DeflectionRow, Ellipsoid, EllipsoidDefinition, EllipsoidParameters, Enu,
+  ErrorCode, FaceOptions, FieldCheck, FieldObservation, FlatEarthError, FloatArithmetic,
+  FootSide, FreeStation, FreeStationInput, FreeStationResidual, Geocentric,
+  GeocentricTranslationParameters, Geodetic, GeodeticInput, GlobalTest, Gradient, GridPoint,
+  GridReduction, HelmertConvention, HelmertParameters, HorizontalAlignment,
   HorizontalAlignmentInput, HorizontalCurve, HorizontalCurveInput, InlineHeight,
   InlineQuadranceHeight, InputDistribution, Inverse, KeyPoint, LengthUnit, LevelCheck,
-  LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, Matrix3, MeanFaces,
-  MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, Numeric, OffsetMeasure,
-  OrientInput, PegReadings, Point, Point3, Point3Input, Pointing, PointInput, PolygonArea,
-  ProfileLevel, ProfilePointInput, RandomStream, Ratio, Rational, RationalArithmetic,
-  ReciprocalLevelling, ReciprocalSet, ReciprocalTrigHeight, ReducedObservation, Resection,
-  ResectionInput, Root, RotationInput, RotationUnit, RoundOff, SetOut, SetOutCheck,
-  SetOutOptions, SetOutPoint, SetOutTolerance, SettingOutRow, SetupInput, SetupTolerance, Shot,
-  SideShot, SightHeight, StaffPair, StationCandidate, StationObservation, StationSetup,
-  StewartChainages, StewartQuadrances, StraightElement, Surd, TmFactors, TransformedPoint,
-  TransitionElement, TransitionMeasures, TransverseMercator, TransverseMercatorGrid, Traverse,
-  TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg, Triangle, TriangleMeasures,
-  TrigHeight, TrigSight, TwoPeg, TwoPegInput, TwoStationHeight, UncertainArithmetic,
-  UncertainInput, ValueOf, VerticalAlignment, VerticalAlignmentInput, VerticalCurve,
-  VerticalCurveInput, VerticalInput, VerticalKind, VerticalReading,
+  LevellingAdjustment, LevellingInput, LevellingObservationInput, LevellingOptions,
+  LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, LocalTest, Matrix3,
+  MeanFaces, MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, Numeric,
+  ObservationTest, OffsetMeasure, OrientInput, PegReadings, Point, Point3, Point3Input,
+  Pointing, PointInput, PolygonArea, ProfileLevel, ProfilePointInput, RandomStream, Ratio,
+  Rational, RationalArithmetic, ReciprocalLevelling, ReciprocalSet, ReciprocalTrigHeight,
+  ReducedObservation, Resection, ResectionInput, Root, RotationInput, RotationUnit, RoundOff,
+  SetOut, SetOutCheck, SetOutOptions, SetOutPoint, SetOutTolerance, SettingOutRow, SetupInput,
+  SetupTolerance, Shot, SideShot, SightHeight, SnoopingRemoval, SnoopingReport, StaffPair,
+  StationCandidate, StationObservation, StationSetup, StewartChainages, StewartQuadrances,
+  StraightElement, Surd, TestOptions, TmFactors, TransformedPoint, TransitionElement,
+  TransitionMeasures, TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure,
+  TraverseCourse, TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
+  TwoPeg, TwoPegInput, TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf,
+  VerticalAlignment, VerticalAlignmentInput, VerticalCurve, VerticalCurveInput, VerticalInput,
+  VerticalKind, VerticalReading,
 } from '../index.js';
