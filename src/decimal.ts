@@ -46,8 +46,20 @@ export const archimedesResidual: Bound<typeof g.archimedesResidual<Value>> = (Q1
 /** {@link g.area | area} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const area: Bound<typeof g.area<Value>> = (points) => g.area<Value>(arithmetic, points);
 
+/** {@link g.asin | asin} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const asin: Bound<typeof g.asin<Value>> = (x) => g.asin<Value>(arithmetic, x);
+
+/** {@link g.asinh | asinh} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const asinh: Bound<typeof g.asinh<Value>> = (x) => g.asinh<Value>(arithmetic, x);
+
 /** {@link g.asRoot | asRoot} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const asRoot: Bound<typeof g.asRoot<Value, false>> = (x) => g.asRoot<Value, false>(arithmetic, x);
+
+/** {@link g.atan | atan} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const atan: Bound<typeof g.atan<Value>> = (x) => g.atan<Value>(arithmetic, x);
+
+/** {@link g.atanh | atanh} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const atanh: Bound<typeof g.atanh<Value>> = (x) => g.atanh<Value>(arithmetic, x);
 
 /** {@link g.azimuthToQuadrant | azimuthToQuadrant} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const azimuthToQuadrant: Bound<typeof g.azimuthToQuadrant<Value>> = (azimuth, secondsDecimals) => g.azimuthToQuadrant<Value>(arithmetic, azimuth, secondsDecimals);
@@ -66,6 +78,9 @@ export const convertLength: Bound<typeof g.convertLength<Value>> = (value, from,
 
 /** {@link g.convertQuadrance | convertQuadrance} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const convertQuadrance: Bound<typeof g.convertQuadrance<Value>> = (quadrance, from, to) => g.convertQuadrance<Value>(arithmetic, quadrance, from, to);
+
+/** {@link g.cosh | cosh} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const cosh: Bound<typeof g.cosh<Value>> = (x) => g.cosh<Value>(arithmetic, x);
 
 /** {@link g.cross | cross} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const cross: Bound<typeof g.cross<Value>> = (V, P, Q) => g.cross<Value>(arithmetic, V, P, Q);
@@ -208,6 +223,9 @@ export const point: Bound<typeof g.point<Value>> = (x, y) => g.point<Value>(arit
 /** {@link g.polygonArea | polygonArea} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const polygonArea: Bound<typeof g.polygonArea<Value>> = (points, options) => g.polygonArea<Value>(arithmetic, points, options);
 
+/** {@link g.pow | pow} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const pow: Bound<typeof g.pow<Value>> = (x, y) => g.pow<Value>(arithmetic, x, y);
+
 /** {@link g.primeVerticalRadius | primeVerticalRadius} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const primeVerticalRadius: Bound<typeof g.primeVerticalRadius<Value>> = (lat, ellipsoid) => g.primeVerticalRadius<Value>(arithmetic, lat, ellipsoid);
 
@@ -243,6 +261,9 @@ export const rootToString: Bound<typeof g.rootToString<Value, false>> = (r) => g
 
 /** {@link g.sinCosDegrees | sinCosDegrees} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const sinCosDegrees: Bound<typeof g.sinCosDegrees<Value>> = (degrees) => g.sinCosDegrees<Value>(arithmetic, degrees);
+
+/** {@link g.sinh | sinh} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const sinh: Bound<typeof g.sinh<Value>> = (x) => g.sinh<Value>(arithmetic, x);
 
 /** {@link g.solveQuadratic | solveQuadratic} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const solveQuadratic: Bound<typeof g.solveQuadratic<Value, false>> = (a, b, c) => g.solveQuadratic<Value, false>(arithmetic, a, b, c);
@@ -294,6 +315,12 @@ export const stewartResidual: Bound<typeof g.stewartResidual<Value>> = (data) =>
 
 /** {@link g.surd | surd} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const surd: Bound<typeof g.surd<Value>> = (a, b, d) => g.surd<Value>(arithmetic, a, b, d);
+
+/** {@link g.tan | tan} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const tan: Bound<typeof g.tan<Value>> = (x) => g.tan<Value>(arithmetic, x);
+
+/** {@link g.tanh | tanh} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const tanh: Bound<typeof g.tanh<Value>> = (x) => g.tanh<Value>(arithmetic, x);
 
 /** {@link g.transverseMercator | transverseMercator} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const transverseMercator: Bound<typeof g.transverseMercator<Value>> = (point, projection) => g.transverseMercator<Value>(arithmetic, point, projection);
