@@ -121,6 +121,9 @@ export const formatDms: Bound<typeof g.formatDms<Value>> = (degrees, secondsDeci
 /** {@link g.forward | forward} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const forward: Bound<typeof g.forward<Value>> = (P, bearing, distance) => g.forward<Value>(arithmetic, P, bearing, distance);
 
+/** {@link g.fromGrid | fromGrid} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const fromGrid: Bound<typeof g.fromGrid<Value>> = (point, projection) => g.fromGrid<Value>(arithmetic, point, projection);
+
 /** {@link g.gaussianMeanRadius | gaussianMeanRadius} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const gaussianMeanRadius: Bound<typeof g.gaussianMeanRadius<Value>> = (lat, ellipsoid) => g.gaussianMeanRadius<Value>(arithmetic, lat, ellipsoid);
 
@@ -190,6 +193,12 @@ export const isParallel: Bound<typeof g.isParallel<Value>> = (l1, l2) => g.isPar
 /** {@link g.isPerpendicular | isPerpendicular} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const isPerpendicular: Bound<typeof g.isPerpendicular<Value>> = (l1, l2) => g.isPerpendicular<Value>(arithmetic, l1, l2);
 
+/** {@link g.lambertConic | lambertConic} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const lambertConic: Bound<typeof g.lambertConic<Value>> = (point, projection) => g.lambertConic<Value>(arithmetic, point, projection);
+
+/** {@link g.lambertConicInverse | lambertConicInverse} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const lambertConicInverse: Bound<typeof g.lambertConicInverse<Value>> = (point, projection) => g.lambertConicInverse<Value>(arithmetic, point, projection);
+
 /** {@link g.lengthToMetres | lengthToMetres} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const lengthToMetres: Bound<typeof g.lengthToMetres<Value>> = (value, unit) => g.lengthToMetres<Value>(arithmetic, value, unit);
 
@@ -225,6 +234,9 @@ export const polygonArea: Bound<typeof g.polygonArea<Value>> = (points, options)
 
 /** {@link g.pow | pow} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const pow: Bound<typeof g.pow<Value>> = (x, y) => g.pow<Value>(arithmetic, x, y);
+
+/** {@link g.prepareProjection | prepareProjection} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const prepareProjection: Bound<typeof g.prepareProjection<Value>> = (projection) => g.prepareProjection<Value>(arithmetic, projection);
 
 /** {@link g.primeVerticalRadius | primeVerticalRadius} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const primeVerticalRadius: Bound<typeof g.primeVerticalRadius<Value>> = (lat, ellipsoid) => g.primeVerticalRadius<Value>(arithmetic, lat, ellipsoid);
@@ -322,6 +334,9 @@ export const tan: Bound<typeof g.tan<Value>> = (x) => g.tan<Value>(arithmetic, x
 /** {@link g.tanh | tanh} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const tanh: Bound<typeof g.tanh<Value>> = (x) => g.tanh<Value>(arithmetic, x);
 
+/** {@link g.toGrid | toGrid} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const toGrid: Bound<typeof g.toGrid<Value>> = (point, projection) => g.toGrid<Value>(arithmetic, point, projection);
+
 /** {@link g.transverseMercator | transverseMercator} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const transverseMercator: Bound<typeof g.transverseMercator<Value>> = (point, projection) => g.transverseMercator<Value>(arithmetic, point, projection);
 
@@ -388,13 +403,15 @@ export type {
   BearingIntersection, Budget, BudgetOptions, CircleInput, Contribution, CorrelationTerm,
   CurvatureOptions, Decimal, DecimalArithmetic, DecimalElementary, Ellipsoid,
   EllipsoidDefinition, EllipsoidParameters, Enu, ErrorCode, FlatEarthError, FloatArithmetic,
-  FootSide, Geocentric, Geodetic, GeodeticInput, Gradient, GridPoint, InlineHeight,
-  InlineQuadranceHeight, InputDistribution, Inverse, LengthUnit, LevelCheck, LevellingOrder,
-  LevelRow, LevelRun, LevelRunInput, LevelSight, Line, Matrix3, MonteCarloOptions,
-  MonteCarloResult, Numeric, OffsetMeasure, Point, PointInput, PolygonArea, RandomStream, Ratio,
-  Rational, RationalArithmetic, ReciprocalTrigHeight, Resection, ResectionInput, Root, RoundOff,
-  StewartChainages, StewartQuadrances, Surd, TmFactors, TransverseMercator,
-  TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg,
-  Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoStationHeight, UncertainArithmetic,
-  UncertainInput, ValueOf, VerticalInput, VerticalKind, VerticalReading,
+  FootSide, Geocentric, Geodetic, GeodeticInput, GeographicPoint, Gradient, GridPoint,
+  InlineHeight, InlineQuadranceHeight, InputDistribution, Inverse, LengthUnit, LevelCheck,
+  LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, LinearUnit, Matrix3,
+  MonteCarloOptions, MonteCarloResult, Numeric, OffsetMeasure, Point, PointInput, PolygonArea,
+  PreparedProjection, ProjectedPoint, Projection, ProjectionAngleUnit, ProjectionMethod,
+  RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalTrigHeight, Resection,
+  ResectionInput, Root, RoundOff, StewartChainages, StewartQuadrances, Surd, TmFactors,
+  TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse,
+  TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
+  TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf, VerticalInput, VerticalKind,
+  VerticalReading,
 } from './index.js';

@@ -63,6 +63,12 @@ export const ERROR_CODES = {
   UNKNOWN_ELLIPSOID: 'An ellipsoid that is not known.',
   INVALID_ELLIPSOID: 'Ellipsoid parameters that do not define an oblate ellipsoid.',
   NOT_CONVERGED: 'An iteration did not converge within its limit.',
+  // Map projections
+  UNKNOWN_METHOD: 'A projection method that is not known.',
+  MISSING_PARAMETER: 'A parameter the projection method needs is missing.',
+  OUTSIDE_DOMAIN:
+    'A point outside the domain of a projection (a pole in Mercator, the antipode of an azimuthal projection).',
+  UNKNOWN_CRS: 'A coordinate reference system code that is not in the table.',
   // Job runner
   INVALID_JOB: 'A job file that is not valid JSON or breaks the job schema.',
 } as const;

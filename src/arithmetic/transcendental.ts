@@ -13,7 +13,7 @@
  * @module arithmetic
  */
 import { show, noRealSolution } from '../errors.js';
-import type { Arithmetic } from './types.js';
+import type { Arithmetic, Numeric } from './types.js';
 
 /** √x for x ≥ 0: the arithmetic's own root, or e^(ln x / 2) where it has no exact one. */
 function sqrtAny<T>(A: Arithmetic<T>, x: T): T {
@@ -26,9 +26,10 @@ function sqrtAny<T>(A: Arithmetic<T>, x: T): T {
  * The hyperbolic sine, sinh x = (e^x − e^−x)/2 (definition).
  *
  * @param A the arithmetic
- * @param x the argument
+ * @param value the argument
  * @returns sinh x
- * @throws {QuadspreadError} as the arithmetic's `exp` for |x| too large.
+ * @throws {QuadspreadError} as the arithmetic's `exp` for |x| too large; `INVALID_NUMBER` for
+ *   a value that is not a number.
  * @example
  * ```ts
  * import { float, sinh } from 'quadspread';
@@ -36,7 +37,8 @@ function sqrtAny<T>(A: Arithmetic<T>, x: T): T {
  * //=> '1.175201193644'
  * ```
  */
-export function sinh<T>(A: Arithmetic<T>, x: T): T {
+export function sinh<T>(A: Arithmetic<T>, value: Numeric<T>): T {
+  const x = A.from(value);
   const u = A.exp(x);
   return A.div(A.sub(u, A.div(A.one, u)), A.from(2));
 }
@@ -45,9 +47,10 @@ export function sinh<T>(A: Arithmetic<T>, x: T): T {
  * The hyperbolic cosine, cosh x = (e^x + e^−x)/2 (definition).
  *
  * @param A the arithmetic
- * @param x the argument
+ * @param value the argument
  * @returns cosh x (≥ 1)
- * @throws {QuadspreadError} as the arithmetic's `exp` for |x| too large.
+ * @throws {QuadspreadError} as the arithmetic's `exp` for |x| too large; `INVALID_NUMBER` for
+ *   a value that is not a number.
  * @example
  * ```ts
  * import { float, cosh } from 'quadspread';
@@ -55,7 +58,8 @@ export function sinh<T>(A: Arithmetic<T>, x: T): T {
  * //=> '1.543080634815'
  * ```
  */
-export function cosh<T>(A: Arithmetic<T>, x: T): T {
+export function cosh<T>(A: Arithmetic<T>, value: Numeric<T>): T {
+  const x = A.from(value);
   const u = A.exp(x);
   return A.div(A.add(u, A.div(A.one, u)), A.from(2));
 }
@@ -65,8 +69,9 @@ export function cosh<T>(A: Arithmetic<T>, x: T): T {
  * written so that the exponential never overflows).
  *
  * @param A the arithmetic
- * @param x the argument
+ * @param value the argument
  * @returns tanh x in (−1, 1)
+ * @throws {QuadspreadError} `INVALID_NUMBER` for a value that is not a number.
  * @example
  * ```ts
  * import { float, tanh } from 'quadspread';
@@ -74,7 +79,8 @@ export function cosh<T>(A: Arithmetic<T>, x: T): T {
  * //=> '0.761594155956'
  * ```
  */
-export function tanh<T>(A: Arithmetic<T>, x: T): T {
+export function tanh<T>(A: Arithmetic<T>, value: Numeric<T>): T {
+  const x = A.from(value);
   if (A.isZero(x)) return x;
   const neg = A.sign(x) < 0;
   const u = A.exp(A.mul(A.from(-2), A.abs(x)));
@@ -86,7 +92,7 @@ export function tanh<T>(A: Arithmetic<T>, x: T): T {
  * The inverse hyperbolic tangent, atanh x = ½ ln((1 + x)/(1 − x)) (definition), |x| < 1.
  *
  * @param A the arithmetic
- * @param x the argument, −1 < x < 1
+ * @param value the argument, −1 < x < 1
  * @returns atanh x
  * @throws {QuadspreadError} `NO_REAL_SOLUTION` when |x| ≥ 1.
  * @example
@@ -96,7 +102,8 @@ export function tanh<T>(A: Arithmetic<T>, x: T): T {
  * //=> '0.549306144334'
  * ```
  */
-export function atanh<T>(A: Arithmetic<T>, x: T): T {
+export function atanh<T>(A: Arithmetic<T>, value: Numeric<T>): T {
+  const x = A.from(value);
   if (A.cmp(A.abs(x), A.one) >= 0)
     throw noRealSolution('atanh(A, x)', `|x| = ${show(A.toString(A.abs(x)))} is not below 1`);
   if (A.isZero(x)) return x;
@@ -108,8 +115,9 @@ export function atanh<T>(A: Arithmetic<T>, x: T): T {
  * written so that no cancellation occurs for large negative x).
  *
  * @param A the arithmetic
- * @param x the argument
+ * @param value the argument
  * @returns asinh x
+ * @throws {QuadspreadError} `INVALID_NUMBER` for a value that is not a number.
  * @example
  * ```ts
  * import { float, asinh } from 'quadspread';
@@ -117,7 +125,8 @@ export function atanh<T>(A: Arithmetic<T>, x: T): T {
  * //=> '0.881373587020'
  * ```
  */
-export function asinh<T>(A: Arithmetic<T>, x: T): T {
+export function asinh<T>(A: Arithmetic<T>, value: Numeric<T>): T {
+  const x = A.from(value);
   if (A.isZero(x)) return x;
   const ax = A.abs(x);
   const r = A.log(A.add(ax, sqrtAny(A, A.add(A.mul(ax, ax), A.one))));
@@ -129,8 +138,8 @@ export function asinh<T>(A: Arithmetic<T>, x: T): T {
  * `rational`; any other exponent as e^(y ln x), which needs x ≥ 0.
  *
  * @param A the arithmetic
- * @param x the base
- * @param y the exponent
+ * @param base the base
+ * @param exponent the exponent
  * @returns x^y
  * @throws {QuadspreadError} `NO_REAL_SOLUTION` for x < 0 with a non-integer y;
  *   `DIVISION_BY_ZERO` for 0 to a negative power.
@@ -143,14 +152,16 @@ export function asinh<T>(A: Arithmetic<T>, x: T): T {
  * //=> '1.414213562373'
  * ```
  */
-export function pow<T>(A: Arithmetic<T>, x: T, y: T): T {
+export function pow<T>(A: Arithmetic<T>, base: Numeric<T>, exponent: Numeric<T>): T {
+  const x = A.from(base);
+  const y = A.from(exponent);
   const yn = Math.round(A.toNumber(y));
   if (Math.abs(yn) <= 1024 && A.eq(A.from(yn), y)) {
-    let base = x;
+    let b = x;
     let result = A.one;
     for (let k = Math.abs(yn); k > 0; k >>= 1) {
-      if (k & 1) result = A.mul(result, base);
-      if (k > 1) base = A.mul(base, base);
+      if (k & 1) result = A.mul(result, b);
+      if (k > 1) b = A.mul(b, b);
     }
     return yn < 0 ? A.div(A.one, result) : result;
   }
@@ -171,7 +182,7 @@ export function pow<T>(A: Arithmetic<T>, x: T, y: T): T {
  * tan x = sin x / cos x, x in radians.
  *
  * @param A the arithmetic
- * @param x the angle in radians
+ * @param value the angle in radians
  * @returns tan x
  * @throws {QuadspreadError} `DIVISION_BY_ZERO` where the arithmetic's cos x is 0.
  * @example
@@ -181,7 +192,8 @@ export function pow<T>(A: Arithmetic<T>, x: T, y: T): T {
  * //=> '1.557407724655'
  * ```
  */
-export function tan<T>(A: Arithmetic<T>, x: T): T {
+export function tan<T>(A: Arithmetic<T>, value: Numeric<T>): T {
+  const x = A.from(value);
   return A.div(A.sin(x), A.cos(x));
 }
 
@@ -189,8 +201,9 @@ export function tan<T>(A: Arithmetic<T>, x: T): T {
  * atan x in (−π/2, π/2) radians, as atan2(x, 1).
  *
  * @param A the arithmetic
- * @param x the argument
+ * @param value the argument
  * @returns atan x in radians
+ * @throws {QuadspreadError} `INVALID_NUMBER` for a value that is not a number.
  * @example
  * ```ts
  * import { float, atan } from 'quadspread';
@@ -198,7 +211,8 @@ export function tan<T>(A: Arithmetic<T>, x: T): T {
  * //=> 3.141592653589793
  * ```
  */
-export function atan<T>(A: Arithmetic<T>, x: T): T {
+export function atan<T>(A: Arithmetic<T>, value: Numeric<T>): T {
+  const x = A.from(value);
   if (A.isZero(x)) return x;
   return A.atan2(x, A.one);
 }
@@ -207,7 +221,7 @@ export function atan<T>(A: Arithmetic<T>, x: T): T {
  * asin x in [−π/2, π/2] radians, as atan2(x, √(1 − x²)).
  *
  * @param A the arithmetic
- * @param x the argument, −1 ≤ x ≤ 1
+ * @param value the argument, −1 ≤ x ≤ 1
  * @returns asin x in radians
  * @throws {QuadspreadError} `NO_REAL_SOLUTION` when |x| > 1.
  * @example
@@ -217,7 +231,8 @@ export function atan<T>(A: Arithmetic<T>, x: T): T {
  * //=> '0.523598775598'
  * ```
  */
-export function asin<T>(A: Arithmetic<T>, x: T): T {
+export function asin<T>(A: Arithmetic<T>, value: Numeric<T>): T {
+  const x = A.from(value);
   const c2 = A.sub(A.one, A.mul(x, x));
   if (A.sign(c2) < 0)
     throw noRealSolution('asin(A, x)', `|x| = ${show(A.toString(A.abs(x)))} is above 1`);

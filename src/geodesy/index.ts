@@ -27,3 +27,14 @@ export {
   gridToGround,
 } from './grid.js';
 export type { TransverseMercator, TransverseMercatorGrid, TmFactors, GridPoint } from './grid.js';
+export type {
+  Projection,
+  ProjectionMethod,
+  ProjectionAngleUnit,
+  LinearUnit,
+  PreparedProjection,
+  ProjectedPoint,
+  GeographicPoint,
+} from './projection-core.js';
+export { toGrid, fromGrid, prepareProjection } from './projection.js';
+export { lambertConic, lambertConicInverse } from './lambert-conic.js';
