@@ -179,7 +179,7 @@ if (!only || only === 'triangle') {
   );
 }
 
-// Headline: the triangle workload (a), the one measured before any code existed (DESIGN.md);
+// Headline: the triangle workload (a), the one measured before any code existed (docs/design.md);
 // the other workloads' ratios are printed above and tabled in docs/performance.md.
 const pick = (list) => (list.find((r) => r.workload === 'triangle') ?? list[0])?.ratio;
 const hf = pick(headline.float),
