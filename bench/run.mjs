@@ -17,6 +17,7 @@ import * as triangle from './workloads/triangle.mjs';
 import * as heights from './workloads/heights.mjs';
 import * as traverse from './workloads/traverse.mjs';
 import * as budget from './workloads/budget.mjs';
+import * as sideshots from './workloads/side-shots.mjs';
 
 const args = process.argv.slice(2);
 const quick = args.includes('--quick');
@@ -54,7 +55,9 @@ const t0 = Date.now();
 const arithmetics = [g.float, g.rational, g.decimal(34), g.decimal(20)];
 if (g.uncertain) arithmetics.push(g.uncertain(g.float), g.uncertain(g.rational));
 
-const workloads = [triangle, heights, traverse, budget].filter((w) => !only || w.name === only);
+const workloads = [triangle, heights, traverse, budget, sideshots].filter(
+  (w) => !only || w.name === only,
+);
 const built = [];
 for (const w of workloads) {
   const why = w.unavailable?.(lib);

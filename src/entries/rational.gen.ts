@@ -62,6 +62,9 @@ export const atan: Bound<typeof g.atan<Value>> = (value) => g.atan<Value>(arithm
 /** {@link g.atanh | atanh} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const atanh: Bound<typeof g.atanh<Value>> = (value) => g.atanh<Value>(arithmetic, value);
 
+/** {@link g.atmosphericPpm | atmosphericPpm} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const atmosphericPpm: Bound<typeof g.atmosphericPpm<Value>> = (atmosphere) => g.atmosphericPpm<Value>(arithmetic, atmosphere);
+
 /** {@link g.azimuthToQuadrant | azimuthToQuadrant} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const azimuthToQuadrant: Bound<typeof g.azimuthToQuadrant<Value>> = (azimuth, secondsDecimals) => g.azimuthToQuadrant<Value>(arithmetic, azimuth, secondsDecimals);
 
@@ -212,11 +215,17 @@ export const line: Bound<typeof g.line<Value>> = (a, b, c) => g.line<Value>(arit
 /** {@link g.lineThrough | lineThrough} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const lineThrough: Bound<typeof g.lineThrough<Value>> = (P, Q) => g.lineThrough<Value>(arithmetic, P, Q);
 
+/** {@link g.meanFaces | meanFaces} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const meanFaces: Bound<typeof g.meanFaces<Value>> = (left, right, options) => g.meanFaces<Value>(arithmetic, left, right, options);
+
 /** {@link g.meridianRadius | meridianRadius} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const meridianRadius: Bound<typeof g.meridianRadius<Value>> = (lat, ellipsoid) => g.meridianRadius<Value>(arithmetic, lat, ellipsoid);
 
 /** {@link g.metresToLength | metresToLength} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const metresToLength: Bound<typeof g.metresToLength<Value>> = (metres, unit) => g.metresToLength<Value>(arithmetic, metres, unit);
+
+/** {@link g.orientStation | orientStation} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const orientStation: Bound<typeof g.orientStation<Value>> = (input) => g.orientStation<Value>(arithmetic, input);
 
 /** {@link g.pathGrade | pathGrade} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const pathGrade: Bound<typeof g.pathGrade<Value>> = (input) => g.pathGrade<Value>(arithmetic, input);
@@ -260,6 +269,9 @@ export const radiusInAzimuth: Bound<typeof g.radiusInAzimuth<Value>> = (lat, azi
 /** {@link g.reciprocalTrigHeight | reciprocalTrigHeight} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const reciprocalTrigHeight: Bound<typeof g.reciprocalTrigHeight<Value, true>> = (input) => g.reciprocalTrigHeight<Value, true>(arithmetic, input);
 
+/** {@link g.reduceObservation | reduceObservation} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const reduceObservation: Bound<typeof g.reduceObservation<Value>> = (observation) => g.reduceObservation<Value>(arithmetic, observation);
+
 /** {@link g.resection | resection} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const resection: Bound<typeof g.resection<Value>> = (input) => g.resection<Value>(arithmetic, input);
 
@@ -271,6 +283,18 @@ export const rootToPrecision: Bound<typeof g.rootToPrecision<Value, true>> = (r,
 
 /** {@link g.rootToString | rootToString} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const rootToString: Bound<typeof g.rootToString<Value, true>> = (r) => g.rootToString<Value, true>(arithmetic, r);
+
+/** {@link g.setOut | setOut} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const setOut: Bound<typeof g.setOut<Value>> = (setup, design, options) => g.setOut<Value>(arithmetic, setup, design, options);
+
+/** {@link g.setOutCheck | setOutCheck} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const setOutCheck: Bound<typeof g.setOutCheck<Value>> = (setup, design, observation, tolerance) => g.setOutCheck<Value>(arithmetic, setup, design, observation, tolerance);
+
+/** {@link g.sideShot | sideShot} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const sideShot: Bound<typeof g.sideShot<Value>> = (setup, shot) => g.sideShot<Value>(arithmetic, setup, shot);
+
+/** {@link g.sideShots | sideShots} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const sideShots: Bound<typeof g.sideShots<Value>> = (setup, shots) => g.sideShots<Value>(arithmetic, setup, shots);
 
 /** {@link g.sinCosDegrees | sinCosDegrees} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const sinCosDegrees: Bound<typeof g.sinCosDegrees<Value>> = (degrees) => g.sinCosDegrees<Value>(arithmetic, degrees);
@@ -400,19 +424,22 @@ export {
   withDerivative,
 } from '../index.js';
 export type {
-  AllowableMisclosure, AngleUnit, AngularMisclosure, AreaUnit, Arithmetic, BaseHeight,
-  BearingIntersection, Budget, BudgetOptions, CircleInput, Contribution, CorrelationTerm,
-  CurvatureOptions, Decimal, DecimalArithmetic, DecimalElementary, Ellipsoid,
-  EllipsoidDefinition, EllipsoidParameters, Enu, ErrorCode, FlatEarthError, FloatArithmetic,
+  AllowableMisclosure, AngleUnit, AngularMisclosure, AreaUnit, Arithmetic, Atmosphere,
+  AtmosphericPpm, Backsight, BacksightResult, BaseHeight, BearingIntersection, Budget,
+  BudgetOptions, CircleInput, Contribution, CorrelationTerm, CurvatureOptions, Decimal,
+  DecimalArithmetic, DecimalElementary, Ellipsoid, EllipsoidDefinition, EllipsoidParameters,
+  Enu, ErrorCode, FaceOptions, FieldCheck, FieldObservation, FlatEarthError, FloatArithmetic,
   FootSide, Geocentric, Geodetic, GeodeticInput, GeographicPoint, Gradient, GridPoint,
-  InlineHeight, InlineQuadranceHeight, InputDistribution, Inverse, LengthUnit, LevelCheck,
-  LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, LinearUnit, Matrix3,
-  MonteCarloOptions, MonteCarloResult, Numeric, OffsetMeasure, Point, PointInput, PolygonArea,
-  PreparedProjection, ProjectedPoint, Projection, ProjectionAngleUnit, ProjectionMethod,
-  RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalTrigHeight, Resection,
-  ResectionInput, Root, RoundOff, StewartChainages, StewartQuadrances, Surd, TmFactors,
-  TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse,
-  TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
+  GridReduction, InlineHeight, InlineQuadranceHeight, InputDistribution, Inverse, LengthUnit,
+  LevelCheck, LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, LinearUnit,
+  Matrix3, MeanFaces, MonteCarloOptions, MonteCarloResult, Numeric, OffsetMeasure, OrientInput,
+  Point, Point3, Point3Input, Pointing, PointInput, PolygonArea, PreparedProjection,
+  ProjectedPoint, Projection, ProjectionAngleUnit, ProjectionMethod, RandomStream, Ratio,
+  Rational, RationalArithmetic, ReciprocalTrigHeight, ReducedObservation, Resection,
+  ResectionInput, Root, RoundOff, SetOut, SetOutCheck, SetOutOptions, SetOutTolerance,
+  SetupInput, SetupTolerance, Shot, SideShot, StationSetup, StewartChainages, StewartQuadrances,
+  Surd, TmFactors, TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure,
+  TraverseCourse, TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
   TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf, VerticalInput, VerticalKind,
   VerticalReading,
 } from '../index.js';
