@@ -218,11 +218,23 @@ export const lineThrough: Bound<typeof g.lineThrough<Value>> = (P, Q) => g.lineT
 /** {@link g.meanFaces | meanFaces} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const meanFaces: Bound<typeof g.meanFaces<Value>> = (left, right, options) => g.meanFaces<Value>(arithmetic, left, right, options);
 
+/** {@link g.mercator | mercator} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const mercator: Bound<typeof g.mercator<Value>> = (point, projection) => g.mercator<Value>(arithmetic, point, projection);
+
+/** {@link g.mercatorInverse | mercatorInverse} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const mercatorInverse: Bound<typeof g.mercatorInverse<Value>> = (point, projection) => g.mercatorInverse<Value>(arithmetic, point, projection);
+
 /** {@link g.meridianRadius | meridianRadius} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const meridianRadius: Bound<typeof g.meridianRadius<Value>> = (lat, ellipsoid) => g.meridianRadius<Value>(arithmetic, lat, ellipsoid);
 
 /** {@link g.metresToLength | metresToLength} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const metresToLength: Bound<typeof g.metresToLength<Value>> = (metres, unit) => g.metresToLength<Value>(arithmetic, metres, unit);
+
+/** {@link g.obliqueStereographic | obliqueStereographic} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const obliqueStereographic: Bound<typeof g.obliqueStereographic<Value>> = (point, projection) => g.obliqueStereographic<Value>(arithmetic, point, projection);
+
+/** {@link g.obliqueStereographicInverse | obliqueStereographicInverse} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const obliqueStereographicInverse: Bound<typeof g.obliqueStereographicInverse<Value>> = (point, projection) => g.obliqueStereographicInverse<Value>(arithmetic, point, projection);
 
 /** {@link g.orientStation | orientStation} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const orientStation: Bound<typeof g.orientStation<Value>> = (input) => g.orientStation<Value>(arithmetic, input);
@@ -238,6 +250,12 @@ export const perimeter: Bound<typeof g.perimeter<Value>> = (points) => g.perimet
 
 /** {@link g.point | point} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const point: Bound<typeof g.point<Value>> = (x, y) => g.point<Value>(arithmetic, x, y);
+
+/** {@link g.polarStereographic | polarStereographic} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const polarStereographic: Bound<typeof g.polarStereographic<Value>> = (point, projection) => g.polarStereographic<Value>(arithmetic, point, projection);
+
+/** {@link g.polarStereographicInverse | polarStereographicInverse} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const polarStereographicInverse: Bound<typeof g.polarStereographicInverse<Value>> = (point, projection) => g.polarStereographicInverse<Value>(arithmetic, point, projection);
 
 /** {@link g.polygonArea | polygonArea} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const polygonArea: Bound<typeof g.polygonArea<Value>> = (points, options) => g.polygonArea<Value>(arithmetic, points, options);

@@ -38,3 +38,6 @@ export type {
 } from './projection-core.js';
 export { toGrid, fromGrid, prepareProjection } from './projection.js';
 export { lambertConic, lambertConicInverse } from './lambert-conic.js';
+export { mercator, mercatorInverse } from './mercator.js';
+export { obliqueStereographic, obliqueStereographicInverse } from './oblique-stereographic.js';
+export { polarStereographic, polarStereographicInverse } from './polar-stereographic.js';

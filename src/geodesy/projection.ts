@@ -8,6 +8,9 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { QuadspreadError, show } from '../errors.js';
 import { transverseMercator, transverseMercatorInverse } from './grid.js';
 import { LCC_1SP, LCC_2SP } from './lambert-conic.js';
+import { MERCATOR_1SP, MERCATOR_2SP } from './mercator.js';
+import { OBLIQUE_STEREOGRAPHIC } from './oblique-stereographic.js';
+import { POLAR_STEREOGRAPHIC_A, POLAR_STEREOGRAPHIC_B } from './polar-stereographic.js';
 import {
   forwardWith,
   inverseWith,
@@ -53,6 +56,11 @@ const METHODS: Readonly<Record<string, MethodImpl>> = {
   'transverse-mercator': TM,
   'lambert-conic-1sp': LCC_1SP,
   'lambert-conic-2sp': LCC_2SP,
+  'mercator-1sp': MERCATOR_1SP,
+  'mercator-2sp': MERCATOR_2SP,
+  'oblique-stereographic': OBLIQUE_STEREOGRAPHIC,
+  'polar-stereographic-a': POLAR_STEREOGRAPHIC_A,
+  'polar-stereographic-b': POLAR_STEREOGRAPHIC_B,
 };
 
 function methodOf(method: unknown, where: string): MethodImpl {
@@ -99,7 +107,9 @@ export function prepareProjection<T>(
 /**
  * Geodetic latitude and longitude to grid coordinates in any of the supported projections,
  * chosen by `projection.method`: `'transverse-mercator'`, `'lambert-conic-1sp'`,
- * `'lambert-conic-2sp'` (see docs/geodesy.md for each method's parameters, source and domain).
+ * `'lambert-conic-2sp'`, `'mercator-1sp'`, `'mercator-2sp'`, `'oblique-stereographic'`,
+ * `'polar-stereographic-a'`, `'polar-stereographic-b'` (see docs/geodesy.md for each
+ * method's parameters, source and domain).
  *
  * The point's longitude is counted from Greenwich; `lon0` from the projection's
  * `primeMeridian`. Angles are in `projection.angleUnit`, grid coordinates in

@@ -28,6 +28,9 @@ const byMethod = (m: string): Example => examples.find((e) => e.method === m)!;
 
 // EPSG ellipsoid records (the example texts print rounded 1/f; the fixture's caveat says to use these).
 const CLARKE_1866 = defineEllipsoid({ name: 'Clarke 1866', a: '6378206.4', b: '6356583.8' }); // EPSG 7008
+const BESSEL_1841 = defineEllipsoid({ name: 'Bessel 1841', a: '6377397.155', invF: '299.1528128' }); // EPSG 7004
+const KRASSOWSKY = defineEllipsoid({ name: 'Krassowsky 1940', a: 6378245, invF: '298.3' }); // EPSG 7024
+const WGS_84 = defineEllipsoid({ name: 'WGS 84', a: 6378137, invF: '298.257223563' }); // EPSG 7030
 
 interface Case {
   example: Example;
@@ -69,6 +72,99 @@ const CASES: Case[] = [
     },
     E: 'E_ftUS',
     N: 'N_ftUS',
+  },
+  {
+    // GN 7-2 §3.2.3, Mercator (variant A), Makassar / NEIEZ
+    example: byMethod('Mercator (variant A)'),
+    projection: {
+      method: 'mercator-1sp',
+      ellipsoid: BESSEL_1841,
+      lat0: `00°00'00"N`,
+      lon0: `110°00'00"E`,
+      k0: '0.997',
+      falseEasting: '3900000.00',
+      falseNorthing: '900000.00',
+    },
+    E: 'E_m',
+    N: 'N_m',
+  },
+  {
+    // GN 7-2 §3.2.3, Mercator (variant B), Pulkovo 1942 / Caspian Sea Mercator
+    example: byMethod('Mercator (variant B)'),
+    projection: {
+      method: 'mercator-2sp',
+      ellipsoid: KRASSOWSKY,
+      lat1: `42°00'00"N`,
+      lon0: `51°00'00"E`,
+      falseEasting: '0.00',
+      falseNorthing: '0.00',
+    },
+    E: 'E_m',
+    N: 'N_m',
+  },
+  {
+    // GN 7-2 §3.2.7.1, Oblique Stereographic, Amersfoort / RD New
+    example: byMethod('Oblique Stereographic'),
+    projection: {
+      method: 'oblique-stereographic',
+      ellipsoid: BESSEL_1841,
+      lat0: `52°09'22.178"N`,
+      lon0: `5°23'15.500"E`,
+      k0: '0.9999079',
+      falseEasting: '155000.00',
+      falseNorthing: '463000.00',
+    },
+    E: 'E_m',
+    N: 'N_m',
+  },
+  {
+    // GN 7-2 §3.2.7.2, Polar Stereographic (variant A), WGS 84 / UPS North; example values
+    // from memory (not in the fixture), and proj4 gives the same to the printed digits
+    example: {
+      method: 'Polar Stereographic (variant A)',
+      crs: 'WGS 84 / UPS North (EPSG 32661), from memory',
+      parameters: {},
+      forward: {
+        input: { lat: `73°00'00.000"N`, lon: `44°00'00.000"E` },
+        output: { E_m: '3320416.75', N_m: '632668.43' },
+      },
+      reverse: { output: { lat: `73°00'00.000"N`, lon: `44°00'00.000"E` } },
+    },
+    projection: {
+      method: 'polar-stereographic-a',
+      ellipsoid: WGS_84,
+      lat0: 90,
+      lon0: 0,
+      k0: '0.994',
+      falseEasting: 2000000,
+      falseNorthing: 2000000,
+    },
+    E: 'E_m',
+    N: 'N_m',
+  },
+  {
+    // GN 7-2 §3.2.7.2, Polar Stereographic (variant B), WGS 84 / Australian Antarctic Polar
+    // Stereographic; example values from memory, and proj4 gives the same to the printed digits
+    example: {
+      method: 'Polar Stereographic (variant B)',
+      crs: 'WGS 84 / Australian Antarctic Polar Stereographic (EPSG 3032), from memory',
+      parameters: {},
+      forward: {
+        input: { lat: `75°00'00.000"S`, lon: `120°00'00.000"E` },
+        output: { E_m: '7255380.79', N_m: '7053389.56' },
+      },
+      reverse: { output: { lat: `75°00'00.000"S`, lon: `120°00'00.000"E` } },
+    },
+    projection: {
+      method: 'polar-stereographic-b',
+      ellipsoid: WGS_84,
+      lat1: -71,
+      lon0: 70,
+      falseEasting: 6000000,
+      falseNorthing: 6000000,
+    },
+    E: 'E_m',
+    N: 'N_m',
   },
 ];
 
