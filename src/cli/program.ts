@@ -20,6 +20,7 @@ import { REPORT_SCHEMA } from './report-schema.js';
 import { jobSchema } from './schema.js';
 import { renderSketch } from './sketch.js';
 import { TASK_KINDS } from './tasks/index.js';
+import { version } from '../../package.json';
 
 /** Where the program writes, so tests and embedders can capture it. */
 export interface Io {
@@ -29,8 +30,11 @@ export interface Io {
   stderrIsTTY: boolean;
 }
 
-/** The version printed by `--version`. */
-export const VERSION = '0.1.0';
+/**
+ * The version printed by `--version` and in report headers: package.json's, read when the CLI
+ * is bundled (esbuild keeps only this field of the JSON).
+ */
+export const VERSION: string = version;
 
 interface ReportOptions {
   arithmetic: ArithmeticName;

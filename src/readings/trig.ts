@@ -6,6 +6,7 @@
 import { show, invalidAngle } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { guardOf } from './numeric.js';
+import { sinCosFloat } from './trig-float.js';
 
 /**
  * @internal x mod m in [0, m), exact for exact arithmetics.
@@ -85,6 +86,11 @@ function firstQuadrant<T>(A: Arithmetic<T>, t: T, ninety: T): { sin: T; cos: T }
  * ```
  */
 export function sinCosDegrees<T>(A: Arithmetic<T>, degrees: Numeric<T>): { sin: T; cos: T } {
+  if (A.float64 && typeof degrees === 'number') {
+    // The float twin (same operations, same order); undefined where sinCos must decide.
+    const fast = sinCosFloat(degrees);
+    if (fast !== undefined) return fast as unknown as { sin: T; cos: T };
+  }
   const G = guardOf(A);
   if (G) {
     const r = sinCos(
