@@ -5,14 +5,18 @@
  */
 import type { Report } from './report.js';
 import { BUDGET_SHOWN, shortExact, showExact } from './render-text.js';
+import { markdownCode, markdownText } from './escape.js';
 
 /** What ± σ and the budget column mean, said once at the top of a report that has them. */
 const MARKDOWN_LEGEND =
   "± σ is the standard uncertainty (k = 1, first order); the budget gives each input's share of the variance.";
 
-/** Escapes text for a Markdown table cell. */
-function cell(text: string): string {
-  return text.replace(/\\/g, '\\\\').replace(/\|/g, '\\|').replace(/\n/g, ' ');
+/** Escapes text for a Markdown table cell (markdownText escapes the `|` as well). */
+const cell = markdownText;
+
+/** A code span in a table cell: a `|` inside still ends the cell unless escaped (GFM §4.10). */
+function codeCell(text: string): string {
+  return markdownCode(text).replace(/\|/g, '\\|');
 }
 
 function withUnit(value: string, unit: string): string {
@@ -22,10 +26,10 @@ function withUnit(value: string, unit: string): string {
 /** The report as Markdown: a heading per task, a table of results, a table of checks. */
 export function renderMarkdown(report: Report): string {
   const out: string[] = [];
-  out.push(`# ${report.title}`);
+  out.push(`# ${markdownText(report.title)}`);
   out.push('');
   out.push(
-    `Source: \`${report.source}\` · arithmetic: \`${report.arithmetic}\` · ${report.digits} significant digits · lengths in ${report.lengthUnit}`,
+    `Source: ${markdownCode(report.source)} · arithmetic: \`${report.arithmetic}\` · ${report.digits} significant digits · lengths in ${report.lengthUnit}`,
   );
   if (report.tasks.some((t) => t.results.some((q) => q.sigma !== undefined)))
     out.push('', MARKDOWN_LEGEND);
@@ -33,7 +37,7 @@ export function renderMarkdown(report: Report): string {
     out.push('');
     out.push(`## ${t.index + 1}. ${cell(t.name)} (${t.kind})`);
     out.push('');
-    out.push(t.summary);
+    out.push(markdownText(t.summary));
     if (t.results.length > 0) {
       out.push('');
       out.push('| quantity | value | ± σ | exact form | budget (share of variance) |');
@@ -50,9 +54,9 @@ export function renderMarkdown(report: Report): string {
             (c) => `${c.inputs[0]} ↔ ${c.inputs[1]} (r = ${c.r}) ${c.share} %`,
           ),
         ].join(', ');
-        const exact = showExact(q) ? `\`${shortExact(q.exact)}\`` : '';
+        const exact = showExact(q) ? codeCell(shortExact(q.exact)) : '';
         out.push(
-          `| ${cell(q.label)} (\`${q.name}\`) | ${cell(withUnit(q.value, q.unit))} | ${q.sigma !== undefined ? cell(withUnit(q.sigma, q.unit)) : ''} | ${cell(exact)} | ${cell(budget)} |`,
+          `| ${cell(q.label)} (${codeCell(q.name)}) | ${cell(withUnit(q.value, q.unit))} | ${q.sigma !== undefined ? cell(withUnit(q.sigma, q.unit)) : ''} | ${exact} | ${cell(budget)} |`,
         );
       }
     }
@@ -68,7 +72,7 @@ export function renderMarkdown(report: Report): string {
     }
     if (t.notes.length > 0) {
       out.push('');
-      for (const n of t.notes) out.push(`- ${n}`);
+      for (const n of t.notes) out.push(`- ${markdownText(n)}`);
     }
   }
   out.push('');
