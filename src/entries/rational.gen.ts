@@ -125,6 +125,9 @@ export const formatDms: Bound<typeof g.formatDms<Value>> = (degrees, secondsDeci
 /** {@link g.forward | forward} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const forward: Bound<typeof g.forward<Value>> = (P, bearing, distance) => g.forward<Value>(arithmetic, P, bearing, distance);
 
+/** {@link g.freeStation | freeStation} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const freeStation: Bound<typeof g.freeStation<Value>> = (input) => g.freeStation<Value>(arithmetic, input);
+
 /** {@link g.fromGrid | fromGrid} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const fromGrid: Bound<typeof g.fromGrid<Value>> = (point, projection) => g.fromGrid<Value>(arithmetic, point, projection);
 
@@ -284,6 +287,9 @@ export const quadrea: Bound<typeof g.quadrea<Value>> = (Q1, Q2, Q3) => g.quadrea
 /** {@link g.radiusInAzimuth | radiusInAzimuth} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const radiusInAzimuth: Bound<typeof g.radiusInAzimuth<Value>> = (lat, azimuth, ellipsoid) => g.radiusInAzimuth<Value>(arithmetic, lat, azimuth, ellipsoid);
 
+/** {@link g.reciprocalLevelling | reciprocalLevelling} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const reciprocalLevelling: Bound<typeof g.reciprocalLevelling<Value>> = (input) => g.reciprocalLevelling<Value>(arithmetic, input);
+
 /** {@link g.reciprocalTrigHeight | reciprocalTrigHeight} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const reciprocalTrigHeight: Bound<typeof g.reciprocalTrigHeight<Value, true>> = (input) => g.reciprocalTrigHeight<Value, true>(arithmetic, input);
 
@@ -404,6 +410,9 @@ export const tripleQuadResidual: Bound<typeof g.tripleQuadResidual<Value>> = (Q1
 /** {@link g.tripleSpreadResidual | tripleSpreadResidual} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const tripleSpreadResidual: Bound<typeof g.tripleSpreadResidual<Value>> = (s1, s2, s3) => g.tripleSpreadResidual<Value>(arithmetic, s1, s2, s3);
 
+/** {@link g.twoPegTest | twoPegTest} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const twoPegTest: Bound<typeof g.twoPegTest<Value>> = (input) => g.twoPegTest<Value>(arithmetic, input);
+
 /** {@link g.uncertain | uncertain} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const uncertain: Bound<typeof g.uncertain<Value, true>> = () => g.uncertain<Value, true>(arithmetic);
 
@@ -444,20 +453,22 @@ export {
 export type {
   AllowableMisclosure, AngleUnit, AngularMisclosure, AreaUnit, Arithmetic, Atmosphere,
   AtmosphericPpm, Backsight, BacksightResult, BaseHeight, BearingIntersection, Budget,
-  BudgetOptions, CircleInput, Contribution, CorrelationTerm, CurvatureOptions, Decimal,
-  DecimalArithmetic, DecimalElementary, Ellipsoid, EllipsoidDefinition, EllipsoidParameters,
-  Enu, ErrorCode, FaceOptions, FieldCheck, FieldObservation, FlatEarthError, FloatArithmetic,
-  FootSide, Geocentric, Geodetic, GeodeticInput, GeographicPoint, Gradient, GridPoint,
-  GridReduction, InlineHeight, InlineQuadranceHeight, InputDistribution, Inverse, LengthUnit,
-  LevelCheck, LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, LinearUnit,
-  Matrix3, MeanFaces, MonteCarloOptions, MonteCarloResult, Numeric, OffsetMeasure, OrientInput,
-  Point, Point3, Point3Input, Pointing, PointInput, PolygonArea, PreparedProjection,
-  ProjectedPoint, Projection, ProjectionAngleUnit, ProjectionMethod, RandomStream, Ratio,
-  Rational, RationalArithmetic, ReciprocalTrigHeight, ReducedObservation, Resection,
-  ResectionInput, Root, RoundOff, SetOut, SetOutCheck, SetOutOptions, SetOutTolerance,
-  SetupInput, SetupTolerance, Shot, SideShot, StationSetup, StewartChainages, StewartQuadrances,
-  Surd, TmFactors, TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure,
+  BudgetOptions, CircleInput, Contribution, ControlPoint, CorrelationTerm, CurvatureOptions,
+  Decimal, DecimalArithmetic, DecimalElementary, Ellipsoid, EllipsoidDefinition,
+  EllipsoidParameters, Enu, ErrorCode, FaceOptions, FieldCheck, FieldObservation,
+  FlatEarthError, FloatArithmetic, FootSide, FreeStation, FreeStationInput, FreeStationResidual,
+  Geocentric, Geodetic, GeodeticInput, GeographicPoint, Gradient, GridPoint, GridReduction,
+  InlineHeight, InlineQuadranceHeight, InputDistribution, Inverse, LengthUnit, LevelCheck,
+  LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, LinearUnit, Matrix3,
+  MeanFaces, MonteCarloOptions, MonteCarloResult, Numeric, OffsetMeasure, OrientInput,
+  PegReadings, Point, Point3, Point3Input, Pointing, PointInput, PolygonArea,
+  PreparedProjection, ProjectedPoint, Projection, ProjectionAngleUnit, ProjectionMethod,
+  RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalLevelling, ReciprocalSet,
+  ReciprocalTrigHeight, ReducedObservation, Resection, ResectionInput, Root, RoundOff, SetOut,
+  SetOutCheck, SetOutOptions, SetOutTolerance, SetupInput, SetupTolerance, Shot, SideShot,
+  StaffPair, StationObservation, StationSetup, StewartChainages, StewartQuadrances, Surd,
+  TmFactors, TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure,
   TraverseCourse, TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
-  TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf, VerticalInput, VerticalKind,
-  VerticalReading,
+  TwoPeg, TwoPegInput, TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf,
+  VerticalInput, VerticalKind, VerticalReading,
 } from '../index.js';
