@@ -69,6 +69,14 @@ export const ERROR_CODES = {
   OUTSIDE_DOMAIN:
     'A point outside the domain of a projection (a pole in Mercator, the antipode of an azimuthal projection).',
   UNKNOWN_CRS: 'A coordinate reference system code that is not in the table.',
+  // Adjustment
+  UNKNOWN_POINT: 'A point name that is not in the network.',
+  DATUM_DEFECT:
+    'A network whose datum is not fixed: too few fixed points, weighted points or constraints.',
+  DISCONNECTED_NETWORK: 'Points that no chain of observations connects to the datum.',
+  SINGULAR_NETWORK:
+    'Observations that do not determine a point (weak geometry): the normal equations are singular.',
+  TOO_FEW_OBSERVATIONS: 'Fewer observations than the computation needs.',
   // Job runner
   INVALID_JOB: 'A job file that is not valid JSON or breaks the job schema.',
 } as const;

@@ -13,3 +13,4 @@ export * from './cogo/index.js';
 export * from './geodesy/index.js';
 export * from './field/index.js';
 export * from './uncertainty/index.js';
+export * from './adjustment/index.js';

@@ -32,6 +32,9 @@ export type Bound<F> = F extends (A: never, ...rest: infer P) => infer R ? (...r
 /** The bound arithmetic: {@link g.float | float} (JS numbers; NaN and ±Infinity refused). */
 export const arithmetic: FloatArithmetic = float;
 
+/** {@link g.adjustLevelling | adjustLevelling} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const adjustLevelling: Bound<typeof g.adjustLevelling<Value, false>> = (input) => g.adjustLevelling<Value, false>(arithmetic, input);
+
 /** {@link g.allowableMisclosure | allowableMisclosure} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const allowableMisclosure: Bound<typeof g.allowableMisclosure<Value, false>> = (order, km) => g.allowableMisclosure<Value, false>(arithmetic, order, km);
 
@@ -468,36 +471,40 @@ export const zenithFromVertical: Bound<typeof g.zenithFromVertical<Value>> = (re
 export const zenithToElevation: Bound<typeof g.zenithToElevation<Value>> = (degrees) => g.zenithToElevation<Value>(arithmetic, degrees);
 
 export {
-  ANGLE_UNITS, AREA_UNITS, BEARING_PARALLEL_TOLERANCE, budget, DANGER_CIRCLE_TOLERANCE, decimal,
-  decimalElementary, DEFAULT_EARTH_RADIUS_M, DEFAULT_REFRACTION, defineEllipsoid,
-  ellipsoidByName, ERROR_CODES, float, GRS80, isSurd, LEVELLING_ORDERS, MAX_DECIMAL_DIGITS,
-  MAX_EXPONENT, MAX_INPUT_LENGTH, measured, measuredAngle, measuredDistance, measuredGrade,
-  measuredQuadrance, measuredSpread, measuredVertical, METRES_PER_UNIT, monteCarlo,
-  normalInputs, QuadspreadError, randomStream, rational, RATIONAL_TRANSCENDENTAL_DIGITS,
-  readRatio, roundOff, sensitivities, spreadOfAngle, Uncertain, verticalOfAngle, WGS84,
-  withDerivative,
+  ANGLE_UNITS, AREA_UNITS, baardaTest, BEARING_PARALLEL_TOLERANCE, budget, chiSquareCdf,
+  chiSquareQuantile, DANGER_CIRCLE_TOLERANCE, decimal, decimalElementary,
+  DEFAULT_EARTH_RADIUS_M, DEFAULT_REFRACTION, defineEllipsoid, ellipsoidByName, ERROR_CODES,
+  fCdf, float, fQuantile, GRS80, isSurd, LEVELLING_ORDERS, MAX_DECIMAL_DIGITS, MAX_EXPONENT,
+  MAX_INPUT_LENGTH, measured, measuredAngle, measuredDistance, measuredGrade, measuredQuadrance,
+  measuredSpread, measuredVertical, METRES_PER_UNIT, monteCarlo, normalCdf, normalInputs,
+  normalQuantile, QuadspreadError, randomStream, rational, RATIONAL_TRANSCENDENTAL_DIGITS,
+  readRatio, roundOff, sensitivities, spreadOfAngle, tauCritical, Uncertain, verticalOfAngle,
+  WGS84, withDerivative,
 } from '../index.js';
 export type {
-  AllowableMisclosure, AngleUnit, AngularMisclosure, AreaUnit, Arithmetic, Atmosphere,
-  AtmosphericPpm, Backsight, BacksightResult, BaseHeight, BearingIntersection, Budget,
-  BudgetOptions, CircleInput, Contribution, ControlPoint, CorrelationTerm, CurvatureOptions,
-  DatumTransformation, DatumTransformOptions, Decimal, DecimalArithmetic, DecimalElementary,
-  Ellipsoid, EllipsoidDefinition, EllipsoidParameters, Enu, ErrorCode, FaceOptions, FieldCheck,
+  AdjustedHeight, AdjustedLevelObservation, AllowableMisclosure, AngleUnit, AngularMisclosure,
+  AreaUnit, Arithmetic, Atmosphere, AtmosphericPpm, BaardaTest, Backsight, BacksightResult,
+  BaseHeight, BearingIntersection, BenchmarkInput, Budget, BudgetOptions, CircleInput,
+  Contribution, ControlPoint, CorrelationTerm, CurvatureOptions, DatumTransformation,
+  DatumTransformOptions, Decimal, DecimalArithmetic, DecimalElementary, Ellipsoid,
+  EllipsoidDefinition, EllipsoidParameters, Enu, ErrorCode, FaceOptions, FieldCheck,
   FieldObservation, FlatEarthError, FloatArithmetic, FootSide, FreeStation, FreeStationInput,
   FreeStationResidual, Geocentric, GeocentricTranslationParameters, Geodetic, GeodeticInput,
-  GeographicPoint, Gradient, GridPoint, GridReduction, HelmertConvention, HelmertParameters,
-  InlineHeight, InlineQuadranceHeight, InputDistribution, Inverse, LengthUnit, LevelCheck,
-  LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, LinearUnit, Matrix3,
-  MeanFaces, MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, Numeric,
-  OffsetMeasure, OrientInput, PegReadings, Point, Point3, Point3Input, Pointing, PointInput,
-  PolygonArea, PreparedProjection, ProjectedPoint, Projection, ProjectionAngleUnit,
-  ProjectionMethod, RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalLevelling,
-  ReciprocalSet, ReciprocalTrigHeight, ReducedObservation, Resection, ResectionInput, Root,
-  RotationInput, RotationUnit, RoundOff, SetOut, SetOutCheck, SetOutOptions, SetOutTolerance,
-  SetupInput, SetupTolerance, Shot, SideShot, SightHeight, StaffPair, StationObservation,
-  StationSetup, StewartChainages, StewartQuadrances, Surd, TmFactors, TransformedPoint,
-  TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse,
-  TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoPeg,
-  TwoPegInput, TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf, VerticalInput,
-  VerticalKind, VerticalReading,
+  GeographicPoint, GlobalTest, Gradient, GridPoint, GridReduction, HelmertConvention,
+  HelmertParameters, InlineHeight, InlineQuadranceHeight, InputDistribution, Inverse,
+  LengthUnit, LevelCheck, LevellingAdjustment, LevellingInput, LevellingObservationInput,
+  LevellingOptions, LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line,
+  LinearUnit, LocalTest, Matrix3, MeanFaces, MolodenskyBadekasParameters, MonteCarloOptions,
+  MonteCarloResult, Numeric, ObservationTest, OffsetMeasure, OrientInput, PegReadings, Point,
+  Point3, Point3Input, Pointing, PointInput, PolygonArea, PreparedProjection, ProjectedPoint,
+  Projection, ProjectionAngleUnit, ProjectionMethod, RandomStream, Ratio, Rational,
+  RationalArithmetic, ReciprocalLevelling, ReciprocalSet, ReciprocalTrigHeight,
+  ReducedObservation, Resection, ResectionInput, Root, RotationInput, RotationUnit, RoundOff,
+  SetOut, SetOutCheck, SetOutOptions, SetOutTolerance, SetupInput, SetupTolerance, Shot,
+  SideShot, SightHeight, SnoopingRemoval, SnoopingReport, StaffPair, StationObservation,
+  StationSetup, StewartChainages, StewartQuadrances, Surd, TestOptions, TmFactors,
+  TransformedPoint, TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure,
+  TraverseCourse, TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
+  TwoPeg, TwoPegInput, TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf,
+  VerticalInput, VerticalKind, VerticalReading,
 } from '../index.js';
