@@ -69,6 +69,12 @@ export const ERROR_CODES = {
   OUTSIDE_DOMAIN:
     'A point outside the domain of a projection (a pole in Mercator, the antipode of an azimuthal projection).',
   UNKNOWN_CRS: 'A coordinate reference system code that is not in the table.',
+  // Alignment
+  CURVES_OVERLAP:
+    'Curves of an alignment that overlap: tangents longer than their leg, or a vertical curve running into the next or past an end.',
+  TRANSITION_TOO_LONG:
+    'Transition curves that turn through more than the deflection of their curve.',
+  OFF_ALIGNMENT: 'A chainage or a point beyond the ends of an alignment or a profile.',
   // Adjustment
   UNKNOWN_POINT: 'A point name that is not in the network.',
   DATUM_DEFECT:
