@@ -16,6 +16,8 @@ import { levellingTask } from './levelling.js';
 import { resectionTask } from './resection.js';
 import { trigHeightTask } from './trig-height.js';
 import { geodeticTask } from './geodetic.js';
+import { stationSetupTask } from './station-setup.js';
+import { settingOutTask } from './setting-out.js';
 
 export const TASK_KINDS: readonly TaskKind[] = [
   heightTask,
@@ -30,4 +32,6 @@ export const TASK_KINDS: readonly TaskKind[] = [
   resectionTask,
   levellingTask,
   geodeticTask,
+  stationSetupTask,
+  settingOutTask,
 ];
