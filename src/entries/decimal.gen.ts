@@ -80,6 +80,9 @@ export const crossLawResidual: Bound<typeof g.crossLawResidual<Value>> = (Q1, Q2
 /** {@link g.curvatureRefraction | curvatureRefraction} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const curvatureRefraction: Bound<typeof g.curvatureRefraction<Value>> = (distance, options) => g.curvatureRefraction<Value>(arithmetic, distance, options);
 
+/** {@link g.datumTransform | datumTransform} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const datumTransform: Bound<typeof g.datumTransform<Value>> = (point, transformation, options) => g.datumTransform<Value>(arithmetic, point, transformation, options);
+
 /** {@link g.degreesFromSpread | degreesFromSpread} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const degreesFromSpread: Bound<typeof g.degreesFromSpread<Value>> = (s) => g.degreesFromSpread<Value>(arithmetic, s);
 
@@ -122,6 +125,9 @@ export const geocentricFromEnu: Bound<typeof g.geocentricFromEnu<Value>> = (orig
 /** {@link g.geocentricToGeodetic | geocentricToGeodetic} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const geocentricToGeodetic: Bound<typeof g.geocentricToGeodetic<Value>> = (point, ellipsoid) => g.geocentricToGeodetic<Value>(arithmetic, point, ellipsoid);
 
+/** {@link g.geocentricTranslation | geocentricTranslation} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const geocentricTranslation: Bound<typeof g.geocentricTranslation<Value>> = (point, params) => g.geocentricTranslation<Value>(arithmetic, point, params);
+
 /** {@link g.geodeticToGeocentric | geodeticToGeocentric} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const geodeticToGeocentric: Bound<typeof g.geodeticToGeocentric<Value>> = (point, ellipsoid) => g.geodeticToGeocentric<Value>(arithmetic, point, ellipsoid);
 
@@ -146,14 +152,29 @@ export const heightFromInlineQuadrances: Bound<typeof g.heightFromInlineQuadranc
 /** {@link g.heightFromInlineReadings | heightFromInlineReadings} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const heightFromInlineReadings: Bound<typeof g.heightFromInlineReadings<Value>> = (input) => g.heightFromInlineReadings<Value>(arithmetic, input);
 
+/** {@link g.heightFromQuadrance | heightFromQuadrance} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const heightFromQuadrance: Bound<typeof g.heightFromQuadrance<Value, false>> = (H, sign) => g.heightFromQuadrance<Value, false>(arithmetic, H, sign);
+
 /** {@link g.heightFromReading | heightFromReading} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const heightFromReading: Bound<typeof g.heightFromReading<Value>> = (input) => g.heightFromReading<Value>(arithmetic, input);
+
+/** {@link g.heightFromSight | heightFromSight} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const heightFromSight: Bound<typeof g.heightFromSight<Value, false>> = (input) => g.heightFromSight<Value, false>(arithmetic, input);
 
 /** {@link g.heightFromTwoStations | heightFromTwoStations} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const heightFromTwoStations: Bound<typeof g.heightFromTwoStations<Value>> = (input) => g.heightFromTwoStations<Value>(arithmetic, input);
 
 /** {@link g.heightReductionFactor | heightReductionFactor} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const heightReductionFactor: Bound<typeof g.heightReductionFactor<Value>> = (h, radius) => g.heightReductionFactor<Value>(arithmetic, h, radius);
+
+/** {@link g.helmert | helmert} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const helmert: Bound<typeof g.helmert<Value>> = (point, params) => g.helmert<Value>(arithmetic, point, params);
+
+/** {@link g.helmertInverse | helmertInverse} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const helmertInverse: Bound<typeof g.helmertInverse<Value>> = (point, params) => g.helmertInverse<Value>(arithmetic, point, params);
+
+/** {@link g.helmertReversed | helmertReversed} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const helmertReversed: Bound<typeof g.helmertReversed<Value>> = (point, params) => g.helmertReversed<Value>(arithmetic, point, params);
 
 /** {@link g.horizontalFromHeight | horizontalFromHeight} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const horizontalFromHeight: Bound<typeof g.horizontalFromHeight<Value>> = (input) => g.horizontalFromHeight<Value>(arithmetic, input);
@@ -202,6 +223,12 @@ export const meridianRadius: Bound<typeof g.meridianRadius<Value>> = (lat, ellip
 
 /** {@link g.metresToLength | metresToLength} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const metresToLength: Bound<typeof g.metresToLength<Value>> = (metres, unit) => g.metresToLength<Value>(arithmetic, metres, unit);
+
+/** {@link g.molodenskyBadekas | molodenskyBadekas} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const molodenskyBadekas: Bound<typeof g.molodenskyBadekas<Value>> = (point, params) => g.molodenskyBadekas<Value>(arithmetic, point, params);
+
+/** {@link g.molodenskyBadekasInverse | molodenskyBadekasInverse} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const molodenskyBadekasInverse: Bound<typeof g.molodenskyBadekasInverse<Value>> = (point, params) => g.molodenskyBadekasInverse<Value>(arithmetic, point, params);
 
 /** {@link g.orientStation | orientStation} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const orientStation: Bound<typeof g.orientStation<Value>> = (input) => g.orientStation<Value>(arithmetic, input);
@@ -394,20 +421,21 @@ export type {
   AllowableMisclosure, AngleUnit, AngularMisclosure, AreaUnit, Arithmetic, Atmosphere,
   AtmosphericPpm, Backsight, BacksightResult, BaseHeight, BearingIntersection, Budget,
   BudgetOptions, CircleInput, Contribution, ControlPoint, CorrelationTerm, CurvatureOptions,
-  Decimal, DecimalArithmetic, DecimalElementary, Ellipsoid, EllipsoidDefinition,
-  EllipsoidParameters, Enu, ErrorCode, FaceOptions, FieldCheck, FieldObservation,
-  FlatEarthError, FloatArithmetic, FootSide, FreeStation, FreeStationInput, FreeStationResidual,
-  Geocentric, Geodetic, GeodeticInput, Gradient, GridPoint, GridReduction, InlineHeight,
+  DatumTransformation, DatumTransformOptions, Decimal, DecimalArithmetic, DecimalElementary,
+  Ellipsoid, EllipsoidDefinition, EllipsoidParameters, Enu, ErrorCode, FaceOptions, FieldCheck,
+  FieldObservation, FlatEarthError, FloatArithmetic, FootSide, FreeStation, FreeStationInput,
+  FreeStationResidual, Geocentric, GeocentricTranslationParameters, Geodetic, GeodeticInput,
+  Gradient, GridPoint, GridReduction, HelmertConvention, HelmertParameters, InlineHeight,
   InlineQuadranceHeight, InputDistribution, Inverse, LengthUnit, LevelCheck, LevellingOrder,
-  LevelRow, LevelRun, LevelRunInput, LevelSight, Line, Matrix3, MeanFaces, MonteCarloOptions,
-  MonteCarloResult, Numeric, OffsetMeasure, OrientInput, PegReadings, Point, Point3,
-  Point3Input, Pointing, PointInput, PolygonArea, RandomStream, Ratio, Rational,
-  RationalArithmetic, ReciprocalLevelling, ReciprocalSet, ReciprocalTrigHeight,
-  ReducedObservation, Resection, ResectionInput, Root, RoundOff, SetOut, SetOutCheck,
-  SetOutOptions, SetOutTolerance, SetupInput, SetupTolerance, Shot, SideShot, StaffPair,
-  StationObservation, StationSetup, StewartChainages, StewartQuadrances, Surd, TmFactors,
-  TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse,
-  TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoPeg,
-  TwoPegInput, TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf, VerticalInput,
-  VerticalKind, VerticalReading,
+  LevelRow, LevelRun, LevelRunInput, LevelSight, Line, Matrix3, MeanFaces,
+  MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, Numeric, OffsetMeasure,
+  OrientInput, PegReadings, Point, Point3, Point3Input, Pointing, PointInput, PolygonArea,
+  RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalLevelling, ReciprocalSet,
+  ReciprocalTrigHeight, ReducedObservation, Resection, ResectionInput, Root, RotationInput,
+  RotationUnit, RoundOff, SetOut, SetOutCheck, SetOutOptions, SetOutTolerance, SetupInput,
+  SetupTolerance, Shot, SideShot, SightHeight, StaffPair, StationObservation, StationSetup,
+  StewartChainages, StewartQuadrances, Surd, TmFactors, TransformedPoint, TransverseMercator,
+  TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg,
+  Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoPeg, TwoPegInput, TwoStationHeight,
+  UncertainArithmetic, UncertainInput, ValueOf, VerticalInput, VerticalKind, VerticalReading,
 } from '../index.js';

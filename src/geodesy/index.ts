@@ -27,3 +27,20 @@ export {
   gridToGround,
 } from './grid.js';
 export type { TransverseMercator, TransverseMercatorGrid, TmFactors, GridPoint } from './grid.js';
+export { helmert, helmertInverse, helmertReversed } from './helmert.js';
+export type {
+  HelmertParameters,
+  HelmertConvention,
+  RotationInput,
+  RotationUnit,
+} from './helmert.js';
+export { molodenskyBadekas, molodenskyBadekasInverse } from './molodensky-badekas.js';
+export type { MolodenskyBadekasParameters } from './molodensky-badekas.js';
+export { geocentricTranslation } from './geocentric-translation.js';
+export type { GeocentricTranslationParameters } from './geocentric-translation.js';
+export { datumTransform } from './datum-transform.js';
+export type {
+  DatumTransformation,
+  DatumTransformOptions,
+  TransformedPoint,
+} from './datum-transform.js';
