@@ -32,6 +32,15 @@ export type Bound<F> = F extends (A: never, ...rest: infer P) => infer R ? (...r
 /** The bound arithmetic: {@link g.float | float} (JS numbers; NaN and ±Infinity refused). */
 export const arithmetic: FloatArithmetic = float;
 
+/** {@link g.adjustLevelling | adjustLevelling} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const adjustLevelling: Bound<typeof g.adjustLevelling<Value, false>> = (input) => g.adjustLevelling<Value, false>(arithmetic, input);
+
+/** {@link g.alignmentPoint | alignmentPoint} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const alignmentPoint: Bound<typeof g.alignmentPoint<Value>> = (alignment, chainage, offset, options) => g.alignmentPoint<Value>(arithmetic, alignment, chainage, offset, options);
+
+/** {@link g.alignmentStation | alignmentStation} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const alignmentStation: Bound<typeof g.alignmentStation<Value>> = (alignment, P, options) => g.alignmentStation<Value>(arithmetic, alignment, P, options);
+
 /** {@link g.allowableMisclosure | allowableMisclosure} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const allowableMisclosure: Bound<typeof g.allowableMisclosure<Value, false>> = (order, km) => g.allowableMisclosure<Value, false>(arithmetic, order, km);
 
@@ -59,6 +68,9 @@ export const azimuthToQuadrant: Bound<typeof g.azimuthToQuadrant<Value>> = (azim
 /** {@link g.bearingToAzimuth | bearingToAzimuth} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const bearingToAzimuth: Bound<typeof g.bearingToAzimuth<Value>> = (bearing) => g.bearingToAzimuth<Value>(arithmetic, bearing);
 
+/** {@link g.clothoid | clothoid} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const clothoid: Bound<typeof g.clothoid<Value>> = (input) => g.clothoid<Value>(arithmetic, input);
+
 /** {@link g.combinedFactor | combinedFactor} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const combinedFactor: Bound<typeof g.combinedFactor<Value>> = (heightFactor, scaleFactor) => g.combinedFactor<Value>(arithmetic, heightFactor, scaleFactor);
 
@@ -82,6 +94,9 @@ export const curvatureRefraction: Bound<typeof g.curvatureRefraction<Value>> = (
 
 /** {@link g.datumTransform | datumTransform} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const datumTransform: Bound<typeof g.datumTransform<Value>> = (point, transformation, options) => g.datumTransform<Value>(arithmetic, point, transformation, options);
+
+/** {@link g.deflectionTable | deflectionTable} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const deflectionTable: Bound<typeof g.deflectionTable<Value>> = (alignment, curve, options) => g.deflectionTable<Value>(arithmetic, alignment, curve, options);
 
 /** {@link g.degreesFromSpread | degreesFromSpread} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const degreesFromSpread: Bound<typeof g.degreesFromSpread<Value>> = (s) => g.degreesFromSpread<Value>(arithmetic, s);
@@ -109,6 +124,9 @@ export const footOfPerpendicular: Bound<typeof g.footOfPerpendicular<Value>> = (
 
 /** {@link g.formatDms | formatDms} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const formatDms: Bound<typeof g.formatDms<Value>> = (degrees, secondsDecimals) => g.formatDms<Value>(arithmetic, degrees, secondsDecimals);
+
+/** {@link g.formatStation | formatStation} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const formatStation: Bound<typeof g.formatStation<Value>> = (chainage, options) => g.formatStation<Value>(arithmetic, chainage, options);
 
 /** {@link g.forward | forward} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const forward: Bound<typeof g.forward<Value>> = (P, bearing, distance) => g.forward<Value>(arithmetic, P, bearing, distance);
@@ -175,6 +193,9 @@ export const helmertInverse: Bound<typeof g.helmertInverse<Value>> = (point, par
 
 /** {@link g.helmertReversed | helmertReversed} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const helmertReversed: Bound<typeof g.helmertReversed<Value>> = (point, params) => g.helmertReversed<Value>(arithmetic, point, params);
+
+/** {@link g.horizontalAlignment | horizontalAlignment} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const horizontalAlignment: Bound<typeof g.horizontalAlignment<Value>> = (input) => g.horizontalAlignment<Value>(arithmetic, input);
 
 /** {@link g.horizontalFromHeight | horizontalFromHeight} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const horizontalFromHeight: Bound<typeof g.horizontalFromHeight<Value>> = (input) => g.horizontalFromHeight<Value>(arithmetic, input);
@@ -251,6 +272,9 @@ export const polygonArea: Bound<typeof g.polygonArea<Value>> = (points, options)
 /** {@link g.primeVerticalRadius | primeVerticalRadius} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const primeVerticalRadius: Bound<typeof g.primeVerticalRadius<Value>> = (lat, ellipsoid) => g.primeVerticalRadius<Value>(arithmetic, lat, ellipsoid);
 
+/** {@link g.profileLevel | profileLevel} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const profileLevel: Bound<typeof g.profileLevel<Value>> = (profile, chainage) => g.profileLevel<Value>(arithmetic, profile, chainage);
+
 /** {@link g.pythagorasResidual | pythagorasResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const pythagorasResidual: Bound<typeof g.pythagorasResidual<Value>> = (Q1, Q2, Q3) => g.pythagorasResidual<Value>(arithmetic, Q1, Q2, Q3);
 
@@ -265,6 +289,9 @@ export const quadrea: Bound<typeof g.quadrea<Value>> = (Q1, Q2, Q3) => g.quadrea
 
 /** {@link g.radiusInAzimuth | radiusInAzimuth} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const radiusInAzimuth: Bound<typeof g.radiusInAzimuth<Value>> = (lat, azimuth, ellipsoid) => g.radiusInAzimuth<Value>(arithmetic, lat, azimuth, ellipsoid);
+
+/** {@link g.readStation | readStation} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const readStation: Bound<typeof g.readStation<Value>> = (text) => g.readStation<Value>(arithmetic, text);
 
 /** {@link g.reciprocalLevelling | reciprocalLevelling} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const reciprocalLevelling: Bound<typeof g.reciprocalLevelling<Value>> = (input) => g.reciprocalLevelling<Value>(arithmetic, input);
@@ -292,6 +319,9 @@ export const setOut: Bound<typeof g.setOut<Value>> = (setup, design, options) =>
 
 /** {@link g.setOutCheck | setOutCheck} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const setOutCheck: Bound<typeof g.setOutCheck<Value>> = (setup, design, observation, tolerance) => g.setOutCheck<Value>(arithmetic, setup, design, observation, tolerance);
+
+/** {@link g.settingOutTable | settingOutTable} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const settingOutTable: Bound<typeof g.settingOutTable<Value>> = (alignment, options) => g.settingOutTable<Value>(arithmetic, alignment, options);
 
 /** {@link g.sideShot | sideShot} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const sideShot: Bound<typeof g.sideShot<Value>> = (setup, shot) => g.sideShot<Value>(arithmetic, setup, shot);
@@ -389,6 +419,9 @@ export const vectorQuadrance: Bound<typeof g.vectorQuadrance<Value>> = (v) => g.
 /** {@link g.vertical | vertical} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const vertical: Bound<typeof g.vertical<Value>> = (spread, sign) => g.vertical<Value>(arithmetic, spread, sign);
 
+/** {@link g.verticalAlignment | verticalAlignment} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const verticalAlignment: Bound<typeof g.verticalAlignment<Value>> = (input) => g.verticalAlignment<Value>(arithmetic, input);
+
 /** {@link g.verticalFromAngle | verticalFromAngle} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const verticalFromAngle: Bound<typeof g.verticalFromAngle<Value>> = (angle, options) => g.verticalFromAngle<Value>(arithmetic, angle, options);
 
@@ -408,34 +441,44 @@ export const zenithFromVertical: Bound<typeof g.zenithFromVertical<Value>> = (re
 export const zenithToElevation: Bound<typeof g.zenithToElevation<Value>> = (degrees) => g.zenithToElevation<Value>(arithmetic, degrees);
 
 export {
-  ANGLE_UNITS, AREA_UNITS, BEARING_PARALLEL_TOLERANCE, budget, DANGER_CIRCLE_TOLERANCE, decimal,
-  decimalElementary, DEFAULT_EARTH_RADIUS_M, DEFAULT_REFRACTION, defineEllipsoid,
-  ellipsoidByName, ERROR_CODES, float, GRS80, isSurd, LEVELLING_ORDERS, MAX_DECIMAL_DIGITS,
-  MAX_EXPONENT, MAX_INPUT_LENGTH, measured, measuredAngle, measuredDistance, measuredGrade,
-  measuredQuadrance, measuredSpread, measuredVertical, METRES_PER_UNIT, monteCarlo,
-  normalInputs, QuadspreadError, randomStream, rational, RATIONAL_TRANSCENDENTAL_DIGITS,
-  readRatio, roundOff, sensitivities, spreadOfAngle, Uncertain, verticalOfAngle, WGS84,
-  withDerivative,
+  ANGLE_UNITS, AREA_UNITS, baardaTest, BEARING_PARALLEL_TOLERANCE, budget, chiSquareCdf,
+  chiSquareQuantile, DANGER_CIRCLE_TOLERANCE, decimal, decimalElementary,
+  DEFAULT_EARTH_RADIUS_M, DEFAULT_REFRACTION, defineEllipsoid, ellipsoidByName, ERROR_CODES,
+  fCdf, float, fQuantile, GRS80, isSurd, LEVELLING_ORDERS, MAX_DECIMAL_DIGITS, MAX_EXPONENT,
+  MAX_INPUT_LENGTH, measured, measuredAngle, measuredDistance, measuredGrade, measuredQuadrance,
+  measuredSpread, measuredVertical, METRES_PER_UNIT, monteCarlo, normalCdf, normalInputs,
+  normalQuantile, QuadspreadError, randomStream, rational, RATIONAL_TRANSCENDENTAL_DIGITS,
+  readRatio, roundOff, sensitivities, spreadOfAngle, tauCritical, Uncertain, verticalOfAngle,
+  WGS84, withDerivative,
 } from '../index.js';
 export type {
-  AllowableMisclosure, AngleUnit, AngularMisclosure, AreaUnit, Arithmetic, Atmosphere,
-  AtmosphericPpm, Backsight, BacksightResult, BaseHeight, BearingIntersection, Budget,
-  BudgetOptions, CircleInput, Contribution, ControlPoint, CorrelationTerm, CurvatureOptions,
-  DatumTransformation, DatumTransformOptions, Decimal, DecimalArithmetic, DecimalElementary,
-  Ellipsoid, EllipsoidDefinition, EllipsoidParameters, Enu, ErrorCode, FaceOptions, FieldCheck,
-  FieldObservation, FlatEarthError, FloatArithmetic, FootSide, FreeStation, FreeStationInput,
-  FreeStationResidual, Geocentric, GeocentricTranslationParameters, Geodetic, GeodeticInput,
-  Gradient, GridPoint, GridReduction, HelmertConvention, HelmertParameters, InlineHeight,
-  InlineQuadranceHeight, InputDistribution, Inverse, LengthUnit, LevelCheck, LevellingOrder,
-  LevelRow, LevelRun, LevelRunInput, LevelSight, Line, Matrix3, MeanFaces,
-  MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, Numeric, OffsetMeasure,
-  OrientInput, PegReadings, Point, Point3, Point3Input, Pointing, PointInput, PolygonArea,
-  RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalLevelling, ReciprocalSet,
-  ReciprocalTrigHeight, ReducedObservation, Resection, ResectionInput, Root, RotationInput,
-  RotationUnit, RoundOff, SetOut, SetOutCheck, SetOutOptions, SetOutTolerance, SetupInput,
-  SetupTolerance, Shot, SideShot, SightHeight, StaffPair, StationObservation, StationSetup,
-  StewartChainages, StewartQuadrances, Surd, TmFactors, TransformedPoint, TransverseMercator,
-  TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg,
-  Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoPeg, TwoPegInput, TwoStationHeight,
-  UncertainArithmetic, UncertainInput, ValueOf, VerticalInput, VerticalKind, VerticalReading,
+  AdjustedHeight, AdjustedLevelObservation, AlignmentElement, AlignmentPoint, AlignmentStation,
+  AlignmentStationOptions, AllowableMisclosure, AngleUnit, AngularMisclosure, ArcElement,
+  AreaUnit, Arithmetic, Atmosphere, AtmosphericPpm, BaardaTest, Backsight, BacksightResult,
+  BaseHeight, BearingIntersection, BenchmarkInput, Budget, BudgetOptions, ChainageEquation,
+  ChainageEquationInput, CircleInput, Clothoid, Contribution, ControlPoint, CorrelationTerm,
+  CurvatureOptions, DatumTransformation, DatumTransformOptions, Decimal, DecimalArithmetic,
+  DecimalElementary, DeflectionRow, Ellipsoid, EllipsoidDefinition, EllipsoidParameters, Enu,
+  ErrorCode, FaceOptions, FieldCheck, FieldObservation, FlatEarthError, FloatArithmetic,
+  FootSide, FreeStation, FreeStationInput, FreeStationResidual, Geocentric,
+  GeocentricTranslationParameters, Geodetic, GeodeticInput, GlobalTest, Gradient, GridPoint,
+  GridReduction, HelmertConvention, HelmertParameters, HorizontalAlignment,
+  HorizontalAlignmentInput, HorizontalCurve, HorizontalCurveInput, InlineHeight,
+  InlineQuadranceHeight, InputDistribution, Inverse, KeyPoint, LengthUnit, LevelCheck,
+  LevellingAdjustment, LevellingInput, LevellingObservationInput, LevellingOptions,
+  LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, LocalTest, Matrix3,
+  MeanFaces, MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, Numeric,
+  ObservationTest, OffsetMeasure, OrientInput, PegReadings, Point, Point3, Point3Input,
+  Pointing, PointInput, PolygonArea, ProfileLevel, ProfilePointInput, RandomStream, Ratio,
+  Rational, RationalArithmetic, ReciprocalLevelling, ReciprocalSet, ReciprocalTrigHeight,
+  ReducedObservation, Resection, ResectionInput, Root, RotationInput, RotationUnit, RoundOff,
+  SetOut, SetOutCheck, SetOutOptions, SetOutPoint, SetOutTolerance, SettingOutRow, SetupInput,
+  SetupTolerance, Shot, SideShot, SightHeight, SnoopingRemoval, SnoopingReport, StaffPair,
+  StationCandidate, StationObservation, StationSetup, StewartChainages, StewartQuadrances,
+  StraightElement, Surd, TestOptions, TmFactors, TransformedPoint, TransitionElement,
+  TransitionMeasures, TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure,
+  TraverseCourse, TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
+  TwoPeg, TwoPegInput, TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf,
+  VerticalAlignment, VerticalAlignmentInput, VerticalCurve, VerticalCurveInput, VerticalInput,
+  VerticalKind, VerticalReading,
 } from '../index.js';
