@@ -63,6 +63,12 @@ export const ERROR_CODES = {
   UNKNOWN_ELLIPSOID: 'An ellipsoid that is not known.',
   INVALID_ELLIPSOID: 'Ellipsoid parameters that do not define an oblate ellipsoid.',
   NOT_CONVERGED: 'An iteration did not converge within its limit.',
+  // Map projections
+  UNKNOWN_METHOD: 'A projection method that is not known.',
+  MISSING_PARAMETER: 'A parameter the projection method needs is missing.',
+  OUTSIDE_DOMAIN:
+    'A point outside the domain of a projection (a pole in Mercator, the antipode of an azimuthal projection).',
+  UNKNOWN_CRS: 'A coordinate reference system code that is not in the table.',
   // Alignment
   CURVES_OVERLAP:
     'Curves of an alignment that overlap: tangents longer than their leg, or a vertical curve running into the next or past an end.',

@@ -56,8 +56,20 @@ export const archimedesResidual: Bound<typeof g.archimedesResidual<Value>> = (Q1
 /** {@link g.area | area} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const area: Bound<typeof g.area<Value>> = (points) => g.area<Value>(arithmetic, points);
 
+/** {@link g.asin | asin} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const asin: Bound<typeof g.asin<Value>> = (value) => g.asin<Value>(arithmetic, value);
+
+/** {@link g.asinh | asinh} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const asinh: Bound<typeof g.asinh<Value>> = (value) => g.asinh<Value>(arithmetic, value);
+
 /** {@link g.asRoot | asRoot} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const asRoot: Bound<typeof g.asRoot<Value, false>> = (x) => g.asRoot<Value, false>(arithmetic, x);
+
+/** {@link g.atan | atan} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const atan: Bound<typeof g.atan<Value>> = (value) => g.atan<Value>(arithmetic, value);
+
+/** {@link g.atanh | atanh} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const atanh: Bound<typeof g.atanh<Value>> = (value) => g.atanh<Value>(arithmetic, value);
 
 /** {@link g.atmosphericPpm | atmosphericPpm} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const atmosphericPpm: Bound<typeof g.atmosphericPpm<Value>> = (atmosphere) => g.atmosphericPpm<Value>(arithmetic, atmosphere);
@@ -82,6 +94,9 @@ export const convertLength: Bound<typeof g.convertLength<Value>> = (value, from,
 
 /** {@link g.convertQuadrance | convertQuadrance} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const convertQuadrance: Bound<typeof g.convertQuadrance<Value>> = (quadrance, from, to) => g.convertQuadrance<Value>(arithmetic, quadrance, from, to);
+
+/** {@link g.cosh | cosh} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const cosh: Bound<typeof g.cosh<Value>> = (value) => g.cosh<Value>(arithmetic, value);
 
 /** {@link g.cross | cross} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const cross: Bound<typeof g.cross<Value>> = (V, P, Q) => g.cross<Value>(arithmetic, V, P, Q);
@@ -133,6 +148,9 @@ export const forward: Bound<typeof g.forward<Value>> = (P, bearing, distance) =>
 
 /** {@link g.freeStation | freeStation} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const freeStation: Bound<typeof g.freeStation<Value>> = (input) => g.freeStation<Value>(arithmetic, input);
+
+/** {@link g.fromGrid | fromGrid} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const fromGrid: Bound<typeof g.fromGrid<Value>> = (point, projection) => g.fromGrid<Value>(arithmetic, point, projection);
 
 /** {@link g.gaussianMeanRadius | gaussianMeanRadius} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const gaussianMeanRadius: Bound<typeof g.gaussianMeanRadius<Value>> = (lat, ellipsoid) => g.gaussianMeanRadius<Value>(arithmetic, lat, ellipsoid);
@@ -224,6 +242,12 @@ export const isParallel: Bound<typeof g.isParallel<Value>> = (l1, l2) => g.isPar
 /** {@link g.isPerpendicular | isPerpendicular} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const isPerpendicular: Bound<typeof g.isPerpendicular<Value>> = (l1, l2) => g.isPerpendicular<Value>(arithmetic, l1, l2);
 
+/** {@link g.lambertConic | lambertConic} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const lambertConic: Bound<typeof g.lambertConic<Value>> = (point, projection) => g.lambertConic<Value>(arithmetic, point, projection);
+
+/** {@link g.lambertConicInverse | lambertConicInverse} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const lambertConicInverse: Bound<typeof g.lambertConicInverse<Value>> = (point, projection) => g.lambertConicInverse<Value>(arithmetic, point, projection);
+
 /** {@link g.lengthToMetres | lengthToMetres} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const lengthToMetres: Bound<typeof g.lengthToMetres<Value>> = (value, unit) => g.lengthToMetres<Value>(arithmetic, value, unit);
 
@@ -239,6 +263,12 @@ export const lineThrough: Bound<typeof g.lineThrough<Value>> = (P, Q) => g.lineT
 /** {@link g.meanFaces | meanFaces} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const meanFaces: Bound<typeof g.meanFaces<Value>> = (left, right, options) => g.meanFaces<Value>(arithmetic, left, right, options);
 
+/** {@link g.mercator | mercator} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const mercator: Bound<typeof g.mercator<Value>> = (point, projection) => g.mercator<Value>(arithmetic, point, projection);
+
+/** {@link g.mercatorInverse | mercatorInverse} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const mercatorInverse: Bound<typeof g.mercatorInverse<Value>> = (point, projection) => g.mercatorInverse<Value>(arithmetic, point, projection);
+
 /** {@link g.meridianRadius | meridianRadius} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const meridianRadius: Bound<typeof g.meridianRadius<Value>> = (lat, ellipsoid) => g.meridianRadius<Value>(arithmetic, lat, ellipsoid);
 
@@ -250,6 +280,12 @@ export const molodenskyBadekas: Bound<typeof g.molodenskyBadekas<Value>> = (poin
 
 /** {@link g.molodenskyBadekasInverse | molodenskyBadekasInverse} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const molodenskyBadekasInverse: Bound<typeof g.molodenskyBadekasInverse<Value>> = (point, params) => g.molodenskyBadekasInverse<Value>(arithmetic, point, params);
+
+/** {@link g.obliqueStereographic | obliqueStereographic} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const obliqueStereographic: Bound<typeof g.obliqueStereographic<Value>> = (point, projection) => g.obliqueStereographic<Value>(arithmetic, point, projection);
+
+/** {@link g.obliqueStereographicInverse | obliqueStereographicInverse} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const obliqueStereographicInverse: Bound<typeof g.obliqueStereographicInverse<Value>> = (point, projection) => g.obliqueStereographicInverse<Value>(arithmetic, point, projection);
 
 /** {@link g.orientStation | orientStation} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const orientStation: Bound<typeof g.orientStation<Value>> = (input) => g.orientStation<Value>(arithmetic, input);
@@ -266,8 +302,20 @@ export const perimeter: Bound<typeof g.perimeter<Value>> = (points) => g.perimet
 /** {@link g.point | point} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const point: Bound<typeof g.point<Value>> = (x, y) => g.point<Value>(arithmetic, x, y);
 
+/** {@link g.polarStereographic | polarStereographic} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const polarStereographic: Bound<typeof g.polarStereographic<Value>> = (point, projection) => g.polarStereographic<Value>(arithmetic, point, projection);
+
+/** {@link g.polarStereographicInverse | polarStereographicInverse} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const polarStereographicInverse: Bound<typeof g.polarStereographicInverse<Value>> = (point, projection) => g.polarStereographicInverse<Value>(arithmetic, point, projection);
+
 /** {@link g.polygonArea | polygonArea} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const polygonArea: Bound<typeof g.polygonArea<Value>> = (points, options) => g.polygonArea<Value>(arithmetic, points, options);
+
+/** {@link g.pow | pow} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const pow: Bound<typeof g.pow<Value>> = (base, exponent) => g.pow<Value>(arithmetic, base, exponent);
+
+/** {@link g.prepareProjection | prepareProjection} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const prepareProjection: Bound<typeof g.prepareProjection<Value>> = (projection) => g.prepareProjection<Value>(arithmetic, projection);
 
 /** {@link g.primeVerticalRadius | primeVerticalRadius} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const primeVerticalRadius: Bound<typeof g.primeVerticalRadius<Value>> = (lat, ellipsoid) => g.primeVerticalRadius<Value>(arithmetic, lat, ellipsoid);
@@ -332,6 +380,9 @@ export const sideShots: Bound<typeof g.sideShots<Value>> = (setup, shots) => g.s
 /** {@link g.sinCosDegrees | sinCosDegrees} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const sinCosDegrees: Bound<typeof g.sinCosDegrees<Value>> = (degrees) => g.sinCosDegrees<Value>(arithmetic, degrees);
 
+/** {@link g.sinh | sinh} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const sinh: Bound<typeof g.sinh<Value>> = (value) => g.sinh<Value>(arithmetic, value);
+
 /** {@link g.solveQuadratic | solveQuadratic} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const solveQuadratic: Bound<typeof g.solveQuadratic<Value, false>> = (a, b, c) => g.solveQuadratic<Value, false>(arithmetic, a, b, c);
 
@@ -382,6 +433,15 @@ export const stewartResidual: Bound<typeof g.stewartResidual<Value>> = (data) =>
 
 /** {@link g.surd | surd} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const surd: Bound<typeof g.surd<Value>> = (a, b, d) => g.surd<Value>(arithmetic, a, b, d);
+
+/** {@link g.tan | tan} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const tan: Bound<typeof g.tan<Value>> = (value) => g.tan<Value>(arithmetic, value);
+
+/** {@link g.tanh | tanh} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const tanh: Bound<typeof g.tanh<Value>> = (value) => g.tanh<Value>(arithmetic, value);
+
+/** {@link g.toGrid | toGrid} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const toGrid: Bound<typeof g.toGrid<Value>> = (point, projection) => g.toGrid<Value>(arithmetic, point, projection);
 
 /** {@link g.transverseMercator | transverseMercator} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const transverseMercator: Bound<typeof g.transverseMercator<Value>> = (point, projection) => g.transverseMercator<Value>(arithmetic, point, projection);
@@ -461,15 +521,16 @@ export type {
   DecimalElementary, DeflectionRow, Ellipsoid, EllipsoidDefinition, EllipsoidParameters, Enu,
   ErrorCode, FaceOptions, FieldCheck, FieldObservation, FlatEarthError, FloatArithmetic,
   FootSide, FreeStation, FreeStationInput, FreeStationResidual, Geocentric,
-  GeocentricTranslationParameters, Geodetic, GeodeticInput, GlobalTest, Gradient, GridPoint,
-  GridReduction, HelmertConvention, HelmertParameters, HorizontalAlignment,
+  GeocentricTranslationParameters, Geodetic, GeodeticInput, GeographicPoint, GlobalTest,
+  Gradient, GridPoint, GridReduction, HelmertConvention, HelmertParameters, HorizontalAlignment,
   HorizontalAlignmentInput, HorizontalCurve, HorizontalCurveInput, InlineHeight,
   InlineQuadranceHeight, InputDistribution, Inverse, KeyPoint, LengthUnit, LevelCheck,
   LevellingAdjustment, LevellingInput, LevellingObservationInput, LevellingOptions,
-  LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, LocalTest, Matrix3,
-  MeanFaces, MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, Numeric,
+  LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, LinearUnit, LocalTest,
+  Matrix3, MeanFaces, MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, Numeric,
   ObservationTest, OffsetMeasure, OrientInput, PegReadings, Point, Point3, Point3Input,
-  Pointing, PointInput, PolygonArea, ProfileLevel, ProfilePointInput, RandomStream, Ratio,
+  Pointing, PointInput, PolygonArea, PreparedProjection, ProfileLevel, ProfilePointInput,
+  ProjectedPoint, Projection, ProjectionAngleUnit, ProjectionMethod, RandomStream, Ratio,
   Rational, RationalArithmetic, ReciprocalLevelling, ReciprocalSet, ReciprocalTrigHeight,
   ReducedObservation, Resection, ResectionInput, Root, RotationInput, RotationUnit, RoundOff,
   SetOut, SetOutCheck, SetOutOptions, SetOutPoint, SetOutTolerance, SettingOutRow, SetupInput,
