@@ -183,18 +183,18 @@ export function presentCheck<V>(
   d = Math.max(0, d);
   const value = unscaled(v, d);
   const limit = unscaled(l, d);
+  const full = (x: string): string => significant(x, Math.max(digits, 1));
   const unit = c.unit === '″' || c.unit === '"' ? '"' : c.unit;
   const show = (x: string): string =>
     kind === 'ratio' ? `1 : ${x}` : unit === '"' ? `${x}"` : withUnit(x, unit);
-  const tolerance = `${rel} ${limit}`;
   return {
     name: c.name,
     label: c.label,
-    value,
-    tolerance,
+    value: full(vt),
+    tolerance: `${rel} ${full(lt)}`,
     unit: c.unit,
     pass: c.pass,
-    limit,
+    limit: full(lt),
     relation: rel,
     display: `${show(value)}, limit ${rel === '≤' ? '±' : '≥ '}${show(limit)}`,
   };

@@ -65,7 +65,7 @@ export interface Check {
   unit: string;
   /** Whether the check passed. */
   pass: boolean;
-  /** The limit as decimal text with as many decimals as `value` (when the check has a numeric limit). */
+  /** The limit as decimal text, to the report's significant digits (when the check has a numeric limit). */
   limit?: string;
   /** How value and limit compare: `≤` (the magnitude of the value at most the limit) or `≥`. */
   relation?: '≤' | '≥';

@@ -72,7 +72,7 @@ export function traverseTables<V>(
       ],
     ],
     notes: [
-      `Latitude = distance × cos(bearing) (north), departure = distance × sin(bearing) (east); lengths in ${unit}. The Σ row of latitudes and departures is the misclosure (for a loop) less the corrections.`,
+      `Latitude = distance × cos(bearing) (north), departure = distance × sin(bearing) (east); lengths in ${unit}. For a loop, Σ latitude and Σ departure are the misclosure, and the corrections sum to minus it.`,
     ],
   };
   const adjusted: RawTable<V> = {
