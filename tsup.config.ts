@@ -23,9 +23,9 @@ const common: Options = {
 };
 const entries = {
   index: 'src/index.ts',
-  rational: 'src/rational.ts',
-  decimal: 'src/decimal.ts',
-  float: 'src/float.ts',
+  rational: 'src/entries/rational.gen.ts',
+  decimal: 'src/entries/decimal.gen.ts',
+  float: 'src/entries/float.gen.ts',
 };
 
 // In the ESM of quadspread/float, the decimal arithmetic is not copied in but imported from the
@@ -60,7 +60,7 @@ export default defineConfig([
   },
   {
     ...common,
-    entry: { float: 'src/float.ts' },
+    entry: { float: 'src/entries/float.gen.ts' },
     format: ['esm'],
     splitting: false,
     treeshake: true,
@@ -68,7 +68,9 @@ export default defineConfig([
   },
   {
     ...common,
-    entry: ['src/**/*.ts', '!src/cli/**', '!src/float.ts'],
+    // dist/esm/rational.js and decimal.js are one-line re-exports of dist/esm/entries/*.gen.js,
+    // written by scripts/build.mjs, so the package's file names stay as they were.
+    entry: ['src/**/*.ts', '!src/cli/**', '!src/entries/float.gen.ts'],
     outDir: 'dist/esm',
     format: ['esm'],
     bundle: false,

@@ -90,7 +90,7 @@ let loops = 0;
 /**
  * A batch loop over `cases` calling f(case[0], case[1], case[2]) and counting key(result).
  * Each loop is compiled from its own source (new Function), so that no two variants share a
- * call site's type feedback — closures made by one factory would (see DESIGN.md), and would
+ * call site's type feedback — closures made by one factory would (docs/design.md, "Performance"), and would
  * make every variant slow in a different way.
  */
 export function loop3(cases, f, key) {

@@ -17,6 +17,7 @@ import * as triangle from './workloads/triangle.mjs';
 import * as heights from './workloads/heights.mjs';
 import * as traverse from './workloads/traverse.mjs';
 import * as budget from './workloads/budget.mjs';
+import * as sideshots from './workloads/side-shots.mjs';
 
 const args = process.argv.slice(2);
 const quick = args.includes('--quick');
@@ -54,7 +55,9 @@ const t0 = Date.now();
 const arithmetics = [g.float, g.rational, g.decimal(34), g.decimal(20)];
 if (g.uncertain) arithmetics.push(g.uncertain(g.float), g.uncertain(g.rational));
 
-const workloads = [triangle, heights, traverse, budget].filter((w) => !only || w.name === only);
+const workloads = [triangle, heights, traverse, budget, sideshots].filter(
+  (w) => !only || w.name === only,
+);
 const built = [];
 for (const w of workloads) {
   const why = w.unavailable?.(lib);
@@ -179,7 +182,7 @@ if (!only || only === 'triangle') {
   );
 }
 
-// Headline: the triangle workload (a), the one measured before any code existed (DESIGN.md);
+// Headline: the triangle workload (a), the one measured before any code existed (docs/design.md);
 // the other workloads' ratios are printed above and tabled in docs/performance.md.
 const pick = (list) => (list.find((r) => r.workload === 'triangle') ?? list[0])?.ratio;
 const hf = pick(headline.float),

@@ -14,7 +14,8 @@
  *      function f$qsGeneric(A, …) { body }          // the original, unchanged
  *    where body' has, for that `A`: `A.add(x, y)` → `((x) + (y))`, `A.sub` → `-`, `A.mul` →
  *    `*`, `A.neg(x)` → `(-(x))`, `A.isZero(x)` → `((x) === 0)`, `A.eq(x, y)` → `===`,
- *    `A.abs(x)` → `Math.abs(x)`, `A.zero` → `0`, `A.one` → `1`, `A.kernels` → `undefined`
+ *    `A.abs(x)` → `Math.abs(x)`, `A.zero` → `0`, `A.one` → `1`, `A.digits` → `15`, `A.float64` →
+ *    `true`, `A.kernels`, `A.ratio`, `A.withDigits` → `undefined`
  *    (float has none), and `A.div`, `A.sqrt`,
  *    `A.cmp`, `A.sign`, `A.from` → tiny helpers with exactly the float arithmetic's checks
  *    (a zero divisor or a negative root still throws the same QuadspreadError).
@@ -51,7 +52,15 @@ const OPS = {
 };
 // float has no fused kernels: `A.kernels` is `undefined` in the float copy. Parenthesised so
 // that `A.zero.toFixed(1)` stays valid code.
-const CONSTANTS = { zero: '(0)', one: '(1)', kernels: '(void 0)' };
+const CONSTANTS = {
+  zero: '(0)',
+  one: '(1)',
+  kernels: '(void 0)',
+  digits: '(15)',
+  float64: '(true)',
+  ratio: '(void 0)',
+  withDigits: '(void 0)',
+};
 /** The rewrite for the name `k`, own keys only (`A.toString`, `A.constructor` are left alone). */
 const own = (table, k) => (Object.hasOwn(table, k) ? table[k] : undefined);
 
@@ -300,13 +309,13 @@ function resolveTs(dir, spec) {
  * The esbuild plugin.
  * @param {{ entries?: string[], srcDir?: string, exclude?: RegExp }} [options]
  *   `entries`: absolute paths of the entry files whose module graphs are specialised
- *   (default `<cwd>/src/float.ts`); `srcDir`: the sources' root (default `<cwd>/src`);
+ *   (default `<cwd>/src/entries/float.gen.ts`); `srcDir`: the sources' root (default `<cwd>/src`);
  *   `exclude`: modules never rewritten (default: the arithmetics and errors).
  */
 export function floatSpecialize(options = {}) {
   const srcDir = options.srcDir ?? path.resolve('src');
   const entries = new Set(
-    (options.entries ?? [path.join(srcDir, 'float.ts')]).map((e) => path.resolve(e)),
+    (options.entries ?? [path.join(srcDir, 'entries', 'float.gen.ts')]).map((e) => path.resolve(e)),
   );
   const exclude = options.exclude ?? /[\\/]src[\\/](arithmetic[\\/]|errors\.ts$)/;
   return {

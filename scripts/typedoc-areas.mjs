@@ -13,7 +13,11 @@ const AREAS = {
   elevation: 'Elevation',
   cogo: 'Coordinates (cogo)',
   geodesy: 'Geodesy',
+  alignment: 'Alignment',
+  adjustment: 'Adjustment',
+  field: 'Field work',
   uncertainty: 'Uncertainty',
+  io: 'Data exchange (io)',
   'errors.ts': 'Errors',
 };
 const ORDER = Object.values(AREAS);
@@ -40,13 +44,9 @@ export function load(app) {
     const area = AREAS[first];
     if (area) {
       areaOfReflection.set(reflection.id, area);
-      if (
-        !areaOfName.has(reflection.name) &&
-        first !== 'rational.ts' &&
-        first !== 'decimal.ts' &&
-        first !== 'float.ts'
-      )
-        areaOfName.set(reflection.name, area);
+      // (the generated bound entries, src/entries/, are no area: their names keep the area of
+      // the generic function they bind)
+      if (!areaOfName.has(reflection.name)) areaOfName.set(reflection.name, area);
     }
   });
 

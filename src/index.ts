@@ -11,4 +11,5 @@ export * from './readings/index.js';
 export * from './elevation/index.js';
 export * from './cogo/index.js';
 export * from './geodesy/index.js';
+export * from './field/index.js';
 export * from './uncertainty/index.js';

@@ -27,7 +27,7 @@ export async function loadSpecialised(entry: string): Promise<Record<string, any
   return (await import(pathToFileURL(file).href)) as Record<string, any>;
 }
 
-/** quadspread/float as the build makes it: src/float.ts bundled float-specialised. */
+/** quadspread/float as the build makes it: src/entries/float.gen.ts bundled float-specialised. */
 export function loadFloatEntry(): Promise<Record<string, any>> {
-  return loadSpecialised(path.join(root, 'src', 'float.ts'));
+  return loadSpecialised(path.join(root, 'src', 'entries', 'float.gen.ts'));
 }

@@ -116,6 +116,7 @@ export function decimal(digits = 34): DecimalArithmetic {
     name,
     exact: false,
     digits,
+    withDigits: (n: number) => decimal(n),
     zero: new D(0),
     one: new D(1),
     from(x: Numeric<Big>): Big {

@@ -43,6 +43,8 @@ function finite(v: number, where: string): number {
 export const float: FloatArithmetic = /* @__PURE__ */ Object.freeze<FloatArithmetic>({
   name: 'float',
   exact: false,
+  digits: 15,
+  float64: true,
   zero: 0,
   one: 1,
   from(x: Numeric<number>): number {

@@ -78,6 +78,11 @@ const { one, two } = /* @__PURE__ */ operandChecks<Rational>('rational', isFract
 export const rational: RationalArithmetic = /* @__PURE__ */ Object.freeze<RationalArithmetic>({
   name: 'rational',
   exact: true,
+  digits: RATIONAL_TRANSCENDENTAL_DIGITS,
+  ratio: (x: Rational) => {
+    const a = one('ratio', x);
+    return { n: signed(a), d: a.d };
+  },
   zero: ZERO,
   one: ONE,
   from(x: Numeric<Rational>): Rational {

@@ -28,6 +28,36 @@ export interface Arithmetic<T, E extends boolean = boolean> {
   readonly name: string;
   /** `true` when + − × ÷ never round. */
   readonly exact: E;
+  /**
+   * Significant digits the arithmetic's results claim, for generic code that needs a tolerance
+   * instead of guessing from the name: the digits of a `decimal(n)` (n); for `rational`, the
+   * digits its transcendental functions (π, sin, cos, atan2) are good to
+   * ({@link RATIONAL_TRANSCENDENTAL_DIGITS}, 42); 15 for `float`; an `uncertain(base)` claims
+   * its base's.
+   */
+  readonly digits: number;
+  /**
+   * The same kind of arithmetic with another number of significant digits, where the
+   * arithmetic has such a setting (`decimal(n).withDigits(m)` is `decimal(m)`); absent
+   * otherwise. Generic code uses it to compute a transcendental step with guard digits and
+   * round once.
+   */
+  withDigits?(digits: number): Arithmetic<T, E>;
+  /**
+   * `true` when values are JS numbers and `add`, `sub`, `mul`, `div` are exactly the IEEE 754
+   * double operations (the `float` arithmetic). A solver may then run a float twin of its loop
+   * written with plain operators, proven equal to the generic code by property tests.
+   * @internal
+   */
+  readonly float64?: boolean;
+  /**
+   * For an exact arithmetic: a value as the ratio n/d of integers in lowest terms, d > 0
+   * (`rational` gives its fraction's numerator and denominator). Generic code uses it for
+   * integer work on exact values (square-root bounds, surd simplification) instead of testing
+   * the value's class.
+   * @internal
+   */
+  ratio?(x: T): { readonly n: bigint; readonly d: bigint };
   /** 0 in this arithmetic. */
   readonly zero: T;
   /** 1 in this arithmetic. */

@@ -266,6 +266,7 @@ function uncertainGeneric<T, E extends boolean>(B: Arithmetic<T, E>): UncertainA
   const U: UncertainArithmetic<T, E> = {
     name,
     exact: B.exact,
+    digits: B.digits,
     base: B,
     zero: constant(B.zero),
     one: constant(B.one),

@@ -59,10 +59,9 @@ export function rootOf<T, E extends boolean>(A: Arithmetic<T, E>, a: T, b: T, d:
 
 /**
  * Relative slack for deciding "touching" against rounding in an inexact arithmetic: 0 in
- * an exact one, 10^(3 − digits) for one with `digits` (decimal), 1e-12 otherwise (float). @internal
+ * an exact one, 10^(3 − digits) otherwise ({@link Arithmetic.digits}: 1e-12 in float). @internal
  */
 export function roundingSlack<T>(A: Arithmetic<T, boolean>): T {
   if (A.exact) return A.zero;
-  const digits = (A as { digits?: unknown }).digits;
-  return A.from(typeof digits === 'number' ? `1e${3 - digits}` : '1e-12');
+  return A.from(`1e${3 - A.digits}`);
 }

@@ -1,7 +1,7 @@
 /**
  * The float twin of the traverse loop: the same operations, in the same order, on plain
  * numbers, so that a 1000-course float traverse stays fast even in a process where other
- * arithmetics have been through the generic code (see DESIGN.md, "Performance"). The
+ * arithmetics have been through the generic code (see docs/design.md, "Performance"). The
  * property tests check that it returns exactly what the generic code returns in float.
  *
  * @module cogo

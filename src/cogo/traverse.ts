@@ -12,7 +12,6 @@ import type { Root } from '../geometry/surd.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { angleToDegrees } from '../readings/angle.js';
 import { readAzimuth } from './bearing.js';
-import { float } from '../arithmetic/float.js';
 import { traverseFloat } from './traverse-float.js';
 import { readNumber, expectObject } from '../geometry/validate.js';
 import { readArray, readPoint, sqrtValue } from './internal.js';
@@ -234,7 +233,7 @@ export function traverse<T, E extends boolean>(
   const n = list.length;
   if (n === 0)
     throw new QuadspreadError('NO_COURSES', `${where} courses`, 'the traverse has no courses');
-  if ((A as unknown) === float) {
+  if (A.float64 === true) {
     // The float twin (same operations, same order) keeps this loop fast in any process.
     const fast = traverseFloat(start as Point<number>, end as Point<number>, rule, list);
     if (fast !== undefined) {

@@ -8,7 +8,6 @@
 import { QuadspreadError, show, invalidAngle } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber, shownInput } from '../geometry/validate.js';
-import { RATIONAL_TRANSCENDENTAL_DIGITS } from '../arithmetic/rational.js';
 import { decimal, type DecimalArithmetic } from '../arithmetic/decimal.js';
 import { Uncertain, uncertain } from '../arithmetic/uncertain.js';
 import { angleToDegrees, type AngleUnit } from '../readings/angle.js';
@@ -20,17 +19,12 @@ export function root<T>(A: Arithmetic<T>, x: T): T {
 }
 
 /**
- * @internal Significant digits an arithmetic's results claim: `digits` of a decimal
- * arithmetic (also inside an uncertain one, read from its name), 42 for an exact one
- * (its transcendental functions), 15 otherwise (float).
+ * @internal Significant digits an arithmetic's results claim ({@link Arithmetic.digits}): n
+ * for `decimal(n)` (also inside an uncertain one), 42 for `rational` (its transcendental
+ * functions), 15 for float.
  */
 export function claimedDigits<T>(A: Arithmetic<T>): number {
-  const d = (A as { digits?: unknown }).digits;
-  if (typeof d === 'number') return d;
-  const m = /decimal\((\d+)\)/.exec(A.name);
-  if (m) return Number(m[1]);
-  if (A.exact || /rational/.test(A.name)) return RATIONAL_TRANSCENDENTAL_DIGITS;
-  return 15;
+  return A.digits;
 }
 
 /** @internal 10^−k in the arithmetic. */

@@ -3,7 +3,6 @@
  *
  * @module geometry
  */
-import Fraction from 'fraction.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { isqrt } from '../arithmetic/exact.js';
 import {
@@ -332,10 +331,10 @@ class SurdValue<T> implements Surd<T> {
     // value is never a rounding boundary, so this ends).
     const two = A.from(2);
     let start: T;
-    if ((d as unknown) instanceof Fraction) {
+    const f = A.ratio?.(d);
+    if (f !== undefined) {
       // (⌊√(pq)⌋ + 1)/q ≥ √(p/q), for any size of radicand
-      const f = d as unknown as Fraction;
-      start = new Fraction(isqrt(f.n * f.d) + 1n, f.d) as unknown as T;
+      start = A.div(A.from(isqrt(f.n * f.d) + 1n), A.from(f.d));
     } else {
       start = A.from(Math.sqrt(A.toNumber(d)));
       if (A.sign(start) <= 0) start = A.one;
@@ -424,9 +423,9 @@ export function surd<T>(
   if (A.isZero(rb) || A.isZero(rd)) return new SurdValue(A, ra, A.zero, A.one);
   if (A.sign(rd) < 0)
     throw noRealSolution(w, `the radicand d = ${show(A.toString(rd))} is negative`);
-  if ((rd as unknown) instanceof Fraction && (rb as unknown) instanceof Fraction) {
+  const f = A.ratio?.(rd);
+  if (f !== undefined) {
     // √(p/q) = √(pq)/q, then k²m → k√m for the primes below 1000.
-    const f = rd as unknown as Fraction;
     let m = f.n * f.d;
     let k = 1n;
     for (const p of SMALL_PRIMES) {
@@ -442,9 +441,9 @@ export function surd<T>(
       k *= r;
       m = 1n;
     }
-    rb = (rb as unknown as Fraction).mul(new Fraction(k, f.d)) as unknown as T;
+    rb = A.div(A.mul(rb, A.from(k)), A.from(f.d));
     if (m === 1n) return new SurdValue(A, A.add(ra, rb), A.zero, A.one);
-    rd = new Fraction(m) as unknown as T;
+    rd = A.from(m);
     return new SurdValue(A, ra, rb, rd);
   }
   const s = A.sqrt(rd);

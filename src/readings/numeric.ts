@@ -6,7 +6,7 @@
  * @internal
  */
 import type { Arithmetic } from '../arithmetic/types.js';
-import { decimal, MAX_DECIMAL_DIGITS, type Decimal } from '../arithmetic/decimal.js';
+import { MAX_DECIMAL_DIGITS } from '../arithmetic/decimal.js';
 
 /** Significant digits kept by {@link approxSqrt} in an exact arithmetic. @internal */
 export const APPROX_DIGITS = 50;
@@ -45,30 +45,27 @@ export const GUARD_DIGITS = 10;
  * arithmetic (which computes directly).
  * @internal
  */
-export function guardOf<T>(A: Arithmetic<T>): Arithmetic<Decimal> | undefined {
-  if (A.exact) return undefined;
-  const digits = (A as { digits?: unknown }).digits;
-  if (
-    typeof digits !== 'number' ||
-    A.name !== `decimal(${digits})` ||
-    digits + GUARD_DIGITS > MAX_DECIMAL_DIGITS
-  )
-    return undefined;
-  let G = GUARDS.get(digits);
+export function guardOf<T>(A: Arithmetic<T>): Arithmetic<T> | undefined {
+  // Only an arithmetic with a precision setting ({@link Arithmetic.withDigits}: decimal) has a
+  // guarded twin; an uncertain one computes directly (its derivatives need its own values).
+  if (A.exact || A.withDigits === undefined) return undefined;
+  const digits = A.digits;
+  if (digits + GUARD_DIGITS > MAX_DECIMAL_DIGITS) return undefined;
+  let G = GUARDS.get(A) as Arithmetic<T> | undefined;
   if (G === undefined) {
-    G = decimal(digits + GUARD_DIGITS);
-    GUARDS.set(digits, G);
+    G = A.withDigits(digits + GUARD_DIGITS);
+    GUARDS.set(A, G as Arithmetic<unknown>);
   }
-  return G;
+  return G as Arithmetic<T>;
 }
 
 /**
- * The guard arithmetics made so far, by the digits of the arithmetic they guard (at most
- * {@link MAX_DECIMAL_DIGITS} entries). A memo of immutable, stateless values, not a setting:
- * `decimal(n)` always gives an arithmetic with the same results, and making one per reading
- * cost more than the reading (its constructor and elementary tables are built anew).
+ * The guard arithmetics made so far, by the arithmetic they guard (weakly held). A memo of
+ * immutable, stateless values, not a setting: `withDigits` always gives an arithmetic with the
+ * same results, and making one per reading cost more than the reading (a decimal's
+ * constructor and elementary tables are built anew).
  */
-const GUARDS = new Map<number, Arithmetic<Decimal>>();
+const GUARDS = new WeakMap<object, Arithmetic<unknown>>();
 
 /**
  * Runs `f` in the guard arithmetic `G` of `A` with an input moved there as text, and rounds
@@ -77,9 +74,9 @@ const GUARDS = new Map<number, Arithmetic<Decimal>>();
  */
 export function viaGuard<T, I>(
   A: Arithmetic<T>,
-  G: Arithmetic<Decimal>,
+  G: Arithmetic<T>,
   input: I,
-  f: (G: Arithmetic<Decimal>, x: I | string) => Decimal,
+  f: (G: Arithmetic<T>, x: I | string) => T,
 ): T {
   const x = A.is(input) ? A.toString(input as unknown as T) : input;
   return A.from(G.toString(f(G, x)));

@@ -14,7 +14,6 @@ import {
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { Uncertain } from '../arithmetic/uncertain.js';
 import type { UncertainArithmetic, UncertainInput } from '../arithmetic/uncertain.js';
-import Fraction from 'fraction.js';
 import { isSurd, sqrtOf } from '../geometry/surd.js';
 import { checkU, sqrtRatioToNumber } from './internal.js';
 import type { Root, Surd } from '../geometry/surd.js';
@@ -272,8 +271,8 @@ export function budget<T, E extends boolean>(
  */
 function sigmaOf<T, E extends boolean>(B: Arithmetic<T, E>, variance: T): Root<T, E> {
   const s = sqrtOf(B, variance);
-  if (!((variance as unknown) instanceof Fraction) || !isSurd(s) || s.isRational()) return s;
-  const v = variance as unknown as Fraction;
+  const v = B.ratio?.(variance);
+  if (v === undefined || !isSurd(s) || s.isRational()) return s;
   const where = 'budget(U, result, options).sigma.toNumber()';
   // A surd that differs from `s` only in how it gives its number.
   return Object.create(s, {

@@ -25,7 +25,7 @@ describe.each<[string, Arithmetic<any>]>([
   ['float', float],
 ])('triangle(%s, …) of the 3-4-5 right triangle', (_n, A) => {
   it('has spread 1 at the right angle, 9/25 opposite the side 3 and 16/25 opposite the side 4', () => {
-    // A1 = (0, 0) right angle; A2 = (4, 0); A3 = (0, 3): Q1 = 25, Q2 = 9, Q3 = 16 (derived; CHECKS.md 3-4-5).
+    // A1 = (0, 0) right angle; A2 = (4, 0); A3 = (0, 3): Q1 = 25, Q2 = 9, Q3 = 16 (derived from Pythagoras: 3² + 4² = 5²).
     const t = triangle(A, point(A, 0, 0), point(A, 4, 0), point(A, 0, 3));
     expect(MEASURES.map((k) => A.toNumber(t[k]))).toEqual([25, 9, 16, 1, 0.36, 0.64]);
     expect(A.toNumber(t.quadrea)).toBe(16 * 6 * 6);

@@ -81,7 +81,7 @@ document.getElementById('out').textContent = JSON.stringify(window.results);
 // Expected values, each from outside the code:
 // - 13-14-15 triangle: Q1 = 15² = 225, Q2 = 13² = 169, Q3 = 14² = 196; Heron's area 84, so the
 //   quadrea 16·84² = 112896; spreads by the cross law 144/169 (opposite 15), 16/25 (opposite
-//   13), 3136/4225 (opposite 14) (shared/CHECKS.md "Triangles", derived, exact).
+//   13), 3136/4225 (opposite 14) (Heron's 13-14-15 triangle, spreads by the cross law: derived, exact).
 // - Height from a vertical reading: H = Q·R/(1 − R) = 14400·(1/10)/(9/10) = 1600, h = 40
 //   (the definition of the vertical spread, DESIGN "Conventions"; derived).
 // - 3-4-5: Q = 25 (Pythagoras). 1/3 to 34 significant digits (IEEE 754 decimal128 rounding).

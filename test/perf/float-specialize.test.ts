@@ -45,7 +45,7 @@ let B: Record<string, any>;
 let F: Record<string, any>;
 beforeAll(async () => {
   B = await bundle(path.join(here, 'fixtures/entry.ts'));
-  F = await bundle(path.join(root, 'src/float.ts'));
+  F = await bundle(path.join(root, 'src/entries/float.gen.ts'));
 }, 60_000);
 
 describe('float-specialize', () => {

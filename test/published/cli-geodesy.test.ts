@@ -1,5 +1,5 @@
 // The job runner against a published worked example: Ordnance Survey, *A guide to
-// coordinate systems in Great Britain*, annex B (GRS 80), see CHECKS.md:
+// coordinate systems in Great Britain*, annex B (GRS 80):
 // 53°36'43.1653"N, 1°39'51.9920"W, h = 299.800 m ↔ X = 3790644.900, Y = −110149.210, Z = 5111482.970 m.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { resolve } from 'node:path';

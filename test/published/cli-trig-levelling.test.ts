@@ -1,5 +1,5 @@
 // The job runner against a published worked example: Mahun, *Surveying* open text,
-// "Solution: Trig Leveling", Problem 1 (see CHECKS.md): instrument 5.41 ft over a point of
+// "Solution: Trig Leveling", Problem 1: instrument 5.41 ft over a point of
 // elevation 745.39 ft, target 5.64 ft; elevation = H + hi + S·sin α − hr.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { writeFileSync } from 'node:fs';

@@ -1,4 +1,4 @@
-// In-line heights built on the published Stewart's-theorem case (CHECKS.md, "Triangles").
+// In-line heights built on the published Stewart's-theorem case (Matthew Stewart, Some General Theorems, Edinburgh 1746, Prop. II: a = 7, BD = 3, DC = 4).
 import { describe, expect, it } from 'vitest';
 import { rational, decimal, float } from '../../src/index.js';
 import { heightFromInlineReadings } from '../../src/elevation/inline.js';

@@ -51,8 +51,8 @@ describe('Ordnance Survey guide, annex B: geodetic ↔ geocentric on GRS 80', ()
   });
 });
 
-// CHECKS.md tags the WGS 84 and GRS 80 constants doc/memory: the defining values as quoted
-// there, not re-read from the documents for these tests.
+// The WGS 84 and GRS 80 defining values as quoted in NIMA TR8350.2 (3rd ed., 2000, table 3.1)
+// and Moritz (2000): from memory, not re-read from the documents for these tests.
 describe('ellipsoid parameters from their defining documents', () => {
   it('WGS84 is a = 6378137 m, 1/f = 298.257223563 (NIMA TR8350.2, 3rd ed., 2000, table 3.1)', () => {
     const E = ellipsoidParameters(rational, WGS84);
@@ -70,7 +70,7 @@ describe('ellipsoid parameters from their defining documents', () => {
     expect(rational.toPrecision(E.e2, 12)).toBe('0.00669438002290');
     expect(rational.toPrecision(E.ep2, 12)).toBe('0.00673949677548');
   });
-  it('GRS80 mean radius R1 = (2a + b)/3 = 6371008.7714 m (Moritz 2000; doc/memory in CHECKS.md)', () => {
+  it('GRS80 mean radius R1 = (2a + b)/3 = 6371008.7714 m (Moritz 2000, from memory)', () => {
     const E = ellipsoidParameters(rational, GRS80);
     const R1 = rational.div(
       rational.add(rational.mul(rational.from(2), E.a), E.b),
@@ -98,7 +98,7 @@ describe('ellipsoid parameters from their defining documents', () => {
 
 describe('Ordnance Survey guide, annex C: Transverse Mercator (National Grid on Airy 1830)', () => {
   // Ordnance Survey, "A guide to coordinate systems in Great Britain", annex C worked example
-  // (from memory; not listed in CHECKS.md): 52°39′27.2531″N, 1°43′4.5177″E on Airy 1830
+  // (from memory): 52°39′27.2531″N, 1°43′4.5177″E on Airy 1830
   // (a = 6377563.396 m, b = 6356256.909 m), National Grid (F0 = 0.9996012717, true origin
   // 49°N 2°W, false origin E0 = 400000 m, N0 = −100000 m) → E = 651409.903 m, N = 313177.270 m.
   // The guide's own formulas are a series good to about 1 mm this far from the central meridian.

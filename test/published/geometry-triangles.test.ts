@@ -1,4 +1,4 @@
-// Plane rational trigonometry against published triangle values (../shared/CHECKS.md, "Triangles").
+// Plane rational trigonometry against published triangle values (each source named beside its check).
 import { describe, expect, it } from 'vitest';
 import { rational, decimal, float } from '../../src/index.js';
 import type { Arithmetic } from '../../src/index.js';
@@ -27,7 +27,7 @@ const close = (A: Arithmetic<any>, v: unknown, want: number, tol: number) => {
 
 describe("Stewart's theorem: a = 7, b = 3, c = 5, BD = m = 3, DC = n = 4 gives d² = 43/7", () => {
   // M. Stewart, Some General Theorems of Considerable Use in the Higher Parts of Mathematics,
-  // Edinburgh 1746, Prop. II: b²m + c²n = a(d² + mn); the numbers are the worked case in CHECKS.md
+  // Edinburgh 1746, Prop. II: b²m + c²n = a(d² + mn); the numbers are a = 7, b = 3, c = 5, m = 3, n = 4 (derived: d² = 43/7)
   // (doc/derived): d² = (9·3 + 25·4)/7 − 12 = 43/7.
   it('solveStewart(rational, …) gives exactly 43/7 for the quadrance from A to D', () => {
     const [d2, ...rest] = solveStewart(rational, { QB: 25, QC: 9, tB: 0, tD: 3, tC: 7 });
@@ -46,7 +46,7 @@ describe("Stewart's theorem: a = 7, b = 3, c = 5, BD = m = 3, DC = n = 4 gives d
 
 describe('Heron: the 13-14-15 triangle has area 84, quadrea 16·84² = 112896', () => {
   // Heron's formula, s = 21: area = √(21·8·7·6) = 84; spreads by the cross law 16/25 (opposite 13),
-  // 3136/4225 (opposite 14), 144/169 (opposite 15). CHECKS.md "Triangles" (derived, exact).
+  // 3136/4225 (opposite 14), 144/169 (opposite 15). Derived exactly by Heron's formula and the cross law.
   it.each(kinds)(
     'quadrea(%s, 169, 196, 225) = 112896 and Archimedes residual with area 84 is 0',
     (_n, A, tol) => {
@@ -91,7 +91,7 @@ describe('Heron: the 13-14-15 triangle has area 84, quadrea 16·84² = 112896', 
 });
 
 describe('the 3-4-5 right triangle: spread 1 at the right angle and Q1 + Q2 = Q3', () => {
-  // CHECKS.md "Triangles" (derived): legs 3 and 4, hypotenuse 5.
+  // Derived from Pythagoras: legs 3 and 4, hypotenuse 5.
   it.each(kinds)('in %s', (_n, A, tol) => {
     const t = triangle(A, point(A, 0, 0), point(A, 3, 0), point(A, 0, 4));
     close(A, t.s1, 1, tol);

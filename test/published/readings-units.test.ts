@@ -22,7 +22,7 @@ describe('length units are the published exact definitions', () => {
   });
   // Gunter's chain = 66 ft = 100 links; acre = 10 square chains = 43,560 ft²; mile = 5280 ft = 1609.344 m:
   // NIST Handbook 44, Appendix C, "General Tables of Units of Measurement" (from memory); the metre values
-  // are derived from the international foot of the notice above (CHECKS.md "Units": doc/derived).
+  // are derived from the international foot of the notice above (derived).
   it("Gunter's chain is 66 ft and 100 links", () => {
     expect(s(convertLength(R, 1, 'ch', 'ft'))).toBe('66');
     expect(s(convertLength(R, 1, 'ch', 'lk'))).toBe('100');
@@ -49,7 +49,7 @@ describe('angle units are the published definitions', () => {
   });
 });
 
-describe('percent grades (CHECKS.md "Grades and angles", derived)', () => {
+describe('percent grades (percent grade = 100·tan θ, derived)', () => {
   it('100 % is 45° and spread 1/2', () => {
     expect(s(spreadFromGrade(R, 100))).toBe('1/2');
     expect(s(degreesFromSpread(R, spreadFromGrade(R, 100)))).toBe('45');

@@ -1,5 +1,5 @@
 // Checks of the uncertainty module against the GUM (JCGM 100:2008) and its Supplement 1
-// (JCGM 101:2008). Values from CHECKS.md; each source is named beside its check.
+// (JCGM 101:2008). Each source is named beside its check.
 import { describe, it, expect } from 'vitest';
 import { rational, float, uncertain } from '../../src/arithmetic/index.js';
 import { measured } from '../../src/uncertainty/measured.js';
@@ -47,7 +47,7 @@ describe('GUM (JCGM 100:2008) §5.1.2 eq. (10) and §5.1.6', () => {
   });
 
   it('GUM §4.4.3: 20 readings with mean 100.145 °C and s = 1.489 °C give u(mean) = s/√20 = 0.333 °C, propagated through the mean of 20 measured inputs', () => {
-    // The document gives the mean and s (CHECKS.md), the 20 readings only as a histogram
+    // The document gives the mean and s, the 20 readings only as a histogram
     // (its figure 1, from memory): each reading is taken here at the published mean, which
     // changes neither the mean nor the sensitivities 1/20.
     const U = uncertain(float);

@@ -1,5 +1,5 @@
 // A traverse closure with uncertainty, on a published worked example: Mahun, *Surveying*
-// open text, "Solution: Traverse Adjustment", Problem 2 (values in CHECKS.md): misclosure
+// open text, "Solution: Traverse Adjustment", Problem 2: misclosure
 // in latitude −0.115 ft and departure +0.107 ft, linear 0.157 ft (±0.001 ft). The sigmas
 // are derived by hand from GUM eq. (10): departure = Σ dᵢ·sin azᵢ, latitude = Σ dᵢ·cos azᵢ.
 import { describe, it, expect } from 'vitest';

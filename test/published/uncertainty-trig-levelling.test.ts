@@ -1,5 +1,5 @@
 // Trigonometric levelling with uncertainty, on a published worked example: Mahun,
-// *Surveying* open text, "Solution: Trig Leveling", Problem 1 (values in CHECKS.md):
+// *Surveying* open text, "Solution: Trig Leveling", Problem 1:
 // instrument 5.41 ft over a point of elevation 745.39 ft, target 5.64 ft; elevation =
 // H + hi + S·sin α − hr. The elevations are the document's (±0.005 ft); the sigmas are
 // derived by hand from GUM eq. (10): u²(V) = sin²α·u²(S) + (S·cos α)²·u²(α), α in radians.

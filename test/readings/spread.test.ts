@@ -258,7 +258,7 @@ describe('degreesFromSpread(A, s) is the acute angle of spread s', () => {
 });
 
 describe('slope readings are exact spreads', () => {
-  // Derived from the definitions (CHECKS.md "Grades and angles"): s = p²/(10⁴ + p²).
+  // Derived from the definitions (percent grade = 100·tan θ): s = p²/(10⁴ + p²).
   it('spreadFromGrade: 100 % is 1/2, 10 % is 1/101, −3 % is 9/10009', () => {
     expect(rational.toString(spreadFromGrade(rational, 100))).toBe('1/2');
     expect(rational.toString(spreadFromGrade(rational, 10))).toBe('1/101');
