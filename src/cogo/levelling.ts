@@ -89,16 +89,16 @@ function readC<T>(A: Arithmetic<T, boolean>, order: Numeric<T>, where: string): 
  */
 export function allowableMisclosure<T, E extends boolean>(
   A: Arithmetic<T, E>,
-  order: Numeric<T>,
+  c: Numeric<T>,
   km: Numeric<T>,
 ): AllowableMisclosure<T, E> {
-  const where = 'allowableMisclosure(A, order, km)';
-  const c = readC(A, order, `${where} order`);
+  const where = 'allowableMisclosure(A, c, km)';
+  const cMm = readC(A, c, `${where} c`);
   const K = readNumber(A, km, where, ' km');
   if (A.sign(K) < 0) throw invalidArgument(`${where} km`, `K = ${A.toString(K)} km is negative`);
   // Allowable section misclosure c·√K mm, c as the user's specification gives it.
-  const allowable = sqrtOf(A, A.mul(A.mul(c, c), K));
-  return { c, km: K, allowable };
+  const allowable = sqrtOf(A, A.mul(A.mul(cMm, cMm), K));
+  return { c: cMm, km: K, allowable };
 }
 
 /**

@@ -33,7 +33,7 @@ export type Bound<F> = F extends (A: never, ...rest: infer P) => infer R ? (...r
 export const arithmetic: DecimalArithmetic = /* @__PURE__ */ decimal(34);
 
 /** {@link g.allowableMisclosure | allowableMisclosure} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
-export const allowableMisclosure: Bound<typeof g.allowableMisclosure<Value, false>> = (order, km) => g.allowableMisclosure<Value, false>(arithmetic, order, km);
+export const allowableMisclosure: Bound<typeof g.allowableMisclosure<Value, false>> = (c, km) => g.allowableMisclosure<Value, false>(arithmetic, c, km);
 
 /** {@link g.angleToDegrees | angleToDegrees} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const angleToDegrees: Bound<typeof g.angleToDegrees<Value>> = (reading, unit) => g.angleToDegrees<Value>(arithmetic, reading, unit);

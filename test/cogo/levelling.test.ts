@@ -109,7 +109,7 @@ describe.each(kinds)('levelRun(%s, …)', (_name, A) => {
   });
 });
 
-describe('allowableMisclosure(A, order, km)', () => {
+describe('allowableMisclosure(A, c, km)', () => {
   it('is c·√K, a surd in rational', () => {
     expect(allowableMisclosure(rational, 3, 9).allowable.toString()).toBe('9');
     expect(allowableMisclosure(rational, '8', 3).allowable.toString()).toBe('8√3');
