@@ -1,5 +1,6 @@
 import path from 'node:path';
 import { defineConfig, type Options } from 'tsup';
+import type { Plugin } from 'esbuild';
 // The float entry's modules are compiled float-specialised (A.add(x, y) → x + y …); see the file.
 // @ts-expect-error -- a plain .mjs plugin without declarations (tsc checks *.config.ts)
 import { floatSpecialize } from './scripts/float-specialize.mjs';
@@ -49,14 +50,38 @@ const decimalFromTree = {
   },
 };
 
+// For the CommonJS bound entries rational and decimal: every import of the generic source
+// (../index.js, ../arithmetic/*.js) becomes a require of the bundled generic entry, so the
+// package carries the library's code once (the arithmetic each entry fixes is exported there).
+const genericFromIndex: Plugin = {
+  name: 'generic-from-index',
+  setup(build) {
+    build.onResolve({ filter: /^\.\.\/(index|arithmetic\/[\w-]+)\.js$/ }, (args) =>
+      /[\\/]entries[\\/][\w.]+\.gen\.ts$/.test(args.importer)
+        ? { path: './index.cjs', external: true }
+        : undefined,
+    );
+  },
+};
+
 export default defineConfig([
   {
     ...common,
-    entry: entries,
+    entry: { index: entries.index, float: entries.float },
     format: ['cjs'],
     splitting: false,
     treeshake: true,
     esbuildPlugins: [floatSpecialize()],
+  },
+  // The CommonJS quadspread/rational and quadspread/decimal are thin: they require
+  // dist/index.cjs for everything but their own wrappers, instead of a 220 KB copy each.
+  {
+    ...common,
+    entry: { rational: entries.rational, decimal: entries.decimal },
+    format: ['cjs'],
+    splitting: false,
+    treeshake: true,
+    esbuildPlugins: [genericFromIndex],
   },
   {
     ...common,
@@ -88,6 +113,8 @@ export default defineConfig([
     splitting: false,
     treeshake: true,
     noExternal: ['commander'],
+    // Minified in the tarball (432 KB → see README): users run it, they do not read it.
+    minify: true,
     banner: {
       js: "import { createRequire as __createRequire } from 'node:module'; const require = __createRequire(import.meta.url);",
     },

@@ -17,6 +17,8 @@ import * as triangle from './workloads/triangle.mjs';
 import * as heights from './workloads/heights.mjs';
 import * as traverse from './workloads/traverse.mjs';
 import * as budget from './workloads/budget.mjs';
+import * as geodesy from './workloads/geodesy.mjs';
+import * as roundtrip from './workloads/roundtrip.mjs';
 import * as sideshots from './workloads/side-shots.mjs';
 
 const args = process.argv.slice(2);
@@ -55,7 +57,7 @@ const t0 = Date.now();
 const arithmetics = [g.float, g.rational, g.decimal(34), g.decimal(20)];
 if (g.uncertain) arithmetics.push(g.uncertain(g.float), g.uncertain(g.rational));
 
-const workloads = [triangle, heights, traverse, budget, sideshots].filter(
+const workloads = [triangle, heights, traverse, budget, geodesy, roundtrip, sideshots].filter(
   (w) => !only || w.name === only,
 );
 const built = [];

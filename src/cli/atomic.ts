@@ -4,8 +4,19 @@
  *
  * @module cli
  */
-import { closeSync, fsyncSync, openSync, renameSync, rmSync, statSync, writeSync } from 'node:fs';
-import { basename, dirname, join } from 'node:path';
+import {
+  closeSync,
+  fsyncSync,
+  lstatSync,
+  openSync,
+  realpathSync,
+  renameSync,
+  rmSync,
+  statSync,
+  writeSync,
+} from 'node:fs';
+import type { Stats } from 'node:fs';
+import { basename, dirname, join, resolve } from 'node:path';
 import { JobInvalid } from './failure.js';
 
 /** Why `target` cannot be written, in plain words, from a file-system error. */
@@ -20,6 +31,104 @@ function cannotWrite(target: string, e: unknown): JobInvalid {
           ? 'permission denied'
           : (code ?? (e as Error).message);
   return new JobInvalid('', `cannot write ${JSON.stringify(target)}: ${why}`);
+}
+
+function refuse(target: string, why: string): JobInvalid {
+  return new JobInvalid('', `cannot write ${JSON.stringify(target)}: ${why}`);
+}
+
+/** What kind of file system object a non-regular file is, in words. */
+function kindOf(st: Stats): string {
+  return st.isDirectory()
+    ? 'it is a folder'
+    : st.isFIFO()
+      ? 'it is a named pipe (FIFO), not a regular file'
+      : st.isCharacterDevice() || st.isBlockDevice()
+        ? 'it is a device, not a regular file'
+        : st.isSocket()
+          ? 'it is a socket, not a regular file'
+          : 'it is not a regular file';
+}
+
+/**
+ * Where writing to `target` really goes: a symbolic link is followed to its target (the link
+ * stays a link), and the result must be a regular file or not exist yet. Anything else (a
+ * folder, a device such as /dev/null, a FIFO, a socket, a dangling link) is refused with exit 2
+ * naming the path, since renaming a temporary file over it would replace it.
+ */
+export function outputPath(target: string): string {
+  let st: Stats;
+  try {
+    st = lstatSync(target);
+  } catch {
+    return target; // No such file yet: the usual case.
+  }
+  let real = target;
+  if (st.isSymbolicLink()) {
+    try {
+      real = realpathSync(target);
+      st = statSync(real);
+    } catch {
+      throw refuse(target, 'it is a symbolic link to nothing (a dangling link)');
+    }
+  }
+  if (!st.isFile()) throw refuse(target, kindOf(st));
+  return real;
+}
+
+/**
+ * Whether two paths name the same file: the same device and inode when both exist (so hard
+ * links, symbolic links and `..` are seen through), else the same real path of the folder and
+ * the same name.
+ */
+export function sameFile(a: string, b: string): boolean {
+  try {
+    const x = statSync(a);
+    const y = statSync(b);
+    return x.dev === y.dev && x.ino === y.ino;
+  } catch {
+    const real = (p: string): string => {
+      try {
+        return realpathSync(p);
+      } catch {
+        try {
+          return join(realpathSync(dirname(p)), basename(p));
+        } catch {
+          return resolve(p);
+        }
+      }
+    };
+    return real(a) === real(b);
+  }
+}
+
+// Temporary files being written. While there are any, an interrupt (Ctrl-C, SIGINT), a
+// termination request (SIGTERM) or a closed terminal (SIGHUP) removes them and ends the
+// process with the usual 128 + signal number. The handlers are installed only meanwhile, so
+// the default action (ending at once) holds whenever no temporary file exists.
+const live = new Set<string>();
+const SIGNALS = { SIGINT: 2, SIGTERM: 15, SIGHUP: 1 } as const;
+const onSignal = (signal: NodeJS.Signals): void => {
+  removeTemporaryFiles();
+  process.exit(128 + SIGNALS[signal as keyof typeof SIGNALS]);
+};
+
+function track(temp: string, on: boolean): void {
+  const before = live.size;
+  if (on) live.add(temp);
+  else live.delete(temp);
+  if (before === 0 && live.size > 0)
+    for (const s of Object.keys(SIGNALS)) process.on(s as NodeJS.Signals, onSignal);
+  else if (before > 0 && live.size === 0)
+    for (const s of Object.keys(SIGNALS)) process.off(s as NodeJS.Signals, onSignal);
+}
+
+/** Removes every temporary file still being written (as on an interrupt). */
+export function removeTemporaryFiles(): void {
+  for (const t of [...live]) {
+    rmSync(t, { force: true });
+    track(t, false);
+  }
 }
 
 /** The temporary name used while `target` is being written (same folder, so rename is atomic). */
@@ -47,20 +156,15 @@ export interface PendingFile {
  * {@link JobInvalid}, exit 2, and nothing is left behind.
  */
 export function openPending(target: string): PendingFile {
-  let isFolder = false;
-  try {
-    isFolder = statSync(target).isDirectory();
-  } catch {
-    // No such file yet: the usual case.
-  }
-  if (isFolder) throw cannotWrite(target, Object.assign(new Error('EISDIR'), { code: 'EISDIR' }));
-  const temp = tempNameFor(target);
+  const real = outputPath(target);
+  const temp = tempNameFor(real);
   let fd: number;
   try {
     fd = openSync(temp, 'wx', 0o644);
   } catch (e) {
     throw cannotWrite(target, e);
   }
+  track(temp, true);
   let open = true;
   const close = (): void => {
     if (open) {
@@ -81,16 +185,21 @@ export function openPending(target: string): PendingFile {
       try {
         fsyncSync(fd);
         close();
-        renameSync(temp, target);
+        // Checked again just before the rename: a file that became a FIFO or a device since
+        // is refused rather than replaced.
+        renameSync(temp, outputPath(real));
+        track(temp, false);
       } catch (e) {
         close();
         rmSync(temp, { force: true });
-        throw cannotWrite(target, e);
+        track(temp, false);
+        throw e instanceof JobInvalid ? e : cannotWrite(target, e);
       }
     },
     abort() {
       close();
       rmSync(temp, { force: true });
+      track(temp, false);
     },
   };
 }

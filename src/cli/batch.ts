@@ -8,11 +8,9 @@
  * @module cli
  */
 import { createReadStream } from 'node:fs';
-import { resolve as resolvePath } from 'node:path';
-import { createInterface } from 'node:readline';
 import { QuadspreadError, point, quadrance, sqrtOf, rootToPrecision } from '../index.js';
 import type { Arithmetic } from '../index.js';
-import { openPending } from './atomic.js';
+import { openPending, sameFile } from './atomic.js';
 import type { PendingFile } from './atomic.js';
 import { csvLine, splitCsvLine } from './csv.js';
 import { JobInvalid, JobUnsolvable } from './failure.js';
@@ -27,6 +25,8 @@ export interface BatchKind {
   description: string;
   columns: readonly string[];
   outputs: readonly string[];
+  /** Input columns that must not be negative (a distance): a negative value is refused, exit 2. */
+  nonNegative?: readonly string[];
   /** Computes the output fields of one row from its values (in the arithmetic), formatted to `digits`. */
   row<V>(A: Arithmetic<V, boolean>, values: V[], digits: number): string[];
 }
@@ -49,6 +49,54 @@ export const BATCH_KINDS: Record<string, BatchKind> = {
   ...BATCH_EXTRA,
 };
 
+/** Longest line of a batch CSV, in characters (a row is a handful of numbers). */
+export const MAX_CSV_LINE = 64 * 1024;
+
+/**
+ * The lines of a text stream (LF or CRLF), refusing a line longer than {@link MAX_CSV_LINE}
+ * as soon as it is seen, so that a file with no line breaks (a device such as /dev/zero, a
+ * binary file) is refused at once rather than read into memory.
+ */
+async function* csvLines(input: AsyncIterable<string>, file: string): AsyncGenerator<string> {
+  let rest = '';
+  let n = 0;
+  const chunks = input[Symbol.asyncIterator]();
+  for (;;) {
+    let next: IteratorResult<string>;
+    try {
+      next = await chunks.next();
+    } catch (e) {
+      throw cannotRead(file, e);
+    }
+    if (next.done) break;
+    const chunk = next.value;
+    const parts = (rest + chunk).split('\n');
+    rest = parts.pop()!;
+    for (const line of parts) {
+      n++;
+      if (line.length > MAX_CSV_LINE + 1) throw lineTooLong(n);
+      yield line.endsWith('\r') ? line.slice(0, -1) : line;
+    }
+    if (rest.length > MAX_CSV_LINE) throw lineTooLong(n + 1);
+  }
+  if (rest !== '') yield rest.endsWith('\r') ? rest.slice(0, -1) : rest;
+}
+
+function cannotRead(file: string, e: unknown): JobInvalid {
+  const code = (e as NodeJS.ErrnoException).code;
+  return new JobInvalid(
+    '',
+    `cannot read the CSV file ${JSON.stringify(file)}: ${code === 'EISDIR' ? 'it is a folder' : (code ?? (e as Error).message)}`,
+  );
+}
+
+function lineTooLong(n: number): JobInvalid {
+  return new JobInvalid(
+    `line ${n}`,
+    `the line is longer than ${MAX_CSV_LINE} characters (is this a CSV text file?)`,
+  );
+}
+
 /** Runs a batch, writing to `o.out` (atomically) or the standard output. */
 export async function runBatch(
   kind: string,
@@ -56,31 +104,25 @@ export async function runBatch(
   o: { arithmetic: ArithmeticName; digits: number; out?: string },
   io: Io,
 ): Promise<void> {
-  const k = BATCH_KINDS[kind];
+  const k = Object.hasOwn(BATCH_KINDS, kind) ? BATCH_KINDS[kind] : undefined;
   if (!k)
     throw new JobInvalid(
       '',
       `${JSON.stringify(kind)} is not a batch kind (${Object.keys(BATCH_KINDS).join(', ')})`,
     );
-  if (o.out !== undefined && file !== '-' && resolvePath(o.out) === resolvePath(file)) {
+  if (o.out !== undefined && file !== '-' && sameFile(o.out, file)) {
     throw new JobInvalid(
       '--out',
       `${JSON.stringify(o.out)} is the input CSV itself: give the results another name`,
     );
   }
   const A = arithmeticFor(o.arithmetic, o.digits);
-  const input = file === '-' ? process.stdin : createReadStream(file, { encoding: 'utf8' });
+  const input =
+    file === '-' ? process.stdin.setEncoding('utf8') : createReadStream(file, { encoding: 'utf8' });
   const opened = new Promise<void>((resolve, reject) => {
     if (file === '-') resolve();
     input.once('open', () => resolve());
-    input.once('error', (e: NodeJS.ErrnoException) =>
-      reject(
-        new JobInvalid(
-          '',
-          `cannot read the CSV file ${JSON.stringify(file)}: ${e.code ?? e.message}`,
-        ),
-      ),
-    );
+    input.once('error', (e: NodeJS.ErrnoException) => reject(cannotRead(file, e)));
   });
   await opened;
   let pending: PendingFile | undefined;
@@ -100,8 +142,7 @@ export async function runBatch(
   };
   try {
     if (o.out !== undefined) pending = openPending(o.out);
-    const lines = createInterface({ input, crlfDelay: Infinity });
-    for await (const raw of lines) {
+    for await (const raw of csvLines(input as AsyncIterable<string>, file)) {
       lineNo++;
       if (raw.trim() === '' || raw.startsWith('#')) continue;
       const fields = splitCsvLine(raw);
@@ -125,7 +166,13 @@ export async function runBatch(
         if (text === undefined || text === '')
           throw new JobInvalid(`line ${lineNo}, column "${k.columns[i]}"`, 'the value is missing');
         try {
-          return A.from(text);
+          const v = A.from(text);
+          if (k.nonNegative?.includes(k.columns[i]!) && A.sign(v) < 0)
+            throw new JobInvalid(
+              `line ${lineNo}, column "${k.columns[i]}"`,
+              `${JSON.stringify(text)} is negative: a distance is at least 0`,
+            );
+          return v;
         } catch (e) {
           if (e instanceof QuadspreadError)
             throw new JobInvalid(

@@ -4,6 +4,7 @@
  *
  * @module cli
  */
+import { csvField } from './escape.js';
 
 /** Splits one CSV line into fields, or returns a reason when the quoting is broken. */
 export function splitCsvLine(line: string): string[] | string {
@@ -39,9 +40,7 @@ export function splitCsvLine(line: string): string[] | string {
   }
 }
 
-/** Writes one CSV record (with a trailing newline). */
+/** Writes one CSV record (with a trailing newline); fields that could act as formulas are neutralised. */
 export function csvLine(fields: readonly string[]): string {
-  return (
-    fields.map((f) => (/[",\n\r]/.test(f) ? `"${f.replace(/"/g, '""')}"` : f)).join(',') + '\n'
-  );
+  return fields.map(csvField).join(',') + '\n';
 }

@@ -23,6 +23,7 @@ import type { QuantityKind } from './display.js';
 import { present, presentCheck, presentTable } from './present.js';
 import { CAUTION } from './report.js';
 import type { BudgetTerm, Quantity, Report, ReportHeader, TaskReport } from './report.js';
+import { findDuplicateKey } from './json-keys.js';
 import { jobSchema } from './schema.js';
 import type { Env, JobContext, JobPoint, Outcome, TaskKind, Value } from './task.js';
 import { joinPath, validate } from './validate.js';
@@ -61,8 +62,9 @@ export function arithmeticFor(name: ArithmeticName, digits: number): Arithmetic<
 
 /** Parses job text as JSON, failing with exit 2 and the line and column of the fault. */
 export function parseJob(text: string): unknown {
+  let job: unknown;
   try {
-    return JSON.parse(text) as unknown;
+    job = JSON.parse(text) as unknown;
   } catch (e) {
     const msg = (e as Error).message;
     const pos = /position (\d+)/.exec(msg);
@@ -77,6 +79,14 @@ export function parseJob(text: string): unknown {
       `the job file is not valid JSON (${msg.replace(/^JSON\.parse: /, '')})`,
     );
   }
+  // JSON.parse keeps the last of two equal keys: a point or a reading written twice is refused.
+  const dup = findDuplicateKey(text);
+  if (dup)
+    throw new JobInvalid(
+      `${dup.path} (line ${dup.line})`,
+      `is written twice in the same object (first on line ${dup.firstLine}): keep one`,
+    );
+  return job;
 }
 
 function taskLabel(task: Record<string, unknown>, index: number): string {

@@ -4,15 +4,15 @@
  *
  * @module cli
  */
-import { readFileSync, statSync } from 'node:fs';
-import { resolve } from 'node:path';
+import { closeSync, openSync, readSync } from 'node:fs';
 import { Argument, Command, CommanderError, InvalidArgumentError, Option } from 'commander';
-import { writeFilesAtomic } from './atomic.js';
+import { sameFile, writeFilesAtomic } from './atomic.js';
 import { BATCH_KINDS, runBatch } from './batch.js';
 import { DEMO_JOB } from './demo-job.js';
 import { EXIT, JobInvalid, JobUnsolvable } from './failure.js';
 import { parseJob, runJob } from './job.js';
 import type { ArithmeticName } from './job.js';
+import { visibleControls } from './escape.js';
 import { renderJson } from './render-json.js';
 import { renderMarkdown } from './render-markdown.js';
 import { renderText } from './render-text.js';
@@ -22,6 +22,7 @@ import { REPORT_SCHEMA } from './report-schema.js';
 import { jobSchema } from './schema.js';
 import { renderSketch } from './sketch.js';
 import { TASK_KINDS } from './tasks/index.js';
+import { version } from '../../package.json';
 
 /** Where the program writes, so tests and embedders can capture it. */
 export interface Io {
@@ -33,8 +34,11 @@ export interface Io {
   stdin?: () => Promise<string>;
 }
 
-/** The version printed by `--version`. */
-export const VERSION = '0.1.0';
+/**
+ * The version printed by `--version` and in report headers: package.json's, read when the CLI
+ * is bundled (esbuild keeps only this field of the JSON).
+ */
+export const VERSION: string = version;
 
 interface ReportOptions {
   arithmetic: ArithmeticName;
@@ -106,7 +110,7 @@ function addReportOptions(cmd: Command): Command {
 }
 
 function report(job: unknown, source: string, o: ReportOptions, io: Io, jobFile?: string): number {
-  if (o.out !== undefined && o.sketch !== undefined && resolve(o.out) === resolve(o.sketch)) {
+  if (o.out !== undefined && o.sketch !== undefined && sameFile(o.out, o.sketch)) {
     throw new JobInvalid(
       '--sketch',
       `${JSON.stringify(o.sketch)} is also the --out file: give them different names`,
@@ -117,7 +121,7 @@ function report(job: unknown, source: string, o: ReportOptions, io: Io, jobFile?
     ['--out', o.out],
     ['--sketch', o.sketch],
   ] as const) {
-    if (jobFile !== undefined && target !== undefined && resolve(target) === resolve(jobFile)) {
+    if (jobFile !== undefined && target !== undefined && sameFile(target, jobFile)) {
       throw new JobInvalid(
         option,
         `${JSON.stringify(target)} is the job file itself: give the output another name`,
@@ -165,19 +169,38 @@ function report(job: unknown, source: string, o: ReportOptions, io: Io, jobFile?
 export const MAX_JOB_BYTES = 50 * 1024 * 1024;
 
 function readText(file: string, what: string): string {
+  const tooLarge = (): JobInvalid =>
+    new JobInvalid(
+      '',
+      `the ${what} ${JSON.stringify(file)} is larger than ${MAX_JOB_BYTES / 1024 / 1024} MB (use quadspread batch for many cases)`,
+    );
+  let fd: number | undefined;
   try {
-    if (statSync(file).size > MAX_JOB_BYTES)
-      throw new JobInvalid(
-        '',
-        `the ${what} ${JSON.stringify(file)} is larger than ${MAX_JOB_BYTES / 1024 / 1024} MB (use quadspread batch for many cases)`,
-      );
-    return readFileSync(file, 'utf8').replace(/^\uFEFF/, '');
+    // The limit is enforced while reading, not from the size the file claims: a device
+    // (/dev/zero), a FIFO or process substitution has no size until it is read.
+    fd = openSync(file, 'r');
+    const chunks: Buffer[] = [];
+    let total = 0;
+    for (;;) {
+      const chunk = Buffer.allocUnsafe(1 << 16);
+      const n = readSync(fd, chunk, 0, chunk.length, null);
+      if (n === 0) break;
+      total += n;
+      if (total > MAX_JOB_BYTES) throw tooLarge();
+      chunks.push(n === chunk.length ? chunk : chunk.subarray(0, n));
+    }
+    return Buffer.concat(chunks, total)
+      .toString('utf8')
+      .replace(/^\uFEFF/, '');
   } catch (e) {
     if (e instanceof JobInvalid) throw e;
+    const code = (e as NodeJS.ErrnoException).code;
     throw new JobInvalid(
       '',
-      `cannot read the ${what} ${JSON.stringify(file)}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}`,
+      `cannot read the ${what} ${JSON.stringify(file)}: ${code === 'EISDIR' ? 'it is a folder' : (code ?? (e as Error).message)}`,
     );
+  } finally {
+    if (fd !== undefined) closeSync(fd);
   }
 }
 
@@ -289,7 +312,8 @@ export async function main(argv: string[], io: Io): Promise<number> {
       return e.exitCode === 0 ? EXIT.OK : EXIT.INVALID;
     }
     if (e instanceof JobInvalid || e instanceof JobUnsolvable) {
-      io.stderr(`quadspread: ${e.message}\n`);
+      // Names and values from the job are shown with their control characters escaped.
+      io.stderr(`quadspread: ${e.message.split('\n').map(visibleControls).join('\n')}\n`);
       return e.exitCode;
     }
     io.stderr(

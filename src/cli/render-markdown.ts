@@ -6,14 +6,18 @@
 import type { Report, Table } from './report.js';
 import { BUDGET_SHOWN, rulesLine, shortExact, showExact } from './render-text.js';
 import type { TextOptions } from './render-text.js';
+import { markdownCode, markdownText } from './escape.js';
 
 /** What ± σ and the budget column mean, said once at the top of a report that has them. */
 const MARKDOWN_LEGEND =
   "± σ is the standard uncertainty (k = 1, first order); the budget gives each input's share of the variance.";
 
-/** Escapes text for a Markdown table cell. */
-function cell(text: string): string {
-  return text.replace(/\\/g, '\\\\').replace(/\|/g, '\\|').replace(/\n/g, ' ');
+/** Escapes text for a Markdown table cell (markdownText escapes the `|` as well). */
+const cell = markdownText;
+
+/** A code span in a table cell: a `|` inside still ends the cell unless escaped (GFM §4.10). */
+function codeCell(text: string): string {
+  return markdownCode(text).replace(/\|/g, '\\|');
 }
 
 function withUnit(value: string, unit: string): string {
@@ -33,7 +37,7 @@ function tableLines(t: Table): string[] {
 export function renderMarkdown(report: Report, o: TextOptions = {}): string {
   const out: string[] = [];
   const h = report.header;
-  out.push(`# ${report.title}`);
+  out.push(`# ${markdownText(report.title)}`);
   out.push('');
   out.push(
     [
@@ -42,7 +46,7 @@ export function renderMarkdown(report: Report, o: TextOptions = {}): string {
       `lengths in ${report.lengthUnit}`,
       ...(h?.datum !== undefined ? [`datum/grid: ${cell(h.datum)}`] : []),
       ...(h?.reference !== undefined ? [`reference: ${cell(h.reference)}`] : []),
-      `source: \`${report.source}\``,
+      `source: ${markdownCode(report.source)}`,
     ].join(' · '),
   );
   if (h)
@@ -58,7 +62,7 @@ export function renderMarkdown(report: Report, o: TextOptions = {}): string {
     out.push('');
     out.push(`## ${t.index + 1}. ${cell(t.name)} (${t.kind})`);
     out.push('');
-    out.push(t.summary);
+    out.push(markdownText(t.summary));
     if (t.results.length > 0) {
       out.push('');
       out.push(
@@ -80,12 +84,12 @@ export function renderMarkdown(report: Report, o: TextOptions = {}): string {
             (c) => `${c.inputs[0]} ↔ ${c.inputs[1]} (r = ${c.r}) ${c.share} %`,
           ),
         ].join(', ');
-        const exact = showExact(q) ? `\`${shortExact(q.exact)}\`` : '';
-        const key = o.detail ? ` (\`${q.name}\`)` : '';
+        const exact = showExact(q) ? codeCell(shortExact(q.exact)) : '';
+        const key = o.detail ? ` (${codeCell(q.name)})` : '';
         const value = q.display ?? withUnit(q.value, q.unit);
         const sigma = q.sigma !== undefined ? (q.displaySigma ?? withUnit(q.sigma, q.unit)) : '';
         out.push(
-          `| ${cell(q.label)}${key} | ${cell(value)} | ${cell(sigma)} |${o.detail ? ` ${cell(exact)} |` : ''} ${cell(budget)} |`,
+          `| ${cell(q.label)}${key} | ${cell(value)} | ${cell(sigma)} |${o.detail ? ` ${exact} |` : ''} ${cell(budget)} |`,
         );
       }
     }
@@ -103,7 +107,7 @@ export function renderMarkdown(report: Report, o: TextOptions = {}): string {
     }
     if (t.notes.length > 0) {
       out.push('');
-      for (const n of t.notes) out.push(`- ${n}`);
+      for (const n of t.notes) out.push(`- ${markdownText(n)}`);
     }
   }
   out.push('');

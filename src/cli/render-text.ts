@@ -5,6 +5,7 @@
  */
 import { rational } from '../index.js';
 import type { Quantity, Report, Table } from './report.js';
+import { visibleControls } from './escape.js';
 
 const EXACT_SHOWN = 72;
 /** Budget lines shown per quantity in text and Markdown (JSON has them all). */
@@ -191,5 +192,7 @@ export function renderText(report: Report, o: TextOptions = {}): string {
   );
   out.push('');
   out.push(...wrap(report.caution, '', ''));
-  return out.join('\n') + '\n';
+  // Each entry is one line: control characters from the job (a name with an escape sequence or
+  // a line break) are shown escaped, never sent to the terminal.
+  return out.map(visibleControls).join('\n') + '\n';
 }

@@ -8,6 +8,7 @@
  * @module cli
  */
 import type { Report, SketchView } from './report.js';
+import { visibleControls } from './escape.js';
 
 const WIDTH = 720;
 const PANEL = 440;
@@ -15,7 +16,8 @@ const MARGIN = 56;
 
 /** Escapes text for XML character data and attribute values. */
 export function xmlEscape(text: string): string {
-  return text
+  // XML 1.0 §2.2 allows no C0 control character but tab and line breaks: shown escaped.
+  return visibleControls(text)
     .replace(/&/g, '&amp;')
     .replace(/</g, '&lt;')
     .replace(/>/g, '&gt;')

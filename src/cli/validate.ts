@@ -213,11 +213,11 @@ function check(x: unknown, schema0: Schema, root: Schema, path: string, out: Pro
       const props = (schema.properties ?? {}) as Record<string, Schema>;
       const patterns = (schema.patternProperties ?? {}) as Record<string, Schema>;
       for (const key of (schema.required ?? []) as string[]) {
-        if (!(key in o)) out.push({ path: where, message: `"${key}" is missing` });
+        if (!Object.hasOwn(o, key)) out.push({ path: where, message: `"${key}" is missing` });
       }
       for (const [key, v] of Object.entries(o)) {
         const p = joinPath(path, key);
-        if (key in props) {
+        if (Object.hasOwn(props, key)) {
           check(v, props[key]!, root, p, out);
           continue;
         }
@@ -262,7 +262,7 @@ function nearest(x: unknown, branches: Schema[], root: Schema): number | undefin
   const keys = Object.keys(x as object);
   const scores = typed.map((i) => {
     const props = (resolve(branches[i]!, root).properties ?? {}) as Record<string, unknown>;
-    return keys.filter((k) => k in props).length;
+    return keys.filter((k) => Object.hasOwn(props, k)).length;
   });
   const best = Math.max(...scores);
   if (best === 0 || scores.filter((s) => s === best).length !== 1) return undefined;

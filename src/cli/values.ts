@@ -18,8 +18,8 @@ import {
   verticalFromSlope,
   vertical,
 } from '../index.js';
-import type { AngleUnit, Arithmetic, LengthUnit, VerticalReading } from '../index.js';
-import { show } from '../errors.js';
+import type { AngleUnit, Arithmetic, LengthUnit, Rational, VerticalReading } from '../index.js';
+import { MAX_INPUT_LENGTH, inputTooLong, show } from '../errors.js';
 import { JobInvalid } from './failure.js';
 
 const R = rational;
@@ -64,6 +64,20 @@ export const LENGTH_UNIT_NAMES: Record<LengthUnit, string> = {
 
 const LENGTH_TEXT =
   /^\s*([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?(?:\s*\/\s*\d+)?)\s*([A-Za-z-]+)?\s*$/;
+
+/**
+ * A value as the exact text the computation reads back (`A.from`): refused when that text is
+ * longer than the readers' limit (a value such as 1e1000 or 1e-999 written out exactly).
+ */
+function exactText(v: Rational): string {
+  const t = R.toString(v);
+  if (t.length > MAX_INPUT_LENGTH)
+    throw inputTooLong(
+      '',
+      `it is too large or too precise: written exactly it takes ${t.length} characters, over the limit of ${MAX_INPUT_LENGTH}`,
+    );
+  return t;
+}
 
 function reason(e: unknown): string {
   if (e instanceof QuadspreadError) {
@@ -114,7 +128,7 @@ function splitMeasured(
 export function lengthText(x: unknown, path: string, unit: LengthUnit, what = 'length'): string {
   if (typeof x === 'number') {
     try {
-      return R.toString(R.from(x));
+      return exactText(R.from(x));
     } catch (e) {
       throw new JobInvalid(path, `${show(x)} is not a valid ${what}: ${reason(e)}`);
     }
@@ -133,15 +147,15 @@ export function lengthText(x: unknown, path: string, unit: LengthUnit, what = 'l
   const given = m[2];
   try {
     const v = R.from(m[1]!.replace(/\s+/g, ''));
-    if (given === undefined) return R.toString(v);
-    if (given === 'mm') return R.toString(convertLength(R, R.div(v, R.from(1000)), 'm', unit));
+    if (given === undefined) return exactText(v);
+    if (given === 'mm') return exactText(convertLength(R, R.div(v, R.from(1000)), 'm', unit));
     if (!(LENGTH_UNITS as readonly string[]).includes(given)) {
       throw new JobInvalid(
         path,
         `${show(x)} is not a valid ${what}: unknown unit "${given}" (use ${['mm', ...LENGTH_UNITS].join(', ')})`,
       );
     }
-    return R.toString(convertLength(R, v, given as LengthUnit, unit));
+    return exactText(convertLength(R, v, given as LengthUnit, unit));
   } catch (e) {
     if (e instanceof JobInvalid) throw e;
     throw new JobInvalid(path, `${show(x)} is not a valid ${what}: ${reason(e)}`);
@@ -194,9 +208,9 @@ export function angleText(x: unknown, path: string, what = 'angle'): string {
   try {
     if (typeof x === 'string') {
       const m = ANGLE_SUFFIX.exec(x);
-      if (m) return R.toString(angleToDegrees(R, m[1]!, m[2] as AngleUnit));
+      if (m) return exactText(angleToDegrees(R, m[1]!, m[2] as AngleUnit));
     }
-    return R.toString(angleToDegrees(R, x));
+    return exactText(angleToDegrees(R, x));
   } catch (e) {
     throw new JobInvalid(path, `${show(x)} is not a valid ${what}: ${reason(e)}`);
   }
@@ -223,7 +237,7 @@ export function readNumber(x: unknown, path: string, name: string, what = 'numbe
     try {
       if (typeof v !== 'number' && typeof v !== 'string')
         throw new JobInvalid(p, `${show(v)} is not a valid ${w}`);
-      return R.toString(R.from(v));
+      return exactText(R.from(v));
     } catch (e) {
       if (e instanceof JobInvalid) throw e;
       throw new JobInvalid(p, `${show(v)} is not a valid ${w}: ${reason(e)}`);

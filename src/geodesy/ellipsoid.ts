@@ -162,6 +162,8 @@ export function ellipsoidByName(name: string): Ellipsoid {
 /** @internal an ellipsoid argument: a known name or an ellipsoid object. */
 export function readEllipsoid(e: Ellipsoid | string | undefined, where: string): Ellipsoid {
   if (typeof e === 'string') {
+    const exact = Object.hasOwn(KNOWN, e) ? KNOWN[e] : undefined;
+    if (exact !== undefined) return exact; // 'WGS84', 'GRS80' as written: no normalising
     try {
       return ellipsoidByName(e);
     } catch {
@@ -229,6 +231,27 @@ export function ellipsoidParameters<T>(
   ellipsoid: Ellipsoid | string,
 ): EllipsoidParameters<T> {
   const E = readEllipsoid(ellipsoid, 'ellipsoidParameters(ellipsoid)');
+  // The constants are read from text once per arithmetic and ellipsoid (a pure memo: both
+  // are immutable, and the result is frozen).
+  let memo = PARAMETERS.get(A) as WeakMap<Ellipsoid, EllipsoidParameters<T>> | undefined;
+  const known = memo?.get(E);
+  if (known !== undefined) return known;
+  if (memo === undefined) {
+    memo = new WeakMap();
+    PARAMETERS.set(A, memo as WeakMap<Ellipsoid, EllipsoidParameters<unknown>>);
+  }
+  const P = computeParameters(A, E);
+  memo.set(E, P);
+  return P;
+}
+
+/** Parameters already computed, by arithmetic and ellipsoid. */
+const PARAMETERS = /* @__PURE__ */ new WeakMap<
+  object,
+  WeakMap<Ellipsoid, EllipsoidParameters<unknown>>
+>();
+
+function computeParameters<T>(A: Arithmetic<T>, E: Ellipsoid): EllipsoidParameters<T> {
   const a = A.from(E.a);
   const f = A.from(E.f);
   const two = A.from(2);
@@ -236,5 +259,5 @@ export function ellipsoidParameters<T>(
   const e2 = A.mul(f, A.sub(two, f)); // e² = f(2 − f) (e.g. Torge & Müller, Geodesy, 4th ed., 2012, ch. 4)
   const ep2 = A.div(e2, A.sub(A.one, e2)); // e′² = e²/(1 − e²) (same)
   const n = A.div(f, A.sub(two, f)); // n = (a − b)/(a + b) = f/(2 − f) (Helmert's third flattening)
-  return { a, f, b, e2, ep2, n };
+  return Object.freeze({ a, f, b, e2, ep2, n });
 }

@@ -8,7 +8,12 @@ import { QuadspreadError, invalidArgument } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber, expectObject } from '../geometry/validate.js';
 import { sinCosDegrees } from '../readings/trig.js';
-import { ellipsoidParameters, readEllipsoid, type Ellipsoid } from './ellipsoid.js';
+import {
+  ellipsoidParameters,
+  readEllipsoid,
+  type Ellipsoid,
+  type EllipsoidParameters,
+} from './ellipsoid.js';
 import {
   claimedDigits,
   delegateFor,
@@ -19,6 +24,7 @@ import {
   tenToMinus,
   toDegrees,
 } from './internal.js';
+import { geocentricFloat, geodeticFloat } from './geocentric-float.js';
 
 /** Geodetic coordinates: latitude and longitude in decimal degrees (north, east positive), height in metres above the ellipsoid. */
 export interface Geodetic<T> {
@@ -78,6 +84,11 @@ export function geodeticToGeocentric<T>(
   const where = 'geodeticToGeocentric(point)';
   expectObject(point, where, '{ lat, lon, h }');
   const E = ellipsoidParameters(A, readEllipsoid(ellipsoid, 'geodeticToGeocentric(ellipsoid)'));
+  if (A.float64) {
+    // The float twin (same operations, same order) for numeric input; else the code below.
+    const fast = geocentricFloat(point, E.a as number, E.e2 as number);
+    if (fast !== undefined) return fast as Geocentric<T>;
+  }
   const lat = readLatitude(A, point.lat, `${where}.lat`);
   const lon = readLongitude(A, point.lon, `${where}.lon`);
   const h = readHeight(A, point.h, E.a, `${where}.h`);
@@ -142,6 +153,17 @@ export function geocentricToGeodetic<T>(
   const where = 'geocentricToGeodetic(point)';
   expectObject(point, where, '{ X, Y, Z }');
   const E = ellipsoidParameters(A, readEllipsoid(ellipsoid, 'geocentricToGeodetic(ellipsoid)'));
+  if (A.float64) {
+    // The float twin (same operations, same order, same tolerances); else the code below.
+    const digits = claimedDigits(A);
+    const fast = geodeticFloat(
+      point,
+      E as unknown as EllipsoidParameters<number>,
+      tenToMinus(A, digits + 2) as number,
+      tenToMinus(A, Math.max(1, digits - 2)) as number,
+    );
+    if (fast !== undefined) return fast as Geodetic<T>;
+  }
   const X = readNumber(A, point.X as Numeric<T>, `${where}.X`);
   const Y = readNumber(A, point.Y as Numeric<T>, `${where}.Y`);
   const Z = readNumber(A, point.Z as Numeric<T>, `${where}.Z`);

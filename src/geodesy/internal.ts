@@ -29,8 +29,20 @@ export function claimedDigits<T>(A: Arithmetic<T>): number {
 
 /** @internal 10^−k in the arithmetic. */
 export function tenToMinus<T>(A: Arithmetic<T>, k: number): T {
-  return A.from(`1e-${k}`);
+  // Read from text once per arithmetic and k (a pure memo: arithmetics and values are immutable).
+  let memo = POWERS.get(A) as T[] | undefined;
+  if (memo === undefined) {
+    memo = [];
+    POWERS.set(A, memo);
+  }
+  let v = memo[k];
+  if (v === undefined) {
+    v = A.from(`1e-${k}`);
+    if (k >= 0 && k < 4096 && Number.isInteger(k)) memo[k] = v;
+  }
+  return v;
 }
+const POWERS = /* @__PURE__ */ new WeakMap<object, unknown[]>();
 
 /**
  * @internal An angle reading in degrees (decimal degrees, DMS text, or `unit`) by the

@@ -6,12 +6,37 @@
 import { show, invalidAngle } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { guardOf } from './numeric.js';
+import { sinCosFloat } from './trig-float.js';
 
 /**
- * @internal x mod m in [0, m), exact for exact arithmetics.
- * @throws {QuadspreadError} `INVALID_ANGLE` (at `where`) when x is too large to reduce: an
- *   inexact arithmetic that does not resolve x to a millionth of m (the remainder would be
- *   noise: over about 10¹² in float), or more than about 10¹²⁰·m in an exact one.
+ * @internal ⌊text⌋ of a value written as a fraction `n/d` or as decimal text (`-1.25e3`), or
+ * undefined for other text (an uncertain value's form).
+ */
+export function floorOfText(text: string): bigint | undefined {
+  const f = /^(-?\d+)(?:\/(\d+))?$/.exec(text);
+  if (f) {
+    const n = BigInt(f[1]!);
+    const d = BigInt(f[2] ?? '1');
+    const q = n / d;
+    return n < 0n && q * d !== n ? q - 1n : q;
+  }
+  const m = /^(-?)(\d*)(?:\.(\d*))?(?:e([+-]?\d+))?$/i.exec(text);
+  if (!m || (m[2] === '' && (m[3] ?? '') === '')) return undefined;
+  const digits = (m[2] ?? '') + (m[3] ?? '');
+  const point = (m[2] ?? '').length + Number(m[4] ?? 0); // digits before the decimal point
+  if (point > 100000) return undefined;
+  const whole = point <= 0 ? 0n : BigInt(digits.slice(0, point).padEnd(point, '0') || '0');
+  if (m[1] !== '-') return whole;
+  const fraction = point <= 0 ? digits : digits.slice(point);
+  return /[1-9]/.test(fraction) ? -whole - 1n : -whole;
+}
+
+/**
+ * @internal x mod m in [0, m), exact for exact arithmetics, in a bounded number of steps for
+ * any finite x: the whole number of m's in x is read exactly from x/m (Muller, "Elementary
+ * Functions", ch. 11: reduction by an exact multiple), then at most two corrections.
+ * @throws {QuadspreadError} `INVALID_ANGLE` (at `where`) when an inexact arithmetic does not
+ *   resolve x to a millionth of m (the remainder would be noise: over about 10¹² in float).
  */
 export function modulo<T>(A: Arithmetic<T>, x: T, m: T, where = 'modulo(x)'): T {
   if (A.sign(x) >= 0 && A.cmp(x, m) < 0) return x; // already in [0, m): the common case
@@ -23,13 +48,15 @@ export function modulo<T>(A: Arithmetic<T>, x: T, m: T, where = 'modulo(x)'): T 
       `${show(A.toString(x))} is too large for ${A.name} to reduce modulo ${A.toString(m)}`,
     );
   }
-  // Subtract the multiple of m that the nearest number gives; each pass leaves a remainder about
-  // 10¹⁶ times smaller (exact in an exact arithmetic), so a few passes reach [0, m).
   let r = x;
+  const q = floorOfText(A.toString(A.div(x, m)));
+  if (q !== undefined && q !== 0n) r = A.sub(x, A.mul(A.from(q), m));
+  // Otherwise (an arithmetic whose text is not a plain number), by the nearest float quotient:
+  // each pass leaves a remainder about 10¹⁶ times smaller.
   for (let i = 0; i < 8; i++) {
     if (A.sign(r) >= 0 && A.cmp(r, m) < 0) return r;
-    const q = Math.floor(A.toNumber(A.div(r, m)));
-    r = q === 0 ? A.add(r, m) : A.sub(r, A.mul(A.from(q), m));
+    const k = q !== undefined ? 0 : Math.floor(A.toNumber(A.div(r, m)));
+    r = k === 0 ? (A.sign(r) < 0 ? A.add(r, m) : A.sub(r, m)) : A.sub(r, A.mul(A.from(k), m));
   }
   throw invalidAngle(
     where,
@@ -85,6 +112,11 @@ function firstQuadrant<T>(A: Arithmetic<T>, t: T, ninety: T): { sin: T; cos: T }
  * ```
  */
 export function sinCosDegrees<T>(A: Arithmetic<T>, degrees: Numeric<T>): { sin: T; cos: T } {
+  if (A.float64 && typeof degrees === 'number') {
+    // The float twin (same operations, same order); undefined where sinCos must decide.
+    const fast = sinCosFloat(degrees);
+    if (fast !== undefined) return fast as unknown as { sin: T; cos: T };
+  }
   const G = guardOf(A);
   if (G) {
     const r = sinCos(

@@ -27,6 +27,7 @@ export const BATCH_EXTRA: Record<string, BatchKind> = {
     description:
       'heights from a horizontal distance and an elevation angle in degrees (horizontal, elevation): H = Q·R/(1 − R) and the signed height',
     columns: ['horizontal', 'elevation'],
+    nonNegative: ['horizontal'],
     outputs: ['H', 'height'],
     row(A, [d, e], digits) {
       const v = verticalFromAngle(A, e!);

@@ -5,11 +5,13 @@
  *
  * @module cli
  */
+import { modulo } from '../../readings/trig.js';
 import {
   degreesFromSpread,
   gradeFromSpread,
   pathGrade,
   pathOffset,
+  rational,
   spreadFromDegrees,
 } from '../../index.js';
 import type { SketchView } from '../report.js';
@@ -78,10 +80,16 @@ export const pathGradeTask: TaskKind = {
     const grade =
       task.grade !== undefined ? readGrade(task.grade, `${path}.grade`, 'ruling grade') : undefined;
     const measured = (task.measured as 'plan' | 'face' | undefined) ?? 'plan';
+    // A bearing is reduced to [0°, 360°) exactly here, in a bounded number of steps, so that
+    // every arithmetic computes with the same bearing however many turns it was written with.
     const fallBearing =
       task.fallBearing !== undefined
         ? readAngle(task.fallBearing, `${path}.fallBearing`, 'fall-line bearing', 'bearing')
         : undefined;
+    if (fallBearing)
+      fallBearing.value = rational.toString(
+        modulo(rational, rational.from(fallBearing.value), rational.from(360)),
+      );
     const alignments = ((task.alignments ?? []) as Record<string, unknown>[]).map((a, i) => {
       const label = typeof a.name === 'string' ? a.name : `alignment ${i + 1}`;
       return {
@@ -163,13 +171,9 @@ export const pathGradeTask: TaskKind = {
             });
           if (fallBearing) {
             const fb = env.get(fallBearing);
-            const wrap = (x: V): V => {
-              const t = A.from(360);
-              let y = x;
-              while (A.sign(y) < 0) y = A.add(y, t);
-              while (A.cmp(y, t) >= 0) y = A.sub(y, t);
-              return y;
-            };
+            // Reduced mod 360° in a bounded number of steps for any bearing (a float bearing
+            // too large to have a fraction of a turn is refused).
+            const wrap = (x: V): V => modulo(A, x, A.from(360), 'fallBearing');
             if (measured === 'face')
               notes.push(
                 'Bearings are on the plan; with offsets measured in the face, the plan bearing differs from fall bearing ± the face angle. Use measured "plan" for bearings.',
