@@ -43,7 +43,11 @@ export function wrap(text: string, first: string, rest: string, width = TEXT_WID
   const lines: string[] = [];
   let line = first;
   let empty = true;
-  for (const word0 of text.split(/\s+/).filter((w) => w !== '')) {
+  // Control characters (a line break in a name from the job) are made visible first, so that
+  // they neither start a line nor escape the width.
+  for (const word0 of visibleControls(text)
+    .split(' ')
+    .filter((w) => w !== '')) {
     let word = word0;
     const room = width - (empty ? line.length : line.length + 1);
     if (word.length <= room) {

@@ -182,3 +182,24 @@ describe('quadspread run -', () => {
     expect(r.stderr).toMatch(/not valid JSON/);
   });
 });
+
+describe('quadspread run --format html', () => {
+  it('writes one self-contained page with job text as text, never as markup', () => {
+    const job = {
+      title: '<script>alert(1)</script>',
+      points: {
+        '<img src=x onerror=alert(1)>': { east: 0, north: 0 },
+        B: { east: 10, north: 0 },
+        C: { east: 0, north: 10 },
+      },
+      tasks: [{ kind: 'area', name: 'a & b', points: ['<img src=x onerror=alert(1)>', 'B', 'C'] }],
+    };
+    const r = cli(['run', '-', '--format', 'html'], { input: JSON.stringify(job) });
+    expect(r.code).toBe(0);
+    expect(r.stdout.startsWith('<!doctype html>')).toBe(true);
+    expect(r.stdout).not.toMatch(/<script|<img|<link|src="http/);
+    expect(r.stdout).toContain('&lt;script&gt;alert(1)&lt;/script&gt;');
+    expect(r.stdout).toContain('a &amp; b');
+    expect(r.stdout).toContain('<p class="summary" id="verdict">');
+  });
+});
