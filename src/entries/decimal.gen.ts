@@ -35,6 +35,9 @@ export const arithmetic: DecimalArithmetic = /* @__PURE__ */ decimal(34);
 /** {@link g.adjustLevelling | adjustLevelling} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const adjustLevelling: Bound<typeof g.adjustLevelling<Value, false>> = (input) => g.adjustLevelling<Value, false>(arithmetic, input);
 
+/** {@link g.adjustNetwork | adjustNetwork} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const adjustNetwork: Bound<typeof g.adjustNetwork<Value, false>> = (input) => g.adjustNetwork<Value, false>(arithmetic, input);
+
 /** {@link g.allowableMisclosure | allowableMisclosure} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const allowableMisclosure: Bound<typeof g.allowableMisclosure<Value, false>> = (order, km) => g.allowableMisclosure<Value, false>(arithmetic, order, km);
 
@@ -422,23 +425,25 @@ export {
   WGS84, withDerivative,
 } from '../index.js';
 export type {
-  AdjustedHeight, AdjustedLevelObservation, AllowableMisclosure, AngleUnit, AngularMisclosure,
-  AreaUnit, Arithmetic, Atmosphere, AtmosphericPpm, BaardaTest, Backsight, BacksightResult,
-  BaseHeight, BearingIntersection, BenchmarkInput, Budget, BudgetOptions, CircleInput,
-  Contribution, ControlPoint, CorrelationTerm, CurvatureOptions, DatumTransformation,
-  DatumTransformOptions, Decimal, DecimalArithmetic, DecimalElementary, Ellipsoid,
-  EllipsoidDefinition, EllipsoidParameters, Enu, ErrorCode, FaceOptions, FieldCheck,
-  FieldObservation, FlatEarthError, FloatArithmetic, FootSide, FreeStation, FreeStationInput,
-  FreeStationResidual, Geocentric, GeocentricTranslationParameters, Geodetic, GeodeticInput,
-  GlobalTest, Gradient, GridPoint, GridReduction, HelmertConvention, HelmertParameters,
-  InlineHeight, InlineQuadranceHeight, InputDistribution, Inverse, LengthUnit, LevelCheck,
+  AdjustedHeight, AdjustedLevelObservation, AdjustedNetworkObservation, AdjustedPoint,
+  AllowableMisclosure, AngleUnit, AngularMisclosure, AreaUnit, Arithmetic, Atmosphere,
+  AtmosphericPpm, BaardaTest, Backsight, BacksightResult, BaseHeight, BearingIntersection,
+  BenchmarkInput, Budget, BudgetOptions, CircleInput, ConfidenceEllipse, Contribution,
+  ControlPoint, CorrelationTerm, CurvatureOptions, DatumTransformation, DatumTransformOptions,
+  Decimal, DecimalArithmetic, DecimalElementary, DistanceSigma, Ellipsoid, EllipsoidDefinition,
+  EllipsoidParameters, Enu, ErrorCode, ErrorEllipse, FaceOptions, FieldCheck, FieldObservation,
+  FlatEarthError, FloatArithmetic, FootSide, FreeStation, FreeStationInput, FreeStationResidual,
+  Geocentric, GeocentricTranslationParameters, Geodetic, GeodeticInput, GlobalTest, Gradient,
+  GridPoint, GridReduction, HelmertConvention, HelmertParameters, InlineHeight,
+  InlineQuadranceHeight, InputDistribution, Inverse, LengthUnit, LevelCheck,
   LevellingAdjustment, LevellingInput, LevellingObservationInput, LevellingOptions,
   LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, LocalTest, Matrix3,
-  MeanFaces, MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, Numeric,
-  ObservationTest, OffsetMeasure, OrientInput, PegReadings, Point, Point3, Point3Input,
+  MeanFaces, MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult,
+  NetworkAdjustment, NetworkInput, NetworkObservationInput, NetworkOptions, NetworkPointInput,
+  Numeric, ObservationTest, OffsetMeasure, OrientInput, PegReadings, Point, Point3, Point3Input,
   Pointing, PointInput, PolygonArea, RandomStream, Ratio, Rational, RationalArithmetic,
-  ReciprocalLevelling, ReciprocalSet, ReciprocalTrigHeight, ReducedObservation, Resection,
-  ResectionInput, Root, RotationInput, RotationUnit, RoundOff, SetOut, SetOutCheck,
+  ReciprocalLevelling, ReciprocalSet, ReciprocalTrigHeight, ReducedObservation, RelativeEllipse,
+  Resection, ResectionInput, Root, RotationInput, RotationUnit, RoundOff, SetOut, SetOutCheck,
   SetOutOptions, SetOutTolerance, SetupInput, SetupTolerance, Shot, SideShot, SightHeight,
   SnoopingRemoval, SnoopingReport, StaffPair, StationObservation, StationSetup,
   StewartChainages, StewartQuadrances, Surd, TestOptions, TmFactors, TransformedPoint,
