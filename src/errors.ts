@@ -63,6 +63,18 @@ export const ERROR_CODES = {
   UNKNOWN_ELLIPSOID: 'An ellipsoid that is not known.',
   INVALID_ELLIPSOID: 'Ellipsoid parameters that do not define an oblate ellipsoid.',
   NOT_CONVERGED: 'An iteration did not converge within its limit.',
+  // Map projections
+  UNKNOWN_METHOD: 'A projection method that is not known.',
+  MISSING_PARAMETER: 'A parameter the projection method needs is missing.',
+  OUTSIDE_DOMAIN:
+    'A point outside the domain of a projection (a pole in Mercator, the antipode of an azimuthal projection).',
+  UNKNOWN_CRS: 'A coordinate reference system code that is not in the table.',
+  // Alignment
+  CURVES_OVERLAP:
+    'Curves of an alignment that overlap: tangents longer than their leg, or a vertical curve running into the next or past an end.',
+  TRANSITION_TOO_LONG:
+    'Transition curves that turn through more than the deflection of their curve.',
+  OFF_ALIGNMENT: 'A chainage or a point beyond the ends of an alignment or a profile.',
   // Adjustment
   UNKNOWN_POINT: 'A point name that is not in the network.',
   DATUM_DEFECT:

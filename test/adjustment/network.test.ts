@@ -308,13 +308,11 @@ describe('adjustNetwork in rational: identities hold exactly', () => {
           .reverse()
           .map(([k, v]) => [`Q-${k}`, v]),
       ),
-      observations: [...input.observations]
-        .reverse()
-        .map((o) => ({
-          ...o,
-          from: `Q-${(o as { from: string }).from}`,
-          to: `Q-${(o as { to: string }).to}`,
-        })) as never,
+      observations: [...input.observations].reverse().map((o) => ({
+        ...o,
+        from: `Q-${(o as { from: string }).from}`,
+        to: `Q-${(o as { to: string }).to}`,
+      })) as never,
     });
     for (const k of Object.keys(r.points)) {
       expect(R.toString(more.points[k]!.x)).toBe(R.toString(r.points[k]!.x));

@@ -16,6 +16,7 @@ import { levellingTask } from './levelling.js';
 import { resectionTask } from './resection.js';
 import { trigHeightTask } from './trig-height.js';
 import { geodeticTask } from './geodetic.js';
+import { alignmentTask } from './alignment.js';
 
 export const TASK_KINDS: readonly TaskKind[] = [
   heightTask,
@@ -30,4 +31,5 @@ export const TASK_KINDS: readonly TaskKind[] = [
   resectionTask,
   levellingTask,
   geodeticTask,
+  alignmentTask,
 ];
