@@ -42,7 +42,7 @@ export const alignmentPoint: Bound<typeof g.alignmentPoint<Value>> = (alignment,
 export const alignmentStation: Bound<typeof g.alignmentStation<Value>> = (alignment, P, options) => g.alignmentStation<Value>(arithmetic, alignment, P, options);
 
 /** {@link g.allowableMisclosure | allowableMisclosure} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
-export const allowableMisclosure: Bound<typeof g.allowableMisclosure<Value, false>> = (order, km) => g.allowableMisclosure<Value, false>(arithmetic, order, km);
+export const allowableMisclosure: Bound<typeof g.allowableMisclosure<Value, false>> = (c, km) => g.allowableMisclosure<Value, false>(arithmetic, c, km);
 
 /** {@link g.angleToDegrees | angleToDegrees} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const angleToDegrees: Bound<typeof g.angleToDegrees<Value>> = (reading, unit) => g.angleToDegrees<Value>(arithmetic, reading, unit);
