@@ -128,6 +128,12 @@ export const geocentricToGeodetic: Bound<typeof g.geocentricToGeodetic<Value>> =
 /** {@link g.geocentricTranslation | geocentricTranslation} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const geocentricTranslation: Bound<typeof g.geocentricTranslation<Value>> = (point, params) => g.geocentricTranslation<Value>(arithmetic, point, params);
 
+/** {@link g.geodesicDirect | geodesicDirect} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const geodesicDirect: Bound<typeof g.geodesicDirect<Value>> = (p1, azimuth, distance, ellipsoid) => g.geodesicDirect<Value>(arithmetic, p1, azimuth, distance, ellipsoid);
+
+/** {@link g.geodesicInverse | geodesicInverse} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const geodesicInverse: Bound<typeof g.geodesicInverse<Value>> = (p1, p2, ellipsoid) => g.geodesicInverse<Value>(arithmetic, p1, p2, ellipsoid);
+
 /** {@link g.geodeticToGeocentric | geodeticToGeocentric} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const geodeticToGeocentric: Bound<typeof g.geodeticToGeocentric<Value>> = (point, ellipsoid) => g.geodeticToGeocentric<Value>(arithmetic, point, ellipsoid);
 
@@ -424,17 +430,18 @@ export type {
   DatumTransformation, DatumTransformOptions, Decimal, DecimalArithmetic, DecimalElementary,
   Ellipsoid, EllipsoidDefinition, EllipsoidParameters, Enu, ErrorCode, FaceOptions, FieldCheck,
   FieldObservation, FlatEarthError, FloatArithmetic, FootSide, FreeStation, FreeStationInput,
-  FreeStationResidual, Geocentric, GeocentricTranslationParameters, Geodetic, GeodeticInput,
-  Gradient, GridPoint, GridReduction, HelmertConvention, HelmertParameters, InlineHeight,
-  InlineQuadranceHeight, InputDistribution, Inverse, LengthUnit, LevelCheck, LevellingOrder,
-  LevelRow, LevelRun, LevelRunInput, LevelSight, Line, Matrix3, MeanFaces,
-  MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, Numeric, OffsetMeasure,
-  OrientInput, PegReadings, Point, Point3, Point3Input, Pointing, PointInput, PolygonArea,
-  RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalLevelling, ReciprocalSet,
-  ReciprocalTrigHeight, ReducedObservation, Resection, ResectionInput, Root, RotationInput,
-  RotationUnit, RoundOff, SetOut, SetOutCheck, SetOutOptions, SetOutTolerance, SetupInput,
-  SetupTolerance, Shot, SideShot, SightHeight, StaffPair, StationObservation, StationSetup,
-  StewartChainages, StewartQuadrances, Surd, TmFactors, TransformedPoint, TransverseMercator,
+  FreeStationResidual, Geocentric, GeocentricTranslationParameters, GeodesicDirect,
+  GeodesicInverse, Geodetic, GeodeticInput, Gradient, GridPoint, GridReduction,
+  HelmertConvention, HelmertParameters, InlineHeight, InlineQuadranceHeight, InputDistribution,
+  Inverse, LengthUnit, LevelCheck, LevellingOrder, LevelRow, LevelRun, LevelRunInput,
+  LevelSight, Line, Matrix3, MeanFaces, MolodenskyBadekasParameters, MonteCarloOptions,
+  MonteCarloResult, Numeric, OffsetMeasure, OrientInput, PegReadings, Point, Point3,
+  Point3Input, Pointing, PointInput, PolygonArea, RandomStream, Ratio, Rational,
+  RationalArithmetic, ReciprocalLevelling, ReciprocalSet, ReciprocalTrigHeight,
+  ReducedObservation, Resection, ResectionInput, Root, RotationInput, RotationUnit, RoundOff,
+  SetOut, SetOutCheck, SetOutOptions, SetOutTolerance, SetupInput, SetupTolerance, Shot,
+  SideShot, SightHeight, StaffPair, StationObservation, StationSetup, StewartChainages,
+  StewartQuadrances, Surd, TmFactors, TransformedPoint, TransverseMercator,
   TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg,
   Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoPeg, TwoPegInput, TwoStationHeight,
   UncertainArithmetic, UncertainInput, ValueOf, VerticalInput, VerticalKind, VerticalReading,

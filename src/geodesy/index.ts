@@ -44,3 +44,7 @@ export type {
   DatumTransformOptions,
   TransformedPoint,
 } from './datum-transform.js';
+export { geodesicInverse } from './geodesic-inverse.js';
+export type { GeodesicInverse } from './geodesic-inverse.js';
+export { geodesicDirect } from './geodesic-direct.js';
+export type { GeodesicDirect } from './geodesic-direct.js';
