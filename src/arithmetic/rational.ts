@@ -141,6 +141,12 @@ export const rational: RationalArithmetic = /* @__PURE__ */ Object.freeze<Ration
     if (y.n === 0n && x.n === 0n) throw zeroVectorAngle('rational.atan2(y, x)');
     return fromElementary(elementary.atan2(toElementary(y), toElementary(x)));
   },
+  exp: (x) => (one('exp', x).n === 0n ? ONE : fromElementary(elementary.exp(toElementary(x)))),
+  log(x) {
+    if (one('log', x).s < 0n || x.n === 0n)
+      throw noRealSolution('rational.log(x)', `x = ${x.toFraction()} is not positive`);
+    return x.n === 1n && x.d === 1n ? ZERO : fromElementary(elementary.ln(toElementary(x)));
+  },
   // Fused exact kernels (src/arithmetic/fused-rational.ts): same results, fewer gcds.
   kernels: rationalKernels,
 });

@@ -44,6 +44,20 @@ export type {
   DatumTransformOptions,
   TransformedPoint,
 } from './datum-transform.js';
+export type {
+  Projection,
+  ProjectionMethod,
+  ProjectionAngleUnit,
+  LinearUnit,
+  PreparedProjection,
+  ProjectedPoint,
+  GeographicPoint,
+} from './projection-core.js';
+export { toGrid, fromGrid, prepareProjection } from './projection.js';
+export { lambertConic, lambertConicInverse } from './lambert-conic.js';
+export { mercator, mercatorInverse } from './mercator.js';
+export { obliqueStereographic, obliqueStereographicInverse } from './oblique-stereographic.js';
+export { polarStereographic, polarStereographicInverse } from './polar-stereographic.js';
 export { geodesicInverse } from './geodesic-inverse.js';
 export type { GeodesicInverse } from './geodesic-inverse.js';
 export { geodesicDirect } from './geodesic-direct.js';
