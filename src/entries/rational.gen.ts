@@ -131,6 +131,15 @@ export const enuFromGeocentric: Bound<typeof g.enuFromGeocentric<Value>> = (orig
 /** {@link g.enuRotation | enuRotation} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const enuRotation: Bound<typeof g.enuRotation<Value>> = (origin) => g.enuRotation<Value>(arithmetic, origin);
 
+/** {@link g.fitAffine | fitAffine} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const fitAffine: Bound<typeof g.fitAffine<Value>> = (points) => g.fitAffine<Value>(arithmetic, points);
+
+/** {@link g.fitInclinedPlane | fitInclinedPlane} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const fitInclinedPlane: Bound<typeof g.fitInclinedPlane<Value>> = (points) => g.fitInclinedPlane<Value>(arithmetic, points);
+
+/** {@link g.fitSimilarity | fitSimilarity} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const fitSimilarity: Bound<typeof g.fitSimilarity<Value>> = (points) => g.fitSimilarity<Value>(arithmetic, points);
+
 /** {@link g.flatEarthError | flatEarthError} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const flatEarthError: Bound<typeof g.flatEarthError<Value>> = (distance, radius) => g.flatEarthError<Value>(arithmetic, distance, radius);
 
@@ -518,22 +527,22 @@ export {
   WGS84, withDerivative,
 } from '../index.js';
 export type {
-  AdjustedHeight, AdjustedLevelObservation, AlignmentElement, AlignmentPoint, AlignmentStation,
-  AlignmentStationOptions, AllowableMisclosure, AngleUnit, AngularMisclosure, ArcElement,
-  AreaUnit, Arithmetic, Atmosphere, AtmosphericPpm, BaardaTest, Backsight, BacksightResult,
-  BaseHeight, BearingIntersection, BenchmarkInput, Budget, BudgetOptions, ChainageEquation,
-  ChainageEquationInput, CircleInput, Clothoid, Contribution, ControlPoint, CorrelationTerm,
-  CurvatureOptions, DatumTransformation, DatumTransformOptions, Decimal, DecimalArithmetic,
-  DecimalElementary, DeflectionRow, Ellipsoid, EllipsoidDefinition, EllipsoidParameters, Enu,
-  ErrorCode, FaceOptions, FieldCheck, FieldObservation, FlatEarthError, FloatArithmetic,
-  FootSide, FreeStation, FreeStationInput, FreeStationResidual, Geocentric,
-  GeocentricTranslationParameters, GeodesicDirect, GeodesicInverse, Geodetic, GeodeticInput,
-  GeographicPoint, GlobalTest, Gradient, GridPoint, GridReduction, HelmertConvention,
-  HelmertParameters, HorizontalAlignment, HorizontalAlignmentInput, HorizontalCurve,
-  HorizontalCurveInput, InlineHeight, InlineQuadranceHeight, InputDistribution, Inverse,
-  KeyPoint, LengthUnit, LevelCheck, LevellingAdjustment, LevellingInput,
-  LevellingObservationInput, LevellingOptions, LevellingOrder, LevelRow, LevelRun,
-  LevelRunInput, LevelSight, Line, LinearUnit, LocalTest, Matrix3, MeanFaces,
+  AdjustedHeight, AdjustedLevelObservation, AffineFit, AlignmentElement, AlignmentPoint,
+  AlignmentStation, AlignmentStationOptions, AllowableMisclosure, AngleUnit, AngularMisclosure,
+  ArcElement, AreaUnit, Arithmetic, Atmosphere, AtmosphericPpm, BaardaTest, Backsight,
+  BacksightResult, BaseHeight, BearingIntersection, BenchmarkInput, Budget, BudgetOptions,
+  ChainageEquation, ChainageEquationInput, CircleInput, Clothoid, CommonPoint, Contribution,
+  ControlPoint, CorrelationTerm, CurvatureOptions, DatumTransformation, DatumTransformOptions,
+  Decimal, DecimalArithmetic, DecimalElementary, DeflectionRow, Ellipsoid, EllipsoidDefinition,
+  EllipsoidParameters, Enu, ErrorCode, FaceOptions, FieldCheck, FieldObservation,
+  FlatEarthError, FloatArithmetic, FootSide, FreeStation, FreeStationInput, FreeStationResidual,
+  Geocentric, GeocentricTranslationParameters, GeodesicDirect, GeodesicInverse, Geodetic,
+  GeodeticInput, GeographicPoint, GlobalTest, Gradient, GridPoint, GridReduction,
+  HelmertConvention, HelmertParameters, HorizontalAlignment, HorizontalAlignmentInput,
+  HorizontalCurve, HorizontalCurveInput, InclinedPlaneFit, InlineHeight, InlineQuadranceHeight,
+  InputDistribution, Inverse, KeyPoint, LengthUnit, LevelCheck, LevellingAdjustment,
+  LevellingInput, LevellingObservationInput, LevellingOptions, LevellingOrder, LevelRow,
+  LevelRun, LevelRunInput, LevelSight, Line, LinearUnit, LocalTest, Matrix3, MeanFaces,
   MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, Numeric, ObservationTest,
   OffsetMeasure, OrientInput, PegReadings, Point, Point3, Point3Input, Pointing, PointInput,
   PolygonArea, PreparedProjection, ProfileLevel, ProfilePointInput, ProjectedPoint, Projection,
@@ -541,12 +550,12 @@ export type {
   ReciprocalLevelling, ReciprocalSet, ReciprocalTrigHeight, ReducedObservation, Resection,
   ResectionInput, Root, RotationInput, RotationUnit, RoundOff, SetOut, SetOutCheck,
   SetOutOptions, SetOutPoint, SetOutTolerance, SettingOutRow, SetupInput, SetupTolerance, Shot,
-  SideShot, SightHeight, SnoopingRemoval, SnoopingReport, StaffPair, StationCandidate,
-  StationObservation, StationSetup, StewartChainages, StewartQuadrances, StraightElement, Surd,
-  TestOptions, TmFactors, TransformedPoint, TransitionElement, TransitionMeasures,
-  TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse,
-  TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoPeg,
-  TwoPegInput, TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf,
+  SideShot, SightHeight, SimilarityFit, SnoopingRemoval, SnoopingReport, StaffPair,
+  StationCandidate, StationObservation, StationSetup, StewartChainages, StewartQuadrances,
+  StraightElement, Surd, TestOptions, TmFactors, TransformedPoint, TransitionElement,
+  TransitionMeasures, TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure,
+  TraverseCourse, TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
+  TwoPeg, TwoPegInput, TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf,
   VerticalAlignment, VerticalAlignmentInput, VerticalCurve, VerticalCurveInput, VerticalInput,
   VerticalKind, VerticalReading,
 } from '../index.js';
