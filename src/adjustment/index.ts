@@ -22,6 +22,20 @@ export type {
   AdjustedLevelObservation,
   LevellingAdjustment,
 } from './levelling.js';
+export { adjustNetwork } from './network.js';
+export type {
+  NetworkPointInput,
+  DistanceSigma,
+  NetworkObservationInput,
+  NetworkOptions,
+  NetworkInput,
+  ErrorEllipse,
+  ConfidenceEllipse,
+  AdjustedPoint,
+  AdjustedNetworkObservation,
+  RelativeEllipse,
+  NetworkAdjustment,
+} from './network.js';
 export { fitSimilarity } from './fit-similarity.js';
 export type { SimilarityFit } from './fit-similarity.js';
 export { fitAffine } from './fit-affine.js';
