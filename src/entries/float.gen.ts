@@ -6,9 +6,9 @@
  * with the `float` arithmetic (JS numbers) fixed, so the arithmetic argument is dropped.
  * Inputs may be numbers or numeric text; results are values of {@link arithmetic}. The geometry
  * primitives that take points, vectors or lines (`quadrance`, `vectorQuadrance`, `spread`,
- * `cross`, `spreadOfVectors`, `triangle`, the line functions) take values made by `point` and
- * `line`/`lineThrough`, as the arithmetic's own
- * operations take its values; the solvers read plain `{ x, y }` of numbers or text.
+ * `cross`, `spreadOfVectors`, `triangle`, the line functions) take values made by `point`
+ * (or arrays `[x, y]` of the arithmetic's values) and `line`/`lineThrough`, as the arithmetic's
+ * own operations take its values; the solvers read `{ x, y }` or `[x, y]` of numbers or text.
  * Everything else (constants, classes, types, the other arithmetics) is re-exported unchanged.
  *
  * @example
@@ -35,6 +35,9 @@ export const arithmetic: FloatArithmetic = float;
 /** {@link g.adjustLevelling | adjustLevelling} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const adjustLevelling: Bound<typeof g.adjustLevelling<Value, false>> = (input) => g.adjustLevelling<Value, false>(arithmetic, input);
 
+/** {@link g.adjustNetwork | adjustNetwork} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const adjustNetwork: Bound<typeof g.adjustNetwork<Value, false>> = (input) => g.adjustNetwork<Value, false>(arithmetic, input);
+
 /** {@link g.alignmentPoint | alignmentPoint} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const alignmentPoint: Bound<typeof g.alignmentPoint<Value>> = (alignment, chainage, offset, options) => g.alignmentPoint<Value>(arithmetic, alignment, chainage, offset, options);
 
@@ -42,7 +45,7 @@ export const alignmentPoint: Bound<typeof g.alignmentPoint<Value>> = (alignment,
 export const alignmentStation: Bound<typeof g.alignmentStation<Value>> = (alignment, P, options) => g.alignmentStation<Value>(arithmetic, alignment, P, options);
 
 /** {@link g.allowableMisclosure | allowableMisclosure} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
-export const allowableMisclosure: Bound<typeof g.allowableMisclosure<Value, false>> = (order, km) => g.allowableMisclosure<Value, false>(arithmetic, order, km);
+export const allowableMisclosure: Bound<typeof g.allowableMisclosure<Value, false>> = (c, km) => g.allowableMisclosure<Value, false>(arithmetic, c, km);
 
 /** {@link g.angleToDegrees | angleToDegrees} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const angleToDegrees: Bound<typeof g.angleToDegrees<Value>> = (reading, unit) => g.angleToDegrees<Value>(arithmetic, reading, unit);
@@ -530,34 +533,37 @@ export {
   WGS84, withDerivative,
 } from '../index.js';
 export type {
-  AdjustedHeight, AdjustedLevelObservation, AlignmentElement, AlignmentPoint, AlignmentStation,
-  AlignmentStationOptions, AllowableMisclosure, AngleUnit, AngularMisclosure, ArcElement,
-  AreaUnit, Arithmetic, Atmosphere, AtmosphericPpm, BaardaTest, Backsight, BacksightResult,
-  BaseHeight, BearingIntersection, BenchmarkInput, Budget, BudgetOptions, ChainageEquation,
-  ChainageEquationInput, CircleInput, Clothoid, Contribution, ControlPoint, CorrelationTerm,
-  CurvatureOptions, DatumTransformation, DatumTransformOptions, Decimal, DecimalArithmetic,
-  DecimalElementary, DeflectionRow, Ellipsoid, EllipsoidDefinition, EllipsoidParameters, Enu,
-  ErrorCode, FaceOptions, FieldCheck, FieldObservation, FlatEarthError, FloatArithmetic,
-  FootSide, FreeStation, FreeStationInput, FreeStationResidual, Geocentric,
-  GeocentricTranslationParameters, Geodetic, GeodeticInput, GeographicPoint, GlobalTest,
-  Gradient, GridPoint, GridReduction, HelmertConvention, HelmertParameters, HorizontalAlignment,
-  HorizontalAlignmentInput, HorizontalCurve, HorizontalCurveInput, InlineHeight,
-  InlineQuadranceHeight, InputDistribution, Inverse, KeyPoint, LengthUnit, LevelCheck,
-  LevellingAdjustment, LevellingInput, LevellingObservationInput, LevellingOptions,
-  LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, LinearUnit, LocalTest,
-  Matrix3, MeanFaces, MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, Numeric,
+  AdjustedHeight, AdjustedLevelObservation, AdjustedNetworkObservation, AdjustedPoint,
+  AlignmentElement, AlignmentPoint, AlignmentStation, AlignmentStationOptions,
+  AllowableMisclosure, AngleUnit, AngularMisclosure, ArcElement, AreaUnit, Arithmetic,
+  Atmosphere, AtmosphericPpm, BaardaTest, Backsight, BacksightResult, BaseHeight,
+  BearingIntersection, BenchmarkInput, Budget, BudgetOptions, ChainageEquation,
+  ChainageEquationInput, CircleInput, Clothoid, ConfidenceEllipse, Contribution, ControlPoint,
+  CorrelationTerm, CurvatureOptions, DatumTransformation, DatumTransformOptions, Decimal,
+  DecimalArithmetic, DecimalElementary, DeflectionRow, DistanceSigma, Ellipsoid,
+  EllipsoidDefinition, EllipsoidParameters, Enu, ErrorCode, ErrorEllipse, FaceOptions,
+  FieldCheck, FieldObservation, FlatEarthError, FloatArithmetic, FootSide, FreeStation,
+  FreeStationInput, FreeStationResidual, Geocentric, GeocentricTranslationParameters, Geodetic,
+  GeodeticInput, GeographicPoint, GlobalTest, Gradient, GridPoint, GridReduction,
+  HelmertConvention, HelmertParameters, HorizontalAlignment, HorizontalAlignmentInput,
+  HorizontalCurve, HorizontalCurveInput, InlineHeight, InlineQuadranceHeight, InputDistribution,
+  Inverse, KeyPoint, LengthUnit, LevelCheck, LevellingAdjustment, LevellingInput,
+  LevellingObservationInput, LevellingOptions, LevellingOrder, LevelRow, LevelRun,
+  LevelRunInput, LevelSight, Line, LinearUnit, LocalTest, Matrix3, MeanFaces,
+  MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, NetworkAdjustment,
+  NetworkInput, NetworkObservationInput, NetworkOptions, NetworkPointInput, Numeric,
   ObservationTest, OffsetMeasure, OrientInput, PegReadings, Point, Point3, Point3Input,
-  Pointing, PointInput, PolygonArea, PreparedProjection, ProfileLevel, ProfilePointInput,
-  ProjectedPoint, Projection, ProjectionAngleUnit, ProjectionMethod, RandomStream, Ratio,
-  Rational, RationalArithmetic, ReciprocalLevelling, ReciprocalSet, ReciprocalTrigHeight,
-  ReducedObservation, Resection, ResectionInput, Root, RotationInput, RotationUnit, RoundOff,
-  SetOut, SetOutCheck, SetOutOptions, SetOutPoint, SetOutTolerance, SettingOutRow, SetupInput,
-  SetupTolerance, Shot, SideShot, SightHeight, SnoopingRemoval, SnoopingReport, StaffPair,
-  StationCandidate, StationObservation, StationSetup, StewartChainages, StewartQuadrances,
-  StraightElement, Surd, TestOptions, TmFactors, TransformedPoint, TransitionElement,
-  TransitionMeasures, TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure,
-  TraverseCourse, TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
-  TwoPeg, TwoPegInput, TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf,
-  VerticalAlignment, VerticalAlignmentInput, VerticalCurve, VerticalCurveInput, VerticalInput,
-  VerticalKind, VerticalReading,
+  Pointing, PointInput, PointLike, PolygonArea, PreparedProjection, ProfileLevel,
+  ProfilePointInput, ProjectedPoint, Projection, ProjectionAngleUnit, ProjectionMethod,
+  RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalLevelling, ReciprocalSet,
+  ReciprocalTrigHeight, ReducedObservation, RelativeEllipse, Resection, ResectionInput, Root,
+  RotationInput, RotationUnit, RoundOff, SetOut, SetOutCheck, SetOutOptions, SetOutPoint,
+  SetOutTolerance, SettingOutRow, SetupInput, SetupTolerance, Shot, SideShot, SightHeight,
+  SnoopingRemoval, SnoopingReport, StaffPair, StationCandidate, StationObservation,
+  StationSetup, StewartChainages, StewartQuadrances, StraightElement, Surd, TestOptions,
+  TmFactors, TransformedPoint, TransitionElement, TransitionMeasures, TransverseMercator,
+  TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg,
+  Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoPeg, TwoPegInput, TwoStationHeight,
+  UncertainArithmetic, UncertainInput, ValueOf, VerticalAlignment, VerticalAlignmentInput,
+  VerticalCurve, VerticalCurveInput, VerticalInput, VerticalKind, VerticalReading,
 } from '../index.js';

@@ -17,6 +17,8 @@ import { resectionTask } from './resection.js';
 import { trigHeightTask } from './trig-height.js';
 import { geodeticTask } from './geodetic.js';
 import { alignmentTask } from './alignment.js';
+import { stationSetupTask } from './station-setup.js';
+import { settingOutTask } from './setting-out.js';
 
 export const TASK_KINDS: readonly TaskKind[] = [
   heightTask,
@@ -32,4 +34,6 @@ export const TASK_KINDS: readonly TaskKind[] = [
   levellingTask,
   geodeticTask,
   alignmentTask,
+  stationSetupTask,
+  settingOutTask,
 ];
