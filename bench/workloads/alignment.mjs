@@ -1,10 +1,10 @@
-// Workload (h): chainage and offset of surveyed points — alignmentStation on a road centre line of
+// Workload (i): chainage and offset of surveyed points — alignmentStation on a road centre line of
 // 201 elements (100 circular curves between straights), for 100 000 points scattered within 40 m
 // of the line.
 import { rng } from '../data.mjs';
 
 export const name = 'alignment';
-export const title = '(h) alignmentStation, 201 elements, 100 000 points within 40 m of the line';
+export const title = '(i) alignmentStation, 201 elements, 100 000 points within 40 m of the line';
 /** Each item is a batch of 100 000 points (10 000 in --quick): a third of the pairs. */
 export const repsScale = 1 / 3;
 
