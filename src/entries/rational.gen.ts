@@ -35,6 +35,12 @@ export const arithmetic: RationalArithmetic = rational;
 /** {@link g.adjustLevelling | adjustLevelling} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const adjustLevelling: Bound<typeof g.adjustLevelling<Value, true>> = (input) => g.adjustLevelling<Value, true>(arithmetic, input);
 
+/** {@link g.albersEqualArea | albersEqualArea} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const albersEqualArea: Bound<typeof g.albersEqualArea<Value>> = (point, projection) => g.albersEqualArea<Value>(arithmetic, point, projection);
+
+/** {@link g.albersEqualAreaInverse | albersEqualAreaInverse} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const albersEqualAreaInverse: Bound<typeof g.albersEqualAreaInverse<Value>> = (point, projection) => g.albersEqualAreaInverse<Value>(arithmetic, point, projection);
+
 /** {@link g.alignmentPoint | alignmentPoint} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const alignmentPoint: Bound<typeof g.alignmentPoint<Value>> = (alignment, chainage, offset, options) => g.alignmentPoint<Value>(arithmetic, alignment, chainage, offset, options);
 
@@ -79,6 +85,12 @@ export const azimuthToQuadrant: Bound<typeof g.azimuthToQuadrant<Value>> = (azim
 
 /** {@link g.bearingToAzimuth | bearingToAzimuth} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const bearingToAzimuth: Bound<typeof g.bearingToAzimuth<Value>> = (bearing) => g.bearingToAzimuth<Value>(arithmetic, bearing);
+
+/** {@link g.cassiniSoldner | cassiniSoldner} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const cassiniSoldner: Bound<typeof g.cassiniSoldner<Value>> = (point, projection) => g.cassiniSoldner<Value>(arithmetic, point, projection);
+
+/** {@link g.cassiniSoldnerInverse | cassiniSoldnerInverse} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const cassiniSoldnerInverse: Bound<typeof g.cassiniSoldnerInverse<Value>> = (point, projection) => g.cassiniSoldnerInverse<Value>(arithmetic, point, projection);
 
 /** {@link g.clothoid | clothoid} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const clothoid: Bound<typeof g.clothoid<Value>> = (input) => g.clothoid<Value>(arithmetic, input);
@@ -241,6 +253,12 @@ export const isParallel: Bound<typeof g.isParallel<Value>> = (l1, l2) => g.isPar
 
 /** {@link g.isPerpendicular | isPerpendicular} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const isPerpendicular: Bound<typeof g.isPerpendicular<Value>> = (l1, l2) => g.isPerpendicular<Value>(arithmetic, l1, l2);
+
+/** {@link g.lambertAzimuthalEqualArea | lambertAzimuthalEqualArea} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const lambertAzimuthalEqualArea: Bound<typeof g.lambertAzimuthalEqualArea<Value>> = (point, projection) => g.lambertAzimuthalEqualArea<Value>(arithmetic, point, projection);
+
+/** {@link g.lambertAzimuthalEqualAreaInverse | lambertAzimuthalEqualAreaInverse} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const lambertAzimuthalEqualAreaInverse: Bound<typeof g.lambertAzimuthalEqualAreaInverse<Value>> = (point, projection) => g.lambertAzimuthalEqualAreaInverse<Value>(arithmetic, point, projection);
 
 /** {@link g.lambertConic | lambertConic} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const lambertConic: Bound<typeof g.lambertConic<Value>> = (point, projection) => g.lambertConic<Value>(arithmetic, point, projection);

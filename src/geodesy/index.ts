@@ -58,3 +58,9 @@ export { lambertConic, lambertConicInverse } from './lambert-conic.js';
 export { mercator, mercatorInverse } from './mercator.js';
 export { obliqueStereographic, obliqueStereographicInverse } from './oblique-stereographic.js';
 export { polarStereographic, polarStereographicInverse } from './polar-stereographic.js';
+export { cassiniSoldner, cassiniSoldnerInverse } from './cassini-soldner.js';
+export { albersEqualArea, albersEqualAreaInverse } from './albers.js';
+export {
+  lambertAzimuthalEqualArea,
+  lambertAzimuthalEqualAreaInverse,
+} from './lambert-azimuthal.js';
