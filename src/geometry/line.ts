@@ -5,7 +5,7 @@
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { show, coincidentPoints, degenerateLine } from '../errors.js';
-import type { Point } from './point.js';
+import { asPoint, type Point, type PointLike } from './point.js';
 import { atMostOne, finiteResult, readNumber } from './validate.js';
 
 /**
@@ -80,18 +80,20 @@ export function line<T>(A: Arithmetic<T>, a: Numeric<T>, b: Numeric<T>, c: Numer
  * //=> ['-2', '2', '-2']
  * ```
  */
-export function lineThrough<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): Line<T> {
+export function lineThrough<T>(A: Arithmetic<T>, P: PointLike<T>, Q: PointLike<T>): Line<T> {
+  const Pp = asPoint(P);
+  const Qp = asPoint(Q);
   // Line through two points: the cross product of their homogeneous coordinates (x, y, 1) (common practice; derived).
   const where = 'lineThrough(A, P, Q)';
-  const a = finiteResult(A.sub(P.y, Q.y), where);
-  const b = finiteResult(A.sub(Q.x, P.x), where);
+  const a = finiteResult(A.sub(Pp.y, Qp.y), where);
+  const b = finiteResult(A.sub(Qp.x, Pp.x), where);
   if (A.isZero(a) && A.isZero(b)) {
     throw coincidentPoints(
       where,
-      `P and Q coincide at (${show(A.toString(P.x))}, ${show(A.toString(P.y))})`,
+      `P and Q coincide at (${show(A.toString(Pp.x))}, ${show(A.toString(Pp.y))})`,
     );
   }
-  return { a, b, c: finiteResult(A.sub(A.mul(P.x, Q.y), A.mul(Q.x, P.y)), where) };
+  return { a, b, c: finiteResult(A.sub(A.mul(Pp.x, Qp.y), A.mul(Qp.x, Pp.y)), where) };
 }
 
 /**
@@ -110,8 +112,9 @@ export function lineThrough<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): Line
  * //=> true
  * ```
  */
-export function isOnLine<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>): boolean {
-  return A.isZero(A.add(A.add(A.mul(l.a, P.x), A.mul(l.b, P.y)), l.c));
+export function isOnLine<T>(A: Arithmetic<T>, P: PointLike<T>, l: Line<T>): boolean {
+  const Pp = asPoint(P);
+  return A.isZero(A.add(A.add(A.mul(l.a, Pp.x), A.mul(l.b, Pp.y)), l.c));
 }
 
 /**
@@ -171,13 +174,14 @@ export function isPerpendicular<T>(A: Arithmetic<T>, l1: Line<T>, l2: Line<T>): 
  * //=> ['1', '1']
  * ```
  */
-export function footOfPerpendicular<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>): Point<T> {
+export function footOfPerpendicular<T>(A: Arithmetic<T>, P: PointLike<T>, l: Line<T>): Point<T> {
+  const Pp = asPoint(P);
   const n = A.add(A.mul(l.a, l.a), A.mul(l.b, l.b));
   if (A.isZero(n))
     throw degenerateLine('footOfPerpendicular(A, P, l)', 'l has a = b = 0, which is no line');
   // Orthogonal projection onto a·x + b·y + c = 0 (common practice; derived from the normal vector (a, b)).
-  const k = A.div(A.add(A.add(A.mul(l.a, P.x), A.mul(l.b, P.y)), l.c), n);
-  return { x: A.sub(P.x, A.mul(k, l.a)), y: A.sub(P.y, A.mul(k, l.b)) };
+  const k = A.div(A.add(A.add(A.mul(l.a, Pp.x), A.mul(l.b, Pp.y)), l.c), n);
+  return { x: A.sub(Pp.x, A.mul(k, l.a)), y: A.sub(Pp.y, A.mul(k, l.b)) };
 }
 
 /**
@@ -196,12 +200,13 @@ export function footOfPerpendicular<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>
  * //=> '4'
  * ```
  */
-export function quadranceToLine<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>): T {
+export function quadranceToLine<T>(A: Arithmetic<T>, P: PointLike<T>, l: Line<T>): T {
+  const Pp = asPoint(P);
   const n = A.add(A.mul(l.a, l.a), A.mul(l.b, l.b));
   if (A.isZero(n))
     throw degenerateLine('quadranceToLine(A, P, l)', 'l has a = b = 0, which is no line');
   // Point-to-line distance |a·x + b·y + c|/√(a² + b²), squared (common practice; derived).
-  const v = A.add(A.add(A.mul(l.a, P.x), A.mul(l.b, P.y)), l.c);
+  const v = A.add(A.add(A.mul(l.a, Pp.x), A.mul(l.b, Pp.y)), l.c);
   return A.div(A.mul(v, v), n);
 }
 

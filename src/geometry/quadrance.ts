@@ -4,7 +4,7 @@
  * @module geometry
  */
 import type { Arithmetic } from '../arithmetic/types.js';
-import type { Point } from './point.js';
+import { asPoint, type PointLike } from './point.js';
 import { finiteResult } from './validate.js';
 
 /**
@@ -25,10 +25,12 @@ import { finiteResult } from './validate.js';
  * //=> '25'
  * ```
  */
-export function quadrance<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): T {
+export function quadrance<T>(A: Arithmetic<T>, P: PointLike<T>, Q: PointLike<T>): T {
+  const Pp = asPoint(P);
+  const Qp = asPoint(Q);
   // The square of the Euclidean distance, by Pythagoras' theorem (Euclid, Elements I.47).
-  const dx = A.sub(Q.x, P.x);
-  const dy = A.sub(Q.y, P.y);
+  const dx = A.sub(Qp.x, Pp.x);
+  const dy = A.sub(Qp.y, Pp.y);
   return finiteResult(A.add(A.mul(dx, dx), A.mul(dy, dy)), 'quadrance(A, P, Q)');
 }
 
@@ -47,6 +49,7 @@ export function quadrance<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): T {
  * //=> 5
  * ```
  */
-export function vectorQuadrance<T>(A: Arithmetic<T>, v: Point<T>): T {
-  return finiteResult(A.add(A.mul(v.x, v.x), A.mul(v.y, v.y)), 'vectorQuadrance(A, v)');
+export function vectorQuadrance<T>(A: Arithmetic<T>, v: PointLike<T>): T {
+  const vp = asPoint(v);
+  return finiteResult(A.add(A.mul(vp.x, vp.x), A.mul(vp.y, vp.y)), 'vectorQuadrance(A, v)');
 }

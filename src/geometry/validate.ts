@@ -5,6 +5,7 @@
  * @module geometry
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+import type { Point } from './point.js';
 import { QuadspreadError, show, invalidArgument, negativeQuadrance, notFinite } from '../errors.js';
 
 /**
@@ -113,4 +114,28 @@ export function readSpread<T>(A: Arithmetic<T>, x: Numeric<T>, where: string, ar
  */
 export function atMostOne<T>(A: Arithmetic<T>, s: T): T {
   return A.cmp(s, A.one) > 0 ? A.one : s;
+}
+
+/**
+ * Reads a plane point into the arithmetic: `{ x, y }` (x = east, y = north) or an array
+ * `[x, y]` in that order. Errors name `where` and the coordinate (`.x`, `[0]`, …).
+ * @internal
+ */
+export function readPoint<T>(A: Arithmetic<T, boolean>, p: unknown, where: string): Point<T> {
+  if (Array.isArray(p)) {
+    if (p.length !== 2 || !(0 in p) || !(1 in p))
+      throw invalidArgument(
+        where,
+        `an array point must be [x, y] (x = east, y = north), not ${p.length} entries`,
+      );
+    return { x: readNumber(A, p[0], where, '[0]'), y: readNumber(A, p[1], where, '[1]') };
+  }
+  if (p === null || typeof p !== 'object' || !('x' in p) || !('y' in p)) {
+    throw invalidArgument(
+      where,
+      `${show(p)} is not a point { x, y } or [x, y] (x = east, y = north)`,
+    );
+  }
+  const q = p as { x: Numeric<T>; y: Numeric<T> };
+  return { x: readNumber(A, q.x, where, '.x'), y: readNumber(A, q.y, where, '.y') };
 }
