@@ -20,6 +20,7 @@ import * as budget from './workloads/budget.mjs';
 import * as geodesy from './workloads/geodesy.mjs';
 import * as roundtrip from './workloads/roundtrip.mjs';
 import * as sideshots from './workloads/side-shots.mjs';
+import * as projection from './workloads/projection.mjs';
 
 const args = process.argv.slice(2);
 const quick = args.includes('--quick');
@@ -57,9 +58,16 @@ const t0 = Date.now();
 const arithmetics = [g.float, g.rational, g.decimal(34), g.decimal(20)];
 if (g.uncertain) arithmetics.push(g.uncertain(g.float), g.uncertain(g.rational));
 
-const workloads = [triangle, heights, traverse, budget, geodesy, roundtrip, sideshots].filter(
-  (w) => !only || w.name === only,
-);
+const workloads = [
+  triangle,
+  heights,
+  traverse,
+  budget,
+  geodesy,
+  roundtrip,
+  sideshots,
+  projection,
+].filter((w) => !only || w.name === only);
 const built = [];
 for (const w of workloads) {
   const why = w.unavailable?.(lib);

@@ -64,3 +64,7 @@ export {
   lambertAzimuthalEqualArea,
   lambertAzimuthalEqualAreaInverse,
 } from './lambert-azimuthal.js';
+export { utmZone, utmProjection } from './utm.js';
+export type { UtmZone } from './utm.js';
+export { crs, CRS_CODES } from './crs.js';
+export type { ProjectedCrs, GeographicCrs } from './crs.js';
