@@ -68,3 +68,7 @@ export { utmZone, utmProjection } from './utm.js';
 export type { UtmZone } from './utm.js';
 export { crs, CRS_CODES } from './crs.js';
 export type { ProjectedCrs, GeographicCrs } from './crs.js';
+export { geodesicInverse } from './geodesic-inverse.js';
+export type { GeodesicInverse } from './geodesic-inverse.js';
+export { geodesicDirect } from './geodesic-direct.js';
+export type { GeodesicDirect } from './geodesic-direct.js';
