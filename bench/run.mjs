@@ -24,6 +24,7 @@ import * as roundtrip from './workloads/roundtrip.mjs';
 import * as sideshots from './workloads/side-shots.mjs';
 import * as projection from './workloads/projection.mjs';
 import * as geodesic from './workloads/geodesic.mjs';
+import * as alignment from './workloads/alignment.mjs';
 
 const args = process.argv.slice(2);
 const quick = args.includes('--quick');
@@ -75,6 +76,7 @@ const workloads = [
   sideshots,
   projection,
   geodesic,
+  alignment,
 ].filter((w) => !only || w.name === only);
 const built = [];
 for (const w of workloads) {
