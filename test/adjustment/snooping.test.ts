@@ -109,7 +109,7 @@ describe('data snooping removes a 20σ blunder first', () => {
               },
       );
       const r = adjustNetwork(F, {
-        points,
+        points: points as never,
         observations: bad as never,
         options: { snooping: true },
       });
