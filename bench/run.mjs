@@ -23,6 +23,7 @@ import * as geodesy from './workloads/geodesy.mjs';
 import * as roundtrip from './workloads/roundtrip.mjs';
 import * as sideshots from './workloads/side-shots.mjs';
 import * as geodesic from './workloads/geodesic.mjs';
+import * as alignment from './workloads/alignment.mjs';
 
 const args = process.argv.slice(2);
 const quick = args.includes('--quick');
@@ -73,6 +74,7 @@ const workloads = [
   roundtrip,
   sideshots,
   geodesic,
+  alignment,
 ].filter((w) => !only || w.name === only);
 const built = [];
 for (const w of workloads) {

@@ -293,6 +293,9 @@ export const meridianRadius: Bound<typeof g.meridianRadius<Value>> = (lat, ellip
 /** {@link g.metresToLength | metresToLength} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const metresToLength: Bound<typeof g.metresToLength<Value>> = (metres, unit) => g.metresToLength<Value>(arithmetic, metres, unit);
 
+/** {@link g.minimumRadius | minimumRadius} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const minimumRadius: Bound<typeof g.minimumRadius<Value>> = (input) => g.minimumRadius<Value>(arithmetic, input);
+
 /** {@link g.molodenskyBadekas | molodenskyBadekas} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const molodenskyBadekas: Bound<typeof g.molodenskyBadekas<Value>> = (point, params) => g.molodenskyBadekas<Value>(arithmetic, point, params);
 
@@ -356,6 +359,9 @@ export const quadrea: Bound<typeof g.quadrea<Value>> = (Q1, Q2, Q3) => g.quadrea
 /** {@link g.radiusInAzimuth | radiusInAzimuth} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const radiusInAzimuth: Bound<typeof g.radiusInAzimuth<Value>> = (lat, azimuth, ellipsoid) => g.radiusInAzimuth<Value>(arithmetic, lat, azimuth, ellipsoid);
 
+/** {@link g.railCant | railCant} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const railCant: Bound<typeof g.railCant<Value>> = (input) => g.railCant<Value>(arithmetic, input);
+
 /** {@link g.readStation | readStation} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const readStation: Bound<typeof g.readStation<Value>> = (text) => g.readStation<Value>(arithmetic, text);
 
@@ -394,6 +400,12 @@ export const sideShot: Bound<typeof g.sideShot<Value>> = (setup, shot) => g.side
 
 /** {@link g.sideShots | sideShots} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const sideShots: Bound<typeof g.sideShots<Value>> = (setup, shots) => g.sideShots<Value>(arithmetic, setup, shots);
+
+/** {@link g.sightCurveLength | sightCurveLength} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const sightCurveLength: Bound<typeof g.sightCurveLength<Value>> = (input) => g.sightCurveLength<Value>(arithmetic, input);
+
+/** {@link g.sightLineOffset | sightLineOffset} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const sightLineOffset: Bound<typeof g.sightLineOffset<Value>> = (input) => g.sightLineOffset<Value>(arithmetic, input);
 
 /** {@link g.sinCosDegrees | sinCosDegrees} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const sinCosDegrees: Bound<typeof g.sinCosDegrees<Value>> = (degrees) => g.sinCosDegrees<Value>(arithmetic, degrees);
@@ -449,6 +461,9 @@ export const stewartQuadranceResidual: Bound<typeof g.stewartQuadranceResidual<V
 /** {@link g.stewartResidual | stewartResidual} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const stewartResidual: Bound<typeof g.stewartResidual<Value>> = (data) => g.stewartResidual<Value>(arithmetic, data);
 
+/** {@link g.stoppingSightDistance | stoppingSightDistance} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const stoppingSightDistance: Bound<typeof g.stoppingSightDistance<Value>> = (input) => g.stoppingSightDistance<Value>(arithmetic, input);
+
 /** {@link g.surd | surd} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const surd: Bound<typeof g.surd<Value>> = (a, b, d) => g.surd<Value>(arithmetic, a, b, d);
 
@@ -460,6 +475,9 @@ export const tanh: Bound<typeof g.tanh<Value>> = (value) => g.tanh<Value>(arithm
 
 /** {@link g.toGrid | toGrid} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const toGrid: Bound<typeof g.toGrid<Value>> = (point, projection) => g.toGrid<Value>(arithmetic, point, projection);
+
+/** {@link g.transitionLength | transitionLength} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const transitionLength: Bound<typeof g.transitionLength<Value>> = (input) => g.transitionLength<Value>(arithmetic, input);
 
 /** {@link g.transverseMercator | transverseMercator} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const transverseMercator: Bound<typeof g.transverseMercator<Value>> = (point, projection) => g.transverseMercator<Value>(arithmetic, point, projection);
