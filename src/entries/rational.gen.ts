@@ -80,6 +80,9 @@ export const azimuthToQuadrant: Bound<typeof g.azimuthToQuadrant<Value>> = (azim
 /** {@link g.bearingToAzimuth | bearingToAzimuth} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const bearingToAzimuth: Bound<typeof g.bearingToAzimuth<Value>> = (bearing) => g.bearingToAzimuth<Value>(arithmetic, bearing);
 
+/** {@link g.carryBearings | carryBearings} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const carryBearings: Bound<typeof g.carryBearings<Value>> = (input) => g.carryBearings<Value>(arithmetic, input);
+
 /** {@link g.clothoid | clothoid} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const clothoid: Bound<typeof g.clothoid<Value>> = (input) => g.clothoid<Value>(arithmetic, input);
 
@@ -513,33 +516,34 @@ export {
 } from '../index.js';
 export type {
   AdjustedHeight, AdjustedLevelObservation, AlignmentElement, AlignmentPoint, AlignmentStation,
-  AlignmentStationOptions, AllowableMisclosure, AngleUnit, AngularMisclosure, ArcElement,
-  AreaUnit, Arithmetic, Atmosphere, AtmosphericPpm, BaardaTest, Backsight, BacksightResult,
-  BaseHeight, BearingIntersection, BenchmarkInput, Budget, BudgetOptions, ChainageEquation,
-  ChainageEquationInput, CircleInput, Clothoid, Contribution, ControlPoint, CorrelationTerm,
-  CurvatureOptions, DatumTransformation, DatumTransformOptions, Decimal, DecimalArithmetic,
-  DecimalElementary, DeflectionRow, Ellipsoid, EllipsoidDefinition, EllipsoidParameters, Enu,
-  ErrorCode, FaceOptions, FieldCheck, FieldObservation, FlatEarthError, FloatArithmetic,
-  FootSide, FreeStation, FreeStationInput, FreeStationResidual, Geocentric,
-  GeocentricTranslationParameters, Geodetic, GeodeticInput, GeographicPoint, GlobalTest,
-  Gradient, GridPoint, GridReduction, HelmertConvention, HelmertParameters, HorizontalAlignment,
-  HorizontalAlignmentInput, HorizontalCurve, HorizontalCurveInput, InlineHeight,
-  InlineQuadranceHeight, InputDistribution, Inverse, KeyPoint, LengthUnit, LevelCheck,
-  LevellingAdjustment, LevellingInput, LevellingObservationInput, LevellingOptions,
-  LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, LinearUnit, LocalTest,
-  Matrix3, MeanFaces, MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, Numeric,
-  ObservationTest, OffsetMeasure, OrientInput, PegReadings, Point, Point3, Point3Input,
-  Pointing, PointInput, PointLike, PolygonArea, PreparedProjection, ProfileLevel,
-  ProfilePointInput, ProjectedPoint, Projection, ProjectionAngleUnit, ProjectionMethod,
-  RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalLevelling, ReciprocalSet,
-  ReciprocalTrigHeight, ReducedObservation, Resection, ResectionInput, Root, RotationInput,
-  RotationUnit, RoundOff, SetOut, SetOutCheck, SetOutOptions, SetOutPoint, SetOutTolerance,
-  SettingOutRow, SetupInput, SetupTolerance, Shot, SideShot, SightHeight, SnoopingRemoval,
-  SnoopingReport, StaffPair, StationCandidate, StationObservation, StationSetup,
-  StewartChainages, StewartQuadrances, StraightElement, Surd, TestOptions, TmFactors,
-  TransformedPoint, TransitionElement, TransitionMeasures, TransverseMercator,
-  TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg,
-  Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoPeg, TwoPegInput, TwoStationHeight,
-  UncertainArithmetic, UncertainInput, ValueOf, VerticalAlignment, VerticalAlignmentInput,
-  VerticalCurve, VerticalCurveInput, VerticalInput, VerticalKind, VerticalReading,
+  AlignmentStationOptions, AllowableMisclosure, AngleKind, AngleUnit, AngularMisclosure,
+  ArcElement, AreaUnit, Arithmetic, Atmosphere, AtmosphericPpm, BaardaTest, Backsight,
+  BacksightResult, BaseHeight, BearingIntersection, BenchmarkInput, Budget, BudgetOptions,
+  CarriedBearings, CarryBearingsInput, ChainageEquation, ChainageEquationInput, CircleInput,
+  Clothoid, Contribution, ControlPoint, CorrelationTerm, CurvatureOptions, DatumTransformation,
+  DatumTransformOptions, Decimal, DecimalArithmetic, DecimalElementary, DeflectionRow,
+  Ellipsoid, EllipsoidDefinition, EllipsoidParameters, Enu, ErrorCode, FaceOptions, FieldCheck,
+  FieldObservation, FlatEarthError, FloatArithmetic, FootSide, FreeStation, FreeStationInput,
+  FreeStationResidual, Geocentric, GeocentricTranslationParameters, Geodetic, GeodeticInput,
+  GeographicPoint, GlobalTest, Gradient, GridPoint, GridReduction, HelmertConvention,
+  HelmertParameters, HorizontalAlignment, HorizontalAlignmentInput, HorizontalCurve,
+  HorizontalCurveInput, InlineHeight, InlineQuadranceHeight, InputDistribution, Inverse,
+  KeyPoint, LengthUnit, LevelCheck, LevellingAdjustment, LevellingInput,
+  LevellingObservationInput, LevellingOptions, LevellingOrder, LevelRow, LevelRun,
+  LevelRunInput, LevelSight, Line, LinearUnit, LocalTest, Matrix3, MeanFaces,
+  MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, Numeric, ObservationTest,
+  OffsetMeasure, OrientInput, PegReadings, Point, Point3, Point3Input, Pointing, PointInput,
+  PointLike, PolygonArea, PreparedProjection, ProfileLevel, ProfilePointInput, ProjectedPoint,
+  Projection, ProjectionAngleUnit, ProjectionMethod, RandomStream, Ratio, Rational,
+  RationalArithmetic, ReciprocalLevelling, ReciprocalSet, ReciprocalTrigHeight,
+  ReducedObservation, Resection, ResectionInput, Root, RotationInput, RotationUnit, RoundOff,
+  SetOut, SetOutCheck, SetOutOptions, SetOutPoint, SetOutTolerance, SettingOutRow, SetupInput,
+  SetupTolerance, Shot, SideShot, SightHeight, SnoopingRemoval, SnoopingReport, StaffPair,
+  StationCandidate, StationObservation, StationSetup, StewartChainages, StewartQuadrances,
+  StraightElement, Surd, TestOptions, TmFactors, TransformedPoint, TransitionElement,
+  TransitionMeasures, TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure,
+  TraverseCourse, TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
+  TwoPeg, TwoPegInput, TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf,
+  VerticalAlignment, VerticalAlignmentInput, VerticalCurve, VerticalCurveInput, VerticalInput,
+  VerticalKind, VerticalReading,
 } from '../index.js';
