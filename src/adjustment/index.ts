@@ -22,3 +22,17 @@ export type {
   AdjustedLevelObservation,
   LevellingAdjustment,
 } from './levelling.js';
+export { adjustNetwork } from './network.js';
+export type {
+  NetworkPointInput,
+  DistanceSigma,
+  NetworkObservationInput,
+  NetworkOptions,
+  NetworkInput,
+  ErrorEllipse,
+  ConfidenceEllipse,
+  AdjustedPoint,
+  AdjustedNetworkObservation,
+  RelativeEllipse,
+  NetworkAdjustment,
+} from './network.js';

@@ -125,7 +125,7 @@ describe('output files are regular files only', () => {
       child.stdin.write('east1,north1,east2,north2\n');
       for (let i = 0; i < 200; i++) child.stdin.write(`0,0,${i},4\n`);
       const temp = async (): Promise<void> => {
-        for (let i = 0; i < 200 && readdirSync(d).length === 0; i++)
+        for (let i = 0; i < 1200 && readdirSync(d).length === 0; i++)
           await new Promise((r) => setTimeout(r, 25));
       };
       await temp();
