@@ -22,6 +22,8 @@ import * as budget from './workloads/budget.mjs';
 import * as geodesy from './workloads/geodesy.mjs';
 import * as roundtrip from './workloads/roundtrip.mjs';
 import * as sideshots from './workloads/side-shots.mjs';
+import * as geodesic from './workloads/geodesic.mjs';
+import * as alignment from './workloads/alignment.mjs';
 
 const args = process.argv.slice(2);
 const quick = args.includes('--quick');
@@ -71,6 +73,8 @@ const workloads = [
   geodesy,
   roundtrip,
   sideshots,
+  geodesic,
+  alignment,
 ].filter((w) => !only || w.name === only);
 const built = [];
 for (const w of workloads) {
@@ -135,7 +139,7 @@ for (const [w, b] of built) {
     headline.float.push(
       row(
         w.name,
-        'float vs hand-written',
+        `float vs ${w.baseline ?? 'hand-written'}`,
         'float',
         'hand',
         ratio(b.float.ours, b.float.hand, o),

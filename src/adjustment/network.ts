@@ -9,7 +9,7 @@
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { QuadspreadError, show, invalidArgument } from '../errors.js';
 import { readNumber, expectObject } from '../geometry/validate.js';
-import { sqrtOf, surd } from '../geometry/surd.js';
+import { surd } from '../geometry/surd.js';
 import type { Root } from '../geometry/surd.js';
 import { angleToDegrees } from '../readings/angle.js';
 import { approxSqrt } from '../readings/numeric.js';
@@ -17,7 +17,7 @@ import { readArray } from '../cogo/internal.js';
 import { solveGroups, observationStatistics } from './least-squares.js';
 import type { ObservationGroup } from './least-squares.js';
 import { solveNormal } from './normal-equations.js';
-import { readTestOptions, assess, nonNegative } from './testing.js';
+import { readTestOptions, assess, nonNegative, sigmaRoot } from './testing.js';
 import type { TestOptions, GlobalTest, LocalTest, ObservationTest } from './testing.js';
 import { readName, readSigma, requireConnected } from './names.js';
 import { approximateCoordinates } from './approximate.js';
@@ -649,8 +649,8 @@ function ellipse<T, E extends boolean>(
     const m = nonNegative(A, A.mul(f, A.sub(mean, r)));
     majorSquared = M as Root<T, E>;
     minorSquared = m as Root<T, E>;
-    major = A.sqrt(M)!;
-    minor = A.sqrt(m)!;
+    major = A.isZero(M) ? A.zero : A.sqrt(M)!;
+    minor = A.isZero(m) ? A.zero : A.sqrt(m)!;
   }
   // azimuth t of the major axis: tan 2t = 2·qxy/(qyy − qxx), t from north clockwise
   let azimuth = A.zero;
@@ -877,8 +877,8 @@ function finish<T, E extends boolean>(
     points[name] = {
       x: xy[i]![0]!,
       y: xy[i]![1]!,
-      sigmaX: sqrtOf(A, A.mul(f, qxx)),
-      sigmaY: sqrtOf(A, A.mul(f, qyy)),
+      sigmaX: sigmaRoot(A, f, qxx),
+      sigmaY: sigmaRoot(A, f, qyy),
       ellipse: e,
       confidence: scaled(A, e, level, k),
       held,

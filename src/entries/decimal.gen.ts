@@ -137,6 +137,15 @@ export const enuFromGeocentric: Bound<typeof g.enuFromGeocentric<Value>> = (orig
 /** {@link g.enuRotation | enuRotation} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const enuRotation: Bound<typeof g.enuRotation<Value>> = (origin) => g.enuRotation<Value>(arithmetic, origin);
 
+/** {@link g.fitAffine | fitAffine} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const fitAffine: Bound<typeof g.fitAffine<Value>> = (points) => g.fitAffine<Value>(arithmetic, points);
+
+/** {@link g.fitInclinedPlane | fitInclinedPlane} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const fitInclinedPlane: Bound<typeof g.fitInclinedPlane<Value>> = (points) => g.fitInclinedPlane<Value>(arithmetic, points);
+
+/** {@link g.fitSimilarity | fitSimilarity} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const fitSimilarity: Bound<typeof g.fitSimilarity<Value>> = (points) => g.fitSimilarity<Value>(arithmetic, points);
+
 /** {@link g.flatEarthError | flatEarthError} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const flatEarthError: Bound<typeof g.flatEarthError<Value>> = (distance, radius) => g.flatEarthError<Value>(arithmetic, distance, radius);
 
@@ -169,6 +178,12 @@ export const geocentricToGeodetic: Bound<typeof g.geocentricToGeodetic<Value>> =
 
 /** {@link g.geocentricTranslation | geocentricTranslation} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const geocentricTranslation: Bound<typeof g.geocentricTranslation<Value>> = (point, params) => g.geocentricTranslation<Value>(arithmetic, point, params);
+
+/** {@link g.geodesicDirect | geodesicDirect} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const geodesicDirect: Bound<typeof g.geodesicDirect<Value>> = (p1, azimuth, distance, ellipsoid) => g.geodesicDirect<Value>(arithmetic, p1, azimuth, distance, ellipsoid);
+
+/** {@link g.geodesicInverse | geodesicInverse} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const geodesicInverse: Bound<typeof g.geodesicInverse<Value>> = (p1, p2, ellipsoid) => g.geodesicInverse<Value>(arithmetic, p1, p2, ellipsoid);
 
 /** {@link g.geodeticToGeocentric | geodeticToGeocentric} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const geodeticToGeocentric: Bound<typeof g.geodeticToGeocentric<Value>> = (point, ellipsoid) => g.geodeticToGeocentric<Value>(arithmetic, point, ellipsoid);
@@ -281,6 +296,9 @@ export const meridianRadius: Bound<typeof g.meridianRadius<Value>> = (lat, ellip
 /** {@link g.metresToLength | metresToLength} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const metresToLength: Bound<typeof g.metresToLength<Value>> = (metres, unit) => g.metresToLength<Value>(arithmetic, metres, unit);
 
+/** {@link g.minimumRadius | minimumRadius} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const minimumRadius: Bound<typeof g.minimumRadius<Value>> = (input) => g.minimumRadius<Value>(arithmetic, input);
+
 /** {@link g.molodenskyBadekas | molodenskyBadekas} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const molodenskyBadekas: Bound<typeof g.molodenskyBadekas<Value>> = (point, params) => g.molodenskyBadekas<Value>(arithmetic, point, params);
 
@@ -344,6 +362,9 @@ export const quadrea: Bound<typeof g.quadrea<Value>> = (Q1, Q2, Q3) => g.quadrea
 /** {@link g.radiusInAzimuth | radiusInAzimuth} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const radiusInAzimuth: Bound<typeof g.radiusInAzimuth<Value>> = (lat, azimuth, ellipsoid) => g.radiusInAzimuth<Value>(arithmetic, lat, azimuth, ellipsoid);
 
+/** {@link g.railCant | railCant} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const railCant: Bound<typeof g.railCant<Value>> = (input) => g.railCant<Value>(arithmetic, input);
+
 /** {@link g.readStation | readStation} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const readStation: Bound<typeof g.readStation<Value>> = (text) => g.readStation<Value>(arithmetic, text);
 
@@ -382,6 +403,12 @@ export const sideShot: Bound<typeof g.sideShot<Value>> = (setup, shot) => g.side
 
 /** {@link g.sideShots | sideShots} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const sideShots: Bound<typeof g.sideShots<Value>> = (setup, shots) => g.sideShots<Value>(arithmetic, setup, shots);
+
+/** {@link g.sightCurveLength | sightCurveLength} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const sightCurveLength: Bound<typeof g.sightCurveLength<Value>> = (input) => g.sightCurveLength<Value>(arithmetic, input);
+
+/** {@link g.sightLineOffset | sightLineOffset} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const sightLineOffset: Bound<typeof g.sightLineOffset<Value>> = (input) => g.sightLineOffset<Value>(arithmetic, input);
 
 /** {@link g.sinCosDegrees | sinCosDegrees} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const sinCosDegrees: Bound<typeof g.sinCosDegrees<Value>> = (degrees) => g.sinCosDegrees<Value>(arithmetic, degrees);
@@ -437,6 +464,9 @@ export const stewartQuadranceResidual: Bound<typeof g.stewartQuadranceResidual<V
 /** {@link g.stewartResidual | stewartResidual} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const stewartResidual: Bound<typeof g.stewartResidual<Value>> = (data) => g.stewartResidual<Value>(arithmetic, data);
 
+/** {@link g.stoppingSightDistance | stoppingSightDistance} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const stoppingSightDistance: Bound<typeof g.stoppingSightDistance<Value>> = (input) => g.stoppingSightDistance<Value>(arithmetic, input);
+
 /** {@link g.surd | surd} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const surd: Bound<typeof g.surd<Value>> = (a, b, d) => g.surd<Value>(arithmetic, a, b, d);
 
@@ -448,6 +478,9 @@ export const tanh: Bound<typeof g.tanh<Value>> = (value) => g.tanh<Value>(arithm
 
 /** {@link g.toGrid | toGrid} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const toGrid: Bound<typeof g.toGrid<Value>> = (point, projection) => g.toGrid<Value>(arithmetic, point, projection);
+
+/** {@link g.transitionLength | transitionLength} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const transitionLength: Bound<typeof g.transitionLength<Value>> = (input) => g.transitionLength<Value>(arithmetic, input);
 
 /** {@link g.transverseMercator | transverseMercator} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const transverseMercator: Bound<typeof g.transverseMercator<Value>> = (point, projection) => g.transverseMercator<Value>(arithmetic, point, projection);
@@ -519,36 +552,38 @@ export {
 } from '../index.js';
 export type {
   AdjustedHeight, AdjustedLevelObservation, AdjustedNetworkObservation, AdjustedPoint,
-  AlignmentElement, AlignmentPoint, AlignmentStation, AlignmentStationOptions,
+  AffineFit, AlignmentElement, AlignmentPoint, AlignmentStation, AlignmentStationOptions,
   AllowableMisclosure, AngleKind, AngleUnit, AngularMisclosure, ArcElement, AreaUnit,
   Arithmetic, Atmosphere, AtmosphericPpm, BaardaTest, Backsight, BacksightResult, BaseHeight,
   BearingIntersection, BenchmarkInput, Budget, BudgetOptions, CarriedBearings,
   CarryBearingsInput, ChainageEquation, ChainageEquationInput, CircleInput, Clothoid,
-  ConfidenceEllipse, Contribution, ControlPoint, CorrelationTerm, CurvatureOptions,
+  CommonPoint, ConfidenceEllipse, Contribution, ControlPoint, CorrelationTerm, CurvatureOptions,
   DatumTransformation, DatumTransformOptions, Decimal, DecimalArithmetic, DecimalElementary,
   DeflectionRow, DistanceSigma, Ellipsoid, EllipsoidDefinition, EllipsoidParameters, Enu,
   ErrorCode, ErrorEllipse, FaceOptions, FieldCheck, FieldObservation, FlatEarthError,
   FloatArithmetic, FootSide, FreeStation, FreeStationInput, FreeStationResidual, Geocentric,
-  GeocentricTranslationParameters, Geodetic, GeodeticInput, GeographicPoint, GlobalTest,
-  Gradient, GridPoint, GridReduction, HelmertConvention, HelmertParameters, HorizontalAlignment,
-  HorizontalAlignmentInput, HorizontalCurve, HorizontalCurveInput, InlineHeight,
-  InlineQuadranceHeight, InputDistribution, Inverse, KeyPoint, LengthUnit, LevelCheck,
-  LevellingAdjustment, LevellingInput, LevellingObservationInput, LevellingOptions,
-  LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, LinearUnit, LocalTest,
-  Matrix3, MeanFaces, MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult,
-  NetworkAdjustment, NetworkInput, NetworkObservationInput, NetworkOptions, NetworkPointInput,
-  Numeric, ObservationTest, OffsetMeasure, OrientInput, PegReadings, Point, Point3, Point3Input,
+  GeocentricTranslationParameters, GeodesicDirect, GeodesicInverse, Geodetic, GeodeticInput,
+  GeographicPoint, GlobalTest, Gradient, GridPoint, GridReduction, HelmertConvention,
+  HelmertParameters, HorizontalAlignment, HorizontalAlignmentInput, HorizontalCurve,
+  HorizontalCurveInput, InclinedPlaneFit, InlineHeight, InlineQuadranceHeight,
+  InputDistribution, Inverse, KeyPoint, LengthUnit, LevelCheck, LevellingAdjustment,
+  LevellingInput, LevellingObservationInput, LevellingOptions, LevellingOrder, LevelRow,
+  LevelRun, LevelRunInput, LevelSight, Line, LinearUnit, LocalTest, Matrix3, MeanFaces,
+  MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, NetworkAdjustment,
+  NetworkInput, NetworkObservationInput, NetworkOptions, NetworkPointInput, Numeric,
+  ObservationTest, OffsetMeasure, OrientInput, PegReadings, Point, Point3, Point3Input,
   Pointing, PointInput, PointLike, PolygonArea, PreparedProjection, ProfileLevel,
   ProfilePointInput, ProjectedPoint, Projection, ProjectionAngleUnit, ProjectionMethod,
   RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalLevelling, ReciprocalSet,
   ReciprocalTrigHeight, ReducedObservation, RelativeEllipse, Resection, ResectionInput, Root,
   RotationInput, RotationUnit, RoundOff, SetOut, SetOutCheck, SetOutOptions, SetOutPoint,
   SetOutTolerance, SettingOutRow, SetupInput, SetupTolerance, Shot, SideShot, SightHeight,
-  SnoopingRemoval, SnoopingReport, StaffPair, StationCandidate, StationObservation,
-  StationSetup, StewartChainages, StewartQuadrances, StraightElement, Surd, TestOptions,
-  TmFactors, TransformedPoint, TransitionElement, TransitionMeasures, TransverseMercator,
-  TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg,
-  Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoPeg, TwoPegInput, TwoStationHeight,
-  UncertainArithmetic, UncertainInput, ValueOf, VerticalAlignment, VerticalAlignmentInput,
-  VerticalCurve, VerticalCurveInput, VerticalInput, VerticalKind, VerticalReading,
+  SimilarityFit, SnoopingRemoval, SnoopingReport, StaffPair, StationCandidate,
+  StationObservation, StationSetup, StewartChainages, StewartQuadrances, StraightElement, Surd,
+  TestOptions, TmFactors, TransformedPoint, TransitionElement, TransitionMeasures,
+  TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse,
+  TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoPeg,
+  TwoPegInput, TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf,
+  VerticalAlignment, VerticalAlignmentInput, VerticalCurve, VerticalCurveInput, VerticalInput,
+  VerticalKind, VerticalReading,
 } from '../index.js';
