@@ -22,6 +22,7 @@ import * as budget from './workloads/budget.mjs';
 import * as geodesy from './workloads/geodesy.mjs';
 import * as roundtrip from './workloads/roundtrip.mjs';
 import * as sideshots from './workloads/side-shots.mjs';
+import * as projection from './workloads/projection.mjs';
 import * as geodesic from './workloads/geodesic.mjs';
 import * as alignment from './workloads/alignment.mjs';
 
@@ -73,6 +74,7 @@ const workloads = [
   geodesy,
   roundtrip,
   sideshots,
+  projection,
   geodesic,
   alignment,
 ].filter((w) => !only || w.name === only);

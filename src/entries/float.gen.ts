@@ -38,6 +38,12 @@ export const adjustLevelling: Bound<typeof g.adjustLevelling<Value, false>> = (i
 /** {@link g.adjustNetwork | adjustNetwork} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const adjustNetwork: Bound<typeof g.adjustNetwork<Value, false>> = (input) => g.adjustNetwork<Value, false>(arithmetic, input);
 
+/** {@link g.albersEqualArea | albersEqualArea} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const albersEqualArea: Bound<typeof g.albersEqualArea<Value>> = (point, projection) => g.albersEqualArea<Value>(arithmetic, point, projection);
+
+/** {@link g.albersEqualAreaInverse | albersEqualAreaInverse} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const albersEqualAreaInverse: Bound<typeof g.albersEqualAreaInverse<Value>> = (point, projection) => g.albersEqualAreaInverse<Value>(arithmetic, point, projection);
+
 /** {@link g.alignmentPoint | alignmentPoint} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const alignmentPoint: Bound<typeof g.alignmentPoint<Value>> = (alignment, chainage, offset, options) => g.alignmentPoint<Value>(arithmetic, alignment, chainage, offset, options);
 
@@ -85,6 +91,12 @@ export const bearingToAzimuth: Bound<typeof g.bearingToAzimuth<Value>> = (bearin
 
 /** {@link g.carryBearings | carryBearings} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const carryBearings: Bound<typeof g.carryBearings<Value>> = (input) => g.carryBearings<Value>(arithmetic, input);
+
+/** {@link g.cassiniSoldner | cassiniSoldner} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const cassiniSoldner: Bound<typeof g.cassiniSoldner<Value>> = (point, projection) => g.cassiniSoldner<Value>(arithmetic, point, projection);
+
+/** {@link g.cassiniSoldnerInverse | cassiniSoldnerInverse} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const cassiniSoldnerInverse: Bound<typeof g.cassiniSoldnerInverse<Value>> = (point, projection) => g.cassiniSoldnerInverse<Value>(arithmetic, point, projection);
 
 /** {@link g.clothoid | clothoid} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const clothoid: Bound<typeof g.clothoid<Value>> = (input) => g.clothoid<Value>(arithmetic, input);
@@ -262,6 +274,12 @@ export const isParallel: Bound<typeof g.isParallel<Value>> = (l1, l2) => g.isPar
 
 /** {@link g.isPerpendicular | isPerpendicular} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const isPerpendicular: Bound<typeof g.isPerpendicular<Value>> = (l1, l2) => g.isPerpendicular<Value>(arithmetic, l1, l2);
+
+/** {@link g.lambertAzimuthalEqualArea | lambertAzimuthalEqualArea} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const lambertAzimuthalEqualArea: Bound<typeof g.lambertAzimuthalEqualArea<Value>> = (point, projection) => g.lambertAzimuthalEqualArea<Value>(arithmetic, point, projection);
+
+/** {@link g.lambertAzimuthalEqualAreaInverse | lambertAzimuthalEqualAreaInverse} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
+export const lambertAzimuthalEqualAreaInverse: Bound<typeof g.lambertAzimuthalEqualAreaInverse<Value>> = (point, projection) => g.lambertAzimuthalEqualAreaInverse<Value>(arithmetic, point, projection);
 
 /** {@link g.lambertConic | lambertConic} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const lambertConic: Bound<typeof g.lambertConic<Value>> = (point, projection) => g.lambertConic<Value>(arithmetic, point, projection);
@@ -541,14 +559,14 @@ export const zenithToElevation: Bound<typeof g.zenithToElevation<Value>> = (degr
 
 export {
   ANGLE_UNITS, AREA_UNITS, baardaTest, BEARING_PARALLEL_TOLERANCE, budget, chiSquareCdf,
-  chiSquareQuantile, DANGER_CIRCLE_TOLERANCE, decimal, decimalElementary,
+  chiSquareQuantile, crs, CRS_CODES, DANGER_CIRCLE_TOLERANCE, decimal, decimalElementary,
   DEFAULT_EARTH_RADIUS_M, DEFAULT_REFRACTION, defineEllipsoid, ellipsoidByName, ERROR_CODES,
   fCdf, float, fQuantile, GRS80, isSurd, LEVELLING_ORDERS, MAX_DECIMAL_DIGITS, MAX_EXPONENT,
   MAX_INPUT_LENGTH, measured, measuredAngle, measuredDistance, measuredGrade, measuredQuadrance,
   measuredSpread, measuredVertical, METRES_PER_UNIT, monteCarlo, normalCdf, normalInputs,
   normalQuantile, QuadspreadError, randomStream, rational, RATIONAL_TRANSCENDENTAL_DIGITS,
-  readRatio, roundOff, sensitivities, spreadOfAngle, tauCritical, Uncertain, verticalOfAngle,
-  WGS84, withDerivative,
+  readRatio, roundOff, sensitivities, spreadOfAngle, tauCritical, Uncertain, utmProjection,
+  utmZone, verticalOfAngle, WGS84, withDerivative,
 } from '../index.js';
 export type {
   AdjustedHeight, AdjustedLevelObservation, AdjustedNetworkObservation, AdjustedPoint,
@@ -563,9 +581,9 @@ export type {
   ErrorCode, ErrorEllipse, FaceOptions, FieldCheck, FieldObservation, FlatEarthError,
   FloatArithmetic, FootSide, FreeStation, FreeStationInput, FreeStationResidual, Geocentric,
   GeocentricTranslationParameters, GeodesicDirect, GeodesicInverse, Geodetic, GeodeticInput,
-  GeographicPoint, GlobalTest, Gradient, GridPoint, GridReduction, HelmertConvention,
-  HelmertParameters, HorizontalAlignment, HorizontalAlignmentInput, HorizontalCurve,
-  HorizontalCurveInput, InclinedPlaneFit, InlineHeight, InlineQuadranceHeight,
+  GeographicCrs, GeographicPoint, GlobalTest, Gradient, GridPoint, GridReduction,
+  HelmertConvention, HelmertParameters, HorizontalAlignment, HorizontalAlignmentInput,
+  HorizontalCurve, HorizontalCurveInput, InclinedPlaneFit, InlineHeight, InlineQuadranceHeight,
   InputDistribution, Inverse, KeyPoint, LengthUnit, LevelCheck, LevellingAdjustment,
   LevellingInput, LevellingObservationInput, LevellingOptions, LevellingOrder, LevelRow,
   LevelRun, LevelRunInput, LevelSight, Line, LinearUnit, LocalTest, Matrix3, MeanFaces,
@@ -573,17 +591,17 @@ export type {
   NetworkInput, NetworkObservationInput, NetworkOptions, NetworkPointInput, Numeric,
   ObservationTest, OffsetMeasure, OrientInput, PegReadings, Point, Point3, Point3Input,
   Pointing, PointInput, PointLike, PolygonArea, PreparedProjection, ProfileLevel,
-  ProfilePointInput, ProjectedPoint, Projection, ProjectionAngleUnit, ProjectionMethod,
-  RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalLevelling, ReciprocalSet,
-  ReciprocalTrigHeight, ReducedObservation, RelativeEllipse, Resection, ResectionInput, Root,
-  RotationInput, RotationUnit, RoundOff, SetOut, SetOutCheck, SetOutOptions, SetOutPoint,
-  SetOutTolerance, SettingOutRow, SetupInput, SetupTolerance, Shot, SideShot, SightHeight,
-  SimilarityFit, SnoopingRemoval, SnoopingReport, StaffPair, StationCandidate,
-  StationObservation, StationSetup, StewartChainages, StewartQuadrances, StraightElement, Surd,
-  TestOptions, TmFactors, TransformedPoint, TransitionElement, TransitionMeasures,
-  TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse,
-  TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoPeg,
-  TwoPegInput, TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf,
+  ProfilePointInput, ProjectedCrs, ProjectedPoint, Projection, ProjectionAngleUnit,
+  ProjectionMethod, RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalLevelling,
+  ReciprocalSet, ReciprocalTrigHeight, ReducedObservation, RelativeEllipse, Resection,
+  ResectionInput, Root, RotationInput, RotationUnit, RoundOff, SetOut, SetOutCheck,
+  SetOutOptions, SetOutPoint, SetOutTolerance, SettingOutRow, SetupInput, SetupTolerance, Shot,
+  SideShot, SightHeight, SimilarityFit, SnoopingRemoval, SnoopingReport, StaffPair,
+  StationCandidate, StationObservation, StationSetup, StewartChainages, StewartQuadrances,
+  StraightElement, Surd, TestOptions, TmFactors, TransformedPoint, TransitionElement,
+  TransitionMeasures, TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure,
+  TraverseCourse, TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
+  TwoPeg, TwoPegInput, TwoStationHeight, UncertainArithmetic, UncertainInput, UtmZone, ValueOf,
   VerticalAlignment, VerticalAlignmentInput, VerticalCurve, VerticalCurveInput, VerticalInput,
   VerticalKind, VerticalReading,
 } from '../index.js';
