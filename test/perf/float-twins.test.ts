@@ -216,3 +216,66 @@ describe('heightFromInlineReadings(float, …) through the twin', () => {
     expect(differ).toBe(0);
   });
 });
+
+describe('triangle(float, …) through the twin', () => {
+  const coordinate = fc.oneof(
+    fc.double({ min: -1e5, max: 1e5, noNaN: true }),
+    fc.integer({ min: -3, max: 3 }),
+    fc.double({ min: -1e-160, max: 1e-160, noNaN: true }),
+    fc.double({ noNaN: true }),
+    fc.constantFrom(0, -0, 1e154, -1e154, 1e-300, 5e-324, '2.5', null),
+  );
+  const pt = fc.oneof(
+    fc.record({ x: coordinate, y: coordinate }),
+    fc.tuple(coordinate, coordinate),
+  );
+  it('is exactly the generic float result (or the same error), awkward input included', async () => {
+    const { triangle } = await import('../../src/index.js');
+    fc.assert(
+      fc.property(pt, pt, pt, (P1, P2, P3) => {
+        const args = [P1, P2, P3] as never as [never, never, never];
+        expect(outcome(() => triangle(float, ...args))).toStrictEqual(
+          outcome(() => triangle(generic, ...args)),
+        );
+      }),
+      { numRuns: 5000 },
+    );
+  });
+
+  it('agrees exactly on 20000 seeded triangles of millimetre coordinates and right angles', async () => {
+    const { triangle } = await import('../../src/index.js');
+    let s = 0x5eed;
+    const rand = () => {
+      s ^= s << 13;
+      s >>>= 0;
+      s ^= s >>> 17;
+      s ^= s << 5;
+      s >>>= 0;
+      return s / 4294967296;
+    };
+    let differ = 0;
+    for (let i = 0; i < 20000; i++) {
+      const size = 10 ** (rand() * 5);
+      const c = () => Math.round(rand() * 1e8) / 1000;
+      const x1 = c(),
+        y1 = c();
+      const dx = Math.round((rand() - 0.5) * size * 1000) / 1000;
+      const dy = Math.round((rand() - 0.5) * size * 1000) / 1000;
+      // Every other triangle has a right angle at A1 (spreads that round just above 1).
+      const [x3, y3] = i % 2 ? [x1 - dy, y1 + dx] : [c(), c()];
+      const P = [
+        { x: x1, y: y1 },
+        { x: x1 + dx, y: y1 + dy },
+        { x: x3, y: y3 },
+      ] as const;
+      const a = outcome(() => triangle(float, P[0], P[1], P[2]));
+      const b = outcome(() => triangle(generic, P[0], P[1], P[2]));
+      try {
+        expect(a).toStrictEqual(b);
+      } catch {
+        differ++;
+      }
+    }
+    expect(differ).toBe(0);
+  });
+});
