@@ -72,3 +72,21 @@ export function sinCosInto(degrees: number, out: Float64Array, at: number): bool
   out[at + 1] = k === 0 ? cos : k === 1 ? -sin : k === 2 ? -cos : sin;
   return true;
 }
+
+/**
+ * `modulo(float, d, 360)` (a turn: [0°, 360°)) by the same passes as the generic reduction, or
+ * `NaN` where the generic code must decide (not finite, or too large to reduce).
+ * @internal
+ */
+export function turnFloat(degrees: number): number {
+  let d = degrees;
+  if (d >= 0 && d < 360) return d;
+  if (d - d !== 0) return NaN;
+  if (Math.abs(d + 360 - d - 360) > 360 / 1e6) return NaN;
+  for (let i = 0; i < 8; i++) {
+    if (d >= 0 && d < 360) return d;
+    const q = Math.floor(d / 360);
+    d = q === 0 ? d + 360 : d - q * 360;
+  }
+  return NaN;
+}
