@@ -16,9 +16,11 @@ const PER_DEGREE = Math.PI / 180; // float.div(float.pi, 180): π rad = 180°
  * @internal
  */
 export function sinCosFloat(degrees: number): { sin: number; cos: number } | undefined {
-  const out = new Float64Array(2);
-  return sinCosInto(degrees, out, 0) ? { sin: out[0]!, cos: out[1]! } : undefined;
+  // One scratch array for every call (a typed array per call cost more than the sines).
+  return sinCosInto(degrees, OUT, 0) ? { sin: OUT[0]!, cos: OUT[1]! } : undefined;
 }
+
+const OUT = /* @__PURE__ */ new Float64Array(2);
 
 /**
  * {@link sinCosFloat} written into `out[at]` (sin) and `out[at + 1]` (cos), so that a hot
