@@ -5,7 +5,8 @@
  */
 import type { Arithmetic } from '../arithmetic/types.js';
 import type { Point } from './point.js';
-import { finiteResult } from './validate.js';
+import { finiteResult, checkPoint } from './validate.js';
+import { checkArithmetic } from '../errors.js';
 
 /**
  * The quadrance Q(P, Q) = (x₂ − x₁)² + (y₂ − y₁)²: the squared distance between two
@@ -26,6 +27,9 @@ import { finiteResult } from './validate.js';
  * ```
  */
 export function quadrance<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): T {
+  checkArithmetic(A, 'quadrance');
+  checkPoint(A, P, 'quadrance(P)');
+  checkPoint(A, Q, 'quadrance(Q)');
   // The square of the Euclidean distance, by Pythagoras' theorem (Euclid, Elements I.47).
   const dx = A.sub(Q.x, P.x);
   const dy = A.sub(Q.y, P.y);
@@ -48,5 +52,7 @@ export function quadrance<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): T {
  * ```
  */
 export function vectorQuadrance<T>(A: Arithmetic<T>, v: Point<T>): T {
+  checkArithmetic(A, 'vectorQuadrance');
+  checkPoint(A, v, 'vectorQuadrance(v)');
   return finiteResult(A.add(A.mul(v.x, v.x), A.mul(v.y, v.y)), 'vectorQuadrance(A, v)');
 }

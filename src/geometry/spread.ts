@@ -4,9 +4,9 @@
  * @module geometry
  */
 import type { Arithmetic } from '../arithmetic/types.js';
-import { show, coincidentPoints } from '../errors.js';
+import { show, coincidentPoints, checkArithmetic } from '../errors.js';
 import type { Point } from './point.js';
-import { atMostOne } from './validate.js';
+import { atMostOne, checkPoint } from './validate.js';
 
 /**
  * k²/(Q(u)·Q(v)) for u = (ux, uy), v = (vx, vy), with k = u × v (a spread) or u · v (a
@@ -63,6 +63,10 @@ function zero<T>(A: Arithmetic<T>, where: string, arg: string, P: Point<T> | und
  * ```
  */
 export function spread<T>(A: Arithmetic<T>, V: Point<T>, P: Point<T>, Q: Point<T>): T {
+  checkArithmetic(A, 'spread');
+  checkPoint(A, V, 'spread(V)');
+  checkPoint(A, P, 'spread(P)');
+  checkPoint(A, Q, 'spread(Q)');
   return ratio(
     A,
     A.sub(P.x, V.x),
@@ -96,6 +100,10 @@ export function spread<T>(A: Arithmetic<T>, V: Point<T>, P: Point<T>, Q: Point<T
  * ```
  */
 export function cross<T>(A: Arithmetic<T>, V: Point<T>, P: Point<T>, Q: Point<T>): T {
+  checkArithmetic(A, 'cross');
+  checkPoint(A, V, 'cross(V)');
+  checkPoint(A, P, 'cross(P)');
+  checkPoint(A, Q, 'cross(Q)');
   return ratio(
     A,
     A.sub(P.x, V.x),
@@ -126,5 +134,8 @@ export function cross<T>(A: Arithmetic<T>, V: Point<T>, P: Point<T>, Q: Point<T>
  * ```
  */
 export function spreadOfVectors<T>(A: Arithmetic<T>, u: Point<T>, v: Point<T>): T {
+  checkArithmetic(A, 'spreadOfVectors');
+  checkPoint(A, u, 'spreadOfVectors(u)');
+  checkPoint(A, v, 'spreadOfVectors(v)');
   return ratio(A, u.x, u.y, v.x, v.y, false, 'spreadOfVectors(A, u, v)', undefined, undefined);
 }

@@ -3,8 +3,9 @@
  *
  * @module geometry
  */
+import { checkPoint } from './validate.js';
 import type { Arithmetic } from '../arithmetic/types.js';
-import { QuadspreadError, show, coincidentPoints } from '../errors.js';
+import { QuadspreadError, show, coincidentPoints, checkArithmetic } from '../errors.js';
 import type { Point } from './point.js';
 
 /**
@@ -65,6 +66,10 @@ export function triangle<T>(
   A2: Point<T>,
   A3: Point<T>,
 ): Triangle<T> {
+  checkArithmetic(A, 'triangle');
+  checkPoint(A, A1, 'triangle(A1)');
+  checkPoint(A, A2, 'triangle(A2)');
+  checkPoint(A, A3, 'triangle(A3)');
   // Performance (docs/performance.md): an arithmetic's fused kernel, where it has one, computes
   // the same measures at once (exactly equal in rational; rounded once in decimal) and returns
   // undefined for degenerate input, which the generic code below reports.

@@ -25,6 +25,7 @@ import { lengthToMetres, type LengthUnit } from '../readings/length.js';
 import { readNumber } from '../geometry/validate.js';
 import { measured } from './measured.js';
 import { checkU, readName, readSigma } from './internal.js';
+import { checkArithmetic } from '../errors.js';
 
 /**
  * A value y = g(x) of an uncertain `x`, given y and dy/dx: its gradient is dy/dx times
@@ -53,6 +54,7 @@ export function withDerivative<T>(
   value: Numeric<T>,
   derivative: Numeric<T>,
 ): Uncertain<T> {
+  checkArithmetic(U, 'withDerivative');
   const where = 'withDerivative(U, x, value, derivative)';
   checkU(U, where);
   const B = U.base;
@@ -93,6 +95,7 @@ export function measuredAngle<T>(
   name: string,
   unit: AngleUnit = 'deg',
 ): Uncertain<T> {
+  checkArithmetic(U, 'measuredAngle');
   const where = 'measuredAngle(U, reading, sigmaArcSeconds, name)';
   readName(name, where);
   const s = readSigma(U, sigmaArcSeconds, where);
@@ -130,6 +133,7 @@ export function spreadOfAngle<T>(
   U: UncertainArithmetic<T>,
   degrees: Uncertain<T> | Numeric<T>,
 ): Uncertain<T> {
+  checkArithmetic(U, 'spreadOfAngle');
   checkU(U, 'spreadOfAngle(U, degrees)');
   const d = U.from(degrees as Numeric<Uncertain<T>>);
   return withDerivative(U, d, spreadFromDegrees(U.base, d.value), spreadSlope(U, d.value));
@@ -160,6 +164,7 @@ export function measuredSpread<T>(
   name: string,
   unit: AngleUnit = 'deg',
 ): Uncertain<T> {
+  checkArithmetic(U, 'measuredSpread');
   return spreadOfAngle(U, measuredAngle(U, reading, sigmaArcSeconds, name, unit));
 }
 
@@ -188,6 +193,7 @@ export function verticalOfAngle<T>(
   degrees: Uncertain<T> | Numeric<T>,
   kind: VerticalKind = 'elevation',
 ): VerticalReading<Uncertain<T>> {
+  checkArithmetic(U, 'verticalOfAngle');
   checkU(U, 'verticalOfAngle(U, degrees, kind)');
   const B = U.base;
   const d = U.from(degrees as Numeric<Uncertain<T>>);
@@ -227,6 +233,7 @@ export function measuredVertical<T>(
   name: string,
   options: { kind?: VerticalKind; unit?: AngleUnit } = {},
 ): VerticalReading<Uncertain<T>> {
+  checkArithmetic(U, 'measuredVertical');
   return verticalOfAngle(
     U,
     measuredAngle(U, reading, sigmaArcSeconds, name, options.unit ?? 'deg'),
@@ -261,6 +268,7 @@ export function measuredDistance<T>(
   name: string,
   unit: LengthUnit = 'm',
 ): Uncertain<T> {
+  checkArithmetic(U, 'measuredDistance');
   const where = 'measuredDistance(U, reading, sigmaMm, name)';
   readName(name, where);
   const s = readSigma(U, sigmaMm, where);
@@ -294,6 +302,7 @@ export function measuredQuadrance<T>(
   name: string,
   unit: LengthUnit = 'm',
 ): Uncertain<T> {
+  checkArithmetic(U, 'measuredQuadrance');
   const d = measuredDistance(U, reading, sigmaMm, name, unit);
   return U.mul(d, d);
 }
@@ -323,6 +332,7 @@ export function measuredGrade<T>(
   sigmaPercent: Numeric<T>,
   name: string,
 ): Uncertain<T> {
+  checkArithmetic(U, 'measuredGrade');
   const B = U.base;
   const p = measured(U, percent, sigmaPercent, name);
   const s = spreadFromGrade(B, p.value);
