@@ -63,6 +63,26 @@ export const ERROR_CODES = {
   UNKNOWN_ELLIPSOID: 'An ellipsoid that is not known.',
   INVALID_ELLIPSOID: 'Ellipsoid parameters that do not define an oblate ellipsoid.',
   NOT_CONVERGED: 'An iteration did not converge within its limit.',
+  // Map projections
+  UNKNOWN_METHOD: 'A projection method that is not known.',
+  MISSING_PARAMETER: 'A parameter the projection method needs is missing.',
+  OUTSIDE_DOMAIN:
+    'A point outside the domain of a projection (a pole in Mercator, the antipode of an azimuthal projection).',
+  UNKNOWN_CRS: 'A coordinate reference system code that is not in the table.',
+  // Alignment
+  CURVES_OVERLAP:
+    'Curves of an alignment that overlap: tangents longer than their leg, or a vertical curve running into the next or past an end.',
+  TRANSITION_TOO_LONG:
+    'Transition curves that turn through more than the deflection of their curve.',
+  OFF_ALIGNMENT: 'A chainage or a point beyond the ends of an alignment or a profile.',
+  // Adjustment
+  UNKNOWN_POINT: 'A point name that is not in the network.',
+  DATUM_DEFECT:
+    'A network whose datum is not fixed: too few fixed points, weighted points or constraints.',
+  DISCONNECTED_NETWORK: 'Points that no chain of observations connects to the datum.',
+  SINGULAR_NETWORK:
+    'Observations that do not determine a point (weak geometry): the normal equations are singular.',
+  TOO_FEW_OBSERVATIONS: 'Fewer observations than the computation needs.',
   // Job runner
   INVALID_JOB: 'A job file that is not valid JSON or breaks the job schema.',
 } as const;

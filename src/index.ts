@@ -11,5 +11,7 @@ export * from './readings/index.js';
 export * from './elevation/index.js';
 export * from './cogo/index.js';
 export * from './geodesy/index.js';
+export * from './alignment/index.js';
 export * from './field/index.js';
 export * from './uncertainty/index.js';
+export * from './adjustment/index.js';

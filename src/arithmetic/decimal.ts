@@ -187,6 +187,12 @@ export function decimal(digits = 34): DecimalArithmetic {
         throw zeroVectorAngle(`${name}.atan2(y, x)`);
       return fromText(elementary.atan2(y.toString(), x.toString()));
     },
+    exp: (x) => fromText(elementary.exp(one('exp', x).toString())),
+    log(x) {
+      if (one('log', x).s < 0 || x.c[0] === 0)
+        throw noRealSolution(`${name}.log(x)`, `x = ${x.toString()} is not positive`);
+      return fromText(elementary.ln(x.toString()));
+    },
     // Fused kernels (src/arithmetic/fused-decimal.ts): exact with bigints, rounded once.
     kernels: decimalKernels(digits, new D(0), (x) => A.from(x as Numeric<Big>)),
   };

@@ -142,6 +142,22 @@ export function bitLength(a: bigint): number {
   return (h.length - 1) * 4 + (32 - Math.clz32(parseInt(h[0]!, 16)));
 }
 
+const LOG10_2 = /* @__PURE__ */ Math.log10(2);
+
+/**
+ * √(n/d) for n, d > 0 on a decimal scale chosen from the magnitude alone: `{ n: r, d: 10^k }`
+ * with r = ⌊√(n/d)·10^k⌋ ≥ 10^(digits+1) and k ≥ 0 (not in lowest terms). Below √(n/d) by
+ * less than 10^−(digits+1) relative; its denominator divides 10^k whatever n/d is.
+ * @internal
+ */
+export function scaledSqrt(n: bigint, d: bigint, digits: number): { n: bigint; d: bigint } {
+  // 2^(bits(n) − bits(d) − 1) ≤ n/d, so e ≤ log10 √(n/d).
+  const e = Math.floor(((bitLength(n) - bitLength(d) - 1) * LOG10_2) / 2);
+  const k = Math.max(0, digits + 1 - e);
+  const s = 10n ** BigInt(k);
+  return { n: isqrt((n * s * s) / d), d: s };
+}
+
 /**
  * ⌊√a⌋ for a ≥ 0, by Newton's iteration from an upper bound.
  * @internal

@@ -126,6 +126,15 @@ export const float: FloatArithmetic = /* @__PURE__ */ Object.freeze<FloatArithme
     if (y === 0 && x === 0) throw zeroVectorAngle('float.atan2(y, x)');
     return Math.atan2(y, x);
   },
+  exp(x) {
+    const r = Math.exp(x);
+    if (r === Infinity) throw notFinite('float.exp(x)', `e^${show(x)} overflows`);
+    return r;
+  },
+  log(x) {
+    if (!(x > 0)) throw noRealSolution('float.log(x)', `x = ${show(x)} is not positive`);
+    return Math.log(x);
+  },
 });
 
 /** The exact value of a finite double as text (a/2^k). */

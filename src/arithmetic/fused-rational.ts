@@ -10,7 +10,7 @@
  */
 import Fraction from 'fraction.js';
 import type { FusedKernels, FusedTraverse, FusedTriangle } from './types.js';
-import { readInput } from './exact.js';
+import { isqrt, readInput, scaledSqrt } from './exact.js';
 import { readFusedTraverse } from './fused-input.js';
 
 const SAFE = 9007199254740991n; // 2^53 − 1: below it a gcd runs in doubles
@@ -299,6 +299,7 @@ function traverse(input: unknown): FusedTraverse<Fraction> | undefined {
     return true;
   };
   if (!take(start.x.d) || !take(start.y.d) || !take(end.x.d) || !take(end.y.d)) return undefined;
+  let Dl = 1n; // the common denominator of the computed lengths (a bigint: ~10^51)
   for (let i = 0; i < n; i++) {
     const c = list[i] as {
       bearing?: unknown;
@@ -306,18 +307,28 @@ function traverse(input: unknown): FusedTraverse<Fraction> | undefined {
       departure?: unknown;
       distance?: unknown;
     } | null;
-    if (c === null || typeof c !== 'object' || c.bearing !== undefined || c.distance === undefined)
-      return undefined;
+    if (c === null || typeof c !== 'object' || c.bearing !== undefined) return undefined;
     const la = asFraction(c.latitude),
-      de = asFraction(c.departure),
+      de = asFraction(c.departure);
+    if (!la || !de) return undefined;
+    let d: Fraction | undefined;
+    if (c.distance === undefined) {
+      // √(lat² + dep²) as the generic code computes it (approxSqrt): exact for a square,
+      // else one integer root on a decimal scale, whose denominator (a divisor of a power of
+      // ten) joins a bigint common denominator of the lengths.
+      d = courseLength(la, de);
+      if (d.d !== 1n) Dl = Dl === 1n ? d.d : lcm(Dl, d.d);
+      if (!take(la.d) || !take(de.d)) return undefined;
+    } else {
       d = asFraction(c.distance);
-    if (!la || !de || !d || d.s < 0n) return undefined;
-    if (!take(la.d) || !take(de.d) || !take(d.d)) return undefined;
+      if (!d || d.s < 0n) return undefined;
+      if (!take(la.d) || !take(de.d) || !take(d.d)) return undefined;
+    }
     lat[i] = la;
     dep[i] = de;
     len[i] = d;
   }
-  const D = BigInt(Dn);
+  const D = Dl === 1n ? BigInt(Dn) : lcm(BigInt(Dn), Dl);
   const Sx = num(start.x, D),
     Sy = num(start.y, D);
   const points: { x: Fraction; y: Fraction }[] = new Array(n + 1);
@@ -373,6 +384,30 @@ function traverse(input: unknown): FusedTraverse<Fraction> | undefined {
     courses,
     rule: 'compass',
   };
+}
+
+/** Digits of {@link courseLength}'s root: those of the readings' approxSqrt (APPROX_DIGITS). */
+const ROOT_DIGITS = 50;
+
+/**
+ * √(la² + de²) exactly as the generic traverse computes a course length in `rational`: 0, the
+ * exact root of a square, or ⌊√q·10^k⌋/10^k (approxSqrt), in lowest terms.
+ */
+function courseLength(la: Fraction, de: Fraction): Fraction {
+  // q = (a² e² + c² b²)/(b² e²) for la = a/b, de = c/e
+  const b2 = la.d * la.d,
+    e2 = de.d * de.d;
+  const qn = la.n * la.n * e2 + de.n * de.n * b2;
+  if (qn === 0n) return reduced(0n, 1n);
+  const qd = b2 * e2;
+  const g = gcd(qn, qd);
+  const n = qn / g,
+    d = qd / g;
+  const rn = isqrt(n),
+    rd = isqrt(d);
+  if (rn * rn === n && rd * rd === d) return reduced(rn, rd);
+  const r = scaledSqrt(n, d, ROOT_DIGITS);
+  return normal(r.n, r.d);
 }
 
 /** The fused kernels of the rational arithmetic. @internal */

@@ -10,3 +10,4 @@ export type { FloatArithmetic } from './float.js';
 export { MAX_EXPONENT, readRatio } from './exact.js';
 export type { Ratio } from './exact.js';
 export * from './uncertain.js';
+export { sinh, cosh, tanh, atanh, asinh, pow, tan, atan, asin } from './transcendental.js';

@@ -46,6 +46,10 @@ function signed(a: Rational): bigint {
 
 const elementary = /* @__PURE__ */ decimalElementary(RATIONAL_TRANSCENDENTAL_DIGITS);
 
+function toElementary(a: Rational): string {
+  return ratioToPrecision(signed(a), a.d, RATIONAL_TRANSCENDENTAL_DIGITS + 8);
+}
+
 function fromElementary(text: string): Rational {
   const r = readInput(text, 'rational (transcendental)');
   return frac(r.n, r.d);
@@ -139,6 +143,12 @@ export const rational: RationalArithmetic = /* @__PURE__ */ Object.freeze<Ration
     if (two('atan2', y, x) && y.n === 0n && x.n === 0n)
       throw zeroVectorAngle('rational.atan2(y, x)');
     return fromElementary(elementary.ratio!.atan2(signed(y), y.d, signed(x), x.d));
+  },
+  exp: (x) => (one('exp', x).n === 0n ? ONE : fromElementary(elementary.exp(toElementary(x)))),
+  log(x) {
+    if (one('log', x).s < 0n || x.n === 0n)
+      throw noRealSolution('rational.log(x)', `x = ${x.toFraction()} is not positive`);
+    return x.n === 1n && x.d === 1n ? ZERO : fromElementary(elementary.ln(toElementary(x)));
   },
   // Fused exact kernels (src/arithmetic/fused-rational.ts): same results, fewer gcds.
   kernels: rationalKernels,

@@ -126,6 +126,20 @@ export interface Arithmetic<T, E extends boolean = boolean> {
    */
   atan2(y: T, x: T): T;
   /**
+   * e^x. Transcendental, rounded as {@link Arithmetic.sin}: `rational` gives a rational within
+   * 1e-40 relative of the true value, `decimal` rounds correctly to its digits, `float` is
+   * `Math.exp`; `uncertain` carries d e^x = e^x dx.
+   * @throws {QuadspreadError} `NOT_FINITE` in float when e^x overflows (x > 709.78);
+   * `INVALID_ARGUMENT` in decimal and rational when |x| > 2302585.
+   */
+  exp(x: T): T;
+  /**
+   * ln x, the natural logarithm, rounded as {@link Arithmetic.exp}; `uncertain` carries
+   * d ln x = dx/x.
+   * @throws {QuadspreadError} `NO_REAL_SOLUTION` when x ≤ 0.
+   */
+  log(x: T): T;
+  /**
    * Optional fused kernels: whole formulas computed at once (performance only). Solvers may
    * call one where present and must give the same result without it; a kernel returns
    * `undefined` for input it leaves to the generic path (which reports the errors).

@@ -390,6 +390,16 @@ function uncertainGeneric<T, E extends boolean>(B: Arithmetic<T, E>): UncertainA
       const d = B.add(B.mul(x.value, x.value), B.mul(y.value, y.value));
       return lin(B, v, y, B.div(x.value, d), x, B.neg(B.div(y.value, d)));
     },
+    // d e^x = e^x dx
+    exp(x) {
+      const v = B.exp(x.value);
+      return x.inputs.length === 0 ? constant(v) : scaled(B, v, x, v);
+    },
+    // d ln x = dx/x
+    log(x) {
+      const v = B.log(x.value);
+      return x.inputs.length === 0 ? constant(v) : scaled(B, v, x, B.div(B.one, x.value));
+    },
   };
   return U;
 }
@@ -492,6 +502,14 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
       x.inputs.length === 0
         ? constant(Math.cos(x.value))
         : scaledF(Math.cos(x.value), x, -Math.sin(x.value)),
+    exp(x) {
+      const v = float.exp(x.value);
+      return x.inputs.length === 0 ? constant(v) : scaledF(v, x, v);
+    },
+    log(x) {
+      const v = float.log(x.value);
+      return x.inputs.length === 0 ? constant(v) : scaledF(v, x, 1 / x.value);
+    },
   };
   return U;
 }

@@ -77,7 +77,18 @@ export interface SketchView {
     y1: number;
     x2: number;
     y2: number;
-    role: 'sight' | 'course' | 'boundary' | 'base' | 'path' | 'adjusted' | 'ground';
+    role:
+      | 'sight'
+      | 'course'
+      | 'boundary'
+      | 'base'
+      | 'path'
+      | 'adjusted'
+      | 'ground'
+      | 'straight'
+      | 'arc'
+      | 'transition'
+      | 'tick';
     label?: string;
   }[];
   /** Free labels (e.g. a computed value written near a point). */

@@ -40,6 +40,10 @@ const STYLE = `
   line.adjusted { stroke: #b35900; stroke-width: 1; stroke-dasharray: 2 2; }
   line.base, line.ground { stroke: #5a7d2a; stroke-width: 2; }
   line.path { stroke: #a02020; stroke-width: 2; }
+  line.straight { stroke: #222; stroke-width: 1.5; }
+  line.arc { stroke: #a02020; stroke-width: 2.5; }
+  line.transition { stroke: #b35900; stroke-width: 2; stroke-dasharray: 6 3; }
+  line.tick { stroke: #555; stroke-width: 1; }
   circle.station { fill: #fff; stroke: #222; stroke-width: 1.5; }
   circle.control { fill: #222; }
   circle.target { fill: #a02020; }

@@ -23,6 +23,9 @@ import { angleToDegrees } from '../readings/angle.js';
 import { spreadFromDegrees } from '../readings/spread.js';
 import { readVertical, type VerticalInput } from '../readings/vertical.js';
 import { rootOps } from './roots.js';
+import { heightFromQuadrance } from './signed-height.js';
+import { approxSqrt } from '../readings/numeric.js';
+import { asRoot, isSurd, type Surd } from '../geometry/surd.js';
 
 /**
  * Where the foot of the point lies, seen along the base: `'between'` when its
@@ -35,17 +38,43 @@ export type FootSide = 'between' | 'beyond';
 /** The result of {@link heightFromBase}. */
 export interface BaseHeight<T, E extends boolean> {
   /** Horizontal quadrances from the first and the second station to the foot (spread law). */
+  readonly horizontalQuadrances: readonly [Root<T, E>, Root<T, E>];
+  /** @deprecated Kept for one release: the same as {@link BaseHeight.horizontalQuadrances}. */
   readonly horizontal: readonly [Root<T, E>, Root<T, E>];
   /** The spread at the foot between the lines to the two stations (triple spread formula). */
   readonly spreadAtFoot: Root<T, E>;
   /** H from each station's vertical reading (`undefined` where none was given). */
+  readonly verticalQuadrances: readonly [Root<T, E> | undefined, Root<T, E> | undefined];
+  /** @deprecated Kept for one release: the same as {@link BaseHeight.verticalQuadrances}. */
   readonly heights: readonly [Root<T, E> | undefined, Root<T, E> | undefined];
-  /** The height quadrance: the weighted mean of the heights given (see {@link heightFromBase}). */
+  /** The vertical quadrance: the weighted mean of those given (see {@link heightFromBase}). */
   readonly H: Root<T, E>;
+  /**
+   * The signed height h = ±√H (positive above the stations' level). Exact in `rational` when H
+   * is rational; when H is itself a surd, √H is no quadratic surd and `height` is a rational
+   * within 10⁻⁴⁸ relative (a value in `decimal` and `float`, rounded as there).
+   */
+  readonly height: Root<T, E>;
   /** heights[0] − heights[1] when both readings are given. */
   readonly discrepancy: Root<T, E> | undefined;
   /** +1 above the stations' level, −1 below, 0 on it. */
   readonly sign: -1 | 0 | 1;
+}
+
+/** ±√H for H a root: exact where H is rational, else through the arithmetic's approximate root. */
+function signedHeightOfRoot<T, E extends boolean>(
+  A: Arithmetic<T, E>,
+  H: Root<T, E>,
+  sign: -1 | 0 | 1,
+): Root<T, E> {
+  if (!isSurd(H)) return heightFromQuadrance(A, H as T, sign);
+  const s = H as Surd<T>;
+  const q = s.toRational();
+  if (q !== undefined) return heightFromQuadrance(A, q, sign);
+  // a + b√d to A.digits + 10 significant digits (the surd rounds it exactly), then its root
+  const value = A.from(s.toPrecision(A.digits + 10));
+  const h = approxSqrt(A, A.sign(value) < 0 ? A.zero : value);
+  return asRoot(A, sign < 0 ? A.neg(h) : h);
 }
 
 /**
@@ -210,12 +239,16 @@ export function heightFromBase<T, E extends boolean>(
     discrepancy = undefined;
   }
   const sign = (sg[0] !== 0 ? sg[0] : sg[1]) as -1 | 0 | 1;
+  const finalSign = R.sign(H) === 0 ? 0 : sign;
   return {
+    horizontalQuadrances: [Q1, Q2],
     horizontal: [Q1, Q2],
     spreadAtFoot: s3,
+    verticalQuadrances: [heights[0], heights[1]],
     heights: [heights[0], heights[1]],
     H,
+    height: signedHeightOfRoot(A, H, finalSign),
     discrepancy,
-    sign: R.sign(H) === 0 ? 0 : sign,
+    sign: finalSign,
   };
 }

@@ -34,6 +34,8 @@ import { readVertical, type VerticalInput } from '../readings/vertical.js';
  * @throws {QuadspreadError} `VERTICAL_SIGHT` when R = 1 (a plumb sight with a horizontal
  *   quadrance); `SPREAD_OUT_OF_RANGE`; `NEGATIVE_QUADRANCE`; `INVALID_NUMBER`;
  *   `INVALID_ARGUMENT` when `input` is not an object.
+ * @deprecated Kept for one release: use {@link heightFromSight}, which names its input
+ * `horizontalQuadrance` and returns both H and the signed height h.
  * @example
  * ```ts
  * import { rational, heightFromReading } from 'quadspread';

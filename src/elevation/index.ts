@@ -1,5 +1,8 @@
 // Public exports of src/elevation/ (one line per file as files land).
 export { heightFromReading, horizontalFromHeight, verticalFromHeight } from './height.js';
+export { heightFromSight } from './sight.js';
+export type { SightHeight } from './sight.js';
+export { heightFromQuadrance } from './signed-height.js';
 export { heightFromTwoStations } from './two-stations.js';
 export type { TwoStationHeight } from './two-stations.js';
 export { heightFromBase } from './base.js';

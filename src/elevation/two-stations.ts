@@ -17,6 +17,8 @@ import { quadrance } from '../geometry/quadrance.js';
 import { readNumber } from '../geometry/validate.js';
 import { readVertical, type VerticalInput } from '../readings/vertical.js';
 import { heightFromReading } from './height.js';
+import { heightFromQuadrance } from './signed-height.js';
+import type { Root } from '../geometry/surd.js';
 
 /** Reads a point given with numeric or arithmetic coordinates. */
 function readPoint<T>(
@@ -36,8 +38,13 @@ export interface TwoStationHeight<T> {
   readonly H2: T;
   /** H1 − H2: zero for consistent readings. */
   readonly discrepancy: T;
-  /** The weighted mean (w₁H₁ + w₂H₂)/(w₁ + w₂). */
+  /** The weighted mean (w₁H₁ + w₂H₂)/(w₁ + w₂): the point's vertical quadrance. */
   readonly H: T;
+  /**
+   * The signed height h = ±√H of the mean (positive above the stations' level): an exact surd
+   * in `rational`, a value otherwise (see {@link heightFromQuadrance}).
+   */
+  readonly height: Root<T, boolean>;
   /** The weights w = (1 − R)²/Q of the two readings (not normalised). */
   readonly weights: readonly [T, T];
   /** +1 when the point is above the stations' level, −1 below, 0 on it. */
@@ -122,6 +129,7 @@ export function heightFromTwoStations<T>(
     H2: H[1]!,
     discrepancy: A.sub(H[0]!, H[1]!),
     H: mean,
+    height: heightFromQuadrance(A as Arithmetic<T, boolean>, mean, A.isZero(mean) ? 0 : sign),
     weights: [w1, w2],
     sign,
   };

@@ -32,6 +32,15 @@ export type Bound<F> = F extends (A: never, ...rest: infer P) => infer R ? (...r
 /** The bound arithmetic: {@link g.rational | rational} (exact; values are fraction.js fractions). */
 export const arithmetic: RationalArithmetic = rational;
 
+/** {@link g.adjustLevelling | adjustLevelling} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const adjustLevelling: Bound<typeof g.adjustLevelling<Value, true>> = (input) => g.adjustLevelling<Value, true>(arithmetic, input);
+
+/** {@link g.alignmentPoint | alignmentPoint} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const alignmentPoint: Bound<typeof g.alignmentPoint<Value>> = (alignment, chainage, offset, options) => g.alignmentPoint<Value>(arithmetic, alignment, chainage, offset, options);
+
+/** {@link g.alignmentStation | alignmentStation} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const alignmentStation: Bound<typeof g.alignmentStation<Value>> = (alignment, P, options) => g.alignmentStation<Value>(arithmetic, alignment, P, options);
+
 /** {@link g.allowableMisclosure | allowableMisclosure} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const allowableMisclosure: Bound<typeof g.allowableMisclosure<Value, true>> = (order, km) => g.allowableMisclosure<Value, true>(arithmetic, order, km);
 
@@ -47,8 +56,20 @@ export const archimedesResidual: Bound<typeof g.archimedesResidual<Value>> = (Q1
 /** {@link g.area | area} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const area: Bound<typeof g.area<Value>> = (points) => g.area<Value>(arithmetic, points);
 
+/** {@link g.asin | asin} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const asin: Bound<typeof g.asin<Value>> = (value) => g.asin<Value>(arithmetic, value);
+
+/** {@link g.asinh | asinh} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const asinh: Bound<typeof g.asinh<Value>> = (value) => g.asinh<Value>(arithmetic, value);
+
 /** {@link g.asRoot | asRoot} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const asRoot: Bound<typeof g.asRoot<Value, true>> = (x) => g.asRoot<Value, true>(arithmetic, x);
+
+/** {@link g.atan | atan} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const atan: Bound<typeof g.atan<Value>> = (value) => g.atan<Value>(arithmetic, value);
+
+/** {@link g.atanh | atanh} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const atanh: Bound<typeof g.atanh<Value>> = (value) => g.atanh<Value>(arithmetic, value);
 
 /** {@link g.atmosphericPpm | atmosphericPpm} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const atmosphericPpm: Bound<typeof g.atmosphericPpm<Value>> = (atmosphere) => g.atmosphericPpm<Value>(arithmetic, atmosphere);
@@ -58,6 +79,9 @@ export const azimuthToQuadrant: Bound<typeof g.azimuthToQuadrant<Value>> = (azim
 
 /** {@link g.bearingToAzimuth | bearingToAzimuth} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const bearingToAzimuth: Bound<typeof g.bearingToAzimuth<Value>> = (bearing) => g.bearingToAzimuth<Value>(arithmetic, bearing);
+
+/** {@link g.clothoid | clothoid} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const clothoid: Bound<typeof g.clothoid<Value>> = (input) => g.clothoid<Value>(arithmetic, input);
 
 /** {@link g.combinedFactor | combinedFactor} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const combinedFactor: Bound<typeof g.combinedFactor<Value>> = (heightFactor, scaleFactor) => g.combinedFactor<Value>(arithmetic, heightFactor, scaleFactor);
@@ -71,6 +95,9 @@ export const convertLength: Bound<typeof g.convertLength<Value>> = (value, from,
 /** {@link g.convertQuadrance | convertQuadrance} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const convertQuadrance: Bound<typeof g.convertQuadrance<Value>> = (quadrance, from, to) => g.convertQuadrance<Value>(arithmetic, quadrance, from, to);
 
+/** {@link g.cosh | cosh} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const cosh: Bound<typeof g.cosh<Value>> = (value) => g.cosh<Value>(arithmetic, value);
+
 /** {@link g.cross | cross} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const cross: Bound<typeof g.cross<Value>> = (V, P, Q) => g.cross<Value>(arithmetic, V, P, Q);
 
@@ -79,6 +106,12 @@ export const crossLawResidual: Bound<typeof g.crossLawResidual<Value>> = (Q1, Q2
 
 /** {@link g.curvatureRefraction | curvatureRefraction} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const curvatureRefraction: Bound<typeof g.curvatureRefraction<Value>> = (distance, options) => g.curvatureRefraction<Value>(arithmetic, distance, options);
+
+/** {@link g.datumTransform | datumTransform} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const datumTransform: Bound<typeof g.datumTransform<Value>> = (point, transformation, options) => g.datumTransform<Value>(arithmetic, point, transformation, options);
+
+/** {@link g.deflectionTable | deflectionTable} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const deflectionTable: Bound<typeof g.deflectionTable<Value>> = (alignment, curve, options) => g.deflectionTable<Value>(arithmetic, alignment, curve, options);
 
 /** {@link g.degreesFromSpread | degreesFromSpread} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const degreesFromSpread: Bound<typeof g.degreesFromSpread<Value>> = (s) => g.degreesFromSpread<Value>(arithmetic, s);
@@ -107,8 +140,17 @@ export const footOfPerpendicular: Bound<typeof g.footOfPerpendicular<Value>> = (
 /** {@link g.formatDms | formatDms} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const formatDms: Bound<typeof g.formatDms<Value>> = (degrees, secondsDecimals) => g.formatDms<Value>(arithmetic, degrees, secondsDecimals);
 
+/** {@link g.formatStation | formatStation} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const formatStation: Bound<typeof g.formatStation<Value>> = (chainage, options) => g.formatStation<Value>(arithmetic, chainage, options);
+
 /** {@link g.forward | forward} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const forward: Bound<typeof g.forward<Value>> = (P, bearing, distance) => g.forward<Value>(arithmetic, P, bearing, distance);
+
+/** {@link g.freeStation | freeStation} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const freeStation: Bound<typeof g.freeStation<Value>> = (input) => g.freeStation<Value>(arithmetic, input);
+
+/** {@link g.fromGrid | fromGrid} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const fromGrid: Bound<typeof g.fromGrid<Value>> = (point, projection) => g.fromGrid<Value>(arithmetic, point, projection);
 
 /** {@link g.gaussianMeanRadius | gaussianMeanRadius} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const gaussianMeanRadius: Bound<typeof g.gaussianMeanRadius<Value>> = (lat, ellipsoid) => g.gaussianMeanRadius<Value>(arithmetic, lat, ellipsoid);
@@ -118,6 +160,9 @@ export const geocentricFromEnu: Bound<typeof g.geocentricFromEnu<Value>> = (orig
 
 /** {@link g.geocentricToGeodetic | geocentricToGeodetic} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const geocentricToGeodetic: Bound<typeof g.geocentricToGeodetic<Value>> = (point, ellipsoid) => g.geocentricToGeodetic<Value>(arithmetic, point, ellipsoid);
+
+/** {@link g.geocentricTranslation | geocentricTranslation} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const geocentricTranslation: Bound<typeof g.geocentricTranslation<Value>> = (point, params) => g.geocentricTranslation<Value>(arithmetic, point, params);
 
 /** {@link g.geodeticToGeocentric | geodeticToGeocentric} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const geodeticToGeocentric: Bound<typeof g.geodeticToGeocentric<Value>> = (point, ellipsoid) => g.geodeticToGeocentric<Value>(arithmetic, point, ellipsoid);
@@ -143,14 +188,32 @@ export const heightFromInlineQuadrances: Bound<typeof g.heightFromInlineQuadranc
 /** {@link g.heightFromInlineReadings | heightFromInlineReadings} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const heightFromInlineReadings: Bound<typeof g.heightFromInlineReadings<Value>> = (input) => g.heightFromInlineReadings<Value>(arithmetic, input);
 
+/** {@link g.heightFromQuadrance | heightFromQuadrance} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const heightFromQuadrance: Bound<typeof g.heightFromQuadrance<Value, true>> = (H, sign) => g.heightFromQuadrance<Value, true>(arithmetic, H, sign);
+
 /** {@link g.heightFromReading | heightFromReading} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const heightFromReading: Bound<typeof g.heightFromReading<Value>> = (input) => g.heightFromReading<Value>(arithmetic, input);
+
+/** {@link g.heightFromSight | heightFromSight} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const heightFromSight: Bound<typeof g.heightFromSight<Value, true>> = (input) => g.heightFromSight<Value, true>(arithmetic, input);
 
 /** {@link g.heightFromTwoStations | heightFromTwoStations} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const heightFromTwoStations: Bound<typeof g.heightFromTwoStations<Value>> = (input) => g.heightFromTwoStations<Value>(arithmetic, input);
 
 /** {@link g.heightReductionFactor | heightReductionFactor} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const heightReductionFactor: Bound<typeof g.heightReductionFactor<Value>> = (h, radius) => g.heightReductionFactor<Value>(arithmetic, h, radius);
+
+/** {@link g.helmert | helmert} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const helmert: Bound<typeof g.helmert<Value>> = (point, params) => g.helmert<Value>(arithmetic, point, params);
+
+/** {@link g.helmertInverse | helmertInverse} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const helmertInverse: Bound<typeof g.helmertInverse<Value>> = (point, params) => g.helmertInverse<Value>(arithmetic, point, params);
+
+/** {@link g.helmertReversed | helmertReversed} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const helmertReversed: Bound<typeof g.helmertReversed<Value>> = (point, params) => g.helmertReversed<Value>(arithmetic, point, params);
+
+/** {@link g.horizontalAlignment | horizontalAlignment} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const horizontalAlignment: Bound<typeof g.horizontalAlignment<Value>> = (input) => g.horizontalAlignment<Value>(arithmetic, input);
 
 /** {@link g.horizontalFromHeight | horizontalFromHeight} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const horizontalFromHeight: Bound<typeof g.horizontalFromHeight<Value>> = (input) => g.horizontalFromHeight<Value>(arithmetic, input);
@@ -179,6 +242,12 @@ export const isParallel: Bound<typeof g.isParallel<Value>> = (l1, l2) => g.isPar
 /** {@link g.isPerpendicular | isPerpendicular} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const isPerpendicular: Bound<typeof g.isPerpendicular<Value>> = (l1, l2) => g.isPerpendicular<Value>(arithmetic, l1, l2);
 
+/** {@link g.lambertConic | lambertConic} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const lambertConic: Bound<typeof g.lambertConic<Value>> = (point, projection) => g.lambertConic<Value>(arithmetic, point, projection);
+
+/** {@link g.lambertConicInverse | lambertConicInverse} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const lambertConicInverse: Bound<typeof g.lambertConicInverse<Value>> = (point, projection) => g.lambertConicInverse<Value>(arithmetic, point, projection);
+
 /** {@link g.lengthToMetres | lengthToMetres} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const lengthToMetres: Bound<typeof g.lengthToMetres<Value>> = (value, unit) => g.lengthToMetres<Value>(arithmetic, value, unit);
 
@@ -194,11 +263,29 @@ export const lineThrough: Bound<typeof g.lineThrough<Value>> = (P, Q) => g.lineT
 /** {@link g.meanFaces | meanFaces} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const meanFaces: Bound<typeof g.meanFaces<Value>> = (left, right, options) => g.meanFaces<Value>(arithmetic, left, right, options);
 
+/** {@link g.mercator | mercator} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const mercator: Bound<typeof g.mercator<Value>> = (point, projection) => g.mercator<Value>(arithmetic, point, projection);
+
+/** {@link g.mercatorInverse | mercatorInverse} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const mercatorInverse: Bound<typeof g.mercatorInverse<Value>> = (point, projection) => g.mercatorInverse<Value>(arithmetic, point, projection);
+
 /** {@link g.meridianRadius | meridianRadius} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const meridianRadius: Bound<typeof g.meridianRadius<Value>> = (lat, ellipsoid) => g.meridianRadius<Value>(arithmetic, lat, ellipsoid);
 
 /** {@link g.metresToLength | metresToLength} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const metresToLength: Bound<typeof g.metresToLength<Value>> = (metres, unit) => g.metresToLength<Value>(arithmetic, metres, unit);
+
+/** {@link g.molodenskyBadekas | molodenskyBadekas} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const molodenskyBadekas: Bound<typeof g.molodenskyBadekas<Value>> = (point, params) => g.molodenskyBadekas<Value>(arithmetic, point, params);
+
+/** {@link g.molodenskyBadekasInverse | molodenskyBadekasInverse} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const molodenskyBadekasInverse: Bound<typeof g.molodenskyBadekasInverse<Value>> = (point, params) => g.molodenskyBadekasInverse<Value>(arithmetic, point, params);
+
+/** {@link g.obliqueStereographic | obliqueStereographic} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const obliqueStereographic: Bound<typeof g.obliqueStereographic<Value>> = (point, projection) => g.obliqueStereographic<Value>(arithmetic, point, projection);
+
+/** {@link g.obliqueStereographicInverse | obliqueStereographicInverse} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const obliqueStereographicInverse: Bound<typeof g.obliqueStereographicInverse<Value>> = (point, projection) => g.obliqueStereographicInverse<Value>(arithmetic, point, projection);
 
 /** {@link g.orientStation | orientStation} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const orientStation: Bound<typeof g.orientStation<Value>> = (input) => g.orientStation<Value>(arithmetic, input);
@@ -215,11 +302,26 @@ export const perimeter: Bound<typeof g.perimeter<Value>> = (points) => g.perimet
 /** {@link g.point | point} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const point: Bound<typeof g.point<Value>> = (x, y) => g.point<Value>(arithmetic, x, y);
 
+/** {@link g.polarStereographic | polarStereographic} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const polarStereographic: Bound<typeof g.polarStereographic<Value>> = (point, projection) => g.polarStereographic<Value>(arithmetic, point, projection);
+
+/** {@link g.polarStereographicInverse | polarStereographicInverse} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const polarStereographicInverse: Bound<typeof g.polarStereographicInverse<Value>> = (point, projection) => g.polarStereographicInverse<Value>(arithmetic, point, projection);
+
 /** {@link g.polygonArea | polygonArea} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const polygonArea: Bound<typeof g.polygonArea<Value>> = (points, options) => g.polygonArea<Value>(arithmetic, points, options);
 
+/** {@link g.pow | pow} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const pow: Bound<typeof g.pow<Value>> = (base, exponent) => g.pow<Value>(arithmetic, base, exponent);
+
+/** {@link g.prepareProjection | prepareProjection} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const prepareProjection: Bound<typeof g.prepareProjection<Value>> = (projection) => g.prepareProjection<Value>(arithmetic, projection);
+
 /** {@link g.primeVerticalRadius | primeVerticalRadius} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const primeVerticalRadius: Bound<typeof g.primeVerticalRadius<Value>> = (lat, ellipsoid) => g.primeVerticalRadius<Value>(arithmetic, lat, ellipsoid);
+
+/** {@link g.profileLevel | profileLevel} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const profileLevel: Bound<typeof g.profileLevel<Value>> = (profile, chainage) => g.profileLevel<Value>(arithmetic, profile, chainage);
 
 /** {@link g.pythagorasResidual | pythagorasResidual} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const pythagorasResidual: Bound<typeof g.pythagorasResidual<Value>> = (Q1, Q2, Q3) => g.pythagorasResidual<Value>(arithmetic, Q1, Q2, Q3);
@@ -235,6 +337,12 @@ export const quadrea: Bound<typeof g.quadrea<Value>> = (Q1, Q2, Q3) => g.quadrea
 
 /** {@link g.radiusInAzimuth | radiusInAzimuth} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const radiusInAzimuth: Bound<typeof g.radiusInAzimuth<Value>> = (lat, azimuth, ellipsoid) => g.radiusInAzimuth<Value>(arithmetic, lat, azimuth, ellipsoid);
+
+/** {@link g.readStation | readStation} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const readStation: Bound<typeof g.readStation<Value>> = (text) => g.readStation<Value>(arithmetic, text);
+
+/** {@link g.reciprocalLevelling | reciprocalLevelling} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const reciprocalLevelling: Bound<typeof g.reciprocalLevelling<Value>> = (input) => g.reciprocalLevelling<Value>(arithmetic, input);
 
 /** {@link g.reciprocalTrigHeight | reciprocalTrigHeight} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const reciprocalTrigHeight: Bound<typeof g.reciprocalTrigHeight<Value, true>> = (input) => g.reciprocalTrigHeight<Value, true>(arithmetic, input);
@@ -260,6 +368,9 @@ export const setOut: Bound<typeof g.setOut<Value>> = (setup, design, options) =>
 /** {@link g.setOutCheck | setOutCheck} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const setOutCheck: Bound<typeof g.setOutCheck<Value>> = (setup, design, observation, tolerance) => g.setOutCheck<Value>(arithmetic, setup, design, observation, tolerance);
 
+/** {@link g.settingOutTable | settingOutTable} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const settingOutTable: Bound<typeof g.settingOutTable<Value>> = (alignment, options) => g.settingOutTable<Value>(arithmetic, alignment, options);
+
 /** {@link g.sideShot | sideShot} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const sideShot: Bound<typeof g.sideShot<Value>> = (setup, shot) => g.sideShot<Value>(arithmetic, setup, shot);
 
@@ -268,6 +379,9 @@ export const sideShots: Bound<typeof g.sideShots<Value>> = (setup, shots) => g.s
 
 /** {@link g.sinCosDegrees | sinCosDegrees} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const sinCosDegrees: Bound<typeof g.sinCosDegrees<Value>> = (degrees) => g.sinCosDegrees<Value>(arithmetic, degrees);
+
+/** {@link g.sinh | sinh} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const sinh: Bound<typeof g.sinh<Value>> = (value) => g.sinh<Value>(arithmetic, value);
 
 /** {@link g.solveQuadratic | solveQuadratic} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const solveQuadratic: Bound<typeof g.solveQuadratic<Value, true>> = (a, b, c) => g.solveQuadratic<Value, true>(arithmetic, a, b, c);
@@ -320,6 +434,15 @@ export const stewartResidual: Bound<typeof g.stewartResidual<Value>> = (data) =>
 /** {@link g.surd | surd} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const surd: Bound<typeof g.surd<Value>> = (a, b, d) => g.surd<Value>(arithmetic, a, b, d);
 
+/** {@link g.tan | tan} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const tan: Bound<typeof g.tan<Value>> = (value) => g.tan<Value>(arithmetic, value);
+
+/** {@link g.tanh | tanh} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const tanh: Bound<typeof g.tanh<Value>> = (value) => g.tanh<Value>(arithmetic, value);
+
+/** {@link g.toGrid | toGrid} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const toGrid: Bound<typeof g.toGrid<Value>> = (point, projection) => g.toGrid<Value>(arithmetic, point, projection);
+
 /** {@link g.transverseMercator | transverseMercator} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const transverseMercator: Bound<typeof g.transverseMercator<Value>> = (point, projection) => g.transverseMercator<Value>(arithmetic, point, projection);
 
@@ -344,6 +467,9 @@ export const tripleQuadResidual: Bound<typeof g.tripleQuadResidual<Value>> = (Q1
 /** {@link g.tripleSpreadResidual | tripleSpreadResidual} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const tripleSpreadResidual: Bound<typeof g.tripleSpreadResidual<Value>> = (s1, s2, s3) => g.tripleSpreadResidual<Value>(arithmetic, s1, s2, s3);
 
+/** {@link g.twoPegTest | twoPegTest} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const twoPegTest: Bound<typeof g.twoPegTest<Value>> = (input) => g.twoPegTest<Value>(arithmetic, input);
+
 /** {@link g.uncertain | uncertain} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const uncertain: Bound<typeof g.uncertain<Value, true>> = () => g.uncertain<Value, true>(arithmetic);
 
@@ -352,6 +478,9 @@ export const vectorQuadrance: Bound<typeof g.vectorQuadrance<Value>> = (v) => g.
 
 /** {@link g.vertical | vertical} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const vertical: Bound<typeof g.vertical<Value>> = (spread, sign) => g.vertical<Value>(arithmetic, spread, sign);
+
+/** {@link g.verticalAlignment | verticalAlignment} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const verticalAlignment: Bound<typeof g.verticalAlignment<Value>> = (input) => g.verticalAlignment<Value>(arithmetic, input);
 
 /** {@link g.verticalFromAngle | verticalFromAngle} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const verticalFromAngle: Bound<typeof g.verticalFromAngle<Value>> = (angle, options) => g.verticalFromAngle<Value>(arithmetic, angle, options);
@@ -372,31 +501,45 @@ export const zenithFromVertical: Bound<typeof g.zenithFromVertical<Value>> = (re
 export const zenithToElevation: Bound<typeof g.zenithToElevation<Value>> = (degrees) => g.zenithToElevation<Value>(arithmetic, degrees);
 
 export {
-  ANGLE_UNITS, AREA_UNITS, BEARING_PARALLEL_TOLERANCE, budget, DANGER_CIRCLE_TOLERANCE, decimal,
-  decimalElementary, DEFAULT_EARTH_RADIUS_M, DEFAULT_REFRACTION, defineEllipsoid,
-  ellipsoidByName, ERROR_CODES, float, GRS80, isSurd, LEVELLING_ORDERS, MAX_DECIMAL_DIGITS,
-  MAX_EXPONENT, MAX_INPUT_LENGTH, measured, measuredAngle, measuredDistance, measuredGrade,
-  measuredQuadrance, measuredSpread, measuredVertical, METRES_PER_UNIT, monteCarlo,
-  normalInputs, QuadspreadError, randomStream, rational, RATIONAL_TRANSCENDENTAL_DIGITS,
-  readRatio, roundOff, sensitivities, spreadOfAngle, Uncertain, verticalOfAngle, WGS84,
-  withDerivative,
+  ANGLE_UNITS, AREA_UNITS, baardaTest, BEARING_PARALLEL_TOLERANCE, budget, chiSquareCdf,
+  chiSquareQuantile, DANGER_CIRCLE_TOLERANCE, decimal, decimalElementary,
+  DEFAULT_EARTH_RADIUS_M, DEFAULT_REFRACTION, defineEllipsoid, ellipsoidByName, ERROR_CODES,
+  fCdf, float, fQuantile, GRS80, isSurd, LEVELLING_ORDERS, MAX_DECIMAL_DIGITS, MAX_EXPONENT,
+  MAX_INPUT_LENGTH, measured, measuredAngle, measuredDistance, measuredGrade, measuredQuadrance,
+  measuredSpread, measuredVertical, METRES_PER_UNIT, monteCarlo, normalCdf, normalInputs,
+  normalQuantile, QuadspreadError, randomStream, rational, RATIONAL_TRANSCENDENTAL_DIGITS,
+  readRatio, roundOff, sensitivities, spreadOfAngle, tauCritical, Uncertain, verticalOfAngle,
+  WGS84, withDerivative,
 } from '../index.js';
 export type {
-  AllowableMisclosure, AngleUnit, AngularMisclosure, AreaUnit, Arithmetic, Atmosphere,
-  AtmosphericPpm, Backsight, BacksightResult, BaseHeight, BearingIntersection, Budget,
-  BudgetOptions, CircleInput, Contribution, CorrelationTerm, CurvatureOptions, Decimal,
-  DecimalArithmetic, DecimalElementary, Ellipsoid, EllipsoidDefinition, EllipsoidParameters,
-  Enu, ErrorCode, FaceOptions, FieldCheck, FieldObservation, FlatEarthError, FloatArithmetic,
-  FootSide, Geocentric, Geodetic, GeodeticInput, Gradient, GridPoint, GridReduction,
-  InlineHeight, InlineQuadranceHeight, InputDistribution, Inverse, LengthUnit, LevelCheck,
-  LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, Matrix3, MeanFaces,
-  MonteCarloOptions, MonteCarloResult, Numeric, OffsetMeasure, OrientInput, Point, Point3,
-  Point3Input, Pointing, PointInput, PolygonArea, RandomStream, Ratio, Rational,
-  RationalArithmetic, ReciprocalTrigHeight, ReducedObservation, Resection, ResectionInput, Root,
-  RoundOff, SetOut, SetOutCheck, SetOutOptions, SetOutTolerance, SetupInput, SetupTolerance,
-  Shot, SideShot, StationSetup, StewartChainages, StewartQuadrances, Surd, TmFactors,
-  TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse,
-  TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
-  TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf, VerticalInput, VerticalKind,
-  VerticalReading,
+  AdjustedHeight, AdjustedLevelObservation, AlignmentElement, AlignmentPoint, AlignmentStation,
+  AlignmentStationOptions, AllowableMisclosure, AngleUnit, AngularMisclosure, ArcElement,
+  AreaUnit, Arithmetic, Atmosphere, AtmosphericPpm, BaardaTest, Backsight, BacksightResult,
+  BaseHeight, BearingIntersection, BenchmarkInput, Budget, BudgetOptions, ChainageEquation,
+  ChainageEquationInput, CircleInput, Clothoid, Contribution, ControlPoint, CorrelationTerm,
+  CurvatureOptions, DatumTransformation, DatumTransformOptions, Decimal, DecimalArithmetic,
+  DecimalElementary, DeflectionRow, Ellipsoid, EllipsoidDefinition, EllipsoidParameters, Enu,
+  ErrorCode, FaceOptions, FieldCheck, FieldObservation, FlatEarthError, FloatArithmetic,
+  FootSide, FreeStation, FreeStationInput, FreeStationResidual, Geocentric,
+  GeocentricTranslationParameters, Geodetic, GeodeticInput, GeographicPoint, GlobalTest,
+  Gradient, GridPoint, GridReduction, HelmertConvention, HelmertParameters, HorizontalAlignment,
+  HorizontalAlignmentInput, HorizontalCurve, HorizontalCurveInput, InlineHeight,
+  InlineQuadranceHeight, InputDistribution, Inverse, KeyPoint, LengthUnit, LevelCheck,
+  LevellingAdjustment, LevellingInput, LevellingObservationInput, LevellingOptions,
+  LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, LinearUnit, LocalTest,
+  Matrix3, MeanFaces, MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, Numeric,
+  ObservationTest, OffsetMeasure, OrientInput, PegReadings, Point, Point3, Point3Input,
+  Pointing, PointInput, PolygonArea, PreparedProjection, ProfileLevel, ProfilePointInput,
+  ProjectedPoint, Projection, ProjectionAngleUnit, ProjectionMethod, RandomStream, Ratio,
+  Rational, RationalArithmetic, ReciprocalLevelling, ReciprocalSet, ReciprocalTrigHeight,
+  ReducedObservation, Resection, ResectionInput, Root, RotationInput, RotationUnit, RoundOff,
+  SetOut, SetOutCheck, SetOutOptions, SetOutPoint, SetOutTolerance, SettingOutRow, SetupInput,
+  SetupTolerance, Shot, SideShot, SightHeight, SnoopingRemoval, SnoopingReport, StaffPair,
+  StationCandidate, StationObservation, StationSetup, StewartChainages, StewartQuadrances,
+  StraightElement, Surd, TestOptions, TmFactors, TransformedPoint, TransitionElement,
+  TransitionMeasures, TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure,
+  TraverseCourse, TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
+  TwoPeg, TwoPegInput, TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf,
+  VerticalAlignment, VerticalAlignmentInput, VerticalCurve, VerticalCurveInput, VerticalInput,
+  VerticalKind, VerticalReading,
 } from '../index.js';

@@ -18,3 +18,15 @@ export type { Shot, SideShot } from './side-shot.js';
 export { setOut, setOutCheck } from './set-out.js';
 export type { SetOutOptions, SetOut, SetOutTolerance, SetOutCheck } from './set-out.js';
 export type { Point3Input, Point3, FieldCheck, SetupInput } from './internal.js';
+export { freeStation } from './free-station.js';
+export type {
+  ControlPoint,
+  StationObservation,
+  FreeStationInput,
+  FreeStationResidual,
+  FreeStation,
+} from './free-station.js';
+export { twoPegTest } from './two-peg.js';
+export type { PegReadings, TwoPegInput, TwoPeg } from './two-peg.js';
+export { reciprocalLevelling } from './reciprocal-levelling.js';
+export type { StaffPair, ReciprocalSet, ReciprocalLevelling } from './reciprocal-levelling.js';

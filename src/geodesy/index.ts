@@ -27,3 +27,34 @@ export {
   gridToGround,
 } from './grid.js';
 export type { TransverseMercator, TransverseMercatorGrid, TmFactors, GridPoint } from './grid.js';
+export { helmert, helmertInverse, helmertReversed } from './helmert.js';
+export type {
+  HelmertParameters,
+  HelmertConvention,
+  RotationInput,
+  RotationUnit,
+} from './helmert.js';
+export { molodenskyBadekas, molodenskyBadekasInverse } from './molodensky-badekas.js';
+export type { MolodenskyBadekasParameters } from './molodensky-badekas.js';
+export { geocentricTranslation } from './geocentric-translation.js';
+export type { GeocentricTranslationParameters } from './geocentric-translation.js';
+export { datumTransform } from './datum-transform.js';
+export type {
+  DatumTransformation,
+  DatumTransformOptions,
+  TransformedPoint,
+} from './datum-transform.js';
+export type {
+  Projection,
+  ProjectionMethod,
+  ProjectionAngleUnit,
+  LinearUnit,
+  PreparedProjection,
+  ProjectedPoint,
+  GeographicPoint,
+} from './projection-core.js';
+export { toGrid, fromGrid, prepareProjection } from './projection.js';
+export { lambertConic, lambertConicInverse } from './lambert-conic.js';
+export { mercator, mercatorInverse } from './mercator.js';
+export { obliqueStereographic, obliqueStereographicInverse } from './oblique-stereographic.js';
+export { polarStereographic, polarStereographicInverse } from './polar-stereographic.js';

@@ -7,13 +7,17 @@
  */
 import type { Arithmetic } from '../arithmetic/types.js';
 import { MAX_DECIMAL_DIGITS } from '../arithmetic/decimal.js';
+import { scaledSqrt } from '../arithmetic/exact.js';
 
 /** Significant digits kept by {@link approxSqrt} in an exact arithmetic. @internal */
 export const APPROX_DIGITS = 50;
 
 /**
- * √x as a value of the arithmetic: `A.sqrt(x)` where it exists; in an exact arithmetic
- * where the root is irrational, a rational within 1e-48 relative: Newton's iteration from
+ * √x as a value of the arithmetic: `A.sqrt(x)` where it exists; in `rational` (an exact
+ * arithmetic that gives its values' ratios) where the root is irrational, ⌊√x·10^k⌋/10^k
+ * with 10^k chosen from the magnitude of x alone (at least 51 significant digits, below √x
+ * by less than 1e-51 relative), so that its denominator never grows with x's; in any other
+ * exact arithmetic, a rational within 1e-48 relative: Newton's iteration from
  * the float root on a rounded copy of x (kept to {@link APPROX_DIGITS} significant digits so
  * denominators stay small), then one last step y ← (y + x/y)/2 on x itself, so that an
  * arithmetic carrying derivatives (an uncertain one) gets d√x = dx/(2√x) to first order.
@@ -23,6 +27,12 @@ export const APPROX_DIGITS = 50;
 export function approxSqrt<T>(A: Arithmetic<T>, x: T): T {
   const r = A.sqrt(x);
   if (r !== undefined) return r;
+  if (A.ratio !== undefined) {
+    // One integer root on a decimal scale from the magnitude alone (at least 51 digits).
+    const q = A.ratio(x);
+    const r = scaledSqrt(q.n, q.d, APPROX_DIGITS);
+    return A.div(A.from(r.n), A.from(r.d));
+  }
   // Newton's iteration for √x (Heron's method): y ← (y + x/y)/2, quadratic convergence.
   const x0 = A.from(A.toPrecision(x, APPROX_DIGITS + 10));
   let y = A.from(Math.sqrt(A.toNumber(x0)));

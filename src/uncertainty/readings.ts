@@ -13,7 +13,6 @@ import type { Numeric } from '../arithmetic/types.js';
 import { Uncertain } from '../arithmetic/uncertain.js';
 import type { UncertainArithmetic } from '../arithmetic/uncertain.js';
 import { angleToDegrees, type AngleUnit } from '../readings/angle.js';
-import { sinCosDegrees } from '../readings/trig.js';
 import { spreadFromDegrees } from '../readings/spread.js';
 import { spreadFromGrade } from '../readings/slope.js';
 import {
@@ -103,19 +102,12 @@ export function measuredAngle<T>(
   return measured(U, deg, U.base.div(s, U.base.from(3600)), name); // 1° = 3600″
 }
 
-/** ds/dθ per degree for s = sin²θ: 2 sin θ cos θ · π/180. */
-function spreadSlope<T>(U: UncertainArithmetic<T>, degrees: T): T {
-  const B = U.base;
-  const { sin, cos } = sinCosDegrees(B, degrees);
-  // d(sin²θ)/dθ = 2 sin θ cos θ per radian; θ in degrees adds π/180.
-  return B.div(B.mul(B.mul(B.from(2), B.mul(sin, cos)), B.pi), B.from(180));
-}
-
 /**
- * The spread s = sin²θ of an uncertain angle θ in degrees (value by `spreadFromDegrees`),
- * with ds/dθ = 2 sin θ cos θ · π/180 per degree (the derivative of sin²θ, the
- * definition of spread).
+ * The spread s = sin²θ of an uncertain angle θ in degrees, with ds/dθ = 2 sin θ cos θ · π/180
+ * per degree.
  *
+ * @deprecated Kept for one release: `spreadFromDegrees(U, θ)` gives the same value and
+ * gradient (the uncertain arithmetic carries the derivatives of sin and cos).
  * @param U the uncertain arithmetic
  * @param degrees the angle in degrees, e.g. from {@link measuredAngle}
  * @returns the spread, with its gradient
@@ -135,8 +127,7 @@ export function spreadOfAngle<T>(
 ): Uncertain<T> {
   checkArithmetic(U, 'spreadOfAngle');
   checkU(U, 'spreadOfAngle(U, degrees)');
-  const d = U.from(degrees as Numeric<Uncertain<T>>);
-  return withDerivative(U, d, spreadFromDegrees(U.base, d.value), spreadSlope(U, d.value));
+  return spreadFromDegrees(U, U.from(degrees as Numeric<Uncertain<T>>));
 }
 
 /**
@@ -165,15 +156,16 @@ export function measuredSpread<T>(
   unit: AngleUnit = 'deg',
 ): Uncertain<T> {
   checkArithmetic(U, 'measuredSpread');
-  return spreadOfAngle(U, measuredAngle(U, reading, sigmaArcSeconds, name, unit));
+  return spreadFromDegrees(U, measuredAngle(U, reading, sigmaArcSeconds, name, unit));
 }
 
 /**
  * A vertical reading (spread R of the sight with the horizontal, and its sign) from an
- * uncertain elevation or zenith angle in degrees: R = sin²α with α the elevation
- * (α = 90° − z for a zenith angle), value by `verticalFromAngle`, dR/dα = 2 sin α cos α ·
- * π/180 per degree and dα/dz = −1.
+ * uncertain elevation or zenith angle in degrees, its spread carrying dR/dα = 2 sin α cos α ·
+ * π/180 per degree (dα/dz = −1).
  *
+ * @deprecated Kept for one release: `verticalFromAngle(U, angle, { kind })` gives the same
+ * reading and gradient.
  * @param U the uncertain arithmetic
  * @param degrees the angle in degrees, e.g. from {@link measuredAngle}
  * @param kind `'elevation'` (default) or `'zenith'`
@@ -195,15 +187,7 @@ export function verticalOfAngle<T>(
 ): VerticalReading<Uncertain<T>> {
   checkArithmetic(U, 'verticalOfAngle');
   checkU(U, 'verticalOfAngle(U, degrees, kind)');
-  const B = U.base;
-  const d = U.from(degrees as Numeric<Uncertain<T>>);
-  const r = verticalFromAngle(B, d.value, { kind });
-  const elev = kind === 'zenith' ? B.sub(B.from(90), d.value) : d.value; // α = 90° − z
-  const slope = spreadSlope(U, elev);
-  return {
-    spread: withDerivative(U, d, r.spread, kind === 'zenith' ? B.neg(slope) : slope),
-    sign: r.sign,
-  };
+  return verticalFromAngle(U, U.from(degrees as Numeric<Uncertain<T>>), { kind });
 }
 
 /**
@@ -234,10 +218,10 @@ export function measuredVertical<T>(
   options: { kind?: VerticalKind; unit?: AngleUnit } = {},
 ): VerticalReading<Uncertain<T>> {
   checkArithmetic(U, 'measuredVertical');
-  return verticalOfAngle(
+  return verticalFromAngle(
     U,
     measuredAngle(U, reading, sigmaArcSeconds, name, options.unit ?? 'deg'),
-    options.kind ?? 'elevation',
+    { kind: options.kind ?? 'elevation' },
   );
 }
 

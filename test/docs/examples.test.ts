@@ -11,7 +11,7 @@ import { join } from 'node:path';
 import { compileExample, examplesOf, examplesOfMarkdown, repoRoot, sourceFiles, type Example } from './extract.js';
 
 // Guides whose code blocks are run too (add a guide here once its examples use //=>).
-const GUIDES = ['README.md', 'docs/choosing-an-arithmetic.md', 'docs/errors.md', 'docs/uncertainty.md', 'docs/geometry.md', 'docs/coordinates.md', 'docs/geodesy.md', 'docs/cli.md', 'docs/performance.md', 'docs/index.md', 'docs/field.md'];
+const GUIDES = ['README.md', 'docs/choosing-an-arithmetic.md', 'docs/errors.md', 'docs/uncertainty.md', 'docs/geometry.md', 'docs/coordinates.md', 'docs/geodesy.md', 'docs/cli.md', 'docs/performance.md', 'docs/index.md', 'docs/field.md', 'docs/adjustment.md', 'docs/alignment.md'];
 
 const MODULES: Record<string, unknown> = {
   quadspread: generic,

@@ -47,14 +47,19 @@ const value = fc.oneof(
     .tuple(fc.integer({ min: -1000, max: 1000 }), fc.integer({ min: 1, max: 64 }))
     .map(([n, d]) => rational.from(`${n}/${d}`)),
 );
-const course = fc.record({
-  latitude: value,
-  departure: value,
-  distance: fc.oneof(
-    mmText.map((s) => s.replace('-', '')),
-    fc.integer({ min: 0, max: 300 }),
-  ),
-});
+// The distance may be left out: the length is then √(lat² + dep²), computed (exact for a
+// square, else one integer root on a decimal scale) by the kernel as by the generic code.
+const course = fc.record(
+  {
+    latitude: value,
+    departure: value,
+    distance: fc.oneof(
+      mmText.map((s) => s.replace('-', '')),
+      fc.integer({ min: 0, max: 300 }),
+    ),
+  },
+  { requiredKeys: ['latitude', 'departure'] },
+);
 const input = fc.record(
   {
     start: fc.record({ x: value, y: value }),
@@ -96,10 +101,15 @@ describe('the fused rational traverse kernel', () => {
     expect(outcome(() => r)).toEqual(outcome(() => traverse(plain, t)));
   });
 
-  it('leaves bearings, missing distances and bad values to the generic code', () => {
+  it('leaves bearings and bad values to the generic code, and computes a missing distance', () => {
     const k = rational.kernels!.traverse!;
     expect(k({ start: { x: 0, y: 0 }, courses: [{ bearing: '45', distance: 1 }] })).toBeUndefined();
-    expect(k({ start: { x: 0, y: 0 }, courses: [{ latitude: 3, departure: 4 }] })).toBeUndefined();
+    // 3-4-5: the computed length is exactly 5
+    expect(
+      rational.toString(
+        k({ start: { x: 0, y: 0 }, courses: [{ latitude: 3, departure: 4 }] })!.length,
+      ),
+    ).toBe('5');
     expect(
       k({ start: { x: 0, y: 0 }, courses: [{ latitude: 'x', departure: 4, distance: 5 }] }),
     ).toBeUndefined();

@@ -16,6 +16,9 @@ import { levellingTask } from './levelling.js';
 import { resectionTask } from './resection.js';
 import { trigHeightTask } from './trig-height.js';
 import { geodeticTask } from './geodetic.js';
+import { alignmentTask } from './alignment.js';
+import { stationSetupTask } from './station-setup.js';
+import { settingOutTask } from './setting-out.js';
 
 export const TASK_KINDS: readonly TaskKind[] = [
   heightTask,
@@ -30,4 +33,7 @@ export const TASK_KINDS: readonly TaskKind[] = [
   resectionTask,
   levellingTask,
   geodeticTask,
+  alignmentTask,
+  stationSetupTask,
+  settingOutTask,
 ];

@@ -159,6 +159,18 @@ export const traverseTask: TaskKind = {
           rule,
         });
         const u = ctx.unitName;
+        // Under the compass rule each correction is in proportion to its course's length
+        // √(lat² + dep²), exact in an exact arithmetic only for a perfect square (otherwise a
+        // rational within 1e-51 relative): the adjusted points then have no exact form.
+        const lengthsApprox =
+          A.exact &&
+          rule === 'compass' &&
+          t.courses.some(
+            (c, i) =>
+              !('bearing' in courses[i]!) &&
+              A.sqrt(A.add(A.mul(c.latitude, c.latitude), A.mul(c.departure, c.departure))) ===
+                undefined,
+          );
         const results = [
           {
             name: 'misclosure_east',
@@ -186,12 +198,14 @@ export const traverseTask: TaskKind = {
               label: `${courses[i]!.to} adjusted east`,
               unit: u,
               value: p.x,
+              approx: lengthsApprox,
             },
             {
               name: `${courses[i]!.to}.north`,
               label: `${courses[i]!.to} adjusted north`,
               unit: u,
               value: p.y,
+              approx: lengthsApprox,
             },
           ]),
         ];

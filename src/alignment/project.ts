@@ -1,0 +1,290 @@
+/**
+ * The chainage and offset of a point: its projection onto a horizontal alignment.
+ *
+ * @module alignment
+ */
+import { show, invalidArgument, QuadspreadError } from '../errors.js';
+import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+import type { Point } from '../geometry/point.js';
+import type { AlignmentElement, HorizontalAlignment, TransitionElement } from './horizontal.js';
+import { readAlignment, chainageAt } from './horizontal.js';
+import { placeOn } from './point.js';
+import { readXY, rightOf, root, trim } from './internal.js';
+import { readNumber } from '../geometry/validate.js';
+
+/** A projection of a point onto one element. */
+export interface StationCandidate<T> {
+  /** Chainage of the foot of the perpendicular. */
+  readonly chainage: T;
+  /** Signed offset, positive to the right looking ahead. */
+  readonly offset: T;
+  /** Index of the element in `alignment.elements`. */
+  readonly element: number;
+  /** Distance of the foot along the line from the alignment's start (ignores equations). */
+  readonly distance: T;
+}
+
+/** What {@link alignmentStation} returns: the nearest projection and every close one. */
+export interface AlignmentStation<T> extends StationCandidate<T> {
+  /**
+   * Every projection whose |offset| is within the tolerance of the nearest one (the nearest
+   * first; one entry when the answer is unique). The inside of a sharp curve can hold several.
+   */
+  readonly candidates: readonly StationCandidate<T>[];
+  /** `true` when the point lies beyond an end and was projected on the end's tangent (`extend`). */
+  readonly extended: boolean;
+}
+
+/** Options of {@link alignmentStation}. */
+export interface AlignmentStationOptions<T> {
+  /**
+   * Projections whose |offset| exceeds the nearest one's by at most this much are listed as
+   * candidates (default 0.001, in the unit of the coordinates: an example, 1 mm in metres).
+   */
+  readonly tolerance?: Numeric<T>;
+  /** Project a point beyond the start or the end onto the tangent there instead of refusing it. */
+  readonly extend?: boolean;
+}
+
+/**
+ * The chainage and offset of a point: the foot of the perpendicular from it to the alignment.
+ * Offsets are positive to the right looking ahead (the direction of increasing chainage).
+ *
+ * Only the elements whose boxes lie near the point are tried (a box test in plain numbers first,
+ * then the exact projection, nearest box first), so a long alignment costs little more than a
+ * short one. On a straight the projection is exact in `rational`; on an arc it needs √ and atan2
+ * (within 1e-40 relative in `rational`); on a transition the foot is found by Newton's method on
+ * (P − X(l))·t(l) = 0, kept inside the transition, to 1e-30 of its length in `rational` (with a
+ * last unrounded step, so an uncertain arithmetic keeps its first-order derivatives), 1e-12 in
+ * `float`.
+ *
+ * @param A the arithmetic
+ * @param alignment an alignment made by {@link horizontalAlignment}
+ * @param P the point `{ x: east, y: north }`
+ * @param options `tolerance` for candidates (default 0.001), `extend` past the ends (default false)
+ * @returns `{ chainage, offset, element, distance, candidates, extended }`
+ * @throws {QuadspreadError} `OFF_ALIGNMENT` when no element has a perpendicular foot for P (it
+ *   lies beyond an end) and `extend` is not set; `INVALID_ARGUMENT` for an alignment that is not
+ *   one, or a negative tolerance; `INVALID_NUMBER`.
+ * @example
+ * ```ts
+ * import { rational, horizontalAlignment, alignmentStation } from 'quadspread';
+ * const R = rational;
+ * const h = horizontalAlignment(R, { points: [{ x: 0, y: 0 }, { x: 0, y: 100 }, { x: 60, y: 180 }], curves: [{ radius: 30 }], startChainage: 1000 });
+ * const s = alignmentStation(R, h, { x: -3, y: 40 });
+ * [R.toString(s.chainage), R.toString(s.offset), s.candidates.length];
+ * //=> ['1040', '-3', 1]
+ * ```
+ */
+export function alignmentStation<T>(
+  A: Arithmetic<T>,
+  alignment: HorizontalAlignment<T>,
+  P: { readonly x: Numeric<T>; readonly y: Numeric<T> },
+  options: AlignmentStationOptions<T> = {},
+): AlignmentStation<T> {
+  const where = 'alignmentStation(A, alignment, P)';
+  const h = readAlignment(A, alignment, `${where} alignment`);
+  const p = readXY(A, P, `${where} P`);
+  const opts = options === null || typeof options !== 'object' ? {} : options;
+  const tol =
+    opts.tolerance === undefined
+      ? A.from('0.001')
+      : readNumber(A, opts.tolerance, `${where} options.tolerance`);
+  if (A.sign(tol) < 0)
+    throw invalidArgument(`${where} options.tolerance`, `${A.toString(tol)} is negative`);
+  const els = h.elements;
+  const px = A.toNumber(p.x);
+  const py = A.toNumber(p.y);
+  const tolN = A.toNumber(tol);
+  // Squared distances from P to each element's box (plain numbers), and the nearest box.
+  const n = els.length;
+  const lb = new Float64Array(n);
+  let first = 0;
+  for (let i = 0; i < n; i++) {
+    const b = els[i]!.bounds;
+    const dx = px < b[0] ? b[0] - px : px > b[2] ? px - b[2] : 0;
+    const dy = py < b[1] ? b[1] - py : py > b[3] ? py - b[3] : 0;
+    lb[i] = dx * dx + dy * dy;
+    if (lb[i]! < lb[first]!) first = i;
+  }
+  const found: StationCandidate<T>[] = [];
+  let best = Infinity; // |offset| of the nearest found, as a number
+  const tryElement = (i: number) => {
+    const c = projectOn(A, els[i]!, p);
+    if (c === undefined) return;
+    found.push({
+      chainage: A.zero,
+      offset: c.offset,
+      element: i,
+      distance: A.add(els[i]!.startDistance, c.s),
+    });
+    best = Math.min(best, Math.abs(A.toNumber(c.offset)));
+  };
+  tryElement(first);
+  for (let i = 0; i < n; i++) {
+    if (i === first) continue;
+    const reach = best + tolN;
+    // 1e-9 relative slack for the rounding of boxes and offsets to numbers.
+    if (lb[i]! <= reach * reach * (1 + 1e-9) + 1e-18) tryElement(i);
+  }
+  let extended = false;
+  if (found.length === 0) {
+    if (opts.extend !== true)
+      throw new QuadspreadError(
+        'OFF_ALIGNMENT',
+        `${where} P`,
+        `(${show(A.toString(p.x))}, ${show(A.toString(p.y))}) has no perpendicular foot on the alignment: it lies beyond an end (pass { extend: true } to project it on the end's tangent)`,
+      );
+    extended = true;
+    for (const [i, atEnd] of [
+      [0, false],
+      [n - 1, true],
+    ] as const) {
+      const e = els[i]!;
+      const pl = placeOn(A, e, atEnd ? e.length : A.zero);
+      const dx = A.sub(p.x, pl.point.x);
+      const dy = A.sub(p.y, pl.point.y);
+      const s = A.add(A.mul(dx, pl.direction.x), A.mul(dy, pl.direction.y));
+      if (atEnd ? A.sign(s) >= 0 : A.sign(s) <= 0) {
+        const nr = rightOf(A, pl.direction);
+        found.push({
+          chainage: A.zero,
+          offset: A.add(A.mul(dx, nr.x), A.mul(dy, nr.y)),
+          element: i,
+          distance: A.add(atEnd ? h.length : A.zero, s),
+        });
+      }
+    }
+    if (found.length === 0)
+      throw new QuadspreadError(
+        'OFF_ALIGNMENT',
+        `${where} P`,
+        'the point projects on neither end tangent',
+      );
+  }
+  // The nearest first; keep those within the tolerance, one per distinct foot.
+  found.sort((a, b) => A.cmp(A.abs(a.offset), A.abs(b.offset)));
+  const limit = A.add(A.abs(found[0]!.offset), tol);
+  const kept: StationCandidate<T>[] = [];
+  for (const f of found) {
+    if (A.cmp(A.abs(f.offset), limit) > 0) continue;
+    if (
+      kept.some(
+        (k) =>
+          A.cmp(A.abs(A.sub(k.distance, f.distance)), tol) <= 0 &&
+          A.cmp(A.abs(A.sub(k.offset, f.offset)), tol) <= 0,
+      )
+    )
+      continue;
+    kept.push({ ...f, chainage: chainageAt(A, h.startChainage, h.equations, f.distance) });
+  }
+  return { ...kept[0]!, candidates: kept, extended };
+}
+
+/**
+ * The foot of the perpendicular from P on an element: its distance s from the element's start
+ * and the signed offset; `undefined` when the foot lies outside the element. @internal
+ */
+export function projectOn<T>(
+  A: Arithmetic<T>,
+  e: AlignmentElement<T>,
+  p: Point<T>,
+): { s: T; offset: T } | undefined {
+  // Joins are computed from both sides and agree to rounding: allow a foot that far outside.
+  const slack = A.mul(A.add(e.length, A.one), A.from(A.exact ? '1e-30' : '1e-9'));
+  const inside = (s: T): T | undefined =>
+    A.sign(s) < 0
+      ? A.cmp(A.neg(s), slack) <= 0
+        ? A.zero
+        : undefined
+      : A.cmp(s, e.length) > 0
+        ? A.cmp(A.sub(s, e.length), slack) <= 0
+          ? e.length
+          : undefined
+        : s;
+  if (e.type === 'straight') {
+    const dx = A.sub(p.x, e.start.x);
+    const dy = A.sub(p.y, e.start.y);
+    const s = inside(A.add(A.mul(dx, e.direction.x), A.mul(dy, e.direction.y)));
+    if (s === undefined) return undefined;
+    const nr = rightOf(A, e.direction);
+    return { s, offset: A.add(A.mul(dx, nr.x), A.mul(dy, nr.y)) };
+  }
+  if (e.type === 'arc') {
+    const rx = A.sub(p.x, e.centre.x);
+    const ry = A.sub(p.y, e.centre.y);
+    const q = A.add(A.mul(rx, rx), A.mul(ry, ry));
+    if (A.isZero(q)) return undefined; // the centre: every point of the arc is a foot
+    const r0x = A.sub(e.start.x, e.centre.x);
+    const r0y = A.sub(e.start.y, e.centre.y);
+    // Angle from the start radius to P's, in the direction of travel (clockwise on a right-hand curve).
+    const cross = A.sub(A.mul(r0x, ry), A.mul(r0y, rx));
+    const dot = A.add(A.mul(r0x, rx), A.mul(r0y, ry));
+    const s = inside(A.mul(A.atan2(e.turn > 0 ? A.neg(cross) : cross, dot), e.radius));
+    if (s === undefined) return undefined;
+    const rho = root(A, q, 'alignmentStation');
+    // P = centre + r̂·(R − turn·offset).
+    const offset = A.sub(e.radius, rho);
+    return { s, offset: e.turn > 0 ? offset : A.neg(offset) };
+  }
+  return projectOnTransition(A, e, p, slack);
+}
+
+function projectOnTransition<T>(
+  A: Arithmetic<T>,
+  e: TransitionElement<T>,
+  p: Point<T>,
+  slack: T,
+): { s: T; offset: T } | undefined {
+  const L = e.length;
+  // g(s) = (P − X(s))·t(s): positive while the foot is ahead of s.
+  const g = (s: T) => {
+    const pl = placeOn(A, e, s);
+    const dx = A.sub(p.x, pl.point.x);
+    const dy = A.sub(p.y, pl.point.y);
+    const nr = rightOf(A, pl.direction);
+    return {
+      g: A.add(A.mul(dx, pl.direction.x), A.mul(dy, pl.direction.y)),
+      n: A.add(A.mul(dx, nr.x), A.mul(dy, nr.y)),
+    };
+  };
+  const g0 = g(A.zero);
+  if (A.cmp(g0.g, A.neg(slack)) < 0) return undefined;
+  if (A.sign(g0.g) <= 0) return { s: A.zero, offset: g0.n };
+  const g1 = g(L);
+  if (A.cmp(g1.g, slack) > 0) return undefined;
+  if (A.sign(g1.g) >= 0) return { s: L, offset: g1.n };
+  // Safeguarded Newton: g′(s) = −1 + κ(s)·(signed normal distance towards the centre), κ = l/(R·Ls).
+  const tolerance = A.mul(L, A.from(A.exact ? '1e-30' : '1e-12'));
+  const RL = A.mul(e.radius, L);
+  let lo = A.zero;
+  let hi = L;
+  let s = trim(A, A.div(A.mul(L, g0.g), A.sub(g0.g, g1.g)));
+  for (let it = 0; it < 100; it++) {
+    const v = g(s);
+    const sg = A.sign(v.g);
+    if (sg === 0) return { s, offset: v.n };
+    if (sg > 0) lo = s;
+    else hi = s;
+    const l = e.entering ? s : A.sub(L, s);
+    const kappa = A.div(l, RL);
+    // Distance from the line towards the curve's centre: right offset × turn.
+    const towards = e.turn > 0 ? v.n : A.neg(v.n);
+    const dg = A.sub(A.mul(kappa, towards), A.one);
+    let next = A.isZero(dg) ? s : A.sub(s, A.div(v.g, dg));
+    if (A.cmp(next, lo) <= 0 || A.cmp(next, hi) >= 0) next = A.div(A.add(lo, hi), A.from(2));
+    const step = A.abs(A.sub(next, s));
+    if (A.cmp(step, tolerance) <= 0) {
+      // The last Newton step is taken unrounded in an uncertain arithmetic (trim leaves its values
+      // alone), so that the foot keeps its first-order derivatives; rational rounds it to 45 digits.
+      const foot = trim(A, next);
+      return { s: foot, offset: g(foot).n };
+    }
+    s = trim(A, next);
+  }
+  throw new QuadspreadError(
+    'NOT_CONVERGED',
+    'alignmentStation(A, alignment, P)',
+    `the foot on the transition of curve ${e.curve} did not converge`,
+  );
+}
