@@ -255,10 +255,14 @@ function render(entry, { bound, values, typesOnly }) {
     ' * primitives that take points, vectors or lines (`quadrance`, `vectorQuadrance`, `spread`,',
   );
   L.push(
-    ' * `cross`, `spreadOfVectors`, `triangle`, the line functions) take values made by `point` and',
+    ' * `cross`, `spreadOfVectors`, `triangle`, the line functions) take values made by `point`',
   );
-  L.push(" * `line`/`lineThrough`, as the arithmetic's own");
-  L.push(' * operations take its values; the solvers read plain `{ x, y }` of numbers or text.');
+  L.push(
+    " * (or arrays `[x, y]` of the arithmetic's values) and `line`/`lineThrough`, as the arithmetic's",
+  );
+  L.push(
+    ' * own operations take its values; the solvers read `{ x, y }` or `[x, y]` of numbers or text.',
+  );
   L.push(
     ' * Everything else (constants, classes, types, the other arithmetics) is re-exported unchanged.',
   );

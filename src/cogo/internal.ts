@@ -6,23 +6,14 @@
  */
 import { show, invalidArgument, noRealSolution, inputTooLong } from '../errors.js';
 import type { Arithmetic } from '../arithmetic/types.js';
-import type { Point } from '../geometry/point.js';
 import { surd } from '../geometry/surd.js';
 import { approxSqrt } from '../readings/numeric.js';
-import { readNumber } from '../geometry/validate.js';
 import type { Root } from '../geometry/surd.js';
 
 import type { PointInput } from '../geometry/point.js';
 export type { PointInput };
 
-/** Reads a point `{ x, y }` (x = east, y = north) into the arithmetic. @internal */
-export function readPoint<T>(A: Arithmetic<T, boolean>, p: unknown, where: string): Point<T> {
-  if (p === null || typeof p !== 'object' || !('x' in p) || !('y' in p)) {
-    throw invalidArgument(where, `${show(p)} is not a point { x, y } (x = east, y = north)`);
-  }
-  const q = p as PointInput<T>;
-  return { x: readNumber(A, q.x, where, '.x'), y: readNumber(A, q.y, where, '.y') };
-}
+export { readPoint } from '../geometry/validate.js';
 
 /**
  * √q as a value of the arithmetic, for q ≥ 0: 0 for q = 0; otherwise the readings'

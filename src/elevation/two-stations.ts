@@ -11,24 +11,14 @@ import {
   checkArithmetic,
 } from '../errors.js';
 import { checkObject, PLUMB_SIGHT } from './input.js';
-import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import type { Point } from '../geometry/point.js';
+import type { Arithmetic } from '../arithmetic/types.js';
 import { quadrance } from '../geometry/quadrance.js';
-import { readNumber } from '../geometry/validate.js';
+import { readPoint } from '../geometry/validate.js';
+import type { PointInput } from '../geometry/point.js';
 import { readVertical, type VerticalInput } from '../readings/vertical.js';
 import { heightFromReading } from './height.js';
 import { heightFromQuadrance } from './signed-height.js';
 import type { Root } from '../geometry/surd.js';
-
-/** Reads a point given with numeric or arithmetic coordinates. */
-function readPoint<T>(
-  A: Arithmetic<T>,
-  P: { x: Numeric<T>; y: Numeric<T> },
-  where: string,
-): Point<T> {
-  if (typeof P !== 'object' || P === null) throw invalidArgument(where, 'is not a point { x, y }');
-  return { x: readNumber(A, P.x, `${where}.x`), y: readNumber(A, P.y, `${where}.y`) };
-}
 
 /** The result of {@link heightFromTwoStations}. */
 export interface TwoStationHeight<T> {
@@ -84,8 +74,8 @@ export interface TwoStationHeight<T> {
 export function heightFromTwoStations<T>(
   A: Arithmetic<T>,
   input: {
-    stations: readonly [{ x: Numeric<T>; y: Numeric<T> }, { x: Numeric<T>; y: Numeric<T> }];
-    foot: { x: Numeric<T>; y: Numeric<T> };
+    stations: readonly [PointInput<T>, PointInput<T>];
+    foot: PointInput<T>;
     vertical: readonly [VerticalInput<T>, VerticalInput<T>];
   },
 ): TwoStationHeight<T> {

@@ -6,9 +6,9 @@
  * with the `float` arithmetic (JS numbers) fixed, so the arithmetic argument is dropped.
  * Inputs may be numbers or numeric text; results are values of {@link arithmetic}. The geometry
  * primitives that take points, vectors or lines (`quadrance`, `vectorQuadrance`, `spread`,
- * `cross`, `spreadOfVectors`, `triangle`, the line functions) take values made by `point` and
- * `line`/`lineThrough`, as the arithmetic's own
- * operations take its values; the solvers read plain `{ x, y }` of numbers or text.
+ * `cross`, `spreadOfVectors`, `triangle`, the line functions) take values made by `point`
+ * (or arrays `[x, y]` of the arithmetic's values) and `line`/`lineThrough`, as the arithmetic's
+ * own operations take its values; the solvers read `{ x, y }` or `[x, y]` of numbers or text.
  * Everything else (constants, classes, types, the other arithmetics) is re-exported unchanged.
  *
  * @example
@@ -529,17 +529,17 @@ export type {
   LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, LinearUnit, LocalTest,
   Matrix3, MeanFaces, MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, Numeric,
   ObservationTest, OffsetMeasure, OrientInput, PegReadings, Point, Point3, Point3Input,
-  Pointing, PointInput, PolygonArea, PreparedProjection, ProfileLevel, ProfilePointInput,
-  ProjectedPoint, Projection, ProjectionAngleUnit, ProjectionMethod, RandomStream, Ratio,
-  Rational, RationalArithmetic, ReciprocalLevelling, ReciprocalSet, ReciprocalTrigHeight,
-  ReducedObservation, Resection, ResectionInput, Root, RotationInput, RotationUnit, RoundOff,
-  SetOut, SetOutCheck, SetOutOptions, SetOutPoint, SetOutTolerance, SettingOutRow, SetupInput,
-  SetupTolerance, Shot, SideShot, SightHeight, SnoopingRemoval, SnoopingReport, StaffPair,
-  StationCandidate, StationObservation, StationSetup, StewartChainages, StewartQuadrances,
-  StraightElement, Surd, TestOptions, TmFactors, TransformedPoint, TransitionElement,
-  TransitionMeasures, TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure,
-  TraverseCourse, TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
-  TwoPeg, TwoPegInput, TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf,
-  VerticalAlignment, VerticalAlignmentInput, VerticalCurve, VerticalCurveInput, VerticalInput,
-  VerticalKind, VerticalReading,
+  Pointing, PointInput, PointLike, PolygonArea, PreparedProjection, ProfileLevel,
+  ProfilePointInput, ProjectedPoint, Projection, ProjectionAngleUnit, ProjectionMethod,
+  RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalLevelling, ReciprocalSet,
+  ReciprocalTrigHeight, ReducedObservation, Resection, ResectionInput, Root, RotationInput,
+  RotationUnit, RoundOff, SetOut, SetOutCheck, SetOutOptions, SetOutPoint, SetOutTolerance,
+  SettingOutRow, SetupInput, SetupTolerance, Shot, SideShot, SightHeight, SnoopingRemoval,
+  SnoopingReport, StaffPair, StationCandidate, StationObservation, StationSetup,
+  StewartChainages, StewartQuadrances, StraightElement, Surd, TestOptions, TmFactors,
+  TransformedPoint, TransitionElement, TransitionMeasures, TransverseMercator,
+  TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg,
+  Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoPeg, TwoPegInput, TwoStationHeight,
+  UncertainArithmetic, UncertainInput, ValueOf, VerticalAlignment, VerticalAlignmentInput,
+  VerticalCurve, VerticalCurveInput, VerticalInput, VerticalKind, VerticalReading,
 } from '../index.js';

@@ -1,6 +1,6 @@
 // Public exports of src/geometry/ (one line per file as files land).
 export { point } from './point.js';
-export type { Point, PointInput } from './point.js';
+export type { Point, PointInput, PointLike } from './point.js';
 export { quadrance, vectorQuadrance } from './quadrance.js';
 export { spread, cross, spreadOfVectors } from './spread.js';
 export {

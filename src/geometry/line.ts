@@ -5,7 +5,7 @@
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { show, coincidentPoints, degenerateLine, checkArithmetic } from '../errors.js';
-import type { Point } from './point.js';
+import { asPoint, type Point, type PointLike } from './point.js';
 import { atMostOne, finiteResult, readNumber, checkPoint, checkLine } from './validate.js';
 
 /**
@@ -81,21 +81,23 @@ export function line<T>(A: Arithmetic<T>, a: Numeric<T>, b: Numeric<T>, c: Numer
  * //=> ['-2', '2', '-2']
  * ```
  */
-export function lineThrough<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): Line<T> {
+export function lineThrough<T>(A: Arithmetic<T>, P: PointLike<T>, Q: PointLike<T>): Line<T> {
   checkArithmetic(A, 'lineThrough');
-  checkPoint(A, P, 'lineThrough(P)');
-  checkPoint(A, Q, 'lineThrough(Q)');
+  const Pp = asPoint(P);
+  const Qp = asPoint(Q);
+  checkPoint(A, Pp, 'lineThrough(P)');
+  checkPoint(A, Qp, 'lineThrough(Q)');
   // Line through two points: the cross product of their homogeneous coordinates (x, y, 1) (common practice; derived).
   const where = 'lineThrough(A, P, Q)';
-  const a = finiteResult(A.sub(P.y, Q.y), where);
-  const b = finiteResult(A.sub(Q.x, P.x), where);
+  const a = finiteResult(A.sub(Pp.y, Qp.y), where);
+  const b = finiteResult(A.sub(Qp.x, Pp.x), where);
   if (A.isZero(a) && A.isZero(b)) {
     throw coincidentPoints(
       where,
-      `P and Q coincide at (${show(A.toString(P.x))}, ${show(A.toString(P.y))})`,
+      `P and Q coincide at (${show(A.toString(Pp.x))}, ${show(A.toString(Pp.y))})`,
     );
   }
-  return { a, b, c: finiteResult(A.sub(A.mul(P.x, Q.y), A.mul(Q.x, P.y)), where) };
+  return { a, b, c: finiteResult(A.sub(A.mul(Pp.x, Qp.y), A.mul(Qp.x, Pp.y)), where) };
 }
 
 /**
@@ -114,11 +116,12 @@ export function lineThrough<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): Line
  * //=> true
  * ```
  */
-export function isOnLine<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>): boolean {
+export function isOnLine<T>(A: Arithmetic<T>, P: PointLike<T>, l: Line<T>): boolean {
   checkArithmetic(A, 'isOnLine');
-  checkPoint(A, P, 'isOnLine(P)');
+  const Pp = asPoint(P);
+  checkPoint(A, Pp, 'isOnLine(P)');
   checkLine(A, l, 'isOnLine(l)');
-  return A.isZero(A.add(A.add(A.mul(l.a, P.x), A.mul(l.b, P.y)), l.c));
+  return A.isZero(A.add(A.add(A.mul(l.a, Pp.x), A.mul(l.b, Pp.y)), l.c));
 }
 
 /**
@@ -184,16 +187,17 @@ export function isPerpendicular<T>(A: Arithmetic<T>, l1: Line<T>, l2: Line<T>): 
  * //=> ['1', '1']
  * ```
  */
-export function footOfPerpendicular<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>): Point<T> {
+export function footOfPerpendicular<T>(A: Arithmetic<T>, P: PointLike<T>, l: Line<T>): Point<T> {
   checkArithmetic(A, 'footOfPerpendicular');
-  checkPoint(A, P, 'footOfPerpendicular(P)');
+  const Pp = asPoint(P);
+  checkPoint(A, Pp, 'footOfPerpendicular(P)');
   checkLine(A, l, 'footOfPerpendicular(l)');
   const n = A.add(A.mul(l.a, l.a), A.mul(l.b, l.b));
   if (A.isZero(n))
     throw degenerateLine('footOfPerpendicular(A, P, l)', 'l has a = b = 0, which is no line');
   // Orthogonal projection onto a·x + b·y + c = 0 (common practice; derived from the normal vector (a, b)).
-  const k = A.div(A.add(A.add(A.mul(l.a, P.x), A.mul(l.b, P.y)), l.c), n);
-  return { x: A.sub(P.x, A.mul(k, l.a)), y: A.sub(P.y, A.mul(k, l.b)) };
+  const k = A.div(A.add(A.add(A.mul(l.a, Pp.x), A.mul(l.b, Pp.y)), l.c), n);
+  return { x: A.sub(Pp.x, A.mul(k, l.a)), y: A.sub(Pp.y, A.mul(k, l.b)) };
 }
 
 /**
@@ -212,15 +216,16 @@ export function footOfPerpendicular<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>
  * //=> '4'
  * ```
  */
-export function quadranceToLine<T>(A: Arithmetic<T>, P: Point<T>, l: Line<T>): T {
+export function quadranceToLine<T>(A: Arithmetic<T>, P: PointLike<T>, l: Line<T>): T {
   checkArithmetic(A, 'quadranceToLine');
-  checkPoint(A, P, 'quadranceToLine(P)');
+  const Pp = asPoint(P);
+  checkPoint(A, Pp, 'quadranceToLine(P)');
   checkLine(A, l, 'quadranceToLine(l)');
   const n = A.add(A.mul(l.a, l.a), A.mul(l.b, l.b));
   if (A.isZero(n))
     throw degenerateLine('quadranceToLine(A, P, l)', 'l has a = b = 0, which is no line');
   // Point-to-line distance |a·x + b·y + c|/√(a² + b²), squared (common practice; derived).
-  const v = A.add(A.add(A.mul(l.a, P.x), A.mul(l.b, P.y)), l.c);
+  const v = A.add(A.add(A.mul(l.a, Pp.x), A.mul(l.b, Pp.y)), l.c);
   return A.div(A.mul(v, v), n);
 }
 

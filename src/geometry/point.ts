@@ -27,9 +27,11 @@ export interface Point<T> {
 }
 
 /**
- * A point as the coordinate and elevation solvers read it: `x` east and `y` north, each a
+ * A point as the coordinate and elevation solvers read it: `{ x, y }` with `x` east and `y`
+ * north, or an array `[x, y]` in the same order (as GIS code holds positions), each coordinate a
  * value of the arithmetic or anything its `from` reads (a number, numeric text, a bigint).
- * A {@link Point} made by {@link point} is one.
+ * A {@link Point} made by {@link point} is one. (A GeoJSON position holds longitude and
+ * latitude, not plane coordinates: convert it through a grid first.)
  *
  * @example
  * ```ts
@@ -39,12 +41,14 @@ export interface Point<T> {
  * //=> '3'
  * ```
  */
-export interface PointInput<T> {
-  /** East coordinate. */
-  readonly x: Numeric<T>;
-  /** North coordinate. */
-  readonly y: Numeric<T>;
-}
+export type PointInput<T> =
+  | {
+      /** East coordinate. */
+      readonly x: Numeric<T>;
+      /** North coordinate. */
+      readonly y: Numeric<T>;
+    }
+  | readonly [x: Numeric<T>, y: Numeric<T>];
 
 /**
  * Makes a point `{ x, y }` (x = east, y = north), reading each coordinate with `A.from`.
@@ -66,4 +70,26 @@ export interface PointInput<T> {
 export function point<T>(A: Arithmetic<T>, x: Numeric<T>, y: Numeric<T>): Point<T> {
   checkArithmetic(A, 'point');
   return { x: readNumber(A, x, 'point(A, x, y) x'), y: readNumber(A, y, 'point(A, x, y) y') };
+}
+
+/**
+ * A point as the geometry primitives (`quadrance`, `spread`, `triangle`, the line functions)
+ * take it: a {@link Point} of values of the arithmetic, or an array `[x, y]` of such values
+ * (x = east, y = north). The primitives do not read text or numbers through `A.from` (they are
+ * the hot inner operations); make such points with {@link point}.
+ *
+ * @example
+ * ```ts
+ * import { float, quadrance } from 'quadspread';
+ * quadrance(float, [0, 0], [3, 4]);
+ * //=> 25
+ * ```
+ */
+export type PointLike<T> = Point<T> | readonly [x: T, y: T];
+
+/** A {@link PointLike} as a {@link Point}: an array `[x, y]` becomes `{ x, y }`. @internal */
+export function asPoint<T>(P: PointLike<T>): Point<T> {
+  return Array.isArray(P)
+    ? { x: (P as readonly [T, T])[0], y: (P as readonly [T, T])[1] }
+    : (P as Point<T>);
 }

@@ -3,10 +3,10 @@
  *
  * @module geometry
  */
-import type { Arithmetic } from '../arithmetic/types.js';
-import type { Point } from './point.js';
-import { finiteResult, checkPoint } from './validate.js';
 import { checkArithmetic } from '../errors.js';
+import type { Arithmetic } from '../arithmetic/types.js';
+import { asPoint, type PointLike } from './point.js';
+import { finiteResult, checkPoint } from './validate.js';
 
 /**
  * The quadrance Q(P, Q) = (x₂ − x₁)² + (y₂ − y₁)²: the squared distance between two
@@ -26,13 +26,15 @@ import { checkArithmetic } from '../errors.js';
  * //=> '25'
  * ```
  */
-export function quadrance<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): T {
+export function quadrance<T>(A: Arithmetic<T>, P: PointLike<T>, Q: PointLike<T>): T {
   checkArithmetic(A, 'quadrance');
-  checkPoint(A, P, 'quadrance(P)');
-  checkPoint(A, Q, 'quadrance(Q)');
+  const Pp = asPoint(P);
+  const Qp = asPoint(Q);
+  checkPoint(A, Pp, 'quadrance(P)');
+  checkPoint(A, Qp, 'quadrance(Q)');
   // The square of the Euclidean distance, by Pythagoras' theorem (Euclid, Elements I.47).
-  const dx = A.sub(Q.x, P.x);
-  const dy = A.sub(Q.y, P.y);
+  const dx = A.sub(Qp.x, Pp.x);
+  const dy = A.sub(Qp.y, Pp.y);
   return finiteResult(A.add(A.mul(dx, dx), A.mul(dy, dy)), 'quadrance(A, P, Q)');
 }
 
@@ -51,8 +53,9 @@ export function quadrance<T>(A: Arithmetic<T>, P: Point<T>, Q: Point<T>): T {
  * //=> 5
  * ```
  */
-export function vectorQuadrance<T>(A: Arithmetic<T>, v: Point<T>): T {
+export function vectorQuadrance<T>(A: Arithmetic<T>, v: PointLike<T>): T {
   checkArithmetic(A, 'vectorQuadrance');
-  checkPoint(A, v, 'vectorQuadrance(v)');
-  return finiteResult(A.add(A.mul(v.x, v.x), A.mul(v.y, v.y)), 'vectorQuadrance(A, v)');
+  const vp = asPoint(v);
+  checkPoint(A, vp, 'vectorQuadrance(v)');
+  return finiteResult(A.add(A.mul(vp.x, vp.x), A.mul(vp.y, vp.y)), 'vectorQuadrance(A, v)');
 }

@@ -5,7 +5,7 @@
  */
 import type { Arithmetic } from '../arithmetic/types.js';
 import { show, coincidentPoints, checkArithmetic } from '../errors.js';
-import type { Point } from './point.js';
+import { asPoint, type Point, type PointLike } from './point.js';
 import { atMostOne, checkPoint } from './validate.js';
 
 /**
@@ -62,21 +62,24 @@ function zero<T>(A: Arithmetic<T>, where: string, arg: string, P: Point<T> | und
  * //=> '9/25'
  * ```
  */
-export function spread<T>(A: Arithmetic<T>, V: Point<T>, P: Point<T>, Q: Point<T>): T {
+export function spread<T>(A: Arithmetic<T>, V: PointLike<T>, P: PointLike<T>, Q: PointLike<T>): T {
   checkArithmetic(A, 'spread');
-  checkPoint(A, V, 'spread(V)');
-  checkPoint(A, P, 'spread(P)');
-  checkPoint(A, Q, 'spread(Q)');
+  const Vp = asPoint(V);
+  const Pp = asPoint(P);
+  const Qp = asPoint(Q);
+  checkPoint(A, Vp, 'spread(V)');
+  checkPoint(A, Pp, 'spread(P)');
+  checkPoint(A, Qp, 'spread(Q)');
   return ratio(
     A,
-    A.sub(P.x, V.x),
-    A.sub(P.y, V.y),
-    A.sub(Q.x, V.x),
-    A.sub(Q.y, V.y),
+    A.sub(Pp.x, Vp.x),
+    A.sub(Pp.y, Vp.y),
+    A.sub(Qp.x, Vp.x),
+    A.sub(Qp.y, Vp.y),
     false,
     'spread(A, V, P, Q)',
-    P,
-    Q,
+    Pp,
+    Qp,
   );
 }
 
@@ -99,21 +102,24 @@ export function spread<T>(A: Arithmetic<T>, V: Point<T>, P: Point<T>, Q: Point<T
  * //=> '16/25'
  * ```
  */
-export function cross<T>(A: Arithmetic<T>, V: Point<T>, P: Point<T>, Q: Point<T>): T {
+export function cross<T>(A: Arithmetic<T>, V: PointLike<T>, P: PointLike<T>, Q: PointLike<T>): T {
   checkArithmetic(A, 'cross');
-  checkPoint(A, V, 'cross(V)');
-  checkPoint(A, P, 'cross(P)');
-  checkPoint(A, Q, 'cross(Q)');
+  const Vp = asPoint(V);
+  const Pp = asPoint(P);
+  const Qp = asPoint(Q);
+  checkPoint(A, Vp, 'cross(V)');
+  checkPoint(A, Pp, 'cross(P)');
+  checkPoint(A, Qp, 'cross(Q)');
   return ratio(
     A,
-    A.sub(P.x, V.x),
-    A.sub(P.y, V.y),
-    A.sub(Q.x, V.x),
-    A.sub(Q.y, V.y),
+    A.sub(Pp.x, Vp.x),
+    A.sub(Pp.y, Vp.y),
+    A.sub(Qp.x, Vp.x),
+    A.sub(Qp.y, Vp.y),
     true,
     'cross(A, V, P, Q)',
-    P,
-    Q,
+    Pp,
+    Qp,
   );
 }
 
@@ -133,9 +139,11 @@ export function cross<T>(A: Arithmetic<T>, V: Point<T>, P: Point<T>, Q: Point<T>
  * //=> '1/2'
  * ```
  */
-export function spreadOfVectors<T>(A: Arithmetic<T>, u: Point<T>, v: Point<T>): T {
+export function spreadOfVectors<T>(A: Arithmetic<T>, u: PointLike<T>, v: PointLike<T>): T {
   checkArithmetic(A, 'spreadOfVectors');
-  checkPoint(A, u, 'spreadOfVectors(u)');
-  checkPoint(A, v, 'spreadOfVectors(v)');
-  return ratio(A, u.x, u.y, v.x, v.y, false, 'spreadOfVectors(A, u, v)', undefined, undefined);
+  const up = asPoint(u);
+  const vp = asPoint(v);
+  checkPoint(A, up, 'spreadOfVectors(u)');
+  checkPoint(A, vp, 'spreadOfVectors(v)');
+  return ratio(A, up.x, up.y, vp.x, vp.y, false, 'spreadOfVectors(A, u, v)', undefined, undefined);
 }

@@ -6,7 +6,7 @@
 import { checkPoint } from './validate.js';
 import type { Arithmetic } from '../arithmetic/types.js';
 import { QuadspreadError, show, coincidentPoints, checkArithmetic } from '../errors.js';
-import type { Point } from './point.js';
+import { asPoint, type Point, type PointLike } from './point.js';
 
 /**
  * The measures of a triangle A1 A2 A3: `Q1 = Q(A2, A3)` is the quadrance opposite A1,
@@ -62,34 +62,37 @@ export interface Triangle<V> {
  */
 export function triangle<T>(
   A: Arithmetic<T>,
-  A1: Point<T>,
-  A2: Point<T>,
-  A3: Point<T>,
+  A1: PointLike<T>,
+  A2: PointLike<T>,
+  A3: PointLike<T>,
 ): Triangle<T> {
   checkArithmetic(A, 'triangle');
-  checkPoint(A, A1, 'triangle(A1)');
-  checkPoint(A, A2, 'triangle(A2)');
-  checkPoint(A, A3, 'triangle(A3)');
+  const A1p = asPoint(A1);
+  const A2p = asPoint(A2);
+  const A3p = asPoint(A3);
+  checkPoint(A, A1p, 'triangle(A1)');
+  checkPoint(A, A2p, 'triangle(A2)');
+  checkPoint(A, A3p, 'triangle(A3)');
   // Performance (docs/performance.md): an arithmetic's fused kernel, where it has one, computes
   // the same measures at once (exactly equal in rational; rounded once in decimal) and returns
   // undefined for degenerate input, which the generic code below reports.
-  const fused = A.kernels?.triangle?.(A1.x, A1.y, A2.x, A2.y, A3.x, A3.y);
+  const fused = A.kernels?.triangle?.(A1p.x, A1p.y, A2p.x, A2p.y, A3p.x, A3p.y);
   if (fused !== undefined) return fused;
-  const ux = A.sub(A2.x, A1.x); // A1 → A2
-  const uy = A.sub(A2.y, A1.y);
-  const vx = A.sub(A3.x, A1.x); // A1 → A3
-  const vy = A.sub(A3.y, A1.y);
-  const wx = A.sub(A3.x, A2.x); // A2 → A3
-  const wy = A.sub(A3.y, A2.y);
+  const ux = A.sub(A2p.x, A1p.x); // A1 → A2
+  const uy = A.sub(A2p.y, A1p.y);
+  const vx = A.sub(A3p.x, A1p.x); // A1 → A3
+  const vy = A.sub(A3p.y, A1p.y);
+  const wx = A.sub(A3p.x, A2p.x); // A2 → A3
+  const wy = A.sub(A3p.y, A2p.y);
   const Q1 = A.add(A.mul(wx, wx), A.mul(wy, wy));
   const Q2 = A.add(A.mul(vx, vx), A.mul(vy, vy));
   const Q3 = A.add(A.mul(ux, ux), A.mul(uy, uy));
-  if (A.isZero(Q1) || A.isZero(Q2) || A.isZero(Q3)) coincident(A, A1, A2, A3, Q1, Q2);
+  if (A.isZero(Q1) || A.isZero(Q2) || A.isZero(Q3)) coincident(A, A1p, A2p, A3p, Q1, Q2);
   // Spread from the cross product, s = (u × v)²/(Q(u) Q(v)) = sin² of the angle (|u × v| = |u||v|·sin θ; derived);
   // quadrea = 16·area² = 4·(u × v)² since |u × v| = 2·area (common practice).
   const D = A.sub(A.mul(ux, vy), A.mul(uy, vx));
   const D2 = A.mul(D, D);
-  if (A.isZero(D2)) collinear(A, A1);
+  if (A.isZero(D2)) collinear(A, A1p);
   // Rounding (float, decimal) can push a spread of a right angle just above 1: clamp it.
   const one = A.one;
   let s1 = A.div(D2, A.mul(Q2, Q3));

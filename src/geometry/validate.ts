@@ -5,6 +5,7 @@
  * @module geometry
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
+import type { Point } from './point.js';
 import {
   QuadspreadError,
   show,
@@ -131,7 +132,7 @@ export function checkPoint<T>(A: Arithmetic<T>, P: unknown, where: string): void
   if (typeof P !== 'object' || P === null || !A.is((P as { x: T }).x) || !A.is((P as { y: T }).y))
     throw invalidNumber(
       where,
-      `${show(P)} is not a point of ${A.name}: make it with point(${A.name}, x, y)`,
+      `${show(P)} is not a point of ${A.name}: { x, y } or [x, y] of its values, as point(${A.name}, x, y) makes`,
     );
 }
 
@@ -148,4 +149,28 @@ export function checkLine<T>(A: Arithmetic<T>, l: unknown, where: string): void 
       where,
       `${show(l)} is not a line of ${A.name}: make it with line(${A.name}, a, b, c) or lineThrough`,
     );
+}
+
+/**
+ * Reads a plane point into the arithmetic: `{ x, y }` (x = east, y = north) or an array
+ * `[x, y]` in that order. Errors name `where` and the coordinate (`.x`, `[0]`, …).
+ * @internal
+ */
+export function readPoint<T>(A: Arithmetic<T, boolean>, p: unknown, where: string): Point<T> {
+  if (Array.isArray(p)) {
+    if (p.length !== 2 || !(0 in p) || !(1 in p))
+      throw invalidArgument(
+        where,
+        `an array point must be [x, y] (x = east, y = north), not ${p.length} entries`,
+      );
+    return { x: readNumber(A, p[0], where, '[0]'), y: readNumber(A, p[1], where, '[1]') };
+  }
+  if (p === null || typeof p !== 'object' || !('x' in p) || !('y' in p)) {
+    throw invalidArgument(
+      where,
+      `${show(p)} is not a point { x, y } or [x, y] (x = east, y = north)`,
+    );
+  }
+  const q = p as { x: Numeric<T>; y: Numeric<T> };
+  return { x: readNumber(A, q.x, where, '.x'), y: readNumber(A, q.y, where, '.y') };
 }
