@@ -127,12 +127,13 @@ export const float: FloatArithmetic = /* @__PURE__ */ Object.freeze<FloatArithme
     return Math.atan2(y, x);
   },
   exp(x) {
-    const r = Math.exp(x);
+    const r = Math.exp(ok1('exp', x));
     if (r === Infinity) throw notFinite('float.exp(x)', `e^${show(x)} overflows`);
     return r;
   },
   log(x) {
-    if (!(x > 0)) throw noRealSolution('float.log(x)', `x = ${show(x)} is not positive`);
+    if (!(ok1('log', x) > 0))
+      throw noRealSolution('float.log(x)', `x = ${show(x)} is not positive`);
     return Math.log(x);
   },
 });

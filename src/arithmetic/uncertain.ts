@@ -234,6 +234,8 @@ const OPERATIONS = [
   'sin',
   'cos',
   'atan2',
+  'exp',
+  'log',
 ] as const;
 
 /**
@@ -245,7 +247,8 @@ function withOperandChecks<T, E extends boolean>(
 ): UncertainArithmetic<T, E> {
   const out = { ...U } as Record<string, unknown>;
   for (const op of OPERATIONS) {
-    const f = U[op] as (...a: unknown[]) => unknown;
+    const f = U[op] as ((...a: unknown[]) => unknown) | undefined;
+    if (typeof f !== 'function') continue;
     const arity = op === 'toPrecision' ? 1 : f.length;
     out[op] = (...args: unknown[]) => {
       // An Uncertain of this kind; its value is the base arithmetic's to check (an overflow met

@@ -4,7 +4,7 @@
  *
  * @module field
  */
-import { QuadspreadError, invalidArgument, show } from '../errors.js';
+import { QuadspreadError, invalidArgument, show, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { AngleUnit } from '../readings/angle.js';
 import { readNumber } from '../geometry/validate.js';
@@ -156,6 +156,7 @@ const MAX_STEPS = 30;
  * ```
  */
 export function freeStation<T>(A: Arithmetic<T>, input: FreeStationInput<T>): FreeStation<T> {
+  checkArithmetic(A, 'freeStation');
   const w = 'freeStation(input)';
   checkRecord(input, w);
   const unit = readUnit(input.unit, `${w}.unit`);

@@ -95,13 +95,19 @@ export function readLatitude<T>(A: Arithmetic<T>, lat: Numeric<T>, where: string
 
 /**
  * @internal A longitude in degrees from decimal degrees or DMS text, within ±360° (both the
- * ±180° and the 0°–360° conventions); beyond, it is refused rather than wrapped without a word.
+ * ±180° and the 0°–360° conventions); beyond, it is refused rather than wrapped without a word
+ * (unless `limited` is false: the projections reduce longitudes as they document).
  */
-export function readLongitude<T>(A: Arithmetic<T>, lon: Numeric<T>, where: string): T {
+export function readLongitude<T>(
+  A: Arithmetic<T>,
+  lon: Numeric<T>,
+  where: string,
+  limited = true,
+): T {
   if (lon === undefined || lon === null) throw invalidAngle(where, 'the longitude is missing');
   checkHemisphere(lon, 'EW', where, 'longitude');
   const v = readAngle(A, lon, where);
-  if (A.cmp(A.abs(v), A.from(360)) > 0)
+  if (limited && A.cmp(A.abs(v), A.from(360)) > 0)
     throw invalidAngle(where, `${shownInput(A, lon, v)} is beyond ±360° for a longitude`);
   return v;
 }
