@@ -83,6 +83,8 @@ export const ERROR_CODES = {
   SINGULAR_NETWORK:
     'Observations that do not determine a point (weak geometry): the normal equations are singular.',
   TOO_FEW_OBSERVATIONS: 'Fewer observations than the computation needs.',
+  NO_APPROXIMATION:
+    'No approximate coordinates can be found for a point from the observations: give them.',
   // Job runner
   INVALID_JOB: 'A job file that is not valid JSON or breaks the job schema.',
 } as const;

@@ -161,7 +161,7 @@ export function makeNaiveBig(Big) {
 }
 
 export function build(lib, cases) {
-  const { g, F, R, D, Big } = lib;
+  const { g, F, R, D, Big, DecimalJs } = lib;
   const as = (from) =>
     cases.map((c) => ({ chainages: c.chainages.map(from), vertical: c.vertical.map(from) }));
   const fl = as((s) => F.arithmetic.from(s));
@@ -174,6 +174,13 @@ export function build(lib, cases) {
     vertical: de[i].vertical.map((v) => new Big(v.toString())),
   }));
   const naiveBig = makeNaiveBig(Big);
+  // decimal.js reads the decimal(34) value of each reading too (every operation to 34 digits).
+  const dj = cases.map((c, i) => ({
+    chainages: c.chainages.map((s) => new DecimalJs(s)),
+    vertical: de[i].vertical.map((v) => new DecimalJs(v.toString())),
+  }));
+  // Compiled from its own source text, so that it shares no type feedback with big.js's copy.
+  const naiveDecimalJs = new Function(`return ${makeNaiveBig.toString()}`)()(DecimalJs);
   return {
     items: cases.length,
     float: {
@@ -195,6 +202,10 @@ export function build(lib, cases) {
     decimal: {
       ours: loop1(de, D.heightFromInlineReadings, (r) => r.H.c[0] > 0),
       naive: loop1(bi, naiveBig, (r) => r.H.c[0] > 0),
+    },
+    decimalJs: {
+      ours: loop1(de, D.heightFromInlineReadings, (r) => r.H.c[0] > 0),
+      naive: loop1(dj, naiveDecimalJs, (r) => !r.H.isZero()),
     },
     pollute(arithmetics) {
       let n = 0;

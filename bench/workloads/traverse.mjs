@@ -212,7 +212,7 @@ export function naiveBig(inp) {
 }
 
 export function build(lib, cases) {
-  const { g, F, R, D, Big } = lib;
+  const { g, F, R, D, Big, DecimalJs } = lib;
   const as = (from) =>
     cases.map((t) => ({
       start: { x: from(t.start.x), y: from(t.start.y) },
@@ -227,6 +227,9 @@ export function build(lib, cases) {
   const fr = as((s) => new Fraction(s));
   const de = as((s) => D.arithmetic.from(s));
   const bi = as((s) => new Big(s));
+  const dj = as((s) => new DecimalJs(s));
+  // naiveBig compiled again from its own source text (no type feedback shared with big.js's).
+  const naiveDecimalJs = new Function(`return ${naiveBig.toString()}`)();
   const keyF = (r) => r.closure.east + r.closure.north + r.adjusted.length > 0;
   return {
     items: cases.length,
@@ -242,6 +245,10 @@ export function build(lib, cases) {
     decimal: {
       ours: loop1(de, D.traverse, (r) => r.adjusted.length > 0),
       naive: loop1(bi, naiveBig, (r) => r.adjusted.length > 0),
+    },
+    decimalJs: {
+      ours: loop1(de, D.traverse, (r) => r.adjusted.length > 0),
+      naive: loop1(dj, naiveDecimalJs, (r) => r.adjusted.length > 0),
     },
     pollute(arithmetics) {
       let n = 0;

@@ -110,6 +110,32 @@ export function naiveBig(P1, P2, P3) {
   };
 }
 
+/** The same with decimal.js, plainly (every operation to 34 significant digits, ties to even). */
+export function naiveDecimalJs(P1, P2, P3) {
+  const ux = P2.x.minus(P1.x),
+    uy = P2.y.minus(P1.y);
+  const vx = P3.x.minus(P1.x),
+    vy = P3.y.minus(P1.y);
+  const wx = P3.x.minus(P2.x),
+    wy = P3.y.minus(P2.y);
+  const Q1 = wx.times(wx).plus(wy.times(wy)),
+    Q2 = vx.times(vx).plus(vy.times(vy)),
+    Q3 = ux.times(ux).plus(uy.times(uy));
+  if (Q1.isZero() || Q2.isZero() || Q3.isZero()) throw new Error('coincident');
+  const D = ux.times(vy).minus(uy.times(vx));
+  const D2 = D.times(D);
+  if (D2.isZero()) throw new Error('collinear');
+  return {
+    Q1,
+    Q2,
+    Q3,
+    s1: D2.div(Q2.times(Q3)),
+    s2: D2.div(Q1.times(Q3)),
+    s3: D2.div(Q1.times(Q2)),
+    quadrea: D2.times(4),
+  };
+}
+
 /** Bare BigInt work of the same formulas on integer coordinates (no normalisation): the floor. */
 export function bigintFloor(X1, Y1, X2, Y2, X3, Y3) {
   const ux = X2 - X1,
@@ -131,7 +157,7 @@ export function bigintFloor(X1, Y1, X2, Y2, X3, Y3) {
  * Each side is a function running all cases once and returning a checksum.
  */
 export function build(lib, cases) {
-  const { g, F, R, D, Fraction, Big } = lib;
+  const { g, F, R, D, Fraction, Big, DecimalJs } = lib;
   // The bound entries' own functions, called directly (no shared wrapper closure: its call
   // site's feedback would mix the arithmetics).
   const tri = (entry) => entry.triangle;
@@ -142,6 +168,7 @@ export function build(lib, cases) {
   const fr = pts((s) => new Fraction(s));
   const de = pts((s) => D.arithmetic.from(s));
   const bi = pts((s) => new Big(s));
+  const dj = pts((s) => new DecimalJs(s));
   const loop = loop3;
   const fTri = tri(F);
   const gTri = (a, b, c) => g.triangle(g.float, a, b, c);
@@ -165,6 +192,10 @@ export function build(lib, cases) {
     decimal: {
       ours: loop(de, dTri, (r) => r.s1.c[0] > 0),
       naive: loop(bi, naiveBig, (r) => r.s1.c[0] > 0),
+    },
+    decimalJs: {
+      ours: loop(de, dTri, (r) => r.s1.c[0] > 0),
+      naive: loop(dj, naiveDecimalJs, (r) => !r.s1.isZero()),
     },
     // For the pollution pass: every arithmetic through the generic entry's triangle.
     pollute(arithmetics) {

@@ -22,3 +22,24 @@ export type {
   AdjustedLevelObservation,
   LevellingAdjustment,
 } from './levelling.js';
+export { adjustNetwork } from './network.js';
+export type {
+  NetworkPointInput,
+  DistanceSigma,
+  NetworkObservationInput,
+  NetworkOptions,
+  NetworkInput,
+  ErrorEllipse,
+  ConfidenceEllipse,
+  AdjustedPoint,
+  AdjustedNetworkObservation,
+  RelativeEllipse,
+  NetworkAdjustment,
+} from './network.js';
+export { fitSimilarity } from './fit-similarity.js';
+export type { SimilarityFit } from './fit-similarity.js';
+export { fitAffine } from './fit-affine.js';
+export type { AffineFit } from './fit-affine.js';
+export { fitInclinedPlane } from './fit-plane.js';
+export type { InclinedPlaneFit } from './fit-plane.js';
+export type { CommonPoint } from './fit-common.js';

@@ -7,13 +7,12 @@
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { QuadspreadError, show, invalidArgument, checkArithmetic } from '../errors.js';
 import { readNumber, expectObject } from '../geometry/validate.js';
-import { sqrtOf } from '../geometry/surd.js';
 import type { Root } from '../geometry/surd.js';
 import { readArray } from '../cogo/internal.js';
 import { solveGroups, observationStatistics } from './least-squares.js';
 import type { ObservationGroup } from './least-squares.js';
 import { solveNormal } from './normal-equations.js';
-import { readTestOptions, assess, nonNegative } from './testing.js';
+import { readTestOptions, assess, sigmaRoot } from './testing.js';
 import type {
   TestOptions,
   GlobalTest,
@@ -458,7 +457,7 @@ function adjustOnce<T, E extends boolean>(
     const isFixed = innerSet === undefined && isHeld[i] === 1;
     heights[P.names[i]!] = {
       value: value[i]!,
-      sigma: sqrtOf(A, A.mul(a.factor, nonNegative(A, qdiag[i]!))),
+      sigma: sigmaRoot(A, a.factor, qdiag[i]!),
       held: isFixed,
     };
   }

@@ -198,9 +198,9 @@ export function assess<T, E extends boolean>(
     // w = v/(σ0·√q_vv) (Baarda 1968); τ = v/(σ̂0·√q_vv) (Pope 1976).
     const w2 = tested ? A.div(A.mul(s.v, s.v), A.mul(testScale!, s.qvv)) : undefined;
     return {
-      sigmaObserved: sqrtOf(A, A.mul(factor, s.qll)),
-      sigmaAdjusted: sqrtOf(A, A.mul(factor, nonNegative(A, s.qadj))),
-      sigmaResidual: sqrtOf(A, A.mul(factor, nonNegative(A, s.qvv))),
+      sigmaObserved: sigmaRoot(A, factor, s.qll),
+      sigmaAdjusted: sigmaRoot(A, factor, s.qadj),
+      sigmaResidual: sigmaRoot(A, factor, s.qvv),
       redundancy: s.redundancy,
       standardized: w2 === undefined ? undefined : signedRoot(A, A.sign(s.v), w2),
       // MDB ∇ = σ0·√(q_ll·λ0/rᵢ) (Baarda 1968).
@@ -219,6 +219,16 @@ export function assess<T, E extends boolean>(
     localTest,
     observations,
   };
+}
+
+/**
+ * √(f·q) as a root: exactly 0 (with no dependence on the inputs, so that an uncertain
+ * arithmetic does not differentiate √ at 0) when the cofactor q is 0 or rounded below it.
+ * @internal
+ */
+export function sigmaRoot<T, E extends boolean>(A: Arithmetic<T, E>, f: T, q: T): Root<T, E> {
+  const v = nonNegative(A, q);
+  return A.isZero(v) ? sqrtOf(A, A.zero) : sqrtOf(A, A.mul(f, v));
 }
 
 /** x, or 0 when rounding made a cofactor that must be ≥ 0 slightly negative. @internal */

@@ -149,7 +149,7 @@ export const DEMO_JOB = {
       name: 'Harrowmere bench-mark run HF1 to HF2',
       start: 112.406,
       close: 114.023,
-      order: 'third',
+      c: 12,
       sights: [
         { station: 'HF1', bs: 1.652 },
         { station: 'TP1', fs: 0.873, bs: 2.114, distance: 85 },

@@ -15,6 +15,8 @@ export const EXIT = {
   INVALID: 2,
   /** A computation has no solution (inconsistent readings, a degenerate figure, …). */
   UNSOLVABLE: 3,
+  /** With `--fail-on-check`: the job ran and its report was written, but a check failed. */
+  CHECK_FAILED: 4,
 } as const;
 
 /** Longest run of digits a message shows whole; longer ones (exact values of absurd inputs) are cut. */

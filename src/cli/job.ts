@@ -18,8 +18,11 @@ import {
 import type { Arithmetic, LengthUnit, Uncertain } from '../index.js';
 import { show } from '../errors.js';
 import { JobInvalid, JobInvalidMany, JobUnsolvable } from './failure.js';
+import { DEFAULT_DISPLAY, readDisplay } from './display.js';
+import type { QuantityKind } from './display.js';
+import { present, presentCheck, presentTable } from './present.js';
 import { CAUTION } from './report.js';
-import type { BudgetTerm, Quantity, Report, TaskReport } from './report.js';
+import type { BudgetTerm, Quantity, Report, ReportHeader, TaskReport } from './report.js';
 import { findDuplicateKey } from './json-keys.js';
 import { jobSchema } from './schema.js';
 import type { Env, JobContext, JobPoint, Outcome, TaskKind, Value } from './task.js';
@@ -37,6 +40,12 @@ export interface RunOptions {
   digits: number;
   /** Where the job came from, for the report header. */
   source: string;
+  /** Display settings from the command line (`--display`), over the job's `"display"`. */
+  display?: Record<string, string>;
+  /** Header fields from the command line, over the job's `"report"`. */
+  header?: { date?: string; computedBy?: string; checkedBy?: string };
+  /** The program's version, for the header. */
+  version?: string;
 }
 
 /** The arithmetic object for a name and a number of digits. */
@@ -91,9 +100,19 @@ function reasonOf(e: QuadspreadError): string {
 
 const SIGMA_DIGITS = 2;
 
+type RawQ<V> = {
+  name: string;
+  label: string;
+  unit: string;
+  value: Value<V>;
+  approx?: boolean;
+  kind?: QuantityKind;
+  internal?: boolean;
+};
+
 function formatQuantity<V>(
   A: Arithmetic<V, boolean>,
-  q: { name: string; label: string; unit: string; value: Value<V>; approx?: boolean },
+  q: RawQ<V>,
   digits: number,
   approx0: boolean,
 ): Quantity {
@@ -134,9 +153,31 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
     );
   const j = job as {
     title?: string;
+    display?: Record<string, unknown>;
+    report?: {
+      date?: string;
+      computedBy?: string;
+      checkedBy?: string;
+      datum?: string;
+      reference?: string;
+    };
     units?: { length?: LengthUnit };
     points?: Record<string, Record<string, unknown>>;
     tasks: Record<string, unknown>[];
+  };
+  const rules = readDisplay(
+    options.display ?? {},
+    readDisplay(j.display ?? {}, DEFAULT_DISPLAY, 'display'),
+    '--display',
+  );
+  const given = { ...(j.report ?? {}), ...(options.header ?? {}) };
+  const header: ReportHeader = {
+    date: given.date ?? new Date().toISOString().slice(0, 10),
+    program: `quadspread ${options.version ?? ''}`.trim(),
+    ...(j.report?.datum !== undefined ? { datum: j.report.datum } : {}),
+    ...(given.computedBy !== undefined ? { computedBy: given.computedBy } : {}),
+    ...(given.checkedBy !== undefined ? { checkedBy: given.checkedBy } : {}),
+    ...(j.report?.reference !== undefined ? { reference: j.report.reference } : {}),
   };
   const unit: LengthUnit = j.units?.length ?? 'm';
   const unitName = LENGTH_UNIT_NAMES[unit];
@@ -174,6 +215,7 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
   const A = arithmeticFor(options.arithmetic, options.digits);
   const U = uncertain(float);
   const tasks: TaskReport[] = [];
+  let anyTranscendental = false;
   prepared.forEach((p, i) => {
     const task = j.tasks[i]!;
     const approx = p.inputs.some((x) => x.angle);
@@ -301,27 +343,17 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
           f.budget = un.budget!;
           if (un.correlations) f.correlations = un.correlations;
         }
-        return f;
+        return present(A, q, f, rules);
       }),
-      checks: base.checks.map((c) => {
-        const f = formatQuantity(A, c, Math.min(options.digits, 6), true);
-        return {
-          name: c.name,
-          label: c.label,
-          value: f.value,
-          tolerance: c.tolerance,
-          unit: c.unit,
-          pass: c.pass,
-        };
-      }),
+      checks: base.checks.map((c) => presentCheck(A, c, rules, options.digits)),
       notes: [...base.notes, ...(uncertainNote ? [uncertainNote] : [])],
+      ...(base.tables && base.tables.length > 0
+        ? { tables: base.tables.map((t) => presentTable(A, t, rules)) }
+        : {}),
       ...(base.sketch ? { sketch: base.sketch } : {}),
     };
-    if (A.exact && base.results.some((q) => uncertainties.get(q.name)?.dependsOnAngle ?? approx)) {
-      report.notes.push(
-        'Results that depend on angle readings have no exact form: the spread of an angle is transcendental, so in rational it is a fraction good to about 1e-40 relative (docs/readings.md), not an exact value.',
-      );
-    }
+    if (A.exact && base.results.some((q) => uncertainties.get(q.name)?.dependsOnAngle ?? approx))
+      anyTranscendental = true;
     tasks.push(report);
   });
   const all = tasks.flatMap((t) => t.checks);
@@ -334,6 +366,13 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
     arithmetic: A.name,
     digits: options.digits,
     lengthUnit: unitName,
+    header,
+    display: rules,
+    notes: anyTranscendental
+      ? [
+          'Results that depend on angle readings have no exact form: the spread of an angle is transcendental, so in rational it is a fraction good to about 1e-40 relative (docs/readings.md), not an exact value.',
+        ]
+      : [],
     tasks,
     summary: { checks: all.length, passed, failed: all.length - passed },
     caution: CAUTION,

@@ -16,6 +16,8 @@ import { visibleControls } from './escape.js';
 import { renderJson } from './render-json.js';
 import { renderMarkdown } from './render-markdown.js';
 import { renderText } from './render-text.js';
+import { renderHtml } from './render-html.js';
+import { parseDisplayOption } from './display.js';
 import { REPORT_SCHEMA } from './report-schema.js';
 import { jobSchema } from './schema.js';
 import { renderSketch } from './sketch.js';
@@ -28,6 +30,8 @@ export interface Io {
   stderr: (text: string) => void;
   /** Whether stderr is a terminal (the batch progress indicator shows only then). */
   stderrIsTTY: boolean;
+  /** The standard input as text, for `run -` (default: the process's standard input). */
+  stdin?: () => Promise<string>;
 }
 
 /**
@@ -39,9 +43,23 @@ export const VERSION: string = version;
 interface ReportOptions {
   arithmetic: ArithmeticName;
   digits: number;
-  format: 'text' | 'markdown' | 'json';
+  format: 'text' | 'markdown' | 'json' | 'html';
   sketch?: string;
   out?: string;
+  display?: string;
+  detail?: boolean;
+  failOnCheck?: boolean;
+  date?: string;
+  computedBy?: string;
+  checkedBy?: string;
+}
+
+function dateOption(value: string): string {
+  const m = /^(\d{4})-(\d{2})-(\d{2})$/.exec(value);
+  const d = m ? new Date(`${value}T00:00:00Z`) : undefined;
+  if (!d || Number.isNaN(d.getTime()) || d.toISOString().slice(0, 10) !== value)
+    throw new InvalidArgumentError(`${JSON.stringify(value)} is not a date YYYY-MM-DD`);
+  return value;
 }
 
 function digitsOption(value: string): number {
@@ -68,14 +86,30 @@ function addReportOptions(cmd: Command): Command {
     )
     .addOption(
       new Option('-f, --format <format>', 'report format')
-        .choices(['text', 'markdown', 'json'])
+        .choices(['text', 'markdown', 'json', 'html'])
         .default('text'),
     )
+    .option(
+      '--display <rules>',
+      'how numbers are written, e.g. lengths=4,seconds=0,bearings=quadrant (see docs/cli.md)',
+    )
+    .option('--detail', 'text and Markdown also show machine keys, exact forms and quadrances')
+    .option(
+      '--fail-on-check',
+      `exit ${EXIT.CHECK_FAILED} when a check fails (the report is still written)`,
+    )
+    .addOption(
+      new Option('--date <yyyy-mm-dd>', 'the date in the header (default: today)').argParser(
+        dateOption,
+      ),
+    )
+    .option('--computed-by <name>', 'who computed, for the header')
+    .option('--checked-by <name>', 'who checked, for the header')
     .option('-s, --sketch <file.svg>', 'also write an SVG sketch of the configuration to this file')
     .option('-o, --out <file>', 'write the report to this file instead of the standard output');
 }
 
-function report(job: unknown, source: string, o: ReportOptions, io: Io, jobFile?: string): void {
+function report(job: unknown, source: string, o: ReportOptions, io: Io, jobFile?: string): number {
   if (o.out !== undefined && o.sketch !== undefined && sameFile(o.out, o.sketch)) {
     throw new JobInvalid(
       '--sketch',
@@ -94,13 +128,27 @@ function report(job: unknown, source: string, o: ReportOptions, io: Io, jobFile?
       );
     }
   }
-  const r = runJob(job, TASK_KINDS, { arithmetic: o.arithmetic, digits: o.digits, source });
+  const r = runJob(job, TASK_KINDS, {
+    arithmetic: o.arithmetic,
+    digits: o.digits,
+    source,
+    version: VERSION,
+    ...(o.display !== undefined ? { display: parseDisplayOption(o.display) } : {}),
+    header: {
+      ...(o.date !== undefined ? { date: o.date } : {}),
+      ...(o.computedBy !== undefined ? { computedBy: o.computedBy } : {}),
+      ...(o.checkedBy !== undefined ? { checkedBy: o.checkedBy } : {}),
+    },
+  });
+  const detail = { detail: o.detail === true };
   const text =
     o.format === 'json'
       ? renderJson(r)
       : o.format === 'markdown'
-        ? renderMarkdown(r)
-        : renderText(r);
+        ? renderMarkdown(r, detail)
+        : o.format === 'html'
+          ? renderHtml(r)
+          : renderText(r, detail);
   const files: { target: string; text: string }[] = [];
   if (o.out !== undefined) files.push({ target: o.out, text });
   if (o.sketch !== undefined) files.push({ target: o.sketch, text: renderSketch(r) });
@@ -108,6 +156,13 @@ function report(job: unknown, source: string, o: ReportOptions, io: Io, jobFile?
   if (o.out === undefined) io.stdout(text);
   else io.stderr(`report written to ${o.out}\n`);
   if (o.sketch !== undefined) io.stderr(`sketch written to ${o.sketch}\n`);
+  if (o.failOnCheck && r.summary.failed > 0) {
+    io.stderr(
+      `quadspread: ${r.summary.failed} of ${r.summary.checks} check${r.summary.checks === 1 ? '' : 's'} failed (--fail-on-check)\n`,
+    );
+    return EXIT.CHECK_FAILED;
+  }
+  return EXIT.OK;
 }
 
 /** Largest job file read, in bytes (a job is a page of readings, not a data set: use batch for those). */
@@ -149,8 +204,27 @@ function readText(file: string, what: string): string {
   }
 }
 
-/** Builds the commander program. */
-export function program(io: Io): Command {
+/** Reads the whole standard input (or the embedder's `io.stdin`), refusing more than MAX_JOB_BYTES. */
+async function readStdin(io: Io): Promise<string> {
+  if (io.stdin !== undefined) return io.stdin();
+  const chunks: Buffer[] = [];
+  let size = 0;
+  for await (const chunk of process.stdin as AsyncIterable<Buffer>) {
+    size += chunk.length;
+    if (size > MAX_JOB_BYTES)
+      throw new JobInvalid(
+        '',
+        `the job on the standard input is larger than ${MAX_JOB_BYTES / 1024 / 1024} MB`,
+      );
+    chunks.push(chunk);
+  }
+  return Buffer.concat(chunks)
+    .toString('utf8')
+    .replace(/^\uFEFF/, '');
+}
+
+/** Builds the commander program; `outcome.exitCode` is set by a command that ends otherwise than 0 without throwing. */
+export function program(io: Io, outcome: { exitCode: number } = { exitCode: EXIT.OK }): Command {
   const p = new Command('quadspread');
   p.description(
     'Runs survey computation jobs in rational trigonometry (quadrance and spread) and reports results, uncertainties and checks.',
@@ -170,16 +244,20 @@ export function program(io: Io): Command {
       io.stdout(JSON.stringify(DEMO_JOB, null, 2) + '\n');
       return;
     }
-    report(DEMO_JOB, 'demo', o, io);
+    outcome.exitCode = report(DEMO_JOB, 'demo', o, io);
   });
 
   addReportOptions(
     p
       .command('run')
       .description('run a job file (JSON; see docs/job-schema.json) and print its report')
-      .argument('<job.json>', 'the job file'),
-  ).action((file: string, o: ReportOptions) => {
-    report(parseJob(readText(file, 'job file')), file, o, io, file);
+      .argument('<job.json>', 'the job file; - reads the job from the standard input'),
+  ).action(async (file: string, o: ReportOptions) => {
+    if (file === '-') {
+      outcome.exitCode = report(parseJob(await readStdin(io)), 'standard input', o, io);
+      return;
+    }
+    outcome.exitCode = report(parseJob(readText(file, 'job file')), file, o, io, file);
   });
 
   p.command('batch')
@@ -223,10 +301,11 @@ export function program(io: Io): Command {
 
 /** Runs the command line with `argv` (without `node` and the script), returning the exit code. */
 export async function main(argv: string[], io: Io): Promise<number> {
-  const p = program(io);
+  const outcome = { exitCode: EXIT.OK as number };
+  const p = program(io, outcome);
   try {
     await p.parseAsync(argv, { from: 'user' });
-    return EXIT.OK;
+    return outcome.exitCode;
   } catch (e) {
     if (e instanceof CommanderError) {
       // --help and --version end with exit code 0; usage errors are bad input (2).

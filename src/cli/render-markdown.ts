@@ -3,8 +3,9 @@
  *
  * @module cli
  */
-import type { Report } from './report.js';
-import { BUDGET_SHOWN, shortExact, showExact } from './render-text.js';
+import type { Report, Table } from './report.js';
+import { BUDGET_SHOWN, rulesLine, shortExact, showExact } from './render-text.js';
+import type { TextOptions } from './render-text.js';
 import { markdownCode, markdownText } from './escape.js';
 
 /** What ± σ and the budget column mean, said once at the top of a report that has them. */
@@ -23,14 +24,38 @@ function withUnit(value: string, unit: string): string {
   return unit === '' ? value : `${value} ${unit}`;
 }
 
-/** The report as Markdown: a heading per task, a table of results, a table of checks. */
-export function renderMarkdown(report: Report): string {
+function tableLines(t: Table): string[] {
+  const out = ['', `**${cell(t.title)}**`, ''];
+  out.push(`| ${t.columns.map((c) => cell(c.label)).join(' | ')} |`);
+  out.push(`|${t.columns.map((c) => (c.align === 'right' ? '---:' : '---')).join('|')}|`);
+  for (const r of t.rows) out.push(`| ${r.map(cell).join(' | ')} |`);
+  for (const n of t.notes ?? []) out.push('', cell(n));
+  return out;
+}
+
+/** The report as Markdown: a heading per task, a table of results, its tables, a table of checks. */
+export function renderMarkdown(report: Report, o: TextOptions = {}): string {
   const out: string[] = [];
+  const h = report.header;
   out.push(`# ${markdownText(report.title)}`);
   out.push('');
   out.push(
-    `Source: ${markdownCode(report.source)} · arithmetic: \`${report.arithmetic}\` · ${report.digits} significant digits · lengths in ${report.lengthUnit}`,
+    [
+      ...(h ? [`Date: ${h.date}`, h.program] : []),
+      `arithmetic: \`${report.arithmetic}\``,
+      `lengths in ${report.lengthUnit}`,
+      ...(h?.datum !== undefined ? [`datum/grid: ${cell(h.datum)}`] : []),
+      ...(h?.reference !== undefined ? [`reference: ${cell(h.reference)}`] : []),
+      `source: ${markdownCode(report.source)}`,
+    ].join(' · '),
   );
+  if (h)
+    out.push(
+      '',
+      `Computed by: ${cell(h.computedBy ?? '____________')} · checked by: ${cell(h.checkedBy ?? '____________')}`,
+    );
+  const rules = rulesLine(report);
+  if (rules) out.push('', rules);
   if (report.tasks.some((t) => t.results.some((q) => q.sigma !== undefined)))
     out.push('', MARKDOWN_LEGEND);
   for (const t of report.tasks) {
@@ -40,9 +65,14 @@ export function renderMarkdown(report: Report): string {
     out.push(markdownText(t.summary));
     if (t.results.length > 0) {
       out.push('');
-      out.push('| quantity | value | ± σ | exact form | budget (share of variance) |');
-      out.push('|---|---|---|---|---|');
+      out.push(
+        o.detail
+          ? '| quantity | value | ± σ | exact form | budget (share of variance) |'
+          : '| quantity | value | ± σ | budget (share of variance) |',
+      );
+      out.push(o.detail ? '|---|---:|---:|---|---|' : '|---|---:|---:|---|');
       for (const q of t.results) {
+        if (q.internal && !o.detail) continue;
         const all = q.budget ?? [];
         const rest = all.slice(BUDGET_SHOWN);
         const budget = [
@@ -55,19 +85,24 @@ export function renderMarkdown(report: Report): string {
           ),
         ].join(', ');
         const exact = showExact(q) ? codeCell(shortExact(q.exact)) : '';
+        const key = o.detail ? ` (${codeCell(q.name)})` : '';
+        const value = q.display ?? withUnit(q.value, q.unit);
+        const sigma = q.sigma !== undefined ? (q.displaySigma ?? withUnit(q.sigma, q.unit)) : '';
         out.push(
-          `| ${cell(q.label)} (${codeCell(q.name)}) | ${cell(withUnit(q.value, q.unit))} | ${q.sigma !== undefined ? cell(withUnit(q.sigma, q.unit)) : ''} | ${exact} | ${cell(budget)} |`,
+          `| ${cell(q.label)}${key} | ${cell(value)} | ${cell(sigma)} |${o.detail ? ` ${exact} |` : ''} ${cell(budget)} |`,
         );
       }
     }
+    for (const tb of t.tables ?? []) out.push(...tableLines(tb));
     if (t.checks.length > 0) {
       out.push('');
-      out.push('| check | value | tolerance | result |');
-      out.push('|---|---|---|---|');
+      out.push('| check | value and limit | result |');
+      out.push('|---|---:|---|');
       for (const c of t.checks) {
-        out.push(
-          `| ${cell(c.label)} | ${cell(withUnit(c.value, c.unit))} | ${cell(/\d/.test(c.tolerance) ? withUnit(c.tolerance, c.unit) : c.tolerance)} | ${c.pass ? '**pass**' : '**FAIL**'} |`,
-        );
+        const body =
+          c.display ??
+          `${withUnit(c.value, c.unit)} (tolerance ${/\d/.test(c.tolerance) ? withUnit(c.tolerance, c.unit) : c.tolerance})`;
+        out.push(`| ${cell(c.label)} | ${cell(body)} | ${c.pass ? '**pass**' : '**FAIL**'} |`);
       }
     }
     if (t.notes.length > 0) {
@@ -76,6 +111,7 @@ export function renderMarkdown(report: Report): string {
     }
   }
   out.push('');
+  for (const n of report.notes ?? []) out.push(`- ${cell(n)}`, '');
   const s = report.summary;
   out.push(
     s.checks === 0

@@ -37,6 +37,27 @@ export const REPORT_SCHEMA: Schema = {
     arithmetic: { ...text, description: 'rational, decimal(n) or float.' },
     digits: { type: 'integer', minimum: 1, maximum: 100 },
     lengthUnit: text,
+    header: {
+      type: 'object',
+      required: ['date', 'program'],
+      additionalProperties: false,
+      description:
+        'Who, when, with what: the date, the program and version, the datum, who computed and who checked.',
+      properties: {
+        date: { type: 'string', pattern: '^\\d{4}-\\d{2}-\\d{2}$' },
+        program: text,
+        datum: text,
+        reference: text,
+        computedBy: text,
+        checkedBy: text,
+      },
+    },
+    display: {
+      type: 'object',
+      description:
+        'The display rules the text, Markdown and HTML reports follow (docs/cli.md, "Display rules").',
+    },
+    notes: { type: 'array', items: text, description: 'Notes that hold for the whole report.' },
     tasks: { type: 'array', items: { $ref: '#/$defs/task' } },
     summary: {
       type: 'object',
@@ -68,6 +89,29 @@ export const REPORT_SCHEMA: Schema = {
         results: { type: 'array', items: { $ref: '#/$defs/quantity' } },
         checks: { type: 'array', items: { $ref: '#/$defs/check' } },
         notes: { type: 'array', items: text },
+        tables: { type: 'array', items: { $ref: '#/$defs/table' } },
+      },
+    },
+    table: {
+      type: 'object',
+      required: ['name', 'title', 'columns', 'rows'],
+      additionalProperties: false,
+      description:
+        'A table (traverse sheet, level book, coordinate list, triangle solution), cells as the display rules write them.',
+      properties: {
+        name: text,
+        title: text,
+        columns: {
+          type: 'array',
+          items: {
+            type: 'object',
+            required: ['label', 'align'],
+            additionalProperties: false,
+            properties: { label: text, align: { enum: ['left', 'right'] } },
+          },
+        },
+        rows: { type: 'array', items: { type: 'array', items: text } },
+        notes: { type: 'array', items: text },
       },
     },
     quantity: {
@@ -79,6 +123,28 @@ export const REPORT_SCHEMA: Schema = {
         label: text,
         unit: text,
         value: { $ref: '#/$defs/decimal' },
+        kind: {
+          enum: [
+            'length',
+            'level',
+            'mm',
+            'angle',
+            'seconds',
+            'bearing',
+            'area',
+            'percent',
+            'number',
+            'ratio',
+          ],
+          description: 'What the quantity is, which decides how display is written.',
+        },
+        display: { ...text, description: 'The value as the text report writes it, with its unit.' },
+        displaySigma: { ...text, description: 'The uncertainty as the text report writes it.' },
+        internal: {
+          type: 'boolean',
+          description:
+            'An internal quantity (quadrance, quadrea, H): text shows it only with --detail.',
+        },
         exact: { ...text, description: 'The exact form: a fraction n/d or a surd a + b√d.' },
         sigma: {
           $ref: '#/$defs/decimal',
@@ -127,6 +193,13 @@ export const REPORT_SCHEMA: Schema = {
         tolerance: text,
         unit: text,
         pass: { type: 'boolean' },
+        limit: { $ref: '#/$defs/decimal' },
+        relation: { enum: ['≤', '≥'] },
+        display: {
+          ...text,
+          description:
+            'Value and limit as the text report writes them: to the same decimals, enough to show the verdict.',
+        },
       },
     },
   },

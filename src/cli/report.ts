@@ -4,6 +4,7 @@
  *
  * @module cli
  */
+import type { DisplayRules, QuantityKind } from './display.js';
 
 /** The caution every report ends with. */
 export const CAUTION =
@@ -24,6 +25,14 @@ export interface BudgetTerm {
 
 /** A computed quantity. */
 export interface Quantity {
+  /** What it is (`length`, `bearing`, `angle`, …): decides how `display` is written. */
+  kind?: QuantityKind;
+  /** The value as the text report writes it, by the display rules (DMS, fixed decimals, rounded to σ), with its unit. */
+  display?: string;
+  /** The standard uncertainty as the text report writes it, with its unit. */
+  displaySigma?: string;
+  /** An internal quantity (a quadrance, a quadrea, H): in JSON, and in text only with `--detail`. */
+  internal?: boolean;
   /** A short name, unique within the task (e.g. `height`, `Q3`). */
   name: string;
   /** What it is, in words. */
@@ -56,6 +65,42 @@ export interface Check {
   unit: string;
   /** Whether the check passed. */
   pass: boolean;
+  /** The limit as decimal text, to the report's significant digits (when the check has a numeric limit). */
+  limit?: string;
+  /** How value and limit compare: `≤` (the magnitude of the value at most the limit) or `≥`. */
+  relation?: '≤' | '≥';
+  /** The comparison as the text report writes it (value and limit to the same decimals, enough to show the verdict). */
+  display?: string;
+}
+
+/** A table of a task (a traverse sheet, a level book, a coordinate list), cells written by the display rules. */
+export interface Table {
+  /** A short name, unique within the task (e.g. `level-book`). */
+  name: string;
+  /** The table's title. */
+  title: string;
+  /** Column headings, with units. */
+  columns: { label: string; align: 'left' | 'right' }[];
+  /** Rows of cell text (empty text for an empty cell). */
+  rows: string[][];
+  /** Notes under the table. */
+  notes?: string[];
+}
+
+/** The report's header: who, when, with what. */
+export interface ReportHeader {
+  /** The date of the computation (ISO 8601, YYYY-MM-DD). */
+  date: string;
+  /** The program and its version. */
+  program: string;
+  /** Datum or grid of the coordinates, as the job states it. */
+  datum?: string;
+  /** Who computed, as the job or the command line states it. */
+  computedBy?: string;
+  /** Who checked, as the job or the command line states it. */
+  checkedBy?: string;
+  /** A job reference or number, as the job states it. */
+  reference?: string;
 }
 
 /** Drawing primitives for the sketch, in world units (plan: east/north; elevation: distance/height). */
@@ -109,6 +154,8 @@ export interface TaskReport {
   checks: Check[];
   /** Notes: assumptions, which root was taken, what the sketch cannot show. */
   notes: string[];
+  /** Tables of the task (traverse sheet, level book, coordinate list, triangle solution). */
+  tables?: Table[];
   /** Drawing data for `--sketch` (not part of the JSON report). */
   sketch?: SketchView[];
 }
@@ -129,6 +176,12 @@ export interface Report {
   digits: number;
   /** Length unit of the job. */
   lengthUnit: string;
+  /** Date, program, datum, computed and checked by. */
+  header?: ReportHeader;
+  /** The display rules the text, Markdown and HTML reports follow. */
+  display?: DisplayRules;
+  /** Notes that hold for the whole report (said once, not per task). */
+  notes?: string[];
   tasks: TaskReport[];
   /** How many checks passed and failed. */
   summary: { checks: number; passed: number; failed: number };

@@ -131,6 +131,38 @@ export function jobSchema(kinds: readonly TaskKind[]): Schema {
       $schema: { type: 'string' },
       title: { type: 'string', maxLength: 200, description: 'A title for the report.' },
       description: { type: 'string', maxLength: 2000, description: 'Free text, not used.' },
+      report: {
+        type: 'object',
+        additionalProperties: false,
+        description:
+          'Header fields of the report: the date (default today), a job reference, the datum or grid of the coordinates, who computed and who checked.',
+        properties: {
+          date: { type: 'string', pattern: '^\\d{4}-\\d{2}-\\d{2}$' },
+          reference: { type: 'string', maxLength: 200 },
+          datum: { type: 'string', maxLength: 200 },
+          computedBy: { type: 'string', maxLength: 200 },
+          checkedBy: { type: 'string', maxLength: 200 },
+        },
+      },
+      display: {
+        type: 'object',
+        additionalProperties: false,
+        description:
+          'How the text, Markdown and HTML reports write numbers (docs/cli.md, "Display rules"); --display on the command line overrides these.',
+        properties: {
+          lengths: { type: 'integer', minimum: 0, maximum: 8 },
+          levels: { type: 'integer', minimum: 0, maximum: 8 },
+          mm: { type: 'integer', minimum: 0, maximum: 8 },
+          seconds: { type: 'integer', minimum: 0, maximum: 4 },
+          angles: { enum: ['dms', 'degrees'] },
+          degreeDecimals: { type: 'integer', minimum: 0, maximum: 12 },
+          bearings: { enum: ['azimuth', 'quadrant'] },
+          area: { type: 'integer', minimum: 0, maximum: 8 },
+          percent: { type: 'integer', minimum: 0, maximum: 8 },
+          significant: { type: 'integer', minimum: 1, maximum: 20 },
+          roundToSigma: { type: 'boolean' },
+        },
+      },
       units: {
         type: 'object',
         additionalProperties: false,

@@ -7,6 +7,7 @@
  * @module cli
  */
 import type { Arithmetic, LengthUnit, Root } from '../index.js';
+import type { QuantityKind } from './display.js';
 import type { SketchView } from './report.js';
 import type { Schema } from './validate.js';
 import type { Input } from './values.js';
@@ -34,6 +35,10 @@ export interface RawQuantity<V> {
   value: Value<V>;
   /** True when the value is rounded even in an exact arithmetic (it went through a square root or a transcendental function). */
   approx?: boolean;
+  /** What it is, for the display rules (default: from the unit). */
+  kind?: QuantityKind;
+  /** An internal quantity (quadrance, quadrea, H): shown in JSON, and in text only with `--detail`. */
+  internal?: boolean;
 }
 
 /** A check before formatting: pass/fail decided in the run's arithmetic. */
@@ -42,9 +47,31 @@ export interface RawCheck<V> {
   label: string;
   unit: string;
   value: Value<V>;
-  /** The tolerance as the report states it (e.g. `≤ 0.05`). */
-  tolerance: string;
+  /** The tolerance as the report states it (e.g. `≤ 0.05`); with `limit`, the report writes it. */
+  tolerance?: string;
+  /**
+   * The limit, compared with `value` exactly: the report then writes value and limit to
+   * decimals enough to show the verdict, so that the printed numbers never disagree with it.
+   */
+  limit?: Value<V>;
+  /** `≤` (default: |value| at most the limit) or `≥` (value at least the limit). */
+  relation?: '≤' | '≥';
+  /** What the value is, for the display rules (default: from the unit). */
+  kind?: QuantityKind;
   pass: boolean;
+}
+
+/** A cell of a raw table: a value written by its column's kind, text as it is, or empty. */
+export type Cell<V> = Value<V> | string | undefined;
+
+/** A table before formatting: a task adds its tables through the report model with this. */
+export interface RawTable<V> {
+  name: string;
+  title: string;
+  /** Columns: a heading, and for value cells their kind and unit (the unit joins the heading). */
+  columns: { label: string; kind?: QuantityKind; unit?: string }[];
+  rows: Cell<V>[][];
+  notes?: string[];
 }
 
 /** What a computation returns. */
@@ -52,6 +79,8 @@ export interface Outcome<V> {
   results: RawQuantity<V>[];
   checks: RawCheck<V>[];
   notes: string[];
+  /** Tables (traverse sheet, level book, coordinate list, …). */
+  tables?: RawTable<V>[];
   sketch?: SketchView[];
 }
 

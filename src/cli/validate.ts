@@ -89,14 +89,43 @@ function resolve(schema: Schema, root: Schema): Schema {
   return s;
 }
 
+/**
+ * Checks `x` against one schema node, in three steps a reader can hold in mind: the value's
+ * own constraints (`const`, `enum`, `type`), then a union (`oneOf`/`anyOf`, a tagged union by
+ * `kind`), then the constraints of its JSON type (string, number, array, object).
+ */
 function check(x: unknown, schema0: Schema, root: Schema, path: string, out: Problem[]): void {
   const schema = resolve(schema0, root);
-  const where = path;
-  const expected = describe(schema);
+  if (!checkValue(x, schema, path, out)) return;
+  if (
+    (Array.isArray(schema.oneOf) || Array.isArray(schema.anyOf)) &&
+    !checkUnion(x, schema, root, path, out)
+  )
+    return;
+  switch (typeOf(x)) {
+    case 'string':
+      checkString(x as string, schema, path, out);
+      break;
+    case 'integer':
+    case 'number':
+      checkNumber(x as number, schema, path, out);
+      break;
+    case 'array':
+      checkArray(x as unknown[], schema, root, path, out);
+      break;
+    case 'object':
+      checkFields(x as Record<string, unknown>, schema, root, path, out);
+      break;
+    default:
+      break;
+  }
+}
 
+/** `const`, `enum` and `type`: false (after reporting) when the value fails one. */
+function checkValue(x: unknown, schema: Schema, where: string, out: Problem[]): boolean {
   if ('const' in schema && JSON.stringify(x) !== JSON.stringify(schema.const)) {
     out.push({ path: where, message: `${show(x)} must be ${JSON.stringify(schema.const)}` });
-    return;
+    return false;
   }
   if (
     Array.isArray(schema.enum) &&
@@ -106,140 +135,151 @@ function check(x: unknown, schema0: Schema, root: Schema, path: string, out: Pro
       path: where,
       message: `${show(x)} is not one of ${schema.enum.map((e) => JSON.stringify(e)).join(', ')}`,
     });
-    return;
+    return false;
   }
   if (schema.type !== undefined) {
     const types = Array.isArray(schema.type) ? (schema.type as string[]) : [schema.type as string];
     if (!types.some((t) => typeMatches(x, t))) {
-      const want = expected ?? types.map((t) => ARTICLE[t] ?? t).join(' or ');
+      const want = describe(schema) ?? types.map((t) => ARTICLE[t] ?? t).join(' or ');
       out.push({ path: where, message: `${show(x)} is not ${want}` });
-      return;
+      return false;
     }
   }
-  if (Array.isArray(schema.oneOf) || Array.isArray(schema.anyOf)) {
-    const branches = ((schema.oneOf ?? schema.anyOf) as Schema[]).map((b) => resolve(b, root));
-    const kinds = branches.map(
-      (b) =>
-        ((b.properties as Record<string, Schema> | undefined)?.kind as Schema | undefined)?.const,
-    );
-    if (kinds.every((k) => typeof k === 'string')) {
-      // A tagged union: the kind picks the branch.
-      const kind = typeOf(x) === 'object' ? (x as Record<string, unknown>).kind : undefined;
-      const i = kinds.indexOf(kind as string);
-      if (i < 0) {
-        const p = typeOf(x) === 'object' ? joinPath(path, 'kind') : path;
-        const what =
-          kind === undefined ? 'a task needs a "kind"' : `${show(kind)} is not a known kind`;
-        out.push({ path: p, message: `${what} (${(kinds as string[]).join(', ')})` });
-        return;
-      }
-      check(x, branches[i]!, root, path, out);
-    } else {
-      const results = branches.map((b) => validate(x, b, root, path));
-      const ok = results.filter((r) => r.length === 0).length;
-      if (schema.oneOf ? ok !== 1 : ok === 0) {
-        const near = nearest(x, branches, root);
-        if (ok > 1) {
-          out.push({ path: where, message: `${show(x)} matches more than one form` });
-        } else if (near !== undefined) {
-          // One form fits the value's type (or its fields) best: report what is wrong with it.
-          out.push(...results[near]!);
-        } else if (expected) {
-          out.push({ path: where, message: `${show(x)} is not ${expected}` });
-        } else {
-          // Report the branch that got furthest (fewest problems, deepest path).
-          const best = results
-            .slice()
-            .sort((a, b) => depth(b) - depth(a) || a.length - b.length)[0]!;
-          out.push(...best);
-        }
-        return;
-      }
+  return true;
+}
+
+/**
+ * `oneOf` / `anyOf`: a tagged union (every branch has a `kind` const) checks the branch its
+ * kind picks; another union reports the branch the value was plainly meant for. Returns false
+ * when it has reported (or checked the whole value already).
+ */
+function checkUnion(
+  x: unknown,
+  schema: Schema,
+  root: Schema,
+  path: string,
+  out: Problem[],
+): boolean {
+  const where = path;
+  const expected = describe(schema);
+  const branches = ((schema.oneOf ?? schema.anyOf) as Schema[]).map((b) => resolve(b, root));
+  const kinds = branches.map(
+    (b) =>
+      ((b.properties as Record<string, Schema> | undefined)?.kind as Schema | undefined)?.const,
+  );
+  if (kinds.every((k) => typeof k === 'string')) {
+    // A tagged union: the kind picks the branch.
+    const kind = typeOf(x) === 'object' ? (x as Record<string, unknown>).kind : undefined;
+    const i = kinds.indexOf(kind as string);
+    if (i < 0) {
+      const p = typeOf(x) === 'object' ? joinPath(path, 'kind') : path;
+      const what =
+        kind === undefined ? 'a task needs a "kind"' : `${show(kind)} is not a known kind`;
+      out.push({ path: p, message: `${what} (${(kinds as string[]).join(', ')})` });
+      return false;
     }
+    check(x, branches[i]!, root, path, out);
+    return true;
   }
-  switch (typeOf(x)) {
-    case 'string': {
-      const s = x as string;
-      if (typeof schema.maxLength === 'number' && s.length > schema.maxLength) {
-        out.push({
-          path: where,
-          message: `${show(s)} is longer than ${schema.maxLength} characters`,
-        });
-      } else if (typeof schema.minLength === 'number' && s.length < schema.minLength) {
-        out.push({
-          path: where,
-          message: `${show(s)} is shorter than ${schema.minLength} characters`,
-        });
-      } else if (typeof schema.pattern === 'string' && !new RegExp(schema.pattern, 'u').test(s)) {
-        out.push({
-          path: where,
-          message: `${show(s)} is not ${expected ?? `text of the form ${schema.pattern}`}`,
-        });
-      }
-      break;
+  const results = branches.map((b) => validate(x, b, root, path));
+  const ok = results.filter((r) => r.length === 0).length;
+  if (schema.oneOf ? ok === 1 : ok > 0) return true;
+  const near = nearest(x, branches, root);
+  if (ok > 1) {
+    out.push({ path: where, message: `${show(x)} matches more than one form` });
+  } else if (near !== undefined) {
+    // One form fits the value's type (or its fields) best: report what is wrong with it.
+    out.push(...results[near]!);
+  } else if (expected) {
+    out.push({ path: where, message: `${show(x)} is not ${expected}` });
+  } else {
+    // Report the branch that got furthest (fewest problems, deepest path).
+    const best = results.slice().sort((a, b) => depth(b) - depth(a) || a.length - b.length)[0]!;
+    out.push(...best);
+  }
+  return false;
+}
+
+/** `maxLength`, `minLength`, `pattern`. */
+function checkString(s: string, schema: Schema, where: string, out: Problem[]): void {
+  if (typeof schema.maxLength === 'number' && s.length > schema.maxLength) {
+    out.push({ path: where, message: `${show(s)} is longer than ${schema.maxLength} characters` });
+  } else if (typeof schema.minLength === 'number' && s.length < schema.minLength) {
+    out.push({ path: where, message: `${show(s)} is shorter than ${schema.minLength} characters` });
+  } else if (typeof schema.pattern === 'string' && !new RegExp(schema.pattern, 'u').test(s)) {
+    const expected = describe(schema);
+    out.push({
+      path: where,
+      message: `${show(s)} is not ${expected ?? `text of the form ${schema.pattern}`}`,
+    });
+  }
+}
+
+/** `minimum`, `maximum`, `exclusiveMinimum`. */
+function checkNumber(n: number, schema: Schema, where: string, out: Problem[]): void {
+  if (typeof schema.minimum === 'number' && n < schema.minimum)
+    out.push({ path: where, message: `${n} is below the minimum ${schema.minimum}` });
+  if (typeof schema.maximum === 'number' && n > schema.maximum)
+    out.push({ path: where, message: `${n} is above the maximum ${schema.maximum}` });
+  if (typeof schema.exclusiveMinimum === 'number' && n <= schema.exclusiveMinimum)
+    out.push({ path: where, message: `${n} must be greater than ${schema.exclusiveMinimum}` });
+}
+
+/** `minItems`, `maxItems`, then each item against `items`. */
+function checkArray(
+  a: unknown[],
+  schema: Schema,
+  root: Schema,
+  path: string,
+  out: Problem[],
+): void {
+  if (typeof schema.minItems === 'number' && a.length < schema.minItems) {
+    out.push({
+      path,
+      message: `has ${a.length} item${a.length === 1 ? '' : 's'}; at least ${schema.minItems} needed`,
+    });
+  }
+  if (typeof schema.maxItems === 'number' && a.length > schema.maxItems) {
+    out.push({ path, message: `has ${a.length} items; at most ${schema.maxItems} allowed` });
+  }
+  if (schema.items && typeof schema.items === 'object') {
+    a.forEach((item, i) => check(item, schema.items as Schema, root, joinPath(path, i), out));
+  }
+}
+
+/** `required`, then each field against `properties`, `patternProperties` or `additionalProperties`. */
+function checkFields(
+  o: Record<string, unknown>,
+  schema: Schema,
+  root: Schema,
+  path: string,
+  out: Problem[],
+): void {
+  const props = (schema.properties ?? {}) as Record<string, Schema>;
+  const patterns = (schema.patternProperties ?? {}) as Record<string, Schema>;
+  for (const key of (schema.required ?? []) as string[]) {
+    if (!Object.hasOwn(o, key)) out.push({ path, message: `"${key}" is missing` });
+  }
+  for (const [key, v] of Object.entries(o)) {
+    const p = joinPath(path, key);
+    if (Object.hasOwn(props, key)) {
+      check(v, props[key]!, root, p, out);
+      continue;
     }
-    case 'integer':
-    case 'number': {
-      const n = x as number;
-      if (typeof schema.minimum === 'number' && n < schema.minimum)
-        out.push({ path: where, message: `${n} is below the minimum ${schema.minimum}` });
-      if (typeof schema.maximum === 'number' && n > schema.maximum)
-        out.push({ path: where, message: `${n} is above the maximum ${schema.maximum}` });
-      if (typeof schema.exclusiveMinimum === 'number' && n <= schema.exclusiveMinimum)
-        out.push({ path: where, message: `${n} must be greater than ${schema.exclusiveMinimum}` });
-      break;
+    const pat = Object.keys(patterns).find((re) => new RegExp(re, 'u').test(key));
+    if (pat !== undefined) {
+      check(v, patterns[pat]!, root, p, out);
+      continue;
     }
-    case 'array': {
-      const a = x as unknown[];
-      if (typeof schema.minItems === 'number' && a.length < schema.minItems) {
-        out.push({
-          path: where,
-          message: `has ${a.length} item${a.length === 1 ? '' : 's'}; at least ${schema.minItems} needed`,
-        });
-      }
-      if (typeof schema.maxItems === 'number' && a.length > schema.maxItems) {
-        out.push({
-          path: where,
-          message: `has ${a.length} items; at most ${schema.maxItems} allowed`,
-        });
-      }
-      if (schema.items && typeof schema.items === 'object') {
-        a.forEach((item, i) => check(item, schema.items as Schema, root, joinPath(path, i), out));
-      }
-      break;
+    if (schema.additionalProperties === false) {
+      const known = Object.keys(props);
+      out.push({
+        path: p,
+        message: `is not a known field${known.length ? ` (known: ${known.join(', ')})` : ''}`,
+      });
+    } else if (schema.additionalProperties && typeof schema.additionalProperties === 'object') {
+      check(v, schema.additionalProperties as Schema, root, p, out);
     }
-    case 'object': {
-      const o = x as Record<string, unknown>;
-      const props = (schema.properties ?? {}) as Record<string, Schema>;
-      const patterns = (schema.patternProperties ?? {}) as Record<string, Schema>;
-      for (const key of (schema.required ?? []) as string[]) {
-        if (!Object.hasOwn(o, key)) out.push({ path: where, message: `"${key}" is missing` });
-      }
-      for (const [key, v] of Object.entries(o)) {
-        const p = joinPath(path, key);
-        if (Object.hasOwn(props, key)) {
-          check(v, props[key]!, root, p, out);
-          continue;
-        }
-        const pat = Object.keys(patterns).find((re) => new RegExp(re, 'u').test(key));
-        if (pat !== undefined) {
-          check(v, patterns[pat]!, root, p, out);
-          continue;
-        }
-        if (schema.additionalProperties === false) {
-          const known = Object.keys(props);
-          out.push({
-            path: p,
-            message: `is not a known field${known.length ? ` (known: ${known.join(', ')})` : ''}`,
-          });
-        } else if (schema.additionalProperties && typeof schema.additionalProperties === 'object') {
-          check(v, schema.additionalProperties as Schema, root, p, out);
-        }
-      }
-      break;
-    }
-    default:
-      break;
   }
 }
 

@@ -15,26 +15,26 @@ import { readNumber, expectObject } from '../geometry/validate.js';
 import { readArray } from './internal.js';
 
 /**
- * Orders of geodetic levelling with their allowable section misclosure c·√K (c in mm, K
- * the one-way section length in km) and elevation-difference accuracy b (mm/√km).
+ * Orders of geodetic levelling with their elevation-difference accuracy b (mm/√km).
  *
- * Source: FGCC, *Standards and Specifications for Geodetic Control Networks* (1984). The
- * b values are as printed there; the c values (3, 4, 6, 8, 12 mm) are quoted **from memory —
- * check them against the standard before relying on them**.
+ * Source: FGCC, *Standards and Specifications for Geodetic Control Networks* (1984), the b
+ * values as printed there. The allowable section misclosure c·√K takes its constant c from
+ * the user ({@link allowableMisclosure}): the c of each order is not quoted here, because
+ * it was not checked against the standard's text.
  *
  * @example
  * ```ts
  * import { LEVELLING_ORDERS } from 'quadspread';
  * LEVELLING_ORDERS.third;
- * //=> { c: '12', b: '2.0' }
+ * //=> { b: '2.0' }
  * ```
  */
 export const LEVELLING_ORDERS = {
-  'first-I': { c: '3', b: '0.5' },
-  'first-II': { c: '4', b: '0.7' },
-  'second-I': { c: '6', b: '1.0' },
-  'second-II': { c: '8', b: '1.3' },
-  third: { c: '12', b: '2.0' },
+  'first-I': { b: '0.5' },
+  'first-II': { b: '0.7' },
+  'second-I': { b: '1.0' },
+  'second-II': { b: '1.3' },
+  third: { b: '2.0' },
 } as const;
 
 /** A levelling order: a key of {@link LEVELLING_ORDERS}. */
@@ -50,15 +50,15 @@ export interface AllowableMisclosure<T, E extends boolean> {
   readonly allowable: Root<T, E>;
 }
 
-function readC<T>(A: Arithmetic<T, boolean>, order: LevellingOrder | Numeric<T>, where: string): T {
+function readC<T>(A: Arithmetic<T, boolean>, order: Numeric<T>, where: string): T {
   if (typeof order === 'string' && Object.prototype.hasOwnProperty.call(LEVELLING_ORDERS, order)) {
-    return A.from(LEVELLING_ORDERS[order as LevellingOrder].c);
-  }
-  if (typeof order === 'string' && !/^[\s\d.+eE/-]+$/.test(order)) {
     throw invalidArgument(
       where,
-      `${show(order)} is not a levelling order (${Object.keys(LEVELLING_ORDERS).join(', ')}) or a constant c in mm`,
+      `${show(order)} names an order, but the constant c of its allowable misclosure is the user's to give: write c in mm as your specification states it (docs/coordinates.md lists common values, unchecked)`,
     );
+  }
+  if (typeof order === 'string' && !/^[\s\d.+eE/-]+$/.test(order)) {
+    throw invalidArgument(where, `${show(order)} is not a constant c in mm`);
   }
   const c = readNumber(A, order, where);
   if (A.sign(c) <= 0) throw invalidArgument(where, `c = ${A.toString(c)} mm is not positive`);
@@ -68,36 +68,38 @@ function readC<T>(A: Arithmetic<T, boolean>, order: LevellingOrder | Numeric<T>,
 /**
  * Allowable misclosure c·√K (mm) of a levelling section of one-way length K km.
  *
- * c comes from a {@link LEVELLING_ORDERS} entry (FGCC 1984; the c values are from memory —
- * check them) or is given in mm. Exact in `rational` as a surd.
+ * c is the user's: the constant of the specification the work follows, in mm (the
+ * library quotes no order's c; docs/coordinates.md lists values in common use, labelled
+ * as unchecked). Exact in `rational` as a surd.
  *
  * @param A the arithmetic
- * @param order a levelling order such as `'third'`, or c in mm
+ * @param c the constant c in mm (> 0)
  * @param km the section length K in km (≥ 0)
  * @returns `{ c, km, allowable }` with `allowable` = c·√K in mm
- * @throws {QuadspreadError} `INVALID_ARGUMENT` for an unknown order, a c ≤ 0 or a negative K.
+ * @throws {QuadspreadError} `INVALID_ARGUMENT` for a name of an order instead of c, a c ≤ 0
+ *   or a negative K.
  * @example
  * ```ts
  * import { rational, allowableMisclosure } from 'quadspread';
- * allowableMisclosure(rational, 'third', 4).allowable.toString();
+ * allowableMisclosure(rational, 12, 4).allowable.toString();
  * //=> '24'
- * allowableMisclosure(rational, 'second-I', 2).allowable.toString();
+ * allowableMisclosure(rational, 6, 2).allowable.toString();
  * //=> '6√2'
  * ```
  */
 export function allowableMisclosure<T, E extends boolean>(
   A: Arithmetic<T, E>,
-  order: LevellingOrder | Numeric<T>,
+  c: Numeric<T>,
   km: Numeric<T>,
 ): AllowableMisclosure<T, E> {
   checkArithmetic(A, 'allowableMisclosure');
-  const where = 'allowableMisclosure(A, order, km)';
-  const c = readC(A, order, `${where} order`);
+  const where = 'allowableMisclosure(A, c, km)';
+  const cMm = readC(A, c, `${where} c`);
   const K = readNumber(A, km, where, ' km');
   if (A.sign(K) < 0) throw invalidArgument(`${where} km`, `K = ${A.toString(K)} km is negative`);
-  // Allowable section misclosure c·√K mm (FGCC 1984; c from memory).
-  const allowable = sqrtOf(A, A.mul(A.mul(c, c), K));
-  return { c, km: K, allowable };
+  // Allowable section misclosure c·√K mm, c as the user's specification gives it.
+  const allowable = sqrtOf(A, A.mul(A.mul(cMm, cMm), K));
+  return { c: cMm, km: K, allowable };
 }
 
 /**
@@ -128,8 +130,8 @@ export interface LevelRunInput<T> {
   readonly close?: Numeric<T>;
   /** Unit of readings, levels and distances (default `'m'`), for converting to mm and km. */
   readonly unit?: LengthUnit;
-  /** Order (or c in mm) for the allowable misclosure c·√K; needs `close`. */
-  readonly order?: LevellingOrder | Numeric<T>;
+  /** The constant c in mm of the allowable misclosure c·√K (the user's specification); needs `close`. */
+  readonly order?: Numeric<T>;
   /** Section length K in km for the allowable misclosure; default: the sum of the row distances. */
   readonly km?: Numeric<T>;
 }

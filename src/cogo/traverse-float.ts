@@ -9,11 +9,14 @@
  */
 import type { Point } from '../geometry/point.js';
 import { float } from '../arithmetic/float.js';
-import { sinCosDegrees } from '../readings/trig.js';
+import { sinCosInto } from '../readings/trig-float.js';
 import { readAzimuth } from './bearing.js';
 import type { Traverse, TraverseLeg } from './traverse.js';
 
 const where = 'traverse(A, input)';
+
+/** sin and cos of the course in progress (read at once, before any other call). */
+const SC = /* @__PURE__ */ new Float64Array(2);
 
 function isNum(v: unknown): v is number {
   return typeof v === 'number' && v - v === 0;
@@ -57,16 +60,23 @@ export function traverseFloat(
     if (c.bearing !== undefined) {
       if (!isNum(c.distance)) return undefined;
       d = c.distance;
-      if (typeof c.bearing !== 'number' && typeof c.bearing !== 'string') return undefined;
+      const b = c.bearing;
       let az: number;
-      try {
-        az = readAzimuth(float, c.bearing, where);
-      } catch {
-        return undefined;
+      if (typeof b === 'number' && b - b === 0) {
+        // readAzimuth(float, b) for a finite number: [0°, 360°], 360° read as 0°.
+        if (b < 0 || b > 360) return undefined;
+        az = b === 360 ? 0 : b;
+      } else {
+        if (typeof b !== 'string') return undefined;
+        try {
+          az = readAzimuth(float, b, where);
+        } catch {
+          return undefined;
+        }
       }
-      const sc = sinCosDegrees(float, az);
-      la = d * sc.cos;
-      de = d * sc.sin;
+      if (!sinCosInto(az, SC, 0)) return undefined;
+      la = d * SC[1]!;
+      de = d * SC[0]!;
     } else if (isNum(c.latitude) && isNum(c.departure)) {
       la = c.latitude;
       de = c.departure;

@@ -18,6 +18,7 @@ import { readNumber, readQuadrance } from '../geometry/validate.js';
 import type { Root } from '../geometry/surd.js';
 import { readVertical, type VerticalInput } from '../readings/vertical.js';
 import { rootOps } from './roots.js';
+import { inlineHeightFloat } from './inline-float.js';
 
 /** The result of {@link heightFromInlineReadings}. */
 export interface InlineHeight<T> {
@@ -151,6 +152,11 @@ export function heightFromInlineReadings<T>(
   // input it leaves to the code below (which reports every error).
   const fused = A.kernels?.inlineHeight?.(input);
   if (fused !== undefined) return fused;
+  if (A.float64) {
+    // The float twin (same operations, same order) for three numeric stations; else below.
+    const fast = inlineHeightFloat(input);
+    if (fast !== undefined) return fast as unknown as InlineHeight<T>;
+  }
   const w = 'heightFromInlineReadings(input)';
   checkObject(input, w);
   if (!Array.isArray(input.chainages))

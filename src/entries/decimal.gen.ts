@@ -35,6 +35,9 @@ export const arithmetic: DecimalArithmetic = /* @__PURE__ */ decimal(34);
 /** {@link g.adjustLevelling | adjustLevelling} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const adjustLevelling: Bound<typeof g.adjustLevelling<Value, false>> = (input) => g.adjustLevelling<Value, false>(arithmetic, input);
 
+/** {@link g.adjustNetwork | adjustNetwork} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const adjustNetwork: Bound<typeof g.adjustNetwork<Value, false>> = (input) => g.adjustNetwork<Value, false>(arithmetic, input);
+
 /** {@link g.alignmentPoint | alignmentPoint} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const alignmentPoint: Bound<typeof g.alignmentPoint<Value>> = (alignment, chainage, offset, options) => g.alignmentPoint<Value>(arithmetic, alignment, chainage, offset, options);
 
@@ -42,7 +45,7 @@ export const alignmentPoint: Bound<typeof g.alignmentPoint<Value>> = (alignment,
 export const alignmentStation: Bound<typeof g.alignmentStation<Value>> = (alignment, P, options) => g.alignmentStation<Value>(arithmetic, alignment, P, options);
 
 /** {@link g.allowableMisclosure | allowableMisclosure} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
-export const allowableMisclosure: Bound<typeof g.allowableMisclosure<Value, false>> = (order, km) => g.allowableMisclosure<Value, false>(arithmetic, order, km);
+export const allowableMisclosure: Bound<typeof g.allowableMisclosure<Value, false>> = (c, km) => g.allowableMisclosure<Value, false>(arithmetic, c, km);
 
 /** {@link g.angleToDegrees | angleToDegrees} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const angleToDegrees: Bound<typeof g.angleToDegrees<Value>> = (reading, unit) => g.angleToDegrees<Value>(arithmetic, reading, unit);
@@ -131,6 +134,15 @@ export const enuFromGeocentric: Bound<typeof g.enuFromGeocentric<Value>> = (orig
 /** {@link g.enuRotation | enuRotation} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const enuRotation: Bound<typeof g.enuRotation<Value>> = (origin) => g.enuRotation<Value>(arithmetic, origin);
 
+/** {@link g.fitAffine | fitAffine} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const fitAffine: Bound<typeof g.fitAffine<Value>> = (points) => g.fitAffine<Value>(arithmetic, points);
+
+/** {@link g.fitInclinedPlane | fitInclinedPlane} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const fitInclinedPlane: Bound<typeof g.fitInclinedPlane<Value>> = (points) => g.fitInclinedPlane<Value>(arithmetic, points);
+
+/** {@link g.fitSimilarity | fitSimilarity} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const fitSimilarity: Bound<typeof g.fitSimilarity<Value>> = (points) => g.fitSimilarity<Value>(arithmetic, points);
+
 /** {@link g.flatEarthError | flatEarthError} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const flatEarthError: Bound<typeof g.flatEarthError<Value>> = (distance, radius) => g.flatEarthError<Value>(arithmetic, distance, radius);
 
@@ -163,6 +175,12 @@ export const geocentricToGeodetic: Bound<typeof g.geocentricToGeodetic<Value>> =
 
 /** {@link g.geocentricTranslation | geocentricTranslation} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const geocentricTranslation: Bound<typeof g.geocentricTranslation<Value>> = (point, params) => g.geocentricTranslation<Value>(arithmetic, point, params);
+
+/** {@link g.geodesicDirect | geodesicDirect} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const geodesicDirect: Bound<typeof g.geodesicDirect<Value>> = (p1, azimuth, distance, ellipsoid) => g.geodesicDirect<Value>(arithmetic, p1, azimuth, distance, ellipsoid);
+
+/** {@link g.geodesicInverse | geodesicInverse} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const geodesicInverse: Bound<typeof g.geodesicInverse<Value>> = (p1, p2, ellipsoid) => g.geodesicInverse<Value>(arithmetic, p1, p2, ellipsoid);
 
 /** {@link g.geodeticToGeocentric | geodeticToGeocentric} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const geodeticToGeocentric: Bound<typeof g.geodeticToGeocentric<Value>> = (point, ellipsoid) => g.geodeticToGeocentric<Value>(arithmetic, point, ellipsoid);
@@ -512,34 +530,38 @@ export {
   WGS84, withDerivative,
 } from '../index.js';
 export type {
-  AdjustedHeight, AdjustedLevelObservation, AlignmentElement, AlignmentPoint, AlignmentStation,
-  AlignmentStationOptions, AllowableMisclosure, AngleUnit, AngularMisclosure, ArcElement,
-  AreaUnit, Arithmetic, Atmosphere, AtmosphericPpm, BaardaTest, Backsight, BacksightResult,
-  BaseHeight, BearingIntersection, BenchmarkInput, Budget, BudgetOptions, ChainageEquation,
-  ChainageEquationInput, CircleInput, Clothoid, Contribution, ControlPoint, CorrelationTerm,
-  CurvatureOptions, DatumTransformation, DatumTransformOptions, Decimal, DecimalArithmetic,
-  DecimalElementary, DeflectionRow, Ellipsoid, EllipsoidDefinition, EllipsoidParameters, Enu,
-  ErrorCode, FaceOptions, FieldCheck, FieldObservation, FlatEarthError, FloatArithmetic,
-  FootSide, FreeStation, FreeStationInput, FreeStationResidual, Geocentric,
-  GeocentricTranslationParameters, Geodetic, GeodeticInput, GeographicPoint, GlobalTest,
+  AdjustedHeight, AdjustedLevelObservation, AdjustedNetworkObservation, AdjustedPoint,
+  AffineFit, AlignmentElement, AlignmentPoint, AlignmentStation, AlignmentStationOptions,
+  AllowableMisclosure, AngleUnit, AngularMisclosure, ArcElement, AreaUnit, Arithmetic,
+  Atmosphere, AtmosphericPpm, BaardaTest, Backsight, BacksightResult, BaseHeight,
+  BearingIntersection, BenchmarkInput, Budget, BudgetOptions, ChainageEquation,
+  ChainageEquationInput, CircleInput, Clothoid, CommonPoint, ConfidenceEllipse, Contribution,
+  ControlPoint, CorrelationTerm, CurvatureOptions, DatumTransformation, DatumTransformOptions,
+  Decimal, DecimalArithmetic, DecimalElementary, DeflectionRow, DistanceSigma, Ellipsoid,
+  EllipsoidDefinition, EllipsoidParameters, Enu, ErrorCode, ErrorEllipse, FaceOptions,
+  FieldCheck, FieldObservation, FlatEarthError, FloatArithmetic, FootSide, FreeStation,
+  FreeStationInput, FreeStationResidual, Geocentric, GeocentricTranslationParameters,
+  GeodesicDirect, GeodesicInverse, Geodetic, GeodeticInput, GeographicPoint, GlobalTest,
   Gradient, GridPoint, GridReduction, HelmertConvention, HelmertParameters, HorizontalAlignment,
-  HorizontalAlignmentInput, HorizontalCurve, HorizontalCurveInput, InlineHeight,
-  InlineQuadranceHeight, InputDistribution, Inverse, KeyPoint, LengthUnit, LevelCheck,
-  LevellingAdjustment, LevellingInput, LevellingObservationInput, LevellingOptions,
+  HorizontalAlignmentInput, HorizontalCurve, HorizontalCurveInput, InclinedPlaneFit,
+  InlineHeight, InlineQuadranceHeight, InputDistribution, Inverse, KeyPoint, LengthUnit,
+  LevelCheck, LevellingAdjustment, LevellingInput, LevellingObservationInput, LevellingOptions,
   LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, LinearUnit, LocalTest,
-  Matrix3, MeanFaces, MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, Numeric,
-  ObservationTest, OffsetMeasure, OrientInput, PegReadings, Point, Point3, Point3Input,
+  Matrix3, MeanFaces, MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult,
+  NetworkAdjustment, NetworkInput, NetworkObservationInput, NetworkOptions, NetworkPointInput,
+  Numeric, ObservationTest, OffsetMeasure, OrientInput, PegReadings, Point, Point3, Point3Input,
   Pointing, PointInput, PointLike, PolygonArea, PreparedProjection, ProfileLevel,
   ProfilePointInput, ProjectedPoint, Projection, ProjectionAngleUnit, ProjectionMethod,
   RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalLevelling, ReciprocalSet,
-  ReciprocalTrigHeight, ReducedObservation, Resection, ResectionInput, Root, RotationInput,
-  RotationUnit, RoundOff, SetOut, SetOutCheck, SetOutOptions, SetOutPoint, SetOutTolerance,
-  SettingOutRow, SetupInput, SetupTolerance, Shot, SideShot, SightHeight, SnoopingRemoval,
-  SnoopingReport, StaffPair, StationCandidate, StationObservation, StationSetup,
-  StewartChainages, StewartQuadrances, StraightElement, Surd, TestOptions, TmFactors,
-  TransformedPoint, TransitionElement, TransitionMeasures, TransverseMercator,
-  TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg,
-  Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoPeg, TwoPegInput, TwoStationHeight,
-  UncertainArithmetic, UncertainInput, ValueOf, VerticalAlignment, VerticalAlignmentInput,
-  VerticalCurve, VerticalCurveInput, VerticalInput, VerticalKind, VerticalReading,
+  ReciprocalTrigHeight, ReducedObservation, RelativeEllipse, Resection, ResectionInput, Root,
+  RotationInput, RotationUnit, RoundOff, SetOut, SetOutCheck, SetOutOptions, SetOutPoint,
+  SetOutTolerance, SettingOutRow, SetupInput, SetupTolerance, Shot, SideShot, SightHeight,
+  SimilarityFit, SnoopingRemoval, SnoopingReport, StaffPair, StationCandidate,
+  StationObservation, StationSetup, StewartChainages, StewartQuadrances, StraightElement, Surd,
+  TestOptions, TmFactors, TransformedPoint, TransitionElement, TransitionMeasures,
+  TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse,
+  TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoPeg,
+  TwoPegInput, TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf,
+  VerticalAlignment, VerticalAlignmentInput, VerticalCurve, VerticalCurveInput, VerticalInput,
+  VerticalKind, VerticalReading,
 } from '../index.js';

@@ -58,3 +58,7 @@ export { lambertConic, lambertConicInverse } from './lambert-conic.js';
 export { mercator, mercatorInverse } from './mercator.js';
 export { obliqueStereographic, obliqueStereographicInverse } from './oblique-stereographic.js';
 export { polarStereographic, polarStereographicInverse } from './polar-stereographic.js';
+export { geodesicInverse } from './geodesic-inverse.js';
+export type { GeodesicInverse } from './geodesic-inverse.js';
+export { geodesicDirect } from './geodesic-direct.js';
+export type { GeodesicDirect } from './geodesic-direct.js';

@@ -63,23 +63,37 @@ describe('quadspread demo', () => {
   it('exits 0 and prints a text report that ends with the safety caution', () => {
     expect(text).toMatch(/quadspread report: /);
     expect(
-      text.trimEnd().endsWith('Design and setting-out follow local codes and licensed practice.'),
+      text
+        .replace(/\s+/g, ' ')
+        .trimEnd()
+        .endsWith('Design and setting-out follow local codes and licensed practice.'),
     ).toBe(true);
+    expect(Math.max(...text.split('\n').map((l) => l.length))).toBeLessThanOrEqual(100);
     expect(text).toMatch(/check independently|check every result independently/);
   });
 
   it('prints, in the text report, the values that classical trigonometry gives, to the digits shown', () => {
     // Path across a 1 in 3.5 slope holding 1 in 12 (apparent dip: cos β = tan g / tan φ).
+    // Angles in DMS to 0.1": written here from decimal degrees by hand.
+    const toDms = (deg: number): string => {
+      const tenths = Math.round(deg * 36000);
+      const d = Math.floor(tenths / 36000);
+      const m = Math.floor((tenths - d * 36000) / 600);
+      const s = (tenths - d * 36000 - m * 600) / 10;
+      return `${d}°${String(m).padStart(2, '0')}'${s.toFixed(1).padStart(4, '0')}"`;
+    };
     const beta = Math.acos(1 / 12 / (1 / 3.5)) * (180 / Math.PI);
-    expect(text).toContain(`[offset_angle]: ${beta.toPrecision(10)} °`);
-    // Beacon height from H1: h = d·tan α.
+    expect(text).toContain(`Angle between path and fall line (plan): ${toDms(beta)}\n`);
+    // Beacon height from H1: h = d·tan α, rounded to match its uncertainty (± 0.00xx m: 4 decimals).
     const d1 = Math.hypot(2105 - 2000, 3160 - 3000);
-    expect(text).toContain(
-      `[H1.height]: ${(d1 * Math.tan(rad(dms(`7°08'52.8"`)))).toPrecision(10)} m`,
+    expect(text).toMatch(
+      new RegExp(
+        `Height from H1 \\(above its instrument level\\): ${(d1 * Math.tan(rad(dms(`7°08'52.8"`)))).toFixed(4)} m ± 0\\.00\\d\\d m`,
+      ),
     );
-    // Levelling: misclosure = start + ΣBS − ΣFS − close, in mm.
+    // Levelling: misclosure = start + ΣBS − ΣFS − close, in mm to 0.1 mm.
     expect(text).toContain(
-      `[misclosure]: ${((112.406 + 1.652 + 2.114 + 1.337 - 0.873 - 1.005 - 1.612 - 114.023) * 1000).toPrecision(4)}`,
+      `Misclosure (computed less known closing level): ${((112.406 + 1.652 + 2.114 + 1.337 - 0.873 - 1.005 - 1.612 - 114.023) * 1000).toFixed(1)} mm`,
     );
   });
 

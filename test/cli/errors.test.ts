@@ -382,11 +382,17 @@ describe('quadspread run with checks that fail', () => {
     };
     const r = cli(['run', jobFile('fails.json', job)]);
     expect(r.code).toBe(0);
-    expect(r.stdout).toMatch(/check FAIL: Linear misclosure: 0\.5\d* m \(tolerance ≤ 0\.1 m\)/);
-    expect(r.stdout).toMatch(
-      /check FAIL: Precision 1 : N, N = length ÷ linear misclosure: 361(\.0+)? \(tolerance ≥ 1000\)/,
+    // The misclosure is 180.5 − 180 = 0.5 m (east 100, north 80.5 against C at 100, 80).
+    expect(r.stdout).toContain('check FAIL: Linear misclosure: 0.500 m, limit ±0.100 m');
+    expect(r.stdout).toContain(
+      'check FAIL: Precision 1 : N, N = length ÷ linear misclosure: 1 : 361, limit ≥ 1 : 1000',
     ); // 180.5 / 0.5
     expect(r.stdout).toMatch(/checks: 0 passed, 2 failed \(of 2\) -- SEE FAILED CHECKS ABOVE/);
+    // With --fail-on-check the same report is written, and the exit code is 4.
+    const f = cli(['run', jobFile('fails.json', job), '--fail-on-check']);
+    expect(f.code).toBe(4);
+    expect(f.stdout).toBe(r.stdout);
+    expect(f.stderr).toContain('2 of 2 checks failed (--fail-on-check)');
   });
 
   it('reads a job file that starts with a byte-order mark', () => {

@@ -158,11 +158,16 @@ describe('quadspread demo --format markdown', () => {
     const r = cli(['demo', '--format', 'markdown']);
     expect(r.code).toBe(0);
     expect(r.stdout.startsWith('# Demonstration job')).toBe(true);
-    expect(r.stdout).toContain(
+    expect(r.stdout).toContain('| quantity | value | ± σ | budget (share of variance) |');
+    expect(r.stdout).toContain('| check | value and limit | result |');
+    expect(r.stdout).toContain('**Level book, rise and fall, with the misclosure distributed**');
+    // Exact forms and machine keys only with --detail.
+    expect(r.stdout).not.toContain('`527/576`');
+    const d = cli(['demo', '--format', 'markdown', '--detail']);
+    expect(d.stdout).toContain(
       '| quantity | value | ± σ | exact form | budget (share of variance) |',
     );
-    expect(r.stdout).toContain('| check | value | tolerance | result |');
-    expect(r.stdout).toContain('`527/576`');
+    expect(d.stdout).toContain('`527/576`');
     expect(r.stdout.trimEnd()).toMatch(/> \*\*Caution\.\*\* .*licensed practice\.$/);
   });
 });
@@ -207,9 +212,12 @@ describe('docs/cli.md', () => {
 describe('quadspread demo says what its uncertainties are', () => {
   it('states once, at the top of text and Markdown, that ± is the standard uncertainty and what a budget share is', () => {
     const text = cli(['demo']).stdout.split('\n');
-    expect(text[2]).toMatch(
-      /^± is the standard uncertainty \(k = 1, first order\); a budget gives each input's share of the variance/,
-    );
+    const legend = text.filter((l) => l.startsWith('± is the standard uncertainty'));
+    expect(legend).toEqual([
+      "± is the standard uncertainty (k = 1, first order); a budget gives each input's share of the",
+    ]);
+    // It comes before the first task.
+    expect(text.indexOf(legend[0]!)).toBeLessThan(text.findIndex((l) => l.startsWith('[1]')));
     const md = cli(['demo', '--format', 'markdown']).stdout;
     expect(md).toContain('± σ is the standard uncertainty (k = 1, first order)');
   });

@@ -31,7 +31,7 @@ describe.each(kinds)('levelRun(%s, …)', (_name, A) => {
     start: '50.000',
     sights: sights as never,
     close: '49.030',
-    order: 'third',
+    order: 12,
   });
 
   it('reduces the booking to the levels worked by hand', () => {
@@ -60,9 +60,9 @@ describe.each(kinds)('levelRun(%s, …)', (_name, A) => {
     expect(run.check.heightOfInstrumentOk).toBe(true);
   });
 
-  it('finds a −10 mm misclosure, outside the third-order allowance 12·√0.25 = 6 mm', () => {
+  it('finds a −10 mm misclosure, outside an allowance of 12·√0.25 = 6 mm (c = 12 mm as given)', () => {
     expect(A.toNumber(run.misclosureMm!)).toBeCloseTo(-10, 9);
-    // 250 m of run → K = 0.25 km; 12 mm·√0.25 = 6 mm (FGCC 1984 third order, c from memory).
+    // 250 m of run → K = 0.25 km; 12 mm·√0.25 = 6 mm (c as the user gives it).
     expect(run.withinAllowable).toBe(false);
   });
 
@@ -99,9 +99,9 @@ describe.each(kinds)('levelRun(%s, …)', (_name, A) => {
     expect(code(() => levelRun(A, { start: 0, sights: [{ bs: 1 }, { bs: 2 }, { fs: 1 }] }))).toBe(
       'INVALID_ARGUMENT',
     );
-    expect(
-      code(() => levelRun(A, { start: 0, sights: [{ bs: 1 }, { fs: 1 }], order: 'third' })),
-    ).toBe('INVALID_ARGUMENT');
+    expect(code(() => levelRun(A, { start: 0, sights: [{ bs: 1 }, { fs: 1 }], order: 12 }))).toBe(
+      'INVALID_ARGUMENT',
+    );
     expect(code(() => levelRun(A, { start: 0, sights: [{ bs: 1 }] }))).toBe('TOO_FEW_POINTS');
     expect(code(() => levelRun(A, { start: 0, sights: [{ bs: 1 }, { fs: 'x' }] }))).toBe(
       'INVALID_NUMBER',
@@ -109,19 +109,20 @@ describe.each(kinds)('levelRun(%s, …)', (_name, A) => {
   });
 });
 
-describe('allowableMisclosure(A, order, km)', () => {
+describe('allowableMisclosure(A, c, km)', () => {
   it('is c·√K, a surd in rational', () => {
-    expect(allowableMisclosure(rational, 'first-I', 9).allowable.toString()).toBe('9');
-    expect(allowableMisclosure(rational, 'second-II', 3).allowable.toString()).toBe('8√3');
+    expect(allowableMisclosure(rational, 3, 9).allowable.toString()).toBe('9');
+    expect(allowableMisclosure(rational, '8', 3).allowable.toString()).toBe('8√3');
     expect(allowableMisclosure(float, 5, 2).allowable).toBeCloseTo(5 * Math.SQRT2, 14);
   });
 
-  it('refuses an unknown order, c ≤ 0 and negative K with INVALID_ARGUMENT', () => {
+  it("refuses text that is not c, the name of an order (its c is the user's to give), c ≤ 0 and negative K with INVALID_ARGUMENT", () => {
     expect(code(() => allowableMisclosure(rational, 'fourth' as never, 1))).toBe(
       'INVALID_ARGUMENT',
     );
+    expect(code(() => allowableMisclosure(rational, 'third' as never, 1))).toBe('INVALID_ARGUMENT');
     expect(code(() => allowableMisclosure(rational, 0, 1))).toBe('INVALID_ARGUMENT');
-    expect(code(() => allowableMisclosure(rational, 'third', -1))).toBe('INVALID_ARGUMENT');
+    expect(code(() => allowableMisclosure(rational, 12, -1))).toBe('INVALID_ARGUMENT');
   });
 });
 
@@ -165,7 +166,7 @@ describe('levelRun with readings in feet', () => {
       unit: 'ft',
       start: 100,
       close: '100.01',
-      order: 'third',
+      order: 12,
       sights: [{ bs: '4.50' }, { fs: '4.50', distance: 5000 }],
     });
     // −0.01 ft = −3.048 mm; 5000 ft = 1.524 km; allowable² = 12² × 1.524 = 219.456 mm² (derived).

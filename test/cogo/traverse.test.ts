@@ -277,15 +277,18 @@ describe('bearingToAzimuth(A, bearing)', () => {
 });
 
 describe('traverse(float, …) float twin', () => {
-  // A copy of the float arithmetic is not `float` itself, so it takes the generic path.
-  const generic = { ...float } as typeof float;
+  // A copy of the float arithmetic without its float64 mark takes the generic path.
+  const generic = { ...float, float64: undefined } as unknown as typeof float;
   const course = fc.oneof(
     fc.record({
       latitude: fc.double({ min: -1e4, max: 1e4, noNaN: true }),
       departure: fc.double({ min: -1e4, max: 1e4, noNaN: true }),
     }),
     fc.record({
-      bearing: fc.double({ min: 0, max: 359.999, noNaN: true }),
+      bearing: fc.oneof(
+        fc.double({ min: 0, max: 359.999, noNaN: true }),
+        fc.constantFrom(0, -0, 30, 90, 180, 270, 360, 360.5, -1e-9),
+      ),
       distance: fc.double({ min: 0, max: 1e4, noNaN: true }),
     }),
     fc.record({

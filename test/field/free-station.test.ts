@@ -161,6 +161,21 @@ describe('freeStation σ (a priori, just determined) agrees with uncertain(float
     expect(U.toNumber(s.sigma.x)).toBeCloseTo(budget(U, s.station.x).sigma, 9);
     expect(U.toNumber(s.sigma.y)).toBeCloseTo(budget(U, s.station.y).sigma, 9);
     expect(U.toNumber(s.sigma.orientation)).toBeCloseTo(budget(U, s.orientation).sigma * 3600, 6);
+    // and both equal the propagation by central finite differences of float solves
+    const h = 1e-4;
+    let v = 0;
+    for (let k = 0; k < 3; k++) {
+      const x = (d: number) =>
+        freeStation(float, {
+          control,
+          observations: [0, 1, 2].map((i) => ({
+            to: i,
+            circle: circle(control[i]!) + (i === k ? d : 0),
+          })),
+        }).station.x;
+      v += ((((x(h) - x(-h)) / (2 * h)) * 3) / 3600) ** 2; // ∂x/∂c per degree × 3″
+    }
+    expect(budget(U, s.station.x).sigma).toBeCloseTo(Math.sqrt(v), 8);
   });
 });
 

@@ -158,3 +158,61 @@ describe('sinCosDegrees(float, …) through the twin', () => {
     );
   });
 });
+
+describe('heightFromInlineReadings(float, …) through the twin', () => {
+  it('is exactly the generic float result (or the same error) for three stations', async () => {
+    const { heightFromInlineReadings } = await import('../../src/index.js');
+    const chainage = fc.oneof(
+      fc.double({ min: -1e4, max: 1e4, noNaN: true }),
+      fc.integer({ min: -5, max: 5 }),
+      fc.constantFrom(0, -0, '12.5', 1e300),
+    );
+    const reading = fc.oneof(
+      fc.double({ min: 0, max: 1, noNaN: true }),
+      fc.double({ min: 1e-320, max: 1e-300, noNaN: true }),
+      fc.constantFrom(0, -0, 1, 1.5, -0.1, 5e-324, '1/2', { spread: 0.25, sign: -1 }),
+    );
+    fc.assert(
+      fc.property(
+        fc.array(chainage, { minLength: 3, maxLength: 3 }),
+        fc.array(reading, { minLength: 3, maxLength: 3 }),
+        (chainages, vertical) => {
+          const input = { chainages, vertical } as never;
+          expect(outcome(() => heightFromInlineReadings(float, input))).toStrictEqual(
+            outcome(() => heightFromInlineReadings(generic, input)),
+          );
+        },
+      ),
+      { numRuns: 5000 },
+    );
+  });
+
+  it('agrees exactly on 20000 seeded consistent three-station sightings', async () => {
+    const { heightFromInlineReadings } = await import('../../src/index.js');
+    let s = 0x1234567;
+    const rand = () => {
+      s ^= s << 13;
+      s >>>= 0;
+      s ^= s >>> 17;
+      s ^= s << 5;
+      s >>>= 0;
+      return s / 4294967296;
+    };
+    let differ = 0;
+    for (let i = 0; i < 20000; i++) {
+      const h = 1 + rand() * 200;
+      const foot = rand() * 1000 - 500;
+      const off = rand() * 500;
+      const chainages = [0, 1, 2].map(() => rand() * 2000 - 1000);
+      const vertical = chainages.map((c) => (h * h) / (h * h + (c - foot) ** 2 + off * off));
+      const a = outcome(() => heightFromInlineReadings(float, { chainages, vertical }));
+      const b = outcome(() => heightFromInlineReadings(generic, { chainages, vertical }));
+      try {
+        expect(a).toStrictEqual(b);
+      } catch {
+        differ++;
+      }
+    }
+    expect(differ).toBe(0);
+  });
+});

@@ -181,7 +181,7 @@ export const baseHeightTask: TaskKind = {
             label: `Difference between the heights from ${stations[0]!.label} and ${stations[1]!.label}`,
             unit: u,
             value: A.from(String(diff)),
-            tolerance: `≤ ${plain(tol)}`,
+            limit: A.from(tol),
             pass: diff <= Number(plain(tol)),
           });
         }

@@ -11,7 +11,6 @@ import { JobInvalid } from '../failure.js';
 import type { Env, JobPoint, RawCheck, RawQuantity, TaskKind } from '../task.js';
 import {
   lengthText,
-  plain,
   positive,
   readLength,
   readVertical,
@@ -234,7 +233,7 @@ export const heightTask: TaskKind = {
             label: `Largest difference between heights (${readings[wi]!.label} − ${readings[wj]!.label})`,
             unit: u,
             value: A.from(worst),
-            tolerance: `≤ ${plain(tol)}`,
+            limit: A.from(tol),
             pass,
           });
         }

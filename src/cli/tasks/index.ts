@@ -19,6 +19,8 @@ import { geodeticTask } from './geodetic.js';
 import { alignmentTask } from './alignment.js';
 import { stationSetupTask } from './station-setup.js';
 import { settingOutTask } from './setting-out.js';
+import { levellingNetworkTask } from './levelling-network.js';
+import { planeNetworkTask } from './plane-network.js';
 
 export const TASK_KINDS: readonly TaskKind[] = [
   heightTask,
@@ -36,4 +38,6 @@ export const TASK_KINDS: readonly TaskKind[] = [
   alignmentTask,
   stationSetupTask,
   settingOutTask,
+  levellingNetworkTask,
+  planeNetworkTask,
 ];

@@ -8,14 +8,7 @@
  */
 import { heightFromInlineReadings } from '../../index.js';
 import type { Env, RawCheck, RawQuantity, TaskKind } from '../task.js';
-import {
-  lengthText,
-  plain,
-  readLength,
-  readVertical,
-  verticalInputs,
-  verticalOf,
-} from '../values.js';
+import { lengthText, readLength, readVertical, verticalInputs, verticalOf } from '../values.js';
 import type { Input, VerticalSpec } from '../values.js';
 import { plus, root, signedRoot, squared, taskSchema } from './common.js';
 
@@ -157,6 +150,7 @@ export const inlineHeightTask: TaskKind = {
             label: 'Largest residual (horizontal quadrance, fitted less read)',
             unit: squared(u),
             value: worst,
+            internal: true,
           });
           if (tol !== undefined) {
             // The residual q of station i is a difference of horizontal quadrances (fitted
@@ -186,7 +180,7 @@ export const inlineHeightTask: TaskKind = {
               label: `Largest residual as a horizontal distance, √(fitted Q) − √(read Q) (at ${worstAt})`,
               unit: u,
               value: A.from(worstDistance),
-              tolerance: `≤ ${plain(tol)}`,
+              limit: A.from(tol),
               pass,
             });
           }

@@ -5,10 +5,10 @@
  *
  * @module cli
  */
-import { LEVELLING_ORDERS, QuadspreadError, levelRun, rational } from '../../index.js';
-import type { LevelSight, LevellingOrder } from '../../index.js';
+import { QuadspreadError, levelRun, rational } from '../../index.js';
+import type { LevelSight } from '../../index.js';
 import { JobInvalid } from '../failure.js';
-import type { TaskKind } from '../task.js';
+import type { Env, Outcome, RawCheck, RawQuantity, RawTable, TaskKind, Value } from '../task.js';
 import { plain, readLength } from '../values.js';
 import type { Input } from '../values.js';
 import { taskSchema } from './common.js';
@@ -34,11 +34,16 @@ export const levellingTask: TaskKind = {
       $ref: '#/$defs/measuredLength',
       description: 'Known reduced level of the closing bench mark.',
     },
-    order: {
-      anyOf: [{ enum: Object.keys(LEVELLING_ORDERS) }, { type: 'number', exclusiveMinimum: 0 }],
+    c: {
+      type: 'number',
+      exclusiveMinimum: 0,
       description:
-        'Order for the allowable misclosure c·√K (FGCC 1984; c values from memory, check them), or c in mm.',
-      'x-describe': `an order (${Object.keys(LEVELLING_ORDERS).join(', ')}) or c in mm`,
+        'The constant c in mm of the allowable misclosure c·√K, as the specification of the work gives it (docs/cli.md lists common values, unchecked).',
+    },
+    order: {
+      type: ['number', 'string'],
+      description:
+        'Older name of "c" (a number, c in mm). The name of an order is refused: its c is the user\'s to give.',
     },
     km: {
       type: 'number',
@@ -71,9 +76,17 @@ export const levellingTask: TaskKind = {
       task.close !== undefined
         ? readLength(task.close, `${path}.close`, ctx.unit, 'close level', 'reduced level')
         : undefined;
-    if (task.order !== undefined && close === undefined)
+    if (typeof task.order === 'string')
       throw new JobInvalid(
         `${path}.order`,
+        `${JSON.stringify(task.order)} names an order, but the constant c of the allowable misclosure c·√K is yours to give: write "c": <mm> as your specification states it (docs/cli.md lists common values, unchecked)`,
+      );
+    if (task.order !== undefined && task.c !== undefined)
+      throw new JobInvalid(`${path}.order`, 'give "c" alone ("order" is its older name)');
+    const cMm = (task.c ?? task.order) as number | undefined;
+    if (cMm !== undefined && close === undefined)
+      throw new JobInvalid(
+        `${path}.${task.c !== undefined ? 'c' : 'order'}`,
         'an allowable misclosure needs the closing level "close"',
       );
     const sights: SightSpec[] = (task.sights as Record<string, unknown>[]).map((s, i) => {
@@ -142,9 +155,9 @@ export const levellingTask: TaskKind = {
     return {
       summary: `Levelling run of ${sights.length} rows from ${plain(start.value)} ${ctx.unitName}${close ? ` closing on ${plain(close.value)} ${ctx.unitName}` : ''}.`,
       inputs,
-      compute(env) {
+      compute<V>(env: Env<V>): Outcome<V> {
         const A = env.A;
-        const list: LevelSight<typeof A.zero>[] = sights.map((s) => ({
+        const list: LevelSight<V>[] = sights.map((s) => ({
           station: s.station,
           ...(s.bs ? { bs: env.get(s.bs) } : {}),
           ...(s.is ? { is: env.get(s.is) } : {}),
@@ -156,27 +169,21 @@ export const levellingTask: TaskKind = {
           sights: list,
           ...(close ? { close: env.get(close) } : {}),
           unit: ctx.unit,
-          ...(task.order !== undefined ? { order: task.order as LevellingOrder | number } : {}),
+          ...(cMm !== undefined ? { order: cMm } : {}),
           ...(task.km !== undefined ? { km: task.km as number } : {}),
         });
         const u = ctx.unitName;
-        const results = run.rows.slice(1).map((r, i) => ({
+        const results: RawQuantity<V>[] = run.rows.slice(1).map((r, i) => ({
           name: `${sights[i + 1]!.station}.level`,
           label: `${sights[i + 1]!.station} reduced level${close ? ' (adjusted)' : ''}`,
           unit: u,
           value: close ? r.adjusted : r.level,
+          kind: 'level',
         }));
         // The booking's arithmetic checks recompute the program's own sums: they cannot detect a
         // misread staff, only a fault in the reduction, so they are not counted as checks on the
         // survey. They become a note when they hold and a failed check if they ever do not.
-        const checks: {
-          name: string;
-          label: string;
-          unit: string;
-          value: typeof A.zero;
-          tolerance: string;
-          pass: boolean;
-        }[] = [];
+        const checks: RawCheck<V>[] = [];
         if (!run.check.riseFallOk)
           checks.push({
             name: 'rise_fall',
@@ -214,7 +221,7 @@ export const levellingTask: TaskKind = {
             label: 'Misclosure within c·√K',
             unit: 'mm',
             value: run.misclosureMm,
-            tolerance: `≤ ${env.num(run.allowable.allowable as never).toFixed(1)}`,
+            limit: run.allowable.allowable as Value<V>,
             pass: run.withinAllowable === true,
           });
         }
@@ -225,11 +232,92 @@ export const levellingTask: TaskKind = {
           );
         }
         if (close) notes.push(`Misclosure distributed by ${run.distributedBy}.`);
-        if (task.order !== undefined && typeof task.order === 'string')
-          notes.push(
-            'The allowable misclosure constants are quoted from memory of FGCC (1984): check them against the standard before relying on them.',
-          );
-        return { results, checks, notes };
+        if (task.order !== undefined)
+          notes.push('"order" is the older name of "c": write "c" (the constant in mm).');
+        const tables: RawTable<V>[] = [];
+        if (env.drawing) {
+          const rows = run.rows;
+          const adjusted = close !== undefined;
+          const dist = sights.map((s) => (s.distance ? env.get(s.distance) : undefined));
+          tables.push({
+            name: 'level-book-rise-fall',
+            title: `Level book, rise and fall${adjusted ? ', with the misclosure distributed' : ''}`,
+            columns: [
+              { label: 'Station' },
+              { label: 'BS', kind: 'level' },
+              { label: 'IS', kind: 'level' },
+              { label: 'FS', kind: 'level' },
+              { label: 'Rise', kind: 'level' },
+              { label: 'Fall', kind: 'level' },
+              { label: 'RL', kind: 'level' },
+              ...(adjusted
+                ? [
+                    { label: 'Corr', kind: 'level' as const },
+                    { label: 'Adj RL', kind: 'level' as const },
+                  ]
+                : []),
+              ...(dist.some((d) => d !== undefined)
+                ? [{ label: 'Dist', kind: 'length' as const }]
+                : []),
+            ],
+            rows: [
+              ...rows.map((r, i) => [
+                r.station ?? `row ${i + 1}`,
+                r.bs,
+                r.is,
+                r.fs,
+                r.rise,
+                r.fall,
+                r.level,
+                ...(adjusted ? [r.correction, r.adjusted] : []),
+                ...(dist.some((d) => d !== undefined) ? [dist[i]] : []),
+              ]),
+              [
+                'Σ',
+                run.check.sumBS,
+                undefined,
+                run.check.sumFS,
+                run.check.sumRise,
+                run.check.sumFall,
+              ],
+            ],
+            notes: [
+              `Checks: ΣBS − ΣFS = ΣRise − ΣFall = last RL − first RL = ${A.toPrecision(
+                run.check.difference,
+                12,
+              )
+                .replace(/(\.\d*?)0+$/, '$1')
+                .replace(
+                  /\.$/,
+                  '',
+                )} ${u}${run.check.riseFallOk ? ' (they agree)' : ' (THEY DO NOT AGREE)'}. Levels in ${u}.`,
+            ],
+          });
+          tables.push({
+            name: 'level-book-collimation',
+            title: 'Level book, height of collimation',
+            columns: [
+              { label: 'Station' },
+              { label: 'BS', kind: 'level' },
+              { label: 'IS', kind: 'level' },
+              { label: 'FS', kind: 'level' },
+              { label: 'HPC', kind: 'level' },
+              { label: 'RL', kind: 'level' },
+            ],
+            rows: rows.map((r, i) => [
+              r.station ?? `row ${i + 1}`,
+              r.bs,
+              r.is,
+              r.fs,
+              r.hi,
+              r.level,
+            ]),
+            notes: [
+              `Check: Σ(HPC × sights taken from it) = ΣIS + ΣFS + Σ(RL after the first)${run.check.heightOfInstrumentOk ? ' (it holds)' : ' (IT DOES NOT HOLD)'}. HPC is the height of the plane of collimation, in ${u}.`,
+            ],
+          });
+        }
+        return { results, checks, notes, tables };
       },
     };
   },

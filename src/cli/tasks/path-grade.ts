@@ -216,7 +216,7 @@ export const pathGradeTask: TaskKind = {
               label: `${a.label} no steeper than the ruling grade`,
               unit: '%',
               value: gradeFromSpread(A, Ua),
-              tolerance: `≤ ${env.num(gradeFromSpread(A, U)).toPrecision(4)}`,
+              limit: gradeFromSpread(A, U),
               pass: A.cmp(Ua, U) <= 0,
             });
         }

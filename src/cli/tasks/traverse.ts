@@ -8,8 +8,9 @@
 import { angularMisclosure, traverse } from '../../index.js';
 import type { TraverseCourse } from '../../index.js';
 import { JobInvalid } from '../failure.js';
-import type { TaskKind } from '../task.js';
-import { angleText, lengthText, plain, positive, readAngle, readLength } from '../values.js';
+import type { Env, Outcome, RawCheck, RawQuantity, RawTable, TaskKind } from '../task.js';
+import { traverseTables } from './traverse-tables.js';
+import { angleText, lengthText, positive, readAngle, readLength } from '../values.js';
 import type { Input } from '../values.js';
 import { nums, pointInputs, taskSchema, xy } from './common.js';
 
@@ -145,9 +146,9 @@ export const traverseTask: TaskKind = {
     return {
       summary: `Traverse from ${start.name} through ${courses.length} course${courses.length === 1 ? '' : 's'} closing on ${close.name}, ${rule} rule.`,
       inputs,
-      compute(env) {
+      compute<V>(env: Env<V>): Outcome<V> {
         const A = env.A;
-        const list: TraverseCourse<typeof A.zero>[] = courses.map((c) =>
+        const list: TraverseCourse<V>[] = courses.map((c) =>
           'bearing' in c
             ? { bearing: env.get(c.bearing), distance: env.get(c.distance) }
             : { latitude: env.get(c.latitude), departure: env.get(c.departure) },
@@ -171,7 +172,7 @@ export const traverseTask: TaskKind = {
               A.sqrt(A.add(A.mul(c.latitude, c.latitude), A.mul(c.departure, c.departure))) ===
                 undefined,
           );
-        const results = [
+        const results: RawQuantity<V>[] = [
           {
             name: 'misclosure_east',
             label: 'Misclosure in departure (east), computed end less known closing point',
@@ -209,21 +210,31 @@ export const traverseTask: TaskKind = {
             },
           ]),
         ];
-        const checks = [];
+        const checks: RawCheck<V>[] = [];
         if (tol.precision !== undefined) {
           const ratio = t.closure.ratio;
           const pass = ratio === undefined || A.cmp(ratio, A.from(tol.precision)) >= 0;
-          checks.push({
-            name: 'precision',
-            label:
-              ratio === undefined
-                ? 'Precision 1 : N (closes exactly: N is infinite, shown as 0)'
-                : 'Precision 1 : N, N = length ÷ linear misclosure',
-            unit: '',
-            value: ratio ?? A.zero,
-            tolerance: `≥ ${tol.precision}`,
-            pass,
-          });
+          checks.push(
+            ratio === undefined
+              ? {
+                  name: 'precision',
+                  label: 'Precision 1 : N (closes exactly: N is infinite, shown as 0)',
+                  unit: '',
+                  value: A.zero,
+                  tolerance: `≥ ${tol.precision}`,
+                  pass,
+                }
+              : {
+                  name: 'precision',
+                  label: 'Precision 1 : N, N = length ÷ linear misclosure',
+                  unit: '',
+                  kind: 'ratio',
+                  value: ratio,
+                  limit: A.from(tol.precision),
+                  relation: '≥',
+                  pass,
+                },
+          );
         }
         if (linearTol !== undefined) {
           const L = A.add(
@@ -236,7 +247,7 @@ export const traverseTask: TaskKind = {
             label: 'Linear misclosure',
             unit: u,
             value: t.closure.linear,
-            tolerance: `≤ ${plain(linearTol)}`,
+            limit: T,
             pass: A.cmp(L, A.mul(T, T)) <= 0,
           });
         }
@@ -250,21 +261,32 @@ export const traverseTask: TaskKind = {
             label: 'Angular misclosure (sum of interior angles less (n − 2)·180°)',
             unit: '°',
             value: m.misclosure,
+            kind: 'seconds',
           });
           if (angularTol !== undefined) {
+            const sec = A.from(3600);
             checks.push({
               name: 'angular',
-              label: 'Angular misclosure',
-              unit: '°',
-              value: m.misclosure,
-              tolerance:
-                typeof tol.angular === 'string' && !/^[\d.]+°?$/.test(tol.angular.trim())
-                  ? `≤ ${tol.angular.trim()} = ${plain(angularTol)}`
-                  : `≤ ${plain(angularTol)}`,
+              label: 'Angular misclosure, in seconds of arc',
+              unit: '"',
+              kind: 'seconds',
+              value: A.mul(m.misclosure, sec),
+              limit: A.mul(A.abs(A.from(angularTol)), sec),
               pass: A.cmp(A.abs(m.misclosure), A.abs(A.from(angularTol))) <= 0,
             });
           }
         }
+        const tables: RawTable<V>[] = [];
+        if (env.drawing)
+          tables.push(
+            ...traverseTables(
+              A,
+              t,
+              [start.name, ...courses.map((c) => c.to)],
+              courses.map((c) => ('bearing' in c ? env.get(c.bearing) : undefined)),
+              u,
+            ),
+          );
         let sketch;
         if (env.drawing) {
           const names = [start.name, ...courses.map((c) => c.to)];
@@ -305,7 +327,7 @@ export const traverseTask: TaskKind = {
             },
           ];
         }
-        return { results, checks, notes, ...(sketch ? { sketch } : {}) };
+        return { results, checks, notes, tables, ...(sketch ? { sketch } : {}) };
       },
     };
   },

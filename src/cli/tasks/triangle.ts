@@ -7,6 +7,7 @@
  */
 import {
   QuadspreadError,
+  degreesFromSpread,
   solveTriangle,
   spreadFromDegrees,
   triangle,
@@ -15,7 +16,7 @@ import {
 } from '../../index.js';
 import type { Arithmetic, Surd, Triangle } from '../../index.js';
 import { JobInvalid } from '../failure.js';
-import type { Env, RawQuantity, TaskKind, Value } from '../task.js';
+import type { Env, RawQuantity, RawTable, TaskKind, Value } from '../task.js';
 import { inClosed, inRange, positive, readAngle, readLength, readNumber } from '../values.js';
 import type { Input } from '../values.js';
 import { nums, pointInputs, root, squared, taskSchema, xy } from './common.js';
@@ -60,10 +61,12 @@ function measures<V>(
 ): RawQuantity<V>[] {
   const A = env.A;
   const out: RawQuantity<V>[] = [];
+  const which = tag === '' ? '' : `, solution ${tag.slice(1)}`;
   for (const i of [1, 2, 3])
     out.push({
       name: `Q${i}${tag}`,
-      label: `Quadrance Q${i} (opposite A${i})`,
+      label: `Quadrance Q${i} (opposite A${i}${which})`,
+      internal: true,
       unit: squared(unit),
       value: t[`Q${i}`]!,
     });
@@ -71,14 +74,19 @@ function measures<V>(
     const r = rootOf(A, t[`Q${i}`]!);
     out.push({
       name: `side${i}${tag}`,
-      label: `Side ${i} (opposite A${i})`,
+      label: `Side ${i} (opposite A${i}${which})`,
       unit,
       value: r.value,
       approx: r.approx,
     });
   }
   for (const i of [1, 2, 3])
-    out.push({ name: `s${i}${tag}`, label: `Spread s${i} at A${i}`, unit: '', value: t[`s${i}`]! });
+    out.push({
+      name: `s${i}${tag}`,
+      label: `Spread s${i} at A${i}${which ? ` (${which.slice(2)})` : ''}`,
+      unit: '',
+      value: t[`s${i}`]!,
+    });
   out.push({
     name: `quadrea${tag}`,
     label: 'Quadrea (16·area²)',
@@ -89,7 +97,7 @@ function measures<V>(
   const area = isSurd(q.value) ? q.value.div(4) : A.div(q.value as V, A.from(4));
   out.push({
     name: `area${tag}`,
-    label: 'Area (√quadrea / 4)',
+    label: `Area (√quadrea / 4${which})`,
     unit: squared(unit),
     value: area as Value<V>,
     approx: q.approx,
@@ -251,7 +259,7 @@ export const triangleTask: TaskKind = {
         const notes =
           solutions.length > 1
             ? [
-                `Two triangles fit these measures (names ending .1 and .2; the one that needed the minus sign of the square root first): an angle that was not given can be acute or obtuse (a spread does not tell an angle from its supplement), so say which one the field work saw.`,
+                `Two triangles fit these measures (solutions 1 and 2, keys ending .1 and .2 in JSON; the one that needed the minus sign of the square root first): an angle that was not given can be acute or obtuse (a spread does not tell an angle from its supplement), so say which one the field work saw.`,
               ]
             : [];
         let sketch;
@@ -276,11 +284,66 @@ export const triangleTask: TaskKind = {
             );
           });
         }
-        return { results, checks: [], notes, ...(sketch ? { sketch } : {}) };
+        const tables = env.drawing
+          ? solutions.map((t, i) =>
+              triangleTable(
+                A,
+                t as unknown as Triangle<Value<typeof A.zero>>,
+                unit,
+                solutions.length > 1 ? ` (solution ${i + 1})` : '',
+              ),
+            )
+          : [];
+        return { results, checks: [], notes, tables, ...(sketch ? { sketch } : {}) };
       },
     };
   },
 };
+
+/** A value or surd as a value of the arithmetic (a surd through 40 significant digits). */
+function valueOf<V>(A: Arithmetic<V, boolean>, x: Value<V>): V {
+  return isSurd(x) ? A.from(x.toPrecision(40)) : (x as V);
+}
+
+/**
+ * The triangle's solution sheet: at each vertex its angle (from the spread, obtuse where
+ * Qj + Qk < Qi by the cross law), its spread, and the side opposite.
+ */
+function triangleTable<V>(
+  A: Arithmetic<V, boolean>,
+  t: Triangle<Value<V>>,
+  unit: string,
+  which: string,
+): RawTable<V> {
+  const Q = [t.Q1, t.Q2, t.Q3];
+  const s = [t.s1, t.s2, t.s3];
+  const rows = ([1, 2, 3] as const).map((i) => {
+    const acute = degreesFromSpread(A, valueOf(A, s[i - 1]!));
+    const angle = crossSign(A, t, i) < 0 ? A.sub(A.from(180), acute) : acute;
+    return [
+      `A${i}`,
+      angle,
+      s[i - 1],
+      `side ${i} (A${(i % 3) + 1}–A${((i + 1) % 3) + 1})`,
+      root(A, valueOf(A, Q[i - 1]!)).value,
+    ];
+  });
+  return {
+    name: `triangle${which ? which.replace(/\D/g, '') : ''}`,
+    title: `Triangle solution${which}`,
+    columns: [
+      { label: 'Vertex' },
+      { label: 'Angle', kind: 'angle' },
+      { label: 'Spread', kind: 'number' },
+      { label: 'Opposite' },
+      { label: 'Side', kind: 'length', unit },
+    ],
+    rows,
+    notes: [
+      'Each angle is read from its spread (s = sin²θ) and is obtuse where the cross law says so (Qj + Qk < Qi).',
+    ],
+  };
+}
 
 /** The sign of Qj + Qk − Qi in triangle t ({i, j, k} = {1, 2, 3}): + acute at Ai, 0 right, − obtuse. */
 function crossSign<V>(A: Arithmetic<V, boolean>, t: Triangle<Value<V>>, i: 1 | 2 | 3): number {

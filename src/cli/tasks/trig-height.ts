@@ -14,7 +14,6 @@ import type { Env, RawCheck, RawQuantity, TaskKind } from '../task.js';
 import {
   inClosed,
   lengthText,
-  plain,
   positive,
   readLength,
   readNumber,
@@ -247,7 +246,7 @@ export const trigHeightTask: TaskKind = {
               label: 'Forward + backward (zero for agreeing sights)',
               unit: u,
               value: r.misclosure,
-              tolerance: `≤ ${plain(tol)}`,
+              limit: A.from(tol),
               pass: absAtMost(A, r.misclosure, A.from(tol)),
             });
           }
