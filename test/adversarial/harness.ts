@@ -184,6 +184,11 @@ export async function runAdversarial(o: AdversarialOptions): Promise<Adversarial
     start =
       at.run + 1 < o.runs ? { site: at.site, run: at.run + 1 } : { site: at.site + 1, run: 0 };
   }
+  // Timeouts met before the first worker finished are named now that the sites are known.
+  for (const t of summary.timeouts) {
+    const m = /^site (\d+)/.exec(t.site);
+    if (m && siteNames[Number(m[1])]) t.site = t.site.replace(m[0], siteNames[Number(m[1])]!);
+  }
   summary.seconds = (Date.now() - t0) / 1000;
   return summary;
 }
