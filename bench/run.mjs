@@ -22,7 +22,9 @@ import * as budget from './workloads/budget.mjs';
 import * as geodesy from './workloads/geodesy.mjs';
 import * as roundtrip from './workloads/roundtrip.mjs';
 import * as sideshots from './workloads/side-shots.mjs';
+import * as projection from './workloads/projection.mjs';
 import * as geodesic from './workloads/geodesic.mjs';
+import * as alignment from './workloads/alignment.mjs';
 
 const args = process.argv.slice(2);
 const quick = args.includes('--quick');
@@ -72,7 +74,9 @@ const workloads = [
   geodesy,
   roundtrip,
   sideshots,
+  projection,
   geodesic,
+  alignment,
 ].filter((w) => !only || w.name === only);
 const built = [];
 for (const w of workloads) {

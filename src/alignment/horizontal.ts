@@ -236,6 +236,11 @@ export interface HorizontalAlignment<T> {
   readonly length: T;
   /** The chainage equations. */
   readonly equations: readonly ChainageEquation<T>[];
+  /**
+   * The elements' boxes side by side, four JS numbers per element (min east, min north, max
+   * east, max north): the same as each element's `bounds`, in one flat array for a fast search.
+   */
+  readonly boxes: readonly number[];
 }
 
 /**
@@ -477,6 +482,7 @@ export function horizontalAlignment<T>(
     endChainage,
     length,
     equations,
+    boxes: elements.flatMap((e) => e.bounds),
   };
 }
 
@@ -783,6 +789,8 @@ export function readAlignment<T>(
     !Array.isArray(o.elements) ||
     o.elements.length === 0 ||
     !Array.isArray(o.equations) ||
+    !Array.isArray(o.boxes) ||
+    o.boxes.length !== 4 * o.elements.length ||
     !A.is(o.length) ||
     !A.is(o.startChainage) ||
     !A.is(o.elements[0]!.startDistance)

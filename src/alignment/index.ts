@@ -32,3 +32,11 @@ export { alignmentStation } from './project.js';
 export type { StationCandidate, AlignmentStation, AlignmentStationOptions } from './project.js';
 export { deflectionTable, settingOutTable } from './setting-out.js';
 export type { DeflectionRow, SetOutPoint, SettingOutRow } from './setting-out.js';
+export {
+  minimumRadius,
+  railCant,
+  transitionLength,
+  stoppingSightDistance,
+  sightLineOffset,
+  sightCurveLength,
+} from './design-checks.js';

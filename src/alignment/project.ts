@@ -97,36 +97,49 @@ export function alignmentStation<T>(
   const px = A.toNumber(p.x);
   const py = A.toNumber(p.y);
   const tolN = A.toNumber(tol);
-  // Squared distances from P to each element's box (plain numbers), and the nearest box.
+  // Squared distance from P to an element's box, in plain numbers: a lower bound on its offset².
   const n = els.length;
-  const lb = new Float64Array(n);
+  const boxes = h.boxes;
+  const boxQ = (i: number): number => {
+    const k = 4 * i;
+    const x0 = boxes[k]!;
+    const x1 = boxes[k + 2]!;
+    const y0 = boxes[k + 1]!;
+    const y1 = boxes[k + 3]!;
+    const dx = px < x0 ? x0 - px : px > x1 ? px - x1 : 0;
+    const dy = py < y0 ? y0 - py : py > y1 ? py - y1 : 0;
+    return dx * dx + dy * dy;
+  };
+  // The nearest box first (usually one holding P), so that the first foot is near and prunes
+  // the rest; then every element whose box is within reach of the best foot so far.
   let first = 0;
-  for (let i = 0; i < n; i++) {
-    const b = els[i]!.bounds;
-    const dx = px < b[0] ? b[0] - px : px > b[2] ? px - b[2] : 0;
-    const dy = py < b[1] ? b[1] - py : py > b[3] ? py - b[3] : 0;
-    lb[i] = dx * dx + dy * dy;
-    if (lb[i]! < lb[first]!) first = i;
+  let firstQ = Infinity;
+  for (let i = 0; i < n && firstQ > 0; i++) {
+    const q = boxQ(i);
+    if (q < firstQ) {
+      firstQ = q;
+      first = i;
+    }
   }
   const found: StationCandidate<T>[] = [];
-  let best = Infinity; // |offset| of the nearest found, as a number
-  const tryElement = (i: number) => {
-    const c = projectOn(A, els[i]!, p);
-    if (c === undefined) return;
+  let best = Infinity; // |offset| of the nearest foot found so far, as a number
+  for (let k = -1; k < n; k++) {
+    const i = k < 0 ? first : k;
+    if (k === first) continue;
+    const reach = best + tolN;
+    // 1e-9 relative slack for the rounding of boxes and offsets to numbers.
+    if (k >= 0 && boxQ(i) > reach * reach * (1 + 1e-9) + 1e-18) continue;
+    const e = els[i]!;
+    const c = projectOn(A, e, p);
+    if (c === undefined) continue;
     found.push({
       chainage: A.zero,
       offset: c.offset,
       element: i,
-      distance: A.add(els[i]!.startDistance, c.s),
+      distance: A.add(e.startDistance, c.s),
     });
-    best = Math.min(best, Math.abs(A.toNumber(c.offset)));
-  };
-  tryElement(first);
-  for (let i = 0; i < n; i++) {
-    if (i === first) continue;
-    const reach = best + tolN;
-    // 1e-9 relative slack for the rounding of boxes and offsets to numbers.
-    if (lb[i]! <= reach * reach * (1 + 1e-9) + 1e-18) tryElement(i);
+    const o = Math.abs(A.toNumber(c.offset));
+    if (o < best) best = o;
   }
   let extended = false;
   if (found.length === 0) {
@@ -164,7 +177,7 @@ export function alignmentStation<T>(
       );
   }
   // The nearest first; keep those within the tolerance, one per distinct foot.
-  found.sort((a, b) => A.cmp(A.abs(a.offset), A.abs(b.offset)));
+  if (found.length > 1) found.sort((a, b) => A.cmp(A.abs(a.offset), A.abs(b.offset)));
   const limit = A.add(A.abs(found[0]!.offset), tol);
   const kept: StationCandidate<T>[] = [];
   for (const f of found) {
@@ -192,7 +205,7 @@ export function projectOn<T>(
   p: Point<T>,
 ): { s: T; offset: T } | undefined {
   // Joins are computed from both sides and agree to rounding: allow a foot that far outside.
-  const slack = A.mul(A.add(e.length, A.one), A.from(A.exact ? '1e-30' : '1e-9'));
+  const slack = A.mul(A.add(e.length, A.one), A.exact ? A.from('1e-30') : A.from(1e-9));
   const inside = (s: T): T | undefined =>
     A.sign(s) < 0
       ? A.cmp(A.neg(s), slack) <= 0

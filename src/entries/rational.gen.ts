@@ -38,6 +38,12 @@ export const adjustLevelling: Bound<typeof g.adjustLevelling<Value, true>> = (in
 /** {@link g.adjustNetwork | adjustNetwork} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const adjustNetwork: Bound<typeof g.adjustNetwork<Value, true>> = (input) => g.adjustNetwork<Value, true>(arithmetic, input);
 
+/** {@link g.albersEqualArea | albersEqualArea} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const albersEqualArea: Bound<typeof g.albersEqualArea<Value>> = (point, projection) => g.albersEqualArea<Value>(arithmetic, point, projection);
+
+/** {@link g.albersEqualAreaInverse | albersEqualAreaInverse} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const albersEqualAreaInverse: Bound<typeof g.albersEqualAreaInverse<Value>> = (point, projection) => g.albersEqualAreaInverse<Value>(arithmetic, point, projection);
+
 /** {@link g.alignmentPoint | alignmentPoint} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const alignmentPoint: Bound<typeof g.alignmentPoint<Value>> = (alignment, chainage, offset, options) => g.alignmentPoint<Value>(arithmetic, alignment, chainage, offset, options);
 
@@ -82,6 +88,12 @@ export const azimuthToQuadrant: Bound<typeof g.azimuthToQuadrant<Value>> = (azim
 
 /** {@link g.bearingToAzimuth | bearingToAzimuth} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const bearingToAzimuth: Bound<typeof g.bearingToAzimuth<Value>> = (bearing) => g.bearingToAzimuth<Value>(arithmetic, bearing);
+
+/** {@link g.cassiniSoldner | cassiniSoldner} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const cassiniSoldner: Bound<typeof g.cassiniSoldner<Value>> = (point, projection) => g.cassiniSoldner<Value>(arithmetic, point, projection);
+
+/** {@link g.cassiniSoldnerInverse | cassiniSoldnerInverse} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const cassiniSoldnerInverse: Bound<typeof g.cassiniSoldnerInverse<Value>> = (point, projection) => g.cassiniSoldnerInverse<Value>(arithmetic, point, projection);
 
 /** {@link g.clothoid | clothoid} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const clothoid: Bound<typeof g.clothoid<Value>> = (input) => g.clothoid<Value>(arithmetic, input);
@@ -260,6 +272,12 @@ export const isParallel: Bound<typeof g.isParallel<Value>> = (l1, l2) => g.isPar
 /** {@link g.isPerpendicular | isPerpendicular} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const isPerpendicular: Bound<typeof g.isPerpendicular<Value>> = (l1, l2) => g.isPerpendicular<Value>(arithmetic, l1, l2);
 
+/** {@link g.lambertAzimuthalEqualArea | lambertAzimuthalEqualArea} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const lambertAzimuthalEqualArea: Bound<typeof g.lambertAzimuthalEqualArea<Value>> = (point, projection) => g.lambertAzimuthalEqualArea<Value>(arithmetic, point, projection);
+
+/** {@link g.lambertAzimuthalEqualAreaInverse | lambertAzimuthalEqualAreaInverse} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const lambertAzimuthalEqualAreaInverse: Bound<typeof g.lambertAzimuthalEqualAreaInverse<Value>> = (point, projection) => g.lambertAzimuthalEqualAreaInverse<Value>(arithmetic, point, projection);
+
 /** {@link g.lambertConic | lambertConic} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const lambertConic: Bound<typeof g.lambertConic<Value>> = (point, projection) => g.lambertConic<Value>(arithmetic, point, projection);
 
@@ -292,6 +310,9 @@ export const meridianRadius: Bound<typeof g.meridianRadius<Value>> = (lat, ellip
 
 /** {@link g.metresToLength | metresToLength} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const metresToLength: Bound<typeof g.metresToLength<Value>> = (metres, unit) => g.metresToLength<Value>(arithmetic, metres, unit);
+
+/** {@link g.minimumRadius | minimumRadius} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const minimumRadius: Bound<typeof g.minimumRadius<Value>> = (input) => g.minimumRadius<Value>(arithmetic, input);
 
 /** {@link g.molodenskyBadekas | molodenskyBadekas} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const molodenskyBadekas: Bound<typeof g.molodenskyBadekas<Value>> = (point, params) => g.molodenskyBadekas<Value>(arithmetic, point, params);
@@ -356,6 +377,9 @@ export const quadrea: Bound<typeof g.quadrea<Value>> = (Q1, Q2, Q3) => g.quadrea
 /** {@link g.radiusInAzimuth | radiusInAzimuth} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const radiusInAzimuth: Bound<typeof g.radiusInAzimuth<Value>> = (lat, azimuth, ellipsoid) => g.radiusInAzimuth<Value>(arithmetic, lat, azimuth, ellipsoid);
 
+/** {@link g.railCant | railCant} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const railCant: Bound<typeof g.railCant<Value>> = (input) => g.railCant<Value>(arithmetic, input);
+
 /** {@link g.readStation | readStation} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const readStation: Bound<typeof g.readStation<Value>> = (text) => g.readStation<Value>(arithmetic, text);
 
@@ -394,6 +418,12 @@ export const sideShot: Bound<typeof g.sideShot<Value>> = (setup, shot) => g.side
 
 /** {@link g.sideShots | sideShots} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const sideShots: Bound<typeof g.sideShots<Value>> = (setup, shots) => g.sideShots<Value>(arithmetic, setup, shots);
+
+/** {@link g.sightCurveLength | sightCurveLength} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const sightCurveLength: Bound<typeof g.sightCurveLength<Value>> = (input) => g.sightCurveLength<Value>(arithmetic, input);
+
+/** {@link g.sightLineOffset | sightLineOffset} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const sightLineOffset: Bound<typeof g.sightLineOffset<Value>> = (input) => g.sightLineOffset<Value>(arithmetic, input);
 
 /** {@link g.sinCosDegrees | sinCosDegrees} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const sinCosDegrees: Bound<typeof g.sinCosDegrees<Value>> = (degrees) => g.sinCosDegrees<Value>(arithmetic, degrees);
@@ -449,6 +479,9 @@ export const stewartQuadranceResidual: Bound<typeof g.stewartQuadranceResidual<V
 /** {@link g.stewartResidual | stewartResidual} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const stewartResidual: Bound<typeof g.stewartResidual<Value>> = (data) => g.stewartResidual<Value>(arithmetic, data);
 
+/** {@link g.stoppingSightDistance | stoppingSightDistance} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const stoppingSightDistance: Bound<typeof g.stoppingSightDistance<Value>> = (input) => g.stoppingSightDistance<Value>(arithmetic, input);
+
 /** {@link g.surd | surd} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const surd: Bound<typeof g.surd<Value>> = (a, b, d) => g.surd<Value>(arithmetic, a, b, d);
 
@@ -460,6 +493,9 @@ export const tanh: Bound<typeof g.tanh<Value>> = (value) => g.tanh<Value>(arithm
 
 /** {@link g.toGrid | toGrid} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const toGrid: Bound<typeof g.toGrid<Value>> = (point, projection) => g.toGrid<Value>(arithmetic, point, projection);
+
+/** {@link g.transitionLength | transitionLength} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const transitionLength: Bound<typeof g.transitionLength<Value>> = (input) => g.transitionLength<Value>(arithmetic, input);
 
 /** {@link g.transverseMercator | transverseMercator} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const transverseMercator: Bound<typeof g.transverseMercator<Value>> = (point, projection) => g.transverseMercator<Value>(arithmetic, point, projection);
@@ -520,14 +556,14 @@ export const zenithToElevation: Bound<typeof g.zenithToElevation<Value>> = (degr
 
 export {
   ANGLE_UNITS, AREA_UNITS, baardaTest, BEARING_PARALLEL_TOLERANCE, budget, chiSquareCdf,
-  chiSquareQuantile, DANGER_CIRCLE_TOLERANCE, decimal, decimalElementary,
+  chiSquareQuantile, crs, CRS_CODES, DANGER_CIRCLE_TOLERANCE, decimal, decimalElementary,
   DEFAULT_EARTH_RADIUS_M, DEFAULT_REFRACTION, defineEllipsoid, ellipsoidByName, ERROR_CODES,
   fCdf, float, fQuantile, GRS80, isSurd, LEVELLING_ORDERS, MAX_DECIMAL_DIGITS, MAX_EXPONENT,
   MAX_INPUT_LENGTH, measured, measuredAngle, measuredDistance, measuredGrade, measuredQuadrance,
   measuredSpread, measuredVertical, METRES_PER_UNIT, monteCarlo, normalCdf, normalInputs,
   normalQuantile, QuadspreadError, randomStream, rational, RATIONAL_TRANSCENDENTAL_DIGITS,
-  readRatio, roundOff, sensitivities, spreadOfAngle, tauCritical, Uncertain, verticalOfAngle,
-  WGS84, withDerivative,
+  readRatio, roundOff, sensitivities, spreadOfAngle, tauCritical, Uncertain, utmProjection,
+  utmZone, verticalOfAngle, WGS84, withDerivative,
 } from '../index.js';
 export type {
   AdjustedHeight, AdjustedLevelObservation, AdjustedNetworkObservation, AdjustedPoint,
@@ -541,27 +577,27 @@ export type {
   EllipsoidDefinition, EllipsoidParameters, Enu, ErrorCode, ErrorEllipse, FaceOptions,
   FieldCheck, FieldObservation, FlatEarthError, FloatArithmetic, FootSide, FreeStation,
   FreeStationInput, FreeStationResidual, Geocentric, GeocentricTranslationParameters,
-  GeodesicDirect, GeodesicInverse, Geodetic, GeodeticInput, GeographicPoint, GlobalTest,
-  Gradient, GridPoint, GridReduction, HelmertConvention, HelmertParameters, HorizontalAlignment,
-  HorizontalAlignmentInput, HorizontalCurve, HorizontalCurveInput, InclinedPlaneFit,
-  InlineHeight, InlineQuadranceHeight, InputDistribution, Inverse, KeyPoint, LengthUnit,
-  LevelCheck, LevellingAdjustment, LevellingInput, LevellingObservationInput, LevellingOptions,
-  LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, LinearUnit, LocalTest,
-  Matrix3, MeanFaces, MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult,
-  NetworkAdjustment, NetworkInput, NetworkObservationInput, NetworkOptions, NetworkPointInput,
-  Numeric, ObservationTest, OffsetMeasure, OrientInput, PegReadings, Point, Point3, Point3Input,
-  Pointing, PointInput, PointLike, PolygonArea, PreparedProjection, ProfileLevel,
-  ProfilePointInput, ProjectedPoint, Projection, ProjectionAngleUnit, ProjectionMethod,
-  RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalLevelling, ReciprocalSet,
-  ReciprocalTrigHeight, ReducedObservation, RelativeEllipse, Resection, ResectionInput, Root,
-  RotationInput, RotationUnit, RoundOff, SetOut, SetOutCheck, SetOutOptions, SetOutPoint,
-  SetOutTolerance, SettingOutRow, SetupInput, SetupTolerance, Shot, SideShot, SightHeight,
-  SimilarityFit, SnoopingRemoval, SnoopingReport, StaffPair, StationCandidate,
-  StationObservation, StationSetup, StewartChainages, StewartQuadrances, StraightElement, Surd,
-  TestOptions, TmFactors, TransformedPoint, TransitionElement, TransitionMeasures,
-  TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure, TraverseCourse,
-  TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight, TwoPeg,
-  TwoPegInput, TwoStationHeight, UncertainArithmetic, UncertainInput, ValueOf,
+  GeodesicDirect, GeodesicInverse, Geodetic, GeodeticInput, GeographicCrs, GeographicPoint,
+  GlobalTest, Gradient, GridPoint, GridReduction, HelmertConvention, HelmertParameters,
+  HorizontalAlignment, HorizontalAlignmentInput, HorizontalCurve, HorizontalCurveInput,
+  InclinedPlaneFit, InlineHeight, InlineQuadranceHeight, InputDistribution, Inverse, KeyPoint,
+  LengthUnit, LevelCheck, LevellingAdjustment, LevellingInput, LevellingObservationInput,
+  LevellingOptions, LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line,
+  LinearUnit, LocalTest, Matrix3, MeanFaces, MolodenskyBadekasParameters, MonteCarloOptions,
+  MonteCarloResult, NetworkAdjustment, NetworkInput, NetworkObservationInput, NetworkOptions,
+  NetworkPointInput, Numeric, ObservationTest, OffsetMeasure, OrientInput, PegReadings, Point,
+  Point3, Point3Input, Pointing, PointInput, PointLike, PolygonArea, PreparedProjection,
+  ProfileLevel, ProfilePointInput, ProjectedCrs, ProjectedPoint, Projection,
+  ProjectionAngleUnit, ProjectionMethod, RandomStream, Ratio, Rational, RationalArithmetic,
+  ReciprocalLevelling, ReciprocalSet, ReciprocalTrigHeight, ReducedObservation, RelativeEllipse,
+  Resection, ResectionInput, Root, RotationInput, RotationUnit, RoundOff, SetOut, SetOutCheck,
+  SetOutOptions, SetOutPoint, SetOutTolerance, SettingOutRow, SetupInput, SetupTolerance, Shot,
+  SideShot, SightHeight, SimilarityFit, SnoopingRemoval, SnoopingReport, StaffPair,
+  StationCandidate, StationObservation, StationSetup, StewartChainages, StewartQuadrances,
+  StraightElement, Surd, TestOptions, TmFactors, TransformedPoint, TransitionElement,
+  TransitionMeasures, TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure,
+  TraverseCourse, TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
+  TwoPeg, TwoPegInput, TwoStationHeight, UncertainArithmetic, UncertainInput, UtmZone, ValueOf,
   VerticalAlignment, VerticalAlignmentInput, VerticalCurve, VerticalCurveInput, VerticalInput,
   VerticalKind, VerticalReading,
 } from '../index.js';

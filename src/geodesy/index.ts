@@ -58,6 +58,16 @@ export { lambertConic, lambertConicInverse } from './lambert-conic.js';
 export { mercator, mercatorInverse } from './mercator.js';
 export { obliqueStereographic, obliqueStereographicInverse } from './oblique-stereographic.js';
 export { polarStereographic, polarStereographicInverse } from './polar-stereographic.js';
+export { cassiniSoldner, cassiniSoldnerInverse } from './cassini-soldner.js';
+export { albersEqualArea, albersEqualAreaInverse } from './albers.js';
+export {
+  lambertAzimuthalEqualArea,
+  lambertAzimuthalEqualAreaInverse,
+} from './lambert-azimuthal.js';
+export { utmZone, utmProjection } from './utm.js';
+export type { UtmZone } from './utm.js';
+export { crs, CRS_CODES } from './crs.js';
+export type { ProjectedCrs, GeographicCrs } from './crs.js';
 export { geodesicInverse } from './geodesic-inverse.js';
 export type { GeodesicInverse } from './geodesic-inverse.js';
 export { geodesicDirect } from './geodesic-direct.js';

@@ -11,6 +11,9 @@ import { LCC_1SP, LCC_2SP } from './lambert-conic.js';
 import { MERCATOR_1SP, MERCATOR_2SP } from './mercator.js';
 import { OBLIQUE_STEREOGRAPHIC } from './oblique-stereographic.js';
 import { POLAR_STEREOGRAPHIC_A, POLAR_STEREOGRAPHIC_B } from './polar-stereographic.js';
+import { CASSINI } from './cassini-soldner.js';
+import { ALBERS } from './albers.js';
+import { LAEA } from './lambert-azimuthal.js';
 import {
   forwardWith,
   inverseWith,
@@ -61,6 +64,9 @@ const METHODS: Readonly<Record<string, MethodImpl>> = {
   'oblique-stereographic': OBLIQUE_STEREOGRAPHIC,
   'polar-stereographic-a': POLAR_STEREOGRAPHIC_A,
   'polar-stereographic-b': POLAR_STEREOGRAPHIC_B,
+  'cassini-soldner': CASSINI,
+  'albers-equal-area': ALBERS,
+  'lambert-azimuthal-equal-area': LAEA,
 };
 
 function methodOf(method: unknown, where: string): MethodImpl {
@@ -109,7 +115,8 @@ export function prepareProjection<T>(
  * Geodetic latitude and longitude to grid coordinates in any of the supported projections,
  * chosen by `projection.method`: `'transverse-mercator'`, `'lambert-conic-1sp'`,
  * `'lambert-conic-2sp'`, `'mercator-1sp'`, `'mercator-2sp'`, `'oblique-stereographic'`,
- * `'polar-stereographic-a'`, `'polar-stereographic-b'` (see docs/geodesy.md for each
+ * `'polar-stereographic-a'`, `'polar-stereographic-b'`, `'cassini-soldner'`,
+ * `'albers-equal-area'`, `'lambert-azimuthal-equal-area'` (see docs/geodesy.md for each
  * method's parameters, source and domain).
  *
  * The point's longitude is counted from Greenwich; `lon0` from the projection's

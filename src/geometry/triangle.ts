@@ -66,10 +66,15 @@ export function triangle<T>(
   A2: PointLike<T>,
   A3: PointLike<T>,
 ): Triangle<T> {
+  // [x, y] points are read in a separate call, so that this function stays small enough for
+  // V8 to inline (docs/performance.md, "Small enough to inline").
   checkArithmetic(A, 'triangle');
-  const A1p = asPoint(A1);
-  const A2p = asPoint(A2);
-  const A3p = asPoint(A3);
+  if (Array.isArray(A1) || Array.isArray(A2) || Array.isArray(A3))
+    return triangleOf(A, asPoint(A1), asPoint(A2), asPoint(A3));
+  return triangleOf(A, A1 as Point<T>, A2 as Point<T>, A3 as Point<T>);
+}
+
+function triangleOf<T>(A: Arithmetic<T>, A1p: Point<T>, A2p: Point<T>, A3p: Point<T>): Triangle<T> {
   checkPoint(A, A1p, 'triangle(A1)');
   checkPoint(A, A2p, 'triangle(A2)');
   checkPoint(A, A3p, 'triangle(A3)');

@@ -64,13 +64,16 @@ describe('helmert', () => {
       }),
     );
   });
-  it('followed by helmertInverse returns the point within 1e-9 m in float', () => {
+  it('followed by helmertInverse returns the point within 1e-8 m in float', () => {
+    // Coordinates up to 6.4e6 m are held to units of 9.3e-10 m in float: a round trip of a
+    // few rounded operations can exceed 1e-9 m (seen: ry = −0.35″, Y = −5.86e6 m). The exact
+    // round trip is the next test; 1e-8 m here.
     fc.assert(
       fc.property(xyz, params, (P, p) => {
         const b = helmertInverse(float, helmert(float, P, p), p);
         expect(
           Math.max(Math.abs(b.X - P.X), Math.abs(b.Y - P.Y), Math.abs(b.Z - P.Z)),
-        ).toBeLessThan(1e-9);
+        ).toBeLessThan(1e-8);
       }),
     );
   });

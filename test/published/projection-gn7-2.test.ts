@@ -30,6 +30,14 @@ const byMethod = (m: string): Example => examples.find((e) => e.method === m)!;
 const CLARKE_1866 = defineEllipsoid({ name: 'Clarke 1866', a: '6378206.4', b: '6356583.8' }); // EPSG 7008
 const BESSEL_1841 = defineEllipsoid({ name: 'Bessel 1841', a: '6377397.155', invF: '299.1528128' }); // EPSG 7004
 const KRASSOWSKY = defineEllipsoid({ name: 'Krassowsky 1940', a: 6378245, invF: '298.3' }); // EPSG 7024
+// Clarke 1858 (EPSG 7007) is defined in Clarke's feet: a = 20926348 ft, b = 20855233 ft, with
+// 1 Clarke's foot = 0.3047972654 m (EPSG unit 9005): exactly these metres.
+const CLARKE_1858 = defineEllipsoid({
+  name: 'Clarke 1858',
+  a: '6378293.6452087592',
+  b: '6356617.9876798382',
+});
+const GRS_1980 = defineEllipsoid({ name: 'GRS 1980', a: 6378137, invF: '298.257222101' }); // EPSG 7019
 const WGS_84 = defineEllipsoid({ name: 'WGS 84', a: 6378137, invF: '298.257223563' }); // EPSG 7030
 
 interface Case {
@@ -166,6 +174,35 @@ const CASES: Case[] = [
     E: 'E_m',
     N: 'N_m',
   },
+  {
+    // GN 7-2 §3.2.4, Cassini-Soldner, Trinidad 1903 / Trinidad Grid, in Clarke's links
+    example: byMethod('Cassini-Soldner'),
+    projection: {
+      method: 'cassini-soldner',
+      ellipsoid: CLARKE_1858,
+      lat0: `10°26'30"N`,
+      lon0: `61°20'00"W`,
+      falseEasting: '430000.00',
+      falseNorthing: '325000.00',
+      linearUnit: 'clarke-link',
+    },
+    E: 'E_links',
+    N: 'N_links',
+  },
+  {
+    // GN 7-2, Lambert Azimuthal Equal Area, ETRS89 / ETRS-LAEA
+    example: byMethod('Lambert Azimuthal Equal Area'),
+    projection: {
+      method: 'lambert-azimuthal-equal-area',
+      ellipsoid: GRS_1980,
+      lat0: `52°00'00.000"N`,
+      lon0: `10°00'00.000"E`,
+      falseEasting: '4321000.00',
+      falseNorthing: '3210000.00',
+    },
+    E: 'E_m',
+    N: 'N_m',
+  },
 ];
 
 /** Half a unit of the last printed digit of a decimal text. */
@@ -186,6 +223,30 @@ const ARITHMETICS: Arithmetic<unknown>[] = [
   decimal(40) as Arithmetic<unknown>,
   rational as Arithmetic<unknown>,
 ];
+
+describe('Snyder (1987), USGS Professional Paper 1395, p. 292: Albers Equal Area on Clarke 1866', () => {
+  const ex = byMethod('Albers Equal Area');
+  for (const A of ARITHMETICS) {
+    it(`${A.name}: 35°N 75°W → x 1885472.7 m, y 1535925.0 m`, () => {
+      const g = toGrid(
+        A,
+        { lat: ex.forward!.input.lat!, lon: ex.forward!.input.lon! },
+        {
+          method: 'albers-equal-area',
+          ellipsoid: CLARKE_1866,
+          lat1: 29.5,
+          lat2: 45.5,
+          lat0: 23,
+          lon0: -96,
+        },
+      );
+      const x = ex.forward!.output.x_m!;
+      const y = ex.forward!.output.y_m!;
+      expect(Math.abs(A.toNumber(g.E) - Number(x))).toBeLessThanOrEqual(halfUnit(x));
+      expect(Math.abs(A.toNumber(g.N) - Number(y))).toBeLessThanOrEqual(halfUnit(y));
+    });
+  }
+});
 
 describe('IOGP GN 7-2 worked examples', () => {
   for (const c of CASES) {
