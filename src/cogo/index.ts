@@ -4,6 +4,8 @@ export type { AreaUnit, PolygonArea } from './area.js';
 export { intersectLines } from './intersect-lines.js';
 export { bearingToAzimuth, azimuthToQuadrant } from './bearing.js';
 export { traverse, angularMisclosure } from './traverse.js';
+export { carryBearings } from './carry-bearings.js';
+export type { AngleKind, CarryBearingsInput, CarriedBearings } from './carry-bearings.js';
 export type {
   TraverseCourse,
   TraverseInput,

@@ -89,6 +89,9 @@ export const azimuthToQuadrant: Bound<typeof g.azimuthToQuadrant<Value>> = (azim
 /** {@link g.bearingToAzimuth | bearingToAzimuth} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const bearingToAzimuth: Bound<typeof g.bearingToAzimuth<Value>> = (bearing) => g.bearingToAzimuth<Value>(arithmetic, bearing);
 
+/** {@link g.carryBearings | carryBearings} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const carryBearings: Bound<typeof g.carryBearings<Value>> = (input) => g.carryBearings<Value>(arithmetic, input);
+
 /** {@link g.cassiniSoldner | cassiniSoldner} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const cassiniSoldner: Bound<typeof g.cassiniSoldner<Value>> = (point, projection) => g.cassiniSoldner<Value>(arithmetic, point, projection);
 
@@ -568,29 +571,30 @@ export {
 export type {
   AdjustedHeight, AdjustedLevelObservation, AdjustedNetworkObservation, AdjustedPoint,
   AffineFit, AlignmentElement, AlignmentPoint, AlignmentStation, AlignmentStationOptions,
-  AllowableMisclosure, AngleUnit, AngularMisclosure, ArcElement, AreaUnit, Arithmetic,
-  Atmosphere, AtmosphericPpm, BaardaTest, Backsight, BacksightResult, BaseHeight,
-  BearingIntersection, BenchmarkInput, Budget, BudgetOptions, ChainageEquation,
-  ChainageEquationInput, CircleInput, Clothoid, CommonPoint, ConfidenceEllipse, Contribution,
-  ControlPoint, CorrelationTerm, CurvatureOptions, DatumTransformation, DatumTransformOptions,
-  Decimal, DecimalArithmetic, DecimalElementary, DeflectionRow, DistanceSigma, Ellipsoid,
-  EllipsoidDefinition, EllipsoidParameters, Enu, ErrorCode, ErrorEllipse, FaceOptions,
-  FieldCheck, FieldObservation, FlatEarthError, FloatArithmetic, FootSide, FreeStation,
-  FreeStationInput, FreeStationResidual, Geocentric, GeocentricTranslationParameters,
-  GeodesicDirect, GeodesicInverse, Geodetic, GeodeticInput, GeographicCrs, GeographicPoint,
-  GlobalTest, Gradient, GridPoint, GridReduction, HelmertConvention, HelmertParameters,
-  HorizontalAlignment, HorizontalAlignmentInput, HorizontalCurve, HorizontalCurveInput,
-  InclinedPlaneFit, InlineHeight, InlineQuadranceHeight, InputDistribution, Inverse, KeyPoint,
-  LengthUnit, LevelCheck, LevellingAdjustment, LevellingInput, LevellingObservationInput,
-  LevellingOptions, LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line,
-  LinearUnit, LocalTest, Matrix3, MeanFaces, MolodenskyBadekasParameters, MonteCarloOptions,
-  MonteCarloResult, NetworkAdjustment, NetworkInput, NetworkObservationInput, NetworkOptions,
-  NetworkPointInput, Numeric, ObservationTest, OffsetMeasure, OrientInput, PegReadings, Point,
-  Point3, Point3Input, Pointing, PointInput, PointLike, PolygonArea, PreparedProjection,
-  ProfileLevel, ProfilePointInput, ProjectedCrs, ProjectedPoint, Projection,
-  ProjectionAngleUnit, ProjectionMethod, RandomStream, Ratio, Rational, RationalArithmetic,
-  ReciprocalLevelling, ReciprocalSet, ReciprocalTrigHeight, ReducedObservation, RelativeEllipse,
-  Resection, ResectionInput, Root, RotationInput, RotationUnit, RoundOff, SetOut, SetOutCheck,
+  AllowableMisclosure, AngleKind, AngleUnit, AngularMisclosure, ArcElement, AreaUnit,
+  Arithmetic, Atmosphere, AtmosphericPpm, BaardaTest, Backsight, BacksightResult, BaseHeight,
+  BearingIntersection, BenchmarkInput, Budget, BudgetOptions, CarriedBearings,
+  CarryBearingsInput, ChainageEquation, ChainageEquationInput, CircleInput, Clothoid,
+  CommonPoint, ConfidenceEllipse, Contribution, ControlPoint, CorrelationTerm, CurvatureOptions,
+  DatumTransformation, DatumTransformOptions, Decimal, DecimalArithmetic, DecimalElementary,
+  DeflectionRow, DistanceSigma, Ellipsoid, EllipsoidDefinition, EllipsoidParameters, Enu,
+  ErrorCode, ErrorEllipse, FaceOptions, FieldCheck, FieldObservation, FlatEarthError,
+  FloatArithmetic, FootSide, FreeStation, FreeStationInput, FreeStationResidual, Geocentric,
+  GeocentricTranslationParameters, GeodesicDirect, GeodesicInverse, Geodetic, GeodeticInput,
+  GeographicCrs, GeographicPoint, GlobalTest, Gradient, GridPoint, GridReduction,
+  HelmertConvention, HelmertParameters, HorizontalAlignment, HorizontalAlignmentInput,
+  HorizontalCurve, HorizontalCurveInput, InclinedPlaneFit, InlineHeight, InlineQuadranceHeight,
+  InputDistribution, Inverse, KeyPoint, LengthUnit, LevelCheck, LevellingAdjustment,
+  LevellingInput, LevellingObservationInput, LevellingOptions, LevellingOrder, LevelRow,
+  LevelRun, LevelRunInput, LevelSight, Line, LinearUnit, LocalTest, Matrix3, MeanFaces,
+  MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, NetworkAdjustment,
+  NetworkInput, NetworkObservationInput, NetworkOptions, NetworkPointInput, Numeric,
+  ObservationTest, OffsetMeasure, OrientInput, PegReadings, Point, Point3, Point3Input,
+  Pointing, PointInput, PointLike, PolygonArea, PreparedProjection, ProfileLevel,
+  ProfilePointInput, ProjectedCrs, ProjectedPoint, Projection, ProjectionAngleUnit,
+  ProjectionMethod, RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalLevelling,
+  ReciprocalSet, ReciprocalTrigHeight, ReducedObservation, RelativeEllipse, Resection,
+  ResectionInput, Root, RotationInput, RotationUnit, RoundOff, SetOut, SetOutCheck,
   SetOutOptions, SetOutPoint, SetOutTolerance, SettingOutRow, SetupInput, SetupTolerance, Shot,
   SideShot, SightHeight, SimilarityFit, SnoopingRemoval, SnoopingReport, StaffPair,
   StationCandidate, StationObservation, StationSetup, StewartChainages, StewartQuadrances,

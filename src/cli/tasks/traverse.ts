@@ -252,6 +252,10 @@ export const traverseTask: TaskKind = {
           });
         }
         const notes: string[] = [];
+        if (task.close === undefined)
+          notes.push(
+            'No "close" was given: the traverse is taken to close on its start (a loop). This default is deprecated: name the closing point in "close" (the start itself for a loop).',
+          );
         if (t.closure.ratio === undefined)
           notes.push('The traverse closes exactly: precision 1 : ∞.');
         if (angles) {
