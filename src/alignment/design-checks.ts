@@ -10,16 +10,17 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber } from '../geometry/validate.js';
 import { readLength, readObject, root } from './internal.js';
 
-type Units = 'metric' | 'us';
+/** The unit system of a design check: SI (metres, km/h) or US customary (feet, mph). */
+export type DesignUnits = 'metric' | 'us';
 
-function units(x: unknown, where: string): Units {
+function units(x: unknown, where: string): DesignUnits {
   if (x === undefined || x === 'metric') return 'metric';
   if (x === 'us') return 'us';
   throw invalidArgument(`${where}.units`, `${show(x)} is not 'metric' (km/h, m) or 'us' (mph, ft)`);
 }
 
 /** v in length units per second from a speed in km/h (→ m/s) or mph (→ ft/s): exact factors 1/3.6 and 5280/3600. */
-function perSecond<T>(A: Arithmetic<T>, V: T, u: Units): T {
+function perSecond<T>(A: Arithmetic<T>, V: T, u: DesignUnits): T {
   return u === 'metric' ? A.div(V, A.from('3.6')) : A.div(A.mul(V, A.from(5280)), A.from(3600));
 }
 
@@ -36,7 +37,7 @@ const num = <T>(
 };
 
 /** Standard gravity, 9.80665 m/s² (CGPM 1901), or in ft/s² (÷ 0.3048). */
-const gravity = <T>(A: Arithmetic<T>, u: Units): T =>
+const gravity = <T>(A: Arithmetic<T>, u: DesignUnits): T =>
   u === 'metric' ? A.from('9.80665') : A.div(A.from('9.80665'), A.from('0.3048'));
 
 /**
@@ -65,7 +66,7 @@ export function minimumRadius<T>(
     readonly speed: Numeric<T>;
     readonly superelevation: Numeric<T>;
     readonly sideFriction: Numeric<T>;
-    readonly units?: Units;
+    readonly units?: DesignUnits;
     readonly gravity?: Numeric<T>;
   },
 ): T {
@@ -233,7 +234,7 @@ export function stoppingSightDistance<T>(
     readonly reactionTime: Numeric<T>;
     readonly deceleration: Numeric<T>;
     readonly grade?: Numeric<T>;
-    readonly units?: Units;
+    readonly units?: DesignUnits;
     readonly constants?: {
       readonly brake?: Numeric<T>;
       readonly braking?: Numeric<T>;

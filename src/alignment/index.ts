@@ -40,3 +40,4 @@ export {
   sightLineOffset,
   sightCurveLength,
 } from './design-checks.js';
+export type { DesignUnits } from './design-checks.js';

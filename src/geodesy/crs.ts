@@ -33,25 +33,25 @@ export interface GeographicCrs {
 }
 
 // Ellipsoids of the national grids, by their EPSG defining parameters.
-const AIRY_1830: Ellipsoid = Object.freeze({
+const AIRY_1830: Ellipsoid = /* @__PURE__ */ Object.freeze({
   name: 'Airy 1830',
   a: '6377563.396',
   f: '21306487/6377563396', // from b = 6356256.909 m (EPSG ellipsoid 7001)
   source: 'EPSG ellipsoid 7001: a = 6377563.396 m, b = 6356256.909 m',
 });
-const BESSEL_1841: Ellipsoid = Object.freeze({
+const BESSEL_1841: Ellipsoid = /* @__PURE__ */ Object.freeze({
   name: 'Bessel 1841',
   a: '6377397.155',
   f: '1/299.1528128',
   source: 'EPSG ellipsoid 7004: a = 6377397.155 m, 1/f = 299.1528128',
 });
-const INTERNATIONAL_1924: Ellipsoid = Object.freeze({
+const INTERNATIONAL_1924: Ellipsoid = /* @__PURE__ */ Object.freeze({
   name: 'International 1924',
   a: '6378388',
   f: '1/297',
   source: 'EPSG ellipsoid 7022: a = 6378388 m, 1/f = 297',
 });
-const KRASSOWSKY_1940: Ellipsoid = Object.freeze({
+const KRASSOWSKY_1940: Ellipsoid = /* @__PURE__ */ Object.freeze({
   name: 'Krassowsky 1940',
   a: '6378245',
   f: '1/298.3',
@@ -208,7 +208,7 @@ const GRIDS: Readonly<Record<string, Entry>> = {
   },
 };
 
-const WGS84_GEOGRAPHIC: GeographicCrs = Object.freeze({
+const WGS84_GEOGRAPHIC: GeographicCrs = /* @__PURE__ */ Object.freeze({
   kind: 'geographic',
   code: 'EPSG:4326',
   name: 'WGS 84',
@@ -225,12 +225,15 @@ const WGS84_GEOGRAPHIC: GeographicCrs = Object.freeze({
  * //=> true
  * ```
  */
-export const CRS_CODES: readonly string[] = Object.freeze([
-  'EPSG:4326',
-  'EPSG:32601…32660 (WGS 84 / UTM zones 1N–60N)',
-  'EPSG:32701…32760 (WGS 84 / UTM zones 1S–60S)',
-  ...Object.keys(GRIDS).map((c) => `EPSG:${c}`),
-]);
+// Built in a pure function call so that a bundle which does not use it drops it, and the
+// table with it.
+export const CRS_CODES: readonly string[] = /* @__PURE__ */ (() =>
+  Object.freeze([
+    'EPSG:4326',
+    'EPSG:32601…32660 (WGS 84 / UTM zones 1N–60N)',
+    'EPSG:32701…32760 (WGS 84 / UTM zones 1S–60S)',
+    ...Object.keys(GRIDS).map((c) => `EPSG:${c}`),
+  ]))();
 
 /** WGS 84 geographic (EPSG:4326): see the last signature of {@link crs}. */
 export function crs(code: 'EPSG:4326'): GeographicCrs;
