@@ -95,6 +95,28 @@ describe('sparse arrays are refused, naming the hole', () => {
   });
 });
 
+describe('names that are not text are refused, not turned into text', () => {
+  it('freeStation: a control name or an observation target without a prototype is INVALID_ARGUMENT', () => {
+    const run = (name: unknown, to: unknown) =>
+      codeOf(() =>
+        q.freeStation(q.float, {
+          control: [
+            { name: 'A', x: 0, y: 100 },
+            { name: name as string, x: 100, y: 0 },
+          ],
+          observations: [
+            { to: 'A', circle: 0, horizontalDistance: 100 },
+            { to: to as string, circle: 90, horizontalDistance: 100 },
+          ],
+        }),
+      );
+    expect(run(Object.create(null), 'B')).toBe('INVALID_ARGUMENT');
+    expect(run('B', Object.create(null))).toBe('INVALID_ARGUMENT');
+    expect(run('B', 'B')).toBe('returned');
+    expect(run(7, '7')).toBe('returned');
+  });
+});
+
 describe('the operations of an arithmetic check their operands', () => {
   it('rational.sin(5), rational.cos, rational.atan2 and decimal(20).atan2(0, 1) refuse JS numbers', () => {
     expect(codeOf(() => R.sin(5 as never))).toBe('INVALID_NUMBER');
