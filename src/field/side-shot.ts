@@ -3,7 +3,7 @@
  *
  * @module field
  */
-import { invalidArgument } from '../errors.js';
+import { invalidArgument, checkArithmetic } from '../errors.js';
 import type { Arithmetic } from '../arithmetic/types.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { finiteResult } from '../geometry/validate.js';
@@ -70,6 +70,7 @@ export interface SideShot<T> {
  * ```
  */
 export function sideShot<T>(A: Arithmetic<T>, setup: SetupInput<T>, shot: Shot<T>): SideShot<T> {
+  checkArithmetic(A, 'sideShot');
   const s = readSetup(A, setup, 'sideShot(setup)');
   if (A.float64 === true) {
     const fast = shotFloat(s as unknown as ReadSetup<number>, shot);
@@ -101,6 +102,7 @@ export function sideShots<T>(
   setup: SetupInput<T>,
   shots: readonly Shot<T>[],
 ): SideShot<T>[] {
+  checkArithmetic(A, 'sideShots');
   const s = readSetup(A, setup, 'sideShots(setup)');
   const list = readArray<Shot<T>>(shots, 'sideShots(shots)');
   // Float: the twin, on plain numbers (docs/performance.md, "Float: twins in the generic
