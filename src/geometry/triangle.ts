@@ -68,7 +68,8 @@ export function triangle<T>(
 ): Triangle<T> {
   // Float: the twin below, on plain numbers (docs/performance.md, "Float: twins in the generic
   // source"), so that the generic entry with float is fast in any process.
-  if (A.float64 === true) return triangleFloat(A, A1, A2, A3);
+  if ((A as { float64?: unknown } | null | undefined)?.float64 === true)
+    return triangleFloat(A, A1, A2, A3);
   return triangleAny(A, A1, A2, A3);
 }
 
@@ -101,15 +102,16 @@ function triangleFloat<T>(
   A2: PointLike<T>,
   A3: PointLike<T>,
 ): Triangle<T> {
-  const P1 = A1 as unknown as Point<number>,
-    P2 = A2 as unknown as Point<number>,
-    P3 = A3 as unknown as Point<number>;
-  const x1 = P1.x,
-    y1 = P1.y,
-    x2 = P2.x,
-    y2 = P2.y,
-    x3 = P3.x,
-    y3 = P3.y;
+  // (A point that is null or not an object reads as undefined here: the generic code reports it.)
+  const P1 = A1 as unknown as Point<number> | null | undefined,
+    P2 = A2 as unknown as Point<number> | null | undefined,
+    P3 = A3 as unknown as Point<number> | null | undefined;
+  const x1 = P1?.x,
+    y1 = P1?.y,
+    x2 = P2?.x,
+    y2 = P2?.y,
+    x3 = P3?.x,
+    y3 = P3?.y;
   if (
     typeof x1 !== 'number' ||
     typeof y1 !== 'number' ||
