@@ -4,6 +4,7 @@
  *
  * @module cogo
  */
+import { checkArithmetic } from '../errors.js';
 import type { Arithmetic } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import type { CarriedBearings } from './carry-bearings.js';
@@ -71,6 +72,7 @@ export function openTraverse<T>(
   A: Arithmetic<T, boolean>,
   input: TraverseInput<T>,
 ): OpenTraverse<T> {
+  checkArithmetic(A, 'openTraverse');
   const t = computeTraverse(A, input, 'openTraverse(A, input)', true);
   return {
     points: t.points,
