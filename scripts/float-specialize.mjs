@@ -15,7 +15,8 @@
  *    where body' has, for that `A`: `A.add(x, y)` → `((x) + (y))`, `A.sub` → `-`, `A.mul` →
  *    `*`, `A.neg(x)` → `(-(x))`, `A.isZero(x)` → `((x) === 0)`, `A.eq(x, y)` → `===`,
  *    `A.abs(x)` → `Math.abs(x)`, `A.zero` → `0`, `A.one` → `1`, `A.digits` → `15`, `A.float64` →
- *    `true`, `A.kernels`, `A.ratio`, `A.withDigits` → `undefined`
+ *    `true`, `A.exact` → `false`, `A.kernels`, `A.ratio`, `A.withDigits`, `A.approximate` →
+ *    `undefined`
  *    (float has none), and `A.div`, `A.sqrt`,
  *    `A.cmp`, `A.sign`, `A.from` → tiny helpers with exactly the float arithmetic's checks
  *    (a zero divisor or a negative root still throws the same QuadspreadError).
@@ -58,6 +59,8 @@ const CONSTANTS = {
   kernels: '(void 0)',
   digits: '(15)',
   float64: '(true)',
+  exact: '(false)',
+  approximate: '(void 0)',
   ratio: '(void 0)',
   withDigits: '(void 0)',
 };

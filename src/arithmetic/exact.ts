@@ -31,6 +31,18 @@ import {
  */
 export const MAX_EXPONENT = 1000;
 
+/**
+ * Most significant digits a decimal arithmetic may keep.
+ *
+ * @example
+ * ```ts
+ * import { decimal, MAX_DECIMAL_DIGITS } from 'quadspread';
+ * decimal(MAX_DECIMAL_DIGITS).digits;
+ * //=> 1000
+ * ```
+ */
+export const MAX_DECIMAL_DIGITS = 1000;
+
 /** An exact ratio n/d of bigints with d > 0 (not necessarily in lowest terms). */
 export interface Ratio {
   readonly n: bigint;
