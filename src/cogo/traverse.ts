@@ -4,7 +4,7 @@
  *
  * @module cogo
  */
-import { QuadspreadError, show, invalidArgument } from '../errors.js';
+import { QuadspreadError, show, invalidArgument, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { sqrtOf } from '../geometry/surd.js';
@@ -138,6 +138,7 @@ export function angularMisclosure<T>(
   A: Arithmetic<T, boolean>,
   angles: readonly Numeric<T>[],
 ): AngularMisclosure<T> {
+  checkArithmetic(A, 'angularMisclosure');
   const where = 'angularMisclosure(A, angles)';
   const list = readArray<Numeric<T>>(angles, where);
   if (list.length < 3)
@@ -198,6 +199,7 @@ export function traverse<T, E extends boolean>(
   A: Arithmetic<T, E>,
   input: TraverseInput<T>,
 ): Traverse<T, E> {
+  checkArithmetic(A, 'traverse');
   const where = 'traverse(A, input)';
   // Performance (docs/performance.md): the arithmetic's fused kernel, where it has one
   // (rational: courses as latitude/departure/distance, compass rule), gives the same points and

@@ -4,7 +4,7 @@
  * @module elevation
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { invalidArgument, show } from '../errors.js';
+import { invalidArgument, show, checkArithmetic } from '../errors.js';
 import { readQuadrance } from '../geometry/validate.js';
 import { isSurd, sqrtOf, type Root, type Surd } from '../geometry/surd.js';
 
@@ -32,6 +32,7 @@ export function heightFromQuadrance<T, E extends boolean>(
   H: Numeric<T>,
   sign: -1 | 0 | 1 = 1,
 ): Root<T, E> {
+  checkArithmetic(A, 'heightFromQuadrance');
   const w = 'heightFromQuadrance(A, H, sign)';
   const q = readQuadrance(A, H, w, 'H');
   if (sign !== 1 && sign !== -1 && sign !== 0)
