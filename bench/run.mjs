@@ -26,6 +26,8 @@ import * as sideshots from './workloads/side-shots.mjs';
 import * as projection from './workloads/projection.mjs';
 import * as geodesic from './workloads/geodesic.mjs';
 import * as alignment from './workloads/alignment.mjs';
+import * as network from './workloads/network.mjs';
+import * as levelling from './workloads/levelling.mjs';
 
 const args = process.argv.slice(2);
 const quick = args.includes('--quick');
@@ -82,6 +84,8 @@ const workloads = [
   projection,
   geodesic,
   alignment,
+  network,
+  levelling,
 ].filter((w) => !only || w.name === only);
 const built = [];
 for (const w of workloads) {
@@ -186,6 +190,7 @@ for (const [w, b] of built) {
         true,
       ),
     );
+  for (const line of b.info ?? []) console.log(line);
   // Other pairs a workload defines (lower is better), e.g. exact work with and without roots.
   for (const x of b.extra ?? [])
     headline.extra.push({
