@@ -33,6 +33,8 @@ export interface Io {
   stderrIsTTY: boolean;
   /** The standard input as text, for `run -` (default: the process's standard input). */
   stdin?: () => Promise<string>;
+  /** Writes bytes (UTF-8) to the standard output, where the batch command has them already. */
+  stdoutBytes?: (bytes: Uint8Array) => void;
   /** The script that runs batch workers (the command's own file); without it a batch runs on one thread. */
   workerScript?: URL;
 }
