@@ -7,9 +7,10 @@
  * an `error` column and go on.
  *
  * The input is read in chunks and the output written in blocks of about 64 KiB. Past the
- * first MiB of input, blocks of lines go to a pool of worker threads (one per core, or
- * `--workers`): at most two blocks per worker are in flight, and the input is not read further
- * until the oldest is written, so memory stays bounded and rows keep their order.
+ * first MiB of input, blocks of lines (1 MiB each) are computed by `--workers` threads (by
+ * default one per core): this one and a pool of worker threads, in turn. At most two blocks per
+ * thread are in flight, and the input is not read further until the oldest is written, so
+ * memory stays bounded and rows keep their order.
  *
  * @module cli
  */
@@ -30,14 +31,14 @@ export { MAX_CSV_LINE } from './batch-rows.js';
 /** The options of the batch command. */
 export interface BatchOptions extends RowOptions {
   out?: string;
-  /** Worker threads for large inputs (default: the number of cores; 1: none). */
+  /** Threads computing a large input, this one included (default: the number of cores; 1: no worker threads). */
   workers?: number;
 }
 
 /** Input read on the main thread before the worker pool starts, in characters. */
 export const POOL_FROM = 1 << 20;
 /** Characters of input per block sent to a worker. */
-const BLOCK = 1 << 17;
+const BLOCK = 1 << 20;
 /** Output is written when this many characters are waiting. */
 const FLUSH = 1 << 16;
 
@@ -187,7 +188,8 @@ export async function runBatch(kind: string, file: string, o: BatchOptions, io: 
   let read = 0;
   const workers = o.workers ?? availableParallelism();
   let pool: Pool | undefined;
-  const inFlight: Promise<PoolResult>[] = [];
+  const inFlight: Promise<PoolResult | BlockResult>[] = [];
+  let dispatched = 0;
   let block: Uint8Array[] = [];
   let blockSize = 0;
 
@@ -195,7 +197,8 @@ export async function runBatch(kind: string, file: string, o: BatchOptions, io: 
   // lines before each are known when it is taken.
   const takeOldest = async (): Promise<void> => {
     const r = await inFlight.shift()!;
-    emitBytes(r.bytes);
+    if ('text' in r) emit(r.text);
+    else emitBytes(r.bytes);
     if (r.problem) r.problem.line += lineNo;
     lineNo += r.lines;
     count(r);
@@ -207,9 +210,14 @@ export async function runBatch(kind: string, file: string, o: BatchOptions, io: 
     const bytes = joinBytes(block, blockSize);
     block = [];
     blockSize = 0;
-    const p = pool!.submit(bytes);
-    p.catch(() => {}); // awaited in order; a failure is reported there
-    inFlight.push(p);
+    // One block in `workers` is computed here, the others by the pool's threads.
+    if (dispatched++ % workers === workers - 1)
+      inFlight.push(Promise.resolve(engine!.block(utf8.decode(bytes), 1)));
+    else {
+      const p = pool!.submit(bytes);
+      p.catch(() => {}); // awaited in order; a failure is reported there
+      inFlight.push(p);
+    }
     while (inFlight.length >= 2 * workers) await takeOldest();
   };
 
@@ -236,7 +244,7 @@ export async function runBatch(kind: string, file: string, o: BatchOptions, io: 
     }
     read += bytes.length;
     if (!pool && workers > 1 && io.workerScript && read > POOL_FROM)
-      pool = new Pool(io.workerScript, setup!, workers);
+      pool = new Pool(io.workerScript, setup!, workers - 1);
     if (pool) {
       block.push(bytes);
       blockSize += bytes.length;

@@ -321,7 +321,7 @@ export function program(io: Io, outcome: { exitCode: number } = { exitCode: EXIT
     .addOption(
       new Option(
         '--workers <n>',
-        'worker threads for inputs over 1 MiB (default: one per core; 1: none)',
+        'threads computing inputs over 1 MiB, this one included (default: one per core; 1: this one only)',
       ).argParser(workersOption),
     )
     .action(async (kind: string, file: string, o: BatchOptions) => {
