@@ -8,14 +8,14 @@
  *
  * The input is read in chunks and the output written in blocks of about 64 KiB. Past the
  * first MiB of input, blocks of lines (1 MiB each) are computed by `--workers` threads (by
- * default one per core): this one and a pool of worker threads, in turn. At most two blocks per
+ * default one per idle core): this one and a pool of worker threads, in turn. At most two blocks per
  * thread are in flight, and the input is not read further until the oldest is written, so
  * memory stays bounded and rows keep their order.
  *
  * @module cli
  */
 import { createReadStream } from 'node:fs';
-import { availableParallelism } from 'node:os';
+import { availableParallelism, loadavg } from 'node:os';
 import { Worker } from 'node:worker_threads';
 import { openPending, sameFile } from './atomic.js';
 import type { PendingFile } from './atomic.js';
@@ -31,7 +31,7 @@ export { MAX_CSV_LINE } from './batch-rows.js';
 /** The options of the batch command. */
 export interface BatchOptions extends RowOptions {
   out?: string;
-  /** Threads computing a large input, this one included (default: the number of cores; 1: no worker threads). */
+  /** Threads computing a large input, this one included (default: {@link idleCores}; 1: no worker threads). */
   workers?: number;
 }
 
@@ -128,6 +128,16 @@ class Pool {
   }
 }
 
+/**
+ * The cores not already busy: the cores less the 1-minute load average, at least 1. On a machine
+ * that other work keeps busy, threads of ours only take turns with each other (and wait for each
+ * other), so the pool is left out there.
+ */
+export function idleCores(): number {
+  const cores = availableParallelism();
+  return Math.max(1, Math.min(cores, Math.round(cores - loadavg()[0]!)));
+}
+
 /** Runs a batch, writing to `o.out` (atomically) or the standard output. */
 export async function runBatch(kind: string, file: string, o: BatchOptions, io: Io): Promise<void> {
   batchKind(kind);
@@ -186,7 +196,7 @@ export async function runBatch(kind: string, file: string, o: BatchOptions, io: 
   let engine: Rows | undefined;
   let setup: WorkerSetup | undefined;
   let read = 0;
-  const workers = o.workers ?? availableParallelism();
+  const workers = o.workers ?? idleCores();
   let pool: Pool | undefined;
   const inFlight: Promise<PoolResult | BlockResult>[] = [];
   let dispatched = 0;

@@ -321,7 +321,7 @@ export function program(io: Io, outcome: { exitCode: number } = { exitCode: EXIT
     .addOption(
       new Option(
         '--workers <n>',
-        'threads computing inputs over 1 MiB, this one included (default: one per core; 1: this one only)',
+        'threads computing inputs over 1 MiB, this one included (default: one per idle core, the cores less the load average; 1: this one only)',
       ).argParser(workersOption),
     )
     .action(async (kind: string, file: string, o: BatchOptions) => {
