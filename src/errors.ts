@@ -214,7 +214,18 @@ export const textTooLong = (
  * arithmetic (a JS number, text, or a value of another arithmetic). @internal
  */
 export const notAValue = (arith: string, op: string, x: unknown): QuadspreadError =>
-  invalidNumber(
-    `${arith}.${op}(…)`,
-    `${show(x)} (${typeof x === 'object' && x !== null ? ((x as object).constructor?.name ?? 'an object') : typeof x}) is not a ${arith} value: use ${arith}.from, or point(${arith}, x, y)`,
-  );
+  invalidNumber(`${arith}.${op}(…)`, `${show(x)} ${notAValueAdvice(arith, x)}`);
+
+// What to call instead, for the values met most often where an arithmetic's value is expected.
+function notAValueAdvice(arith: string, x: unknown): string {
+  const o = typeof x === 'object' && x !== null ? (x as Record<PropertyKey, unknown>) : undefined;
+  if (o?.[Symbol.for('quadspread.surd')] === true)
+    return `is a quadratic surd (a result that needed a square root), not a ${arith} value: write it with x.toString() or x.toPrecision(digits), convert it with x.toNumber(), compute with its own methods (x.add(y), x.mul(y), …), or take its rational value with x.toRational() when x.isRational()`;
+  if (o !== undefined && 'value' in o && Array.isArray(o.derivatives))
+    return `is a value of an uncertain arithmetic, not a ${arith} value: use that arithmetic's U.toString(x) or U.toNumber(x), x.value for the value in its base arithmetic, or budget(U, x) for its uncertainty`;
+  const kind =
+    o !== undefined
+      ? ((o.constructor as { name?: string } | undefined)?.name ?? 'an object')
+      : typeof x;
+  return `(${kind}) is not a ${arith} value: read it with ${arith}.from(x) (or point(${arith}, x, y) for a point)`;
+}
