@@ -15,7 +15,7 @@ import {
   QuadspreadError,
 } from '../../src/index.js';
 
-const M = create(all, { number: 'BigNumber', precision: 60 });
+const M = create(all!, { number: 'BigNumber', precision: 60 });
 
 function messageOf(f: () => unknown): string {
   try {
