@@ -300,6 +300,7 @@ export const traverseTask: TaskKind = {
             {
               title: `Traverse ${start.name} → ${close.name}`,
               view: 'plan' as const,
+              unit: u,
               points: adj.slice(0, close === start ? -1 : undefined).map((p, i) => ({
                 name: names[i]!,
                 ...p,
@@ -320,12 +321,13 @@ export const traverseTask: TaskKind = {
                   x2: p.x,
                   y2: p.y,
                   role: 'adjusted' as const,
+                  measure: true,
                 })),
               ],
               notes: [
                 {
                   ...adj[adj.length - 1]!,
-                  text: `misclosure ${env.A.toPrecision(t.closure.east, 3)} E, ${env.A.toPrecision(t.closure.north, 3)} N`,
+                  text: `misclosure ${env.A.toPrecision(t.closure.east, 3)} ${u} E, ${env.A.toPrecision(t.closure.north, 3)} ${u} N`,
                 },
               ],
             },
