@@ -123,7 +123,7 @@ export class QuadspreadError extends Error {
    * @param what what is wrong, naming the value, e.g. `"abc" is not a number`
    */
   constructor(code: ErrorCode, where: string, what: string) {
-    super(`quadspread ${code}: ${where}: ${what}`);
+    super(`quadspread ${code}: ${typeof where === 'string' ? where : show(where)}: ${what}`);
     this.name = 'QuadspreadError';
     this.code = code;
     this.where = where;
@@ -163,16 +163,33 @@ export function show(x: unknown): string {
   if (typeof x === 'number') return Object.is(x, -0) ? '-0' : String(x);
   if (x === null) return 'null';
   if (x === undefined) return 'undefined';
-  if (Array.isArray(x)) return `an array of ${x.length}`;
-  if (typeof x === 'object') {
-    const text = String(x);
-    return text === '[object Object]'
-      ? 'an object'
-      : text.length > 60
-        ? `${text.slice(0, 57)}...`
-        : text;
+  // An object may have no prototype, a throwing toString or getter, or be a Proxy that
+  // throws on every trap: whatever it does, the message is built and the error is ours.
+  try {
+    if (Array.isArray(x)) return `an array of ${x.length}`;
+    if (typeof x === 'object') {
+      const text = String(x);
+      return text === '[object Object]'
+        ? 'an object'
+        : text.length > 60
+          ? `${text.slice(0, 57)}...`
+          : text;
+    }
+  } catch {
+    return 'an object';
   }
   return typeof x;
+}
+
+/** The constructor name of an object for a message, or 'an object' (never throws). @internal */
+function kindOfValue(x: unknown): string {
+  if (typeof x !== 'object' || x === null) return typeof x;
+  try {
+    const name = (x as object).constructor?.name;
+    return typeof name === 'string' ? name : 'an object';
+  } catch {
+    return 'an object';
+  }
 }
 
 // Factories for the codes thrown most often (internal; not exported by the entries). One call
@@ -216,16 +233,66 @@ export const textTooLong = (
 export const notAValue = (arith: string, op: string, x: unknown): QuadspreadError =>
   invalidNumber(`${arith}.${op}(…)`, `${show(x)} ${notAValueAdvice(arith, x)}`);
 
-// What to call instead, for the values met most often where an arithmetic's value is expected.
+// What to call instead, for the values met most often where an arithmetic's value is expected
+// (read defensively: a Proxy or a throwing getter gets the plain advice).
 function notAValueAdvice(arith: string, x: unknown): string {
-  const o = typeof x === 'object' && x !== null ? (x as Record<PropertyKey, unknown>) : undefined;
-  if (o?.[Symbol.for('quadspread.surd')] === true)
-    return `is a quadratic surd (a result that needed a square root), not a ${arith} value: write it with x.toString() or x.toPrecision(digits), convert it with x.toNumber(), compute with its own methods (x.add(y), x.mul(y), …), or take its rational value with x.toRational() when x.isRational()`;
-  if (o !== undefined && 'value' in o && Array.isArray(o.derivatives))
-    return `is a value of an uncertain arithmetic, not a ${arith} value: use that arithmetic's U.toString(x) or U.toNumber(x), x.value for the value in its base arithmetic, or budget(U, x) for its uncertainty`;
-  const kind =
-    o !== undefined
-      ? ((o.constructor as { name?: string } | undefined)?.name ?? 'an object')
-      : typeof x;
-  return `(${kind}) is not a ${arith} value: read it with ${arith}.from(x) (or point(${arith}, x, y) for a point)`;
+  try {
+    const o = typeof x === 'object' && x !== null ? (x as Record<PropertyKey, unknown>) : undefined;
+    if (o?.[Symbol.for('quadspread.surd')] === true)
+      return `is a quadratic surd (a result that needed a square root), not a ${arith} value: write it with x.toString() or x.toPrecision(digits), convert it with x.toNumber(), compute with its own methods (x.add(y), x.mul(y), …), or take its rational value with x.toRational() when x.isRational()`;
+    if (o !== undefined && 'value' in o && Array.isArray(o.derivatives))
+      return `is a value of an uncertain arithmetic, not a ${arith} value: use that arithmetic's U.toString(x) or U.toNumber(x), x.value for the value in its base arithmetic, or budget(U, x) for its uncertainty`;
+  } catch {
+    // fall through to the plain advice
+  }
+  return `(${kindOfValue(x)}) is not a ${arith} value: read it with ${arith}.from(x) (or point(${arith}, x, y) for a point)`;
+}
+
+const METHODS = [
+  'from',
+  'is',
+  'add',
+  'sub',
+  'mul',
+  'div',
+  'neg',
+  'abs',
+  'cmp',
+  'eq',
+  'isZero',
+  'sign',
+  'sqrt',
+  'toNumber',
+  'toString',
+  'toPrecision',
+  'sin',
+  'cos',
+  'atan2',
+] as const;
+// Arithmetics already checked (a cache only: it changes no result).
+const checked = /* @__PURE__ */ new WeakSet<object>();
+
+/**
+ * Checks, once per arithmetic object, that the first argument of a public function is an
+ * arithmetic (an object with every method of `Arithmetic`), so that a wrong one is a
+ * `QuadspreadError` naming the function rather than a TypeError deep inside. @internal
+ */
+export function checkArithmetic(A: unknown, where: string): void {
+  if (checked.has(A as object)) return;
+  let ok = false;
+  try {
+    ok =
+      typeof A === 'object' &&
+      A !== null &&
+      METHODS.every((m) => typeof (A as Record<string, unknown>)[m] === 'function') &&
+      typeof (A as { exact?: unknown }).exact === 'boolean';
+  } catch {
+    // A Proxy or a getter that throws: not an arithmetic.
+  }
+  if (!ok)
+    throw invalidArgument(
+      `${where}(A)`,
+      `${show(A)} is not an arithmetic (use rational, decimal(digits), float or uncertain(base))`,
+    );
+  checked.add(A as object);
 }

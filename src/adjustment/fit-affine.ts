@@ -5,6 +5,7 @@
  */
 import type { Arithmetic } from '../arithmetic/types.js';
 import { leastSquares, mean, readCommonPoints, variance, type CommonPoint } from './fit-common.js';
+import { checkArithmetic } from '../errors.js';
 
 /** A fitted affine transformation X = a1·x + a2·y + tx, Y = b1·x + b2·y + ty, with residuals. */
 export interface AffineFit<T> {
@@ -51,6 +52,7 @@ export interface AffineFit<T> {
  * ```
  */
 export function fitAffine<T>(A: Arithmetic<T>, points: readonly CommonPoint<T>[]): AffineFit<T> {
+  checkArithmetic(A, 'fitAffine');
   const where = 'fitAffine(points)';
   const P = readCommonPoints(A, points, 3, where, false);
   const cx = mean(

@@ -5,6 +5,7 @@
  */
 import type { Arithmetic } from '../arithmetic/types.js';
 import { leastSquares, mean, readCommonPoints, variance, type CommonPoint } from './fit-common.js';
+import { checkArithmetic } from '../errors.js';
 
 /** A fitted inclined plane Z − z = c + sx·(x − x0) + sy·(y − y0), with residuals. */
 export interface InclinedPlaneFit<T> {
@@ -55,6 +56,7 @@ export function fitInclinedPlane<T>(
   A: Arithmetic<T>,
   points: readonly CommonPoint<T>[],
 ): InclinedPlaneFit<T> {
+  checkArithmetic(A, 'fitInclinedPlane');
   const where = 'fitInclinedPlane(points)';
   const P = readCommonPoints(A, points, 3, where, true);
   const x0 = mean(

@@ -7,6 +7,7 @@
 import type { Arithmetic } from '../arithmetic/types.js';
 import { toDegrees } from '../geodesy/internal.js';
 import { leastSquares, mean, readCommonPoints, variance, type CommonPoint } from './fit-common.js';
+import { checkArithmetic } from '../errors.js';
 
 /** A fitted similarity X = a·x − b·y + tx, Y = b·x + a·y + ty, with residuals. */
 export interface SimilarityFit<T> {
@@ -61,6 +62,7 @@ export function fitSimilarity<T>(
   A: Arithmetic<T>,
   points: readonly CommonPoint<T>[],
 ): SimilarityFit<T> {
+  checkArithmetic(A, 'fitSimilarity');
   const where = 'fitSimilarity(points)';
   const P = readCommonPoints(A, points, 2, where, false);
   const cx = mean(

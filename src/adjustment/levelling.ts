@@ -5,7 +5,7 @@
  * @module adjustment
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { QuadspreadError, show, invalidArgument } from '../errors.js';
+import { QuadspreadError, show, invalidArgument, checkArithmetic } from '../errors.js';
 import { readNumber, expectObject } from '../geometry/validate.js';
 import type { Root } from '../geometry/surd.js';
 import { readArray } from '../cogo/internal.js';
@@ -568,6 +568,7 @@ export function adjustLevelling<T, E extends boolean>(
   A: Arithmetic<T, E>,
   input: LevellingInput<T>,
 ): LevellingAdjustment<T, E> {
+  checkArithmetic(A, 'adjustLevelling');
   const P = parse(A, input);
   const active = P.obs.map(() => true);
   if (P.o.snooping === true) {

@@ -7,7 +7,7 @@
  * @module adjustment
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { QuadspreadError, show, invalidArgument } from '../errors.js';
+import { QuadspreadError, show, invalidArgument, checkArithmetic } from '../errors.js';
 import { readNumber, expectObject } from '../geometry/validate.js';
 import { surd } from '../geometry/surd.js';
 import type { Root } from '../geometry/surd.js';
@@ -1019,6 +1019,7 @@ export function adjustNetwork<T, E extends boolean>(
   A: Arithmetic<T, E>,
   input: NetworkInput<T>,
 ): NetworkAdjustment<T, E> {
+  checkArithmetic(A, 'adjustNetwork');
   const P = parse(A, input);
   const active: boolean[] = [];
   for (const ob of P.obs) active[ob.index] = true;

@@ -184,6 +184,10 @@ function invert(
  */
 export function normalCdf(x: number): number {
   checkX(x, 'normalCdf(x)');
+  // Φ(x) rounds to 0 below −39 and to 1 above 9 in binary64 (Φ(−39) < 1e−300); far out (and at
+  // ±Infinity, where x² overflows) the limit is the value.
+  if (x < -40) return 0;
+  if (x > 40) return 1;
   // Φ(x) = ½ erfc(−x/√2), and erfc(t) = Q(½, t²) for t ≥ 0 (Abramowitz & Stegun 1964, 7.1.2
   // and 6.5.17).
   const [, q] = gammaPQ(0.5, (x * x) / 2);

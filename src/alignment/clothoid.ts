@@ -4,7 +4,7 @@
  *
  * @module alignment
  */
-import { invalidArgument, QuadspreadError } from '../errors.js';
+import { invalidArgument, QuadspreadError, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readLength, seriesEpsilon } from './internal.js';
 
@@ -76,6 +76,7 @@ export function clothoid<T>(
   A: Arithmetic<T>,
   input: { readonly radius: Numeric<T>; readonly length: Numeric<T>; readonly at?: Numeric<T> },
 ): Clothoid<T> {
+  checkArithmetic(A, 'clothoid');
   const where = 'clothoid(A, input)';
   if (input === null || typeof input !== 'object')
     throw invalidArgument(where, 'input is not an object { radius, length, at? }');

@@ -5,7 +5,7 @@
  *
  * @module alignment
  */
-import { show, invalidArgument } from '../errors.js';
+import { show, invalidArgument, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber } from '../geometry/validate.js';
 import { readLength, readObject, root } from './internal.js';
@@ -70,6 +70,7 @@ export function minimumRadius<T>(
     readonly gravity?: Numeric<T>;
   },
 ): T {
+  checkArithmetic(A, 'minimumRadius');
   const where = 'minimumRadius(A, input)';
   const o = readObject(input, where, 'an object { speed, superelevation, sideFriction }');
   const u = units(o.units, where);
@@ -114,6 +115,7 @@ export function railCant<T>(
     readonly gravity?: Numeric<T>;
   },
 ): { equilibrium: T; deficiency?: T } {
+  checkArithmetic(A, 'railCant');
   const where = 'railCant(A, input)';
   const o = readObject(input, where, 'an object { speed, radius }');
   const v = perSecond(A, readLength(A, o.speed, `${where}.speed`, true), 'metric');
@@ -162,6 +164,7 @@ export function transitionLength<T>(
     readonly jerk?: Numeric<T>;
   },
 ): { length: T; byCant?: T; byDeficiency?: T; byJerk?: T } {
+  checkArithmetic(A, 'transitionLength');
   const where = 'transitionLength(A, input)';
   const o = readObject(input, where, 'an object { speed, … }');
   const v = perSecond(A, readLength(A, o.speed, `${where}.speed`, true), 'metric');
@@ -239,6 +242,7 @@ export function stoppingSightDistance<T>(
     };
   },
 ): T {
+  checkArithmetic(A, 'stoppingSightDistance');
   const where = 'stoppingSightDistance(A, input)';
   const o = readObject(input, where, 'an object { speed, reactionTime, deceleration }');
   const u = units(o.units, where);
@@ -283,6 +287,7 @@ export function sightLineOffset<T>(
   A: Arithmetic<T>,
   input: { readonly radius: Numeric<T>; readonly sightDistance: Numeric<T> },
 ): T {
+  checkArithmetic(A, 'sightLineOffset');
   const where = 'sightLineOffset(A, input)';
   const o = readObject(input, where, 'an object { radius, sightDistance }');
   const R = readLength(A, o.radius, `${where}.radius`, true);
@@ -332,6 +337,7 @@ export function sightCurveLength<T>(
     readonly beamAngle?: Numeric<T>;
   },
 ): { length: T; longerThanSight: boolean } {
+  checkArithmetic(A, 'sightCurveLength');
   const where = 'sightCurveLength(A, input)';
   const o = readObject(input, where, 'an object { sightDistance, gradeChange, kind }');
   if (o.kind !== 'crest' && o.kind !== 'sag')

@@ -4,7 +4,13 @@
  *
  * @module alignment
  */
-import { show, invalidArgument, coincidentPoints, QuadspreadError } from '../errors.js';
+import {
+  show,
+  invalidArgument,
+  coincidentPoints,
+  QuadspreadError,
+  checkArithmetic,
+} from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { readNumber } from '../geometry/validate.js';
@@ -279,6 +285,7 @@ export function horizontalAlignment<T>(
   A: Arithmetic<T>,
   input: HorizontalAlignmentInput<T>,
 ): HorizontalAlignment<T> {
+  checkArithmetic(A, 'horizontalAlignment');
   const where = 'horizontalAlignment(A, input)';
   const o = readObject(input, where, 'an object { points, curves }');
   const rawPoints = readList<unknown>(o.points, `${where}.points`);

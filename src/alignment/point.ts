@@ -3,7 +3,7 @@
  *
  * @module alignment
  */
-import { QuadspreadError } from '../errors.js';
+import { QuadspreadError, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { readNumber } from '../geometry/validate.js';
@@ -129,6 +129,7 @@ export function alignmentPoint<T>(
   offset: Numeric<T> = 0,
   options: { readonly region?: number } = {},
 ): AlignmentPoint<T> {
+  checkArithmetic(A, 'alignmentPoint');
   const where = 'alignmentPoint(A, alignment, chainage, offset)';
   const h = readAlignment(A, alignment, `${where} alignment`);
   const o = readNumber(A, offset, where, ' offset');

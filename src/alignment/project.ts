@@ -3,7 +3,7 @@
  *
  * @module alignment
  */
-import { show, invalidArgument, QuadspreadError } from '../errors.js';
+import { show, invalidArgument, QuadspreadError, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import type { AlignmentElement, HorizontalAlignment, TransitionElement } from './horizontal.js';
@@ -82,6 +82,7 @@ export function alignmentStation<T>(
   P: { readonly x: Numeric<T>; readonly y: Numeric<T> },
   options: AlignmentStationOptions<T> = {},
 ): AlignmentStation<T> {
+  checkArithmetic(A, 'alignmentStation');
   const where = 'alignmentStation(A, alignment, P)';
   const h = readAlignment(A, alignment, `${where} alignment`);
   const p = readXY(A, P, `${where} P`);

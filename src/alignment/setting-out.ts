@@ -4,7 +4,7 @@
  *
  * @module alignment
  */
-import { show, invalidArgument, inputTooLong } from '../errors.js';
+import { show, invalidArgument, inputTooLong, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { readNumber } from '../geometry/validate.js';
@@ -114,6 +114,7 @@ export function deflectionTable<T>(
   curve: number,
   options: { readonly interval: Numeric<T>; readonly secondsDecimals?: number },
 ): DeflectionRow<T>[] {
+  checkArithmetic(A, 'deflectionTable');
   const where = 'deflectionTable(A, alignment, curve, options)';
   const h = readAlignment(A, alignment, `${where} alignment`);
   if (
@@ -250,6 +251,7 @@ export function settingOutTable<T>(
     readonly keyPoints?: boolean;
   },
 ): SettingOutRow<T>[] {
+  checkArithmetic(A, 'settingOutTable');
   const where = 'settingOutTable(A, alignment, options)';
   const h = readAlignment(A, alignment, `${where} alignment`);
   if (options === null || typeof options !== 'object')

@@ -4,7 +4,13 @@
  *
  * @module alignment
  */
-import { show, invalidArgument, textTooLong, MAX_INPUT_LENGTH } from '../errors.js';
+import {
+  show,
+  invalidArgument,
+  textTooLong,
+  MAX_INPUT_LENGTH,
+  checkArithmetic,
+} from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber } from '../geometry/validate.js';
 
@@ -30,6 +36,7 @@ const STATION = /^\s*([+-])?\s*(\d+)\s*\+\s*(\d+)(\.\d*)?\s*$/;
  * ```
  */
 export function readStation<T>(A: Arithmetic<T>, text: string): T {
+  checkArithmetic(A, 'readStation');
   return parseStation(A, text, 'readStation(A, text)');
 }
 
@@ -74,6 +81,7 @@ export function formatStation<T>(
   chainage: Numeric<T>,
   options: { readonly per?: number; readonly decimals?: number } = {},
 ): string {
+  checkArithmetic(A, 'formatStation');
   const where = 'formatStation(A, chainage, options)';
   const o =
     options === null || typeof options !== 'object' ? (invalid(where, options) as never) : options;

@@ -5,7 +5,7 @@
  *
  * @module alignment
  */
-import { show, invalidArgument, QuadspreadError } from '../errors.js';
+import { show, invalidArgument, QuadspreadError, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber } from '../geometry/validate.js';
 import { readChainage, readLength, readList, readObject } from './internal.js';
@@ -129,6 +129,7 @@ export function verticalAlignment<T>(
   A: Arithmetic<T>,
   input: VerticalAlignmentInput<T>,
 ): VerticalAlignment<T> {
+  checkArithmetic(A, 'verticalAlignment');
   const where = 'verticalAlignment(A, input)';
   const o = readObject(input, where, 'an object { points, curves }');
   const raw = readList<unknown>(o.points, `${where}.points`);
@@ -293,6 +294,7 @@ export function profileLevel<T>(
   profile: VerticalAlignment<T>,
   chainage: Numeric<T>,
 ): { level: T; grade: T } {
+  checkArithmetic(A, 'profileLevel');
   const where = 'profileLevel(A, profile, chainage)';
   const pr = readObject(profile, `${where} profile`, 'a profile made by verticalAlignment');
   const points = pr.points as VerticalAlignment<T>['points'];

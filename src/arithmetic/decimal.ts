@@ -180,10 +180,11 @@ export function decimal(digits = 34): DecimalArithmetic {
     get pi() {
       return fromText(elementary.pi);
     },
-    sin: (x) => fromText(elementary.sin(x.toString())),
-    cos: (x) => fromText(elementary.cos(x.toString())),
+    sin: (x) => fromText(elementary.sin(one('sin', x).toString())),
+    cos: (x) => fromText(elementary.cos(one('cos', x).toString())),
     atan2(y, x) {
-      if (y.c[0] === 0 && x.c[0] === 0) throw zeroVectorAngle(`${name}.atan2(y, x)`);
+      if (two('atan2', y, x) && y.c[0] === 0 && x.c[0] === 0)
+        throw zeroVectorAngle(`${name}.atan2(y, x)`);
       return fromText(elementary.atan2(y.toString(), x.toString()));
     },
     exp: (x) => fromText(elementary.exp(one('exp', x).toString())),

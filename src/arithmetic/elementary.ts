@@ -72,6 +72,16 @@ export interface DecimalElementary {
    * @throws {QuadspreadError} `NO_REAL_SOLUTION` when x ≤ 0.
    */
   ln(x: string): string;
+  /**
+   * sin, cos and atan2 of exact ratios n/d (d > 0), reduced by π/2 exactly whatever their
+   * length: for the exact arithmetic, whose values would lose digits as decimal text.
+   * @internal
+   */
+  ratio?: {
+    sin(n: bigint, d: bigint): string;
+    cos(n: bigint, d: bigint): string;
+    atan2(yn: bigint, yd: bigint, xn: bigint, xd: bigint): string;
+  };
 }
 
 /** Longest text accepted as an argument (a 1000-digit value with sign, point and exponent fits). */
@@ -120,6 +130,15 @@ function readArg(text: string, where: string): Arg {
   return exp >= 0
     ? { coef, exp, n: coef * pow10(exp), d: 1n }
     : { coef, exp, n: coef, d: pow10(-exp) };
+}
+
+/** An exact argument n/d (d > 0) in the form {@link readArg} gives: `coef`·10^`exp` has its magnitude. */
+function argOfRatio(n: bigint, d: bigint, where: string): Arg {
+  if (n === 0n) return { coef: 0n, exp: 0, n: 0n, d: 1n };
+  const magnitude = String(abs(n)).length - String(d).length;
+  if (Math.abs(magnitude) > MAX_ARG_EXPONENT)
+    throw inputTooLong(where, `the argument has a decimal exponent beyond ±${MAX_ARG_EXPONENT}`);
+  return { coef: n < 0n ? -1n : 1n, exp: magnitude, n, d };
 }
 
 /** round(n · 2^W / d) for d > 0, W ≥ 0: error ≤ 1/2. */
@@ -445,19 +464,13 @@ export function decimalElementary(digits: number): DecimalElementary {
 
   const extraForSmall = (x: Arg): number => Math.max(0, -log2Estimate(x.n, x.d) + 1);
 
-  const sin = (text: string): string => {
-    const where = `${name}.sin(x)`;
-    const x = readArg(text, where);
-    if (x.n === 0n) return '0';
-    return ziv(where, baseBits + extraForSmall(x), (W) => sinCos(x, W, 0, where));
-  };
+  const sinOf = (x: Arg, where: string): string =>
+    x.n === 0n ? '0' : ziv(where, baseBits + extraForSmall(x), (W) => sinCos(x, W, 0, where));
+  const sin = (text: string): string => sinOf(readArg(text, `${name}.sin(x)`), `${name}.sin(x)`);
 
-  const cos = (text: string): string => {
-    const where = `${name}.cos(x)`;
-    const x = readArg(text, where);
-    if (x.n === 0n) return '1';
-    return ziv(where, baseBits, (W) => sinCos(x, W, 1, where));
-  };
+  const cosOf = (x: Arg, where: string): string =>
+    x.n === 0n ? '1' : ziv(where, baseBits, (W) => sinCos(x, W, 1, where));
+  const cos = (text: string): string => cosOf(readArg(text, `${name}.cos(x)`), `${name}.cos(x)`);
 
   const tan = (text: string): string => {
     const where = `${name}.tan(x)`;
@@ -478,8 +491,10 @@ export function decimalElementary(digits: number): DecimalElementary {
 
   const atan2 = (yText: string, xText: string): string => {
     const where = `${name}.atan2(y, x)`;
-    const y = readArg(yText, where);
-    const x = readArg(xText, where);
+    return atan2Of(readArg(yText, where), readArg(xText, where), where);
+  };
+
+  const atan2Of = (y: Arg, x: Arg, where: string): string => {
     if (y.n === 0n && x.n === 0n) throw zeroVectorAngle(where);
     if (y.n === 0n && x.n > 0n) return '0';
     // t = min(|y|, |x|) / max(|y|, |x|), exactly.
@@ -617,5 +632,15 @@ export function decimalElementary(digits: number): DecimalElementary {
     sqrt,
     exp,
     ln,
+    ratio: {
+      sin: (n: bigint, d: bigint) => sinOf(argOfRatio(n, d, `${name}.sin(x)`), `${name}.sin(x)`),
+      cos: (n: bigint, d: bigint) => cosOf(argOfRatio(n, d, `${name}.cos(x)`), `${name}.cos(x)`),
+      atan2: (yn: bigint, yd: bigint, xn: bigint, xd: bigint) =>
+        atan2Of(
+          argOfRatio(yn, yd, `${name}.atan2(y, x)`),
+          argOfRatio(xn, xd, `${name}.atan2(y, x)`),
+          `${name}.atan2(y, x)`,
+        ),
+    },
   });
 }

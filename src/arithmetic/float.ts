@@ -5,6 +5,7 @@
  */
 import {
   show,
+  notAValue,
   notFinite,
   invalidNumber,
   divisionByZero,
@@ -17,6 +18,21 @@ import { ratioToNumber, ratioToPrecision, readInput, readRatio } from './exact.j
 /** The type of the {@link float} arithmetic (inexact: `E = false`). */
 export type FloatArithmetic = Arithmetic<number, false>;
 
+/** `a` when it is a finite number, else `INVALID_NUMBER` naming the operation. */
+function ok1(op: string, a: unknown): number {
+  if (typeof a === 'number' && a - a === 0) return a;
+  throw notAValue('float', op, a);
+}
+
+/** `r` (the result of `op` on a and b) when a, b and r are finite numbers; else the error. */
+function ok2(op: string, a: unknown, b: unknown, r: number): number {
+  if (typeof a === 'number' && typeof b === 'number' && a - a === 0 && b - b === 0) {
+    if (r - r === 0) return r;
+    throw notFinite(`float.${op}(a, b)`, `${show(a)} ${op} ${show(b)} is not finite`);
+  }
+  throw notAValue('float', op, typeof a === 'number' && a - a === 0 ? b : a);
+}
+
 function finite(v: number, where: string): number {
   if (!Number.isFinite(v)) throw notFinite(where, `the result ${show(v)} is not finite`);
   return v;
@@ -26,11 +42,12 @@ function finite(v: number, where: string): number {
  * The float arithmetic: fast, rounding every operation to the nearest JS number.
  * NaN and ±Infinity are refused where values enter (`from`) and where they leave
  * (`toNumber`, `toString`, `toPrecision`); `div` refuses a zero divisor and `sqrt` a
- * negative argument, and both refuse a result that is not finite (`NOT_FINITE`), so an
- * overflow met in `add`, `sub` or `mul` — left unchecked for speed, and possible only with
- * magnitudes near 1e308 — is caught at the next division, root or conversion, and the
- * functions whose result is a bare sum, difference or product (`quadrance`, `lineThrough`, the
- * law residuals) check that result once. Text is read correctly rounded (`'1/3'` gives the
+ * negative argument; every operation called through this object refuses an operand that is
+ * not a finite number (`INVALID_NUMBER`) and a result that is not (`NOT_FINITE`). The
+ * float-specialised solvers of `quadspread/float` inline + − × for speed: there an overflow,
+ * possible only with magnitudes near 1e308, is caught at the next division, root or
+ * conversion, and the functions whose result is a bare sum, difference or product
+ * (`quadrance`, `lineThrough`, the law residuals) check that result once. Text is read correctly rounded (`'1/3'` gives the
  * double nearest to 1/3).
  *
  * @example
@@ -60,24 +77,35 @@ export const float: FloatArithmetic = /* @__PURE__ */ Object.freeze<FloatArithme
     return finite(ratioToNumber(r.n, r.d), 'float.from(x)');
   },
   is: (x: unknown): x is number => typeof x === 'number' && x - x === 0,
-  add: (a, b) => a + b,
-  sub: (a, b) => a - b,
-  mul: (a, b) => a * b,
+  // Called through the object (generic code, or a user), every operation checks its operands
+  // are finite numbers and its result is finite: `'0.1' + '0.2'` is refused, not '0.10.2'. The
+  // float-specialised quadspread/float inlines + − × in its solvers instead (checked where the
+  // values enter and leave).
+  add: (a, b) => ok2('add', a, b, typeof a === 'number' && typeof b === 'number' ? a + b : NaN),
+  sub: (a, b) => ok2('sub', a, b, typeof a === 'number' && typeof b === 'number' ? a - b : NaN),
+  mul: (a, b) => ok2('mul', a, b, typeof a === 'number' && typeof b === 'number' ? a * b : NaN),
   div(a, b) {
+    ok2('div', a, b, 0);
     if (b === 0) throw divisionByZero('float.div(a, b)', `b is zero (a = ${show(a)})`);
     const r = a / b;
     // Infinity/Infinity, NaN/x or an overflowing quotient: refuse rather than pass NaN on.
     if (r - r !== 0) throw notFinite('float.div(a, b)', `${show(a)} / ${show(b)} is not finite`);
     return r;
   },
-  neg: (a) => -a,
-  abs: (a) => Math.abs(a),
-  cmp: (a, b) => (a < b ? -1 : a > b ? 1 : 0),
-  eq: (a, b) => a === b,
-  isZero: (a) => a === 0,
-  sign: (a) => (a < 0 ? -1 : a > 0 ? 1 : 0),
+  neg: (a) => -ok1('neg', a),
+  abs: (a) => Math.abs(ok1('abs', a)),
+  cmp(a, b) {
+    ok2('cmp', a, b, 0);
+    return a < b ? -1 : a > b ? 1 : 0;
+  },
+  eq(a, b) {
+    ok2('eq', a, b, 0);
+    return a === b;
+  },
+  isZero: (a) => ok1('isZero', a) === 0,
+  sign: (a) => (ok1('sign', a) < 0 ? -1 : a > 0 ? 1 : 0),
   sqrt(a) {
-    if (a < 0) throw noRealSolution('float.sqrt(a)', `a = ${show(a)} is negative`);
+    if (ok1('sqrt', a) < 0) throw noRealSolution('float.sqrt(a)', `a = ${show(a)} is negative`);
     const r = Math.sqrt(a);
     if (r - r !== 0) throw notFinite('float.sqrt(a)', `a = ${show(a)} is not finite`);
     return r;
@@ -91,19 +119,21 @@ export const float: FloatArithmetic = /* @__PURE__ */ Object.freeze<FloatArithme
     return ratioToPrecision(r.n, r.d, digits);
   },
   pi: Math.PI,
-  sin: (x) => Math.sin(x),
-  cos: (x) => Math.cos(x),
+  sin: (x) => Math.sin(ok1('sin', x)),
+  cos: (x) => Math.cos(ok1('cos', x)),
   atan2(y, x) {
+    ok2('atan2', y, x, 0);
     if (y === 0 && x === 0) throw zeroVectorAngle('float.atan2(y, x)');
     return Math.atan2(y, x);
   },
   exp(x) {
-    const r = Math.exp(x);
+    const r = Math.exp(ok1('exp', x));
     if (r === Infinity) throw notFinite('float.exp(x)', `e^${show(x)} overflows`);
     return r;
   },
   log(x) {
-    if (!(x > 0)) throw noRealSolution('float.log(x)', `x = ${show(x)} is not positive`);
+    if (!(ok1('log', x) > 0))
+      throw noRealSolution('float.log(x)', `x = ${show(x)} is not positive`);
     return Math.log(x);
   },
 });

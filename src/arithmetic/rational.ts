@@ -53,13 +53,13 @@ function signed(a: Rational): bigint {
 
 const elementary = /* @__PURE__ */ decimalElementary(RATIONAL_TRANSCENDENTAL_DIGITS);
 
+function toElementary(a: Rational): string {
+  return ratioToPrecision(signed(a), a.d, RATIONAL_TRANSCENDENTAL_DIGITS + 8);
+}
+
 function fromElementary(text: string): Rational {
   const r = readInput(text, 'rational (transcendental)');
   return frac(r.n, r.d);
-}
-
-function toElementary(a: Rational): string {
-  return ratioToPrecision(signed(a), a.d, RATIONAL_TRANSCENDENTAL_DIGITS + 8);
 }
 
 // A fraction.js value by shape (bigint numerator and denominator), so that fractions made by a
@@ -173,11 +173,14 @@ export const rational: RationalArithmetic = /* @__PURE__ */ ((): RationalArithme
     get pi() {
       return fromElementary(elementary.pi);
     },
-    sin: (x) => fromElementary(elementary.sin(toElementary(x))),
-    cos: (x) => fromElementary(elementary.cos(toElementary(x))),
+    // The exact argument itself is reduced (by π/2 to as many bits as it needs), never a
+    // rounded copy: sin(10^50 + 1) differs from sin(10^50) as it should.
+    sin: (x) => fromElementary(elementary.ratio!.sin(signed(one('sin', x)), x.d)),
+    cos: (x) => fromElementary(elementary.ratio!.cos(signed(one('cos', x)), x.d)),
     atan2(y, x) {
-      if (y.n === 0n && x.n === 0n) throw zeroVectorAngle('rational.atan2(y, x)');
-      return fromElementary(elementary.atan2(toElementary(y), toElementary(x)));
+      if (two('atan2', y, x) && y.n === 0n && x.n === 0n)
+        throw zeroVectorAngle('rational.atan2(y, x)');
+      return fromElementary(elementary.ratio!.atan2(signed(y), y.d, signed(x), x.d));
     },
     exp: (x) => (one('exp', x).n === 0n ? ONE : fromElementary(elementary.exp(toElementary(x)))),
     log(x) {

@@ -12,7 +12,7 @@
  *
  * @module arithmetic
  */
-import { show, noRealSolution } from '../errors.js';
+import { show, noRealSolution, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from './types.js';
 
 /** √x for x ≥ 0: the arithmetic's own root, or e^(ln x / 2) where it has no exact one. */
@@ -38,6 +38,7 @@ function sqrtAny<T>(A: Arithmetic<T>, x: T): T {
  * ```
  */
 export function sinh<T>(A: Arithmetic<T>, value: Numeric<T>): T {
+  checkArithmetic(A, 'sinh');
   const x = A.from(value);
   const u = A.exp(x);
   return A.div(A.sub(u, A.div(A.one, u)), A.from(2));
@@ -59,6 +60,7 @@ export function sinh<T>(A: Arithmetic<T>, value: Numeric<T>): T {
  * ```
  */
 export function cosh<T>(A: Arithmetic<T>, value: Numeric<T>): T {
+  checkArithmetic(A, 'cosh');
   const x = A.from(value);
   const u = A.exp(x);
   return A.div(A.add(u, A.div(A.one, u)), A.from(2));
@@ -80,6 +82,7 @@ export function cosh<T>(A: Arithmetic<T>, value: Numeric<T>): T {
  * ```
  */
 export function tanh<T>(A: Arithmetic<T>, value: Numeric<T>): T {
+  checkArithmetic(A, 'tanh');
   const x = A.from(value);
   if (A.isZero(x)) return x;
   const neg = A.sign(x) < 0;
@@ -103,6 +106,7 @@ export function tanh<T>(A: Arithmetic<T>, value: Numeric<T>): T {
  * ```
  */
 export function atanh<T>(A: Arithmetic<T>, value: Numeric<T>): T {
+  checkArithmetic(A, 'atanh');
   const x = A.from(value);
   if (A.cmp(A.abs(x), A.one) >= 0)
     throw noRealSolution('atanh(A, x)', `|x| = ${show(A.toString(A.abs(x)))} is not below 1`);
@@ -126,6 +130,7 @@ export function atanh<T>(A: Arithmetic<T>, value: Numeric<T>): T {
  * ```
  */
 export function asinh<T>(A: Arithmetic<T>, value: Numeric<T>): T {
+  checkArithmetic(A, 'asinh');
   const x = A.from(value);
   if (A.isZero(x)) return x;
   const ax = A.abs(x);
@@ -153,6 +158,7 @@ export function asinh<T>(A: Arithmetic<T>, value: Numeric<T>): T {
  * ```
  */
 export function pow<T>(A: Arithmetic<T>, base: Numeric<T>, exponent: Numeric<T>): T {
+  checkArithmetic(A, 'pow');
   const x = A.from(base);
   const y = A.from(exponent);
   const yn = Math.round(A.toNumber(y));
@@ -193,6 +199,7 @@ export function pow<T>(A: Arithmetic<T>, base: Numeric<T>, exponent: Numeric<T>)
  * ```
  */
 export function tan<T>(A: Arithmetic<T>, value: Numeric<T>): T {
+  checkArithmetic(A, 'tan');
   const x = A.from(value);
   return A.div(A.sin(x), A.cos(x));
 }
@@ -212,6 +219,7 @@ export function tan<T>(A: Arithmetic<T>, value: Numeric<T>): T {
  * ```
  */
 export function atan<T>(A: Arithmetic<T>, value: Numeric<T>): T {
+  checkArithmetic(A, 'atan');
   const x = A.from(value);
   if (A.isZero(x)) return x;
   return A.atan2(x, A.one);
@@ -232,6 +240,7 @@ export function atan<T>(A: Arithmetic<T>, value: Numeric<T>): T {
  * ```
  */
 export function asin<T>(A: Arithmetic<T>, value: Numeric<T>): T {
+  checkArithmetic(A, 'asin');
   const x = A.from(value);
   const c2 = A.sub(A.one, A.mul(x, x));
   if (A.sign(c2) < 0)

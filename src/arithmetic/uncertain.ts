@@ -14,6 +14,8 @@ import {
   noRealSolution,
   notFinite,
   zeroVectorAngle,
+  checkArithmetic,
+  notAValue,
 } from '../errors.js';
 import type { Arithmetic, Numeric } from './types.js';
 import { float } from './float.js';
@@ -206,8 +208,57 @@ function fromMap<T>(
  * ```
  */
 export function uncertain<T, E extends boolean>(base: Arithmetic<T, E>): UncertainArithmetic<T, E> {
-  if (base === (float as unknown)) return uncertainFloat() as unknown as UncertainArithmetic<T, E>;
-  return uncertainGeneric(base);
+  checkArithmetic(base, 'uncertain');
+  const U =
+    base === (float as unknown)
+      ? (uncertainFloat() as unknown as UncertainArithmetic<T, E>)
+      : uncertainGeneric(base);
+  return withOperandChecks(U);
+}
+
+const OPERATIONS = [
+  'add',
+  'sub',
+  'mul',
+  'div',
+  'neg',
+  'abs',
+  'cmp',
+  'eq',
+  'isZero',
+  'sign',
+  'sqrt',
+  'toNumber',
+  'toString',
+  'toPrecision',
+  'sin',
+  'cos',
+  'atan2',
+  'exp',
+  'log',
+] as const;
+
+/**
+ * The operations of `U` refusing an operand that is not an uncertain value of `U`
+ * (`INVALID_NUMBER` naming the operation) before they read it.
+ */
+function withOperandChecks<T, E extends boolean>(
+  U: UncertainArithmetic<T, E>,
+): UncertainArithmetic<T, E> {
+  const out = { ...U } as Record<string, unknown>;
+  for (const op of OPERATIONS) {
+    const f = U[op] as ((...a: unknown[]) => unknown) | undefined;
+    if (typeof f !== 'function') continue;
+    const arity = op === 'toPrecision' ? 1 : f.length;
+    out[op] = (...args: unknown[]) => {
+      // An Uncertain of this kind; its value is the base arithmetic's to check (an overflow met
+      // earlier is NOT_FINITE there, not a wrong operand).
+      for (let i = 0; i < arity; i++)
+        if (!(args[i] instanceof Uncertain)) throw notAValue(U.name, op, args[i]);
+      return f(...args);
+    };
+  }
+  return out as unknown as UncertainArithmetic<T, E>;
 }
 
 const SQRT_AT_ZERO =

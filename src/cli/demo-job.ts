@@ -105,6 +105,7 @@ export const DEMO_JOB = {
       kind: 'traverse',
       name: 'Snipewhistle Moss control loop',
       start: 'CM1',
+      close: 'loop',
       rule: 'compass',
       courses: [
         {

@@ -3,7 +3,7 @@
  *
  * @module cogo
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { checkLengthUnit, METRES_PER_UNIT } from '../readings/length.js';
 import type { LengthUnit } from '../readings/length.js';
@@ -50,6 +50,7 @@ function readPolygon<T>(A: Arithmetic<T, boolean>, points: unknown, where: strin
  * ```
  */
 export function area<T>(A: Arithmetic<T, boolean>, points: readonly PointInput<T>[]): T {
+  checkArithmetic(A, 'area');
   const P = readPolygon(A, points, 'area(A, points)');
   const p0 = P[0]!;
   // Shoelace (Gauss's area formula): 2·area = Σ (xᵢ − x₀)(yᵢ₊₁ − y₀) − (xᵢ₊₁ − x₀)(yᵢ − y₀);
@@ -88,6 +89,7 @@ export function area<T>(A: Arithmetic<T, boolean>, points: readonly PointInput<T
  * ```
  */
 export function perimeter<T>(A: Arithmetic<T, boolean>, points: readonly PointInput<T>[]): T {
+  checkArithmetic(A, 'perimeter');
   const where = 'perimeter(A, points)';
   const P = readPolygon(A, points, where);
   let sum = A.zero;
@@ -171,6 +173,7 @@ export function convertArea<T>(
   from: AreaUnit,
   to: AreaUnit,
 ): T {
+  checkArithmetic(A, 'convertArea');
   const where = 'convertArea(A, value, from, to)';
   const f = unitFactor(A, AREA_UNITS, from, `${where} from`);
   const t = unitFactor(A, AREA_UNITS, to, `${where} to`);
@@ -225,6 +228,7 @@ export function polygonArea<T>(
   points: readonly PointInput<T>[],
   options: { readonly unit?: LengthUnit } = {},
 ): PolygonArea<T> {
+  checkArithmetic(A, 'polygonArea');
   const where = 'polygonArea(A, points, options)';
   expectObject(options, `${where} options`, '{ unit? }');
   const u = A.from(METRES_PER_UNIT[checkLengthUnit(options.unit ?? 'm', `${where} unit`)]);

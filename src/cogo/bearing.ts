@@ -3,7 +3,7 @@
  *
  * @module cogo
  */
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { angleToDegrees } from '../readings/angle.js';
 import { formatDms } from '../readings/dms.js';
@@ -33,6 +33,7 @@ import { formatDms } from '../readings/dms.js';
  * ```
  */
 export function bearingToAzimuth<T>(A: Arithmetic<T, boolean>, bearing: Numeric<T>): T {
+  checkArithmetic(A, 'bearingToAzimuth');
   return readAzimuth(A, bearing, 'bearingToAzimuth(A, bearing)');
 }
 
@@ -50,6 +51,18 @@ export function readAzimuth<T>(
   whereText: string | (() => string),
   suffix = '',
 ): T {
+  // A lone hemisphere letter ('E 100', '45 N') is a latitude's or a longitude's, not a bearing
+  // (an azimuth, or a quadrant bearing N θ E).
+  if (
+    typeof bearing === 'string' &&
+    /^\s*[NSEW]|[NSEW]\s*$/i.test(bearing) &&
+    !/^\s*[NS][^A-Za-z]*[EW]\s*$/i.test(bearing)
+  )
+    throw new QuadspreadError(
+      'INVALID_BEARING',
+      whereOf(whereText, suffix),
+      `${show(bearing)} is not a bearing: write an azimuth (100) or a quadrant bearing (S 80 E)`,
+    );
   let deg: T;
   try {
     deg = angleToDegrees(A, bearing);
@@ -99,6 +112,7 @@ export function azimuthToQuadrant<T>(
   azimuth: Numeric<T>,
   secondsDecimals = 1,
 ): string {
+  checkArithmetic(A, 'azimuthToQuadrant');
   const z = readAzimuth(A, azimuth, 'azimuthToQuadrant(A, azimuth)');
   const ninety = A.from(90);
   const half = A.from(180);

@@ -10,6 +10,7 @@ import {
   coincidentPoints,
   noRealSolution,
   negativeQuadrance,
+  checkArithmetic,
 } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
@@ -83,6 +84,7 @@ export function intersectLineCircle<T, E extends boolean>(
   P2: PointInput<T>,
   circle: CircleInput<T>,
 ): Point<Root<T, E>>[] {
+  checkArithmetic(A, 'intersectLineCircle');
   const where = 'intersectLineCircle(A, P1, P2, circle)';
   const a = readPoint(A, P1, `${where} P1`);
   const b = readPoint(A, P2, `${where} P2`);
@@ -147,6 +149,7 @@ export function intersectCircles<T, E extends boolean>(
   circle1: CircleInput<T>,
   circle2: CircleInput<T>,
 ): Point<Root<T, E>>[] {
+  checkArithmetic(A, 'intersectCircles');
   const where = 'intersectCircles(A, circle1, circle2)';
   const { c: c1, R: R1 } = readCircle(A, circle1, `${where} circle1`);
   const { c: c2, R: R2 } = readCircle(A, circle2, `${where} circle2`);

@@ -4,6 +4,9 @@ export type { AreaUnit, PolygonArea } from './area.js';
 export { intersectLines } from './intersect-lines.js';
 export { bearingToAzimuth, azimuthToQuadrant } from './bearing.js';
 export { traverse, angularMisclosure } from './traverse.js';
+export { openTraverse } from './open-traverse.js';
+export type { OpenTraverse, OpenTraverseLeg } from './open-traverse.js';
+export type { TraverseClose, TraverseClosingPoint } from './traverse-field-book.js';
 export { carryBearings } from './carry-bearings.js';
 export type { AngleKind, CarryBearingsInput, CarriedBearings } from './carry-bearings.js';
 export type {

@@ -36,6 +36,9 @@ export function readArray<U>(x: unknown, where: string, max = 1_000_000): readon
   if (!Array.isArray(x)) throw invalidArgument(where, `${show(x)} is not an array`);
   if (x.length > max)
     throw inputTooLong(where, `${x.length} items is more than the limit of ${max}`);
+  // A sparse array ([a, , c]) has holes that map and forEach skip: refused, naming the first.
+  for (let i = 0; i < x.length; i++)
+    if (!(i in x)) throw invalidArgument(`${where}[${i}]`, 'is missing (a hole in a sparse array)');
   return x as readonly U[];
 }
 

@@ -3,7 +3,7 @@
  *
  * @module cogo
  */
-import { QuadspreadError, show, noRealSolution } from '../errors.js';
+import { QuadspreadError, show, noRealSolution, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { sinCosDegrees } from '../readings/trig.js';
@@ -70,6 +70,7 @@ export function intersectBearings<T>(
   Q: PointInput<T>,
   bearingQ: Numeric<T>,
 ): BearingIntersection<T> {
+  checkArithmetic(A, 'intersectBearings');
   const where = 'intersectBearings(A, P, bearingP, Q, bearingQ)';
   const p = readPoint(A, P, `${where} P`);
   const q = readPoint(A, Q, `${where} Q`);

@@ -3,7 +3,7 @@
  *
  * @module cogo
  */
-import { QuadspreadError, coincidentPoints } from '../errors.js';
+import { QuadspreadError, coincidentPoints, checkArithmetic } from '../errors.js';
 import type { Arithmetic } from '../arithmetic/types.js';
 import { readPoint } from './internal.js';
 import type { Point } from '../geometry/point.js';
@@ -41,6 +41,7 @@ export function intersectLines<T>(
   P3: PointInput<T>,
   P4: PointInput<T>,
 ): Point<T> {
+  checkArithmetic(A, 'intersectLines');
   const where = 'intersectLines(A, P1, P2, P3, P4)';
   const a = readPoint(A, P1, `${where} P1`);
   const b = readPoint(A, P2, `${where} P2`);

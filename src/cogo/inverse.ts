@@ -4,7 +4,7 @@
  *
  * @module cogo
  */
-import { coincidentPoints, invalidArgument } from '../errors.js';
+import { coincidentPoints, invalidArgument, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { sqrtOf } from '../geometry/surd.js';
@@ -61,6 +61,7 @@ export function inverse<T, E extends boolean>(
   Q: PointInput<T>,
   options: { readonly secondsDecimals?: number } = {},
 ): Inverse<T, E> {
+  checkArithmetic(A, 'inverse');
   const where = 'inverse(A, P, Q)';
   const p = readPoint(A, P, `${where} P`);
   const q = readPoint(A, Q, `${where} Q`);
@@ -133,6 +134,7 @@ export function forward<T>(
   bearing: Numeric<T>,
   distance: Numeric<T>,
 ): Point<T> {
+  checkArithmetic(A, 'forward');
   const where = 'forward(A, P, bearing, distance)';
   const p = readPoint(A, P, `${where} P`);
   const az = readAzimuth(A, bearing, `${where} bearing`);

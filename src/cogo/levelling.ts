@@ -5,7 +5,7 @@
  *
  * @module cogo
  */
-import { QuadspreadError, show, invalidArgument } from '../errors.js';
+import { QuadspreadError, show, invalidArgument, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { sqrtOf } from '../geometry/surd.js';
 import type { Root } from '../geometry/surd.js';
@@ -92,6 +92,7 @@ export function allowableMisclosure<T, E extends boolean>(
   c: Numeric<T>,
   km: Numeric<T>,
 ): AllowableMisclosure<T, E> {
+  checkArithmetic(A, 'allowableMisclosure');
   const where = 'allowableMisclosure(A, c, km)';
   const cMm = readC(A, c, `${where} c`);
   const K = readNumber(A, km, where, ' km');
@@ -232,6 +233,7 @@ export function levelRun<T, E extends boolean>(
   A: Arithmetic<T, E>,
   input: LevelRunInput<T>,
 ): LevelRun<T, E> {
+  checkArithmetic(A, 'levelRun');
   const where = 'levelRun(A, input)';
   expectObject(input, where, '{ start, sights }');
   const list = readArray<LevelSight<T>>(input.sights, `${where} sights`);

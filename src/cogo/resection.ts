@@ -10,6 +10,7 @@ import {
   invalidAngle,
   coincidentPoints,
   noRealSolution,
+  checkArithmetic,
 } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
@@ -107,6 +108,7 @@ export interface Resection<T> {
  * ```
  */
 export function resection<T>(A: Arithmetic<T, boolean>, input: ResectionInput<T>): Resection<T> {
+  checkArithmetic(A, 'resection');
   const where = 'resection(A, { control, angles })';
   expectObject(input, where, '{ control, angles }');
   const ctl = readArray<PointInput<T>>(input.control, `${where} control`);

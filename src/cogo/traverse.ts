@@ -4,7 +4,7 @@
  *
  * @module cogo
  */
-import { QuadspreadError, show, invalidArgument } from '../errors.js';
+import { QuadspreadError, show, invalidArgument, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import { sqrtOf } from '../geometry/surd.js';
@@ -14,11 +14,15 @@ import { angleToDegrees } from '../readings/angle.js';
 import { readAzimuth } from './bearing.js';
 import { traverseFloat } from './traverse-float.js';
 import { readNumber, expectObject } from '../geometry/validate.js';
-import { readArray, readPoint, sqrtValue } from './internal.js';
+import { readArray, sqrtValue } from './internal.js';
 import type { PointInput } from './internal.js';
+import { readFieldBook } from './traverse-field-book.js';
+import type { TraverseClose } from './traverse-field-book.js';
+import type { AngleKind, CarriedBearings } from './carry-bearings.js';
 
 /**
- * One traverse course: either a bearing and a distance, or a latitude and a departure.
+ * One traverse course: a bearing and a distance, a latitude and a departure, or an angle
+ * and a distance as a field book gives them.
  *
  * - `{ bearing, distance }`: the bearing is an azimuth clockwise from north (decimal
  *   degrees or DMS text) or a quadrant bearing such as `S 68°05'35" W`; the distance is
@@ -26,9 +30,14 @@ import type { PointInput } from './internal.js';
  * - `{ latitude, departure }`: the north and east components (x = east, y = north), with
  *   an optional `distance` (the course length used by the compass rule; by default
  *   √(latitude² + departure²)).
+ * - `{ angle, distance }`: the angle measured at the station the course leaves (degrees or
+ *   DMS text, of the traverse's `angleKind`), the bearing carried from `startBearing` or
+ *   `backsight` through the balanced angles (see {@link carryBearings}). Either every
+ *   course is an angle or none is.
  */
 export type TraverseCourse<T> =
   | { readonly bearing: Numeric<T>; readonly distance: Numeric<T> }
+  | { readonly angle: Numeric<T>; readonly distance: Numeric<T> }
   | {
       readonly latitude: Numeric<T>;
       readonly departure: Numeric<T>;
@@ -41,8 +50,13 @@ export interface TraverseInput<T> {
   readonly start: PointInput<T>;
   /** The courses in order from the start. At least one. */
   readonly courses: readonly TraverseCourse<T>[];
-  /** The known point the traverse closes on; default: the start (a closed loop). */
-  readonly close?: PointInput<T>;
+  /**
+   * How the traverse closes: `'loop'` (on its start), a known point, or a known point with
+   * the bearing of a closing line (`{ point, bearing | foresight, angle }`, which checks the
+   * angles of a link traverse). Default: the start (a loop). `'open'` is for
+   * {@link openTraverse}, which claims no misclosure.
+   */
+  readonly close?: TraverseClose<T>;
   /** How the misclosure is distributed: `'compass'` (Bowditch, default) or `'transit'`. */
   readonly rule?: 'compass' | 'transit';
   /**
@@ -50,6 +64,15 @@ export interface TraverseInput<T> {
    * misclosure: their sum less (n − 2)·180°.
    */
   readonly interiorAngles?: readonly Numeric<T>[];
+  /** For courses given as `{ angle, distance }`: what the angles are. */
+  readonly angleKind?: AngleKind;
+  /**
+   * For courses given as angles: in a loop, the bearing of the first course; otherwise the
+   * bearing of the line from the backsight to the start, from which the first angle is turned.
+   */
+  readonly startBearing?: Numeric<T>;
+  /** For courses given as angles (not a loop): the backsight point, instead of `startBearing`. */
+  readonly backsight?: PointInput<T>;
 }
 
 /** The misclosure of a traverse: computed end point less the known closing point. */
@@ -108,6 +131,11 @@ export interface Traverse<T, E extends boolean> {
   readonly rule: 'compass' | 'transit';
   /** Angular misclosure, when `interiorAngles` were given. */
   readonly angular?: AngularMisclosure<T>;
+  /**
+   * For courses given as angles: the carried bearings, the balanced angles, the angular
+   * misclosure (undefined when nothing checks it) and the condition it is measured against.
+   */
+  readonly angles?: CarriedBearings<T>;
 }
 
 /** √(lat² + dep²): `A.sqrt` directly in an inexact arithmetic (the float hot path). */
@@ -138,6 +166,7 @@ export function angularMisclosure<T>(
   A: Arithmetic<T, boolean>,
   angles: readonly Numeric<T>[],
 ): AngularMisclosure<T> {
+  checkArithmetic(A, 'angularMisclosure');
   const where = 'angularMisclosure(A, angles)';
   const list = readArray<Numeric<T>>(angles, where);
   if (list.length < 3)
@@ -198,12 +227,48 @@ export function traverse<T, E extends boolean>(
   A: Arithmetic<T, E>,
   input: TraverseInput<T>,
 ): Traverse<T, E> {
-  const where = 'traverse(A, input)';
+  checkArithmetic(A, 'traverse');
+  return computeTraverse(A, input, 'traverse(A, input)', false);
+}
+
+/**
+ * The input a fused kernel may see: none of the field-book forms (`'loop'` is the default
+ * close), or undefined.
+ */
+function kernelInput<T>(input: TraverseInput<T>): TraverseInput<T> | undefined {
+  const c = input.close as unknown;
+  if (
+    (typeof c === 'string' && c !== 'loop') ||
+    (c !== null && typeof c === 'object' && 'point' in c) ||
+    input.angleKind !== undefined ||
+    input.startBearing !== undefined ||
+    input.backsight !== undefined
+  )
+    return undefined;
+  if (c !== 'loop') return input;
+  const { close: _loop, ...rest } = input;
+  return rest;
+}
+
+/**
+ * The traverse computation; `open`: the traverse ends where its courses end (its closure is
+ * zero and nothing is adjusted), for {@link openTraverse}. @internal
+ */
+export function computeTraverse<T, E extends boolean>(
+  A: Arithmetic<T, E>,
+  input: TraverseInput<T>,
+  where: string,
+  open: boolean,
+): Traverse<T, E> {
   // Performance (docs/performance.md): the arithmetic's fused kernel, where it has one
   // (rational: courses as latitude/departure/distance, compass rule), gives the same points and
   // adjustment at once, or undefined for input it leaves to the code below; the closure's root
   // and ratio are computed here as below.
-  const fused = A.kernels?.traverse?.(input);
+  const forKernel =
+    !open && A.kernels?.traverse && input !== null && typeof input === 'object'
+      ? kernelInput(input)
+      : undefined;
+  const fused = forKernel ? A.kernels?.traverse?.(forKernel) : undefined;
   if (fused !== undefined) {
     const { east, north } = fused;
     const q = A.add(A.mul(east, east), A.mul(north, north));
@@ -221,26 +286,39 @@ export function traverse<T, E extends boolean>(
   if (input === null || typeof input !== 'object') {
     throw invalidArgument(where, `${show(input)} is not { start, courses, close? }`);
   }
-  const start = readPoint(A, input.start, `${where} start`);
-  const end = input.close === undefined ? start : readPoint(A, input.close, `${where} close`);
   const rule = input.rule ?? 'compass';
   if (rule !== 'compass' && rule !== 'transit') {
     throw invalidArgument(`${where} rule`, `${show(rule)} is not 'compass' or 'transit'`);
   }
   if (input.courses === undefined)
     throw new QuadspreadError('NO_COURSES', `${where} courses`, 'no courses were given');
-  const list = readArray<TraverseCourse<T>>(input.courses, `${where} courses`);
-  const n = list.length;
+  const given = readArray<TraverseCourse<T>>(input.courses, `${where} courses`);
+  const n = given.length;
   if (n === 0)
     throw new QuadspreadError('NO_COURSES', `${where} courses`, 'the traverse has no courses');
-  if (A.float64 === true) {
+  if (open ? input.close !== 'open' : input.close === 'open')
+    throw invalidArgument(
+      `${where} close`,
+      open
+        ? `${show(input.close)}: openTraverse is for close: 'open' (use traverse for a traverse that closes)`
+        : "'open' claims no misclosure: use openTraverse(A, input) for an open traverse",
+    );
+  const book = readFieldBook(A, input, where);
+  const start = book.start;
+  const list = book.courses as readonly TraverseCourse<T>[];
+  const carried = book.angles;
+  const withAngles = (r: Traverse<T, E>): Traverse<T, E> => {
+    let out = r;
+    if (input.interiorAngles !== undefined)
+      out = { ...out, angular: angularMisclosure(A, input.interiorAngles) };
+    return carried ? { ...out, angles: carried } : out;
+  };
+  if (A.float64 === true && !open) {
     // The float twin (same operations, same order) keeps this loop fast in any process.
-    const fast = traverseFloat(start as Point<number>, end as Point<number>, rule, list);
+    const fast = traverseFloat(start as Point<number>, book.end as Point<number>, rule, list);
     if (fast !== undefined) {
       const r = fast as unknown as Traverse<T, E>;
-      return input.interiorAngles !== undefined
-        ? { ...r, angular: angularMisclosure(A, input.interiorAngles) }
-        : r;
+      return input.interiorAngles !== undefined || carried ? withAngles(r) : r;
     }
   }
 
@@ -297,6 +375,8 @@ export function traverse<T, E extends boolean>(
     points[i + 1] = { x, y };
   }
 
+  // An open traverse ends where its courses end.
+  const end = book.end ?? { x, y };
   const east = A.sub(x, end.x);
   const north = A.sub(y, end.y);
   const q = A.add(A.mul(east, east), A.mul(north, north));
@@ -370,8 +450,5 @@ export function traverse<T, E extends boolean>(
     courses: legs,
     rule,
   };
-  if (input.interiorAngles !== undefined) {
-    return { ...result, angular: angularMisclosure(A, input.interiorAngles) };
-  }
-  return result;
+  return withAngles(result);
 }

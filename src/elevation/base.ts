@@ -12,6 +12,7 @@ import {
   invalidAngle,
   verticalSight,
   inconsistentReadings,
+  checkArithmetic,
 } from '../errors.js';
 import { checkObject, PLUMB_SIGHT } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
@@ -122,6 +123,7 @@ export function heightFromBase<T, E extends boolean>(
     vertical: readonly [VerticalInput<T> | undefined, VerticalInput<T> | undefined];
   },
 ): BaseHeight<T, E> {
+  checkArithmetic(A, 'heightFromBase');
   const w = 'heightFromBase(input)';
   checkObject(input, w);
   const R = rootOps(A);
@@ -131,13 +133,15 @@ export function heightFromBase<T, E extends boolean>(
   let s1: T;
   let s2: T;
   let side: FootSide;
-  if ((input.spreads === undefined) === (input.angles === undefined)) {
+  if ((input.spreads == null) === (input.angles == null)) {
     throw invalidArgument(w, 'give either spreads (with foot) or angles, not both or neither');
   }
-  if (input.angles !== undefined) {
+  if (input.angles != null) {
     if (input.foot !== undefined)
       throw invalidArgument(`${w}.foot`, 'angles already fix the side of the foot; leave foot out');
-    const a = input.angles.map((x, i) => {
+    if (!Array.isArray(input.angles) || input.angles.length !== 2)
+      throw invalidArgument(`${w}.angles`, `${show(input.angles)} is not a pair of angles`);
+    const a = Array.from(input.angles, (x, i) => {
       const d = angleToDegrees(A, x);
       if (A.sign(d) <= 0 || A.cmp(d, A.from(180)) >= 0)
         throw invalidAngle(

@@ -9,6 +9,7 @@ import {
   invalidArgument,
   inconsistentReadings,
   coincidentPoints,
+  checkArithmetic,
 } from '../errors.js';
 import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
@@ -46,6 +47,7 @@ export function heightFromReading<T>(
   A: Arithmetic<T>,
   input: { horizontal: Numeric<T>; vertical: VerticalInput<T> },
 ): T {
+  checkArithmetic(A, 'heightFromReading');
   checkObject(input, 'heightFromReading(input)');
   const w = 'heightFromReading(input.vertical)';
   const Q = readQuadrance(A, input.horizontal, 'heightFromReading(input)', 'horizontal');
@@ -80,6 +82,7 @@ export function horizontalFromHeight<T>(
   A: Arithmetic<T>,
   input: { height: Numeric<T>; vertical: VerticalInput<T> },
 ): T {
+  checkArithmetic(A, 'horizontalFromHeight');
   const where = 'horizontalFromHeight(input)';
   checkObject(input, where);
   const H = readQuadrance(A, input.height, where, 'height');
@@ -116,6 +119,7 @@ export function verticalFromHeight<T>(
   A: Arithmetic<T>,
   input: { height: Numeric<T>; horizontal: Numeric<T> },
 ): T {
+  checkArithmetic(A, 'verticalFromHeight');
   const where = 'verticalFromHeight(input)';
   checkObject(input, where);
   const H = readQuadrance(A, input.height, where, 'height');

@@ -4,7 +4,13 @@
  *
  * @module elevation
  */
-import { QuadspreadError, show, invalidArgument, inconsistentReadings } from '../errors.js';
+import {
+  QuadspreadError,
+  show,
+  invalidArgument,
+  inconsistentReadings,
+  checkArithmetic,
+} from '../errors.js';
 import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { solveQuadratic } from '../geometry/quadratic.js';
@@ -140,6 +146,7 @@ export function heightFromInlineReadings<T>(
   A: Arithmetic<T>,
   input: { chainages: readonly Numeric<T>[]; vertical: readonly VerticalInput<T>[] },
 ): InlineHeight<T> {
+  checkArithmetic(A, 'heightFromInlineReadings');
   // Performance (docs/performance.md): the arithmetic's fused kernel, where it has one
   // (rational: three stations, in integers), gives the same result at once, or undefined for
   // input it leaves to the code below (which reports every error).
@@ -288,6 +295,7 @@ export function heightFromInlineQuadrances<T, E extends boolean>(
   A: Arithmetic<T, E>,
   input: { spacings: readonly [Numeric<T>, Numeric<T>]; vertical: readonly VerticalInput<T>[] },
 ): InlineQuadranceHeight<T, E> {
+  checkArithmetic(A, 'heightFromInlineQuadrances');
   const w = 'heightFromInlineQuadrances(input)';
   checkObject(input, w);
   const R = rootOps(A);

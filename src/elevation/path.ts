@@ -3,7 +3,7 @@
  *
  * @module elevation
  */
-import { QuadspreadError, show, invalidArgument } from '../errors.js';
+import { QuadspreadError, show, invalidArgument, checkArithmetic } from '../errors.js';
 import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readSpread } from '../geometry/validate.js';
@@ -55,6 +55,7 @@ export function pathGrade<T>(
   A: Arithmetic<T>,
   input: { fall: Numeric<T>; offset: Numeric<T>; measured: OffsetMeasure },
 ): T {
+  checkArithmetic(A, 'pathGrade');
   const w = 'pathGrade(input)';
   checkObject(input, w);
   const measured = readMeasured(input.measured, `${w}.measured`);
@@ -99,6 +100,7 @@ export function pathOffset<T>(
   A: Arithmetic<T>,
   input: { fall: Numeric<T>; grade: Numeric<T>; measured: OffsetMeasure },
 ): T {
+  checkArithmetic(A, 'pathOffset');
   const w = 'pathOffset(input)';
   checkObject(input, w);
   const measured = readMeasured(input.measured, `${w}.measured`);

@@ -5,7 +5,7 @@
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Root } from '../geometry/surd.js';
-import { invalidArgument } from '../errors.js';
+import { invalidArgument, checkArithmetic } from '../errors.js';
 import { readVertical, type VerticalInput } from '../readings/vertical.js';
 import { checkObject } from './input.js';
 import { heightFromReading } from './height.js';
@@ -55,6 +55,7 @@ export function heightFromSight<T, E extends boolean>(
   A: Arithmetic<T, E>,
   input: { horizontalQuadrance: Numeric<T>; vertical: VerticalInput<T> },
 ): SightHeight<T, E> {
+  checkArithmetic(A, 'heightFromSight');
   const w = 'heightFromSight(input)';
   checkObject(input, w);
   if (input.horizontalQuadrance === undefined)

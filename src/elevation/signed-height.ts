@@ -4,7 +4,7 @@
  * @module elevation
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { QuadspreadError, invalidArgument, show } from '../errors.js';
+import { QuadspreadError, invalidArgument, show, checkArithmetic } from '../errors.js';
 import { readQuadrance } from '../geometry/validate.js';
 import { asRoot, isSurd, sqrtOf, type Root, type Surd } from '../geometry/surd.js';
 import { approxSqrt } from '../readings/numeric.js';
@@ -33,6 +33,7 @@ export function heightFromQuadrance<T, E extends boolean>(
   H: Numeric<T>,
   sign: -1 | 0 | 1 = 1,
 ): Root<T, E> {
+  checkArithmetic(A, 'heightFromQuadrance');
   const w = 'heightFromQuadrance(A, H, sign)';
   const q = readQuadrance(A, H, w, 'H');
   if (sign !== 1 && sign !== -1 && sign !== 0)

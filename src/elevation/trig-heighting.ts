@@ -10,11 +10,12 @@ import {
   invalidArgument,
   verticalSight,
   negativeQuadrance,
+  checkArithmetic,
 } from '../errors.js';
 import { checkObject } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { isSurd, type Root, type Surd } from '../geometry/surd.js';
-import { readNumber, shownInput } from '../geometry/validate.js';
+import { finiteResult, readNumber, shownInput } from '../geometry/validate.js';
 import { checkLengthUnit, METRES_PER_UNIT, type LengthUnit } from '../readings/length.js';
 import { readVertical, type VerticalInput } from '../readings/vertical.js';
 import { rootOps } from './roots.js';
@@ -96,6 +97,7 @@ export function curvatureRefraction<T>(
   distance: Numeric<T>,
   options: CurvatureOptions<T> = {},
 ): T {
+  checkArithmetic(A, 'curvatureRefraction');
   checkObject(options, 'curvatureRefraction(options)');
   const D = readNumber(A, distance, 'curvatureRefraction(distance)');
   if (A.sign(D) < 0)
@@ -175,6 +177,7 @@ export function trigHeight<T, E extends boolean>(
   A: Arithmetic<T, E>,
   sight: TrigSight<T>,
 ): TrigHeight<T, E> {
+  checkArithmetic(A, 'trigHeight');
   const w = 'trigHeight(sight)';
   checkObject(sight, w);
   const R = rootOps(A);
@@ -195,7 +198,7 @@ export function trigHeight<T, E extends boolean>(
   let Qh: T;
   if (sight.measured === 'slope') {
     V = R.make(A.zero, A.mul(sg, D), s); // S·sin α = ±S·√R
-    Qh = A.mul(A.mul(D, D), c); // D² = S²·cos²α = S²(1 − R)
+    Qh = finiteResult(A.mul(A.mul(D, D), c), `${w}.distance`); // D² = S²·cos²α = S²(1 − R)
   } else {
     if (A.isZero(c))
       throw verticalSight(
@@ -203,7 +206,7 @@ export function trigHeight<T, E extends boolean>(
         'a vertical spread of 1 with a horizontal distance: the sight is plumb',
       );
     V = R.make(A.zero, A.div(A.mul(sg, D), c), A.mul(s, c)); // D·tan α = ±D·√(R(1 − R))/(1 − R)
-    Qh = A.mul(D, D);
+    Qh = finiteResult(A.mul(D, D), `${w}.distance`);
   }
   if (sight.correction !== undefined && sight.correction !== false)
     checkObject(sight.correction, `${w}.correction`);
@@ -272,6 +275,7 @@ export function reciprocalTrigHeight<T, E extends boolean>(
   A: Arithmetic<T, E>,
   input: { forward: TrigSight<T>; backward: TrigSight<T> },
 ): ReciprocalTrigHeight<T, E> {
+  checkArithmetic(A, 'reciprocalTrigHeight');
   checkObject(input, 'reciprocalTrigHeight(input)');
   checkObject(input.forward, 'reciprocalTrigHeight(input).forward');
   checkObject(input.backward, 'reciprocalTrigHeight(input).backward');

@@ -8,6 +8,7 @@ import {
   coincidentPoints,
   verticalSight,
   inconsistentReadings,
+  checkArithmetic,
 } from '../errors.js';
 import { checkObject, PLUMB_SIGHT } from './input.js';
 import type { Arithmetic } from '../arithmetic/types.js';
@@ -85,6 +86,7 @@ export function heightFromTwoStations<T>(
     vertical: readonly [VerticalInput<T>, VerticalInput<T>];
   },
 ): TwoStationHeight<T> {
+  checkArithmetic(A, 'heightFromTwoStations');
   const w = 'heightFromTwoStations(input)';
   checkObject(input, w);
   if (!Array.isArray(input.stations) || input.stations.length !== 2)

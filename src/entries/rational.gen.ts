@@ -354,6 +354,9 @@ export const obliqueStereographic: Bound<typeof g.obliqueStereographic<Value>> =
 /** {@link g.obliqueStereographicInverse | obliqueStereographicInverse} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const obliqueStereographicInverse: Bound<typeof g.obliqueStereographicInverse<Value>> = (point, projection) => g.obliqueStereographicInverse<Value>(arithmetic, point, projection);
 
+/** {@link g.openTraverse | openTraverse} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
+export const openTraverse: Bound<typeof g.openTraverse<Value>> = (input) => g.openTraverse<Value>(arithmetic, input);
+
 /** {@link g.orientStation | orientStation} with the arithmetic fixed to `rational`: the same arguments after the arithmetic. @function */
 export const orientStation: Bound<typeof g.orientStation<Value>> = (input) => g.orientStation<Value>(arithmetic, input);
 
@@ -609,19 +612,20 @@ export type {
   LevelRun, LevelRunInput, LevelSight, Line, LinearUnit, LocalTest, Matrix3, MeanFaces,
   MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, NetworkAdjustment,
   NetworkInput, NetworkObservationInput, NetworkOptions, NetworkPointInput, Numeric,
-  ObservationTest, OffsetMeasure, OrientInput, PegReadings, Point, Point3, Point3Input,
-  Pointing, PointInput, PointLike, PolygonArea, PreparedProjection, ProfileLevel,
-  ProfilePointInput, ProjectedCrs, ProjectedPoint, Projection, ProjectionAngleUnit,
-  ProjectionMethod, RandomStream, Ratio, Rational, RationalArithmetic, ReciprocalLevelling,
-  ReciprocalSet, ReciprocalTrigHeight, ReducedObservation, RelativeEllipse, Resection,
-  ResectionInput, Root, RotationInput, RotationUnit, RoundOff, SetOut, SetOutCheck,
+  ObservationTest, OffsetMeasure, OpenTraverse, OpenTraverseLeg, OrientInput, PegReadings,
+  Point, Point3, Point3Input, Pointing, PointInput, PointLike, PolygonArea, PreparedProjection,
+  ProfileLevel, ProfilePointInput, ProjectedCrs, ProjectedPoint, Projection,
+  ProjectionAngleUnit, ProjectionMethod, RandomStream, Ratio, Rational, RationalArithmetic,
+  ReciprocalLevelling, ReciprocalSet, ReciprocalTrigHeight, ReducedObservation, RelativeEllipse,
+  Resection, ResectionInput, Root, RotationInput, RotationUnit, RoundOff, SetOut, SetOutCheck,
   SetOutOptions, SetOutPoint, SetOutTolerance, SettingOutRow, SetupInput, SetupTolerance, Shot,
   SideShot, SightHeight, SimilarityFit, SnoopingRemoval, SnoopingReport, StaffPair,
   StationCandidate, StationObservation, StationSetup, StewartChainages, StewartQuadrances,
   StraightElement, Surd, TestOptions, TmFactors, TransformedPoint, TransitionElement,
-  TransitionMeasures, TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClosure,
-  TraverseCourse, TraverseInput, TraverseLeg, Triangle, TriangleMeasures, TrigHeight, TrigSight,
-  TwoPeg, TwoPegInput, TwoStationHeight, UncertainArithmetic, UncertainInput, UtmZone, ValueOf,
-  VerticalAlignment, VerticalAlignmentInput, VerticalCurve, VerticalCurveInput, VerticalInput,
-  VerticalKind, VerticalReading,
+  TransitionMeasures, TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClose,
+  TraverseClosingPoint, TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg, Triangle,
+  TriangleMeasures, TrigHeight, TrigSight, TwoPeg, TwoPegInput, TwoStationHeight,
+  UncertainArithmetic, UncertainInput, UtmZone, ValueOf, VerticalAlignment,
+  VerticalAlignmentInput, VerticalCurve, VerticalCurveInput, VerticalInput, VerticalKind,
+  VerticalReading,
 } from '../index.js';

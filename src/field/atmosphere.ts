@@ -4,7 +4,7 @@
  *
  * @module field
  */
-import { invalidArgument } from '../errors.js';
+import { invalidArgument, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber } from '../geometry/validate.js';
 import { checkRecord } from './internal.js';
@@ -75,6 +75,7 @@ export interface AtmosphericPpm<T> {
  * ```
  */
 export function atmosphericPpm<T>(A: Arithmetic<T>, atmosphere: Atmosphere<T>): AtmosphericPpm<T> {
+  checkArithmetic(A, 'atmosphericPpm');
   const w = 'atmosphericPpm(atmosphere)';
   checkRecord(atmosphere, w);
   const need = (k: keyof Atmosphere<T>): T => {

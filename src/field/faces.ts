@@ -4,7 +4,7 @@
  *
  * @module field
  */
-import { invalidAngle, show } from '../errors.js';
+import { invalidAngle, show, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { AngleUnit } from '../readings/angle.js';
 import { sinCosDegrees } from '../readings/trig.js';
@@ -89,6 +89,7 @@ export function meanFaces<T>(
   right: Pointing<T>,
   options: FaceOptions<T> = {},
 ): MeanFaces<T> {
+  checkArithmetic(A, 'meanFaces');
   const w = 'meanFaces';
   checkRecord(left, `${w}(left)`);
   checkRecord(right, `${w}(right)`);

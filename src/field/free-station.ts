@@ -4,7 +4,7 @@
  *
  * @module field
  */
-import { QuadspreadError, invalidArgument, show } from '../errors.js';
+import { QuadspreadError, invalidArgument, show, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { AngleUnit } from '../readings/angle.js';
 import { readNumber } from '../geometry/validate.js';
@@ -156,6 +156,7 @@ const MAX_STEPS = 30;
  * ```
  */
 export function freeStation<T>(A: Arithmetic<T>, input: FreeStationInput<T>): FreeStation<T> {
+  checkArithmetic(A, 'freeStation');
   const w = 'freeStation(input)';
   checkRecord(input, w);
   const unit = readUnit(input.unit, `${w}.unit`);
@@ -171,7 +172,7 @@ export function freeStation<T>(A: Arithmetic<T>, input: FreeStationInput<T>): Fr
   const pDir = A.div(A.one, sq(A, A.mul(A.div(sDir, A.from(ARCSEC)), perRad))); // 1/σ², σ in radians
   const pDist = A.div(A.one, sq(A, sDist));
   const control = readArray<ControlPoint<T>>(input.control, `${w}.control`, 10000).map((c, i) => ({
-    name: c?.name === undefined ? `control ${i + 1}` : String(c.name),
+    name: controlName(c?.name, i, `${w}.control[${i}].name`),
     p: readPoint3(A, c, `${w}.control[${i}]`),
   }));
   const obs: Obs<T>[] = readArray<StationObservation<T>>(
@@ -181,7 +182,10 @@ export function freeStation<T>(A: Arithmetic<T>, input: FreeStationInput<T>): Fr
   ).map((o, i) => {
     const at = `${w}.observations[${i}]`;
     checkRecord(o, at);
-    const k = typeof o.to === 'number' ? o.to : control.findIndex((c) => c.name === String(o.to));
+    const k =
+      typeof o.to === 'number'
+        ? o.to
+        : ((to) => control.findIndex((c) => c.name === to))(controlName(o.to, -1, `${at}.to`));
     const cp = Number.isInteger(k) && k >= 0 ? control[k] : undefined;
     if (cp === undefined)
       throw invalidArgument(`${at}.to`, `${show(o.to)} is not a control point's name or index`);
@@ -335,6 +339,14 @@ export function freeStation<T>(A: Arithmetic<T>, input: FreeStationInput<T>): Fr
     residuals,
     iterations: steps,
   };
+}
+
+/** A control point's name (text or a number), or `control <i + 1>` when absent (i ≥ 0). */
+function controlName(name: unknown, i: number, where: string): string {
+  if (name === undefined && i >= 0) return `control ${i + 1}`;
+  if (typeof name === 'string') return name;
+  if (typeof name === 'number' && Number.isFinite(name)) return String(name);
+  throw invalidArgument(where, `${show(name)} is not a name (text)`);
 }
 
 function sq<T>(A: Arithmetic<T>, v: T): T {

@@ -4,7 +4,13 @@
  *
  * @module field
  */
-import { QuadspreadError, coincidentPoints, invalidArgument, show } from '../errors.js';
+import {
+  QuadspreadError,
+  coincidentPoints,
+  invalidArgument,
+  show,
+  checkArithmetic,
+} from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { AngleUnit } from '../readings/angle.js';
 import { sinCosDegrees } from '../readings/trig.js';
@@ -165,6 +171,7 @@ export function faceLeftCircle<T>(
  * ```
  */
 export function orientStation<T>(A: Arithmetic<T>, input: OrientInput<T>): StationSetup<T> {
+  checkArithmetic(A, 'orientStation');
   const w = 'orientStation(input)';
   checkRecord(input, w);
   const unit = readUnit(input.unit, `${w}.unit`);

@@ -4,7 +4,7 @@
  *
  * @module field
  */
-import { invalidArgument } from '../errors.js';
+import { invalidArgument, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber } from '../geometry/validate.js';
 import { readArray } from '../cogo/internal.js';
@@ -72,6 +72,7 @@ export function reciprocalLevelling<T>(
   A: Arithmetic<T>,
   input: { readonly sets: readonly ReciprocalSet<T>[]; readonly tolerance?: Numeric<T> },
 ): ReciprocalLevelling<T> {
+  checkArithmetic(A, 'reciprocalLevelling');
   const w = 'reciprocalLevelling(input)';
   checkRecord(input, w);
   const list = readArray<ReciprocalSet<T>>(input.sets, `${w}.sets`, 10000);

@@ -6,7 +6,7 @@
  *
  * @module field
  */
-import { invalidArgument, invalidAngle, show } from '../errors.js';
+import { invalidArgument, invalidAngle, show, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { AngleUnit } from '../readings/angle.js';
 import { sinCosDegrees } from '../readings/trig.js';
@@ -144,6 +144,7 @@ export function reduceObservation<T>(
   A: Arithmetic<T>,
   observation: FieldObservation<T>,
 ): ReducedObservation<T> {
+  checkArithmetic(A, 'reduceObservation');
   return reduceAt(A, observation, 'reduceObservation(observation)');
 }
 

@@ -4,7 +4,7 @@
  *
  * @module field
  */
-import { coincidentPoints, invalidArgument } from '../errors.js';
+import { coincidentPoints, invalidArgument, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber, finiteResult } from '../geometry/validate.js';
 import { curvatureRefraction, type CurvatureOptions } from '../elevation/trig-heighting.js';
@@ -92,6 +92,7 @@ export function setOut<T>(
   design: Point3Input<T>,
   options: SetOutOptions<T> = {},
 ): SetOut<T> {
+  checkArithmetic(A, 'setOut');
   const w = 'setOut';
   const s = readSetup(A, setup, `${w}(setup)`);
   const p = readPoint3(A, design, `${w}(design)`);
@@ -206,6 +207,7 @@ export function setOutCheck<T>(
   observation: Shot<T>,
   tolerance: SetOutTolerance<T> = {},
 ): SetOutCheck<T> {
+  checkArithmetic(A, 'setOutCheck');
   const w = 'setOutCheck';
   const s = readSetup(A, setup, `${w}(setup)`);
   const p = readPoint3(A, design, `${w}(design)`);

@@ -3,7 +3,7 @@
  *
  * @module field
  */
-import { invalidArgument } from '../errors.js';
+import { invalidArgument, checkArithmetic } from '../errors.js';
 import type { Arithmetic } from '../arithmetic/types.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { finiteResult } from '../geometry/validate.js';
@@ -69,6 +69,7 @@ export interface SideShot<T> {
  * ```
  */
 export function sideShot<T>(A: Arithmetic<T>, setup: SetupInput<T>, shot: Shot<T>): SideShot<T> {
+  checkArithmetic(A, 'sideShot');
   return shotFrom(A, readSetup(A, setup, 'sideShot(setup)'), shot, 'sideShot(shot)');
 }
 
@@ -95,6 +96,7 @@ export function sideShots<T>(
   setup: SetupInput<T>,
   shots: readonly Shot<T>[],
 ): SideShot<T>[] {
+  checkArithmetic(A, 'sideShots');
   const s = readSetup(A, setup, 'sideShots(setup)');
   return readArray<Shot<T>>(shots, 'sideShots(shots)').map((o, i) =>
     shotFrom(A, s, o, `sideShots(shots)[${i}]`),

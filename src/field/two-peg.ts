@@ -4,7 +4,7 @@
  *
  * @module field
  */
-import { QuadspreadError } from '../errors.js';
+import { QuadspreadError, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber } from '../geometry/validate.js';
 import {
@@ -81,6 +81,7 @@ export interface TwoPeg<T> {
  * ```
  */
 export function twoPegTest<T>(A: Arithmetic<T>, input: TwoPegInput<T>): TwoPeg<T> {
+  checkArithmetic(A, 'twoPegTest');
   const w = 'twoPegTest(input)';
   checkRecord(input, w);
   const read = (s: PegReadings<T>, at: string, needDistances: boolean) => {

@@ -7,7 +7,7 @@
  * @module geodesy
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { invalidArgument } from '../errors.js';
+import { invalidArgument, checkArithmetic } from '../errors.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { root, toDegrees } from './internal.js';
 import { authalicQ, fromAuthalicQ } from './authalic.js';
@@ -163,6 +163,7 @@ export function albersEqualArea<T>(
   point: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },
   projection: Projection | PreparedProjection<T>,
 ): ProjectedPoint<T> {
+  checkArithmetic(A, 'albersEqualArea');
   return forwardWith(A, prepared(A, projection, pick, 'albersEqualArea'), point, 'albersEqualArea');
 }
 
@@ -190,6 +191,7 @@ export function albersEqualAreaInverse<T>(
   point: { readonly E: Numeric<T>; readonly N: Numeric<T> },
   projection: Projection | PreparedProjection<T>,
 ): GeographicPoint<T> {
+  checkArithmetic(A, 'albersEqualAreaInverse');
   return inverseWith(
     A,
     prepared(A, projection, pick, 'albersEqualAreaInverse'),

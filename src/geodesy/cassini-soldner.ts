@@ -11,7 +11,7 @@
  * @module geodesy
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { QuadspreadError, invalidArgument } from '../errors.js';
+import { QuadspreadError, invalidArgument, checkArithmetic } from '../errors.js';
 import { root, toDegrees } from './internal.js';
 import {
   forwardWith,
@@ -280,6 +280,7 @@ export function cassiniSoldner<T>(
   point: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },
   projection: Projection | PreparedProjection<T>,
 ): ProjectedPoint<T> {
+  checkArithmetic(A, 'cassiniSoldner');
   return forwardWith(A, prepared(A, projection, pick, 'cassiniSoldner'), point, 'cassiniSoldner');
 }
 
@@ -307,6 +308,7 @@ export function cassiniSoldnerInverse<T>(
   point: { readonly E: Numeric<T>; readonly N: Numeric<T> },
   projection: Projection | PreparedProjection<T>,
 ): GeographicPoint<T> {
+  checkArithmetic(A, 'cassiniSoldnerInverse');
   return inverseWith(
     A,
     prepared(A, projection, pick, 'cassiniSoldnerInverse'),

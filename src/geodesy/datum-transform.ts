@@ -5,7 +5,7 @@
  * @module geodesy
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { invalidArgument, show } from '../errors.js';
+import { invalidArgument, show, checkArithmetic } from '../errors.js';
 import { expectObject } from '../geometry/validate.js';
 import type { Ellipsoid } from './ellipsoid.js';
 import { geocentricToGeodetic, geodeticToGeocentric, type GeodeticInput } from './geocentric.js';
@@ -83,6 +83,7 @@ export function datumTransform<T>(
   transformation: DatumTransformation<T>,
   options: DatumTransformOptions,
 ): TransformedPoint<T> {
+  checkArithmetic(A, 'datumTransform');
   const where = 'datumTransform';
   expectObject(point, `${where}(point)`, '{ lat, lon, h? }');
   expectObject(transformation, `${where}(transformation)`, '{ method, parameters }');

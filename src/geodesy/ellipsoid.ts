@@ -4,7 +4,7 @@
  *
  * @module geodesy
  */
-import { QuadspreadError, show, invalidEllipsoid } from '../errors.js';
+import { QuadspreadError, show, invalidEllipsoid, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { rational } from '../arithmetic/rational.js';
 import { readNumber } from '../geometry/validate.js';
@@ -230,6 +230,7 @@ export function ellipsoidParameters<T>(
   A: Arithmetic<T>,
   ellipsoid: Ellipsoid | string,
 ): EllipsoidParameters<T> {
+  checkArithmetic(A, 'ellipsoidParameters');
   const E = readEllipsoid(ellipsoid, 'ellipsoidParameters(ellipsoid)');
   // The constants are read from text once per arithmetic and ellipsoid (a pure memo: both
   // are immutable, and the result is frozen).

@@ -4,7 +4,7 @@
  *
  * @module geodesy
  */
-import { show, invalidArgument } from '../errors.js';
+import { show, invalidArgument, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber, expectObject, shownInput } from '../geometry/validate.js';
 import { sinCosDegrees } from '../readings/trig.js';
@@ -75,6 +75,7 @@ export function enuRotation<T>(
   A: Arithmetic<T>,
   origin: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },
 ): Matrix3<T> {
+  checkArithmetic(A, 'enuRotation');
   const where = 'enuRotation(origin)';
   expectObject(origin, where, '{ lat, lon }');
   const digits = claimedDigits(A);
@@ -130,6 +131,7 @@ export function enuFromGeocentric<T>(
   point: Geocentric<Numeric<T>> | Geocentric<T>,
   ellipsoid: Ellipsoid | string,
 ): Enu<T> {
+  checkArithmetic(A, 'enuFromGeocentric');
   objectArg(origin, 'enuFromGeocentric(origin)', '{ lat, lon, h }');
   objectArg(point, 'enuFromGeocentric(point)', '{ X, Y, Z }');
   const E = readEllipsoid(ellipsoid, 'enuFromGeocentric(ellipsoid)');
@@ -167,6 +169,7 @@ export function geocentricFromEnu<T>(
   local: Enu<Numeric<T>> | Enu<T>,
   ellipsoid: Ellipsoid | string,
 ): Geocentric<T> {
+  checkArithmetic(A, 'geocentricFromEnu');
   objectArg(origin, 'geocentricFromEnu(origin)', '{ lat, lon, h }');
   objectArg(local, 'geocentricFromEnu(local)', '{ e, n, u }');
   const E = readEllipsoid(ellipsoid, 'geocentricFromEnu(ellipsoid)');
@@ -218,6 +221,7 @@ export function flatEarthError<T>(
   distance: Numeric<T>,
   radius: Numeric<T> = '6371008.7714',
 ): FlatEarthError<T> {
+  checkArithmetic(A, 'flatEarthError');
   const s = readNumber(A, distance, 'flatEarthError(distance)');
   const R = readNumber(A, radius, 'flatEarthError(radius)');
   if (A.sign(s) < 0)

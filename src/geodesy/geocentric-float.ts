@@ -31,7 +31,7 @@ export function geocentricFloat(
   const lon = point.lon;
   const h = point.h === undefined ? 0 : point.h;
   if (!isNum(lat) || !isNum(lon) || !isNum(h)) return undefined;
-  if (Math.abs(lat) > 90 || h < -a) return undefined;
+  if (Math.abs(lat) > 90 || Math.abs(lon) > 360 || h < -a) return undefined;
   const sc = SCRATCH;
   if (!sinCosInto(lat, sc, 0) || !sinCosInto(lon, sc, 2)) return undefined;
   const sp = sc[0]!;

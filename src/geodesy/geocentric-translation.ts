@@ -4,7 +4,7 @@
  * @module geodesy
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { invalidArgument } from '../errors.js';
+import { invalidArgument, checkArithmetic } from '../errors.js';
 import { expectObject, readNumber } from '../geometry/validate.js';
 import type { Geocentric } from './geocentric.js';
 import { readXyz } from './helmert.js';
@@ -41,6 +41,7 @@ export function geocentricTranslation<T>(
   point: Geocentric<Numeric<T>>,
   params: GeocentricTranslationParameters<T>,
 ): Geocentric<T> {
+  checkArithmetic(A, 'geocentricTranslation');
   const where = 'geocentricTranslation(params)';
   const [X, Y, Z] = readXyz(A, point, 'geocentricTranslation(point)');
   expectObject(params, where, '{ tx, ty, tz }');

@@ -4,7 +4,7 @@
  *
  * @module geodesy
  */
-import { QuadspreadError, invalidArgument } from '../errors.js';
+import { QuadspreadError, invalidArgument, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber, expectObject } from '../geometry/validate.js';
 import { sinCosDegrees } from '../readings/trig.js';
@@ -81,6 +81,7 @@ export function geodeticToGeocentric<T>(
   point: GeodeticInput<T>,
   ellipsoid: Ellipsoid | string,
 ): Geocentric<T> {
+  checkArithmetic(A, 'geodeticToGeocentric');
   const where = 'geodeticToGeocentric(point)';
   expectObject(point, where, '{ lat, lon, h }');
   const E = ellipsoidParameters(A, readEllipsoid(ellipsoid, 'geodeticToGeocentric(ellipsoid)'));
@@ -150,6 +151,7 @@ export function geocentricToGeodetic<T>(
   point: Geocentric<Numeric<T>> | Geocentric<T>,
   ellipsoid: Ellipsoid | string,
 ): Geodetic<T> {
+  checkArithmetic(A, 'geocentricToGeodetic');
   const where = 'geocentricToGeodetic(point)';
   expectObject(point, where, '{ X, Y, Z }');
   const E = ellipsoidParameters(A, readEllipsoid(ellipsoid, 'geocentricToGeodetic(ellipsoid)'));

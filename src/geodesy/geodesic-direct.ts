@@ -3,7 +3,7 @@
  *
  * @module geodesy
  */
-import { QuadspreadError } from '../errors.js';
+import { QuadspreadError, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { expectObject, readNumber } from '../geometry/validate.js';
 import { modulo } from '../readings/trig.js';
@@ -80,6 +80,7 @@ export function geodesicDirect<T>(
   distance: Numeric<T>,
   ellipsoid: Ellipsoid | string,
 ): GeodesicDirect<T> {
+  checkArithmetic(A, 'geodesicDirect');
   const where = 'geodesicDirect';
   expectObject(p1, `${where}(p1)`, '{ lat, lon }');
   const ell = readEllipsoid(ellipsoid, `${where}(ellipsoid)`);

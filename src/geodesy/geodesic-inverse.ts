@@ -3,7 +3,7 @@
  *
  * @module geodesy
  */
-import { QuadspreadError } from '../errors.js';
+import { QuadspreadError, checkArithmetic } from '../errors.js';
 import type { Arithmetic } from '../arithmetic/types.js';
 import { float } from '../arithmetic/float.js';
 import { expectObject } from '../geometry/validate.js';
@@ -85,6 +85,7 @@ export function geodesicInverse<T>(
   p2: GeodeticInput<T>,
   ellipsoid: Ellipsoid | string,
 ): GeodesicInverse<T> {
+  checkArithmetic(A, 'geodesicInverse');
   const where = 'geodesicInverse';
   expectObject(p1, `${where}(p1)`, '{ lat, lon }');
   expectObject(p2, `${where}(p2)`, '{ lat, lon }');

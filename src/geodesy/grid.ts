@@ -12,7 +12,7 @@
  *
  * @module geodesy
  */
-import { QuadspreadError, show, invalidArgument } from '../errors.js';
+import { QuadspreadError, show, invalidArgument, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber, expectObject, finiteResult, shownInput } from '../geometry/validate.js';
 import { sinCosDegrees } from '../readings/trig.js';
@@ -53,6 +53,7 @@ import {
  * ```
  */
 export function heightReductionFactor<T>(A: Arithmetic<T>, h: Numeric<T>, radius: Numeric<T>): T {
+  checkArithmetic(A, 'heightReductionFactor');
   const R = readNumber(A, radius, 'heightReductionFactor(radius)');
   if (A.sign(R) <= 0)
     throw invalidArgument(
@@ -312,6 +313,7 @@ export function transverseMercatorFactors<T>(
   point: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },
   projection: TransverseMercator,
 ): TmFactors<T> {
+  checkArithmetic(A, 'transverseMercatorFactors');
   const r = tm(A, point, projection, false);
   return { k: r.k, convergence: r.convergence };
 }
@@ -361,6 +363,7 @@ export function transverseMercator<T>(
   point: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },
   projection: TransverseMercatorGrid,
 ): GridPoint<T> {
+  checkArithmetic(A, 'transverseMercator');
   const r = tm(A, point, projection, true);
   return { E: r.E, N: r.N, k: r.k, convergence: r.convergence };
 }
@@ -456,6 +459,7 @@ export function combinedFactor<T>(
   heightFactor: Numeric<T>,
   scaleFactor: Numeric<T>,
 ): T {
+  checkArithmetic(A, 'combinedFactor');
   const h = positive(A, heightFactor, 'combinedFactor(heightFactor)');
   const k = positive(A, scaleFactor, 'combinedFactor(scaleFactor)');
   return finiteResult(A.mul(h, k), 'combinedFactor(heightFactor, scaleFactor)');
@@ -483,6 +487,7 @@ function positive<T>(A: Arithmetic<T>, x: Numeric<T>, where: string): T {
  * ```
  */
 export function groundToGrid<T>(A: Arithmetic<T>, ground: Numeric<T>, factor: Numeric<T>): T {
+  checkArithmetic(A, 'groundToGrid');
   return finiteResult(
     A.mul(
       readNumber(A, ground, 'groundToGrid(ground)'),
@@ -509,6 +514,7 @@ export function groundToGrid<T>(A: Arithmetic<T>, ground: Numeric<T>, factor: Nu
  * ```
  */
 export function gridToGround<T>(A: Arithmetic<T>, grid: Numeric<T>, factor: Numeric<T>): T {
+  checkArithmetic(A, 'gridToGround');
   return A.div(
     readNumber(A, grid, 'gridToGround(grid)'),
     positive(A, factor, 'gridToGround(factor)'),
@@ -549,6 +555,7 @@ export function transverseMercatorInverse<T>(
   point: { readonly E: Numeric<T>; readonly N: Numeric<T> },
   projection: TransverseMercatorGrid,
 ): { lat: T; lon: T; k: T; convergence: T } {
+  checkArithmetic(A, 'transverseMercatorInverse');
   const where = 'transverseMercatorInverse';
   expectObject(point, `${where}(point)`, '{ E, N }');
   const { ell, k0, lon0, lat0, E0, N0 } = readProjection(A, projection, where);

@@ -5,7 +5,7 @@
  *
  * @module geodesy
  */
-import { QuadspreadError, show, invalidArgument } from '../errors.js';
+import { QuadspreadError, show, invalidArgument, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber, expectObject } from '../geometry/validate.js';
 import type { Geocentric } from './geocentric.js';
@@ -197,6 +197,7 @@ export function helmert<T>(
   point: Geocentric<Numeric<T>>,
   params: HelmertParameters<T>,
 ): Geocentric<T> {
+  checkArithmetic(A, 'helmert');
   const v = readXyz(A, point, 'helmert(point)');
   const { t, w, m } = readHelmert(A, params, 'helmert(params)');
   const r = rotate(A, w, v);
@@ -231,6 +232,7 @@ export function helmertInverse<T>(
   point: Geocentric<Numeric<T>>,
   params: HelmertParameters<T>,
 ): Geocentric<T> {
+  checkArithmetic(A, 'helmertInverse');
   const v = readXyz(A, point, 'helmertInverse(point)');
   const { t, w, m } = readHelmert(A, params, 'helmertInverse(params)');
   const u = [0, 1, 2].map((i) => A.div(A.sub(v[i]!, t[i]!), m)) as [T, T, T];
@@ -263,6 +265,7 @@ export function helmertReversed<T>(
   point: Geocentric<Numeric<T>>,
   params: HelmertParameters<T>,
 ): Geocentric<T> {
+  checkArithmetic(A, 'helmertReversed');
   const v = readXyz(A, point, 'helmertReversed(point)');
   const { t, w, m } = readHelmert(A, params, 'helmertReversed(params)');
   const two = A.from(2);

@@ -93,11 +93,23 @@ export function readLatitude<T>(A: Arithmetic<T>, lat: Numeric<T>, where: string
   return v;
 }
 
-/** @internal A longitude in degrees from decimal degrees or DMS text (any value; used through sin and cos). */
-export function readLongitude<T>(A: Arithmetic<T>, lon: Numeric<T>, where: string): T {
+/**
+ * @internal A longitude in degrees from decimal degrees or DMS text, within ±360° (both the
+ * ±180° and the 0°–360° conventions); beyond, it is refused rather than wrapped without a word
+ * (unless `limited` is false: the projections reduce longitudes as they document).
+ */
+export function readLongitude<T>(
+  A: Arithmetic<T>,
+  lon: Numeric<T>,
+  where: string,
+  limited = true,
+): T {
   if (lon === undefined || lon === null) throw invalidAngle(where, 'the longitude is missing');
   checkHemisphere(lon, 'EW', where, 'longitude');
-  return readAngle(A, lon, where);
+  const v = readAngle(A, lon, where);
+  if (limited && A.cmp(A.abs(v), A.from(360)) > 0)
+    throw invalidAngle(where, `${shownInput(A, lon, v)} is beyond ±360° for a longitude`);
+  return v;
 }
 
 /** @internal An ellipsoidal height in metres (default 0), refused below −limit (−a unless said otherwise). */

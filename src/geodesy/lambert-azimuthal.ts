@@ -8,7 +8,7 @@
  * @module geodesy
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { invalidArgument } from '../errors.js';
+import { invalidArgument, checkArithmetic } from '../errors.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { root, toDegrees } from './internal.js';
 import { authalicQ, fromAuthalicQ } from './authalic.js';
@@ -206,6 +206,7 @@ export function lambertAzimuthalEqualArea<T>(
   point: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },
   projection: Projection | PreparedProjection<T>,
 ): ProjectedPoint<T> {
+  checkArithmetic(A, 'lambertAzimuthalEqualArea');
   return forwardWith(
     A,
     prepared(A, projection, pick, 'lambertAzimuthalEqualArea'),
@@ -237,6 +238,7 @@ export function lambertAzimuthalEqualAreaInverse<T>(
   point: { readonly E: Numeric<T>; readonly N: Numeric<T> },
   projection: Projection | PreparedProjection<T>,
 ): GeographicPoint<T> {
+  checkArithmetic(A, 'lambertAzimuthalEqualAreaInverse');
   return inverseWith(
     A,
     prepared(A, projection, pick, 'lambertAzimuthalEqualAreaInverse'),

@@ -7,7 +7,7 @@
  * @module geodesy
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { invalidArgument } from '../errors.js';
+import { invalidArgument, checkArithmetic } from '../errors.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { root, toDegrees } from './internal.js';
 import {
@@ -193,6 +193,7 @@ export function lambertConic<T>(
   point: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },
   projection: Projection | PreparedProjection<T>,
 ): ProjectedPoint<T> {
+  checkArithmetic(A, 'lambertConic');
   return forwardWith(A, prepared(A, projection, pick, 'lambertConic'), point, 'lambertConic');
 }
 
@@ -222,6 +223,7 @@ export function lambertConicInverse<T>(
   point: { readonly E: Numeric<T>; readonly N: Numeric<T> },
   projection: Projection | PreparedProjection<T>,
 ): GeographicPoint<T> {
+  checkArithmetic(A, 'lambertConicInverse');
   return inverseWith(
     A,
     prepared(A, projection, pick, 'lambertConicInverse'),

@@ -7,7 +7,7 @@
  * @module geodesy
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { invalidArgument } from '../errors.js';
+import { invalidArgument, checkArithmetic } from '../errors.js';
 import { toDegrees } from './internal.js';
 import {
   forwardWith,
@@ -138,6 +138,7 @@ export function mercator<T>(
   point: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },
   projection: Projection | PreparedProjection<T>,
 ): ProjectedPoint<T> {
+  checkArithmetic(A, 'mercator');
   return forwardWith(A, prepared(A, projection, pick, 'mercator'), point, 'mercator');
 }
 
@@ -165,5 +166,6 @@ export function mercatorInverse<T>(
   point: { readonly E: Numeric<T>; readonly N: Numeric<T> },
   projection: Projection | PreparedProjection<T>,
 ): GeographicPoint<T> {
+  checkArithmetic(A, 'mercatorInverse');
   return inverseWith(A, prepared(A, projection, pick, 'mercatorInverse'), point, 'mercatorInverse');
 }

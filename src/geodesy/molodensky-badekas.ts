@@ -6,7 +6,7 @@
  * @module geodesy
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { invalidArgument } from '../errors.js';
+import { invalidArgument, checkArithmetic } from '../errors.js';
 import type { Geocentric } from './geocentric.js';
 import {
   readHelmert,
@@ -61,6 +61,7 @@ export function molodenskyBadekas<T>(
   point: Geocentric<Numeric<T>>,
   params: MolodenskyBadekasParameters<T>,
 ): Geocentric<T> {
+  checkArithmetic(A, 'molodenskyBadekas');
   const v = readXyz(A, point, 'molodenskyBadekas(point)');
   const { t, w, m, p } = read(A, params, 'molodenskyBadekas(params)');
   const r = rotate(A, w, [0, 1, 2].map((i) => A.sub(v[i]!, p[i]!)) as [T, T, T]);
@@ -93,6 +94,7 @@ export function molodenskyBadekasInverse<T>(
   point: Geocentric<Numeric<T>>,
   params: MolodenskyBadekasParameters<T>,
 ): Geocentric<T> {
+  checkArithmetic(A, 'molodenskyBadekasInverse');
   const v = readXyz(A, point, 'molodenskyBadekasInverse(point)');
   const { t, w, m, p } = read(A, params, 'molodenskyBadekasInverse(params)');
   const u = [0, 1, 2].map((i) => A.div(A.sub(A.sub(v[i]!, p[i]!), t[i]!), m)) as [T, T, T];

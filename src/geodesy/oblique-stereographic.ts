@@ -9,7 +9,7 @@
  * @module geodesy
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { invalidArgument } from '../errors.js';
+import { invalidArgument, checkArithmetic } from '../errors.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { root, toDegrees } from './internal.js';
 import {
@@ -193,6 +193,7 @@ export function obliqueStereographic<T>(
   point: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },
   projection: Projection | PreparedProjection<T>,
 ): ProjectedPoint<T> {
+  checkArithmetic(A, 'obliqueStereographic');
   return forwardWith(
     A,
     prepared(A, projection, pick, 'obliqueStereographic'),
@@ -226,6 +227,7 @@ export function obliqueStereographicInverse<T>(
   point: { readonly E: Numeric<T>; readonly N: Numeric<T> },
   projection: Projection | PreparedProjection<T>,
 ): GeographicPoint<T> {
+  checkArithmetic(A, 'obliqueStereographicInverse');
   return inverseWith(
     A,
     prepared(A, projection, pick, 'obliqueStereographicInverse'),

@@ -6,7 +6,7 @@
  * @module geodesy
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { invalidArgument } from '../errors.js';
+import { invalidArgument, checkArithmetic } from '../errors.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { root, toDegrees } from './internal.js';
 import {
@@ -183,6 +183,7 @@ export function polarStereographic<T>(
   point: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },
   projection: Projection | PreparedProjection<T>,
 ): ProjectedPoint<T> {
+  checkArithmetic(A, 'polarStereographic');
   return forwardWith(
     A,
     prepared(A, projection, pick, 'polarStereographic'),
@@ -213,6 +214,7 @@ export function polarStereographicInverse<T>(
   point: { readonly E: Numeric<T>; readonly N: Numeric<T> },
   projection: Projection | PreparedProjection<T>,
 ): GeographicPoint<T> {
+  checkArithmetic(A, 'polarStereographicInverse');
   return inverseWith(
     A,
     prepared(A, projection, pick, 'polarStereographicInverse'),

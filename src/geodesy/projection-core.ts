@@ -8,7 +8,7 @@
  * @module geodesy
  */
 import Fraction from 'fraction.js';
-import { QuadspreadError, show, invalidArgument } from '../errors.js';
+import { QuadspreadError, show, invalidArgument, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { rational } from '../arithmetic/rational.js';
 import { readNumber, expectObject } from '../geometry/validate.js';
@@ -313,7 +313,7 @@ function longitudeIn<T>(
   unit: ProjectionAngleUnit,
   where: string,
 ): T {
-  if (unit === 'deg') return readLongitude(A, x, where);
+  if (unit === 'deg') return readLongitude(A, x, where, false);
   if (x === undefined || x === null)
     throw new QuadspreadError('INVALID_ANGLE', where, 'the longitude is missing');
   return angleIn(A, x, unit, where);
@@ -321,6 +321,7 @@ function longitudeIn<T>(
 
 /** λ in degrees reduced to [−180°, 180°). */
 export function wrapLongitude<T>(A: Arithmetic<T>, lon: T, where: string): T {
+  checkArithmetic(A, 'wrapLongitude');
   const h = A.from(180);
   if (A.cmp(lon, A.neg(h)) >= 0 && A.cmp(lon, h) < 0) return lon;
   return A.sub(modulo(A, A.add(lon, h), A.from(360), where), h);

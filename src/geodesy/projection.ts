@@ -5,7 +5,7 @@
  * @module geodesy
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { QuadspreadError, show } from '../errors.js';
+import { QuadspreadError, show, checkArithmetic } from '../errors.js';
 import { transverseMercator, transverseMercatorInverse } from './grid.js';
 import { LCC_1SP, LCC_2SP } from './lambert-conic.js';
 import { MERCATOR_1SP, MERCATOR_2SP } from './mercator.js';
@@ -102,6 +102,7 @@ export function prepareProjection<T>(
   A: Arithmetic<T>,
   projection: Projection,
 ): PreparedProjection<T> {
+  checkArithmetic(A, 'prepareProjection');
   const where = 'prepareProjection';
   const m = methodOf(
     (projection as Partial<Projection> | null)?.method,
@@ -144,6 +145,7 @@ export function toGrid<T>(
   point: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },
   projection: Projection | PreparedProjection<T>,
 ): ProjectedPoint<T> {
+  checkArithmetic(A, 'toGrid');
   return forwardWith(A, prepared(A, projection, methodOf, 'toGrid'), point, 'toGrid');
 }
 
@@ -170,5 +172,6 @@ export function fromGrid<T>(
   point: { readonly E: Numeric<T>; readonly N: Numeric<T> },
   projection: Projection | PreparedProjection<T>,
 ): GeographicPoint<T> {
+  checkArithmetic(A, 'fromGrid');
   return inverseWith(A, prepared(A, projection, methodOf, 'fromGrid'), point, 'fromGrid');
 }

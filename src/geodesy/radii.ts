@@ -11,6 +11,7 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { ellipsoidParameters, readEllipsoid, type Ellipsoid } from './ellipsoid.js';
 import { readAngle, readLatitude, root } from './internal.js';
+import { checkArithmetic } from '../errors.js';
 
 function setup<T>(A: Arithmetic<T>, lat: Numeric<T>, ellipsoid: Ellipsoid | string, fn: string) {
   const E = ellipsoidParameters(A, readEllipsoid(ellipsoid, `${fn}(ellipsoid)`));
@@ -41,6 +42,7 @@ export function meridianRadius<T>(
   lat: Numeric<T>,
   ellipsoid: Ellipsoid | string,
 ): T {
+  checkArithmetic(A, 'meridianRadius');
   const { E, W2, W } = setup(A, lat, ellipsoid, 'meridianRadius');
   return A.div(A.mul(E.a, A.sub(A.one, E.e2)), A.mul(W2, W)); // M = a(1 − e²)/W³
 }
@@ -66,6 +68,7 @@ export function primeVerticalRadius<T>(
   lat: Numeric<T>,
   ellipsoid: Ellipsoid | string,
 ): T {
+  checkArithmetic(A, 'primeVerticalRadius');
   const { E, W } = setup(A, lat, ellipsoid, 'primeVerticalRadius');
   return A.div(E.a, W); // N = a/W
 }
@@ -95,6 +98,7 @@ export function radiusInAzimuth<T>(
   azimuth: Numeric<T>,
   ellipsoid: Ellipsoid | string,
 ): T {
+  checkArithmetic(A, 'radiusInAzimuth');
   const { E, W2, W } = setup(A, lat, ellipsoid, 'radiusInAzimuth');
   const { sin, cos } = sinCosDegrees(A, readAngle(A, azimuth, 'radiusInAzimuth(azimuth)'));
   const N = A.div(E.a, W);
@@ -125,6 +129,7 @@ export function gaussianMeanRadius<T>(
   lat: Numeric<T>,
   ellipsoid: Ellipsoid | string,
 ): T {
+  checkArithmetic(A, 'gaussianMeanRadius');
   const { E, W2 } = setup(A, lat, ellipsoid, 'gaussianMeanRadius');
   return A.div(A.mul(E.a, root(A, A.sub(A.one, E.e2))), W2); // √(MN) = a√(1 − e²)/W²
 }

@@ -8,6 +8,7 @@
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { finiteResult, readNumber, readQuadrance, readSpread } from './validate.js';
+import { checkArithmetic } from '../errors.js';
 
 /**
  * Pythagoras' theorem in quadrances: the residual Q1 + Q2 − Q3, zero exactly when the
@@ -32,6 +33,7 @@ export function pythagorasResidual<T>(
   Q2: Numeric<T>,
   Q3: Numeric<T>,
 ): T {
+  checkArithmetic(A, 'pythagorasResidual');
   const w = 'pythagorasResidual(A, Q1, Q2, Q3)';
   const a = readQuadrance(A, Q1, w, 'Q1');
   const b = readQuadrance(A, Q2, w, 'Q2');
@@ -60,6 +62,7 @@ export function pythagorasResidual<T>(
  * ```
  */
 export function quadrea<T>(A: Arithmetic<T>, Q1: Numeric<T>, Q2: Numeric<T>, Q3: Numeric<T>): T {
+  checkArithmetic(A, 'quadrea');
   const w = 'quadrea(A, Q1, Q2, Q3)';
   return finiteResult(
     archimedes(
@@ -103,6 +106,7 @@ export function tripleQuadResidual<T>(
   Q2: Numeric<T>,
   Q3: Numeric<T>,
 ): T {
+  checkArithmetic(A, 'tripleQuadResidual');
   const w = 'tripleQuadResidual(A, Q1, Q2, Q3)';
   // Triple quad formula: three points are collinear exactly when Heron's area is zero (Heron, Metrica I.8; derived).
   return finiteResult(
@@ -141,6 +145,7 @@ export function archimedesResidual<T>(
   Q3: Numeric<T>,
   area: Numeric<T>,
 ): T {
+  checkArithmetic(A, 'archimedesResidual');
   const w = 'archimedesResidual(A, Q1, Q2, Q3, area)';
   const q = archimedes(
     A,
@@ -179,6 +184,7 @@ export function spreadLawResidual<T>(
   Qb: Numeric<T>,
   sb: Numeric<T>,
 ): T {
+  checkArithmetic(A, 'spreadLawResidual');
   const w = 'spreadLawResidual(A, Qa, sa, Qb, sb)';
   const qa = readQuadrance(A, Qa, w, 'Qa');
   const a = readSpread(A, sa, w, 'sa');
@@ -214,6 +220,7 @@ export function crossLawResidual<T>(
   Q3: Numeric<T>,
   s3: Numeric<T>,
 ): T {
+  checkArithmetic(A, 'crossLawResidual');
   const w = 'crossLawResidual(A, Q1, Q2, Q3, s3)';
   const a = readQuadrance(A, Q1, w, 'Q1');
   const b = readQuadrance(A, Q2, w, 'Q2');
@@ -248,6 +255,7 @@ export function tripleSpreadResidual<T>(
   s2: Numeric<T>,
   s3: Numeric<T>,
 ): T {
+  checkArithmetic(A, 'tripleSpreadResidual');
   const w = 'tripleSpreadResidual(A, s1, s2, s3)';
   const a = readSpread(A, s1, w, 's1');
   const b = readSpread(A, s2, w, 's2');

@@ -4,9 +4,9 @@
  * @module geometry
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { show, coincidentPoints, degenerateLine } from '../errors.js';
+import { show, coincidentPoints, degenerateLine, checkArithmetic } from '../errors.js';
 import { asPoint, type Point, type PointLike } from './point.js';
-import { atMostOne, finiteResult, readNumber } from './validate.js';
+import { atMostOne, finiteResult, readNumber, checkPoint, checkLine } from './validate.js';
 
 /**
  * The line ⟨a : b : c⟩: the points with a·x + b·y + c = 0 (x east, y north), a and b
@@ -47,6 +47,7 @@ export interface Line<T> {
  * ```
  */
 export function line<T>(A: Arithmetic<T>, a: Numeric<T>, b: Numeric<T>, c: Numeric<T>): Line<T> {
+  checkArithmetic(A, 'line');
   const w = 'line(A, a, b, c)';
   const l = {
     a: readNumber(A, a, w, ' a'),
@@ -81,8 +82,11 @@ export function line<T>(A: Arithmetic<T>, a: Numeric<T>, b: Numeric<T>, c: Numer
  * ```
  */
 export function lineThrough<T>(A: Arithmetic<T>, P: PointLike<T>, Q: PointLike<T>): Line<T> {
+  checkArithmetic(A, 'lineThrough');
   const Pp = asPoint(P);
   const Qp = asPoint(Q);
+  checkPoint(A, Pp, 'lineThrough(P)');
+  checkPoint(A, Qp, 'lineThrough(Q)');
   // Line through two points: the cross product of their homogeneous coordinates (x, y, 1) (common practice; derived).
   const where = 'lineThrough(A, P, Q)';
   const a = finiteResult(A.sub(Pp.y, Qp.y), where);
@@ -113,7 +117,10 @@ export function lineThrough<T>(A: Arithmetic<T>, P: PointLike<T>, Q: PointLike<T
  * ```
  */
 export function isOnLine<T>(A: Arithmetic<T>, P: PointLike<T>, l: Line<T>): boolean {
+  checkArithmetic(A, 'isOnLine');
   const Pp = asPoint(P);
+  checkPoint(A, Pp, 'isOnLine(P)');
+  checkLine(A, l, 'isOnLine(l)');
   return A.isZero(A.add(A.add(A.mul(l.a, Pp.x), A.mul(l.b, Pp.y)), l.c));
 }
 
@@ -133,6 +140,9 @@ export function isOnLine<T>(A: Arithmetic<T>, P: PointLike<T>, l: Line<T>): bool
  * ```
  */
 export function isParallel<T>(A: Arithmetic<T>, l1: Line<T>, l2: Line<T>): boolean {
+  checkArithmetic(A, 'isParallel');
+  checkLine(A, l1, 'isParallel(l1)');
+  checkLine(A, l2, 'isParallel(l2)');
   // Parallel lines: the normals (a1, b1), (a2, b2) are proportional, a1 b2 − a2 b1 = 0 (common practice; derived).
   return A.isZero(A.sub(A.mul(l1.a, l2.b), A.mul(l2.a, l1.b)));
 }
@@ -153,6 +163,9 @@ export function isParallel<T>(A: Arithmetic<T>, l1: Line<T>, l2: Line<T>): boole
  * ```
  */
 export function isPerpendicular<T>(A: Arithmetic<T>, l1: Line<T>, l2: Line<T>): boolean {
+  checkArithmetic(A, 'isPerpendicular');
+  checkLine(A, l1, 'isPerpendicular(l1)');
+  checkLine(A, l2, 'isPerpendicular(l2)');
   // Perpendicular lines: the normals are perpendicular, a1 a2 + b1 b2 = 0 (common practice; derived).
   return A.isZero(A.add(A.mul(l1.a, l2.a), A.mul(l1.b, l2.b)));
 }
@@ -175,7 +188,10 @@ export function isPerpendicular<T>(A: Arithmetic<T>, l1: Line<T>, l2: Line<T>): 
  * ```
  */
 export function footOfPerpendicular<T>(A: Arithmetic<T>, P: PointLike<T>, l: Line<T>): Point<T> {
+  checkArithmetic(A, 'footOfPerpendicular');
   const Pp = asPoint(P);
+  checkPoint(A, Pp, 'footOfPerpendicular(P)');
+  checkLine(A, l, 'footOfPerpendicular(l)');
   const n = A.add(A.mul(l.a, l.a), A.mul(l.b, l.b));
   if (A.isZero(n))
     throw degenerateLine('footOfPerpendicular(A, P, l)', 'l has a = b = 0, which is no line');
@@ -201,7 +217,10 @@ export function footOfPerpendicular<T>(A: Arithmetic<T>, P: PointLike<T>, l: Lin
  * ```
  */
 export function quadranceToLine<T>(A: Arithmetic<T>, P: PointLike<T>, l: Line<T>): T {
+  checkArithmetic(A, 'quadranceToLine');
   const Pp = asPoint(P);
+  checkPoint(A, Pp, 'quadranceToLine(P)');
+  checkLine(A, l, 'quadranceToLine(l)');
   const n = A.add(A.mul(l.a, l.a), A.mul(l.b, l.b));
   if (A.isZero(n))
     throw degenerateLine('quadranceToLine(A, P, l)', 'l has a = b = 0, which is no line');
@@ -227,6 +246,9 @@ export function quadranceToLine<T>(A: Arithmetic<T>, P: PointLike<T>, l: Line<T>
  * ```
  */
 export function spreadOfLines<T>(A: Arithmetic<T>, l1: Line<T>, l2: Line<T>): T {
+  checkArithmetic(A, 'spreadOfLines');
+  checkLine(A, l1, 'spreadOfLines(l1)');
+  checkLine(A, l2, 'spreadOfLines(l2)');
   const n1 = A.add(A.mul(l1.a, l1.a), A.mul(l1.b, l1.b));
   const n2 = A.add(A.mul(l2.a, l2.a), A.mul(l2.b, l2.b));
   if (A.isZero(n1))

@@ -5,6 +5,7 @@
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber } from './validate.js';
+import { checkArithmetic } from '../errors.js';
 
 /**
  * A point (or a vector) of the plane in arithmetic `T`: `x` east, `y` north.
@@ -67,6 +68,7 @@ export type PointInput<T> =
  * ```
  */
 export function point<T>(A: Arithmetic<T>, x: Numeric<T>, y: Numeric<T>): Point<T> {
+  checkArithmetic(A, 'point');
   return { x: readNumber(A, x, 'point(A, x, y) x'), y: readNumber(A, y, 'point(A, x, y) y') };
 }
 

@@ -3,9 +3,10 @@
  *
  * @module geometry
  */
+import { checkArithmetic } from '../errors.js';
 import type { Arithmetic } from '../arithmetic/types.js';
 import { asPoint, type PointLike } from './point.js';
-import { finiteResult } from './validate.js';
+import { finiteResult, checkPoint } from './validate.js';
 
 /**
  * The quadrance Q(P, Q) = (x₂ − x₁)² + (y₂ − y₁)²: the squared distance between two
@@ -26,8 +27,11 @@ import { finiteResult } from './validate.js';
  * ```
  */
 export function quadrance<T>(A: Arithmetic<T>, P: PointLike<T>, Q: PointLike<T>): T {
+  checkArithmetic(A, 'quadrance');
   const Pp = asPoint(P);
   const Qp = asPoint(Q);
+  checkPoint(A, Pp, 'quadrance(P)');
+  checkPoint(A, Qp, 'quadrance(Q)');
   // The square of the Euclidean distance, by Pythagoras' theorem (Euclid, Elements I.47).
   const dx = A.sub(Qp.x, Pp.x);
   const dy = A.sub(Qp.y, Pp.y);
@@ -50,6 +54,8 @@ export function quadrance<T>(A: Arithmetic<T>, P: PointLike<T>, Q: PointLike<T>)
  * ```
  */
 export function vectorQuadrance<T>(A: Arithmetic<T>, v: PointLike<T>): T {
+  checkArithmetic(A, 'vectorQuadrance');
   const vp = asPoint(v);
+  checkPoint(A, vp, 'vectorQuadrance(v)');
   return finiteResult(A.add(A.mul(vp.x, vp.x), A.mul(vp.y, vp.y)), 'vectorQuadrance(A, v)');
 }

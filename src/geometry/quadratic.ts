@@ -4,7 +4,7 @@
  * @module geometry
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { show, invalidArgument, unsupportedOperation } from '../errors.js';
+import { show, invalidArgument, unsupportedOperation, checkArithmetic } from '../errors.js';
 import { type Root, type Surd, surd } from './surd.js';
 import { readNumber } from './validate.js';
 
@@ -36,6 +36,7 @@ export function solveQuadratic<T, E extends boolean>(
   b: Numeric<T>,
   c: Numeric<T>,
 ): Root<T, E>[] {
+  checkArithmetic(A, 'solveQuadratic');
   const w = 'solveQuadratic(A, a, b, c)';
   const qa = readNumber(A, a, w, ' a');
   const qb = readNumber(A, b, w, ' b');

@@ -4,7 +4,13 @@
  * @module geometry
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { QuadspreadError, show, invalidArgument, unsupportedOperation } from '../errors.js';
+import {
+  QuadspreadError,
+  show,
+  invalidArgument,
+  unsupportedOperation,
+  checkArithmetic,
+} from '../errors.js';
 import { type Root, type Surd, surd } from './surd.js';
 import type { Triangle } from './triangle.js';
 import { atMostOne, finiteResult, readQuadrance, readSpread } from './validate.js';
@@ -123,6 +129,7 @@ export function solveTriangle<T, E extends boolean>(
   A: Arithmetic<T, E>,
   known: TriangleMeasures<Numeric<T>>,
 ): Triangle<Root<T, E>>[] {
+  checkArithmetic(A, 'solveTriangle');
   const w = 'solveTriangle(A, known)';
   if (typeof known !== 'object' || known === null)
     throw invalidArgument(w, `known = ${show(known)} is not an object`);

@@ -4,9 +4,9 @@
  * @module geometry
  */
 import type { Arithmetic } from '../arithmetic/types.js';
-import { show, coincidentPoints } from '../errors.js';
+import { show, coincidentPoints, checkArithmetic } from '../errors.js';
 import { asPoint, type Point, type PointLike } from './point.js';
-import { atMostOne } from './validate.js';
+import { atMostOne, checkPoint } from './validate.js';
 
 /**
  * k²/(Q(u)·Q(v)) for u = (ux, uy), v = (vx, vy), with k = u × v (a spread) or u · v (a
@@ -63,9 +63,13 @@ function zero<T>(A: Arithmetic<T>, where: string, arg: string, P: Point<T> | und
  * ```
  */
 export function spread<T>(A: Arithmetic<T>, V: PointLike<T>, P: PointLike<T>, Q: PointLike<T>): T {
+  checkArithmetic(A, 'spread');
   const Vp = asPoint(V);
   const Pp = asPoint(P);
   const Qp = asPoint(Q);
+  checkPoint(A, Vp, 'spread(V)');
+  checkPoint(A, Pp, 'spread(P)');
+  checkPoint(A, Qp, 'spread(Q)');
   return ratio(
     A,
     A.sub(Pp.x, Vp.x),
@@ -99,9 +103,13 @@ export function spread<T>(A: Arithmetic<T>, V: PointLike<T>, P: PointLike<T>, Q:
  * ```
  */
 export function cross<T>(A: Arithmetic<T>, V: PointLike<T>, P: PointLike<T>, Q: PointLike<T>): T {
+  checkArithmetic(A, 'cross');
   const Vp = asPoint(V);
   const Pp = asPoint(P);
   const Qp = asPoint(Q);
+  checkPoint(A, Vp, 'cross(V)');
+  checkPoint(A, Pp, 'cross(P)');
+  checkPoint(A, Qp, 'cross(Q)');
   return ratio(
     A,
     A.sub(Pp.x, Vp.x),
@@ -132,7 +140,10 @@ export function cross<T>(A: Arithmetic<T>, V: PointLike<T>, P: PointLike<T>, Q: 
  * ```
  */
 export function spreadOfVectors<T>(A: Arithmetic<T>, u: PointLike<T>, v: PointLike<T>): T {
+  checkArithmetic(A, 'spreadOfVectors');
   const up = asPoint(u);
   const vp = asPoint(v);
+  checkPoint(A, up, 'spreadOfVectors(u)');
+  checkPoint(A, vp, 'spreadOfVectors(v)');
   return ratio(A, up.x, up.y, vp.x, vp.y, false, 'spreadOfVectors(A, u, v)', undefined, undefined);
 }

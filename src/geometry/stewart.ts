@@ -5,7 +5,7 @@
  * @module geometry
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { QuadspreadError, show, invalidArgument } from '../errors.js';
+import { QuadspreadError, show, invalidArgument, checkArithmetic } from '../errors.js';
 import { solveQuadratic } from './quadratic.js';
 import { type Root, isSurd, type Surd } from './surd.js';
 import { finiteResult, readNumber, readQuadrance } from './validate.js';
@@ -101,6 +101,7 @@ function stewartQ<T>(A: Arithmetic<T>, QB: T, QC: T, QD: T, QBD: T, QBC: T): T {
  * ```
  */
 export function stewartResidual<T>(A: Arithmetic<T>, data: StewartChainages<Numeric<T>>): T {
+  checkArithmetic(A, 'stewartResidual');
   const w = 'stewartResidual(A, data)';
   checkData(data, w);
   return finiteResult(
@@ -137,6 +138,7 @@ export function stewartQuadranceResidual<T>(
   A: Arithmetic<T>,
   data: StewartQuadrances<Numeric<T>>,
 ): T {
+  checkArithmetic(A, 'stewartQuadranceResidual');
   const w = 'stewartQuadranceResidual(A, data)';
   checkData(data, w);
   return finiteResult(
@@ -242,6 +244,7 @@ export function solveStewart<T, E extends boolean>(
   A: Arithmetic<T, E>,
   data: Partial<StewartChainages<Numeric<T>>>,
 ): Root<T, E>[] {
+  checkArithmetic(A, 'solveStewart');
   const w = 'solveStewart(A, data)';
   checkData(data, w);
   const key = missingKey(data as Record<string, unknown>, CHAINAGE_KEYS, w);
@@ -320,6 +323,7 @@ export function solveStewartQuadrances<T, E extends boolean>(
   A: Arithmetic<T, E>,
   data: Partial<StewartQuadrances<Numeric<T>>>,
 ): Root<T, E>[] {
+  checkArithmetic(A, 'solveStewartQuadrances');
   const w = 'solveStewartQuadrances(A, data)';
   checkData(data, w);
   const key = missingKey(data as Record<string, unknown>, QUADRANCE_KEYS, w);

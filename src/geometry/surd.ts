@@ -13,6 +13,7 @@ import {
   invalidArgument,
   noRealSolution,
   unsupportedOperation,
+  checkArithmetic,
 } from '../errors.js';
 import { readNumber } from './validate.js';
 
@@ -422,6 +423,7 @@ export function surd<T>(
   b: Numeric<T> = 0,
   d: Numeric<T> = 1,
 ): Surd<T> {
+  checkArithmetic(A, 'surd');
   const w = 'surd(A, a, b, d)';
   const ra = readNumber(A, a, w, ' a');
   let rb = readNumber(A, b, w, ' b');
@@ -473,6 +475,7 @@ export function surd<T>(
  * ```
  */
 export function sqrtOf<T, E extends boolean>(A: Arithmetic<T, E>, x: Numeric<T>): Root<T, E> {
+  checkArithmetic(A, 'sqrtOf');
   const v = readNumber(A, x, 'sqrtOf(A, x) x');
   if (A.sign(v) < 0) throw noRealSolution('sqrtOf(A, x)', `x = ${show(A.toString(v))} is negative`);
   if (A.exact) return surd(A, 0, 1, v) as Root<T, E>;
@@ -501,6 +504,7 @@ export function sqrtOf<T, E extends boolean>(A: Arithmetic<T, E>, x: Numeric<T>)
  * ```
  */
 export function asRoot<T, E extends boolean>(A: Arithmetic<T, E>, x: Numeric<T>): Root<T, E> {
+  checkArithmetic(A, 'asRoot');
   const v = readNumber(A, x, 'asRoot(A, x) x');
   return (A.exact ? new SurdValue(A, v, A.zero, A.one) : v) as Root<T, E>;
 }
@@ -520,6 +524,7 @@ export function asRoot<T, E extends boolean>(A: Arithmetic<T, E>, x: Numeric<T>)
  * ```
  */
 export function rootToNumber<T, E extends boolean>(A: Arithmetic<T, E>, r: Root<T, E>): number {
+  checkArithmetic(A, 'rootToNumber');
   return isSurd(r) ? (r as Surd<T>).toNumber() : A.toNumber(r as T);
 }
 
@@ -538,6 +543,7 @@ export function rootToNumber<T, E extends boolean>(A: Arithmetic<T, E>, r: Root<
  * ```
  */
 export function rootToString<T, E extends boolean>(A: Arithmetic<T, E>, r: Root<T, E>): string {
+  checkArithmetic(A, 'rootToString');
   return isSurd(r) ? (r as Surd<T>).toString() : A.toString(r as T);
 }
 
@@ -563,5 +569,6 @@ export function rootToPrecision<T, E extends boolean>(
   r: Root<T, E>,
   digits: number,
 ): string {
+  checkArithmetic(A, 'rootToPrecision');
   return isSurd(r) ? (r as Surd<T>).toPrecision(digits) : A.toPrecision(r as T, digits);
 }

@@ -3,8 +3,9 @@
  *
  * @module geometry
  */
+import { checkPoint } from './validate.js';
 import type { Arithmetic } from '../arithmetic/types.js';
-import { QuadspreadError, show, coincidentPoints } from '../errors.js';
+import { QuadspreadError, show, coincidentPoints, checkArithmetic } from '../errors.js';
 import { asPoint, type Point, type PointLike } from './point.js';
 
 /**
@@ -67,12 +68,16 @@ export function triangle<T>(
 ): Triangle<T> {
   // [x, y] points are read in a separate call, so that this function stays small enough for
   // V8 to inline (docs/performance.md, "Small enough to inline").
+  checkArithmetic(A, 'triangle');
   if (Array.isArray(A1) || Array.isArray(A2) || Array.isArray(A3))
     return triangleOf(A, asPoint(A1), asPoint(A2), asPoint(A3));
   return triangleOf(A, A1 as Point<T>, A2 as Point<T>, A3 as Point<T>);
 }
 
 function triangleOf<T>(A: Arithmetic<T>, A1p: Point<T>, A2p: Point<T>, A3p: Point<T>): Triangle<T> {
+  checkPoint(A, A1p, 'triangle(A1)');
+  checkPoint(A, A2p, 'triangle(A2)');
+  checkPoint(A, A3p, 'triangle(A3)');
   // Performance (docs/performance.md): an arithmetic's fused kernel, where it has one, computes
   // the same measures at once (exactly equal in rational; rounded once in decimal) and returns
   // undefined for degenerate input, which the generic code below reports.

@@ -6,7 +6,14 @@
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from './point.js';
-import { QuadspreadError, show, invalidArgument, negativeQuadrance, notFinite } from '../errors.js';
+import {
+  QuadspreadError,
+  show,
+  invalidArgument,
+  invalidNumber,
+  negativeQuadrance,
+  notFinite,
+} from '../errors.js';
 
 /**
  * Reads a value with `A.from`; an error it raises is raised again naming `where` (the
@@ -114,6 +121,34 @@ export function readSpread<T>(A: Arithmetic<T>, x: Numeric<T>, where: string, ar
  */
 export function atMostOne<T>(A: Arithmetic<T>, s: T): T {
   return A.cmp(s, A.one) > 0 ? A.one : s;
+}
+
+/**
+ * Checks a point made by `point` (or a vector): an object whose `x` and `y` are values of the
+ * arithmetic. Checked once where a geometry primitive starts, so that `{ x: '0x10' }` or
+ * `{ x: null }` is refused rather than coerced by the float-specialised code. @internal
+ */
+export function checkPoint<T>(A: Arithmetic<T>, P: unknown, where: string): void {
+  if (typeof P !== 'object' || P === null || !A.is((P as { x: T }).x) || !A.is((P as { y: T }).y))
+    throw invalidNumber(
+      where,
+      `${show(P)} is not a point of ${A.name}: { x, y } or [x, y] of its values, as point(${A.name}, x, y) makes`,
+    );
+}
+
+/** Checks a line made by `line` or `lineThrough`: `a`, `b`, `c` values of the arithmetic. @internal */
+export function checkLine<T>(A: Arithmetic<T>, l: unknown, where: string): void {
+  if (
+    typeof l !== 'object' ||
+    l === null ||
+    !A.is((l as { a: T }).a) ||
+    !A.is((l as { b: T }).b) ||
+    !A.is((l as { c: T }).c)
+  )
+    throw invalidNumber(
+      where,
+      `${show(l)} is not a line of ${A.name}: make it with line(${A.name}, a, b, c) or lineThrough`,
+    );
 }
 
 /**

@@ -4,7 +4,14 @@
  *
  * @module readings
  */
-import { MAX_INPUT_LENGTH, QuadspreadError, show, invalidAngle, textTooLong } from '../errors.js';
+import {
+  MAX_INPUT_LENGTH,
+  QuadspreadError,
+  show,
+  invalidAngle,
+  textTooLong,
+  checkArithmetic,
+} from '../errors.js';
 import { readNumber } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { guardOf, viaGuard } from './numeric.js';
@@ -151,6 +158,7 @@ export function angleToDegrees<T>(
   reading: Numeric<T>,
   unit: AngleUnit = 'deg',
 ): T {
+  checkArithmetic(A, 'angleToDegrees');
   const G = guardOf(A);
   if (G) return viaGuard(A, G, reading, (g, x) => readAngle(g, x as Numeric<typeof g.zero>, unit));
   return readAngle(A, reading, unit);
@@ -225,6 +233,7 @@ export function readAngle<T>(A: Arithmetic<T>, reading: Numeric<T>, unit: AngleU
  * ```
  */
 export function degreesToUnit<T>(A: Arithmetic<T>, degrees: Numeric<T>, unit: AngleUnit): T {
+  checkArithmetic(A, 'degreesToUnit');
   const u = checkAngleUnit(unit, 'degreesToUnit(unit)');
   const G = guardOf(A);
   if (G) return viaGuard(A, G, degrees, (g, x) => degreesToUnit(g, x as Numeric<typeof g.zero>, u));

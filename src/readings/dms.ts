@@ -3,7 +3,7 @@
  *
  * @module readings
  */
-import { show, invalidArgument } from '../errors.js';
+import { show, invalidArgument, checkArithmetic } from '../errors.js';
 import { readNumber } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 
@@ -30,6 +30,7 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
  * ```
  */
 export function formatDms<T>(A: Arithmetic<T>, degrees: Numeric<T>, secondsDecimals = 1): string {
+  checkArithmetic(A, 'formatDms');
   if (!Number.isInteger(secondsDecimals) || secondsDecimals < 0 || secondsDecimals > 6) {
     throw invalidArgument(
       'formatDms(secondsDecimals)',

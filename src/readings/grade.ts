@@ -3,7 +3,7 @@
  *
  * @module readings
  */
-import { verticalSight } from '../errors.js';
+import { verticalSight, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { sqrtOf, surd, type Root } from '../geometry/surd.js';
 import { checkSpread } from './spread.js';
@@ -32,6 +32,7 @@ export function gradeFromSpread<T, E extends boolean>(
   A: Arithmetic<T, E>,
   s: Numeric<T>,
 ): Root<T, E> {
+  checkArithmetic(A, 'gradeFromSpread');
   const v = checkSpread(A, s, 'gradeFromSpread(s)');
   const c = A.sub(A.one, v);
   if (A.isZero(c))

@@ -3,7 +3,7 @@
  *
  * @module readings
  */
-import { QuadspreadError, show, negativeQuadrance } from '../errors.js';
+import { QuadspreadError, show, negativeQuadrance, checkArithmetic } from '../errors.js';
 import { finiteResult, readNumber, shownInput } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 
@@ -68,6 +68,7 @@ export function checkLengthUnit(unit: unknown, where: string): LengthUnit {
  * ```
  */
 export function lengthToMetres<T>(A: Arithmetic<T>, value: Numeric<T>, unit: LengthUnit): T {
+  checkArithmetic(A, 'lengthToMetres');
   const u = checkLengthUnit(unit, 'lengthToMetres(unit)');
   return finiteResult(
     A.mul(readNumber(A, value, 'lengthToMetres(value)'), A.from(METRES_PER_UNIT[u])),
@@ -91,6 +92,7 @@ export function lengthToMetres<T>(A: Arithmetic<T>, value: Numeric<T>, unit: Len
  * ```
  */
 export function metresToLength<T>(A: Arithmetic<T>, metres: Numeric<T>, unit: LengthUnit): T {
+  checkArithmetic(A, 'metresToLength');
   const u = checkLengthUnit(unit, 'metresToLength(unit)');
   return A.div(readNumber(A, metres, 'metresToLength(metres)'), A.from(METRES_PER_UNIT[u]));
 }
@@ -117,6 +119,7 @@ export function convertLength<T>(
   from: LengthUnit,
   to: LengthUnit,
 ): T {
+  checkArithmetic(A, 'convertLength');
   const f = checkLengthUnit(from, 'convertLength(from)');
   const t = checkLengthUnit(to, 'convertLength(to)');
   return A.div(
@@ -147,6 +150,7 @@ export function convertQuadrance<T>(
   from: LengthUnit,
   to: LengthUnit,
 ): T {
+  checkArithmetic(A, 'convertQuadrance');
   const q = readNumber(A, quadrance, 'convertQuadrance(quadrance)');
   if (A.sign(q) < 0)
     throw negativeQuadrance(

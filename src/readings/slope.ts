@@ -5,7 +5,7 @@
  *
  * @module readings
  */
-import { show, verticalSight, invalidSlope } from '../errors.js';
+import { show, verticalSight, invalidSlope, checkArithmetic } from '../errors.js';
 import { readNumber } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { checkSpread } from './spread.js';
@@ -32,6 +32,7 @@ function shown<T>(A: Arithmetic<T>, x: Numeric<T>, v: T): string {
  * ```
  */
 export function spreadFromRatio<T>(A: Arithmetic<T>, rise: Numeric<T>, run: Numeric<T>): T {
+  checkArithmetic(A, 'spreadFromRatio');
   const r = readNumber(A, rise, 'spreadFromRatio(rise)');
   const d = readNumber(A, run, 'spreadFromRatio(run)');
   if (A.isZero(r) && A.isZero(d)) {
@@ -74,6 +75,7 @@ function outOfSquareRange(x: number, y: number): boolean {
  * ```
  */
 export function spreadFromGrade<T>(A: Arithmetic<T>, percent: Numeric<T>): T {
+  checkArithmetic(A, 'spreadFromGrade');
   return spreadFromRatio(A, readNumber(A, percent, 'spreadFromGrade(percent)'), 100); // p % = p/100 rise per run
 }
 
@@ -92,6 +94,7 @@ export function spreadFromGrade<T>(A: Arithmetic<T>, percent: Numeric<T>): T {
  * ```
  */
 export function spreadFromPerMille<T>(A: Arithmetic<T>, perMille: Numeric<T>): T {
+  checkArithmetic(A, 'spreadFromPerMille');
   return spreadFromRatio(A, readNumber(A, perMille, 'spreadFromPerMille(perMille)'), 1000);
 }
 
@@ -111,6 +114,7 @@ export function spreadFromPerMille<T>(A: Arithmetic<T>, perMille: Numeric<T>): T
  * ```
  */
 export function spreadFromOneIn<T>(A: Arithmetic<T>, n: Numeric<T>): T {
+  checkArithmetic(A, 'spreadFromOneIn');
   const v = readNumber(A, n, 'spreadFromOneIn(n)');
   if (A.isZero(v))
     throw invalidSlope('spreadFromOneIn(n)', `"1 in ${shown(A, n, v)}" is not a slope`);
@@ -133,6 +137,7 @@ export function spreadFromOneIn<T>(A: Arithmetic<T>, n: Numeric<T>): T {
  * ```
  */
 export function gradeSquaredFromSpread<T>(A: Arithmetic<T>, s: Numeric<T>): T {
+  checkArithmetic(A, 'gradeSquaredFromSpread');
   const v = checkSpread(A, s, 'gradeSquaredFromSpread(s)');
   if (A.eq(v, A.one))
     throw verticalSight('gradeSquaredFromSpread(s)', 'a spread of 1 is vertical: it has no grade');

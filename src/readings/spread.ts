@@ -3,7 +3,7 @@
  *
  * @module readings
  */
-import { QuadspreadError } from '../errors.js';
+import { QuadspreadError, checkArithmetic } from '../errors.js';
 import { readNumber, shownInput } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readAngle, type AngleUnit } from './angle.js';
@@ -53,6 +53,7 @@ export function spreadFromDegrees<T>(
   angle: Numeric<T>,
   unit: AngleUnit = 'deg',
 ): T {
+  checkArithmetic(A, 'spreadFromDegrees');
   const G = guardOf(A);
   if (G)
     return viaGuard(A, G, angle, (g, x) => spreadOfAngle(g, x as Numeric<typeof g.zero>, unit));
@@ -100,6 +101,7 @@ export function spreadOfAngle<T>(A: Arithmetic<T>, angle: Numeric<T>, unit: Angl
  * ```
  */
 export function degreesFromSpread<T>(A: Arithmetic<T>, s: Numeric<T>): T {
+  checkArithmetic(A, 'degreesFromSpread');
   const G = guardOf(A);
   if (G) {
     checkSpread(A, s, 'degreesFromSpread(s)');

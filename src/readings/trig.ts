@@ -3,7 +3,7 @@
  *
  * @module readings
  */
-import { show, invalidAngle } from '../errors.js';
+import { show, invalidAngle, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { guardOf } from './numeric.js';
 import { sinCosFloat } from './trig-float.js';
@@ -112,6 +112,7 @@ function firstQuadrant<T>(A: Arithmetic<T>, t: T, ninety: T): { sin: T; cos: T }
  * ```
  */
 export function sinCosDegrees<T>(A: Arithmetic<T>, degrees: Numeric<T>): { sin: T; cos: T } {
+  checkArithmetic(A, 'sinCosDegrees');
   if (A.float64 && typeof degrees === 'number') {
     // The float twin (same operations, same order); undefined where sinCos must decide.
     const fast = sinCosFloat(degrees);

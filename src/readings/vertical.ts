@@ -11,6 +11,7 @@ import {
   invalidAngle,
   invalidSlope,
   textTooLong,
+  checkArithmetic,
 } from '../errors.js';
 import { readNumber, shownInput } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
@@ -60,6 +61,7 @@ export function vertical<T>(
   spread: Numeric<T>,
   sign: -1 | 0 | 1 = 1,
 ): VerticalReading<T> {
+  checkArithmetic(A, 'vertical');
   const s = checkSpread(A, spread, 'vertical(spread)');
   if (A.isZero(s)) return { spread: s, sign: 0 };
   if (sign !== 1 && sign !== -1)
@@ -140,6 +142,7 @@ export function verticalFromAngle<T>(
   angle: Numeric<T>,
   options: { kind?: VerticalKind; unit?: AngleUnit } = {},
 ): VerticalReading<T> {
+  checkArithmetic(A, 'verticalFromAngle');
   if (typeof options !== 'object' || options === null)
     throw invalidArgument(
       'verticalFromAngle(options)',
@@ -152,6 +155,13 @@ export function verticalFromAngle<T>(
       `${show(kind)} is not 'elevation' or 'zenith'`,
     );
   }
+  // A direction letter makes text a bearing or a latitude ('N 45 E', '12°S'), never a vertical
+  // angle: refused rather than read as an elevation.
+  if (typeof angle === 'string' && /^\s*[NSEW]|[NSEW]\s*$/i.test(angle))
+    throw invalidAngle(
+      'verticalFromAngle(angle)',
+      `${show(angle)} has a direction letter (N, S, E, W): it is a bearing or a latitude, not a vertical angle`,
+    );
   const deg = angleToDegrees(A, angle, options.unit ?? 'deg');
   const elev = kind === 'elevation' ? deg : A.sub(A.from(90), deg); // α = 90° − z
   const ninety = A.from(90);
@@ -188,6 +198,7 @@ export function verticalFromRatio<T>(
   rise: Numeric<T>,
   run: Numeric<T>,
 ): VerticalReading<T> {
+  checkArithmetic(A, 'verticalFromRatio');
   const r = readNumber(A, rise, 'verticalFromRatio(rise)');
   const d = readNumber(A, run, 'verticalFromRatio(run)');
   const s = spreadFromRatio(A, r, d);
@@ -217,6 +228,7 @@ const SLOPE_TEXT =
  * ```
  */
 export function verticalFromSlope<T>(A: Arithmetic<T>, text: string): VerticalReading<T> {
+  checkArithmetic(A, 'verticalFromSlope');
   const where = 'verticalFromSlope(text)';
   if (typeof text !== 'string') throw invalidSlope(where, `${show(text)} is not slope text`);
   if (text.length > MAX_INPUT_LENGTH) throw textTooLong(where, text.length);
@@ -260,6 +272,7 @@ export function verticalFromSlope<T>(A: Arithmetic<T>, text: string): VerticalRe
  * ```
  */
 export function elevationFromVertical<T>(A: Arithmetic<T>, reading: VerticalInput<T>): T {
+  checkArithmetic(A, 'elevationFromVertical');
   const r = readVertical(A, reading, 'elevationFromVertical(reading)');
   const d = degreesFromSpread(A, r.spread);
   return r.sign < 0 ? A.neg(d) : d;
@@ -280,6 +293,7 @@ export function elevationFromVertical<T>(A: Arithmetic<T>, reading: VerticalInpu
  * ```
  */
 export function zenithFromVertical<T>(A: Arithmetic<T>, reading: VerticalInput<T>): T {
+  checkArithmetic(A, 'zenithFromVertical');
   return A.sub(A.from(90), elevationFromVertical(A, reading));
 }
 
@@ -299,5 +313,6 @@ export function zenithFromVertical<T>(A: Arithmetic<T>, reading: VerticalInput<T
  * ```
  */
 export function zenithToElevation<T>(A: Arithmetic<T>, degrees: Numeric<T>): T {
+  checkArithmetic(A, 'zenithToElevation');
   return A.sub(A.from(90), readNumber(A, degrees, 'zenithToElevation(degrees)'));
 }

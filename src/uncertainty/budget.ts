@@ -10,6 +10,7 @@ import {
   notFinite,
   invalidCovariance,
   unsupportedOperation,
+  checkArithmetic,
 } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { Uncertain } from '../arithmetic/uncertain.js';
@@ -117,6 +118,7 @@ export function budget<T, E extends boolean>(
   result: Uncertain<T> | Surd<Uncertain<T>> | Numeric<T>,
   options: BudgetOptions<T> = {},
 ): Budget<T, E> {
+  checkArithmetic(U, 'budget');
   const where = 'budget(U, result, options)';
   checkU(U, where);
   const B: Arithmetic<T, E> = U.base;

@@ -8,6 +8,7 @@ import { Uncertain } from '../arithmetic/uncertain.js';
 import type { UncertainArithmetic, UncertainInput } from '../arithmetic/uncertain.js';
 import { readNumber } from '../geometry/validate.js';
 import { checkU, readName, readSigma } from './internal.js';
+import { checkArithmetic } from '../errors.js';
 
 /**
  * An uncertain input: the measured value `value` with standard uncertainty `sigma`
@@ -41,6 +42,7 @@ export function measured<T>(
   sigma: Numeric<T>,
   name: string,
 ): Uncertain<T> {
+  checkArithmetic(U, 'measured');
   const where = 'measured(U, value, sigma, name)';
   const n = readName(name, where);
   const s = readSigma(U, sigma, where);
@@ -71,6 +73,7 @@ export function sensitivities<T>(
   U: UncertainArithmetic<T>,
   y: Uncertain<T>,
 ): { name: string; value: T; sigma: T; sensitivity: T }[] {
+  checkArithmetic(U, 'sensitivities');
   checkU(U, 'sensitivities(U, y)');
   const v = readNumber(U, y, 'sensitivities(U, y) y');
   return [...v.gradient].map(([input, c]) => ({

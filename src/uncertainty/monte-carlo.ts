@@ -4,7 +4,14 @@
  *
  * @module uncertainty
  */
-import { QuadspreadError, show, invalidArgument, invalidNumber, notFinite } from '../errors.js';
+import {
+  QuadspreadError,
+  show,
+  invalidArgument,
+  invalidNumber,
+  notFinite,
+  checkArithmetic,
+} from '../errors.js';
 import { expectObject } from '../geometry/validate.js';
 import { randomStream } from './random.js';
 import { checkU } from './internal.js';
@@ -207,6 +214,7 @@ export function normalInputs<T>(
   U: UncertainArithmetic<T>,
   result: Uncertain<T> | Numeric<T>,
 ): Record<string, InputDistribution> {
+  checkArithmetic(U, 'normalInputs');
   checkU(U, 'normalInputs(U, result)');
   const y = U.from(result as Numeric<Uncertain<T>>);
   const out: Record<string, InputDistribution> = {};

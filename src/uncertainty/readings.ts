@@ -24,6 +24,7 @@ import { lengthToMetres, type LengthUnit } from '../readings/length.js';
 import { readNumber } from '../geometry/validate.js';
 import { measured } from './measured.js';
 import { checkU, readName, readSigma } from './internal.js';
+import { checkArithmetic } from '../errors.js';
 
 /**
  * A value y = g(x) of an uncertain `x`, given y and dy/dx: its gradient is dy/dx times
@@ -52,6 +53,7 @@ export function withDerivative<T>(
   value: Numeric<T>,
   derivative: Numeric<T>,
 ): Uncertain<T> {
+  checkArithmetic(U, 'withDerivative');
   const where = 'withDerivative(U, x, value, derivative)';
   checkU(U, where);
   const B = U.base;
@@ -92,6 +94,7 @@ export function measuredAngle<T>(
   name: string,
   unit: AngleUnit = 'deg',
 ): Uncertain<T> {
+  checkArithmetic(U, 'measuredAngle');
   const where = 'measuredAngle(U, reading, sigmaArcSeconds, name)';
   readName(name, where);
   const s = readSigma(U, sigmaArcSeconds, where);
@@ -122,6 +125,7 @@ export function spreadOfAngle<T>(
   U: UncertainArithmetic<T>,
   degrees: Uncertain<T> | Numeric<T>,
 ): Uncertain<T> {
+  checkArithmetic(U, 'spreadOfAngle');
   checkU(U, 'spreadOfAngle(U, degrees)');
   return spreadFromDegrees(U, U.from(degrees as Numeric<Uncertain<T>>));
 }
@@ -151,6 +155,7 @@ export function measuredSpread<T>(
   name: string,
   unit: AngleUnit = 'deg',
 ): Uncertain<T> {
+  checkArithmetic(U, 'measuredSpread');
   return spreadFromDegrees(U, measuredAngle(U, reading, sigmaArcSeconds, name, unit));
 }
 
@@ -180,6 +185,7 @@ export function verticalOfAngle<T>(
   degrees: Uncertain<T> | Numeric<T>,
   kind: VerticalKind = 'elevation',
 ): VerticalReading<Uncertain<T>> {
+  checkArithmetic(U, 'verticalOfAngle');
   checkU(U, 'verticalOfAngle(U, degrees, kind)');
   return verticalFromAngle(U, U.from(degrees as Numeric<Uncertain<T>>), { kind });
 }
@@ -211,6 +217,7 @@ export function measuredVertical<T>(
   name: string,
   options: { kind?: VerticalKind; unit?: AngleUnit } = {},
 ): VerticalReading<Uncertain<T>> {
+  checkArithmetic(U, 'measuredVertical');
   return verticalFromAngle(
     U,
     measuredAngle(U, reading, sigmaArcSeconds, name, options.unit ?? 'deg'),
@@ -245,6 +252,7 @@ export function measuredDistance<T>(
   name: string,
   unit: LengthUnit = 'm',
 ): Uncertain<T> {
+  checkArithmetic(U, 'measuredDistance');
   const where = 'measuredDistance(U, reading, sigmaMm, name)';
   readName(name, where);
   const s = readSigma(U, sigmaMm, where);
@@ -278,6 +286,7 @@ export function measuredQuadrance<T>(
   name: string,
   unit: LengthUnit = 'm',
 ): Uncertain<T> {
+  checkArithmetic(U, 'measuredQuadrance');
   const d = measuredDistance(U, reading, sigmaMm, name, unit);
   return U.mul(d, d);
 }
@@ -307,6 +316,7 @@ export function measuredGrade<T>(
   sigmaPercent: Numeric<T>,
   name: string,
 ): Uncertain<T> {
+  checkArithmetic(U, 'measuredGrade');
   const B = U.base;
   const p = measured(U, percent, sigmaPercent, name);
   const s = spreadFromGrade(B, p.value);

@@ -218,17 +218,35 @@ describe.each(all3)('%s refuses what has no value', (_n, A) => {
 });
 
 describe('float', () => {
-  it('div and sqrt refuse a result that is not finite (an overflow met earlier in mul)', () => {
-    const inf = float.mul(1e200, 1e200); // unchecked for speed
-    expect(() => float.div(inf, inf)).toThrow(/NOT_FINITE/);
+  it('div and sqrt refuse a result that is not finite, and an operand that is not', () => {
+    expect(() => float.div(Infinity, Infinity)).toThrow(/INVALID_NUMBER/);
     expect(() => float.div(1, float.mul(1e-200, 1e-200))).toThrow(/DIVISION_BY_ZERO/);
     expect(() => float.div(1e300, 1e-300)).toThrow(/NOT_FINITE/);
-    expect(() => float.sqrt(inf)).toThrow(/NOT_FINITE/);
+    expect(() => float.sqrt(Infinity)).toThrow(/INVALID_NUMBER/);
   });
   it('refuses to let an overflow out as Infinity', () => {
-    const big = float.mul(1e200, 1e200);
-    expect(() => float.toNumber(big)).toThrow(/NOT_FINITE/);
-    expect(() => float.toString(big)).toThrow(/NOT_FINITE/);
+    // 1e200 · 1e200 = 1e400 > 1.8e308, the largest double (IEEE 754 binary64).
+    expect(() => float.mul(1e200, 1e200)).toThrow(/NOT_FINITE/);
+    expect(() => float.add(1.7e308, 1.7e308)).toThrow(/NOT_FINITE/);
+    expect(() => float.toNumber(Infinity)).toThrow(/NOT_FINITE/);
+    expect(() => float.toString(-Infinity)).toThrow(/NOT_FINITE/);
+  });
+
+  it("refuses operands that are not finite numbers: add('0.1', '0.2') is no '0.10.2'", () => {
+    for (const [a, b] of [
+      ['0.1', '0.2'],
+      [null, 1],
+      [1, NaN],
+      [Infinity, 1],
+      [{}, 1],
+    ] as [unknown, unknown][]) {
+      for (const op of ['add', 'sub', 'mul', 'div', 'cmp', 'eq', 'atan2'] as const)
+        expect(() => (float[op] as (x: unknown, y: unknown) => unknown)(a, b), `${op}`).toThrow(
+          /INVALID_NUMBER/,
+        );
+    }
+    expect(() => float.sin('abc' as never)).toThrow(/INVALID_NUMBER/);
+    expect(() => float.sqrt('4' as never)).toThrow(/INVALID_NUMBER/);
   });
 });
 

@@ -44,14 +44,16 @@ beforeAll(async () => {
   B = await loadSpecialised(path.join(here, 'fixtures/entry-risky.ts'));
 }, 60_000);
 
+// Finite numbers whose sums and products stay finite: the float object's operations refuse
+// other operands and a non-finite result, which the specialised copy leaves to the checks where
+// values enter and leave the public functions (so the two agree on these inputs only).
 const num = fc.oneof(
-  fc.double({ noNaN: false }),
+  fc.double({ min: -1e100, max: 1e100, noNaN: true }),
   fc.constant(0),
   fc.constant(-0),
   fc.integer({ min: -9, max: 9 }),
 );
-// Loose inputs too: float's operations are JS operators, so a string behaves the same both ways.
-const loose = fc.oneof(num, fc.constantFrom('3', '', '0', '-2.5'));
+const loose = num;
 const frac = fc
   .tuple(fc.integer({ min: -50, max: 50 }), fc.integer({ min: 1, max: 9 }))
   .map(([n, d]) => rational.from(`${n}/${d}`));
