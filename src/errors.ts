@@ -239,13 +239,13 @@ function notAValueAdvice(arith: string, x: unknown): string {
   try {
     const o = typeof x === 'object' && x !== null ? (x as Record<PropertyKey, unknown>) : undefined;
     if (o?.[Symbol.for('quadspread.surd')] === true)
-      return `is a quadratic surd (a result that needed a square root), not a ${arith} value: write it with x.toString() or x.toPrecision(digits), convert it with x.toNumber(), compute with its own methods (x.add(y), x.mul(y), …), or take its rational value with x.toRational() when x.isRational()`;
+      return `is a surd (an exact root), not a ${arith} value: use x.toString(), x.toPrecision(digits), x.toNumber() or its own x.add(y), x.mul(y), …`;
     if (o !== undefined && 'value' in o && Array.isArray(o.derivatives))
-      return `is a value of an uncertain arithmetic, not a ${arith} value: use that arithmetic's U.toString(x) or U.toNumber(x), x.value for the value in its base arithmetic, or budget(U, x) for its uncertainty`;
+      return `is an uncertain value, not a ${arith} value: use U.toString(x), x.value or budget(U, x)`;
   } catch {
     // fall through to the plain advice
   }
-  return `(${kindOfValue(x)}) is not a ${arith} value: read it with ${arith}.from(x) (or point(${arith}, x, y) for a point)`;
+  return `(${kindOfValue(x)}) is not a ${arith} value: read it with ${arith}.from(x), or point(${arith}, x, y)`;
 }
 
 const METHODS = [
