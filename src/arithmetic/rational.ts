@@ -17,6 +17,7 @@ import {
 } from './exact.js';
 import { decimalElementary } from './elementary.js';
 import { rationalKernels } from './fused-rational.js';
+import { decimal, type DecimalArithmetic } from './decimal.js';
 
 /** A value of the {@link rational} arithmetic: a fraction.js `Fraction`. */
 export type Rational = Fraction;
@@ -64,6 +65,17 @@ function fromElementary(text: string): Rational {
 
 // A fraction.js value by shape (bigint numerator and denominator), so that fractions made by a
 // second copy of fraction.js (a program loading both the CommonJS and the ES build) still pass.
+const approximations = new Map<number, DecimalArithmetic>();
+/** decimal(digits), memoised (a pure memo: decimal arithmetics are immutable values). */
+function approximate(digits: number): DecimalArithmetic {
+  let D = approximations.get(digits);
+  if (D === undefined) {
+    D = decimal(digits);
+    approximations.set(digits, D);
+  }
+  return D;
+}
+
 const isFraction = (x: unknown): boolean =>
   typeof (x as Rational | null)?.d === 'bigint' && typeof (x as Rational).n === 'bigint';
 
@@ -188,6 +200,7 @@ export const rational: RationalArithmetic = /* @__PURE__ */ ((): RationalArithme
         throw noRealSolution('rational.log(x)', `x = ${x.toFraction()} is not positive`);
       return x.n === 1n && x.d === 1n ? ZERO : fromElementary(elementary.ln(toElementary(x)));
     },
+    approximate,
     // Fused exact kernels (src/arithmetic/fused-rational.ts): same results, fewer gcds.
     kernels: rationalKernels,
   });

@@ -35,7 +35,8 @@ function formatOfText(head: string): DataFormat | undefined {
  * @param fileName the file's name or path
  * @param head the first characters of the file's text (optional; a few hundred are plenty)
  * @returns `'csv'`, `'geojson'` or `'landxml'`
- * @throws {@link QuadspreadError} `UNKNOWN_FORMAT` when the extension is unknown and no text
+ * @throws {@link QuadspreadError} `INVALID_ARGUMENT` when the name or the text is not text;
+ *   `UNKNOWN_FORMAT` when the extension is unknown and no text
  *   is given (or the text is empty), or when the extension and the text disagree.
  * @example
  * ```ts
@@ -50,7 +51,11 @@ function formatOfText(head: string): DataFormat | undefined {
  */
 export function dataFormatOf(fileName: string, head?: string): DataFormat {
   const where = `dataFormatOf(${show(fileName)})`;
-  const ext = /\.([A-Za-z0-9]+)$/.exec(String(fileName))?.[1]?.toLowerCase();
+  if (typeof fileName !== 'string')
+    throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(fileName)} is not a file name`);
+  if (head !== undefined && typeof head !== 'string')
+    throw new QuadspreadError('INVALID_ARGUMENT', `${where}(head)`, `${show(head)} is not text`);
+  const ext = /\.([A-Za-z0-9]+)$/.exec(fileName)?.[1]?.toLowerCase();
   const byName = ext === undefined ? undefined : BY_EXTENSION[ext];
   const byText = head === undefined ? undefined : formatOfText(head);
   if (byName !== undefined && byText !== undefined && byName !== byText)
