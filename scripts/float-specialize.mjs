@@ -17,7 +17,8 @@
  *    `A.is(x)` → a finite-number test, `checkArithmetic(A, …)` → nothing (A is float there),
  *    `A.cmp(x, y) > 0` → `x > y` and `A.cmp(x, y) < 0` → `x < y`, `if (A.kernels) { … }` → nothing,
  *    `A.abs(x)` → `Math.abs(x)`, `A.zero` → `0`, `A.one` → `1`, `A.digits` → `15`, `A.float64` →
- *    `true`, `A.kernels`, `A.ratio`, `A.withDigits` → `undefined`
+ *    `true`, `A.exact` → `false`, `A.kernels`, `A.ratio`, `A.withDigits`, `A.approximate` →
+ *    `undefined`
  *    (float has none), and `A.div`, `A.sqrt`,
  *    `A.cmp`, `A.sign`, `A.from` → tiny helpers with exactly the float arithmetic's checks
  *    (a zero divisor or a negative root still throws the same QuadspreadError).
@@ -61,6 +62,8 @@ const CONSTANTS = {
   kernels: '(void 0)',
   digits: '(15)',
   float64: '(true)',
+  exact: '(false)',
+  approximate: '(void 0)',
   ratio: '(void 0)',
   withDigits: '(void 0)',
 };
