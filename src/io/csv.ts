@@ -9,7 +9,7 @@ import { parse as parseStream, type CsvError } from 'csv-parse';
 import { parse as parseSync } from 'csv-parse/sync';
 import { Readable } from 'node:stream';
 import { QuadspreadError, type Arithmetic } from '../index.js';
-import { show } from '../errors.js';
+import { checkArithmetic, show } from '../errors.js';
 import { csvCell } from './csv-cell.js';
 import { fixedText } from './numbers.js';
 import type { ExchangePoint, ExchangePointInput } from './point.js';
@@ -242,6 +242,7 @@ export function pointsFromCsv<T>(
   options?: CsvReadOptions,
 ): ExchangePoint<T>[] {
   const where = 'pointsFromCsv';
+  checkArithmetic(A, where);
   const o = readOptions(options, where);
   if (typeof text !== 'string' && !(text instanceof Uint8Array))
     throw new QuadspreadError('INVALID_ARGUMENT', `${where}(text)`, `${show(text)} is not text`);
@@ -297,6 +298,7 @@ export async function* streamPointsFromCsv<T>(
   options?: CsvReadOptions,
 ): AsyncGenerator<ExchangePoint<T>, void, undefined> {
   const where = 'streamPointsFromCsv';
+  checkArithmetic(A, where);
   const o = readOptions(options, where);
   const it = input as { [Symbol.asyncIterator]?: unknown; [Symbol.iterator]?: unknown } | null;
   if (
@@ -406,6 +408,7 @@ export function pointsToCsv<T>(
   options: CsvWriteOptions,
 ): string {
   const where = 'pointsToCsv';
+  checkArithmetic(A, where);
   const o = options as Partial<CsvWriteOptions> | null;
   const mode = o?.mode;
   if (mode !== 'exchange' && mode !== 'spreadsheet')

@@ -4,6 +4,7 @@
  * @module io
  */
 import { QuadspreadError, type Arithmetic } from '../index.js';
+import { checkArithmetic } from '../errors.js';
 import { pointsFromCsv, type CsvReadOptions } from './csv.js';
 import { dataFormatOf } from './format.js';
 import { pointsFromGeoJson, type GeoJsonReadOptions } from './geojson-read.js';
@@ -43,6 +44,7 @@ export function pointsFromFile<T>(
   text: string,
   options: PointFileOptions<T> = {},
 ): ExchangePoint<T>[] {
+  checkArithmetic(A, 'pointsFromFile');
   const format = dataFormatOf(fileName, typeof text === 'string' ? text.slice(0, 512) : text);
   const o = options ?? {};
   if (format === 'csv') return pointsFromCsv(A, text, o.csv);
