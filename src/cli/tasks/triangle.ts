@@ -9,7 +9,6 @@ import {
   QuadspreadError,
   degreesFromSpread,
   solveTriangle,
-  spreadFromDegrees,
   triangle,
   isSurd,
   surd,
@@ -219,11 +218,11 @@ export const triangleTask: TaskKind = {
       compute(env) {
         const A = env.A;
         const given: Record<string, typeof A.zero> = {};
-        for (const k of known) {
-          const x = env.get(k.input);
-          given[k.key] =
-            k.form === 'side' ? A.mul(x, x) : k.form === 'angle' ? spreadFromDegrees(A, x) : x;
-        }
+        // Sides and angles go to the library as they are: solveTriangle reads them into Q and s.
+        for (const k of known)
+          given[
+            k.form === 'side' ? `side${k.key[1]}` : k.form === 'angle' ? `angle${k.key[1]}` : k.key
+          ] = env.get(k.input);
         let solutions = solveTriangle(A, given);
         // A spread does not tell an angle from its supplement, but the job gave the angle:
         // keep the triangles whose angle there is acute, right or obtuse as given, by the sign
