@@ -20,13 +20,17 @@ const common: Options = {
   platform: 'neutral',
   sourcemap: false,
   clean: false,
-  external: ['fraction.js', 'big.js'],
+  // (the io entry's parsers too: dependencies of the package, as fraction.js and big.js are)
+  external: ['fraction.js', 'big.js', 'csv-parse', 'fast-xml-parser'],
 };
 const entries = {
   index: 'src/index.ts',
   rational: 'src/entries/rational.gen.ts',
   decimal: 'src/entries/decimal.gen.ts',
   float: 'src/entries/float.gen.ts',
+  // quadspread/io (src/io, docs/interop.md): file formats, kept out of the other entries so
+  // that bundles of the solvers never carry the parsers.
+  io: 'src/io/index.ts',
 };
 
 // In the ESM of quadspread/float, the decimal arithmetic is not copied in but imported from the
@@ -50,14 +54,14 @@ const decimalFromTree = {
   },
 };
 
-// For the CommonJS bound entries rational and decimal: every import of the generic source
-// (../index.js, ../arithmetic/*.js) becomes a require of the bundled generic entry, so the
+// For the CommonJS bound entries rational and decimal, and for io: every import of the generic
+// source (../index.js, ../arithmetic/*.js) becomes a require of the bundled generic entry, so the
 // package carries the library's code once (the arithmetic each entry fixes is exported there).
 const genericFromIndex: Plugin = {
   name: 'generic-from-index',
   setup(build) {
     build.onResolve({ filter: /^\.\.\/(index|arithmetic\/[\w-]+)\.js$/ }, (args) =>
-      /[\\/]entries[\\/][\w.]+\.gen\.ts$/.test(args.importer)
+      /[\\/](entries[\\/][\w.]+\.gen|io[\\/][\w-]+)\.ts$/.test(args.importer)
         ? { path: './index.cjs', external: true }
         : undefined,
     );
@@ -77,7 +81,7 @@ export default defineConfig([
   // dist/index.cjs for everything but their own wrappers, instead of a 220 KB copy each.
   {
     ...common,
-    entry: { rational: entries.rational, decimal: entries.decimal },
+    entry: { rational: entries.rational, decimal: entries.decimal, io: entries.io },
     format: ['cjs'],
     splitting: false,
     treeshake: true,

@@ -13,10 +13,11 @@ import os from 'node:os';
 import Fraction from 'fraction.js';
 import BigJs from 'big.js';
 import DecimalJsLib from 'decimal.js';
-import { ratio, median, keep } from './harness.mjs';
+import { ratio, median, keep, setClock, clockName } from './harness.mjs';
 import * as triangle from './workloads/triangle.mjs';
 import * as heights from './workloads/heights.mjs';
 import * as traverse from './workloads/traverse.mjs';
+import * as traverse20 from './workloads/traverse-exact.mjs';
 import * as bearings from './workloads/traverse-bearings.mjs';
 import * as budget from './workloads/budget.mjs';
 import * as geodesy from './workloads/geodesy.mjs';
@@ -25,6 +26,8 @@ import * as sideshots from './workloads/side-shots.mjs';
 import * as projection from './workloads/projection.mjs';
 import * as geodesic from './workloads/geodesic.mjs';
 import * as alignment from './workloads/alignment.mjs';
+import * as network from './workloads/network.mjs';
+import * as levelling from './workloads/levelling.mjs';
 
 const args = process.argv.slice(2);
 const quick = args.includes('--quick');
@@ -32,6 +35,9 @@ const jsonAt = args.indexOf('--json');
 const jsonFile = jsonAt >= 0 ? args[jsonAt + 1] : undefined;
 const onlyAt = args.indexOf('--only');
 const only = onlyAt >= 0 ? args[onlyAt + 1] : undefined;
+// CPU time of this process by default (a loaded machine's waiting is not counted); --wall for
+// elapsed time.
+setClock(args.includes('--wall') ? 'wall' : 'cpu');
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 // The built package, loaded by its own name through package.json "exports" (a package may
@@ -69,6 +75,7 @@ const workloads = [
   triangle,
   heights,
   traverse,
+  traverse20,
   bearings,
   budget,
   geodesy,
@@ -77,6 +84,8 @@ const workloads = [
   projection,
   geodesic,
   alignment,
+  network,
+  levelling,
 ].filter((w) => !only || w.name === only);
 const built = [];
 for (const w of workloads) {
@@ -124,12 +133,12 @@ console.log(
   `quadspread bench (${quick ? 'quick' : 'full'}): node ${process.version}, ${os.cpus().length} cpus, ${os.cpus()[0]?.model ?? '?'}`,
 );
 console.log(
-  `each ratio: median of ${settings.reps} interleaved pairs of batches of >= ${settings.targetMs} ms`,
+  `each ratio: median of ${settings.reps} interleaved pairs of batches of >= ${settings.targetMs} ms of ${clockName() === 'cpu' ? 'CPU time (process.cpuUsage)' : 'elapsed time'}; load average ${os.loadavg()[0].toFixed(2)} at the start`,
 );
 console.log(
   `${'workload'.padEnd(10)} ${'pair (ours vs baseline)'.padEnd(26)} ${'ours/item'.padStart(12)} ${'base/item'.padStart(12)}`,
 );
-const headline = { float: [], fraction: [], big: [], decimalJs: [], generic: [] };
+const headline = { float: [], fraction: [], big: [], decimalJs: [], generic: [], extra: [] };
 for (const [w, b] of built) {
   // A workload whose items are large (a 1000-course traverse) may ask for fewer pairs.
   const o = {
@@ -181,6 +190,13 @@ for (const [w, b] of built) {
         true,
       ),
     );
+  for (const line of b.info ?? []) console.log(line);
+  // Other pairs a workload defines (lower is better), e.g. exact work with and without roots.
+  for (const x of b.extra ?? [])
+    headline.extra.push({
+      ...row(w.name, x.pair, 'ours', 'base', ratio(x.ours, x.base, o), false),
+      line: `${w.name}-${x.line}`,
+    });
   if (b.decimal)
     headline.big.push(
       row(
@@ -238,6 +254,9 @@ for (const r of headline.float) console.log(`ratio ${r.workload} ${r.ratio.toFix
 for (const r of headline.generic) console.log(`ratio ${r.workload}-generic ${r.ratio.toFixed(2)}`);
 for (const r of headline.decimalJs)
   console.log(`ratio ${r.workload}-decimal.js-vs-decimal ${r.ratio.toFixed(2)}`);
+for (const r of headline.fraction)
+  console.log(`ratio ${r.workload}-fraction.js-vs-rational ${r.ratio.toFixed(2)}`);
+for (const r of headline.extra) console.log(`ratio ${r.line} ${r.ratio.toFixed(2)}`);
 const worstFloat = headline.float.reduce((a, r) => (a && a.ratio >= r.ratio ? a : r), undefined);
 const worstGeneric = headline.generic.reduce(
   (a, r) => (a && a.ratio >= r.ratio ? a : r),
@@ -260,7 +279,9 @@ const w = (r) => (r ? `${r.ratio.toFixed(2)} (${r.workload})` : 'n/a');
 console.log(
   `worst over workloads: float-vs-hand ${w(worst.float)}, naive-fraction-vs-rational ${w(worst.fraction)}, naive-big-vs-decimal ${w(worst.big)}, decimal.js-vs-decimal ${w(worst.decimalJs)}`,
 );
-console.log(`elapsed ${((Date.now() - t0) / 1000).toFixed(1)} s (checksum ${keep() % 10})`);
+console.log(
+  `elapsed ${((Date.now() - t0) / 1000).toFixed(1)} s, load average ${os.loadavg()[0].toFixed(2)} at the end (checksum ${keep() % 10})`,
+);
 if (jsonFile) {
   writeFileSync(
     jsonFile,
@@ -271,6 +292,7 @@ if (jsonFile) {
         cpus: os.cpus().length,
         cpu: os.cpus()[0]?.model,
         settings,
+        clock: clockName(),
         rows,
         growth,
         headline: { floatVsHand: hf, naiveFractionVsRational: hr, naiveBigVsDecimal: hb },

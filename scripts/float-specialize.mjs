@@ -14,8 +14,11 @@
  *      function f$qsGeneric(A, …) { body }          // the original, unchanged
  *    where body' has, for that `A`: `A.add(x, y)` → `((x) + (y))`, `A.sub` → `-`, `A.mul` →
  *    `*`, `A.neg(x)` → `(-(x))`, `A.isZero(x)` → `((x) === 0)`, `A.eq(x, y)` → `===`,
+ *    `A.is(x)` → a finite-number test, `checkArithmetic(A, …)` → nothing (A is float there),
+ *    `A.cmp(x, y) > 0` → `x > y` and `A.cmp(x, y) < 0` → `x < y`, `if (A.kernels) { … }` → nothing,
  *    `A.abs(x)` → `Math.abs(x)`, `A.zero` → `0`, `A.one` → `1`, `A.digits` → `15`, `A.float64` →
- *    `true`, `A.kernels`, `A.ratio`, `A.withDigits` → `undefined`
+ *    `true`, `A.exact` → `false`, `A.kernels`, `A.ratio`, `A.withDigits`, `A.approximate` →
+ *    `undefined`
  *    (float has none), and `A.div`, `A.sqrt`,
  *    `A.cmp`, `A.sign`, `A.from` → tiny helpers with exactly the float arithmetic's checks
  *    (a zero divisor or a negative root still throws the same QuadspreadError).
@@ -49,6 +52,7 @@ const OPS = {
   cmp: [2, (a, b) => `__qsCmp(${a}, ${b})`],
   sign: [1, (a) => `__qsSign(${a})`],
   from: [1, (a) => `__qsFrom(${a})`],
+  is: [1, (a) => `__qsIs(${a})`],
 };
 // float has no fused kernels: `A.kernels` is `undefined` in the float copy. Parenthesised so
 // that `A.zero.toFixed(1)` stays valid code.
@@ -58,6 +62,8 @@ const CONSTANTS = {
   kernels: '(void 0)',
   digits: '(15)',
   float64: '(true)',
+  exact: '(false)',
+  approximate: '(void 0)',
   ratio: '(void 0)',
   withDigits: '(void 0)',
 };
@@ -72,8 +78,9 @@ export const __qsSqrt = (a) => { const r = Math.sqrt(a); return r - r === 0 ? r 
 export const __qsCmp = (a, b) => (a < b ? -1 : a > b ? 1 : 0);
 export const __qsSign = (a) => (a < 0 ? -1 : a > 0 ? 1 : 0);
 export const __qsFrom = (x) => (typeof x === 'number' && x - x === 0 ? x : __qsFloat.from(x));
+export const __qsIs = (x) => typeof x === 'number' && x - x === 0;
 `;
-const HELPER_IMPORT = `import { __qsFloat, __qsDiv, __qsSqrt, __qsCmp, __qsSign, __qsFrom } from '${HELPERS}';\n`;
+const HELPER_IMPORT = `import { __qsFloat, __qsDiv, __qsSqrt, __qsCmp, __qsSign, __qsFrom, __qsIs } from '${HELPERS}';\n`;
 
 function isFunctionLike(node) {
   // Functions, arrows, methods, constructors, getters and setters: anything with parameters.
@@ -217,6 +224,48 @@ export function specializeSource(code, fileName = 'module.ts') {
         node.parameters.some((q) => ts.isIdentifier(q.name) && q.name.text === a)
       ) {
         return node.getText(sf);
+      }
+      // checkArithmetic(A, …) where A is float (the guard above the body) has nothing to check.
+      if (
+        ts.isCallExpression(node) &&
+        ts.isIdentifier(node.expression) &&
+        node.expression.text === 'checkArithmetic' &&
+        node.arguments.length >= 1 &&
+        ts.isIdentifier(node.arguments[0]) &&
+        node.arguments[0].text === a
+      ) {
+        return '(void 0)';
+      }
+      // `if (A.kernels) { … }` (no else): float has no kernels, the block goes.
+      if (
+        ts.isIfStatement(node) &&
+        !node.elseStatement &&
+        ts.isPropertyAccessExpression(node.expression) &&
+        ts.isIdentifier(node.expression.expression) &&
+        node.expression.expression.text === a &&
+        node.expression.name.text === 'kernels'
+      ) {
+        return ';';
+      }
+      // A.cmp(x, y) > 0 is x > y, and A.cmp(x, y) < 0 is x < y, for every number (NaN too).
+      if (
+        ts.isBinaryExpression(node) &&
+        (node.operatorToken.kind === ts.SyntaxKind.GreaterThanToken ||
+          node.operatorToken.kind === ts.SyntaxKind.LessThanToken) &&
+        ts.isNumericLiteral(node.right) &&
+        node.right.text === '0' &&
+        ts.isCallExpression(node.left) &&
+        !node.left.questionDotToken &&
+        node.left.arguments.length === 2 &&
+        node.left.arguments.every((x) => !ts.isSpreadElement(x)) &&
+        ts.isPropertyAccessExpression(node.left.expression) &&
+        !node.left.expression.questionDotToken &&
+        ts.isIdentifier(node.left.expression.expression) &&
+        node.left.expression.expression.text === a &&
+        node.left.expression.name.text === 'cmp'
+      ) {
+        const [x, y] = node.left.arguments.map(emit);
+        return `(${p(x)} ${node.operatorToken.getText(sf)} ${p(y)})`;
       }
       if (ts.isCallExpression(node) && ts.isPropertyAccessExpression(node.expression)) {
         const callee = node.expression;

@@ -6,6 +6,9 @@
 // would) and checks:
 //   - importing only `quadrance` and `float` from 'quadspread'      < 10 KiB (dependencies included)
 //   - `quadrance` and `point` from 'quadspread/float'                < 8 KiB
+//   - float-only programs (`traverse`, the geodetic/geocentric conversions, `geodesicInverse` from
+//     'quadspread/float') bundle neither fraction.js nor big.js (esbuild's metafile inputs)
+//   - all of 'quadspread/io': its own modules under the io budget in AREA_BUDGETS
 //   - the whole library (`import * as q from 'quadspread'`), quadspread's own code (fraction.js
 //     and big.js external), area by area: each area's share of that bundle (esbuild's metafile)
 //     under the area's budget in AREA_BUDGETS, and the whole under the sum of the budgets of
@@ -41,6 +44,15 @@ const CASES = [
     name: "the whole library ('quadspread') + fraction.js, big.js",
     code: "import * as q from 'quadspread';\nconsole.log(q);",
   },
+  // quadspread/io: its own modules against the io budget (the areas it uses are the other
+  // lines' business; the parsers are dependencies of the package, and Node built-ins stay out).
+  {
+    name: "all of 'quadspread/io', own code",
+    areas: true,
+    only: ['io'],
+    external: ['fraction.js', 'big.js', 'csv-parse', 'csv-parse/sync', 'fast-xml-parser', 'node:*'],
+    code: "import * as io from 'quadspread/io';\nconsole.log(io);",
+  },
   {
     name: "quadrance + point from 'quadspread/rational'",
     code: "import { quadrance, point } from 'quadspread/rational';\nconsole.log(quadrance(point(0, 0), point(3, 4)));",
@@ -52,6 +64,26 @@ const CASES = [
     budget: 8 * KiB,
     prints: '25',
     code: "import { quadrance, point } from 'quadspread/float';\nconsole.log(quadrance(point(0, 0), point(3, 4)));",
+  },
+  // A float-only program must not bundle the exact and decimal libraries: these cases fail when
+  // esbuild's metafile lists any module of fraction.js or big.js among the bundle's inputs.
+  {
+    name: "traverse from 'quadspread/float'",
+    without: ['fraction.js', 'big.js'],
+    prints: '5',
+    code: "import { traverse } from 'quadspread/float';\nconsole.log(traverse({ start: { x: 0, y: 0 }, courses: [{ latitude: 3, departure: 4 }] }).length);",
+  },
+  {
+    name: "geodetic <-> geocentric from 'quadspread/float'",
+    without: ['fraction.js', 'big.js'],
+    prints: '6378137 0',
+    code: "import { geodeticToGeocentric, geocentricToGeodetic } from 'quadspread/float';\nconst p = geodeticToGeocentric({ lat: 0, lon: 0, h: 0 }, 'WGS84');\nconsole.log(p.X, geocentricToGeodetic(p, 'WGS84').lat);",
+  },
+  {
+    name: "geodesicInverse from 'quadspread/float'",
+    without: ['fraction.js', 'big.js'],
+    prints: '111319.49079327357',
+    code: "import { geodesicInverse } from 'quadspread/float';\nconsole.log(geodesicInverse({ lat: 0, lon: 0 }, { lat: 0, lon: 1 }, 'WGS84').distance);",
   },
   {
     name: "quadrance + rational from 'quadspread'",
@@ -121,7 +153,7 @@ try {
       nodePaths: [join(root, 'node_modules')],
       external: c.external ?? [],
       logLevel: 'error',
-      metafile: c.areas === true,
+      metafile: c.areas === true || c.without !== undefined,
     });
     if (c.areas) {
       const out = Object.values(result.metafile.outputs)[0];
@@ -130,6 +162,7 @@ try {
         byArea.set(areaOf(file), (byArea.get(areaOf(file)) ?? 0) + v.bytesInOutput);
       let sum = 0;
       for (const [area, bytes] of [...byArea].sort((a, b) => b[1] - a[1])) {
+        if (c.only !== undefined && !c.only.includes(area)) continue;
         const budget = AREA_BUDGETS[area];
         if (budget === undefined) throw new Error(`size: no budget for the area ${area}`);
         sum += budget;
@@ -137,7 +170,17 @@ try {
         if (!ok) failed = true;
         areaRows.push({ name: `  area ${area}`, bytes, budget, ok });
       }
-      c.budget = sum;
+      if (c.only === undefined) c.budget = sum;
+      // The solvers never import io (nor the parsers): the generic entry's bundle has none of it.
+      if (c.only === undefined && byArea.has('io'))
+        throw new Error(`size: ${c.name} contains modules of src/io`);
+    }
+    let leaked = [];
+    if (c.without) {
+      // Any input file of a forbidden package (node_modules/<name>/…) in the bundle.
+      const inputs = Object.keys(Object.values(result.metafile.outputs)[0].inputs);
+      leaked = c.without.filter((name) => inputs.some((f) => f.includes(`node_modules/${name}/`)));
+      if (leaked.length > 0) failed = true;
     }
     const bytes = result.outputFiles[0].contents;
     if (c.prints !== undefined) {
@@ -153,7 +196,15 @@ try {
     const gz = gzipSync(bytes).length;
     const ok = c.budget === undefined || bytes.length < c.budget;
     if (!ok) failed = true;
-    rows.push({ name: c.name, bytes: bytes.length, gz, budget: c.budget, ok });
+    rows.push({
+      name: c.name,
+      bytes: bytes.length,
+      gz,
+      budget: c.budget,
+      ok,
+      without: c.without,
+      leaked,
+    });
     if (c.areas) rows.push(...areaRows.splice(0));
   }
 } finally {
@@ -170,10 +221,16 @@ for (const r of rows) {
   const budget =
     r.budget === undefined ? '' : `  budget < ${kib(r.budget)}: ${r.ok ? 'ok' : 'OVER'}`;
   const gz = r.gz === undefined ? ' '.repeat(15) : `(${kib(r.gz)} gzip)`;
-  console.log(`  ${r.name.padEnd(width)}  ${kib(r.bytes).padStart(10)} ${gz}${budget}`);
+  const without =
+    r.without === undefined
+      ? ''
+      : r.leaked.length === 0
+        ? `  without ${r.without.join(', ')}: ok`
+        : `  BUNDLES ${r.leaked.join(', ')}`;
+  console.log(`  ${r.name.padEnd(width)}  ${kib(r.bytes).padStart(10)} ${gz}${budget}${without}`);
 }
 if (failed) {
-  console.error('size: over budget');
+  console.error('size: over budget, or a float-only bundle takes fraction.js or big.js');
   process.exit(1);
 }
 console.log('size: within budget');

@@ -85,6 +85,13 @@ export const ERROR_CODES = {
   TOO_FEW_OBSERVATIONS: 'Fewer observations than the computation needs.',
   NO_APPROXIMATION:
     'No approximate coordinates can be found for a point from the observations: give them.',
+  // Data exchange
+  INVALID_FILE:
+    'A data file (CSV, GeoJSON, LandXML) that breaks its format, or a record the reader cannot take; the message names the line, field or element.',
+  MISSING_COLUMN: 'A point file without a column the reader needs; the message names the column.',
+  UNKNOWN_FORMAT: 'A data file whose format is not recognised or not supported.',
+  MISSING_REFERENCE_SYSTEM:
+    'A conversion to longitude and latitude without a stated grid (projection) or, off WGS 84, without a stated datum transformation.',
   // Job runner
   INVALID_JOB: 'A job file that is not valid JSON or breaks the job schema.',
 } as const;

@@ -14,7 +14,14 @@ import {
   zeroVectorAngle,
 } from '../errors.js';
 import type { Arithmetic, Numeric } from './types.js';
-import { isqrt, operandChecks, pow10, ratioToPrecision, readInput } from './exact.js';
+import {
+  MAX_DECIMAL_DIGITS,
+  isqrt,
+  operandChecks,
+  pow10,
+  ratioToPrecision,
+  readInput,
+} from './exact.js';
 import { decimalElementary } from './elementary.js';
 import { decimalKernels } from './fused-decimal.js';
 
@@ -27,17 +34,8 @@ export interface DecimalArithmetic extends Arithmetic<Decimal, false> {
   readonly digits: number;
 }
 
-/**
- * Most significant digits a decimal arithmetic may keep.
- *
- * @example
- * ```ts
- * import { decimal, MAX_DECIMAL_DIGITS } from 'quadspread';
- * decimal(MAX_DECIMAL_DIGITS).digits;
- * //=> 1000
- * ```
- */
-export const MAX_DECIMAL_DIGITS = 1000;
+// Kept in exact.ts (no big.js there), so that code reading it does not bundle big.js.
+export { MAX_DECIMAL_DIGITS };
 
 const HALF_EVEN = 2;
 

@@ -31,6 +31,18 @@ import {
  */
 export const MAX_EXPONENT = 1000;
 
+/**
+ * Most significant digits a decimal arithmetic may keep.
+ *
+ * @example
+ * ```ts
+ * import { decimal, MAX_DECIMAL_DIGITS } from 'quadspread';
+ * decimal(MAX_DECIMAL_DIGITS).digits;
+ * //=> 1000
+ * ```
+ */
+export const MAX_DECIMAL_DIGITS = 1000;
+
 /** An exact ratio n/d of bigints with d > 0 (not necessarily in lowest terms). */
 export interface Ratio {
   readonly n: bigint;
@@ -154,19 +166,24 @@ export function scaledSqrt(n: bigint, d: bigint, digits: number): { n: bigint; d
   // 2^(bits(n) − bits(d) − 1) ≤ n/d, so e ≤ log10 √(n/d).
   const e = Math.floor(((bitLength(n) - bitLength(d) - 1) * LOG10_2) / 2);
   const k = Math.max(0, digits + 1 - e);
-  const s = 10n ** BigInt(k);
+  const s = pow10(k);
   return { n: isqrt((n * s * s) / d), d: s };
 }
 
 /**
- * ⌊√a⌋ for a ≥ 0, by Newton's iteration from an upper bound.
+ * ⌊√a⌋ for a ≥ 0, by Newton's iteration from an upper bound (taken from the double square
+ * root of the leading bits, so that a few steps suffice).
  * @internal
  */
 export function isqrt(a: bigint): bigint {
   if (a < 0n) throw new RangeError('isqrt of a negative number');
   if (a < 2n) return a;
   if (a < 4503599627370496n) return BigInt(Math.floor(Math.sqrt(Number(a))));
-  let x = 1n << BigInt(Math.ceil(bitLength(a) / 2));
+  // a = top·4^s + rest with top < 2^104: √a < √(top + 1)·2^s ≤ (⌊√top⌋ + 2)·2^s, and the
+  // double root of top is within 2^−50 relative, so (its floor + 4)·2^s is above √a.
+  const s = Math.max(0, Math.floor((bitLength(a) - 103) / 2));
+  const top = Number(a >> BigInt(2 * s));
+  let x = (BigInt(Math.floor(Math.sqrt(top))) + 4n) << BigInt(s);
   for (;;) {
     const y = (x + a / x) >> 1n;
     if (y >= x) return x;

@@ -33,6 +33,31 @@ function ok2(op: string, a: unknown, b: unknown, r: number): number {
   throw notAValue('float', op, typeof a === 'number' && a - a === 0 ? b : a);
 }
 
+// + − ×: two numbers whose result is finite were finite themselves (±Infinity or NaN in an
+// operand makes the result ±Infinity or NaN), so the fast path tests the result only; the
+// rest goes to ok2 for the error.
+const add = (a: number, b: number): number => {
+  if (typeof a === 'number' && typeof b === 'number') {
+    const r = a + b;
+    if (r - r === 0) return r;
+  }
+  return ok2('add', a, b, NaN);
+};
+const sub = (a: number, b: number): number => {
+  if (typeof a === 'number' && typeof b === 'number') {
+    const r = a - b;
+    if (r - r === 0) return r;
+  }
+  return ok2('sub', a, b, NaN);
+};
+const mul = (a: number, b: number): number => {
+  if (typeof a === 'number' && typeof b === 'number') {
+    const r = a * b;
+    if (r - r === 0) return r;
+  }
+  return ok2('mul', a, b, NaN);
+};
+
 function finite(v: number, where: string): number {
   if (!Number.isFinite(v)) throw notFinite(where, `the result ${show(v)} is not finite`);
   return v;
@@ -81,10 +106,14 @@ export const float: FloatArithmetic = /* @__PURE__ */ Object.freeze<FloatArithme
   // are finite numbers and its result is finite: `'0.1' + '0.2'` is refused, not '0.10.2'. The
   // float-specialised quadspread/float inlines + − × in its solvers instead (checked where the
   // values enter and leave).
-  add: (a, b) => ok2('add', a, b, typeof a === 'number' && typeof b === 'number' ? a + b : NaN),
-  sub: (a, b) => ok2('sub', a, b, typeof a === 'number' && typeof b === 'number' ? a - b : NaN),
-  mul: (a, b) => ok2('mul', a, b, typeof a === 'number' && typeof b === 'number' ? a * b : NaN),
+  add,
+  sub,
+  mul,
   div(a, b) {
+    if (typeof a === 'number' && typeof b === 'number' && b - b === 0 && b !== 0) {
+      const r = a / b;
+      if (r - r === 0) return r; // then a was finite too
+    }
     ok2('div', a, b, 0);
     if (b === 0) throw divisionByZero('float.div(a, b)', `b is zero (a = ${show(a)})`);
     const r = a / b;
@@ -95,7 +124,8 @@ export const float: FloatArithmetic = /* @__PURE__ */ Object.freeze<FloatArithme
   neg: (a) => -ok1('neg', a),
   abs: (a) => Math.abs(ok1('abs', a)),
   cmp(a, b) {
-    ok2('cmp', a, b, 0);
+    if (!(typeof a === 'number' && typeof b === 'number' && a - a === 0 && b - b === 0))
+      ok2('cmp', a, b, 0);
     return a < b ? -1 : a > b ? 1 : 0;
   },
   eq(a, b) {

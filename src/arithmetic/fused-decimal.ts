@@ -253,6 +253,88 @@ export function decimalKernels(
     };
   }
 
+  /** (n·10^e)/d correctly rounded, for any signs of n and d (d ≠ 0). */
+  const over = (n: bigint, e: number, d: bigint): Big =>
+    d < 0n ? divide(-n, e, -d, 0) : divide(n, e, d, 0);
+
+  /**
+   * heightFromInlineReadings for exactly three stations given as this arithmetic's values, with
+   * plain spreads in (0, 1]: H, the foot's chainage and the offset quadrance computed exactly
+   * (the integer formulas of the rational kernel, src/arithmetic/fused-rational.ts, from
+   * Stewart's relation, M. Stewart, *Some General Theorems*, 1746, Prop. II) and each rounded
+   * once; the residuals are exactly 0 (three equations, three unknowns). Chainages cᵢ = Cᵢ·10^ec
+   * on one scale, readings Rᵢ = rᵢ/qᵢ with qᵢ a power of ten, kᵢ = (1 − Rᵢ)/Rᵢ = pᵢ/rᵢ.
+   * Undefined for any other input and wherever the exact values give an error (the generic code
+   * then reports it).
+   */
+  function inlineHeight(
+    input: unknown,
+  ): { H: Big; footChainage: Big; footOffset: Big; residuals: Big[]; sign: 1 } | undefined {
+    if (input === null || typeof input !== 'object') return undefined;
+    const { chainages, vertical } = input as { chainages?: unknown; vertical?: unknown };
+    if (
+      !Array.isArray(chainages) ||
+      !Array.isArray(vertical) ||
+      chainages.length !== 3 ||
+      vertical.length !== 3
+    )
+      return undefined;
+    const [c1, c2, c3] = chainages as unknown[];
+    const [R1, R2, R3] = vertical as unknown[];
+    if (!(own(c1) && own(c2) && own(c3) && own(R1) && own(R2) && own(R3))) return undefined;
+    const b1 = c1 as Big,
+      b2 = c2 as Big,
+      b3 = c3 as Big;
+    const s1 = R1 as Big,
+      s2 = R2 as Big,
+      s3 = R3 as Big;
+    const x1 = exponent(b1),
+      x2 = exponent(b2),
+      x3 = exponent(b3);
+    const ec = Math.min(x1, x2, x3);
+    const y1 = exponent(s1),
+      y2 = exponent(s2),
+      y3 = exponent(s3);
+    const lo = Math.min(ec, y1, y2, y3);
+    if (Math.max(b1.e, b2.e, b3.e, s1.e, s2.e, s3.e) - lo > MAX_SPAN) return undefined;
+    const C1 = coefficient(b1) * pow10(x1 - ec),
+      C2 = coefficient(b2) * pow10(x2 - ec),
+      C3 = coefficient(b3) * pow10(x3 - ec);
+    if (C1 === C2 || C2 === C3 || C1 === C3) return undefined;
+    // Rᵢ = rᵢ/qᵢ: a spread in (0, 1] (a zero, negative or larger reading goes to the generic code).
+    const m1 = coefficient(s1),
+      m2 = coefficient(s2),
+      m3 = coefficient(s3);
+    if (m1 <= 0n || m2 <= 0n || m3 <= 0n) return undefined;
+    const r1 = y1 >= 0 ? m1 * pow10(y1) : m1,
+      r2 = y2 >= 0 ? m2 * pow10(y2) : m2,
+      r3 = y3 >= 0 ? m3 * pow10(y3) : m3;
+    const p1 = (y1 >= 0 ? 1n : pow10(-y1)) - r1,
+      p2 = (y2 >= 0 ? 1n : pow10(-y2)) - r2,
+      p3 = (y3 >= 0 ? 1n : pow10(-y3)) - r3;
+    if (p1 < 0n || p2 < 0n || p3 < 0n) return undefined;
+    const A12 = C2 - C1,
+      A23 = C3 - C2,
+      A13 = C3 - C1;
+    const K = p1 * r2 * r3 * A23 - p2 * r1 * r3 * A13 + p3 * r1 * r2 * A12;
+    if (K === 0n) return undefined;
+    const P = A12 * A23 * A13;
+    const Hn = P * r1 * r2 * r3;
+    if (Hn === 0n || Hn < 0n !== K < 0n) return undefined; // H ≤ 0
+    const w = A23 * A13 * r3 * (p1 * r2 - p2 * r1);
+    const G = -A12 * K - w;
+    const En = 4n * K * P * p1 * r2 * r3 - G * G;
+    if (En < 0n) return undefined; // e < 0
+    const zero = big(1, 0, [0]);
+    return {
+      H: over(Hn, 2 * ec, K),
+      footChainage: over((C1 + C2) * K + w, ec, 2n * K),
+      footOffset: divide(En, 2 * ec, 4n * K * K, 0),
+      residuals: [zero, big(1, 0, [0]), big(1, 0, [0])],
+      sign: 1,
+    };
+  }
+
   /**
    * triangle(A1, A2, A3) exactly, then rounded once per measure: Q1 = Q(A2, A3) etc.;
    * s1 = c²/(Q2·Q3) with c the cross product (A2 − A1) × (A3 − A1) (sin²θ =
@@ -311,5 +393,5 @@ export function decimalKernels(
       quadrea: make(4n * c2, 4 * e),
     };
   }
-  return Object.freeze({ triangle, traverse });
+  return Object.freeze({ triangle, traverse, inlineHeight });
 }

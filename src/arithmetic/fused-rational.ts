@@ -10,7 +10,7 @@
  */
 import Fraction from 'fraction.js';
 import type { FusedKernels, FusedTraverse, FusedTriangle } from './types.js';
-import { isqrt, readInput, scaledSqrt } from './exact.js';
+import { bitLength, isqrt, readInput, scaledSqrt } from './exact.js';
 import { readFusedTraverse } from './fused-input.js';
 
 const SAFE = 9007199254740991n; // 2^53 − 1: below it a gcd runs in doubles
@@ -37,10 +37,13 @@ function gcdNum(a: number, b: number): number {
 }
 
 /**
- * gcd(a, b) for a, b ≥ 0: Euclid on bigints while the operands are large, then on doubles
- * once both are below 2^53 (Knuth, TAOCP vol. 2, §4.5.2, Algorithm A).
+ * gcd(a, b) for a, b ≥ 0: Lehmer's method while the operands are large (the leading ~50 bits
+ * of both in doubles decide up to ~25 bits of quotients at once, applied to the bigints as one
+ * 2×2 step), then Euclid on doubles once both are below 2^53 (Knuth, TAOCP vol. 2, §4.5.2,
+ * Algorithms L and A). The same value as Euclid's algorithm (test/perf/fused-gcd.test.ts).
+ * @internal
  */
-function gcd(a: bigint, b: bigint): bigint {
+export function gcd(a: bigint, b: bigint): bigint {
   if (a < b) {
     const t = a;
     a = b;
@@ -48,11 +51,63 @@ function gcd(a: bigint, b: bigint): bigint {
   }
   while (a > SAFE) {
     if (b === 0n) return a;
-    const t = a % b;
-    a = b;
-    b = t;
+    // Leading bits: û = ⌊a/2^k⌋ in [2^48, 2^51), v̂ = ⌊b/2^k⌋ ≤ û.
+    const k = leadShift(a);
+    let u = Number(a >> k),
+      v = Number(b >> k);
+    // Cofactors: a' = A·a + B·b, b' = C·a + D·b (|A|, |B|, |C|, |D| < 2^51: exact in doubles).
+    let A = 1,
+      B = 0,
+      C = 0,
+      D = 1;
+    for (;;) {
+      if (v + C === 0 || v + D === 0) break;
+      const q = floorDiv(u + A, v + C);
+      if (q !== floorDiv(u + B, v + D)) break;
+      let t = A - q * C;
+      A = C;
+      C = t;
+      t = B - q * D;
+      B = D;
+      D = t;
+      t = u - q * v;
+      u = v;
+      v = t;
+    }
+    if (B === 0) {
+      // No quotient could be decided from the leading bits: one full division step.
+      const t = a % b;
+      a = b;
+      b = t;
+    } else {
+      const bA = BigInt(A),
+        bB = BigInt(B),
+        bC = BigInt(C),
+        bD = BigInt(D);
+      const t = bA * a + bB * b;
+      b = bC * a + bD * b;
+      a = t;
+    }
   }
   return BigInt(gcdNum(Number(a), Number(b)));
+}
+
+/** ⌊x/y⌋ for integers 0 ≤ x < 2^52, 0 < y < 2^52 held in doubles (corrected after the division). */
+function floorDiv(x: number, y: number): number {
+  let q = Math.floor(x / y);
+  // x/y is rounded: fix q so that q·y ≤ x < (q + 1)·y (every product here is below 2^53).
+  if (q * y > x) q -= 1;
+  else if (x - q * y >= y) q += 1;
+  return q;
+}
+
+/** A shift k ≥ 0 with ⌊a/2^k⌋ in [2^48, 2^51), for a > 2^53. */
+function leadShift(a: bigint): bigint {
+  const f = Number(a);
+  // Number(a) is a rounded to 53 bits (or Infinity past 2^1024): its exponent is within one
+  // of a's bit length.
+  const e = f < Infinity ? Math.floor(Math.log2(f)) : bitLength(a) - 1;
+  return BigInt(Math.max(0, e - 49));
 }
 
 /** n/d (n ≥ 0, d > 0) in lowest terms. */
@@ -272,8 +327,9 @@ function num(x: Fraction, D: bigint): bigint {
 /**
  * traverse for the common case — a start (and optional closing point) and courses all given
  * as { latitude, departure, distance }, compass rule, no interior angles — with every value
- * over one common denominator D (the lcm of the inputs' denominators) and the adjusted values
- * over T·D (T = D·total length): sums of integers, one gcd per reported value. The compass
+ * over one common denominator Dn (the lcm of the inputs' denominators), the lengths over
+ * D = lcm(Dn, the computed roots' power of ten), and the adjusted values over T·Dn
+ * (T = D·total length): sums of integers, one gcd per reported value. The compass
  * (Bowditch) rule, correction = −misclosure·(course length/total length), as in
  * src/cogo/traverse.ts. The closure's root and precision ratio are left to the caller.
  * Undefined for any other input and wherever the generic code reports an error.
@@ -316,8 +372,11 @@ function traverse(input: unknown): FusedTraverse<Fraction> | undefined {
       // √(lat² + dep²) as the generic code computes it (approxSqrt): exact for a square,
       // else one integer root on a decimal scale, whose denominator (a divisor of a power of
       // ten) joins a bigint common denominator of the lengths.
-      d = courseLength(la, de);
-      if (d.d !== 1n) Dl = Dl === 1n ? d.d : lcm(Dl, d.d);
+      const cl = courseLength(la, de);
+      d = cl.length;
+      // A common multiple of the lengths' denominators (not necessarily the least: the
+      // adjusted values are reduced at the end): the powers of ten divide one another.
+      if (cl.scale !== 1n && Dl % cl.scale !== 0n) Dl = Dl === 1n ? cl.scale : lcm(Dl, cl.scale);
       if (!take(la.d) || !take(de.d)) return undefined;
     } else {
       d = asFraction(c.distance);
@@ -328,9 +387,14 @@ function traverse(input: unknown): FusedTraverse<Fraction> | undefined {
     dep[i] = de;
     len[i] = d;
   }
-  const D = Dl === 1n ? BigInt(Dn) : lcm(BigInt(Dn), Dl);
-  const Sx = num(start.x, D),
-    Sy = num(start.y, D);
+  // Latitudes, departures and the two points over Dn; the lengths over D = lcm(Dn, Dl) (Dn
+  // itself when every length is given). The adjusted values are then over T·Dn with T = D·(total
+  // length): lat + kLat·d = L/Dn − (north/Dn)·(W/D)/(T/D) = (L·T − north·W)/(T·Dn), so the
+  // roots' scale (~10^51) enters their denominators once, through T, and not twice.
+  const Db = BigInt(Dn);
+  const D = Dl === 1n ? Db : lcm(Db, Dl);
+  const Sx = num(start.x, Db),
+    Sy = num(start.y, Db);
   const points: { x: Fraction; y: Fraction }[] = new Array(n + 1);
   points[0] = start;
   let X = Sx,
@@ -338,46 +402,63 @@ function traverse(input: unknown): FusedTraverse<Fraction> | undefined {
     T = 0n;
   const L: bigint[] = new Array(n),
     E: bigint[] = new Array(n),
-    W: bigint[] = new Array(n);
+    W: bigint[] = new Array(n),
+    P: bigint[] = new Array(n); // running sums of W
   for (let i = 0; i < n; i++) {
-    const li = num(lat[i]!, D),
-      ei = num(dep[i]!, D),
+    const li = num(lat[i]!, Db),
+      ei = num(dep[i]!, Db),
       wi = num(len[i]!, D);
     L[i] = li;
     E[i] = ei;
     W[i] = wi;
     T += wi;
+    P[i] = T;
     X += ei;
     Y += li;
-    points[i + 1] = { x: normalSigned(X, D), y: normalSigned(Y, D) };
+    points[i + 1] = { x: normalSigned(X, Db), y: normalSigned(Y, Db) };
   }
   if (T === 0n) return undefined;
-  const east = X - num(end.x, D),
-    north = Y - num(end.y, D); // misclosure, over D
-  // Adjusted components over T·D: lat + kLat·d = (L·T − north·W)/(T·D), kLat = −north/T.
-  const TD = T * D;
+  const east = X - num(end.x, Db),
+    north = Y - num(end.y, Db); // misclosure, over Dn
   const adjusted: { x: Fraction; y: Fraction }[] = new Array(n + 1);
   const courses: FusedTraverse<Fraction>['courses'] = new Array(n);
   adjusted[0] = start;
+  // The numerators over T·Dn, then each reduced: aLat = L·T − north·W, and the adjusted points
+  // are the start times T plus the running sums.
+  const aLat: bigint[] = new Array(n),
+    aDep: bigint[] = new Array(n),
+    AX: bigint[] = new Array(n),
+    AY: bigint[] = new Array(n);
   let ax = Sx * T,
     ay = Sy * T;
   for (let i = 0; i < n; i++) {
-    const aLat = L[i]! * T - north * W[i]!,
-      aDep = E[i]! * T - east * W[i]!;
-    ax += aDep;
-    ay += aLat;
-    adjusted[i + 1] = { x: normalSigned(ax, TD), y: normalSigned(ay, TD) };
+    const la = L[i]! * T - north * W[i]!,
+      de = E[i]! * T - east * W[i]!;
+    aLat[i] = la;
+    aDep[i] = de;
+    ax += de;
+    ay += la;
+    AX[i] = ax;
+    AY[i] = ay;
+  }
+  const TD = T * Db;
+  const over =
+    T <= SAFE
+      ? (x: bigint) => normalSigned(x, TD)
+      : sharedReducer(T, Db, [north, east, ...W, ...P]);
+  for (let i = 0; i < n; i++) {
+    adjusted[i + 1] = { x: over(AX[i]!), y: over(AY[i]!) };
     courses[i] = {
       latitude: lat[i]!,
       departure: dep[i]!,
       length: len[i]!,
-      adjustedLatitude: normalSigned(aLat, TD),
-      adjustedDeparture: normalSigned(aDep, TD),
+      adjustedLatitude: over(aLat[i]!),
+      adjustedDeparture: over(aDep[i]!),
     };
   }
   return {
-    east: normalSigned(east, D),
-    north: normalSigned(north, D),
+    east: normalSigned(east, Db),
+    north: normalSigned(north, Db),
     length: normalSigned(T, D),
     points,
     adjusted,
@@ -386,28 +467,78 @@ function traverse(input: unknown): FusedTraverse<Fraction> | undefined {
   };
 }
 
+/**
+ * x/(T·Dn) in lowest terms for the adjusted values x, with T large (the roots' scale) and Dn a
+ * safe integer, taking one gcd on numbers of T's size for all of them instead of one each.
+ * Every such x is congruent modulo T to ±(a product of two of `factors`): aLat ≡ −north·W,
+ * aDep ≡ −east·W, and the adjusted points ≡ −east·P, −north·P (P the running sums of W). So
+ * with G = gcd(∏ of the nonzero factors mod T, T), gcd(x, T) = gcd(x mod T, G) (gcd(x, T)
+ * divides such a product, hence the whole product, and T, hence G; and G divides T; derived),
+ * and G is small unless the factors share T's prime factors. A residue of 0 gives gcd(x, T) =
+ * T. Then gcd(x, T·Dn) = g₁·gcd(x/g₁, Dn) with g₁ = gcd(x, T), the last in doubles.
+ */
+function sharedReducer(T: bigint, Db: bigint, factors: bigint[]): (x: bigint) => Fraction {
+  let p = 1n;
+  for (const f of factors) {
+    const r = (f < 0n ? -f : f) % T;
+    if (r !== 0n) p = (p * r) % T;
+  }
+  const G = gcd(p, T);
+  const Dn = Number(Db);
+  return (x: bigint): Fraction => {
+    if (x === 0n) return reduced(0n, 1n);
+    const neg = x < 0n;
+    const a = neg ? -x : x;
+    const r = a % T;
+    const g1 = r === 0n ? T : G === 1n ? 1n : gcd(r, G);
+    const a1 = g1 === 1n ? a : a / g1;
+    const T1 = g1 === 1n ? T : T / g1;
+    const g2 = Dn === 1 ? 1 : gcdNum(Number(a1 % Db), Dn);
+    const f = g2 === 1 ? reduced(a1, T1 * Db) : reduced(a1 / BigInt(g2), T1 * BigInt(Dn / g2));
+    if (neg) f.s = -1n;
+    return f;
+  };
+}
+
 /** Digits of {@link courseLength}'s root: those of the readings' approxSqrt (APPROX_DIGITS). */
 const ROOT_DIGITS = 50;
 
 /**
  * √(la² + de²) exactly as the generic traverse computes a course length in `rational`: 0, the
- * exact root of a square, or ⌊√q·10^k⌋/10^k (approxSqrt), in lowest terms.
+ * exact root of a square, or ⌊√q·10^k⌋/10^k (approxSqrt), in lowest terms; with `scale`, a
+ * multiple of its denominator (10^k for a root on a decimal scale).
  */
-function courseLength(la: Fraction, de: Fraction): Fraction {
+function courseLength(la: Fraction, de: Fraction): { length: Fraction; scale: bigint } {
   // q = (a² e² + c² b²)/(b² e²) for la = a/b, de = c/e
   const b2 = la.d * la.d,
     e2 = de.d * de.d;
   const qn = la.n * la.n * e2 + de.n * de.n * b2;
-  if (qn === 0n) return reduced(0n, 1n);
+  if (qn === 0n) return { length: reduced(0n, 1n), scale: 1n };
   const qd = b2 * e2;
   const g = gcd(qn, qd);
   const n = qn / g,
     d = qd / g;
   const rn = isqrt(n),
     rd = isqrt(d);
-  if (rn * rn === n && rd * rd === d) return reduced(rn, rd);
+  if (rn * rn === n && rd * rd === d) return { length: reduced(rn, rd), scale: rd };
   const r = scaledSqrt(n, d, ROOT_DIGITS);
-  return normal(r.n, r.d);
+  return { length: overPowerOfTen(r.n, r.d), scale: r.d };
+}
+
+/**
+ * r/d in lowest terms for r > 0 and d = 10^k: gcd(r, 2^k·5^k) = 2^min(k, v₂(r))·5^min(k, v₅(r))
+ * (v_p: the power of p in r), counted instead of a gcd on r's ~50 digits.
+ */
+function overPowerOfTen(r: bigint, d: bigint): Fraction {
+  while ((r & 1n) === 0n && (d & 1n) === 0n) {
+    r >>= 1n;
+    d >>= 1n;
+  }
+  while (r % 5n === 0n && d % 5n === 0n) {
+    r /= 5n;
+    d /= 5n;
+  }
+  return reduced(r, d);
 }
 
 /** The fused kernels of the rational arithmetic. @internal */

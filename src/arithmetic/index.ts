@@ -1,13 +1,13 @@
 export type { Arithmetic, Numeric, ValueOf } from './types.js';
 export { rational, RATIONAL_TRANSCENDENTAL_DIGITS } from './rational.js';
 export type { Rational, RationalArithmetic } from './rational.js';
-export { decimal, MAX_DECIMAL_DIGITS } from './decimal.js';
+export { decimal } from './decimal.js';
 export type { Decimal, DecimalArithmetic } from './decimal.js';
 export { float } from './float.js';
 export { decimalElementary } from './elementary.js';
 export type { DecimalElementary } from './elementary.js';
 export type { FloatArithmetic } from './float.js';
-export { MAX_EXPONENT, readRatio } from './exact.js';
+export { MAX_DECIMAL_DIGITS, MAX_EXPONENT, readRatio } from './exact.js';
 export type { Ratio } from './exact.js';
 export * from './uncertain.js';
 export { sinh, cosh, tanh, atanh, asinh, pow, tan, atan, asin } from './transcendental.js';

@@ -10,6 +10,7 @@ import type { Arithmetic, Numeric } from './types.js';
 import { isqrt, ratioToNumber, ratioToPrecision, readInput, operandChecks } from './exact.js';
 import { decimalElementary } from './elementary.js';
 import { rationalKernels } from './fused-rational.js';
+import { decimal, type DecimalArithmetic } from './decimal.js';
 
 /** A value of the {@link rational} arithmetic: a fraction.js `Fraction`. */
 export type Rational = Fraction;
@@ -57,6 +58,17 @@ function fromElementary(text: string): Rational {
 
 // A fraction.js value by shape (bigint numerator and denominator), so that fractions made by a
 // second copy of fraction.js (a program loading both the CommonJS and the ES build) still pass.
+const approximations = new Map<number, DecimalArithmetic>();
+/** decimal(digits), memoised (a pure memo: decimal arithmetics are immutable values). */
+function approximate(digits: number): DecimalArithmetic {
+  let D = approximations.get(digits);
+  if (D === undefined) {
+    D = decimal(digits);
+    approximations.set(digits, D);
+  }
+  return D;
+}
+
 const isFraction = (x: unknown): boolean =>
   typeof (x as Rational | null)?.d === 'bigint' && typeof (x as Rational).n === 'bigint';
 
@@ -150,6 +162,7 @@ export const rational: RationalArithmetic = /* @__PURE__ */ Object.freeze<Ration
       throw noRealSolution('rational.log(x)', `x = ${x.toFraction()} is not positive`);
     return x.n === 1n && x.d === 1n ? ZERO : fromElementary(elementary.ln(toElementary(x)));
   },
+  approximate,
   // Fused exact kernels (src/arithmetic/fused-rational.ts): same results, fewer gcds.
   kernels: rationalKernels,
 });

@@ -58,6 +58,14 @@ export interface Arithmetic<T, E extends boolean = boolean> {
    * @internal
    */
   ratio?(x: T): { readonly n: bigint; readonly d: bigint };
+  /**
+   * For an exact arithmetic: a decimal arithmetic of `digits` significant digits, in which
+   * generic code evaluates an approximation whose result is inexact anyway (an iteration, a
+   * series), so that fractions do not grow. Reached through the arithmetic, so that code that
+   * never meets an exact arithmetic (a float-only program) does not bundle the decimal one.
+   * @internal
+   */
+  approximate?(digits: number): Arithmetic<unknown, false>;
   /** 0 in this arithmetic. */
   readonly zero: T;
   /** 1 in this arithmetic. */

@@ -8,6 +8,7 @@ import { closeSync, openSync, readSync } from 'node:fs';
 import { Argument, Command, CommanderError, InvalidArgumentError, Option } from 'commander';
 import { sameFile, writeFilesAtomic } from './atomic.js';
 import { BATCH_KINDS, runBatch } from './batch.js';
+import type { BatchOptions } from './batch.js';
 import { DEMO_JOB } from './demo-job.js';
 import { EXIT, JobInvalid, JobUnsolvable } from './failure.js';
 import { parseJob, runJob } from './job.js';
@@ -32,6 +33,8 @@ export interface Io {
   stderrIsTTY: boolean;
   /** The standard input as text, for `run -` (default: the process's standard input). */
   stdin?: () => Promise<string>;
+  /** The script that runs batch workers (the command's own file); without it a batch runs on one thread. */
+  workerScript?: URL;
 }
 
 /**
@@ -66,6 +69,19 @@ function digitsOption(value: string): number {
   const n = Number(value);
   if (!/^\d+$/.test(value) || n < 1 || n > 100)
     throw new InvalidArgumentError(`${JSON.stringify(value)} is not a whole number from 1 to 100`);
+  return n;
+}
+
+function secondsOption(value: string): number {
+  if (!/^[0-6]$/.test(value))
+    throw new InvalidArgumentError(`${JSON.stringify(value)} is not a whole number from 0 to 6`);
+  return Number(value);
+}
+
+function workersOption(value: string): number {
+  const n = Number(value);
+  if (!/^\d+$/.test(value) || n < 1 || n > 256)
+    throw new InvalidArgumentError(`${JSON.stringify(value)} is not a whole number from 1 to 256`);
   return n;
 }
 
@@ -278,15 +294,37 @@ export function program(io: Io, outcome: { exitCode: number } = { exitCode: EXIT
       '-o, --out <file>',
       'write the results to this file (atomically) instead of the standard output',
     )
-    .action(
-      async (
-        kind: string,
-        file: string,
-        o: { arithmetic: ArithmeticName; digits: number; out?: string },
-      ) => {
-        await runBatch(kind, file, o, io);
-      },
-    );
+    .option(
+      '--exact',
+      'also write exact columns (fractions, named <result>_exact), with --arithmetic rational',
+    )
+    .addOption(
+      new Option('--angles <form>', 'angles written as decimal degrees or DMS text')
+        .choices(['degrees', 'dms'])
+        .default('degrees'),
+    )
+    .addOption(
+      new Option('--seconds <n>', 'decimals of the seconds in DMS angles (0 to 6)')
+        .argParser(secondsOption)
+        .default(1),
+    )
+    .addOption(
+      new Option(
+        '--bad-rows <what>',
+        'at a row that cannot be computed: stop (exit 2 or 3), or note why in an error column and go on',
+      )
+        .choices(['stop', 'note'])
+        .default('stop'),
+    )
+    .addOption(
+      new Option(
+        '--workers <n>',
+        'worker threads for inputs over 1 MiB (default: one per core; 1: none)',
+      ).argParser(workersOption),
+    )
+    .action(async (kind: string, file: string, o: BatchOptions) => {
+      await runBatch(kind, file, o, io);
+    });
 
   p.command('schema')
     .description('print the JSON Schema of job files or of JSON reports')

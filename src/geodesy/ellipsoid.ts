@@ -6,8 +6,7 @@
  */
 import { QuadspreadError, show, invalidEllipsoid, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { rational } from '../arithmetic/rational.js';
-import { readNumber } from '../geometry/validate.js';
+import { gcd, readInput } from '../arithmetic/exact.js';
 
 /**
  * An oblate ellipsoid of revolution, defined exactly: the semi-major axis `a` in metres
@@ -106,32 +105,64 @@ export function defineEllipsoid(def: EllipsoidDefinition): Ellipsoid {
       `give exactly one of f, invF, b (got ${given.length === 0 ? 'none' : given.join(', ')})`,
     );
   }
-  const R = rational;
-  const a = readNumber(R, def.a as Numeric<never>, `${where}.a`);
-  if (R.sign(a) <= 0) throw invalidEllipsoid(where, `a = ${show(def.a)} is not positive`);
-  let f;
-  if (def.f !== undefined) f = readNumber(R, def.f, `${where}.f`);
+  // Read and checked with bare bigint ratios (not the rational arithmetic), so that a float-only
+  // program that converts coordinates does not bundle fraction.js.
+  const a = exactOf(def.a, `${where}.a`);
+  if (a.n <= 0n) throw invalidEllipsoid(where, `a = ${show(def.a)} is not positive`);
+  let f: Exact;
+  if (def.f !== undefined) f = exactOf(def.f, `${where}.f`);
   else if (def.invF !== undefined) {
-    const inv = readNumber(R, def.invF, `${where}.invF`);
-    if (R.cmp(inv, R.one) <= 0)
-      throw invalidEllipsoid(where, `invF = ${show(def.invF)} is not above 1`);
-    f = R.div(R.one, inv);
+    const inv = exactOf(def.invF, `${where}.invF`);
+    if (inv.n <= inv.d) throw invalidEllipsoid(where, `invF = ${show(def.invF)} is not above 1`);
+    f = { n: inv.d, d: inv.n }; // 1/invF, invF > 1 > 0
   } else {
-    const b = readNumber(R, def.b as Numeric<never>, `${where}.b`);
-    if (R.sign(b) <= 0 || R.cmp(b, a) > 0)
+    const b = exactOf(def.b as Numeric<never>, `${where}.b`);
+    if (b.n <= 0n || b.n * a.d > a.n * b.d)
       throw invalidEllipsoid(where, `b = ${show(def.b)} is not in (0, a]`);
-    f = R.div(R.sub(a, b), a); // f = (a − b)/a, the definition of flattening
+    // f = (a − b)/a, the definition of flattening
+    f = { n: a.n * b.d - b.n * a.d, d: a.n * b.d };
   }
-  if (R.sign(f) < 0 || R.cmp(f, R.one) >= 0)
-    throw invalidEllipsoid(where, `f = ${R.toString(f)} is not in [0, 1)`);
+  if (f.n < 0n || f.n >= f.d)
+    throw invalidEllipsoid(where, `f = ${fractionText(f)} is not in [0, 1)`);
   const e: Ellipsoid = Object.freeze({
     name: def.name ?? 'user-defined',
-    a: R.toString(a),
-    f: R.toString(f),
+    a: fractionText(a),
+    f: fractionText(f),
     source: def.source ?? 'user-defined',
   });
   CHECKED.add(e);
   return e;
+}
+
+/** An exact value n/d with d > 0 (not necessarily in lowest terms). */
+interface Exact {
+  readonly n: bigint;
+  readonly d: bigint;
+}
+
+/**
+ * An ellipsoid constant read exactly, as `rational.from` reads it: a number (through its
+ * shortest decimal), numeric text, a bigint, or a fraction.js value.
+ */
+function exactOf(x: unknown, where: string): Exact {
+  const v = x as { s?: unknown; n?: unknown; d?: unknown } | null;
+  if (
+    v !== null &&
+    typeof v === 'object' &&
+    typeof v.s === 'bigint' &&
+    typeof v.n === 'bigint' &&
+    typeof v.d === 'bigint'
+  )
+    return { n: v.s * v.n, d: v.d };
+  return readInput(x, where);
+}
+
+/** n/d in lowest terms as fraction.js writes it (`-3/2`, `5`): the text of an ellipsoid constant. */
+function fractionText(x: Exact): string {
+  const g = gcd(x.n, x.d);
+  const n = x.n / g,
+    d = x.d / g;
+  return d === 1n ? `${n}` : `${n}/${d}`;
 }
 
 /**

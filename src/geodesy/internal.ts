@@ -5,10 +5,9 @@
  * @module geodesy
  * @internal
  */
-import { QuadspreadError, show, invalidAngle } from '../errors.js';
+import { QuadspreadError, show, invalidAngle, unsupportedOperation } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber, shownInput } from '../geometry/validate.js';
-import { decimal, type DecimalArithmetic } from '../arithmetic/decimal.js';
 import { Uncertain, uncertain } from '../arithmetic/uncertain.js';
 import { angleToDegrees, type AngleUnit } from '../readings/angle.js';
 import { approxSqrt } from '../readings/numeric.js';
@@ -136,18 +135,20 @@ export function toDegrees<T>(A: Arithmetic<T>, rad: T): T {
   return A.div(A.mul(rad, A.from(180)), A.pi); // π rad = 180° (definition of the radian)
 }
 
-const decimalMemo = new Map<number, DecimalArithmetic>();
 /**
- * @internal A decimal arithmetic with `digits` significant digits (a pure memo: decimal
- * arithmetics are immutable). Exact arithmetics run iterations and series whose results
- * are approximations anyway in it, so that fractions do not grow.
+ * @internal The decimal arithmetic with `digits` significant digits in which an exact
+ * arithmetic (or an uncertain one over an exact base) runs iterations and series whose results
+ * are approximations anyway, so that fractions do not grow: the arithmetic's own
+ * `approximate` (rational: decimal(digits)), so that float-only code does not bundle decimal.
+ * @throws {QuadspreadError} `UNSUPPORTED_OPERATION` for an exact arithmetic without one.
  */
-export function decimalFor(digits: number): DecimalArithmetic {
-  let D = decimalMemo.get(digits);
-  if (D === undefined) {
-    D = decimal(digits);
-    decimalMemo.set(digits, D);
-  }
+function approximationOf(A: Arithmetic<unknown>, digits: number): Arithmetic<unknown> {
+  const D = A.approximate?.(digits);
+  if (D === undefined)
+    throw unsupportedOperation(
+      `${A.name}.approximate(digits)`,
+      'this exact arithmetic gives no decimal arithmetic to approximate in',
+    );
   return D;
 }
 
@@ -181,8 +182,8 @@ export function delegateFor<T>(
   A: Arithmetic<T>,
   digits: number,
 ): { D: Arithmetic<unknown>; to: (x: T) => unknown; back: (y: unknown) => T } {
-  const Dd = decimalFor(digits) as unknown as Arithmetic<unknown>;
   const base = (A as { base?: Arithmetic<unknown> }).base;
+  const Dd = approximationOf(base ?? (A as Arithmetic<unknown>), digits);
   if (base === undefined) {
     return {
       D: Dd,

@@ -3,7 +3,7 @@
  *
  * @module geometry
  */
-import { checkPoint } from './validate.js';
+import { checkPoints3 } from './validate.js';
 import type { Arithmetic } from '../arithmetic/types.js';
 import { QuadspreadError, show, coincidentPoints, checkArithmetic } from '../errors.js';
 import { asPoint, type Point, type PointLike } from './point.js';
@@ -69,20 +69,36 @@ export function triangle<T>(
   // [x, y] points are read in a separate call, so that this function stays small enough for
   // V8 to inline (docs/performance.md, "Small enough to inline").
   checkArithmetic(A, 'triangle');
+  if (A1 == null || A2 == null || A3 == null) checkPoints3(A, A1, A2, A3, 'triangle');
   if (Array.isArray(A1) || Array.isArray(A2) || Array.isArray(A3))
     return triangleOf(A, asPoint(A1), asPoint(A2), asPoint(A3));
   return triangleOf(A, A1 as Point<T>, A2 as Point<T>, A3 as Point<T>);
 }
 
 function triangleOf<T>(A: Arithmetic<T>, A1p: Point<T>, A2p: Point<T>, A3p: Point<T>): Triangle<T> {
-  checkPoint(A, A1p, 'triangle(A1)');
-  checkPoint(A, A2p, 'triangle(A2)');
-  checkPoint(A, A3p, 'triangle(A3)');
   // Performance (docs/performance.md): an arithmetic's fused kernel, where it has one, computes
   // the same measures at once (exactly equal in rational; rounded once in decimal) and returns
-  // undefined for degenerate input, which the generic code below reports.
-  const fused = A.kernels?.triangle?.(A1p.x, A1p.y, A2p.x, A2p.y, A3p.x, A3p.y);
-  if (fused !== undefined) return fused;
+  // undefined for degenerate input, which the generic code below reports. (float has none: its
+  // copy of this function drops the block, and stays small enough for V8 to inline.)
+  if (A.kernels) {
+    checkPoints3(A, A1p, A2p, A3p, 'triangle');
+    const fused = A.kernels.triangle?.(A1p.x, A1p.y, A2p.x, A2p.y, A3p.x, A3p.y);
+    if (fused !== undefined) return fused;
+  }
+  // The points are values of A. In float, the typeof test is enough here: a NaN or ±Infinity
+  // coordinate makes a spread NaN, which the division refuses; and it is small enough to keep
+  // this function within V8's inlining limit.
+  if (A.float64) {
+    if (!(
+      typeof A1p.x === 'number' &&
+      typeof A1p.y === 'number' &&
+      typeof A2p.x === 'number' &&
+      typeof A2p.y === 'number' &&
+      typeof A3p.x === 'number' &&
+      typeof A3p.y === 'number'
+    ))
+      checkPoints3(A, A1p, A2p, A3p, 'triangle');
+  } else checkPoints3(A, A1p, A2p, A3p, 'triangle');
   const ux = A.sub(A2p.x, A1p.x); // A1 → A2
   const uy = A.sub(A2p.y, A1p.y);
   const vx = A.sub(A3p.x, A1p.x); // A1 → A3

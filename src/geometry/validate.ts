@@ -129,11 +129,33 @@ export function atMostOne<T>(A: Arithmetic<T>, s: T): T {
  * `{ x: null }` is refused rather than coerced by the float-specialised code. @internal
  */
 export function checkPoint<T>(A: Arithmetic<T>, P: unknown, where: string): void {
+  // The error is built elsewhere, so that this check stays small enough for V8 to inline into
+  // the solvers' float copies (docs/performance.md).
   if (typeof P !== 'object' || P === null || !A.is((P as { x: T }).x) || !A.is((P as { y: T }).y))
-    throw invalidNumber(
-      where,
-      `${show(P)} is not a point of ${A.name}: { x, y } or [x, y] of its values, as point(${A.name}, x, y) makes`,
-    );
+    notAPoint(A, P, where);
+}
+
+/**
+ * {@link checkPoint} for the three points of a triangle (`where` + `(A1)`, `(A2)`, `(A3)` in
+ * the error). @internal
+ */
+export function checkPoints3<T>(
+  A: Arithmetic<T>,
+  P1: unknown,
+  P2: unknown,
+  P3: unknown,
+  where: string,
+): void {
+  checkPoint(A, P1, `${where}(A1)`);
+  checkPoint(A, P2, `${where}(A2)`);
+  checkPoint(A, P3, `${where}(A3)`);
+}
+
+function notAPoint<T>(A: Arithmetic<T>, P: unknown, where: string): never {
+  throw invalidNumber(
+    where,
+    `${show(P)} is not a point of ${A.name}: { x, y } or [x, y] of its values, as point(${A.name}, x, y) makes`,
+  );
 }
 
 /** Checks a line made by `line` or `lineThrough`: `a`, `b`, `c` values of the arithmetic. @internal */

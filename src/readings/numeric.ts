@@ -6,8 +6,7 @@
  * @internal
  */
 import type { Arithmetic } from '../arithmetic/types.js';
-import { MAX_DECIMAL_DIGITS } from '../arithmetic/decimal.js';
-import { scaledSqrt } from '../arithmetic/exact.js';
+import { MAX_DECIMAL_DIGITS, scaledSqrt } from '../arithmetic/exact.js';
 
 /** Significant digits kept by {@link approxSqrt} in an exact arithmetic. @internal */
 export const APPROX_DIGITS = 50;

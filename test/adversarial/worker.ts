@@ -8,6 +8,7 @@ import * as generic from '../../src/index.js';
 import * as rationalEntry from '../../src/entries/rational.gen.js';
 import * as decimalEntry from '../../src/entries/decimal.gen.js';
 import * as floatGen from '../../src/entries/float.gen.js';
+import * as ioEntry from '../../src/io/index.js';
 import { HOLE, junk, makeJunk } from './junk.js';
 
 export interface WorkerInput {
@@ -200,6 +201,7 @@ async function main(): Promise<void> {
     'quadspread/rational': rationalEntry as Record<string, unknown>,
     'quadspread/decimal': decimalEntry as Record<string, unknown>,
     'quadspread/float': floatEntry,
+    'quadspread/io': ioEntry as Record<string, unknown>,
   };
   const sites: Site[] = [];
   const seen = new Set<string>();

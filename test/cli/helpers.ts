@@ -53,6 +53,7 @@ export function cli(args: string[], options: { cwd?: string; input?: string } = 
     encoding: 'utf8',
     input: options.input ?? '',
     timeout: 60000,
+    maxBuffer: 64 * 1024 * 1024,
   });
   return { code: r.status, stdout: r.stdout, stderr: r.stderr };
 }

@@ -224,11 +224,13 @@ describe('job text in reports is shown as text, never as markup, terminal comman
     const r = cli(['batch', 'inverses', write(d, 'in.csv', input)]);
     expect(r.code).toBe(0);
     const lines = r.stdout.split('\n');
-    expect(lines[1]).toBe(`"'=HYPERLINK(""http://x"",""y"")",0,0,3,4,25.00000000,5.000000000`);
-    expect(lines[2]).toBe(`"'@SUM(A1:A9)",-3,-4,0,0,25.00000000,5.000000000`);
+    expect(lines[1]).toBe(
+      `"'=HYPERLINK(""http://x"",""y"")",0,0,3,4,25.00000000,5.000000000,36.86989765`,
+    );
+    expect(lines[2]).toBe(`"'@SUM(A1:A9)",-3,-4,0,0,25.00000000,5.000000000,36.86989765`);
     expect(lines[3]).toMatch(/^"'\+cmd",/);
     expect(lines[4]).toMatch(/^"'\tTab",/);
-    expect(lines[5]).toBe('-12.5,0,0,3,4,25.00000000,5.000000000');
+    expect(lines[5]).toBe('-12.5,0,0,3,4,25.00000000,5.000000000,36.86989765');
   });
 });
 

@@ -1,5 +1,5 @@
-// Every public export of the generic entry (src/index.ts) is documented: a summary for
-// every export; and for every value (function, constant, class) an `@example`; and for
+// Every public export of the generic entry (src/index.ts) and of quadspread/io
+// (src/io/index.ts) is documented: a summary for every export; and for every value (function, constant, class) an `@example`; and for
 // every function a `@param` for each parameter and a `@returns`. Exports tagged @internal
 // are left out, as they are from the API reference. The bound entries are generated
 // (scripts/gen-bound.mjs) with a summary that links to the generic function.
@@ -14,10 +14,10 @@ interface Problem {
   missing: string[];
 }
 
-function audit(): { checked: number; problems: Problem[] } {
+function audit(entry: string): { checked: number; problems: Problem[] } {
   const config = ts.readConfigFile(join(repoRoot, 'tsconfig.json'), ts.sys.readFile);
   const parsed = ts.parseJsonConfigFileContent(config.config, ts.sys, repoRoot);
-  const index = join(repoRoot, 'src/index.ts');
+  const index = join(repoRoot, entry);
   const program = ts.createProgram([index], { ...parsed.options, noEmit: true });
   const checker = program.getTypeChecker();
   const moduleSymbol = checker.getSymbolAtLocation(program.getSourceFile(index)!)!;
@@ -56,14 +56,15 @@ function audit(): { checked: number; problems: Problem[] } {
 }
 
 describe('the API reference', () => {
-  const { checked, problems } = audit();
+  const { checked, problems } = audit('src/index.ts');
+  const io = audit('src/io/index.ts');
 
   it('covers the exports of src/index.ts', () => {
     expect(checked).toBeGreaterThan(50);
   });
 
   it('documents every export: summary, @example for values, @param and @returns for functions', () => {
-    const report = problems.map((p) => `${p.file}: ${p.name} lacks ${p.missing.join(', ')}`);
+    const report = [...problems, ...io.problems].map((p) => `${p.file}: ${p.name} lacks ${p.missing.join(', ')}`);
     expect(report).toEqual([]);
   });
 });

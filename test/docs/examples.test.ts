@@ -1,23 +1,25 @@
 // Every @example in the sources runs, and every `//=>` result in it holds: so no example
 // in the API reference can go stale. Examples import from 'quadspread' (served here by
 // src/index.ts) or from 'quadspread/rational' | 'quadspread/decimal' | 'quadspread/float'
-// (src/entries/{rational,decimal,float}.gen.ts).
+// (src/entries/{rational,decimal,float}.gen.ts) or from 'quadspread/io' (src/io/index.ts).
 import { describe, it, expect } from 'vitest';
 import * as generic from '../../src/index.js';
 import * as rationalEntry from '../../src/entries/rational.gen.js';
 import * as decimalEntry from '../../src/entries/decimal.gen.js';
 import * as floatEntry from '../../src/entries/float.gen.js';
+import * as ioEntry from '../../src/io/index.js';
 import { join } from 'node:path';
 import { compileExample, examplesOf, examplesOfMarkdown, repoRoot, sourceFiles, type Example } from './extract.js';
 
 // Guides whose code blocks are run too (add a guide here once its examples use //=>).
-const GUIDES = ['README.md', 'docs/choosing-an-arithmetic.md', 'docs/errors.md', 'docs/uncertainty.md', 'docs/geometry.md', 'docs/coordinates.md', 'docs/geodesy.md', 'docs/cli.md', 'docs/performance.md', 'docs/index.md', 'docs/field.md', 'docs/adjustment.md', 'docs/alignment.md'];
+const GUIDES = ['README.md', 'docs/choosing-an-arithmetic.md', 'docs/errors.md', 'docs/uncertainty.md', 'docs/geometry.md', 'docs/coordinates.md', 'docs/geodesy.md', 'docs/cli.md', 'docs/performance.md', 'docs/index.md', 'docs/field.md', 'docs/adjustment.md', 'docs/alignment.md', 'docs/interop.md'];
 
 const MODULES: Record<string, unknown> = {
   quadspread: generic,
   'quadspread/rational': rationalEntry,
   'quadspread/decimal': decimalEntry,
   'quadspread/float': floatEntry,
+  'quadspread/io': ioEntry,
 };
 
 function requireFor(ex: Example) {

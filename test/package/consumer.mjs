@@ -83,7 +83,7 @@ try {
   const pack = packTarball(join(work, 'pack'));
   const pkg = JSON.parse(readFileSync(join(root, 'package.json'), 'utf8'));
   for (const f of pack.files) {
-    if (!/^(dist\/|docs\/|rational\/|decimal\/|float\/|package\.json$|README|LICENSE)/.test(f))
+    if (!/^(dist\/|docs\/|rational\/|decimal\/|float\/|io\/|package\.json$|README|LICENSE)/.test(f))
       throw new Error(`unexpected file in the tarball: ${f}`);
   }
   console.log(
@@ -111,6 +111,8 @@ import * as D from 'quadspread/decimal';
 import * as F from 'quadspread/float';
 import * as q from 'quadspread';
 import checks from './checks.cjs';
+import { dataFormatOf } from 'quadspread/io';
+if (dataFormatOf('a.geojson') !== 'geojson') throw new Error('io entry (ESM)');
 if (typeof rational.from !== 'function' || typeof decimal !== 'function' || float.name !== 'float') throw new Error('named imports');
 if (QuadspreadError !== q.QuadspreadError || point !== q.point || quadrance !== q.quadrance || spread !== q.spread) throw new Error('named = namespace');
 checks.runChecks('esm', q, { arithmetic: Ra, point: Rp, quadrance: Rq, sqrtOf, rootToString, ...await import('quadspread/rational') }, D, F);
@@ -130,6 +132,8 @@ const D = require('quadspread/decimal');
 const F = require('quadspread/float');
 const { runChecks } = require('./checks.cjs');
 const { rational, quadrance, point } = require('quadspread');
+const io = require('quadspread/io');
+if (io.dataFormatOf('a.xml') !== 'landxml') throw new Error('io entry (CJS)');
 if (rational.toString(quadrance(rational, point(rational, 1, 1), point(rational, 2, 3))) !== '5') throw new Error('destructured require');
 runChecks('cjs', q, R, D, F);
 console.log('ok');
@@ -139,6 +143,8 @@ console.log('ok');
 import * as R from 'quadspread/rational';
 import * as D from 'quadspread/decimal';
 import * as F from 'quadspread/float';
+import { dataFormatOf, type DataFormat } from 'quadspread/io';
+const fmt: DataFormat = dataFormatOf('p.csv');
 const A: Arithmetic<Rational, true> = rational;
 const q: Rational = quadrance(A, point(A, 0, 0), point(A, 3, 4));
 const half: Rational = q.add(1).div(52);
@@ -153,26 +159,29 @@ const e = new QuadspreadError('INVALID_NUMBER', 'here', 'what');
 const code: 'INVALID_NUMBER' | string = e.code;
 // @ts-expect-error -- a bound function takes no arithmetic
 F.quadrance(float, F.point(0, 0), F.point(3, 4));
-export { half, s, d, dd, f, g, r, root, code };
+export { half, s, d, dd, f, g, r, root, code, fmt };
 `,
     'ts/cjs.cts': `import q = require('quadspread');
 import R = require('quadspread/rational');
 import F = require('quadspread/float');
+import io = require('quadspread/io');
 import { decimal, type Decimal } from 'quadspread';
+const v: io.DataFormat = io.dataFormatOf('p.xml');
 const x: q.Rational = q.rational.from('1/3');
 const y: q.Rational = R.quadrance(R.point(x, 0), R.point(0, 1));
 const z: number = F.spreadFromDegrees(30);
 const w: Decimal = decimal(10).from(2);
-export = { x, y, z, w };
+export = { x, y, z, w, v };
 `,
     'ts/bundler.ts': `import { rational, point, quadrance, type Rational } from 'quadspread';
 import { arithmetic, sqrtOf, rootToString } from 'quadspread/rational';
 import { quadrance as fq, point as fp } from 'quadspread/float';
 import { arithmetic as D } from 'quadspread/decimal';
+import { dataFormatOf } from 'quadspread/io';
 const q: Rational = quadrance(rational, point(rational, 0, 0), point(rational, 1, 1));
 const t: string = rootToString(sqrtOf(q));
 const n: number = fq(fp(0, 0), fp(1, 1));
-const s: string = arithmetic.toString(q) + D.toString(D.from(1));
+const s: string = arithmetic.toString(q) + D.toString(D.from(1)) + dataFormatOf('p.txt');
 export { t, n, s };
 `,
     'ts/tsconfig.node16.json': JSON.stringify(
@@ -256,12 +265,12 @@ export { t, n, s };
       run(process.execPath, [tsc, '-p', `tsconfig.${config}.json`], join(app, 'ts')),
     );
   }
-  check('the installed package.json has sideEffects: false and the four entries', () => {
+  check('the installed package.json has sideEffects: false and the five entries', () => {
     const installed = JSON.parse(
       readFileSync(join(app, 'node_modules', 'quadspread', 'package.json'), 'utf8'),
     );
     if (installed.sideEffects !== false) throw new Error('sideEffects is not false');
-    for (const e of ['.', './rational', './decimal', './float'])
+    for (const e of ['.', './rational', './decimal', './float', './io'])
       if (!installed.exports[e]) throw new Error(`no export ${e}`);
     if (installed.version !== pkg.version) throw new Error('version');
   });

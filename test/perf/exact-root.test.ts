@@ -7,6 +7,7 @@ import fc from 'fast-check';
 import Decimal from 'decimal.js';
 import { rational, traverse } from '../../src/index.js';
 import { approxSqrt } from '../../src/readings/numeric.js';
+import { isqrt } from '../../src/arithmetic/exact.js';
 import { runJob } from '../../src/cli/job.js';
 import { TASK_KINDS } from '../../src/cli/tasks/index.js';
 
@@ -14,6 +15,34 @@ const D = Decimal.clone({ precision: 120 });
 const ratio = fc
   .tuple(fc.bigInt({ min: 1n, max: 10n ** 40n }), fc.bigInt({ min: 1n, max: 10n ** 40n }))
   .map(([n, d]) => rational.from(`${n}/${d}`));
+
+describe('isqrt(a) (Newton from the double root of the leading bits)', () => {
+  // The definition of the integer square root: r² ≤ a < (r + 1)².
+  const check = (a: bigint): void => {
+    const r = isqrt(a);
+    expect(r * r <= a && a < (r + 1n) * (r + 1n)).toBe(true);
+  };
+  it('is the integer square root of random integers up to 3000 bits', () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 0, max: 3000 }),
+        fc.bigInt({ min: 0n, max: (1n << 3000n) - 1n }),
+        (bits, x) => check(x >> BigInt(3000 - bits)),
+      ),
+      { numRuns: 2000 },
+    );
+  });
+  it('is exact next to squares and powers of two (where a rounded double root errs)', () => {
+    fc.assert(
+      fc.property(fc.bigInt({ min: 1n, max: 1n << 1600n }), (r) => {
+        for (const a of [r * r - 1n, r * r, r * r + 1n, (r + 1n) * (r + 1n) - 1n]) check(a);
+      }),
+      { numRuns: 1000 },
+    );
+    for (let k = 0n; k < 2200n; k++)
+      for (const a of [(1n << k) - 1n, 1n << k, (1n << k) + 1n]) check(a);
+  });
+});
 
 describe('approxSqrt(rational, x) (one integer root on a decimal scale)', () => {
   it('is below √x by less than 1e-51 relative (decimal.js, 120 digits), with a power-of-ten denominator', () => {

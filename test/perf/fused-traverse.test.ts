@@ -80,6 +80,42 @@ describe('the fused rational traverse kernel', () => {
     );
   });
 
+  it('gives exactly the generic traverse when every length is computed (irrational roots, zero courses, exact closures)', () => {
+    // Lengths √(lat² + dep²) not given: the adjusted values are over T·Dn with T of ~55 digits,
+    // reduced with one shared gcd (sharedReducer); zero-length courses and a closing point on
+    // the computed end (north = east = 0) make residues that are 0 or share T's factors.
+    const comp = fc.oneof(
+      mmText,
+      fc.integer({ min: -3, max: 3 }),
+      fc.constantFrom(0, '0.5', '-0.25', '1/3'),
+    );
+    const loop = fc
+      .record({
+        start: fc.record({ x: comp, y: comp }),
+        courses: fc.array(fc.record({ latitude: comp, departure: comp }), {
+          minLength: 1,
+          maxLength: 25,
+        }),
+        closeAtEnd: fc.boolean(),
+      })
+      .map(({ start, courses, closeAtEnd }) => {
+        if (!closeAtEnd) return { start, courses };
+        let x = rational.from(start.x),
+          y = rational.from(start.y);
+        for (const c of courses) {
+          x = rational.add(x, rational.from(c.departure));
+          y = rational.add(y, rational.from(c.latitude));
+        }
+        return { start, courses, close: { x, y } };
+      });
+    fc.assert(
+      fc.property(loop, (t) => {
+        expect(outcome(() => traverse(rational, t))).toEqual(outcome(() => traverse(plain, t)));
+      }),
+      { numRuns: 300 },
+    );
+  });
+
   it('closes a loop exactly: the adjusted end is the start, and the misclosure is the sum of the courses', () => {
     const t = {
       start: { x: '10', y: '20' },

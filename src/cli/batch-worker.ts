@@ -1,0 +1,49 @@
+/**
+ * A worker of the batch command: sets the kind up for the header it is given, then turns each
+ * block of lines it receives into output text (the same code as on the main thread), answering
+ * in the order received.
+ *
+ * @module cli
+ */
+import { parentPort, workerData } from 'node:worker_threads';
+import { batchRows } from './batch-rows.js';
+import type { BlockResult, RowOptions } from './batch-rows.js';
+
+/** What a worker is started with (its `workerData.batch`). */
+export interface WorkerSetup {
+  kind: string;
+  names: string[];
+  headerLine: number;
+  options: RowOptions;
+}
+
+/** A block sent to a worker. */
+export interface WorkerBlock {
+  id: number;
+  text: string;
+  firstLine: number;
+}
+
+/** A worker's answer: the block's result, or an internal error. */
+export type WorkerAnswer = { id: number; result: BlockResult } | { id: number; failure: string };
+
+/** Whether this thread is a batch worker (started by the batch command with its setup). */
+export function isBatchWorker(): boolean {
+  return parentPort !== null && (workerData as { batch?: unknown } | null)?.batch !== undefined;
+}
+
+/** Runs this thread as a batch worker until the main thread ends it. */
+export function runBatchWorker(): void {
+  const port = parentPort!;
+  const setup = (workerData as { batch: WorkerSetup }).batch;
+  const rows = batchRows(setup.kind, setup.names, setup.headerLine, setup.options);
+  port.on('message', (m: WorkerBlock) => {
+    let answer: WorkerAnswer;
+    try {
+      answer = { id: m.id, result: rows.block(m.text, m.firstLine) };
+    } catch (e) {
+      answer = { id: m.id, failure: (e as Error).stack ?? String(e) };
+    }
+    port.postMessage(answer);
+  });
+}
