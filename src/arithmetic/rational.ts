@@ -72,7 +72,11 @@ function approximate(digits: number): DecimalArithmetic {
 const isFraction = (x: unknown): boolean =>
   typeof (x as Rational | null)?.d === 'bigint' && typeof (x as Rational).n === 'bigint';
 
-const { one, two } = /* @__PURE__ */ operandChecks<Rational>('rational', isFraction);
+// Kept as one object (not destructured): a bundler cannot drop a destructuring, so a program
+// that never uses `rational` would keep these checks.
+const checks = /* @__PURE__ */ operandChecks<Rational>('rational', isFraction);
+const one = (op: string, a: Rational): Rational => checks.one(op, a);
+const two = (op: string, a: Rational, b: Rational): Rational => checks.two(op, a, b);
 
 /**
  * The exact arithmetic. + − × ÷ never round; `sqrt` is exact or `undefined`; a JS

@@ -145,7 +145,7 @@ export function tempNameFor(target: string): string {
  */
 export interface PendingFile {
   readonly target: string;
-  write(text: string): void;
+  write(text: string | Uint8Array): void;
   commit(): void;
   abort(): void;
 }
@@ -176,7 +176,8 @@ export function openPending(target: string): PendingFile {
     target,
     write(text) {
       try {
-        writeSync(fd, text);
+        if (typeof text === 'string') writeSync(fd, text);
+        else for (let at = 0; at < text.length;) at += writeSync(fd, text, at);
       } catch (e) {
         throw cannotWrite(target, e);
       }

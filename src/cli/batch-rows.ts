@@ -51,6 +51,8 @@ export interface BlockResult {
   rows: number;
   /** Rows written with an error noted (`badRows: 'note'`). */
   noted: number;
+  /** Lines read (up to the one that stopped the block, if one did). */
+  lines: number;
   /** The row that stopped the block (the text holds the rows before it). */
   problem?: RowProblem;
 }
@@ -348,6 +350,7 @@ export function batchRows(
             text: out,
             rows,
             noted,
+            lines: k + 1,
             problem: {
               line,
               reason: `the line is longer than ${MAX_CSV_LINE} characters (is this a CSV text file?)`,
@@ -404,9 +407,9 @@ export function batchRows(
             continue;
           }
         }
-        return { text: out, rows, noted, problem };
+        return { text: out, rows, noted, lines: k + 1, problem };
       }
-      return { text: out, rows, noted };
+      return { text: out, rows, noted, lines: count };
     },
   };
 }

@@ -7,14 +7,15 @@
  * an `error` column and go on.
  *
  * The input is read in chunks and the output written in blocks of about 64 KiB. Past the
- * first MiB of input, blocks of lines go to a pool of worker threads (one per core, or
- * `--workers`): at most two blocks per worker are in flight, and the input is not read further
- * until the oldest is written, so memory stays bounded and rows keep their order.
+ * first MiB of input, blocks of lines (1 MiB each) are computed by `--workers` threads (by
+ * default one per idle core): this one and a pool of worker threads, in turn. At most two blocks per
+ * thread are in flight, and the input is not read further until the oldest is written, so
+ * memory stays bounded and rows keep their order.
  *
  * @module cli
  */
 import { createReadStream } from 'node:fs';
-import { availableParallelism } from 'node:os';
+import { availableParallelism, loadavg } from 'node:os';
 import { Worker } from 'node:worker_threads';
 import { openPending, sameFile } from './atomic.js';
 import type { PendingFile } from './atomic.js';
@@ -30,14 +31,14 @@ export { MAX_CSV_LINE } from './batch-rows.js';
 /** The options of the batch command. */
 export interface BatchOptions extends RowOptions {
   out?: string;
-  /** Worker threads for large inputs (default: the number of cores; 1: none). */
+  /** Threads computing a large input, this one included (default: {@link idleCores}; 1: no worker threads). */
   workers?: number;
 }
 
 /** Input read on the main thread before the worker pool starts, in characters. */
 export const POOL_FROM = 1 << 20;
 /** Characters of input per block sent to a worker. */
-const BLOCK = 1 << 17;
+const BLOCK = 1 << 20;
 /** Output is written when this many characters are waiting. */
 const FLUSH = 1 << 16;
 
@@ -62,18 +63,28 @@ function stopAt(p: RowProblem): Error {
   return p.unsolvable ? new JobUnsolvable(where, p.reason) : new JobInvalid(where, p.reason);
 }
 
-function countLines(text: string): number {
-  let n = 0;
-  for (let i = text.indexOf('\n'); i >= 0; i = text.indexOf('\n', i + 1)) n++;
-  return n;
+/** The parts joined into a new array of its own (so that its memory can be handed to a worker). */
+function joinBytes(parts: readonly Uint8Array[], length: number): Uint8Array {
+  const out = new Uint8Array(length);
+  let at = 0;
+  for (const p of parts) {
+    out.set(p, at);
+    at += p.length;
+  }
+  return out;
 }
+
+const utf8 = new TextDecoder();
+
+/** What the pool gives back for a block: its output as UTF-8, and its counts. */
+type PoolResult = Omit<BlockResult, 'text'> & { bytes: Uint8Array };
 
 /** Worker threads computing blocks; answers come back by block id. */
 class Pool {
   private readonly workers: Worker[] = [];
   private readonly waiting = new Map<
     number,
-    { resolve: (r: BlockResult) => void; reject: (e: Error) => void }
+    { resolve: (r: PoolResult) => void; reject: (e: Error) => void }
   >();
   private nextId = 0;
   private closing = false;
@@ -90,7 +101,7 @@ class Pool {
         if (!entry) return;
         this.waiting.delete(a.id);
         if ('failure' in a) entry.reject(new Error(`in a batch worker: ${a.failure}`));
-        else entry.resolve(a.result);
+        else entry.resolve({ ...a.result, bytes: new Uint8Array(a.result.bytes) });
       });
       w.on('error', fail);
       w.on('exit', (code) => {
@@ -100,13 +111,14 @@ class Pool {
     }
   }
 
-  submit(text: string, firstLine: number): Promise<BlockResult> {
+  /** Hands the block's memory over to a worker (`bytes` must own its buffer). */
+  submit(bytes: Uint8Array): Promise<PoolResult> {
     const id = this.nextId++;
-    const p = new Promise<BlockResult>((resolve, reject) =>
+    const p = new Promise<PoolResult>((resolve, reject) =>
       this.waiting.set(id, { resolve, reject }),
     );
-    const block: WorkerBlock = { id, text, firstLine };
-    this.workers[id % this.workers.length]!.postMessage(block);
+    const block: WorkerBlock = { id, bytes: bytes.buffer as ArrayBuffer };
+    this.workers[id % this.workers.length]!.postMessage(block, [block.bytes]);
     return p;
   }
 
@@ -114,6 +126,16 @@ class Pool {
     this.closing = true;
     await Promise.all(this.workers.map((w) => w.terminate()));
   }
+}
+
+/**
+ * The cores not already busy: the cores less the 1-minute load average, at least 1. On a machine
+ * that other work keeps busy, threads of ours only take turns with each other (and wait for each
+ * other), so the pool is left out there.
+ */
+export function idleCores(): number {
+  const cores = availableParallelism();
+  return Math.max(1, Math.min(cores, Math.round(cores - loadavg()[0]!)));
 }
 
 /** Runs a batch, writing to `o.out` (atomically) or the standard output. */
@@ -125,8 +147,7 @@ export async function runBatch(kind: string, file: string, o: BatchOptions, io: 
       `${JSON.stringify(o.out)} is the input CSV itself: give the results another name`,
     );
   }
-  const input =
-    file === '-' ? process.stdin.setEncoding('utf8') : createReadStream(file, { encoding: 'utf8' });
+  const input = file === '-' ? process.stdin : createReadStream(file);
   await new Promise<void>((resolve, reject) => {
     if (file === '-') resolve();
     input.once('open', () => resolve());
@@ -145,6 +166,13 @@ export async function runBatch(kind: string, file: string, o: BatchOptions, io: 
     waitingOut += text;
     if (waitingOut.length >= FLUSH) flush();
   };
+  const emitBytes = (bytes: Uint8Array): void => {
+    flush();
+    if (bytes.length === 0) return;
+    if (pending) pending.write(bytes);
+    else if (io.stdoutBytes) io.stdoutBytes(bytes);
+    else io.stdout(utf8.decode(bytes));
+  };
   let rows = 0;
   let noted = 0;
   let lastShown = 0;
@@ -157,105 +185,128 @@ export async function runBatch(kind: string, file: string, o: BatchOptions, io: 
       `\rquadspread batch ${kind}: ${rows} row${rows === 1 ? '' : 's'}${final ? ' done\n' : ''}`,
     );
   };
-  const take = (r: BlockResult): void => {
-    emit(r.text);
+  const count = (r: Omit<BlockResult, 'text'>): void => {
     rows += r.rows;
     noted += r.noted;
     progress(false);
     if (r.problem) throw stopAt(r.problem);
   };
 
-  let lineNo = 0; // lines consumed so far
+  let lineNo = 0; // lines read so far (in pool mode: in the blocks taken back)
   let engine: Rows | undefined;
-  let names: string[] | undefined;
-  let headerLine = 0;
+  let setup: WorkerSetup | undefined;
   let read = 0;
-  const workers = o.workers ?? availableParallelism();
+  const workers = o.workers ?? idleCores();
   let pool: Pool | undefined;
-  const inFlight: Promise<BlockResult>[] = [];
-  let block = '';
-  let blockLine = 1;
+  const inFlight: Promise<PoolResult | BlockResult>[] = [];
+  let dispatched = 0;
+  let block: Uint8Array[] = [];
+  let blockSize = 0;
+
+  // The workers number lines from 1 in each block; the blocks are taken in order, so the
+  // lines before each are known when it is taken.
+  const takeOldest = async (): Promise<void> => {
+    const r = await inFlight.shift()!;
+    if ('text' in r) emit(r.text);
+    else emitBytes(r.bytes);
+    if (r.problem) r.problem.line += lineNo;
+    lineNo += r.lines;
+    count(r);
+  };
 
   /** Sends the block being gathered to the pool; waits for the oldest when enough are in flight. */
   const dispatch = async (): Promise<void> => {
-    if (block === '') return;
-    const p = pool!.submit(block, blockLine);
-    p.catch(() => {}); // awaited in order below; a failure is reported there
-    inFlight.push(p);
-    blockLine += countLines(block);
-    block = '';
-    while (inFlight.length >= 2 * workers) take(await inFlight.shift()!);
+    if (blockSize === 0) return;
+    const bytes = joinBytes(block, blockSize);
+    block = [];
+    blockSize = 0;
+    // One block in `workers` is computed here, the others by the pool's threads.
+    if (dispatched++ % workers === workers - 1)
+      inFlight.push(Promise.resolve(engine!.block(utf8.decode(bytes), 1)));
+    else {
+      const p = pool!.submit(bytes);
+      p.catch(() => {}); // awaited in order; a failure is reported there
+      inFlight.push(p);
+    }
+    while (inFlight.length >= 2 * workers) await takeOldest();
   };
 
-  /** Whole lines of input (each ending with a line break, but perhaps the last). */
-  const consume = async (text: string): Promise<void> => {
+  /** Whole lines of input as UTF-8 (each ending with a line break, but perhaps the last). */
+  const consume = async (bytes: Uint8Array): Promise<void> => {
     if (!engine) {
       // Find the header: the first line that is neither blank nor a comment.
       let pos = 0;
-      while (pos < text.length && !engine) {
-        let stop = text.indexOf('\n', pos);
-        if (stop < 0) stop = text.length;
-        const raw = text.slice(pos, stop).replace(/\r$/, '');
+      while (pos < bytes.length && !engine) {
+        let stop = bytes.indexOf(10, pos);
+        if (stop < 0) stop = bytes.length;
+        const raw = utf8.decode(bytes.subarray(pos, stop)).replace(/\r$/, '');
         pos = stop + 1;
         lineNo++;
         if (raw.length > MAX_CSV_LINE) throw lineTooLong(lineNo);
         if (raw.trim() === '' || raw.startsWith('#')) continue;
-        names = headerFields(raw, lineNo);
-        headerLine = lineNo;
-        engine = batchRows(kind, names, headerLine, o);
+        const names = headerFields(raw, lineNo);
+        engine = batchRows(kind, names, lineNo, o);
+        setup = { kind, names, headerLine: lineNo, options: { ...o } };
         emit(engine.header);
       }
-      text = text.slice(Math.min(pos, text.length));
-      if (text === '') return;
+      if (pos >= bytes.length) return;
+      bytes = bytes.subarray(pos);
     }
-    read += text.length;
-    if (!pool && workers > 1 && io.workerScript && read > POOL_FROM) {
-      const setup: WorkerSetup = { kind, names: names!, headerLine, options: { ...o } };
-      pool = new Pool(io.workerScript, setup, workers);
-      blockLine = lineNo + 1;
-    }
+    read += bytes.length;
+    if (!pool && workers > 1 && io.workerScript && read > POOL_FROM)
+      pool = new Pool(io.workerScript, setup!, workers - 1);
     if (pool) {
-      block += text;
-      if (block.length >= BLOCK) await dispatch();
+      block.push(bytes);
+      blockSize += bytes.length;
+      if (blockSize >= BLOCK) await dispatch();
       return;
     }
-    const r = engine!.block(text, lineNo + 1);
-    lineNo += countLines(text);
-    take(r);
+    const r = engine!.block(utf8.decode(bytes), lineNo + 1);
+    lineNo += r.lines;
+    emit(r.text);
+    count(r);
+  };
+
+  /** Every block sent is written (in order), then the line that is too long is refused. */
+  const tooLong = async (): Promise<never> => {
+    if (pool) {
+      await dispatch();
+      while (inFlight.length > 0) await takeOldest();
+    }
+    throw lineTooLong(lineNo + 1);
   };
 
   try {
     if (o.out !== undefined) pending = openPending(o.out);
-    let rest = '';
-    const chunks = (input as AsyncIterable<string>)[Symbol.asyncIterator]();
+    let rest: Uint8Array = new Uint8Array(0);
+    const chunks = (input as AsyncIterable<Uint8Array>)[Symbol.asyncIterator]();
     for (;;) {
-      let next: IteratorResult<string>;
+      let next: IteratorResult<Uint8Array>;
       try {
         next = await chunks.next();
       } catch (e) {
         throw cannotRead(file, e);
       }
       if (next.done) break;
-      const text = rest + next.value;
-      const cut = text.lastIndexOf('\n');
+      const chunk = typeof next.value === 'string' ? Buffer.from(next.value) : next.value;
+      const cut = chunk.lastIndexOf(10);
       if (cut < 0) {
-        rest = text;
+        rest = rest.length === 0 ? chunk : joinBytes([rest, chunk], rest.length + chunk.length);
       } else {
-        rest = text.slice(cut + 1);
-        await consume(text.slice(0, cut + 1));
+        const lines =
+          rest.length === 0
+            ? chunk.subarray(0, cut + 1)
+            : joinBytes([rest, chunk.subarray(0, cut + 1)], rest.length + cut + 1);
+        rest = chunk.subarray(cut + 1);
+        await consume(lines);
       }
-      if (rest.length > MAX_CSV_LINE) {
-        if (pool) {
-          await dispatch();
-          while (inFlight.length > 0) take(await inFlight.shift()!);
-        }
-        throw lineTooLong((pool ? blockLine - 1 : lineNo) + 1);
-      }
+      // A line may take up to 4 bytes a character: decoded, it says whether it is too long.
+      if (rest.length > MAX_CSV_LINE && utf8.decode(rest).length > MAX_CSV_LINE) await tooLong();
     }
-    if (rest !== '') await consume(rest);
+    if (rest.length > 0) await consume(rest);
     if (pool) {
       await dispatch();
-      while (inFlight.length > 0) take(await inFlight.shift()!);
+      while (inFlight.length > 0) await takeOldest();
     }
     if (!engine) {
       const k = batchKind(kind);

@@ -13,6 +13,7 @@ if (isBatchWorker()) runBatchWorker();
 else
   process.exitCode = await main(process.argv.slice(2), {
     stdout: (text) => process.stdout.write(text),
+    stdoutBytes: (bytes) => process.stdout.write(bytes),
     stderr: (text) => process.stderr.write(text),
     stderrIsTTY: process.stderr.isTTY === true,
     workerScript: new URL(import.meta.url),

@@ -33,6 +33,8 @@ export interface Io {
   stderrIsTTY: boolean;
   /** The standard input as text, for `run -` (default: the process's standard input). */
   stdin?: () => Promise<string>;
+  /** Writes bytes (UTF-8) to the standard output, where the batch command has them already. */
+  stdoutBytes?: (bytes: Uint8Array) => void;
   /** The script that runs batch workers (the command's own file); without it a batch runs on one thread. */
   workerScript?: URL;
 }
@@ -319,7 +321,7 @@ export function program(io: Io, outcome: { exitCode: number } = { exitCode: EXIT
     .addOption(
       new Option(
         '--workers <n>',
-        'worker threads for inputs over 1 MiB (default: one per core; 1: none)',
+        'threads computing inputs over 1 MiB, this one included (default: one per idle core, the cores less the load average; 1: this one only)',
       ).argParser(workersOption),
     )
     .action(async (kind: string, file: string, o: BatchOptions) => {

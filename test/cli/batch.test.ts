@@ -221,23 +221,35 @@ describe('quadspread batch', () => {
   });
 
   it('with worker threads, writes the same bytes as on one thread, and names the right line of a late bad row', () => {
-    // Over the 1 MiB from which the pool takes over: about 40 000 rows.
+    // About 5 MB: the first MiB on this thread, then blocks of a MiB computed in turn by a
+    // worker thread and by this one.
     let text = 'id,east1,north1,east2,north2\n';
-    for (let i = 0; i < 40000; i++)
+    for (let i = 0; i < 100000; i++)
       text += `P${i},${(i * 7.31) % 1000},${(i * 3.17) % 997},${(i * 1.11) % 1009},${i % 10}\n`;
     const f = csv('many.csv', text);
     const one = cli(['batch', 'inverses', f, '--workers', '1']);
     const two = cli(['batch', 'inverses', f, '--workers', '2']);
     expect(one.code).toBe(0);
     expect(two.code).toBe(0);
-    expect(two.stdout.length).toBeGreaterThan(1 << 20);
+    expect(two.stdout.length).toBeGreaterThan(4 << 20);
     expect(two.stdout).toBe(one.stdout);
-    const lines = text.split('\n');
-    lines[39000] = 'P,1,2,x,4';
-    const bad = cli(['batch', 'inverses', csv('late-bad.csv', lines.join('\n')), '--workers', '2']);
-    expect(bad.code).toBe(2);
-    expect(bad.stderr).toContain('line 39001, column "east2": "x" is not a number');
-    expect(bad.stdout.trim().split('\n')).toHaveLength(39000);
+    const out = join(dir, 'many-out.csv');
+    expect(cli(['batch', 'inverses', f, '--workers', '3', '--out', out]).code).toBe(0);
+    expect(readFileSync(out, 'utf8')).toBe(one.stdout);
+    for (const at of [39000, 50000, 99000]) {
+      const lines = text.split('\n');
+      lines[at] = 'P,1,2,x,4';
+      const bad = cli([
+        'batch',
+        'inverses',
+        csv(`late-bad-${at}.csv`, lines.join('\n')),
+        '--workers',
+        '2',
+      ]);
+      expect(bad.code).toBe(2);
+      expect(bad.stderr).toContain(`line ${at + 1}, column "east2": "x" is not a number`);
+      expect(bad.stdout.trim().split('\n')).toHaveLength(at);
+    }
   });
 
   it('exits 2 for a header without the needed columns', () => {

@@ -70,6 +70,21 @@ export interface BatchKind {
 const numbers = (names: readonly string[]) =>
   names.map((column) => ({ column, reading: 'number' as const }));
 
+/**
+ * The azimuth of (dx, dy) ≠ 0 in float: `azimuthOf` with `float`'s operations written out (the
+ * same operations in the same order, so the same double; property-tested in
+ * test/cli/batch-kinds.test.ts).
+ */
+export function azimuthFloat(dx: number, dy: number): number {
+  if (dx === 0) return dy > 0 ? 0 : 180;
+  if (dy === 0) return dx > 0 ? 90 : 270;
+  if (Math.abs(dx) === Math.abs(dy)) return dx > 0 ? (dy > 0 ? 45 : 135) : dy < 0 ? 225 : 315;
+  let deg = (Math.atan2(dx, dy) * 180) / Math.PI;
+  if (deg < 0) deg += 360;
+  if (deg >= 360) deg -= 360;
+  return deg;
+}
+
 const inverses: BatchKind = {
   description:
     'pairs of points (east1, north1, east2, north2): quadrance, distance and bearing (clockwise from north) from the first to the second',
@@ -77,19 +92,31 @@ const inverses: BatchKind = {
   exactColumns: true,
   plan(c) {
     const A = c.A;
+    const generic = ([e1, n1, e2, n2]: unknown[]): string[] => {
+      const Q = quadrance(A, point(A, e1, n1), point(A, e2, n2));
+      const dx = A.sub(e2, e1);
+      const dy = A.sub(n2, n1);
+      // Two coincident points have no bearing: the field is left empty.
+      const b = A.isZero(dx) && A.isZero(dy) ? '' : c.angle(azimuthOf(A, dx, dy));
+      const out = [c.num(Q), c.num(sqrtOf(A, Q)), b];
+      if (c.exactColumns) out.push(c.exact(Q));
+      return out;
+    };
+    // In float, the same operations on plain numbers (quadrance, √ and azimuthOf as float
+    // computes them); a quadrance that overflows goes to the generic code, which refuses it.
+    const inFloat = (values: unknown[]): string[] => {
+      const [e1, n1, e2, n2] = values as number[];
+      const dx = e2! - e1!;
+      const dy = n2! - n1!;
+      const Q = dx * dx + dy * dy;
+      if (Q - Q !== 0) return generic(values);
+      const b = dx === 0 && dy === 0 ? '' : c.angle(azimuthFloat(dx, dy));
+      return [c.num(Q), c.num(Math.sqrt(Q)), b];
+    };
     return {
       inputs: numbers(this.columns),
       outputs: ['quadrance', 'distance', 'bearing', ...(c.exactColumns ? ['quadrance_exact'] : [])],
-      row([e1, n1, e2, n2]) {
-        const Q = quadrance(A, point(A, e1, n1), point(A, e2, n2));
-        const dx = A.sub(e2, e1);
-        const dy = A.sub(n2, n1);
-        // Two coincident points have no bearing: the field is left empty.
-        const b = A.isZero(dx) && A.isZero(dy) ? '' : c.angle(azimuthOf(A, dx, dy));
-        const out = [c.num(Q), c.num(sqrtOf(A, Q)), b];
-        if (c.exactColumns) out.push(c.exact(Q));
-        return out;
-      },
+      row: A === (float as unknown) ? inFloat : generic,
     };
   },
 };
