@@ -7,7 +7,11 @@
 //     (`typeof g.f<Rational, true>` minus its first parameter);
 //   - every other public export (constants, classes, types, functions taking something
 //     else first) is re-exported unchanged;
-//   - exports tagged @internal are left out, as in the API reference.
+//   - exports tagged @internal are left out, as in the API reference;
+//   - the uncertainty functions (`uncertain` and every function taking an `UncertainArithmetic`
+//     first: `measured`, `budget`, …) are left out: a bound entry's solvers compute in its one
+//     arithmetic and cannot take uncertain values, so budgets come from the generic entry with
+//     `uncertain(base)`.
 // Usage: node scripts/gen-bound.mjs          writes the three files
 //        node scripts/gen-bound.mjs --check  exits 1 when a committed file is out of date
 import ts from 'typescript';
@@ -19,6 +23,7 @@ const root = resolve(dirname(fileURLToPath(import.meta.url)), '..');
 const src = resolve(root, 'src');
 const indexFile = resolve(src, 'index.ts');
 const typesFile = resolve(src, 'arithmetic/types.ts');
+const uncertainFile = resolve(src, 'arithmetic/uncertain.ts');
 
 /** The three bound entries: how each fixes the arithmetic. */
 const ENTRIES = [
@@ -41,9 +46,16 @@ const ENTRIES = [
       'export const arithmetic: RationalArithmetic = rational;',
     ],
     example: [
-      "import { arithmetic, point, quadrance } from 'quadspread/rational';",
+      "import { arithmetic, point, quadrance, solveTriangle, heightFromSight } from 'quadspread/rational';",
       "arithmetic.toString(quadrance(point('1/2', 0), point(0, 2)));",
       "//=> '17/4'",
+      '// two sides (quadrances 25 and 16) and the spread 1/2 between them: two triangles, exact surds',
+      "solveTriangle({ Q1: 25, Q2: 16, s3: '1/2' }).map((t) => t.Q3.toString());",
+      "//=> ['41 - 20√2', '41 + 20√2']",
+      '// a sight over a horizontal quadrance of 22500 m² at vertical spread 1/3: H and h = √H',
+      "const r = heightFromSight({ horizontalQuadrance: 22500, vertical: '1/3' });",
+      '[arithmetic.toString(r.H), r.height.toString(), r.height.toPrecision(8)];',
+      "//=> ['11250', '75√2', '106.06602']",
     ],
   },
   {
@@ -65,9 +77,13 @@ const ENTRIES = [
       'export const arithmetic: DecimalArithmetic = /* @__PURE__ */ decimal(34);',
     ],
     example: [
-      "import { arithmetic, point, quadrance } from 'quadspread/decimal';",
+      "import { arithmetic, point, quadrance, inverse } from 'quadspread/decimal';",
       "arithmetic.toString(quadrance(point('0.1', 0), point(0, '0.2')));",
       "//=> '0.05'",
+      '// bearing and distance between two points, to 34 significant digits',
+      'const i = inverse({ x: 0, y: 0 }, { x: 30, y: 40 });',
+      '[arithmetic.toString(i.distance), arithmetic.toString(i.azimuth), i.quadrant];',
+      "//=> ['50', '36.86989764584402129685561255909342', 'N 36°52\\'11.6\" E']",
     ],
   },
   {
@@ -89,11 +105,33 @@ const ENTRIES = [
       'export const arithmetic: FloatArithmetic = float;',
     ],
     example: [
-      "import { point, quadrance } from 'quadspread/float';",
+      "import { point, quadrance, inverse, heightFromSight } from 'quadspread/float';",
       'quadrance(point(0, 0), point(3, 4));',
       '//=> 25',
+      'const i = inverse({ x: 0, y: 0 }, { x: 30, y: 40 });',
+      '[i.distance, i.quadrance];',
+      '//=> [50, 2500]',
+      '// a sight over 150 m (quadrance 22500 m²) at vertical spread 1/2 (45°)',
+      'heightFromSight({ horizontalQuadrance: 22500, vertical: 0.5 });',
+      '//=> { H: 22500, height: 150, sign: 1 }',
     ],
   },
+];
+
+/**
+ * How to get an uncertainty budget (shown in every bound entry, which does not export the
+ * uncertainty functions): the generic entry with `uncertain(float)`.
+ */
+const BUDGET_EXAMPLE = [
+  '// budgets: the generic entry with an uncertain arithmetic over the base, here float',
+  "import { uncertain, float, measured, heightFromSight, budget } from 'quadspread';",
+  'const U = uncertain(float);',
+  "const Q = measured(U, 22500, 3, 'Q'); // horizontal quadrance, m², σ 3 m² (150 m ± 0.01 m)",
+  "const R = measured(U, 0.5, 0.0001, 'R'); // vertical spread, σ 0.0001",
+  'const r = heightFromSight(U, { horizontalQuadrance: Q, vertical: R });',
+  '// var H = (R/(1 − R))²·3² + (Q/(1 − R)²)²·0.0001² = 9 + 81',
+  '[r.H.value, budget(U, r.H).variance];',
+  '//=> [22500, 90]',
 ];
 
 function fail(message) {
@@ -107,6 +145,16 @@ function loadProgram() {
   const parsed = ts.parseJsonConfigFileContent(config.config, ts.sys, root);
   // Only the generic entry and what it imports: the bound files themselves are not read.
   return ts.createProgram([indexFile], { ...parsed.options, noEmit: true });
+}
+
+/** Whether a function declaration takes an `UncertainArithmetic` first. */
+function takesUncertainFirst(checker, uncertainSymbol, decl) {
+  const fn = ts.isFunctionDeclaration(decl) ? decl : undefined;
+  const type = fn?.parameters[0]?.type;
+  if (!type || !ts.isTypeReferenceNode(type)) return false;
+  let sym = checker.getSymbolAtLocation(type.typeName);
+  if (sym && sym.flags & ts.SymbolFlags.Alias) sym = checker.getAliasedSymbol(sym);
+  return sym === uncertainSymbol;
 }
 
 function isInternal(decl) {
@@ -164,7 +212,13 @@ export function collect() {
   if (!index || !types) fail('cannot read src/index.ts or src/arithmetic/types.ts');
   const arithmeticSymbol = checker.getSymbolAtLocation(types).exports.get('Arithmetic');
   if (!arithmeticSymbol) fail('src/arithmetic/types.ts exports no Arithmetic');
+  const uncertainSource = program.getSourceFile(uncertainFile);
+  const uncertainSymbol = uncertainSource
+    ? checker.getSymbolAtLocation(uncertainSource)?.exports.get('UncertainArithmetic')
+    : undefined;
+  if (!uncertainSymbol) fail('src/arithmetic/uncertain.ts exports no UncertainArithmetic');
   const moduleSymbol = checker.getSymbolAtLocation(index);
+  const omitted = [];
   const bound = [];
   const values = [];
   const typesOnly = [];
@@ -176,6 +230,13 @@ export function collect() {
     const decls = target.declarations ?? [];
     if (decls.length === 0) fail(`${name}: no declaration`);
     if (decls.every(isInternal)) continue;
+    if (
+      name === 'uncertain' ||
+      decls.some((d) => takesUncertainFirst(checker, uncertainSymbol, d))
+    ) {
+      omitted.push(name);
+      continue;
+    }
     const isValue = (target.flags & ts.SymbolFlags.Value) !== 0;
     if (!isValue) {
       typesOnly.push(name);
@@ -214,6 +275,7 @@ export function collect() {
     bound: bound.sort(byName),
     values: values.sort(byName),
     typesOnly: typesOnly.sort(byName),
+    omitted: omitted.sort(byName),
   };
 }
 
@@ -233,7 +295,7 @@ function wrap(lines, width = 96) {
   return out;
 }
 
-function render(entry, { bound, values, typesOnly }) {
+function render(entry, { bound, values, typesOnly, omitted }) {
   const A = 'arithmetic';
   const L = [];
   L.push('// GENERATED by scripts/gen-bound.mjs from src/index.ts: do not edit by hand.');
@@ -264,12 +326,34 @@ function render(entry, { bound, values, typesOnly }) {
     ' * own operations take its values; the solvers read `{ x, y }` or `[x, y]` of numbers or text.',
   );
   L.push(
-    ' * Everything else (constants, classes, types, the other arithmetics) is re-exported unchanged.',
+    ' * Everything else (constants, classes, types, the other arithmetics) is re-exported unchanged,',
   );
+  L.push(
+    " * except the uncertainty functions: this entry's solvers compute in its one arithmetic and",
+  );
+  L.push(
+    ' * cannot take uncertain values, so for budgets use the generic entry with `uncertain(base)`',
+  );
+  const names = omitted.map((n) => '`' + n + '`').join(', ');
+  const words = `(not exported here: ${names}).`.split(' ');
+  let line = ' *';
+  for (const w of words) {
+    if (line.length + w.length + 1 > 96) {
+      L.push(line);
+      line = ' *';
+    }
+    line += ` ${w}`;
+  }
+  L.push(line);
   L.push(' *');
   L.push(' * @example');
   L.push(' * ```ts');
   for (const e of entry.example) L.push(` * ${e}`);
+  L.push(' * ```');
+  L.push(' *');
+  L.push(' * @example');
+  L.push(' * ```ts');
+  for (const e of BUDGET_EXAMPLE) L.push(` * ${e}`);
   L.push(' * ```');
   L.push(' *');
   L.push(` * @module ${entry.module}`);

@@ -238,10 +238,22 @@ export const textTooLong = (
  * arithmetic (a JS number, text, or a value of another arithmetic). @internal
  */
 export const notAValue = (arith: string, op: string, x: unknown): QuadspreadError =>
-  invalidNumber(
-    `${arith}.${op}(…)`,
-    `${show(x)} (${kindOfValue(x)}) is not a ${arith} value: use ${arith}.from, or point(${arith}, x, y)`,
-  );
+  invalidNumber(`${arith}.${op}(…)`, `${show(x)} ${notAValueAdvice(arith, x)}`);
+
+// What to call instead, for the values met most often where an arithmetic's value is expected
+// (read defensively: a Proxy or a throwing getter gets the plain advice).
+function notAValueAdvice(arith: string, x: unknown): string {
+  try {
+    const o = typeof x === 'object' && x !== null ? (x as Record<PropertyKey, unknown>) : undefined;
+    if (o?.[Symbol.for('quadspread.surd')] === true)
+      return `is a surd (an exact root), not a ${arith} value: use x.toString(), x.toPrecision(digits), x.toNumber() or its own x.add(y), x.mul(y), …`;
+    if (o !== undefined && 'value' in o && Array.isArray(o.derivatives))
+      return `is an uncertain value, not a ${arith} value: use U.toString(x), x.value or budget(U, x)`;
+  } catch {
+    // fall through to the plain advice
+  }
+  return `(${kindOfValue(x)}) is not a ${arith} value: read it with ${arith}.from(x), or point(${arith}, x, y)`;
+}
 
 const METHODS = [
   'from',

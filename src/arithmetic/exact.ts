@@ -272,6 +272,20 @@ export function ratioToPrecision(n: bigint, d: bigint, digits: number): string {
   return neg ? `-${out}` : out;
 }
 
+/** The brand every quadratic surd carries (see geometry's `isSurd`). @internal */
+export const SURD_BRAND: unique symbol = /* @__PURE__ */ Symbol.for('quadspread.surd') as never;
+
+/** A quadratic surd made by this package, seen from the arithmetic layer (by its brand). @internal */
+export interface SurdLike {
+  toString(): string;
+  toPrecision(digits: number): string;
+  toNumber(): number;
+}
+
+/** Whether x is a quadratic surd (by its brand, without importing geometry). @internal */
+export const isSurdLike = (x: unknown): x is SurdLike =>
+  typeof x === 'object' && x !== null && (x as Record<symbol, unknown>)[SURD_BRAND] === true;
+
 /**
  * The operand checks of an arithmetic: `one(op, a)` and `two(op, a, b)` return `a` once the
  * operands pass `is`, and otherwise throw `INVALID_NUMBER` naming `name.op(…)` (a JS number,

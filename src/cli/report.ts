@@ -111,6 +111,16 @@ export interface SketchView {
   view: 'plan' | 'elevation';
   /** What the axes are, when not the usual (plan: x east, y north, with a north arrow; elevation: distance across, height up). */
   caption?: string;
+  /** Whether a plan is oriented (x east, y north) and gets a north arrow (default: when no caption is given). */
+  north?: boolean;
+  /** The length unit of x and y (e.g. `m`): the view then gets a scale bar, and measured lines their distances. */
+  unit?: string;
+  /** False when x is not drawn to scale (e.g. evenly spaced rows): no scale bar. */
+  toScale?: boolean;
+  /** Largest factor by which heights of an elevation view may be exaggerated (default 10). */
+  maxExaggeration?: number;
+  /** Decimals of the distances written on measured lines (default 3). */
+  decimals?: number;
   points: {
     name: string;
     x: number;
@@ -133,8 +143,12 @@ export interface SketchView {
       | 'straight'
       | 'arc'
       | 'transition'
-      | 'tick';
+      | 'tick'
+      | 'staff'
+      | 'collimation';
     label?: string;
+    /** Write the line's bearing and distance beside it (plan views with a `unit`). */
+    measure?: boolean;
   }[];
   /** Free labels (e.g. a computed value written near a point). */
   notes: { x: number; y: number; text: string }[];

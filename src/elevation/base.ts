@@ -23,9 +23,7 @@ import { angleToDegrees } from '../readings/angle.js';
 import { spreadFromDegrees } from '../readings/spread.js';
 import { readVertical, type VerticalInput } from '../readings/vertical.js';
 import { rootOps } from './roots.js';
-import { heightFromQuadrance } from './signed-height.js';
-import { approxSqrt } from '../readings/numeric.js';
-import { asRoot, isSurd, type Surd } from '../geometry/surd.js';
+import { heightDifference, signedHeightOfRoot } from './signed-height.js';
 
 /**
  * Where the foot of the point lies, seen along the base: `'between'` when its
@@ -55,26 +53,21 @@ export interface BaseHeight<T, E extends boolean> {
    * within 10⁻⁴⁸ relative (a value in `decimal` and `float`, rounded as there).
    */
   readonly height: Root<T, E>;
-  /** heights[0] − heights[1] when both readings are given. */
+  /**
+   * verticalQuadrances[0] − verticalQuadrances[1] when both readings are given: a difference of
+   * quadrances (square of the length unit). See {@link BaseHeight.heightDiscrepancy} for the
+   * same disagreement as a length.
+   */
   readonly discrepancy: Root<T, E> | undefined;
+  /**
+   * h₁ − h₂, the signed heights from the first and the second reading, in the length unit
+   * (e.g. metres), when both readings are given: the disagreement to compare with a tolerance.
+   * Computed as (H₁ − H₂)/(|h₁| + |h₂|) (no cancellation); exact in `rational` when the two
+   * heights are rational or share a radicand, otherwise a rational within 10⁻⁴⁰ relative.
+   */
+  readonly heightDiscrepancy: Root<T, E> | undefined;
   /** +1 above the stations' level, −1 below, 0 on it. */
   readonly sign: -1 | 0 | 1;
-}
-
-/** ±√H for H a root: exact where H is rational, else through the arithmetic's approximate root. */
-function signedHeightOfRoot<T, E extends boolean>(
-  A: Arithmetic<T, E>,
-  H: Root<T, E>,
-  sign: -1 | 0 | 1,
-): Root<T, E> {
-  if (!isSurd(H)) return heightFromQuadrance(A, H as T, sign);
-  const s = H as Surd<T>;
-  const q = s.toRational();
-  if (q !== undefined) return heightFromQuadrance(A, q, sign);
-  // a + b√d to A.digits + 10 significant digits (the surd rounds it exactly), then its root
-  const value = A.from(s.toPrecision(A.digits + 10));
-  const h = approxSqrt(A, A.sign(value) < 0 ? A.zero : value);
-  return asRoot(A, sign < 0 ? A.neg(h) : h);
 }
 
 /**
@@ -103,7 +96,8 @@ function signedHeightOfRoot<T, E extends boolean>(
  * @param input `base`: the quadrance between the stations; either `spreads: [s1, s2]` with
  *   `foot: 'between' | 'beyond'`, or `angles: [a1, a2]`; `vertical: [R1, R2]` (either may
  *   be `undefined`, not both)
- * @returns `{ horizontal, spreadAtFoot, heights, H, discrepancy, sign }`
+ * @returns `{ horizontalQuadrances, spreadAtFoot, verticalQuadrances, H, height, discrepancy,
+ *   heightDiscrepancy, sign }`
  * @throws {QuadspreadError} `INVALID_ARGUMENT` for a missing or unknown `foot`, both or
  *   neither of `spreads` and `angles`, or no vertical reading; `COLLINEAR_POINTS` when a
  *   spread is 0 (the foot on the base line); `DEGENERATE_TRIANGLE` when the spreads admit
@@ -249,6 +243,10 @@ export function heightFromBase<T, E extends boolean>(
     H,
     height: signedHeightOfRoot(A, H, finalSign),
     discrepancy,
+    heightDiscrepancy:
+      heights[0] !== undefined && heights[1] !== undefined
+        ? heightDifference(A, heights[0], heights[1], finalSign)
+        : undefined,
     sign: finalSign,
   };
 }

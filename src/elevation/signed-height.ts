@@ -4,9 +4,10 @@
  * @module elevation
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { invalidArgument, show, checkArithmetic } from '../errors.js';
+import { QuadspreadError, invalidArgument, show, checkArithmetic } from '../errors.js';
 import { readQuadrance } from '../geometry/validate.js';
-import { isSurd, sqrtOf, type Root, type Surd } from '../geometry/surd.js';
+import { asRoot, isSurd, sqrtOf, type Root, type Surd } from '../geometry/surd.js';
+import { approxSqrt } from '../readings/numeric.js';
 
 /**
  * The signed height h = ±√H of a point whose vertical quadrance above (or below) a level is H:
@@ -42,4 +43,61 @@ export function heightFromQuadrance<T, E extends boolean>(
   const h = sqrtOf(A, q);
   if (sign >= 0) return h;
   return (isSurd(h) ? (h as Surd<T>).neg() : A.neg(h as T)) as Root<T, E>;
+}
+
+/** ±√H for H a root: exact where H is rational, else through the arithmetic's approximate root. @internal */
+export function signedHeightOfRoot<T, E extends boolean>(
+  A: Arithmetic<T, E>,
+  H: Root<T, E>,
+  sign: -1 | 0 | 1,
+): Root<T, E> {
+  if (!isSurd(H)) return heightFromQuadrance(A, H as T, sign);
+  const s = H as Surd<T>;
+  const q = s.toRational();
+  if (q !== undefined) return heightFromQuadrance(A, q, sign);
+  // a + b√d to A.digits + 10 significant digits (the surd rounds it exactly), then its root
+  const value = A.from(s.toPrecision(A.digits + 10));
+  const h = approxSqrt(A, A.sign(value) < 0 ? A.zero : value);
+  return asRoot(A, sign < 0 ? A.neg(h) : h);
+}
+
+/**
+ * h₁ − h₂ for two heights on the same side of the level (sign +1 above, −1 below), from their
+ * vertical quadrances H₁, H₂: sign·(√H₁ − √H₂), a length. Exact (a surd) in an exact arithmetic
+ * when the two roots share a radicand or are rational; otherwise (H₁ − H₂)/(√H₁ + √H₂), free of
+ * cancellation, with the roots to the arithmetic's digits + 10 (a rational in `rational`).
+ * @internal
+ */
+export function heightDifference<T, E extends boolean>(
+  A: Arithmetic<T, E>,
+  H1: Root<T, E>,
+  H2: Root<T, E>,
+  sign: -1 | 0 | 1,
+): Root<T, E> {
+  const h1 = signedHeightOfRoot(A, H1, 1);
+  const h2 = signedHeightOfRoot(A, H2, 1);
+  const sg = sign < 0 ? -1 : 1;
+  if (!A.exact) {
+    const sum = A.add(h1 as T, h2 as T);
+    if (A.isZero(sum)) return A.zero as Root<T, E>;
+    const d = A.div(A.sub(H1 as T, H2 as T), sum);
+    return (sg < 0 ? A.neg(d) : d) as Root<T, E>;
+  }
+  const s1 = h1 as Surd<T>;
+  const s2 = h2 as Surd<T>;
+  try {
+    const d = s1.sub(s2);
+    return (sg < 0 ? d.neg() : d) as Root<T, E>;
+  } catch (e) {
+    if (!(e instanceof QuadspreadError) || e.code !== 'DIFFERENT_RADICANDS') throw e;
+  }
+  const digits = A.digits + 10;
+  const num = A.from(asSurd(A, H1).sub(asSurd(A, H2)).toPrecision(digits));
+  const den = A.add(A.from(s1.toPrecision(digits)), A.from(s2.toPrecision(digits)));
+  const d = A.div(num, den);
+  return asRoot(A, sg < 0 ? A.neg(d) : d);
+}
+
+function asSurd<T, E extends boolean>(A: Arithmetic<T, E>, x: Root<T, E>): Surd<T> {
+  return isSurd(x) ? (x as Surd<T>) : (asRoot(A, x as T) as Surd<T>);
 }

@@ -17,7 +17,7 @@ import { readPoint } from '../geometry/validate.js';
 import type { PointInput } from '../geometry/point.js';
 import { readVertical, type VerticalInput } from '../readings/vertical.js';
 import { heightFromReading } from './height.js';
-import { heightFromQuadrance } from './signed-height.js';
+import { heightDifference, heightFromQuadrance } from './signed-height.js';
 import type { Root } from '../geometry/surd.js';
 
 /** The result of {@link heightFromTwoStations}. */
@@ -26,8 +26,15 @@ export interface TwoStationHeight<T> {
   readonly H1: T;
   /** H from the second station. */
   readonly H2: T;
-  /** H1 − H2: zero for consistent readings. */
+  /** H1 − H2, a difference of quadrances (square of the length unit): zero for consistent readings. */
   readonly discrepancy: T;
+  /**
+   * h₁ − h₂, the signed heights from the two readings, in the length unit (e.g. metres): the
+   * disagreement to compare with a tolerance. An exact surd in `rational` when √H1 and √H2 are
+   * rational or share a radicand, otherwise a value within 10⁻⁴⁰ relative; a value in `decimal`
+   * and `float`.
+   */
+  readonly heightDiscrepancy: Root<T, boolean>;
   /** The weighted mean (w₁H₁ + w₂H₂)/(w₁ + w₂): the point's vertical quadrance. */
   readonly H: T;
   /**
@@ -54,7 +61,7 @@ export interface TwoStationHeight<T> {
  * @param A the arithmetic
  * @param input `stations`: the two stations `{ x, y }` (x east, y north); `foot`: the foot of
  *   the point in plan; `vertical`: the two readings (spreads or signed readings), same order
- * @returns `{ H1, H2, discrepancy, H, weights, sign }`
+ * @returns `{ H1, H2, discrepancy, heightDiscrepancy, H, height, weights, sign }`
  * @throws {QuadspreadError} `COINCIDENT_POINTS` when a station is at the foot;
  *   `VERTICAL_SIGHT` for a spread of 1; `INCONSISTENT_READINGS` when one reading is above
  *   the horizon and the other below; `INVALID_ARGUMENT` unless two stations and two readings
@@ -118,6 +125,12 @@ export function heightFromTwoStations<T>(
     H1: H[0]!,
     H2: H[1]!,
     discrepancy: A.sub(H[0]!, H[1]!),
+    heightDiscrepancy: heightDifference(
+      A as Arithmetic<T, boolean>,
+      H[0]! as Root<T, boolean>,
+      H[1]! as Root<T, boolean>,
+      sign,
+    ),
     H: mean,
     height: heightFromQuadrance(A as Arithmetic<T, boolean>, mean, A.isZero(mean) ? 0 : sign),
     weights: [w1, w2],

@@ -9,13 +9,37 @@
  * `cross`, `spreadOfVectors`, `triangle`, the line functions) take values made by `point`
  * (or arrays `[x, y]` of the arithmetic's values) and `line`/`lineThrough`, as the arithmetic's
  * own operations take its values; the solvers read `{ x, y }` or `[x, y]` of numbers or text.
- * Everything else (constants, classes, types, the other arithmetics) is re-exported unchanged.
+ * Everything else (constants, classes, types, the other arithmetics) is re-exported unchanged,
+ * except the uncertainty functions: this entry's solvers compute in its one arithmetic and
+ * cannot take uncertain values, so for budgets use the generic entry with `uncertain(base)`
+ * (not exported here: `budget`, `measured`, `measuredAngle`, `measuredDistance`,
+ * `measuredGrade`, `measuredQuadrance`, `measuredSpread`, `measuredVertical`, `normalInputs`,
+ * `sensitivities`, `spreadOfAngle`, `uncertain`, `verticalOfAngle`, `withDerivative`).
  *
  * @example
  * ```ts
- * import { point, quadrance } from 'quadspread/float';
+ * import { point, quadrance, inverse, heightFromSight } from 'quadspread/float';
  * quadrance(point(0, 0), point(3, 4));
  * //=> 25
+ * const i = inverse({ x: 0, y: 0 }, { x: 30, y: 40 });
+ * [i.distance, i.quadrance];
+ * //=> [50, 2500]
+ * // a sight over 150 m (quadrance 22500 m²) at vertical spread 1/2 (45°)
+ * heightFromSight({ horizontalQuadrance: 22500, vertical: 0.5 });
+ * //=> { H: 22500, height: 150, sign: 1 }
+ * ```
+ *
+ * @example
+ * ```ts
+ * // budgets: the generic entry with an uncertain arithmetic over the base, here float
+ * import { uncertain, float, measured, heightFromSight, budget } from 'quadspread';
+ * const U = uncertain(float);
+ * const Q = measured(U, 22500, 3, 'Q'); // horizontal quadrance, m², σ 3 m² (150 m ± 0.01 m)
+ * const R = measured(U, 0.5, 0.0001, 'R'); // vertical spread, σ 0.0001
+ * const r = heightFromSight(U, { horizontalQuadrance: Q, vertical: R });
+ * // var H = (R/(1 − R))²·3² + (Q/(1 − R)²)²·0.0001² = 9 + 81
+ * [r.H.value, budget(U, r.H).variance];
+ * //=> [22500, 90]
  * ```
  *
  * @module quadspread/float
@@ -539,9 +563,6 @@ export const tripleSpreadResidual: Bound<typeof g.tripleSpreadResidual<Value>> =
 /** {@link g.twoPegTest | twoPegTest} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const twoPegTest: Bound<typeof g.twoPegTest<Value>> = (input) => g.twoPegTest<Value>(arithmetic, input);
 
-/** {@link g.uncertain | uncertain} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
-export const uncertain: Bound<typeof g.uncertain<Value, false>> = () => g.uncertain<Value, false>(arithmetic);
-
 /** {@link g.vectorQuadrance | vectorQuadrance} with the arithmetic fixed to `float`: the same arguments after the arithmetic. @function */
 export const vectorQuadrance: Bound<typeof g.vectorQuadrance<Value>> = (v) => g.vectorQuadrance<Value>(arithmetic, v);
 
@@ -570,15 +591,13 @@ export const zenithFromVertical: Bound<typeof g.zenithFromVertical<Value>> = (re
 export const zenithToElevation: Bound<typeof g.zenithToElevation<Value>> = (degrees) => g.zenithToElevation<Value>(arithmetic, degrees);
 
 export {
-  ANGLE_UNITS, AREA_UNITS, baardaTest, BEARING_PARALLEL_TOLERANCE, budget, chiSquareCdf,
+  ANGLE_UNITS, AREA_UNITS, baardaTest, BEARING_PARALLEL_TOLERANCE, chiSquareCdf,
   chiSquareQuantile, crs, CRS_CODES, DANGER_CIRCLE_TOLERANCE, decimal, decimalElementary,
   DEFAULT_EARTH_RADIUS_M, DEFAULT_REFRACTION, defineEllipsoid, ellipsoidByName, ERROR_CODES,
   fCdf, float, fQuantile, GRS80, isSurd, LEVELLING_ORDERS, MAX_DECIMAL_DIGITS, MAX_EXPONENT,
-  MAX_INPUT_LENGTH, measured, measuredAngle, measuredDistance, measuredGrade, measuredQuadrance,
-  measuredSpread, measuredVertical, METRES_PER_UNIT, monteCarlo, normalCdf, normalInputs,
-  normalQuantile, QuadspreadError, randomStream, rational, RATIONAL_TRANSCENDENTAL_DIGITS,
-  readRatio, roundOff, sensitivities, spreadOfAngle, tauCritical, Uncertain, utmProjection,
-  utmZone, verticalOfAngle, WGS84, withDerivative,
+  MAX_INPUT_LENGTH, METRES_PER_UNIT, monteCarlo, normalCdf, normalQuantile, QuadspreadError,
+  randomStream, rational, RATIONAL_TRANSCENDENTAL_DIGITS, readRatio, roundOff, tauCritical,
+  Uncertain, utmProjection, utmZone, WGS84,
 } from '../index.js';
 export type {
   AdjustedHeight, AdjustedLevelObservation, AdjustedNetworkObservation, AdjustedPoint,

@@ -7,7 +7,7 @@
  * @module geodesy
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { invalidArgument, checkArithmetic } from '../errors.js';
+import { show, invalidArgument, checkArithmetic } from '../errors.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { root, toDegrees } from './internal.js';
 import { authalicQ, fromAuthalicQ } from './authalic.js';
@@ -133,7 +133,7 @@ export const ALBERS: MethodImpl = {
 
 const pick = (method: unknown, where: string): MethodImpl => {
   if (method === 'albers-equal-area') return ALBERS;
-  throw invalidArgument(where, `this function projects 'albers-equal-area', not ${String(method)}`);
+  throw invalidArgument(where, `this function projects 'albers-equal-area', not ${show(method)}`);
 };
 
 /**

@@ -11,7 +11,7 @@
  * @module geodesy
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { QuadspreadError, invalidArgument, checkArithmetic } from '../errors.js';
+import { show, QuadspreadError, invalidArgument, checkArithmetic } from '../errors.js';
 import { root, toDegrees } from './internal.js';
 import {
   forwardWith,
@@ -250,7 +250,7 @@ export const CASSINI: MethodImpl = {
 
 const pick = (method: unknown, where: string): MethodImpl => {
   if (method === 'cassini-soldner') return CASSINI;
-  throw invalidArgument(where, `this function projects 'cassini-soldner', not ${String(method)}`);
+  throw invalidArgument(where, `this function projects 'cassini-soldner', not ${show(method)}`);
 };
 
 /**

@@ -8,7 +8,7 @@
  * @module geodesy
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { invalidArgument, checkArithmetic } from '../errors.js';
+import { show, invalidArgument, checkArithmetic } from '../errors.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { root, toDegrees } from './internal.js';
 import { authalicQ, fromAuthalicQ } from './authalic.js';
@@ -175,7 +175,7 @@ const pick = (method: unknown, where: string): MethodImpl => {
   if (method === 'lambert-azimuthal-equal-area') return LAEA;
   throw invalidArgument(
     where,
-    `this function projects 'lambert-azimuthal-equal-area', not ${String(method)}`,
+    `this function projects 'lambert-azimuthal-equal-area', not ${show(method)}`,
   );
 };
 

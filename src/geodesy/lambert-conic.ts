@@ -7,7 +7,7 @@
  * @module geodesy
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { invalidArgument, checkArithmetic } from '../errors.js';
+import { show, invalidArgument, checkArithmetic } from '../errors.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { root, toDegrees } from './internal.js';
 import {
@@ -157,7 +157,7 @@ const pick = (method: unknown, where: string): MethodImpl => {
   if (method === 'lambert-conic-2sp') return LCC_2SP;
   throw invalidArgument(
     where,
-    `this function projects 'lambert-conic-1sp' or 'lambert-conic-2sp', not ${String(method)}`,
+    `this function projects 'lambert-conic-1sp' or 'lambert-conic-2sp', not ${show(method)}`,
   );
 };
 

@@ -7,7 +7,7 @@
  * @module geodesy
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { invalidArgument, checkArithmetic } from '../errors.js';
+import { show, invalidArgument, checkArithmetic } from '../errors.js';
 import { toDegrees } from './internal.js';
 import {
   forwardWith,
@@ -107,7 +107,7 @@ const pick = (method: unknown, where: string): MethodImpl => {
   if (method === 'mercator-2sp') return MERCATOR_2SP;
   throw invalidArgument(
     where,
-    `this function projects 'mercator-1sp' or 'mercator-2sp', not ${String(method)}`,
+    `this function projects 'mercator-1sp' or 'mercator-2sp', not ${show(method)}`,
   );
 };
 

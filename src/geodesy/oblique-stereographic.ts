@@ -9,7 +9,7 @@
  * @module geodesy
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { invalidArgument, checkArithmetic } from '../errors.js';
+import { show, invalidArgument, checkArithmetic } from '../errors.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { root, toDegrees } from './internal.js';
 import {
@@ -162,7 +162,7 @@ const pick = (method: unknown, where: string): MethodImpl => {
   if (method === 'oblique-stereographic') return OBLIQUE_STEREOGRAPHIC;
   throw invalidArgument(
     where,
-    `this function projects 'oblique-stereographic', not ${String(method)}`,
+    `this function projects 'oblique-stereographic', not ${show(method)}`,
   );
 };
 

@@ -6,7 +6,7 @@
  * @module geodesy
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { invalidArgument, checkArithmetic } from '../errors.js';
+import { show, invalidArgument, checkArithmetic } from '../errors.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { root, toDegrees } from './internal.js';
 import {
@@ -152,7 +152,7 @@ const pick = (method: unknown, where: string): MethodImpl => {
   if (method === 'polar-stereographic-b') return POLAR_STEREOGRAPHIC_B;
   throw invalidArgument(
     where,
-    `this function projects 'polar-stereographic-a' or 'polar-stereographic-b', not ${String(method)}`,
+    `this function projects 'polar-stereographic-a' or 'polar-stereographic-b', not ${show(method)}`,
   );
 };
 

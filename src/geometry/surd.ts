@@ -4,7 +4,7 @@
  * @module geometry
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { isqrt } from '../arithmetic/exact.js';
+import { isqrt, SURD_BRAND } from '../arithmetic/exact.js';
 import {
   QuadspreadError,
   show,
@@ -36,6 +36,11 @@ import { readNumber } from './validate.js';
  * Comparison (`cmp`, `eq`, `sign`) is exact for any two surds, whatever their radicands.
  * Plain values (`T`, JS numbers, numeric text, bigints) are accepted wherever a surd is,
  * and read with the arithmetic's `from`.
+ *
+ * **Text**: `toString()` (and `JSON.stringify`, Node's `console.log` and `util.inspect`) write
+ * the exact value in this package's notation: `41 + 20√2`, `-3√5/2`, `√10161/2` (the square
+ * root sign binds to the digits after it; a coefficient p/q is written `p√d/q`). The exact
+ * arithmetic's `toString`, `toPrecision` and `toNumber` also accept a surd and defer to it.
  *
  * @example
  * ```ts
@@ -117,8 +122,9 @@ export interface Surd<T> {
  */
 export type Root<T, E extends boolean> = E extends true ? Surd<T> : T;
 
-const BRAND: unique symbol = /* @__PURE__ */ Symbol.for('quadspread.surd') as never;
-// Node's console shows `Surd(41 + 20√2)` rather than the fields and the arithmetic. The method
+const BRAND = SURD_BRAND;
+// Node's console and util.inspect show a surd as its exact text, `41 + 20√2` (as `toString`),
+// rather than its fields and arithmetic; the well-known symbol keeps this browser-safe. The method
 // goes on the prototype when the first surd is made, not as a computed class member, so that a
 // bundler can drop the whole class from a program that never makes a surd.
 let inspectReady = false;
@@ -126,7 +132,7 @@ function showInConsole(): void {
   inspectReady = true;
   Object.defineProperty(SurdValue.prototype, Symbol.for('nodejs.util.inspect.custom'), {
     value(this: Surd<unknown>): string {
-      return `Surd(${this.toString()})`;
+      return this.toString();
     },
   });
 }

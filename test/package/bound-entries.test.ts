@@ -11,6 +11,7 @@ interface Api {
   bound: { name: string }[];
   values: string[];
   typesOnly: string[];
+  omitted: string[];
 }
 
 const { api, stale } = generate({ check: true }) as { api: Api; stale: string[] };
@@ -32,6 +33,19 @@ describe('bound entries', () => {
     expect(api.values).toEqual(
       expect.arrayContaining(['QuadspreadError', 'ERROR_CODES', 'rational', 'float', 'decimal']),
     );
+  });
+
+  it('leaves out the uncertainty functions, which the generic entry keeps', () => {
+    const want = ['uncertain', 'budget', 'measured', 'measuredAngle', 'measuredQuadrance'];
+    expect(api.omitted).toEqual(expect.arrayContaining(want));
+    const g = generic as unknown as Record<string, unknown>;
+    for (const key of want) expect(typeof g[key]).toBe('function');
+    for (const [, entry] of entries) {
+      const mod = entry as unknown as Record<string, unknown>;
+      for (const key of api.omitted) expect(mod[key], key).toBeUndefined();
+    }
+    // what is left is usable there: monteCarlo works on plain numbers
+    expect(typeof (F as unknown as Record<string, unknown>).monteCarlo).toBe('function');
   });
 
   for (const [name, entry, fixed] of entries) {

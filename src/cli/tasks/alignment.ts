@@ -15,7 +15,7 @@ import {
 } from '../../index.js';
 import type { HorizontalCurveInput } from '../../index.js';
 import { JobInvalid } from '../failure.js';
-import type { RawQuantity, TaskKind } from '../task.js';
+import type { Cell, RawQuantity, RawTable, TaskKind } from '../task.js';
 import type { SketchView } from '../report.js';
 import { readLength } from '../values.js';
 import type { Input } from '../values.js';
@@ -210,8 +210,40 @@ export const alignmentTask: TaskKind = {
         });
         const st = (c: V) => formatStation(A, c, { per, decimals: 3 });
         const results: RawQuantity<V>[] = [];
+        // Row-wise values (elements, set-out points, profile levels) are laid out in the tables;
+        // as quantities they stay in JSON under their names (and in text with --detail).
+        const tables: RawTable<V>[] = [
+          {
+            name: 'alignment-elements',
+            title: 'Elements of the centre line',
+            columns: [
+              { label: 'No.' },
+              { label: 'Type' },
+              { label: 'Radius', kind: 'length', unit: u },
+              { label: 'From' },
+              { label: 'To' },
+              { label: 'Bearing in', kind: 'bearing' },
+              { label: 'Bearing out', kind: 'bearing' },
+              { label: 'Length', kind: 'length', unit: u },
+            ],
+            rows: h.elements.map((e, i): Cell<V>[] => [
+              String(i + 1),
+              e.type,
+              e.type === 'straight' ? '' : e.radius,
+              st(e.startChainage),
+              st(e.endChainage),
+              e.bearingIn,
+              e.bearingOut,
+              e.length,
+            ]),
+            notes: [
+              'From and To are chainages written as kilometres (or hundreds of feet) + the remainder.',
+            ],
+          },
+        ];
         h.elements.forEach((e, i) => {
           results.push({
+            internal: true,
             name: `element_${i + 1}.start`,
             label: `Element ${i + 1}: ${e.type}${e.type !== 'straight' ? ` (R ${A.toPrecision(e.radius, 8)})` : ''} from ${st(e.startChainage)} to ${st(e.endChainage)}, bearing ${A.toPrecision(e.bearingIn, 9)}° → ${A.toPrecision(e.bearingOut, 9)}°; length`,
             unit: u,
@@ -261,12 +293,37 @@ export const alignmentTask: TaskKind = {
               offsets: offsets.map((o) => env.get(o)),
             })
           : [];
+        if (rows.length > 0) {
+          tables.push({
+            name: 'setting-out',
+            title: 'Setting-out table',
+            columns: [
+              { label: 'Chainage' },
+              { label: 'Element' },
+              { label: 'Bearing', kind: 'bearing' },
+              { label: 'Offset', kind: 'length', unit: u },
+              { label: 'East', kind: 'length', unit: u },
+              { label: 'North', kind: 'length', unit: u },
+            ],
+            rows: rows.flatMap((r) =>
+              r.points.map((p, j): Cell<V>[] =>
+                j === 0
+                  ? [st(r.chainage), r.type, r.bearing, p.offset, p.x, p.y]
+                  : ['', '', '', p.offset, p.x, p.y],
+              ),
+            ),
+            notes: [
+              'Offsets are positive to the right looking ahead, negative to the left; 0 is the centre line.',
+            ],
+          });
+        }
         for (const r of rows) {
           for (const p of r.points) {
             const tag = A.isZero(p.offset)
               ? 'CL'
               : `${A.sign(p.offset) > 0 ? 'R' : 'L'}${A.toPrecision(A.abs(p.offset), 6)}`;
             results.push({
+              internal: true,
               name: `setout.${st(r.chainage)}.${tag}.east`,
               label: `Set-out ${st(r.chainage)} ${tag} (${r.type}) east`,
               unit: u,
@@ -274,6 +331,7 @@ export const alignmentTask: TaskKind = {
               approx: true,
             });
             results.push({
+              internal: true,
               name: `setout.${st(r.chainage)}.${tag}.north`,
               label: `Set-out ${st(r.chainage)} ${tag} (${r.type}) north`,
               unit: u,
@@ -335,22 +393,41 @@ export const alignmentTask: TaskKind = {
             const last = v.points[v.points.length - 1]!.chainage;
             const step = env.get(interval);
             let k = Math.ceil(A.toNumber(A.div(first, step)));
+            const profileRows: Cell<V>[][] = [];
             for (let n = 0; n < 100000; n++, k++) {
               const c = A.mul(A.from(k), step);
               if (A.cmp(c, last) > 0) break;
               if (A.cmp(c, first) < 0) continue;
               const p = profileLevel(A, v, c);
+              profileRows.push([st(c), p.level, A.mul(p.grade, A.from(100))]);
               results.push({
+                internal: true,
                 name: `profile.${st(c)}.level`,
                 label: `Profile ${st(c)} level (grade ${A.toPrecision(A.mul(p.grade, A.from(100)), 6)} %)`,
                 unit: u,
                 value: p.level,
               });
             }
+            tables.push({
+              name: 'profile',
+              title: 'Profile: levels along the centre line',
+              columns: [
+                { label: 'Chainage' },
+                { label: 'Level', kind: 'level', unit: u },
+                { label: 'Grade', kind: 'percent', unit: '%' },
+              ],
+              rows: profileRows,
+            });
           }
         }
         const sketch = env.drawing ? drawing(env.num, h, v, exaggeration, u, st) : undefined;
-        return { results, checks: [], notes, ...(sketch ? { sketch } : {}) };
+        return {
+          results,
+          checks: [],
+          notes,
+          ...(env.drawing ? { tables } : {}),
+          ...(sketch ? { sketch } : {}),
+        };
       },
     };
   },
@@ -367,6 +444,8 @@ function drawing<V>(
   const plan: SketchView = {
     title: 'Alignment: plan',
     view: 'plan',
+    unit: unit,
+    north: true,
     caption:
       'x east, y north; straights solid, arcs thick, transitions dashed; ticks at element ends',
     points: h.points.map((p, i) => ({
@@ -414,6 +493,7 @@ function drawing<V>(
     const profile: SketchView = {
       title: `Alignment: profile (levels exaggerated ×${exaggeration})`,
       view: 'elevation',
+      unit: unit,
       caption: `x chainage, y level × ${exaggeration} (${unit}); grade line dashed, profile solid`,
       points: v.points.map((p, i) => ({
         name: `VIP${i + 1}`,

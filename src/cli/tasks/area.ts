@@ -62,6 +62,7 @@ export const areaTask: TaskKind = {
               {
                 title: `Parcel ${corners.map((c) => c.name).join('–')}`,
                 view: 'plan' as const,
+                unit: ctx.unitName,
                 points: corners.map((c, i) => ({
                   name: c.name,
                   ...nums(env, pts[i]!),
@@ -70,7 +71,14 @@ export const areaTask: TaskKind = {
                 lines: pts.map((p, i) => {
                   const a = nums(env, p),
                     b = nums(env, pts[(i + 1) % pts.length]!);
-                  return { x1: a.x, y1: a.y, x2: b.x, y2: b.y, role: 'boundary' as const };
+                  return {
+                    x1: a.x,
+                    y1: a.y,
+                    x2: b.x,
+                    y2: b.y,
+                    role: 'boundary' as const,
+                    measure: true,
+                  };
                 }),
                 notes: [
                   {

@@ -198,6 +198,7 @@ export const baseHeightTask: TaskKind = {
             {
               title: `${name} from the base ${n1}–${n2}: plan`,
               view: 'plan',
+              unit: u,
               caption: `plan with the base along x (${n1} at the origin)`,
               points: [
                 { name: n1, x: 0, y: 0, role: 'station' },
@@ -221,6 +222,7 @@ export const baseHeightTask: TaskKind = {
             {
               title: `${name} from the base ${n1}–${n2}: elevation`,
               view: 'elevation',
+              unit: u,
               points: [
                 { name: n1, x: -Math.sqrt(q1), y: 0, role: 'station' },
                 { name: n2, x: -Math.sqrt(q2), y: 0, role: 'station' },

@@ -247,6 +247,7 @@ export const heightTask: TaskKind = {
             views.push({
               title: `Height of ${name}: plan`,
               view: 'plan' as const,
+              unit: u,
               points: [
                 ...readings
                   .filter((r) => r.station)
@@ -270,6 +271,7 @@ export const heightTask: TaskKind = {
           views.push({
             title: `Height of ${name}: elevation`,
             view: 'elevation' as const,
+            unit: u,
             points: [
               ...readings.map((r, i) => ({
                 name: r.label,

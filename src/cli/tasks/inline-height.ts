@@ -197,6 +197,7 @@ export const inlineHeightTask: TaskKind = {
             {
               title: `${name} from the line: plan (chainage along x)`,
               view: 'plan' as const,
+              unit: u,
               caption: 'plan along the line: x chainage, y offset (the side is not known)',
               points: [
                 ...stations.map((s, i) => ({
@@ -224,6 +225,7 @@ export const inlineHeightTask: TaskKind = {
             {
               title: `${name} from the line: elevation (distance from the foot across)`,
               view: 'elevation' as const,
+              unit: u,
               points: [
                 ...stations.map((s, i) => ({
                   name: s.label,

@@ -43,6 +43,7 @@ export const intersectionTask: TaskKind = {
             {
               title: `Intersection ${name}`,
               view: 'plan' as const,
+              unit: ctx.unitName,
               points: [
                 ...all.map((p, i) => ({ name: p.name, ...n[i]!, role: 'control' as const })),
                 { name, ...x, role: 'computed' as const },

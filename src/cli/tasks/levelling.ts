@@ -9,6 +9,7 @@ import { QuadspreadError, levelRun, rational } from '../../index.js';
 import type { LevelSight } from '../../index.js';
 import { JobInvalid } from '../failure.js';
 import type { Env, Outcome, RawCheck, RawQuantity, RawTable, TaskKind, Value } from '../task.js';
+import type { SketchView } from '../report.js';
 import { plain, readLength } from '../values.js';
 import type { Input } from '../values.js';
 import { taskSchema } from './common.js';
@@ -317,8 +318,120 @@ export const levellingTask: TaskKind = {
             ],
           });
         }
-        return { results, checks, notes, tables };
+        const sketch = env.drawing
+          ? [
+              profileSketch(
+                run.rows.map((r) => ({
+                  station: r.station ?? '',
+                  level: env.num((close ? r.adjusted : r.level) as V),
+                  bs: r.bs === undefined ? undefined : env.num(r.bs as V),
+                  is: r.is === undefined ? undefined : env.num(r.is as V),
+                  fs: r.fs === undefined ? undefined : env.num(r.fs as V),
+                })),
+                sights.map((s) => (s.distance ? env.num(env.get(s.distance)) : undefined)),
+                u,
+                run.misclosureMm === undefined ? undefined : env.num(run.misclosureMm as V),
+              ),
+            ]
+          : undefined;
+        return { results, checks, notes, tables, ...(sketch ? { sketch } : {}) };
       },
     };
   },
 };
+
+/** One row of the level book, as numbers, for the sketch. */
+interface ProfileRow {
+  station: string;
+  level: number;
+  bs: number | undefined;
+  is: number | undefined;
+  fs: number | undefined;
+}
+
+/**
+ * The levelling profile: reduced levels against chainage (the booked distances added up, or the
+ * rows evenly spaced when distances are not booked), each staff drawn from its point up to the
+ * line of collimation it was read from (BS, IS, FS), and each set-up's line of collimation.
+ */
+function profileSketch(
+  rows: ProfileRow[],
+  distances: (number | undefined)[],
+  unit: string,
+  misclosureMm: number | undefined,
+): SketchView {
+  const measured = distances.slice(1).every((d) => d !== undefined);
+  const chainage: number[] = [];
+  rows.forEach((_, i) =>
+    chainage.push(i === 0 ? 0 : chainage[i - 1]! + (measured ? distances[i]! : 1)),
+  );
+  const view: SketchView = {
+    title: 'Levelling profile',
+    view: 'elevation',
+    caption: measured
+      ? `x chainage (${unit}, booked distances), y reduced level; staves to the collimation line`
+      : 'x booking order (rows evenly spaced: no distances), y reduced level; staves to the collimation line',
+    ...(measured ? { unit } : {}),
+    toScale: measured,
+    maxExaggeration: 1000,
+    points: rows.map((r, i) => ({
+      name: r.station || `row ${i + 1}`,
+      x: chainage[i]!,
+      y: r.level,
+      role:
+        i === 0 || (i === rows.length - 1 && misclosureMm !== undefined) ? 'control' : 'computed',
+    })),
+    lines: [],
+    notes: [],
+  };
+  const few = rows.length <= 12;
+  let hpc: number | undefined;
+  let from = 0;
+  const read = (i: number, kind: string, reading: number, top: number) => {
+    view.lines.push({
+      x1: chainage[i]!,
+      y1: rows[i]!.level,
+      x2: chainage[i]!,
+      y2: top,
+      role: 'staff',
+    });
+    if (few) view.notes.push({ x: chainage[i]!, y: top, text: `${kind} ${reading.toFixed(3)}` });
+  };
+  rows.forEach((r, i) => {
+    if (hpc !== undefined) {
+      if (r.is !== undefined) read(i, 'IS', r.is, hpc);
+      if (r.fs !== undefined) {
+        read(i, 'FS', r.fs, hpc);
+        view.lines.push({
+          x1: chainage[from]!,
+          y1: hpc,
+          x2: chainage[i]!,
+          y2: hpc,
+          role: 'collimation',
+        });
+      }
+    }
+    if (r.bs !== undefined) {
+      hpc = r.level + r.bs;
+      from = i;
+      read(i, 'BS', r.bs, hpc);
+    }
+  });
+  for (let i = 1; i < rows.length; i++)
+    view.lines.push({
+      x1: chainage[i - 1]!,
+      y1: rows[i - 1]!.level,
+      x2: chainage[i]!,
+      y2: rows[i]!.level,
+      role: 'ground',
+    });
+  if (misclosureMm !== undefined) {
+    const last = rows.length - 1;
+    view.notes.push({
+      x: chainage[last]!,
+      y: rows[last]!.level,
+      text: `misclosure ${misclosureMm.toFixed(1)} mm`,
+    });
+  }
+  return view;
+}

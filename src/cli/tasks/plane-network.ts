@@ -388,6 +388,8 @@ export const planeNetworkTask: TaskKind = {
             {
               title: `Plane network: standard error ellipses × ${k}`,
               view: 'plan',
+              unit: u,
+              north: true,
               caption: `x east, y north; error ellipses (standard, ${r.scale}) exaggerated ${k} times`,
               points: pts,
               lines,

@@ -79,6 +79,7 @@ export const resectionTask: TaskKind = {
             {
               title: `Resection of ${name}`,
               view: 'plan' as const,
+              unit: ctx.unitName,
               points: [
                 ...control.map((p, i) => ({ name: p.name, ...c[i]!, role: 'control' as const })),
                 { name, ...s, role: 'station' as const },

@@ -258,6 +258,7 @@ export const settingOutTask: TaskKind = {
             {
               title: `Setting out from ${st.station.name}`,
               view: 'plan',
+              unit: u,
               points: [
                 { name: st.station.name, ...s, role: 'station' },
                 ...bs.map((b) => ({ ...b, role: 'control' as const })),

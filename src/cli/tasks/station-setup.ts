@@ -85,6 +85,7 @@ export const stationSetupTask: TaskKind = {
             {
               title: `Set-up on ${st.station.name}: backsights and side shots`,
               view: 'plan',
+              unit: u,
               points: [
                 { name: st.station.name, ...s, role: 'station' },
                 ...bs.map((b) => ({ ...b, role: 'control' as const })),

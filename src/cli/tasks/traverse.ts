@@ -627,6 +627,7 @@ export const traverseTask: TaskKind = {
             {
               title: `Traverse ${start.name} → ${end!.name}`,
               view: 'plan' as const,
+              unit: u,
               points: adj.slice(0, close.kind === 'loop' ? -1 : undefined).map((p, i) => ({
                 name: names[i]!,
                 ...p,
@@ -647,12 +648,13 @@ export const traverseTask: TaskKind = {
                   x2: p.x,
                   y2: p.y,
                   role: 'adjusted' as const,
+                  measure: true,
                 })),
               ],
               notes: [
                 {
                   ...adj[adj.length - 1]!,
-                  text: `misclosure ${env.A.toPrecision(t.closure.east, 3)} E, ${env.A.toPrecision(t.closure.north, 3)} N`,
+                  text: `misclosure ${env.A.toPrecision(t.closure.east, 3)} ${u} E, ${env.A.toPrecision(t.closure.north, 3)} ${u} N`,
                 },
               ],
             },

@@ -268,6 +268,7 @@ export const trigHeightTask: TaskKind = {
             {
               title: 'Trigonometric sight: elevation',
               view: 'elevation',
+              unit: u,
               caption: 'elevation: from the station mark (left) to the far mark, height up',
               points: [
                 { name: 'station mark', x: 0, y: 0, role: 'station' },
