@@ -5,7 +5,7 @@
 // browser platform, dependencies fraction.js and big.js included as a consumer's bundler
 // would) and checks:
 //   - importing only `quadrance` and `float` from 'quadspread'      < 10 KiB (dependencies included)
-//   - `quadrance` and `point` from 'quadspread/float'                < 8 KiB
+//   - `quadrance` and `point` from 'quadspread/float'                < 10 KiB
 //   - float-only programs (`traverse`, the geodetic/geocentric conversions, `geodesicInverse` from
 //     'quadspread/float') bundle neither fraction.js nor big.js (esbuild's metafile inputs)
 //   - all of 'quadspread/io': its own modules under the io budget in AREA_BUDGETS
@@ -61,7 +61,8 @@ const CASES = [
   // module-level values were marked pure and it took `decimal`, with big.js, from dist/esm/).
   {
     name: "quadrance + point from 'quadspread/float'",
-    budget: 8 * KiB,
+    // 8 KiB until the typed operand checks of float and checkArithmetic reached this bundle.
+    budget: 10 * KiB,
     prints: '25',
     code: "import { quadrance, point } from 'quadspread/float';\nconsole.log(quadrance(point(0, 0), point(3, 4)));",
   },
@@ -113,7 +114,9 @@ const CASES = [
  * the whole 0.1 release had (120 KiB, geodesy included then).
  */
 const AREA_BUDGETS = {
-  core: 120 * KiB, // arithmetic, geometry, readings, elevation, cogo, uncertainty, errors, index
+  // 120 KiB until the stricter input checks, the input grammar (lengths, sigmas, DD.MMSS) and
+  // the field-book traverse arrived (measured 129 KiB).
+  core: 140 * KiB, // arithmetic, geometry, readings, elevation, cogo, uncertainty, errors, index
   geodesy: 70 * KiB, // ellipsoids, frames, projections, datum transformations, geodesics
   alignment: 40 * KiB,
   adjustment: 50 * KiB,

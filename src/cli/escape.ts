@@ -5,6 +5,7 @@
  *
  * @module cli
  */
+import { csvCell } from '../io/csv-cell.js';
 
 // C0 and C1 control characters, DEL, the line and paragraph separators, and the invisible
 // direction marks and overrides (Unicode Standard Annex #9, §2: explicit directional
@@ -56,17 +57,12 @@ export function markdownCode(text: string): string {
   return `${fence}${pad}${t}${pad}${fence}`;
 }
 
-/** A number as written by the batch command and read back by a spreadsheet. */
-const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+|\/\d+)?$/;
-
 /**
- * One CSV field, quoted as RFC 4180 §2 says (a field with a comma, quote or line break in
- * double quotes, quotes doubled), and neutralised against formula injection as the OWASP
- * "CSV Injection" guidance describes: a field that starts with `=`, `+`, `-`, `@`, a tab or a
- * carriage return and is not a number gets a leading `'` and is quoted, so a spreadsheet shows
- * it as text. Numbers (`-12.5`, `+3e-4`, `-1/3`) stay numbers.
+ * One CSV field of the batch output (comma-separated): quoted as RFC 4180 §2 says and
+ * neutralised against formula injection (the OWASP "CSV Injection" guidance) — the spreadsheet
+ * mode of the io entry's CSV writer (see `csvCell` in src/io/csv-cell.ts). Numbers (`-12.5`,
+ * `+3e-4`, `-1/3`) stay numbers.
  */
 export function csvField(field: string): string {
-  if (/^[=+\-@\t\r]/.test(field) && !NUMBER.test(field)) return `"'${field.replace(/"/g, '""')}"`;
-  return /[",\n\r]/.test(field) ? `"${field.replace(/"/g, '""')}"` : field;
+  return csvCell(field, ',', true);
 }

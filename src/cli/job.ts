@@ -25,6 +25,7 @@ import { CAUTION } from './report.js';
 import type { BudgetTerm, Quantity, Report, ReportHeader, TaskReport } from './report.js';
 import { findDuplicateKey } from './json-keys.js';
 import { jobSchema } from './schema.js';
+import { unpackAngles } from './angle-format.js';
 import type { Env, JobContext, JobPoint, Outcome, TaskKind, Value } from './task.js';
 import { joinPath, validate } from './validate.js';
 import { LENGTH_UNIT_NAMES, readLength } from './values.js';
@@ -151,7 +152,9 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
           : p,
       ),
     );
-  const j = job as {
+  // DD.MMSS angles, when the job says so, become decimal degrees before the tasks read them.
+  const given0 = job as { units?: { angles?: string } };
+  const j = (given0.units?.angles === 'dd.mmss' ? unpackAngles(job, schema) : job) as {
     title?: string;
     display?: Record<string, unknown>;
     report?: {
@@ -161,7 +164,7 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
       datum?: string;
       reference?: string;
     };
-    units?: { length?: LengthUnit };
+    units?: { length?: LengthUnit; angles?: 'degrees' | 'dd.mmss' };
     points?: Record<string, Record<string, unknown>>;
     tasks: Record<string, unknown>[];
   };

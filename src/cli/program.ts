@@ -22,6 +22,7 @@ import { parseDisplayOption } from './display.js';
 import { REPORT_SCHEMA } from './report-schema.js';
 import { jobSchema } from './schema.js';
 import { renderSketch } from './sketch.js';
+import { exportText, loadPoints, type GridOptions } from './interop.js';
 import { TASK_KINDS } from './tasks/index.js';
 import { version } from '../../package.json';
 
@@ -57,6 +58,12 @@ interface ReportOptions {
   date?: string;
   computedBy?: string;
   checkedBy?: string;
+  /** `--export <format> <file>`. */
+  export?: string[];
+  csvMode?: 'exchange' | 'spreadsheet';
+  grid?: string;
+  toWgs84?: string;
+  plane?: boolean;
 }
 
 function dateOption(value: string): string {
@@ -124,10 +131,43 @@ function addReportOptions(cmd: Command): Command {
     .option('--computed-by <name>', 'who computed, for the header')
     .option('--checked-by <name>', 'who checked, for the header')
     .option('-s, --sketch <file.svg>', 'also write an SVG sketch of the configuration to this file')
-    .option('-o, --out <file>', 'write the report to this file instead of the standard output');
+    .option('-o, --out <file>', 'write the report to this file instead of the standard output')
+    .option(
+      '--export <format-and-file...>',
+      'also write the points, traverses and parcels as geojson or csv to a file: --export geojson site.geojson (see docs/interop.md)',
+    )
+    .option('--grid <EPSG code>', 'the grid of the coordinates, for GeoJSON (e.g. EPSG:27700)')
+    .option(
+      '--to-wgs84 <file.json|coincident>',
+      "the grid's datum to WGS 84: a JSON file { method, parameters }, or coincident",
+    )
+    .option('--plane', 'GeoJSON of plane coordinates (marked as not RFC 7946) instead of WGS 84')
+    .addOption(
+      new Option('--csv-mode <mode>', 'CSV export: neutralise formulas, or keep names exactly')
+        .choices(['spreadsheet', 'exchange'])
+        .default('spreadsheet'),
+    );
+}
+
+/** Reads `--export <format> <file>`. */
+function exportOption(o: ReportOptions): { format: string; file: string } | undefined {
+  if (o.export === undefined) return undefined;
+  const [format, file, ...rest] = o.export;
+  if (file === undefined || rest.length > 0)
+    throw new JobInvalid(
+      '--export',
+      `give a format and a file, after the job file: --export geojson site.geojson (got ${o.export.map((a) => JSON.stringify(a)).join(' ')})`,
+    );
+  if (format !== 'geojson' && format !== 'csv')
+    throw new JobInvalid('--export', `${JSON.stringify(format)} is not geojson or csv`);
+  return { format, file };
 }
 
 function report(job: unknown, source: string, o: ReportOptions, io: Io, jobFile?: string): number {
+  const exp = exportOption(o);
+  for (const other of [o.out, o.sketch])
+    if (exp !== undefined && other !== undefined && sameFile(exp.file, other))
+      throw new JobInvalid('--export', `${JSON.stringify(exp.file)} is also another output file`);
   if (o.out !== undefined && o.sketch !== undefined && sameFile(o.out, o.sketch)) {
     throw new JobInvalid(
       '--sketch',
@@ -138,6 +178,7 @@ function report(job: unknown, source: string, o: ReportOptions, io: Io, jobFile?
   for (const [option, target] of [
     ['--out', o.out],
     ['--sketch', o.sketch],
+    ['--export', exp?.file],
   ] as const) {
     if (jobFile !== undefined && target !== undefined && sameFile(target, jobFile)) {
       throw new JobInvalid(
@@ -170,10 +211,18 @@ function report(job: unknown, source: string, o: ReportOptions, io: Io, jobFile?
   const files: { target: string; text: string }[] = [];
   if (o.out !== undefined) files.push({ target: o.out, text });
   if (o.sketch !== undefined) files.push({ target: o.sketch, text: renderSketch(r) });
+  if (exp !== undefined)
+    files.push({
+      target: exp.file,
+      text: exportText(exp.format, r, job, o as GridOptions & ReportOptions, (f) =>
+        readText(f, '--to-wgs84 file'),
+      ),
+    });
   writeFilesAtomic(files);
   if (o.out === undefined) io.stdout(text);
   else io.stderr(`report written to ${o.out}\n`);
   if (o.sketch !== undefined) io.stderr(`sketch written to ${o.sketch}\n`);
+  if (exp !== undefined) io.stderr(`${exp.format} written to ${exp.file}\n`);
   if (o.failOnCheck && r.summary.failed > 0) {
     io.stderr(
       `quadspread: ${r.summary.failed} of ${r.summary.checks} check${r.summary.checks === 1 ? '' : 's'} failed (--fail-on-check)\n`,
@@ -269,13 +318,23 @@ export function program(io: Io, outcome: { exitCode: number } = { exitCode: EXIT
     p
       .command('run')
       .description('run a job file (JSON; see docs/job-schema.json) and print its report')
-      .argument('<job.json>', 'the job file; - reads the job from the standard input'),
-  ).action(async (file: string, o: ReportOptions) => {
+      .argument('<job.json>', 'the job file; - reads the job from the standard input')
+      .option(
+        '--points <file>',
+        "add the points of a CSV or GeoJSON file to the job's points (see docs/interop.md)",
+      ),
+  ).action(async (file: string, o: ReportOptions & { points?: string }) => {
+    const withPoints = (job: unknown): unknown =>
+      o.points === undefined
+        ? job
+        : loadPoints(job, o.points, readText(o.points, 'points file'), o, (f) =>
+            readText(f, '--to-wgs84 file'),
+          );
     if (file === '-') {
-      outcome.exitCode = report(parseJob(await readStdin(io)), 'standard input', o, io);
+      outcome.exitCode = report(withPoints(parseJob(await readStdin(io))), 'standard input', o, io);
       return;
     }
-    outcome.exitCode = report(parseJob(readText(file, 'job file')), file, o, io, file);
+    outcome.exitCode = report(withPoints(parseJob(readText(file, 'job file'))), file, o, io, file);
   });
 
   p.command('batch')

@@ -8,7 +8,7 @@ import type { TaskKind } from './task.js';
 import type { Schema } from './validate.js';
 
 const LENGTH_PATTERN =
-  '^\\s*[+-]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][+-]?\\d+)?(\\s*/\\s*\\d+)?\\s*(mm|m|km|ft|us-ft|ch|lk|us-ch|us-lk|mi)?\\s*$';
+  '^\\s*[+-]?(\\d+(\\.\\d*)?|\\.\\d+)([eE][+-]?\\d+)?(\\s*/\\s*\\d+)?\\s*(mm|cm|m|km|ft|us-ft|ch|lk|us-ch|us-lk|mi)?\\s*$';
 
 /** Definitions shared by the task kinds (`#/$defs/...`). */
 export const DEFS: Record<string, Schema> = {
@@ -26,14 +26,31 @@ export const DEFS: Record<string, Schema> = {
     'x-describe': 'a length (a number, or text such as "120.5 m")',
   },
   measuredLength: {
-    description: 'A length, or { "value": length, "sigma": length } with its standard uncertainty.',
+    description:
+      'A length, or { "value": length, "sigma": σ } with its standard uncertainty: a length (a number in the job\'s unit, or text with its own unit such as "3 mm"), or { "constant": length, "ppm": number } (σ² = constant² + (ppm·10⁻⁶·value)²).',
     anyOf: [
       { $ref: '#/$defs/length' },
       {
         type: 'object',
         required: ['value'],
         additionalProperties: false,
-        properties: { value: { $ref: '#/$defs/length' }, sigma: { $ref: '#/$defs/length' } },
+        properties: {
+          value: { $ref: '#/$defs/length' },
+          sigma: {
+            anyOf: [
+              { $ref: '#/$defs/length' },
+              {
+                type: 'object',
+                required: ['constant'],
+                additionalProperties: false,
+                properties: {
+                  constant: { $ref: '#/$defs/length' },
+                  ppm: { type: 'number', minimum: 0 },
+                },
+              },
+            ],
+          },
+        },
       },
     ],
     'x-describe': 'a length, or { "value": …, "sigma": … }',
@@ -47,7 +64,7 @@ export const DEFS: Record<string, Schema> = {
   },
   measuredAngle: {
     description:
-      'An angle, or { "value": angle, "sigma": angle } (sigma e.g. "5\\"" for five seconds of arc).',
+      'An angle, or { "value": angle, "sigma": σ }: σ a number in seconds of arc, or text with its own unit ("5\\"", "0°00\'05\\"", "1 mgon").',
     anyOf: [
       { $ref: '#/$defs/angle' },
       {
@@ -172,6 +189,11 @@ export function jobSchema(kinds: readonly TaskKind[]): Schema {
             enum: ['m', 'km', 'ft', 'us-ft', 'ch', 'lk', 'us-ch', 'us-lk', 'mi'],
             description:
               'Unit of bare-number lengths and of every length in the report (default m). Lengths written with a unit are converted to it exactly.',
+          },
+          angles: {
+            enum: ['degrees', 'dd.mmss'],
+            description:
+              'How angles given as numbers are read: "degrees" (decimal degrees, the default) or "dd.mmss" (degrees, minutes and seconds packed as field calculators take them: 36.5027 = 36°50\'27"). Text with marks ("36°50\'27\\"") reads the same either way; a sigma stays in seconds of arc.',
           },
         },
       },

@@ -76,7 +76,8 @@ export function validate(
   return out;
 }
 
-function resolve(schema: Schema, root: Schema): Schema {
+/** A schema node with its `$ref` followed (to `#/$defs/…` of `root`). */
+export function resolve(schema: Schema, root: Schema): Schema {
   let s = schema;
   for (let i = 0; i < 20 && typeof s.$ref === 'string'; i++) {
     const ref = s.$ref as string;

@@ -11,8 +11,10 @@
  */
 import {
   QuadspreadError,
+  angleSigma,
   angleToDegrees,
-  convertLength,
+  lengthIn,
+  lengthSigma,
   rational,
   verticalFromAngle,
   verticalFromSlope,
@@ -61,9 +63,6 @@ export const LENGTH_UNIT_NAMES: Record<LengthUnit, string> = {
   'us-lk': 'US survey lk',
   mi: 'mi',
 };
-
-const LENGTH_TEXT =
-  /^\s*([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?(?:\s*\/\s*\d+)?)\s*([A-Za-z-]+)?\s*$/;
 
 /**
  * A value as the exact text the computation reads back (`A.from`): refused when that text is
@@ -124,40 +123,19 @@ function splitMeasured(
   return { value: x, measuredForm: false, valuePath: path, sigmaPath: `${path}.sigma` };
 }
 
-/** Reads a length (number in the job's unit, or text such as `120.5 m`, `395 ft`, `5 mm`) into the job's unit, exactly. */
+/**
+ * Reads a length (number in the job's unit, or text such as `120.5 m`, `395 ft`, `5 mm`) into
+ * the job's unit, exactly, through the library's `lengthIn` (the one reading of lengths).
+ */
 export function lengthText(x: unknown, path: string, unit: LengthUnit, what = 'length'): string {
-  if (typeof x === 'number') {
-    try {
-      return exactText(R.from(x));
-    } catch (e) {
-      throw new JobInvalid(path, `${show(x)} is not a valid ${what}: ${reason(e)}`);
-    }
-  }
-  if (typeof x !== 'string')
+  if (typeof x !== 'number' && typeof x !== 'string')
     throw new JobInvalid(
       path,
       `${show(x)} is not a valid ${what} (give a number or text such as "120.5 m")`,
     );
-  const m = LENGTH_TEXT.exec(x);
-  if (!m)
-    throw new JobInvalid(
-      path,
-      `${show(x)} is not a valid ${what} (write a number with an optional unit, such as "120.5 m" or "395.2 ft")`,
-    );
-  const given = m[2];
   try {
-    const v = R.from(m[1]!.replace(/\s+/g, ''));
-    if (given === undefined) return exactText(v);
-    if (given === 'mm') return exactText(convertLength(R, R.div(v, R.from(1000)), 'm', unit));
-    if (!(LENGTH_UNITS as readonly string[]).includes(given)) {
-      throw new JobInvalid(
-        path,
-        `${show(x)} is not a valid ${what}: unknown unit "${given}" (use ${['mm', ...LENGTH_UNITS].join(', ')})`,
-      );
-    }
-    return exactText(convertLength(R, v, given as LengthUnit, unit));
+    return exactText(lengthIn(R, x, unit));
   } catch (e) {
-    if (e instanceof JobInvalid) throw e;
     throw new JobInvalid(path, `${show(x)} is not a valid ${what}: ${reason(e)}`);
   }
 }
@@ -175,11 +153,30 @@ export function readLength(
   const input: Input = { name, value, angle: false };
   if (m.sigma !== undefined)
     input.sigma = readSigma(
-      () => lengthText(m.sigma, m.sigmaPath, unit, 'standard uncertainty'),
+      () => {
+        const raw = m.sigma as Parameters<typeof lengthSigma<Rational>>[1];
+        if (typeof raw !== 'number' && typeof raw !== 'string' && !isConstantPpm(raw))
+          throw new JobInvalid(
+            m.sigmaPath,
+            `${show(raw)} is not a valid standard uncertainty (a length, or { "constant", "ppm" })`,
+          );
+        try {
+          return exactText(lengthSigma(R, raw, unit, R.from(value)));
+        } catch (e) {
+          throw new JobInvalid(
+            m.sigmaPath,
+            `${show(raw)} is not a valid standard uncertainty: ${reason(e)}`,
+          );
+        }
+      },
       m.sigmaPath,
       m.sigma,
     );
   return input;
+}
+
+function isConstantPpm(x: unknown): boolean {
+  return typeof x === 'object' && x !== null && !Array.isArray(x) && 'constant' in x;
 }
 
 /** Requires a length to be positive. */
@@ -216,14 +213,29 @@ export function angleText(x: unknown, path: string, what = 'angle'): string {
   }
 }
 
-/** Reads an angle input in degrees, with its sigma (an angle too, e.g. `5"`) when given as `{ value, sigma }`. */
+/**
+ * Reads an angle input in degrees, with its sigma when given as `{ value, sigma }`: a number
+ * in arc-seconds, or text with its own unit (`5"`, `1 mgon`), through the library's `angleSigma`.
+ */
 export function readAngle(x: unknown, path: string, name: string, what = 'angle'): Input {
   const m = splitMeasured(x, path);
   const value = angleText(m.value, m.valuePath, what);
   const input: Input = { name, value, angle: true };
   if (m.sigma !== undefined)
     input.sigma = readSigma(
-      () => angleText(m.sigma, m.sigmaPath, 'standard uncertainty'),
+      () => {
+        const raw = m.sigma;
+        if (typeof raw !== 'number' && typeof raw !== 'string')
+          throw new JobInvalid(m.sigmaPath, `${show(raw)} is not a valid standard uncertainty`);
+        try {
+          return exactText(angleSigma(R, raw));
+        } catch (e) {
+          throw new JobInvalid(
+            m.sigmaPath,
+            `${show(raw)} is not a valid standard uncertainty: ${reason(e)}`,
+          );
+        }
+      },
       m.sigmaPath,
       m.sigma,
     );

@@ -17,7 +17,7 @@ import {
 import { checkObject, PLUMB_SIGHT } from './input.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Root } from '../geometry/surd.js';
-import { solveTriangle } from '../geometry/solve-triangle.js';
+import { solveTriangleQs as solveTriangle } from '../geometry/solve-triangle.js';
 import { readQuadrance, readSpread, shownInput } from '../geometry/validate.js';
 import { angleToDegrees } from '../readings/angle.js';
 import { spreadFromDegrees } from '../readings/spread.js';

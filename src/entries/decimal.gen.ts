@@ -75,6 +75,9 @@ export const alignmentStation: Bound<typeof g.alignmentStation<Value>> = (alignm
 /** {@link g.allowableMisclosure | allowableMisclosure} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const allowableMisclosure: Bound<typeof g.allowableMisclosure<Value, false>> = (c, km) => g.allowableMisclosure<Value, false>(arithmetic, c, km);
 
+/** {@link g.angleSigma | angleSigma} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const angleSigma: Bound<typeof g.angleSigma<Value>> = (sigma) => g.angleSigma<Value>(arithmetic, sigma);
+
 /** {@link g.angleToDegrees | angleToDegrees} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const angleToDegrees: Bound<typeof g.angleToDegrees<Value>> = (reading, unit) => g.angleToDegrees<Value>(arithmetic, reading, unit);
 
@@ -308,6 +311,12 @@ export const lambertConic: Bound<typeof g.lambertConic<Value>> = (point, project
 
 /** {@link g.lambertConicInverse | lambertConicInverse} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const lambertConicInverse: Bound<typeof g.lambertConicInverse<Value>> = (point, projection) => g.lambertConicInverse<Value>(arithmetic, point, projection);
+
+/** {@link g.lengthIn | lengthIn} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const lengthIn: Bound<typeof g.lengthIn<Value>> = (value, unit) => g.lengthIn<Value>(arithmetic, value, unit);
+
+/** {@link g.lengthSigma | lengthSigma} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
+export const lengthSigma: Bound<typeof g.lengthSigma<Value>> = (sigma, unit, distance) => g.lengthSigma<Value>(arithmetic, sigma, unit, distance);
 
 /** {@link g.lengthToMetres | lengthToMetres} with the arithmetic fixed to `decimal(34)`: the same arguments after the arithmetic. @function */
 export const lengthToMetres: Bound<typeof g.lengthToMetres<Value>> = (value, unit) => g.lengthToMetres<Value>(arithmetic, value, unit);
@@ -591,27 +600,27 @@ export {
 export type {
   AdjustedHeight, AdjustedLevelObservation, AdjustedNetworkObservation, AdjustedPoint,
   AffineFit, AlignmentElement, AlignmentPoint, AlignmentStation, AlignmentStationOptions,
-  AllowableMisclosure, AngleKind, AngleUnit, AngularMisclosure, ArcElement, AreaUnit,
-  Arithmetic, Atmosphere, AtmosphericPpm, BaardaTest, Backsight, BacksightResult, BaseHeight,
-  BearingIntersection, BenchmarkInput, Budget, BudgetOptions, CarriedBearings,
+  AllowableMisclosure, AngleKind, AngleOptions, AngleUnit, AngularMisclosure, ArcElement,
+  AreaUnit, Arithmetic, Atmosphere, AtmosphericPpm, BaardaTest, Backsight, BacksightResult,
+  BaseHeight, BearingIntersection, BenchmarkInput, Budget, BudgetOptions, CarriedBearings,
   CarryBearingsInput, ChainageEquation, ChainageEquationInput, CircleInput, Clothoid,
-  CommonPoint, ConfidenceEllipse, Contribution, ControlPoint, CorrelationTerm, CurvatureOptions,
-  DatumTransformation, DatumTransformOptions, Decimal, DecimalArithmetic, DecimalElementary,
-  DeflectionRow, DesignUnits, DistanceSigma, Ellipsoid, EllipsoidDefinition,
+  CommonPoint, ConfidenceEllipse, ConstantAndPpm, Contribution, ControlPoint, CorrelationTerm,
+  CurvatureOptions, DatumTransformation, DatumTransformOptions, Decimal, DecimalArithmetic,
+  DecimalElementary, DeflectionRow, DesignUnits, DistanceSigma, Ellipsoid, EllipsoidDefinition,
   EllipsoidParameters, Enu, ErrorCode, ErrorEllipse, FaceOptions, FieldCheck, FieldObservation,
   FlatEarthError, FloatArithmetic, FootSide, FreeStation, FreeStationInput, FreeStationResidual,
   Geocentric, GeocentricTranslationParameters, GeodesicDirect, GeodesicInverse, Geodetic,
   GeodeticInput, GeographicCrs, GeographicPoint, GlobalTest, Gradient, GridPoint, GridReduction,
   HelmertConvention, HelmertParameters, HorizontalAlignment, HorizontalAlignmentInput,
   HorizontalCurve, HorizontalCurveInput, InclinedPlaneFit, InlineHeight, InlineQuadranceHeight,
-  InputDistribution, Inverse, KeyPoint, LengthUnit, LevelCheck, LevellingAdjustment,
-  LevellingInput, LevellingObservationInput, LevellingOptions, LevellingOrder, LevelRow,
-  LevelRun, LevelRunInput, LevelSight, Line, LinearUnit, LocalTest, Matrix3, MeanFaces,
-  MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult, NetworkAdjustment,
-  NetworkInput, NetworkObservationInput, NetworkOptions, NetworkPointInput, Numeric,
-  ObservationTest, OffsetMeasure, OpenTraverse, OpenTraverseLeg, OrientInput, PegReadings,
-  Point, Point3, Point3Input, Pointing, PointInput, PointLike, PolygonArea, PreparedProjection,
-  ProfileLevel, ProfilePointInput, ProjectedCrs, ProjectedPoint, Projection,
+  InputDistribution, Inverse, KeyPoint, LengthSigma, LengthUnit, LevelCheck,
+  LevellingAdjustment, LevellingInput, LevellingObservationInput, LevellingOptions,
+  LevellingOrder, LevelRow, LevelRun, LevelRunInput, LevelSight, Line, LinearUnit, LocalTest,
+  Matrix3, MeanFaces, MolodenskyBadekasParameters, MonteCarloOptions, MonteCarloResult,
+  NetworkAdjustment, NetworkInput, NetworkObservationInput, NetworkOptions, NetworkPointInput,
+  Numeric, ObservationTest, OffsetMeasure, OpenTraverse, OpenTraverseLeg, OrientInput,
+  PegReadings, Point, Point3, Point3Input, Pointing, PointInput, PointLike, PolygonArea,
+  PreparedProjection, ProfileLevel, ProfilePointInput, ProjectedCrs, ProjectedPoint, Projection,
   ProjectionAngleUnit, ProjectionMethod, RandomStream, Ratio, Rational, RationalArithmetic,
   ReciprocalLevelling, ReciprocalSet, ReciprocalTrigHeight, ReducedObservation, RelativeEllipse,
   Resection, ResectionInput, Root, RotationInput, RotationUnit, RoundOff, SetOut, SetOutCheck,
@@ -621,7 +630,7 @@ export type {
   StraightElement, Surd, TestOptions, TmFactors, TransformedPoint, TransitionElement,
   TransitionMeasures, TransverseMercator, TransverseMercatorGrid, Traverse, TraverseClose,
   TraverseClosingPoint, TraverseClosure, TraverseCourse, TraverseInput, TraverseLeg, Triangle,
-  TriangleMeasures, TrigHeight, TrigSight, TwoPeg, TwoPegInput, TwoStationHeight,
+  TriangleKnown, TriangleMeasures, TrigHeight, TrigSight, TwoPeg, TwoPegInput, TwoStationHeight,
   UncertainArithmetic, UncertainInput, UtmZone, ValueOf, VerticalAlignment,
   VerticalAlignmentInput, VerticalCurve, VerticalCurveInput, VerticalInput, VerticalKind,
   VerticalReading,

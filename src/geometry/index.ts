@@ -43,5 +43,4 @@ export {
 export type { StewartChainages, StewartQuadrances } from './stewart.js';
 export { triangle } from './triangle.js';
 export type { Triangle } from './triangle.js';
-export { solveTriangle } from './solve-triangle.js';
 export type { TriangleMeasures } from './solve-triangle.js';

@@ -88,6 +88,9 @@ function valueField<T>(A: Arithmetic<T>): Field<T, T> {
 const KEYS = ['Q1', 'Q2', 'Q3', 's1', 's2', 's3'] as const;
 
 /**
+ * {@link solveTriangle} for quadrances and spreads only (the geometry; the readings layer
+ * adds sides and angles). @internal
+ *
  * Every triangle with the three given measures, each with all six measures and the
  * quadrea. Any three of Q1, Q2, Q3, s1, s2, s3 that include a quadrance:
  *
@@ -125,7 +128,7 @@ const KEYS = ['Q1', 'Q2', 'Q3', 's1', 's2', 's3'] as const;
  * //=> ['41 - 20√2', '41 + 20√2']
  * ```
  */
-export function solveTriangle<T, E extends boolean>(
+export function solveTriangleQs<T, E extends boolean>(
   A: Arithmetic<T, E>,
   known: TriangleMeasures<Numeric<T>>,
 ): Triangle<Root<T, E>>[] {

@@ -5,7 +5,7 @@
  * @module io
  */
 import { QuadspreadError, type Arithmetic } from '../index.js';
-import { show } from '../errors.js';
+import { checkArithmetic, show } from '../errors.js';
 import { PLANE_MARK } from './geojson-write.js';
 import type { ExchangePoint } from './point.js';
 import { prepareReference, type Wgs84Reference } from './reference.js';
@@ -74,6 +74,7 @@ export function pointsFromGeoJson<T>(
   options: GeoJsonReadOptions<T> = {},
 ): ExchangePoint<T>[] {
   const where = 'pointsFromGeoJson';
+  checkArithmetic(A, where);
   const o = (options ?? {}) as GeoJsonReadOptions<T>;
   const mode = o.coordinates ?? 'wgs84';
   const others = o.others ?? 'refuse';

@@ -15,7 +15,7 @@ import {
   type HorizontalAlignment,
   type Numeric,
 } from '../index.js';
-import { show } from '../errors.js';
+import { checkArithmetic, show } from '../errors.js';
 import { fixedNumber, numberOf } from './numbers.js';
 import type { ExchangePointInput } from './point.js';
 import { prepareReference, type PreparedReference, type Wgs84Reference } from './reference.js';
@@ -164,6 +164,7 @@ export function toGeoJson<T>(
   options: GeoJsonWriteOptions<T> = {},
 ): FeatureCollection {
   const where = 'toGeoJson';
+  checkArithmetic(A, where);
   const o = (options ?? {}) as GeoJsonWriteOptions<T>;
   const mode = o.coordinates ?? 'wgs84';
   if (mode !== 'wgs84' && mode !== 'plane')

@@ -24,3 +24,7 @@ export type {
 } from './geojson-write.js';
 export { pointsFromGeoJson } from './geojson-read.js';
 export type { GeoJsonReadOptions } from './geojson-read.js';
+export { pointsFromCsv, streamPointsFromCsv, pointsToCsv } from './csv.js';
+export type { CsvColumns, CsvReadOptions, CsvWriteOptions } from './csv.js';
+export { pointsFromFile } from './point-file.js';
+export type { PointFileOptions } from './point-file.js';

@@ -19,7 +19,7 @@ import {
   type Numeric,
   type Projection,
 } from '../index.js';
-import { show } from '../errors.js';
+import { checkArithmetic, show } from '../errors.js';
 
 /**
  * How plane grid coordinates reach WGS 84 longitude and latitude (and back).
@@ -63,6 +63,7 @@ export function prepareReference<T>(
   reference: Wgs84Reference<T> | undefined,
   where: string,
 ): PreparedReference<T> {
+  checkArithmetic(A, where.replace(/\(.*$/, ''));
   if (typeof reference !== 'object' || reference === null || reference.grid === undefined)
     throw missing(
       where,

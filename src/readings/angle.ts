@@ -136,7 +136,9 @@ function parseDms(original: string, where: string): DmsParts {
  *
  * @param A the arithmetic
  * @param reading the angle: a value, a number or text
- * @param unit the unit of a numeric reading: `'deg'` (default), `'gon'`, `'mil'`, `'rad'`
+ * @param unit the unit of a numeric reading: `'deg'` (default), `'gon'`, `'mil'`, `'rad'`;
+ *   or `{ unit?, format? }` with `format: 'dd.mmss'` for degrees packed as DD.MMSS
+ *   (36.5027 = 36°50′27″), read so only when asked
  * @returns the angle in degrees
  * @throws {QuadspreadError} `INVALID_ANGLE` for text that is not an angle, minutes or seconds
  *   ≥ 60, or DMS text with a unit other than degrees; `INVALID_UNIT` for an unknown unit;
@@ -151,17 +153,77 @@ function parseDms(original: string, where: string): DmsParts {
  * //=> '90'
  * rational.toString(angleToDegrees(rational, "S 30°15' W"));
  * //=> '841/4'
+ * rational.toString(angleToDegrees(rational, 36.5027, { format: 'dd.mmss' }));
+ * //=> '44209/1200'
  * ```
  */
 export function angleToDegrees<T>(
   A: Arithmetic<T>,
   reading: Numeric<T>,
-  unit: AngleUnit = 'deg',
+  unit: AngleUnit | AngleOptions = 'deg',
 ): T {
   checkArithmetic(A, 'angleToDegrees');
+  if (unit !== null && typeof unit === 'object') {
+    const { format = 'decimal', unit: u = 'deg' } = unit;
+    if (format === 'dd.mmss') {
+      if (u !== 'deg')
+        throw invalidAngle(
+          'angleToDegrees(options)',
+          `DD.MMSS is in degrees, but the unit is ${show(u)}`,
+        );
+      return angleToDegrees(A, packedDmsText(reading), 'deg');
+    }
+    if (format !== 'decimal')
+      throw new QuadspreadError(
+        'INVALID_ARGUMENT',
+        'angleToDegrees(options.format)',
+        `${show(format)} is not 'decimal' or 'dd.mmss'`,
+      );
+    unit = u;
+  }
   const G = guardOf(A);
   if (G) return viaGuard(A, G, reading, (g, x) => readAngle(g, x as Numeric<typeof g.zero>, unit));
   return readAngle(A, reading, unit);
+}
+
+/** Options of {@link angleToDegrees}. */
+export interface AngleOptions {
+  /** The unit of a numeric reading (default `'deg'`). */
+  readonly unit?: AngleUnit;
+  /**
+   * How a number in degrees is written: `'decimal'` (default) or `'dd.mmss'`, degrees,
+   * minutes and seconds packed as field calculators take them (36.5027 = 36°50′27″). Only
+   * when asked: a number is never guessed to be DD.MMSS.
+   */
+  readonly format?: 'decimal' | 'dd.mmss';
+}
+
+/**
+ * DD.MMSS (a number or numeric text: degrees, then two digits of minutes, two of seconds and
+ * any decimals of a second) as DMS text; text with marks is returned as it is.
+ */
+function packedDmsText(reading: unknown): string {
+  const where = 'angleToDegrees(reading)';
+  let text: string;
+  if (typeof reading === 'number') {
+    if (!Number.isFinite(reading)) throw invalidAngle(where, `${show(reading)} is not DD.MMSS`);
+    text = String(reading);
+  } else if (typeof reading === 'string') {
+    if (reading.length > MAX_INPUT_LENGTH) throw textTooLong(where, reading.length);
+    if (!PLAIN_NUMBER.test(reading)) return reading; // DMS with marks says what it is
+    text = reading.trim();
+  } else throw invalidAngle(where, `${show(reading)}: give DD.MMSS as a number or as text`);
+  const m = /^([+-]?)(\d*)(?:\.(\d*))?$/.exec(text);
+  if (!m) throw invalidAngle(where, `${show(reading)} is not DD.MMSS (write it as 36.5027)`);
+  const frac = (m[3] ?? '').padEnd(4, '0');
+  const min = frac.slice(0, 2);
+  const sec = frac.slice(2, 4) + (frac.length > 4 ? `.${frac.slice(4)}` : '');
+  if (Number(min) >= 60 || Number(frac.slice(2, 4)) >= 60)
+    throw invalidAngle(
+      where,
+      `${show(reading)} read as DD.MMSS has ${Number(min) >= 60 ? `minutes ${min}` : `seconds ${frac.slice(2, 4)}`} ≥ 60`,
+    );
+  return `${m[1]}${m[2] || '0'}°${min}'${sec}"`;
 }
 
 /** @internal {@link angleToDegrees} computed directly in A. */

@@ -11,7 +11,9 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
  * Writes an angle in degrees as DMS text, `12°34'56.7"`: seconds rounded half away from
  * zero to `secondsDecimals` places (exactly, from the value of the arithmetic), minutes
  * and seconds written with two integer digits, a leading `-` below zero. A carry from
- * rounding is propagated (59.96″ to one place gives the next minute).
+ * rounding is propagated (59.96″ to one place gives the next minute); an angle under 360°
+ * that rounds to 360° is written `0°00'00"` (a bearing of 359°59′59.99″ is due north to the
+ * tenth of a second), while 360° itself stays 360°.
  *
  * @param A the arithmetic
  * @param degrees the angle in degrees, |degrees| < 10⁸
@@ -27,6 +29,8 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
  * //=> `12°34'56.7"`
  * formatDms(rational, '-0.5', 0);
  * //=> `-0°30'00"`
+ * formatDms(rational, 359.99999999);
+ * //=> `0°00'00.0"`
  * ```
  */
 export function formatDms<T>(A: Arithmetic<T>, degrees: Numeric<T>, secondsDecimals = 1): string {
@@ -58,6 +62,8 @@ export function formatDms<T>(A: Arithmetic<T>, degrees: Numeric<T>, secondsDecim
   // Round half away from zero, decided exactly.
   if (A.cmp(A.sub(x, A.from(n)), A.from('0.5')) >= 0) n++;
   const unitsPerDegree = 3600 * scale;
+  // An angle under a full turn that rounds to one is written 0° (the same direction).
+  if (n === 360 * unitsPerDegree && A.cmp(A.abs(d), A.from(360)) < 0) n = 0;
   const deg = Math.floor(n / unitsPerDegree);
   let rest = n - deg * unitsPerDegree;
   const min = Math.floor(rest / (60 * scale));

@@ -3,7 +3,14 @@
  *
  * @module readings
  */
-import { QuadspreadError, show, negativeQuadrance, checkArithmetic } from '../errors.js';
+import {
+  QuadspreadError,
+  show,
+  negativeQuadrance,
+  checkArithmetic,
+  MAX_INPUT_LENGTH,
+  textTooLong,
+} from '../errors.js';
 import { finiteResult, readNumber, shownInput } from '../geometry/validate.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 
@@ -52,12 +59,81 @@ export function checkLengthUnit(unit: unknown, where: string): LengthUnit {
   );
 }
 
+/** Units a length written as text may name: the {@link LengthUnit} codes, and `mm`, `cm`. */
+const TEXT_UNITS: Readonly<Record<string, string>> = {
+  ...METRES_PER_UNIT,
+  mm: '0.001',
+  cm: '0.01',
+};
+
+// A number (decimal, exponent or fraction), then an optional unit word.
+const LENGTH_TEXT =
+  /^\s*([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?(?:\s*\/\s*\d+)?)\s*([A-Za-z][A-Za-z-]*)?\s*$/;
+
 /**
- * Converts a length to metres, exactly in `rational`.
+ * Splits a length written as text into its number and the metres in one of its unit, or
+ * returns undefined for a value with no unit of its own (a number, a value, bare numeric text).
+ * @internal
+ */
+export function lengthTextParts(
+  value: unknown,
+  where: string,
+): { number: string; metres: string; unit: string } | undefined {
+  if (typeof value !== 'string') return undefined;
+  if (value.length > MAX_INPUT_LENGTH) throw textTooLong(where, value.length);
+  const m = LENGTH_TEXT.exec(value);
+  if (!m || m[2] === undefined) return undefined;
+  const unit = m[2];
+  if (!Object.prototype.hasOwnProperty.call(TEXT_UNITS, unit))
+    throw new QuadspreadError(
+      'INVALID_UNIT',
+      where,
+      `${show(value)} names the unit "${unit}", which is not a length unit (use ${Object.keys(TEXT_UNITS).join(', ')})`,
+    );
+  return { number: m[1]!.replace(/\s+/g, ''), metres: TEXT_UNITS[unit]!, unit };
+}
+
+/**
+ * Reads a length into `unit`, exactly in `rational`: a number (or numeric text, or a value)
+ * is in `unit`; text with a unit of its own — `"250.00 ft"`, `"3 mm"`, `"12.5 us-ft"`,
+ * `"4 ch"` — is converted from it (`ft` is the international foot, `us-ft` the U.S. survey
+ * foot; `mm` and `cm` are accepted in text). The one reading of lengths the library and the
+ * command-line job share.
  *
  * @param A the arithmetic
- * @param value the length in `unit`
- * @param unit its unit (see {@link LengthUnit})
+ * @param value the length: a number in `unit`, or text with its own unit
+ * @param unit the unit wanted, and the unit of a bare number (default `'m'`)
+ * @returns the length in `unit`
+ * @throws {QuadspreadError} `INVALID_UNIT` for an unknown unit; `INVALID_NUMBER` for a bad
+ *   value; `NOT_FINITE` in float when the result overflows.
+ * @example
+ * ```ts
+ * import { rational, lengthIn } from 'quadspread';
+ * [rational.toString(lengthIn(rational, '250.00 ft')), rational.toString(lengthIn(rational, '3 mm', 'ft'))];
+ * //=> ['381/5', '5/508']
+ * ```
+ */
+export function lengthIn<T>(A: Arithmetic<T>, value: Numeric<T>, unit: LengthUnit = 'm'): T {
+  checkArithmetic(A, 'lengthIn');
+  const u = checkLengthUnit(unit, 'lengthIn(unit)');
+  const parts = lengthTextParts(value, 'lengthIn(value)');
+  if (parts === undefined) return readNumber(A, value, 'lengthIn(value)');
+  return finiteResult(
+    A.div(
+      A.mul(readNumber(A, parts.number, 'lengthIn(value)'), A.from(parts.metres)),
+      A.from(METRES_PER_UNIT[u]),
+    ),
+    'lengthIn(value)',
+  );
+}
+
+/**
+ * Converts a length to metres, exactly in `rational`. Text with a unit of its own
+ * (`"250.00 ft"`, `"3 mm"`) is read in that unit, as {@link lengthIn} reads it.
+ *
+ * @param A the arithmetic
+ * @param value the length in `unit`, or text with its own unit
+ * @param unit the unit of a bare number (see {@link LengthUnit}; default `'m'`)
  * @returns the length in metres
  * @throws {QuadspreadError} `INVALID_UNIT` for an unknown unit; `INVALID_NUMBER` for a bad value; `NOT_FINITE` in float when the result overflows.
  * @example
@@ -65,11 +141,19 @@ export function checkLengthUnit(unit: unknown, where: string): LengthUnit {
  * import { rational, lengthToMetres } from 'quadspread';
  * rational.toString(lengthToMetres(rational, 1, 'ch'));
  * //=> '12573/625'
+ * [rational.toString(lengthToMetres(rational, '250.00 ft')), rational.toString(lengthToMetres(rational, '250 us-ft'))];
+ * //=> ['381/5', '300000/3937']
  * ```
  */
-export function lengthToMetres<T>(A: Arithmetic<T>, value: Numeric<T>, unit: LengthUnit): T {
+export function lengthToMetres<T>(A: Arithmetic<T>, value: Numeric<T>, unit: LengthUnit = 'm'): T {
   checkArithmetic(A, 'lengthToMetres');
   const u = checkLengthUnit(unit, 'lengthToMetres(unit)');
+  const parts = lengthTextParts(value, 'lengthToMetres(value)');
+  if (parts !== undefined)
+    return finiteResult(
+      A.mul(readNumber(A, parts.number, 'lengthToMetres(value)'), A.from(parts.metres)),
+      'lengthToMetres(value)',
+    );
   return finiteResult(
     A.mul(readNumber(A, value, 'lengthToMetres(value)'), A.from(METRES_PER_UNIT[u])),
     'lengthToMetres(value)',

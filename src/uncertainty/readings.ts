@@ -20,11 +20,12 @@ import {
   type VerticalKind,
   type VerticalReading,
 } from '../readings/vertical.js';
-import { lengthToMetres, type LengthUnit } from '../readings/length.js';
+import { lengthTextParts, lengthToMetres, type LengthUnit } from '../readings/length.js';
+import { angleSigma, lengthSigma, type LengthSigma } from '../readings/sigma.js';
 import { readNumber } from '../geometry/validate.js';
 import { measured } from './measured.js';
-import { checkU, readName, readSigma } from './internal.js';
-import { checkArithmetic } from '../errors.js';
+import { checkU, readName } from './internal.js';
+import { QuadspreadError, checkArithmetic, show } from '../errors.js';
 
 /**
  * A value y = g(x) of an uncertain `x`, given y and dy/dx: its gradient is dy/dx times
@@ -68,15 +69,15 @@ export function withDerivative<T>(
 
 /**
  * A measured angle in degrees: the reading (degrees, DMS text, or a number in `unit`) read
- * by `angleToDegrees`, with a standard uncertainty in arc-seconds (1″ = 1/3600°). For a
- * gon instrument, 1 mgon = 3.24″.
+ * by `angleToDegrees`, with a standard uncertainty read by `angleSigma`: a number in
+ * arc-seconds (1″ = 1/3600°), or text with its own unit (`'2"'`, `'1 mgon'` = 3.24″).
  *
  * @param U the uncertain arithmetic
  * @param reading the angle reading
- * @param sigmaArcSeconds its standard uncertainty in arc-seconds, ≥ 0
+ * @param sigmaArcSeconds its standard uncertainty, ≥ 0: arc-seconds, or text with its own unit
  * @param name the input's name
  * @param unit the unit of a numeric reading (default `'deg'`)
- * @returns the angle in degrees; its input is the angle in degrees, u = sigma/3600
+ * @returns the angle in degrees; its input is the angle in degrees, u = σ in degrees
  * @throws {QuadspreadError} as `angleToDegrees` and `measured`.
  * @example
  * ```ts
@@ -96,10 +97,11 @@ export function measuredAngle<T>(
 ): Uncertain<T> {
   checkArithmetic(U, 'measuredAngle');
   const where = 'measuredAngle(U, reading, sigmaArcSeconds, name)';
+  checkU(U, where);
   readName(name, where);
-  const s = readSigma(U, sigmaArcSeconds, where);
+  const s = angleSigmaOf(U, sigmaArcSeconds, where);
   const deg = angleToDegrees(U.base, reading as Numeric<T>, unit);
-  return measured(U, deg, U.base.div(s, U.base.from(3600)), name); // 1° = 3600″
+  return measured(U, deg, s, name);
 }
 
 /**
@@ -226,55 +228,108 @@ export function measuredVertical<T>(
 }
 
 /**
- * A measured distance in metres: the reading in `unit` (read by `lengthToMetres`, exact)
- * with a standard uncertainty in millimetres (whatever the reading's unit).
+ * A measured distance in metres: the reading in `unit` (or text with its own unit, read by
+ * `lengthToMetres`, exact) with a standard uncertainty read by `lengthSigma`: a number in the
+ * unit of the reading, text with its own unit (`'3 mm'`), or `{ constant, ppm }`.
  *
  * @param U the uncertain arithmetic
- * @param reading the distance in `unit`
- * @param sigmaMm its standard uncertainty in millimetres, ≥ 0
+ * @param reading the distance in `unit`, or text with its own unit (`'328.1 ft'`)
+ * @param sigma its standard uncertainty, ≥ 0 (see `lengthSigma`)
  * @param name the input's name (the input is the distance in metres)
- * @param unit the reading's unit (default `'m'`)
- * @returns the distance in metres, u = sigma/1000 m
- * @throws {QuadspreadError} as `lengthToMetres` and `measured`.
+ * @param unit the unit of a bare-number reading and σ (default `'m'`)
+ * @returns the distance in metres, u = σ in metres
+ * @throws {QuadspreadError} as `lengthToMetres`, `lengthSigma` and `measured`.
  * @example
  * ```ts
  * import { uncertain, rational, measuredDistance, budget } from 'quadspread';
  * const U = uncertain(rational);
- * const d = measuredDistance(U, 100, 3, 'd', 'ft');
+ * const d = measuredDistance(U, 100, '3 mm', 'd', 'ft');
  * [rational.toString(d.value), budget(U, d).sigma.toString()];
  * //=> ['762/25', '3/1000']
+ * // 3 mm + 4 ppm over 1000 m: √(3² + 4²) mm = 5 mm
+ * budget(U, measuredDistance(U, 1000, { constant: '3 mm', ppm: 4 }, 'd')).sigma.toString();
+ * //=> '1/200'
  * ```
  */
 export function measuredDistance<T>(
   U: UncertainArithmetic<T>,
   reading: Numeric<T>,
-  sigmaMm: Numeric<T>,
+  sigma: LengthSigma<T>,
   name: string,
   unit: LengthUnit = 'm',
 ): Uncertain<T> {
   checkArithmetic(U, 'measuredDistance');
-  const where = 'measuredDistance(U, reading, sigmaMm, name)';
+  const where = 'measuredDistance(U, reading, sigma, name)';
+  checkU(U, where);
   readName(name, where);
-  const s = readSigma(U, sigmaMm, where);
   const m = lengthToMetres(U.base, reading as Numeric<T>, unit);
-  return measured(U, m, U.base.div(s, U.base.from(1000)), name); // 1 m = 1000 mm
+  return measured(U, m, lengthSigmaOf(U, reading, sigma, m, where, unit), name);
+}
+
+/** σ of a distance (in metres, whose value is `metres`) by the readings' one rule, as `where`. */
+function lengthSigmaOf<T>(
+  U: UncertainArithmetic<T>,
+  reading: unknown,
+  sigma: LengthSigma<T>,
+  metres: T,
+  where: string,
+  unit: LengthUnit,
+): T {
+  checkU(U, where);
+  // A bare σ is in `unit`; a reading that names its own unit asks for a σ that names one too.
+  const bare = (x: unknown): boolean =>
+    typeof x === 'number' || (typeof x === 'string' && lengthTextParts(x, where) === undefined);
+  if (
+    lengthTextParts(reading, where) !== undefined &&
+    (bare(sigma) ||
+      (typeof sigma === 'object' && sigma !== null && 'constant' in sigma && bare(sigma.constant)))
+  )
+    throw new QuadspreadError(
+      'INVALID_SIGMA',
+      where,
+      `the reading ${show(reading)} names its unit: give σ with a unit too (such as '3 mm')`,
+    );
+  // σ is in the unit of the reading: read it there, then into metres.
+  const B = U.base;
+  const inUnit = B.div(metres, lengthToMetres(B, 1, unit));
+  const s = rewhere(where, () =>
+    lengthSigma(B, sigma as LengthSigma<T>, unit, inUnit as Numeric<T>),
+  );
+  return lengthToMetres(B, s as Numeric<T>, unit);
+}
+
+/** Runs a σ reader, its errors said as INVALID_SIGMA of `where`. */
+function rewhere<R>(where: string, f: () => R): R {
+  try {
+    return f();
+  } catch (e) {
+    if (!(e instanceof QuadspreadError)) throw e;
+    const m = /^quadspread [A-Z_]+: [^:]*: (.*)$/s.exec(e.message);
+    throw new QuadspreadError('INVALID_SIGMA', where, m ? m[1]! : e.message);
+  }
+}
+
+/** σ of an angle in degrees by the readings' one rule, as `where`. */
+function angleSigmaOf<T>(U: UncertainArithmetic<T>, sigma: Numeric<T>, where: string): T {
+  return rewhere(where, () => angleSigma(U.base, sigma));
 }
 
 /**
  * A measured distance as a quadrance Q = d² in square metres, dQ/dd = 2d.
  *
  * @param U the uncertain arithmetic
- * @param reading the distance in `unit`
- * @param sigmaMm its standard uncertainty in millimetres
+ * @param reading the distance in `unit`, or text with its own unit
+ * @param sigma its standard uncertainty: a number in the unit of the reading, text with its
+ *   own unit (`'5 mm'`) or `{ constant, ppm }`, as {@link measuredDistance}
  * @param name the input's name (the input is the distance in metres)
- * @param unit the reading's unit (default `'m'`)
+ * @param unit the unit of a bare-number reading and σ (default `'m'`)
  * @returns the quadrance in m², with its gradient
  * @throws {QuadspreadError} as {@link measuredDistance}.
  * @example
  * ```ts
  * import { uncertain, rational, measuredQuadrance, budget } from 'quadspread';
  * const U = uncertain(rational);
- * const Q = measuredQuadrance(U, 50, 5, 'd'); // u(Q) = 2·50·0.005 = 0.5 m²
+ * const Q = measuredQuadrance(U, 50, '5 mm', 'd'); // u(Q) = 2·50·0.005 = 0.5 m²
  * [rational.toString(Q.value), budget(U, Q).sigma.toString()];
  * //=> ['2500', '1/2']
  * ```
@@ -282,12 +337,12 @@ export function measuredDistance<T>(
 export function measuredQuadrance<T>(
   U: UncertainArithmetic<T>,
   reading: Numeric<T>,
-  sigmaMm: Numeric<T>,
+  sigma: LengthSigma<T>,
   name: string,
   unit: LengthUnit = 'm',
 ): Uncertain<T> {
   checkArithmetic(U, 'measuredQuadrance');
-  const d = measuredDistance(U, reading, sigmaMm, name, unit);
+  const d = measuredDistance(U, reading, sigma, name, unit);
   return U.mul(d, d);
 }
 

@@ -206,7 +206,7 @@ const WGS84_GEO = '+proj=longlat +a=6378137 +rf=298.257223563 +no_defs';
 
 describe('projections against proj4 on random points', () => {
   for (const m of METHODS) {
-    it(`${m.name}: forward and inverse agree with proj4 within 1 mm and 1e-9°`, () => {
+    it(`${m.name}: forward and inverse agree with proj4 within 1 mm and 2e-9° (about 0.2 mm)`, () => {
       const P = prepareProjection(float, m.projection);
       const conv = proj4(WGS84_GEO, m.proj4);
       fc.assert(
@@ -227,10 +227,10 @@ describe('projections against proj4 on random points', () => {
             expect(Math.abs(g.N - N)).toBeLessThanOrEqual(Math.max(1e-3, own * 111e3));
             const p = fromGrid(float, { E, N }, P);
             const [lonP, latP] = conv.inverse([E, N]) as [number, number];
-            expect(Math.abs(p.lat - latP)).toBeLessThanOrEqual(Math.max(1e-9, own));
+            expect(Math.abs(p.lat - latP)).toBeLessThanOrEqual(Math.max(2e-9, own));
             let dl = p.lon - lonP;
             dl -= 360 * Math.round(dl / 360);
-            expect(Math.abs(dl)).toBeLessThanOrEqual(Math.max(1e-9, own));
+            expect(Math.abs(dl)).toBeLessThanOrEqual(Math.max(2e-9, own));
           },
         ),
         { numRuns: 200 },

@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import { code } from './helpers.js';
 import fc from 'fast-check';
-import { rational, decimal, float } from '../../src/index.js';
+import { rational, decimal, float, solveTriangle } from '../../src/index.js';
 import type { Arithmetic } from '../../src/index.js';
 import {
   point,
@@ -12,7 +12,6 @@ import {
   cross,
   spreadOfVectors,
   triangle,
-  solveTriangle,
   solveQuadratic,
   surd,
   sqrtOf,

@@ -3,9 +3,9 @@
 import { describe, expect, it } from 'vitest';
 import { code } from './helpers.js';
 import fc from 'fast-check';
-import { rational, decimal, float } from '../../src/index.js';
+import { rational, decimal, float, solveTriangle } from '../../src/index.js';
 import type { Arithmetic, Rational } from '../../src/index.js';
-import { point, triangle, solveTriangle } from '../../src/geometry/index.js';
+import { point, triangle } from '../../src/geometry/index.js';
 import type { Surd, Triangle } from '../../src/geometry/index.js';
 
 const MEASURES = ['Q1', 'Q2', 'Q3', 's1', 's2', 's3'] as const;

@@ -1,11 +1,11 @@
 // The types say which results are exact surds: Root<T, true> is Surd<T>, Root<T, false> is T.
 // (expectTypeOf is checked by `tsc --noEmit`; the runtime assertions check the same at run time.)
+import { solveTriangle } from '../../src/readings/triangle-readings.js';
 import { describe, expect, expectTypeOf, it } from 'vitest';
 import { rational, float, decimal } from '../../src/index.js';
 import type { Rational, Decimal } from '../../src/index.js';
 import {
   sqrtOf,
-  solveTriangle,
   solveQuadratic,
   solveStewart,
   isSurd,

@@ -3,6 +3,7 @@
 // specialised functions give bit-for-bit the generic results with `float`, throw the same
 // errors, and still run the untouched generic code for any other arithmetic; and that the
 // real quadspread/float source specialises triangle() and matches the generic triangle.
+import { solveTriangle } from '../../src/readings/triangle-readings.js';
 import { describe, expect, it, beforeAll } from 'vitest';
 import fc from 'fast-check';
 import path from 'node:path';
@@ -12,7 +13,7 @@ import { specializeSource } from '../../scripts/float-specialize.mjs';
 import { loadSpecialised } from '../float-entry.js';
 import * as G from './fixtures/generic.js';
 import { float, rational, QuadspreadError } from '../../src/index.js';
-import { triangle, point, quadrance, spread, solveTriangle } from '../../src/geometry/index.js';
+import { triangle, point, quadrance, spread } from '../../src/geometry/index.js';
 import {
   heightFromReading,
   heightFromInlineReadings,

@@ -1,11 +1,11 @@
 // Plane rational trigonometry against published triangle values (each source named beside its check).
+import { solveTriangle } from '../../src/readings/triangle-readings.js';
 import { describe, expect, it } from 'vitest';
 import { rational, decimal, float } from '../../src/index.js';
 import type { Arithmetic } from '../../src/index.js';
 import {
   point,
   triangle,
-  solveTriangle,
   quadrea,
   archimedesResidual,
   pythagorasResidual,

@@ -6,6 +6,7 @@ import { spreadFromDegrees, sinCosDegrees, verticalFromAngle } from '../../src/r
 import { heightFromReading } from '../../src/elevation/height.js';
 import { measured } from '../../src/uncertainty/measured.js';
 import { budget } from '../../src/uncertainty/budget.js';
+import { rootToNumber } from '../../src/geometry/surd.js';
 import { monteCarlo } from '../../src/uncertainty/monte-carlo.js';
 import {
   measuredAngle,
@@ -39,10 +40,23 @@ describe('uncertain readings carry sigmas from reading units through the convers
     expect(r.toString(budget(R, g).variance)).toBe('81/100000000'); // (0.0009°)² = (3.24/3600)²
   });
 
-  it('measuredDistance turns millimetres into metres and reads feet exactly (0.3048 m)', () => {
-    const d = measuredDistance(R, '1000', 4, 'd', 'ft');
+  it('measuredDistance reads σ with its own unit, or in the unit of the reading (feet: 0.3048 m)', () => {
+    const d = measuredDistance(R, '1000', '4 mm', 'd', 'ft');
     expect(r.toString(d.value)).toBe('1524/5');
     expect(budget(R, d).sigma.toString()).toBe('1/250');
+    // A bare σ is in the reading's unit: 0.01 ft = 0.003048 m.
+    const f = measuredDistance(R, '1000', '0.01', 'd', 'ft');
+    expect(budget(R, f).sigma.toString()).toBe('381/125000');
+    // Text readings with a unit: the same, and σ must name a unit too.
+    expect(r.toString(measuredDistance(R, '1000 ft', '4 mm', 'd').value)).toBe('1524/5');
+    expect(() => measuredDistance(R, '1000 ft', 4, 'd')).toThrow(
+      expect.objectContaining({ code: 'INVALID_SIGMA' }),
+    );
+    // { constant, ppm }: σ² = constant² + (ppm·10⁻⁶·d)², 2 mm + 5 ppm over 400 m = √(4 + 4) mm.
+    const e = measuredDistance(R, '400', { constant: '2 mm', ppm: 5 }, 'd');
+    expect(Math.abs(rootToNumber(r, budget(R, e).sigma) - Math.hypot(0.002, 0.002))).toBeLessThan(
+      1e-15,
+    );
   });
 
   it('measuredQuadrance has u(Q) = 2d·u(d) (derived)', () => {
@@ -51,7 +65,7 @@ describe('uncertain readings carry sigmas from reading units through the convers
         fc.integer({ min: 1, max: 100000 }),
         fc.integer({ min: 0, max: 50 }),
         (cm, mm) => {
-          const Q = measuredQuadrance(R, r.div(r.from(cm), r.from(100)), mm, 'd');
+          const Q = measuredQuadrance(R, r.div(r.from(cm), r.from(100)), `${mm} mm`, 'd');
           const expected = r.mul(
             r.mul(r.from(2), r.div(r.from(cm), r.from(100))),
             r.div(r.from(mm), r.from(1000)),
@@ -195,7 +209,7 @@ describe('acceptance: the height of a point from a horizontal distance d and an 
   );
 
   it('budget(U, h).sigma over float equals the hand propagation to 1e-12 relative', () => {
-    const Q = measuredQuadrance(F, d, 5, 'd');
+    const Q = measuredQuadrance(F, d, '5 mm', 'd');
     const v = measuredVertical(F, `12°30'00"`, uaSec, 'alpha');
     const h = F.sqrt(heightFromReading(F, { horizontal: Q, vertical: v }))!; // H = Q·R/(1 − R), h = √H
     const B = budget(F, h);
@@ -218,7 +232,7 @@ describe('acceptance: the height of a point from a horizontal distance d and an 
   });
 
   it('over rational the variance of H = h² is exact: it equals the hand formula evaluated in rational on the same readings', () => {
-    const Q = measuredQuadrance(R, d, 5, 'd');
+    const Q = measuredQuadrance(R, d, '5 mm', 'd');
     const v = measuredVertical(R, `12°30'00"`, uaSec, 'alpha');
     const Hq = heightFromReading(R, { horizontal: Q, vertical: v });
     const B = budget(R, Hq);
@@ -251,7 +265,7 @@ describe('acceptance: the height of a point from a horizontal distance d and an 
       M.pow(M.multiply(M.multiply(bn(150), sec2), uar), 2),
     );
     const want = M.sqrt(u2 as never);
-    const Q = measuredQuadrance(D, d, 5, 'd');
+    const Q = measuredQuadrance(D, d, '5 mm', 'd');
     const v = measuredVertical(D, '12.5', uaSec, 'alpha');
     const h = D.sqrt(heightFromReading(D, { horizontal: Q, vertical: v }))!;
     const got = bn(D.base.toString(budget(D, h).sigma));

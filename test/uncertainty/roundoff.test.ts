@@ -4,17 +4,11 @@
 // operation is exact times (1 + δ), |δ| ≤ u = 2⁻⁵³, and reading a decimal is one more
 // rounding). The tests check the bounds on random ill-conditioned cases; inputs are decimal
 // text, read by both arithmetics.
+import { solveTriangle } from '../../src/readings/triangle-readings.js';
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
 import type { Arithmetic } from '../../src/arithmetic/types.js';
-import {
-  quadrance,
-  spread,
-  cross,
-  quadrea,
-  triangle,
-  solveTriangle,
-} from '../../src/geometry/index.js';
+import { quadrance, spread, cross, quadrea, triangle } from '../../src/geometry/index.js';
 import { rational, float } from '../../src/arithmetic/index.js';
 import { heightFromReading } from '../../src/elevation/height.js';
 import { area } from '../../src/cogo/area.js';

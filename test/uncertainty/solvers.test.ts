@@ -1,11 +1,12 @@
 // The uncertain arithmetic runs the library's solvers unchanged: their gradients match
 // central finite differences of the same solvers in float (an independent way to get a
 // derivative), and over rational they are exact rationals equal to the float ones.
+import { solveTriangle } from '../../src/readings/triangle-readings.js';
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
 import { rational, float, uncertain, Uncertain } from '../../src/arithmetic/index.js';
 import type { Arithmetic } from '../../src/arithmetic/types.js';
-import { triangle, solveTriangle, spread, quadrance } from '../../src/geometry/index.js';
+import { triangle, spread, quadrance } from '../../src/geometry/index.js';
 import { intersectLines } from '../../src/cogo/intersect-lines.js';
 import { area } from '../../src/cogo/area.js';
 import { measured } from '../../src/uncertainty/measured.js';

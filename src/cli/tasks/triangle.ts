@@ -9,7 +9,6 @@ import {
   QuadspreadError,
   degreesFromSpread,
   solveTriangle,
-  spreadFromDegrees,
   triangle,
   isSurd,
   surd,
@@ -219,11 +218,10 @@ export const triangleTask: TaskKind = {
       compute(env) {
         const A = env.A;
         const given: Record<string, typeof A.zero> = {};
-        for (const k of known) {
-          const x = env.get(k.input);
-          given[k.key] =
-            k.form === 'side' ? A.mul(x, x) : k.form === 'angle' ? spreadFromDegrees(A, x) : x;
-        }
+        // Sides and angles go to the library as they are: solveTriangle reads them into Q and s.
+        const field = (k: Known): string =>
+          k.form === 'side' ? `side${k.key[1]}` : k.form === 'angle' ? `angle${k.key[1]}` : k.key;
+        for (const k of known) given[field(k)] = env.get(k.input);
         let solutions = solveTriangle(A, given);
         // A spread does not tell an angle from its supplement, but the job gave the angle:
         // keep the triangles whose angle there is acute, right or obtuse as given, by the sign
@@ -245,7 +243,7 @@ export const triangleTask: TaskKind = {
           throw new QuadspreadError(
             'NO_REAL_SOLUTION',
             'triangle task',
-            `no proper triangle has ${known.map((k) => `${k.key} = ${A.toPrecision(given[k.key]!, 8)}`).join(', ')}`,
+            `no proper triangle has ${known.map((k) => `${field(k)} = ${A.toPrecision(given[field(k)]!, 8)}`).join(', ')}`,
           );
         }
         const results = solutions.flatMap((t, i) =>

@@ -1,0 +1,215 @@
+/**
+ * Points in from CSV or GeoJSON files (`run --points`), and results out as GeoJSON or a CSV
+ * point file (`--export`), through the io entry.
+ *
+ * @module cli
+ */
+import { QuadspreadError, rational, type DatumTransformation } from '../index.js';
+import {
+  pointsFromFile,
+  pointsToCsv,
+  toGeoJson,
+  type ExchangePointInput,
+  type GeoJsonContent,
+  type Wgs84Reference,
+} from '../io/index.js';
+import { JobInvalid } from './failure.js';
+import type { Report } from './report.js';
+
+const R = rational;
+type Rat = ReturnType<typeof R.from>;
+
+/** The reference-system options of the command line. */
+export interface GridOptions {
+  /** `--grid`: an EPSG code of the table. */
+  grid?: string;
+  /** `--to-wgs84`: `coincident`, or the text of a JSON file `{ method, parameters, direction? }`. */
+  toWgs84?: string;
+  /** `--plane`: GeoJSON of plane coordinates (not RFC 7946). */
+  plane?: boolean;
+}
+
+/** Reads `--to-wgs84`: `coincident` or a JSON transformation (text already read). */
+function reference(
+  o: GridOptions,
+  readFile: (f: string) => string,
+): Wgs84Reference<Rat> | undefined {
+  if (o.grid === undefined) {
+    if (o.toWgs84 !== undefined) throw new JobInvalid('--to-wgs84', 'give --grid too');
+    return undefined;
+  }
+  let toWgs84: Wgs84Reference<Rat>['toWgs84'];
+  if (o.toWgs84 === 'coincident') toWgs84 = 'coincident';
+  else if (o.toWgs84 !== undefined) {
+    try {
+      toWgs84 = JSON.parse(readFile(o.toWgs84)) as DatumTransformation<Rat>;
+    } catch (e) {
+      if (e instanceof JobInvalid) throw e;
+      throw new JobInvalid(
+        '--to-wgs84',
+        `${JSON.stringify(o.toWgs84)} is not JSON: ${(e as Error).message}`,
+      );
+    }
+  }
+  return { grid: o.grid, ...(toWgs84 === undefined ? {} : { toWgs84 }) };
+}
+
+/** A QuadspreadError of the io entry as a refusal of the command line option. */
+function asInvalid(option: string, e: unknown): unknown {
+  return e instanceof QuadspreadError ? new JobInvalid(option, e.message) : e;
+}
+
+/** Exact decimal text of a rational (40 significant digits at most), for the job. */
+function text(x: Rat): string {
+  const t = R.toPrecision(x, 40);
+  return t.includes('.') && !/e/i.test(t) ? t.replace(/0+$/, '').replace(/\.$/, '') : t;
+}
+
+/**
+ * Adds the points of a file (CSV or GeoJSON) to the job's `points`: a point already in the job
+ * with other coordinates is refused, naming it.
+ */
+export function loadPoints(
+  job: unknown,
+  file: string,
+  content: string,
+  o: GridOptions,
+  readFile: (f: string) => string,
+): unknown {
+  const ref = reference(o, readFile);
+  let pts;
+  try {
+    pts = pointsFromFile(R, file, content, {
+      geojson: o.plane ? { coordinates: 'plane' } : ref === undefined ? {} : { reference: ref },
+    });
+  } catch (e) {
+    throw asInvalid('--points', e);
+  }
+  const j = (typeof job === 'object' && job !== null ? job : {}) as {
+    points?: Record<string, unknown>;
+  };
+  const points: Record<string, unknown> = { ...(j.points ?? {}) };
+  for (const p of pts) {
+    const entry = { east: text(p.x), north: text(p.y) };
+    const had = points[p.name] as { east?: unknown; north?: unknown } | undefined;
+    if (had !== undefined) {
+      const same = (a: unknown, b: string) => {
+        try {
+          return R.eq(
+            R.from(
+              typeof a === 'object' && a !== null ? (a as { value: never }).value : (a as never),
+            ),
+            R.from(b),
+          );
+        } catch {
+          return false;
+        }
+      };
+      if (!same(had.east, entry.east) || !same(had.north, entry.north))
+        throw new JobInvalid(
+          '--points',
+          `the point ${JSON.stringify(p.name)} of ${JSON.stringify(file)} is in the job with other coordinates`,
+        );
+      continue;
+    }
+    points[p.name] = entry;
+  }
+  return { ...j, points };
+}
+
+const GRID_TASKS = new Set(['traverse', 'resection', 'intersection', 'plane-network']);
+
+/** The job's points, exactly as written (the value of a measured coordinate). */
+function jobPoints(job: unknown): Map<string, { x: string; y: string }> {
+  const out = new Map<string, { x: string; y: string }>();
+  const pts =
+    (job as { points?: Record<string, { east?: unknown; north?: unknown }> }).points ?? {};
+  const v = (c: unknown) =>
+    String(typeof c === 'object' && c !== null ? (c as { value: unknown }).value : c);
+  for (const [name, p] of Object.entries(pts)) out.set(name, { x: v(p.east), y: v(p.north) });
+  return out;
+}
+
+/**
+ * What a report holds for the exchange formats: the job's points (exact), the points the
+ * tasks computed (from their plan sketches, as JS numbers), each traverse as a line through
+ * its adjusted points, each alignment's centre line, and each parcel (area task).
+ */
+export function exportContent(r: Report, job: unknown): GeoJsonContent<Rat> {
+  const known = jobPoints(job);
+  const points: ExchangePointInput<Rat>[] = [...known].map(([name, p]) => ({
+    name,
+    x: p.x,
+    y: p.y,
+  }));
+  const seen = new Set(known.keys());
+  const lines: {
+    name: string;
+    kind: string;
+    points: { x: number | string; y: number | string }[];
+  }[] = [];
+  const parcels: { name: string; points: { x: number | string; y: number | string }[] }[] = [];
+  for (const t of r.tasks) {
+    const plan = t.sketch?.find((s) => s.view === 'plan');
+    if (!plan) continue;
+    // Points in the job's plane coordinates: those the coordinate tasks compute (the sketches
+    // of the height tasks are drawn in their own local frames).
+    if (GRID_TASKS.has(t.kind))
+      for (const p of plan.points)
+        if ((p.role === 'computed' || p.role === 'station') && !seen.has(p.name)) {
+          seen.add(p.name);
+          points.push({ name: p.name, x: p.x, y: p.y });
+        }
+    const chain = (roles: string[]) => {
+      const ls = plan.lines.filter((l) => roles.includes(l.role));
+      return ls.length === 0
+        ? []
+        : [{ x: ls[0]!.x1, y: ls[0]!.y1 }, ...ls.map((l) => ({ x: l.x2, y: l.y2 }))];
+    };
+    if (t.kind === 'traverse') {
+      const adjusted = chain(['adjusted']);
+      if (adjusted.length > 1) lines.push({ name: t.name, kind: 'traverse', points: adjusted });
+    } else if (t.kind === 'alignment') {
+      const centre = chain(['straight', 'arc', 'transition']);
+      if (centre.length > 1) lines.push({ name: t.name, kind: 'alignment', points: centre });
+    } else if (t.kind === 'area') {
+      const corners = plan.points.map((p) => {
+        const exact = known.get(p.name);
+        return exact ?? { x: p.x, y: p.y };
+      });
+      if (corners.length >= 3) parcels.push({ name: t.name, points: corners });
+    }
+  }
+  return { points, lines, parcels };
+}
+
+/** The text of `--export <format>` for a report. */
+export function exportText(
+  format: string,
+  r: Report,
+  job: unknown,
+  o: GridOptions & { csvMode?: 'exchange' | 'spreadsheet'; lengthUnit?: string },
+  readFile: (f: string) => string,
+): string {
+  const content = exportContent(r, job);
+  try {
+    if (format === 'csv')
+      return pointsToCsv(R, content.points ?? [], { mode: o.csvMode ?? 'spreadsheet' });
+    if (format === 'geojson') {
+      const ref = reference(o, readFile);
+      if (!o.plane && r.lengthUnit !== 'm' && ref !== undefined)
+        throw new JobInvalid(
+          '--grid',
+          `the job's coordinates are in ${r.lengthUnit}: GeoJSON through a grid needs metres (or --plane)`,
+        );
+      const fc = toGeoJson(R, content, {
+        ...(ref === undefined ? {} : { reference: ref }),
+        coordinates: o.plane ? 'plane' : 'wgs84',
+      });
+      return JSON.stringify(fc, null, 1) + '\n';
+    }
+  } catch (e) {
+    throw asInvalid(format === 'geojson' ? '--export geojson' : '--export csv', e);
+  }
+  throw new JobInvalid('--export', `${JSON.stringify(format)} is not geojson or csv`);
+}

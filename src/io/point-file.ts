@@ -1,0 +1,57 @@
+/**
+ * Points from a file of any supported format: the dispatch by extension and content.
+ *
+ * @module io
+ */
+import { QuadspreadError, type Arithmetic } from '../index.js';
+import { checkArithmetic } from '../errors.js';
+import { pointsFromCsv, type CsvReadOptions } from './csv.js';
+import { dataFormatOf } from './format.js';
+import { pointsFromGeoJson, type GeoJsonReadOptions } from './geojson-read.js';
+import type { ExchangePoint } from './point.js';
+
+/** Options of {@link pointsFromFile}: those of each format's reader, by format. */
+export interface PointFileOptions<T> {
+  /** For a CSV point file. */
+  readonly csv?: CsvReadOptions;
+  /** For a GeoJSON document (the grid and datum, or plane coordinates). */
+  readonly geojson?: GeoJsonReadOptions<T>;
+}
+
+/**
+ * The points of a file, whatever its format: the format from the name and the first
+ * characters ({@link dataFormatOf}), then {@link pointsFromCsv} or {@link pointsFromGeoJson}
+ * with the options given for that format.
+ *
+ * @param A the arithmetic of the coordinates
+ * @param fileName the file's name (its extension is read)
+ * @param text the file's text
+ * @param options `{ csv?, geojson? }`: the options of each reader
+ * @returns the points, in file order
+ * @throws {@link QuadspreadError} `UNKNOWN_FORMAT` for a format that is not recognised or not
+ *   read here; the errors of the format's reader.
+ * @example
+ * ```ts
+ * import { rational } from 'quadspread';
+ * import { pointsFromFile } from 'quadspread/io';
+ * pointsFromFile(rational, 'control.txt', 'name;east;north\nK1;100.5;200\n').map((p) => [p.name, rational.toString(p.x)]);
+ * //=> [['K1', '201/2']]
+ * ```
+ */
+export function pointsFromFile<T>(
+  A: Arithmetic<T, boolean>,
+  fileName: string,
+  text: string,
+  options: PointFileOptions<T> = {},
+): ExchangePoint<T>[] {
+  checkArithmetic(A, 'pointsFromFile');
+  const format = dataFormatOf(fileName, typeof text === 'string' ? text.slice(0, 512) : text);
+  const o = options ?? {};
+  if (format === 'csv') return pointsFromCsv(A, text, o.csv);
+  if (format === 'geojson') return pointsFromGeoJson(A, text, o.geojson);
+  throw new QuadspreadError(
+    'UNKNOWN_FORMAT',
+    `pointsFromFile(${JSON.stringify(String(fileName))})`,
+    `reading points from ${format} is not supported by this version`,
+  );
+}
