@@ -14,6 +14,13 @@ function total<V>(A: Arithmetic<V, boolean>, xs: V[]): V {
   return xs.reduce((s, x) => A.add(s, x), A.zero);
 }
 
+/** The bearing of a course from its latitude dy and departure dx; blank for a null course. */
+function bearingOf<V>(A: Arithmetic<V, boolean>, dy: V, dx: V): Cell<V> {
+  return A.isZero(dx) && A.isZero(dy)
+    ? ''
+    : inverse(A, { x: A.zero, y: A.zero }, { x: dx, y: dy }).azimuth;
+}
+
 /** What the tables need of a traverse: adjusted parts absent for an open traverse. */
 interface Computed<V> {
   readonly rule: 'compass' | 'transit' | undefined;
@@ -47,10 +54,6 @@ export function traverseTables<V>(
     return openTables(A, t, names, bearings, unit, carried);
   const adjustedPoints = t.adjusted;
   const line = (i: number): string => `${names[i]}–${names[i + 1]}`;
-  const bearingOf = (i: number, dy: V, dx: V): Cell<V> =>
-    A.isZero(dx) && A.isZero(dy)
-      ? ''
-      : inverse(A, { x: A.zero, y: A.zero }, { x: dx, y: dy }).azimuth;
   const c = t.courses;
   const corrLat = c.map((k) => A.sub(k.adjustedLatitude!, k.latitude));
   const corrDep = c.map((k) => A.sub(k.adjustedDeparture!, k.departure));
@@ -69,7 +72,7 @@ export function traverseTables<V>(
     rows: [
       ...c.map((k, i) => [
         line(i),
-        bearings[i] ?? carried?.[i] ?? bearingOf(i, k.latitude, k.departure),
+        bearings[i] ?? carried?.[i] ?? bearingOf(A, k.latitude, k.departure),
         k.length,
         k.latitude,
         k.departure,
@@ -152,10 +155,6 @@ function openTables<V>(
 ): RawTable<V>[] {
   const line = (i: number): string => `${names[i]}–${names[i + 1]}`;
   const c = t.courses;
-  const bearingOf = (dy: V, dx: V): Cell<V> =>
-    A.isZero(dx) && A.isZero(dy)
-      ? ''
-      : inverse(A, { x: A.zero, y: A.zero }, { x: dx, y: dy }).azimuth;
   return [
     {
       name: 'traverse-sheet',
@@ -170,7 +169,7 @@ function openTables<V>(
       rows: [
         ...c.map((k, i) => [
           line(i),
-          bearings[i] ?? carried?.[i] ?? bearingOf(k.latitude, k.departure),
+          bearings[i] ?? carried?.[i] ?? bearingOf(A, k.latitude, k.departure),
           k.length,
           k.latitude,
           k.departure,
