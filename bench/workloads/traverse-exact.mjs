@@ -6,9 +6,9 @@
 //     as an integer root on one decimal scale, against the same traverse with given lengths
 //     (the goal: within 3×, i.e. no digit blow-up from the roots).
 import Fraction from 'fraction.js';
-import { rng, mm } from '../data.mjs';
+import { rng } from '../data.mjs';
 import { loop1 } from '../harness.mjs';
-import { naiveFraction } from './traverse.mjs';
+import { loopCases, naiveFraction } from './traverse.mjs';
 
 export const name = 'traverse20';
 export const title = 'exact traverse of 20 courses, given and computed lengths (rational)';
@@ -20,35 +20,7 @@ export function unavailable(lib) {
 
 /** `n`/10 closed loops of 20 courses (legs 20–300 m, mm values, a few mm of misclosure). */
 export function makeCases(n, seed = 20) {
-  const rand = rng(seed);
-  const count = Math.max(5, Math.min(40, Math.round(n / 10)));
-  const out = [];
-  for (let t = 0; t < count; t++) {
-    const courses = [];
-    let sx = 0,
-      sy = 0;
-    for (let i = 0; i < COURSES; i++) {
-      let lat, dep;
-      if (i < COURSES - 1) {
-        const a = (2 * Math.PI * i) / COURSES + (rand() - 0.5) * 0.5;
-        const d = 20 + rand() * 280;
-        lat = Math.round(d * Math.cos(a) * 1000);
-        dep = Math.round(d * Math.sin(a) * 1000);
-      } else {
-        lat = -sy + Math.round((rand() - 0.5) * 20);
-        dep = -sx + Math.round((rand() - 0.5) * 20);
-      }
-      sy += lat;
-      sx += dep;
-      courses.push({
-        latitude: mm(lat),
-        departure: mm(dep),
-        distance: mm(Math.round(Math.hypot(lat, dep))),
-      });
-    }
-    out.push({ start: { x: '1000.000', y: '5000.000' }, courses });
-  }
-  return out;
+  return loopCases(rng(seed), Math.max(5, Math.min(40, Math.round(n / 10))), COURSES);
 }
 
 export function build(lib, cases) {

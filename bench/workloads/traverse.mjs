@@ -16,19 +16,24 @@ export function unavailable(lib) {
 
 /** `n` traverses (few: each is 1000 courses) as text. */
 export function makeCases(n, seed = 3) {
-  const rand = rng(seed);
-  const count = Math.max(2, Math.min(8, Math.round(n / 100)));
+  return loopCases(rng(seed), Math.max(2, Math.min(8, Math.round(n / 100))), COURSES);
+}
+
+/**
+ * `count` closed loops of `courses` courses as text (mm): headings turn once around; legs
+ * 20–300 m; the last course returns to the start with a few millimetres of misclosure; each
+ * distance is the rounded length of its latitude and departure.
+ */
+export function loopCases(rand, count, courses) {
   const out = [];
   for (let t = 0; t < count; t++) {
-    const courses = [];
+    const list = [];
     let sx = 0,
       sy = 0;
-    for (let i = 0; i < COURSES; i++) {
-      // A closed polygon-ish walk: headings turn once around; legs 20–300 m; the last course
-      // returns to the start with a few millimetres of misclosure.
+    for (let i = 0; i < courses; i++) {
       let lat, dep;
-      if (i < COURSES - 1) {
-        const a = (2 * Math.PI * i) / COURSES + (rand() - 0.5) * 0.5;
+      if (i < courses - 1) {
+        const a = (2 * Math.PI * i) / courses + (rand() - 0.5) * 0.5;
         const d = 20 + rand() * 280;
         lat = Math.round(d * Math.cos(a) * 1000);
         dep = Math.round(d * Math.sin(a) * 1000);
@@ -39,9 +44,9 @@ export function makeCases(n, seed = 3) {
       sy += lat;
       sx += dep;
       const dist = Math.round(Math.hypot(lat, dep)); // measured distance, mm
-      courses.push({ latitude: mm(lat), departure: mm(dep), distance: mm(dist) });
+      list.push({ latitude: mm(lat), departure: mm(dep), distance: mm(dist) });
     }
-    out.push({ start: { x: '1000.000', y: '5000.000' }, courses });
+    out.push({ start: { x: '1000.000', y: '5000.000' }, courses: list });
   }
   return out;
 }
