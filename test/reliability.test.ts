@@ -217,3 +217,176 @@ describe('readings that are directions are not vertical angles or bearings', () 
     ).toBe('returned');
   });
 });
+
+describe('extreme magnitudes: a correct value or NOT_FINITE, never [] or NaN', () => {
+  let F: Record<string, any>;
+  beforeAll(async () => {
+    F = await loadFloatEntry();
+  }, 60_000);
+  const both = (): [string, (k: object) => any][] => [
+    ['quadspread/float', (k) => F.solveTriangle(k)],
+    ['generic, float', (k) => q.solveTriangle(q.float, k as never)],
+  ];
+
+  it('solveTriangle(float) scales quadrances near 1e154 and 1e-150: the equilateral triangle is found', () => {
+    // An equilateral triangle has spreads sin²60° = 3/4 (Euclid, Elements I.1 and the sine of
+    // 60°) and quadrea 3Q² (Heron's formula, Metrica I.8, in squared form).
+    for (const [name, solve] of both()) {
+      const [t] = solve({ Q1: 7e153, Q2: 7e153, Q3: 7e153 });
+      expect(t, name).toBeDefined();
+      expect(Math.abs(t.s1 - 0.75)).toBeLessThan(1e-15);
+      expect(Math.abs(t.quadrea / (3 * 7e153 * 7e153) - 1)).toBeLessThan(1e-15);
+      const two = solve({ Q1: 1e-150, Q2: 1e-150, s3: 0.75 });
+      expect(two.map((x: { Q3: number }) => x.Q3 / 1e-150)).toEqual([1, 3]);
+    }
+  });
+
+  it('solveTriangle(float) at 1e154 and 1e-200 is NOT_FINITE (the quadrea 3e308, 3e-400 is no JS number), not []', () => {
+    for (const [name, solve] of both()) {
+      expect(
+        codeOf(() => solve({ Q1: 1e154, Q2: 1e154, Q3: 1e154 })),
+        name,
+      ).toBe('NOT_FINITE');
+      expect(
+        codeOf(() => solve({ Q1: 1e-200, Q2: 1e-200, Q3: 1e-200 })),
+        name,
+      ).toBe('NOT_FINITE');
+    }
+    // rational has the range: the spreads are 3/4.
+    const [t] = q.solveTriangle(R, { Q1: 1e154, Q2: 1e154, Q3: 1e154 });
+    expect(q.rootToString(R, t!.s1)).toBe('3/4');
+  });
+
+  it('transverseMercator with k0 = 1e306 is NOT_FINITE, not NaN', () => {
+    const pr = { lon0: 3, k0: 1e306, falseEasting: 500000, ellipsoid: q.GRS80 };
+    expect(codeOf(() => F.transverseMercator({ lat: 10, lon: 4 }, pr))).toBe('NOT_FINITE');
+    expect(codeOf(() => q.transverseMercator(q.float, { lat: 10, lon: 4 }, pr))).toBe('NOT_FINITE');
+  });
+
+  it('monteCarlo of model values near 1e308 has a finite mean and σ, those of the distribution', () => {
+    // A rectangular distribution on [a, b] has mean (a + b)/2 and σ = (b − a)/√12
+    // (JCGM 101:2008, 6.4.2.3); scaled by 1e300 its draws reach 1.7e308.
+    const r = q.monteCarlo(
+      (x) => x.a * 1e300,
+      { a: { distribution: 'rectangular', low: -1e8, high: 1.7e8 } },
+      { n: 20000, seed: 3 },
+    );
+    expect(Math.abs(r.mean / 0.35e308 - 1)).toBeLessThan(0.05);
+    expect(Math.abs(r.sigma / ((2.7e154 / Math.sqrt(12)) * 1e154) - 1)).toBeLessThan(0.02);
+    expect(Number.isFinite(r.low) && Number.isFinite(r.high)).toBe(true);
+  });
+
+  it('clothoid of a length near 1e308 is refused at once (it would turn more than 4 rad), in rational and float', () => {
+    expect(codeOf(() => q.clothoid(R, { radius: 3000, length: '1e308' }))).toBe('INVALID_ARGUMENT');
+    expect(codeOf(() => F.clothoid({ radius: 3000, length: 1e308 }))).toMatch(
+      /^(INVALID_ARGUMENT|INVALID_NUMBER|NOT_FINITE)$/,
+    );
+    expect(codeOf(() => q.clothoid(R, { radius: 1, length: 9 }))).toBe('INVALID_ARGUMENT');
+    expect(codeOf(() => q.clothoid(R, { radius: 1, length: 8 }))).toBe('returned');
+  });
+
+  it('perimeter and traverse in rational with legs of 1e154 and more: no float overflow', () => {
+    // legs 1e300 and 1e300 and the hypotenuse √2·1e300 (Pythagoras, Elements I.47)
+    const p = q.perimeter(R, [
+      { x: 0, y: 0 },
+      { x: '1e300', y: 0 },
+      { x: 0, y: '1e300' },
+    ]);
+    expect(R.toNumber(p) / 1e300).toBeCloseTo(2 + Math.SQRT2, 14);
+    const t = q.traverse(R, {
+      start: { x: 0, y: 0 },
+      courses: [
+        { latitude: '1e154', departure: '1e154' },
+        { latitude: '-1e154', departure: 0 },
+      ],
+    });
+    expect(R.toNumber(t.points[2]!.x)).toBe(1e154);
+  });
+
+  it("resection(rational) with a control point at { x: '1e999', y: '1e-999' } answers at once", () => {
+    expect(
+      codeOf(() =>
+        q.resection(R, {
+          control: [
+            { x: '1e999', y: '1e-999' },
+            { x: 100, y: 0 },
+            { x: 0, y: -50 },
+          ],
+          angles: [90, 90],
+        }),
+      ),
+    ).toMatch(/^(DANGER_CIRCLE|NO_REAL_SOLUTION|returned)$/);
+  });
+});
+
+describe('internal conversions are not input: decimal(988) is not "input too long"', () => {
+  it('sinCosDegrees, spreadFromDegrees and angleToDegrees in decimal(988) (with guard digits, values of 1000 digits)', () => {
+    const D = q.decimal(988);
+    const tiny = D.from('1e-980');
+    // sin 30° = 1/2 and the spread of 45° is 1/2 (exact values)
+    const half = D.from('0.5');
+    const sc = q.sinCosDegrees(D, 30);
+    expect(D.cmp(D.abs(D.sub(sc.sin, half)), tiny)).toBeLessThan(0);
+    expect(D.cmp(D.abs(D.sub(q.spreadFromDegrees(D, 45), half)), tiny)).toBeLessThan(0);
+    expect(D.cmp(D.abs(D.sub(q.spreadFromDegrees(D, 30), D.from('0.25'))), tiny)).toBeLessThan(0);
+    expect(D.toNumber(q.angleToDegrees(D, `30°30'`))).toBe(30.5);
+    // −100/3 degrees: a sine of 988 digits written "-0.…" is over 1000 characters as text;
+    // it agrees with decimal(60) (and Math.sin, independently) to their precision.
+    const x = D.div(D.from(-100), D.from(3));
+    const D60 = q.decimal(60);
+    const s60 = q.sinCosDegrees(D60, D60.div(D60.from(-100), D60.from(3))).sin;
+    const s988 = q.sinCosDegrees(D, x).sin;
+    expect(D60.toNumber(D60.abs(D60.sub(D60.from(D.toPrecision(s988, 70)), s60)))).toBeLessThan(
+      1e-55,
+    );
+    expect(D.toNumber(s988)).toBeCloseTo(Math.sin((-100 / 3) * (Math.PI / 180)), 15);
+    // a spread of a tiny angle: its text in decimal(988) is long too
+    expect(D.toNumber(q.spreadFromDegrees(D, '1e-500'))).toBe(0);
+  });
+
+  it('resection in decimal(1000) answers as in rational', () => {
+    const r = q.resection(q.decimal(1000), {
+      control: [
+        { x: 0, y: 100 },
+        { x: 100, y: 0 },
+        { x: 0, y: -50 },
+      ],
+      angles: [90, `90°00'00"`],
+    });
+    expect(q.decimal(1000).toString(r.station.x)).toBe('0');
+  });
+});
+
+describe('alignment inputs with holes or junk are refused, naming the input', () => {
+  it('horizontalAlignment with a sparse points array or a curve that is not an object', () => {
+    // eslint-disable-next-line no-sparse-arrays
+    const points = [{ x: 0, y: 0 }, , { x: 60, y: 180 }] as never;
+    expect(codeOf(() => q.horizontalAlignment(R, { points, curves: [] }))).toBe('INVALID_ARGUMENT');
+    const ok = [
+      { x: 0, y: 0 },
+      { x: 0, y: 100 },
+      { x: 60, y: 180 },
+    ];
+    for (const c of [5, 'x', Object.create(null), null])
+      expect(codeOf(() => q.horizontalAlignment(R, { points: ok, curves: [c as never] }))).toMatch(
+        /^(INVALID_ARGUMENT|INVALID_NUMBER)$/,
+      );
+  });
+
+  it('profileLevel with a profile whose arrays have holes or junk curves', () => {
+    const v = q.verticalAlignment(R, {
+      points: [
+        { chainage: 0, level: 10 },
+        { chainage: 100, level: 12 },
+        { chainage: 200, level: 11 },
+      ],
+      curves: [null, { length: 50 }, null],
+    });
+    expect(codeOf(() => q.profileLevel(R, v, 100))).toBe('returned');
+    // eslint-disable-next-line no-sparse-arrays
+    const holed = { ...v, points: [v.points[0], , v.points[2]] } as never;
+    expect(codeOf(() => q.profileLevel(R, holed, 100))).toBe('INVALID_ARGUMENT');
+    const junk = { ...v, curves: [null, 5, null] } as never;
+    expect(codeOf(() => q.profileLevel(R, junk, 100))).toBe('INVALID_ARGUMENT');
+  });
+});

@@ -8,6 +8,9 @@ import { invalidArgument, QuadspreadError, checkArithmetic } from '../errors.js'
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readLength, seriesEpsilon } from './internal.js';
 
+/** The largest angle turned (radians) that a transition spiral is summed for. */
+const MAX_TAU = 4;
+
 /** What {@link clothoid} returns (lengths in the unit of the inputs, angles in radians and degrees). */
 export interface Clothoid<T> {
   /** Distance along the tangent from the tangent point (TS or ST). */
@@ -29,6 +32,13 @@ export interface Clothoid<T> {
  */
 export function clothoidSeries<T>(A: Arithmetic<T>, l: T, R: T, Ls: T): Clothoid<T> {
   const tau = A.div(A.mul(l, l), A.mul(A.from(2), A.mul(R, Ls)));
+  // The series needs about e·τ terms: a transition turns far less than 4 rad (229°), and
+  // beyond that the terms grow huge before they shrink (a hang in rational).
+  if (A.cmp(tau, A.from(MAX_TAU)) > 0)
+    throw invalidArgument(
+      'clothoid(A, input)',
+      `the transition turns ${A.toString(tau)} rad (l²/(2·R·Ls)), more than ${MAX_TAU} rad: check the radius and length`,
+    );
   const eps = seriesEpsilon(A);
   let x = A.zero;
   let y = A.zero;
@@ -62,8 +72,8 @@ export function clothoidSeries<T>(A: Arithmetic<T>, l: T, R: T, Ls: T): Clothoid
  * @param input `{ radius, length, at? }`: the radius R at the transition's end (> 0), its length
  *   Ls (> 0), and the distance l along it (0 ≤ l ≤ Ls; default Ls)
  * @returns `{ x, y, angle }` (angle in radians)
- * @throws {QuadspreadError} `INVALID_ARGUMENT` for a radius or length ≤ 0, or l outside
- *   [0, Ls]; `INVALID_NUMBER`.
+ * @throws {QuadspreadError} `INVALID_ARGUMENT` for a radius or length ≤ 0, l outside
+ *   [0, Ls], or a transition turning more than 4 rad (τ > 4); `INVALID_NUMBER`.
  * @example
  * ```ts
  * import { float, clothoid } from 'quadspread';

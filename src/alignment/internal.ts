@@ -11,11 +11,18 @@ import { readNumber } from '../geometry/validate.js';
 import { approxSqrt } from '../readings/numeric.js';
 import { parseStation } from './station.js';
 
-/** Checks that an input is an array of at most `max` items. @internal */
-export function readList<U>(x: unknown, where: string, max = 100_000): readonly U[] {
+/**
+ * Checks that an input is an array of at most `max` items, without holes (a sparse array)
+ * unless `holes` (where an absent item means none). @internal
+ */
+export function readList<U>(x: unknown, where: string, max = 100_000, holes = false): readonly U[] {
   if (!Array.isArray(x)) throw invalidArgument(where, `${show(x)} is not an array`);
   if (x.length > max)
     throw inputTooLong(where, `${x.length} items is more than the limit of ${max}`);
+  if (!holes)
+    for (let i = 0; i < x.length; i++)
+      if (!(i in x))
+        throw invalidArgument(`${where}[${i}]`, 'is missing (a hole in a sparse array)');
   return x as readonly U[];
 }
 

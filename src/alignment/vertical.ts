@@ -161,7 +161,7 @@ export function verticalAlignment<T>(
   const rawCurves =
     o.curves === undefined
       ? new Array<null>(n).fill(null)
-      : readList<unknown>(o.curves, `${where}.curves`);
+      : readList<unknown>(o.curves, `${where}.curves`, 100_000, true);
   if (rawCurves.length !== n)
     throw invalidArgument(
       `${where}.curves`,
@@ -306,7 +306,8 @@ export function profileLevel<T>(
     !Array.isArray(curves) ||
     points.length < 2 ||
     grades.length !== points.length - 1 ||
-    !points.every((p) => p !== null && typeof p === 'object' && A.is(p.chainage) && A.is(p.level))
+    curves.length !== points.length ||
+    !madeProfile(A, points, grades, curves)
   )
     throw invalidArgument(
       `${where} profile`,
@@ -336,6 +337,43 @@ export function profileLevel<T>(
   }
   const g = grades[lo]!;
   return { level: A.add(points[lo]!.level, A.mul(g, A.sub(c, points[lo]!.chainage))), grade: g };
+}
+
+/** A chainage and level of A's values. */
+function isLevel<T>(A: Arithmetic<T>, p: unknown): boolean {
+  return (
+    p !== null &&
+    typeof p === 'object' &&
+    A.is((p as ProfileLevel<T>).chainage) &&
+    A.is((p as ProfileLevel<T>).level)
+  );
+}
+
+/** Whether the parts of a profile are what verticalAlignment makes (every index, no holes). */
+function madeProfile<T>(
+  A: Arithmetic<T>,
+  points: readonly unknown[],
+  grades: readonly unknown[],
+  curves: readonly unknown[],
+): boolean {
+  for (let i = 0; i < points.length; i++) {
+    if (!isLevel(A, points[i])) return false;
+    if (i < grades.length && !A.is(grades[i])) return false;
+    const c = curves[i] as VerticalCurve<T> | null | undefined;
+    if (c === null) continue;
+    if (
+      typeof c !== 'object' ||
+      !isLevel(A, c.bvc) ||
+      !isLevel(A, c.evc) ||
+      !isLevel(A, c.atVip) ||
+      !A.is(c.gradeIn) ||
+      !A.is(c.gradeOut) ||
+      !A.is(c.lengthIn) ||
+      !A.is(c.lengthOut)
+    )
+      return false;
+  }
+  return true;
 }
 
 function onCurve<T>(

@@ -409,12 +409,14 @@ function tm<T>(
   const c = kruger(A, E, lat, A.sub(lon, lon0), where, wantGrid);
   const k = A.mul(k0, c.k);
   const convergence = toDegrees(A, c.gamma);
+  // A huge k0 or false origin can overflow float: NOT_FINITE rather than NaN or ±Infinity.
+  finiteResult(k, where);
   if (!wantGrid) return { E: A.zero, N: A.zero, k, convergence, xi0: A.zero };
   const xi0 = originXi ?? kruger(A, E, lat0, A.zero, where, true).xi!;
   const kA = A.mul(k0, A.mul(E.a, c.Aa)); // k0 · A, A = a · (A/a)
   return {
-    E: A.add(E0, A.mul(kA, c.eta!)),
-    N: A.add(N0, A.mul(kA, A.sub(c.xi!, xi0))),
+    E: finiteResult(A.add(E0, A.mul(kA, c.eta!)), where),
+    N: finiteResult(A.add(N0, A.mul(kA, A.sub(c.xi!, xi0))), where),
     k,
     convergence,
     xi0,

@@ -10,6 +10,7 @@ import {
   invalidArgument,
   unsupportedOperation,
   checkArithmetic,
+  notFinite,
 } from '../errors.js';
 import { type Root, type Surd, surd } from './surd.js';
 import type { Triangle } from './triangle.js';
@@ -112,15 +113,18 @@ const KEYS = ['Q1', 'Q2', 'Q3', 's1', 's2', 's3'] as const;
  * quadrances breaking the triangle inequality (quadrea ≤ 0), an opposite spread too large
  * for its sides, spreads that cannot meet — give an empty list, never NaN. In `float` and
  * `decimal` a discriminant that rounds below zero also gives no solution, so a tangent
- * (single-solution) case may come back empty.
+ * (single-solution) case may come back empty. In `float`, quadrances beyond 2^±100 are scaled
+ * by a power of 2 (exactly) while solving, so that products of quadrances neither overflow
+ * nor underflow; a triangle whose quadrances or quadrea then fall outside the range of a JS
+ * number is `NOT_FINITE`, never an empty list.
  *
  * @param A the arithmetic
  * @param known exactly three of `Q1, Q2, Q3` (≥ 0, square units) and `s1, s2, s3` (in [0, 1])
  * @returns 0, 1 or 2 triangles
  * @throws {QuadspreadError} `NEEDS_A_QUADRANCE` for three spreads; `INVALID_ARGUMENT` unless
  * exactly three known measures are given (and no other keys); `NEGATIVE_QUADRANCE`,
- * `SPREAD_OUT_OF_RANGE`, `INVALID_NUMBER` for bad values; `NOT_FINITE` in float when the quadrea
- * (a product of quadrances) overflows.
+ * `SPREAD_OUT_OF_RANGE`, `INVALID_NUMBER` for bad values; `NOT_FINITE` in float when a
+ * quadrance or the quadrea (a product of quadrances) found is beyond the range of a JS number.
  * @example
  * ```ts
  * import { rational, solveTriangle } from 'quadspread';
@@ -163,7 +167,60 @@ export function solveTriangleQs<T, E extends boolean>(
     if ((Q[i] !== undefined && A.isZero(Q[i]!)) || (s[i] !== undefined && A.isZero(s[i]!)))
       return [];
   const F = (A.exact ? surdField(A) : valueField(A)) as unknown as Field<T, Root<T, E>>;
+  if (A.float64) {
+    const e = floatScale(Q as (number | undefined)[]);
+    if (e !== 0) return solveScaled(A, F, Q, s, nq, e, w);
+  }
   return solve(A, F, Q, s, nq);
+}
+
+/**
+ * float: the binary exponent e of the largest quadrance when it is far from 1 (beyond 2^±100),
+ * else 0. Quadrances multiplied by 2^−e (exact in binary floating point) have products that
+ * neither overflow nor underflow, spreads do not change with scale, and the quadrances and
+ * quadrea found are multiplied back by 2^e and 2^2e.
+ */
+function floatScale(Q: (number | undefined)[]): number {
+  let max = 0;
+  for (const q of Q) if (q !== undefined && q > max) max = q;
+  if (max === 0 || (max < 2 ** 100 && max > 2 ** -100)) return 0;
+  return Math.round(Math.log2(max));
+}
+
+/** x · 2^k, exact unless the result leaves the range of a JS number (k up to ±2200). */
+function times2(x: number, k: number): number {
+  const h = Math.trunc(k / 2);
+  return x * 2 ** h * 2 ** (k - h);
+}
+
+function solveScaled<T, R>(
+  A: Arithmetic<T>,
+  F: Field<T, R>,
+  Q: (T | undefined)[],
+  s: (T | undefined)[],
+  nq: number,
+  e: number,
+  w: string,
+): Triangle<R>[] {
+  const scaled = Q.map((q) => (q === undefined ? q : (times2(q as number, -e) as T)));
+  return solve(A, F, scaled, s, nq).map((t) => {
+    const back = (x: R, k: number): R => {
+      const v = times2(x as number, k);
+      if (!(v - v === 0 && v !== 0))
+        throw notFinite(
+          w,
+          `a triangle exists, but its ${k === e ? 'quadrances' : 'quadrea (16·area²)'} ${show(x)} · 2^${k} is beyond the range of a JS number: use decimal(n) or rational`,
+        );
+      return v as R;
+    };
+    return {
+      ...t,
+      Q1: back(t.Q1, e),
+      Q2: back(t.Q2, e),
+      Q3: back(t.Q3, e),
+      quadrea: back(t.quadrea, 2 * e),
+    };
+  });
 }
 
 function solve<T, R>(

@@ -77,16 +77,17 @@ export function guardOf<T>(A: Arithmetic<T>): Arithmetic<T> | undefined {
 const GUARDS = new WeakMap<object, Arithmetic<unknown>>();
 
 /**
- * Runs `f` in the guard arithmetic `G` of `A` with an input moved there as text, and rounds
- * the result once into `A`.
+ * Runs `f` in the guard arithmetic `G` of `A` with an input moved there as a value of `G`
+ * (exactly; not as text, which at 1000 digits and more would trip the limit on input text),
+ * and rounds the result once into `A`.
  * @internal
  */
 export function viaGuard<T, I>(
   A: Arithmetic<T>,
   G: Arithmetic<T>,
   input: I,
-  f: (G: Arithmetic<T>, x: I | string) => T,
+  f: (G: Arithmetic<T>, x: I | T) => T,
 ): T {
-  const x = A.is(input) ? A.toString(input as unknown as T) : input;
-  return A.from(G.toString(f(G, x)));
+  const x = A.is(input) ? G.from(input as unknown as T) : input;
+  return A.from(f(G, x));
 }

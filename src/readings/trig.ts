@@ -120,11 +120,10 @@ export function sinCosDegrees<T>(A: Arithmetic<T>, degrees: Numeric<T>): { sin: 
   }
   const G = guardOf(A);
   if (G) {
-    const r = sinCos(
-      G,
-      A.is(degrees) ? A.toString(degrees as T) : (degrees as number | string | bigint),
-    );
-    return { sin: A.from(G.toString(r.sin)), cos: A.from(G.toString(r.cos)) };
+    // Values cross between A and its guard as values, not text (a decimal(n) reads another's
+    // value exactly; text of 1000 digits and more would trip the limit on input text).
+    const r = sinCos(G, A.is(degrees) ? G.from(degrees) : degrees);
+    return { sin: A.from(r.sin), cos: A.from(r.cos) };
   }
   return sinCos(A, degrees);
 }

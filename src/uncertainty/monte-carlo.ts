@@ -150,23 +150,34 @@ export function monteCarlo<K extends string>(
     }
     y[r] = v;
   }
+  // Large model values (|y| > 2^500) are summed scaled by 2^−600 (exact, a power of 2), so
+  // that their sum and the sum of squared deviations do not overflow to ±Infinity or NaN.
+  let big = 0;
+  for (let r = 0; r < n; r++) big = Math.max(big, Math.abs(y[r] as number));
+  const scale = big > 2 ** 500 ? 2 ** -600 : 1;
   // ỹ = Σ yᵣ / M (JCGM 101 eq. (16)); compensated (Neumaier) summation.
   let sum = 0;
   let comp = 0;
   for (let r = 0; r < n; r++) {
-    const v = y[r] as number;
+    const v = (y[r] as number) * scale;
     const t = sum + v;
     comp += Math.abs(sum) >= Math.abs(v) ? sum - t + v : v - t + sum;
     sum = t;
   }
-  const mean = (sum + comp) / n;
+  const scaledMean = (sum + comp) / n;
   // u²(ỹ) = Σ (yᵣ − ỹ)² / (M − 1) (JCGM 101 eq. (17)); two passes.
   let ss = 0;
   for (let r = 0; r < n; r++) {
-    const e = (y[r] as number) - mean;
+    const e = (y[r] as number) * scale - scaledMean;
     ss += e * e;
   }
-  const sigma = Math.sqrt(ss / (n - 1));
+  const mean = scaledMean / scale;
+  const sigma = Math.sqrt(ss / (n - 1)) / scale;
+  if (!Number.isFinite(sigma))
+    throw notFinite(
+      where,
+      `the standard deviation of the model values (up to ${show(big)}) is beyond the range of a JS number`,
+    );
   y.sort();
   // Shortest coverage interval (JCGM 101 §7.7.2): q = pM if integer, else ⌊pM + 1/2⌋;
   // the interval [y₍ᵣ₎, y₍ᵣ₊q₋₁₎] of least width over r = 1, …, M − q + 1.
@@ -175,7 +186,7 @@ export function monteCarlo<K extends string>(
   let best = 0;
   let width = Infinity;
   for (let r = 0; r + q - 1 < n; r++) {
-    const w = (y[r + q - 1] as number) - (y[r] as number);
+    const w = (y[r + q - 1] as number) * scale - (y[r] as number) * scale;
     if (w < width) {
       width = w;
       best = r;
