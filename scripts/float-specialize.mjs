@@ -17,10 +17,10 @@
  *    `A.is(x)` → a finite-number test, `checkArithmetic(A, …)` → nothing (A is float there),
  *    `A.cmp(x, y) > 0` → `x > y` and `A.cmp(x, y) < 0` → `x < y`, `if (A.kernels) { … }` → nothing,
  *    `A.abs(x)` → `Math.abs(x)`, `A.zero` → `0`, `A.one` → `1`, `A.digits` → `15`, `A.float64` →
- *    `true`, `A.exact` → `false`, `A.kernels`, `A.ratio`, `A.withDigits`, `A.approximate` →
- *    `undefined`
+ *    `true`, `A.exact` → `false`, `A.pi` → `Math.PI`, `A.kernels`, `A.ratio`, `A.withDigits`,
+ *    `A.approximate` → `undefined`
  *    (float has none), and `A.div`, `A.sqrt`,
- *    `A.cmp`, `A.sign`, `A.from` → tiny helpers with exactly the float arithmetic's checks
+ *    `A.cmp`, `A.sign`, `A.from`, `A.sin`, `A.cos`, `A.exp`, `A.log`, `A.atan2` → tiny helpers with exactly the float arithmetic's checks
  *    (a zero divisor or a negative root still throws the same QuadspreadError).
  *  - Every other use of `A` (toNumber, toString, kernels, passing A on) is left as it is.
  * The rewrite reproduces `float`'s own definitions operation by operation, so results are
@@ -52,6 +52,11 @@ const OPS = {
   cmp: [2, (a, b) => `__qsCmp(${a}, ${b})`],
   sign: [1, (a) => `__qsSign(${a})`],
   from: [1, (a) => `__qsFrom(${a})`],
+  sin: [1, (a) => `__qsSin(${a})`],
+  cos: [1, (a) => `__qsCos(${a})`],
+  exp: [1, (a) => `__qsExp(${a})`],
+  log: [1, (a) => `__qsLog(${a})`],
+  atan2: [2, (a, b) => `__qsAtan2(${a}, ${b})`],
   is: [1, (a) => `__qsIs(${a})`],
 };
 // float has no fused kernels: `A.kernels` is `undefined` in the float copy. Parenthesised so
@@ -66,6 +71,7 @@ const CONSTANTS = {
   approximate: '(void 0)',
   ratio: '(void 0)',
   withDigits: '(void 0)',
+  pi: '(Math.PI)',
 };
 /** The rewrite for the name `k`, own keys only (`A.toString`, `A.constructor` are left alone). */
 const own = (table, k) => (Object.hasOwn(table, k) ? table[k] : undefined);
@@ -78,9 +84,16 @@ export const __qsSqrt = (a) => { const r = Math.sqrt(a); return r - r === 0 ? r 
 export const __qsCmp = (a, b) => (a < b ? -1 : a > b ? 1 : 0);
 export const __qsSign = (a) => (a < 0 ? -1 : a > 0 ? 1 : 0);
 export const __qsFrom = (x) => (typeof x === 'number' && x - x === 0 ? x : __qsFloat.from(x));
+// The transcendental functions: Math's on finite input with a finite result (what float does
+// there), float's own operation (with its checks) for anything else.
+export const __qsSin = (x) => (x - x === 0 ? Math.sin(x) : __qsFloat.sin(x));
+export const __qsCos = (x) => (x - x === 0 ? Math.cos(x) : __qsFloat.cos(x));
+export const __qsExp = (x) => { const r = Math.exp(x); return r - r === 0 && x - x === 0 ? r : __qsFloat.exp(x); };
+export const __qsLog = (x) => (x > 0 && x < Infinity ? Math.log(x) : __qsFloat.log(x));
+export const __qsAtan2 = (y, x) => (y - y === 0 && x - x === 0 && (y !== 0 || x !== 0) ? Math.atan2(y, x) : __qsFloat.atan2(y, x));
 export const __qsIs = (x) => typeof x === 'number' && x - x === 0;
 `;
-const HELPER_IMPORT = `import { __qsFloat, __qsDiv, __qsSqrt, __qsCmp, __qsSign, __qsFrom, __qsIs } from '${HELPERS}';\n`;
+const HELPER_IMPORT = `import { __qsFloat, __qsDiv, __qsSqrt, __qsCmp, __qsSign, __qsFrom, __qsSin, __qsCos, __qsExp, __qsLog, __qsAtan2, __qsIs } from '${HELPERS}';\n`;
 
 function isFunctionLike(node) {
   // Functions, arrows, methods, constructors, getters and setters: anything with parameters.

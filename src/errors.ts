@@ -278,6 +278,7 @@ const METHODS = [
 ] as const;
 // Arithmetics already checked (a cache only: it changes no result).
 const checked = /* @__PURE__ */ new WeakSet<object>();
+let lastChecked: unknown;
 
 /**
  * Checks, once per arithmetic object, that the first argument of a public function is an
@@ -285,7 +286,13 @@ const checked = /* @__PURE__ */ new WeakSet<object>();
  * `QuadspreadError` naming the function rather than a TypeError deep inside. @internal
  */
 export function checkArithmetic(A: unknown, where: string): void {
-  if (checked.has(A as object)) return;
+  // The last arithmetic checked, first: a comparison instead of a hash lookup on every call of
+  // a hot function (docs/performance.md).
+  if (A === lastChecked && A !== undefined) return;
+  if (checked.has(A as object)) {
+    lastChecked = A;
+    return;
+  }
   let ok = false;
   try {
     ok =

@@ -8,6 +8,7 @@ import type { Arithmetic } from '../arithmetic/types.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { finiteResult } from '../geometry/validate.js';
 import { readArray } from '../cogo/internal.js';
+import { shotFloat, sideShotsFloat } from './side-shot-float.js';
 import { reduceAt, type FieldObservation } from './reduce.js';
 import { readSetup, turn, type ReadSetup, type SetupInput } from './internal.js';
 
@@ -70,7 +71,12 @@ export interface SideShot<T> {
  */
 export function sideShot<T>(A: Arithmetic<T>, setup: SetupInput<T>, shot: Shot<T>): SideShot<T> {
   checkArithmetic(A, 'sideShot');
-  return shotFrom(A, readSetup(A, setup, 'sideShot(setup)'), shot, 'sideShot(shot)');
+  const s = readSetup(A, setup, 'sideShot(setup)');
+  if (A.float64 === true) {
+    const fast = shotFloat(s as unknown as ReadSetup<number>, shot);
+    if (fast !== undefined) return fast as unknown as SideShot<T>;
+  }
+  return shotFrom(A, s, shot, 'sideShot(shot)');
 }
 
 /**
@@ -98,9 +104,14 @@ export function sideShots<T>(
 ): SideShot<T>[] {
   checkArithmetic(A, 'sideShots');
   const s = readSetup(A, setup, 'sideShots(setup)');
-  return readArray<Shot<T>>(shots, 'sideShots(shots)').map((o, i) =>
-    shotFrom(A, s, o, `sideShots(shots)[${i}]`),
-  );
+  const list = readArray<Shot<T>>(shots, 'sideShots(shots)');
+  // Float: the twin, on plain numbers (docs/performance.md, "Float: twins in the generic
+  // source"); undefined when a shot needs the generic path below.
+  if (A.float64 === true) {
+    const fast = sideShotsFloat(s as unknown as ReadSetup<number>, list);
+    if (fast !== undefined) return fast as unknown as SideShot<T>[];
+  }
+  return list.map((o, i) => shotFrom(A, s, o, `sideShots(shots)[${i}]`));
 }
 
 /** One side shot from a read set-up. @internal */

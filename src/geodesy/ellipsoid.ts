@@ -277,6 +277,31 @@ export function ellipsoidParameters<T>(
   return P;
 }
 
+/** The last call of {@link parametersAt}: its arithmetic, ellipsoid input and result. */
+let lastA: unknown;
+let lastInput: unknown;
+let lastParams: unknown;
+
+/**
+ * `ellipsoidParameters(A, readEllipsoid(e, where))`, answering a repeated call with the same
+ * arithmetic and ellipsoid (a name, or a frozen ellipsoid) by two comparisons instead of the
+ * lookups: a conversion of one point costs about as much as those. @internal
+ */
+export function parametersAt<T>(
+  A: Arithmetic<T>,
+  e: Ellipsoid | string,
+  where: string,
+): EllipsoidParameters<T> {
+  if (A === lastA && e === lastInput) return lastParams as EllipsoidParameters<T>;
+  const P = ellipsoidParameters(A, readEllipsoid(e, where));
+  if (typeof e === 'string' || Object.isFrozen(e)) {
+    lastA = A;
+    lastInput = e;
+    lastParams = P;
+  }
+  return P;
+}
+
 /** Parameters already computed, by arithmetic and ellipsoid. */
 const PARAMETERS = /* @__PURE__ */ new WeakMap<
   object,

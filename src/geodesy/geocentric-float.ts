@@ -10,7 +10,7 @@
  * @internal
  */
 import { sinCosInto } from '../readings/trig-float.js';
-import type { Geocentric, Geodetic } from './geocentric.js';
+import type { Geodetic } from './geocentric.js';
 
 /** sin φ, cos φ, sin λ, cos λ of the call in progress (read before any other call). */
 const SCRATCH = /* @__PURE__ */ new Float64Array(4);
@@ -19,28 +19,34 @@ const isNum = (v: unknown): v is number => typeof v === 'number' && v - v === 0;
 
 /**
  * `geodeticToGeocentric(float, point, E)` for numeric input (`a`, `e2` the ellipsoid's
- * float constants), or `undefined`.
+ * float constants), written into `out[0..2]` (X, Y, Z); `false` where the generic code must
+ * decide. (The caller builds the result object: one allocation site, which V8 can remove
+ * when the caller is inlined, where an object-or-undefined return could not be.)
  * @internal
  */
-export function geocentricFloat(
+export function geocentricInto(
   point: { lat?: unknown; lon?: unknown; h?: unknown },
   a: number,
   e2: number,
-): Geocentric<number> | undefined {
+  out: Float64Array,
+): boolean {
   const lat = point.lat;
   const lon = point.lon;
   const h = point.h === undefined ? 0 : point.h;
-  if (!isNum(lat) || !isNum(lon) || !isNum(h)) return undefined;
-  if (Math.abs(lat) > 90 || Math.abs(lon) > 360 || h < -a) return undefined;
+  if (!isNum(lat) || !isNum(lon) || !isNum(h)) return false;
+  if (Math.abs(lat) > 90 || Math.abs(lon) > 360 || h < -a) return false;
   const sc = SCRATCH;
-  if (!sinCosInto(lat, sc, 0) || !sinCosInto(lon, sc, 2)) return undefined;
+  if (!sinCosInto(lat, sc, 0) || !sinCosInto(lon, sc, 2)) return false;
   const sp = sc[0]!;
   // ν = a/√(1 − e² sin²φ), as primeVertical computes it
   const w = Math.sqrt(1 - e2 * (sp * sp));
   const nu = a / w;
-  if (w - w !== 0 || nu - nu !== 0) return undefined;
+  if (w - w !== 0 || nu - nu !== 0) return false;
   const r = (nu + h) * sc[1]!;
-  return { X: r * sc[3]!, Y: r * sc[2]!, Z: ((1 - e2) * nu + h) * sp };
+  out[0] = r * sc[3]!;
+  out[1] = r * sc[2]!;
+  out[2] = ((1 - e2) * nu + h) * sp;
+  return true;
 }
 
 /** The constants {@link geodeticFloat} needs (those of ellipsoidParameters in float). */

@@ -9,7 +9,7 @@ import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { readNumber, expectObject } from '../geometry/validate.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import {
-  ellipsoidParameters,
+  parametersAt,
   readEllipsoid,
   type Ellipsoid,
   type EllipsoidParameters,
@@ -24,7 +24,10 @@ import {
   tenToMinus,
   toDegrees,
 } from './internal.js';
-import { geocentricFloat, geodeticFloat } from './geocentric-float.js';
+import { geocentricInto, geodeticFloat } from './geocentric-float.js';
+
+/** The float twin's X, Y, Z (read at once). */
+const XYZ = /* @__PURE__ */ new Float64Array(3);
 
 /** Geodetic coordinates: latitude and longitude in decimal degrees (north, east positive), height in metres above the ellipsoid. */
 export interface Geodetic<T> {
@@ -84,11 +87,12 @@ export function geodeticToGeocentric<T>(
   checkArithmetic(A, 'geodeticToGeocentric');
   const where = 'geodeticToGeocentric(point)';
   expectObject(point, where, '{ lat, lon, h }');
-  const E = ellipsoidParameters(A, readEllipsoid(ellipsoid, 'geodeticToGeocentric(ellipsoid)'));
+  const E = parametersAt(A, ellipsoid, 'geodeticToGeocentric(ellipsoid)');
   if (A.float64) {
     // The float twin (same operations, same order) for numeric input; else the code below.
-    const fast = geocentricFloat(point, E.a as number, E.e2 as number);
-    if (fast !== undefined) return fast as Geocentric<T>;
+    const o = XYZ;
+    if (geocentricInto(point, E.a as number, E.e2 as number, o))
+      return { X: o[0]!, Y: o[1]!, Z: o[2]! } as unknown as Geocentric<T>;
   }
   const lat = readLatitude(A, point.lat, `${where}.lat`);
   const lon = readLongitude(A, point.lon, `${where}.lon`);
@@ -154,7 +158,7 @@ export function geocentricToGeodetic<T>(
   checkArithmetic(A, 'geocentricToGeodetic');
   const where = 'geocentricToGeodetic(point)';
   expectObject(point, where, '{ X, Y, Z }');
-  const E = ellipsoidParameters(A, readEllipsoid(ellipsoid, 'geocentricToGeodetic(ellipsoid)'));
+  const E = parametersAt(A, ellipsoid, 'geocentricToGeodetic(ellipsoid)');
   if (A.float64) {
     // The float twin (same operations, same order, same tolerances); else the code below.
     const digits = claimedDigits(A);

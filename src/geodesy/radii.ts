@@ -9,12 +9,12 @@
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { sinCosDegrees } from '../readings/trig.js';
-import { ellipsoidParameters, readEllipsoid, type Ellipsoid } from './ellipsoid.js';
+import { parametersAt, type Ellipsoid } from './ellipsoid.js';
 import { readAngle, readLatitude, root } from './internal.js';
 import { checkArithmetic } from '../errors.js';
 
 function setup<T>(A: Arithmetic<T>, lat: Numeric<T>, ellipsoid: Ellipsoid | string, fn: string) {
-  const E = ellipsoidParameters(A, readEllipsoid(ellipsoid, `${fn}(ellipsoid)`));
+  const E = parametersAt(A, ellipsoid, `${fn}(ellipsoid)`);
   const { sin, cos } = sinCosDegrees(A, readLatitude(A, lat, `${fn}(lat)`));
   // W² = 1 − e² sin²φ
   const W2 = A.sub(A.one, A.mul(E.e2, A.mul(sin, sin)));

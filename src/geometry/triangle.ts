@@ -66,13 +66,85 @@ export function triangle<T>(
   A2: PointLike<T>,
   A3: PointLike<T>,
 ): Triangle<T> {
-  // [x, y] points are read in a separate call, so that this function stays small enough for
-  // V8 to inline (docs/performance.md, "Small enough to inline").
+  // Float: the twin below, on plain numbers (docs/performance.md, "Float: twins in the generic
+  // source"), so that the generic entry with float is fast in any process.
+  if ((A as { float64?: unknown } | null | undefined)?.float64 === true)
+    return triangleFloat(A, A1, A2, A3);
+  return triangleAny(A, A1, A2, A3);
+}
+
+// [x, y] points are read in a separate call, so that triangle() stays small enough for V8 to
+// inline (docs/performance.md, "Small enough to inline").
+function triangleAny<T>(
+  A: Arithmetic<T>,
+  A1: PointLike<T>,
+  A2: PointLike<T>,
+  A3: PointLike<T>,
+): Triangle<T> {
   checkArithmetic(A, 'triangle');
   if (A1 == null || A2 == null || A3 == null) checkPoints3(A, A1, A2, A3, 'triangle');
   if (Array.isArray(A1) || Array.isArray(A2) || Array.isArray(A3))
     return triangleOf(A, asPoint(A1), asPoint(A2), asPoint(A3));
   return triangleOf(A, A1 as Point<T>, A2 as Point<T>, A3 as Point<T>);
+}
+
+/**
+ * The float twin of triangleOf: the same operations, in the same order, on plain numbers,
+ * without the arithmetic's calls (test/perf/float-twins.test.ts checks it bit for bit against
+ * the generic code). Anything else — a coordinate that is not a number, an [x, y] point,
+ * coincident or collinear points, a result that is not finite — goes to the generic code,
+ * which gives the same result or reports the error. The fallback is a call that never runs on
+ * good input, so V8 compiles it as a deoptimisation and the result object, built in one place,
+ * can be scalar-replaced like hand-written code's.
+ */
+function triangleFloat<T>(
+  A: Arithmetic<T>,
+  A1: PointLike<T>,
+  A2: PointLike<T>,
+  A3: PointLike<T>,
+): Triangle<T> {
+  // (A point that is null or not an object reads as undefined here: the generic code reports it.)
+  const P1 = A1 as unknown as Point<number> | null | undefined,
+    P2 = A2 as unknown as Point<number> | null | undefined,
+    P3 = A3 as unknown as Point<number> | null | undefined;
+  const x1 = P1?.x,
+    y1 = P1?.y,
+    x2 = P2?.x,
+    y2 = P2?.y,
+    x3 = P3?.x,
+    y3 = P3?.y;
+  if (
+    typeof x1 !== 'number' ||
+    typeof y1 !== 'number' ||
+    typeof x2 !== 'number' ||
+    typeof y2 !== 'number' ||
+    typeof x3 !== 'number' ||
+    typeof y3 !== 'number'
+  )
+    return triangleAny(A, A1, A2, A3);
+  const ux = x2 - x1;
+  const uy = y2 - y1;
+  const vx = x3 - x1;
+  const vy = y3 - y1;
+  const wx = x3 - x2;
+  const wy = y3 - y2;
+  const Q1 = wx * wx + wy * wy;
+  const Q2 = vx * vx + vy * vy;
+  const Q3 = ux * ux + uy * uy;
+  const D = ux * vy - uy * vx;
+  const D2 = D * D;
+  let s1 = D2 / (Q2 * Q3);
+  let s2 = D2 / (Q1 * Q3);
+  let s3 = D2 / (Q1 * Q2);
+  const quadrea = 4 * D2;
+  // One test for zero and non-finite values: a zero quadrance or D2, an overflow or a NaN
+  // leaves some spread 0, ∞ or NaN, or quadrea ∞ (the generic code reports those).
+  if (!(s1 > 0 && s2 > 0 && s3 > 0 && s1 + s2 + s3 + quadrea < Infinity))
+    return triangleAny(A, A1, A2, A3);
+  if (s1 > 1) s1 = 1;
+  if (s2 > 1) s2 = 1;
+  if (s3 > 1) s3 = 1;
+  return { Q1, Q2, Q3, s1, s2, s3, quadrea } as unknown as Triangle<T>;
 }
 
 function triangleOf<T>(A: Arithmetic<T>, A1p: Point<T>, A2p: Point<T>, A3p: Point<T>): Triangle<T> {

@@ -16,9 +16,11 @@ const PER_DEGREE = Math.PI / 180; // float.div(float.pi, 180): π rad = 180°
  * @internal
  */
 export function sinCosFloat(degrees: number): { sin: number; cos: number } | undefined {
-  const out = new Float64Array(2);
-  return sinCosInto(degrees, out, 0) ? { sin: out[0]!, cos: out[1]! } : undefined;
+  // One scratch array for every call (a typed array per call cost more than the sines).
+  return sinCosInto(degrees, OUT, 0) ? { sin: OUT[0]!, cos: OUT[1]! } : undefined;
 }
+
+const OUT = /* @__PURE__ */ new Float64Array(2);
 
 /**
  * {@link sinCosFloat} written into `out[at]` (sin) and `out[at + 1]` (cos), so that a hot
@@ -71,4 +73,22 @@ export function sinCosInto(degrees: number, out: Float64Array, at: number): bool
   out[at] = k === 0 ? sin : k === 1 ? cos : k === 2 ? -sin : -cos;
   out[at + 1] = k === 0 ? cos : k === 1 ? -sin : k === 2 ? -cos : sin;
   return true;
+}
+
+/**
+ * `modulo(float, d, 360)` (a turn: [0°, 360°)) by the same passes as the generic reduction, or
+ * `NaN` where the generic code must decide (not finite, or too large to reduce).
+ * @internal
+ */
+export function turnFloat(degrees: number): number {
+  let d = degrees;
+  if (d >= 0 && d < 360) return d;
+  if (d - d !== 0) return NaN;
+  if (Math.abs(d + 360 - d - 360) > 360 / 1e6) return NaN;
+  for (let i = 0; i < 8; i++) {
+    if (d >= 0 && d < 360) return d;
+    const q = Math.floor(d / 360);
+    d = q === 0 ? d + 360 : d - q * 360;
+  }
+  return NaN;
 }

@@ -194,4 +194,57 @@ describe('float-specialize', () => {
       { numRuns: 300 },
     );
   });
+
+  it('projections and geodesics (sin, cos, exp, log, atan2 rewritten) equal the generic ones with float', async () => {
+    const { toGrid, fromGrid, geodesicInverse, geodeticToGeocentric } =
+      await import('../../src/index.js');
+    const lcc = {
+      method: 'lambert-conic-2sp',
+      ellipsoid: 'GRS80',
+      lat0: 46.5,
+      lon0: 3,
+      lat1: 49,
+      lat2: 44,
+      falseEasting: 700000,
+      falseNorthing: 6600000,
+    } as const;
+    const tm = { method: 'transverse-mercator', ellipsoid: 'WGS84', lon0: 3, k0: 0.9996 } as const;
+    const lat = fc.oneof(
+      fc.double({ min: -90, max: 90, noNaN: true }),
+      fc.constantFrom(90, -90, 0, -0, 89.9999999999, 1e-300),
+    );
+    const lon = fc.oneof(
+      fc.double({ min: -540, max: 540, noNaN: true }),
+      fc.constantFrom(180, -180, 183, 1e12),
+    );
+    fc.assert(
+      fc.property(lat, lon, lat, lon, (la, lo, la2, lo2) => {
+        const same = (f: () => unknown, g: () => unknown) => expect(outcome(f)).toEqual(outcome(g));
+        for (const P of [lcc, tm]) {
+          same(
+            () => F.toGrid({ lat: la, lon: lo }, P),
+            () => toGrid(float, { lat: la, lon: lo }, P),
+          );
+          same(
+            () => F.fromGrid({ E: 700000 + lo * 1000, N: 6600000 + la * 1000 }, P),
+            () => fromGrid(float, { E: 700000 + lo * 1000, N: 6600000 + la * 1000 }, P),
+          );
+        }
+        same(
+          () => F.geodesicInverse({ lat: la, lon: lo }, { lat: la2, lon: lo2 }, 'WGS84'),
+          () => geodesicInverse(float, { lat: la, lon: lo }, { lat: la2, lon: lo2 }, 'WGS84'),
+        );
+        same(
+          () => F.geodeticToGeocentric({ lat: la, lon: lo, h: 100 }, 'GRS80'),
+          () => geodeticToGeocentric(float, { lat: la, lon: lo, h: 100 }, 'GRS80'),
+        );
+      }),
+      { numRuns: 300 },
+    );
+    // Not two identical errors: the ordinary point gives values.
+    expect(outcome(() => F.toGrid({ lat: 45, lon: 2 }, lcc))).toHaveProperty('value');
+    expect(
+      outcome(() => F.geodesicInverse({ lat: 45, lon: 2 }, { lat: -30, lon: 100 }, 'WGS84')),
+    ).toHaveProperty('value');
+  });
 });

@@ -216,3 +216,139 @@ describe('heightFromInlineReadings(float, …) through the twin', () => {
     expect(differ).toBe(0);
   });
 });
+
+describe('triangle(float, …) through the twin', () => {
+  const coordinate = fc.oneof(
+    fc.double({ min: -1e5, max: 1e5, noNaN: true }),
+    fc.integer({ min: -3, max: 3 }),
+    fc.double({ min: -1e-160, max: 1e-160, noNaN: true }),
+    fc.double({ noNaN: true }),
+    fc.constantFrom(0, -0, 1e154, -1e154, 1e-300, 5e-324, '2.5', null),
+  );
+  const pt = fc.oneof(
+    fc.record({ x: coordinate, y: coordinate }),
+    fc.tuple(coordinate, coordinate),
+  );
+  it('is exactly the generic float result (or the same error), awkward input included', async () => {
+    const { triangle } = await import('../../src/index.js');
+    fc.assert(
+      fc.property(pt, pt, pt, (P1, P2, P3) => {
+        const args = [P1, P2, P3] as never as [never, never, never];
+        expect(outcome(() => triangle(float, ...args))).toStrictEqual(
+          outcome(() => triangle(generic, ...args)),
+        );
+      }),
+      { numRuns: 5000 },
+    );
+  });
+
+  it('agrees exactly on 20000 seeded triangles of millimetre coordinates and right angles', async () => {
+    const { triangle } = await import('../../src/index.js');
+    let s = 0x5eed;
+    const rand = () => {
+      s ^= s << 13;
+      s >>>= 0;
+      s ^= s >>> 17;
+      s ^= s << 5;
+      s >>>= 0;
+      return s / 4294967296;
+    };
+    let differ = 0;
+    for (let i = 0; i < 20000; i++) {
+      const size = 10 ** (rand() * 5);
+      const c = () => Math.round(rand() * 1e8) / 1000;
+      const x1 = c(),
+        y1 = c();
+      const dx = Math.round((rand() - 0.5) * size * 1000) / 1000;
+      const dy = Math.round((rand() - 0.5) * size * 1000) / 1000;
+      // Every other triangle has a right angle at A1 (spreads that round just above 1).
+      const [x3, y3] = i % 2 ? [x1 - dy, y1 + dx] : [c(), c()];
+      const P = [
+        { x: x1, y: y1 },
+        { x: x1 + dx, y: y1 + dy },
+        { x: x3, y: y3 },
+      ] as const;
+      const a = outcome(() => triangle(float, P[0], P[1], P[2]));
+      const b = outcome(() => triangle(generic, P[0], P[1], P[2]));
+      try {
+        expect(a).toStrictEqual(b);
+      } catch {
+        differ++;
+      }
+    }
+    expect(differ).toBe(0);
+  });
+});
+
+describe('sideShots(float, …) and sideShot(float, …) through the twin', () => {
+  const num = (lo: number, hi: number) => fc.double({ min: lo, max: hi, noNaN: true });
+  const awkward = fc.constantFrom(0, -0, 180, 360, -180, 1e300, -1e-300, '90', null, undefined);
+  const shot = fc.record(
+    {
+      circle: fc.oneof(
+        num(-720, 720),
+        fc.integer({ min: -8, max: 8 }).map((k) => k * 90),
+        awkward,
+      ),
+      zenith: fc.oneof(num(0, 360), fc.constantFrom(90, 180, 270, 45), awkward),
+      slope: fc.oneof(num(0, 3000), fc.constantFrom(0, -0, -1, 1e200), awkward),
+      targetHeight: fc.oneof(num(-2, 3), fc.constantFrom(undefined, 0, 1e308)),
+      name: fc.constantFrom(undefined, 'P1', 7),
+      ppm: fc.constantFrom(undefined, undefined, undefined, 10),
+      unit: fc.constantFrom(undefined, undefined, undefined, 'gon'),
+    },
+    { requiredKeys: ['circle', 'zenith', 'slope'] },
+  );
+  const setup = fc.record({
+    station: fc.oneof(
+      fc.record({ x: num(-1e6, 1e6), y: num(-1e7, 1e7), z: num(-100, 5000) }),
+      fc.record({ x: num(-1e6, 1e6), y: num(-1e7, 1e7) }),
+      fc.constant({ x: 1e308, y: 0, z: 1e308 }),
+    ),
+    instrumentHeight: fc.oneof(num(0, 2), fc.constant(undefined)),
+    orientation: fc.oneof(num(-400, 400), fc.constantFrom(0, 359.9999999999, `12°30'`)),
+  });
+  it('is exactly the generic float result (or the same error), awkward input included', async () => {
+    const { sideShots, sideShot } = await import('../../src/index.js');
+    fc.assert(
+      fc.property(setup, fc.array(shot, { maxLength: 4 }), (S, shots) => {
+        const st = S as never;
+        expect(outcome(() => sideShots(float, st, shots as never))).toStrictEqual(
+          outcome(() => sideShots(generic, st, shots as never)),
+        );
+        for (const o of shots)
+          expect(outcome(() => sideShot(float, st, o as never))).toStrictEqual(
+            outcome(() => sideShot(generic, st, o as never)),
+          );
+      }),
+      { numRuns: 3000 },
+    );
+  });
+
+  it('agrees exactly on 20000 seeded shots to the second and the millimetre', async () => {
+    const { sideShots } = await import('../../src/index.js');
+    let s = 0xface;
+    const rand = () => {
+      s ^= s << 13;
+      s >>>= 0;
+      s ^= s >>> 17;
+      s ^= s << 5;
+      s >>>= 0;
+      return s / 4294967296;
+    };
+    const sec = (lo: number, hi: number) =>
+      (lo * 3600 + Math.floor(rand() * (hi - lo) * 3600)) / 3600;
+    const shots = Array.from({ length: 20000 }, () => ({
+      circle: sec(0, 360),
+      zenith: sec(60, 300),
+      slope: Math.round(rand() * 2e6) / 1000,
+      targetHeight: Math.round(rand() * 3000) / 1000,
+    }));
+    const setup = {
+      station: { x: 351234.567, y: 5812345.678, z: 123.456 },
+      instrumentHeight: 1.543,
+      orientation: 211.5,
+    };
+    expect(sideShots(float, setup, shots)).toStrictEqual(sideShots(generic, setup, shots));
+  });
+});
