@@ -41,7 +41,8 @@ describe('published schemas', () => {
       const r = cli(['run', resolve(root, 'examples', f)]);
       expect({ f, code: r.code, stderr: r.stderr }).toEqual({ f, code: 0, stderr: '' });
     }
-  });
+    // one CLI process per example job: 0.3 s each on an idle machine, several times that under load
+  }, 180_000);
 
   it('ajv rejects the jobs that the runner rejects with exit 2 for breaking the schema', () => {
     const validate = ajv().compile(readJson('docs/job-schema.json'));
@@ -93,7 +94,8 @@ describe('quadspread demo --format json', () => {
         ).toBeLessThan(1e-6);
       });
     });
-  });
+    // three CLI runs of the demo job (each with its uncertainty pass)
+  }, 90_000);
 });
 
 describe('quadspread demo --sketch', () => {
