@@ -303,7 +303,7 @@ describe('extreme magnitudes: a correct value or NOT_FINITE, never [] or NaN', (
     expect(R.toNumber(t.points[2]!.x)).toBe(1e154);
   });
 
-  it("resection(rational) with a control point at { x: '1e999', y: '1e-999' } answers at once", () => {
+  it("resection(rational) refuses a control point at { x: '1e999', y: '1e-999' } at once, naming it", () => {
     expect(
       codeOf(() =>
         q.resection(R, {
@@ -315,7 +315,17 @@ describe('extreme magnitudes: a correct value or NOT_FINITE, never [] or NaN', (
           angles: [90, 90],
         }),
       ),
-    ).toMatch(/^(DANGER_CIRCLE|NO_REAL_SOLUTION|returned)$/);
+    ).toBe('INVALID_ARGUMENT');
+    expect(() =>
+      q.resection(R, {
+        control: [
+          { x: 0, y: 100 },
+          { x: 100, y: 0 },
+          { x: 0, y: '-1e-999' },
+        ],
+        angles: [90, 90],
+      }),
+    ).toThrow(/control\[2\]\.y/);
   });
 });
 

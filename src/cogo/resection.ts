@@ -62,6 +62,11 @@ export interface Resection<T> {
   readonly circle: { readonly center: Point<T>; readonly quadrance: T };
 }
 
+/** The largest coordinate size {@link resection} takes. */
+const MAX_COORDINATE = '1e100';
+/** The smallest non-zero coordinate size {@link resection} takes. */
+const MIN_COORDINATE = '1e-100';
+
 /**
  * Three-point resection: the station from which the control points P1, P2, P3 are seen
  * at the clockwise horizontal angles a12 (P1 → P2) and a23 (P2 → P3).
@@ -96,8 +101,9 @@ export interface Resection<T> {
  * no circle; `INVALID_ANGLE` for an angle that does not parse or is outside [0°, 360°);
  * `NO_REAL_SOLUTION` when no station sees the control points at the given clockwise angles
  * (Tienstra's formula cannot tell an angle from the angle + 180°, so the one candidate it
- * gives is checked against the observed angles); `INVALID_ARGUMENT` for a malformed input
- * or a negative tolerance.
+ * gives is checked against the observed angles); `INVALID_ARGUMENT` for a malformed input,
+ * a negative tolerance, or a control coordinate larger than 1e100 or non-zero and smaller
+ * than 1e-100 in size.
  * @example
  * ```ts
  * import { rational, resection } from 'quadspread';
@@ -122,6 +128,24 @@ export function resection<T>(A: Arithmetic<T, boolean>, input: ResectionInput<T>
     Point<T>,
     Point<T>,
   ];
+  // Survey coordinates lie far inside ±1e100 and are zero or larger than 1e-100 in size: beyond
+  // that, exact arithmetic would carry hundreds of digits through Tienstra's formula for no
+  // meaningful station (a control point at 1e999 took seconds in rational).
+  const big = A.from(MAX_COORDINATE);
+  const small = A.from(MIN_COORDINATE);
+  P.forEach((p, i) => {
+    for (const [axis, v] of [
+      ['x', p.x],
+      ['y', p.y],
+    ] as const) {
+      const m = A.abs(v);
+      if (A.cmp(m, big) > 0 || (A.sign(v) !== 0 && A.cmp(m, small) < 0))
+        throw invalidArgument(
+          `${where} control[${i}].${axis}`,
+          `${A.toString(v).slice(0, 40)} is outside the range of survey coordinates (zero, or 1e-100 to 1e100 in size)`,
+        );
+    }
+  });
   const full = A.from(360);
   const readAngle = (a: Numeric<T>, name: string): T => {
     const d = angleToDegrees(A, a);

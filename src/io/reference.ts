@@ -165,7 +165,8 @@ export function gridToWgs84<T>(
   point: { readonly x: Numeric<T>; readonly y: Numeric<T> },
   reference: Wgs84Reference<T>,
 ): { lon: T; lat: T } {
-  return prepareReference(A, reference, 'gridToWgs84(reference)').toLonLat(point.x, point.y);
+  const p = pointObject(point, 'gridToWgs84(point)', '{ x, y }');
+  return prepareReference(A, reference, 'gridToWgs84(reference)').toLonLat(p.x, p.y);
 }
 
 /**
@@ -190,8 +191,13 @@ export function wgs84ToGrid<T>(
   position: { readonly lon: Numeric<T>; readonly lat: Numeric<T> },
   reference: Wgs84Reference<T>,
 ): { x: T; y: T } {
-  return prepareReference(A, reference, 'wgs84ToGrid(reference)').fromLonLat(
-    position.lon,
-    position.lat,
-  );
+  const p = pointObject(position, 'wgs84ToGrid(position)', '{ lon, lat }');
+  return prepareReference(A, reference, 'wgs84ToGrid(reference)').fromLonLat(p.lon, p.lat);
+}
+
+/** The point argument as an object, or `INVALID_ARGUMENT` naming it. */
+function pointObject<P extends object>(p: P, where: string, shape: string): P {
+  if (typeof p !== 'object' || p === null || Array.isArray(p))
+    throw new QuadspreadError('INVALID_ARGUMENT', where, `${show(p)} is not a point ${shape}`);
+  return p;
 }

@@ -230,6 +230,13 @@ describe('gridToWgs84 and wgs84ToGrid', () => {
     ).toBe('INVALID_ARGUMENT');
   });
 
+  it('refuse a point or position that is not an object, naming the argument', () => {
+    const ref = { grid: 'EPSG:32633' } as const;
+    expect(() => gridToWgs84(float, null as never, ref)).toThrow(/gridToWgs84\(point\)/);
+    expect(codeOf(() => gridToWgs84(float, 5 as never, ref))).toBe('INVALID_ARGUMENT');
+    expect(() => wgs84ToGrid(float, [15, 0] as never, ref)).toThrow(/wgs84ToGrid\(position\)/);
+  });
+
   it('take a projection object in grads and still give degrees', () => {
     // UTM zone 33N's parameters in grads (15° = 50/3 gon): the result is in degrees.
     const p = gridToWgs84(
