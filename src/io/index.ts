@@ -28,3 +28,22 @@ export { pointsFromCsv, streamPointsFromCsv, pointsToCsv } from './csv.js';
 export type { CsvColumns, CsvReadOptions, CsvWriteOptions } from './csv.js';
 export { pointsFromFile } from './point-file.js';
 export type { PointFileOptions } from './point-file.js';
+export { readLandXml, pointsFromLandXml } from './landxml-read.js';
+export type {
+  LandXmlDocument,
+  LandXmlObservation,
+  LandXmlPoint,
+  LandXmlReadOptions,
+  LandXmlSetup,
+} from './landxml-read.js';
+export { toLandXml } from './landxml-write.js';
+export type {
+  LandXmlAlignmentInput,
+  LandXmlContent,
+  LandXmlParcelInput,
+  LandXmlPointInput,
+  LandXmlWriteOptions,
+  LandXmlWriteUnit,
+} from './landxml-write.js';
+export { METRES_PER_LANDXML_UNIT } from './landxml-units.js';
+export type { LandXmlAngularUnit, LandXmlLinearUnit, LandXmlUnits } from './landxml-units.js';

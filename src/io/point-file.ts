@@ -3,11 +3,12 @@
  *
  * @module io
  */
-import { QuadspreadError, type Arithmetic } from '../index.js';
+import type { Arithmetic } from '../index.js';
 import { checkArithmetic } from '../errors.js';
 import { pointsFromCsv, type CsvReadOptions } from './csv.js';
 import { dataFormatOf } from './format.js';
 import { pointsFromGeoJson, type GeoJsonReadOptions } from './geojson-read.js';
+import { pointsFromLandXml, type LandXmlReadOptions } from './landxml-read.js';
 import type { ExchangePoint } from './point.js';
 
 /** Options of {@link pointsFromFile}: those of each format's reader, by format. */
@@ -16,20 +17,23 @@ export interface PointFileOptions<T> {
   readonly csv?: CsvReadOptions;
   /** For a GeoJSON document (the grid and datum, or plane coordinates). */
   readonly geojson?: GeoJsonReadOptions<T>;
+  /** For a LandXML document. */
+  readonly landxml?: LandXmlReadOptions;
 }
 
 /**
  * The points of a file, whatever its format: the format from the name and the first
- * characters ({@link dataFormatOf}), then {@link pointsFromCsv} or {@link pointsFromGeoJson}
- * with the options given for that format.
+ * characters ({@link dataFormatOf}), then {@link pointsFromCsv}, {@link pointsFromGeoJson} or
+ * {@link pointsFromLandXml} (its `CgPoint`s, in the file's units) with the options given for
+ * that format.
  *
  * @param A the arithmetic of the coordinates
  * @param fileName the file's name (its extension is read)
  * @param text the file's text
- * @param options `{ csv?, geojson? }`: the options of each reader
+ * @param options `{ csv?, geojson?, landxml? }`: the options of each reader
  * @returns the points, in file order
- * @throws {@link QuadspreadError} `UNKNOWN_FORMAT` for a format that is not recognised or not
- *   read here; the errors of the format's reader.
+ * @throws {@link QuadspreadError} `UNKNOWN_FORMAT` for a format that is not recognised; the
+ *   errors of the format's reader.
  * @example
  * ```ts
  * import { rational } from 'quadspread';
@@ -49,9 +53,11 @@ export function pointsFromFile<T>(
   const o = options ?? {};
   if (format === 'csv') return pointsFromCsv(A, text, o.csv);
   if (format === 'geojson') return pointsFromGeoJson(A, text, o.geojson);
-  throw new QuadspreadError(
-    'UNKNOWN_FORMAT',
-    `pointsFromFile(${JSON.stringify(String(fileName))})`,
-    `reading points from ${format} is not supported by this version`,
-  );
+  return pointsFromLandXml(A, text, o.landxml).map((p) => ({
+    name: p.name,
+    x: p.x,
+    y: p.y,
+    ...(p.height !== undefined ? { height: p.height } : {}),
+    ...(p.code !== undefined ? { code: p.code } : {}),
+  }));
 }
