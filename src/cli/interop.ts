@@ -1,14 +1,28 @@
 /**
- * Points in from CSV or GeoJSON files (`run --points`), and results out as GeoJSON or a CSV
- * point file (`--export`), through the io entry.
+ * Points in from CSV, GeoJSON or LandXML files (`run --points`), and results out as GeoJSON,
+ * LandXML or a CSV point file (`--export`), through the io entry.
  *
  * @module cli
  */
-import { QuadspreadError, rational, type DatumTransformation } from '../index.js';
 import {
+  METRES_PER_UNIT,
+  QuadspreadError,
+  rational,
+  type Arithmetic,
+  type DatumTransformation,
+  type LengthUnit,
+} from '../index.js';
+import {
+  METRES_PER_LANDXML_UNIT,
+  dataFormatOf,
   pointsFromFile,
   pointsToCsv,
+  readLandXml,
   toGeoJson,
+  toLandXml,
+  type ExchangePoint,
+  type LandXmlAlignmentInput,
+  type LandXmlWriteUnit,
   type ExchangePointInput,
   type GeoJsonContent,
   type Wgs84Reference,
@@ -77,11 +91,13 @@ export function loadPoints(
   readFile: (f: string) => string,
 ): unknown {
   const ref = reference(o, readFile);
-  let pts;
+  let pts: ExchangePoint<Rat>[];
   try {
-    pts = pointsFromFile(R, file, content, {
-      geojson: o.plane ? { coordinates: 'plane' } : ref === undefined ? {} : { reference: ref },
-    });
+    if (dataFormatOf(file, content.slice(0, 512)) === 'landxml') pts = landXmlPoints(job, content);
+    else
+      pts = pointsFromFile(R, file, content, {
+        geojson: o.plane ? { coordinates: 'plane' } : ref === undefined ? {} : { reference: ref },
+      });
   } catch (e) {
     throw asInvalid('--points', e);
   }
@@ -115,6 +131,74 @@ export function loadPoints(
     points[p.name] = entry;
   }
   return { ...j, points };
+}
+
+/** The job's length unit (`units.length`, default m). */
+function jobUnit(job: unknown): LengthUnit {
+  const u = (job as { units?: { length?: unknown } } | null)?.units?.length;
+  return typeof u === 'string' && Object.hasOwn(METRES_PER_UNIT, u) ? (u as LengthUnit) : 'm';
+}
+
+/** The CgPoints of a LandXML file, converted exactly from the file's units to the job's. */
+function landXmlPoints(job: unknown, content: string): ExchangePoint<Rat>[] {
+  const doc = readLandXml(R, content);
+  if (doc.points.length === 0)
+    throw new JobInvalid(
+      '--points',
+      'the LandXML file has no CgPoint (points are read from CgPoints)',
+    );
+  const to = R.from(METRES_PER_UNIT[jobUnit(job)]);
+  const f = R.div(R.from(METRES_PER_LANDXML_UNIT[doc.units!.linear]), to);
+  const fh = R.div(R.from(METRES_PER_LANDXML_UNIT[doc.units!.elevation]), to);
+  return doc.points.map((p) => ({
+    name: p.name,
+    x: R.mul(p.x, f),
+    y: R.mul(p.y, f),
+    ...(p.height !== undefined ? { height: R.mul(p.height, fh) } : {}),
+    ...(p.code !== undefined ? { code: p.code } : {}),
+  }));
+}
+
+const LANDXML_UNITS: Partial<Record<LengthUnit, LandXmlWriteUnit>> = {
+  m: 'meter',
+  ft: 'foot',
+  'us-ft': 'USSurveyFoot',
+};
+
+/** The report as a LandXML document: points, parcels, and alignments from the alignment tasks. */
+function landXmlText(r: Report, job: unknown, content: GeoJsonContent<Rat>): string {
+  const unit = LANDXML_UNITS[jobUnit(job)];
+  if (unit === undefined)
+    throw new JobInvalid(
+      '--export landxml',
+      `the job's lengths are in ${r.lengthUnit}: LandXML is written for jobs in m, ft or us-ft`,
+    );
+  const withGeometry = r.tasks.filter((t) => t.exchange?.alignment !== undefined);
+  const A = (withGeometry[0]?.exchange?.A ?? R) as Arithmetic<unknown, boolean>;
+  const alignments: LandXmlAlignmentInput<unknown>[] = withGeometry.map((t) => ({
+    name: t.name,
+    horizontal: t.exchange!.alignment!.horizontal,
+    ...(t.exchange!.alignment!.vertical ? { vertical: t.exchange!.alignment!.vertical } : {}),
+  }));
+  const date = r.header?.date !== undefined ? new Date(`${r.header.date}T00:00:00Z`) : new Date();
+  return toLandXml(
+    A,
+    {
+      points: (content.points ?? []) as never,
+      parcels: (content.parcels ?? []) as never,
+      alignments,
+    },
+    {
+      linearUnit: unit,
+      ...(Number.isNaN(date.getTime()) ? {} : { date }),
+      application: {
+        name: 'quadspread',
+        ...(r.header?.program !== undefined
+          ? { version: r.header.program.replace(/^quadspread\s*/, '') }
+          : {}),
+      },
+    },
+  );
 }
 
 const GRID_TASKS = new Set(['traverse', 'resection', 'intersection', 'plane-network']);
@@ -195,6 +279,7 @@ export function exportText(
   try {
     if (format === 'csv')
       return pointsToCsv(R, content.points ?? [], { mode: o.csvMode ?? 'spreadsheet' });
+    if (format === 'landxml') return landXmlText(r, job, content);
     if (format === 'geojson') {
       const ref = reference(o, readFile);
       if (!o.plane && r.lengthUnit !== 'm' && ref !== undefined)
@@ -209,7 +294,7 @@ export function exportText(
       return JSON.stringify(fc, null, 1) + '\n';
     }
   } catch (e) {
-    throw asInvalid(format === 'geojson' ? '--export geojson' : '--export csv', e);
+    throw asInvalid(`--export ${format}`, e);
   }
-  throw new JobInvalid('--export', `${JSON.stringify(format)} is not geojson or csv`);
+  throw new JobInvalid('--export', `${JSON.stringify(format)} is not geojson, landxml or csv`);
 }

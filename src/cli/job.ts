@@ -354,6 +354,9 @@ export function runJob(job: unknown, kinds: readonly TaskKind[], options: RunOpt
         ? { tables: base.tables.map((t) => presentTable(A, t, rules)) }
         : {}),
       ...(base.sketch ? { sketch: base.sketch } : {}),
+      ...(base.exchange
+        ? { exchange: { A: A as Arithmetic<unknown, boolean>, ...base.exchange } }
+        : {}),
     };
     if (A.exact && base.results.some((q) => uncertainties.get(q.name)?.dependsOnAngle ?? approx))
       anyTranscendental = true;

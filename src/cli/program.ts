@@ -134,7 +134,7 @@ function addReportOptions(cmd: Command): Command {
     .option('-o, --out <file>', 'write the report to this file instead of the standard output')
     .option(
       '--export <format-and-file...>',
-      'also write the points, traverses and parcels as geojson or csv to a file: --export geojson site.geojson (see docs/interop.md)',
+      'also write the points, traverses, alignments and parcels as geojson, landxml or csv to a file: --export geojson site.geojson (see docs/interop.md)',
     )
     .option('--grid <EPSG code>', 'the grid of the coordinates, for GeoJSON (e.g. EPSG:27700)')
     .option(
@@ -158,8 +158,8 @@ function exportOption(o: ReportOptions): { format: string; file: string } | unde
       '--export',
       `give a format and a file, after the job file: --export geojson site.geojson (got ${o.export.map((a) => JSON.stringify(a)).join(' ')})`,
     );
-  if (format !== 'geojson' && format !== 'csv')
-    throw new JobInvalid('--export', `${JSON.stringify(format)} is not geojson or csv`);
+  if (format !== 'geojson' && format !== 'landxml' && format !== 'csv')
+    throw new JobInvalid('--export', `${JSON.stringify(format)} is not geojson, landxml or csv`);
   return { format, file };
 }
 
@@ -321,7 +321,7 @@ export function program(io: Io, outcome: { exitCode: number } = { exitCode: EXIT
       .argument('<job.json>', 'the job file; - reads the job from the standard input')
       .option(
         '--points <file>',
-        "add the points of a CSV or GeoJSON file to the job's points (see docs/interop.md)",
+        "add the points of a CSV, GeoJSON or LandXML file to the job's points (see docs/interop.md)",
       ),
   ).action(async (file: string, o: ReportOptions & { points?: string }) => {
     const withPoints = (job: unknown): unknown =>

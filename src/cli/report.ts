@@ -4,7 +4,9 @@
  *
  * @module cli
  */
+import type { Arithmetic } from '../index.js';
 import type { DisplayRules, QuantityKind } from './display.js';
+import type { TaskExchange } from './task.js';
 
 /** The caution every report ends with. */
 export const CAUTION =
@@ -172,6 +174,8 @@ export interface TaskReport {
   tables?: Table[];
   /** Drawing data for `--sketch` (not part of the JSON report). */
   sketch?: SketchView[];
+  /** Geometry for `--export` in the job's arithmetic (not part of the JSON report). */
+  exchange?: TaskExchange<unknown> & { A: Arithmetic<unknown, boolean> };
 }
 
 /** A whole report. */

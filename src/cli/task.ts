@@ -6,7 +6,13 @@
  *
  * @module cli
  */
-import type { Arithmetic, LengthUnit, Root } from '../index.js';
+import type {
+  Arithmetic,
+  HorizontalAlignment,
+  LengthUnit,
+  Root,
+  VerticalAlignment,
+} from '../index.js';
 import type { QuantityKind } from './display.js';
 import type { SketchView } from './report.js';
 import type { Schema } from './validate.js';
@@ -82,6 +88,13 @@ export interface Outcome<V> {
   /** Tables (traverse sheet, level book, coordinate list, …). */
   tables?: RawTable<V>[];
   sketch?: SketchView[];
+  /** What the exchange formats take beyond the results (`--export landxml`). */
+  exchange?: TaskExchange<V>;
+}
+
+/** A task's geometry for the exchange formats: an alignment task's alignment. */
+export interface TaskExchange<V> {
+  alignment?: { horizontal: HorizontalAlignment<V>; vertical?: VerticalAlignment<V> };
 }
 
 /** A task read from the job and ready to compute. */

@@ -1,5 +1,5 @@
-// The command line's data exchange: `--export geojson|csv <file>` on run and demo, and
-// `run --points <file>`. The acceptance check: the demo's traverse and parcel, exported to
+// The command line's data exchange: `--export geojson|landxml|csv <file>` on run and demo,
+// and `run --points <file>` (CSV, GeoJSON, LandXML). The acceptance check: the demo's traverse and parcel, exported to
 // GeoJSON through a stated grid (OSGB36 / British National Grid with the published Helmert
 // transformation to WGS 84, position vector), are where proj4 puts the same grid coordinates.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -7,6 +7,7 @@ import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import proj4 from 'proj4';
 import { bundleCli, cleanUp, cli, tempFolder } from './helpers.js';
+import { landXmlStructureErrors } from '../io/landxml-structure.js';
 
 const HELMERT = {
   method: 'helmert',
@@ -209,5 +210,132 @@ describe('--export csv and run --points', () => {
     const clash = cli(['run', job, '--points', gj, '--grid', 'EPSG:32633']);
     expect(clash.code).toBe(2);
     expect(clash.stderr).toContain('"A"');
+  });
+});
+
+describe('--export landxml and run --points with LandXML', () => {
+  it('writes the demo traverse points and parcel as LandXML that passes the structural check', () => {
+    const out = join(dir, 'demo.xml');
+    const r = cli(['demo', '--export', 'landxml', out]);
+    expect(r.stderr).toContain(`landxml written to ${out}`);
+    expect(r.code).toBe(0);
+    const xml = readFileSync(out, 'utf8');
+    expect(landXmlStructureErrors(xml)).toEqual([]);
+    expect(xml).toContain('linearUnit="meter"');
+    // northing before easting (the schema's order): Q2 is east 1101.75, north 1902.4
+    expect(xml).toContain('<CgPoint name="Q2">1902.4 1101.75</CgPoint>');
+    // the parcel's area by the shoelace formula over Q1..Q5, computed here independently
+    const q = [
+      [1020.5, 1890.25],
+      [1101.75, 1902.4],
+      [1118.2, 1815.6],
+      [1052.35, 1771.1],
+      [1009.8, 1824.45],
+    ];
+    const twice = q.reduce(
+      (s, p, i) => s + p[0]! * q[(i + 1) % 5]![1]! - q[(i + 1) % 5]![0]! * p[1]!,
+      0,
+    );
+    const area = Number(/<Parcel name="Quillet Field" area="([^"]+)"/.exec(xml)![1]);
+    expect(Math.abs(area - Math.abs(twice) / 2)).toBeLessThan(6e-5);
+  });
+
+  it('writes an alignment task as its geometry and profile', () => {
+    const out = join(dir, 'alignment.xml');
+    const r = cli([
+      'run',
+      'examples/alignment.json',
+      '--export',
+      'landxml',
+      out,
+      '--format',
+      'json',
+    ]);
+    expect(r.code).toBe(0);
+    const xml = readFileSync(out, 'utf8');
+    expect(landXmlStructureErrors(xml)).toEqual([]);
+    // transitions into and out of the 250 m curve, then the 180 m curve (examples/alignment.json)
+    expect([...xml.matchAll(/<(Line|Curve|Spiral) /g)].map((m) => m[1])).toEqual([
+      'Line',
+      'Spiral',
+      'Curve',
+      'Spiral',
+      'Line',
+      'Curve',
+      'Line',
+    ]);
+    expect(xml).toMatch(/<Curve [^>]*radius="180"/);
+    expect(xml).toMatch(/<ParaCurve length="120">260 60.2<\/ParaCurve>/);
+    // the JSON report carries no exchange data
+    expect(r.stdout).not.toContain('exchange');
+  });
+
+  it('loads LandXML points into a job, converted exactly from US survey feet to metres', () => {
+    const xmlFile = join(dir, 'control.xml');
+    writeFileSync(
+      xmlFile,
+      `<?xml version="1.0"?>
+<LandXML version="1.2" date="2026-12-03" time="10:00:00">
+  <Units><Imperial linearUnit="USSurveyFoot" areaUnit="squareFoot" volumeUnit="cubicFeet" temperatureUnit="fahrenheit" pressureUnit="inchHG"/></Units>
+  <CgPoints>
+    <CgPoint name="A">0 0</CgPoint>
+    <CgPoint name="B">0 3937</CgPoint>
+    <CgPoint name="C">3937 0</CgPoint>
+  </CgPoints>
+</LandXML>
+`,
+    );
+    const job = join(dir, 'abc.json');
+    writeFileSync(
+      job,
+      JSON.stringify({
+        title: 'From LandXML',
+        tasks: [{ kind: 'area', name: 'ABC', points: ['A', 'B', 'C'] }],
+      }),
+    );
+    const csv = join(dir, 'abc.csv');
+    const r = cli([
+      'run',
+      job,
+      '--points',
+      xmlFile,
+      '--export',
+      'csv',
+      csv,
+      '--csv-mode',
+      'exchange',
+    ]);
+    expect(r.code).toBe(0);
+    // 3937 US survey feet = 1200 m exactly (1 US survey foot = 1200/3937 m)
+    expect(readFileSync(csv, 'utf8')).toBe('name,east,north\nA,0,0\nB,1200,0\nC,0,1200\n');
+  });
+
+  it('refuses a LandXML file without points, and a job in units LandXML is not written in', () => {
+    const empty = join(dir, 'empty.xml');
+    writeFileSync(empty, '<LandXML version="1.2" date="2026-12-03" time="10:00:00"/>');
+    const job = join(dir, 'abc.json');
+    const r = cli(['run', job, '--points', empty]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/--points.*no CgPoint/);
+    const bad = join(dir, 'bad.xml');
+    writeFileSync(bad, '<LandXML version="1.2"><CgPoints>');
+    const r2 = cli(['run', job, '--points', bad]);
+    expect(r2.code).toBe(2);
+    expect(r2.stderr).toMatch(/not well-formed/);
+    const km = join(dir, 'km.json');
+    writeFileSync(
+      km,
+      JSON.stringify({
+        title: 'km',
+        units: { length: 'km' },
+        points: { A: { east: 0, north: 0 }, B: { east: 1, north: 0 }, C: { east: 0, north: 1 } },
+        tasks: [{ kind: 'area', name: 'ABC', points: ['A', 'B', 'C'] }],
+      }),
+    );
+    const out = join(dir, 'km.xml');
+    const r3 = cli(['run', km, '--export', 'landxml', out]);
+    expect(r3.code).toBe(2);
+    expect(r3.stderr).toMatch(/m, ft or us-ft/);
+    expect(existsSync(out)).toBe(false);
   });
 });

@@ -427,6 +427,9 @@ export const alignmentTask: TaskKind = {
           notes,
           ...(env.drawing ? { tables } : {}),
           ...(sketch ? { sketch } : {}),
+          ...(env.drawing
+            ? { exchange: { alignment: { horizontal: h, ...(v ? { vertical: v } : {}) } } }
+            : {}),
         };
       },
     };
