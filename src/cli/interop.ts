@@ -165,7 +165,10 @@ const LANDXML_UNITS: Partial<Record<LengthUnit, LandXmlWriteUnit>> = {
   'us-ft': 'USSurveyFoot',
 };
 
-/** The report as a LandXML document: points, parcels, and alignments from the alignment tasks. */
+/**
+ * The report as a LandXML document: points, parcels, traverses (as plan features), and the
+ * alignments of the alignment tasks.
+ */
 function landXmlText(r: Report, job: unknown, content: GeoJsonContent<Rat>): string {
   const unit = LANDXML_UNITS[jobUnit(job)];
   if (unit === undefined)
@@ -187,6 +190,14 @@ function landXmlText(r: Report, job: unknown, content: GeoJsonContent<Rat>): str
       points: (content.points ?? []) as never,
       parcels: (content.parcels ?? []) as never,
       alignments,
+      // traverses as plan features (alignments go as their geometry above)
+      lines: (content.lines ?? [])
+        .filter((l) => l.kind !== 'alignment' && 'points' in l)
+        .map((l) => ({
+          name: l.name,
+          code: l.kind ?? 'line',
+          points: (l as unknown as { points: never }).points,
+        })),
     },
     {
       linearUnit: unit,

@@ -40,6 +40,7 @@ export { toLandXml } from './landxml-write.js';
 export type {
   LandXmlAlignmentInput,
   LandXmlContent,
+  LandXmlLineInput,
   LandXmlParcelInput,
   LandXmlPointInput,
   LandXmlWriteOptions,

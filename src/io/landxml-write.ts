@@ -34,6 +34,18 @@ export interface LandXmlParcelInput<T> {
   readonly description?: string;
 }
 
+/** A line to write as a `PlanFeature` (a traverse, a fence, any polyline) by its vertices. */
+export interface LandXmlLineInput<T> {
+  /** The line's name. */
+  readonly name: string;
+  /** Its vertices, two or more, in order. */
+  readonly points: readonly PlaneVertex<T>[];
+  /** Written as `code` (e.g. `traverse`). */
+  readonly code?: string;
+  /** Written as `desc`. */
+  readonly description?: string;
+}
+
 /** An alignment to write: the horizontal alignment, and its profile when there is one. */
 export interface LandXmlAlignmentInput<T> {
   /** The alignment's name. */
@@ -54,6 +66,8 @@ export interface LandXmlContent<T> {
   readonly parcels?: readonly LandXmlParcelInput<T>[];
   /** Alignments, as `Alignments/Alignment` with `CoordGeom`, `StaEquation` and `Profile`. */
   readonly alignments?: readonly LandXmlAlignmentInput<T>[];
+  /** Traverses and other polylines, as `PlanFeatures/PlanFeature` with a `CoordGeom` of lines. */
+  readonly lines?: readonly LandXmlLineInput<T>[];
 }
 
 /** A linear unit the writer states: the unit the given values are in. */
@@ -123,13 +137,15 @@ function xmlText(s: string, where: string): string {
  *   at the tangent, `Start`, `PI` — where the tangents at its ends meet — and `End`); a
  *   `StaEquation` per chainage equation; and with a profile, `Profile/ProfAlign` of `PVI`,
  *   `ParaCurve` and `UnsymParaCurve` (text: station and elevation).
+ * - **Lines** (traverses, any polyline) → `PlanFeatures/PlanFeature` with `name`, `code`,
+ *   `desc` and a `CoordGeom` of `Line`s from vertex to vertex.
  *
  * Values are rounded exactly to `decimals`; no direction attributes are written (the
  * geometry is fixed by the points). Names and descriptions are written as they are, escaped for XML, so that
  * {@link readLandXml} gives them back unchanged.
  *
  * @param A the arithmetic of the values
- * @param content `{ points?, parcels?, alignments? }`
+ * @param content `{ points?, parcels?, alignments?, lines? }`
  * @param options `{ linearUnit?, decimals?, date?, application? }`
  * @returns the document's text
  * @throws {@link QuadspreadError} `INVALID_ARGUMENT` for bad content or options, a missing or
@@ -191,7 +207,7 @@ export function toLandXml<T>(
     throw new QuadspreadError(
       'INVALID_ARGUMENT',
       `${where}(content)`,
-      `${show(content)} is not { points?, parcels?, alignments? }`,
+      `${show(content)} is not { points?, parcels?, alignments?, lines? }`,
     );
 
   const list = <X>(v: readonly X[] | undefined, what: string): readonly X[] => {
@@ -369,6 +385,33 @@ export function toLandXml<T>(
       out.push('    </Alignment>');
     });
     out.push('  </Alignments>');
+  }
+  const lines = list(content.lines, 'lines');
+  if (lines.length > 0) {
+    const seen = new Set<string>();
+    out.push('  <PlanFeatures name="lines">');
+    lines.forEach((l0, i) => {
+      const at = `${where}(content.lines[${i}])`;
+      const l = item(l0, at, 'a line { name, points }');
+      const name = nameOf(l, at, seen);
+      const vs = list(l.points, `lines[${i}].points`).map((v, j) =>
+        item(v, `${at}.points[${j}]`, 'a vertex { x, y }'),
+      );
+      if (vs.length < 2)
+        throw new QuadspreadError(
+          'INVALID_ARGUMENT',
+          `${at}.points`,
+          `a line needs two vertices or more, got ${vs.length}`,
+        );
+      out.push(
+        `    <PlanFeature name="${name}"${attr('code', l.code, at)}${attr('desc', l.description, at)}>`,
+        '      <CoordGeom>',
+      );
+      for (let j = 1; j < vs.length; j++)
+        out.push(`        <Line><Start>${ne(vs[j - 1]!)}</Start><End>${ne(vs[j]!)}</End></Line>`);
+      out.push('      </CoordGeom>', '    </PlanFeature>');
+    });
+    out.push('  </PlanFeatures>');
   }
   out.push('</LandXML>');
   return out.join('\n') + '\n';

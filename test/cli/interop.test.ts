@@ -214,7 +214,7 @@ describe('--export csv and run --points', () => {
 });
 
 describe('--export landxml and run --points with LandXML', () => {
-  it('writes the demo traverse points and parcel as LandXML that passes the structural check', () => {
+  it('writes the demo traverse and parcel as LandXML that passes the structural check', () => {
     const out = join(dir, 'demo.xml');
     const r = cli(['demo', '--export', 'landxml', out]);
     expect(r.stderr).toContain(`landxml written to ${out}`);
@@ -238,6 +238,15 @@ describe('--export landxml and run --points with LandXML', () => {
     );
     const area = Number(/<Parcel name="Quillet Field" area="([^"]+)"/.exec(xml)![1]);
     expect(Math.abs(area - Math.abs(twice) / 2)).toBeLessThan(6e-5);
+    // the traverse: a closed loop of four courses from CM1 (east 1000, north 2000) back to it
+    const trav =
+      /<PlanFeature name="Snipewhistle Moss control loop" code="traverse">([\s\S]*?)<\/PlanFeature>/.exec(
+        xml,
+      )![1]!;
+    const courses = [...trav.matchAll(/<Line><Start>([^<]*)<\/Start><End>([^<]*)<\/End><\/Line>/g)];
+    expect(courses).toHaveLength(4);
+    expect(courses[0]![1]).toBe('2000 1000');
+    expect(courses[3]![2]).toBe('2000 1000');
   });
 
   it('writes an alignment task as its geometry and profile', () => {

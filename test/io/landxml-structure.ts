@@ -48,6 +48,7 @@ const RULES: Record<string, Rule> = {
       'CgPoints',
       'Alignments',
       'Parcels',
+      'PlanFeatures',
       'Survey',
     ],
   },
@@ -88,6 +89,8 @@ const RULES: Record<string, Rule> = {
   },
   CgPoint: POINT,
   Parcels: { optional: COMMON, children: ['Parcel'] },
+  PlanFeatures: { optional: COMMON, children: ['PlanFeature'] },
+  PlanFeature: { optional: [...COMMON, 'code'], children: ['CoordGeom', 'Location', 'Feature'] },
   Parcel: {
     optional: [...COMMON, 'area', 'parcelType', 'parcelFormat', 'class'],
     children: ['CoordGeom', 'Center'],

@@ -327,6 +327,17 @@ describe('toLandXml', () => {
       },
     ],
     alignments: [{ name: 'Main St', horizontal: h, vertical: v, description: 'centre line' }],
+    lines: [
+      {
+        name: 'Traverse 1',
+        code: 'traverse',
+        points: [
+          { x: 1000, y: 1000 },
+          { x: 1030, y: 1040 },
+          { x: 1000, y: 1000 },
+        ],
+      },
+    ],
   };
   const xml = toLandXml(R, content, { date });
 
@@ -363,12 +374,14 @@ describe('toLandXml', () => {
     expect(back.notRead).toEqual([
       expect.stringMatching(/^<Parcels>/),
       expect.stringMatching(/^<Alignments>/),
+      expect.stringMatching(/^<PlanFeatures>/),
     ]);
   });
 
   it('writes the parcel closed, with its area (30 m × 40 m = 1200 m²)', () => {
     expect(xml).toMatch(/<Parcel name="Lot 7" area="1200">/);
-    const lines = [...xml.matchAll(/<Line><Start>([^<]*)<\/Start><End>([^<]*)<\/End><\/Line>/g)];
+    const parcel = /<Parcel [\s\S]*?<\/Parcel>/.exec(xml)![0];
+    const lines = [...parcel.matchAll(/<Line><Start>([^<]*)<\/Start><End>([^<]*)<\/End><\/Line>/g)];
     expect(lines.length).toBe(4);
     expect(lines[3]![2]).toBe(lines[0]![1]);
   });
@@ -413,6 +426,15 @@ describe('toLandXml', () => {
     expect(els[5]![0]).toMatch(/radiusStart="200" radiusEnd="INF"/);
     // the chainage equation at the internal station of its distance (600 back, 650 ahead)
     expect(xml).toMatch(/<StaEquation staBack="600" staAhead="650" staInternal="600"\/>/);
+  });
+
+  it('writes a traverse as a plan feature of lines from vertex to vertex (northing first)', () => {
+    expect(xml).toMatch(
+      /<PlanFeature name="Traverse 1" code="traverse">\s*<CoordGeom>\s*<Line><Start>1000 1000<\/Start><End>1040 1030<\/End><\/Line>\s*<Line><Start>1040 1030<\/Start><End>1000 1000<\/End><\/Line>\s*<\/CoordGeom>/,
+    );
+    expect(
+      codeOf(() => toLandXml(R, { lines: [{ name: 'L', points: [{ x: 0, y: 0 }] }] }, { date })),
+    ).toBe('INVALID_ARGUMENT');
   });
 
   it('writes the profile: PVIs and symmetric and unsymmetric parabolic curves', () => {
