@@ -400,3 +400,154 @@ describe('alignment inputs with holes or junk are refused, naming the input', ()
     expect(codeOf(() => q.profileLevel(R, junk, 100))).toBe('INVALID_ARGUMENT');
   });
 });
+
+// Found by the long adversarial run (`npm run fuzz -- 60 1`) of 2026-12-03, each call as the
+// run made it; the float calls go through quadspread/float as the build specialises it (sums
+// and products unchecked there).
+describe('the long adversarial run of 2026-12-03', () => {
+  let F: Record<string, any>;
+  beforeAll(async () => {
+    F = await loadFloatEntry();
+  }, 120_000);
+
+  it('triangle in quadspread/float with a coordinate of 1e217 is NOT_FINITE, not Q1 = Infinity', () => {
+    expect(
+      codeOf(() => F.triangle({ x: 0, y: 0 }, { x: 3, y: 1.0282715528558735e217 }, { x: 0, y: 4 })),
+    ).toBe('NOT_FINITE');
+  });
+
+  it('helmert in quadspread/float with Y = -1.8e308 is NOT_FINITE, not -Infinity', () => {
+    const P = {
+      tx: 0,
+      ty: 0,
+      tz: 4.5,
+      rx: 0,
+      ry: 0,
+      rz: 0.554,
+      ds: 0.219,
+      convention: 'position-vector',
+    };
+    const p = { X: 3657660.66, Y: -1.7976931348623133e308, Z: 5201382.11 };
+    expect(codeOf(() => F.helmert(p, P))).toBe('NOT_FINITE');
+    // the reversal scales by 1 − ds·1e-6 < 1 here: a finite result, returned
+    expect(Number.isFinite(F.helmertReversed(p, P).Y)).toBe(true);
+  });
+
+  it('deflectionTable with an alignment whose element is undefined, lacks its start, or has no curves is INVALID_ARGUMENT', () => {
+    const h = F.horizontalAlignment({
+      points: [
+        { x: 0, y: 0 },
+        { x: 0, y: 100 },
+        { x: 60, y: 180 },
+      ],
+      curves: [{ radius: 30 }],
+    });
+    expect(
+      codeOf(() =>
+        F.deflectionTable({ ...h, elements: [undefined, ...h.elements.slice(1)] }, 0, {
+          interval: 10,
+        }),
+      ),
+    ).toBe('INVALID_ARGUMENT');
+    const e1 = { ...h.elements[1], start: undefined };
+    expect(
+      codeOf(() =>
+        F.deflectionTable({ ...h, elements: [h.elements[0], e1, ...h.elements.slice(2)] }, 0, {
+          interval: 10,
+        }),
+      ),
+    ).toBe('INVALID_ARGUMENT');
+    expect(codeOf(() => F.deflectionTable({ ...h, curves: undefined }, 0, { interval: 10 }))).toBe(
+      'INVALID_ARGUMENT',
+    );
+  });
+
+  it('alignmentStation with a sparse equations array is INVALID_ARGUMENT, not a TypeError', () => {
+    const h = q.horizontalAlignment(R, {
+      points: [
+        { x: 0, y: 0 },
+        { x: 0, y: 100 },
+      ],
+      curves: [],
+      equations: [{ back: 50, ahead: 60 }],
+    });
+    // eslint-disable-next-line no-sparse-arrays
+    const equations = [, h.equations[0], h.equations[0]];
+    expect(codeOf(() => q.alignmentStation(R, { ...h, equations } as never, { x: 1, y: 50 }))).toBe(
+      'INVALID_ARGUMENT',
+    );
+  });
+
+  it('fCdf of Infinity or 1.8e308 is 1, not NaN; fQuantile with d1 = 7.4e-323 is NOT_FINITE, not Infinity', () => {
+    expect(q.fCdf(Infinity, 2, 2)).toBe(1);
+    // F(2, 2): P(X ≤ x) = x/(1 + x), within rounding of 1 at 1.8e308
+    expect(q.fCdf(1.7976931348623141e308, 2, 2)).toBeCloseTo(1, 15);
+    expect(codeOf(() => q.fQuantile(0.5, 7.4e-323, 3))).toBe('NOT_FINITE');
+  });
+
+  it('stoppingSightDistance in quadspread/float with a reaction time of 1.8e308 is NOT_FINITE', () => {
+    expect(
+      codeOf(() =>
+        F.stoppingSightDistance({
+          speed: 100,
+          reactionTime: 1.7976032502055728e308,
+          deceleration: 3.4,
+        }),
+      ),
+    ).toBe('NOT_FINITE');
+  });
+
+  it('formatStation with per = -1n (a BigInt) is INVALID_ARGUMENT, not a TypeError', () => {
+    expect(codeOf(() => F.formatStation(565, { per: -1n }))).toBe('INVALID_ARGUMENT');
+  });
+
+  it('deflectionTable and settingOutTable refuse an interval that gives too many rows at once', () => {
+    const h = q.horizontalAlignment(R, {
+      points: [
+        { x: 0, y: 0 },
+        { x: 0, y: 100 },
+        { x: 60, y: 180 },
+      ],
+      curves: [{ radius: 30 }],
+    });
+    // The curve is some 19 m long: an interval of 1 mm gives some 19 000 rows (more than 1 000).
+    expect(codeOf(() => q.deflectionTable(R, h, 0, { interval: '0.001' }))).toBe('INPUT_TOO_LONG');
+    // 1e-21 would give some 1e23 rows: refused before any is made (it took 0.65 s before).
+    expect(codeOf(() => q.settingOutTable(R, h, { interval: '1.0243365916612053e-21' }))).toBe(
+      'INPUT_TOO_LONG',
+    );
+    // 100 rows (the curve at 0.2 m) are made as before.
+    expect(q.deflectionTable(R, h, 0, { interval: '0.2' }).length).toBeGreaterThan(90);
+  });
+
+  it('a projection whose linearUnit is an object without a prototype is INVALID_UNIT, not a TypeError', () => {
+    const p = {
+      method: 'transverse-mercator',
+      ellipsoid: 'WGS84',
+      lat0: 0,
+      lon0: 15,
+      k0: 0.9996,
+      falseEasting: 500000,
+      falseNorthing: 0,
+      linearUnit: Object.create(null),
+    };
+    expect(codeOf(() => q.toGrid(R, { lat: 0, lon: 15 }, p as never))).toBe('INVALID_UNIT');
+  });
+
+  it('a prepared projection whose arithmetic was taken away is INVALID_ARGUMENT, not a TypeError', () => {
+    const prepared = q.prepareProjection(q.float, {
+      method: 'transverse-mercator',
+      ellipsoid: 'WGS84',
+      lat0: 0,
+      lon0: 15,
+      k0: 0.9996,
+      falseEasting: 500000,
+      falseNorthing: 0,
+    });
+    expect(
+      codeOf(() =>
+        q.toGrid(R, { lat: 0, lon: 15 }, { ...prepared, arithmetic: undefined } as never),
+      ),
+    ).toBe('INVALID_ARGUMENT');
+  });
+});

@@ -316,7 +316,8 @@ export function fCdf(x: number, d1: number, d2: number): number {
   checkDof(d1, 'fCdf(d1)');
   checkDof(d2, 'fCdf(d2)');
   if (x <= 0) return 0;
-  return betaRegularized((d1 * x) / (d1 * x + d2), d1 / 2, d2 / 2);
+  // u = d1·x/(d1·x + d2), written so that a huge or infinite x gives u = 1, not ∞/∞.
+  return betaRegularized(1 / (1 + d2 / (d1 * x)), d1 / 2, d2 / 2);
 }
 
 /**
@@ -326,7 +327,8 @@ export function fCdf(x: number, d1: number, d2: number): number {
  * @param d1 numerator degrees of freedom, > 0
  * @param d2 denominator degrees of freedom, > 0
  * @returns x ≥ 0
- * @throws {QuadspreadError} `INVALID_ARGUMENT` for a bad p, d1 or d2.
+ * @throws {QuadspreadError} `INVALID_ARGUMENT` for a bad p, d1 or d2; `NOT_FINITE` when the
+ *   quantile is beyond the range of a JS number (degrees of freedom near 0).
  * @example
  * ```ts
  * import { fQuantile } from 'quadspread';
@@ -358,7 +360,13 @@ export function fQuantile(p: number, d1: number, d2: number): number {
     u = next;
     if (done) break;
   }
-  return (b * 2 * u) / (a * 2 * (1 - u));
+  const x = (b * 2 * u) / (a * 2 * (1 - u));
+  if (!Number.isFinite(x))
+    throw notFinite(
+      'fQuantile(p, d1, d2)',
+      `the quantile for p = ${p}, d1 = ${2 * a}, d2 = ${2 * b} is beyond the range of a JS number`,
+    );
+  return x;
 }
 
 /** Critical values of Baarda's w-test (data snooping). */

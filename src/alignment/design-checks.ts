@@ -7,7 +7,7 @@
  */
 import { show, invalidArgument, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { readNumber } from '../geometry/validate.js';
+import { finiteResult, readNumber } from '../geometry/validate.js';
 import { readLength, readObject, root } from './internal.js';
 
 /** The unit system of a design check: SI (metres, km/h) or US customary (feet, mph). */
@@ -127,7 +127,10 @@ export function railCant<T>(
       : readLength(A, o.gravity, `${where}.gravity`, true);
   const equilibrium = A.div(A.mul(G, A.mul(v, v)), A.mul(g, R));
   if (o.appliedCant === undefined) return { equilibrium };
-  return { equilibrium, deficiency: A.sub(equilibrium, num(A, o, 'appliedCant', where)) };
+  return {
+    equilibrium,
+    deficiency: finiteResult(A.sub(equilibrium, num(A, o, 'appliedCant', where)), where),
+  };
 }
 
 /**
@@ -263,7 +266,7 @@ export function stoppingSightDistance<T>(
       `${where}.grade`,
       `a/g + G = ${A.toString(f)} is not positive: the vehicle cannot stop on this grade`,
     );
-  return A.add(A.mul(k1, A.mul(V, t)), A.div(A.mul(V, V), A.mul(k2, f)));
+  return finiteResult(A.add(A.mul(k1, A.mul(V, t)), A.div(A.mul(V, V), A.mul(k2, f))), where);
 }
 
 /**
@@ -298,7 +301,7 @@ export function sightLineOffset<T>(
       `${where}.sightDistance`,
       `${A.toString(S)} is longer than half the circle`,
     );
-  return A.mul(R, A.sub(A.one, A.cos(half)));
+  return finiteResult(A.mul(R, A.sub(A.one, A.cos(half))), where);
 }
 
 /**
@@ -364,5 +367,8 @@ export function sightCurveLength<T>(
   const long = A.div(A.mul(dg, A.mul(S, S)), A.mul(two00, k));
   if (A.cmp(long, S) > 0) return { length: long, longerThanSight: true };
   const short = A.sub(A.mul(A.from(2), S), A.div(A.mul(two00, k), dg));
-  return { length: A.sign(short) > 0 ? short : A.zero, longerThanSight: false };
+  return {
+    length: A.sign(finiteResult(short, where)) > 0 ? short : A.zero,
+    longerThanSight: false,
+  };
 }

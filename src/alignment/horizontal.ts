@@ -775,6 +775,66 @@ export function distanceOf<T>(
   );
 }
 
+/** Whether every entry (holes included) is an object. */
+function elementsAreObjects(elements: readonly unknown[]): boolean {
+  for (let i = 0; i < elements.length; i++) {
+    const e = elements[i];
+    if (typeof e !== 'object' || e === null) return false;
+  }
+  return true;
+}
+
+// Alignments found intact, with the arithmetic they were checked for: an alignment is plain
+// data, checked through once and then taken as it is on every call (a copy is checked anew).
+const intact = new WeakMap<object, unknown>();
+
+/** Whether every element and equation of `o` has the fields of its kind, values of A. */
+function isIntact<T>(A: Arithmetic<T>, o: HorizontalAlignment<T>): boolean {
+  if (intact.get(o) === A) return true;
+  const pt = (p: unknown): boolean =>
+    typeof p === 'object' && p !== null && A.is((p as Point<T>).x) && A.is((p as Point<T>).y);
+  const nCurves = Array.isArray(o.curves) ? o.curves.length : -1;
+  if (nCurves < 0 || !elementsAreObjects(o.curves)) return false;
+  for (let i = 0; i < o.elements.length; i++) {
+    const e = o.elements[i] as AlignmentElement<T>;
+    if (
+      !A.is(e.startChainage) ||
+      !A.is(e.endChainage) ||
+      !A.is(e.startDistance) ||
+      !A.is(e.length) ||
+      !A.is(e.bearingIn) ||
+      !A.is(e.bearingOut) ||
+      !pt(e.start) ||
+      !pt(e.end) ||
+      !pt(e.direction)
+    )
+      return false;
+    if (e.type === 'straight') continue;
+    if (e.type !== 'arc' && e.type !== 'transition') return false;
+    if (
+      !A.is(e.radius) ||
+      (e.turn !== 1 && e.turn !== -1) ||
+      !Number.isInteger(e.curve) ||
+      e.curve < 0 ||
+      e.curve >= nCurves
+    )
+      return false;
+    if (
+      e.type === 'arc'
+        ? !pt(e.centre)
+        : typeof e.entering !== 'boolean' || !pt(e.origin) || !pt(e.originDirection)
+    )
+      return false;
+  }
+  for (let i = 0; i < o.equations.length; i++) {
+    const q = o.equations[i]!;
+    if (!A.is(q.back) || !A.is(q.ahead) || !A.is(q.distance)) return false;
+  }
+  for (let i = 0; i < o.boxes.length; i++) if (typeof o.boxes[i] !== 'number') return false;
+  intact.set(o, A);
+  return true;
+}
+
 /** Checks that `h` looks like an alignment of this arithmetic. @internal */
 export function readAlignment<T>(
   A: Arithmetic<T>,
@@ -791,9 +851,13 @@ export function readAlignment<T>(
     !Array.isArray(o.equations) ||
     !Array.isArray(o.boxes) ||
     o.boxes.length !== 4 * o.elements.length ||
+    !elementsAreObjects(o.elements) ||
+    !elementsAreObjects(o.equations) ||
     !A.is(o.length) ||
     !A.is(o.startChainage) ||
-    !A.is(o.elements[0]!.startDistance)
+    !A.is(o.elements[0]!.startDistance) ||
+    !A.is(o.endChainage) ||
+    !isIntact(A, o)
   )
     throw invalidArgument(
       where,

@@ -17,6 +17,12 @@ import { along, rightOf, azimuth, degPerRad, root, readList, readLength } from '
 
 /** Most rows a table gives (a larger one is refused: choose a longer interval or a shorter stretch). */
 const MAX_ROWS = 100_000;
+/**
+ * Most rows a deflection table gives: each row needs an angle and a chord (transcendentals,
+ * some 0.7 ms a row in `rational`), and a curve set out from more than 1 000 stations is no
+ * field practice.
+ */
+const MAX_DEFLECTION_ROWS = 1_000;
 
 /** A chainage and its distance along the line. @internal */
 interface Station<T> {
@@ -35,6 +41,7 @@ export function stationsBetween<T>(
   d1: T,
   interval: T,
   where: string,
+  max: number = MAX_ROWS,
 ): Station<T>[] {
   const out: Station<T>[] = [];
   const bounds = [A.zero, ...h.equations.map((e) => e.distance), h.length];
@@ -45,6 +52,9 @@ export function stationsBetween<T>(
     const c0 = r === 0 ? h.startChainage : h.equations[r - 1]!.ahead;
     const base = bounds[r]!;
     const cLo = A.add(c0, A.sub(lo, base));
+    // Refused at once when the region alone holds more rows than a table gives.
+    if (out.length + A.toNumber(A.div(A.sub(hi, lo), interval)) > max + 1)
+      throw inputTooLong(where, `more than ${max} rows: use a longer interval`);
     // First multiple k·interval > cLo: start from the nearest number and correct exactly.
     let k = Math.floor(A.toNumber(A.div(cLo, interval)));
     while (A.cmp(A.mul(A.from(k), interval), cLo) <= 0) k++;
@@ -53,8 +63,8 @@ export function stationsBetween<T>(
       const c = A.mul(A.from(k), interval);
       const d = A.add(base, A.sub(c, c0));
       if (A.cmp(d, hi) >= 0) break;
-      if (out.length >= MAX_ROWS)
-        throw inputTooLong(where, `more than ${MAX_ROWS} rows: use a longer interval`);
+      if (out.length >= max)
+        throw inputTooLong(where, `more than ${max} rows: use a longer interval`);
       out.push({ distance: d, chainage: c });
     }
   }
@@ -99,7 +109,7 @@ export interface DeflectionRow<T> {
  *   the DMS texts (default 0)
  * @returns the rows in chainage order, ending at the ST (or EC)
  * @throws {QuadspreadError} `INVALID_ARGUMENT` for a curve index that does not exist or an
- *   interval ≤ 0; `INPUT_TOO_LONG` for more than 100 000 rows; `INVALID_NUMBER`.
+ *   interval ≤ 0; `INPUT_TOO_LONG` for more than 1 000 rows; `INVALID_NUMBER`.
  * @example
  * ```ts
  * import { float, horizontalAlignment, deflectionTable } from 'quadspread';
@@ -140,7 +150,15 @@ export function deflectionTable<T>(
     if (e.type === 'straight' || e.curve !== curve) continue;
     const d0 = e.startDistance;
     const d1 = A.add(d0, e.length);
-    const stations = stationsBetween(A, h, d0, d1, interval, where);
+    const stations = stationsBetween(
+      A,
+      h,
+      d0,
+      d1,
+      interval,
+      where,
+      Math.max(0, MAX_DEFLECTION_ROWS - rows.length),
+    );
     stations.push({
       distance: d1,
       chainage: chainageAt(A, h.startChainage, h.equations, d1, true),

@@ -87,7 +87,7 @@ export function formatStation<T>(
     options === null || typeof options !== 'object' ? (invalid(where, options) as never) : options;
   const per = o.per ?? 100;
   const decimals = o.decimals ?? 2;
-  const width = Math.round(Math.log10(per));
+  const width = typeof per === 'number' ? Math.round(Math.log10(per)) : 0;
   if (typeof per !== 'number' || width < 1 || width > 6 || 10 ** width !== per)
     throw invalidArgument(`${where}.per`, `${show(per)} is not a power of ten from 10 to 1000000`);
   if (!Number.isInteger(decimals) || decimals < 0 || decimals > 9)

@@ -7,7 +7,7 @@
  */
 import { QuadspreadError, show, invalidArgument, checkArithmetic } from '../errors.js';
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
-import { readNumber, expectObject } from '../geometry/validate.js';
+import { readNumber, expectObject, finiteResult } from '../geometry/validate.js';
 import type { Geocentric } from './geocentric.js';
 
 /**
@@ -158,8 +158,13 @@ export function unrotate<T>(
   ];
 }
 
-function out<T>(v: readonly [T, T, T]): Geocentric<T> {
-  return { X: v[0], Y: v[1], Z: v[2] };
+/** The result, each coordinate checked finite (float leaves sums and products unchecked). */
+function out<T>(v: readonly [T, T, T], where: string): Geocentric<T> {
+  return {
+    X: finiteResult(v[0], where),
+    Y: finiteResult(v[1], where),
+    Z: finiteResult(v[2], where),
+  };
 }
 
 /**
@@ -180,7 +185,7 @@ function out<T>(v: readonly [T, T, T]): Geocentric<T> {
  * @returns `{ X, Y, Z }` in metres, in the target frame
  * @throws {QuadspreadError} `INVALID_ARGUMENT` for a missing or unknown convention or a
  *   missing parameter; `INVALID_UNIT` for an unknown rotation unit; `INVALID_NUMBER` for a
- *   value that is not a number.
+ *   value that is not a number; `NOT_FINITE` in float when a coordinate overflows.
  * @example
  * ```ts
  * import { float, helmert } from 'quadspread';
@@ -201,7 +206,7 @@ export function helmert<T>(
   const v = readXyz(A, point, 'helmert(point)');
   const { t, w, m } = readHelmert(A, params, 'helmert(params)');
   const r = rotate(A, w, v);
-  return out([0, 1, 2].map((i) => A.add(A.mul(m, r[i]!), t[i]!)) as [T, T, T]);
+  return out([0, 1, 2].map((i) => A.add(A.mul(m, r[i]!), t[i]!)) as [T, T, T], 'helmert');
 }
 
 /**
@@ -236,7 +241,7 @@ export function helmertInverse<T>(
   const v = readXyz(A, point, 'helmertInverse(point)');
   const { t, w, m } = readHelmert(A, params, 'helmertInverse(params)');
   const u = [0, 1, 2].map((i) => A.div(A.sub(v[i]!, t[i]!), m)) as [T, T, T];
-  return out(unrotate(A, w, u));
+  return out(unrotate(A, w, u), 'helmertInverse');
 }
 
 /**
@@ -272,5 +277,5 @@ export function helmertReversed<T>(
   const mr = A.sub(two, m); // 1 − ds·10⁻⁶
   const wr = [A.neg(w[0]), A.neg(w[1]), A.neg(w[2])] as const;
   const r = rotate(A, wr, v);
-  return out([0, 1, 2].map((i) => A.sub(A.mul(mr, r[i]!), t[i]!)) as [T, T, T]);
+  return out([0, 1, 2].map((i) => A.sub(A.mul(mr, r[i]!), t[i]!)) as [T, T, T], 'helmertReversed');
 }

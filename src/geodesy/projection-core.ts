@@ -353,7 +353,7 @@ export function prepareWith<T>(
       `${show(pointUnit)} is not 'deg', 'grad' or 'dms-packed'`,
     );
   const linearUnit = projection.linearUnit ?? 'metre';
-  if (!Object.hasOwn(UNIT_METRES, linearUnit))
+  if (typeof linearUnit !== 'string' || !Object.hasOwn(UNIT_METRES, linearUnit))
     throw new QuadspreadError(
       'INVALID_UNIT',
       at('linearUnit'),
@@ -445,7 +445,7 @@ export function prepared<T>(
     if (p!.arithmetic !== A)
       throw invalidArgument(
         `${where}(projection)`,
-        `the projection was prepared for ${p!.arithmetic!.name}, not ${A.name}`,
+        `the projection was prepared for ${show((p!.arithmetic as { name?: unknown } | undefined)?.name ?? p!.arithmetic)}, not ${A.name}`,
       );
     return internal;
   }

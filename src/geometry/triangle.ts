@@ -3,7 +3,7 @@
  *
  * @module geometry
  */
-import { checkPoints3 } from './validate.js';
+import { checkPoints3, finiteResult } from './validate.js';
 import type { Arithmetic } from '../arithmetic/types.js';
 import { QuadspreadError, show, coincidentPoints, checkArithmetic } from '../errors.js';
 import { asPoint, type Point, type PointLike } from './point.js';
@@ -51,7 +51,8 @@ export interface Triangle<V> {
  * @param A3 third vertex
  * @returns `{ Q1, Q2, Q3, s1, s2, s3, quadrea }`
  * @throws {QuadspreadError} `COINCIDENT_POINTS` when two vertices coincide;
- * `COLLINEAR_POINTS` when the three are collinear (no proper triangle).
+ * `COLLINEAR_POINTS` when the three are collinear (no proper triangle); `NOT_FINITE` in float
+ * when a quadrance overflows.
  * @example
  * ```ts
  * import { rational, point, triangle } from 'quadspread';
@@ -83,9 +84,20 @@ function triangleAny<T>(
 ): Triangle<T> {
   checkArithmetic(A, 'triangle');
   if (A1 == null || A2 == null || A3 == null) checkPoints3(A, A1, A2, A3, 'triangle');
-  if (Array.isArray(A1) || Array.isArray(A2) || Array.isArray(A3))
-    return triangleOf(A, asPoint(A1), asPoint(A2), asPoint(A3));
-  return triangleOf(A, A1 as Point<T>, A2 as Point<T>, A3 as Point<T>);
+  const t =
+    Array.isArray(A1) || Array.isArray(A2) || Array.isArray(A3)
+      ? triangleOf(A, asPoint(A1), asPoint(A2), asPoint(A3))
+      : triangleOf(A, A1 as Point<T>, A2 as Point<T>, A3 as Point<T>);
+  // float leaves sums and products unchecked: a quadrance or quadrea that overflowed is
+  // NOT_FINITE here (this path is taken in float only when the twin found something amiss).
+  if (A.float64) {
+    const where = 'triangle(A, A1, A2, A3)';
+    finiteResult(t.Q1, where);
+    finiteResult(t.Q2, where);
+    finiteResult(t.Q3, where);
+    finiteResult(t.quadrea, where);
+  }
+  return t;
 }
 
 /**

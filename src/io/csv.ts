@@ -5,7 +5,7 @@
  *
  * @module io
  */
-import { parse as parseStream, type CsvError } from 'csv-parse';
+import { CsvError, parse as parseStream } from 'csv-parse';
 import { parse as parseSync } from 'csv-parse/sync';
 import { Readable } from 'node:stream';
 import { QuadspreadError, type Arithmetic } from '../index.js';
@@ -192,7 +192,7 @@ function parserOptions(delimiter: string) {
 function fromCsvError(e: unknown, where: string): unknown {
   if (e instanceof QuadspreadError) return e;
   const err = e as CsvError & { lines?: number };
-  if (typeof err?.code === 'string' && err.code.startsWith('CSV_'))
+  if (e instanceof CsvError || (typeof err?.code === 'string' && err.code.startsWith('CSV_')))
     return bad(`${where}${err.lines === undefined ? '' : `: line ${err.lines}`}`, err.message);
   return e;
 }
@@ -448,12 +448,19 @@ export function pointsToCsv<T>(
     const t = A.toPrecision(x, 40);
     return /e/i.test(t) || !t.includes('.') ? t : t.replace(/0+$/, '').replace(/\.$/, '');
   };
-  const list = points.map((p, i) => {
+  // Array.from visits holes too (as undefined), where map would skip them.
+  const list = Array.from(points, (p, i) => {
     if (typeof p !== 'object' || p === null || typeof p.name !== 'string' || p.name === '')
       throw new QuadspreadError(
         'INVALID_ARGUMENT',
         `${where}(points[${i}])`,
         `${show(p)} is not a point with a name`,
+      );
+    if (p.code !== undefined && typeof p.code !== 'string')
+      throw new QuadspreadError(
+        'INVALID_ARGUMENT',
+        `${where}(points[${i}].code)`,
+        `${show(p.code)} is not text`,
       );
     return p;
   });
@@ -464,7 +471,7 @@ export function pointsToCsv<T>(
   for (const p of list) {
     const row = [cell(p.name), value(p.x), value(p.y)];
     if (withHeight) row.push(p.height === undefined ? '' : value(p.height));
-    if (withCode) row.push(p.code === undefined ? '' : cell(String(p.code)));
+    if (withCode) row.push(p.code === undefined ? '' : cell(p.code));
     lines.push(row.join(delimiter));
   }
   return lines.join(eol) + eol;

@@ -250,7 +250,11 @@ export function toGeoJson<T>(
     // Heights keep 4 decimals (0.1 mm) beside degrees, the coordinates' decimals beside plane ones.
     if (p.height !== undefined)
       props.height = fixedNumber(A, A.from(p.height), mode === 'plane' ? decimals : 4);
-    if (p.code !== undefined) props.code = String(p.code);
+    if (p.code !== undefined) {
+      if (typeof p.code !== 'string')
+        throw new QuadspreadError('INVALID_ARGUMENT', `${at}.code`, `${show(p.code)} is not text`);
+      props.code = p.code;
+    }
     if (p.sigmaX !== undefined) props.sigmaX = numberOf(A, p.sigmaX);
     if (p.sigmaY !== undefined) props.sigmaY = numberOf(A, p.sigmaY);
     if (p.sigmaHeight !== undefined) props.sigmaHeight = numberOf(A, p.sigmaHeight);

@@ -239,8 +239,12 @@ export function toLandXml<T>(
     return xmlText(name, `${at}.name`);
   };
   const len = (v: Numeric<T> | T) => fixedText(A, A.from(v as T), decimals);
-  const attr = (k: string, v: string | undefined, at: string) =>
-    v === undefined ? '' : ` ${k}="${xmlText(String(v), `${at}.${k}`)}"`;
+  const attr = (k: string, v: unknown, at: string) => {
+    if (v === undefined) return '';
+    if (typeof v !== 'string')
+      throw new QuadspreadError('INVALID_ARGUMENT', `${at}.${k}`, `${show(v)} is not text`);
+    return ` ${k}="${xmlText(v, `${at}.${k}`)}"`;
+  };
   const ne = (p: { x: Numeric<T> | T; y: Numeric<T> | T }) => `${len(p.y)} ${len(p.x)}`;
 
   const pad = (n: number) => String(n).padStart(2, '0');
@@ -249,9 +253,7 @@ export function toLandXml<T>(
     `<LandXML xmlns="http://www.landxml.org/schema/LandXML-1.2" xmlns:xsi="http://www.w3.org/2001/XMLSchema-instance" xsi:schemaLocation="http://www.landxml.org/schema/LandXML-1.2 http://www.landxml.org/schema/LandXML-1.2/LandXML-1.2.xsd" version="1.2" date="${date.getUTCFullYear()}-${pad(date.getUTCMonth() + 1)}-${pad(date.getUTCDate())}" time="${pad(date.getUTCHours())}:${pad(date.getUTCMinutes())}:${pad(date.getUTCSeconds())}">`,
     `  <Units>${UNITS[unit]}</Units>`,
     `  <Application name="${xmlText(app.name, `${where}(options.application.name)`)}"${
-      app.version === undefined
-        ? ''
-        : attr('version', String(app.version), `${where}(options.application)`)
+      app.version === undefined ? '' : attr('version', app.version, `${where}(options.application)`)
     }/>`,
   ];
 

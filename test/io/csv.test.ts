@@ -292,3 +292,23 @@ describe('streamPointsFromCsv', () => {
     );
   });
 });
+
+// Found by the long adversarial run of 2026-12-03.
+describe('the long adversarial run of 2026-12-03', () => {
+  it('pointsFromCsv of text with a stray quote is INVALID_FILE, not csv-parse’s own error', () => {
+    expect(() => pointsFromCsv(rational, '$J85"<?;9')).toThrow(QuadspreadError);
+    expect(() => pointsFromCsv(rational, '$J85"<?;9')).toThrow(/INVALID_FILE.*line 1/);
+  });
+
+  it('pointsToCsv of a sparse array names the hole, not a TypeError', () => {
+    // eslint-disable-next-line no-sparse-arrays
+    const pts = [, { name: 'a', x: 1, y: 2 }] as never;
+    expect(() => pointsToCsv(rational, pts, { mode: 'exchange' })).toThrow(/points\[0\]/);
+    expect(() => pointsToCsv(rational, pts, { mode: 'exchange' })).toThrow(QuadspreadError);
+  });
+
+  it('pointsToCsv of a code that is not text is INVALID_ARGUMENT naming it', () => {
+    const pts = [{ name: 'a', x: 1, y: 2, code: Object.create(null) }] as never;
+    expect(() => pointsToCsv(rational, pts, { mode: 'exchange' })).toThrow(/points\[0\]\.code/);
+  });
+});

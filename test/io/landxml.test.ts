@@ -498,6 +498,11 @@ describe('toLandXml', () => {
     expect(codeOf(() => toLandXml(R, {}, { date: new Date('x') }))).toBe('INVALID_ARGUMENT');
     expect(codeOf(() => toLandXml(R, null as never))).toBe('INVALID_ARGUMENT');
     expect(
+      codeOf(() =>
+        toLandXml(R, { points: [{ name: 'A', x: 1, y: 2, code: Object.create(null) }] }, { date }),
+      ),
+    ).toBe('INVALID_ARGUMENT');
+    expect(
       codeOf(() => toLandXml(R, { alignments: [{ name: 'A', horizontal: {} as never }] })),
     ).toBe('INVALID_ARGUMENT');
   });
