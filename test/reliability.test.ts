@@ -480,6 +480,9 @@ describe('the long adversarial run of 2026-12-03', () => {
 
   it('fCdf of Infinity or 1.8e308 is 1, not NaN; fQuantile with d1 = 7.4e-323 is NOT_FINITE, not Infinity', () => {
     expect(q.fCdf(Infinity, 2, 2)).toBe(1);
+    expect(q.chiSquareCdf(Infinity, 3)).toBe(1);
+    // χ²(2) is exponential with mean 2: P(X ≤ 1e308) = 1 − e^(−5e307) = 1
+    expect(q.chiSquareCdf(1e308, 2)).toBe(1);
     // F(2, 2): P(X ≤ x) = x/(1 + x), within rounding of 1 at 1.8e308
     expect(q.fCdf(1.7976931348623141e308, 2, 2)).toBeCloseTo(1, 15);
     expect(codeOf(() => q.fQuantile(0.5, 7.4e-323, 3))).toBe('NOT_FINITE');
@@ -547,6 +550,26 @@ describe('the long adversarial run of 2026-12-03', () => {
     expect(
       codeOf(() =>
         q.toGrid(R, { lat: 0, lon: 15 }, { ...prepared, arithmetic: undefined } as never),
+      ),
+    ).toBe('INVALID_ARGUMENT');
+  });
+});
+
+describe('the long adversarial run of 2026-12-03, a hang', () => {
+  it('deflectionTable of an alignment starting at chainage 1.38e66 (float) answers at once, not after hours', () => {
+    const h = q.horizontalAlignment(q.float, {
+      points: [
+        { x: 0, y: 0 },
+        { x: 0, y: 100 },
+        { x: 60, y: 180 },
+      ],
+      curves: [{ radius: 30 }],
+    });
+    expect(
+      codeOf(() =>
+        q.deflectionTable(q.float, { ...h, startChainage: 1.3816649360068459e66 }, 0, {
+          interval: 10,
+        }),
       ),
     ).toBe('INVALID_ARGUMENT');
   });

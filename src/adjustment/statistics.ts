@@ -247,6 +247,7 @@ export function normalQuantile(p: number): number {
 export function chiSquareCdf(x: number, dof: number): number {
   checkX(x, 'chiSquareCdf(x)');
   checkDof(dof, 'chiSquareCdf(dof)');
+  if (x === Infinity) return 1;
   return gammaPQ(dof / 2, Math.max(0, x) / 2)[0];
 }
 

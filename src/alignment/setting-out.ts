@@ -57,6 +57,12 @@ export function stationsBetween<T>(
       throw inputTooLong(where, `more than ${max} rows: use a longer interval`);
     // First multiple k·interval > cLo: start from the nearest number and correct exactly.
     let k = Math.floor(A.toNumber(A.div(cLo, interval)));
+    // Beyond 2^53 intervals from chainage 0 a step of one interval is lost in a JS number.
+    if (!Number.isSafeInteger(k) || Math.abs(k) > Number.MAX_SAFE_INTEGER - MAX_ROWS - 2)
+      throw invalidArgument(
+        where,
+        `chainage ${A.toString(cLo)} is more than 2^53 intervals of ${A.toString(interval)} from 0: no table can step to it`,
+      );
     while (A.cmp(A.mul(A.from(k), interval), cLo) <= 0) k++;
     while (k > -Number.MAX_SAFE_INTEGER && A.cmp(A.mul(A.from(k - 1), interval), cLo) > 0) k--;
     for (; ; k++) {
