@@ -555,6 +555,20 @@ describe('the long adversarial run of 2026-12-03', () => {
   });
 });
 
+describe('the long adversarial run of 2026-12-03, seed 1', () => {
+  it('heightFromSight in uncertain(float) at a quadrance of 1e308: a derivative that overflows is NOT_FINITE', () => {
+    const U = q.uncertain(q.float);
+    const R = q.measured(U, 0.36, 0.01, 'R');
+    // dH/dR = Q/(1 − R)² ≈ 2.4e308: beyond a JS number
+    expect(codeOf(() => q.heightFromSight(U, { horizontalQuadrance: 1e308, vertical: R }))).toBe(
+      'NOT_FINITE',
+    );
+    // at 1e300 every derivative is finite, and dH/dQ = R/(1 − R) = 0.5625
+    const h = q.heightFromSight(U, { horizontalQuadrance: 1e300, vertical: R });
+    expect(q.float.toNumber(h.H.value) / 1e300).toBeCloseTo(0.5625, 12);
+  });
+});
+
 describe('the long adversarial run of 2026-12-03, a hang', () => {
   it('deflectionTable of an alignment starting at chainage 1.38e66 (float) answers at once, not after hours', () => {
     const h = q.horizontalAlignment(q.float, {

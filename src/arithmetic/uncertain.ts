@@ -421,10 +421,16 @@ function linF(
   if (na === 0) return scaledF(value, b, cb);
   const da = a.derivatives;
   const db = b.derivatives;
+  // z stays 0 unless a derivative overflowed (∞·0 and NaN·0 are NaN): one check per operation.
+  let z = 0;
   if (a.inputs === b.inputs) {
     const d = new Array<number>(na);
-    for (let i = 0; i < na; i++) d[i] = ca * (da[i] as number) + cb * (db[i] as number);
-    return new Uncertain(value, a.inputs, d);
+    for (let i = 0; i < na; i++) {
+      const x = ca * (da[i] as number) + cb * (db[i] as number);
+      d[i] = x;
+      z += x * 0;
+    }
+    return finiteGradient(new Uncertain(value, a.inputs, d), z);
   }
   const { keys, where } = union(a.inputs, b.inputs);
   const d = new Array<number>(keys.length);
@@ -434,15 +440,31 @@ function linF(
     const i = where[j] as number;
     d[i] = i < na ? (d[i] as number) + y : y;
   }
-  return new Uncertain(value, keys, d);
+  for (let i = 0; i < d.length; i++) z += (d[i] as number) * 0;
+  return finiteGradient(new Uncertain(value, keys, d), z);
 }
 
 function scaledF(value: number, a: Uncertain<number>, c: number): Uncertain<number> {
   const n = a.inputs.length;
   if (c === 1 || n === 0) return new Uncertain(value, a.inputs, a.derivatives);
   const d = new Array<number>(n);
-  for (let i = 0; i < n; i++) d[i] = c * (a.derivatives[i] as number);
-  return new Uncertain(value, a.inputs, d);
+  let z = 0;
+  for (let i = 0; i < n; i++) {
+    const x = c * (a.derivatives[i] as number);
+    d[i] = x;
+    z += x * 0;
+  }
+  return finiteGradient(new Uncertain(value, a.inputs, d), z);
+}
+
+/** `u`, or NOT_FINITE when a derivative overflowed (`z` is 0 exactly when all are finite). */
+function finiteGradient(u: Uncertain<number>, z: number): Uncertain<number> {
+  if (z !== 0)
+    throw notFinite(
+      'uncertain(float)',
+      `a derivative of the result ${show(u.value)} is not finite (overflow): use uncertain(decimal(n)) for values this large`,
+    );
+  return u;
 }
 
 /**

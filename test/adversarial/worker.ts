@@ -119,8 +119,9 @@ function nonFinite(
   // A name echoed back (a label the caller gave) is the caller's text, not a computed number.
   if (/\.name$/.test(path)) return undefined;
   if (typeof v === 'number') return Number.isFinite(v) ? undefined : `${path} = ${v}`;
+  // (So is the junk text itself echoed back, e.g. a point named "Infinity".)
   if (typeof v === 'string')
-    return /^[+-]?(NaN|Infinity)$/.test(v) ? `${path} = "${v}"` : undefined;
+    return /^[+-]?(NaN|Infinity)$/.test(v) && !skip.has(v) ? `${path} = "${v}"` : undefined;
   if (typeof v !== 'object' || v === null || depth > 6 || skip.has(v)) return undefined;
   skip.add(v);
   try {
