@@ -432,6 +432,12 @@ export function prepareWith<T>(
   return Object.freeze({ method: projection.method, arithmetic: A, [PREPARED]: internal });
 }
 
+/** The name of the arithmetic a projection says it was prepared for (junk shown safely). */
+function preparedFor(a: unknown): string {
+  const name = typeof a === 'object' && a !== null ? (a as { name?: unknown }).name : undefined;
+  return typeof name === 'string' ? name : show(a);
+}
+
 /** The prepared form of `projection` for A: itself when prepared for A, else prepared now. @internal */
 export function prepared<T>(
   A: Arithmetic<T>,
@@ -445,7 +451,7 @@ export function prepared<T>(
     if (p!.arithmetic !== A)
       throw invalidArgument(
         `${where}(projection)`,
-        `the projection was prepared for ${show((p!.arithmetic as { name?: unknown } | undefined)?.name ?? p!.arithmetic)}, not ${A.name}`,
+        `the projection was prepared for ${preparedFor(p!.arithmetic)}, not ${A.name}`,
       );
     return internal;
   }

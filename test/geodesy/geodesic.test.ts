@@ -62,7 +62,7 @@ describe('geodesicInverse against GeographicLib', () => {
       { numRuns: 2000 },
     );
   });
-  it('nearly antipodal pairs: distance within 30 nm, and the azimuth found solves the direct problem to 15 nm (by GeographicLib)', () => {
+  it('nearly antipodal pairs: distance within 30 nm, and the azimuth and distance found solve the direct problem to 30 nm (by GeographicLib)', () => {
     const small = fc.double({ min: -1, max: 1, noNaN: true });
     fc.assert(
       fc.property(fc.double({ min: -89.9, max: 89.9, noNaN: true }), small, small, (lat1, u, v) => {
@@ -72,9 +72,12 @@ describe('geodesicInverse against GeographicLib', () => {
         const q = W.Inverse(lat1, 0, lat2, lon2);
         expect(Math.abs(r.distance - q.s12!)).toBeLessThan(30e-9);
         // GeographicLib's direct solution from the azimuth and distance found lands within
-        // 15 nm of P2 ...
+        // 30 nm of P2: the distance's own tolerance above, which moves the end point as much
+        // (a 15 nm bound failed on lat1 = 87.88020155355976, lat2 = −lat1, lon2 = 180: azimuth 0,
+        // as GeographicLib's and the 40-digit solution's, and a distance 15.9 nm long of
+        // 20 003 931.4586254311 m — 4 units in the last place of a double)
         const g = W.Direct(lat1, 0, r.azimuth1, r.distance);
-        expect(W.Inverse(g.lat2!, g.lon2!, lat2, lon2).s12!).toBeLessThan(15e-9);
+        expect(W.Inverse(g.lat2!, g.lon2!, lat2, lon2).s12!).toBeLessThan(30e-9);
         // ... and ours within 30 nm (its own error included)
         const p = geodesicDirect(float, { lat: lat1, lon: 0 }, r.azimuth1, r.distance, WGS84);
         expect(W.Inverse(p.lat, p.lon, lat2, lon2).s12!).toBeLessThan(30e-9);
