@@ -48,3 +48,5 @@ export type {
 } from './landxml-write.js';
 export { METRES_PER_LANDXML_UNIT } from './landxml-units.js';
 export type { LandXmlAngularUnit, LandXmlLinearUnit, LandXmlUnits } from './landxml-units.js';
+export { landXmlStations } from './landxml-field.js';
+export type { LandXmlStation } from './landxml-field.js';

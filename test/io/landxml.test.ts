@@ -10,11 +10,14 @@ import {
   decimal,
   float,
   horizontalAlignment,
+  orientStation,
   rational,
+  sideShots,
   verticalAlignment,
 } from '../../src/index.js';
 import {
   METRES_PER_LANDXML_UNIT,
+  landXmlStations,
   pointsFromFile,
   pointsFromLandXml,
   readLandXml,
@@ -511,5 +514,69 @@ describe('toLandXml', () => {
     const f = toLandXml(float, { points: content.points, parcels: content.parcels }, { date });
     const r = toLandXml(R, { points: content.points, parcels: content.parcels }, { date });
     expect(f).toBe(r);
+  });
+});
+
+describe('landXmlStations: a LandXML survey into the field functions', () => {
+  // A station S1 (east 1000, north 2000, height 50), a backsight B1 due north of it read at
+  // circle 10°, and three shots; the expected coordinates worked by hand: bearing = circle −
+  // 10°, east = 1000 + d·sin(bearing), north = 2000 + d·cos(bearing).
+  const text = doc(
+    `<CgPoints><CgPoint name="S1">2000 1000 50</CgPoint><CgPoint name="B1">2100 1000 51</CgPoint></CgPoints>
+    <Survey>
+      <InstrumentSetup id="IS1" stationName="S1" instrumentHeight="1.6"/>
+      <ObservationGroup id="G1" setupID="IS1">
+        <RawObservation purpose="backsight" horizAngle="10" zenithAngle="90" slopeDistance="100"><TargetPoint pntRef="B1"/></RawObservation>
+        <RawObservation horizAngle="100" zenithAngle="90" slopeDistance="25" targetHeight="1.6"><TargetPoint pntRef="P1"/></RawObservation>
+        <RawObservation horizAngle="190" horizDistance="40"><TargetPoint pntRef="P2"/></RawObservation>
+        <RawObservation horizAngle="280" zenithAngle="60" slopeDistance="20" targetHeight="2.1"><TargetPoint pntRef="P3"/></RawObservation>
+      </ObservationGroup>
+    </Survey>`,
+  );
+
+  it('orients the station on its backsight and gives the shots where they are', () => {
+    const d = readLandXml(R, text);
+    const [s] = landXmlStations(R, d);
+    expect(s!.id).toBe('IS1');
+    expect(s!.orient.backsights).toHaveLength(1);
+    const setup = orientStation(R, s!.orient);
+    // B1 is due north (bearing 0) read at circle 10°: the orientation is −10° (350°)
+    expect(R.toNumber(setup.orientation) % 360).toBeCloseTo(350, 12);
+    const shots = sideShots(R, setup, s!.shots);
+    expect(shots.map((p) => p.name)).toEqual(['P1', 'P2', 'P3']);
+    // P1: bearing 90°, 25 m level: (1025, 2000), height 50 + 1.6 − 1.6 = 50
+    expect(R.toNumber(shots[0]!.x)).toBeCloseTo(1025, 9);
+    expect(R.toNumber(shots[0]!.y)).toBeCloseTo(2000, 9);
+    expect(R.toNumber(shots[0]!.z!)).toBeCloseTo(50, 9);
+    // P2: bearing 180°, 40 m horizontal: (1000, 1960)
+    expect(R.toNumber(shots[1]!.x)).toBeCloseTo(1000, 9);
+    expect(R.toNumber(shots[1]!.y)).toBeCloseTo(1960, 9);
+    // P3: bearing 270°, zenith 60°: horizontal 20·sin 60° = 17.3205…, rise 20·cos 60° = 10,
+    // height 50 + 1.6 + 10 − 2.1 = 59.5
+    expect(R.toNumber(shots[2]!.x)).toBeCloseTo(1000 - 20 * Math.sin(Math.PI / 3), 9);
+    expect(R.toNumber(shots[2]!.y)).toBeCloseTo(2000, 9);
+    expect(R.toNumber(shots[2]!.z!)).toBeCloseTo(59.5, 9);
+  });
+
+  it('refuses a station without coordinates and a shot without distances, naming the line', () => {
+    const noStation = readLandXml(
+      R,
+      doc(
+        '<Survey><InstrumentSetup id="IS1" stationName="S9"/><ObservationGroup id="G" setupID="IS1"><RawObservation horizAngle="1" horizDistance="2"><TargetPoint pntRef="P"/></RawObservation></ObservationGroup></Survey>',
+      ),
+    );
+    expect(messageOf(() => landXmlStations(R, noStation))).toMatch(
+      /station "S9" has no coordinates/,
+    );
+    const noDistance = readLandXml(
+      R,
+      doc(
+        '<CgPoints><CgPoint name="S1">1 2</CgPoint></CgPoints><Survey><InstrumentSetup id="IS1" stationName="S1"/><ObservationGroup id="G" setupID="IS1">\n<RawObservation horizAngle="1" zenithAngle="90"><TargetPoint pntRef="P"/></RawObservation></ObservationGroup></Survey>',
+      ),
+    );
+    expect(messageOf(() => landXmlStations(R, noDistance))).toMatch(
+      /line 5.*neither a slope distance/,
+    );
+    expect(codeOf(() => landXmlStations(R, {} as never))).toBe('INVALID_ARGUMENT');
   });
 });
