@@ -98,8 +98,22 @@ export interface LandXmlDocument<T> {
 }
 
 const SUPPORTED_VERSIONS = new Set(['1.0', '1.1', '1.2']);
-// Attributes that describe rather than measure: accepted and not returned.
-const DESCRIPTIVE = new Set(['oID', 'timeStamp', 'date', 'time', 'state', 'status', 'note']);
+// Attributes that describe rather than measure: accepted and not returned (a point's feature
+// reference, geometry kind, role and time stamps among them).
+const DESCRIPTIVE = new Set([
+  'oID',
+  'timeStamp',
+  'date',
+  'time',
+  'state',
+  'status',
+  'note',
+  'featureRef',
+  'pointGeometry',
+  'DTMAttribute',
+  'role',
+  'determinedTimeStamp',
+]);
 const HEADER = new Set(['Project', 'Application', 'CoordinateSystem', 'FeatureDictionary']);
 
 interface Ctx<T> {
