@@ -118,14 +118,17 @@ function inverseIn<T>(
 ): GeodesicInverse<T> {
   const C = geodesicContext(A, ell, `${where}(ellipsoid)`);
   const h180 = A.from(180);
-  // λ₁₂ in (−180°, 180°], then the canonical configuration (Karney 2013, §5). Within ±540°
-  // one subtraction of 360° is exact (Sterbenz's lemma), so λ₁₂ carries one rounding only.
+  // λ₁₂ in (−180°, 180°], then the canonical configuration (Karney 2013, §5). Across the
+  // antimeridian the turn is taken off lon2 before the difference, (lon2 ∓ 360°) − lon1: for
+  // points near ±180° both steps are exact (the operands are close), where lon2 − lon1 would be
+  // rounded at the scale of 360° first (up to 2.8e-14°, which a short north–south line turns
+  // into 1e-10° of azimuth). Elsewhere λ₁₂ carries one rounding at the scale of the result.
   const h360 = A.from(360);
   let lam = A.sub(lon2, lon1);
   if (A.cmp(A.abs(lam), A.from(540)) > 0)
     lam = A.sub(modulo(A, A.add(lam, h180), h360, `${where}(p2).lon`), h180);
-  else if (A.cmp(lam, h180) > 0) lam = A.sub(lam, h360);
-  else if (A.cmp(lam, A.neg(h180)) <= 0) lam = A.add(lam, h360);
+  else if (A.cmp(lam, h180) > 0) lam = A.sub(A.sub(lon2, h360), lon1);
+  else if (A.cmp(lam, A.neg(h180)) <= 0) lam = A.sub(A.add(lon2, h360), lon1);
   const lonsign = A.sign(lam) < 0 ? -1 : 1;
   if (lonsign < 0) lam = A.neg(lam);
   const swap = A.cmp(A.abs(lat1In), A.abs(lat2In)) < 0;
