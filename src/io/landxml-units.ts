@@ -51,9 +51,12 @@ export interface LandXmlUnits {
   readonly linear: LandXmlLinearUnit;
   /** The unit of elevations (the third value of a `CgPoint`); the linear unit when not stated. */
   readonly elevation: LandXmlLinearUnit;
-  /** The format of angles (`horizAngle`, `zenithAngle`); the schema's default is radians. */
+  /**
+   * The format of angles (`horizAngle`, `zenithAngle`); radians when not stated, the schema's
+   * default as recalled from its element reference (from memory: check a file that leaves it out).
+   */
   readonly angular: LandXmlAngularUnit;
-  /** The format of directions (`azimuth`); the schema's default is radians. */
+  /** The format of directions (`azimuth`); radians when not stated, as for `angular`. */
   readonly direction: LandXmlAngularUnit;
 }
 
