@@ -82,7 +82,10 @@ export class Uncertain<T> {
     this.#map = undefined;
   }
 
-  /** ∂y/∂xᵢ for each input the value depends on (empty for constants), in the order first met. */
+  /**
+   * ∂y/∂xᵢ for each input the value depends on (empty for constants), in the order first met;
+   * where one operand's inputs include all of the other's, the result keeps the fuller list's order.
+   */
   get gradient(): Gradient<T> {
     if (this.#map === undefined) {
       const m = new Map<UncertainInput<T>, T>();
@@ -147,6 +150,25 @@ function union<T>(a: Keys<T>, b: Keys<T>): { keys: Keys<T>; where: number[] } {
   return { keys: keys ?? a, where };
 }
 
+/**
+ * Where each of `small`'s inputs sits in `big`, or `undefined` when one of them is not there.
+ * When it gives positions, a result of operands with these lists takes `big` itself as its
+ * inputs, so the values of a computation come to share one array (and later operations
+ * between them are plain loops) instead of each holding the inputs in its own order.
+ */
+function within<T>(big: Keys<T>, small: Keys<T>): number[] | undefined {
+  const where = new Array<number>(small.length);
+  const index =
+    big.length * small.length > 256 ? new Map(big.map((k, i) => [k, i] as const)) : undefined;
+  for (let j = 0; j < small.length; j++) {
+    const k = small[j] as UncertainInput<T>;
+    const i = index ? (index.get(k) ?? -1) : indexOf(big, k);
+    if (i < 0) return undefined;
+    where[j] = i;
+  }
+  return where;
+}
+
 function fromMap<T>(
   B: Arithmetic<T>,
   value: T,
@@ -209,11 +231,10 @@ function fromMap<T>(
  */
 export function uncertain<T, E extends boolean>(base: Arithmetic<T, E>): UncertainArithmetic<T, E> {
   checkArithmetic(base, 'uncertain');
-  const U =
-    base === (float as unknown)
-      ? (uncertainFloat() as unknown as UncertainArithmetic<T, E>)
-      : uncertainGeneric(base);
-  return withOperandChecks(U);
+  // The float twin checks its hot operations' operands itself (see uncertainFloat).
+  return base === (float as unknown)
+    ? (uncertainFloat() as unknown as UncertainArithmetic<T, E>)
+    : withOperandChecks(uncertainGeneric(base));
 }
 
 const OPERATIONS = [
@@ -250,13 +271,20 @@ function withOperandChecks<T, E extends boolean>(
     const f = U[op] as ((...a: unknown[]) => unknown) | undefined;
     if (typeof f !== 'function') continue;
     const arity = op === 'toPrecision' ? 1 : f.length;
-    out[op] = (...args: unknown[]) => {
-      // An Uncertain of this kind; its value is the base arithmetic's to check (an overflow met
-      // earlier is NOT_FINITE there, not a wrong operand).
-      for (let i = 0; i < arity; i++)
-        if (!(args[i] instanceof Uncertain)) throw notAValue(U.name, op, args[i]);
-      return f(...args);
-    };
+    // An Uncertain of this kind; its value is the base arithmetic's to check (an overflow met
+    // earlier is NOT_FINITE there, not a wrong operand). Every operation takes at most two
+    // arguments: written out, without rest and spread, the check costs V8 next to nothing.
+    out[op] =
+      arity === 1
+        ? (a: unknown, b: unknown) => {
+            if (!(a instanceof Uncertain)) throw notAValue(U.name, op, a);
+            return f(a, b);
+          }
+        : (a: unknown, b: unknown) => {
+            if (!(a instanceof Uncertain)) throw notAValue(U.name, op, a);
+            if (!(b instanceof Uncertain)) throw notAValue(U.name, op, b);
+            return f(a, b);
+          };
   }
   return out as unknown as UncertainArithmetic<T, E>;
 }
@@ -287,6 +315,18 @@ function lin<T>(
       d[i] = B.add(x, y);
     }
     return new Uncertain(value, a.inputs, d);
+  }
+  const inB = na < nb ? within(b.inputs, a.inputs) : undefined;
+  if (inB !== undefined) {
+    // every input of `a` is one of `b`'s: the result takes `b`'s list
+    const d = new Array<T>(nb);
+    for (let j = 0; j < nb; j++) d[j] = cb === undefined ? (db[j] as T) : B.mul(cb, db[j] as T);
+    for (let i = 0; i < na; i++) {
+      const x = ca === undefined ? (da[i] as T) : B.mul(ca, da[i] as T);
+      const j = inB[i] as number;
+      d[j] = B.add(x, d[j] as T);
+    }
+    return new Uncertain(value, b.inputs, d);
   }
   const { keys, where } = union(a.inputs, b.inputs);
   const d = new Array<T>(keys.length);
@@ -407,8 +447,36 @@ function uncertainGeneric<T, E extends boolean>(B: Arithmetic<T, E>): UncertainA
   return U;
 }
 
-/** ca·∇a + cb·∇b over float gradients (the same steps as {@link lin}). */
+/**
+ * ca·∇a + cb·∇b over float gradients (the same steps as {@link lin}). Operands sharing one
+ * inputs array, the usual case, take this short loop (small enough for V8 to inline);
+ * the rest go to {@link linApartF}.
+ */
 function linF(
+  value: number,
+  a: Uncertain<number>,
+  ca: number,
+  b: Uncertain<number>,
+  cb: number,
+): Uncertain<number> {
+  const keys = a.inputs;
+  const n = keys.length;
+  if (keys !== b.inputs || n === 0) return linApartF(value, a, ca, b, cb);
+  const da = a.derivatives;
+  const db = b.derivatives;
+  const d = new Array<number>(n);
+  // z stays 0 unless a derivative overflowed (∞·0 and NaN·0 are NaN): one check per operation.
+  let z = 0;
+  for (let i = 0; i < n; i++) {
+    const x = ca * (da[i] as number) + cb * (db[i] as number);
+    d[i] = x;
+    z += x * 0;
+  }
+  return finiteGradient(new Uncertain(value, keys, d), z);
+}
+
+/** {@link linF} for operands with different inputs arrays (or none). */
+function linApartF(
   value: number,
   a: Uncertain<number>,
   ca: number,
@@ -421,16 +489,31 @@ function linF(
   if (na === 0) return scaledF(value, b, cb);
   const da = a.derivatives;
   const db = b.derivatives;
-  // z stays 0 unless a derivative overflowed (∞·0 and NaN·0 are NaN): one check per operation.
   let z = 0;
-  if (a.inputs === b.inputs) {
-    const d = new Array<number>(na);
-    for (let i = 0; i < na; i++) {
-      const x = ca * (da[i] as number) + cb * (db[i] as number);
-      d[i] = x;
-      z += x * 0;
+  if (na < nb) {
+    const inB = within(b.inputs, a.inputs);
+    if (inB !== undefined) {
+      const d = new Array<number>(nb);
+      for (let j = 0; j < nb; j++) d[j] = cb * (db[j] as number);
+      for (let i = 0; i < na; i++) {
+        const j = inB[i] as number;
+        d[j] = ca * (da[i] as number) + (d[j] as number);
+      }
+      for (let j = 0; j < nb; j++) z += (d[j] as number) * 0;
+      return finiteGradient(new Uncertain(value, b.inputs, d), z);
     }
-    return finiteGradient(new Uncertain(value, a.inputs, d), z);
+  } else {
+    const inA = within(a.inputs, b.inputs);
+    if (inA !== undefined) {
+      const d = new Array<number>(na);
+      for (let i = 0; i < na; i++) d[i] = ca * (da[i] as number);
+      for (let j = 0; j < nb; j++) {
+        const i = inA[j] as number;
+        d[i] = (d[i] as number) + cb * (db[j] as number);
+      }
+      for (let i = 0; i < na; i++) z += (d[i] as number) * 0;
+      return finiteGradient(new Uncertain(value, a.inputs, d), z);
+    }
   }
   const { keys, where } = union(a.inputs, b.inputs);
   const d = new Array<number>(keys.length);
@@ -467,13 +550,21 @@ function finiteGradient(u: Uncertain<number>, z: number): Uncertain<number> {
   return u;
 }
 
+/** Refuses an operand that is not an uncertain value, as {@link withOperandChecks} does. */
+function operand(name: string, op: string, x: unknown): void {
+  if (!(x instanceof Uncertain)) throw notAValue(name, op, x);
+}
+
 /**
  * The float twin of {@link uncertainGeneric}: the same rules with plain number operations for
  * everything a solver does in its loops (arithmetic, comparisons, √, sin, cos); the rest
- * (`make`, `is`, output, `pi`, `atan2`) is the generic arithmetic's own.
+ * (`make`, `is`, output, `pi`, `atan2`) is the generic arithmetic's own, with the operand
+ * checks of {@link withOperandChecks}. The twin's own operations check their operands
+ * themselves, in the same order and with the same error: one shared wrapper calling each of
+ * them would be a call site with a dozen targets, which V8 does not inline through.
  */
 function uncertainFloat(): UncertainArithmetic<number, false> {
-  const G = uncertainGeneric(float);
+  const G = withOperandChecks(uncertainGeneric(float));
   const name = G.name;
   type V = Uncertain<number>;
   const constant = (v: number) => new Uncertain(v);
@@ -492,10 +583,24 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
       }
       return constant(float.from(x as Numeric<number>));
     },
-    add: (a, b) => linF(a.value + b.value, a, 1, b, 1),
-    sub: (a, b) => linF(a.value - b.value, a, 1, b, -1),
-    mul: (a, b) => linF(a.value * b.value, a, b.value, b, a.value),
+    add(a, b) {
+      operand(name, 'add', a);
+      operand(name, 'add', b);
+      return linF(a.value + b.value, a, 1, b, 1);
+    },
+    sub(a, b) {
+      operand(name, 'sub', a);
+      operand(name, 'sub', b);
+      return linF(a.value - b.value, a, 1, b, -1);
+    },
+    mul(a, b) {
+      operand(name, 'mul', a);
+      operand(name, 'mul', b);
+      return linF(a.value * b.value, a, b.value, b, a.value);
+    },
     div(a, b) {
+      operand(name, 'div', a);
+      operand(name, 'div', b);
       if (b.value === 0)
         throw divisionByZero(`${name}.div(a, b)`, `b is zero (a = ${show(a.value)})`);
       const q = a.value / b.value;
@@ -505,13 +610,34 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
       const r = 1 / b.value;
       return linF(q, a, r, b, -(q * r));
     },
-    neg: (a) => scaledF(-a.value, a, -1),
-    abs: (a) => (a.value < 0 ? U.neg(a) : a),
-    cmp: (a, b) => (a.value < b.value ? -1 : a.value > b.value ? 1 : 0),
-    eq: (a, b) => a.value === b.value,
-    isZero: (a) => a.value === 0,
-    sign: (a) => (a.value < 0 ? -1 : a.value > 0 ? 1 : 0),
+    neg(a) {
+      operand(name, 'neg', a);
+      return scaledF(-a.value, a, -1);
+    },
+    abs(a) {
+      operand(name, 'abs', a);
+      return a.value < 0 ? U.neg(a) : a;
+    },
+    cmp(a, b) {
+      operand(name, 'cmp', a);
+      operand(name, 'cmp', b);
+      return a.value < b.value ? -1 : a.value > b.value ? 1 : 0;
+    },
+    eq(a, b) {
+      operand(name, 'eq', a);
+      operand(name, 'eq', b);
+      return a.value === b.value;
+    },
+    isZero(a) {
+      operand(name, 'isZero', a);
+      return a.value === 0;
+    },
+    sign(a) {
+      operand(name, 'sign', a);
+      return a.value < 0 ? -1 : a.value > 0 ? 1 : 0;
+    },
     sqrt(a) {
+      operand(name, 'sqrt', a);
       if (a.value < 0) throw noRealSolution(`${name}.sqrt(a)`, `a = ${show(a.value)} is negative`);
       const r = Math.sqrt(a.value);
       if (r - r !== 0) throw notFinite(`${name}.sqrt(a)`, `a = ${show(a.value)} is not finite`);
@@ -519,19 +645,25 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
       if (r === 0) throw notFinite(`${name}.sqrt(a)`, SQRT_AT_ZERO);
       return scaledF(r, a, 1 / (2 * r));
     },
-    sin: (x) =>
-      x.inputs.length === 0
+    sin(x) {
+      operand(name, 'sin', x);
+      return x.inputs.length === 0
         ? constant(Math.sin(x.value))
-        : scaledF(Math.sin(x.value), x, Math.cos(x.value)),
-    cos: (x) =>
-      x.inputs.length === 0
+        : scaledF(Math.sin(x.value), x, Math.cos(x.value));
+    },
+    cos(x) {
+      operand(name, 'cos', x);
+      return x.inputs.length === 0
         ? constant(Math.cos(x.value))
-        : scaledF(Math.cos(x.value), x, -Math.sin(x.value)),
+        : scaledF(Math.cos(x.value), x, -Math.sin(x.value));
+    },
     exp(x) {
+      operand(name, 'exp', x);
       const v = float.exp(x.value);
       return x.inputs.length === 0 ? constant(v) : scaledF(v, x, v);
     },
     log(x) {
+      operand(name, 'log', x);
       const v = float.log(x.value);
       return x.inputs.length === 0 ? constant(v) : scaledF(v, x, 1 / x.value);
     },

@@ -143,21 +143,14 @@ export function budget<T, E extends boolean>(
   } else {
     y = U.from(result as Numeric<Uncertain<T>>);
   }
-  const byName = new Map<string, { input: UncertainInput<T>; c: T }>();
+  const inputs = y.inputs;
+  const n = inputs.length;
+  checkNames(B, inputs, where);
   const lines: Contribution<T>[] = [];
   let variance = B.zero;
-  for (let i = 0; i < y.inputs.length; i++) {
-    const input = y.inputs[i] as UncertainInput<T>;
+  for (let i = 0; i < n; i++) {
+    const input = inputs[i] as UncertainInput<T>;
     const c = y.derivatives[i] as T;
-    const other = byName.get(input.name);
-    if (other !== undefined) {
-      throw new QuadspreadError(
-        'DUPLICATE_INPUT',
-        where,
-        `two different inputs are named ${show(input.name)} (values ${B.toString(other.input.value)} and ${B.toString(input.value)})`,
-      );
-    }
-    byName.set(input.name, { input, c });
     const cu = B.mul(c, input.sigma);
     const contribution = B.mul(cu, cu); // (cᵢ·u(xᵢ))²: GUM eq. (10) term
     variance = B.add(variance, contribution);
@@ -169,20 +162,24 @@ export function budget<T, E extends boolean>(
       contribution,
     });
   }
-  lines.sort(
-    (p, q) =>
-      B.cmp(q.contribution, p.contribution) || (p.name < q.name ? -1 : p.name > q.name ? 1 : 0),
-  );
+  sortLines(B, lines);
 
   const correlations: CorrelationTerm<T>[] = [];
-  const seen = new Set<string>();
-  const covariance = options?.covariance ?? [];
+  const covariance = options?.covariance ?? NO_COVARIANCE;
   if (!Array.isArray(covariance)) {
     throw invalidCovariance(
       `${where}.covariance`,
       `${show(covariance)} is not a list of [nameA, nameB, covariance] triples`,
     );
   }
+  // By name, for the covariances: filled only when there are some (most budgets have none).
+  const byName = new Map<string, { input: UncertainInput<T>; c: T }>();
+  if (covariance.length > 0)
+    for (let i = 0; i < n; i++) {
+      const input = inputs[i] as UncertainInput<T>;
+      byName.set(input.name, { input, c: y.derivatives[i] as T });
+    }
+  const seen = new Set<string>();
   for (const triple of covariance) {
     if (!Array.isArray(triple) || triple.length !== 3) {
       throw invalidCovariance(
@@ -266,12 +263,68 @@ export function budget<T, E extends boolean>(
   };
 }
 
+/** Largest contribution first, ties by name (names are distinct: one order only). */
+function sortLines<T>(B: Arithmetic<T>, lines: Contribution<T>[]): void {
+  const before = (p: Contribution<T>, q: Contribution<T>) =>
+    B.cmp(q.contribution, p.contribution) || (p.name < q.name ? -1 : p.name > q.name ? 1 : 0);
+  if (lines.length > 16) {
+    lines.sort(before);
+    return;
+  }
+  // A budget has a few lines: insertion sort, without the generic sort's set-up.
+  for (let i = 1; i < lines.length; i++) {
+    const l = lines[i] as Contribution<T>;
+    let j = i - 1;
+    for (; j >= 0 && before(lines[j] as Contribution<T>, l) > 0; j--) lines[j + 1] = lines[j]!;
+    lines[j + 1] = l;
+  }
+}
+
+const NO_COVARIANCE: readonly never[] = /* @__PURE__ */ Object.freeze([]);
+
+/**
+ * Refuses two different inputs with one name (`DUPLICATE_INPUT`, naming the first two found):
+ * a budget's lines and covariances are by name. Pairwise for the usual few inputs, by a map
+ * for many.
+ */
+function checkNames<T>(
+  B: Arithmetic<T>,
+  inputs: readonly UncertainInput<T>[],
+  where: string,
+): void {
+  const n = inputs.length;
+  const index = n > 16 ? new Map<string, UncertainInput<T>>() : undefined;
+  for (let i = 0; i < n; i++) {
+    const input = inputs[i] as UncertainInput<T>;
+    let other: UncertainInput<T> | undefined;
+    if (index === undefined) {
+      for (let j = 0; j < i && other === undefined; j++)
+        if ((inputs[j] as UncertainInput<T>).name === input.name) other = inputs[j];
+    } else {
+      other = index.get(input.name);
+      index.set(input.name, input);
+    }
+    if (other !== undefined) {
+      throw new QuadspreadError(
+        'DUPLICATE_INPUT',
+        where,
+        `two different inputs are named ${show(input.name)} (values ${B.toString(other.value)} and ${B.toString(input.value)})`,
+      );
+    }
+  }
+}
+
 /**
  * √variance as a root; over `rational` the surd's `toNumber()` comes from the variance
  * itself (the surd's own coefficient and radicand may lie beyond the range of JS numbers
  * when the root does not).
  */
 function sigmaOf<T, E extends boolean>(B: Arithmetic<T, E>, variance: T): Root<T, E> {
+  // An inexact base: its own root of the (checked, non-negative) variance, as sqrtOf gives it.
+  if (!B.exact) {
+    const r = B.sqrt(variance);
+    if (r !== undefined) return r as Root<T, E>;
+  }
   const s = sqrtOf(B, variance);
   const v = B.ratio?.(variance);
   if (v === undefined || !isSurd(s) || s.isRational()) return s;

@@ -46,13 +46,13 @@ export function measured<T>(
   const where = 'measured(U, value, sigma, name)';
   const n = readName(name, where);
   const s = readSigma(U, sigma, where);
-  const v = readNumber(U.base, value, `${where} value`);
+  const v = readNumber(U.base, value, where, ' value');
   const input: UncertainInput<T> = Object.freeze({ name: n, value: v, sigma: s });
   return new Uncertain(v, [input], [U.base.one]);
 }
 
 /**
- * The inputs a value depends on, with ∂value/∂input, in the order first met.
+ * The inputs a value depends on, with ∂value/∂input, in the order of its `gradient`.
  *
  * @param U the uncertain arithmetic of `y`
  * @param y a value of `U`
