@@ -8,7 +8,6 @@
 import type { Feature, FeatureCollection, Geometry, Position } from 'geojson';
 import {
   QuadspreadError,
-  area,
   crs,
   settingOutTable,
   type Arithmetic,
@@ -16,6 +15,7 @@ import {
   type Numeric,
 } from '../index.js';
 import { checkArithmetic, show } from '../errors.js';
+import { contentList, parcelRing } from './content.js';
 import { fixedNumber, numberOf } from './numbers.js';
 import type { ExchangePointInput } from './point.js';
 import { prepareReference, type PreparedReference, type Wgs84Reference } from './reference.js';
@@ -216,16 +216,8 @@ export function toGeoJson<T>(
   const feature = (name: string, geometry: Geometry, props: Record<string, unknown>): void => {
     features.push({ type: 'Feature', id: name, geometry, properties: props });
   };
-  const list = <X>(v: readonly X[] | undefined, what: string): readonly X[] => {
-    if (v === undefined) return [];
-    if (!Array.isArray(v))
-      throw new QuadspreadError(
-        'INVALID_ARGUMENT',
-        `${where}(content.${what})`,
-        `${show(v)} is not an array`,
-      );
-    return v;
-  };
+  const list = <X>(v: readonly X[] | undefined, what: string): readonly X[] =>
+    contentList(v, where, what);
   const nameOf = (item: { name?: unknown } | null, at: string): string => {
     const name = item?.name;
     if (typeof name !== 'string' || name === '')
@@ -299,22 +291,9 @@ export function toGeoJson<T>(
   list(content.parcels, 'parcels').forEach((p, i) => {
     const at = `${where}(content.parcels[${i}])`;
     const name = nameOf(p, at);
-    let ring = [...readVertices(p.points, `parcels[${i}].points`)];
-    const first = ring[0];
-    const last = ring[ring.length - 1];
-    if (
-      ring.length > 3 &&
-      A.eq(A.from(first!.x), A.from(last!.x)) &&
-      A.eq(A.from(first!.y), A.from(last!.y))
-    )
-      ring = ring.slice(0, -1);
-    const signed = area(A, ring);
-    if (A.isZero(signed))
-      throw new QuadspreadError(
-        'INVALID_ARGUMENT',
-        `${at}.points`,
-        'the boundary encloses no area',
-      );
+    const open = parcelRing(A, readVertices(p.points, `parcels[${i}].points`), at);
+    const signed = open.signed;
+    let ring = open.ring;
     // RFC 7946 §3.1.6: an exterior ring runs counterclockwise. Map projections keep the sense
     // of a ring (they are orientation preserving), so the plane sense is the sense on the map.
     if (A.sign(signed) < 0) ring = [ring[0]!, ...ring.slice(1).reverse()];

@@ -6,7 +6,6 @@
  */
 import {
   QuadspreadError,
-  area,
   sinCosDegrees,
   type Arithmetic,
   type HorizontalAlignment,
@@ -14,6 +13,7 @@ import {
   type VerticalAlignment,
 } from '../index.js';
 import { checkArithmetic, show } from '../errors.js';
+import { contentList, parcelRing } from './content.js';
 import { fixedText } from './numbers.js';
 import type { ExchangePointInput } from './point.js';
 import type { PlaneVertex } from './geojson-write.js';
@@ -210,16 +210,8 @@ export function toLandXml<T>(
       `${show(content)} is not { points?, parcels?, alignments?, lines? }`,
     );
 
-  const list = <X>(v: readonly X[] | undefined, what: string): readonly X[] => {
-    if (v === undefined) return [];
-    if (!Array.isArray(v))
-      throw new QuadspreadError(
-        'INVALID_ARGUMENT',
-        `${where}(content.${what})`,
-        `${show(v)} is not an array`,
-      );
-    return v;
-  };
+  const list = <X>(v: readonly X[] | undefined, what: string): readonly X[] =>
+    contentList(v, where, what);
   const item = <X>(v: X, at: string, shape: string): X => {
     if (typeof v !== 'object' || v === null)
       throw new QuadspreadError('INVALID_ARGUMENT', at, `${show(v)} is not ${shape}`);
@@ -281,24 +273,13 @@ export function toLandXml<T>(
       const at = `${where}(content.parcels[${i}])`;
       const q = item(q0, at, 'a parcel { name, points }');
       const name = nameOf(q, at, seen);
-      let ring = [...list(q.points, `parcels[${i}].points`)].map((v, j) =>
-        item(v, `${at}.points[${j}]`, 'a vertex { x, y }'),
+      const { ring, signed } = parcelRing(
+        A,
+        list(q.points, `parcels[${i}].points`).map((v, j) =>
+          item(v, `${at}.points[${j}]`, 'a vertex { x, y }'),
+        ),
+        at,
       );
-      const first = ring[0];
-      const last = ring[ring.length - 1];
-      if (
-        ring.length > 3 &&
-        A.eq(A.from(first!.x as T), A.from(last!.x as T)) &&
-        A.eq(A.from(first!.y as T), A.from(last!.y as T))
-      )
-        ring = ring.slice(0, -1);
-      const signed = area(A, ring);
-      if (A.isZero(signed))
-        throw new QuadspreadError(
-          'INVALID_ARGUMENT',
-          `${at}.points`,
-          'the boundary encloses no area',
-        );
       out.push(
         `    <Parcel name="${name}" area="${len(A.abs(signed))}"${attr('desc', q.description, at)}>`,
         '      <CoordGeom>',
