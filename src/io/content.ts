@@ -10,7 +10,7 @@ import type { PlaneVertex } from './geojson-write.js';
 
 /**
  * `v` as a list (`[]` when absent), or `INVALID_ARGUMENT` naming `where(content.what)` when it
- * is not an array.
+ * is not an array or has a hole (which `forEach` and `map` would pass over without a word).
  * @internal
  */
 export function contentList<X>(
@@ -25,6 +25,13 @@ export function contentList<X>(
       `${where}(content.${what})`,
       `${show(v)} is not an array`,
     );
+  for (let i = 0; i < v.length; i++)
+    if (!(i in v))
+      throw new QuadspreadError(
+        'INVALID_ARGUMENT',
+        `${where}(content.${what}[${i}])`,
+        'is a hole in the array',
+      );
   return v;
 }
 

@@ -375,6 +375,10 @@ describe('toGeoJson', () => {
   });
 
   it('refuses bad content and options with typed errors', () => {
+    // a hole in a list is refused, not passed over (map would skip it)
+    // eslint-disable-next-line no-sparse-arrays
+    const holey = [, { name: 'A', x: 1, y: 2 }] as never;
+    expect(() => toGeoJson(float, { points: holey }, { coordinates: 'plane' })).toThrow(/hole/);
     const ref = { reference: BNG };
     expect(
       codeOf(() =>

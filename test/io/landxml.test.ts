@@ -500,6 +500,12 @@ describe('toLandXml', () => {
     expect(codeOf(() => toLandXml(R, {}, { decimals: 13 }))).toBe('INVALID_ARGUMENT');
     expect(codeOf(() => toLandXml(R, {}, { date: new Date('x') }))).toBe('INVALID_ARGUMENT');
     expect(codeOf(() => toLandXml(R, null as never))).toBe('INVALID_ARGUMENT');
+    // a hole in a list is refused, not passed over (forEach would skip it)
+    // eslint-disable-next-line no-sparse-arrays
+    const holey = [, { name: 'A', x: 1, y: 2 }] as never;
+    expect(messageOf(() => toLandXml(R, { points: holey }, { date }))).toMatch(
+      /points\[0\]\).*hole/,
+    );
     expect(
       codeOf(() =>
         toLandXml(R, { points: [{ name: 'A', x: 1, y: 2, code: Object.create(null) }] }, { date }),
