@@ -20,7 +20,8 @@ import {
   solveNormal,
   selectedInverse,
 } from './normal-equations.js';
-import type { NormalFactor, SelectedInverse } from './normal-equations.js';
+import type { NormalFactor, NormalSystem, SelectedInverse } from './normal-equations.js';
+import { accumulateFloat } from './normal-float.js';
 
 /** A group of m observations (m = 1 for an uncorrelated one). @internal */
 export interface ObservationGroup<T> {
@@ -110,10 +111,21 @@ export function solveGroups<T>(
   tolerance: T,
   order?: OrderMemo,
 ): LinearSolution<T> | { singular: number } {
-  const N = normalSystem(A, n);
-  for (const g of groups) {
-    if (g.rows.length === 1) addObservation(A, N, g.index, g.rows[0]!, g.weight[0]![0]!, g.l[0]!);
-    else addGroup(A, N, g.index, g.rows, g.weight, g.l);
+  let N = normalSystem(A, n);
+  // In float, the twin (the same operations on numbers; docs/performance.md); where it stops
+  // (a sum not finite) the generic code starts again and reports it.
+  const twin =
+    A.float64 === true &&
+    accumulateFloat(
+      N as unknown as NormalSystem<number>,
+      groups as unknown as readonly ObservationGroup<number>[],
+    );
+  if (!twin) {
+    if (A.float64 === true) N = normalSystem(A, n);
+    for (const g of groups) {
+      if (g.rows.length === 1) addObservation(A, N, g.index, g.rows[0]!, g.weight[0]![0]!, g.l[0]!);
+      else addGroup(A, N, g.index, g.rows, g.weight, g.l);
+    }
   }
   const perm = orderOf(n, N.cols, order);
   const factor = factorNormal(A, N, perm, tolerance);

@@ -18,6 +18,7 @@
  * @module adjustment
  */
 import type { Arithmetic } from '../arithmetic/types.js';
+import { factorNumericFloat, solveNormalFloat, selectedInverseFloat } from './normal-float.js';
 
 /** Normal equations N·x = b being accumulated: N's upper triangle by column, and b. */
 export interface NormalSystem<T> {
@@ -307,9 +308,27 @@ export function factorNormal<T>(
   const Lp = new Int32Array(n + 1);
   for (let k = 0; k < n; k++) Lp[k + 1] = Lp[k]! + Lnz[k]!;
   const Li = new Int32Array(Lp[n]!);
+  // Numeric. In float, the twin (the same operations on numbers; docs/performance.md).
+  if (A.float64 === true) {
+    const f = factorNumericFloat(
+      n,
+      perm,
+      inv,
+      Cp,
+      Ci,
+      Cx as unknown as number[],
+      parent,
+      flag,
+      Lnz,
+      Lp,
+      tolerance as unknown as number,
+    );
+    // (A partial run leaves flag and Lnz as the loop below expects them: column k sets
+    // flag[k] and Lnz[k] before anything reads them.)
+    if (f !== undefined) return f as unknown as NormalFactor<T> | SingularPivot;
+  }
   const Lx: T[] = new Array(Lp[n]!);
   const D: T[] = new Array(n);
-  // Numeric.
   const Y: T[] = new Array(n).fill(A.zero);
   const pattern = new Int32Array(n);
   for (let k = 0; k < n; k++) {
@@ -355,6 +374,10 @@ export function factorNormal<T>(
  * @internal
  */
 export function solveNormal<T>(A: Arithmetic<T>, F: NormalFactor<T>, b: readonly T[]): T[] {
+  if (A.float64 === true) {
+    const x = solveNormalFloat(F as unknown as NormalFactor<number>, b as unknown as number[]);
+    if (x !== undefined) return x as unknown as T[];
+  }
   const n = F.n;
   const y: T[] = new Array(n);
   for (let k = 0; k < n; k++) y[k] = b[F.perm[k]!]!;
@@ -390,7 +413,14 @@ export function selectedInverse<T>(A: Arithmetic<T>, F: NormalFactor<T>): Select
   const Zd: T[] = new Array(n);
   const mark = new Int32Array(n).fill(-1);
   const acc: T[] = [];
-  for (let j = n - 1; j >= 0; j--) {
+  const twin =
+    A.float64 === true &&
+    selectedInverseFloat(
+      F as unknown as NormalFactor<number>,
+      Zx as unknown as number[],
+      Zd as unknown as number[],
+    );
+  for (let j = twin ? -1 : n - 1; j >= 0; j--) {
     const p0 = Lp[j]!;
     const m = Lp[j + 1]! - p0;
     for (let b = 0; b < m; b++) {
