@@ -22,8 +22,9 @@ export interface BoxTree {
   readonly size: number;
   /** Four numbers per node (min east, min north, max east, max north); node 0 is unused. */
   readonly b: Float64Array;
-  /** A stack for the nearest-box search (two entries per level). */
+  /** A stack for the nearest-box search (one node per level), and its nodes' distances. */
   readonly stack: Int32Array;
+  readonly stackQ: Float64Array;
 }
 
 // Trees by the alignment's `boxes` array (an alignment and its copies share one), and the last
@@ -93,7 +94,7 @@ function buildTree(boxes: readonly number[]): BoxTree {
       b[o + 3] = Infinity;
     }
   }
-  return { n, size, b, stack: new Int32Array(2 * depth + 2) };
+  return { n, size, b, stack: new Int32Array(depth + 1), stackQ: new Float64Array(depth + 1) };
 }
 
 /** Whether the box at offset o is the empty box (+∞, +∞, −∞, −∞). */
@@ -129,32 +130,35 @@ export function nodeQ(b: Float64Array, k: number, px: number, py: number): numbe
  * nearer box finds. The nearer child is searched first. @internal
  */
 export function nearestBox(t: BoxTree, px: number, py: number): number {
-  const { b, size, stack } = t;
+  const { b, size, stack, stackQ } = t;
   let first = 0;
   let firstQ = Infinity;
   let sp = 0;
-  stack[sp++] = 1;
-  while (sp > 0) {
-    const k = stack[--sp]!;
-    const q = nodeQ(b, k, px, py);
+  let k = 1;
+  let q = nodeQ(b, 1, px, py);
+  for (;;) {
     // Only an element strictly nearer, or as near with a lower index, can change the answer.
-    if (q > firstQ || (q === firstQ && lowest(k, size) >= first)) continue;
-    if (k >= size) {
-      first = k - size; // a real element: a leaf past the last one is infinitely far
-      firstQ = q;
-      continue;
+    if (!(q > firstQ || (q === firstQ && lowest(k, size) >= first))) {
+      if (k >= size) {
+        first = k - size; // a real element: a leaf past the last one is infinitely far
+        firstQ = q;
+      } else {
+        // Down to the nearer child (the left one when they are as near), the other kept.
+        const l = 2 * k;
+        const ql = nodeQ(b, l, px, py);
+        const qr = nodeQ(b, l + 1, px, py);
+        const left = ql <= qr;
+        stack[sp] = left ? l + 1 : l;
+        stackQ[sp++] = left ? qr : ql;
+        k = left ? l : l + 1;
+        q = left ? ql : qr;
+        continue;
+      }
     }
-    const l = 2 * k;
-    // The nearer child on top of the stack (the left one when they are as near).
-    if (nodeQ(b, l, px, py) <= nodeQ(b, l + 1, px, py)) {
-      stack[sp++] = l + 1;
-      stack[sp++] = l;
-    } else {
-      stack[sp++] = l;
-      stack[sp++] = l + 1;
-    }
+    if (sp === 0) return first;
+    k = stack[--sp]!;
+    q = stackQ[sp]!;
   }
-  return first;
 }
 
 /** The lowest element index under node k. */

@@ -378,6 +378,12 @@ describe('alignmentStation(float, …): the float twin is exactly the generic fl
     const exact = horizontalAlignment(rational, { points: h.points, curves: [{ radius: 30 }] });
     expect(same(exact, P)).toBe('INVALID_ARGUMENT');
     expect(same({ ...h }, { x: 40, y: 60 })).toStrictEqual(same(h, P)); // a copy: checked anew
+    // An element changed in place after the check, where the search meets it.
+    const g = horizontalAlignment(float, { points: h.points, curves: [{ radius: 30 }] });
+    expect(same(g, P)).not.toBe('INVALID_ARGUMENT');
+    (g.elements as unknown[])[0] = null;
+    expect(same(g, P)).toBe('INVALID_ARGUMENT');
+    expect(same(g, { x: -50, y: 10 }, { extend: true })).toBe('INVALID_ARGUMENT');
   });
 });
 
