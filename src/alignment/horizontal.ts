@@ -786,9 +786,9 @@ function elementsAreObjects(elements: readonly unknown[]): boolean {
 
 // Alignments found intact: an alignment is plain data, checked through once for an arithmetic
 // and then taken as it is on every call while it holds the same arrays (of the same lengths)
-// and the same top-level values; a copy, or one given a new array, is checked anew. An element
-// changed in place after the check is not looked for again (that would cost a pass over every
-// element on every call): copy an alignment to change it.
+// and the same top-level values; a copy, or one given a new array, is checked anew. The fields
+// of an element changed in place after the check are not looked at again: copy an alignment
+// to change it.
 interface Checked {
   readonly A: unknown;
   readonly elements: unknown;
@@ -892,14 +892,28 @@ function isIntact<T>(A: Arithmetic<T>, o: HorizontalAlignment<T>): boolean {
   return true;
 }
 
-/** Checks that `h` looks like an alignment of this arithmetic. @internal */
+/**
+ * Checks that `h` looks like an alignment of this arithmetic. One found intact before and
+ * unchanged is taken after a check of its slots: every element's and equation's is an object
+ * (a pass over the elements), or only the equations' when `elementsMet` (the caller checks
+ * each element it reads, as alignmentStation does, which reads only those near a point).
+ * @internal
+ */
 export function readAlignment<T>(
   A: Arithmetic<T>,
   h: unknown,
   where: string,
+  elementsMet = false,
 ): HorizontalAlignment<T> {
   const o = h as HorizontalAlignment<T> | null;
-  if (o !== null && typeof o === 'object' && unchanged(A, o)) return o;
+  if (
+    o !== null &&
+    typeof o === 'object' &&
+    unchanged(A, o) &&
+    elementsAreObjects(o.equations) &&
+    (elementsMet || elementsAreObjects(o.elements))
+  )
+    return o;
   if (
     o === null ||
     typeof o !== 'object' ||

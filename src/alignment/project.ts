@@ -92,7 +92,7 @@ export function alignmentStation<T>(
     if (r !== undefined) return r as unknown as AlignmentStation<T>;
   }
   const where = WHERE;
-  const h = readAlignment(A, alignment, `${where} alignment`);
+  const h = readAlignment(A, alignment, `${where} alignment`, true);
   const p = readXY(A, P, `${where} P`);
   const opts = options === null || typeof options !== 'object' ? {} : options;
   const tol =
@@ -227,7 +227,7 @@ function stationFloat(
   P: unknown,
   options: unknown,
 ): AlignmentStation<number> | undefined {
-  const h = readAlignment(A, alignment, WHERE_ALIGNMENT);
+  const h = readAlignment(A, alignment, WHERE_ALIGNMENT, true);
   if (P === null || typeof P !== 'object' || Array.isArray(P)) return undefined;
   const px = (P as { x?: unknown }).x;
   const py = (P as { y?: unknown }).y;

@@ -384,6 +384,8 @@ describe('alignmentStation(float, …): the float twin is exactly the generic fl
     (g.elements as unknown[])[0] = null;
     expect(same(g, P)).toBe('INVALID_ARGUMENT');
     expect(same(g, { x: -50, y: 10 }, { extend: true })).toBe('INVALID_ARGUMENT');
+    // alignmentPoint reads the element slots on every call, as before.
+    expect(outcome(() => alignmentPoint(float, g, 150))).toBe('INVALID_ARGUMENT');
   });
 });
 
