@@ -217,7 +217,9 @@ export interface ChainageEquation<T> {
 
 /**
  * A horizontal alignment: plain data (arrays and objects of values of the arithmetic, and
- * JS numbers for the boxes), which may be kept, copied and written out as it is.
+ * JS numbers for the boxes), which may be kept, copied and written out as it is. The functions
+ * that read it check it through the first time and then take it as it is: to change an
+ * alignment, change a copy.
  */
 export interface HorizontalAlignment<T> {
   /** `'horizontal'` */
@@ -238,7 +240,8 @@ export interface HorizontalAlignment<T> {
   readonly equations: readonly ChainageEquation<T>[];
   /**
    * The elements' boxes side by side, four JS numbers per element (min east, min north, max
-   * east, max north): the same as each element's `bounds`, in one flat array for a fast search.
+   * east, max north): the same as each element's `bounds`, in one flat array for a fast search
+   * (a tree of these boxes is built the first time it is searched, and kept for this array).
    */
   readonly boxes: readonly number[];
 }

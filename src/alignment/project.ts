@@ -54,9 +54,10 @@ export interface AlignmentStationOptions<T> {
  * The chainage and offset of a point: the foot of the perpendicular from it to the alignment.
  * Offsets are positive to the right looking ahead (the direction of increasing chainage).
  *
- * Only the elements whose boxes lie near the point are tried (a box test in plain numbers first,
- * then the exact projection, nearest box first), so a long alignment costs little more than a
- * short one. On a straight the projection is exact in `rational`; on an arc it needs √ and atan2
+ * Only the elements whose boxes lie near the point are tried (a search of a tree of the boxes in
+ * plain numbers, built once per alignment, then the exact projection, nearest box first), so a
+ * long alignment costs little more than a short one; in `float` the projections on straights and
+ * arcs run on plain numbers (the same operations, bit for bit). On a straight the projection is exact in `rational`; on an arc it needs √ and atan2
  * (within 1e-40 relative in `rational`); on a transition the foot is found by Newton's method on
  * (P − X(l))·t(l) = 0, kept inside the transition, to 1e-30 of its length in `rational` (with a
  * last unrounded step, so an uncertain arithmetic keeps its first-order derivatives), 1e-12 in
