@@ -24,6 +24,7 @@ import {
   tenToMinus,
   toDegrees,
 } from './internal.js';
+import { FLOAT_NONE, forwardFloatInto } from './projection-float.js';
 
 /** The projection methods: EPSG method names, written in lower case with hyphens. */
 export type ProjectionMethod =
@@ -155,6 +156,10 @@ export interface MethodImpl {
   prepare<T>(A: Arithmetic<T>, p: ProjectionParams<T>, where: string): object;
   forward<T>(A: Arithmetic<T>, c: object, lat: T, dlon: T, where: string): MethodForward<T>;
   inverse<T>(A: Arithmetic<T>, c: object, x: T, y: T, where: string): MethodInverse<T>;
+  /** The kind of its forward float twin (projection-float.ts), if it has one. */
+  readonly floatKind?: number;
+  /** Its constants (prepared in float) in the order its float twin reads them. */
+  floatConstants?(c: object): readonly number[];
 }
 
 type ParamName = 'lat0' | 'lon0' | 'lat1' | 'lat2' | 'k0';
@@ -223,7 +228,16 @@ interface Internal<T> {
   readonly FN: unknown;
   /** lon0 + prime meridian, degrees from Greenwich, in D */
   readonly lonOrigin: unknown;
+  /** The kind of forward float twin (FLOAT_NONE unless A is float and angles are in degrees). */
+  readonly fk: number;
+  /** The float twin's constants (projection-float.ts): empty without a twin. */
+  readonly fc: Float64Array;
 }
+
+const NO_CONSTANTS = /* @__PURE__ */ new Float64Array(0);
+
+/** E, N, k, γ of the float twin's call in progress (read before any other call). */
+const ENKG = /* @__PURE__ */ new Float64Array(4);
 
 const ANGLE_UNITS: readonly ProjectionAngleUnit[] = ['deg', 'grad', 'dms-packed'];
 
@@ -416,6 +430,24 @@ export function prepareWith<T>(
     tol: tenToMinus(D, claimedDigits(D) + 1),
   };
   const c = impl.prepare(D, params, where);
+  const FE = metres('falseEasting');
+  const FN = metres('falseNorthing');
+  const lonOrigin = pm === undefined ? params.lon0 : D.add(params.lon0, pm);
+  // The float twin reads plain numbers in degrees: float only, points in degrees.
+  const fk =
+    A.float64 === true && pointUnit === 'deg' && impl.floatKind !== undefined
+      ? impl.floatKind
+      : FLOAT_NONE;
+  const fc =
+    fk === FLOAT_NONE
+      ? NO_CONSTANTS
+      : Float64Array.of(
+          lonOrigin as number,
+          FE as number,
+          FN as number,
+          unitD as number,
+          ...impl.floatConstants!(c),
+        );
   const internal: Internal<T> = {
     impl,
     D,
@@ -425,9 +457,11 @@ export function prepareWith<T>(
     angleUnit: pointUnit,
     unitA: A.from(rational.toString(unitR)),
     unitD,
-    FE: metres('falseEasting'),
-    FN: metres('falseNorthing'),
-    lonOrigin: pm === undefined ? params.lon0 : D.add(params.lon0, pm),
+    FE,
+    FN,
+    lonOrigin,
+    fk,
+    fc,
   };
   return Object.freeze({ method: projection.method, arithmetic: A, [PREPARED]: internal });
 }
@@ -468,6 +502,12 @@ export function forwardWith<T>(
   where: string,
 ): ProjectedPoint<T> {
   expectObject(point, `${where}(point)`, '{ lat, lon }');
+  if (A.float64 === true && P.fk !== FLOAT_NONE) {
+    // The float twin: the same operations on plain numbers (projection-float.ts); false
+    // wherever the generic code below must decide or throw.
+    if (forwardFloatInto(P.fk, P.fc, point.lat, point.lon, ENKG))
+      return { E: ENKG[0], N: ENKG[1], k: ENKG[2], convergence: ENKG[3] } as ProjectedPoint<T>;
+  }
   const lat = latitudeIn(A, point.lat, P.angleUnit, `${where}(point.lat)`);
   const lon = longitudeIn(A, point.lon, P.angleUnit, `${where}(point.lon)`);
   const D = P.D;
