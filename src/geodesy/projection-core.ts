@@ -494,6 +494,26 @@ export function prepared<T>(
   return prepareWith(A, projection as Projection, m, where)[PREPARED];
 }
 
+/**
+ * The float twin's forward for a projection prepared for A (the float arithmetic) and a point
+ * of plain numbers in degrees: E, N, k, γ written into `out`; `false` (nothing decided) for
+ * anything else, which the caller then hands to the generic code. @internal
+ */
+export function forwardPreparedFloat(
+  A: unknown,
+  projection: unknown,
+  point: unknown,
+  out: Float64Array,
+): boolean {
+  if (typeof projection !== 'object' || projection === null) return false;
+  const P = (projection as Partial<PreparedProjection<unknown>>)[PREPARED];
+  if (P === undefined || P.fk === FLOAT_NONE) return false;
+  if ((projection as PreparedProjection<unknown>).arithmetic !== A) return false;
+  if (typeof point !== 'object' || point === null) return false;
+  const pt = point as { readonly lat?: unknown; readonly lon?: unknown };
+  return forwardFloatInto(P.fk, P.fc, pt.lat, pt.lon, out);
+}
+
 /** Forward: a point's latitude and longitude to grid coordinates, through a prepared projection. @internal */
 export function forwardWith<T>(
   A: Arithmetic<T>,

@@ -15,6 +15,7 @@ import { CASSINI } from './cassini-soldner.js';
 import { ALBERS } from './albers.js';
 import { LAEA } from './lambert-azimuthal.js';
 import {
+  forwardPreparedFloat,
   forwardWith,
   inverseWith,
   prepared,
@@ -145,9 +146,20 @@ export function toGrid<T>(
   point: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },
   projection: Projection | PreparedProjection<T>,
 ): ProjectedPoint<T> {
+  // float with a prepared projection and a point of plain numbers: the float twin
+  // (projection-float.ts), before anything else, so that this function stays small enough to
+  // be inlined and its result object can be optimised away.
+  if (
+    (A as { float64?: unknown } | null | undefined)?.float64 === true &&
+    forwardPreparedFloat(A, projection, point, ENKG)
+  )
+    return { E: ENKG[0], N: ENKG[1], k: ENKG[2], convergence: ENKG[3] } as ProjectedPoint<T>;
   checkArithmetic(A, 'toGrid');
   return forwardWith(A, prepared(A, projection, methodOf, 'toGrid'), point, 'toGrid');
 }
+
+/** E, N, k, γ of the float twin's call in progress (read before any other call). */
+const ENKG = /* @__PURE__ */ new Float64Array(4);
 
 /**
  * Grid coordinates back to geodetic latitude and longitude, in any supported projection (see
