@@ -137,7 +137,7 @@ function inverse<T>(A: Arithmetic<T>, k: object, x: T, y: T, where: string) {
 }
 
 /** The constants in the order the float twin reads them (projection-float.ts `lccInto`). */
-function floatConstants(k: object): readonly number[] {
+function floatConstants<T>(_A: Arithmetic<T>, k: object): readonly number[] {
   const c = k as Lcc<number>;
   return [c.e2, c.e, c.n, c.C, c.r0, c.a];
 }

@@ -87,7 +87,7 @@ function inverse<T>(A: Arithmetic<T>, k: object, x: T, y: T, where: string) {
 }
 
 /** The constants in the order the float twin reads them (projection-float.ts `mercatorInto`). */
-function floatConstants(k: object): readonly number[] {
+function floatConstants<T>(_A: Arithmetic<T>, k: object): readonly number[] {
   const c = k as Merc<number>;
   return [c.e2, c.e, c.ak, c.k0];
 }

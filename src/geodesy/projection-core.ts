@@ -158,8 +158,11 @@ export interface MethodImpl {
   inverse<T>(A: Arithmetic<T>, c: object, x: T, y: T, where: string): MethodInverse<T>;
   /** The kind of its forward float twin (projection-float.ts), if it has one. */
   readonly floatKind?: number;
-  /** Its constants (prepared in float) in the order its float twin reads them. */
-  floatConstants?(c: object): readonly number[];
+  /**
+   * Its constants (prepared in A, the float arithmetic) in the order its float twin reads
+   * them; `undefined` leaves every point to the generic code.
+   */
+  floatConstants?<T>(A: Arithmetic<T>, c: object): readonly number[] | undefined;
 }
 
 type ParamName = 'lat0' | 'lon0' | 'lat1' | 'lat2' | 'k0';
@@ -434,20 +437,15 @@ export function prepareWith<T>(
   const FN = metres('falseNorthing');
   const lonOrigin = pm === undefined ? params.lon0 : D.add(params.lon0, pm);
   // The float twin reads plain numbers in degrees: float only, points in degrees.
-  const fk =
+  const twin =
     A.float64 === true && pointUnit === 'deg' && impl.floatKind !== undefined
-      ? impl.floatKind
-      : FLOAT_NONE;
+      ? impl.floatConstants!(D, c)
+      : undefined;
+  const fk = twin === undefined ? FLOAT_NONE : impl.floatKind!;
   const fc =
-    fk === FLOAT_NONE
+    twin === undefined
       ? NO_CONSTANTS
-      : Float64Array.of(
-          lonOrigin as number,
-          FE as number,
-          FN as number,
-          unitD as number,
-          ...impl.floatConstants!(c),
-        );
+      : Float64Array.of(lonOrigin as number, FE as number, FN as number, unitD as number, ...twin);
   const internal: Internal<T> = {
     impl,
     D,

@@ -20,6 +20,8 @@ export const FLOAT_NONE = 0;
 export const FLOAT_LCC = 1;
 /** Mercator (variants A and B). @internal */
 export const FLOAT_MERCATOR = 2;
+/** Transverse Mercator (Krüger's series to n⁶). @internal */
+export const FLOAT_TM = 3;
 
 /**
  * The layout shared by every kind: [0] lon0 + prime meridian (degrees from Greenwich),
@@ -60,6 +62,7 @@ export function forwardFloatInto(
   let ok: boolean;
   if (kind === FLOAT_LCC) ok = lccInto(k, lat, dl);
   else if (kind === FLOAT_MERCATOR) ok = mercatorInto(k, lat, dl);
+  else if (kind === FLOAT_TM) ok = tmInto(k, lat, dl);
   else return false;
   if (!ok) return false;
   // E = (FE + x)/unit, N = (FN + y)/unit (the linear unit in metres)
@@ -154,5 +157,133 @@ function mercatorInto(k: Float64Array, lat: number, dl: number): boolean {
   XY[1] = y;
   XY[2] = kk;
   XY[3] = 0;
+  return true;
+}
+
+/** grid.ts `atanhSmall` in float: Σ z^(2k+1)/(2k+1) until a term is below tol. */
+function atanhSmallFloat(z: number, tol: number): number {
+  const z2 = z * z;
+  let p = z;
+  let sum = z;
+  for (let k = 3; k < 400; k += 2) {
+    p = p * z2;
+    const term = p / k;
+    sum = sum + term;
+    if (Math.abs(term) <= tol) break;
+  }
+  return sum;
+}
+
+/** grid.ts `sinhSmall` in float: Σ w^(2k+1)/(2k+1)! until a term is below tol. */
+function sinhSmallFloat(w: number, tol: number): number {
+  const w2 = w * w;
+  let t = w;
+  let sum = w;
+  for (let k = 2; k < 400; k += 2) {
+    t = (t * w2) / (k * (k + 1));
+    sum = sum + t;
+    if (Math.abs(t) <= tol) break;
+  }
+  return sum;
+}
+
+/** grid.ts `atanhAny` in float: halving by atanh z = 2 atanh(z/(1 + √(1 − z²))), then the series. */
+function atanhAnyFloat(z: number, tol: number): number {
+  let doublings = 0;
+  while (Math.abs(z) > 0.1 && doublings < 60) {
+    z = z / (1 + Math.sqrt(1 - z * z));
+    doublings += 1;
+  }
+  let r = atanhSmallFloat(z, tol);
+  for (let i = 0; i < doublings; i++) r = r + r;
+  return r;
+}
+
+/** 10^−(15 + 4): the series' tolerance in float (grid.ts `kruger`, tenToMinus(float, 19)). */
+const SERIES_TOL = 1e-19;
+
+/**
+ * Transverse Mercator forward (grid.ts `tm` and `kruger` through projection.ts `TM`, for a
+ * central meridian at 0 and no false origin of its own): constants from {@link METHOD} on are
+ * e², e, α₁…α₆, A/a, ξ0, k0·a·(A/a), k0 (grid.ts `tmTwinConstants`).
+ */
+function tmInto(k: Float64Array, lat: number, dl: number): boolean {
+  const e2 = k[METHOD]!;
+  const e = k[METHOD + 1]!;
+  const Aa = k[METHOD + 8]!;
+  const xi0 = k[METHOD + 9]!;
+  const kA = k[METHOD + 10]!;
+  const k0 = k[METHOD + 11]!;
+  if (!sinCosInto(lat, SC, 0) || !sinCosInto(dl, SC, 2)) return false;
+  const sp = SC[0]!;
+  const cp = SC[1]!;
+  const sl = SC[2]!;
+  const cl = SC[3]!;
+  if (!(cl > 0)) return false; // 90° or more from the central meridian
+  // conformal latitude: S = sin φ √(1 + σ²) − σ, σ = sinh(e atanh(e sin φ)) (Karney 2011, eqs. 7–9)
+  const sigma = sinhSmallFloat(e * atanhSmallFloat(e * sp, SERIES_TOL), SERIES_TOL);
+  const S = sp * Math.sqrt(1 + sigma * sigma) - sigma;
+  const Ccl = cp * cl;
+  const D2 = S * S + Ccl * Ccl;
+  if (!(D2 > 0)) return false; // singular
+  const D = Math.sqrt(D2);
+  // Gauss–Schreiber ξ′, η′ (Karney 2011, eq. 10)
+  const sx = S / D;
+  const cx = Ccl / D;
+  const she = (cp * sl) / D;
+  const che = Math.sqrt(1 + she * she);
+  if (she - she !== 0 || che - che !== 0) return false;
+  const c2 = cx * cx - sx * sx;
+  const s2 = 2 * (sx * cx);
+  const ch2 = 1 + 2 * (she * she);
+  const sh2 = 2 * (she * che);
+  let cj = c2;
+  let sj = s2;
+  let chj = ch2;
+  let shj = sh2;
+  let pp = 1;
+  let qq = 0;
+  let dxi = 0;
+  let deta = 0;
+  // Krüger's series and its derivative (Karney 2011, eqs. 11–13)
+  for (let j = 1; j <= 6; j++) {
+    const alpha = k[METHOD + 1 + j]!;
+    if (j === 6 && Math.abs(alpha) * chj > 1e-10) return false; // the series no longer holds
+    const w = 2 * j * alpha;
+    pp = pp + w * (cj * chj);
+    qq = qq + w * (sj * shj);
+    dxi = dxi + alpha * (sj * chj);
+    deta = deta + alpha * (cj * shj);
+    const cn = cj * c2 - sj * s2;
+    const sn = sj * c2 + cj * s2;
+    const chn = chj * ch2 + shj * sh2;
+    const shn = shj * ch2 + chj * sh2;
+    cj = cn;
+    sj = sn;
+    chj = chn;
+    shj = shn;
+  }
+  // an overflow anywhere in the series (the generic code throws) leaves ±Infinity or NaN here
+  if (pp - pp !== 0 || qq - qq !== 0 || dxi - dxi !== 0 || deta - deta !== 0) return false;
+  if (cj - cj !== 0 || sj - sj !== 0 || chj - chj !== 0 || shj - shj !== 0) return false;
+  // k = k′k″, γ = γ′ + γ″ (Karney 2011, eqs. 25–28)
+  const kPrime = Math.sqrt(1 - e2 * (sp * sp)) / D;
+  const kDouble = Aa * Math.sqrt(pp * pp + qq * qq);
+  const gy = S * sl;
+  const gx = cl * Math.sqrt(S * S + cp * cp);
+  if ((gy === 0 && gx === 0) || (qq === 0 && pp === 0) || (S === 0 && Ccl === 0)) return false;
+  const gamma = Math.atan2(gy, gx) + Math.atan2(qq, pp);
+  const kk = k0 * (kPrime * kDouble);
+  const convergence = (gamma * 180) / Math.PI;
+  // ξ = ξ′ + Σ α_j sin 2jξ′ cosh 2jη′, η = η′ + Σ α_j cos 2jξ′ sinh 2jη′ (Karney 2011, eq. 11)
+  const xi = Math.atan2(S, Ccl) + dxi;
+  const eta = atanhAnyFloat(she / che, SERIES_TOL) + deta;
+  const x = 0 + kA * eta;
+  const y = 0 + kA * (xi - xi0);
+  if (kk - kk !== 0 || x - x !== 0 || y - y !== 0 || convergence - convergence !== 0) return false;
+  XY[0] = x;
+  XY[1] = y;
+  XY[2] = kk;
+  XY[3] = convergence;
   return true;
 }

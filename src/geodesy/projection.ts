@@ -6,7 +6,9 @@
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { QuadspreadError, show, checkArithmetic } from '../errors.js';
-import { transverseMercator, transverseMercatorInverse } from './grid.js';
+import { tmTwinConstants, transverseMercator, transverseMercatorInverse } from './grid.js';
+import { readEllipsoid } from './ellipsoid.js';
+import { FLOAT_TM } from './projection-float.js';
 import { LCC_1SP, LCC_2SP } from './lambert-conic.js';
 import { MERCATOR_1SP, MERCATOR_2SP } from './mercator.js';
 import { OBLIQUE_STEREOGRAPHIC } from './oblique-stereographic.js';
@@ -53,6 +55,20 @@ const TM: MethodImpl = {
   inverse<T>(A: Arithmetic<T>, c: object, x: T, y: T) {
     const r = transverseMercatorInverse(A, { E: x, N: y }, (c as Tm<T>).tm);
     return { lat: r.lat, dlon: r.lon, k: r.k, gamma: r.convergence };
+  },
+  floatKind: FLOAT_TM,
+  floatConstants<T>(A: Arithmetic<T>, c: object): readonly number[] | undefined {
+    const tm = (c as Tm<T>).tm;
+    try {
+      return tmTwinConstants(
+        A,
+        readEllipsoid(tm.ellipsoid, 'prepareProjection'),
+        tm.lat0,
+        tm.k0,
+      ).map(Number);
+    } catch {
+      return undefined; // the generic code decides, point by point
+    }
   },
 };
 

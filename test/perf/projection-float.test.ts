@@ -16,7 +16,7 @@ import {
   QuadspreadError,
 } from '../../src/index.js';
 import type { Projection } from '../../src/geodesy/projection-core.js';
-import { FLOAT_LCC, forwardFloatInto } from '../../src/geodesy/projection-float.js';
+import { FLOAT_LCC, FLOAT_TM, forwardFloatInto } from '../../src/geodesy/projection-float.js';
 
 /** float without its `float64` mark: the same operations, through the generic code. */
 const generic = { ...float, float64: undefined } as unknown as typeof float;
@@ -229,5 +229,114 @@ describe('toGrid(float, …) through the float twin', () => {
   });
 });
 
-// keep utmProjection imported for the Transverse Mercator twin's tests below
-void utmProjection;
+// Transverse Mercator: UTM zones 31N and 33S (utmProjection); the British National Grid's
+// parameters (Ordnance Survey, "A guide to coordinate systems in Great Britain", on Airy
+// 1830); a sphere (n = 0: every α is 0); a grid in US survey feet with a prime meridian.
+const AIRY = defineEllipsoid({ name: 'Airy 1830', a: 6377563.396, b: 6356256.909 });
+const TM_PROJECTIONS: readonly Projection[] = [
+  utmProjection(31, 'N'),
+  utmProjection(33, 'S', 'GRS80'),
+  {
+    method: 'transverse-mercator',
+    ellipsoid: AIRY,
+    lat0: 49,
+    lon0: -2,
+    k0: '0.9996012717',
+    falseEasting: 400000,
+    falseNorthing: -100000,
+  },
+  { method: 'transverse-mercator', ellipsoid: SPHERE, lat0: -30, lon0: 150 },
+  {
+    method: 'transverse-mercator',
+    ellipsoid: CLARKE1866,
+    lat0: '30.5',
+    lon0: -85.833333333333,
+    k0: '0.99996',
+    falseEasting: 200000,
+    linearUnit: 'us-survey-foot',
+    primeMeridian: 0.5,
+  },
+];
+
+describe('toGrid(float, …) through the Transverse Mercator float twin', () => {
+  const prepared = TM_PROJECTIONS.map((p) => ({
+    fast: prepareProjection(float, p),
+    slow: prepareProjection(generic, p),
+  }));
+  // near the central meridians, far from them (the series refused beyond about 61°, points
+  // 90° away refused), and anywhere
+  const tmLongitude = fc.oneof(
+    longitude,
+    fc.double({ min: -10, max: 10, noNaN: true }).map((d) => d + 3),
+    fc.double({ min: 55, max: 95, noNaN: true }).map((d) => 3 + d),
+    fc.double({ min: -95, max: -55, noNaN: true }).map((d) => 3 + d),
+    fc.constantFrom(93, -87, 63, -57, 3, 15, -2, 150, 330),
+  );
+
+  it('is exactly the generic float result (or the same error), prepared or not', () => {
+    fc.assert(
+      fc.property(
+        latitude,
+        tmLongitude,
+        fc.integer({ min: 0, max: TM_PROJECTIONS.length - 1 }),
+        fc.boolean(),
+        (lat, lon, i, prepare) => {
+          const p = { lat, lon } as never;
+          const fast = prepare ? prepared[i]!.fast : TM_PROJECTIONS[i]!;
+          const slow = prepare ? prepared[i]!.slow : TM_PROJECTIONS[i]!;
+          expect(outcome(() => toGrid(float, p, fast))).toStrictEqual(
+            outcome(() => toGrid(generic, p, slow)),
+          );
+        },
+      ),
+      { numRuns: 4000 },
+    );
+  });
+
+  it('agrees exactly on 20000 seeded points per projection within 60° of the central meridian', () => {
+    let s = 0x7a3c91e5;
+    const rand = () => {
+      s ^= s << 13;
+      s >>>= 0;
+      s ^= s >>> 17;
+      s ^= s << 5;
+      s >>>= 0;
+      return s / 4294967296;
+    };
+    let differ = 0;
+    let refused = 0;
+    for (let i = 0; i < TM_PROJECTIONS.length; i++) {
+      const { fast, slow } = prepared[i]!;
+      const lon0 = Number(TM_PROJECTIONS[i]!.lon0) + Number(TM_PROJECTIONS[i]!.primeMeridian ?? 0);
+      for (let n = 0; n < 20000; n++) {
+        // a UTM zone's width (±3°) for most points, up to ±60° for the rest
+        const p = {
+          lat: rand() * 180 - 90,
+          lon: lon0 + (n % 4 === 0 ? rand() * 120 - 60 : rand() * 6 - 3),
+        };
+        const a = outcome(() => toGrid(float, p, fast));
+        const b = outcome(() => toGrid(generic, p, slow));
+        if (typeof b === 'string') refused++;
+        try {
+          expect(a).toStrictEqual(b);
+        } catch {
+          differ++;
+        }
+      }
+    }
+    expect(differ).toBe(0);
+    expect(refused).toBeLessThan(1000);
+    // the twin itself ran for UTM points
+    const out = new Float64Array(4);
+    const utm = prepared[0]!.fast;
+    const internal = Object.getOwnPropertySymbols(utm).map(
+      (k) => (utm as unknown as Record<symbol, { fk: number; fc: Float64Array }>)[k]!,
+    )[0]!;
+    expect(internal.fk).toBe(FLOAT_TM);
+    let fastRuns = 0;
+    for (let n = 0; n < 1000; n++)
+      if (forwardFloatInto(internal.fk, internal.fc, rand() * 160 - 80, rand() * 6, out))
+        fastRuns++;
+    expect(fastRuns).toBe(1000);
+  });
+});
