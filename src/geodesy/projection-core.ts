@@ -489,7 +489,41 @@ export function prepared<T>(
   }
   expectObject(projection, `${where}(projection)`, '{ method, ellipsoid, … }');
   const m = impl((projection as Projection).method, `${where}(projection.method)`);
-  return prepareWith(A, projection as Projection, m, where)[PREPARED];
+  // A projection object that cannot change (frozen, every parameter a primitive, the
+  // ellipsoid a name or frozen; `utmProjection` makes such objects) passed again with the
+  // same arithmetic: the projection prepared the last time, as preparing it again would give.
+  if (projection === lastProjection && A === lastArithmetic && lastPrepared!.impl === m)
+    return lastPrepared as Internal<T>;
+  const made = prepareWith(A, projection as Projection, m, where)[PREPARED];
+  if (unchanging(projection)) {
+    lastProjection = projection;
+    lastArithmetic = A;
+    lastPrepared = made as Internal<unknown>;
+  }
+  return made;
+}
+
+/** The last unchanging projection object {@link prepared} prepared, its arithmetic and result. */
+let lastProjection: unknown;
+let lastArithmetic: unknown;
+let lastPrepared: Internal<unknown> | undefined;
+
+/**
+ * Whether a projection object can never change: a frozen plain object whose own properties
+ * are data properties holding primitives, except an ellipsoid that is such an object itself.
+ */
+function unchanging(x: object, nested = false): boolean {
+  if (!Object.isFrozen(x)) return false;
+  const proto: unknown = Object.getPrototypeOf(x);
+  if (proto !== Object.prototype && proto !== null) return false;
+  for (const [k, d] of Object.entries(Object.getOwnPropertyDescriptors(x))) {
+    if (!('value' in d)) return false; // a getter could answer differently next time
+    const v: unknown = d.value;
+    if (typeof v === 'object' && v !== null) {
+      if (nested || k !== 'ellipsoid' || !unchanging(v, true)) return false;
+    } else if (typeof v === 'function') return false;
+  }
+  return true;
 }
 
 /**

@@ -340,3 +340,40 @@ describe('toGrid(float, …) through the Transverse Mercator float twin', () => 
     expect(fastRuns).toBe(1000);
   });
 });
+
+describe('toGrid(A, point, projection) with a projection object that cannot change', () => {
+  it('gives exactly what a fresh preparation gives, call after call, for every method entry', () => {
+    const utm = utmProjection(31, 'N');
+    const lambert = Object.freeze({ ...PROJECTIONS[1]! });
+    for (let i = 0; i < 50; i++) {
+      const p = { lat: -80 + i * 3.2, lon: i * 0.11 };
+      for (const proj of [utm, lambert]) {
+        expect(toGrid(float, p, proj)).toStrictEqual(toGrid(generic, p, proj));
+        expect(toGrid(float, p, proj)).toStrictEqual(
+          toGrid(float, p, prepareProjection(float, proj)),
+        );
+      }
+      // the entry of one method still refuses another method's projection
+      expect(outcome(() => lambertConic(float, p, utm))).toBe('INVALID_ARGUMENT');
+    }
+  });
+
+  it('reads a projection that can change afresh on every call', () => {
+    const p = { lat: 46, lon: 4 };
+    const mutable = { ...PROJECTIONS[0]! } as { falseEasting: number } & Projection;
+    const first = toGrid(float, p, mutable);
+    mutable.falseEasting = 0;
+    expect(toGrid(float, p, mutable).E).toBeCloseTo(first.E - 700000, 6);
+    // frozen, but read through a getter
+    let fe = 700000;
+    const getter = Object.freeze(
+      Object.defineProperty({ ...PROJECTIONS[0]! }, 'falseEasting', {
+        get: () => fe,
+        enumerable: true,
+      }),
+    );
+    const g1 = toGrid(float, p, getter);
+    fe = 0;
+    expect(toGrid(float, p, getter).E).toBeCloseTo(g1.E - 700000, 6);
+  });
+});
