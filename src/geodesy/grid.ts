@@ -390,6 +390,33 @@ export function transverseMercator<T>(
   return { E: r.E, N: r.N, k: r.k, convergence: r.convergence };
 }
 
+/**
+ * {@link transverseMercator} with ξ0 of the true origin given (as `tm` computes it on every
+ * call otherwise): what a prepared projection uses. @internal
+ */
+export function transverseMercatorFrom<T>(
+  A: Arithmetic<T>,
+  point: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },
+  projection: TransverseMercatorGrid,
+  xi0: T | undefined,
+): GridPoint<T> {
+  checkArithmetic(A, 'transverseMercator');
+  const r = tm(A, point, projection, true, xi0);
+  return { E: r.E, N: r.N, k: r.k, convergence: r.convergence };
+}
+
+/**
+ * ξ0 of the true origin at `lat0` (degrees, in A), as `tm` computes it on every call, or
+ * `undefined` where that throws (then every call computes it, and throws, as before). @internal
+ */
+export function originXiOf<T>(A: Arithmetic<T>, ell: Ellipsoid, lat0: T): T | undefined {
+  try {
+    return kruger(A, ellipsoidParameters(A, ell), lat0, A.zero, 'transverseMercator', true).xi;
+  } catch {
+    return undefined;
+  }
+}
+
 function tm<T>(
   A: Arithmetic<T>,
   point: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },

@@ -6,7 +6,12 @@
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { QuadspreadError, show, checkArithmetic } from '../errors.js';
-import { tmTwinConstants, transverseMercator, transverseMercatorInverse } from './grid.js';
+import {
+  originXiOf,
+  tmTwinConstants,
+  transverseMercatorFrom,
+  transverseMercatorInverse,
+} from './grid.js';
 import { readEllipsoid } from './ellipsoid.js';
 import { FLOAT_TM } from './projection-float.js';
 import { LCC_1SP, LCC_2SP } from './lambert-conic.js';
@@ -33,23 +38,27 @@ import {
 /** Transverse Mercator through the existing Krüger-series implementation (grid.ts). */
 interface Tm<T> {
   readonly tm: { lon0: never; lat0: never; k0: never; ellipsoid: ProjectionParams<T>['ellipsoid'] };
+  /** ξ of the true origin, computed once (undefined: computed per point, as before) */
+  readonly xi0: T | undefined;
 }
 
 const TM: MethodImpl = {
   needs: ['lon0'],
   takes: ['lat0', 'k0'],
   prepare<T>(A: Arithmetic<T>, p: ProjectionParams<T>): Tm<T> {
+    const lat0 = p.lat0 ?? A.zero;
     return {
       tm: {
         lon0: A.zero as never,
-        lat0: (p.lat0 ?? A.zero) as never,
+        lat0: lat0 as never,
         k0: (p.k0 ?? A.one) as never,
         ellipsoid: p.ellipsoid,
       },
+      xi0: A.exact ? undefined : originXiOf(A, p.ellipsoid, lat0),
     };
   },
   forward<T>(A: Arithmetic<T>, c: object, lat: T, dlon: T) {
-    const r = transverseMercator(A, { lat, lon: dlon }, (c as Tm<T>).tm);
+    const r = transverseMercatorFrom(A, { lat, lon: dlon }, (c as Tm<T>).tm, (c as Tm<T>).xi0);
     return { x: r.E, y: r.N, k: r.k, gamma: r.convergence };
   },
   inverse<T>(A: Arithmetic<T>, c: object, x: T, y: T) {

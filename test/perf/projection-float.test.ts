@@ -6,6 +6,8 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
+  decimal,
+  transverseMercator,
   float,
   defineEllipsoid,
   lambertConic,
@@ -375,5 +377,38 @@ describe('toGrid(A, point, projection) with a projection object that cannot chan
     const g1 = toGrid(float, p, getter);
     fe = 0;
     expect(toGrid(float, p, getter).E).toBeCloseTo(g1.E - 700000, 6);
+  });
+});
+
+describe('toGrid(A, …) in Transverse Mercator with the origin computed once', () => {
+  it('is exactly transverseMercator (which computes the origin on every call) in decimal(25)', () => {
+    const D = decimal(25);
+    const utm = prepareProjection(D, utmProjection(31, 'N'));
+    const bng = prepareProjection(D, TM_PROJECTIONS[2]!);
+    fc.assert(
+      fc.property(
+        fc.double({ min: -80, max: 80, noNaN: true }),
+        fc.double({ min: -2.9, max: 2.9, noNaN: true }),
+        (lat, d) => {
+          const g = toGrid(D, { lat, lon: 3 + d }, utm);
+          const t = transverseMercator(
+            D,
+            { lat, lon: D.sub(D.sub(D.from(3 + d), D.from(3)), D.zero) },
+            { lon0: 0, lat0: 0, k0: '0.9996', ellipsoid: 'WGS84' },
+          );
+          expect(D.toString(g.E)).toBe(D.toString(D.add(D.from(500000), t.E)));
+          expect(D.toString(g.N)).toBe(D.toString(D.add(D.zero, t.N)));
+          expect(D.toString(g.k)).toBe(D.toString(t.k));
+          const b = toGrid(D, { lat, lon: -2 + d }, bng);
+          const u = transverseMercator(
+            D,
+            { lat, lon: D.sub(D.from(-2 + d), D.from(-2)) },
+            { lon0: 0, lat0: 49, k0: '0.9996012717', ellipsoid: AIRY },
+          );
+          expect(D.toString(b.N)).toBe(D.toString(D.add(D.from(-100000), u.N)));
+        },
+      ),
+      { numRuns: 60 },
+    );
   });
 });
