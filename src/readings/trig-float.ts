@@ -30,16 +30,10 @@ const OUT = /* @__PURE__ */ new Float64Array(2);
 export function sinCosInto(degrees: number, out: Float64Array, at: number): boolean {
   let d = degrees;
   if (!(d >= 0 && d < 360)) {
-    // modulo(float, d, 360): the same passes as the generic reduction.
+    // modulo(float, d, 360): the same passes as the generic reduction, in a function of its
+    // own so that this one stays small enough for V8 to inline into its callers.
+    d = turnFloat(d);
     if (d - d !== 0) return false;
-    if (Math.abs(d + 360 - d - 360) > 360 / 1e6) return false;
-    let i = 0;
-    for (; i < 8; i++) {
-      if (d >= 0 && d < 360) break;
-      const q = Math.floor(d / 360);
-      d = q === 0 ? d + 360 : d - q * 360;
-    }
-    if (i === 8) return false;
   }
   let q = Math.min(3, Math.floor(d / 90));
   let t = q === 0 ? d : d - 90 * q;
