@@ -24,54 +24,45 @@ const OUT = /* @__PURE__ */ new Float64Array(2);
 
 /**
  * {@link sinCosFloat} written into `out[at]` (sin) and `out[at + 1]` (cos), so that a hot
- * caller allocates nothing; `false` where the generic code must decide.
+ * caller allocates nothing; `false` where the generic code must decide. Small enough for V8
+ * to inline (an angle of a turn or more goes through {@link turnFloat}, a call).
  * @internal
  */
 export function sinCosInto(degrees: number, out: Float64Array, at: number): boolean {
   let d = degrees;
-  if (!(d >= 0 && d < 360)) {
-    // modulo(float, d, 360): the same passes as the generic reduction.
-    if (d - d !== 0) return false;
-    if (Math.abs(d + 360 - d - 360) > 360 / 1e6) return false;
-    let i = 0;
-    for (; i < 8; i++) {
-      if (d >= 0 && d < 360) break;
-      const q = Math.floor(d / 360);
-      d = q === 0 ? d + 360 : d - q * 360;
-    }
-    if (i === 8) return false;
+  if (!(d > -360 && d < 360)) {
+    d = turnFloat(d); // modulo(float, d, 360), or NaN where the generic code must decide
+    if (d !== d) return false;
   }
-  let q = Math.min(3, Math.floor(d / 90));
-  let t = q === 0 ? d : d - 90 * q;
-  if (t < 0) {
-    q -= 1;
-    t = t + 90;
-  }
-  if (t > 90) {
-    q += 1;
+  // t = d − 90°·k ∈ [−45°, 45°], exact (see sinCos)
+  let k = Math.round(d / 90);
+  let t = k === 0 ? d : d - 90 * k;
+  if (t > 45) {
+    k += 1;
     t = t - 90;
+  } else if (t < -45) {
+    k -= 1;
+    t = t + 90;
   }
   let sin: number;
   let cos: number;
   if (t === 0) {
     sin = t * PER_DEGREE;
     cos = 1;
-  } else if (t === 90) {
-    sin = 1;
-    cos = (90 - t) * PER_DEGREE;
   } else {
-    const small = t <= 45;
-    const u = small ? t : 90 - t;
-    const rad = u * PER_DEGREE;
-    const cosU = Math.cos(rad);
-    const sinU = u === 30 ? 1 / 2 + (u - 30) * (cosU * PER_DEGREE) : Math.sin(rad);
-    sin = small ? sinU : cosU;
-    cos = small ? cosU : sinU;
+    const rad = t * PER_DEGREE;
+    cos = Math.cos(rad);
+    sin =
+      t === 30
+        ? 1 / 2 + (t - 30) * (cos * PER_DEGREE)
+        : t === -30
+          ? (t + 30) * (cos * PER_DEGREE) - 1 / 2
+          : Math.sin(rad);
   }
-  const k = ((q % 4) + 4) % 4;
-  // sin(θ + 90°) = cos θ, cos(θ + 90°) = −sin θ (the quadrant rotations)
-  out[at] = k === 0 ? sin : k === 1 ? cos : k === 2 ? -sin : -cos;
-  out[at + 1] = k === 0 ? cos : k === 1 ? -sin : k === 2 ? -cos : sin;
+  const q = k & 3;
+  // sin(t + 90°) = cos t, cos(t + 90°) = −sin t (the quadrant rotations)
+  out[at] = q === 0 ? sin : q === 1 ? cos : q === 2 ? -sin : -cos;
+  out[at + 1] = q === 0 ? cos : q === 1 ? -sin : q === 2 ? -cos : sin;
   return true;
 }
 
