@@ -94,6 +94,16 @@ export function geodeticToGeocentric<T>(
     if (geocentricInto(point, E.a as number, E.e2 as number, o))
       return { X: o[0]!, Y: o[1]!, Z: o[2]! } as unknown as Geocentric<T>;
   }
+  return geocentricOf(A, point, E);
+}
+
+/** {@link geodeticToGeocentric} once the arithmetic, the point and the ellipsoid are read (kept out of it so that it stays small enough for V8 to inline). */
+function geocentricOf<T>(
+  A: Arithmetic<T>,
+  point: GeodeticInput<T>,
+  E: EllipsoidParameters<T>,
+): Geocentric<T> {
+  const where = 'geodeticToGeocentric(point)';
   const lat = readLatitude(A, point.lat, `${where}.lat`);
   const lon = readLongitude(A, point.lon, `${where}.lon`);
   const h = readHeight(A, point.h, E.a, `${where}.h`);

@@ -8,7 +8,8 @@
  * @internal
  */
 
-const PER_DEGREE = Math.PI / 180; // float.div(float.pi, 180): π rad = 180°
+/** float.div(float.pi, 180): π rad = 180°. @internal */
+export const PER_DEGREE = Math.PI / 180;
 
 /**
  * sin and cos of `degrees` as `sinCos(float, degrees)` gives them, or `undefined` when the
@@ -35,7 +36,7 @@ export function sinCosInto(degrees: number, out: Float64Array, at: number): bool
     if (d !== d) return false;
   }
   // t = d − 90°·k ∈ [−45°, 45°], exact (see sinCos)
-  let k = Math.round(d / 90);
+  let k = Math.round(d * (1 / 90));
   let t = k === 0 ? d : d - 90 * k;
   if (t > 45) {
     k += 1;
@@ -44,26 +45,42 @@ export function sinCosInto(degrees: number, out: Float64Array, at: number): bool
     k -= 1;
     t = t + 90;
   }
-  let sin: number;
-  let cos: number;
-  if (t === 0) {
-    sin = t * PER_DEGREE;
-    cos = 1;
-  } else {
-    const rad = t * PER_DEGREE;
-    cos = Math.cos(rad);
-    sin =
-      t === 30
-        ? 1 / 2 + (t - 30) * (cos * PER_DEGREE)
-        : t === -30
-          ? (t + 30) * (cos * PER_DEGREE) - 1 / 2
-          : Math.sin(rad);
-  }
-  const q = k & 3;
-  // sin(t + 90°) = cos t, cos(t + 90°) = −sin t (the quadrant rotations)
-  out[at] = q === 0 ? sin : q === 1 ? cos : q === 2 ? -sin : -cos;
-  out[at + 1] = q === 0 ? cos : q === 1 ? -sin : q === 2 ? -cos : sin;
+  if (t === 0 || t === 30 || t === -30) return exactInto(t, k, out, at);
+  const rad = t * PER_DEGREE;
+  quadrantInto(Math.sin(rad), Math.cos(rad), k, out, at);
   return true;
+}
+
+/** The exact cases of {@link sinCosInto}: t = 0° and t = ±30° (as sinCos computes them). */
+function exactInto(t: number, k: number, out: Float64Array, at: number): boolean {
+  if (t === 0) {
+    quadrantInto(t * PER_DEGREE, 1, k, out, at);
+  } else {
+    const cos = Math.cos(t * PER_DEGREE);
+    const sin =
+      t === 30 ? 1 / 2 + (t - 30) * (cos * PER_DEGREE) : (t + 30) * (cos * PER_DEGREE) - 1 / 2;
+    quadrantInto(sin, cos, k, out, at);
+  }
+  return true;
+}
+
+/**
+ * sin and cos of t + 90°·k from those of t, into `out[at]`, `out[at + 1]`:
+ * sin(t + 90°) = cos t, cos(t + 90°) = −sin t (the quadrant rotations).
+ * @internal
+ */
+export function quadrantInto(
+  sin: number,
+  cos: number,
+  k: number,
+  out: Float64Array,
+  at: number,
+): void {
+  const q = k & 3;
+  const a = (q & 1) === 0 ? sin : cos;
+  const b = (q & 1) === 0 ? cos : sin;
+  out[at] = (q & 2) === 0 ? a : -a;
+  out[at + 1] = ((q + 1) & 2) === 0 ? b : -b;
 }
 
 /**

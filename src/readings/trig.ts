@@ -122,7 +122,7 @@ export function sinCos<T>(A: Arithmetic<T>, degrees: Numeric<T>): { sin: T; cos:
   const d =
     A.cmp(A.abs(x), A.from(360)) < 0 ? x : modulo(A, x, A.from(360), 'sinCosDegrees(degrees)');
   // The nearest quadrant from the nearest number, then corrected exactly by at most one step.
-  let k = Math.round(A.toNumber(d) / 90);
+  let k = Math.round(A.toNumber(d) * (1 / 90));
   let t = k === 0 ? d : A.sub(d, A.from(90 * k));
   if (A.cmp(t, A.from(45)) > 0) {
     k += 1;
