@@ -32,14 +32,18 @@ export function geocentricInto(
 ): boolean {
   const lat = point.lat;
   const lon = point.lon;
-  const h = point.h === undefined ? 0 : point.h;
-  if (!isNum(lat) || !isNum(lon) || !isNum(h)) return false;
-  if (Math.abs(lat) > 90 || Math.abs(lon) > 360 || h < -a) return false;
+  let h = point.h;
+  if (h === undefined) h = 0;
+  if (typeof lat !== 'number' || typeof lon !== 'number' || typeof h !== 'number') return false;
+  // Finite and in range (NaN fails every comparison); a longitude of a turn or more, too, is
+  // left to the generic code.
+  if (!(lat >= -90 && lat <= 90 && lon > -360 && lon < 360 && h >= -a && h - h === 0))
+    return false;
   const sc = SCRATCH;
   // sin φ, cos φ into sc[0], sc[1], sin λ, cos λ into sc[2], sc[3]: sinCosInto's steps written
-  // out, so that they are compiled into this function whatever V8 chooses to inline (this
-  // function and two inlined copies of sinCosInto exceed V8's budget of inlined bytecode, and
-  // with one copy a call, the conversion took 1.3 times as long).
+  // out, so that they are compiled into this function whatever V8 chooses to inline (two
+  // inlined copies of sinCosInto exceed V8's budget of inlined bytecode, and with one of them a
+  // call the conversion took 1.3 times as long).
   for (let j = 0; j < 4; j += 2) {
     const d = j === 0 ? lat : lon;
     let k = Math.round(d * (1 / 90));
@@ -51,8 +55,8 @@ export function geocentricInto(
       k -= 1;
       t = t + 90;
     }
-    if (t === 0 || t === 30 || t === -30 || !(d > -360 && d < 360)) {
-      if (!sinCosInto(d, sc, j)) return false; // the exact cases, and a turn or more
+    if (t === 0 || t === 30 || t === -30) {
+      sinCosInto(d, sc, j); // the exact cases
     } else {
       const rad = t * PER_DEGREE;
       quadrantInto(Math.sin(rad), Math.cos(rad), k, sc, j);
@@ -62,7 +66,7 @@ export function geocentricInto(
   // ν = a/√(1 − e² sin²φ), as primeVertical computes it
   const w = Math.sqrt(1 - e2 * (sp * sp));
   const nu = a / w;
-  if (w - w !== 0 || nu - nu !== 0) return false;
+  if (nu - nu !== 0) return false; // (w is NaN, 0 or subnormal: the generic code decides)
   const r = (nu + h) * sc[1]!;
   out[0] = r * sc[3]!;
   out[1] = r * sc[2]!;

@@ -76,11 +76,11 @@ export function quadrantInto(
   out: Float64Array,
   at: number,
 ): void {
-  const q = k & 3;
-  const a = (q & 1) === 0 ? sin : cos;
-  const b = (q & 1) === 0 ? cos : sin;
-  out[at] = (q & 2) === 0 ? a : -a;
-  out[at + 1] = ((q + 1) & 2) === 0 ? b : -b;
+  // sin t goes to sin θ (k even) or cos θ (k odd), negated in quadrants 1 and 2 (k mod 4);
+  // cos t to the other, negated in quadrants 2 and 3 (k & 3 is k mod 4, negative k too)
+  const odd = k & 1;
+  out[at + odd] = ((k + 1) & 2) === 0 ? sin : -sin;
+  out[at + 1 - odd] = (k & 2) === 0 ? cos : -cos;
 }
 
 /**
