@@ -37,8 +37,7 @@ export function geocentricInto(
   if (typeof lat !== 'number' || typeof lon !== 'number' || typeof h !== 'number') return false;
   // Finite and in range (NaN fails every comparison); a longitude of a turn or more, too, is
   // left to the generic code.
-  if (!(lat >= -90 && lat <= 90 && lon > -360 && lon < 360 && h >= -a && h - h === 0))
-    return false;
+  if (!(lat >= -90 && lat <= 90 && lon > -360 && lon < 360 && h >= -a && h - h === 0)) return false;
   const sc = SCRATCH;
   // sin φ, cos φ into sc[0], sc[1], sin λ, cos λ into sc[2], sc[3]: sinCosInto's steps written
   // out, so that they are compiled into this function whatever V8 chooses to inline (two
