@@ -79,8 +79,8 @@ export function quadrantInto(
   // sin t goes to sin θ (k even) or cos θ (k odd), negated in quadrants 1 and 2 (k mod 4);
   // cos t to the other, negated in quadrants 2 and 3 (k & 3 is k mod 4, negative k too)
   const odd = k & 1;
-  out[at + odd] = ((k + 1) & 2) === 0 ? sin : -sin;
-  out[at + 1 - odd] = (k & 2) === 0 ? cos : -cos;
+  out[at + odd] = (k + 1) & 2 ? -sin : sin;
+  out[at + 1 - odd] = k & 2 ? -cos : cos;
 }
 
 /**
