@@ -588,3 +588,31 @@ describe('the long adversarial run of 2026-12-03, a hang', () => {
     ).toBe('INVALID_ARGUMENT');
   });
 });
+
+describe('the adversarial run of 2026-12-03, seed 20261204', () => {
+  it('sideShots with a name that is an object without a prototype: INVALID_ARGUMENT naming it, in both paths', () => {
+    const setup = { station: { x: 1000, y: 2000, z: 50 }, orientation: 0, instrumentHeight: 1.5 };
+    const shot = { name: Object.create(null) as unknown, circle: 10, zenith: 91, slope: 20 };
+    for (const A of [q.float, q.rational, { ...q.float, float64: undefined }]) {
+      let err: unknown;
+      try {
+        q.sideShots(A as typeof q.float, setup as never, [shot] as never);
+      } catch (e) {
+        err = e;
+      }
+      expect(err).toBeInstanceOf(q.QuadspreadError);
+      expect((err as q.QuadspreadError).code).toBe('INVALID_ARGUMENT');
+      expect((err as Error).message).toMatch(/name/);
+    }
+    // Text and numbers stay names (a number written as text).
+    const named = q.sideShots(
+      q.float,
+      setup as never,
+      [
+        { name: 'P1', circle: 10, zenith: 91, slope: 20 },
+        { name: 7, circle: 10, zenith: 91, slope: 20 },
+      ] as never,
+    );
+    expect(named.map((p) => p.name)).toEqual(['P1', '7']);
+  });
+});

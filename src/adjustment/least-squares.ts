@@ -20,7 +20,8 @@ import {
   solveNormal,
   selectedInverse,
 } from './normal-equations.js';
-import type { NormalFactor, SelectedInverse } from './normal-equations.js';
+import type { NormalFactor, NormalSystem, SelectedInverse } from './normal-equations.js';
+import { accumulateFloat } from './normal-float.js';
 
 /** A group of m observations (m = 1 for an uncorrelated one). @internal */
 export interface ObservationGroup<T> {
@@ -57,6 +58,49 @@ export interface ObservationStatistics<T> {
 }
 
 /**
+ * The elimination order of the last system solved with this memo and that system's pattern:
+ * the iterations of a Gauss–Newton adjustment solve systems of one pattern, whose
+ * minimum-degree order (a third of a float network adjustment's time) is then computed once.
+ * @internal
+ */
+export interface OrderMemo {
+  pattern?: Int32Array;
+  perm?: Int32Array;
+}
+
+/** The pattern of N as column sizes then row numbers, in the order the columns hold them. */
+function patternOf(n: number, cols: readonly Map<number, unknown>[]): Int32Array {
+  let size = n;
+  for (let j = 0; j < n; j++) size += cols[j]!.size;
+  const out = new Int32Array(size);
+  let at = n;
+  for (let j = 0; j < n; j++) {
+    out[j] = cols[j]!.size;
+    for (const i of cols[j]!.keys()) out[at++] = i;
+  }
+  return out;
+}
+
+/** minimumDegreeOrder(n, cols), or the memo's order when the memo's pattern is cols'. */
+function orderOf(n: number, cols: readonly Map<number, unknown>[], memo?: OrderMemo): Int32Array {
+  if (!memo) return minimumDegreeOrder(n, cols);
+  const pattern = patternOf(n, cols);
+  const old = memo.pattern;
+  if (memo.perm && old && old.length === pattern.length) {
+    let same = true;
+    for (let k = 0; k < pattern.length; k++)
+      if (old[k] !== pattern[k]) {
+        same = false;
+        break;
+      }
+    if (same) return memo.perm;
+  }
+  memo.pattern = pattern;
+  memo.perm = minimumDegreeOrder(n, cols);
+  return memo.perm;
+}
+
+/**
  * Forms and factors the normal equations of `groups` over n unknowns and solves them; or
  * returns `{ singular }` naming the unknown whose pivot vanished. @internal
  */
@@ -65,13 +109,25 @@ export function solveGroups<T>(
   n: number,
   groups: readonly ObservationGroup<T>[],
   tolerance: T,
+  order?: OrderMemo,
 ): LinearSolution<T> | { singular: number } {
-  const N = normalSystem(A, n);
-  for (const g of groups) {
-    if (g.rows.length === 1) addObservation(A, N, g.index, g.rows[0]!, g.weight[0]![0]!, g.l[0]!);
-    else addGroup(A, N, g.index, g.rows, g.weight, g.l);
+  let N = normalSystem(A, n);
+  // In float, the twin (the same operations on numbers; docs/performance.md); where it stops
+  // (a sum not finite) the generic code starts again and reports it.
+  const twin =
+    A.float64 === true &&
+    accumulateFloat(
+      N as unknown as NormalSystem<number>,
+      groups as unknown as readonly ObservationGroup<number>[],
+    );
+  if (!twin) {
+    if (A.float64 === true) N = normalSystem(A, n);
+    for (const g of groups) {
+      if (g.rows.length === 1) addObservation(A, N, g.index, g.rows[0]!, g.weight[0]![0]!, g.l[0]!);
+      else addGroup(A, N, g.index, g.rows, g.weight, g.l);
+    }
   }
-  const perm = minimumDegreeOrder(n, N.cols);
+  const perm = orderOf(n, N.cols, order);
   const factor = factorNormal(A, N, perm, tolerance);
   if ('singular' in factor) return factor;
   const dx = solveNormal(A, factor, N.rhs);

@@ -14,7 +14,7 @@ import type { Root } from '../geometry/surd.js';
 import { angleToDegrees } from '../readings/angle.js';
 import { approxSqrt } from '../readings/numeric.js';
 import { readArray } from '../cogo/internal.js';
-import { solveGroups, observationStatistics } from './least-squares.js';
+import { solveGroups, observationStatistics, type OrderMemo } from './least-squares.js';
 import type { ObservationGroup } from './least-squares.js';
 import { solveNormal } from './normal-equations.js';
 import { readTestOptions, assess, nonNegative, sigmaRoot } from './testing.js';
@@ -785,9 +785,11 @@ function adjustOnce<T, E extends boolean>(
     const s = [...uw].indexOf(k);
     return `the orientation of round ${JSON.stringify(P.sets[s])}`;
   };
+  // One pattern in every iteration: its elimination order is computed once.
+  const order: OrderMemo = {};
   for (let iteration = 1; iteration <= maxIterations; iteration++) {
     const lin = linearise(A, P, active, xy, w, ux, uw, A.mul(t.sigma0, t.sigma0));
-    const sol = solveGroups(A, u, lin.groups, pivotTolerance);
+    const sol = solveGroups(A, u, lin.groups, pivotTolerance, order);
     if ('singular' in sol)
       throw new QuadspreadError(
         'SINGULAR_NETWORK',

@@ -18,6 +18,7 @@
  * @module adjustment
  */
 import type { Arithmetic } from '../arithmetic/types.js';
+import { factorNumericFloat, solveNormalFloat, selectedInverseFloat } from './normal-float.js';
 
 /** Normal equations N·x = b being accumulated: N's upper triangle by column, and b. */
 export interface NormalSystem<T> {
@@ -142,43 +143,101 @@ export function addGroup<T>(
  * @internal
  */
 export function minimumDegreeOrder(n: number, cols: readonly Map<number, unknown>[]): Int32Array {
-  const adj: Set<number>[] = new Array(n);
-  for (let j = 0; j < n; j++) adj[j] = new Set();
+  // The elimination graph as adjacency lists of plain arrays; `mark` (stamped with the vertex
+  // being merged) replaces hash sets. The next vertex comes from a binary heap of keys
+  // degree·n + vertex (least degree, then lowest number), with stale keys skipped: the same
+  // order as scanning degree buckets, in O(log n) per step instead of hashing every fill entry.
+  const adj: number[][] = new Array(n);
+  for (let j = 0; j < n; j++) adj[j] = [];
+  const mark = new Int32Array(n).fill(-1);
   for (let j = 0; j < n; j++)
     for (const i of cols[j]!.keys())
       if (i !== j) {
-        adj[i]!.add(j);
-        adj[j]!.add(i);
+        adj[i]!.push(j);
+        adj[j]!.push(i);
       }
-  // Buckets of unknowns by degree; `done` marks eliminated unknowns.
-  const bucket: Set<number>[] = [];
-  const degree = new Int32Array(n);
-  const place = (v: number): void => {
-    const d = adj[v]!.size;
-    degree[v] = d;
-    while (bucket.length <= d) bucket.push(new Set());
-    bucket[d]!.add(v);
+  // Entries of one column are distinct, but (i, j) may be listed under column j and (j, i)
+  // under column i only if a caller stored both triangles: drop repeated neighbours.
+  for (let v = 0; v < n; v++) {
+    const a = adj[v]!;
+    let m = 0;
+    for (let t = 0; t < a.length; t++) {
+      const w = a[t]!;
+      if (mark[w] !== v) {
+        mark[w] = v;
+        a[m++] = w;
+      }
+    }
+    a.length = m;
+  }
+  const done = new Uint8Array(n);
+  const heap: number[] = [];
+  const push = (key: number): void => {
+    let i = heap.length;
+    heap.push(key);
+    while (i > 0) {
+      const up = (i - 1) >> 1;
+      if (heap[up]! <= key) break;
+      heap[i] = heap[up]!;
+      i = up;
+    }
+    heap[i] = key;
   };
-  for (let v = 0; v < n; v++) place(v);
+  const pop = (): number => {
+    const top = heap[0]!;
+    const last = heap.pop()!;
+    const size = heap.length;
+    if (size > 0) {
+      let i = 0;
+      for (;;) {
+        let c = 2 * i + 1;
+        if (c >= size) break;
+        if (c + 1 < size && heap[c + 1]! < heap[c]!) c++;
+        if (heap[c]! >= last) break;
+        heap[i] = heap[c]!;
+        i = c;
+      }
+      heap[i] = last;
+    }
+    return top;
+  };
+  for (let v = 0; v < n; v++) push(adj[v]!.length * n + v);
+  mark.fill(-1);
   const perm = new Int32Array(n);
-  let low = 0;
   for (let k = 0; k < n; k++) {
-    while (bucket[low]!.size === 0) low++;
-    let v = -1;
-    for (const u of bucket[low]!) if (v < 0 || u < v) v = u;
-    bucket[low]!.delete(v);
+    let v: number;
+    for (;;) {
+      const key = pop();
+      v = key % n;
+      // A key is current when v is not eliminated and its degree has not changed since.
+      if (done[v] === 0 && (key - v) / n === adj[v]!.length) break;
+    }
+    done[v] = 1;
     perm[k] = v;
-    const nb = [...adj[v]!];
-    for (const u of nb) {
-      adj[u]!.delete(v);
-      for (const w of nb) if (w !== u) adj[u]!.add(w);
+    const nb = adj[v]!;
+    // Each neighbour u loses v and gains the other neighbours of v (they become a clique).
+    for (let s = 0; s < nb.length; s++) {
+      const u = nb[s]!;
+      const au = adj[u]!;
+      let m = 0;
+      for (let t = 0; t < au.length; t++) {
+        const w = au[t]!;
+        if (w !== v) {
+          au[m++] = w;
+          mark[w] = u;
+        }
+      }
+      au.length = m;
+      for (let t = 0; t < nb.length; t++) {
+        const w = nb[t]!;
+        if (w !== u && mark[w] !== u) {
+          mark[w] = u;
+          au.push(w);
+        }
+      }
+      push(au.length * n + u);
     }
-    adj[v]!.clear();
-    for (const u of nb) {
-      bucket[degree[u]!]!.delete(u);
-      place(u);
-      if (degree[u]! < low) low = degree[u]!;
-    }
+    adj[v] = [];
   }
   return perm;
 }
@@ -249,9 +308,27 @@ export function factorNormal<T>(
   const Lp = new Int32Array(n + 1);
   for (let k = 0; k < n; k++) Lp[k + 1] = Lp[k]! + Lnz[k]!;
   const Li = new Int32Array(Lp[n]!);
+  // Numeric. In float, the twin (the same operations on numbers; docs/performance.md).
+  if (A.float64 === true) {
+    const f = factorNumericFloat(
+      n,
+      perm,
+      inv,
+      Cp,
+      Ci,
+      Cx as unknown as number[],
+      parent,
+      flag,
+      Lnz,
+      Lp,
+      tolerance as unknown as number,
+    );
+    // (A partial run leaves flag and Lnz as the loop below expects them: column k sets
+    // flag[k] and Lnz[k] before anything reads them.)
+    if (f !== undefined) return f as unknown as NormalFactor<T> | SingularPivot;
+  }
   const Lx: T[] = new Array(Lp[n]!);
   const D: T[] = new Array(n);
-  // Numeric.
   const Y: T[] = new Array(n).fill(A.zero);
   const pattern = new Int32Array(n);
   for (let k = 0; k < n; k++) {
@@ -297,6 +374,10 @@ export function factorNormal<T>(
  * @internal
  */
 export function solveNormal<T>(A: Arithmetic<T>, F: NormalFactor<T>, b: readonly T[]): T[] {
+  if (A.float64 === true) {
+    const x = solveNormalFloat(F as unknown as NormalFactor<number>, b as unknown as number[]);
+    if (x !== undefined) return x as unknown as T[];
+  }
   const n = F.n;
   const y: T[] = new Array(n);
   for (let k = 0; k < n; k++) y[k] = b[F.perm[k]!]!;
@@ -332,7 +413,14 @@ export function selectedInverse<T>(A: Arithmetic<T>, F: NormalFactor<T>): Select
   const Zd: T[] = new Array(n);
   const mark = new Int32Array(n).fill(-1);
   const acc: T[] = [];
-  for (let j = n - 1; j >= 0; j--) {
+  const twin =
+    A.float64 === true &&
+    selectedInverseFloat(
+      F as unknown as NormalFactor<number>,
+      Zx as unknown as number[],
+      Zd as unknown as number[],
+    );
+  for (let j = twin ? -1 : n - 1; j >= 0; j--) {
     const p0 = Lp[j]!;
     const m = Lp[j + 1]! - p0;
     for (let b = 0; b < m; b++) {

@@ -217,7 +217,9 @@ export interface ChainageEquation<T> {
 
 /**
  * A horizontal alignment: plain data (arrays and objects of values of the arithmetic, and
- * JS numbers for the boxes), which may be kept, copied and written out as it is.
+ * JS numbers for the boxes), which may be kept, copied and written out as it is. The functions
+ * that read it check it through the first time and then take it as it is: to change an
+ * alignment, change a copy.
  */
 export interface HorizontalAlignment<T> {
   /** `'horizontal'` */
@@ -238,7 +240,8 @@ export interface HorizontalAlignment<T> {
   readonly equations: readonly ChainageEquation<T>[];
   /**
    * The elements' boxes side by side, four JS numbers per element (min east, min north, max
-   * east, max north): the same as each element's `bounds`, in one flat array for a fast search.
+   * east, max north): the same as each element's `bounds`, in one flat array for a fast search
+   * (a tree of these boxes is built the first time it is searched, and kept for this array).
    */
   readonly boxes: readonly number[];
 }
@@ -784,13 +787,55 @@ function elementsAreObjects(elements: readonly unknown[]): boolean {
   return true;
 }
 
-// Alignments found intact, with the arithmetic they were checked for: an alignment is plain
-// data, checked through once and then taken as it is on every call (a copy is checked anew).
-const intact = new WeakMap<object, unknown>();
+// Alignments found intact: an alignment is plain data, checked through once for an arithmetic
+// and then taken as it is on every call while it holds the same arrays (of the same lengths)
+// and the same top-level values; a copy, or one given a new array, is checked anew. The fields
+// of an element changed in place after the check are not looked at again: copy an alignment
+// to change it.
+interface Checked {
+  readonly A: unknown;
+  readonly elements: unknown;
+  readonly n: number;
+  readonly equations: unknown;
+  readonly m: number;
+  readonly boxes: unknown;
+  readonly curves: unknown;
+  readonly k: number;
+  readonly length: unknown;
+  readonly startChainage: unknown;
+  readonly endChainage: unknown;
+}
+const intact = new WeakMap<object, Checked>();
+// The last alignment found intact, and its record: a comparison instead of a hash lookup.
+let lastAlignment: object | undefined;
+let lastRecord: Checked | undefined;
+
+/** Whether `o` was found intact for A and still holds what it held then. */
+function unchanged(A: unknown, o: HorizontalAlignment<unknown>): boolean {
+  const c = o === lastAlignment ? lastRecord : intact.get(o);
+  if (
+    c === undefined ||
+    c.A !== A ||
+    o.kind !== 'horizontal' ||
+    c.elements !== o.elements ||
+    c.n !== o.elements.length ||
+    c.equations !== o.equations ||
+    c.m !== o.equations.length ||
+    c.boxes !== o.boxes ||
+    c.curves !== o.curves ||
+    c.k !== o.curves.length ||
+    c.length !== o.length ||
+    c.startChainage !== o.startChainage ||
+    c.endChainage !== o.endChainage
+  )
+    return false;
+  lastAlignment = o;
+  lastRecord = c;
+  return true;
+}
 
 /** Whether every element and equation of `o` has the fields of its kind, values of A. */
 function isIntact<T>(A: Arithmetic<T>, o: HorizontalAlignment<T>): boolean {
-  if (intact.get(o) === A) return true;
   const pt = (p: unknown): boolean =>
     typeof p === 'object' && p !== null && A.is((p as Point<T>).x) && A.is((p as Point<T>).y);
   const nCurves = Array.isArray(o.curves) ? o.curves.length : -1;
@@ -831,17 +876,47 @@ function isIntact<T>(A: Arithmetic<T>, o: HorizontalAlignment<T>): boolean {
     if (!A.is(q.back) || !A.is(q.ahead) || !A.is(q.distance)) return false;
   }
   for (let i = 0; i < o.boxes.length; i++) if (typeof o.boxes[i] !== 'number') return false;
-  intact.set(o, A);
+  const c: Checked = {
+    A,
+    elements: o.elements,
+    n: o.elements.length,
+    equations: o.equations,
+    m: o.equations.length,
+    boxes: o.boxes,
+    curves: o.curves,
+    k: nCurves,
+    length: o.length,
+    startChainage: o.startChainage,
+    endChainage: o.endChainage,
+  };
+  intact.set(o, c);
+  lastAlignment = o;
+  lastRecord = c;
   return true;
 }
 
-/** Checks that `h` looks like an alignment of this arithmetic. @internal */
+/**
+ * Checks that `h` looks like an alignment of this arithmetic. One found intact before and
+ * unchanged is taken after a check of its slots: every element's and equation's is an object
+ * (a pass over the elements), or only the equations' when `elementsMet` (the caller checks
+ * each element it reads, as alignmentStation does, which reads only those near a point).
+ * @internal
+ */
 export function readAlignment<T>(
   A: Arithmetic<T>,
   h: unknown,
   where: string,
+  elementsMet = false,
 ): HorizontalAlignment<T> {
   const o = h as HorizontalAlignment<T> | null;
+  if (
+    o !== null &&
+    typeof o === 'object' &&
+    unchanged(A, o) &&
+    elementsAreObjects(o.equations) &&
+    (elementsMet || elementsAreObjects(o.elements))
+  )
+    return o;
   if (
     o === null ||
     typeof o !== 'object' ||
@@ -859,11 +934,16 @@ export function readAlignment<T>(
     !A.is(o.endChainage) ||
     !isIntact(A, o)
   )
-    throw invalidArgument(
-      where,
-      `${show(h)} is not a horizontal alignment made by horizontalAlignment in ${A.name}`,
-    );
+    throw notAnAlignment(A, h, where);
   return o;
+}
+
+/** The error for what is not an alignment of A. @internal */
+export function notAnAlignment<T>(A: Arithmetic<T>, h: unknown, where: string): QuadspreadError {
+  return invalidArgument(
+    where,
+    `${show(h)} is not a horizontal alignment made by horizontalAlignment in ${A.name}`,
+  );
 }
 
 /** Reads a chainage for an alignment and turns it into a distance along it. @internal */

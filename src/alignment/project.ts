@@ -7,10 +7,14 @@ import { show, invalidArgument, QuadspreadError, checkArithmetic } from '../erro
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import type { AlignmentElement, HorizontalAlignment, TransitionElement } from './horizontal.js';
-import { readAlignment, chainageAt } from './horizontal.js';
+import { readAlignment, chainageAt, notAnAlignment } from './horizontal.js';
 import { placeOn } from './point.js';
 import { readXY, rightOf, root, trim } from './internal.js';
 import { readNumber } from '../geometry/validate.js';
+import { boxTree, nearestBox, nextBox } from './box-tree.js';
+
+const WHERE = 'alignmentStation(A, alignment, P)';
+const WHERE_ALIGNMENT = 'alignmentStation(A, alignment, P) alignment';
 
 /** A projection of a point onto one element. */
 export interface StationCandidate<T> {
@@ -50,9 +54,10 @@ export interface AlignmentStationOptions<T> {
  * The chainage and offset of a point: the foot of the perpendicular from it to the alignment.
  * Offsets are positive to the right looking ahead (the direction of increasing chainage).
  *
- * Only the elements whose boxes lie near the point are tried (a box test in plain numbers first,
- * then the exact projection, nearest box first), so a long alignment costs little more than a
- * short one. On a straight the projection is exact in `rational`; on an arc it needs √ and atan2
+ * Only the elements whose boxes lie near the point are tried (a search of a tree of the boxes in
+ * plain numbers, built once per alignment, then the exact projection, nearest box first), so a
+ * long alignment costs little more than a short one; in `float` the projections on straights and
+ * arcs run on plain numbers (the same operations, bit for bit). On a straight the projection is exact in `rational`; on an arc it needs √ and atan2
  * (within 1e-40 relative in `rational`); on a transition the foot is found by Newton's method on
  * (P − X(l))·t(l) = 0, kept inside the transition, to 1e-30 of its length in `rational` (with a
  * last unrounded step, so an uncertain arithmetic keeps its first-order derivatives), 1e-12 in
@@ -83,8 +88,12 @@ export function alignmentStation<T>(
   options: AlignmentStationOptions<T> = {},
 ): AlignmentStation<T> {
   checkArithmetic(A, 'alignmentStation');
-  const where = 'alignmentStation(A, alignment, P)';
-  const h = readAlignment(A, alignment, `${where} alignment`);
+  if (A.float64 === true) {
+    const r = stationFloat(A as unknown as Arithmetic<number>, alignment, P, options);
+    if (r !== undefined) return r as unknown as AlignmentStation<T>;
+  }
+  const where = WHERE;
+  const h = readAlignment(A, alignment, `${where} alignment`, true);
   const p = readXY(A, P, `${where} P`);
   const opts = options === null || typeof options !== 'object' ? {} : options;
   const tol =
@@ -97,49 +106,38 @@ export function alignmentStation<T>(
   const px = A.toNumber(p.x);
   const py = A.toNumber(p.y);
   const tolN = A.toNumber(tol);
-  // Squared distance from P to an element's box, in plain numbers: a lower bound on its offset².
   const n = els.length;
-  const boxes = h.boxes;
-  const boxQ = (i: number): number => {
-    const k = 4 * i;
-    const x0 = boxes[k]!;
-    const x1 = boxes[k + 2]!;
-    const y0 = boxes[k + 1]!;
-    const y1 = boxes[k + 3]!;
-    const dx = px < x0 ? x0 - px : px > x1 ? px - x1 : 0;
-    const dy = py < y0 ? y0 - py : py > y1 ? py - y1 : 0;
-    return dx * dx + dy * dy;
-  };
-  // The nearest box first (usually one holding P), so that the first foot is near and prunes
-  // the rest; then every element whose box is within reach of the best foot so far.
-  let first = 0;
-  let firstQ = Infinity;
-  for (let i = 0; i < n && firstQ > 0; i++) {
-    const q = boxQ(i);
-    if (q < firstQ) {
-      firstQ = q;
-      first = i;
-    }
-  }
+  // The element whose box is nearest (usually one holding P) first, so that the first foot is
+  // near and prunes the rest; then, in index order, every element whose box (in plain numbers,
+  // a lower bound on its offset) is within reach of the best foot so far. The box tree answers
+  // as a scan of every box would, visiting only the near ones.
+  const tree = boxTree(h.boxes);
+  const first = nearestBox(tree, px, py);
   const found: StationCandidate<T>[] = [];
   let best = Infinity; // |offset| of the nearest foot found so far, as a number
-  for (let k = -1; k < n; k++) {
-    const i = k < 0 ? first : k;
-    if (k === first) continue;
-    const reach = best + tolN;
-    // 1e-9 relative slack for the rounding of boxes and offsets to numbers.
-    if (k >= 0 && boxQ(i) > reach * reach * (1 + 1e-9) + 1e-18) continue;
+  let reachQ = Infinity; // (best + tolerance)², with slack
+  for (let i = first, from = 0; i >= 0;) {
     const e = els[i]!;
+    // An element changed in place since the alignment was checked (see readAlignment).
+    if (typeof e !== 'object' || e === null)
+      throw notAnAlignment(A, alignment, `${where} alignment`);
     const c = projectOn(A, e, p);
-    if (c === undefined) continue;
-    found.push({
-      chainage: A.zero,
-      offset: c.offset,
-      element: i,
-      distance: A.add(e.startDistance, c.s),
-    });
-    const o = Math.abs(A.toNumber(c.offset));
-    if (o < best) best = o;
+    if (c !== undefined) {
+      found.push({
+        chainage: A.zero,
+        offset: c.offset,
+        element: i,
+        distance: A.add(e.startDistance, c.s),
+      });
+      const o = Math.abs(A.toNumber(c.offset));
+      if (o < best) {
+        best = o;
+        reachQ = reachSquared(best, tolN);
+      }
+    }
+    i = nextBox(tree, px, py, reachQ, from);
+    if (i === first) i = nextBox(tree, px, py, reachQ, first + 1);
+    from = i + 1;
   }
   let extended = false;
   if (found.length === 0) {
@@ -155,6 +153,8 @@ export function alignmentStation<T>(
       [n - 1, true],
     ] as const) {
       const e = els[i]!;
+      if (typeof e !== 'object' || e === null)
+        throw notAnAlignment(A, alignment, `${where} alignment`);
       const pl = placeOn(A, e, atEnd ? e.length : A.zero);
       const dx = A.sub(p.x, pl.point.x);
       const dy = A.sub(p.y, pl.point.y);
@@ -193,6 +193,193 @@ export function alignmentStation<T>(
     kept.push({ ...f, chainage: chainageAt(A, h.startChainage, h.equations, f.distance) });
   }
   return { ...kept[0]!, candidates: kept, extended };
+}
+
+/**
+ * The squared reach of the search: an element whose box is farther than the best |offset| so
+ * far plus the tolerance has no foot to keep (1e-9 relative slack for the rounding of boxes and
+ * offsets to numbers).
+ */
+function reachSquared(best: number, tolerance: number): number {
+  const reach = best + tolerance;
+  return reach * reach * (1 + 1e-9) + 1e-18;
+}
+
+// The float twin's scratch: the feet found (offset, distance along the line, element) in the
+// order found, and their order by |offset|. Filled and read within one call.
+const FOUND = 64;
+const FOUND_O = /* @__PURE__ */ new Float64Array(FOUND);
+const FOUND_D = /* @__PURE__ */ new Float64Array(FOUND);
+const FOUND_I = /* @__PURE__ */ new Int32Array(FOUND);
+const ORDER = /* @__PURE__ */ new Int32Array(FOUND);
+
+/**
+ * The float twin of {@link alignmentStation}: the generic code's operations in float, in the
+ * same order, on plain numbers, for a point of plain numbers and a plain tolerance, without the
+ * candidate objects, closures and error locations the generic path builds for every element
+ * tried. `undefined` wherever the generic code must decide or would throw (no foot: an end,
+ * `extend`; a value that is not finite; more feet than the scratch holds), and the generic code
+ * then runs. test/perf/float-twins.test.ts checks that it returns exactly what the generic code
+ * returns in float.
+ */
+function stationFloat(
+  A: Arithmetic<number>,
+  alignment: unknown,
+  P: unknown,
+  options: unknown,
+): AlignmentStation<number> | undefined {
+  const h = readAlignment(A, alignment, WHERE_ALIGNMENT, true);
+  if (P === null || typeof P !== 'object' || Array.isArray(P)) return undefined;
+  const px = (P as { x?: unknown }).x;
+  const py = (P as { y?: unknown }).y;
+  if (typeof px !== 'number' || typeof py !== 'number' || px - px !== 0 || py - py !== 0)
+    return undefined;
+  let tol = 0.001; // float.from('0.001')
+  if (options !== null && typeof options === 'object') {
+    const t = (options as { tolerance?: unknown }).tolerance;
+    if (t !== undefined) {
+      if (typeof t !== 'number' || !(t >= 0) || t - t !== 0) return undefined;
+      tol = t;
+    }
+  }
+  const els = h.elements;
+  const tree = boxTree(h.boxes);
+  const first = nearestBox(tree, px, py);
+  let count = 0;
+  let best = Infinity;
+  let reachQ = Infinity;
+  for (let i = first, from = 0; i >= 0;) {
+    // projectOn: the foot's distance s along the element and the offset, if it has one.
+    const e = els[i]!;
+    if (typeof e !== 'object' || e === null) return undefined;
+    const len = e.length;
+    const slack = (len + 1) * 1e-9;
+    let s = 0;
+    let o = 0;
+    let foot = false;
+    if (e.type === 'straight') {
+      const dx = px - e.start.x;
+      const dy = py - e.start.y;
+      const u = e.direction;
+      s = dx * u.x + dy * u.y;
+      // A value that is not finite: the generic code's checked operations refuse it.
+      if (s - s !== 0) return undefined;
+      foot = true;
+      if (s < 0) {
+        if (-s <= slack) s = 0;
+        else foot = false;
+      } else if (s > len) {
+        if (s - len <= slack) s = len;
+        else foot = false;
+      }
+      if (foot) o = dx * u.y + dy * -u.x;
+    } else if (e.type === 'arc') {
+      const c = e.centre;
+      const rx = px - c.x;
+      const ry = py - c.y;
+      const q = rx * rx + ry * ry;
+      if (q - q !== 0) return undefined;
+      if (q !== 0) {
+        const r0x = e.start.x - c.x;
+        const r0y = e.start.y - c.y;
+        const cross = r0x * ry - r0y * rx;
+        const dot = r0x * rx + r0y * ry;
+        if (cross - cross !== 0 || dot - dot !== 0 || (cross === 0 && dot === 0)) return undefined;
+        s = Math.atan2(e.turn > 0 ? -cross : cross, dot) * e.radius;
+        if (s - s !== 0) return undefined;
+        foot = true;
+        if (s < 0) {
+          if (-s <= slack) s = 0;
+          else foot = false;
+        } else if (s > len) {
+          if (s - len <= slack) s = len;
+          else foot = false;
+        }
+        if (foot) {
+          const off = e.radius - Math.sqrt(q);
+          o = e.turn > 0 ? off : -off;
+        }
+      }
+    } else {
+      const c = projectOnTransition(A, e, { x: px, y: py }, slack);
+      if (c !== undefined) {
+        s = c.s;
+        o = c.offset;
+        foot = true;
+      }
+    }
+    if (foot) {
+      const d = e.startDistance + s;
+      if (o - o !== 0 || d - d !== 0 || count === FOUND) return undefined;
+      FOUND_O[count] = o;
+      FOUND_D[count] = d;
+      FOUND_I[count] = i;
+      count++;
+      const a = Math.abs(o);
+      if (a < best) {
+        best = a;
+        reachQ = reachSquared(best, tol);
+      }
+    }
+    i = nextBox(tree, px, py, reachQ, from);
+    if (i === first) i = nextBox(tree, px, py, reachQ, first + 1);
+    from = i + 1;
+  }
+  if (count === 0) return undefined;
+  // The nearest first, as found.sort does (a stable sort by |offset|).
+  for (let j = 0; j < count; j++) {
+    const x = j;
+    const a = Math.abs(FOUND_O[x]!);
+    let m = j;
+    while (m > 0 && Math.abs(FOUND_O[ORDER[m - 1]!]!) > a) {
+      ORDER[m] = ORDER[m - 1]!;
+      m--;
+    }
+    ORDER[m] = x;
+  }
+  const limit = Math.abs(FOUND_O[ORDER[0]!]!) + tol;
+  if (limit - limit !== 0) return undefined;
+  const kept: StationCandidate<number>[] = [];
+  const eqs = h.equations;
+  for (let j = 0; j < count; j++) {
+    const x = ORDER[j]!;
+    const o = FOUND_O[x]!;
+    if (Math.abs(o) > limit) continue;
+    const d = FOUND_D[x]!;
+    let same = false;
+    for (let m = 0; m < kept.length && !same; m++) {
+      const k = kept[m]!;
+      const dd = k.distance - d;
+      if (dd - dd !== 0) return undefined;
+      if (Math.abs(dd) <= tol) {
+        const od = k.offset - o;
+        if (od - od !== 0) return undefined;
+        same = Math.abs(od) <= tol;
+      }
+    }
+    if (same) continue;
+    // chainageAt: from the last equation at or before d.
+    let c0 = h.startChainage;
+    let d0 = 0;
+    for (let m = 0; m < eqs.length; m++) {
+      const q = eqs[m]!;
+      if (!(q.distance <= d)) break;
+      c0 = q.ahead;
+      d0 = q.distance;
+    }
+    const chainage = c0 + (d - d0);
+    if (chainage - chainage !== 0) return undefined;
+    kept.push({ chainage, offset: o, element: FOUND_I[x]!, distance: d });
+  }
+  const k0 = kept[0]!;
+  return {
+    chainage: k0.chainage,
+    offset: k0.offset,
+    element: k0.element,
+    distance: k0.distance,
+    candidates: kept,
+    extended: false,
+  };
 }
 
 /**

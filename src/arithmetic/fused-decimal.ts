@@ -34,6 +34,20 @@ function coefficient(x: Big): bigint {
 }
 
 /**
+ * The number of decimal digits of |x| (x ≠ 0), within one either way: from the double nearest
+ * x while it is below 1e300 (its rounding and its log10 can move the count by one next to a
+ * power of ten), from the text beyond. `divide` sizes its quotient with it: a count one too
+ * small gives one quotient digit more; one too large, one digit fewer, still one beyond the
+ * rounding digit. The text of a 40-digit bigint costs about four times its conversion to a
+ * double and its logarithm. @internal
+ */
+export function decimalLength(x: bigint): number {
+  const v = Math.abs(Number(x));
+  if (v < 1e300) return Math.floor(Math.log10(v)) + 1;
+  return (x < 0n ? -x : x).toString().length;
+}
+
+/**
  * Most decimal places between the largest and the smallest digit of a kernel's inputs: beyond
  * it the exact integers would have thousands of digits, and the generic code (which rounds at
  * every step) is faster. Survey coordinates span a few dozen.
@@ -115,15 +129,17 @@ export function decimalKernels(
 
   let lastB = 0n,
     lastLb = 1;
-  /** (an·10^ae)/(bn·10^be) for bn > 0, correctly rounded: digits + 2 quotient digits and a sticky one. */
+  /** (an·10^ae)/(bn·10^be) for bn > 0, correctly rounded: at least digits + 2 quotient digits and a sticky one. */
   function divide(an: bigint, ae: number, bn: bigint, be: number): Big {
     if (an === 0n) return big(1, 0, [0]);
-    const la = (an < 0n ? -an : an).toString().length;
+    const la = decimalLength(an);
     if (bn !== lastB) {
       lastB = bn;
       lastLb = bn.toString().length;
     }
-    const k = Math.max(0, digits + 3 - (la - lastLb));
+    // la is within one of |an|'s digit count (lastLb is exact): the quotient then has at
+    // least digits + 2 digits before the sticky one.
+    const k = Math.max(0, digits + 4 - (la - lastLb));
     const num = an * pow10(k);
     const q = num / bn;
     if (q * bn === num) return make(q, ae - be - k);

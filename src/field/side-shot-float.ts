@@ -64,6 +64,8 @@ export function shotFloat(s: ReadSetup<number>, o: unknown): SideShot<number> | 
   const y = st.y + D * SC[1]!;
   if (x - x !== 0 || y - y !== 0) return undefined;
   const name = r.name;
+  // A name that is not text or a number: the generic code refuses it.
+  if (name !== undefined && typeof name !== 'string' && typeof name !== 'number') return undefined;
   if (st.z === undefined) {
     if (name === undefined) return { x, y, bearing, horizontalDistance: D, heightDifference: dh };
     return { name: String(name), x, y, bearing, horizontalDistance: D, heightDifference: dh };

@@ -3,7 +3,7 @@
  *
  * @module field
  */
-import { invalidArgument, checkArithmetic } from '../errors.js';
+import { invalidArgument, checkArithmetic, show } from '../errors.js';
 import type { Arithmetic } from '../arithmetic/types.js';
 import { sinCosDegrees } from '../readings/trig.js';
 import { finiteResult } from '../geometry/validate.js';
@@ -132,7 +132,7 @@ export function shotFrom<T>(
   const z =
     s.station.z === undefined ? {} : { z: finiteResult(A.add(s.station.z, r.heightDifference), w) };
   return {
-    ...(shot.name !== undefined ? { name: String(shot.name) } : {}),
+    ...(shot.name !== undefined ? { name: shotName(shot.name, w) } : {}),
     x: finiteResult(A.add(s.station.x, A.mul(D, sin)), w),
     y: finiteResult(A.add(s.station.y, A.mul(D, cos)), w),
     ...z,
@@ -140,4 +140,14 @@ export function shotFrom<T>(
     horizontalDistance: D,
     heightDifference: r.heightDifference,
   };
+}
+
+/**
+ * A shot's name as text: a string, or a number or bigint written as text; anything else (an
+ * object, whose conversion to text could run its own code or throw) is refused. @internal
+ */
+export function shotName(name: unknown, w: string): string {
+  if (typeof name === 'string') return name;
+  if (typeof name === 'number' || typeof name === 'bigint') return String(name);
+  throw invalidArgument(`${w}.name`, `${show(name)} is not a text`);
 }

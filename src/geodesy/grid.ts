@@ -280,6 +280,28 @@ function kruger<T>(
 }
 
 /**
+ * The constants of the Transverse Mercator float twin (projection-float.ts `tmInto`), each
+ * computed by the same operations as {@link kruger} and `tm` compute them on every call: e²,
+ * e, α₁…α₆, A/a, ξ0 of the true origin, k0·a·(A/a), k0. @internal
+ */
+export function tmTwinConstants<T>(A: Arithmetic<T>, ell: Ellipsoid, lat0: T, k0: T): T[] {
+  const E = ellipsoidParameters(A, ell);
+  const one = A.one;
+  const n = E.n;
+  const powers: T[] = [one];
+  for (let i = 1; i <= 6; i++) powers.push(A.mul(powers[i - 1]!, n));
+  const alphas: T[] = [];
+  for (let j = 1; j <= 6; j++) {
+    let alpha = A.zero;
+    for (const [num, den, pow] of ALPHA[j - 1]!)
+      alpha = A.add(alpha, A.div(A.mul(A.from(num), powers[pow]!), A.from(den)));
+    alphas.push(alpha);
+  }
+  const r = kruger(A, E, lat0, A.zero, 'prepareProjection', true);
+  return [E.e2, root(A, E.e2), ...alphas, r.Aa, r.xi!, A.mul(k0, A.mul(E.a, r.Aa)), k0];
+}
+
+/**
  * Point scale factor k and grid convergence γ of a Transverse Mercator projection at a
  * geodetic point, by Krüger's series in the third flattening n (Krüger 1912), in the form
  * and to the order n⁶ of Karney (2011): the conformal latitude (eqs. 7–9), the
@@ -366,6 +388,33 @@ export function transverseMercator<T>(
   checkArithmetic(A, 'transverseMercator');
   const r = tm(A, point, projection, true);
   return { E: r.E, N: r.N, k: r.k, convergence: r.convergence };
+}
+
+/**
+ * {@link transverseMercator} with ξ0 of the true origin given (as `tm` computes it on every
+ * call otherwise): what a prepared projection uses. @internal
+ */
+export function transverseMercatorFrom<T>(
+  A: Arithmetic<T>,
+  point: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },
+  projection: TransverseMercatorGrid,
+  xi0: T | undefined,
+): GridPoint<T> {
+  checkArithmetic(A, 'transverseMercator');
+  const r = tm(A, point, projection, true, xi0);
+  return { E: r.E, N: r.N, k: r.k, convergence: r.convergence };
+}
+
+/**
+ * ξ0 of the true origin at `lat0` (degrees, in A), as `tm` computes it on every call, or
+ * `undefined` where that throws (then every call computes it, and throws, as before). @internal
+ */
+export function originXiOf<T>(A: Arithmetic<T>, ell: Ellipsoid, lat0: T): T | undefined {
+  try {
+    return kruger(A, ellipsoidParameters(A, ell), lat0, A.zero, 'transverseMercator', true).xi;
+  } catch {
+    return undefined;
+  }
 }
 
 function tm<T>(

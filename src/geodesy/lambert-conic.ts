@@ -25,6 +25,7 @@ import {
   type Projection,
   type ProjectionParams,
 } from './projection-core.js';
+import { FLOAT_LCC } from './projection-float.js';
 
 /** The constants of a Lambert conic: r = C e^(−nψ), r0 at the (false) origin. */
 interface Lcc<T> {
@@ -135,6 +136,12 @@ function inverse<T>(A: Arithmetic<T>, k: object, x: T, y: T, where: string) {
   return { lat: f.lat, dlon: A.div(theta, c.n), k: kk, gamma: theta };
 }
 
+/** The constants in the order the float twin reads them (projection-float.ts `lccInto`). */
+function floatConstants<T>(_A: Arithmetic<T>, k: object): readonly number[] {
+  const c = k as Lcc<number>;
+  return [c.e2, c.e, c.n, c.C, c.r0, c.a];
+}
+
 /** The Lambert Conic Conformal (1SP) formulas: needs lat0, lon0, k0. @internal */
 export const LCC_1SP: MethodImpl = {
   needs: ['lat0', 'lon0', 'k0'],
@@ -142,6 +149,8 @@ export const LCC_1SP: MethodImpl = {
   prepare,
   forward,
   inverse,
+  floatKind: FLOAT_LCC,
+  floatConstants,
 };
 /** The Lambert Conic Conformal (2SP) formulas: needs lat0, lon0 (false origin), lat1, lat2. @internal */
 export const LCC_2SP: MethodImpl = {
@@ -150,6 +159,8 @@ export const LCC_2SP: MethodImpl = {
   prepare,
   forward,
   inverse,
+  floatKind: FLOAT_LCC,
+  floatConstants,
 };
 
 const pick = (method: unknown, where: string): MethodImpl => {

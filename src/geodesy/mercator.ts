@@ -25,6 +25,7 @@ import {
   type Projection,
   type ProjectionParams,
 } from './projection-core.js';
+import { FLOAT_MERCATOR } from './projection-float.js';
 
 interface Merc<T> {
   /** a·k0 */
@@ -85,6 +86,12 @@ function inverse<T>(A: Arithmetic<T>, k: object, x: T, y: T, where: string) {
   };
 }
 
+/** The constants in the order the float twin reads them (projection-float.ts `mercatorInto`). */
+function floatConstants<T>(_A: Arithmetic<T>, k: object): readonly number[] {
+  const c = k as Merc<number>;
+  return [c.e2, c.e, c.ak, c.k0];
+}
+
 /** Mercator variant A: needs lon0, k0 (lat0 may be given as 0). @internal */
 export const MERCATOR_1SP: MethodImpl = {
   needs: ['lon0', 'k0'],
@@ -92,6 +99,8 @@ export const MERCATOR_1SP: MethodImpl = {
   prepare,
   forward,
   inverse,
+  floatKind: FLOAT_MERCATOR,
+  floatConstants,
 };
 /** Mercator variant B: needs lat1, lon0. @internal */
 export const MERCATOR_2SP: MethodImpl = {
@@ -100,6 +109,8 @@ export const MERCATOR_2SP: MethodImpl = {
   prepare,
   forward,
   inverse,
+  floatKind: FLOAT_MERCATOR,
+  floatConstants,
 };
 
 const pick = (method: unknown, where: string): MethodImpl => {

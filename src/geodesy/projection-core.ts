@@ -24,6 +24,7 @@ import {
   tenToMinus,
   toDegrees,
 } from './internal.js';
+import { FLOAT_NONE, forwardFloatInto } from './projection-float.js';
 
 /** The projection methods: EPSG method names, written in lower case with hyphens. */
 export type ProjectionMethod =
@@ -155,6 +156,13 @@ export interface MethodImpl {
   prepare<T>(A: Arithmetic<T>, p: ProjectionParams<T>, where: string): object;
   forward<T>(A: Arithmetic<T>, c: object, lat: T, dlon: T, where: string): MethodForward<T>;
   inverse<T>(A: Arithmetic<T>, c: object, x: T, y: T, where: string): MethodInverse<T>;
+  /** The kind of its forward float twin (projection-float.ts), if it has one. */
+  readonly floatKind?: number;
+  /**
+   * Its constants (prepared in A, the float arithmetic) in the order its float twin reads
+   * them; `undefined` leaves every point to the generic code.
+   */
+  floatConstants?<T>(A: Arithmetic<T>, c: object): readonly number[] | undefined;
 }
 
 type ParamName = 'lat0' | 'lon0' | 'lat1' | 'lat2' | 'k0';
@@ -223,7 +231,16 @@ interface Internal<T> {
   readonly FN: unknown;
   /** lon0 + prime meridian, degrees from Greenwich, in D */
   readonly lonOrigin: unknown;
+  /** The kind of forward float twin (FLOAT_NONE unless A is float and angles are in degrees). */
+  readonly fk: number;
+  /** The float twin's constants (projection-float.ts): empty without a twin. */
+  readonly fc: Float64Array;
 }
+
+const NO_CONSTANTS = /* @__PURE__ */ new Float64Array(0);
+
+/** E, N, k, γ of the float twin's call in progress (read before any other call). */
+const ENKG = /* @__PURE__ */ new Float64Array(4);
 
 const ANGLE_UNITS: readonly ProjectionAngleUnit[] = ['deg', 'grad', 'dms-packed'];
 
@@ -416,6 +433,19 @@ export function prepareWith<T>(
     tol: tenToMinus(D, claimedDigits(D) + 1),
   };
   const c = impl.prepare(D, params, where);
+  const FE = metres('falseEasting');
+  const FN = metres('falseNorthing');
+  const lonOrigin = pm === undefined ? params.lon0 : D.add(params.lon0, pm);
+  // The float twin reads plain numbers in degrees: float only, points in degrees.
+  const twin =
+    A.float64 === true && pointUnit === 'deg' && impl.floatKind !== undefined
+      ? impl.floatConstants!(D, c)
+      : undefined;
+  const fk = twin === undefined ? FLOAT_NONE : impl.floatKind!;
+  const fc =
+    twin === undefined
+      ? NO_CONSTANTS
+      : Float64Array.of(lonOrigin as number, FE as number, FN as number, unitD as number, ...twin);
   const internal: Internal<T> = {
     impl,
     D,
@@ -425,9 +455,11 @@ export function prepareWith<T>(
     angleUnit: pointUnit,
     unitA: A.from(rational.toString(unitR)),
     unitD,
-    FE: metres('falseEasting'),
-    FN: metres('falseNorthing'),
-    lonOrigin: pm === undefined ? params.lon0 : D.add(params.lon0, pm),
+    FE,
+    FN,
+    lonOrigin,
+    fk,
+    fc,
   };
   return Object.freeze({ method: projection.method, arithmetic: A, [PREPARED]: internal });
 }
@@ -457,7 +489,61 @@ export function prepared<T>(
   }
   expectObject(projection, `${where}(projection)`, '{ method, ellipsoid, … }');
   const m = impl((projection as Projection).method, `${where}(projection.method)`);
-  return prepareWith(A, projection as Projection, m, where)[PREPARED];
+  // A projection object that cannot change (frozen, every parameter a primitive, the
+  // ellipsoid a name or frozen; `utmProjection` makes such objects) passed again with the
+  // same arithmetic: the projection prepared the last time, as preparing it again would give.
+  if (projection === lastProjection && A === lastArithmetic && lastPrepared!.impl === m)
+    return lastPrepared as Internal<T>;
+  const made = prepareWith(A, projection as Projection, m, where)[PREPARED];
+  if (unchanging(projection)) {
+    lastProjection = projection;
+    lastArithmetic = A;
+    lastPrepared = made as Internal<unknown>;
+  }
+  return made;
+}
+
+/** The last unchanging projection object {@link prepared} prepared, its arithmetic and result. */
+let lastProjection: unknown;
+let lastArithmetic: unknown;
+let lastPrepared: Internal<unknown> | undefined;
+
+/**
+ * Whether a projection object can never change: a frozen plain object whose own properties
+ * are data properties holding primitives, except an ellipsoid that is such an object itself.
+ */
+function unchanging(x: object, nested = false): boolean {
+  if (!Object.isFrozen(x)) return false;
+  const proto: unknown = Object.getPrototypeOf(x);
+  if (proto !== Object.prototype && proto !== null) return false;
+  for (const [k, d] of Object.entries(Object.getOwnPropertyDescriptors(x))) {
+    if (!('value' in d)) return false; // a getter could answer differently next time
+    const v: unknown = d.value;
+    if (typeof v === 'object' && v !== null) {
+      if (nested || k !== 'ellipsoid' || !unchanging(v, true)) return false;
+    } else if (typeof v === 'function') return false;
+  }
+  return true;
+}
+
+/**
+ * The float twin's forward for a projection prepared for A (the float arithmetic) and a point
+ * of plain numbers in degrees: E, N, k, γ written into `out`; `false` (nothing decided) for
+ * anything else, which the caller then hands to the generic code. @internal
+ */
+export function forwardPreparedFloat(
+  A: unknown,
+  projection: unknown,
+  point: unknown,
+  out: Float64Array,
+): boolean {
+  if (typeof projection !== 'object' || projection === null) return false;
+  const P = (projection as Partial<PreparedProjection<unknown>>)[PREPARED];
+  if (P === undefined || P.fk === FLOAT_NONE) return false;
+  if ((projection as PreparedProjection<unknown>).arithmetic !== A) return false;
+  if (typeof point !== 'object' || point === null) return false;
+  const pt = point as { readonly lat?: unknown; readonly lon?: unknown };
+  return forwardFloatInto(P.fk, P.fc, pt.lat, pt.lon, out);
 }
 
 /** Forward: a point's latitude and longitude to grid coordinates, through a prepared projection. @internal */
@@ -468,6 +554,12 @@ export function forwardWith<T>(
   where: string,
 ): ProjectedPoint<T> {
   expectObject(point, `${where}(point)`, '{ lat, lon }');
+  if (A.float64 === true && P.fk !== FLOAT_NONE) {
+    // The float twin: the same operations on plain numbers (projection-float.ts); false
+    // wherever the generic code below must decide or throw.
+    if (forwardFloatInto(P.fk, P.fc, point.lat, point.lon, ENKG))
+      return { E: ENKG[0], N: ENKG[1], k: ENKG[2], convergence: ENKG[3] } as ProjectedPoint<T>;
+  }
   const lat = latitudeIn(A, point.lat, P.angleUnit, `${where}(point.lat)`);
   const lon = longitudeIn(A, point.lon, P.angleUnit, `${where}(point.lon)`);
   const D = P.D;

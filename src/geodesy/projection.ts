@@ -6,7 +6,14 @@
  */
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import { QuadspreadError, show, checkArithmetic } from '../errors.js';
-import { transverseMercator, transverseMercatorInverse } from './grid.js';
+import {
+  originXiOf,
+  tmTwinConstants,
+  transverseMercatorFrom,
+  transverseMercatorInverse,
+} from './grid.js';
+import { readEllipsoid } from './ellipsoid.js';
+import { FLOAT_TM } from './projection-float.js';
 import { LCC_1SP, LCC_2SP } from './lambert-conic.js';
 import { MERCATOR_1SP, MERCATOR_2SP } from './mercator.js';
 import { OBLIQUE_STEREOGRAPHIC } from './oblique-stereographic.js';
@@ -15,6 +22,7 @@ import { CASSINI } from './cassini-soldner.js';
 import { ALBERS } from './albers.js';
 import { LAEA } from './lambert-azimuthal.js';
 import {
+  forwardPreparedFloat,
   forwardWith,
   inverseWith,
   prepared,
@@ -30,28 +38,46 @@ import {
 /** Transverse Mercator through the existing Krüger-series implementation (grid.ts). */
 interface Tm<T> {
   readonly tm: { lon0: never; lat0: never; k0: never; ellipsoid: ProjectionParams<T>['ellipsoid'] };
+  /** ξ of the true origin, computed once (undefined: computed per point, as before) */
+  readonly xi0: T | undefined;
 }
 
 const TM: MethodImpl = {
   needs: ['lon0'],
   takes: ['lat0', 'k0'],
   prepare<T>(A: Arithmetic<T>, p: ProjectionParams<T>): Tm<T> {
+    const lat0 = p.lat0 ?? A.zero;
     return {
       tm: {
         lon0: A.zero as never,
-        lat0: (p.lat0 ?? A.zero) as never,
+        lat0: lat0 as never,
         k0: (p.k0 ?? A.one) as never,
         ellipsoid: p.ellipsoid,
       },
+      xi0: A.exact ? undefined : originXiOf(A, p.ellipsoid, lat0),
     };
   },
   forward<T>(A: Arithmetic<T>, c: object, lat: T, dlon: T) {
-    const r = transverseMercator(A, { lat, lon: dlon }, (c as Tm<T>).tm);
+    const r = transverseMercatorFrom(A, { lat, lon: dlon }, (c as Tm<T>).tm, (c as Tm<T>).xi0);
     return { x: r.E, y: r.N, k: r.k, gamma: r.convergence };
   },
   inverse<T>(A: Arithmetic<T>, c: object, x: T, y: T) {
     const r = transverseMercatorInverse(A, { E: x, N: y }, (c as Tm<T>).tm);
     return { lat: r.lat, dlon: r.lon, k: r.k, gamma: r.convergence };
+  },
+  floatKind: FLOAT_TM,
+  floatConstants<T>(A: Arithmetic<T>, c: object): readonly number[] | undefined {
+    const tm = (c as Tm<T>).tm;
+    try {
+      return tmTwinConstants(
+        A,
+        readEllipsoid(tm.ellipsoid, 'prepareProjection'),
+        tm.lat0,
+        tm.k0,
+      ).map(Number);
+    } catch {
+      return undefined; // the generic code decides, point by point
+    }
   },
 };
 
@@ -145,9 +171,20 @@ export function toGrid<T>(
   point: { readonly lat: Numeric<T>; readonly lon: Numeric<T> },
   projection: Projection | PreparedProjection<T>,
 ): ProjectedPoint<T> {
+  // float with a prepared projection and a point of plain numbers: the float twin
+  // (projection-float.ts), before anything else, so that this function stays small enough to
+  // be inlined and its result object can be optimised away.
+  if (
+    (A as { float64?: unknown } | null | undefined)?.float64 === true &&
+    forwardPreparedFloat(A, projection, point, ENKG)
+  )
+    return { E: ENKG[0], N: ENKG[1], k: ENKG[2], convergence: ENKG[3] } as ProjectedPoint<T>;
   checkArithmetic(A, 'toGrid');
   return forwardWith(A, prepared(A, projection, methodOf, 'toGrid'), point, 'toGrid');
 }
+
+/** E, N, k, γ of the float twin's call in progress (read before any other call). */
+const ENKG = /* @__PURE__ */ new Float64Array(4);
 
 /**
  * Grid coordinates back to geodetic latitude and longitude, in any supported projection (see

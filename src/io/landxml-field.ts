@@ -83,8 +83,27 @@ export function landXmlStations<T>(
       `${where}(doc)`,
       `${show(doc)} is not a document read by readLandXml`,
     );
+  // A document altered after reading: each entry the conversion reads must still be an object.
+  const notRead = (what: string, v: unknown): QuadspreadError =>
+    new QuadspreadError(
+      'INVALID_ARGUMENT',
+      `${where}(doc) ${what}`,
+      `${show(v)} is not what readLandXml gives there`,
+    );
+  const isObject = (v: unknown): boolean => typeof v === 'object' && v !== null;
   const points = new Map<string, LandXmlPoint<T>>();
-  for (const p of doc.points) points.set(p.name, p);
+  for (let i = 0; i < doc.points.length; i++) {
+    const p = doc.points[i];
+    if (!isObject(p) || typeof p!.name !== 'string') throw notRead(`points[${i}]`, p);
+    points.set(p!.name, p!);
+  }
+  for (let i = 0; i < doc.setups.length; i++) {
+    const s = doc.setups[i];
+    if (!isObject(s) || !Array.isArray(s!.observations)) throw notRead(`setups[${i}]`, s);
+    for (let j = 0; j < s!.observations.length; j++)
+      if (!isObject(s!.observations[j]))
+        throw notRead(`setups[${i}].observations[${j}]`, s!.observations[j]);
+  }
   const coords = (name: string | undefined, line: number, what: string) => {
     const p = name === undefined ? undefined : points.get(name);
     if (p === undefined)

@@ -586,3 +586,26 @@ describe('landXmlStations: a LandXML survey into the field functions', () => {
     expect(codeOf(() => landXmlStations(R, {} as never))).toBe('INVALID_ARGUMENT');
   });
 });
+
+describe('landXmlStations on a document altered after reading', () => {
+  it('refuses a point, set-up or observation that is not an object, naming it (not a TypeError)', async () => {
+    const { landXmlStations: stations } = await import('../../src/io/index.js');
+    const { rational: Ra } = await import('../../src/index.js');
+    const base = { points: [], setups: [] };
+    for (const [d, at] of [
+      [{ ...base, points: [undefined] }, /points\[0\]/],
+      [{ ...base, points: [{ name: 5 }] }, /points\[0\]/],
+      [{ ...base, setups: [null] }, /setups\[0\]/],
+      [{ ...base, setups: [{ observations: [7] }] }, /setups\[0\]\.observations\[0\]/],
+    ] as const) {
+      let err: unknown;
+      try {
+        stations(Ra, d as never);
+      } catch (e) {
+        err = e;
+      }
+      expect((err as { code?: string }).code).toBe('INVALID_ARGUMENT');
+      expect((err as Error).message).toMatch(at);
+    }
+  });
+});

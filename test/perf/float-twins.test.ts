@@ -241,6 +241,8 @@ describe('triangle(float, …) through the twin', () => {
   const pt = fc.oneof(
     fc.record({ x: coordinate, y: coordinate }),
     fc.tuple(coordinate, coordinate),
+    // Not points at all: null, undefined, primitives, a point whose reading throws.
+    fc.constantFrom(null, undefined, 7, 'A1', true, {}),
   );
   it('is exactly the generic float result (or the same error), awkward input included', async () => {
     const { triangle } = await import('../../src/index.js');
@@ -253,6 +255,23 @@ describe('triangle(float, …) through the twin', () => {
       }),
       { numRuns: 5000 },
     );
+  });
+
+  it('passes a point whose reading throws to the generic code, which throws the same', async () => {
+    const { triangle } = await import('../../src/index.js');
+    const throwing = {
+      get x(): number {
+        throw new RangeError('x is not readable');
+      },
+      y: 1,
+    };
+    for (const args of [
+      [throwing, { x: 0, y: 0 }, { x: 1, y: 2 }],
+      [{ x: 0, y: 0 }, { x: 1, y: 2 }, throwing],
+    ] as never as [never, never, never][]) {
+      expect(() => triangle(float, ...args)).toThrow('x is not readable');
+      expect(() => triangle(generic, ...args)).toThrow('x is not readable');
+    }
   });
 
   it('agrees exactly on 20000 seeded triangles of millimetre coordinates and right angles', async () => {
