@@ -289,6 +289,11 @@ export function checkArithmetic(A: unknown, where: string): void {
   // The last arithmetic checked, first: a comparison instead of a hash lookup on every call of
   // a hot function (docs/performance.md).
   if (A === lastChecked && A !== undefined) return;
+  checkOther(A, where);
+}
+
+/** {@link checkArithmetic} past its first comparison (kept apart so that the comparison, inlined into a hot caller, costs V8 little of its inlining budget). */
+function checkOther(A: unknown, where: string): void {
   if (checked.has(A as object)) {
     lastChecked = A;
     return;

@@ -293,6 +293,15 @@ export function parametersAt<T>(
   where: string,
 ): EllipsoidParameters<T> {
   if (A === lastA && e === lastInput) return lastParams as EllipsoidParameters<T>;
+  return parametersLookedUp(A, e, where);
+}
+
+/** {@link parametersAt} past its comparisons (kept apart, so that it is small to inline). */
+function parametersLookedUp<T>(
+  A: Arithmetic<T>,
+  e: Ellipsoid | string,
+  where: string,
+): EllipsoidParameters<T> {
   const P = ellipsoidParameters(A, readEllipsoid(e, where));
   if (typeof e === 'string' || Object.isFrozen(e)) {
     lastA = A;

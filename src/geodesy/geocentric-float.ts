@@ -1,16 +1,16 @@
 /**
  * The float twins of geodetic ↔ geocentric: the same operations, in the same order, as the
  * generic code in `float`, on plain numbers, so that these conversions run near hand-written
- * speed in any process. Each returns `undefined` wherever the generic code would throw or
- * must decide (text input, a value out of range, a non-finite quotient or root), and the
- * caller then runs the generic code. Property tests check that they return exactly what the
+ * speed in any process. Each writes its three numbers into a scratch array and returns
+ * `true`, or returns `false` wherever the generic code would throw or must decide (text input,
+ * a value out of range, a non-finite quotient or root), and the caller then runs the generic
+ * code. Property tests check that they return exactly what the
  * generic code returns in float.
  *
  * @module geodesy
  * @internal
  */
-import { sinCosInto } from '../readings/trig-float.js';
-import type { Geodetic } from './geocentric.js';
+import { PER_DEGREE, quadrantInto, sinCosInto } from '../readings/trig-float.js';
 
 /** sin φ, cos φ, sin λ, cos λ of the call in progress (read before any other call). */
 const SCRATCH = /* @__PURE__ */ new Float64Array(4);
@@ -32,16 +32,40 @@ export function geocentricInto(
 ): boolean {
   const lat = point.lat;
   const lon = point.lon;
-  const h = point.h === undefined ? 0 : point.h;
-  if (!isNum(lat) || !isNum(lon) || !isNum(h)) return false;
-  if (Math.abs(lat) > 90 || Math.abs(lon) > 360 || h < -a) return false;
+  let h = point.h;
+  if (h === undefined) h = 0;
+  if (typeof lat !== 'number' || typeof lon !== 'number' || typeof h !== 'number') return false;
+  // Finite and in range (NaN fails every comparison); a longitude of a turn or more, too, is
+  // left to the generic code.
+  if (!(lat >= -90 && lat <= 90 && lon > -360 && lon < 360 && h >= -a && h - h === 0)) return false;
   const sc = SCRATCH;
-  if (!sinCosInto(lat, sc, 0) || !sinCosInto(lon, sc, 2)) return false;
+  // sin φ, cos φ into sc[0], sc[1], sin λ, cos λ into sc[2], sc[3]: sinCosInto's steps written
+  // out, so that they are compiled into this function whatever V8 chooses to inline (two
+  // inlined copies of sinCosInto exceed V8's budget of inlined bytecode, and with one of them a
+  // call the conversion took 1.3 times as long).
+  for (let j = 0; j < 4; j += 2) {
+    const d = j === 0 ? lat : lon;
+    let k = Math.round(d * (1 / 90));
+    let t = k === 0 ? d : d - 90 * k;
+    if (t > 45) {
+      k += 1;
+      t = t - 90;
+    } else if (t < -45) {
+      k -= 1;
+      t = t + 90;
+    }
+    if (t === 0 || t === 30 || t === -30) {
+      sinCosInto(d, sc, j); // the exact cases
+    } else {
+      const rad = t * PER_DEGREE;
+      quadrantInto(Math.sin(rad), Math.cos(rad), k, sc, j);
+    }
+  }
   const sp = sc[0]!;
   // ν = a/√(1 − e² sin²φ), as primeVertical computes it
   const w = Math.sqrt(1 - e2 * (sp * sp));
   const nu = a / w;
-  if (w - w !== 0 || nu - nu !== 0) return false;
+  if (nu - nu !== 0) return false; // (w is NaN, 0 or subnormal: the generic code decides)
   const r = (nu + h) * sc[1]!;
   out[0] = r * sc[3]!;
   out[1] = r * sc[2]!;
@@ -49,7 +73,7 @@ export function geocentricInto(
   return true;
 }
 
-/** The constants {@link geodeticFloat} needs (those of ellipsoidParameters in float). */
+/** The constants {@link geodeticInto} needs (those of ellipsoidParameters in float). */
 export interface FloatEllipsoid {
   readonly a: number;
   readonly f: number;
@@ -60,23 +84,25 @@ export interface FloatEllipsoid {
 
 /**
  * `geocentricToGeodetic(float, point, E)` off the polar axis for numeric input, with the
- * stopping tolerances `tol` and `noise` of the generic code, or `undefined`.
+ * stopping tolerances `tol` and `noise` of the generic code, written into `out[0..2]`
+ * (latitude, longitude, height); `false` where the generic code must decide.
  * @internal
  */
-export function geodeticFloat(
+export function geodeticInto(
   point: { X?: unknown; Y?: unknown; Z?: unknown },
   E: FloatEllipsoid,
   tol: number,
   noise: number,
-): Geodetic<number> | undefined {
+  out: Float64Array,
+): boolean {
   const X = point.X;
   const Y = point.Y;
   const Z = point.Z;
-  if (!isNum(X) || !isNum(Y) || !isNum(Z)) return undefined;
+  if (!isNum(X) || !isNum(Y) || !isNum(Z)) return false;
   const p2 = X * X + Y * Y;
-  if (p2 === 0) return undefined; // the polar axis: the generic code
+  if (p2 === 0) return false; // the polar axis: the generic code
   const p = Math.sqrt(p2);
-  if (p - p !== 0) return undefined;
+  if (p - p !== 0) return false;
   const oneMinusF = 1 - E.f;
   // unit(b·p, a·Z): tan u₀ = aZ/(bp)
   let c = E.b * p;
@@ -84,7 +110,7 @@ export function geodeticFloat(
   let r = Math.sqrt(c * c + s * s);
   let uc = c / r;
   let us = s / r;
-  if (r - r !== 0 || uc - uc !== 0 || us - us !== 0) return undefined;
+  if (r - r !== 0 || uc - uc !== 0 || us - us !== 0) return false;
   const ep2b = E.ep2 * E.b;
   const e2a = E.e2 * E.a;
   let pc = 0;
@@ -94,18 +120,18 @@ export function geodeticFloat(
   for (let i = 0; i < 30; i++) {
     const num = Z + ep2b * (us * (us * us));
     const den = p - e2a * (uc * (uc * uc));
-    if (!(den > 0)) return undefined;
+    if (!(den > 0)) return false;
     r = Math.sqrt(den * den + num * num);
     const nc = den / r;
     const ns = num / r;
-    if (r - r !== 0 || nc - nc !== 0 || ns - ns !== 0) return undefined;
+    if (r - r !== 0 || nc - nc !== 0 || ns - ns !== 0) return false;
     if (have) {
       const change = Math.abs(pc * ns - ps * nc);
       pc = nc;
       ps = ns;
-      if (change <= tol) return finish(pc, ps, p, X, Y, Z, E.a, E.e2);
+      if (change <= tol) return finish(pc, ps, p, X, Y, Z, E.a, E.e2, out);
       if (prev >= 0 && change <= noise && change + change >= prev)
-        return finish(pc, ps, p, X, Y, Z, E.a, E.e2);
+        return finish(pc, ps, p, X, Y, Z, E.a, E.e2, out);
       prev = change;
     } else {
       pc = nc;
@@ -118,9 +144,9 @@ export function geodeticFloat(
     r = Math.sqrt(c * c + s * s);
     uc = c / r;
     us = s / r;
-    if (r - r !== 0 || uc - uc !== 0 || us - us !== 0) return undefined;
+    if (r - r !== 0 || uc - uc !== 0 || us - us !== 0) return false;
   }
-  return undefined; // not converged: the generic code reports it
+  return false; // not converged: the generic code reports it
 }
 
 function finish(
@@ -132,15 +158,19 @@ function finish(
   Z: number,
   a: number,
   e2: number,
-): Geodetic<number> | undefined {
+  out: Float64Array,
+): boolean {
   // h = p cos φ + Z sin φ − a √(1 − e² sin²φ)  (Bowring 1985)
   const w = Math.sqrt(1 - e2 * (s * s));
-  if (w - w !== 0) return undefined;
+  if (w - w !== 0) return false;
   const h = p * c + Z * s - a * w;
-  if (s === 0 && c === 0) return undefined;
+  if (s === 0 && c === 0) return false;
   const lat = (Math.atan2(s, c) * 180) / Math.PI;
-  if (X === 0 && Y === 0) return undefined;
+  if (X === 0 && Y === 0) return false;
   const lon = (Math.atan2(Y, X) * 180) / Math.PI;
-  if (lat - lat !== 0 || lon - lon !== 0) return undefined;
-  return { lat, lon, h };
+  if (lat - lat !== 0 || lon - lon !== 0) return false;
+  out[0] = lat;
+  out[1] = lon;
+  out[2] = h;
+  return true;
 }

@@ -24,10 +24,11 @@ import {
   tenToMinus,
   toDegrees,
 } from './internal.js';
-import { geocentricInto, geodeticFloat } from './geocentric-float.js';
+import { geocentricInto, geodeticInto } from './geocentric-float.js';
 
-/** The float twin's X, Y, Z (read at once). */
+/** The float twins' X, Y, Z and latitude, longitude, height (read at once). */
 const XYZ = /* @__PURE__ */ new Float64Array(3);
+const LLH = /* @__PURE__ */ new Float64Array(3);
 
 /** Geodetic coordinates: latitude and longitude in decimal degrees (north, east positive), height in metres above the ellipsoid. */
 export interface Geodetic<T> {
@@ -94,6 +95,16 @@ export function geodeticToGeocentric<T>(
     if (geocentricInto(point, E.a as number, E.e2 as number, o))
       return { X: o[0]!, Y: o[1]!, Z: o[2]! } as unknown as Geocentric<T>;
   }
+  return geocentricOf(A, point, E);
+}
+
+/** {@link geodeticToGeocentric} once the arithmetic, the point and the ellipsoid are read (kept out of it so that it stays small enough for V8 to inline). */
+function geocentricOf<T>(
+  A: Arithmetic<T>,
+  point: GeodeticInput<T>,
+  E: EllipsoidParameters<T>,
+): Geocentric<T> {
+  const where = 'geodeticToGeocentric(point)';
   const lat = readLatitude(A, point.lat, `${where}.lat`);
   const lon = readLongitude(A, point.lon, `${where}.lon`);
   const h = readHeight(A, point.h, E.a, `${where}.h`);
@@ -161,15 +172,26 @@ export function geocentricToGeodetic<T>(
   const E = parametersAt(A, ellipsoid, 'geocentricToGeodetic(ellipsoid)');
   if (A.float64) {
     // The float twin (same operations, same order, same tolerances); else the code below.
-    const digits = claimedDigits(A);
-    const fast = geodeticFloat(
-      point,
-      E as unknown as EllipsoidParameters<number>,
-      tenToMinus(A, digits + 2) as number,
-      tenToMinus(A, Math.max(1, digits - 2)) as number,
-    );
-    if (fast !== undefined) return fast as Geodetic<T>;
+    // float's tolerances 10^−17 and 10^−13 are tenToMinus(A, 17) and tenToMinus(A, 13)
+    // (float has 15 digits; a test checks both), without the two memo lookups.
+    const o = LLH;
+    if (
+      A.digits === 15 &&
+      geodeticInto(point, E as unknown as EllipsoidParameters<number>, 1e-17, 1e-13, o)
+    )
+      return { lat: o[0]!, lon: o[1]!, h: o[2]! } as unknown as Geodetic<T>;
   }
+  return geodeticOf<T>(A, point, E, ellipsoid);
+}
+
+/** {@link geocentricToGeodetic} once the arithmetic, the point and the ellipsoid are read. */
+function geodeticOf<T>(
+  A: Arithmetic<T>,
+  point: Geocentric<Numeric<T>> | Geocentric<T>,
+  E: EllipsoidParameters<T>,
+  ellipsoid: Ellipsoid | string,
+): Geodetic<T> {
+  const where = 'geocentricToGeodetic(point)';
   const X = readNumber(A, point.X as Numeric<T>, `${where}.X`);
   const Y = readNumber(A, point.Y as Numeric<T>, `${where}.Y`);
   const Z = readNumber(A, point.Z as Numeric<T>, `${where}.Z`);

@@ -76,11 +76,12 @@ export function expectObject(
   where: string | (() => string),
   shape: string,
 ): asserts x is object {
-  if (x === null || typeof x !== 'object')
-    throw invalidArgument(
-      typeof where === 'string' ? where : where(),
-      `${show(x)} is not ${shape}`,
-    );
+  if (x === null || typeof x !== 'object') notAnObject(x, where, shape);
+}
+
+/** The error of {@link expectObject} (kept apart, so that the check is small to inline). */
+function notAnObject(x: unknown, where: string | (() => string), shape: string): never {
+  throw invalidArgument(typeof where === 'string' ? where : where(), `${show(x)} is not ${shape}`);
 }
 
 /**

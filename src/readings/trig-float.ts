@@ -8,7 +8,8 @@
  * @internal
  */
 
-const PER_DEGREE = Math.PI / 180; // float.div(float.pi, 180): π rad = 180°
+/** float.div(float.pi, 180): π rad = 180°. @internal */
+export const PER_DEGREE = Math.PI / 180;
 
 /**
  * sin and cos of `degrees` as `sinCos(float, degrees)` gives them, or `undefined` when the
@@ -24,49 +25,62 @@ const OUT = /* @__PURE__ */ new Float64Array(2);
 
 /**
  * {@link sinCosFloat} written into `out[at]` (sin) and `out[at + 1]` (cos), so that a hot
- * caller allocates nothing; `false` where the generic code must decide.
+ * caller allocates nothing; `false` where the generic code must decide. Small enough for V8
+ * to inline (an angle of a turn or more goes through {@link turnFloat}, a call).
  * @internal
  */
 export function sinCosInto(degrees: number, out: Float64Array, at: number): boolean {
   let d = degrees;
-  if (!(d >= 0 && d < 360)) {
-    // modulo(float, d, 360): the same passes as the generic reduction, in a function of its
-    // own so that this one stays small enough for V8 to inline into its callers.
-    d = turnFloat(d);
-    if (d - d !== 0) return false;
+  if (!(d > -360 && d < 360)) {
+    d = turnFloat(d); // modulo(float, d, 360), or NaN where the generic code must decide
+    if (d !== d) return false;
   }
-  let q = Math.min(3, Math.floor(d / 90));
-  let t = q === 0 ? d : d - 90 * q;
-  if (t < 0) {
-    q -= 1;
+  // t = d − 90°·k ∈ [−45°, 45°], exact (see sinCos)
+  let k = Math.round(d * (1 / 90));
+  let t = k === 0 ? d : d - 90 * k;
+  if (t > 45) {
+    k += 1;
+    t = t - 90;
+  } else if (t < -45) {
+    k -= 1;
     t = t + 90;
   }
-  if (t > 90) {
-    q += 1;
-    t = t - 90;
-  }
-  let sin: number;
-  let cos: number;
-  if (t === 0) {
-    sin = t * PER_DEGREE;
-    cos = 1;
-  } else if (t === 90) {
-    sin = 1;
-    cos = (90 - t) * PER_DEGREE;
-  } else {
-    const small = t <= 45;
-    const u = small ? t : 90 - t;
-    const rad = u * PER_DEGREE;
-    const cosU = Math.cos(rad);
-    const sinU = u === 30 ? 1 / 2 + (u - 30) * (cosU * PER_DEGREE) : Math.sin(rad);
-    sin = small ? sinU : cosU;
-    cos = small ? cosU : sinU;
-  }
-  const k = ((q % 4) + 4) % 4;
-  // sin(θ + 90°) = cos θ, cos(θ + 90°) = −sin θ (the quadrant rotations)
-  out[at] = k === 0 ? sin : k === 1 ? cos : k === 2 ? -sin : -cos;
-  out[at + 1] = k === 0 ? cos : k === 1 ? -sin : k === 2 ? -cos : sin;
+  if (t === 0 || t === 30 || t === -30) return exactInto(t, k, out, at);
+  const rad = t * PER_DEGREE;
+  quadrantInto(Math.sin(rad), Math.cos(rad), k, out, at);
   return true;
+}
+
+/** The exact cases of {@link sinCosInto}: t = 0° and t = ±30° (as sinCos computes them). */
+function exactInto(t: number, k: number, out: Float64Array, at: number): boolean {
+  if (t === 0) {
+    quadrantInto(t * PER_DEGREE, 1, k, out, at);
+  } else {
+    const cos = Math.cos(t * PER_DEGREE);
+    const sin =
+      t === 30 ? 1 / 2 + (t - 30) * (cos * PER_DEGREE) : (t + 30) * (cos * PER_DEGREE) - 1 / 2;
+    quadrantInto(sin, cos, k, out, at);
+  }
+  return true;
+}
+
+/**
+ * sin and cos of t + 90°·k from those of t, into `out[at]`, `out[at + 1]`:
+ * sin(t + 90°) = cos t, cos(t + 90°) = −sin t (the quadrant rotations).
+ * @internal
+ */
+export function quadrantInto(
+  sin: number,
+  cos: number,
+  k: number,
+  out: Float64Array,
+  at: number,
+): void {
+  // sin t goes to sin θ (k even) or cos θ (k odd), negated in quadrants 1 and 2 (k mod 4);
+  // cos t to the other, negated in quadrants 2 and 3 (k & 3 is k mod 4, negative k too)
+  const odd = k & 1;
+  out[at + odd] = (k + 1) & 2 ? -sin : sin;
+  out[at + 1 - odd] = k & 2 ? -cos : cos;
 }
 
 /**

@@ -65,34 +65,11 @@ export function modulo<T>(A: Arithmetic<T>, x: T, m: T, where = 'modulo(x)'): T 
 }
 
 /**
- * sin and cos of θ ∈ [0°, 90°] (already reduced; `ninety` is 90 in A). Exact where rational:
- * 0°, 30° (sin), 60° (cos), 90°; otherwise from `A.sin` / `A.cos` of the smaller of θ and
- * 90° − θ in radians, so that the relative accuracy holds near both ends.
- */
-function firstQuadrant<T>(A: Arithmetic<T>, t: T, ninety: T): { sin: T; cos: T } {
-  const perDegree = A.div(A.pi, A.from(180)); // π rad = 180°
-  // The exact cases add (θ − θ₀)·derivative, which is zero in value, so that an arithmetic
-  // carrying derivatives (uncertain) keeps them: d sin = cos·π/180 dθ, d cos = −sin·π/180 dθ.
-  if (A.isZero(t)) return { sin: A.mul(t, perDegree), cos: A.one };
-  if (A.eq(t, ninety)) return { sin: A.one, cos: A.mul(A.sub(ninety, t), perDegree) };
-  const small = A.cmp(t, A.from(45)) <= 0;
-  const u = small ? t : A.sub(ninety, t);
-  const rad = A.mul(u, perDegree);
-  const cosU = A.cos(rad);
-  // sin 30° = 1/2 exactly (the 30-60-90 triangle); its cosine √3/2 is irrational.
-  const thirty = A.from(30);
-  const sinU = A.eq(u, thirty)
-    ? A.add(A.div(A.one, A.from(2)), A.mul(A.sub(u, thirty), A.mul(cosU, perDegree)))
-    : A.sin(rad);
-  return small ? { sin: sinU, cos: cosU } : { sin: cosU, cos: sinU };
-}
-
-/**
  * sin θ and cos θ of an angle θ in degrees.
  *
  * Exact at every multiple of 90° and wherever the value is rational (sin at 30°, 150°,
- * 210°, 330°; cos at 60°, 120°, 240°, 300°; angles are reduced mod 360° exactly). Elsewhere
- * from `A.sin` / `A.cos` of the angle reduced to [0°, 45°] in radians (θ·π/180), so in
+ * 210°, 330°; cos at 60°, 120°, 240°, 300°; angles are reduced to [−45°, 45°] exactly by
+ * whole quadrants). Elsewhere from `A.sin` / `A.cos` of the reduced angle in radians (θ·π/180), so in
  * `rational` within its stated transcendental tolerance (1e-40 relative); in `decimal(n)`
  * computed with 10 guard digits and rounded once (correctly rounded unless within about
  * 10⁻ⁿ⁻¹⁰ relative of a rounding boundary); close to IEEE in `float`.
@@ -128,24 +105,55 @@ export function sinCosDegrees<T>(A: Arithmetic<T>, degrees: Numeric<T>): { sin: 
   return sinCos(A, degrees);
 }
 
-/** @internal {@link sinCosDegrees} computed directly in A. */
+/**
+ * @internal {@link sinCosDegrees} computed directly in A.
+ *
+ * The angle is reduced to t = θ − 90°·k ∈ [−45°, 45°] with k the nearest whole number of
+ * quadrants, and sin θ, cos θ are ±sin t, ±cos t (the quadrant rotations). This subtraction is
+ * exact in every arithmetic: |t| ≤ |θ|, and θ and 90°·k are whole multiples of the unit of θ's
+ * last digit (or θ is an integer), so t is too and has no more digits than θ (the argument of
+ * Sterbenz's lemma; Muller, "Elementary Functions", ch. 11, reduction by an exact multiple).
+ * Only an angle of a turn or more is first reduced mod 360° ({@link modulo}), which is also
+ * where an inexact arithmetic refuses an angle too large to reduce.
+ */
 export function sinCos<T>(A: Arithmetic<T>, degrees: Numeric<T>): { sin: T; cos: T } {
   const ninety = A.from(90);
-  const d = modulo(A, A.from(degrees), A.from(360), 'sinCosDegrees(degrees)');
-  // The quadrant from the nearest number, then corrected exactly by at most one step.
-  let q = Math.min(3, Math.floor(A.toNumber(d) / 90));
-  let t = q === 0 ? d : A.sub(d, A.from(90 * q));
-  if (A.sign(t) < 0) {
-    q -= 1;
+  const x = A.from(degrees);
+  const d =
+    A.cmp(A.abs(x), A.from(360)) < 0 ? x : modulo(A, x, A.from(360), 'sinCosDegrees(degrees)');
+  // The nearest quadrant from the nearest number, then corrected exactly by at most one step.
+  let k = Math.round(A.toNumber(d) * (1 / 90));
+  let t = k === 0 ? d : A.sub(d, A.from(90 * k));
+  if (A.cmp(t, A.from(45)) > 0) {
+    k += 1;
+    t = A.sub(t, ninety);
+  } else if (A.cmp(t, A.from(-45)) < 0) {
+    k -= 1;
     t = A.add(t, ninety);
   }
-  if (A.cmp(t, ninety) > 0) {
-    q += 1;
-    t = A.sub(t, ninety);
+  const perDegree = A.div(A.pi, A.from(180)); // π rad = 180°
+  let sin: T;
+  let cos: T;
+  // The exact cases add (t − t₀)·derivative, which is zero in value, so that an arithmetic
+  // carrying derivatives (uncertain) keeps them: d sin = cos·π/180 dt, d cos = −sin·π/180 dt.
+  if (A.isZero(t)) {
+    sin = A.mul(t, perDegree);
+    cos = A.one;
+  } else {
+    const rad = A.mul(t, perDegree);
+    cos = A.cos(rad);
+    // sin ±30° = ±1/2 exactly (the 30-60-90 triangle); its cosine √3/2 is irrational.
+    const thirty = A.from(30);
+    if (A.eq(t, thirty)) {
+      sin = A.add(A.div(A.one, A.from(2)), A.mul(A.sub(t, thirty), A.mul(cos, perDegree)));
+    } else if (A.eq(t, A.neg(thirty))) {
+      sin = A.sub(A.mul(A.add(t, thirty), A.mul(cos, perDegree)), A.div(A.one, A.from(2)));
+    } else {
+      sin = A.sin(rad);
+    }
   }
-  const { sin, cos } = firstQuadrant(A, t, ninety);
-  // sin(θ + 90°) = cos θ, cos(θ + 90°) = −sin θ (the quadrant rotations)
-  switch (((q % 4) + 4) % 4) {
+  // sin(t + 90°) = cos t, cos(t + 90°) = −sin t (the quadrant rotations)
+  switch (k & 3) {
     case 0:
       return { sin, cos };
     case 1:

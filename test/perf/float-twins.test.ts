@@ -58,12 +58,17 @@ const ellipsoid = fc.constantFrom(
 const latitude = fc.oneof(
   fc.double({ min: -90, max: 90, noNaN: true }),
   fc.constantFrom(90, -90, 0, -0, 45, 30, 89.99999999, 90.0000001, -91),
+  // the exact cases of the reduction (t = 0°, ±30°) and the quadrant boundaries
+  fc.integer({ min: -6, max: 6 }).map((k) => k * 15),
+  fc.integer({ min: -2, max: 2 }).map((k) => k * 45 + 1e-13),
   fc.constantFrom(`53°36'43.1653"N`, '12.5', null, undefined),
 );
 const longitude = fc.oneof(
   fc.double({ min: -540, max: 540, noNaN: true }),
   fc.double({ noNaN: true }),
-  fc.constantFrom(0, 180, -180, `1°39'51.9920"W`),
+  fc.constantFrom(0, -0, 180, -180, 360, -360, 359.99999999999994, `1°39'51.9920"W`),
+  fc.integer({ min: -24, max: 24 }).map((k) => k * 15),
+  fc.integer({ min: -8, max: 8 }).map((k) => k * 45 - 1e-13),
 );
 const height = fc.oneof(
   fc.double({ min: -1e4, max: 1e7, noNaN: true }),
@@ -71,6 +76,14 @@ const height = fc.oneof(
 );
 
 describe('geodesy float twins', () => {
+  it("take float's stopping tolerances as the generic code reads them", async () => {
+    const { tenToMinus, claimedDigits } = await import('../../src/geodesy/internal.js');
+    // geocentricToGeodetic passes 1e-17 and 1e-13 to its float twin for a 15-digit float
+    expect(claimedDigits(float)).toBe(15);
+    expect(tenToMinus(float, claimedDigits(float) + 2)).toBe(1e-17);
+    expect(tenToMinus(float, Math.max(1, claimedDigits(float) - 2))).toBe(1e-13);
+  });
+
   it('geodeticToGeocentric(float, …) is exactly the generic float result (or the same error)', () => {
     fc.assert(
       fc.property(latitude, longitude, height, ellipsoid, (lat, lon, h, E) => {
