@@ -8,12 +8,12 @@
  * @module field
  * @internal
  */
-import { sinCosInto, turnFloat } from '../readings/trig-float.js';
+import { PER_DEGREE, quadrantInto, sinCosInto, turnFloat } from '../readings/trig-float.js';
 import type { ReadSetup } from './internal.js';
 import type { SideShot } from './side-shot.js';
 
-/** sin and cos of the angle in progress. */
-const SC = /* @__PURE__ */ new Float64Array(2);
+/** sin and cos of the zenith angle and of the bearing of the shot in progress. */
+const SC = /* @__PURE__ */ new Float64Array(4);
 
 /**
  * The side shot `o` from the read set-up `s` as the generic code computes it in float, or
@@ -51,17 +51,39 @@ export function shotFloat(s: ReadSetup<number>, o: unknown): SideShot<number> | 
   const right = zenith > 180;
   const z = right ? 360 - zenith : zenith;
   const circle = turnFloat(right ? c - 180 : c);
-  if (circle !== circle || !sinCosInto(z, SC, 0)) return undefined;
-  const D = S * SC[0]!;
-  const rise = S * SC[1]!;
+  if (circle !== circle) return undefined;
+  const bearing = turnFloat(circle + s.orientation);
+  if (bearing !== bearing) return undefined;
+  // sin z, cos z into SC[0], SC[1] and sin β, cos β into SC[2], SC[3]: sinCosInto's steps
+  // written out (both angles are in (−360°, 360°): z in (0°, 180°], β in [0°, 360°)), so
+  // that they are compiled into this function (V8 inlined neither of two calls).
+  const sc = SC;
+  for (let j = 0; j < 4; j += 2) {
+    const d = j === 0 ? z : bearing;
+    let k = Math.round(d * (1 / 90));
+    let t = k === 0 ? d : d - 90 * k;
+    if (t > 45) {
+      k += 1;
+      t = t - 90;
+    } else if (t < -45) {
+      k -= 1;
+      t = t + 90;
+    }
+    if (t === 0 || t === 30 || t === -30) {
+      sinCosInto(d, sc, j); // the exact cases
+    } else {
+      const rad = t * PER_DEGREE;
+      quadrantInto(Math.sin(rad), Math.cos(rad), k, sc, j);
+    }
+  }
+  const D = S * sc[0]!;
+  const rise = S * sc[1]!;
   const dh = s.hi - ht + rise + 0;
   if (dh - dh !== 0 || D * D - D * D !== 0) return undefined;
-  // shotFrom: the bearing, and the point.
-  const bearing = turnFloat(circle + s.orientation);
-  if (bearing !== bearing || !sinCosInto(bearing, SC, 0)) return undefined;
+  // shotFrom: the point.
   const st = s.station;
-  const x = st.x + D * SC[0]!;
-  const y = st.y + D * SC[1]!;
+  const x = st.x + D * sc[2]!;
+  const y = st.y + D * sc[3]!;
   if (x - x !== 0 || y - y !== 0) return undefined;
   const name = r.name;
   // A name that is not text or a number: the generic code refuses it.

@@ -320,9 +320,15 @@ describe('sideShots(float, …) and sideShot(float, …) through the twin', () =
       circle: fc.oneof(
         num(-720, 720),
         fc.integer({ min: -8, max: 8 }).map((k) => k * 90),
+        // multiples of 30°: with orientation 0, bearings at sinCos's exact cases
+        fc.integer({ min: -24, max: 24 }).map((k) => k * 30),
         awkward,
       ),
-      zenith: fc.oneof(num(0, 360), fc.constantFrom(90, 180, 270, 45), awkward),
+      zenith: fc.oneof(
+        num(0, 360),
+        fc.constantFrom(90, 180, 270, 45, 30, 60, 120, 150, 210, 240, 300, 330),
+        awkward,
+      ),
       slope: fc.oneof(num(0, 3000), fc.constantFrom(0, -0, -1, 1e200), awkward),
       targetHeight: fc.oneof(num(-2, 3), fc.constantFrom(undefined, 0, 1e308)),
       name: fc.constantFrom(undefined, 'P1', 7),
