@@ -110,7 +110,9 @@ export default defineConfig([
   // gets a require() for its node: imports.
   {
     ...common,
-    entry: { cli: 'src/cli/main.ts' },
+    // dist/batch-worker.js: the script of the batch command's worker threads (the batch code
+    // only, so that a worker starts quickly); found by dist/cli.js beside itself.
+    entry: { cli: 'src/cli/main.ts', 'batch-worker': 'src/cli/batch-worker-main.ts' },
     format: ['esm'],
     platform: 'node',
     target: 'node20',

@@ -213,7 +213,9 @@ function splitPlain(line: string, fields: string[]): boolean {
     let f = at < 0 ? line.slice(from) : line.slice(from, at);
     if (f.length > 0) {
       const c = f.charCodeAt(0);
-      if (c <= 32 || f.charCodeAt(f.length - 1) <= 32) {
+      const z = f.charCodeAt(f.length - 1);
+      // White space at either end, U+FEFF and the other non-ASCII kinds included, is trimmed.
+      if (c <= 32 || z <= 32 || ((c > 126 || z > 126) && f.trim() !== f)) {
         f = f.trim();
         asIs = false;
       } else if (c === 61 || c === 43 || c === 45 || c === 64) asIs = false;
@@ -360,7 +362,7 @@ export function batchRows(
         if (
           raw.length === 0 ||
           raw.charCodeAt(0) === 35 ||
-          (raw.charCodeAt(0) <= 32 && isBlank(raw))
+          ((raw.charCodeAt(0) <= 32 || raw.charCodeAt(0) > 126) && isBlank(raw))
         )
           continue;
         let split: string[] | string;

@@ -6,11 +6,16 @@
  * for a row with no solution), naming its line, unless `--bad-rows note` asks to note it in
  * an `error` column and go on.
  *
- * The input is read in chunks and the output written in blocks of about 64 KiB. Past the
- * first MiB of input, blocks of lines (1 MiB each) are computed by `--workers` threads (by
- * default one per idle core): this one and a pool of worker threads, in turn. At most two blocks per
- * thread are in flight, and the input is not read further until the oldest is written, so
+ * The input is read in chunks and the output written in blocks of about 64 KiB. With one
+ * thread (`--workers 1`) this thread computes each chunk of lines as it is read. With
+ * `--workers N` (N ≥ 2; by default one per idle core), past the first MiB of input (computed
+ * here), this thread only reads and writes: blocks of lines (1 MiB each) go to a pool of N
+ * worker threads, each to the one with the fewest blocks in hand. At most two blocks per
+ * worker are in flight, and the input is not read further until the oldest is written, so
  * memory stays bounded and rows keep their order.
+ *
+ * Only a byte order mark at the very start of the input is removed; U+FEFF anywhere else is a
+ * character of the data (at a field's edges it is trimmed as white space is).
  *
  * @module cli
  */
@@ -21,7 +26,7 @@ import { openPending, sameFile } from './atomic.js';
 import type { PendingFile } from './atomic.js';
 import { MAX_CSV_LINE, batchKind, batchRows, headerFields } from './batch-rows.js';
 import type { BlockResult, RowOptions, RowProblem, Rows } from './batch-rows.js';
-import type { WorkerAnswer, WorkerBlock, WorkerSetup } from './batch-worker.js';
+import type { BlockBytes, WorkerAnswer, WorkerBlock, WorkerSetup } from './batch-worker.js';
 import { JobInvalid, JobUnsolvable } from './failure.js';
 import type { Io } from './program.js';
 export { BATCH_KINDS } from './tasks/batch-kinds.js';
@@ -31,14 +36,19 @@ export { MAX_CSV_LINE } from './batch-rows.js';
 /** The options of the batch command. */
 export interface BatchOptions extends RowOptions {
   out?: string;
-  /** Threads computing a large input, this one included (default: {@link idleCores}; 1: no worker threads). */
+  /**
+   * Worker threads computing a large input (default: {@link idleCores}); 1: none, this thread
+   * computes every row.
+   */
   workers?: number;
 }
 
-/** Input read on the main thread before the worker pool starts, in characters. */
+/** Input computed on the main thread before the worker pool starts, in bytes. */
 export const POOL_FROM = 1 << 20;
-/** Characters of input per block sent to a worker. */
+/** Bytes of input per block sent to a worker (whole lines: a block is cut at its last line break). */
 const BLOCK = 1 << 20;
+/** The memory of a block: room for a block and one more chunk read. */
+const BLOCK_MEMORY = BLOCK + (1 << 17);
 /** Output is written when this many characters are waiting. */
 const FLUSH = 1 << 16;
 
@@ -74,51 +84,87 @@ function joinBytes(parts: readonly Uint8Array[], length: number): Uint8Array {
   return out;
 }
 
-const utf8 = new TextDecoder();
-
-/** What the pool gives back for a block: its output as UTF-8, and its counts. */
-type PoolResult = Omit<BlockResult, 'text'> & { bytes: Uint8Array };
+/** UTF-8 as text; a byte order mark is kept (only the one starting the input is removed, before). */
+const utf8 = new TextDecoder('utf-8', { ignoreBOM: true });
 
 /** Worker threads computing blocks; answers come back by block id. */
-class Pool {
+export class Pool {
   private readonly workers: Worker[] = [];
+  /** Blocks in hand, by worker. */
+  private readonly busy: number[] = [];
   private readonly waiting = new Map<
     number,
-    { resolve: (r: PoolResult) => void; reject: (e: Error) => void }
+    { worker: number; resolve: (r: BlockBytes) => void; reject: (e: Error) => void }
   >();
+  /** Memory of blocks handed back, to be filled again. */
+  private readonly spare: ArrayBuffer[] = [];
+  /** Memory of outputs written, to be filled again (by the workers). */
+  private readonly spareOut: ArrayBuffer[] = [];
   private nextId = 0;
   private closing = false;
+  /** Why the pool cannot go on (a worker failed or stopped): every later block is refused with it. */
+  private failure: Error | undefined;
 
   constructor(script: URL, setup: WorkerSetup, n: number) {
-    const fail = (e: Error): void => {
-      for (const w of this.waiting.values()) w.reject(e);
-      this.waiting.clear();
-    };
     for (let i = 0; i < n; i++) {
       const w = new Worker(script, { workerData: { batch: setup } });
       w.on('message', (a: WorkerAnswer) => {
         const entry = this.waiting.get(a.id);
         if (!entry) return;
         this.waiting.delete(a.id);
+        this.busy[entry.worker]!--;
+        if (a.input.byteLength === BLOCK_MEMORY) this.spare.push(a.input);
         if ('failure' in a) entry.reject(new Error(`in a batch worker: ${a.failure}`));
-        else entry.resolve({ ...a.result, bytes: new Uint8Array(a.result.bytes) });
+        else
+          entry.resolve({ ...a.result, bytes: new Uint8Array(a.result.bytes, 0, a.result.length) });
       });
-      w.on('error', fail);
+      w.on('error', (e) => this.fail(e));
       w.on('exit', (code) => {
-        if (!this.closing) fail(new Error(`a batch worker stopped (exit code ${code})`));
+        if (!this.closing) this.fail(new Error(`a batch worker stopped (exit code ${code})`));
       });
       this.workers.push(w);
+      this.busy.push(0);
     }
   }
 
-  /** Hands the block's memory over to a worker (`bytes` must own its buffer). */
-  submit(bytes: Uint8Array): Promise<PoolResult> {
+  /** The number of worker threads. */
+  get size(): number {
+    return this.workers.length;
+  }
+
+  private fail(e: Error): void {
+    this.failure ??= e;
+    for (const w of this.waiting.values()) w.reject(this.failure);
+    this.waiting.clear();
+  }
+
+  /** Memory for a block ({@link BLOCK_MEMORY} bytes): one handed back, or new. */
+  memory(): Uint8Array {
+    return new Uint8Array(this.spare.pop() ?? new ArrayBuffer(BLOCK_MEMORY));
+  }
+
+  /** Keeps the memory of an output that is written, for a later block's output. */
+  written(bytes: Uint8Array): void {
+    if (this.spareOut.length < 2 * this.workers.length)
+      this.spareOut.push(bytes.buffer as ArrayBuffer);
+  }
+
+  /**
+   * Hands the first `length` bytes of `bytes` (which must own its buffer) over to the worker
+   * with the fewest blocks in hand, with memory for its output if some is kept.
+   */
+  submit(bytes: Uint8Array, length: number): Promise<BlockBytes> {
+    if (this.failure) return Promise.reject(this.failure);
     const id = this.nextId++;
-    const p = new Promise<PoolResult>((resolve, reject) =>
-      this.waiting.set(id, { resolve, reject }),
+    let worker = 0;
+    for (let i = 1; i < this.busy.length; i++) if (this.busy[i]! < this.busy[worker]!) worker = i;
+    const p = new Promise<BlockBytes>((resolve, reject) =>
+      this.waiting.set(id, { worker, resolve, reject }),
     );
-    const block: WorkerBlock = { id, bytes: bytes.buffer as ArrayBuffer };
-    this.workers[id % this.workers.length]!.postMessage(block, [block.bytes]);
+    this.busy[worker]!++;
+    const out = this.spareOut.pop();
+    const block: WorkerBlock = { id, bytes: bytes.buffer as ArrayBuffer, length, out };
+    this.workers[worker]!.postMessage(block, out ? [block.bytes, out] : [block.bytes]);
     return p;
   }
 
@@ -166,12 +212,14 @@ export async function runBatch(kind: string, file: string, o: BatchOptions, io: 
     waitingOut += text;
     if (waitingOut.length >= FLUSH) flush();
   };
-  const emitBytes = (bytes: Uint8Array): void => {
+  /** Writes bytes; true if done with them (written or copied), so their memory can be used again. */
+  const emitBytes = (bytes: Uint8Array): boolean => {
     flush();
-    if (bytes.length === 0) return;
+    if (bytes.length === 0) return true;
     if (pending) pending.write(bytes);
-    else if (io.stdoutBytes) io.stdoutBytes(bytes);
+    else if (io.stdoutBytes) return io.stdoutBytes(bytes) === true;
     else io.stdout(utf8.decode(bytes));
+    return true;
   };
   let rows = 0;
   let noted = 0;
@@ -198,41 +246,59 @@ export async function runBatch(kind: string, file: string, o: BatchOptions, io: 
   let read = 0;
   const workers = o.workers ?? idleCores();
   let pool: Pool | undefined;
-  const inFlight: Promise<PoolResult | BlockResult>[] = [];
-  let dispatched = 0;
-  let block: Uint8Array[] = [];
-  let blockSize = 0;
+  const inFlight: Promise<BlockBytes>[] = [];
+  let block: Uint8Array = new Uint8Array(0); // the block being gathered (pool mode)
+  let fill = 0; // its bytes so far
 
   // The workers number lines from 1 in each block; the blocks are taken in order, so the
   // lines before each are known when it is taken.
   const takeOldest = async (): Promise<void> => {
     const r = await inFlight.shift()!;
-    if ('text' in r) emit(r.text);
-    else emitBytes(r.bytes);
+    if (emitBytes(r.bytes)) pool!.written(r.bytes);
     if (r.problem) r.problem.line += lineNo;
     lineNo += r.lines;
     count(r);
   };
 
-  /** Sends the block being gathered to the pool; waits for the oldest when enough are in flight. */
-  const dispatch = async (): Promise<void> => {
-    if (blockSize === 0) return;
-    const bytes = joinBytes(block, blockSize);
-    block = [];
-    blockSize = 0;
-    // One block in `workers` is computed here, the others by the pool's threads.
-    if (dispatched++ % workers === workers - 1)
-      inFlight.push(Promise.resolve(engine!.block(utf8.decode(bytes), 1)));
-    else {
-      const p = pool!.submit(bytes);
-      p.catch(() => {}); // awaited in order; a failure is reported there
-      inFlight.push(p);
+  /** Every block sent is written (in order), then the line that is too long is refused. */
+  const tooLong = async (): Promise<never> => {
+    while (inFlight.length > 0) await takeOldest();
+    throw lineTooLong(lineNo + 1);
+  };
+
+  /**
+   * Sends the whole lines gathered to the pool (at the end of the input, all that is left),
+   * keeping a last partial line for the next block; waits for the oldest block when enough
+   * are in flight.
+   */
+  const dispatch = async (end: boolean): Promise<void> => {
+    if (fill === 0) return;
+    const full = block;
+    const cut = end ? fill : full.lastIndexOf(10, fill - 1) + 1;
+    // No line break in a block's worth of bytes: a line longer than any that is read.
+    if (cut === 0) await tooLong();
+    block = pool!.memory();
+    block.set(full.subarray(cut, fill));
+    fill -= cut;
+    const p = pool!.submit(full, cut);
+    p.catch(() => {}); // awaited in order; a failure is reported there
+    inFlight.push(p);
+    while (inFlight.length >= 2 * pool!.size) await takeOldest();
+  };
+
+  /** Input read (in pool mode), gathered into blocks. */
+  const gather = async (bytes: Uint8Array): Promise<void> => {
+    for (let at = 0; at < bytes.length;) {
+      const n = Math.min(bytes.length - at, block.length - fill);
+      block.set(bytes.subarray(at, at + n), fill);
+      fill += n;
+      at += n;
+      if (fill >= BLOCK) await dispatch(false);
     }
-    while (inFlight.length >= 2 * workers) await takeOldest();
   };
 
   /** Whole lines of input as UTF-8 (each ending with a line break, but perhaps the last). */
-  const consume = async (bytes: Uint8Array): Promise<void> => {
+  const consume = (bytes: Uint8Array): void => {
     if (!engine) {
       // Find the header: the first line that is neither blank nor a comment.
       let pos = 0;
@@ -253,32 +319,22 @@ export async function runBatch(kind: string, file: string, o: BatchOptions, io: 
       bytes = bytes.subarray(pos);
     }
     read += bytes.length;
-    if (!pool && workers > 1 && io.workerScript && read > POOL_FROM)
-      pool = new Pool(io.workerScript, setup!, workers - 1);
-    if (pool) {
-      block.push(bytes);
-      blockSize += bytes.length;
-      if (blockSize >= BLOCK) await dispatch();
-      return;
-    }
     const r = engine!.block(utf8.decode(bytes), lineNo + 1);
     lineNo += r.lines;
     emit(r.text);
     count(r);
-  };
-
-  /** Every block sent is written (in order), then the line that is too long is refused. */
-  const tooLong = async (): Promise<never> => {
-    if (pool) {
-      await dispatch();
-      while (inFlight.length > 0) await takeOldest();
+    // Past the first MiB, the rest goes to worker threads.
+    if (workers > 1 && io.workerScript && read > POOL_FROM) {
+      pool = new Pool(io.workerScript, setup!, workers);
+      block = pool.memory();
     }
-    throw lineTooLong(lineNo + 1);
   };
 
   try {
     if (o.out !== undefined) pending = openPending(o.out);
-    let rest: Uint8Array = new Uint8Array(0);
+    const none = new Uint8Array(0);
+    let rest: Uint8Array = none;
+    let start = true; // the input's first three bytes not seen yet
     const chunks = (input as AsyncIterable<Uint8Array>)[Symbol.asyncIterator]();
     for (;;) {
       let next: IteratorResult<Uint8Array>;
@@ -288,7 +344,24 @@ export async function runBatch(kind: string, file: string, o: BatchOptions, io: 
         throw cannotRead(file, e);
       }
       if (next.done) break;
-      const chunk = typeof next.value === 'string' ? Buffer.from(next.value) : next.value;
+      let chunk: Uint8Array = typeof next.value === 'string' ? Buffer.from(next.value) : next.value;
+      if (start) {
+        // A byte order mark is removed at the very start of the input only.
+        if (rest.length > 0) {
+          chunk = joinBytes([rest, chunk], rest.length + chunk.length);
+          rest = none;
+        }
+        if (chunk.length < 3) {
+          rest = chunk;
+          continue;
+        }
+        if (chunk[0] === 0xef && chunk[1] === 0xbb && chunk[2] === 0xbf) chunk = chunk.subarray(3);
+        start = false;
+      }
+      if (pool) {
+        await gather(chunk);
+        continue;
+      }
       const cut = chunk.lastIndexOf(10);
       if (cut < 0) {
         rest = rest.length === 0 ? chunk : joinBytes([rest, chunk], rest.length + chunk.length);
@@ -298,14 +371,19 @@ export async function runBatch(kind: string, file: string, o: BatchOptions, io: 
             ? chunk.subarray(0, cut + 1)
             : joinBytes([rest, chunk.subarray(0, cut + 1)], rest.length + cut + 1);
         rest = chunk.subarray(cut + 1);
-        await consume(lines);
+        consume(lines);
+        if (pool) {
+          await gather(rest);
+          rest = none;
+          continue;
+        }
       }
       // A line may take up to 4 bytes a character: decoded, it says whether it is too long.
       if (rest.length > MAX_CSV_LINE && utf8.decode(rest).length > MAX_CSV_LINE) await tooLong();
     }
-    if (rest.length > 0) await consume(rest);
+    if (rest.length > 0) consume(rest);
     if (pool) {
-      await dispatch();
+      await dispatch(true);
       while (inFlight.length > 0) await takeOldest();
     }
     if (!engine) {

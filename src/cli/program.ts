@@ -34,8 +34,12 @@ export interface Io {
   stderrIsTTY: boolean;
   /** The standard input as text, for `run -` (default: the process's standard input). */
   stdin?: () => Promise<string>;
-  /** Writes bytes (UTF-8) to the standard output, where the batch command has them already. */
-  stdoutBytes?: (bytes: Uint8Array) => void;
+  /**
+   * Writes bytes (UTF-8) to the standard output, where the batch command has them already;
+   * returns `true` only if done with them (written or copied), so that their memory may be
+   * filled again.
+   */
+  stdoutBytes?: (bytes: Uint8Array) => boolean | void;
   /** The script that runs batch workers (the command's own file); without it a batch runs on one thread. */
   workerScript?: URL;
 }
@@ -380,7 +384,7 @@ export function program(io: Io, outcome: { exitCode: number } = { exitCode: EXIT
     .addOption(
       new Option(
         '--workers <n>',
-        'threads computing inputs over 1 MiB, this one included (default: one per idle core, the cores less the load average; 1: this one only)',
+        'worker threads computing an input past its first MiB while this one reads and writes (default: one per idle core, the cores less the load average; 1: no worker threads, this one computes every row)',
       ).argParser(workersOption),
     )
     .action(async (kind: string, file: string, o: BatchOptions) => {

@@ -2,7 +2,8 @@
 // stderr is a terminal; with --out nothing is written unless every row is computed.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { existsSync, mkdirSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
-import { join } from 'node:path';
+import { dirname, join } from 'node:path';
+import { pathToFileURL } from 'node:url';
 import { runBatch } from '../../src/cli/batch';
 import { bundleCli, cleanUp, cli, tempFolder } from './helpers';
 
@@ -221,8 +222,7 @@ describe('quadspread batch', () => {
   });
 
   it('with worker threads, writes the same bytes as on one thread, and names the right line of a late bad row', () => {
-    // About 5 MB: the first MiB on this thread, then blocks of a MiB computed in turn by a
-    // worker thread and by this one.
+    // About 5 MB: the first MiB on this thread, then blocks of a MiB computed by the workers.
     let text = 'id,east1,north1,east2,north2\n';
     for (let i = 0; i < 100000; i++)
       text += `P${i},${(i * 7.31) % 1000},${(i * 3.17) % 997},${(i * 1.11) % 1009},${i % 10}\n`;
@@ -236,20 +236,176 @@ describe('quadspread batch', () => {
     const out = join(dir, 'many-out.csv');
     expect(cli(['batch', 'inverses', f, '--workers', '3', '--out', out]).code).toBe(0);
     expect(readFileSync(out, 'utf8')).toBe(one.stdout);
+    const lines = text.split('\n');
     for (const at of [39000, 50000, 99000]) {
-      const lines = text.split('\n');
-      lines[at] = 'P,1,2,x,4';
-      const bad = cli([
-        'batch',
-        'inverses',
-        csv(`late-bad-${at}.csv`, lines.join('\n')),
-        '--workers',
-        '2',
-      ]);
-      expect(bad.code).toBe(2);
-      expect(bad.stderr).toContain(`line ${at + 1}, column "east2": "x" is not a number`);
-      expect(bad.stdout.trim().split('\n')).toHaveLength(at);
+      const bad = [...lines];
+      bad[at] = 'P,1,2,x,4';
+      const g = csv(`late-bad-${at}.csv`, bad.join('\n'));
+      const r = cli(['batch', 'inverses', g, '--workers', '2']);
+      expect(r.code).toBe(2);
+      expect(r.stderr).toContain(`line ${at + 1}, column "east2": "x" is not a number`);
+      expect(r.stdout.trim().split('\n')).toHaveLength(at);
+      expect(r.stdout).toBe(one.stdout.split('\n').slice(0, at).join('\n') + '\n');
+      // --out: no file at all, and nothing left in its folder.
+      const folder = join(dir, `late-bad-out-${at}`);
+      mkdirSync(folder);
+      const o = cli(['batch', 'inverses', g, '--workers', '2', '--out', join(folder, 'r.csv')]);
+      expect(o.code).toBe(2);
+      expect(readdirSync(folder)).toEqual([]);
+      // --bad-rows note: the batch goes on; the row is noted at its place.
+      const noted = cli(['batch', 'inverses', g, '--workers', '2', '--bad-rows', 'note']);
+      expect(noted.code).toBe(0);
+      expect(noted.stderr).toBe('1 row not computed: see the error column\n');
+      const rows = noted.stdout.split('\n');
+      expect(rows).toHaveLength(100002);
+      expect(rows[at]).toBe('P,1,2,x,4,,,,"column ""east2"": ""x"" is not a number"');
+      expect(rows[at + 1]).toBe(`${one.stdout.split('\n')[at + 1]},`);
     }
+  });
+
+  it('with a pool, rows keep their order over many blocks of mixed lines, the same bytes as one thread', () => {
+    // About 9 MB (eight blocks and more) with quoted fields, CRLF, comments, blank lines,
+    // characters of several bytes and bad rows noted.
+    let text = '# made for the test\nid,east1,north1,east2,north2\n';
+    for (let i = 0; i < 150000; i++) {
+      const e = ((i * 7.31) % 1000).toFixed(3);
+      if (i % 1009 === 0) text += '# a comment\n\n';
+      if (i % 13 === 0) text += `"Pt ${i}, ünï ✓",${e},2,3,${i % 7}\r\n`;
+      else if (i % 4999 === 0) text += `B${i},${e},2,three,4\n`;
+      else text += `Ω${i},${e},${i % 11},3.5,4\n`;
+    }
+    const f = csv('mixed.csv', text);
+    const args = ['batch', 'inverses', f, '--bad-rows', 'note'];
+    const one = cli([...args, '--workers', '1']);
+    expect(one.code).toBe(0);
+    expect(Buffer.byteLength(one.stdout)).toBeGreaterThan(8 << 20);
+    // Every row in order: the ids of the output are those of the input.
+    const ids = one.stdout
+      .split('\n')
+      .slice(1, -1)
+      .map((l) => /^"?(?:Pt |Ω|B)?(\d+)/.exec(l)?.[1]);
+    expect(ids).toEqual(Array.from({ length: 150000 }, (_, i) => String(i)));
+    for (const n of ['2', '3', '5']) {
+      const r = cli([...args, '--workers', n]);
+      expect(r.code).toBe(0);
+      expect(r.stdout).toBe(one.stdout);
+      expect(r.stderr).toBe(one.stderr);
+    }
+  });
+
+  it('with a pool, the blocks are computed by the worker threads', async () => {
+    // A spy worker script: runs the real worker and logs each block it receives.
+    const real = join(dirname(await bundleCli()), 'batch-worker.js');
+    const log = join(dir, 'spy.log');
+    const spy = join(dirname(real), 'spy-worker.js');
+    writeFileSync(
+      spy,
+      `import { appendFileSync } from 'node:fs';\n` +
+        `import { parentPort, threadId } from 'node:worker_threads';\n` +
+        `await import(${JSON.stringify(pathToFileURL(real).href)});\n` +
+        `parentPort.on('message', (m) => appendFileSync(${JSON.stringify(log)}, threadId + ' ' + m.id + '\\n'));\n`,
+    );
+    let text = 'id,east1,north1,east2,north2\n';
+    for (let i = 0; i < 300000; i++) text += `P${i},${i % 1000},${i % 997},${i % 1009},1\n`;
+    const f = csv('spied.csv', text);
+    const out: string[] = [];
+    await runBatch(
+      'inverses',
+      f,
+      { arithmetic: 'float', digits: 10, workers: 2 },
+      {
+        stdout: (t) => out.push(t),
+        stderr: () => {},
+        stderrIsTTY: false,
+        workerScript: pathToFileURL(spy),
+      },
+    );
+    expect(out.join('')).toBe(cli(['batch', 'inverses', f, '--workers', '1']).stdout);
+    const seen = readFileSync(log, 'utf8')
+      .trim()
+      .split('\n')
+      .map((l) => l.split(' ').map(Number));
+    // About 6 MiB: five blocks past the first MiB, by both threads.
+    expect(seen.length).toBeGreaterThanOrEqual(4);
+    expect(new Set(seen.map(([t]) => t)).size).toBe(2);
+    expect(seen.map(([, id]) => id).sort((a, b) => a! - b!)).toEqual(seen.map((_, i) => i));
+  });
+
+  it('a worker that stops is an error, not a hang, and leaves no --out file', async () => {
+    let text = 'id,east1,north1,east2,north2\n';
+    for (let i = 0; i < 60000; i++) text += `P${i},${i % 1000},${i % 997},${i % 1009},1\n`;
+    const f = csv('crash.csv', text);
+    const scripts = {
+      exits: `import { parentPort } from 'node:worker_threads';\nparentPort.on('message', () => process.exit(7));\n`,
+      throws: `import { parentPort } from 'node:worker_threads';\nparentPort.on('message', () => { throw new Error('boom'); });\n`,
+      quiet: `import { parentPort } from 'node:worker_threads';\nparentPort.on('message', () => {});\nsetTimeout(() => process.exit(0), 300);\n`,
+    };
+    for (const [name, code] of Object.entries(scripts)) {
+      const script = join(dir, `crash-${name}.mjs`);
+      writeFileSync(script, code);
+      const folder = join(dir, `crash-out-${name}`);
+      mkdirSync(folder);
+      await expect(
+        runBatch(
+          'inverses',
+          f,
+          { arithmetic: 'float', digits: 10, workers: 2, out: join(folder, 'r.csv') },
+          {
+            stdout: () => {},
+            stderr: () => {},
+            stderrIsTTY: false,
+            workerScript: pathToFileURL(script),
+          },
+        ),
+      ).rejects.toThrow(name === 'throws' ? 'boom' : /a batch worker stopped \(exit code [07]\)/);
+      expect(readdirSync(folder)).toEqual([]);
+    }
+    // A worker script that is not there.
+    await expect(
+      runBatch(
+        'inverses',
+        f,
+        { arithmetic: 'float', digits: 10, workers: 2 },
+        {
+          stdout: () => {},
+          stderr: () => {},
+          stderrIsTTY: false,
+          workerScript: pathToFileURL(join(dir, 'no-such-worker.js')),
+        },
+      ),
+    ).rejects.toThrow();
+  });
+
+  it('removes a byte order mark at the start of the file only; U+FEFF at a later line start is trimmed as white space, wherever the chunks of input end', () => {
+    const head = 'id,east1,north1,east2,north2\n';
+    // A line starting exactly at 64 KiB, where the file's second chunk of input starts, and
+    // one in the middle of a chunk: both written the same way.
+    let text = '\uFEFF' + head;
+    let i = 0;
+    while (Buffer.byteLength(text) < 65536 - 40) text += `P${i++},0,0,3,4\n`;
+    const room = 65536 - Buffer.byteLength(text);
+    text += `Q,${'0'.repeat(room - 10)}0,0,3,4\n`;
+    expect(Buffer.byteLength(text)).toBe(65536);
+    text += '\uFEFFA,0,0,3,4\nX,0,0,3,4\n\uFEFFB,0,0,3,4\n';
+    const r = cli(['batch', 'inverses', csv('bom.csv', text)]);
+    expect(r.code).toBe(0);
+    const out = r.stdout.split('\n');
+    expect(out[0]).toBe('id,east1,north1,east2,north2,quadrance,distance,bearing');
+    expect(out.slice(-4, -1)).toEqual([
+      'A,0,0,3,4,25.00000000,5.000000000,36.86989765',
+      'X,0,0,3,4,25.00000000,5.000000000,36.86989765',
+      'B,0,0,3,4,25.00000000,5.000000000,36.86989765',
+    ]);
+    expect(r.stdout).not.toContain('\uFEFF');
+    // The header may follow comment lines: a U+FEFF there is no byte order mark, but the
+    // header's names are trimmed.
+    const late = cli(['batch', 'inverses', '-'], {
+      input: '# notes\n\uFEFFeast1,north1,east2,north2\n0,0,3,4\n',
+    });
+    expect(late.code).toBe(0);
+    expect(late.stdout).toBe(
+      'east1,north1,east2,north2,quadrance,distance,bearing\n0,0,3,4,25.00000000,5.000000000,36.86989765\n',
+    );
   });
 
   it('exits 2 for a header without the needed columns', () => {

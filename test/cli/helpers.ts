@@ -3,7 +3,7 @@
 // folder, then run with node.
 import { build } from 'esbuild';
 import { spawnSync } from 'node:child_process';
-import { mkdtempSync, rmSync } from 'node:fs';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 
@@ -23,17 +23,25 @@ export function tempFolder(): string {
   return dir;
 }
 
-/** Bundles src/cli/main.ts once. */
+/**
+ * Bundles src/cli/main.ts once, with the script of the batch command's worker threads beside
+ * it as `npm run build` puts them (dist/cli.js and dist/batch-worker.js, ES modules).
+ */
 export async function bundleCli(): Promise<string> {
   if (bundled) return bundled;
-  const out = join(tempFolder(), 'cli.mjs');
+  const dir = tempFolder();
+  writeFileSync(join(dir, 'package.json'), '{ "type": "module" }\n');
+  const out = join(dir, 'cli.js');
   await build({
-    entryPoints: [resolve(__dirname, '../../src/cli/main.ts')],
+    entryPoints: {
+      cli: resolve(__dirname, '../../src/cli/main.ts'),
+      'batch-worker': resolve(__dirname, '../../src/cli/batch-worker-main.ts'),
+    },
     bundle: true,
     platform: 'node',
     format: 'esm',
     target: 'node20',
-    outfile: out,
+    outdir: dir,
     absWorkingDir: resolve(__dirname, '../..'),
     logLevel: 'error',
     // commander is CommonJS: give the ES module bundle a require() for its node: imports.
