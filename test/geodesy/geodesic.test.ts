@@ -204,7 +204,7 @@ describe('geodesicInverse against GeographicLib', () => {
 });
 
 describe('geodesicDirect against GeographicLib', () => {
-  it('random starts, azimuths and distances up to 20 000 km: end point within 15 nm, azimuth within 1e-12° of GeographicLib, or 15 nm and 2e-12° of the decimal(40) solution where the two double solutions differ by more; never 30 nm from GeographicLib', () => {
+  it('random starts, azimuths and distances up to 20 000 km: end point within 15 nm, azimuth within 1e-12° of GeographicLib, or 15 nm and 2e-12° (more within 3° of a pole) of the decimal(40) solution where the two double solutions differ by more; never 30 nm from GeographicLib', () => {
     fc.assert(
       fc.property(
         lat,
@@ -240,8 +240,18 @@ describe('geodesicDirect against GeographicLib', () => {
             // worst of 30 000 random problems: 1.07e-12° (a 20 000 km line from 0.013° off the
             // south pole); 1.71e-12° on the line from (−89.99650294314442, −179.99999966472387)
             // at azimuth −19.674377724390684 for 19 998 134.66386782 m, which read through its
-            // shortest decimal text gave 2.05e-12° and failed a full run
-            expect(dAz(r.azimuth2, Number(z.azimuth2.toString()))).toBeLessThan(2e-12);
+            // shortest decimal text gave 2.05e-12° and failed a full run.
+            // Near the poles the azimuth is ill-conditioned (a meridian's direction turns by 1° for
+            // 1° of longitude, whatever the distance from the pole), so within 3° of a pole the
+            // bound is 6e-12° over the nearer end's distance from its pole in degrees. Measured on
+            // 300 000 random lines (half from within 2° of a pole) against decimal(40): the
+            // error times that distance was at most 4.1e-12 (GeographicLib's own, 2.5e-12); a
+            // line from 0.0061° off the south pole to 0.077° off the north pole
+            // (−89.99394291984729, −179.99999966472387, azimuth 40.432375219954274,
+            // 19 994 837.668731157 m) is 2.50e-12° from the decimal(40) azimuth
+            const polar = Math.min(90 - Math.abs(lat1), 90 - Math.abs(zl));
+            const tol = Math.max(2e-12, 6e-12 / polar);
+            expect(dAz(r.azimuth2, Number(z.azimuth2.toString()))).toBeLessThan(tol);
           }
           expect(off).toBeLessThan(30e-9);
         },
