@@ -78,16 +78,18 @@ const own = (table, k) => (Object.hasOwn(table, k) ? table[k] : undefined);
 
 /** The helpers: each is exactly the float arithmetic's operation (src/arithmetic/float.ts). */
 const HELPER_SOURCE = `import { float as __qsFloat } from './arithmetic/float.js';
+import { floatSin as __qsFloatSin, floatCos as __qsFloatCos } from './arithmetic/float-trig.js';
 export { __qsFloat };
 export const __qsDiv = (a, b) => { const r = a / b; return r - r === 0 ? r : __qsFloat.div(a, b); };
 export const __qsSqrt = (a) => { const r = Math.sqrt(a); return r - r === 0 ? r : __qsFloat.sqrt(a); };
 export const __qsCmp = (a, b) => (a < b ? -1 : a > b ? 1 : 0);
 export const __qsSign = (a) => (a < 0 ? -1 : a > 0 ? 1 : 0);
 export const __qsFrom = (x) => (typeof x === 'number' && x - x === 0 ? x : __qsFloat.from(x));
-// The transcendental functions: Math's on finite input with a finite result (what float does
-// there), float's own operation (with its checks) for anything else.
-export const __qsSin = (x) => (x - x === 0 ? Math.sin(x) : __qsFloat.sin(x));
-export const __qsCos = (x) => (x - x === 0 ? Math.cos(x) : __qsFloat.cos(x));
+// The transcendental functions: on finite input with a finite result what float computes there
+// (sin and cos: FDLIBM's kernels below π/4, src/arithmetic/float-trig.ts, and Math's past it;
+// the others: Math's), float's own operation (with its checks) for anything else.
+export const __qsSin = (x) => (x - x === 0 ? __qsFloatSin(x) : __qsFloat.sin(x));
+export const __qsCos = (x) => (x - x === 0 ? __qsFloatCos(x) : __qsFloat.cos(x));
 export const __qsExp = (x) => { const r = Math.exp(x); return r - r === 0 && x - x === 0 ? r : __qsFloat.exp(x); };
 export const __qsLog = (x) => (x > 0 && x < Infinity ? Math.log(x) : __qsFloat.log(x));
 export const __qsAtan2 = (y, x) => (y - y === 0 && x - x === 0 && (y !== 0 || x !== 0) ? Math.atan2(y, x) : __qsFloat.atan2(y, x));

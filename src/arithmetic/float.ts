@@ -13,6 +13,7 @@ import {
   zeroVectorAngle,
 } from '../errors.js';
 import type { Arithmetic, Numeric } from './types.js';
+import { floatCos, floatSin } from './float-trig.js';
 import { ratioToNumber, ratioToPrecision, readInput, readRatio } from './exact.js';
 
 /** The type of the {@link float} arithmetic (inexact: `E = false`). */
@@ -149,8 +150,9 @@ export const float: FloatArithmetic = /* @__PURE__ */ Object.freeze<FloatArithme
     return ratioToPrecision(r.n, r.d, digits);
   },
   pi: Math.PI,
-  sin: (x) => Math.sin(ok1('sin', x)),
-  cos: (x) => Math.cos(ok1('cos', x)),
+  // (FDLIBM's kernels compiled in below π/4, Math.sin and Math.cos past it: float-trig.ts)
+  sin: (x) => floatSin(ok1('sin', x)),
+  cos: (x) => floatCos(ok1('cos', x)),
   atan2(y, x) {
     ok2('atan2', y, x, 0);
     if (y === 0 && x === 0) throw zeroVectorAngle('float.atan2(y, x)');

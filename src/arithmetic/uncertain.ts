@@ -19,6 +19,7 @@ import {
 } from '../errors.js';
 import type { Arithmetic, Numeric } from './types.js';
 import { float } from './float.js';
+import { floatCos, floatSin } from './float-trig.js';
 
 /**
  * A named input of an uncertain computation: its measured value and its standard
@@ -648,14 +649,14 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
     sin(x) {
       operand(name, 'sin', x);
       return x.inputs.length === 0
-        ? constant(Math.sin(x.value))
-        : scaledF(Math.sin(x.value), x, Math.cos(x.value));
+        ? constant(floatSin(x.value))
+        : scaledF(floatSin(x.value), x, floatCos(x.value));
     },
     cos(x) {
       operand(name, 'cos', x);
       return x.inputs.length === 0
-        ? constant(Math.cos(x.value))
-        : scaledF(Math.cos(x.value), x, -Math.sin(x.value));
+        ? constant(floatCos(x.value))
+        : scaledF(floatCos(x.value), x, -floatSin(x.value));
     },
     exp(x) {
       operand(name, 'exp', x);

@@ -8,7 +8,8 @@
  * @module field
  * @internal
  */
-import { PER_DEGREE, quadrantInto, sinCosInto, turnFloat } from '../readings/trig-float.js';
+import { sinCosQuadrantInto } from '../arithmetic/float-trig.js';
+import { PER_DEGREE, sinCosInto, turnFloat } from '../readings/trig-float.js';
 import type { ReadSetup } from './internal.js';
 import type { SideShot } from './side-shot.js';
 
@@ -72,8 +73,7 @@ export function shotFloat(s: ReadSetup<number>, o: unknown): SideShot<number> | 
     if (t === 0 || t === 30 || t === -30) {
       sinCosInto(d, sc, j); // the exact cases
     } else {
-      const rad = t * PER_DEGREE;
-      quadrantInto(Math.sin(rad), Math.cos(rad), k, sc, j);
+      sinCosQuadrantInto(t * PER_DEGREE, k, sc, j);
     }
   }
   const D = S * sc[0]!;

@@ -10,7 +10,8 @@
  * @module geodesy
  * @internal
  */
-import { PER_DEGREE, quadrantInto, sinCosInto } from '../readings/trig-float.js';
+import { sinCosQuadrantInto } from '../arithmetic/float-trig.js';
+import { PER_DEGREE, sinCosInto } from '../readings/trig-float.js';
 
 /** sin φ, cos φ, sin λ, cos λ of the call in progress (read before any other call). */
 const SCRATCH = /* @__PURE__ */ new Float64Array(4);
@@ -57,8 +58,7 @@ export function geocentricInto(
     if (t === 0 || t === 30 || t === -30) {
       sinCosInto(d, sc, j); // the exact cases
     } else {
-      const rad = t * PER_DEGREE;
-      quadrantInto(Math.sin(rad), Math.cos(rad), k, sc, j);
+      sinCosQuadrantInto(t * PER_DEGREE, k, sc, j);
     }
   }
   const sp = sc[0]!;

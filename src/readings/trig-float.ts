@@ -7,6 +7,7 @@
  * @module readings
  * @internal
  */
+import { floatCos, sinCosQuadrantInto } from '../arithmetic/float-trig.js';
 
 /** float.div(float.pi, 180): π rad = 180°. @internal */
 export const PER_DEGREE = Math.PI / 180;
@@ -46,8 +47,7 @@ export function sinCosInto(degrees: number, out: Float64Array, at: number): bool
     t = t + 90;
   }
   if (t === 0 || t === 30 || t === -30) return exactInto(t, k, out, at);
-  const rad = t * PER_DEGREE;
-  quadrantInto(Math.sin(rad), Math.cos(rad), k, out, at);
+  sinCosQuadrantInto(t * PER_DEGREE, k, out, at);
   return true;
 }
 
@@ -56,7 +56,7 @@ function exactInto(t: number, k: number, out: Float64Array, at: number): boolean
   if (t === 0) {
     quadrantInto(t * PER_DEGREE, 1, k, out, at);
   } else {
-    const cos = Math.cos(t * PER_DEGREE);
+    const cos = floatCos(t * PER_DEGREE);
     const sin =
       t === 30 ? 1 / 2 + (t - 30) * (cos * PER_DEGREE) : (t + 30) * (cos * PER_DEGREE) - 1 / 2;
     quadrantInto(sin, cos, k, out, at);
