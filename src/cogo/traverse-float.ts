@@ -31,8 +31,8 @@ const COURSE = /* @__PURE__ */ new Float64Array(3);
  * loop of latitude/departure courses slower too.)
  */
 function bearingCourse(c: { bearing?: unknown; distance?: unknown }): boolean {
-  if (!isNum(c.distance)) return false;
   const d = c.distance;
+  if (!isNum(d)) return false;
   const b = c.bearing;
   let az: number;
   if (typeof b === 'number' && b - b === 0) {
@@ -95,16 +95,20 @@ export function traverseFloat(
       la = COURSE[0]!;
       de = COURSE[1]!;
       d = COURSE[2]!;
-    } else if (isNum(c.latitude) && isNum(c.departure)) {
-      la = c.latitude;
-      de = c.departure;
-      if (c.distance === undefined) d = Math.sqrt(la * la + de * de);
-      else if (isNum(c.distance)) d = c.distance;
-      else return undefined;
     } else {
-      return undefined;
+      // Each field read once; finite numbers and a length not negative (NaN fails d >= 0), in
+      // one test after the reads (a check per field before it cost a tenth of the traverse).
+      const lat = c.latitude;
+      const dep = c.departure;
+      const dist = c.distance;
+      if (typeof lat !== 'number' || typeof dep !== 'number') return undefined;
+      la = lat;
+      de = dep;
+      if (dist === undefined) d = Math.sqrt(la * la + de * de);
+      else if (typeof dist === 'number') d = dist;
+      else return undefined;
     }
-    if (d < 0 || la - la !== 0 || de - de !== 0 || d - d !== 0) return undefined;
+    if (!(d >= 0) || la - la !== 0 || de - de !== 0 || d - d !== 0) return undefined;
     // (0.5: the adjusted values are numbers from the start, so that writing them keeps the
     // object's layout)
     legs[i] = {
