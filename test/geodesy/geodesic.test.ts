@@ -8,6 +8,7 @@ import { decimal } from '../../src/arithmetic/decimal.js';
 import { float } from '../../src/arithmetic/float.js';
 import { uncertain } from '../../src/arithmetic/uncertain.js';
 import { QuadspreadError } from '../../src/errors.js';
+import { exactDecimal } from '../exact-decimal.js';
 import {
   WGS84,
   GRS80,
@@ -34,32 +35,7 @@ function fromAntipode(lat1: number, lon1: number, lat2: number, lon2: number): n
   return Math.acos(Math.min(1, Math.max(-1, c))) / d2r;
 }
 
-/**
- * The exact decimal text of a double (mantissa · 2^e expanded with BigInt), so that a 40-digit
- * reference solves the problem the double states: decimal(n) reads a JS number through its
- * shortest round-trip text, which near ±180° differs from the double by up to 1e-14° — and a
- * short north–south line turns that into 1e-11° of azimuth.
- */
-function exactDecimal(x: number): string {
-  if (x === 0) return '0';
-  const view = new DataView(new ArrayBuffer(8));
-  view.setFloat64(0, x);
-  const bits = view.getBigUint64(0);
-  const sign = bits >> 63n ? '-' : '';
-  const expBits = Number((bits >> 52n) & 0x7ffn);
-  let m = bits & ((1n << 52n) - 1n);
-  let e = expBits - 1075;
-  if (expBits === 0) e = -1074;
-  else m |= 1n << 52n;
-  if (e >= 0) return `${sign}${(m << BigInt(e)).toString()}`;
-  // m / 2^k = m·5^k / 10^k
-  const k = -e;
-  const digits = (m * 5n ** BigInt(k)).toString().padStart(k + 1, '0');
-  const text = `${digits.slice(0, -k)}.${digits.slice(-k)}`.replace(/0+$/, '').replace(/\.$/, '');
-  return `${sign}${text}`;
-}
-
-describe('exactDecimal, the helper of this test file', () => {
+describe("exactDecimal, the tests' helper (test/exact-decimal.ts)", () => {
   it('expands doubles exactly', () => {
     expect(exactDecimal(0.1)).toBe('0.1000000000000000055511151231257827021181583404541015625');
     expect(exactDecimal(-180)).toBe('-180');
