@@ -38,7 +38,11 @@
 /** The last of the thresholds above: below it sin and cos are the kernels. @internal */
 export const KERNEL_LIMIT = 0.7853984832763672;
 
-/** sin and cos of {@link floatSin} and {@link floatCos} (read at once). */
+/**
+ * sin and cos of {@link floatSin} and {@link floatCos} (read at once). Below the limit each
+ * computes both with {@link sinCosQuadrantInto}: the second polynomial costs little beside the
+ * call, and one copy of the kernels keeps the bundles small.
+ */
 const SCRATCH = /* @__PURE__ */ new Float64Array(2);
 
 /**
@@ -61,6 +65,19 @@ export function floatCos(x: number): number {
   if (!(x < 0.7853984832763672 && x > -0.7853984832763672)) return Math.cos(x);
   sinCosQuadrantInto(x, 0, SCRATCH, 0);
   return SCRATCH[1]!;
+}
+
+/**
+ * sin x and cos x of a finite x into `out[at]` and `out[at + 1]`, as {@link floatSin} and
+ * {@link floatCos} give them (the kernels once for both below the limit).
+ * @internal
+ */
+export function floatSinCosInto(x: number, out: Float64Array, at: number): void {
+  if (x < 0.7853984832763672 && x > -0.7853984832763672) sinCosQuadrantInto(x, 0, out, at);
+  else {
+    out[at] = Math.sin(x);
+    out[at + 1] = Math.cos(x);
+  }
 }
 
 /**

@@ -19,7 +19,7 @@ import {
 } from '../errors.js';
 import type { Arithmetic, Numeric } from './types.js';
 import { float } from './float.js';
-import { floatCos, floatSin } from './float-trig.js';
+import { floatCos, floatSin, floatSinCosInto } from './float-trig.js';
 
 /**
  * A named input of an uncertain computation: its measured value and its standard
@@ -41,6 +41,8 @@ export type Gradient<T> = ReadonlyMap<UncertainInput<T>, T>;
 type Keys<T> = readonly UncertainInput<T>[];
 const NO_KEYS: Keys<never> = /* @__PURE__ */ Object.freeze([]);
 const NO_DERIVS: readonly never[] = /* @__PURE__ */ Object.freeze([]);
+/** sin and cos of the value in `sin`/`cos` of the uncertain arithmetic over float (read at once). */
+const SIN_COS = /* @__PURE__ */ new Float64Array(2);
 
 /**
  * A value of an {@link uncertain} arithmetic: a value in the base arithmetic and its
@@ -648,15 +650,15 @@ function uncertainFloat(): UncertainArithmetic<number, false> {
     },
     sin(x) {
       operand(name, 'sin', x);
-      return x.inputs.length === 0
-        ? constant(floatSin(x.value))
-        : scaledF(floatSin(x.value), x, floatCos(x.value));
+      if (x.inputs.length === 0) return constant(floatSin(x.value));
+      floatSinCosInto(x.value, SIN_COS, 0);
+      return scaledF(SIN_COS[0]!, x, SIN_COS[1]!);
     },
     cos(x) {
       operand(name, 'cos', x);
-      return x.inputs.length === 0
-        ? constant(floatCos(x.value))
-        : scaledF(floatCos(x.value), x, -floatSin(x.value));
+      if (x.inputs.length === 0) return constant(floatCos(x.value));
+      floatSinCosInto(x.value, SIN_COS, 0);
+      return scaledF(SIN_COS[1]!, x, -SIN_COS[0]!);
     },
     exp(x) {
       operand(name, 'exp', x);

@@ -9,6 +9,7 @@ import {
   KERNEL_LIMIT,
   floatCos,
   floatSin,
+  floatSinCosInto,
   sinCosQuadrantInto,
 } from '../../src/arithmetic/float-trig.js';
 import { float } from '../../src/arithmetic/float.js';
@@ -102,11 +103,14 @@ describe('the kernels (FDLIBM 5.3, k_sin.c and k_cos.c), as floatSin and floatCo
 });
 
 describe('float.sin and float.cos: the float arithmetic sine and cosine', () => {
-  it('are Math.sin and Math.cos bit for bit on either side of the limit (V8: FDLIBM)', () => {
+  it('are Math.sin and Math.cos bit for bit on either side of the limit (V8: FDLIBM), as is floatSinCosInto', () => {
     fc.assert(
       fc.property(fc.double({ min: -1e6, max: 1e6, noNaN: true }), (x) => {
         expect(Object.is(float.sin(x), Math.sin(x))).toBe(true);
         expect(Object.is(float.cos(x), Math.cos(x))).toBe(true);
+        const out = new Float64Array(2);
+        floatSinCosInto(x, out, 0);
+        expect(Object.is(out[0], Math.sin(x)) && Object.is(out[1], Math.cos(x))).toBe(true);
       }),
       { numRuns: 20000 },
     );
