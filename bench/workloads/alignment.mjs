@@ -46,7 +46,7 @@ export function handElements(h) {
     cy: e.type === 'arc' ? e.centre.y : 0,
     r: e.type === 'arc' ? e.radius : 0,
     turn: e.type === 'arc' ? e.turn : 0,
-    box: e.bounds,
+    box: [...e.bounds], // its own array, as it copies every other field
   }));
 }
 

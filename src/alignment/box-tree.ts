@@ -27,19 +27,21 @@ export interface BoxTree {
   readonly stackQ: Float64Array;
 }
 
-// Trees by the alignment's `boxes` array (an alignment and its copies share one), and the last
-// one asked for: a comparison instead of a hash lookup on every call.
+// Trees by the alignment's `boxes` array, when it is frozen (an alignment and its copies share
+// one), and the last one asked for: a comparison instead of a hash lookup on every call.
 const trees = new WeakMap<readonly number[], BoxTree>();
 let lastBoxes: readonly number[] | undefined;
 let lastTree: BoxTree | undefined;
 
 /**
- * The tree of an alignment's boxes (four numbers per element, as in `HorizontalAlignment.boxes`),
- * built on first use and kept for that array: like the rest of an alignment, its boxes are read
- * once and then taken as they are. @internal
+ * The tree of an alignment's boxes (four numbers per element, as in `HorizontalAlignment.boxes`):
+ * for a frozen array (as horizontalAlignment makes them) built on first use and kept for that
+ * array; for any other built anew, since it may have been changed in place. @internal
  */
 export function boxTree(boxes: readonly number[]): BoxTree {
   if (boxes === lastBoxes) return lastTree!;
+  // Only a frozen array is sure to hold tomorrow what it holds today.
+  if (!Object.isFrozen(boxes)) return buildTree(boxes);
   let t = trees.get(boxes);
   if (t === undefined) {
     t = buildTree(boxes);

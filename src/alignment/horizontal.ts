@@ -217,9 +217,12 @@ export interface ChainageEquation<T> {
 
 /**
  * A horizontal alignment: plain data (arrays and objects of values of the arithmetic, and
- * JS numbers for the boxes), which may be kept, copied and written out as it is. The functions
- * that read it check it through the first time and then take it as it is: to change an
- * alignment, change a copy.
+ * JS numbers for the boxes), which may be kept, copied and written out as it is.
+ * {@link horizontalAlignment} returns it frozen (every array and object in it, not the
+ * arithmetic's values), so it cannot change once made: to change an alignment, make it again
+ * from changed input. The functions that read one check it through the first time and then
+ * take it as it is; one that is not frozen in full (built some other way) is checked through,
+ * and its boxes indexed, on every call.
  */
 export interface HorizontalAlignment<T> {
   /** `'horizontal'` */
@@ -453,7 +456,7 @@ export function horizontalAlignment<T>(
   const equations = readEquations(A, o.equations, startChainage, length, `${where}.equations`);
   const chain = (d: T) => chainageAt(A, startChainage, equations, d);
   const endChainage = chain(length);
-  return {
+  return freezeData(A, {
     kind: 'horizontal',
     points,
     elements: elements.map(
@@ -486,7 +489,20 @@ export function horizontalAlignment<T>(
     length,
     equations,
     boxes: elements.flatMap((e) => e.bounds),
-  };
+  }) as HorizontalAlignment<T>;
+}
+
+/**
+ * Freezes `x` and every object and array in it, except the arithmetic's own values (which are
+ * left as they are): what a function builds and returns, so that nothing in it can be changed
+ * in place after it has been checked and its boxes indexed.
+ */
+function freezeData<T, U>(A: Arithmetic<T>, x: U): U {
+  if (typeof x === 'object' && x !== null && !A.is(x)) {
+    Object.freeze(x);
+    for (const v of Object.values(x)) freezeData(A, v);
+  }
+  return x;
 }
 
 interface CurveGeometry<T> {
@@ -787,50 +803,22 @@ function elementsAreObjects(elements: readonly unknown[]): boolean {
   return true;
 }
 
-// Alignments found intact: an alignment is plain data, checked through once for an arithmetic
-// and then taken as it is on every call while it holds the same arrays (of the same lengths)
-// and the same top-level values; a copy, or one given a new array, is checked anew. The fields
-// of an element changed in place after the check are not looked at again: copy an alignment
-// to change it.
-interface Checked {
-  readonly A: unknown;
-  readonly elements: unknown;
-  readonly n: number;
-  readonly equations: unknown;
-  readonly m: number;
-  readonly boxes: unknown;
-  readonly curves: unknown;
-  readonly k: number;
-  readonly length: unknown;
-  readonly startChainage: unknown;
-  readonly endChainage: unknown;
-}
-const intact = new WeakMap<object, Checked>();
-// The last alignment found intact, and its record: a comparison instead of a hash lookup.
+// Alignments found intact and frozen in full (as horizontalAlignment returns them), each with
+// the arithmetic it was checked for: nothing in such an alignment can change, so it is checked
+// through once and then taken as it is. One that is not frozen in full (a look-alike built
+// some other way, say read from JSON) is checked through on every call, and its boxes indexed
+// anew, so that a change made in place between two calls is never met by stale checks.
+const intact = new WeakMap<object, unknown>();
+// The last alignment found intact, and its arithmetic: a comparison instead of a hash lookup.
 let lastAlignment: object | undefined;
-let lastRecord: Checked | undefined;
+let lastArithmetic: unknown;
 
-/** Whether `o` was found intact for A and still holds what it held then. */
+/** Whether `o` was found intact and frozen for A. */
 function unchanged(A: unknown, o: HorizontalAlignment<unknown>): boolean {
-  const c = o === lastAlignment ? lastRecord : intact.get(o);
-  if (
-    c === undefined ||
-    c.A !== A ||
-    o.kind !== 'horizontal' ||
-    c.elements !== o.elements ||
-    c.n !== o.elements.length ||
-    c.equations !== o.equations ||
-    c.m !== o.equations.length ||
-    c.boxes !== o.boxes ||
-    c.curves !== o.curves ||
-    c.k !== o.curves.length ||
-    c.length !== o.length ||
-    c.startChainage !== o.startChainage ||
-    c.endChainage !== o.endChainage
-  )
-    return false;
+  if (o === lastAlignment) return lastArithmetic === A;
+  if (intact.get(o) !== A) return false;
   lastAlignment = o;
-  lastRecord = c;
+  lastArithmetic = A;
   return true;
 }
 
@@ -876,47 +864,45 @@ function isIntact<T>(A: Arithmetic<T>, o: HorizontalAlignment<T>): boolean {
     if (!A.is(q.back) || !A.is(q.ahead) || !A.is(q.distance)) return false;
   }
   for (let i = 0; i < o.boxes.length; i++) if (typeof o.boxes[i] !== 'number') return false;
-  const c: Checked = {
-    A,
-    elements: o.elements,
-    n: o.elements.length,
-    equations: o.equations,
-    m: o.equations.length,
-    boxes: o.boxes,
-    curves: o.curves,
-    k: nCurves,
-    length: o.length,
-    startChainage: o.startChainage,
-    endChainage: o.endChainage,
-  };
-  intact.set(o, c);
-  lastAlignment = o;
-  lastRecord = c;
+  if (frozen(o)) {
+    intact.set(o, A);
+    lastAlignment = o;
+    lastArithmetic = A;
+  }
+  return true;
+}
+
+/** Whether everything the checks above read in `o` is frozen (the arithmetic's values aside). */
+function frozen(o: HorizontalAlignment<unknown>): boolean {
+  const f = Object.isFrozen;
+  if (!f(o) || !f(o.elements) || !f(o.equations) || !f(o.boxes) || !f(o.curves)) return false;
+  for (let i = 0; i < o.elements.length; i++) {
+    const e = o.elements[i]!;
+    if (!f(e) || !f(e.start) || !f(e.end) || !f(e.direction)) return false;
+    if (
+      e.type === 'arc'
+        ? !f(e.centre)
+        : e.type === 'transition' && !(f(e.origin) && f(e.originDirection))
+    )
+      return false;
+  }
+  for (let i = 0; i < o.equations.length; i++) if (!f(o.equations[i])) return false;
+  for (let i = 0; i < o.curves.length; i++) if (!f(o.curves[i])) return false;
   return true;
 }
 
 /**
- * Checks that `h` looks like an alignment of this arithmetic. One found intact before and
- * unchanged is taken after a check of its slots: every element's and equation's is an object
- * (a pass over the elements), or only the equations' when `elementsMet` (the caller checks
- * each element it reads, as alignmentStation does, which reads only those near a point).
- * @internal
+ * Checks that `h` looks like an alignment of this arithmetic. One found intact and frozen
+ * before (as horizontalAlignment returns them) is taken as it is; any other is checked
+ * through. @internal
  */
 export function readAlignment<T>(
   A: Arithmetic<T>,
   h: unknown,
   where: string,
-  elementsMet = false,
 ): HorizontalAlignment<T> {
   const o = h as HorizontalAlignment<T> | null;
-  if (
-    o !== null &&
-    typeof o === 'object' &&
-    unchanged(A, o) &&
-    elementsAreObjects(o.equations) &&
-    (elementsMet || elementsAreObjects(o.elements))
-  )
-    return o;
+  if (o !== null && typeof o === 'object' && unchanged(A, o)) return o;
   if (
     o === null ||
     typeof o !== 'object' ||

@@ -7,7 +7,7 @@ import { show, invalidArgument, QuadspreadError, checkArithmetic } from '../erro
 import type { Arithmetic, Numeric } from '../arithmetic/types.js';
 import type { Point } from '../geometry/point.js';
 import type { AlignmentElement, HorizontalAlignment, TransitionElement } from './horizontal.js';
-import { readAlignment, chainageAt, notAnAlignment } from './horizontal.js';
+import { readAlignment, chainageAt } from './horizontal.js';
 import { placeOn } from './point.js';
 import { readXY, rightOf, root, trim } from './internal.js';
 import { readNumber } from '../geometry/validate.js';
@@ -93,7 +93,7 @@ export function alignmentStation<T>(
     if (r !== undefined) return r as unknown as AlignmentStation<T>;
   }
   const where = WHERE;
-  const h = readAlignment(A, alignment, `${where} alignment`, true);
+  const h = readAlignment(A, alignment, `${where} alignment`);
   const p = readXY(A, P, `${where} P`);
   const opts = options === null || typeof options !== 'object' ? {} : options;
   const tol =
@@ -118,9 +118,6 @@ export function alignmentStation<T>(
   let reachQ = Infinity; // (best + tolerance)², with slack
   for (let i = first, from = 0; i >= 0;) {
     const e = els[i]!;
-    // An element changed in place since the alignment was checked (see readAlignment).
-    if (typeof e !== 'object' || e === null)
-      throw notAnAlignment(A, alignment, `${where} alignment`);
     const c = projectOn(A, e, p);
     if (c !== undefined) {
       found.push({
@@ -153,8 +150,6 @@ export function alignmentStation<T>(
       [n - 1, true],
     ] as const) {
       const e = els[i]!;
-      if (typeof e !== 'object' || e === null)
-        throw notAnAlignment(A, alignment, `${where} alignment`);
       const pl = placeOn(A, e, atEnd ? e.length : A.zero);
       const dx = A.sub(p.x, pl.point.x);
       const dy = A.sub(p.y, pl.point.y);
@@ -228,7 +223,7 @@ function stationFloat(
   P: unknown,
   options: unknown,
 ): AlignmentStation<number> | undefined {
-  const h = readAlignment(A, alignment, WHERE_ALIGNMENT, true);
+  const h = readAlignment(A, alignment, WHERE_ALIGNMENT);
   if (P === null || typeof P !== 'object' || Array.isArray(P)) return undefined;
   const px = (P as { x?: unknown }).x;
   const py = (P as { y?: unknown }).y;
@@ -251,7 +246,6 @@ function stationFloat(
   for (let i = first, from = 0; i >= 0;) {
     // projectOn: the foot's distance s along the element and the offset, if it has one.
     const e = els[i]!;
-    if (typeof e !== 'object' || e === null) return undefined;
     const len = e.length;
     const slack = (len + 1) * 1e-9;
     let s = 0;

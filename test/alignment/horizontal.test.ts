@@ -337,3 +337,56 @@ describe('bad input gets typed errors naming the input', () => {
     );
   });
 });
+
+describe('an alignment cannot answer from stale checks', () => {
+  const input = (dx: number) => ({
+    points: [
+      { x: dx, y: 0 },
+      { x: dx, y: 100 },
+      { x: dx + 60, y: 180 },
+    ],
+    curves: [{ radius: 30, transitionIn: 10, transitionOut: 10 }],
+  });
+
+  it('horizontalAlignment returns it frozen, down to its points and curves', () => {
+    const h = horizontalAlignment(R, input(0));
+    const frozen: unknown[] = [h, h.elements, h.boxes, h.curves, h.equations, h.points];
+    for (const e of h.elements) frozen.push(e, e.start, e.end, e.direction, e.bounds);
+    for (const c of h.curves) frozen.push(c);
+    for (const x of frozen) expect(Object.isFrozen(x)).toBe(true);
+    expect(() => ((h.boxes as number[])[0] = 1e9)).toThrow(TypeError);
+    // The arithmetic's own values are left as they are.
+    expect(Object.isFrozen(h.length)).toBe(false);
+  });
+
+  it('a look-alike that is not frozen, changed in place after use, is read anew', () => {
+    // Two lines of three elements each: the second runs the other way, 500 m east.
+    const a = horizontalAlignment(float, input(0));
+    const b = horizontalAlignment(float, {
+      points: [...input(500).points].reverse(),
+      curves: [{ radius: 30, transitionIn: 10, transitionOut: 10 }],
+    });
+    expect(b.elements.length).toBe(a.elements.length);
+    const u = structuredClone(a) as { -readonly [K in keyof typeof a]: any };
+    const at = (h: unknown, P: { x: number; y: number }) => {
+      try {
+        return alignmentStation(float, h as typeof a, P);
+      } catch (e) {
+        return code(() => {
+          throw e;
+        });
+      }
+    };
+    const Q = { x: 20, y: 50 };
+    expect(at(u, Q)).toStrictEqual(at(a, Q));
+    // Everything of u replaced in place by b's (the same arrays, new contents).
+    const c = structuredClone(b);
+    u.elements.splice(0, u.elements.length, ...c.elements);
+    u.boxes.splice(0, u.boxes.length, ...c.boxes);
+    u.points.splice(0, u.points.length, ...c.points);
+    u.curves.splice(0, u.curves.length, ...c.curves);
+    // Points around b: the answers must be b's, not ones searched with a's boxes.
+    for (let x = 440; x <= 620; x += 20)
+      for (let y = -20; y <= 200; y += 20) expect(at(u, { x, y })).toStrictEqual(at(b, { x, y }));
+  });
+});

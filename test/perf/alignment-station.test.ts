@@ -378,14 +378,20 @@ describe('alignmentStation(float, …): the float twin is exactly the generic fl
     const exact = horizontalAlignment(rational, { points: h.points, curves: [{ radius: 30 }] });
     expect(same(exact, P)).toBe('INVALID_ARGUMENT');
     expect(same({ ...h }, { x: 40, y: 60 })).toStrictEqual(same(h, P)); // a copy: checked anew
-    // An element changed in place after the check, where the search meets it.
+    // What horizontalAlignment returns cannot be changed in place (ES modules are strict).
     const g = horizontalAlignment(float, { points: h.points, curves: [{ radius: 30 }] });
-    expect(same(g, P)).not.toBe('INVALID_ARGUMENT');
-    (g.elements as unknown[])[0] = null;
-    expect(same(g, P)).toBe('INVALID_ARGUMENT');
-    expect(same(g, { x: -50, y: 10 }, { extend: true })).toBe('INVALID_ARGUMENT');
-    // alignmentPoint reads the element slots on every call, as before.
-    expect(outcome(() => alignmentPoint(float, g, 150))).toBe('INVALID_ARGUMENT');
+    const before = same(g, P);
+    expect(before).not.toBe('INVALID_ARGUMENT');
+    expect(() => ((g.elements as unknown[])[0] = null)).toThrow(TypeError);
+    expect(same(g, P)).toStrictEqual(before);
+    // A look-alike that is not frozen, changed in place after a first use, where the search
+    // meets the change: refused, not answered from the first use's checks.
+    const u = { ...g, elements: [...g.elements], boxes: [...g.boxes] };
+    expect(same(u, P)).toStrictEqual(before);
+    u.elements[0] = null as never;
+    expect(same(u, P)).toBe('INVALID_ARGUMENT');
+    expect(same(u, { x: -50, y: 10 }, { extend: true })).toBe('INVALID_ARGUMENT');
+    expect(outcome(() => alignmentPoint(float, u, 150))).toBe('INVALID_ARGUMENT');
   });
 });
 
