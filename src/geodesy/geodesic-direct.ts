@@ -120,10 +120,10 @@ function directIn<T>(
   const sig1 = unit(A, b1.s, A.mul(alp.cos, b1.c));
   const om1 = unit(A, A.mul(sa0, b1.s), A.mul(alp.cos, b1.c)); // (0, 0) on the equator heading east or west: ω₁ = 0
   const k2 = A.mul(C.ep2, A.mul(ca0, ca0)); // k² = e′² cos²α₀ (eq. 9)
-  const { I1, I3 } = integrals(C, k2);
+  const { I1, I3 } = integrals(A, C, k2);
   // σ₁₂ with I₁(σ₁ + σ₁₂) − I₁(σ₁) = s₁₂/b  (eq. 7), solved for the increment itself so that
   // short lines keep its relative accuracy
-  const sigma12 = solveSigma(C, I1.B0, I1.c, k2, A.div(s12, C.b), sig1, where);
+  const sigma12 = solveSigma(A, C, I1.B0, I1.c, k2, A.div(s12, C.b), sig1, where);
   const sig2 = rotateBy(A, sig1, sigma12);
   // α₂ = atan2(sin α₀, cos α₀ cos σ₂); sin β₂ = cos α₀ sin σ₂, cos β₂ = |cos α₀ cos σ₂ + i sin α₀|;
   // ω₂ = atan2(sin α₀ sin σ₂, cos σ₂)  (eqs. 12–14)
@@ -159,6 +159,7 @@ function directIn<T>(
  * is √(1 + k² sin²σ) ≥ 1, so the iteration converges from the first-order start t/B₀).
  */
 function solveSigma<T>(
+  A: Arithmetic<T>,
   C: GeodesicContext<T>,
   B0: T,
   c: readonly T[],
@@ -167,7 +168,6 @@ function solveSigma<T>(
   sig1: { s: T; c: T },
   where: string,
 ): T {
-  const { A } = C;
   const S1 = sineSum(A, c, sig1.s, sig1.c);
   let d = A.div(t, B0);
   let prev: T | undefined;

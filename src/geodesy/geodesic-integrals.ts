@@ -15,7 +15,9 @@
  * (Karney, "Geodesics on an arbitrary ellipsoid of revolution", J. Geodesy 88:21–31, 2014,
  * uses the same device). Since |Bₗ| ≤ C εˡ, truncating at L = ⌈(d + 2)/log₁₀(1/ε_max)⌉ and
  * taking M = 2L + 2 nodes leaves a relative error below about 10^−(d+2), for any order d the
- * arithmetic asks for.
+ * arithmetic asks for. The nodes mirror each other about π/2 (σ_{M−1−j} = π − σⱼ, where both
+ * sin²σ and cos 2lσ take the same values), so the sums run over the first M/2 nodes with
+ * doubled weights: the same coefficients, with half the square roots and products.
  *
  * @module geodesy
  * @internal
@@ -45,16 +47,24 @@ export interface GeodesicContext<T> {
   readonly digits: number;
   /** Fourier terms kept. */
   readonly L: number;
-  /** weights W[l][j] of the discrete cosine transform: 1/M for l = 0 (B₀), cos(2lσⱼ)/(lM) otherwise (Bₗ/2l) */
+  /**
+   * weights W[l][j] of the discrete cosine transform over the first M/2 nodes, each counting
+   * for its mirror image too: 2/M for l = 0 (B₀), 2cos(2lσⱼ)/(lM) otherwise (Bₗ/2l)
+   */
   readonly W: T[][];
-  /** sin²σⱼ at the nodes σⱼ = (2j + 1)π/(2M) */
+  /** sin²σⱼ at the nodes σⱼ = (2j + 1)π/(2M), j < M/2 */
   readonly s2: T[];
   /** 10^−(digits+2), a tolerance below the arithmetic's resolution */
   readonly tol: T;
   readonly tiny: T;
 }
 
-const memo = new WeakMap<object, Map<string, GeodesicContext<unknown>>>();
+/** Contexts of one arithmetic: by the ellipsoid's a and f, and by a frozen ellipsoid object. */
+interface Contexts {
+  readonly byKey: Map<string, GeodesicContext<unknown>>;
+  readonly byObject: WeakMap<Ellipsoid, GeodesicContext<unknown>>;
+}
+const memo = new WeakMap<object, Contexts>();
 
 /** @internal The context for (A, ellipsoid), memoised per arithmetic object. */
 export function geodesicContext<T>(
@@ -64,12 +74,22 @@ export function geodesicContext<T>(
 ): GeodesicContext<T> {
   let byEll = memo.get(A);
   if (byEll === undefined) {
-    byEll = new Map();
+    byEll = { byKey: new Map(), byObject: new WeakMap() };
     memo.set(A, byEll);
   }
+  // A frozen ellipsoid (WGS84, GRS80, ellipsoid(…)) cannot change: found by identity, without
+  // building its key.
+  const frozen = typeof ellipsoid === 'object' && ellipsoid !== null && Object.isFrozen(ellipsoid);
+  if (frozen) {
+    const hit = byEll.byObject.get(ellipsoid);
+    if (hit !== undefined) return hit as GeodesicContext<T>;
+  }
   const key = `${ellipsoid.a}|${ellipsoid.f}`;
-  const hit = byEll.get(key);
-  if (hit !== undefined) return hit as GeodesicContext<T>;
+  const hit = byEll.byKey.get(key);
+  if (hit !== undefined) {
+    if (frozen) byEll.byObject.set(ellipsoid, hit);
+    return hit as GeodesicContext<T>;
+  }
   const digits = claimedDigits(A);
   if (digits > MAX_GEODESIC_DIGITS) {
     throw new QuadspreadError(
@@ -99,21 +119,24 @@ export function geodesicContext<T>(
     cosTab.push(k === 0 ? A.one : A.cos(A.div(A.mul(A.from(k), A.pi), A.from(M))));
   }
   const two = A.from(2);
+  // Node j and node M − 1 − j have the same sin²σ and cos 2lσ: H = M/2 nodes, weights doubled.
+  const H = M / 2;
   const W: T[][] = [];
   for (let l = 0; l <= L; l++) {
     const row: T[] = [];
-    for (let j = 0; j < M; j++) {
+    for (let j = 0; j < H; j++) {
       row.push(
-        // B₀ = (1/M) Σ gⱼ; the sine coefficient Bₗ/(2l) = (1/(lM)) Σ gⱼ cos 2lσⱼ
+        // B₀ = (1/M) Σ gⱼ; the sine coefficient Bₗ/(2l) = (1/(lM)) Σ gⱼ cos 2lσⱼ (j < M),
+        // that is (1/H) and (1/(lH)) over j < H
         l === 0
-          ? A.div(A.one, A.from(M))
-          : A.div(cosTab[(l * (2 * j + 1)) % (2 * M)]!, A.from(l * M)),
+          ? A.div(A.one, A.from(H))
+          : A.div(cosTab[(l * (2 * j + 1)) % (2 * M)]!, A.from(l * H)),
       );
     }
     W.push(row);
   }
   // sin²σⱼ = (1 − cos 2σⱼ)/2 with 2σⱼ = (2j + 1)π/M
-  const s2 = Array.from({ length: M }, (_, j) =>
+  const s2 = Array.from({ length: H }, (_, j) =>
     A.div(A.sub(A.one, cosTab[(2 * j + 1) % (2 * M)]!), two),
   );
   const ctx: GeodesicContext<T> = {
@@ -133,7 +156,8 @@ export function geodesicContext<T>(
     tol: tenToMinus(A, digits + 2),
     tiny: tenToMinus(A, 2 * digits + 20),
   };
-  byEll.set(key, ctx as GeodesicContext<unknown>);
+  byEll.byKey.set(key, ctx as GeodesicContext<unknown>);
+  if (frozen) byEll.byObject.set(ellipsoid, ctx as GeodesicContext<unknown>);
   return ctx;
 }
 
@@ -151,32 +175,50 @@ export interface Series<T> {
 
 /** @internal The three integrals' series for k² (I₁, I₂, I₃ of Karney 2013). */
 export function integrals<T>(
+  A: Arithmetic<T>,
   ctx: GeodesicContext<T>,
   k2: T,
 ): { I1: Series<T>; I2: Series<T>; I3: Series<T> } {
-  const { A, W, s2, L } = ctx;
-  const M = s2.length;
+  const { W, s2, L } = ctx;
+  const H = s2.length; // the first half of the nodes (see geodesicContext)
   const g1: T[] = [];
   const g2: T[] = [];
   const g3: T[] = [];
-  for (let j = 0; j < M; j++) {
+  for (let j = 0; j < H; j++) {
     const w = root(A, A.add(A.one, A.mul(k2, s2[j]!))); // √(1 + k² sin²σ)
     g1.push(w);
     g2.push(A.div(A.one, w));
     g3.push(A.div(ctx.twoMinusF, A.add(A.one, A.mul(ctx.f1, w))));
   }
-  const series = (g: T[]): Series<T> => {
-    const coef = (l: number): T => {
-      let s = A.zero;
-      const row = W[l]!;
-      for (let j = 0; j < M; j++) s = A.add(s, A.mul(row[j]!, g[j]!));
-      return s;
-    };
-    const c: T[] = [];
-    for (let l = 1; l <= L; l++) c.push(coef(l));
-    return { B0: coef(0), c };
-  };
-  return { I1: series(g1), I2: series(g2), I3: series(g3) };
+  // The three integrals' coefficients together, one row of weights at a time.
+  let B1 = A.zero;
+  let B2 = A.zero;
+  let B3 = A.zero;
+  const c1: T[] = [];
+  const c2: T[] = [];
+  const c3: T[] = [];
+  for (let l = 0; l <= L; l++) {
+    const row = W[l]!;
+    let t1 = A.zero;
+    let t2 = A.zero;
+    let t3 = A.zero;
+    for (let j = 0; j < H; j++) {
+      const wj = row[j]!;
+      t1 = A.add(t1, A.mul(wj, g1[j]!));
+      t2 = A.add(t2, A.mul(wj, g2[j]!));
+      t3 = A.add(t3, A.mul(wj, g3[j]!));
+    }
+    if (l === 0) {
+      B1 = t1;
+      B2 = t2;
+      B3 = t3;
+    } else {
+      c1.push(t1);
+      c2.push(t2);
+      c3.push(t3);
+    }
+  }
+  return { I1: { B0: B1, c: c1 }, I2: { B0: B2, c: c2 }, I3: { B0: B3, c: c3 } };
 }
 
 /**

@@ -147,7 +147,7 @@ function inverseIn<T>(
     if (A.cmp(A.abs(lat1), tiny) < 0) lat1 = A.zero;
     if (A.cmp(A.abs(lat2), tiny) < 0) lat2 = A.zero;
   }
-  const r = canonical(C, lat1, lat2, lam, where);
+  const r = canonical(A, C, lat1, lat2, lam, where);
   // Undo the configuration on the azimuths as (sin, cos) pairs: swapping the ends reverses
   // the geodesic (α + 180°, and α₁, α₂ exchanged), the latitude mirror negates cos α, the
   // longitude mirror negates sin α.
@@ -178,13 +178,13 @@ interface Canonical<T> {
 
 /** The solution for φ₁ ≤ 0, |φ₂| ≤ |φ₁|, 0 ≤ λ₁₂ ≤ 180° (degrees). */
 function canonical<T>(
+  A: Arithmetic<T>,
   C: GeodesicContext<T>,
   lat1: T,
   lat2: T,
   lamDeg: T,
   where: string,
 ): Canonical<T> {
-  const { A } = C;
   const p1 = sinCosDeg(A, lat1);
   const p2 = sinCosDeg(A, lat2);
   const lam = sinCosDeg(A, lamDeg);
@@ -194,7 +194,7 @@ function canonical<T>(
   // Meridional: λ₁₂ = 0 or 180°, or P1 at the pole (then P2 may be anywhere): α₁ = λ₁₂.
   if (A.isZero(lam.sin) || A.isZero(p1.cos)) {
     const alp1 = { s: lam.sin, c: lam.cos };
-    const m = evaluate(C, b1, b2, alp1, lam);
+    const m = evaluate(A, C, b1, b2, alp1, lam);
     // The meridian is shortest unless the arc passes its conjugate point (m₁₂ < 0, §5).
     if (A.cmp(m.sigma12, A.one) < 0 || A.sign(m.m12) >= 0)
       return { s12: m.s12, alp1, alp2: m.alp2 };
@@ -207,7 +207,7 @@ function canonical<T>(
   // General case: solve λ₁₂(α₁) = λ₁₂ for α₁ in [0, π]. α₁ is carried as (sin, cos), so that
   // cos α₁ keeps its relative accuracy near 90° (nearly equatorial lines, where the distance
   // is most sensitive to it); a Newton step rotates the pair.
-  let alp1 = startAzimuth(C, lat1, lat2, lamDeg);
+  let alp1 = startAzimuth(A, C, lat1, lat2, lamDeg);
   let lo: Pair<T> = { s: A.zero, c: A.one };
   let hi: Pair<T> = { s: A.zero, c: A.neg(A.one) };
   let trip = false;
@@ -215,7 +215,7 @@ function canonical<T>(
   // large for nearly equatorial and antipodal lines), one more Newton step finishes.
   const stopAt = tenToMinus(A, C.digits - 2);
   for (let i = 0; i < MAX_ITERATIONS; i++) {
-    const e = evaluate(C, b1, b2, alp1, lam);
+    const e = evaluate(A, C, b1, b2, alp1, lam);
     if (trip) return { s12: e.s12, alp1, alp2: e.alp2 };
     const scale = e.dv !== undefined && A.sign(e.dv) > 0 ? A.add(A.one, e.dv) : A.one;
     if (A.cmp(A.abs(e.v), A.mul(stopAt, scale)) <= 0) trip = true;
@@ -273,8 +273,13 @@ function inside<T>(A: Arithmetic<T>, lo: Pair<T>, n: Pair<T>, hi: Pair<T>): bool
  * Starting α₁ as (sin, cos): in float the spherical estimate; otherwise the float solution of
  * the same problem, which the iteration then refines.
  */
-function startAzimuth<T>(C: GeodesicContext<T>, lat1: T, lat2: T, lamDeg: T): Pair<T> {
-  const { A } = C;
+function startAzimuth<T>(
+  A: Arithmetic<T>,
+  C: GeodesicContext<T>,
+  lat1: T,
+  lat2: T,
+  lamDeg: T,
+): Pair<T> {
   const [la1, la2, lam] = [A.toNumber(lat1), A.toNumber(lat2), A.toNumber(lamDeg)];
   if (A.float64 === true) {
     const F = C as unknown as GeodesicContext<number>;
@@ -283,7 +288,7 @@ function startAzimuth<T>(C: GeodesicContext<T>, lat1: T, lat2: T, lamDeg: T): Pa
   const F = geodesicContext(float, C.ell, 'geodesicInverse(ellipsoid)');
   let p: Pair<number>;
   try {
-    p = canonical(F, la1, la2, lam, 'geodesicInverse').alp1;
+    p = canonical(F.A, F, la1, la2, lam, 'geodesicInverse').alp1;
   } catch {
     p = spherical(F, la1, la2, lam);
   }
@@ -327,13 +332,13 @@ interface Evaluation<T> {
 
 /** λ₁₂(α₁) − λ₁₂, its derivative, the distance and α₂ for the geodesic leaving P1 at α₁ (§4). */
 function evaluate<T>(
+  A: Arithmetic<T>,
   C: GeodesicContext<T>,
   b1: Pair<T>,
   b2: Pair<T>,
   alp1: Pair<T>,
   lam: { sin: T; cos: T },
 ): Evaluation<T> {
-  const { A } = C;
   // On the equator heading due east the geodesic is the equator itself, and σ, ω are
   // undefined at both ends: tilt it south by a negligible angle, so that the end is reached
   // after σ₁₂ = π (the branch of λ₁₂(α₁) beyond the equatorial case, §5).
@@ -372,7 +377,7 @@ function evaluate<T>(
     A.add(A.mul(co, lam.cos), A.mul(so, lam.sin)),
   );
   const k2 = A.mul(C.ep2, A.mul(ca0, ca0));
-  const { I1, I2, I3 } = integrals(C, k2);
+  const { I1, I2, I3 } = integrals(A, C, k2);
   const diff = (c: readonly T[]): T =>
     A.sub(sineSum(A, c, sig2.s, sig2.c), sineSum(A, c, sig1.s, sig1.c));
   // λ₁₂ − λ = η − f sin α₀ I₃(σ₁₂)  (eq. 8)
