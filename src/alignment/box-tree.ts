@@ -27,21 +27,27 @@ export interface BoxTree {
   readonly stackQ: Float64Array;
 }
 
-// Trees by the alignment's `boxes` array, when it is frozen (an alignment and its copies share
-// one), and the last one asked for: a comparison instead of a hash lookup on every call.
+// Trees by the `boxes` array of an alignment made by horizontalAlignment (frozen when made, so
+// it cannot change; its copies share it), and the last one asked for: a comparison instead of a
+// hash lookup on every call.
+const kept = new WeakSet<readonly number[]>();
 const trees = new WeakMap<readonly number[], BoxTree>();
 let lastBoxes: readonly number[] | undefined;
 let lastTree: BoxTree | undefined;
 
+/** Marks the boxes of an alignment just made (and frozen) as ones whose tree may be kept. @internal */
+export function keepBoxTree(boxes: readonly number[]): void {
+  kept.add(boxes);
+}
+
 /**
  * The tree of an alignment's boxes (four numbers per element, as in `HorizontalAlignment.boxes`):
- * for a frozen array (as horizontalAlignment makes them) built on first use and kept for that
- * array; for any other built anew, since it may have been changed in place. @internal
+ * for the boxes of an alignment made by horizontalAlignment built on first use and kept; for any
+ * other built anew, since it may have been changed in place. @internal
  */
 export function boxTree(boxes: readonly number[]): BoxTree {
   if (boxes === lastBoxes) return lastTree!;
-  // Only a frozen array is sure to hold tomorrow what it holds today.
-  if (!Object.isFrozen(boxes)) return buildTree(boxes);
+  if (!kept.has(boxes)) return buildTree(boxes);
   let t = trees.get(boxes);
   if (t === undefined) {
     t = buildTree(boxes);

@@ -16,6 +16,7 @@ import type { Point } from '../geometry/point.js';
 import { readNumber } from '../geometry/validate.js';
 import { angleToDegrees } from '../readings/angle.js';
 import { clothoidSeries } from './clothoid.js';
+import { keepBoxTree } from './box-tree.js';
 import {
   readList,
   readObject,
@@ -221,8 +222,8 @@ export interface ChainageEquation<T> {
  * {@link horizontalAlignment} returns it frozen (every array and object in it, not the
  * arithmetic's values), so it cannot change once made: to change an alignment, make it again
  * from changed input. The functions that read one check it through the first time and then
- * take it as it is; one that is not frozen in full (built some other way) is checked through,
- * and its boxes indexed, on every call.
+ * take it as it is; any other object of this shape (a copy, or one built some other way) is
+ * checked through, and its boxes indexed, on every call.
  */
 export interface HorizontalAlignment<T> {
   /** `'horizontal'` */
@@ -456,7 +457,7 @@ export function horizontalAlignment<T>(
   const equations = readEquations(A, o.equations, startChainage, length, `${where}.equations`);
   const chain = (d: T) => chainageAt(A, startChainage, equations, d);
   const endChainage = chain(length);
-  return freezeData(A, {
+  const h = freezeData(A, {
     kind: 'horizontal',
     points,
     elements: elements.map(
@@ -490,6 +491,9 @@ export function horizontalAlignment<T>(
     equations,
     boxes: elements.flatMap((e) => e.bounds),
   }) as HorizontalAlignment<T>;
+  made.add(h);
+  keepBoxTree(h.boxes);
+  return h;
 }
 
 /**
@@ -803,17 +807,19 @@ function elementsAreObjects(elements: readonly unknown[]): boolean {
   return true;
 }
 
-// Alignments found intact and frozen in full (as horizontalAlignment returns them), each with
-// the arithmetic it was checked for: nothing in such an alignment can change, so it is checked
-// through once and then taken as it is. One that is not frozen in full (a look-alike built
-// some other way, say read from JSON) is checked through on every call, and its boxes indexed
-// anew, so that a change made in place between two calls is never met by stale checks.
+// Alignments made here: frozen in full when made (every array and object, see freezeData), and
+// never handed out before, so nothing in one can change (no getter, no proxy). Such an
+// alignment is checked through once per arithmetic and then taken as it is. Any other (a copy,
+// or a look-alike built some other way, say read from JSON, frozen or not) is checked through
+// on every call, its boxes included, so that a change made in place is never met by stale
+// checks.
+const made = new WeakSet<object>();
 const intact = new WeakMap<object, unknown>();
 // The last alignment found intact, and its arithmetic: a comparison instead of a hash lookup.
 let lastAlignment: object | undefined;
 let lastArithmetic: unknown;
 
-/** Whether `o` was found intact and frozen for A. */
+/** Whether `o` was made by horizontalAlignment and found intact for A. */
 function unchanged(A: unknown, o: HorizontalAlignment<unknown>): boolean {
   if (o === lastAlignment) return lastArithmetic === A;
   if (intact.get(o) !== A) return false;
@@ -864,37 +870,29 @@ function isIntact<T>(A: Arithmetic<T>, o: HorizontalAlignment<T>): boolean {
     if (!A.is(q.back) || !A.is(q.ahead) || !A.is(q.distance)) return false;
   }
   for (let i = 0; i < o.boxes.length; i++) if (typeof o.boxes[i] !== 'number') return false;
-  if (frozen(o)) {
+  if (made.has(o)) {
     intact.set(o, A);
     lastAlignment = o;
     lastArithmetic = A;
+    return true;
   }
-  return true;
-}
-
-/** Whether everything the checks above read in `o` is frozen (the arithmetic's values aside). */
-function frozen(o: HorizontalAlignment<unknown>): boolean {
-  const f = Object.isFrozen;
-  if (!f(o) || !f(o.elements) || !f(o.equations) || !f(o.boxes) || !f(o.curves)) return false;
+  // A look-alike: the search trusts each element's box to hold it, so its ends must be in it
+  // (an element moved without its box would otherwise be passed by, silently).
+  const inBox = (p: Point<T>, k: number): boolean => {
+    const x = A.toNumber(p.x);
+    const y = A.toNumber(p.y);
+    return x >= o.boxes[k]! && y >= o.boxes[k + 1]! && x <= o.boxes[k + 2]! && y <= o.boxes[k + 3]!;
+  };
   for (let i = 0; i < o.elements.length; i++) {
     const e = o.elements[i]!;
-    if (!f(e) || !f(e.start) || !f(e.end) || !f(e.direction)) return false;
-    if (
-      e.type === 'arc'
-        ? !f(e.centre)
-        : e.type === 'transition' && !(f(e.origin) && f(e.originDirection))
-    )
-      return false;
+    if (!inBox(e.start, 4 * i) || !inBox(e.end, 4 * i)) return false;
   }
-  for (let i = 0; i < o.equations.length; i++) if (!f(o.equations[i])) return false;
-  for (let i = 0; i < o.curves.length; i++) if (!f(o.curves[i])) return false;
   return true;
 }
 
 /**
- * Checks that `h` looks like an alignment of this arithmetic. One found intact and frozen
- * before (as horizontalAlignment returns them) is taken as it is; any other is checked
- * through. @internal
+ * Checks that `h` looks like an alignment of this arithmetic. One made by horizontalAlignment
+ * and found intact before is taken as it is; any other is checked through. @internal
  */
 export function readAlignment<T>(
   A: Arithmetic<T>,

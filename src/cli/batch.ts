@@ -52,12 +52,14 @@ const BLOCK_MEMORY = BLOCK + (1 << 17);
 /** Output is written when this many characters are waiting. */
 const FLUSH = 1 << 16;
 /**
- * The young generation of a worker's heap, in MiB. A worker's rows leave short-lived strings
- * only; with V8's default young generation each worker first touches tens of MiB of fresh
- * pages (page faults, system time). Measured on 1 000 000 rows, two workers, 2 cores
- * (2026-12-04): page faults 39 000–40 000 → 27 000–29 000, system time 0.42–0.47 s → 0.30–0.40 s,
- * wall 1.22–1.35 s → 1.13–1.26 s with 8 MiB (4 MiB about the same; 1–2 MiB promote too much
- * and were slower than the default).
+ * The young generation of a worker's heap, in MiB. What a row leaves behind is short-lived
+ * (strings; in the exact arithmetics bigints and fractions too); with V8's default young
+ * generation each worker first touches tens of MiB of fresh pages (page faults, system time).
+ * Measured with `inverses`, two workers, 2 cores (2026-12-04, `/usr/bin/time`): float, 1 000 000
+ * rows, page faults 39 000–40 000 → 27 000–29 000, system time 0.42–0.47 s → 0.30–0.40 s, wall
+ * 1.22–1.35 s → 1.13–1.26 s with 8 MiB (4 MiB about the same; 1–2 MiB promote too much and were
+ * slower than the default); rational, 200 000 rows, page faults 64 000–65 000 → 49 000–50 000,
+ * wall 8.08–8.15 s → 7.97–8.00 s.
  */
 const WORKER_YOUNG_MB = 8;
 

@@ -64,6 +64,14 @@ const KNOWN: Readonly<Record<string, Ellipsoid>> = { WGS84, GRS80 };
 /** Ellipsoids known to be valid: the built-in ones and those made by {@link defineEllipsoid} (frozen). */
 const CHECKED = /* @__PURE__ */ new WeakSet<Ellipsoid>([WGS84, GRS80]);
 
+/**
+ * Whether `e` is a built-in ellipsoid or one made by {@link defineEllipsoid}: frozen when made,
+ * with plain data properties, so it cannot change. @internal
+ */
+export function isCheckedEllipsoid(e: unknown): boolean {
+  return typeof e === 'object' && e !== null && CHECKED.has(e as Ellipsoid);
+}
+
 /** What {@link defineEllipsoid} accepts: a and exactly one of f, 1/f or b. */
 export interface EllipsoidDefinition {
   readonly name?: string;

@@ -24,7 +24,7 @@
  */
 import { QuadspreadError } from '../errors.js';
 import type { Arithmetic } from '../arithmetic/types.js';
-import { ellipsoidParameters, type Ellipsoid } from './ellipsoid.js';
+import { ellipsoidParameters, isCheckedEllipsoid, type Ellipsoid } from './ellipsoid.js';
 import { claimedDigits, root, tenToMinus } from './internal.js';
 import { sinCosDegrees } from '../readings/trig.js';
 
@@ -59,7 +59,7 @@ export interface GeodesicContext<T> {
   readonly tiny: T;
 }
 
-/** Contexts of one arithmetic: by the ellipsoid's a and f, and by a frozen ellipsoid object. */
+/** Contexts of one arithmetic: by the ellipsoid's a and f, and by a checked ellipsoid object. */
 interface Contexts {
   readonly byKey: Map<string, GeodesicContext<unknown>>;
   readonly byObject: WeakMap<Ellipsoid, GeodesicContext<unknown>>;
@@ -77,17 +77,17 @@ export function geodesicContext<T>(
     byEll = { byKey: new Map(), byObject: new WeakMap() };
     memo.set(A, byEll);
   }
-  // A frozen ellipsoid (WGS84, GRS80, ellipsoid(…)) cannot change: found by identity, without
-  // building its key.
-  const frozen = typeof ellipsoid === 'object' && ellipsoid !== null && Object.isFrozen(ellipsoid);
-  if (frozen) {
+  // A built-in ellipsoid or one made by defineEllipsoid cannot change: found by identity,
+  // without building its key.
+  const known = isCheckedEllipsoid(ellipsoid);
+  if (known) {
     const hit = byEll.byObject.get(ellipsoid);
     if (hit !== undefined) return hit as GeodesicContext<T>;
   }
   const key = `${ellipsoid.a}|${ellipsoid.f}`;
   const hit = byEll.byKey.get(key);
   if (hit !== undefined) {
-    if (frozen) byEll.byObject.set(ellipsoid, hit);
+    if (known) byEll.byObject.set(ellipsoid, hit);
     return hit as GeodesicContext<T>;
   }
   const digits = claimedDigits(A);
@@ -157,7 +157,7 @@ export function geodesicContext<T>(
     tiny: tenToMinus(A, 2 * digits + 20),
   };
   byEll.byKey.set(key, ctx as GeodesicContext<unknown>);
-  if (frozen) byEll.byObject.set(ellipsoid, ctx as GeodesicContext<unknown>);
+  if (known) byEll.byObject.set(ellipsoid, ctx as GeodesicContext<unknown>);
   return ctx;
 }
 

@@ -389,4 +389,44 @@ describe('an alignment cannot answer from stale checks', () => {
     for (let x = 440; x <= 620; x += 20)
       for (let y = -20; y <= 200; y += 20) expect(at(u, { x, y })).toStrictEqual(at(b, { x, y }));
   });
+
+  /** Moves every point of an element 5000 m north, in place (its box stays where it was). */
+  const moveNorth = (e: any) => {
+    for (const k of ['start', 'end', 'centre', 'origin'])
+      if (e[k]) Object.defineProperty(e, k, { value: { x: e[k].x, y: e[k].y + 5000 } });
+  };
+
+  it('a look-alike whose element was moved in place after use, without its box, is refused', () => {
+    const a = horizontalAlignment(float, input(0));
+    const u = structuredClone(a) as any;
+    const P = { x: 20, y: 5050 };
+    expect(alignmentStation(float, u, { x: 20, y: 50 })).toStrictEqual(
+      alignmentStation(float, a, { x: 20, y: 50 }),
+    );
+    moveNorth(u.elements[0]);
+    // Not an answer searched with the old box (it would pass element 0 by): refused.
+    expect(code(() => alignmentStation(float, u, P))).toBe('INVALID_ARGUMENT');
+    expect(code(() => alignmentPoint(float, u, 10))).toBe('INVALID_ARGUMENT');
+  });
+
+  it('a look-alike frozen by its maker is not trusted: a getter can still change it', () => {
+    const a = horizontalAlignment(float, input(0));
+    const u = structuredClone(a) as any;
+    let dy = 0;
+    const s0 = u.elements[0].start;
+    Object.defineProperty(u.elements[0], 'start', { get: () => ({ x: s0.x, y: s0.y + dy }) });
+    const deepFreeze = (x: any) => {
+      if (typeof x === 'object' && x !== null && !Object.isFrozen(x)) {
+        Object.freeze(x);
+        for (const k of Object.keys(x)) if (k !== 'start') deepFreeze(x[k]);
+      }
+      return x;
+    };
+    deepFreeze(u);
+    expect(Object.isFrozen(u.elements[0])).toBe(true);
+    const P = { x: 20, y: 50 };
+    expect(alignmentStation(float, u, P)).toStrictEqual(alignmentStation(float, a, P));
+    dy = 5000;
+    expect(code(() => alignmentStation(float, u, P))).toBe('INVALID_ARGUMENT');
+  });
 });
