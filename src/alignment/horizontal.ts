@@ -808,11 +808,12 @@ function elementsAreObjects(elements: readonly unknown[]): boolean {
 }
 
 // Alignments made here: frozen in full when made (every array and object, see freezeData), and
-// never handed out before, so nothing in one can change (no getter, no proxy). Such an
-// alignment is checked through once per arithmetic and then taken as it is. Any other (a copy,
-// or a look-alike built some other way, say read from JSON, frozen or not) is checked through
-// on every call, its boxes included, so that a change made in place is never met by stale
-// checks.
+// never handed out before, so nothing in one can change. Such an alignment is checked through
+// once per arithmetic and then taken as it is; so is one proven unchangeable (frozenData: frozen
+// in full, plain data properties only, as another copy of this library makes them, say the
+// float bundle's). Any other (a copy, or a look-alike built some other way, say read from JSON)
+// is checked through on every call, its boxes included, so that a change made in place is never
+// met by stale checks.
 const made = new WeakSet<object>();
 const intact = new WeakMap<object, unknown>();
 // The last alignment found intact, and its arithmetic: a comparison instead of a hash lookup.
@@ -870,12 +871,7 @@ function isIntact<T>(A: Arithmetic<T>, o: HorizontalAlignment<T>): boolean {
     if (!A.is(q.back) || !A.is(q.ahead) || !A.is(q.distance)) return false;
   }
   for (let i = 0; i < o.boxes.length; i++) if (typeof o.boxes[i] !== 'number') return false;
-  if (made.has(o)) {
-    intact.set(o, A);
-    lastAlignment = o;
-    lastArithmetic = A;
-    return true;
-  }
+  if (made.has(o)) return trust(A, o);
   // A look-alike: the search trusts each element's box to hold it, so its ends must be in it
   // (an element moved without its box would otherwise be passed by, silently).
   const inBox = (p: Point<T>, k: number): boolean => {
@@ -886,6 +882,38 @@ function isIntact<T>(A: Arithmetic<T>, o: HorizontalAlignment<T>): boolean {
   for (let i = 0; i < o.elements.length; i++) {
     const e = o.elements[i]!;
     if (!inBox(e.start, 4 * i) || !inBox(e.end, 4 * i)) return false;
+  }
+  if (frozenData(A, o, new Set())) {
+    keepBoxTree(o.boxes);
+    return trust(A, o);
+  }
+  return true;
+}
+
+/** Records `o` as found intact for A, to be taken as it is from now on. */
+function trust(A: unknown, o: object): true {
+  intact.set(o, A);
+  lastAlignment = o;
+  lastArithmetic = A;
+  return true;
+}
+
+const PLAIN = [Object.prototype, Array.prototype, null];
+
+/**
+ * Whether nothing in `x` can change: every object and array in it (the arithmetic's values
+ * aside) frozen, with a plain prototype and only data properties. (A getter could answer
+ * differently from call to call; a proxy over a frozen object must answer as the object does.)
+ */
+function frozenData(A: Arithmetic<unknown>, x: unknown, seen: Set<object>): boolean {
+  if (typeof x !== 'object' || x === null || seen.has(x) || A.is(x)) return true;
+  seen.add(x);
+  if (!Object.isFrozen(x) || !PLAIN.includes(Object.getPrototypeOf(x) as object | null))
+    return false;
+  const d = Object.getOwnPropertyDescriptors(x);
+  for (const k of Reflect.ownKeys(d)) {
+    const p = (d as Record<PropertyKey, PropertyDescriptor>)[k]!;
+    if (!('value' in p) || !frozenData(A, p.value, seen)) return false;
   }
   return true;
 }
