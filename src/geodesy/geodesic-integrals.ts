@@ -17,7 +17,8 @@
  * taking M = 2L + 2 nodes leaves a relative error below about 10^−(d+2), for any order d the
  * arithmetic asks for. The nodes mirror each other about π/2 (σ_{M−1−j} = π − σⱼ, where both
  * sin²σ and cos 2lσ take the same values), so the sums run over the first M/2 nodes with
- * doubled weights: the same coefficients, with half the square roots and products.
+ * doubled weights: the same coefficients (up to rounding: the mirrored nodes' cosines were
+ * separate approximations), with half the square roots and products.
  *
  * @module geodesy
  * @internal

@@ -66,16 +66,10 @@ function exactInto(t: number, k: number, out: Float64Array, at: number): boolean
 
 /**
  * sin and cos of t + 90°·k from those of t, into `out[at]`, `out[at + 1]`:
- * sin(t + 90°) = cos t, cos(t + 90°) = −sin t (the quadrant rotations).
- * @internal
+ * sin(t + 90°) = cos t, cos(t + 90°) = −sin t (the quadrant rotations; sinCosQuadrantInto ends
+ * with the same three lines, written there so that it stays one function for V8 to inline).
  */
-export function quadrantInto(
-  sin: number,
-  cos: number,
-  k: number,
-  out: Float64Array,
-  at: number,
-): void {
+function quadrantInto(sin: number, cos: number, k: number, out: Float64Array, at: number): void {
   // sin t goes to sin θ (k even) or cos θ (k odd), negated in quadrants 1 and 2 (k mod 4);
   // cos t to the other, negated in quadrants 2 and 3 (k & 3 is k mod 4, negative k too)
   const odd = k & 1;
