@@ -7,6 +7,8 @@ export const name = 'bearings';
 export const title = "(c') traverse by bearings, 1000 courses (compass rule)";
 const COURSES = 1000;
 export const repsScale = 1 / 3;
+/** Each item allocates ~3000 result objects: batches 8× as long (bench/run.mjs). */
+export const batchScale = 8;
 
 export function unavailable(lib) {
   return lib.g.traverse ? undefined : 'traverse() is not in the built package yet';

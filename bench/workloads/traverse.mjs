@@ -9,6 +9,8 @@ export const title = '(c) traverse closure, 1000 courses (compass rule)';
 const COURSES = 1000;
 /** Each item is a whole traverse (tens of ms in the exact arithmetics): a third of the pairs. */
 export const repsScale = 1 / 3;
+/** Each item allocates ~3000 result objects: batches 8× as long (bench/run.mjs). */
+export const batchScale = 8;
 
 export function unavailable(lib) {
   return lib.g.traverse ? undefined : 'traverse() is not in the built package yet';
