@@ -120,7 +120,7 @@ function directIn<T>(
   const sig1 = unit(A, b1.s, A.mul(alp.cos, b1.c));
   const om1 = unit(A, A.mul(sa0, b1.s), A.mul(alp.cos, b1.c)); // (0, 0) on the equator heading east or west: ω₁ = 0
   const k2 = A.mul(C.ep2, A.mul(ca0, ca0)); // k² = e′² cos²α₀ (eq. 9)
-  const { I1, I3 } = integrals(A, C, k2);
+  const { I1, I3 } = integrals(A, C, k2, false);
   // σ₁₂ with I₁(σ₁ + σ₁₂) − I₁(σ₁) = s₁₂/b  (eq. 7), solved for the increment itself so that
   // short lines keep its relative accuracy
   const sigma12 = solveSigma(A, C, I1.B0, I1.c, k2, A.div(s12, C.b), sig1, where);

@@ -174,12 +174,29 @@ export interface Series<T> {
   readonly c: T[];
 }
 
-/** @internal The three integrals' series for k² (I₁, I₂, I₃ of Karney 2013). */
+/**
+ * @internal The integrals' series for k² (I₁, I₂, I₃ of Karney 2013); I₂ only when `withI2`
+ * (the inverse solution needs it for the reduced length, the direct one does not: a third of
+ * the quadrature saved there).
+ */
 export function integrals<T>(
   A: Arithmetic<T>,
   ctx: GeodesicContext<T>,
   k2: T,
-): { I1: Series<T>; I2: Series<T>; I3: Series<T> } {
+  withI2: true,
+): { I1: Series<T>; I2: Series<T>; I3: Series<T> };
+export function integrals<T>(
+  A: Arithmetic<T>,
+  ctx: GeodesicContext<T>,
+  k2: T,
+  withI2: false,
+): { I1: Series<T>; I3: Series<T> };
+export function integrals<T>(
+  A: Arithmetic<T>,
+  ctx: GeodesicContext<T>,
+  k2: T,
+  withI2: boolean,
+): { I1: Series<T>; I2?: Series<T>; I3: Series<T> } {
   const { W, s2, L } = ctx;
   const H = s2.length; // the first half of the nodes (see geodesicContext)
   const g1: T[] = [];
@@ -188,7 +205,7 @@ export function integrals<T>(
   for (let j = 0; j < H; j++) {
     const w = root(A, A.add(A.one, A.mul(k2, s2[j]!))); // √(1 + k² sin²σ)
     g1.push(w);
-    g2.push(A.div(A.one, w));
+    if (withI2) g2.push(A.div(A.one, w));
     g3.push(A.div(ctx.twoMinusF, A.add(A.one, A.mul(ctx.f1, w))));
   }
   // The three integrals' coefficients together, one row of weights at a time.
@@ -206,7 +223,7 @@ export function integrals<T>(
     for (let j = 0; j < H; j++) {
       const wj = row[j]!;
       t1 = A.add(t1, A.mul(wj, g1[j]!));
-      t2 = A.add(t2, A.mul(wj, g2[j]!));
+      if (withI2) t2 = A.add(t2, A.mul(wj, g2[j]!));
       t3 = A.add(t3, A.mul(wj, g3[j]!));
     }
     if (l === 0) {
@@ -215,11 +232,13 @@ export function integrals<T>(
       B3 = t3;
     } else {
       c1.push(t1);
-      c2.push(t2);
+      if (withI2) c2.push(t2);
       c3.push(t3);
     }
   }
-  return { I1: { B0: B1, c: c1 }, I2: { B0: B2, c: c2 }, I3: { B0: B3, c: c3 } };
+  const I1 = { B0: B1, c: c1 };
+  const I3 = { B0: B3, c: c3 };
+  return withI2 ? { I1, I2: { B0: B2, c: c2 }, I3 } : { I1, I3 };
 }
 
 /**

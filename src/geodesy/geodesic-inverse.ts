@@ -377,7 +377,7 @@ function evaluate<T>(
     A.add(A.mul(co, lam.cos), A.mul(so, lam.sin)),
   );
   const k2 = A.mul(C.ep2, A.mul(ca0, ca0));
-  const { I1, I2, I3 } = integrals(A, C, k2);
+  const { I1, I2, I3 } = integrals(A, C, k2, true);
   const diff = (c: readonly T[]): T =>
     A.sub(sineSum(A, c, sig2.s, sig2.c), sineSum(A, c, sig1.s, sig1.c));
   // λ₁₂ − λ = η − f sin α₀ I₃(σ₁₂)  (eq. 8)
