@@ -5,8 +5,16 @@
 // headline lines `ratio float-vs-hand <x>`, `ratio naive-fraction-vs-rational <x>`,
 // `ratio naive-big-vs-decimal <x>`. Every ratio is the median of interleaved repeated
 // measurements, taken after every arithmetic has been through the same generic functions.
-// Options: --quick, --json <file> (write the results), --only <workload>.
-import { existsSync, writeFileSync } from 'node:fs';
+// Options: --quick, --json <file> (write the results), --only <workload>, --forks <n> (the
+// number of processes that measure, one after another; default 3).
+//
+// Forks: how V8 compiles a workload differs from one process to the next (which calls it
+// inlines, where it allocates), and a few workloads measure in two modes accordingly (the
+// heights through quadspread/float once at 1.9 where two other processes gave 1.0–1.2). Each
+// fork is a whole run in a process of its own; every figure reported is the median over the
+// forks, and a pair whose forks disagree by more than 25 % is named (`spread` lines).
+import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import path from 'node:path';
 import os from 'node:os';
@@ -14,6 +22,7 @@ import Fraction from 'fraction.js';
 import BigJs from 'big.js';
 import DecimalJsLib from 'decimal.js';
 import { ratio, median, keep, setClock, clockName } from './harness.mjs';
+import { combine, report } from './report.mjs';
 import * as triangle from './workloads/triangle.mjs';
 import * as heights from './workloads/heights.mjs';
 import * as traverse from './workloads/traverse.mjs';
@@ -35,6 +44,14 @@ const jsonAt = args.indexOf('--json');
 const jsonFile = jsonAt >= 0 ? args[jsonAt + 1] : undefined;
 const onlyAt = args.indexOf('--only');
 const only = onlyAt >= 0 ? args[onlyAt + 1] : undefined;
+const forksAt = args.indexOf('--forks');
+const forks = forksAt >= 0 ? Number(args[forksAt + 1]) : 3;
+if (!(Number.isInteger(forks) && forks >= 1)) {
+  console.error(`bench: --forks needs a whole number of processes, at least 1`);
+  process.exit(2);
+}
+// A fork started by this script: it measures and writes its rows, the parent reports.
+const isFork = args.includes('--fork');
 // CPU time of this process by default (a loaded machine's waiting is not counted); --wall for
 // elapsed time.
 setClock(args.includes('--wall') ? 'wall' : 'cpu');
@@ -46,6 +63,36 @@ if (!existsSync(path.join(root, 'dist'))) {
   console.error('bench: dist/ is missing: run `npm run build` first');
   process.exit(2);
 }
+if (!isFork && forks > 1) {
+  // The parent: runs the forks one after another (never side by side: they would share the
+  // cores), each writing its rows as JSON, and reports the medians.
+  const dir = mkdtempSync(path.join(os.tmpdir(), 'quadspread-bench-'));
+  const runs = [];
+  const childArgs = args.filter(
+    (a, i) => !['--json', '--forks'].includes(a) && !['--json', '--forks'].includes(args[i - 1]),
+  );
+  try {
+    for (let k = 0; k < forks; k++) {
+      console.log(`fork ${k + 1} of ${forks}`);
+      const file = path.join(dir, `fork-${k}.json`);
+      const r = spawnSync(
+        process.execPath,
+        [fileURLToPath(import.meta.url), ...childArgs, '--fork', '--json', file],
+        { stdio: ['ignore', 'inherit', 'inherit'] },
+      );
+      if (r.status !== 0) {
+        console.error(`bench: fork ${k + 1} failed (exit ${r.status ?? r.signal})`);
+        process.exit(1);
+      }
+      runs.push(JSON.parse(readFileSync(file, 'utf8')));
+    }
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+  report(combine(runs), jsonFile);
+  process.exit(0);
+}
+
 const g = await import('quadspread');
 const F = await import('quadspread/float');
 const R = await import('quadspread/rational');
@@ -62,7 +109,7 @@ const lib = { g, F, R, D, Fraction, Big, DecimalJs };
 // Short batches, many pairs: on a loaded machine a short batch is less often interrupted, and
 // the median of many adjacent pairs discards the interrupted ones.
 const settings = quick
-  ? { reps: 31, targetMs: 3, n: 300, growthN: 100 }
+  ? { reps: 15, targetMs: 3, n: 300, growthN: 100 }
   : { reps: 61, targetMs: 5, n: 1000, growthN: 400 };
 const t0 = Date.now();
 
@@ -104,8 +151,9 @@ for (const [, b] of built) b.pollute(arithmetics);
 const rows = [];
 const fmt = (x) =>
   x >= 100 ? x.toFixed(0) : x >= 10 ? x.toFixed(1) : x >= 1 ? x.toFixed(2) : x.toFixed(3);
-function row(workload, pair, ours, base, m, higherIsBetter) {
+function row(kind, workload, pair, ours, base, m, higherIsBetter) {
   const r = {
+    kind,
     workload,
     pair,
     ours,
@@ -113,6 +161,7 @@ function row(workload, pair, ours, base, m, higherIsBetter) {
     oursUs: m.aUs,
     baseUs: m.bUs,
     ratio: higherIsBetter ? 1 / m.ratio : m.ratio,
+    higherIsBetter,
   };
   rows.push(r);
   // A contradiction: the ratio of the per-side medians disagrees with the median of the
@@ -132,13 +181,13 @@ function row(workload, pair, ours, base, m, higherIsBetter) {
 console.log(
   `quadspread bench (${quick ? 'quick' : 'full'}): node ${process.version}, ${os.cpus().length} cpus, ${os.cpus()[0]?.model ?? '?'}`,
 );
+const loadAtStart = os.loadavg()[0];
 console.log(
-  `each ratio: median of ${settings.reps} interleaved pairs of batches of >= ${settings.targetMs} ms of ${clockName() === 'cpu' ? 'CPU time (process.cpuUsage)' : 'elapsed time'}; load average ${os.loadavg()[0].toFixed(2)} at the start`,
+  `each ratio: median of ${settings.reps} interleaved pairs of batches of >= ${settings.targetMs} ms of ${clockName() === 'cpu' ? 'CPU time (process.cpuUsage)' : 'elapsed time'}; load average ${loadAtStart.toFixed(2)} at the start`,
 );
 console.log(
   `${'workload'.padEnd(10)} ${'pair (ours vs baseline)'.padEnd(26)} ${'ours/item'.padStart(12)} ${'base/item'.padStart(12)}`,
 );
-const headline = { float: [], fraction: [], big: [], decimalJs: [], generic: [], extra: [] };
 for (const [w, b] of built) {
   // A workload whose items are large (a 1000-course traverse) may ask for fewer pairs, and one
   // that allocates much per item for longer batches (`batchScale`), so that each batch spans
@@ -151,66 +200,59 @@ for (const [w, b] of built) {
     targetMs: settings.targetMs * (w.batchScale ?? 1),
   };
   if (b.float)
-    headline.float.push(
-      row(
-        w.name,
-        `float vs ${w.baseline ?? 'hand-written'}`,
-        'float',
-        'hand',
-        ratio(b.float.ours, b.float.hand, o),
-        false,
-      ),
+    row(
+      'float',
+      w.name,
+      `float vs ${w.baseline ?? 'hand-written'}`,
+      'float',
+      'hand',
+      ratio(b.float.ours, b.float.hand, o),
+      false,
     );
   if (b.floatGeneric)
-    headline.generic.push(
-      row(
-        w.name,
-        '(generic entry, float)',
-        'generic',
-        'hand',
-        ratio(b.floatGeneric.ours, b.floatGeneric.hand, o),
-        false,
-      ),
+    row(
+      'generic',
+      w.name,
+      '(generic entry, float)',
+      'generic',
+      'hand',
+      ratio(b.floatGeneric.ours, b.floatGeneric.hand, o),
+      false,
     );
   if (b.rational)
-    headline.fraction.push(
-      row(
-        w.name,
-        'fraction.js vs rational',
-        'rational',
-        'fraction.js',
-        ratio(b.rational.ours, b.rational.naive, o),
-        true,
-      ),
+    row(
+      'fraction',
+      w.name,
+      'fraction.js vs rational',
+      'rational',
+      'fraction.js',
+      ratio(b.rational.ours, b.rational.naive, o),
+      true,
     );
   if (b.decimalJs)
-    headline.decimalJs.push(
-      row(
-        w.name,
-        'decimal.js vs decimal(34)',
-        'decimal',
-        'decimal.js',
-        ratio(b.decimalJs.ours, b.decimalJs.naive, o),
-        true,
-      ),
+    row(
+      'decimalJs',
+      w.name,
+      'decimal.js vs decimal(34)',
+      'decimal',
+      'decimal.js',
+      ratio(b.decimalJs.ours, b.decimalJs.naive, o),
+      true,
     );
   for (const line of b.info ?? []) console.log(line);
   // Other pairs a workload defines (lower is better), e.g. exact work with and without roots.
   for (const x of b.extra ?? [])
-    headline.extra.push({
-      ...row(w.name, x.pair, 'ours', 'base', ratio(x.ours, x.base, o), false),
-      line: `${w.name}-${x.line}`,
-    });
+    row('extra', w.name, x.pair, 'ours', 'base', ratio(x.ours, x.base, o), false).line =
+      `${w.name}-${x.line}`;
   if (b.decimal)
-    headline.big.push(
-      row(
-        w.name,
-        'big.js vs decimal(34)',
-        'decimal',
-        'big.js',
-        ratio(b.decimal.ours, b.decimal.naive, o),
-        true,
-      ),
+    row(
+      'big',
+      w.name,
+      'big.js vs decimal(34)',
+      'decimal',
+      'big.js',
+      ratio(b.decimal.ours, b.decimal.naive, o),
+      true,
     );
 }
 
@@ -243,68 +285,17 @@ if (!only || only === 'triangle') {
   );
 }
 
-// Headline: the triangle workload (a), the one measured before any code existed (docs/design.md);
-// the other workloads' ratios are printed above and tabled in docs/performance.md.
-const pick = (list) => (list.find((r) => r.workload === 'triangle') ?? list[0])?.ratio;
-const hf = pick(headline.float),
-  hr = pick(headline.fraction),
-  hb = pick(headline.big);
-console.log(`ratio float-vs-hand ${hf?.toFixed(2) ?? 'n/a'}`);
-console.log(`ratio naive-fraction-vs-rational ${hr?.toFixed(2) ?? 'n/a'}`);
-console.log(`ratio naive-big-vs-decimal ${hb?.toFixed(2) ?? 'n/a'}`);
-// One line per workload: `ratio <workload> <float time / hand-written float time>`, the goal
-// figure of every workload; then the same through the generic entry, and the worst of each.
-for (const r of headline.float) console.log(`ratio ${r.workload} ${r.ratio.toFixed(2)}`);
-for (const r of headline.generic) console.log(`ratio ${r.workload}-generic ${r.ratio.toFixed(2)}`);
-for (const r of headline.decimalJs)
-  console.log(`ratio ${r.workload}-decimal.js-vs-decimal ${r.ratio.toFixed(2)}`);
-for (const r of headline.fraction)
-  console.log(`ratio ${r.workload}-fraction.js-vs-rational ${r.ratio.toFixed(2)}`);
-for (const r of headline.extra) console.log(`ratio ${r.line} ${r.ratio.toFixed(2)}`);
-const worstFloat = headline.float.reduce((a, r) => (a && a.ratio >= r.ratio ? a : r), undefined);
-const worstGeneric = headline.generic.reduce(
-  (a, r) => (a && a.ratio >= r.ratio ? a : r),
-  undefined,
-);
-if (worstFloat) console.log(`ratio worst ${worstFloat.ratio.toFixed(2)} (${worstFloat.workload})`);
-if (worstGeneric)
-  console.log(`ratio worst-generic ${worstGeneric.ratio.toFixed(2)} (${worstGeneric.workload})`);
-const contradictions = rows.filter((r) => r.contradiction).length;
-console.log(`contradictions ${contradictions} of ${rows.length} pairs`);
-const worstOf = (list, f) =>
-  list.length ? list.reduce((a, r) => (f(r.ratio, a.ratio) ? r : a)) : undefined;
-const worst = {
-  float: worstOf(headline.float, (x, y) => x > y),
-  fraction: worstOf(headline.fraction, (x, y) => x < y),
-  big: worstOf(headline.big, (x, y) => x < y),
-  decimalJs: worstOf(headline.decimalJs, (x, y) => x < y),
+const meta = {
+  quick,
+  node: process.version,
+  cpus: os.cpus().length,
+  cpu: os.cpus()[0]?.model,
+  settings,
+  clock: clockName(),
+  load: [loadAtStart, os.loadavg()[0]],
+  elapsed: (Date.now() - t0) / 1000,
+  checksum: keep() % 10,
 };
-const w = (r) => (r ? `${r.ratio.toFixed(2)} (${r.workload})` : 'n/a');
-console.log(
-  `worst over workloads: float-vs-hand ${w(worst.float)}, naive-fraction-vs-rational ${w(worst.fraction)}, naive-big-vs-decimal ${w(worst.big)}, decimal.js-vs-decimal ${w(worst.decimalJs)}`,
-);
-console.log(
-  `elapsed ${((Date.now() - t0) / 1000).toFixed(1)} s, load average ${os.loadavg()[0].toFixed(2)} at the end (checksum ${keep() % 10})`,
-);
-if (jsonFile) {
-  writeFileSync(
-    jsonFile,
-    JSON.stringify(
-      {
-        quick,
-        node: process.version,
-        cpus: os.cpus().length,
-        cpu: os.cpus()[0]?.model,
-        settings,
-        clock: clockName(),
-        rows,
-        growth,
-        headline: { floatVsHand: hf, naiveFractionVsRational: hr, naiveBigVsDecimal: hb },
-        worst,
-      },
-      null,
-      2,
-    ),
-  );
-}
+if (isFork) writeFileSync(jsonFile, JSON.stringify({ meta, rows, growth }));
+else report({ meta, rows, growth, forks: 1 }, jsonFile);
 void median;

@@ -21,15 +21,19 @@ const goal = {
 };
 const out = [];
 out.push(
-  `${r.quick ? 'Quick' : 'Full'} run: median of ${r.settings.reps} interleaved pairs per ratio (a third as many for the traverse), ${r.settings.targetMs} ms batches; Node ${r.node}, ${r.cpus} cpus, ${r.cpu}.`,
+  `${r.quick ? 'Quick' : 'Full'} run${r.forks > 1 ? ` in ${r.forks} processes (each figure the median of theirs)` : ''}: median of ${r.settings.reps} interleaved pairs per ratio (fewer for the workloads whose items are large), ${r.settings.targetMs} ms batches; Node ${r.node}, ${r.cpus} cpus, ${r.cpu}.`,
 );
 out.push('');
-out.push('| workload | ours vs baseline | ours / item | baseline / item | ratio | goal met |');
-out.push('|---|---|---:|---:|---:|---|');
+const forks = r.forks > 1;
+out.push(
+  `| workload | ours vs baseline | ours / item | baseline / item | ratio |${forks ? ' each process |' : ''} goal met |`,
+);
+out.push(`|---|---|---:|---:|---:|${forks ? '---|' : ''}---|`);
 for (const row of r.rows) {
   const g = goal[row.pair];
+  const each = forks ? ` ${row.forkRatios.map((x) => x.toFixed(2)).join(', ')} |` : '';
   out.push(
-    `| ${row.workload} | ${row.pair} | ${f(row.oursUs)} µs | ${f(row.baseUs)} µs | ${row.ratio.toFixed(2)} | ${g ? g(row.ratio) : '(for reference)'} |`,
+    `| ${row.workload} | ${row.pair} | ${f(row.oursUs)} µs | ${f(row.baseUs)} µs | ${row.ratio.toFixed(2)} |${each} ${g ? g(row.ratio) : '(for reference)'} |`,
   );
 }
 out.push('');
