@@ -88,9 +88,13 @@ export function decimalKernels(
     if (coef === 0n) return big(1, 0, [0]);
     const neg = coef < 0n;
     const t = (neg ? -coef : coef).toString();
-    let n = t.length;
-    let c: number[];
-    let e = exp + n - 1;
+    const n = t.length;
+    const e = exp + n - 1;
+    // The digits kept, without trailing zeros (big.js keeps none): the array is made at its
+    // final length (setting an array's length afterwards is a call into the runtime, and was
+    // a tenth of a decimal traverse).
+    let keep = n;
+    let bump = false;
     if (n > digits) {
       // Round the decimal digits themselves: look at the first dropped digit and the rest.
       const next = t.charCodeAt(digits) - 48;
@@ -104,26 +108,19 @@ export function decimalKernels(
           }
         up = rest || (t.charCodeAt(digits - 1) - 48) % 2 === 1;
       }
-      n = digits;
-      c = new Array(n);
-      for (let i = 0; i < n; i++) c[i] = t.charCodeAt(i) - 48;
+      keep = digits;
       if (up) {
-        let i = n - 1;
-        while (i >= 0 && c[i] === 9) c[i--] = 0;
-        if (i >= 0) c[i]! += 1;
-        else {
-          c.unshift(1); // 99…9 rounded up to 10…0
-          c.length = n;
-          e += 1;
-        }
+        // The nines before the last kept digit that is not a nine become zeros (dropped); that
+        // digit goes up by one. All nines: 99…9 rounds up to 10…0.
+        while (keep > 0 && t.charCodeAt(keep - 1) === 57) keep--;
+        if (keep === 0) return big(neg ? -1 : 1, e + 1, [1]);
+        bump = true;
       }
-    } else {
-      c = new Array(n);
-      for (let i = 0; i < n; i++) c[i] = t.charCodeAt(i) - 48;
     }
-    let end = c.length;
-    while (end > 1 && c[end - 1] === 0) end--;
-    c.length = end;
+    if (!bump) while (keep > 1 && t.charCodeAt(keep - 1) === 48) keep--;
+    const c: number[] = new Array(keep);
+    for (let i = 0; i < keep; i++) c[i] = t.charCodeAt(i) - 48;
+    if (bump) c[keep - 1]! += 1;
     return big(neg ? -1 : 1, e, c);
   }
 
