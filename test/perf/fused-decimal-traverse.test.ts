@@ -112,4 +112,37 @@ describe('the fused decimal traverse kernel', () => {
       { numRuns: 200 },
     );
   });
+
+  it('rounds its sums at the edges: ties to even, nines carried, trailing zeros dropped', () => {
+    // Three significant digits. Each start and course value has three digits or fewer, so the
+    // reading rounds nothing; the running sums below need four and are rounded once (IEEE 754
+    // roundTiesToEven, worked by hand): 9990 + 5 = 9995 → 1.00e4 (999 is odd: up, every nine
+    // carried); 9980 + 5 = 9985 → 9980 (998 is even: kept); 9980 + 6 = 9986 → 9990 (up, no
+    // carry); 9990 + 9 = 9999 → 1.00e4; 12000 + 0 = 12000 (written 1.2e4, two digits).
+    const D = decimal(3);
+    const cases: [string, string, string][] = [
+      ['9990', '5', '10000'],
+      ['9980', '5', '9980'],
+      ['9980', '6', '9990'],
+      ['9990', '9', '10000'],
+      ['-9990', '-5', '-10000'],
+      ['12000', '0', '12000'],
+    ];
+    for (const [a, b, want] of cases) {
+      const input = {
+        start: { x: D.from('0'), y: D.from('0') },
+        courses: [
+          { latitude: D.zero, departure: D.from(a), distance: D.from(a.replace('-', '')) },
+          { latitude: D.zero, departure: D.from(b), distance: D.from(b.replace('-', '')) },
+          { latitude: D.from('1'), departure: D.zero, distance: D.from('1') },
+        ],
+      };
+      const fast = traverse(D, input);
+      const plain: Arithmetic<Decimal, false> = { ...D, kernels: undefined };
+      const slow = traverse(plain, input);
+      expect(D.toString(fast.points[2]!.x), `${a} + ${b}`).toBe(want);
+      expect(D.toString(slow.points[2]!.x), `${a} + ${b}, generic`).toBe(want);
+      expect(fast.points[2]!.x.c.at(-1) !== 0 || fast.points[2]!.x.c.length === 1).toBe(true);
+    }
+  });
 });
