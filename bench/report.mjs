@@ -8,19 +8,20 @@ const SPREAD = 1.25;
 
 /**
  * The runs of several forks as one: each pair's ratio and per-item times are the medians over
- * the forks that measured it; `forkRatios` keeps each fork's ratio, `spread` says whether the
- * largest is more than {@link SPREAD} times the smallest.
+ * the forks that measured it (taken separately: ours / base need not equal the ratio);
+ * `forkRatios` keeps each fork's ratio, `spread` says whether the largest is more than
+ * {@link SPREAD} times the smallest.
  */
 export function combine(runs) {
-  const byKey = new Map();
-  for (const run of runs) {
-    for (const r of run.rows) {
-      const key = `${r.workload}\u0000${r.pair}`;
-      if (!byKey.has(key)) byKey.set(key, []);
-      byKey.get(key).push(r);
-    }
-  }
-  const rows = [...byKey.values()].map((list) => {
+  const keyOf = (r) => `${r.workload}\u0000${r.pair}`;
+  // Every pair in the order the first process measured it (then any the others added), each
+  // fork's ratio in the order of the forks (null where a fork did not measure the pair).
+  const keys = [];
+  for (const run of runs)
+    for (const r of run.rows) if (!keys.includes(keyOf(r))) keys.push(keyOf(r));
+  const rows = keys.map((key) => {
+    const each = runs.map((run) => run.rows.find((r) => keyOf(r) === key));
+    const list = each.filter(Boolean);
     const ratios = list.map((r) => r.ratio);
     const hi = Math.max(...ratios);
     const lo = Math.min(...ratios);
@@ -30,12 +31,12 @@ export function combine(runs) {
       oursUs: median(list.map((r) => r.oursUs)),
       baseUs: median(list.map((r) => r.baseUs)),
       contradiction: list.some((r) => r.contradiction),
-      forkRatios: ratios,
+      forkRatios: each.map((r) => (r ? r.ratio : null)),
       spread: hi > SPREAD * lo,
     };
   });
-  const growth = runs[0].growth.map((g0, i) => {
-    const at = runs.map((run) => run.growth[i]).filter(Boolean);
+  const growth = runs[0].growth.map((g0) => {
+    const at = runs.map((run) => run.growth.find((g) => g.digits === g0.digits)).filter(Boolean);
     const out = { digits: g0.digits };
     for (const k of Object.keys(g0)) if (k !== 'digits') out[k] = median(at.map((g) => g[k]));
     return out;
@@ -48,6 +49,8 @@ export function combine(runs) {
   };
   return { meta, rows, growth, forks: runs.length };
 }
+
+const show = (x) => (x === null ? '–' : x.toFixed(2));
 
 /** Prints the summary lines of a run (one process or forks combined) and writes its JSON. */
 export function report({ meta, rows, growth, forks }, jsonFile) {
@@ -62,11 +65,11 @@ export function report({ meta, rows, growth, forks }, jsonFile) {
     console.log(`medians over ${forks} forks (each figure: the median of the forks' figures):`);
     for (const r of rows)
       console.log(
-        `${r.workload.padEnd(10)} ${r.pair.padEnd(26)} ratio ${r.ratio.toFixed(2)}  (forks: ${r.forkRatios.map((x) => x.toFixed(2)).join(', ')})`,
+        `${r.workload.padEnd(10)} ${r.pair.padEnd(26)} ratio ${r.ratio.toFixed(2)}  (forks: ${r.forkRatios.map(show).join(', ')})`,
       );
     for (const r of rows.filter((x) => x.spread))
       console.log(
-        `spread ${r.workload} ${r.pair}: the forks measured ${r.forkRatios.map((x) => x.toFixed(2)).join(', ')} (more than ${SPREAD}× apart: the process's compiled state, not the load)`,
+        `spread ${r.workload} ${r.pair}: the forks measured ${r.forkRatios.map(show).join(', ')} (more than ${SPREAD}× apart: the process's compiled state, not the load)`,
       );
   }
   // Headline: the triangle workload (a), the one measured before any code existed

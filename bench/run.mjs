@@ -71,6 +71,7 @@ if (!isFork && forks > 1) {
   const childArgs = args.filter(
     (a, i) => !['--json', '--forks'].includes(a) && !['--json', '--forks'].includes(args[i - 1]),
   );
+  let failed;
   try {
     for (let k = 0; k < forks; k++) {
       console.log(`fork ${k + 1} of ${forks}`);
@@ -81,16 +82,24 @@ if (!isFork && forks > 1) {
         { stdio: ['ignore', 'inherit', 'inherit'] },
       );
       if (r.status !== 0) {
-        console.error(`bench: fork ${k + 1} failed (exit ${r.status ?? r.signal})`);
-        process.exit(1);
+        failed = `fork ${k + 1} failed (${r.error ? r.error.message : `exit ${r.status ?? r.signal}`})`;
+        break;
       }
       runs.push(JSON.parse(readFileSync(file, 'utf8')));
     }
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }
+  if (failed) {
+    console.error(`bench: ${failed}`);
+    process.exit(1);
+  }
   report(combine(runs), jsonFile);
   process.exit(0);
+}
+if (isFork && !jsonFile) {
+  console.error('bench: --fork is for the processes this script starts (it needs --json <file>)');
+  process.exit(2);
 }
 
 const g = await import('quadspread');

@@ -21,7 +21,7 @@ const goal = {
 };
 const out = [];
 out.push(
-  `${r.quick ? 'Quick' : 'Full'} run${r.forks > 1 ? ` in ${r.forks} processes (each figure the median of theirs)` : ''}: median of ${r.settings.reps} interleaved pairs per ratio (fewer for the workloads whose items are large), ${r.settings.targetMs} ms batches; Node ${r.node}, ${r.cpus} cpus, ${r.cpu}.`,
+  `${r.quick ? 'Quick' : 'Full'} run${r.forks > 1 ? ` in ${r.forks} processes (each figure the median of theirs)` : ''}: median of ${r.settings.reps} interleaved pairs per ratio (fewer for the workloads whose items are large), ${r.settings.targetMs} ms batches (8× as long for the two 1000-course traverses); Node ${r.node}, ${r.cpus} cpus, ${r.cpu}.`,
 );
 out.push('');
 const forks = r.forks > 1;
@@ -31,7 +31,9 @@ out.push(
 out.push(`|---|---|---:|---:|---:|${forks ? '---|' : ''}---|`);
 for (const row of r.rows) {
   const g = goal[row.pair];
-  const each = forks ? ` ${row.forkRatios.map((x) => x.toFixed(2)).join(', ')} |` : '';
+  const each = forks
+    ? ` ${row.forkRatios.map((x) => (x === null ? '–' : x.toFixed(2))).join(', ')} |`
+    : '';
   out.push(
     `| ${row.workload} | ${row.pair} | ${f(row.oursUs)} µs | ${f(row.baseUs)} µs | ${row.ratio.toFixed(2)} |${each} ${g ? g(row.ratio) : '(for reference)'} |`,
   );

@@ -8,6 +8,12 @@ import { loop1 } from '../harness.mjs';
 import { makeCases as heightCases } from './heights.mjs';
 
 export const name = 'budget';
+/**
+ * Batches 8× as long (bench/run.mjs): each budget leaves many short-lived objects, and with
+ * short batches its ratio moved from 1.9 to 4.0 between processes of one quick run; 2.6–2.8
+ * in six processes with these (2026-12-04).
+ */
+export const batchScale = 8;
 export const title = '(d) uncertainty budget of (b), float';
 const SIG_C = 0.002,
   SIG_R = 1e-6;

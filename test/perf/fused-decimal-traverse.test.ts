@@ -118,7 +118,8 @@ describe('the fused decimal traverse kernel', () => {
     // reading rounds nothing; the running sums below need four and are rounded once (IEEE 754
     // roundTiesToEven, worked by hand): 9990 + 5 = 9995 → 1.00e4 (999 is odd: up, every nine
     // carried); 9980 + 5 = 9985 → 9980 (998 is even: kept); 9980 + 6 = 9986 → 9990 (up, no
-    // carry); 9990 + 9 = 9999 → 1.00e4; 12000 + 0 = 12000 (written 1.2e4, two digits).
+    // carry); 9990 + 9 = 9999 → 1.00e4; 12000 + 0 = 12000 (written 1.2e4, two digits); and
+    // the two below.
     const D = decimal(3);
     const cases: [string, string, string][] = [
       ['9990', '5', '10000'],
@@ -127,6 +128,10 @@ describe('the fused decimal traverse kernel', () => {
       ['9990', '9', '10000'],
       ['-9990', '-5', '-10000'],
       ['12000', '0', '12000'],
+      // 10900 + 96 = 10996 → 110|96: up; the nines carried, the zero before them kept → 11000.
+      ['10900', '96', '11000'],
+      // 99800 + 51 = 99851 → 998|51: up although 8 is even (a digit after the 5) → 99900.
+      ['99800', '51', '99900'],
     ];
     for (const [a, b, want] of cases) {
       const input = {
