@@ -21,7 +21,7 @@ import os from 'node:os';
 import Fraction from 'fraction.js';
 import BigJs from 'big.js';
 import DecimalJsLib from 'decimal.js';
-import { ratio, median, keep, setClock, clockName } from './harness.mjs';
+import { ratio, keep, setClock, clockName } from './harness.mjs';
 import { combine, report } from './report.mjs';
 import * as triangle from './workloads/triangle.mjs';
 import * as heights from './workloads/heights.mjs';
@@ -307,4 +307,3 @@ const meta = {
 };
 if (isFork) writeFileSync(jsonFile, JSON.stringify({ meta, rows, growth }));
 else report({ meta, rows, growth, forks: 1 }, jsonFile);
-void median;
