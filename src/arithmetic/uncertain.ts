@@ -63,7 +63,7 @@ const SIN_COS = /* @__PURE__ */ new Float64Array(2);
 export class Uncertain<T> {
   /** The value y in the base arithmetic. */
   readonly value: T;
-  /** @internal the inputs, in the order first met; shared between values, never mutated */
+  /** @internal the inputs (see {@link gradient} for their order); shared between values, never mutated */
   readonly inputs: readonly UncertainInput<T>[];
   /** @internal ∂y/∂inputs[i] */
   readonly derivatives: readonly T[];
@@ -86,8 +86,9 @@ export class Uncertain<T> {
   }
 
   /**
-   * ∂y/∂xᵢ for each input the value depends on (empty for constants), in the order first met;
-   * where one operand's inputs include all of the other's, the result keeps the fuller list's order.
+   * ∂y/∂xᵢ for each input the value depends on (empty for constants). An operation's result
+   * lists the inputs of its operand with more of them (the first operand's on a tie) in that
+   * operand's order, then the other operand's inputs not among them, in their order.
    */
   get gradient(): Gradient<T> {
     if (this.#map === undefined) {
@@ -130,15 +131,27 @@ function indexOf<T>(keys: Keys<T>, k: UncertainInput<T>): number {
 }
 
 /**
- * The union of two input lists as `b`'s positions in it: `keys` is `a` itself when `b`
- * brings no new input (so results keep sharing one array).
+ * How many inputs `a` and `b` have in the same places from the start: results take the
+ * fuller operand's list, or extend it, so related values' lists share a beginning.
  */
-function union<T>(a: Keys<T>, b: Keys<T>): { keys: Keys<T>; where: number[] } {
+function sharedStart<T>(a: Keys<T>, b: Keys<T>): number {
+  const n = b.length < a.length ? b.length : a.length;
+  let p = 0;
+  while (p < n && a[p] === b[p]) p++;
+  return p;
+}
+
+/**
+ * The union of two input lists as `b`'s positions in it: `a`'s inputs, then `b`'s that are
+ * not among them. `b[0..p)` are known to be `a[0..p)` (see {@link sharedStart}).
+ */
+function union<T>(a: Keys<T>, b: Keys<T>, p: number): { keys: Keys<T>; where: number[] } {
   const where = new Array<number>(b.length);
+  for (let j = 0; j < p; j++) where[j] = j;
   let keys: UncertainInput<T>[] | undefined;
   const big = a.length * b.length > 256;
   const index = big ? new Map(a.map((k, i) => [k, i] as const)) : undefined;
-  for (let j = 0; j < b.length; j++) {
+  for (let j = p; j < b.length; j++) {
     const k = b[j] as UncertainInput<T>;
     let i = index ? (index.get(k) ?? -1) : indexOf(a, k);
     if (i < 0) {
@@ -154,16 +167,18 @@ function union<T>(a: Keys<T>, b: Keys<T>): { keys: Keys<T>; where: number[] } {
 }
 
 /**
- * Where each of `small`'s inputs sits in `big`, or `undefined` when one of them is not there.
- * When it gives positions, a result of operands with these lists takes `big` itself as its
- * inputs, so the values of a computation come to share one array (and later operations
- * between them are plain loops) instead of each holding the inputs in its own order.
+ * Where each of `small`'s inputs sits in `big`, or `undefined` when one of them is not there;
+ * `small[0..p)` are known to be `big[0..p)`. When it gives positions, a result of operands
+ * with these lists takes `big` itself as its inputs, so the values of a computation come to
+ * share one array (and later operations between them are plain loops) instead of each
+ * holding the inputs in its own order.
  */
-function within<T>(big: Keys<T>, small: Keys<T>): number[] | undefined {
+function within<T>(big: Keys<T>, small: Keys<T>, p: number): number[] | undefined {
   const where = new Array<number>(small.length);
+  for (let j = 0; j < p; j++) where[j] = j;
   const index =
     big.length * small.length > 256 ? new Map(big.map((k, i) => [k, i] as const)) : undefined;
-  for (let j = 0; j < small.length; j++) {
+  for (let j = p; j < small.length; j++) {
     const k = small[j] as UncertainInput<T>;
     const i = index ? (index.get(k) ?? -1) : indexOf(big, k);
     if (i < 0) return undefined;
@@ -295,8 +310,25 @@ function withOperandChecks<T, E extends boolean>(
 const SQRT_AT_ZERO =
   'a = 0 depends on uncertain inputs: the derivative of √a there is infinite, so first-order propagation does not apply';
 
-/** ca·∇a + cb·∇b over the union of inputs; `undefined` coefficients mean 1. */
+/**
+ * ca·∇a + cb·∇b over the union of inputs; `undefined` coefficients mean 1. The operand with
+ * the longer list of inputs leads (its list is the result's, or the start of it), so the
+ * values of a computation come to share one list, or lists that begin with the same inputs.
+ */
 function lin<T>(
+  B: Arithmetic<T>,
+  value: T,
+  a: Uncertain<T>,
+  ca: T | undefined,
+  b: Uncertain<T>,
+  cb: T | undefined,
+): Uncertain<T> {
+  if (a.inputs.length < b.inputs.length) return linFuller(B, value, b, cb, a, ca);
+  return linFuller(B, value, a, ca, b, cb);
+}
+
+/** {@link lin} with `a` the operand whose inputs list is at least as long as `b`'s. */
+function linFuller<T>(
   B: Arithmetic<T>,
   value: T,
   a: Uncertain<T>,
@@ -307,31 +339,24 @@ function lin<T>(
   const na = a.inputs.length;
   const nb = b.inputs.length;
   if (nb === 0) return scaled(B, value, a, ca);
-  if (na === 0) return scaled(B, value, b, cb);
+  const ka = a.inputs;
+  const kb = b.inputs;
   const da = a.derivatives;
   const db = b.derivatives;
-  if (a.inputs === b.inputs) {
+  const p = sharedStart(ka, kb);
+  const inA = p === nb ? undefined : within(ka, kb, p);
+  if (p === nb || inA !== undefined) {
+    // every input of `b` is one of `a`'s: the result takes `a`'s list
     const d = new Array<T>(na);
-    for (let i = 0; i < na; i++) {
-      const x = ca === undefined ? (da[i] as T) : B.mul(ca, da[i] as T);
-      const y = cb === undefined ? (db[i] as T) : B.mul(cb, db[i] as T);
-      d[i] = B.add(x, y);
+    for (let i = 0; i < na; i++) d[i] = ca === undefined ? (da[i] as T) : B.mul(ca, da[i] as T);
+    for (let j = 0; j < nb; j++) {
+      const y = cb === undefined ? (db[j] as T) : B.mul(cb, db[j] as T);
+      const i = inA === undefined ? j : (inA[j] as number);
+      d[i] = B.add(d[i] as T, y);
     }
-    return new Uncertain(value, a.inputs, d);
+    return new Uncertain(value, ka, d);
   }
-  const inB = na < nb ? within(b.inputs, a.inputs) : undefined;
-  if (inB !== undefined) {
-    // every input of `a` is one of `b`'s: the result takes `b`'s list
-    const d = new Array<T>(nb);
-    for (let j = 0; j < nb; j++) d[j] = cb === undefined ? (db[j] as T) : B.mul(cb, db[j] as T);
-    for (let i = 0; i < na; i++) {
-      const x = ca === undefined ? (da[i] as T) : B.mul(ca, da[i] as T);
-      const j = inB[i] as number;
-      d[j] = B.add(x, d[j] as T);
-    }
-    return new Uncertain(value, b.inputs, d);
-  }
-  const { keys, where } = union(a.inputs, b.inputs);
+  const { keys, where } = union(ka, kb, p);
   const d = new Array<T>(keys.length);
   for (let i = 0; i < na; i++) d[i] = ca === undefined ? (da[i] as T) : B.mul(ca, da[i] as T);
   for (let j = 0; j < nb; j++) {
@@ -478,7 +503,10 @@ function linF(
   return finiteGradient(new Uncertain(value, keys, d), z);
 }
 
-/** {@link linF} for operands with different inputs arrays (or none). */
+/**
+ * {@link linF} for operands with different inputs arrays (or none): the operand with the
+ * longer list leads, as in {@link lin}.
+ */
 function linApartF(
   value: number,
   a: Uncertain<number>,
@@ -486,39 +514,54 @@ function linApartF(
   b: Uncertain<number>,
   cb: number,
 ): Uncertain<number> {
-  const na = a.inputs.length;
-  const nb = b.inputs.length;
+  if (a.inputs.length < b.inputs.length) return linFullerF(value, b, cb, a, ca);
+  return linFullerF(value, a, ca, b, cb);
+}
+
+/** {@link linApartF} with `a` the operand whose list is at least as long as `b`'s. */
+function linFullerF(
+  value: number,
+  a: Uncertain<number>,
+  ca: number,
+  b: Uncertain<number>,
+  cb: number,
+): Uncertain<number> {
+  const ka = a.inputs;
+  const kb = b.inputs;
+  const na = ka.length;
+  const nb = kb.length;
   if (nb === 0) return scaledF(value, a, ca);
-  if (na === 0) return scaledF(value, b, cb);
   const da = a.derivatives;
   const db = b.derivatives;
+  const p = sharedStart(ka, kb);
   let z = 0;
-  if (na < nb) {
-    const inB = within(b.inputs, a.inputs);
-    if (inB !== undefined) {
-      const d = new Array<number>(nb);
-      for (let j = 0; j < nb; j++) d[j] = cb * (db[j] as number);
-      for (let i = 0; i < na; i++) {
-        const j = inB[i] as number;
-        d[j] = ca * (da[i] as number) + (d[j] as number);
-      }
-      for (let j = 0; j < nb; j++) z += (d[j] as number) * 0;
-      return finiteGradient(new Uncertain(value, b.inputs, d), z);
+  if (p === nb) {
+    // `b`'s list is the start of `a`'s: the result takes `a`'s, position for position
+    const d = new Array<number>(na);
+    for (let i = 0; i < nb; i++) {
+      const x = ca * (da[i] as number) + cb * (db[i] as number);
+      d[i] = x;
+      z += x * 0;
     }
-  } else {
-    const inA = within(a.inputs, b.inputs);
-    if (inA !== undefined) {
-      const d = new Array<number>(na);
-      for (let i = 0; i < na; i++) d[i] = ca * (da[i] as number);
-      for (let j = 0; j < nb; j++) {
-        const i = inA[j] as number;
-        d[i] = (d[i] as number) + cb * (db[j] as number);
-      }
-      for (let i = 0; i < na; i++) z += (d[i] as number) * 0;
-      return finiteGradient(new Uncertain(value, a.inputs, d), z);
+    for (let i = nb; i < na; i++) {
+      const x = ca * (da[i] as number);
+      d[i] = x;
+      z += x * 0;
     }
+    return finiteGradient(new Uncertain(value, ka, d), z);
   }
-  const { keys, where } = union(a.inputs, b.inputs);
+  const inA = within(ka, kb, p);
+  if (inA !== undefined) {
+    const d = new Array<number>(na);
+    for (let i = 0; i < na; i++) d[i] = ca * (da[i] as number);
+    for (let j = 0; j < nb; j++) {
+      const i = inA[j] as number;
+      d[i] = (d[i] as number) + cb * (db[j] as number);
+    }
+    for (let i = 0; i < na; i++) z += (d[i] as number) * 0;
+    return finiteGradient(new Uncertain(value, ka, d), z);
+  }
+  const { keys, where } = union(ka, kb, p);
   const d = new Array<number>(keys.length);
   for (let i = 0; i < na; i++) d[i] = ca * (da[i] as number);
   for (let j = 0; j < nb; j++) {

@@ -147,6 +147,57 @@ describe('budget(U, result) is the law of propagation of uncertainty (GUM, JCGM 
     );
   });
 
+  it('budget over uncertain(float) (its float twin) is bit for bit the generic code over a float without its mark', () => {
+    // The generic path: a copy of float without `float64`, so budget takes its generic loop.
+    const G = uncertain({ ...float, float64: undefined } as unknown as typeof float);
+    const input = fc.record({
+      value: fc.double({ min: -1e3, max: 1e3, noNaN: true }),
+      // a few sigmas and derivatives repeat, so that contributions tie and names decide
+      sigma: fc.oneof(fc.constantFrom(0, 0.5, 1, 2), fc.double({ min: 0, max: 1e3, noNaN: true })),
+      d: fc.oneof(fc.constantFrom(-1, 1, 2), fc.double({ min: -1e6, max: 1e6, noNaN: true })),
+    });
+    fc.assert(
+      fc.property(fc.array(input, { minLength: 0, maxLength: 24 }), (xs) => {
+        const made = (U: typeof F) => {
+          const grad = new Map(
+            xs.map((x, i) => [{ name: `x${(i * 7) % 24}`, value: x.value, sigma: x.sigma }, x.d]),
+          );
+          return U.make(1.5, grad);
+        };
+        const fast = budget(F, made(F));
+        const slow = budget(G, made(G));
+        expect(fast.variance).toBe(slow.variance);
+        expect(fast.sigma).toBe(slow.sigma);
+        expect(fast.correlations).toEqual([]);
+        expect(fast.contributions).toEqual(slow.contributions);
+        expect(fast.contributions.map((c) => c.name)).toEqual(
+          slow.contributions.map((c) => c.name),
+        );
+      }),
+      { numRuns: 400 },
+    );
+    // where the generic code refuses (overflow, a sigma that is not a number), the same error
+    const odd = (U: typeof F, sigma: unknown, d: number) =>
+      U.make(1, new Map([[{ name: 'x', value: 1, sigma } as never, d]]));
+    for (const [sigma, d] of [
+      [1e200, 1e200],
+      ['0.1', 1],
+      [Infinity, 0],
+      [NaN, 1],
+    ] as const) {
+      const code = (U: typeof F) => {
+        try {
+          budget(U, odd(U, sigma, d));
+          return 'none';
+        } catch (e) {
+          return (e as { code?: string }).code;
+        }
+      };
+      expect(code(F)).not.toBe('none');
+      expect(code(F)).toBe(code(G));
+    }
+  });
+
   it('budget refuses two different inputs with one name', () => {
     const y = F.add(measured(F, 1, 0.1, 'a'), measured(F, 2, 0.1, 'a'));
     expect(() => budget(F, y)).toThrow(expect.objectContaining({ code: 'DUPLICATE_INPUT' }));

@@ -207,7 +207,12 @@ describe('uncertain(base) is an arithmetic over values with gradients', () => {
         ),
         (prog, [a, b]) => {
           const run = (U: typeof F) => {
-            const vals = [measured(U, a, 0.1, 'a'), measured(U, b, 0.2, 'b'), U.from(1.5)];
+            const vals = [
+              measured(U, a, 0.1, 'a'),
+              measured(U, b, 0.2, 'b'),
+              U.from(1.5),
+              measured(U, a + b, 0.3, 'c'),
+            ];
             for (const [op, i, j] of prog) {
               const x = vals[i % vals.length]!;
               const y = vals[j % vals.length]!;
@@ -220,13 +225,40 @@ describe('uncertain(base) is an arithmetic over values with gradients', () => {
               if (Math.abs(r!.value) > 1e6) r = U.from(1);
               vals.push(r!);
             }
-            return vals.map((v) => [v.value, grad(v, 'a') ?? 0, grad(v, 'b') ?? 0]);
+            return vals.map((v) => [
+              v.value,
+              grad(v, 'a') ?? 0,
+              grad(v, 'b') ?? 0,
+              grad(v, 'c') ?? 0,
+              [...v.gradient.keys()].map((k) => k.name).join(),
+            ]);
           };
           expect(run(F)).toEqual(run(G as unknown as typeof F));
         },
       ),
       { numRuns: 200 },
     );
+  });
+
+  it("a result lists its fuller operand's inputs first, then the other's new ones (the first operand's on a tie)", () => {
+    for (const U of [F, R, D] as const) {
+      const x = measured(U as typeof F, 1, 1, 'x');
+      const y = measured(U as typeof F, 2, 1, 'y');
+      const z = measured(U as typeof F, 3, 1, 'z');
+      const V = U as typeof F;
+      const names = (v: Uncertain<number>) => [...v.gradient.keys()].map((k) => k.name);
+      expect(names(V.add(x, y))).toEqual(['x', 'y']); // a tie: the first operand's
+      expect(names(V.add(y, x))).toEqual(['y', 'x']);
+      expect(names(V.mul(z, V.add(x, y)))).toEqual(['x', 'y', 'z']); // the fuller one leads
+      expect(names(V.sub(V.add(x, y), z))).toEqual(['x', 'y', 'z']);
+      // every input of one operand among the other's: the other's list, shared
+      const xy = V.add(x, y);
+      expect(V.mul(y, xy).inputs).toBe(xy.inputs);
+      expect(V.div(xy, x).inputs).toBe(xy.inputs);
+      // lists that begin alike: [x, y, z] and [x, y, w] make [x, y, z, w]
+      const w = measured(V, 4, 1, 'w');
+      expect(names(V.add(V.add(xy, z), V.add(xy, w)))).toEqual(['x', 'y', 'z', 'w']);
+    }
   });
 
   it('sqrt over rational is exact with derivative 1/(2√a) where the root exists, and undefined where it does not', () => {
