@@ -21,7 +21,7 @@ import {
   selectedInverse,
 } from './normal-equations.js';
 import type { NormalFactor, NormalSystem, SelectedInverse } from './normal-equations.js';
-import { accumulateFloat } from './normal-float.js';
+import { accumulateFloat, observationStatisticsFloat } from './normal-float.js';
 
 /** A group of m observations (m = 1 for an uncorrelated one). @internal */
 export interface ObservationGroup<T> {
@@ -145,6 +145,15 @@ export function observationStatistics<T>(
   dx: readonly T[],
   cofactorOf: (i: number, j: number) => T,
 ): { stats: ObservationStatistics<T>[][]; vtpv: T } {
+  if (A.float64 === true) {
+    // the twin; where a value is not finite, the generic code below reports it
+    const f = observationStatisticsFloat(
+      groups as unknown as readonly ObservationGroup<number>[],
+      dx as unknown as readonly number[],
+      cofactorOf as unknown as (i: number, j: number) => number,
+    );
+    if (f !== undefined) return f as unknown as { stats: ObservationStatistics<T>[][]; vtpv: T };
+  }
   let vtpv = A.zero;
   const stats: ObservationStatistics<T>[][] = [];
   for (const g of groups) {

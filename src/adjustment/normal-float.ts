@@ -12,7 +12,7 @@
  * @internal
  */
 import type { NormalFactor, NormalSystem, SingularPivot } from './normal-equations.js';
-import type { ObservationGroup } from './least-squares.js';
+import type { ObservationGroup, ObservationStatistics } from './least-squares.js';
 
 /**
  * Accumulates every group into N as addObservation/addGroup do, or returns false (N then
@@ -182,13 +182,18 @@ export function solveNormalFloat(
 }
 
 /**
- * The recurrences of selectedInverse on numbers, into Zx and Zd; false where a value is not
- * finite (every intermediate is summed into an entry of Zx or Zd, all checked).
+ * The recurrences of selectedInverse on numbers: Zx, Zd and the diagonal in the original
+ * numbering, in arrays made here (of numbers); `undefined` where a value is not finite (every
+ * intermediate is summed into an entry of Zx or Zd, all checked).
  * @internal
  */
-export function selectedInverseFloat(F: NormalFactor<number>, Zx: number[], Zd: number[]): boolean {
+export function selectedInverseFloat(
+  F: NormalFactor<number>,
+): { Zx: number[]; Zd: number[]; diagonal: number[] } | undefined {
   const n = F.n;
   const { Lp, Li, Lx, D } = F;
+  const Zx: number[] = new Array(Lp[n]!);
+  const Zd: number[] = new Array(n);
   const mark = new Int32Array(n).fill(-1);
   const acc: number[] = [];
   for (let j = n - 1; j >= 0; j--) {
@@ -212,13 +217,83 @@ export function selectedInverseFloat(F: NormalFactor<number>, Zx: number[], Zd: 
     let zjj = 1 / D[j]!;
     for (let b = 0; b < m; b++) {
       const a = acc[b]!;
-      if (a - a !== 0) return false;
+      if (a - a !== 0) return undefined;
       Zx[p0 + b] = -a;
       zjj = zjj + Lx[p0 + b]! * a;
       mark[Li[p0 + b]!] = -1;
     }
-    if (zjj - zjj !== 0) return false;
+    if (zjj - zjj !== 0) return undefined;
     Zd[j] = zjj;
   }
-  return true;
+  const diagonal: number[] = new Array(n);
+  for (let k = 0; k < n; k++) diagonal[F.perm[k]!] = Zd[k]!;
+  return { Zx, Zd, diagonal };
+}
+
+/**
+ * observationStatistics on numbers: the residuals, cofactors and redundancy numbers of every
+ * group and vᵀPv, the same sums in the same order, in arrays made here; `undefined` where a
+ * value is not finite (every intermediate flows into a stored value, all checked).
+ * @internal
+ */
+export function observationStatisticsFloat(
+  groups: readonly ObservationGroup<number>[],
+  dx: readonly number[],
+  cofactorOf: (i: number, j: number) => number,
+): { stats: ObservationStatistics<number>[][]; vtpv: number } | undefined {
+  let vtpv = 0;
+  let z = 0;
+  const stats: ObservationStatistics<number>[][] = [];
+  for (const g of groups) {
+    const m = g.rows.length;
+    const k = g.index.length;
+    const v: number[] = new Array(m);
+    for (let r = 0; r < m; r++) {
+      const row = g.rows[r]!;
+      let s = -g.l[r]!;
+      for (let c = 0; c < k; c++) s = s + row[c]! * dx[g.index[c]!]!;
+      v[r] = s;
+    }
+    // Q of the group's unknowns (k × k, row by row), then A·Q·Aᵀ (m × m).
+    const Q: number[] = new Array(k * k);
+    for (let a = 0; a < k; a++)
+      for (let b = 0; b < k; b++)
+        Q[a * k + b] = b < a ? Q[b * k + a]! : cofactorOf(g.index[a]!, g.index[b]!);
+    const AQ: number[] = new Array(m * k);
+    for (let r = 0; r < m; r++) {
+      const row = g.rows[r]!;
+      for (let b = 0; b < k; b++) {
+        let s = 0;
+        for (let a = 0; a < k; a++) s = s + row[a]! * Q[a * k + b]!;
+        AQ[r * k + b] = s;
+      }
+    }
+    const Qvv: number[] = new Array(m * m);
+    const qadj: number[] = new Array(m);
+    for (let r = 0; r < m; r++) {
+      for (let t = 0; t < m; t++) {
+        const row = g.rows[t]!;
+        let s = 0;
+        for (let b = 0; b < k; b++) s = s + AQ[r * k + b]! * row[b]!;
+        if (r === t) qadj[r] = s;
+        Qvv[r * m + t] = g.cofactor[r]![t]! - s;
+      }
+    }
+    const out: ObservationStatistics<number>[] = [];
+    for (let r = 0; r < m; r++) {
+      let red = 0;
+      let pv = 0;
+      for (let t = 0; t < m; t++) {
+        red = red + Qvv[r * m + t]! * g.weight[t]![r]!;
+        pv = pv + g.weight[r]![t]! * v[t]!;
+      }
+      vtpv = vtpv + v[r]! * pv;
+      const qvv = Qvv[r * m + r]!;
+      z += v[r]! * 0 + qadj[r]! * 0 + qvv * 0 + red * 0;
+      out.push({ v: v[r]!, qll: g.cofactor[r]![r]!, qadj: qadj[r]!, qvv, redundancy: red });
+    }
+    stats.push(out);
+  }
+  if (z !== 0 || vtpv - vtpv !== 0) return undefined;
+  return { stats, vtpv };
 }

@@ -6,7 +6,11 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { float } from '../../src/arithmetic/float.js';
 import { QuadspreadError } from '../../src/errors.js';
-import { solveGroups, type ObservationGroup } from '../../src/adjustment/least-squares.js';
+import {
+  solveGroups,
+  observationStatistics,
+  type ObservationGroup,
+} from '../../src/adjustment/least-squares.js';
 import { adjustNetwork, adjustLevelling } from '../../src/index.js';
 
 const generic = { ...float, float64: undefined } as unknown as typeof float;
@@ -35,6 +39,10 @@ function solved(A: typeof float, n: number, groups: ObservationGroup<number>[]):
       D: s.factor.D,
       diagonal: s.inverse.diagonal,
       pairs,
+      // residuals, cofactors, redundancy numbers and vᵀPv (observationStatistics's twin)
+      statistics: outcome(() =>
+        observationStatistics(A, groups, s.dx, (i, j) => s.inverse.get(i, j) ?? 0),
+      ),
     };
   });
 }
@@ -97,12 +105,16 @@ describe('normal-equation twins (float)', () => {
                 ? 'singular'
                 : 'solved';
           seen.set(kind, (seen.get(kind) ?? 0) + 1);
+          if (kind === 'solved' && typeof (a as { statistics: unknown }).statistics === 'string')
+            seen.set('statistics not finite', (seen.get('statistics not finite') ?? 0) + 1);
         },
       ),
       { numRuns: 1500 },
     );
-    // The corpus reached every outcome: solutions, singular pivots and values not finite.
+    // The corpus reached every outcome: solutions, singular pivots and values not finite,
+    // in the factor and in the statistics after a finite solution.
     expect(seen.get('solved')).toBeGreaterThan(50);
+    expect(seen.get('statistics not finite')).toBeGreaterThan(5);
     expect(seen.get('singular')).toBeGreaterThan(50);
     expect(seen.get('error')).toBeGreaterThan(20);
   });
@@ -116,6 +128,17 @@ describe('normal-equation twins (float)', () => {
     ];
     expect(solved(generic, 2, groups)).toBe('NOT_FINITE');
     expect(solved(float, 2, groups)).toBe('NOT_FINITE');
+  });
+
+  it('leave statistics whose cofactors overflow to the generic code, which reports it', () => {
+    // v = 1e200·1e-200 − 0 = 1 and vᵀPv = 1 are finite; A·Q·Aᵀ = 1e200·1e200·1e200 is not.
+    const groups: ObservationGroup<number>[] = [
+      { index: [0], rows: [[1e200]], cofactor: [[1]], weight: [[1]], l: [0] },
+    ];
+    const stats = (A: typeof float) =>
+      outcome(() => observationStatistics(A, groups, [1e-200], () => 1e200));
+    expect(stats(generic)).toBe('NOT_FINITE');
+    expect(stats(float)).toBe('NOT_FINITE');
   });
 
   it('give the generic result for a well-posed system, its solution checked by substitution', () => {
