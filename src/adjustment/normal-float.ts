@@ -233,7 +233,8 @@ export function selectedInverseFloat(
 /**
  * observationStatistics on numbers: the residuals, cofactors and redundancy numbers of every
  * group and vᵀPv, the same sums in the same order, in arrays made here; `undefined` where a
- * value is not finite (every intermediate flows into a stored value, all checked).
+ * value is not finite (every intermediate flows into a stored value, all checked: a group's
+ * residuals before its cofactors are asked for, the rest at the end of the group).
  * @internal
  */
 export function observationStatisticsFloat(
@@ -253,7 +254,11 @@ export function observationStatisticsFloat(
       let s = -g.l[r]!;
       for (let c = 0; c < k; c++) s = s + row[c]! * dx[g.index[c]!]!;
       v[r] = s;
+      z += s * 0;
     }
+    // (checked before this group's cofactorOf calls and after each group: the generic code
+    // would have refused a value that is not finite before it asked for another cofactor)
+    if (z !== 0) return undefined;
     // Q of the group's unknowns (k × k, row by row), then A·Q·Aᵀ (m × m).
     const Q: number[] = new Array(k * k);
     for (let a = 0; a < k; a++)
@@ -289,11 +294,11 @@ export function observationStatisticsFloat(
       }
       vtpv = vtpv + v[r]! * pv;
       const qvv = Qvv[r * m + r]!;
-      z += v[r]! * 0 + qadj[r]! * 0 + qvv * 0 + red * 0;
+      z += qadj[r]! * 0 + qvv * 0 + red * 0;
       out.push({ v: v[r]!, qll: g.cofactor[r]![r]!, qadj: qadj[r]!, qvv, redundancy: red });
     }
+    if (z !== 0 || vtpv - vtpv !== 0) return undefined;
     stats.push(out);
   }
-  if (z !== 0 || vtpv - vtpv !== 0) return undefined;
   return { stats, vtpv };
 }

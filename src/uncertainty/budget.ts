@@ -271,9 +271,11 @@ export function budget<T, E extends boolean>(
 /**
  * The float twin of {@link budget} without covariances: the same sums in the same order and
  * the same sort, in plain numbers; `undefined` where the generic code would refuse something
- * (it then runs and throws). A finite variance means every product before it was finite.
+ * (it then runs and throws). With every derivative and σ a number, a finite variance means
+ * every product before it was finite.
+ * @internal
  */
-function budgetFloat(
+export function budgetFloat(
   B: Arithmetic<number, false>,
   y: Uncertain<number>,
 ): Budget<number, false> | undefined {
@@ -286,7 +288,8 @@ function budgetFloat(
     const input = inputs[i] as UncertainInput<number>;
     const c = ders[i] as number;
     const sigma = input.sigma;
-    if (typeof sigma !== 'number') return undefined;
+    // (numbers only: JS arithmetic would read text, booleans or null where float.mul refuses)
+    if (typeof c !== 'number' || typeof sigma !== 'number') return undefined;
     const cu = c * sigma;
     const contribution = cu * cu;
     variance += contribution;

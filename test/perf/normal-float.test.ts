@@ -6,6 +6,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { float } from '../../src/arithmetic/float.js';
 import { QuadspreadError } from '../../src/errors.js';
+import { observationStatisticsFloat } from '../../src/adjustment/normal-float.js';
 import {
   solveGroups,
   observationStatistics,
@@ -139,6 +140,40 @@ describe('normal-equation twins (float)', () => {
       outcome(() => observationStatistics(A, groups, [1e-200], () => 1e200));
     expect(stats(generic)).toBe('NOT_FINITE');
     expect(stats(float)).toBe('NOT_FINITE');
+    // a redundancy number that overflows alone: Q_ll = 1e200, P = 1e200, A·Q·Aᵀ = 1
+    const red: ObservationGroup<number>[] = [
+      { index: [0], rows: [[1]], cofactor: [[1e200]], weight: [[1e200]], l: [0] },
+    ];
+    const redundancy = (A: typeof float) =>
+      outcome(() => observationStatistics(A, red, [0], () => 1));
+    expect(redundancy(generic)).toBe('NOT_FINITE');
+    expect(redundancy(float)).toBe('NOT_FINITE');
+    // A residual that overflows in the first group is refused before any cofactor is asked
+    // for, as the generic code does (a cofactor asked for here would throw a plain Error).
+    const early: ObservationGroup<number>[] = [
+      { index: [0], rows: [[1e200]], cofactor: [[1]], weight: [[1]], l: [0] },
+      { index: [1], rows: [[1]], cofactor: [[1]], weight: [[1]], l: [0] },
+    ];
+    const asked = () => {
+      throw new Error('a cofactor was asked for');
+    };
+    expect(outcome(() => observationStatistics(generic, early, [1e200, 0], asked))).toBe(
+      'NOT_FINITE',
+    );
+    expect(outcome(() => observationStatistics(float, early, [1e200, 0], asked))).toBe(
+      'NOT_FINITE',
+    );
+  });
+
+  it('answer finite statistics in the twin itself (the generic code is not asked)', () => {
+    const groups: ObservationGroup<number>[] = [
+      { index: [0, 1], rows: [[1, -1]], cofactor: [[0.5]], weight: [[2]], l: [0.01] },
+      { index: [1], rows: [[1]], cofactor: [[1]], weight: [[1]], l: [-0.02] },
+    ];
+    const cof = (i: number, j: number) => (i === j ? 1 : 0.25);
+    const twin = observationStatisticsFloat(groups, [0.1, 0.2], cof);
+    expect(twin).toBeDefined();
+    expect(twin).toStrictEqual(observationStatistics(generic, groups, [0.1, 0.2], cof));
   });
 
   it('give the generic result for a well-posed system, its solution checked by substitution', () => {

@@ -1,9 +1,9 @@
 import { describe, it, expect } from 'vitest';
 import fc from 'fast-check';
-import { rational, decimal, float, uncertain } from '../../src/arithmetic/index.js';
+import { rational, decimal, float, uncertain, Uncertain } from '../../src/arithmetic/index.js';
 import { sqrtOf } from '../../src/geometry/surd.js';
 import { measured, sensitivities } from '../../src/uncertainty/measured.js';
-import { budget } from '../../src/uncertainty/budget.js';
+import { budget, budgetFloat } from '../../src/uncertainty/budget.js';
 import { measuredAngle, spreadOfAngle } from '../../src/uncertainty/readings.js';
 import { normalInputs } from '../../src/uncertainty/monte-carlo.js';
 import { sqrtRatioToNumber } from '../../src/uncertainty/internal.js';
@@ -176,14 +176,24 @@ describe('budget(U, result) is the law of propagation of uncertainty (GUM, JCGM 
       }),
       { numRuns: 400 },
     );
-    // where the generic code refuses (overflow, a sigma that is not a number), the same error
-    const odd = (U: typeof F, sigma: unknown, d: number) =>
-      U.make(1, new Map([[{ name: 'x', value: 1, sigma } as never, d]]));
+    // The twin is what budget(F, …) runs: it answers these itself, with the same budget.
+    const y = F.add(measured(F, 2, 0.1, 'a'), F.mul(measured(F, 3, 0.2, 'b'), F.from(2)));
+    expect(budgetFloat(float, y)).toStrictEqual(budget(F, y));
+    // where the generic code refuses (overflow, a sigma or a derivative that is not a number:
+    // JS arithmetic would read '2', true, null or [3] as a number), the same error
+    const odd = (U: typeof F, sigma: unknown, d: unknown) =>
+      new Uncertain(1, [{ name: 'x', value: 1, sigma } as never], [d as number]);
     for (const [sigma, d] of [
       [1e200, 1e200],
       ['0.1', 1],
       [Infinity, 0],
       [NaN, 1],
+      [0.5, '2'],
+      [0.5, null],
+      [0.5, true],
+      [0.5, [3]],
+      [0.5, 2n],
+      [0.5, Object(2)],
     ] as const) {
       const code = (U: typeof F) => {
         try {

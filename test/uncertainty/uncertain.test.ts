@@ -261,6 +261,82 @@ describe('uncertain(base) is an arithmetic over values with gradients', () => {
     }
   });
 
+  it('long inputs lists (positions found by a map, shared beginnings) match a reference of gradients by name', () => {
+    // An independent reference: each value's gradient as an ordered list of [name, derivative],
+    // combined by the rule of Uncertain.gradient (the operand with more inputs first, then the
+    // other's new ones) and by the sum and product rules, adding two terms only where both
+    // operands have the input (as x + y; a single term is kept as it is, so -0 stays -0).
+    type Ref = { v: number; g: [string, number][] };
+    const combine = (a: Ref, ca: number, b: Ref, cb: number, v: number): Ref => {
+      const [p, cp, o, co] = a.g.length < b.g.length ? [b, cb, a, ca] : [a, ca, b, cb];
+      const fromO = new Map(o.g.map(([n, d]) => [n, co * d] as const));
+      const g: [string, number][] = p.g.map(([n, d]) => {
+        const x = cp * d;
+        const y = fromO.get(n);
+        fromO.delete(n);
+        return [n, y === undefined ? x : x + y];
+      });
+      for (const [n, y] of fromO) g.push([n, y]);
+      return { v, g };
+    };
+    const N = 40;
+    fc.assert(
+      fc.property(
+        // sums of runs of inputs (lists of up to 40, many beginning alike), then products and
+        // differences of them
+        fc.array(fc.tuple(fc.nat(N - 1), fc.integer({ min: 1, max: N }), fc.nat(N - 1)), {
+          minLength: 2,
+          maxLength: 6,
+        }),
+        fc.array(fc.tuple(fc.constantFrom('add', 'sub', 'mul'), fc.nat(), fc.nat()), {
+          minLength: 1,
+          maxLength: 10,
+        }),
+        (runs, prog) => {
+          const xs = Array.from({ length: N }, (_, i) => measured(F, 1 + i / 64, 0.1, `x${i}`));
+          const refs: Ref[] = xs.map((x, i) => ({ v: x.value, g: [[`x${i}`, 1]] }));
+          const vals: Uncertain<number>[] = [];
+          const rv: Ref[] = [];
+          for (const [start, len, extra] of runs) {
+            // x_start + x_start+1 + … (len inputs, from the start or from x0), then one more
+            const from = start % 2 === 0 ? 0 : start;
+            let u = xs[from]!;
+            let r = refs[from]!;
+            for (let i = from + 1; i < Math.min(N, from + len); i++) {
+              u = F.add(u, xs[i]!);
+              r = combine(r, 1, refs[i]!, 1, u.value);
+            }
+            u = F.add(u, xs[extra]!);
+            r = combine(r, 1, refs[extra]!, 1, u.value);
+            vals.push(u);
+            rv.push(r);
+          }
+          for (const [op, i, j] of prog) {
+            const a = vals[i % vals.length]!;
+            const b = vals[j % vals.length]!;
+            const ra = rv[i % vals.length]!;
+            const rb = rv[j % vals.length]!;
+            if (op === 'add') {
+              vals.push(F.add(a, b));
+              rv.push(combine(ra, 1, rb, 1, a.value + b.value));
+            } else if (op === 'sub') {
+              vals.push(F.sub(a, b));
+              rv.push(combine(ra, 1, rb, -1, a.value - b.value));
+            } else {
+              vals.push(F.mul(a, b));
+              rv.push(combine(ra, b.value, rb, a.value, a.value * b.value));
+            }
+          }
+          vals.forEach((u, k) => {
+            const got = [...u.gradient].map(([input, d]) => [input.name, d]);
+            expect(got).toStrictEqual(rv[k]!.g);
+          });
+        },
+      ),
+      { numRuns: 300 },
+    );
+  });
+
   it('sqrt over rational is exact with derivative 1/(2√a) where the root exists, and undefined where it does not', () => {
     const x = measured(R, '9/4', '1/10', 'x');
     const r = R.sqrt(x)!;
