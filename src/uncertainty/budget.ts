@@ -17,6 +17,7 @@ import { Uncertain } from '../arithmetic/uncertain.js';
 import type { UncertainArithmetic, UncertainInput } from '../arithmetic/uncertain.js';
 import { isSurd, sqrtOf } from '../geometry/surd.js';
 import { checkU, sqrtRatioToNumber } from './internal.js';
+import { budgetFloat } from './budget-float.js';
 import type { Root, Surd } from '../geometry/surd.js';
 
 /** One input's line in a {@link Budget}. */
@@ -265,60 +266,6 @@ export function budget<T, E extends boolean>(
     sigma: sigmaOf(B, variance),
     contributions: lines,
     correlations,
-  };
-}
-
-/**
- * The float twin of {@link budget} without covariances: the same sums in the same order and
- * the same sort, in plain numbers; `undefined` where the generic code would refuse something
- * (it then runs and throws). With every derivative and σ a number, a finite variance means
- * every product before it was finite.
- * @internal
- */
-export function budgetFloat(
-  B: Arithmetic<number, false>,
-  y: Uncertain<number>,
-): Budget<number, false> | undefined {
-  const inputs = y.inputs;
-  const ders = y.derivatives;
-  const n = inputs.length;
-  const lines: Contribution<number>[] = [];
-  let variance = 0;
-  for (let i = 0; i < n; i++) {
-    const input = inputs[i] as UncertainInput<number>;
-    const c = ders[i] as number;
-    const sigma = input.sigma;
-    // (numbers only: JS arithmetic would read text, booleans or null where float.mul refuses)
-    if (typeof c !== 'number' || typeof sigma !== 'number') return undefined;
-    const cu = c * sigma;
-    const contribution = cu * cu;
-    variance += contribution;
-    lines.push({ name: input.name, value: input.value, sigma, sensitivity: c, contribution });
-  }
-  if (variance - variance !== 0 || y.value - y.value !== 0) return undefined;
-  // largest contribution first, ties by name: sortLines's order, by insertion for a few lines
-  if (n > 16) sortLines(B, lines);
-  else
-    for (let i = 1; i < n; i++) {
-      const l = lines[i] as Contribution<number>;
-      let j = i - 1;
-      for (; j >= 0; j--) {
-        const q = lines[j] as Contribution<number>;
-        if (!(
-          q.contribution < l.contribution ||
-          (q.contribution === l.contribution && q.name > l.name)
-        ))
-          break;
-        lines[j + 1] = q;
-      }
-      lines[j + 1] = l;
-    }
-  return {
-    value: y.value,
-    variance,
-    sigma: sigmaOf(B, variance),
-    contributions: lines,
-    correlations: [],
   };
 }
 
