@@ -110,8 +110,11 @@ function lccInto(k: Float64Array, lat: number, dl: number): boolean {
   const C = k[METHOD + 3]!;
   const r0 = k[METHOD + 4]!;
   const a = k[METHOD + 5]!;
+  // θ = n(λ − λ0). The sines and cosines of φ and θ from one call site, so that V8 compiles
+  // one copy of the kernel into this function (two copies exceed its inlining budget).
+  const theta = n * dl;
+  for (let i = 0; i < 4; i += 2) if (!sinCosInto(i === 0 ? lat : theta, SC, i)) return false;
   // latitudeTerms: sin φ, cos φ, W = √(1 − e² sin²φ)
-  if (!sinCosInto(lat, SC, 0)) return false;
   const s = SC[0]!;
   const c = SC[1]!;
   const W = Math.sqrt(1 - e2 * (s * s));
@@ -121,9 +124,7 @@ function lccInto(k: Float64Array, lat: number, dl: number): boolean {
   if (psi - psi !== 0) return false;
   const r = C * Math.exp(-(n * psi));
   if (r - r !== 0) return false;
-  // θ = n(λ − λ0); k = r n W/(a cos φ)
-  const theta = n * dl;
-  if (!sinCosInto(theta, SC, 2)) return false;
+  // k = r n W/(a cos φ)
   const den = a * c;
   if (den === 0) return false;
   const kk = (r * n * W) / den;
