@@ -407,17 +407,25 @@ export function solveNormal<T>(A: Arithmetic<T>, F: NormalFactor<T>, b: readonly
  * @internal
  */
 export function selectedInverse<T>(A: Arithmetic<T>, F: NormalFactor<T>): SelectedInverse<T> {
-  const n = F.n;
-  const { Lp, Li, Lx, D } = F;
   // In float, the twin makes the arrays itself: arrays made here would be made as the other
   // arithmetics' values have taught V8 to make them (of references), one box per number.
-  const twin =
-    A.float64 === true ? selectedInverseFloat(F as unknown as NormalFactor<number>) : undefined;
-  const Zx: T[] = twin ? (twin.Zx as unknown as T[]) : new Array(Lp[n]!);
-  const Zd: T[] = twin ? (twin.Zd as unknown as T[]) : new Array(n);
+  if (A.float64 === true) {
+    const twin = selectedInverseFloat(F as unknown as NormalFactor<number>);
+    if (twin !== undefined)
+      return inverseOn(
+        F,
+        twin.Zx as unknown as T[],
+        twin.Zd as unknown as T[],
+        twin.diagonal as unknown as T[],
+      );
+  }
+  const n = F.n;
+  const { Lp, Li, Lx, D } = F;
+  const Zx: T[] = new Array(Lp[n]!);
+  const Zd: T[] = new Array(n);
   const mark = new Int32Array(n).fill(-1);
   const acc: T[] = [];
-  for (let j = twin ? -1 : n - 1; j >= 0; j--) {
+  for (let j = n - 1; j >= 0; j--) {
     const p0 = Lp[j]!;
     const m = Lp[j + 1]! - p0;
     for (let b = 0; b < m; b++) {
@@ -444,8 +452,22 @@ export function selectedInverse<T>(A: Arithmetic<T>, F: NormalFactor<T>): Select
     }
     Zd[j] = zjj;
   }
-  const diagonal: T[] = twin ? (twin.diagonal as unknown as T[]) : new Array(n);
-  if (!twin) for (let k = 0; k < n; k++) diagonal[F.perm[k]!] = Zd[k]!;
+  const diagonal: T[] = new Array(n);
+  for (let k = 0; k < n; k++) diagonal[F.perm[k]!] = Zd[k]!;
+  return inverseOn(F, Zx, Zd, diagonal);
+}
+
+/**
+ * The selected inverse as its users read it: `diagonal` in the original numbering, and
+ * `get(i, j)` from Zx (below the diagonal, by column of L) and Zd (permuted numbering).
+ */
+function inverseOn<T>(
+  F: NormalFactor<T>,
+  Zx: readonly T[],
+  Zd: readonly T[],
+  diagonal: T[],
+): SelectedInverse<T> {
+  const { Lp, Li } = F;
   return {
     diagonal,
     get(i: number, j: number): T | undefined {
