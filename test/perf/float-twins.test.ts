@@ -257,6 +257,72 @@ describe('triangle(float, …) through the twin', () => {
     );
   });
 
+  it('separates the edges of its one test of zero and non-finite values as the generic code does', async () => {
+    const { triangle } = await import('../../src/index.js');
+    // Hand-built: each case sits on one side of one part of the twin's test (spreads' product
+    // > 0, product + quadrea finite); the generic float code (a copy of float without its
+    // mark) decides each, and the twin must give exactly its result or its error.
+    const cases: [number, number][][] = [
+      // quadrea = 4·D² overflows (D² ≈ 6.0e307) while every spread is finite (1, 0.5, 0.5)
+      [
+        [0, 0],
+        [8.8e76, 0],
+        [0, 8.8e76],
+      ],
+      // below that: quadrea finite (4·D² ≈ 5.2e307)
+      [
+        [0, 0],
+        [6e76, 0],
+        [0, 6e76],
+      ],
+      // spreads each > 0 whose product underflows to 0 (a needle-thin triangle: D² = 1e-220)
+      [
+        [0, 0],
+        [1, 0],
+        [2, 1e-110],
+      ],
+      // Q2·Q3 rounds to 0 while D² rounds to the least subnormal: the first spread is ∞ and
+      // quadrea finite (found by a search over legs near 2^−268)
+      [
+        [0, 0],
+        [2.7506880046981786e-81, 0],
+        [0, 5.713944227837238e-82],
+      ],
+      // Q2·Q3 underflows: spreads ∞ or NaN
+      [
+        [0, 0],
+        [1e-170, 0],
+        [0, 1e-170],
+      ],
+      // collinear, coincident
+      [
+        [0, 0],
+        [1, 1],
+        [2, 2],
+      ],
+      [
+        [0, 0],
+        [0, 0],
+        [1, 2],
+      ],
+      // an ordinary right triangle (spreads that may round just above 1)
+      [
+        [0, 0],
+        [3, 0],
+        [0, 4],
+      ],
+    ];
+    for (const c of cases) {
+      const args = c.map(([x, y]) => ({ x, y })) as never as [never, never, never];
+      expect(outcome(() => triangle(float, ...args))).toStrictEqual(
+        outcome(() => triangle(generic, ...args)),
+      );
+    }
+    // and the first is refused (quadrea not finite), so the twin cannot have answered it
+    const [a, b, d] = cases[0]!.map(([x, y]) => ({ x, y }));
+    expect(outcome(() => triangle(float, a as never, b as never, d as never))).toBe('NOT_FINITE');
+  });
+
   it('passes a point whose reading throws to the generic code, which throws the same', async () => {
     const { triangle } = await import('../../src/index.js');
     const throwing = {
