@@ -108,7 +108,8 @@ export function traverseFloat(
       else if (typeof dist === 'number') d = dist;
       else return undefined;
     }
-    if (!(d >= 0) || la - la !== 0 || de - de !== 0 || d - d !== 0) return undefined;
+    // (x − x is 0 for a finite x and NaN otherwise: one comparison for the three)
+    if (!(d >= 0 && la - la + (de - de) + (d - d) === 0)) return undefined;
     // (0.5: the adjusted values are numbers from the start, so that writing them keeps the
     // object's layout)
     legs[i] = {
