@@ -136,7 +136,7 @@ function inverse<T>(A: Arithmetic<T>, k: object, x: T, y: T, where: string) {
   return { lat: f.lat, dlon: A.div(theta, c.n), k: kk, gamma: theta };
 }
 
-/** The constants in the order the float twin reads them (projection-float.ts `lccInto`). */
+/** The constants in the order the float twin reads them (projection-float.ts `lccForwardInto`). */
 function floatConstants<T>(_A: Arithmetic<T>, k: object): readonly number[] {
   const c = k as Lcc<number>;
   return [c.e2, c.e, c.n, c.C, c.r0, c.a];

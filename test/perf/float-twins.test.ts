@@ -288,7 +288,7 @@ describe('triangle(float, …) through the twin', () => {
         [2.7506880046981786e-81, 0],
         [0, 5.713944227837238e-82],
       ],
-      // Q2·Q3 underflows: spreads ∞ or NaN
+      // legs of 1e-170: every quadrance underflows to 0 (coincident in float; the spreads NaN)
       [
         [0, 0],
         [1e-170, 0],
@@ -305,7 +305,7 @@ describe('triangle(float, …) through the twin', () => {
         [0, 0],
         [1, 2],
       ],
-      // an ordinary right triangle (spreads that may round just above 1)
+      // an ordinary right triangle (spreads exactly 1, 0.64 and 0.36)
       [
         [0, 0],
         [3, 0],
