@@ -12,8 +12,8 @@ import type { Budget, Contribution } from './budget.js';
 /**
  * The float twin of `budget` without covariances (src/uncertainty/budget.ts): the same sums
  * in the same order and the same sort, in plain numbers; `undefined` where the generic code
- * would refuse something (it then runs and throws). With every derivative and σ a number, a finite variance means
- * every product before it was finite.
+ * would refuse something (it then runs and throws). With every derivative and σ a number, a
+ * finite variance means every product before it was finite.
  * @internal
  */
 export function budgetFloat(
